@@ -1,0 +1,9 @@
+// The ordered list of migrations. Add a new file and one line here; never edit a landed one.
+import type { Migration } from 'kysely';
+import * as m0001 from './0001_create_studios';
+import * as m0002 from './0002_create_rooms';
+
+export const migrations: Record<string, Migration> = {
+  '0001_create_studios': m0001,
+  '0002_create_rooms': m0002,
+};

@@ -1,0 +1,51 @@
+// createApp(deps) builds the Express app without listening, so tests can drive it directly.
+import express, { type Express, Router } from 'express';
+import { existsSync } from 'node:fs';
+import { resolve, join } from 'node:path';
+import type { AppConfig } from './config';
+import type { Db } from './db/database';
+import type { Mailer } from './services/mail/mailer';
+import { errorMiddleware, HttpError } from './http/errors';
+import { mountRoutes, type RouteDef } from './http/routes';
+import { sessionMiddleware } from './services/auth/session';
+import { authRoutes } from './features/auth/auth.routes';
+import { studioRoutes } from './features/studio/studio.routes';
+import { clientRoutes } from './features/clients/clients.routes';
+import { projectRoutes } from './features/projects/projects.routes';
+import { outboxRoutes } from './features/outbox/outbox.routes';
+
+export interface AppDeps {
+  db: Db;
+  mailer: Mailer;
+  config: AppConfig;
+}
+
+/** Every API route with its access rule: the app mounts exactly this table. */
+export function allRoutes(): RouteDef[] {
+  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes(), ...outboxRoutes];
+}
+
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use('/api', express.json({ limit: '2mb' }));
+  app.use('/api', sessionMiddleware(deps.db));
+
+  const api = Router();
+  mountRoutes(api, deps, allRoutes());
+  app.use(api);
+  app.use('/api', (_req, _res, next) => next(new HttpError(404, 'not_found', 'No such API route.')));
+
+  const dist = resolve(deps.config.CLIENT_DIST);
+  if (existsSync(join(dist, 'index.html'))) {
+    app.use('/assets', express.static(join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(join(dist, 'index.html'));
+    });
+  }
+  app.use(errorMiddleware);
+  return app;
+}

@@ -1,0 +1,113 @@
+// The one Database interface: every table's row type, as Kysely sees it.
+import { Kysely, PostgresDialect, type Generated, type ColumnType } from 'kysely';
+import pg from 'pg';
+
+type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+
+export interface StudiosTable {
+  id: Generated<string>;
+  name: string;
+  created_at: Timestamp;
+}
+
+export interface MembersTable {
+  id: Generated<string>;
+  studio_id: string;
+  email: string;
+  name: string;
+  role: 'owner' | 'designer' | 'viewer';
+  password_hash: string;
+  created_at: Timestamp;
+}
+
+export interface SessionsTable {
+  id: string; // sha-256 of the cookie token
+  member_id: string;
+  created_at: Timestamp;
+  expires_at: Timestamp;
+}
+
+export interface InvitesTable {
+  id: Generated<string>;
+  studio_id: string;
+  email: string;
+  role: 'owner' | 'designer' | 'viewer';
+  token_hash: string;
+  invited_by: string | null;
+  created_at: Timestamp;
+  expires_at: Timestamp;
+  accepted_at: Date | null;
+}
+
+export interface SignInFailuresTable {
+  id: Generated<string>;
+  email: string;
+  at: Timestamp;
+}
+
+export interface ClientsTable {
+  id: Generated<string>;
+  studio_id: string;
+  name: string;
+  email: string | null;
+  phone: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface ProjectsTable {
+  id: Generated<string>;
+  studio_id: string;
+  client_id: string;
+  name: string;
+  address: string | null;
+  state: ColumnType<'draft' | 'presented' | 'decided' | 'archived', 'draft' | 'presented' | 'decided' | 'archived' | undefined>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface RoomsTable {
+  id: Generated<string>;
+  studio_id: string;
+  project_id: string;
+  name: string;
+  position: ColumnType<number, number | undefined, number>;
+  shell: unknown; // RoomShell, parsed with its zod schema on the way out
+  version: Generated<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface OptionsTable {
+  id: Generated<string>;
+  studio_id: string;
+  room_id: string;
+  name: string;
+  note: ColumnType<string, string | undefined, string>;
+  position: ColumnType<number, number | undefined, number>;
+  doc: unknown; // OptionDoc, parsed with its zod schema on the way out
+  version: Generated<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface Database {
+  rooms: RoomsTable;
+  options: OptionsTable;
+  studios: StudiosTable;
+  members: MembersTable;
+  sessions: SessionsTable;
+  invites: InvitesTable;
+  sign_in_failures: SignInFailuresTable;
+  clients: ClientsTable;
+  projects: ProjectsTable;
+}
+
+export type Db = Kysely<Database>;
+
+export function createDb(connectionString: string, max = 10): Db {
+  const pool = new pg.Pool({ connectionString, max });
+  // A dropped connection must not take the process down; the next query reconnects.
+  pool.on('error', (err) => console.error('[db] idle client error:', err.message));
+  return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
+}

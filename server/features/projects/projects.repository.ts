@@ -1,0 +1,81 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+import type { ListQuery, ProjectPatch, ProjectSummary, ProjectState } from '../../../shared/schemas/project';
+import { likePattern } from '../clients/clients.repository';
+
+export async function listProjects(db: Db, studioId: string, query: ListQuery): Promise<ProjectSummary[]> {
+  let qb = db
+    .selectFrom('projects')
+    .innerJoin('clients', 'clients.id', 'projects.client_id')
+    .select([
+      'projects.id', 'projects.name', 'projects.address', 'projects.state', 'projects.created_at', 'projects.updated_at',
+      'clients.id as client_id', 'clients.name as client_name',
+    ])
+    .select(roomCount)
+    .where('projects.studio_id', '=', studioId);
+  if (query.archived === 'exclude') qb = qb.where('projects.state', '!=', 'archived');
+  if (query.archived === 'only') qb = qb.where('projects.state', '=', 'archived');
+  if (query.q) {
+    const p = likePattern(query.q);
+    qb = qb.where((eb) => eb.or([eb('projects.name', 'ilike', p), eb('clients.name', 'ilike', p), eb('projects.address', 'ilike', p)]));
+  }
+  qb = query.sort === 'name' ? qb.orderBy(sql`lower(projects.name)`) : qb.orderBy('projects.updated_at', 'desc');
+  const rows = await qb.limit(500).execute();
+  return rows.map(toSummary);
+}
+
+const roomCount = sql<number>`(select count(*)::int from rooms where rooms.project_id = projects.id)`.as('room_count');
+
+type SummaryRow = {
+  id: string; name: string; address: string | null; state: ProjectState; created_at: Date; updated_at: Date;
+  client_id: string; client_name: string; room_count: number;
+};
+
+const toSummary = (r: SummaryRow): ProjectSummary => ({
+  id: r.id,
+  name: r.name,
+  address: r.address,
+  state: r.state,
+  client: { id: r.client_id, name: r.client_name },
+  roomCount: Number(r.room_count),
+  createdAt: r.created_at.toISOString(),
+  updatedAt: r.updated_at.toISOString(),
+});
+
+export async function getProject(db: Db, studioId: string, id: string): Promise<ProjectSummary | undefined> {
+  const r = await db
+    .selectFrom('projects')
+    .innerJoin('clients', 'clients.id', 'projects.client_id')
+    .select([
+      'projects.id', 'projects.name', 'projects.address', 'projects.state', 'projects.created_at', 'projects.updated_at',
+      'clients.id as client_id', 'clients.name as client_name',
+    ])
+    .select(roomCount)
+    .where('projects.studio_id', '=', studioId)
+    .where('projects.id', '=', id)
+    .executeTakeFirst();
+  return r ? toSummary(r) : undefined;
+}
+
+export async function insertProject(db: Db, v: { studioId: string; clientId: string; name: string; address: string | null }) {
+  return db
+    .insertInto('projects')
+    .values({ studio_id: v.studioId, client_id: v.clientId, name: v.name, address: v.address })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+}
+
+export async function updateProject(db: Db, studioId: string, id: string, patch: ProjectPatch): Promise<boolean> {
+  const r = await db
+    .updateTable('projects')
+    .set({ ...patch, updated_at: new Date() })
+    .where('studio_id', '=', studioId)
+    .where('id', '=', id)
+    .executeTakeFirst();
+  return Number(r.numUpdatedRows) > 0;
+}
+
+/** Marks a project changed (any edit to its rooms counts as a change to the project). */
+export async function touchProject(db: Db, id: string): Promise<void> {
+  await db.updateTable('projects').set({ updated_at: new Date() }).where('id', '=', id).execute();
+}

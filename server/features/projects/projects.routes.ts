@@ -1,0 +1,77 @@
+import { createProjectSchema, listQuerySchema, projectPatchSchema } from '../../../shared/schemas/project';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
+import { HttpError, notFound } from '../../http/errors';
+import { getClient, insertClient } from '../clients/clients.repository';
+import { getProject, insertProject, listProjects, updateProject } from './projects.repository';
+import type { Db } from '../../db/database';
+
+/** Rooms of a project, for its page. Filled by the rooms feature through this hook. */
+export type ProjectExtras = (db: Db, studioId: string, projectId: string) => Promise<Record<string, unknown>>;
+
+export function projectRoutes(extras: ProjectExtras[] = []): RouteDef[] {
+  return [
+    {
+      method: 'get',
+      path: '/api/projects',
+      access: ALL_ROLES,
+      async handler(ctx) {
+        const query = listQuerySchema.parse(ctx.req.query);
+        return { projects: await listProjects(ctx.deps.db, requireCaller(ctx).studioId, query) };
+      },
+    },
+    {
+      method: 'post',
+      path: '/api/projects',
+      access: WRITERS,
+      async handler(ctx) {
+        const caller = requireCaller(ctx);
+        const body = createProjectSchema.parse(ctx.req.body);
+        const id = await ctx.deps.db.transaction().execute(async (trx) => {
+          let clientId = body.clientId;
+          if (clientId) {
+            if (!(await getClient(trx, caller.studioId, clientId))) {
+              throw new HttpError(400, 'invalid', 'Pick one of your clients.', { clientId: 'Pick one of your clients.' });
+            }
+          } else {
+            clientId = (await insertClient(trx, caller.studioId, body.newClient!)).id;
+          }
+          return (await insertProject(trx, { studioId: caller.studioId, clientId, name: body.name, address: body.address ?? null })).id;
+        });
+        ctx.res.status(201);
+        return { project: await getProject(ctx.deps.db, caller.studioId, id) };
+      },
+    },
+    {
+      method: 'get',
+      path: '/api/projects/:id',
+      access: ALL_ROLES,
+      async handler(ctx) {
+        const caller = requireCaller(ctx);
+        const { id } = idParamSchema.parse(ctx.req.params);
+        const project = await getProject(ctx.deps.db, caller.studioId, id);
+        if (!project) throw notFound('That project');
+        const client = await getClient(ctx.deps.db, caller.studioId, project.client.id);
+        let more: Record<string, unknown> = {};
+        for (const extra of extras) more = { ...more, ...(await extra(ctx.deps.db, caller.studioId, id)) };
+        return {
+          project,
+          client: client && { id: client.id, name: client.name, email: client.email, phone: client.phone },
+          ...more,
+        };
+      },
+    },
+    {
+      method: 'patch',
+      path: '/api/projects/:id',
+      access: WRITERS,
+      async handler(ctx) {
+        const caller = requireCaller(ctx);
+        const { id } = idParamSchema.parse(ctx.req.params);
+        const patch = projectPatchSchema.parse(ctx.req.body);
+        if (!(await updateProject(ctx.deps.db, caller.studioId, id, patch))) throw notFound('That project');
+        return { project: await getProject(ctx.deps.db, caller.studioId, id) };
+      },
+    },
+  ];
+}

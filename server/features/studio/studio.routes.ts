@@ -1,0 +1,159 @@
+import { z } from 'zod';
+import { acceptInviteSchema, changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { ALL_ROLES, OWNERS, requireCaller, type RouteDef } from '../../http/routes';
+import { HttpError, notFound } from '../../http/errors';
+import { hashToken, newToken } from '../../services/auth/tokens';
+import { hashPassword } from '../../services/auth/passwords';
+import { startSession } from '../../services/auth/session';
+import {
+  countOwners, deleteMember, deleteSessionsOf, findMemberByEmail, getMember, insertMember, listMembers, setMemberRole, toMember,
+} from './members.repository';
+import {
+  deleteInvite, findInviteByTokenHash, insertInvite, listOpenInvites, markInviteAccepted, toInviteInfo,
+} from './invites.repository';
+
+const INVITE_DAYS = 14;
+const tokenParamSchema = z.object({ token: z.string().min(20).max(200) });
+
+async function openInviteOrThrow(db: Parameters<typeof findInviteByTokenHash>[0], token: string) {
+  const invite = await findInviteByTokenHash(db, hashToken(token));
+  if (!invite) throw new HttpError(404, 'invite_not_found', 'This invitation link is not valid. Ask the studio for a new one.');
+  if (invite.accepted_at) throw new HttpError(410, 'invite_used', 'This invitation has already been accepted. Sign in instead.');
+  if (invite.expires_at.getTime() < Date.now()) throw new HttpError(410, 'invite_expired', 'This invitation has expired. Ask the studio for a new one.');
+  return invite;
+}
+
+export const studioRoutes: RouteDef[] = [
+  {
+    method: 'get',
+    path: '/api/studio/members',
+    access: ALL_ROLES,
+    handler: async (ctx) => ({ members: await listMembers(ctx.deps.db, requireCaller(ctx).studioId) }),
+  },
+  {
+    method: 'patch',
+    path: '/api/studio/members/:id',
+    access: OWNERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const { role } = changeRoleSchema.parse(ctx.req.body);
+      return ctx.deps.db.transaction().execute(async (trx) => {
+        const member = await getMember(trx, caller.studioId, id);
+        if (!member) throw notFound('That member');
+        if (member.role === 'owner' && role !== 'owner' && (await countOwners(trx, caller.studioId)) <= 1) {
+          throw new HttpError(409, 'last_owner', 'A studio needs at least one owner. Make someone else an owner first.');
+        }
+        await setMemberRole(trx, id, role);
+        // Sessions read the role on every request, so the change applies at once.
+        return { member: toMember({ ...member, role }) };
+      });
+    },
+  },
+  {
+    method: 'delete',
+    path: '/api/studio/members/:id',
+    access: OWNERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      await ctx.deps.db.transaction().execute(async (trx) => {
+        const member = await getMember(trx, caller.studioId, id);
+        if (!member) throw notFound('That member');
+        if (member.role === 'owner' && (await countOwners(trx, caller.studioId)) <= 1) {
+          throw new HttpError(409, 'last_owner', 'A studio needs at least one owner.');
+        }
+        await deleteSessionsOf(trx, id);
+        await deleteMember(trx, id);
+      });
+      return undefined;
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/studio/invites',
+    access: OWNERS,
+    handler: async (ctx) => ({
+      invites: (await listOpenInvites(ctx.deps.db, requireCaller(ctx).studioId)).map((r) => toInviteInfo(r)),
+    }),
+  },
+  {
+    method: 'post',
+    path: '/api/studio/invites',
+    access: OWNERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const body = inviteSchema.parse(ctx.req.body);
+      const { db, mailer, config } = ctx.deps;
+      if (await findMemberByEmail(db, body.email)) {
+        throw new HttpError(409, 'email_taken', 'This person already has a Parlour account.', { email: 'Already has an account.' });
+      }
+      const studio = await db.selectFrom('studios').select('name').where('id', '=', caller.studioId).executeTakeFirstOrThrow();
+      const inviter = await getMember(db, caller.studioId, caller.memberId);
+      const { token, hash } = newToken();
+      const invite = await insertInvite(db, {
+        studioId: caller.studioId,
+        email: body.email,
+        role: body.role,
+        tokenHash: hash,
+        invitedBy: caller.memberId,
+        expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
+      });
+      const link = `${config.publicUrl}/invite/${token}`;
+      await mailer.send({
+        to: body.email,
+        subject: `${inviter?.name ?? 'A colleague'} invited you to ${studio.name} on Parlour`,
+        text: `${inviter?.name ?? 'A colleague'} invited you to join ${studio.name} on Parlour as ${body.role}.\n\nAccept the invitation: ${link}\n\nThe link works for ${INVITE_DAYS} days.`,
+        html: `<p>${escapeHtml(inviter?.name ?? 'A colleague')} invited you to join <strong>${escapeHtml(studio.name)}</strong> on Parlour as ${body.role}.</p><p><a href="${link}">Accept the invitation</a></p><p>The link works for ${INVITE_DAYS} days.</p>`,
+      });
+      ctx.res.status(201);
+      return { invite: toInviteInfo(invite) };
+    },
+  },
+  {
+    method: 'delete',
+    path: '/api/studio/invites/:id',
+    access: OWNERS,
+    async handler(ctx) {
+      const { id } = idParamSchema.parse(ctx.req.params);
+      if (!(await deleteInvite(ctx.deps.db, requireCaller(ctx).studioId, id))) throw notFound('That invitation');
+      return undefined;
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/invites/:token',
+    access: 'public',
+    async handler(ctx) {
+      const { token } = tokenParamSchema.parse(ctx.req.params);
+      const invite = await openInviteOrThrow(ctx.deps.db, token);
+      return { invite: toInviteInfo(invite, invite.studio_name) };
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/invites/:token/accept',
+    access: 'public',
+    async handler(ctx) {
+      const { token } = tokenParamSchema.parse(ctx.req.params);
+      const body = acceptInviteSchema.parse(ctx.req.body);
+      const passwordHash = await hashPassword(body.password);
+      const member = await ctx.deps.db.transaction().execute(async (trx) => {
+        const invite = await openInviteOrThrow(trx, token);
+        if (await findMemberByEmail(trx, invite.email)) {
+          throw new HttpError(409, 'email_taken', 'This e-mail already has an account. Sign in instead.');
+        }
+        await markInviteAccepted(trx, invite.id);
+        return insertMember(trx, { studioId: invite.studio_id, email: invite.email, name: body.name, role: invite.role, passwordHash });
+      });
+      await startSession(ctx.deps.db, ctx.res, member.id, ctx.deps.config.SECURE_COOKIES);
+      ctx.res.status(201);
+      return { member: toMember(member) };
+    },
+  },
+];
+
+export function escapeHtml(s: string): string {
+  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}

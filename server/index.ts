@@ -1,0 +1,37 @@
+// Production entry: listen, and shut down cleanly on SIGTERM / SIGINT.
+import { loadConfig } from './config';
+import { createDb } from './db/database';
+import { migrateToLatest } from './db/migrate';
+import { createSmtpMailer } from './services/mail/mailer';
+import { createApp } from './app';
+
+export async function startServer(env: NodeJS.ProcessEnv = process.env) {
+  const config = loadConfig(env);
+  const db = createDb(config.DATABASE_URL);
+  await migrateToLatest(db);
+  const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
+  const app = createApp({ db, mailer, config });
+  const server = await new Promise<import('node:http').Server>((resolve) => {
+    const s = app.listen(config.PORT, config.HOST, () => resolve(s));
+  });
+  return {
+    server,
+    config,
+    async close() {
+      await new Promise<void>((r) => server.close(() => r()));
+      server.closeAllConnections();
+      await db.destroy();
+    },
+  };
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  const running = await startServer();
+  console.log(`Parlour is listening on ${running.config.publicUrl}`);
+  const stop = async () => {
+    await running.close();
+    process.exit(0);
+  };
+  process.on('SIGTERM', stop);
+  process.on('SIGINT', stop);
+}

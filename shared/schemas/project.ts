@@ -1,0 +1,76 @@
+import { z } from 'zod';
+import { emailSchema } from './studio';
+import { sortSchema } from './common';
+
+export const projectStateSchema = z.enum(['draft', 'presented', 'decided', 'archived']);
+export type ProjectState = z.infer<typeof projectStateSchema>;
+
+const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `Keep it under ${max} characters.`)
+    .transform((v) => (v === '' ? null : v))
+    .nullable()
+    .optional();
+
+export const clientBodySchema = z.object({
+  name: z.string().trim().min(1, 'Enter the client’s name.').max(120, 'Keep the name under 120 characters.'),
+  email: z
+    .union([z.literal(''), emailSchema])
+    .transform((v) => (v === '' ? null : v))
+    .nullable()
+    .optional(),
+  phone: optionalText(40),
+});
+export type ClientBody = z.infer<typeof clientBodySchema>;
+export const clientPatchSchema = clientBodySchema.partial();
+
+export const clientSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  projectCount: z.number().int(),
+  updatedAt: z.string(),
+});
+export type Client = z.infer<typeof clientSchema>;
+
+export const createProjectSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter a project name.').max(120, 'Keep the name under 120 characters.'),
+    address: optionalText(300),
+    clientId: z.uuid({ message: 'Pick a client.' }).optional(),
+    newClient: clientBodySchema.optional(),
+  })
+  .refine((b) => Boolean(b.clientId) !== Boolean(b.newClient), {
+    message: 'Pick a client or add a new one.',
+    path: ['clientId'],
+  });
+export type CreateProjectBody = z.infer<typeof createProjectSchema>;
+
+export const projectPatchSchema = z.object({
+  name: z.string().trim().min(1, 'Enter a project name.').max(120).optional(),
+  address: optionalText(300),
+  state: projectStateSchema.optional(),
+});
+export type ProjectPatch = z.infer<typeof projectPatchSchema>;
+
+export const listQuerySchema = z.object({
+  q: z.string().trim().max(120).optional(),
+  sort: sortSchema,
+  archived: z.enum(['include', 'exclude', 'only']).default('exclude'),
+});
+export type ListQuery = z.infer<typeof listQuerySchema>;
+
+export const projectSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  address: z.string().nullable(),
+  state: projectStateSchema,
+  client: z.object({ id: z.string(), name: z.string() }),
+  roomCount: z.number().int(),
+  updatedAt: z.string(),
+  createdAt: z.string(),
+});
+export type ProjectSummary = z.infer<typeof projectSummarySchema>;

@@ -1,0 +1,13 @@
+import { defineConfig } from 'vitest/config';
+
+// Unit tests (next to the code), API tests (real PostgreSQL) and reference checks.
+export default defineConfig({
+  test: {
+    include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.ts', 'tests/api/**/*.test.ts', 'tests/reference/**/*.test.ts'],
+    environment: 'node',
+    globalSetup: ['tests/setup/database.ts'],
+    testTimeout: 20000,
+    hookTimeout: 60000,
+    pool: 'forks',
+  },
+});
