@@ -1,0 +1,92 @@
+import type { Door, Opening } from '../schemas/room';
+import type { WallLayout } from './walls';
+import { addScaled, angleDegOf, type Vec2 } from './vec';
+
+/** An opening placed on its wall, in plan mm. "Start" is the edge nearer the wall's start corner. */
+export interface OpeningPlacement {
+  id: string;
+  type: Opening['type'];
+  wall: number;
+  /** Along the wall's inside face from its start corner, mm. */
+  fromMm: number;
+  toMm: number;
+  /** Bottom and top of the hole above the floor, mm (doors and passages start at 0). */
+  sillMm: number;
+  headMm: number;
+  insideStart: [number, number];
+  insideEnd: [number, number];
+  outsideStart: [number, number];
+  outsideEnd: [number, number];
+}
+
+/** Height of an opening's bottom edge above the floor, mm. */
+export function sillHeightMm(opening: Opening): number {
+  return opening.type === 'window' ? opening.sill : 0;
+}
+
+/** Where an opening's edges fall on the inside and outside faces of its wall, plan mm. */
+export function placeOpening(wall: WallLayout, opening: Opening): OpeningPlacement {
+  const fromMm = opening.offset;
+  const toMm = opening.offset + opening.width;
+  const insideStart = addScaled(wall.start, wall.direction, fromMm);
+  const insideEnd = addScaled(wall.start, wall.direction, toMm);
+  const sillMm = sillHeightMm(opening);
+  return {
+    id: opening.id,
+    type: opening.type,
+    wall: wall.index,
+    fromMm,
+    toMm,
+    sillMm,
+    headMm: sillMm + opening.height,
+    insideStart,
+    insideEnd,
+    // Reveals run square through the wall, so the outside edges sit straight out from the inside ones.
+    outsideStart: addScaled(insideStart, wall.outward, wall.thicknessMm),
+    outsideEnd: addScaled(insideEnd, wall.outward, wall.thicknessMm),
+  };
+}
+
+/** A door leaf's sweep in plan mm; angles are degrees clockwise on the plan from +x. */
+export interface DoorSwing {
+  openingId: string;
+  /** The hinge: on the inside face for a door swinging in, on the outside face for one swinging out. */
+  hingeMm: [number, number];
+  leafLengthMm: number;
+  /** Direction of the closed leaf (across the opening). */
+  closedAngleDeg: number;
+  /** Direction of the leaf opened to 90° (into the room or out of it). */
+  openAngleDeg: number;
+  /** openAngleDeg − closedAngleDeg: +90 sweeps clockwise on the plan, −90 anticlockwise. */
+  sweepDeg: 90 | -90;
+  /** The leaf's free end when closed and when open, plan mm. */
+  closedTipMm: [number, number];
+  openTipMm: [number, number];
+  side: Door['swing'];
+}
+
+/** The arc a door leaf sweeps from closed to open at 90°, in plan mm. */
+export function doorSwing(wall: WallLayout, door: Door): DoorSwing {
+  const placement = placeOpening(wall, door);
+  const outside = door.swing === 'out';
+  const hingeMm = door.hinge === 'start'
+    ? (outside ? placement.outsideStart : placement.insideStart)
+    : (outside ? placement.outsideEnd : placement.insideEnd);
+  const closed: Vec2 = door.hinge === 'start' ? wall.direction : [-wall.direction[0], -wall.direction[1]];
+  const open: Vec2 = outside ? wall.outward : [-wall.outward[0], -wall.outward[1]];
+  const closedAngleDeg = angleDegOf(closed);
+  const openAngleDeg = angleDegOf(open);
+  // closed and open are perpendicular, so their cross product is ±1 and names the sweep direction.
+  const sweepDeg = closed[0] * open[1] - closed[1] * open[0] > 0 ? 90 : -90;
+  return {
+    openingId: door.id,
+    hingeMm,
+    leafLengthMm: door.width,
+    closedAngleDeg,
+    openAngleDeg,
+    sweepDeg,
+    closedTipMm: addScaled(hingeMm, closed, door.width),
+    openTipMm: addScaled(hingeMm, open, door.width),
+    side: door.swing,
+  };
+}

@@ -1,0 +1,191 @@
+import { POINT_TOLERANCE_MM } from './tolerances';
+import { cross, distance, dot, sub, type Vec2 } from './vec';
+
+/**
+ * Shoelace area in mm² of plan points (mm). Positive when the corners run counter-clockwise in a
+ * y-up frame, which on the y-down plan is clockwise as seen on the page.
+ */
+export function signedAreaMm2(points: readonly Vec2[]): number {
+  let twice = 0;
+  const n = points.length;
+  for (let i = 0; i < n; i++) {
+    const a = points[i];
+    const b = points[(i + 1) % n];
+    twice += a[0] * b[1] - b[0] * a[1];
+  }
+  return twice / 2;
+}
+
+/** Enclosed area in mm² of plan points (mm), either winding. */
+export function areaMm2(points: readonly Vec2[]): number {
+  return Math.abs(signedAreaMm2(points));
+}
+
+/** Closed perimeter in mm of plan points (mm), last corner back to the first. */
+export function perimeterMm(points: readonly Vec2[]): number {
+  let total = 0;
+  for (let i = 0; i < points.length; i++) total += distance(points[i], points[(i + 1) % points.length]);
+  return total;
+}
+
+export type Winding = 'clockwise' | 'counter-clockwise';
+
+/** How the corners run as seen on the y-down plan page. */
+export function windingOnPlan(points: readonly Vec2[]): Winding {
+  return signedAreaMm2(points) >= 0 ? 'clockwise' : 'counter-clockwise';
+}
+
+/** +1 when the outline runs clockwise on the plan, −1 otherwise; multiplies normals so either winding works. */
+export function windingSign(points: readonly Vec2[]): 1 | -1 {
+  return signedAreaMm2(points) >= 0 ? 1 : -1;
+}
+
+function orientation(a: Vec2, b: Vec2, c: Vec2): number {
+  const value = cross(sub(b, a), sub(c, a));
+  // Scale the tolerance by the segment length so it reads as a distance in mm.
+  const scaleMm = Math.max(distance(a, b), 1);
+  return Math.abs(value) / scaleMm < POINT_TOLERANCE_MM ? 0 : Math.sign(value);
+}
+
+function onSegment(a: Vec2, b: Vec2, p: Vec2): boolean {
+  return (
+    p[0] <= Math.max(a[0], b[0]) + POINT_TOLERANCE_MM &&
+    p[0] >= Math.min(a[0], b[0]) - POINT_TOLERANCE_MM &&
+    p[1] <= Math.max(a[1], b[1]) + POINT_TOLERANCE_MM &&
+    p[1] >= Math.min(a[1], b[1]) - POINT_TOLERANCE_MM
+  );
+}
+
+/** Whether plan segments ab and cd share any point (touching counts). */
+export function segmentsTouch(a: Vec2, b: Vec2, c: Vec2, d: Vec2): boolean {
+  const o1 = orientation(a, b, c);
+  const o2 = orientation(a, b, d);
+  const o3 = orientation(c, d, a);
+  const o4 = orientation(c, d, b);
+  if (o1 !== o2 && o3 !== o4 && o1 * o2 <= 0 && o3 * o4 <= 0) return true;
+  return (
+    (o1 === 0 && onSegment(a, b, c)) ||
+    (o2 === 0 && onSegment(a, b, d)) ||
+    (o3 === 0 && onSegment(c, d, a)) ||
+    (o4 === 0 && onSegment(c, d, b))
+  );
+}
+
+/** A pair of walls (by index) that cross or touch away from their shared corner. */
+export interface WallCrossing {
+  wallA: number;
+  wallB: number;
+}
+
+/** Pairs of walls of a plan outline (mm) that cross each other; empty for a simple polygon. */
+export function findSelfCrossings(points: readonly Vec2[]): WallCrossing[] {
+  const n = points.length;
+  const crossings: WallCrossing[] = [];
+  for (let i = 0; i < n; i++) {
+    const a = points[i];
+    const b = points[(i + 1) % n];
+    for (let j = i + 1; j < n; j++) {
+      const c = points[j];
+      const d = points[(j + 1) % n];
+      const adjacent = j === i + 1 || (i === 0 && j === n - 1);
+      if (adjacent) {
+        // Neighbours share a corner; they only cross when one doubles back along the other.
+        const shared = j === i + 1 ? b : a;
+        const awayA = j === i + 1 ? a : b;
+        const awayB = j === i + 1 ? d : c;
+        const u = sub(awayA, shared);
+        const v = sub(awayB, shared);
+        const folded = Math.abs(cross(u, v)) / Math.max(distance(awayA, shared), 1) < POINT_TOLERANCE_MM && dot(u, v) > 0;
+        if (folded) crossings.push({ wallA: i, wallB: j });
+      } else if (segmentsTouch(a, b, c, d)) {
+        crossings.push({ wallA: i, wallB: j });
+      }
+    }
+  }
+  return crossings;
+}
+
+/** Axis-aligned box of plan points, in their units. */
+export interface Bounds2 {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+}
+
+/** Axis-aligned bounds of plan points (mm). */
+export function boundsMm(points: readonly Vec2[]): Bounds2 {
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const [x, y] of points) {
+    if (x < minX) minX = x;
+    if (y < minY) minY = y;
+    if (x > maxX) maxX = x;
+    if (y > maxY) maxY = y;
+  }
+  return { minX, minY, maxX, maxY };
+}
+
+function pointInTriangle(p: Vec2, a: Vec2, b: Vec2, c: Vec2): boolean {
+  const d1 = cross(sub(b, a), sub(p, a));
+  const d2 = cross(sub(c, b), sub(p, b));
+  const d3 = cross(sub(a, c), sub(p, c));
+  return d1 > 0 && d2 > 0 && d3 > 0;
+}
+
+/**
+ * Triangles (corner index triples) covering a simple plan polygon (any units), by ear clipping.
+ * Each triple runs in the polygon's own winding. Rooms have few corners, so O(n³) is fine.
+ */
+export function triangulatePolygon(points: readonly Vec2[]): number[] {
+  const n = points.length;
+  if (n < 3) return [];
+  const sign = signedAreaMm2(points) >= 0 ? 1 : -1;
+  const remaining = Array.from({ length: n }, (_, i) => i);
+  const triangles: number[] = [];
+  // A point in "positive" orientation for the ear test regardless of the polygon's winding.
+  const at = (i: number): Vec2 => [points[i][0], sign * points[i][1]];
+  let guard = 0;
+  while (remaining.length > 3 && guard < n * n) {
+    guard++;
+    let clipped = false;
+    for (let k = 0; k < remaining.length; k++) {
+      const ia = remaining[(k + remaining.length - 1) % remaining.length];
+      const ib = remaining[k];
+      const ic = remaining[(k + 1) % remaining.length];
+      const a = at(ia);
+      const b = at(ib);
+      const c = at(ic);
+      const turn = cross(sub(b, a), sub(c, b));
+      if (turn < 0) continue;
+      if (turn === 0) {
+        // A straight-through corner adds no area; drop it so the ear search keeps moving.
+        remaining.splice(k, 1);
+        clipped = true;
+        break;
+      }
+      let blocked = false;
+      for (const other of remaining) {
+        if (other === ia || other === ib || other === ic) continue;
+        if (pointInTriangle(at(other), a, b, c)) {
+          blocked = true;
+          break;
+        }
+      }
+      if (blocked) continue;
+      triangles.push(ia, ib, ic);
+      remaining.splice(k, 1);
+      clipped = true;
+      break;
+    }
+    if (!clipped) break;
+  }
+  if (remaining.length === 3) triangles.push(remaining[0], remaining[1], remaining[2]);
+  else if (remaining.length > 3) {
+    // Not simple (validation should have refused it); a fan still gives the viewer something to draw.
+    for (let k = 1; k + 1 < remaining.length; k++) triangles.push(remaining[0], remaining[k], remaining[k + 1]);
+  }
+  return triangles;
+}

@@ -1,0 +1,417 @@
+import type { Piece } from '../schemas/option';
+import type { Opening, RoomShell } from '../schemas/room';
+import { placeOpening, doorSwing, type OpeningPlacement } from './openings';
+import { triangulatePolygon } from './polygon';
+import { layoutShellWalls, type WallLayout } from './walls';
+import { addScaled, directionDeg, type Vec2 } from './vec';
+
+// Scene space: metres, y up; plan (x, y) mm sits at scene (x/1000, height/1000, y/1000), so seen
+// from above the scene matches the plan without a mirror. Every mesh is plain typed arrays so the
+// client can hand them straight to BufferGeometry and tests can read them without three.js.
+
+/** Door leaves are drawn this thick (mm), a usual interior leaf (common practice, no source). */
+export const DOOR_LEAF_THICKNESS_MM = 40;
+/** Window frame members are this wide on the face (mm) and this deep through the wall (mm) (common practice, no source). */
+export const WINDOW_FRAME_WIDTH_MM = 50;
+export const WINDOW_FRAME_DEPTH_MM = 60;
+/** Glass panes are drawn this thick (mm) so they show from both sides. */
+export const GLASS_THICKNESS_MM = 10;
+
+const MM_TO_M = 1 / 1000;
+
+/** One surface as indexed triangles in scene metres; uvs are metres so a finish repeats at its true size. */
+export interface MeshData {
+  positions: Float32Array;
+  normals: Float32Array;
+  uvs: Float32Array;
+  indices: Uint32Array;
+}
+
+/** Axis-aligned box in scene metres. */
+export interface Bounds3 {
+  min: [number, number, number];
+  max: [number, number, number];
+}
+
+/** All surfaces of one wall in scene metres, so each wall can take its own finish or be faded alone. */
+export interface WallSceneData {
+  index: number;
+  /** The face seen from inside the room; u runs along the wall from its start corner, v up from the floor. */
+  inside: MeshData;
+  outside: MeshData;
+  top: MeshData;
+  /** The wall's thickness inside each of its openings: sides, head and bottom. */
+  reveals: MeshData;
+  /** Middle of the inside face at half height, scene metres. */
+  centre: [number, number, number];
+  /** Horizontal unit vector out of the room, scene axes. */
+  outward: [number, number, number];
+}
+
+export interface PieceSceneData {
+  id: string;
+  status: Piece['status'];
+  mesh: MeshData;
+}
+
+export interface DoorLeafSceneData {
+  openingId: string;
+  mesh: MeshData;
+}
+
+export interface WindowSceneData {
+  openingId: string;
+  frame: MeshData;
+  glass: MeshData;
+}
+
+/** Everything the 3D view draws for one room and one option, scene metres, keyed by wall index or document id. */
+export interface RoomSceneData {
+  floor: MeshData;
+  /** Faces down, seen from inside the room. */
+  ceiling: MeshData;
+  walls: WallSceneData[];
+  pieces: PieceSceneData[];
+  doorLeaves: DoorLeafSceneData[];
+  windows: WindowSceneData[];
+  bounds: Bounds3;
+}
+
+type Vec3 = readonly [number, number, number];
+
+// Collects vertices as plain numbers and converts once; quads and polygons choose their triangle
+// order from the requested normal, so front faces always face the normal (CCW seen from there).
+class MeshWriter {
+  private positions: number[] = [];
+  private normals: number[] = [];
+  private uvs: number[] = [];
+  private indices: number[] = [];
+  private count = 0;
+
+  private vertex(p: Vec3, n: Vec3, u: number, v: number): void {
+    this.positions.push(p[0], p[1], p[2]);
+    this.normals.push(n[0], n[1], n[2]);
+    this.uvs.push(u, v);
+    this.count++;
+  }
+
+  private triangle(base: number, a: number, b: number, c: number, points: readonly Vec3[], n: Vec3): void {
+    const pa = points[a];
+    const pb = points[b];
+    const pc = points[c];
+    const e1x = pb[0] - pa[0], e1y = pb[1] - pa[1], e1z = pb[2] - pa[2];
+    const e2x = pc[0] - pa[0], e2y = pc[1] - pa[1], e2z = pc[2] - pa[2];
+    const facing = (e1y * e2z - e1z * e2y) * n[0] + (e1z * e2x - e1x * e2z) * n[1] + (e1x * e2y - e1y * e2x) * n[2];
+    if (facing >= 0) this.indices.push(base + a, base + b, base + c);
+    else this.indices.push(base + a, base + c, base + b);
+  }
+
+  /** A flat polygon given as scene points with their uvs and a triangulation of it. */
+  polygon(points: readonly Vec3[], uvs: readonly (readonly [number, number])[], triangles: readonly number[], n: Vec3): void {
+    const base = this.count;
+    for (let i = 0; i < points.length; i++) this.vertex(points[i], n, uvs[i][0], uvs[i][1]);
+    for (let k = 0; k + 2 < triangles.length; k += 3) this.triangle(base, triangles[k], triangles[k + 1], triangles[k + 2], points, n);
+  }
+
+  /** A flat convex quad, corners in order round it. */
+  quad(points: readonly [Vec3, Vec3, Vec3, Vec3], uvs: readonly (readonly [number, number])[], n: Vec3): void {
+    this.polygon(points, uvs, QUAD_TRIANGLES, n);
+  }
+
+  toMesh(): MeshData {
+    return {
+      positions: new Float32Array(this.positions),
+      normals: new Float32Array(this.normals),
+      uvs: new Float32Array(this.uvs),
+      indices: new Uint32Array(this.indices),
+    };
+  }
+}
+
+const QUAD_TRIANGLES = [0, 1, 2, 0, 2, 3];
+const UP: Vec3 = [0, 1, 0];
+const DOWN: Vec3 = [0, -1, 0];
+
+/** Plan point (mm) at height (mm) as a scene point (m). */
+export function planToScene(point: Vec2, heightMm: number): [number, number, number] {
+  return [point[0] * MM_TO_M, heightMm * MM_TO_M, point[1] * MM_TO_M];
+}
+
+function sceneDirection(planDirection: Vec2): Vec3 {
+  return [planDirection[0], 0, planDirection[1]];
+}
+
+// A horizontal plan polygon at one height; uvs are the plan position in metres.
+function writeCap(writer: MeshWriter, points: readonly Vec2[], heightMm: number, normal: Vec3): void {
+  const triangles = triangulatePolygon(points);
+  writer.polygon(
+    points.map((p) => planToScene(p, heightMm)),
+    points.map((p) => [p[0] * MM_TO_M, p[1] * MM_TO_M] as const),
+    triangles,
+    normal,
+  );
+}
+
+interface Hole {
+  fromMm: number;
+  toMm: number;
+  bottomMm: number;
+  topMm: number;
+}
+
+function sortedStops(values: number[], min: number, max: number): number[] {
+  const inside = values.filter((v) => v > min && v < max);
+  return [min, ...Array.from(new Set(inside)).sort((a, b) => a - b), max];
+}
+
+// A vertical wall face between along-wall positions fromMm and toMm (measured from the wall's start
+// corner), with rectangular holes, written as a grid of rectangles that skips the cells in holes.
+function writeWallFace(
+  writer: MeshWriter,
+  wall: WallLayout,
+  faceOffsetMm: number,
+  fromMm: number,
+  toMm: number,
+  heightMm: number,
+  holes: readonly Hole[],
+  normal: Vec3,
+): void {
+  const us = sortedStops(holes.flatMap((h) => [h.fromMm, h.toMm]), fromMm, toMm);
+  const vs = sortedStops(holes.flatMap((h) => [h.bottomMm, h.topMm]), 0, heightMm);
+  const base = addScaled(wall.start, wall.outward, faceOffsetMm);
+  const at = (u: number, v: number) => planToScene(addScaled(base, wall.direction, u), v);
+  for (let i = 0; i + 1 < us.length; i++) {
+    const u0 = us[i];
+    const u1 = us[i + 1];
+    const um = (u0 + u1) / 2;
+    for (let j = 0; j + 1 < vs.length; j++) {
+      const v0 = vs[j];
+      const v1 = vs[j + 1];
+      const vm = (v0 + v1) / 2;
+      if (holes.some((h) => um > h.fromMm && um < h.toMm && vm > h.bottomMm && vm < h.topMm)) continue;
+      const tu0 = (u0 - fromMm) * MM_TO_M;
+      const tu1 = (u1 - fromMm) * MM_TO_M;
+      writer.quad(
+        [at(u0, v0), at(u1, v0), at(u1, v1), at(u0, v1)],
+        [[tu0, v0 * MM_TO_M], [tu1, v0 * MM_TO_M], [tu1, v1 * MM_TO_M], [tu0, v1 * MM_TO_M]],
+        normal,
+      );
+    }
+  }
+}
+
+// The wall's thickness round one opening: both sides, the head, and the bottom (a sill for windows,
+// a threshold for doors and passages) so the hole reads as closed from every angle.
+function writeReveals(writer: MeshWriter, wall: WallLayout, placement: OpeningPlacement): void {
+  const t = wall.thicknessMm;
+  const d = sceneDirection(wall.direction);
+  const back: Vec3 = [-d[0], 0, -d[2]];
+  const tM = t * MM_TO_M;
+  for (const [alongMm, normal] of [[placement.fromMm, d], [placement.toMm, back]] as const) {
+    const inner = addScaled(wall.start, wall.direction, alongMm);
+    const outer = addScaled(inner, wall.outward, t);
+    const s = placement.sillMm * MM_TO_M;
+    const h = placement.headMm * MM_TO_M;
+    writer.quad(
+      [planToScene(inner, placement.sillMm), planToScene(outer, placement.sillMm), planToScene(outer, placement.headMm), planToScene(inner, placement.headMm)],
+      [[0, s], [tM, s], [tM, h], [0, h]],
+      normal,
+    );
+  }
+  const lengthM = (placement.toMm - placement.fromMm) * MM_TO_M;
+  for (const [heightMm, normal] of [[placement.headMm, DOWN], [placement.sillMm, UP]] as const) {
+    writer.quad(
+      [planToScene(placement.insideStart, heightMm), planToScene(placement.insideEnd, heightMm), planToScene(placement.outsideEnd, heightMm), planToScene(placement.outsideStart, heightMm)],
+      [[0, 0], [lengthM, 0], [lengthM, tM], [0, tM]],
+      normal,
+    );
+  }
+}
+
+// A box whose own x runs along plan unit vector axisX; own y is axisX turned 90° clockwise on the
+// plan. Sizes and heights in mm; uvs in metres along each face.
+function writeBox(
+  writer: MeshWriter,
+  centre: Vec2,
+  axisX: Vec2,
+  sizeXMm: number,
+  sizeYMm: number,
+  bottomMm: number,
+  heightMm: number,
+): void {
+  const axisY: Vec2 = [-axisX[1], axisX[0]];
+  const hx = sizeXMm / 2;
+  const hy = sizeYMm / 2;
+  const topMm = bottomMm + heightMm;
+  // Footprint corners in order round the box: (−x,−y) (+x,−y) (+x,+y) (−x,+y).
+  const foot = [
+    [-hx, -hy],
+    [hx, -hy],
+    [hx, hy],
+    [-hx, hy],
+  ].map(([a, b]) => addScaled(addScaled(centre, axisX, a), axisY, b));
+  const sides: [number, number, Vec2, number][] = [
+    [0, 1, [-axisY[0], -axisY[1]], sizeXMm],
+    [1, 2, axisX, sizeYMm],
+    [2, 3, axisY, sizeXMm],
+    [3, 0, [-axisX[0], -axisX[1]], sizeYMm],
+  ];
+  const vb = 0;
+  const vt = heightMm * MM_TO_M;
+  for (const [a, b, outward, widthMm] of sides) {
+    const w = widthMm * MM_TO_M;
+    writer.quad(
+      [planToScene(foot[a], bottomMm), planToScene(foot[b], bottomMm), planToScene(foot[b], topMm), planToScene(foot[a], topMm)],
+      [[0, vb], [w, vb], [w, vt], [0, vt]],
+      sceneDirection(outward),
+    );
+  }
+  const x = sizeXMm * MM_TO_M;
+  const y = sizeYMm * MM_TO_M;
+  const capUvs = [[0, 0], [x, 0], [x, y], [0, y]] as const;
+  writer.quad([planToScene(foot[0], topMm), planToScene(foot[1], topMm), planToScene(foot[2], topMm), planToScene(foot[3], topMm)], capUvs, UP);
+  writer.quad([planToScene(foot[0], bottomMm), planToScene(foot[1], bottomMm), planToScene(foot[2], bottomMm), planToScene(foot[3], bottomMm)], capUvs, DOWN);
+}
+
+function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], heightMm: number): WallSceneData {
+  const holes: Hole[] = placements.map((p) => ({ fromMm: p.fromMm, toMm: p.toMm, bottomMm: p.sillMm, topMm: p.headMm }));
+  const outward = sceneDirection(wall.outward);
+  const inward: Vec3 = [-outward[0], 0, -outward[2]];
+
+  const inside = new MeshWriter();
+  writeWallFace(inside, wall, 0, 0, wall.lengthMm, heightMm, holes, inward);
+
+  const outside = new MeshWriter();
+  // The outside face may be shorter than the inside one (re-entrant corners), so holes are clipped to it.
+  writeWallFace(outside, wall, wall.thicknessMm, wall.outerFromMm, wall.outerToMm, heightMm, holes, outward);
+  const top = new MeshWriter();
+  writeCap(top, [wall.start, wall.end, wall.outerEnd, wall.outerStart], heightMm, UP);
+  if (wall.startJoin) {
+    const join = wall.startJoin;
+    const widthM = Math.hypot(join.to[0] - join.from[0], join.to[1] - join.from[1]) * MM_TO_M;
+    const h = heightMm * MM_TO_M;
+    outside.quad(
+      [planToScene(join.from, 0), planToScene(join.to, 0), planToScene(join.to, heightMm), planToScene(join.from, heightMm)],
+      [[0, 0], [widthM, 0], [widthM, h], [0, h]],
+      sceneDirection(join.normal),
+    );
+    writeCap(top, [join.corner, join.from, join.to], heightMm, UP);
+  }
+
+  const reveals = new MeshWriter();
+  for (const placement of placements) writeReveals(reveals, wall, placement);
+
+  const middle = addScaled(wall.start, wall.direction, wall.lengthMm / 2);
+  return {
+    index: wall.index,
+    inside: inside.toMesh(),
+    outside: outside.toMesh(),
+    top: top.toMesh(),
+    reveals: reveals.toMesh(),
+    centre: planToScene(middle, heightMm / 2),
+    outward: [outward[0], 0, outward[2]],
+  };
+}
+
+// The leaf is drawn open at 90° so the doorway reads as passable and the swing side is obvious.
+function buildDoorLeaf(wall: WallLayout, opening: Extract<Opening, { type: 'door' }>): DoorLeafSceneData {
+  const swing = doorSwing(wall, opening);
+  const open = directionDeg(swing.openAngleDeg);
+  const closed = directionDeg(swing.closedAngleDeg);
+  const centre = addScaled(addScaled(swing.hingeMm, open, opening.width / 2), closed, DOOR_LEAF_THICKNESS_MM / 2);
+  const writer = new MeshWriter();
+  writeBox(writer, centre, open, opening.width, DOOR_LEAF_THICKNESS_MM, 0, opening.height);
+  return { openingId: opening.id, mesh: writer.toMesh() };
+}
+
+function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowSceneData {
+  const depthMm = Math.min(WINDOW_FRAME_DEPTH_MM, wall.thicknessMm);
+  const f = Math.min(WINDOW_FRAME_WIDTH_MM, (placement.toMm - placement.fromMm) / 4, (placement.headMm - placement.sillMm) / 4);
+  const midDepth = wall.thicknessMm / 2;
+  const at = (alongMm: number) => addScaled(addScaled(wall.start, wall.direction, alongMm), wall.outward, midDepth);
+  const frame = new MeshWriter();
+  const innerFrom = placement.fromMm + f;
+  const innerTo = placement.toMm - f;
+  const fullHeight = placement.headMm - placement.sillMm;
+  writeBox(frame, at(placement.fromMm + f / 2), wall.direction, f, depthMm, placement.sillMm, fullHeight);
+  writeBox(frame, at(placement.toMm - f / 2), wall.direction, f, depthMm, placement.sillMm, fullHeight);
+  writeBox(frame, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm, placement.sillMm, f);
+  writeBox(frame, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm, placement.headMm - f, f);
+  const glass = new MeshWriter();
+  writeBox(glass, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, GLASS_THICKNESS_MM, placement.sillMm + f, fullHeight - 2 * f);
+  return { openingId: placement.id, frame: frame.toMesh(), glass: glass.toMesh() };
+}
+
+/** Everything to draw for a room shell (plan mm) and an option's placed pieces, in scene metres. */
+export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piece[] }): RoomSceneData {
+  const walls = layoutShellWalls(shell);
+  const placementsByWall: OpeningPlacement[][] = walls.map(() => []);
+  const doorLeaves: DoorLeafSceneData[] = [];
+  const windows: WindowSceneData[] = [];
+  for (const opening of shell.openings) {
+    const wall = walls[opening.wall];
+    if (!wall) continue;
+    const placement = placeOpening(wall, opening);
+    placementsByWall[opening.wall].push(placement);
+    if (opening.type === 'door') doorLeaves.push(buildDoorLeaf(wall, opening));
+    else if (opening.type === 'window') windows.push(buildWindow(wall, placement));
+  }
+
+  const floor = new MeshWriter();
+  writeCap(floor, shell.outline, 0, UP);
+  const ceiling = new MeshWriter();
+  writeCap(ceiling, shell.outline, shell.wallHeight, DOWN);
+
+  const pieces: PieceSceneData[] = [];
+  for (const piece of option.pieces) {
+    if (!piece.placed) continue;
+    const writer = new MeshWriter();
+    writeBox(writer, [piece.x, piece.y], directionDeg(piece.rotation), piece.width, piece.depth, piece.elevation, piece.height);
+    pieces.push({ id: piece.id, status: piece.status, mesh: writer.toMesh() });
+  }
+
+  const wallData = walls.map((wall) => buildWall(wall, placementsByWall[wall.index], shell.wallHeight));
+  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, pieces, doorLeaves, windows };
+  return { ...surfaces, bounds: sceneBounds(surfaces) };
+}
+
+function emptyBounds(): Bounds3 {
+  return { min: [Infinity, Infinity, Infinity], max: [-Infinity, -Infinity, -Infinity] };
+}
+
+/** Grows `into` (scene metres) to hold every position of a mesh; returns it. */
+export function extendBounds(into: Bounds3, mesh: MeshData): Bounds3 {
+  const p = mesh.positions;
+  for (let i = 0; i < p.length; i += 3) {
+    for (let axis = 0; axis < 3; axis++) {
+      const value = p[i + axis];
+      if (value < into.min[axis]) into.min[axis] = value;
+      if (value > into.max[axis]) into.max[axis] = value;
+    }
+  }
+  return into;
+}
+
+/** Axis-aligned bounds (scene metres) of one mesh; empty meshes give min +∞ and max −∞. */
+export function meshBounds(mesh: MeshData): Bounds3 {
+  return extendBounds(emptyBounds(), mesh);
+}
+
+/** Every mesh of a room scene, for bounds, counts and disposal. */
+export function sceneMeshes(scene: Omit<RoomSceneData, 'bounds'>): MeshData[] {
+  return [
+    scene.floor,
+    scene.ceiling,
+    ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals]),
+    ...scene.pieces.map((p) => p.mesh),
+    ...scene.doorLeaves.map((d) => d.mesh),
+    ...scene.windows.flatMap((w) => [w.frame, w.glass]),
+  ];
+}
+
+/** Axis-aligned bounds (scene metres) of everything in a room scene: walls, pieces, leaves. */
+export function sceneBounds(scene: Omit<RoomSceneData, 'bounds'>): Bounds3 {
+  const bounds = emptyBounds();
+  for (const mesh of sceneMeshes(scene)) extendBounds(bounds, mesh);
+  return bounds;
+}

@@ -1,0 +1,106 @@
+import type { RoomShell } from '../schemas/room';
+import { findSelfCrossings } from './polygon';
+import { CORNER_MARGIN_MM, MIN_WALL_LENGTH_MM, OPENING_OVERLAP_TOLERANCE_MM } from './tolerances';
+import { distance } from './vec';
+
+/** A rule a document breaks, with the field it concerns written as a path like `openings[1].width`. */
+export interface FieldProblem {
+  path: string;
+  message: string;
+}
+
+function mm(value: number): string {
+  return `${Number(value.toFixed(1))} mm`;
+}
+
+function join(prefix: string, path: string): string {
+  return prefix === '' ? path : `${prefix}.${path}`;
+}
+
+function outlineProblems(shell: RoomShell, prefix: string): FieldProblem[] {
+  const { outline } = shell;
+  const problems: FieldProblem[] = [];
+  const n = outline.length;
+  for (let i = 0; i < n; i++) {
+    if (distance(outline[i], outline[(i + 1) % n]) < MIN_WALL_LENGTH_MM) {
+      problems.push({ path: join(prefix, `outline[${(i + 1) % n}]`), message: `wall ${i} has zero length (corner ${(i + 1) % n} repeats corner ${i})` });
+    }
+  }
+  // Zero-length walls make every neighbour "cross", so only look for crossings in an outline without them.
+  if (problems.length === 0) {
+    for (const { wallA, wallB } of findSelfCrossings(outline)) {
+      problems.push({ path: join(prefix, 'outline'), message: `wall ${wallA} crosses wall ${wallB}` });
+    }
+  }
+  return problems;
+}
+
+function thicknessProblems(shell: RoomShell, prefix: string): FieldProblem[] {
+  const count = shell.wallThicknesses?.length ?? 0;
+  if (count <= shell.outline.length) return [];
+  return [{ path: join(prefix, 'wallThicknesses'), message: `has ${count} entries but the outline has ${shell.outline.length} walls` }];
+}
+
+function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
+  const problems: FieldProblem[] = [];
+  const n = shell.outline.length;
+  const byWall = new Map<number, { index: number; from: number; to: number }[]>();
+  shell.openings.forEach((opening, index) => {
+    const at = (field: string) => join(prefix, `openings[${index}].${field}`);
+    if (opening.wall >= n) {
+      problems.push({ path: at('wall'), message: `there is no wall ${opening.wall} (the outline has ${n} walls, 0 to ${n - 1})` });
+      return;
+    }
+    const wallLengthMm = distance(shell.outline[opening.wall], shell.outline[(opening.wall + 1) % n]);
+    const usableMm = wallLengthMm - 2 * CORNER_MARGIN_MM;
+    if (opening.width > usableMm) {
+      problems.push({ path: at('width'), message: `longer than wall ${opening.wall} (${mm(wallLengthMm)}) less ${CORNER_MARGIN_MM} mm at each corner` });
+    } else if (opening.offset < CORNER_MARGIN_MM) {
+      problems.push({ path: at('offset'), message: `closer than ${CORNER_MARGIN_MM} mm to the start corner of wall ${opening.wall}` });
+    } else if (opening.offset + opening.width > wallLengthMm - CORNER_MARGIN_MM) {
+      problems.push({
+        path: at('offset'),
+        message: `runs past the end of wall ${opening.wall} (${mm(wallLengthMm)}): ends at ${mm(opening.offset + opening.width)}, at most ${mm(wallLengthMm - CORNER_MARGIN_MM)}`,
+      });
+    }
+    const wallHeightMm = shell.wallHeight;
+    if (opening.type === 'window') {
+      if (opening.sill + opening.height > wallHeightMm) {
+        problems.push({ path: at('height'), message: `window head (sill ${mm(opening.sill)} + height ${mm(opening.height)}) is above the wall height (${mm(wallHeightMm)})` });
+      }
+    } else if (opening.height > wallHeightMm) {
+      problems.push({ path: at('height'), message: `${opening.type} is taller than the wall (${mm(wallHeightMm)})` });
+    }
+    const list = byWall.get(opening.wall) ?? [];
+    list.push({ index, from: opening.offset, to: opening.offset + opening.width });
+    byWall.set(opening.wall, list);
+  });
+  for (const [wall, list] of byWall) {
+    const sorted = [...list].sort((a, b) => a.from - b.from);
+    for (let k = 1; k < sorted.length; k++) {
+      const before = sorted[k - 1];
+      const here = sorted[k];
+      if (before.to - here.from > OPENING_OVERLAP_TOLERANCE_MM) {
+        problems.push({
+          path: join(prefix, `openings[${here.index}].offset`),
+          message: `overlaps ${shell.openings[before.index].id} (openings[${before.index}]) on wall ${wall}`,
+        });
+      }
+    }
+  }
+  return problems;
+}
+
+/**
+ * Geometric rules a room shell (plan mm) must keep beyond what its schema checks. Paths are relative
+ * to the shell, joined to `prefix` (e.g. 'room'); empty means the shell can be drawn and measured.
+ */
+export function validateRoomShell(shell: RoomShell, prefix = ''): FieldProblem[] {
+  if (shell.outline.length < 3) {
+    return [{ path: join(prefix, 'outline'), message: `needs at least 3 corners (has ${shell.outline.length})` }];
+  }
+  const outline = outlineProblems(shell, prefix);
+  // Openings are measured along walls, which mean nothing until the outline itself is sound.
+  if (outline.length > 0) return [...outline, ...thicknessProblems(shell, prefix)];
+  return [...thicknessProblems(shell, prefix), ...openingProblems(shell, prefix)];
+}
