@@ -1,0 +1,29 @@
+import { createBrowserRouter, Navigate } from 'react-router';
+import { DesignerLayout, NotFoundPage } from './layout';
+import { ProjectsRoute } from './routes/projects-route';
+import { ProjectRoute } from './routes/project-route';
+import { SignInPage } from '../features/auth/components/sign-in-page';
+import { SignUpPage } from '../features/auth/components/sign-up-page';
+import { AcceptInvitePage } from '../features/auth/components/accept-invite-page';
+import { ClientsPage } from '../features/clients/components/clients-page';
+import { StudioPage } from '../features/studio/components/studio-page';
+import { OutboxPage } from '../features/outbox/components/outbox-page';
+
+export const router = createBrowserRouter([
+  { path: '/sign-in', element: <SignInPage /> },
+  { path: '/sign-up', element: <SignUpPage /> },
+  { path: '/invite/:token', element: <AcceptInvitePage /> },
+  { path: '/outbox', element: <OutboxPage /> },
+  { path: '/outbox/:messageId', element: <OutboxPage /> },
+  {
+    element: <DesignerLayout />,
+    children: [
+      { path: '/', element: <Navigate to="/projects" replace /> },
+      { path: '/projects', element: <ProjectsRoute /> },
+      { path: '/projects/:projectId', element: <ProjectRoute /> },
+      { path: '/clients', element: <ClientsPage /> },
+      { path: '/studio', element: <StudioPage /> },
+    ],
+  },
+  { path: '*', element: <NotFoundPage /> },
+]);

@@ -1,0 +1,7 @@
+import { ProjectsPage } from '../../features/projects/components/projects-page';
+import { useClients } from '../../features/clients/api/clients';
+
+export function ProjectsRoute() {
+  const clients = useClients({ sort: 'name' });
+  return <ProjectsPage clients={clients.data?.clients ?? []} />;
+}

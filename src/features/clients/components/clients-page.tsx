@@ -1,0 +1,105 @@
+import { useDeferredValue, useState, type FormEvent } from 'react';
+import type { ListQuery } from '../../../../shared/schemas/project';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { inputClass, TextField } from '../../../components/ui/field';
+import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
+import { errorMessage, fieldError } from '../../../lib/api';
+import { formatRelative } from '../../../lib/format';
+import { useCanEdit } from '../../../lib/session';
+import { useClients, useCreateClient, useUpdateClient } from '../api/clients';
+import type { Client } from '../../../../shared/schemas/project';
+
+export function ClientsPage() {
+  const [q, setQ] = useState('');
+  const [sort, setSort] = useState<ListQuery['sort']>('updated');
+  const [editing, setEditing] = useState<Client | 'new' | null>(null);
+  const clients = useClients({ q: useDeferredValue(q) || undefined, sort });
+  const canEdit = useCanEdit();
+
+  return (
+    <div>
+      <PageHeader title="Clients" actions={canEdit && <Button variant="primary" onClick={() => setEditing('new')}>Add client</Button>}>
+        The households and people your projects are for.
+      </PageHeader>
+      <div className="mb-4 flex flex-wrap items-center gap-3">
+        <label className="min-w-64 flex-1">
+          <span className="sr-only">Search clients</span>
+          <input className={inputClass} type="search" placeholder="Search by name or e-mail" value={q} onChange={(e) => setQ(e.target.value)} />
+        </label>
+        <label className="flex items-center gap-2 text-sm text-ink-soft">
+          Sort
+          <select className={`${inputClass} w-auto`} value={sort} onChange={(e) => setSort(e.target.value as ListQuery['sort'])}>
+            <option value="updated">Last change</option>
+            <option value="name">Name</option>
+          </select>
+        </label>
+      </div>
+      {clients.isPending ? (
+        <Spinner />
+      ) : clients.isError ? (
+        <Notice tone="error">{errorMessage(clients.error)}</Notice>
+      ) : clients.data.clients.length === 0 ? (
+        <EmptyState title={q ? 'No client matches that search.' : 'No clients yet.'} />
+      ) : (
+        <div className="overflow-hidden rounded-2xl border border-line bg-white">
+          <table className="w-full text-left text-[15px]">
+            <thead className="border-b border-line bg-paper/60 text-sm text-ink-soft">
+              <tr>
+                <th scope="col" className="px-5 py-3 font-semibold">Name</th>
+                <th scope="col" className="px-5 py-3 font-semibold">E-mail</th>
+                <th scope="col" className="px-5 py-3 font-semibold">Projects</th>
+                <th scope="col" className="px-5 py-3 font-semibold">Last change</th>
+                {canEdit && <th scope="col" className="px-5 py-3"><span className="sr-only">Actions</span></th>}
+              </tr>
+            </thead>
+            <tbody>
+              {clients.data.clients.map((c) => (
+                <tr key={c.id} className="border-b border-line last:border-0">
+                  <td className="px-5 py-4 font-semibold">{c.name}</td>
+                  <td className="px-5 py-4 text-ink-soft">{c.email ?? '—'}</td>
+                  <td className="px-5 py-4 text-ink-soft tabular-nums">{c.projectCount}</td>
+                  <td className="px-5 py-4 text-ink-soft">{formatRelative(c.updatedAt)}</td>
+                  {canEdit && (
+                    <td className="px-5 py-4 text-right">
+                      <Button size="sm" variant="quiet" onClick={() => setEditing(c)} aria-label={`Edit ${c.name}`}>Edit</Button>
+                    </td>
+                  )}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+      {editing && <ClientDialog client={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+    </div>
+  );
+}
+
+function ClientDialog({ client, onClose }: { client: Client | null; onClose: () => void }) {
+  const create = useCreateClient();
+  const update = useUpdateClient(client?.id ?? '');
+  const mutation = client ? update : create;
+  const [name, setName] = useState(client?.name ?? '');
+  const [email, setEmail] = useState(client?.email ?? '');
+  const [phone, setPhone] = useState(client?.phone ?? '');
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    mutation.mutate({ name, email, phone }, { onSuccess: onClose });
+  };
+  const err = mutation.error;
+  return (
+    <Dialog open onClose={onClose} title={client ? 'Edit client' : 'Add client'}>
+      <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
+        {err && Object.keys((err as { fields?: object }).fields ?? {}).length === 0 && <Notice tone="error">{errorMessage(err)}</Notice>}
+        <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(err, 'name')} autoFocus />
+        <TextField label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldError(err, 'email')} />
+        <TextField label="Phone" value={phone} onChange={(e) => setPhone(e.target.value)} error={fieldError(err, 'phone')} />
+        <div className="flex justify-end gap-2">
+          <Button variant="quiet" onClick={onClose}>Cancel</Button>
+          <Button type="submit" variant="primary" busy={mutation.isPending}>{client ? 'Save' : 'Add client'}</Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}

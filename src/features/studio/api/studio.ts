@@ -1,0 +1,47 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { InviteBody, InviteInfo, Member, Role } from '../../../../shared/schemas/studio';
+import { api } from '../../../lib/api';
+
+export const studioKeys = {
+  all: ['studio'] as const,
+  members: () => [...studioKeys.all, 'members'] as const,
+  invites: () => [...studioKeys.all, 'invites'] as const,
+};
+
+export const membersQuery = queryOptions({ queryKey: studioKeys.members(), queryFn: () => api<{ members: Member[] }>('/api/studio/members') });
+export const invitesQuery = queryOptions({ queryKey: studioKeys.invites(), queryFn: () => api<{ invites: InviteInfo[] }>('/api/studio/invites') });
+
+export const useMembers = () => useQuery(membersQuery);
+export const useInvites = (enabled: boolean) => useQuery({ ...invitesQuery, enabled });
+
+export function useInvite() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: InviteBody) => api<{ invite: InviteInfo }>('/api/studio/invites', { method: 'POST', body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: studioKeys.invites() }),
+  });
+}
+
+export function useRevokeInvite() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api(`/api/studio/invites/${id}`, { method: 'DELETE' }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: studioKeys.invites() }),
+  });
+}
+
+export function useChangeRole() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, role }: { id: string; role: Role }) => api(`/api/studio/members/${id}`, { method: 'PATCH', body: { role } }),
+    onSettled: () => qc.invalidateQueries({ queryKey: studioKeys.all }),
+  });
+}
+
+export function useRemoveMember() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api(`/api/studio/members/${id}`, { method: 'DELETE' }),
+    onSettled: () => qc.invalidateQueries({ queryKey: studioKeys.all }),
+  });
+}
