@@ -68,8 +68,10 @@ export function readPlanFile(input: unknown): ReadPlanFileResult {
   return { ok: true, plan: parsed.data };
 }
 
-/** A plan file as pretty JSON text (lengths in plan mm), validated by the same schema that reads it. */
+/** A plan file as pretty JSON text (lengths in plan mm); throws on a plan that readPlanFile would refuse. */
 export function writePlanFile(plan: Omit<PlanFileInput, 'format' | 'version'>): string {
-  const full = planFileSchema.parse({ ...plan, format: PLAN_FILE_FORMAT, version: PLAN_FILE_VERSION });
+  const full = planFileSchema.parse({ format: PLAN_FILE_FORMAT, version: PLAN_FILE_VERSION, ...plan });
+  const problems = validateRoomShell(full.room, 'room');
+  if (problems.length > 0) throw new Error(`cannot write the plan file: ${problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`);
   return `${JSON.stringify(full, null, 2)}\n`;
 }
