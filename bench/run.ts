@@ -1,0 +1,11 @@
+// Runs every bench in turn. Add a bench by importing it and appending it to the list.
+import { benchGeometry } from './geometry';
+
+const benches: { name: string; run: () => Promise<void> }[] = [
+  { name: 'geometry', run: benchGeometry },
+];
+
+for (const bench of benches) {
+  console.log(`# ${bench.name}`);
+  await bench.run();
+}

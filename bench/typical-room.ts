@@ -1,0 +1,33 @@
+import { optionDocSchema, type OptionDoc } from '../shared/schemas/option';
+import { roomShellSchema, type RoomShell } from '../shared/schemas/room';
+
+/**
+ * A typical room for timing (invented): 8 walls with a splayed corner and a step, 6 openings and
+ * 40 pieces in a grid with assorted turns, all in plan mm.
+ */
+export function typicalRoom(): { shell: RoomShell; option: OptionDoc } {
+  const shell = roomShellSchema.parse({
+    outline: [[0, 0], [6000, 0], [6000, 2500], [5000, 3500], [5000, 5000], [2000, 5000], [2000, 4000], [0, 4000]],
+    openings: [
+      { id: 'door-hall', type: 'door', wall: 0, offset: 300, width: 850, height: 2040, hinge: 'start', swing: 'in' },
+      { id: 'window-east', type: 'window', wall: 0, offset: 2500, width: 1800, height: 1300, sill: 850 },
+      { id: 'window-side', type: 'window', wall: 1, offset: 500, width: 1200, height: 1300, sill: 850 },
+      { id: 'passage-dining', type: 'passage', wall: 4, offset: 500, width: 1000, height: 2100 },
+      { id: 'window-south', type: 'window', wall: 6, offset: 400, width: 1200, height: 1300, sill: 850 },
+      { id: 'door-garden', type: 'door', wall: 7, offset: 1000, width: 800, height: 2040, hinge: 'end', swing: 'out' },
+    ],
+  });
+  const pieces = Array.from({ length: 40 }, (_, i) => ({
+    id: `piece-${i}`,
+    name: `Piece ${i}`,
+    x: 600 + (i % 8) * 550,
+    y: 600 + Math.floor(i / 8) * 650,
+    width: 400,
+    depth: 300,
+    height: 450 + (i % 5) * 100,
+    rotation: (i * 37) % 360,
+    elevation: i % 7 === 0 ? 1200 : 0,
+    status: i % 3 === 0 ? 'existing' : 'new',
+  }));
+  return { shell, option: optionDocSchema.parse({ pieces }) };
+}

@@ -1,0 +1,60 @@
+import { describe, expect, it } from 'vitest';
+import { roomShellSchema, type RoomShellInput } from '../schemas/room';
+import { computeTakeoff, findingSchema, roundQuantity } from './takeoff';
+
+const example: RoomShellInput = {
+  wallHeight: 2600,
+  wallThickness: 100,
+  outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
+  openings: [
+    { id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' },
+    { id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 },
+    { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 },
+  ],
+};
+
+describe('computeTakeoff', () => {
+  it('gives exactly the numbers of the design example', () => {
+    const takeoff = computeTakeoff(roomShellSchema.parse(example));
+    expect(takeoff).toMatchObject({
+      floorArea_m2: 15.12,
+      perimeter_m: 15.6,
+      ceilingArea_m2: 15.12,
+      volume_m3: 39.312,
+      netWallArea_m2: 35.197,
+      paint: { coats: 2, coverage_m2_per_l: 10, litres: 7.039 },
+      flooring: { wastePercent: 10, orderArea_m2: 16.632 },
+      skirting_m: 13.88,
+      findings: [],
+    });
+    expect(takeoff.walls[0]).toEqual({ index: 0, length_m: 4.2, grossArea_m2: 10.92, openingsArea_m2: 1.673, netArea_m2: 9.247 });
+    expect(takeoff.walls.map((w) => w.openingsArea_m2)).toEqual([1.673, 0, 1.8, 1.89]);
+  });
+
+  it('follows the coats, coverage and waste options', () => {
+    const takeoff = computeTakeoff(roomShellSchema.parse(example), { coats: 3, coverage_m2_per_l: 12, wastePercent: 15 });
+    expect(takeoff.paint).toEqual({ coats: 3, coverage_m2_per_l: 12, litres: roundQuantity((35.1972 * 3) / 12) });
+    expect(takeoff.flooring.orderArea_m2).toBe(roundQuantity(15.12 * 1.15));
+  });
+
+  it('runs the skirting under windows but not across doors and passages', () => {
+    const noWindow = computeTakeoff(roomShellSchema.parse({ ...example, openings: example.openings!.filter((o) => o.type !== 'window') }));
+    expect(noWindow.skirting_m).toBe(13.88);
+    const noOpenings = computeTakeoff(roomShellSchema.parse({ ...example, openings: [] }));
+    expect(noOpenings.skirting_m).toBe(15.6);
+  });
+
+  it('measures an L-shaped room on its inside faces', () => {
+    const takeoff = computeTakeoff(roomShellSchema.parse({ wallHeight: 2500, outline: [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]] }));
+    expect(takeoff.floorArea_m2).toBe(17);
+    expect(takeoff.perimeter_m).toBe(18);
+    expect(takeoff.netWallArea_m2).toBe(45);
+    expect(takeoff.volume_m3).toBe(42.5);
+  });
+
+  it('passes findings through in the shared finding shape', () => {
+    const finding = findingSchema.parse({ kind: 'narrow-walkway', pieces: ['bed', 'chest'], openings: [], message: 'Only 62 cm to pass between the bed and the chest', measured_mm: 620, required_mm: 900 });
+    expect(computeTakeoff(roomShellSchema.parse(example), {}, [finding]).findings).toEqual([finding]);
+    expect(findingSchema.safeParse({ ...finding, kind: 'too-close' }).success).toBe(false);
+  });
+});
