@@ -1,17 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { roomShellSchema, type RoomShellInput } from '../schemas/room';
+import { roomShellSchema } from '../schemas/room';
 import { computeTakeoff, findingSchema, roundQuantity } from './takeoff';
-
-const example: RoomShellInput = {
-  wallHeight: 2600,
-  wallThickness: 100,
-  outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
-  openings: [
-    { id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' },
-    { id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 },
-    { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 },
-  ],
-};
+import { designExampleRoom as example } from '../../tests/reference/rooms';
 
 describe('computeTakeoff', () => {
   it('gives exactly the numbers of the design example', () => {

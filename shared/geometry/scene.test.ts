@@ -3,17 +3,7 @@ import { typicalRoom } from '../../bench/typical-room';
 import { optionDocSchema, type OptionDocInput } from '../schemas/option';
 import { roomShellSchema, type RoomShellInput } from '../schemas/room';
 import { buildRoomScene, meshBounds, sceneMeshes, type MeshData } from './scene';
-
-const example: RoomShellInput = {
-  wallHeight: 2600,
-  wallThickness: 100,
-  outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
-  openings: [
-    { id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' },
-    { id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 },
-    { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 },
-  ],
-};
+import { designExampleRoom as example } from '../../tests/reference/rooms';
 
 function scene(shell: RoomShellInput = example, option: OptionDocInput = {}) {
   return buildRoomScene(roomShellSchema.parse(shell), optionDocSchema.parse(option));

@@ -1,0 +1,24 @@
+// Minimal types for the two general-purpose libraries the reference checks compare against.
+declare module '2d-polygon-area' {
+  /** Signed shoelace area of [x, y] points, in their squared units. */
+  export default function area(points: readonly (readonly [number, number])[]): number;
+}
+
+declare module 'clipper-lib' {
+  interface IntPoint {
+    X: number;
+    Y: number;
+  }
+  class ClipperOffset {
+    constructor(miterLimit?: number, arcTolerance?: number);
+    AddPath(path: IntPoint[], joinType: number, endType: number): void;
+    Execute(solution: IntPoint[][], delta: number): void;
+  }
+  const ClipperLib: {
+    ClipperOffset: typeof ClipperOffset;
+    JoinType: { jtSquare: number; jtRound: number; jtMiter: number };
+    EndType: { etClosedPolygon: number };
+    Clipper: { Area(path: IntPoint[]): number };
+  };
+  export default ClipperLib;
+}
