@@ -11,3 +11,19 @@ export const designExampleRoom: RoomShellInput = {
     { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 },
   ],
 };
+
+/** The take-off DESIGN.md prints for that room (default options), field for field. */
+export const designExampleTakeoff = {
+  floorArea_m2: 15.12,
+  perimeter_m: 15.6,
+  ceilingArea_m2: 15.12,
+  volume_m3: 39.312,
+  netWallArea_m2: 35.197,
+  paint: { coats: 2, coverage_m2_per_l: 10, litres: 7.039 },
+  flooring: { wastePercent: 10, orderArea_m2: 16.632 },
+  skirting_m: 13.88,
+  findings: [],
+};
+
+/** Wall 0 of that take-off as DESIGN.md prints it. */
+export const designExampleWall0 = { index: 0, length_m: 4.2, grossArea_m2: 10.92, openingsArea_m2: 1.673, netArea_m2: 9.247 };
