@@ -13,6 +13,7 @@ import { studioRoutes } from './features/studio/studio.routes';
 import { clientRoutes } from './features/clients/clients.routes';
 import { projectRoutes } from './features/projects/projects.routes';
 import { outboxRoutes } from './features/outbox/outbox.routes';
+import { projectRoomsExtra, roomRoutes } from './features/rooms/rooms.routes';
 
 export interface AppDeps {
   db: Db;
@@ -22,7 +23,7 @@ export interface AppDeps {
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
-  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes(), ...outboxRoutes];
+  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...outboxRoutes];
 }
 
 export function createApp(deps: AppDeps): Express {

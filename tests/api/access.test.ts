@@ -11,6 +11,8 @@ type Agent = ReturnType<typeof request.agent>;
 interface Fixture {
   clientId: string;
   projectId: string;
+  roomId: string;
+  optionId: string;
   memberId: string;
   inviteId: string;
 }
@@ -41,7 +43,21 @@ const CASES: Record<string, Case> = {
   'post /api/projects': { body: () => ({ name: 'Table project', newClient: { name: 'New one' } }) },
   'get /api/projects/:id': { params: (f) => ({ id: f.projectId }) },
   'patch /api/projects/:id': { params: (f) => ({ id: f.projectId }), body: () => ({ name: 'Renamed project' }) },
+  'get /api/projects/:projectId/rooms': { params: (f) => ({ projectId: f.projectId }) },
+  'post /api/projects/:projectId/rooms': { params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Den', shell: SQUARE }) },
+  'post /api/projects/:projectId/rooms/import': { params: (f) => ({ projectId: f.projectId }), body: () => PLAN },
+  'get /api/rooms/:id': { params: (f) => ({ id: f.roomId }) },
+  'put /api/rooms/:id': { params: (f) => ({ id: f.roomId }), body: () => ({ name: 'Taken', version: 1 }) },
+  'delete /api/rooms/:id': { params: (f) => ({ id: f.roomId }) },
+  'get /api/rooms/:id/plan-file': { params: (f) => ({ id: f.roomId }) },
+  'post /api/rooms/:id/options': { params: (f) => ({ id: f.roomId }), body: () => ({ name: 'Sneaky' }) },
+  'put /api/rooms/:id/option-order': { params: (f) => ({ id: f.roomId }), body: () => ({ optionIds: [randomUUID()] }) },
+  'put /api/options/:id': { params: (f) => ({ id: f.optionId }), body: () => ({ name: 'Taken', version: 1 }) },
+  'delete /api/options/:id': { params: (f) => ({ id: f.optionId }) },
 };
+
+const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
+const PLAN = { format: 'parlour-plan', version: 1, room: { name: 'Imported', ...SQUARE }, option: { name: 'A', pieces: [] } };
 
 const fill = (path: string, params: Record<string, string>) => path.replace(/:(\w+)/g, (_m, k: string) => params[k] ?? randomUUID());
 const call = (agent: Agent | ReturnType<typeof request>, method: string, path: string, body?: object) => {
@@ -64,7 +80,15 @@ beforeAll(async () => {
   const project = await a.agent.post('/api/projects').send({ name: 'A project', newClient: { name: 'A client' } });
   const target = await addMember(t, a.agent, 'viewer');
   const invite = await a.agent.post('/api/studio/invites').send({ email: uniqueEmail('pending'), role: 'designer' });
-  fixture = { clientId: project.body.project.client.id, projectId: project.body.project.id, memberId: target.member.id, inviteId: invite.body.invite.id };
+  const room = await a.agent.post(`/api/projects/${project.body.project.id}/rooms`).send({ name: 'Kitchen', shell: SQUARE });
+  fixture = {
+    clientId: project.body.project.client.id,
+    projectId: project.body.project.id,
+    roomId: room.body.room.id,
+    optionId: room.body.options[0].id,
+    memberId: target.member.id,
+    inviteId: invite.body.invite.id,
+  };
 });
 afterAll(() => t.close());
 
@@ -103,5 +127,8 @@ describe('route table', () => {
   it('studio A still sees its own records after all of the above', async () => {
     expect((await agents.viewer.get(`/api/projects/${fixture.projectId}`)).status).toBe(200);
     expect((await agents.viewer.get(`/api/clients/${fixture.clientId}`)).body.client.name).toBe('A client');
+    const room = await agents.viewer.get(`/api/rooms/${fixture.roomId}`);
+    expect(room.body.room).toMatchObject({ name: 'Kitchen', version: 1 });
+    expect(room.body.options).toHaveLength(1);
   });
 });

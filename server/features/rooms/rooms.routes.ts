@@ -1,0 +1,251 @@
+import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { optionDocSchema } from '../../../shared/schemas/option';
+import {
+  createOptionSchema, createRoomSchema, reorderOptionsSchema, saveOptionSchema, saveRoomSchema,
+} from '../../../shared/schemas/room-api';
+import { readPlanFile, writePlanFile } from '../../../shared/schemas/plan-file';
+import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
+import { HttpError, notFound } from '../../http/errors';
+import { getProject, touchProject } from '../projects/projects.repository';
+import type { Db } from '../../db/database';
+import {
+  deleteOption, deleteRoom, getOption, getRoom, insertOption, insertRoom, listOptions, setOptionPositions,
+  updateOptionIfVersion, updateRoomIfVersion,
+} from './rooms.repository';
+import { assertDrawableShell, fileSlug, problemsToFields, roomSummaries } from './rooms.service';
+
+const projectParam = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
+const exportQuery = z.object({ optionId: z.uuid().optional() });
+const EMPTY_DOC = optionDocSchema.parse({});
+
+async function projectOrThrow(db: Db, studioId: string, projectId: string) {
+  const project = await getProject(db, studioId, projectId);
+  if (!project) throw notFound('That project');
+  return project;
+}
+
+async function roomOrThrow(db: Db, studioId: string, id: string) {
+  const room = await getRoom(db, studioId, id);
+  if (!room) throw notFound('That room');
+  return room;
+}
+
+async function optionOrThrow(db: Db, studioId: string, id: string) {
+  const option = await getOption(db, studioId, id);
+  if (!option) throw notFound('That option');
+  return option;
+}
+
+/** A room and its first option, in one transaction. */
+async function createRoomWithOption(
+  db: Db,
+  studioId: string,
+  projectId: string,
+  room: { name: string; shell: unknown },
+  option: { name: string; note: string; doc: unknown },
+) {
+  return db.transaction().execute(async (trx) => {
+    await projectOrThrow(trx, studioId, projectId);
+    const created = await insertRoom(trx, { studioId, projectId, ...room });
+    const first = await insertOption(trx, { studioId, roomId: created.id, ...option });
+    await touchProject(trx, projectId);
+    return { room: created, options: [first] };
+  });
+}
+
+const conflict = (what: string, current: unknown) =>
+  new HttpError(409, 'conflict', `Someone saved this ${what} after you opened it. Reload theirs or keep yours.`, undefined, { current });
+
+/** Project pages list their rooms through this. */
+export const projectRoomsExtra = async (db: Db, studioId: string, projectId: string) => ({
+  rooms: await roomSummaries(db, studioId, projectId),
+});
+
+export const roomRoutes: RouteDef[] = [
+  {
+    method: 'get',
+    path: '/api/projects/:projectId/rooms',
+    access: ALL_ROLES,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { projectId } = projectParam.parse(ctx.req.params);
+      await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
+      return { rooms: await roomSummaries(ctx.deps.db, caller.studioId, projectId) };
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/projects/:projectId/rooms',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { projectId } = projectParam.parse(ctx.req.params);
+      const body = createRoomSchema.parse(ctx.req.body);
+      assertDrawableShell(body.shell);
+      const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: body.name, shell: body.shell }, { name: '', note: '', doc: EMPTY_DOC });
+      ctx.res.status(201);
+      return result;
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/projects/:projectId/rooms/import',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { projectId } = projectParam.parse(ctx.req.params);
+      const read = readPlanFile(ctx.req.body);
+      if (!read.ok) {
+        const fields = problemsToFields(read.errors.map((e) => {
+          const at = e.indexOf(': ');
+          return { path: e.slice(0, at), message: e.slice(at + 2) };
+        }));
+        throw new HttpError(400, 'invalid_plan_file', `This plan file cannot be read: ${read.errors[0]}`, fields);
+      }
+      const { room: { name, ...shell }, option } = read.plan;
+      const doc = optionDocSchema.parse({ pieces: option.pieces, finishes: option.finishes });
+      const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: name.trim() || 'Imported room', shell }, { name: option.name, note: option.note ?? '', doc });
+      ctx.res.status(201);
+      return result;
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/rooms/:id',
+    access: ALL_ROLES,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const room = await roomOrThrow(ctx.deps.db, caller.studioId, id);
+      return { room, options: await listOptions(ctx.deps.db, caller.studioId, id) };
+    },
+  },
+  {
+    method: 'put',
+    path: '/api/rooms/:id',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const body = saveRoomSchema.parse(ctx.req.body);
+      if (body.shell) assertDrawableShell(body.shell);
+      return ctx.deps.db.transaction().execute(async (trx) => {
+        const saved = await updateRoomIfVersion(trx, caller.studioId, id, body.version, { name: body.name, shell: body.shell });
+        if (!saved) throw conflict('room', await roomOrThrow(trx, caller.studioId, id));
+        await touchProject(trx, saved.projectId);
+        return { room: saved };
+      });
+    },
+  },
+  {
+    method: 'delete',
+    path: '/api/rooms/:id',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const room = await roomOrThrow(ctx.deps.db, caller.studioId, id);
+      await deleteRoom(ctx.deps.db, caller.studioId, id);
+      await touchProject(ctx.deps.db, room.projectId);
+      return undefined;
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/rooms/:id/plan-file',
+    access: ALL_ROLES,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const { optionId } = exportQuery.parse(ctx.req.query);
+      const room = await roomOrThrow(ctx.deps.db, caller.studioId, id);
+      const options = await listOptions(ctx.deps.db, caller.studioId, id);
+      const option = optionId ? options.find((o) => o.id === optionId) : options[0];
+      if (!option) throw notFound('That option');
+      const text = writePlanFile({
+        room: { name: room.name, ...room.shell },
+        option: { name: option.name || `Option ${String.fromCharCode(65 + option.position)}`, note: option.note || undefined, pieces: option.doc.pieces, finishes: option.doc.finishes },
+      });
+      ctx.res.setHeader('Content-Type', 'application/json; charset=utf-8');
+      ctx.res.setHeader('Content-Disposition', `attachment; filename="${fileSlug(room.name)}.plan.json"`);
+      ctx.res.send(text);
+      return undefined;
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/rooms/:id/options',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const body = createOptionSchema.parse(ctx.req.body);
+      const option = await ctx.deps.db.transaction().execute(async (trx) => {
+        const room = await roomOrThrow(trx, caller.studioId, id);
+        let doc = EMPTY_DOC;
+        let note = body.note;
+        if (body.fromOptionId) {
+          const from = await getOption(trx, caller.studioId, body.fromOptionId);
+          if (!from || from.roomId !== id) throw new HttpError(400, 'invalid', 'Duplicate an option of this room.', { fromOptionId: 'Not an option of this room.' });
+          doc = from.doc;
+          note = note || from.note;
+        }
+        await touchProject(trx, room.projectId);
+        return insertOption(trx, { studioId: caller.studioId, roomId: id, name: body.name, note, doc });
+      });
+      ctx.res.status(201);
+      return { option };
+    },
+  },
+  {
+    method: 'put',
+    path: '/api/rooms/:id/option-order',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const { optionIds } = reorderOptionsSchema.parse(ctx.req.body);
+      return ctx.deps.db.transaction().execute(async (trx) => {
+        await roomOrThrow(trx, caller.studioId, id);
+        const current = await listOptions(trx, caller.studioId, id);
+        const same = current.length === optionIds.length && current.every((o) => optionIds.includes(o.id));
+        if (!same) throw new HttpError(400, 'invalid', 'List every option of this room exactly once.', { optionIds: 'Must list every option of this room once.' });
+        await setOptionPositions(trx, id, optionIds);
+        return { options: await listOptions(trx, caller.studioId, id) };
+      });
+    },
+  },
+  {
+    method: 'put',
+    path: '/api/options/:id',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const body = saveOptionSchema.parse(ctx.req.body);
+      return ctx.deps.db.transaction().execute(async (trx) => {
+        const saved = await updateOptionIfVersion(trx, caller.studioId, id, body.version, { name: body.name, note: body.note, doc: body.doc });
+        if (!saved) throw conflict('option', await optionOrThrow(trx, caller.studioId, id));
+        return { option: saved };
+      });
+    },
+  },
+  {
+    method: 'delete',
+    path: '/api/options/:id',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      await ctx.deps.db.transaction().execute(async (trx) => {
+        const option = await optionOrThrow(trx, caller.studioId, id);
+        const siblings = await listOptions(trx, caller.studioId, option.roomId);
+        if (siblings.length <= 1) throw new HttpError(409, 'last_option', 'A room keeps at least one option.');
+        await deleteOption(trx, id);
+        await setOptionPositions(trx, option.roomId, siblings.filter((o) => o.id !== id).map((o) => o.id));
+      });
+      return undefined;
+    },
+  },
+];
