@@ -51,6 +51,14 @@ describe('buildRoomScene', () => {
     }
   });
 
+  it('faces square-cut joins outward at thickness steps and sharp corners', () => {
+    const stepped = scene({ outline: [[0, 0], [2000, 0], [4000, 0], [4000, 3000], [0, 3000]], wallThicknesses: [100, 250], openings: [] });
+    const sharp = scene({ outline: [[0, 0], [5000, 0], [0, 300]], openings: [] });
+    for (const data of [stepped, sharp]) for (const mesh of sceneMeshes(data)) expect(misfacedTriangles(mesh)).toBe(0);
+    // the step face (150 mm × 2.6 m) is part of wall 1's outside
+    expect(area(stepped.walls[1].outside)).toBeCloseTo(0.15 * 2.6 + 2.1 * 2.6, 4);
+  });
+
   it('lays the floor over the outline at plan x → scene x, plan y → scene z, with uvs in metres', () => {
     const data = scene();
     expect(area(data.floor)).toBeCloseTo(15.12, 4);

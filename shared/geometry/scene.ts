@@ -1,7 +1,8 @@
 import type { Piece } from '../schemas/option';
 import type { Opening, RoomShell } from '../schemas/room';
 import { placeOpening, doorSwing, type OpeningPlacement } from './openings';
-import { triangulatePolygon } from './polygon';
+import { areaMm2, triangulatePolygon } from './polygon';
+import { POINT_TOLERANCE_MM } from './tolerances';
 import { layoutShellWalls, type WallLayout } from './walls';
 import { addScaled, directionDeg, type Vec2 } from './vec';
 
@@ -295,7 +296,9 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
       [[0, 0], [widthM, 0], [widthM, h], [0, h]],
       sceneDirection(join.normal),
     );
-    writeCap(top, [join.corner, join.from, join.to], heightMm, UP);
+    // A step between collinear walls has no top to fill; a cut corner leaves a triangle.
+    const gap: Vec2[] = [join.corner, join.from, join.to];
+    if (areaMm2(gap) > POINT_TOLERANCE_MM * POINT_TOLERANCE_MM) writeCap(top, gap, heightMm, UP);
   }
 
   const reveals = new MeshWriter();

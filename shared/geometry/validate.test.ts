@@ -49,6 +49,12 @@ describe('validateRoomShell', () => {
     expect(problems({ openings: [a, b] })).toEqual([{ path: 'room.openings[1].offset', message: 'overlaps w1 (openings[0]) on wall 0' }]);
     expect(problems({ openings: [a, { ...b, wall: 1 }] })).toEqual([]);
     expect(problems({ openings: [a, { ...b, offset: 1200 }] })).toEqual([]);
+    const wide = { id: 'p1', type: 'passage' as const, wall: 1, offset: 100, width: 2500, height: 2000 };
+    const small = (id: string, offset: number) => ({ id, type: 'window' as const, wall: 1, offset, width: 300, height: 500, sill: 900 });
+    expect(problems({ openings: [wide, small('s1', 500), small('s2', 1500)] }).map((p) => p.message)).toEqual([
+      'overlaps p1 (openings[0]) on wall 1',
+      'overlaps p1 (openings[0]) on wall 1',
+    ]);
   });
 
   it('refuses a window head above the wall and a door taller than the wall', () => {

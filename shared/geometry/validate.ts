@@ -77,8 +77,10 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
   });
   for (const [wall, list] of byWall) {
     const sorted = [...list].sort((a, b) => a.from - b.from);
+    // Compare each opening with the one reaching furthest so far, so a wide opening that swallows
+    // several small ones is reported against each of them.
+    let before = sorted[0];
     for (let k = 1; k < sorted.length; k++) {
-      const before = sorted[k - 1];
       const here = sorted[k];
       if (before.to - here.from > OPENING_OVERLAP_TOLERANCE_MM) {
         problems.push({
@@ -86,6 +88,7 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
           message: `overlaps ${shell.openings[before.index].id} (openings[${before.index}]) on wall ${wall}`,
         });
       }
+      if (here.to > before.to) before = here;
     }
   }
   return problems;
