@@ -90,6 +90,13 @@ describe('formatLength', () => {
     expect(formatLength(165.5 * 25.4, 'in')).toBe(`165 1/2"`);
   });
 
+  it('keeps the minus sign only when something is left after rounding', () => {
+    expect(formatLength(-4200, 'cm')).toBe('-420 cm');
+    expect(formatLength(-9.5 * 25.4, 'ftin')).toBe(`-9 1/2"`);
+    expect(formatLength(-0.01, 'ftin')).toBe('0"');
+    expect(formatLength(-0.2, 'm')).toBe('0.00 m');
+  });
+
   it('round-trips through parseLength', () => {
     for (const unit of ['mm', 'cm', 'm', 'in', 'ftin'] as const) {
       for (const mm of [4200, 3048, 812.8, 2438.4]) {

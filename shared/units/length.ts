@@ -153,9 +153,9 @@ export interface FormatLengthOptions {
   inchDenominator?: 2 | 4 | 8 | 16;
 }
 
-function formatFractionalInches(totalEighths: number, denominator: number): string {
-  const whole = Math.floor(totalEighths / denominator);
-  let numerator = totalEighths - whole * denominator;
+function formatFractionalInches(steps: number, denominator: number): string {
+  const whole = Math.floor(steps / denominator);
+  let numerator = steps - whole * denominator;
   let reduced = denominator;
   while (numerator > 0 && numerator % 2 === 0) {
     numerator /= 2;
@@ -171,26 +171,29 @@ function trimDecimals(value: number, digits: number): string {
 
 /** Writes millimetres for a person in `unit`: "420 cm", "4.20 m", "4200 mm", 13' 9 1/2", 165 1/2". */
 export function formatLength(mm: number, unit: LengthUnit = DEFAULT_LENGTH_UNIT, options: FormatLengthOptions = {}): string {
-  const sign = mm < 0 ? '-' : '';
-  const magnitude = Math.abs(mm);
-  const denominator = options.inchDenominator ?? 8;
+  const text = formatMagnitude(Math.abs(mm), unit, options.inchDenominator ?? 8);
+  // A tiny negative value that rounds to nothing is printed without a minus sign.
+  return mm < 0 && /[1-9]/.test(text) ? `-${text}` : text;
+}
+
+function formatMagnitude(magnitude: number, unit: LengthUnit, denominator: number): string {
   switch (unit) {
     case 'mm':
-      return `${sign}${trimDecimals(magnitude, 0)} mm`;
+      return `${trimDecimals(magnitude, 0)} mm`;
     case 'cm':
-      return `${sign}${trimDecimals(magnitude / 10, 1)} cm`;
+      return `${trimDecimals(magnitude / 10, 1)} cm`;
     case 'm':
-      return `${sign}${(magnitude / 1000).toFixed(2)} m`;
+      return `${(magnitude / 1000).toFixed(2)} m`;
     case 'in': {
       const steps = Math.round((magnitude / MM_PER_INCH) * denominator);
-      return `${sign}${formatFractionalInches(steps, denominator)}`;
+      return formatFractionalInches(steps, denominator);
     }
     case 'ftin': {
       const steps = Math.round((magnitude / MM_PER_INCH) * denominator);
       const stepsPerFoot = 12 * denominator;
       const feet = Math.floor(steps / stepsPerFoot);
       const inches = formatFractionalInches(steps - feet * stepsPerFoot, denominator);
-      return feet === 0 ? `${sign}${inches}` : `${sign}${feet}' ${inches}`;
+      return feet === 0 ? inches : `${feet}' ${inches}`;
     }
   }
 }
