@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Door } from '../schemas/room';
-import { doorSwing, placeOpening } from './openings';
+import { doorSwing, placeOpening, placeShellOpenings } from './openings';
 import { layoutWalls } from './walls';
 
 const walls = layoutWalls([[0, 0], [4200, 0], [4200, 3600], [0, 3600]], [100, 100, 100, 100]);
@@ -50,5 +50,19 @@ describe('doorSwing', () => {
 
   it('sweeps the other way for a start hinge swinging out', () => {
     expect(doorSwing(walls[0], { ...door, swing: 'out' }).sweepDeg).toBe(-90);
+  });
+});
+
+describe('placeShellOpenings', () => {
+  it('places every opening of a shell and swings its doors, honouring per-wall thickness', () => {
+    const { placements, swings } = placeShellOpenings({
+      outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
+      wallThickness: 100,
+      wallThicknesses: [250],
+      openings: [door, { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 }, { ...door, id: 'lost', wall: 9 }],
+    });
+    expect(placements.map((p) => p.id)).toEqual(['d1', 'p1']);
+    expect(placements[0].outsideStart).toEqual([300, -250]);
+    expect(swings.map((s) => s.openingId)).toEqual(['d1']);
   });
 });

@@ -1,5 +1,5 @@
-import type { Door, Opening } from '../schemas/room';
-import type { WallLayout } from './walls';
+import type { Door, Opening, RoomShell } from '../schemas/room';
+import { layoutShellWalls, type WallLayout } from './walls';
 import { addScaled, angleDegOf, type Vec2 } from './vec';
 
 /** An opening placed on its wall, in plan mm. "Start" is the edge nearer the wall's start corner. */
@@ -89,4 +89,21 @@ export function doorSwing(wall: WallLayout, door: Door): DoorSwing {
     openTipMm: addScaled(hingeMm, open, door.width),
     side: door.swing,
   };
+}
+
+/** Every opening of a room shell placed on its wall, and every door's swing, in plan mm (openings on missing walls are left out). */
+export function placeShellOpenings(shell: Pick<RoomShell, 'outline' | 'wallThickness' | 'wallThicknesses' | 'openings'>): {
+  placements: OpeningPlacement[];
+  swings: DoorSwing[];
+} {
+  const walls = layoutShellWalls(shell);
+  const placements: OpeningPlacement[] = [];
+  const swings: DoorSwing[] = [];
+  for (const opening of shell.openings) {
+    const wall = walls[opening.wall];
+    if (!wall) continue;
+    placements.push(placeOpening(wall, opening));
+    if (opening.type === 'door') swings.push(doorSwing(wall, opening));
+  }
+  return { placements, swings };
 }
