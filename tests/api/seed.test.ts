@@ -1,0 +1,34 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { createTestApp, type TestApp } from '../setup/app';
+import { DEMO_SIGN_IN, seedDemo } from '../../server/cli/seed';
+
+let t: TestApp;
+beforeAll(() => {
+  t = createTestApp();
+});
+afterAll(() => t.close());
+
+describe('demo data', () => {
+  it('seeds the demo studio once; the demo owner sees the two-room flat with two options per room', async () => {
+    const first = await seedDemo(t.db);
+    const second = await seedDemo(t.db);
+    expect(first || second).toBe(true);
+    expect(second).toBe(false);
+    const agent = request.agent(t.app);
+    expect((await agent.post('/api/auth/sign-in').send(DEMO_SIGN_IN)).status).toBe(200);
+    const projects = (await agent.get('/api/projects')).body.projects;
+    const flat = projects.find((p: { name: string }) => p.name === 'Canal Row flat');
+    expect(flat.roomCount).toBe(2);
+    const rooms = (await agent.get(`/api/projects/${flat.id}/rooms`)).body.rooms;
+    expect(rooms.map((r: { name: string }) => r.name)).toEqual(['L-shaped living room', 'Bedroom']);
+    for (const r of rooms) {
+      const detail = (await agent.get(`/api/rooms/${r.id}`)).body;
+      expect(detail.options).toHaveLength(2);
+      expect(detail.options[0].doc.pieces.length).toBeGreaterThan(3);
+      expect(detail.options[1].doc.pieces).not.toEqual(detail.options[0].doc.pieces);
+    }
+    // The L-shape (6.2 × 3.4 m plus 3.8 × 2.2 m) is 21.08 + 8.36 = 29.44 m² (derived).
+    expect(rooms[0].floorAreaM2).toBeCloseTo(29.44, 2);
+  });
+});
