@@ -22,7 +22,7 @@ const FLAGS: Record<string, FlagRule> = {
 type ParsedArgs = { ok: true; file: string; options: Partial<TakeoffOptions> } | { ok: false; message: string };
 
 /** Command-line words to a file path and take-off options (coverage m²/L, waste %, walkway mm). */
-export function parseAnalyzeArgs(args: readonly string[]): ParsedArgs {
+function parseAnalyzeArgs(args: readonly string[]): ParsedArgs {
   const options: Partial<TakeoffOptions> = {};
   let file: string | null = null;
   for (let i = 0; i < args.length; i++) {
