@@ -188,14 +188,13 @@ describe('buildRoomScene', () => {
     expect(area(reversed.floor)).toBeCloseTo(15.12, 4);
   });
 
-  it('builds a typical room (8 walls, 6 openings, 40 pieces) quickly', () => {
+  // Speed is measured by `npm run bench`, never by a timed test; this checks the benchmark's room is what it claims.
+  it('builds the benchmark room: 8 walls, 6 openings, 40 pieces', () => {
     const { shell, option } = typicalRoom();
-    buildRoomScene(shell, option);
-    const runs = 50;
-    const started = performance.now();
-    for (let i = 0; i < runs; i++) buildRoomScene(shell, option);
-    const msPerRoom = (performance.now() - started) / runs;
-    // the target is 2 ms; the test allows slack for a loaded machine and still catches a real slowdown
-    expect(msPerRoom).toBeLessThan(10);
+    const scene = buildRoomScene(shell, option);
+    expect(scene.walls).toHaveLength(8);
+    expect(shell.openings).toHaveLength(6);
+    expect(scene.pieces).toHaveLength(40);
+    expect(scene.doorLeaves.length + scene.windows.length).toBe(shell.openings.filter((o) => o.type !== 'passage').length);
   });
 });
