@@ -1,0 +1,72 @@
+import * as THREE from 'three';
+
+// Flat colours for now; later finishes swap in photo textures, whose uvs are already in metres.
+
+/** Parlour's accent, used to mark the selected piece. */
+export const SELECTION_COLOUR = '#2f6b5c';
+/** How far the selected piece's colour moves towards the accent (0 none, 1 all). */
+export const SELECTION_TINT = 0.55;
+/** Calm neutrals for pieces without a colour, so what the client owns and what is proposed differ a little. */
+export const PIECE_COLOURS = { existing: '#a99d8f', new: '#d8cdbd' } as const;
+/** Opacity of a wall between the eye and the room in the Overview. */
+export const FADED_WALL_OPACITY = 0.14;
+export const SCENE_BACKGROUND = '#f7f3ec';
+
+export interface SceneMaterials {
+  wall: THREE.MeshStandardMaterial;
+  wallFaded: THREE.MeshStandardMaterial;
+  floor: THREE.MeshStandardMaterial;
+  ceiling: THREE.MeshStandardMaterial;
+  doorLeaf: THREE.MeshStandardMaterial;
+  windowFrame: THREE.MeshStandardMaterial;
+  windowFrameFaded: THREE.MeshStandardMaterial;
+  glass: THREE.MeshStandardMaterial;
+  piece: THREE.MeshStandardMaterial;
+  selectionEdge: THREE.LineBasicMaterial;
+}
+
+function faded(material: THREE.MeshStandardMaterial): THREE.MeshStandardMaterial {
+  const copy = material.clone();
+  copy.transparent = true;
+  copy.opacity = FADED_WALL_OPACITY;
+  // Without this a faded wall would still hide whatever is drawn after it.
+  copy.depthWrite = false;
+  return copy;
+}
+
+/** One set of materials for a view; every mesh of the same kind shares one. Dispose with disposeSceneMaterials. */
+export function createSceneMaterials(): SceneMaterials {
+  const wall = new THREE.MeshStandardMaterial({ color: '#f1ece4', roughness: 0.9, metalness: 0 });
+  const windowFrame = new THREE.MeshStandardMaterial({ color: '#f4f1ea', roughness: 0.6, metalness: 0 });
+  return {
+    wall,
+    wallFaded: faded(wall),
+    floor: new THREE.MeshStandardMaterial({ color: '#c8a983', roughness: 0.8, metalness: 0 }),
+    ceiling: new THREE.MeshStandardMaterial({ color: '#f6f3ee', roughness: 0.95, metalness: 0 }),
+    doorLeaf: new THREE.MeshStandardMaterial({ color: '#e8e1d6', roughness: 0.7, metalness: 0 }),
+    windowFrame,
+    windowFrameFaded: faded(windowFrame),
+    glass: new THREE.MeshStandardMaterial({
+      color: '#cfe3ec',
+      roughness: 0.05,
+      metalness: 0,
+      transparent: true,
+      opacity: 0.28,
+      depthWrite: false,
+    }),
+    piece: new THREE.MeshStandardMaterial({
+      vertexColors: true,
+      roughness: 0.85,
+      metalness: 0,
+      // Pushes the faces back a little so the selection edges drawn on them never flicker.
+      polygonOffset: true,
+      polygonOffsetFactor: 1,
+      polygonOffsetUnits: 1,
+    }),
+    selectionEdge: new THREE.LineBasicMaterial({ color: SELECTION_COLOUR }),
+  };
+}
+
+export function disposeSceneMaterials(materials: SceneMaterials): void {
+  for (const material of Object.values(materials)) material.dispose();
+}

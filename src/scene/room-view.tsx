@@ -1,0 +1,197 @@
+import { Canvas, useFrame, useThree } from '@react-three/fiber';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import * as THREE from 'three';
+import { buildRoomScene, type PieceSceneData } from '../../shared/geometry/scene';
+import type { Piece } from '../../shared/schemas/option';
+import type { RoomShell } from '../../shared/schemas/room';
+import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND, type SceneMaterials } from './materials';
+import { OverviewControls } from './overview-controls';
+import { RoomPieces } from './room-pieces';
+import { RoomShellMeshes } from './room-shell';
+import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
+import { SceneLights } from './scene-lights';
+import { shellParts, type ShellParts } from './shell-parts';
+import { applyWallFade } from './wall-fade';
+import { wallsFacingEye } from './wall-facing';
+
+export interface RoomViewProps {
+  shell: RoomShell;
+  /** Only placed pieces are drawn. */
+  pieces: Piece[];
+  /** Drawn tinted and outlined in the accent. */
+  selectedPieceId?: string | null;
+  onPieceClick?: (id: string) => void;
+  /** Default true: walls between the eye and the room centre fade so the room reads like a model. */
+  fadeNearWalls?: boolean;
+  /** Sizes the view; without one it fills its parent. */
+  className?: string;
+  /** Accessible name of the view's region. */
+  label?: string;
+}
+
+const FIELD_OF_VIEW_DEG = 40;
+const WEBGL_MESSAGE = '3D preview needs WebGL.';
+
+/**
+ * The room in 3D (Overview): floor, walls with their openings, door leaves, windows and placed
+ * pieces, lit softly and drawn only when something changes. The host element carries
+ * `data-draw-calls`, `data-triangles`, `data-frames` and `data-faded-walls` after each frame so
+ * browser tests can read what was drawn.
+ */
+export default function RoomView({
+  shell,
+  pieces,
+  selectedPieceId = null,
+  onPieceClick,
+  fadeNearWalls = true,
+  className,
+  label = 'Room in 3D',
+}: RoomViewProps) {
+  const host = useRef<HTMLDivElement>(null);
+  const [webgl] = useState(browserHasWebGL);
+  const fallback = <WebGLMessage />;
+  return (
+    <div ref={host} role="region" aria-label={label} data-testid="room-view" className={`relative ${className ?? 'h-full w-full'}`}>
+      {webgl ? (
+        <SceneErrorBoundary fallback={fallback}>
+          <Canvas
+            frameloop="demand"
+            shadows="percentage"
+            dpr={[1, 2]}
+            // Neutral tone mapping keeps a lit paint close to its swatch; the output is sRGB.
+            gl={{ preserveDrawingBuffer: true, antialias: true, toneMapping: THREE.NeutralToneMapping, outputColorSpace: THREE.SRGBColorSpace }}
+            camera={{ fov: FIELD_OF_VIEW_DEG, near: 0.05, far: 200, position: [0, 8, 8] }}
+            fallback={fallback}
+          >
+            <color attach="background" args={[SCENE_BACKGROUND]} />
+            <RoomScene
+              shell={shell}
+              pieces={pieces}
+              selectedPieceId={selectedPieceId}
+              onPieceClick={onPieceClick}
+              fadeNearWalls={fadeNearWalls}
+              host={host}
+            />
+          </Canvas>
+        </SceneErrorBoundary>
+      ) : (
+        fallback
+      )}
+    </div>
+  );
+}
+
+function WebGLMessage() {
+  return (
+    <div className="flex h-full w-full items-center justify-center bg-sand p-4 text-sm text-ink-soft">
+      <p>{WEBGL_MESSAGE}</p>
+    </div>
+  );
+}
+
+/** The same value while its JSON stays the same, so memos key on content, not on object identity. */
+function useStableValue<T>(value: T): T {
+  const key = JSON.stringify(value);
+  return useMemo(() => JSON.parse(key) as T, [key]);
+}
+
+// A shell mid-edit can break a rule the geometry relies on; the view then draws nothing for it
+// rather than taking the page down, and the editor's checks say what is wrong.
+function tryBuild<T>(what: string, build: () => T): T | null {
+  try {
+    return build();
+  } catch (error) {
+    console.warn(`3D view could not build the ${what}:`, error);
+    return null;
+  }
+}
+
+interface RoomSceneProps {
+  shell: RoomShell;
+  pieces: Piece[];
+  selectedPieceId: string | null;
+  onPieceClick?: (id: string) => void;
+  fadeNearWalls: boolean;
+  host: React.RefObject<HTMLDivElement | null>;
+}
+
+function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPieceClick, fadeNearWalls, host }: RoomSceneProps) {
+  const shell = useStableValue(shellProp);
+  const pieces = useStableValue(piecesProp.filter((p) => p.placed));
+  const invalidate = useThree((state) => state.invalidate);
+
+  const materials = useMemo(createSceneMaterials, []);
+  useEffect(() => () => disposeSceneMaterials(materials), [materials]);
+
+  const parts = useMemo(() => tryBuild('room', () => shellParts(buildRoomScene(shell, { pieces: [] }), shell)), [shell]);
+  const pieceScene = useMemo<readonly PieceSceneData[]>(
+    () => tryBuild('pieces', () => buildRoomScene(shell, { pieces }).pieces) ?? [],
+    [shell, pieces],
+  );
+
+  const walls = useRef<THREE.Group>(null);
+  const ceiling = useRef<THREE.Mesh>(null);
+  const lastCamera = useRef<THREE.Camera | null>(null);
+
+  // Runs on every camera move: mutates meshes and one data attribute, never React state.
+  const updateView = useCallback(
+    (camera: THREE.Camera) => {
+      lastCamera.current = camera;
+      if (!parts) return;
+      updateWallFade(parts, camera, fadeNearWalls, walls.current, ceiling.current, materials, host.current);
+    },
+    [parts, fadeNearWalls, materials, host],
+  );
+
+  // New wall meshes mount solid, and the fade setting can change without the camera moving.
+  useLayoutEffect(() => {
+    if (lastCamera.current) updateView(lastCamera.current);
+    invalidate();
+  }, [updateView, invalidate]);
+
+  if (!parts) return <RenderAndReport host={host} />;
+  return (
+    <>
+      <SceneLights bounds={parts.bounds} />
+      <RoomShellMeshes parts={parts} materials={materials} wallsRef={walls} ceilingRef={ceiling} />
+      <RoomPieces pieceScene={pieceScene} pieces={pieces} selectedPieceId={selectedPieceId} materials={materials} onPieceClick={onPieceClick} />
+      <OverviewControls bounds={parts.bounds} onView={updateView} />
+      <RenderAndReport host={host} />
+    </>
+  );
+}
+
+function updateWallFade(
+  parts: ShellParts,
+  camera: THREE.Camera,
+  fadeNearWalls: boolean,
+  walls: THREE.Group | null,
+  ceiling: THREE.Mesh | null,
+  materials: SceneMaterials,
+  host: HTMLElement | null,
+): void {
+  const { min, max } = parts.bounds;
+  const centre: [number, number, number] = [(min[0] + max[0]) / 2, (min[1] + max[1]) / 2, (min[2] + max[2]) / 2];
+  const eye: [number, number, number] = [camera.position.x, camera.position.y, camera.position.z];
+  const faded = fadeNearWalls ? wallsFacingEye(parts.walls, eye, centre) : [];
+  if (walls) applyWallFade(walls, new Set(faded), materials);
+  // Seen from above the ceiling faces away and only costs a draw call; from below it closes the room.
+  if (ceiling) ceiling.visible = eye[1] < max[1];
+  if (host) host.dataset.fadedWalls = faded.join(',');
+}
+
+// Takes over drawing (a frame callback with priority above zero) so renderer.info can be read
+// right after the frame it describes, and publishes it on the host for browser tests.
+function RenderAndReport({ host }: { host: React.RefObject<HTMLDivElement | null> }) {
+  const frames = useRef(0);
+  useFrame(({ gl, scene, camera }) => {
+    gl.render(scene, camera);
+    frames.current += 1;
+    const element = host.current;
+    if (!element) return;
+    element.dataset.drawCalls = String(gl.info.render.calls);
+    element.dataset.triangles = String(gl.info.render.triangles);
+    element.dataset.frames = String(frames.current);
+  }, 1);
+  return null;
+}
