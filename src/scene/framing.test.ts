@@ -1,0 +1,42 @@
+import * as THREE from 'three';
+import { describe, expect, it } from 'vitest';
+import { buildRoomScene, type Bounds3 } from '../../shared/geometry/scene';
+import { overviewFrame } from './framing';
+import { exampleShell, lShapedShell } from './test-rooms';
+
+function cornersOf(bounds: Bounds3): THREE.Vector3[] {
+  const corners: THREE.Vector3[] = [];
+  for (const x of [bounds.min[0], bounds.max[0]])
+    for (const y of [bounds.min[1], bounds.max[1]])
+      for (const z of [bounds.min[2], bounds.max[2]]) corners.push(new THREE.Vector3(x, y, z));
+  return corners;
+}
+
+describe('overviewFrame', () => {
+  it.each([
+    ['the example room, wide view', exampleShell, 1280 / 800],
+    ['the example room, tall view', exampleShell, 0.6],
+    ['the L-shaped room, wide view', lShapedShell, 16 / 9],
+  ] as const)('keeps every corner of %s inside the picture, seen from above', (_, shell, aspect) => {
+    const bounds = buildRoomScene(shell, { pieces: [] }).bounds;
+    const frame = overviewFrame(bounds, 40, aspect);
+    const camera = new THREE.PerspectiveCamera(40, aspect, frame.near, frame.far);
+    camera.position.set(...frame.position);
+    camera.lookAt(...frame.target);
+    camera.updateMatrixWorld();
+    expect(frame.position[1]).toBeGreaterThan(bounds.max[1]);
+    for (const corner of cornersOf(bounds)) {
+      const ndc = corner.clone().project(camera);
+      expect(Math.abs(ndc.x)).toBeLessThan(1);
+      expect(Math.abs(ndc.y)).toBeLessThan(1);
+      expect(ndc.z).toBeGreaterThan(-1);
+      expect(ndc.z).toBeLessThan(1);
+    }
+  });
+
+  it('looks at the middle of the room', () => {
+    const frame = overviewFrame(buildRoomScene(exampleShell, { pieces: [] }).bounds, 40, 1.6);
+    expect(frame.target[0]).toBeCloseTo(2.1, 1);
+    expect(frame.target[2]).toBeCloseTo(1.8, 1);
+  });
+});

@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { buildRoomScene } from '../../shared/geometry/scene';
+import { shellParts } from './shell-parts';
+import { exampleShell, lShapedShell } from './test-rooms';
+
+describe('shellParts', () => {
+  it('puts each window with the wall it is in, so it fades with that wall', () => {
+    const parts = shellParts(buildRoomScene(lShapedShell, { pieces: [] }), lShapedShell);
+    const withWindows = parts.walls.filter((w) => w.frames.indices.length > 0).map((w) => w.index);
+    expect(withWindows).toEqual([0, 1]);
+    expect(parts.walls.filter((w) => w.glass.indices.length > 0).map((w) => w.index)).toEqual([0, 1]);
+  });
+
+  it('keeps every triangle of the outside face, top and reveals in the wall body', () => {
+    const scene = buildRoomScene(exampleShell, { pieces: [] });
+    const parts = shellParts(scene, exampleShell);
+    scene.walls.forEach((wall, i) => {
+      expect(parts.walls[i].body.indices.length).toBe(wall.outside.indices.length + wall.top.indices.length + wall.reveals.indices.length);
+    });
+    expect(parts.doorLeaves.indices.length).toBe(scene.doorLeaves[0].mesh.indices.length);
+  });
+});
