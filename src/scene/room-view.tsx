@@ -35,8 +35,8 @@ const WEBGL_MESSAGE = '3D preview needs WebGL.';
 /**
  * The room in 3D (Overview): floor, walls with their openings, door leaves, windows and placed
  * pieces, lit softly and drawn only when something changes. The host element carries
- * `data-draw-calls`, `data-triangles`, `data-frames` and `data-faded-walls` after each frame so
- * browser tests can read what was drawn.
+ * `data-draw-calls`, `data-triangles`, `data-geometries` (live on the GPU), `data-frames` and
+ * `data-faded-walls` after each frame so browser tests can read what was drawn.
  */
 export default function RoomView({
   shell,
@@ -191,6 +191,7 @@ function RenderAndReport({ host }: { host: React.RefObject<HTMLDivElement | null
     if (!element) return;
     element.dataset.drawCalls = String(gl.info.render.calls);
     element.dataset.triangles = String(gl.info.render.triangles);
+    element.dataset.geometries = String(gl.info.memory.geometries);
     element.dataset.frames = String(frames.current);
   }, 1);
   return null;
