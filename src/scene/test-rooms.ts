@@ -1,19 +1,11 @@
 import { roomShellSchema, type RoomShell } from '../../shared/schemas/room';
 import { pieceSchema, type Piece } from '../../shared/schemas/option';
+import { designExampleRoom } from '../../tests/reference/rooms';
 
 // Rooms shared by this folder's tests: the design's example room and an L-shaped one, in plan mm.
 
-/** 4200 × 3600 mm, door on wall 0, window on wall 2, passage on wall 3. */
-export const exampleShell: RoomShell = roomShellSchema.parse({
-  wallHeight: 2600,
-  wallThickness: 100,
-  outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
-  openings: [
-    { id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' },
-    { id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 },
-    { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 },
-  ],
-});
+/** The design's example room: 4200 × 3600 mm, door on wall 0, window on wall 2, passage on wall 3. */
+export const exampleShell: RoomShell = roomShellSchema.parse(designExampleRoom);
 
 /** An L: the bottom-right quarter is cut away, so walls 2 and 3 are the cut's inner corner. */
 export const lShapedShell: RoomShell = roomShellSchema.parse({
