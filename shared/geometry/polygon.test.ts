@@ -65,6 +65,14 @@ describe('triangulatePolygon', () => {
     expect(triangleArea(withMidpoint, triangulatePolygon(withMidpoint))).toBeCloseTo(12_000_000, 3);
   });
 
+  it('keeps a bump-out whose corners line up with the long wall inside the room', () => {
+    // 7.0 × 4.5 m plus a 2.6 × 1.5 m bay: 31.5 + 3.9 = 35.4 m² (derived).
+    const bay: Vec2[] = [[0, 0], [7000, 0], [7000, 4500], [4800, 4500], [4800, 6000], [2200, 6000], [2200, 4500], [0, 4500]];
+    for (const shape of [bay, [...bay].reverse()]) {
+      expect(triangleArea(shape, triangulatePolygon(shape))).toBeCloseTo(35_400_000, 0);
+    }
+  });
+
   it('covers a U shape', () => {
     const u: Vec2[] = [[0, 0], [1000, 0], [1000, 2000], [2000, 2000], [2000, 0], [3000, 0], [3000, 3000], [0, 3000]];
     expect(triangleArea(u, triangulatePolygon(u))).toBeCloseTo(areaMm2(u), 3);

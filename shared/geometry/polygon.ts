@@ -128,11 +128,14 @@ export function boundsMm(points: readonly Vec2[]): Bounds2 {
   return { minX, minY, maxX, maxY };
 }
 
-function pointInTriangle(p: Vec2, a: Vec2, b: Vec2, c: Vec2): boolean {
+// Inside or on the edge: a corner lying exactly on a candidate ear's diagonal (a bump-out whose
+// corners line up with a long wall) must block that ear, or the ear would cut outside the room.
+function pointInOrOnTriangle(p: Vec2, a: Vec2, b: Vec2, c: Vec2): boolean {
+  if ((p[0] === a[0] && p[1] === a[1]) || (p[0] === b[0] && p[1] === b[1]) || (p[0] === c[0] && p[1] === c[1])) return false;
   const d1 = cross(sub(b, a), sub(p, a));
   const d2 = cross(sub(c, b), sub(p, b));
   const d3 = cross(sub(a, c), sub(p, c));
-  return d1 > 0 && d2 > 0 && d3 > 0;
+  return d1 >= 0 && d2 >= 0 && d3 >= 0;
 }
 
 /**
@@ -169,7 +172,7 @@ export function triangulatePolygon(points: readonly Vec2[]): number[] {
       let blocked = false;
       for (const other of remaining) {
         if (other === ia || other === ib || other === ic) continue;
-        if (pointInTriangle(at(other), a, b, c)) {
+        if (pointInOrOnTriangle(at(other), a, b, c)) {
           blocked = true;
           break;
         }
