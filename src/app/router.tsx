@@ -2,6 +2,7 @@ import { createBrowserRouter, Navigate } from 'react-router';
 import { DesignerLayout, NotFoundPage } from './layout';
 import { ProjectsRoute } from './routes/projects-route';
 import { ProjectRoute } from './routes/project-route';
+import { RoomRoute } from './routes/room-route';
 import { SignInPage } from '../features/auth/components/sign-in-page';
 import { SignUpPage } from '../features/auth/components/sign-up-page';
 import { AcceptInvitePage } from '../features/auth/components/accept-invite-page';
@@ -24,6 +25,10 @@ export const router = createBrowserRouter([
       { path: '/clients', element: <ClientsPage /> },
       { path: '/studio', element: <StudioPage /> },
     ],
+  },
+  {
+    element: <DesignerLayout wide />,
+    children: [{ path: '/projects/:projectId/rooms/:roomId', element: <RoomRoute /> }],
   },
   { path: '*', element: <NotFoundPage /> },
 ]);
