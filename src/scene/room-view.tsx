@@ -51,7 +51,7 @@ export default function RoomView({
   const [webgl] = useState(browserHasWebGL);
   const fallback = <WebGLMessage />;
   return (
-    <div ref={host} role="region" aria-label={label} data-testid="room-view" className={`relative ${className ?? 'h-full w-full'}`}>
+    <div ref={host} role="region" aria-label={label} data-testid="room-view" className={className ?? 'relative h-full w-full'}>
       {webgl ? (
         <SceneErrorBoundary fallback={fallback}>
           <Canvas

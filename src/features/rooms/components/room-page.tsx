@@ -29,7 +29,7 @@ export function RoomPage({ projectId, roomId }: { projectId: string; roomId: str
   const option = options.find((o) => o.id === optionId) ?? options[0];
 
   return (
-    <div className="flex min-h-[calc(100vh-4rem)] flex-col">
+    <div className="flex h-[calc(100vh-4rem)] min-h-[560px] flex-col">
       <div className="flex flex-wrap items-center gap-4 border-b border-line px-6 py-3">
         <div className="min-w-0">
           <Link to={`/projects/${projectId}`} className="text-sm text-ink-faint hover:text-ink hover:underline">Back to the project</Link>
@@ -54,8 +54,8 @@ export function RoomPage({ projectId, roomId }: { projectId: string; roomId: str
           </a>
         )}
       </div>
-      <div className="grid flex-1 lg:grid-cols-[22rem_1fr]">
-        <aside className="flex flex-col gap-6 border-r border-line p-6">
+      <div className="grid min-h-0 flex-1 lg:grid-cols-[22rem_1fr]">
+        <aside className="flex flex-col gap-6 overflow-y-auto border-r border-line p-6">
           <Card title="Room" className="p-5">
             <RoomSettings room={r} readOnly={!canEdit} />
           </Card>
@@ -64,7 +64,7 @@ export function RoomPage({ projectId, roomId }: { projectId: string; roomId: str
           </Card>
           {option?.note && <Card title="About this option" className="p-5"><p className="text-ink-soft">{option.note}</p></Card>}
         </aside>
-        <section aria-label="3D preview" className="relative min-h-[480px] bg-sand">
+        <section aria-label="3D preview" className="relative min-h-[360px] bg-sand">
           <Suspense fallback={<Spinner label="Loading the 3D preview…" />}>
             <RoomView shell={r.shell} pieces={option?.doc.pieces ?? []} className="absolute inset-0" label={`${r.name} in 3D`} />
           </Suspense>

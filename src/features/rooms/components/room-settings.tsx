@@ -25,14 +25,15 @@ export function RoomSettings({ room, readOnly }: { room: RoomRecord; readOnly: b
 
   const dirty = draft.name !== room.name || draft.wallHeight !== room.shell.wallHeight || draft.wallThickness !== room.shell.wallThickness;
 
-  const send = (version: number, base: RoomRecord) => {
-    if (!draft.wallHeight || !draft.wallThickness) return;
+  const send = (version: number, base: RoomRecord, values: Draft = draft) => {
+    if (!values.wallHeight || !values.wallThickness) return;
     setSaved(false);
     save.mutate(
-      { version, name: draft.name, shell: { ...base.shell, wallHeight: draft.wallHeight, wallThickness: draft.wallThickness } },
+      { version, name: values.name, shell: { ...base.shell, wallHeight: values.wallHeight, wallThickness: values.wallThickness } },
       {
-        onSuccess: () => {
+        onSuccess: ({ room: savedRoom }) => {
           setConflict(null);
+          setDraft(draftOf(savedRoom));
           setSaved(true);
         },
         onError: (err) => {
@@ -44,6 +45,18 @@ export function RoomSettings({ room, readOnly }: { room: RoomRecord; readOnly: b
   const submit = (e: FormEvent) => {
     e.preventDefault();
     send(room.version, room);
+  };
+  // Keep mine: the fields this tab changed go on top of theirs, so neither person's change is lost.
+  const keepMine = () => {
+    if (!conflict) return;
+    const mine = draftOf(room);
+    const theirs = draftOf(conflict);
+    const merged = (Object.keys(theirs) as (keyof Draft)[]).reduce<Draft>(
+      (acc, k) => ({ ...acc, [k]: draft[k] !== mine[k] ? draft[k] : theirs[k] }),
+      theirs,
+    );
+    setDraft(merged);
+    send(conflict.version, conflict, merged);
   };
   const loadTheirs = () => {
     if (!conflict) return;
@@ -61,7 +74,7 @@ export function RoomSettings({ room, readOnly }: { room: RoomRecord; readOnly: b
           <p>Someone saved this room after you opened it (they set the ceiling to {conflict.shell.wallHeight / 10} cm and named it “{conflict.name}”). Your changes are still here.</p>
           <div className="mt-3 flex gap-2">
             <Button size="sm" onClick={loadTheirs}>Load theirs</Button>
-            <Button size="sm" variant="primary" onClick={() => send(conflict.version, conflict)}>Keep mine</Button>
+            <Button size="sm" variant="primary" onClick={keepMine}>Keep mine</Button>
           </div>
         </Notice>
       )}
