@@ -12,11 +12,14 @@ export interface PlanBounds {
   maxY: number;
 }
 
+/** Turns this close (degrees) to a full turn are taken as none. */
+const FULL_TURN_TOLERANCE_DEG = 1e-9;
+
 /** A rotation in degrees folded into [0, 360), with −0 written as 0. */
 export function normaliseRotationDeg(rotationDeg: number): number {
   const folded = ((rotationDeg % 360) + 360) % 360;
-  // 359.9999999999 from floating point is a full turn, and −0 reads badly in a document.
-  return folded === 0 || 360 - folded < 1e-9 ? 0 : folded;
+  // 359.9999999999 left by floating point is a full turn, not a hair short of one.
+  return 360 - folded < FULL_TURN_TOLERANCE_DEG ? 0 : folded;
 }
 
 /** Plan direction (unit, mm space) of a piece's own +x and +y after turning it by rotationDeg clockwise seen from above. */

@@ -1,0 +1,153 @@
+// Ready-sized pieces to start a layout from. Sizes are plan mm: width along the piece's own x,
+// depth along its own y (its front faces +y), height from its underside. Every entry names where its
+// size comes from; only mattress sizes have a published source, the rest are trade rules of thumb.
+import { MM_PER_INCH } from '../units/length';
+import type { Piece } from '../schemas/option';
+import type { PlanPoint } from '../schemas/room';
+
+/** Furniture sizes recalled from common practice; no published source was read for them. */
+const COMMON_PRACTICE = 'common practice (recalled typical size, no published source)';
+const NBF = 'National Bed Federation sizes (summary)';
+const CONTINENTAL = 'trade convention for continental mattresses (summary)';
+const US_CHARTS = 'sleep-industry consumer charts (summary), inches converted at 1 in = 25.4 mm exactly (NIST SP 811 §B.6)';
+
+/** A bed frame is this much wider than its mattress, 50 mm a side (common practice). */
+export const BED_FRAME_WIDTH_ALLOWANCE_MM = 100;
+/** A bed frame is this much longer than its mattress, headboard plus foot rail (common practice). */
+export const BED_FRAME_LENGTH_ALLOWANCE_MM = 150;
+/** Floor to mattress top of a divan or framed bed, mm (common practice); a headboard rises higher. */
+export const BED_HEIGHT_MM = 550;
+/** Underside of a wall cabinet above the floor, mm (common practice). */
+export const WALL_CABINET_ELEVATION_MM = 1400;
+
+export const CATALOGUE_GROUPS = ['seating', 'tables', 'beds', 'storage', 'rugs', 'other'] as const;
+export type CatalogueGroup = (typeof CATALOGUE_GROUPS)[number];
+
+export type MattressStandard = 'uk' | 'continental' | 'us';
+
+/** The mattress a bed entry is built round, mm, with the size name it is sold under. */
+export interface Mattress {
+  standard: MattressStandard;
+  sizeName: string;
+  widthMm: number;
+  lengthMm: number;
+  source: string;
+}
+
+/** One ready-sized piece: box sizes in mm, where the sizes come from, and for beds the mattress inside. */
+export interface CatalogueEntry {
+  kind: string;
+  name: string;
+  group: CatalogueGroup;
+  width: number;
+  depth: number;
+  height: number;
+  elevation?: number;
+  note?: string;
+  source: string;
+  mattress?: Mattress;
+}
+
+function bed<K extends string>(kind: K, name: string, mattress: Mattress): CatalogueEntry & { kind: K } {
+  return {
+    kind,
+    name,
+    group: 'beds',
+    width: mattress.widthMm + BED_FRAME_WIDTH_ALLOWANCE_MM,
+    depth: mattress.lengthMm + BED_FRAME_LENGTH_ALLOWANCE_MM,
+    height: BED_HEIGHT_MM,
+    note: `Mattress ${Math.round(mattress.widthMm / 10)} × ${Math.round(mattress.lengthMm / 10)} cm plus a frame; the head goes against the wall.`,
+    source: `mattress: ${mattress.source}; frame allowance and height: common practice`,
+    mattress,
+  };
+}
+
+function metricBed<K extends string>(kind: K, name: string, standard: 'uk' | 'continental', sizeName: string, widthCm: number, lengthCm: number): CatalogueEntry & { kind: K } {
+  return bed(kind, name, { standard, sizeName, widthMm: widthCm * 10, lengthMm: lengthCm * 10, source: standard === 'uk' ? NBF : CONTINENTAL });
+}
+
+function usBed<K extends string>(kind: K, name: string, sizeName: string, widthIn: number, lengthIn: number): CatalogueEntry & { kind: K } {
+  return bed(kind, name, { standard: 'us', sizeName, widthMm: widthIn * MM_PER_INCH, lengthMm: lengthIn * MM_PER_INCH, source: US_CHARTS });
+}
+
+function common<K extends string>(
+  kind: K,
+  name: string,
+  group: CatalogueGroup,
+  width: number,
+  depth: number,
+  height: number,
+  extra: Pick<CatalogueEntry, 'note' | 'elevation'> = {},
+): CatalogueEntry & { kind: K } {
+  return { kind, name, group, width, depth, height, ...extra, source: COMMON_PRACTICE };
+}
+
+/** Every catalogue entry, in the order the Furnish step lists them. */
+export const CATALOGUE = [
+  common('sofa-2-seat', 'Two-seat sofa', 'seating', 1700, 900, 850),
+  common('sofa-3-seat', 'Three-seat sofa', 'seating', 2100, 900, 850),
+  common('sofa-corner', 'Corner sofa', 'seating', 2600, 1700, 850, { note: 'Drawn as the box round both arms of the L.' }),
+  common('armchair', 'Armchair', 'seating', 850, 850, 900),
+  common('coffee-table', 'Coffee table', 'tables', 1100, 600, 420),
+  common('side-table', 'Side table', 'tables', 500, 500, 550),
+  common('desk', 'Desk', 'tables', 1200, 600, 750),
+  common('dining-table-4', 'Dining table with 4 chairs', 'tables', 1200, 1700, 900, {
+    note: 'Table 120 × 80 cm with two chairs tucked in on each long side; the height is the chair backs.',
+  }),
+  common('dining-table-6', 'Dining table with 6 chairs', 'tables', 1800, 1800, 900, {
+    note: 'Table 180 × 90 cm with three chairs tucked in on each long side; the height is the chair backs.',
+  }),
+  metricBed('bed-uk-single', 'Single bed', 'uk', 'Single', 90, 190),
+  metricBed('bed-uk-small-double', 'Small double bed', 'uk', 'Small double', 120, 190),
+  metricBed('bed-uk-double', 'Double bed', 'uk', 'Double', 135, 190),
+  metricBed('bed-uk-king', 'King bed', 'uk', 'King', 150, 200),
+  metricBed('bed-uk-super-king', 'Super king bed', 'uk', 'Super king', 180, 200),
+  metricBed('bed-continental-90', 'Continental single bed 90', 'continental', '90 × 200', 90, 200),
+  metricBed('bed-continental-140', 'Continental double bed 140', 'continental', '140 × 200', 140, 200),
+  metricBed('bed-continental-160', 'Continental double bed 160', 'continental', '160 × 200', 160, 200),
+  metricBed('bed-continental-180', 'Continental double bed 180', 'continental', '180 × 200', 180, 200),
+  usBed('bed-us-twin', 'Twin bed', 'Twin', 38, 75),
+  usBed('bed-us-twin-xl', 'Twin XL bed', 'Twin XL', 38, 80),
+  usBed('bed-us-full', 'Full bed', 'Full', 54, 75),
+  usBed('bed-us-queen', 'Queen bed', 'Queen', 60, 80),
+  usBed('bed-us-king', 'King bed (US)', 'King', 76, 80),
+  usBed('bed-us-california-king', 'California King bed', 'California King', 72, 84),
+  common('bedside-table', 'Bedside table', 'storage', 450, 400, 550),
+  common('wardrobe', 'Wardrobe', 'storage', 1000, 600, 2000, { note: 'Two doors; leave room in front for them to open.' }),
+  common('chest-of-drawers', 'Chest of drawers', 'storage', 800, 450, 800),
+  common('bookcase', 'Bookcase', 'storage', 800, 300, 1800),
+  common('tv-unit', 'TV unit', 'storage', 1600, 400, 500),
+  common('sideboard', 'Sideboard', 'storage', 1600, 450, 800),
+  common('wall-cabinet', 'Wall cabinet', 'storage', 800, 350, 700, { elevation: WALL_CABINET_ELEVATION_MM, note: 'Hung on the wall; the elevation is its underside.' }),
+  common('rug', 'Rug', 'rugs', 2000, 1400, 10),
+  common('custom-box', 'Box', 'other', 1000, 600, 800, { note: 'Any piece not in the catalogue: set its size and name.' }),
+];
+
+/** The kind names of the catalogue, e.g. 'sofa-3-seat' or 'bed-us-queen'. */
+export type CatalogueKind = (typeof CATALOGUE)[number]['kind'];
+
+/** The catalogue entry of a kind; throws for a kind the catalogue does not have (a stale saved kind). */
+export function catalogueEntry(kind: CatalogueKind): CatalogueEntry {
+  const entry = CATALOGUE.find((e) => e.kind === kind);
+  if (!entry) throw new Error(`The catalogue has no ${String(kind)}.`);
+  return entry;
+}
+
+/** A new piece of a catalogue kind centred at `at` (plan mm), unturned, placed in the room; its id comes from the caller. */
+export function pieceFromCatalogue(kind: CatalogueKind, id: string, at: PlanPoint): Piece {
+  const entry = catalogueEntry(kind);
+  return {
+    id,
+    name: entry.name,
+    kind: entry.kind,
+    x: at[0],
+    y: at[1],
+    width: entry.width,
+    depth: entry.depth,
+    height: entry.height,
+    rotation: 0,
+    elevation: entry.elevation ?? 0,
+    status: 'new',
+    placed: true,
+  };
+}
