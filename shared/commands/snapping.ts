@@ -59,8 +59,9 @@ function rotationFacingDeg(direction: readonly [number, number]): number {
  */
 export function snapPieceToWalls<P extends PiecePose>(piece: P, shell: Pick<RoomShell, 'outline' | 'wallThickness' | 'wallThicknesses'>, toleranceMm: number = WALL_SNAP_TOLERANCE_MM): WallSnap<P> {
   const corners = pieceFootprintMm(piece);
+  const walls = layoutShellWalls(shell);
   let best: { wall: number; gapMm: number; alongMm: number; inward: [number, number] } | null = null;
-  for (const wall of layoutShellWalls(shell)) {
+  for (const wall of walls) {
     const inward: [number, number] = [-wall.outward[0], -wall.outward[1]];
     const centre = sub([piece.x, piece.y], wall.start);
     const alongMm = dot(centre, wall.direction);
@@ -70,7 +71,7 @@ export function snapPieceToWalls<P extends PiecePose>(piece: P, shell: Pick<Room
     if (best === null || Math.abs(gapMm) < Math.abs(best.gapMm)) best = { wall: wall.index, gapMm, alongMm, inward };
   }
   if (best === null) return { piece, wall: null };
-  const wall = layoutShellWalls(shell)[best.wall];
+  const wall = walls[best.wall];
   const [x, y] = addScaled(addScaled(wall.start, wall.direction, best.alongMm), best.inward, piece.depth / 2);
   return { piece: { ...piece, x, y, rotation: rotationFacingDeg(best.inward) }, wall: best.wall };
 }
