@@ -2,8 +2,10 @@
 import type { Migration } from 'kysely';
 import * as m0001 from './0001_create_studios';
 import * as m0002 from './0002_create_rooms';
+import * as m0003 from './0003_create_finishes';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
   '0002_create_rooms': m0002,
+  '0003_create_finishes': m0003,
 };

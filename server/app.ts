@@ -14,16 +14,21 @@ import { clientRoutes } from './features/clients/clients.routes';
 import { projectRoutes } from './features/projects/projects.routes';
 import { outboxRoutes } from './features/outbox/outbox.routes';
 import { projectRoomsExtra, roomRoutes } from './features/rooms/rooms.routes';
+import { finishRoutes } from './features/finishes/finishes.routes';
+import { fileRoutes } from './features/files/files.routes';
+import type { FileStorage } from './services/storage/storage';
 
 export interface AppDeps {
   db: Db;
   mailer: Mailer;
   config: AppConfig;
+  /** Where photos and textures are kept; DATA_DIR/files on local disk when not given. */
+  storage?: FileStorage;
 }
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
-  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...outboxRoutes];
+  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...outboxRoutes];
 }
 
 export function createApp(deps: AppDeps): Express {

@@ -91,6 +91,44 @@ export interface OptionsTable {
   updated_at: Timestamp;
 }
 
+export interface FinishesTable {
+  id: Generated<string>;
+  studio_id: string;
+  kind: 'photo' | 'paint';
+  name: string;
+  supplier: string | null;
+  code: string | null;
+  price: ColumnType<string | null, number | null | undefined, number | null>; // numeric arrives as text
+  price_unit: 'm2' | 'unit' | null;
+  colour_hex: string | null;
+  sheen: 'matt' | 'eggshell' | 'satin' | 'gloss' | null;
+  category: 'floor' | 'wall' | 'tile' | 'wood' | 'stone' | 'fabric' | 'wallpaper' | 'other' | null;
+  repeat_width_mm: number | null;
+  repeat_height_mm: number | null;
+  crop: unknown; // Crop, parsed with its zod schema on the way out
+  edge_blend: 'none' | 'narrow' | 'wide' | null;
+  status: 'processing' | 'ready' | 'failed' | null;
+  failure_reason: string | null;
+  source_key: string | null; // the private original: the upload until processed, then its master
+  photo_width_px: number | null;
+  photo_height_px: number | null;
+  mean_colour_hex: string | null;
+  revision: Generated<number>;
+  queued_at: Date | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface FinishFilesTable {
+  finish_id: string;
+  studio_id: string;
+  purpose: 'master' | 'photo' | 'texture' | 'texture-large' | 'swatch' | 'preview';
+  key: string;
+  width_px: number;
+  height_px: number;
+  bytes: number;
+}
+
 export interface Database {
   rooms: RoomsTable;
   options: OptionsTable;
@@ -101,6 +139,8 @@ export interface Database {
   sign_in_failures: SignInFailuresTable;
   clients: ClientsTable;
   projects: ProjectsTable;
+  finishes: FinishesTable;
+  finish_files: FinishFilesTable;
 }
 
 export type Db = Kysely<Database>;

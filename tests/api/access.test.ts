@@ -15,6 +15,8 @@ interface Fixture {
   optionId: string;
   memberId: string;
   inviteId: string;
+  finishId: string;
+  fileName: string;
 }
 interface Case {
   /** Path parameters naming studio A's own records. */
@@ -54,6 +56,13 @@ const CASES: Record<string, Case> = {
   'put /api/rooms/:id/option-order': { params: (f) => ({ id: f.roomId }), body: () => ({ optionIds: [randomUUID()] }) },
   'put /api/options/:id': { params: (f) => ({ id: f.optionId }), body: () => ({ name: 'Taken', version: 1 }) },
   'delete /api/options/:id': { params: (f) => ({ id: f.optionId }) },
+  'get /api/finishes': {},
+  'get /api/finishes/:id': { params: (f) => ({ id: f.finishId }) },
+  'post /api/finishes/paints': { body: () => ({ name: 'Table paint', colourHex: '#a0b1c2', sheen: 'matt' }) },
+  'post /api/finishes/photos': {},
+  'patch /api/finishes/:id': { params: (f) => ({ id: f.finishId }), body: () => ({ name: 'Taken' }) },
+  'delete /api/finishes/:id': { params: (f) => ({ id: f.finishId }) },
+  'get /api/files/:name': { params: (f) => ({ name: f.fileName }) },
 };
 
 const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
@@ -81,6 +90,11 @@ beforeAll(async () => {
   const target = await addMember(t, a.agent, 'viewer');
   const invite = await a.agent.post('/api/studio/invites').send({ email: uniqueEmail('pending'), role: 'designer' });
   const room = await a.agent.post(`/api/projects/${project.body.project.id}/rooms`).send({ name: 'Kitchen', shell: SQUARE });
+  const paint = await a.agent.post('/api/finishes/paints').send({ name: 'Fixture paint', colourHex: '#cccccc' });
+  // A file row of studio A's (no bytes needed: the files route asks whose it is before reading it).
+  const fileName = `${randomUUID().replaceAll('-', '').repeat(2)}.webp`;
+  const { studio_id: studioId } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paint.body.finish.id).executeTakeFirstOrThrow();
+  await t.db.insertInto('finish_files').values({ finish_id: paint.body.finish.id, studio_id: studioId, purpose: 'swatch', key: `derived/${fileName}`, width_px: 1, height_px: 1, bytes: 1 }).execute();
   fixture = {
     clientId: project.body.project.client.id,
     projectId: project.body.project.id,
@@ -88,6 +102,8 @@ beforeAll(async () => {
     optionId: room.body.options[0].id,
     memberId: target.member.id,
     inviteId: invite.body.invite.id,
+    finishId: paint.body.finish.id,
+    fileName,
   };
 });
 afterAll(() => t.close());
