@@ -1,8 +1,10 @@
 // Runs every bench in turn. Add a bench by importing it and appending it to the list.
 import { benchGeometry } from './geometry';
+import { benchImages } from './images';
 
 const benches: { name: string; run: () => Promise<void> }[] = [
   { name: 'geometry', run: benchGeometry },
+  { name: 'images', run: benchImages },
 ];
 
 for (const bench of benches) {

@@ -52,6 +52,10 @@ const webp = async (pipeline: Sharp): Promise<ProcessedImage> => {
   const { data, info } = await pipeline.webp({ quality: WEBP_QUALITY, effort: WEBP_EFFORT }).toBuffer({ resolveWithObject: true });
   return { buffer: data, widthPx: info.width, heightPx: info.height };
 };
+// libvips keeps recent operations to reuse them; each photo is processed once, so the cache only
+// holds memory.
+sharp.cache(false);
+
 const fitInside = (px: number) => ({ width: px, height: px, fit: 'inside' as const, withoutEnlargement: true });
 
 /** The crop as whole pixels inside a photo of the given size (at least 1 × 1). */
@@ -66,23 +70,26 @@ export function cropPixels(crop: Crop, widthPx: number, heightPx: number) {
 /**
  * Decodes `source` (refusing more than the pixel limit before decoding, and damaged or cut-short
  * files), and makes every image a photo finish needs. Throws sharp's error for a bad file.
+ * With `keepMaster`, the source is first rewritten as the master (oriented, sRGB, no metadata) and
+ * everything else is made from that, so a later re-crop from the master gives the same pixels.
  */
 export async function processPhoto(source: Buffer, opts: { crop: Crop; edgeBlend: EdgeBlend; keepMaster: boolean }): Promise<ProcessedPhoto> {
-  const decoded = await sharp(source, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: 'warning' })
-    .rotate()
-    .flatten({ background: '#ffffff' })
-    .toColourspace('srgb')
-    .raw()
-    .toBuffer({ resolveWithObject: true });
-  const oriented: Raw = { data: decoded.data, width: decoded.info.width, height: decoded.info.height, channels: decoded.info.channels };
-
-  const masterJob = opts.keepMaster
-    ? fromRaw(oriented).jpeg({ quality: MASTER_JPEG_QUALITY, chromaSubsampling: '4:4:4' }).toBuffer({ resolveWithObject: true })
+  // Each step streams through libvips from compressed bytes rather than holding the whole decoded
+  // photo in JavaScript, and steps run one at a time: peak memory stays near one decoded photo.
+  const normalised = (input: Buffer) =>
+    sharp(input, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: 'warning' }).rotate().flatten({ background: '#ffffff' }).toColourspace('srgb');
+  const master = opts.keepMaster
+    ? await normalised(source)
+      // Huffman optimisation would buffer the whole photo's coefficients: off, for memory.
+      .jpeg({ quality: MASTER_JPEG_QUALITY, chromaSubsampling: '4:4:4', optimiseCoding: false })
+      .toBuffer({ resolveWithObject: true })
     : null;
-  const photoJob = webp(fromRaw(oriented).resize(fitInside(PHOTO_VIEW_PX)));
+  const base = master ? master.data : source;
+  const { width, height } = master ? master.info : await orientedSize(base);
 
-  const cropped = await fromRaw(oriented)
-    .extract(cropPixels(opts.crop, oriented.width, oriented.height))
+  const photo = await webp(normalised(base).resize(fitInside(PHOTO_VIEW_PX)));
+  const cropped = await normalised(base)
+    .extract(cropPixels(opts.crop, width, height))
     .resize(fitInside(TEXTURE_LARGE_PX))
     .raw()
     .toBuffer({ resolveWithObject: true });
@@ -91,15 +98,10 @@ export async function processPhoto(source: Buffer, opts: { crop: Crop; edgeBlend
 
   const previewTile = await fromRaw(large).resize(fitInside(PREVIEW_TILE_PX)).raw().toBuffer({ resolveWithObject: true });
   const tile: Raw = { data: previewTile.data, width: previewTile.info.width, height: previewTile.info.height, channels: previewTile.info.channels };
-
-  const [master, photo, textureLarge, texture, swatch, preview] = await Promise.all([
-    masterJob,
-    photoJob,
-    webp(fromRaw(large)),
-    webp(fromRaw(large).resize(fitInside(TEXTURE_PX))),
-    webp(fromRaw(large).resize(SWATCH_PX, SWATCH_PX, { fit: 'cover' })),
-    webp(fromRaw(repeat3x3(tile))),
-  ]);
+  const textureLarge = await webp(fromRaw(large));
+  const texture = await webp(fromRaw(large).resize(fitInside(TEXTURE_PX)));
+  const swatch = await webp(fromRaw(large).resize(SWATCH_PX, SWATCH_PX, { fit: 'cover' }));
+  const preview = await webp(fromRaw(repeat3x3(tile)));
   return {
     master: master ? { buffer: master.data, widthPx: master.info.width, heightPx: master.info.height } : null,
     photo,
@@ -108,9 +110,16 @@ export async function processPhoto(source: Buffer, opts: { crop: Crop; edgeBlend
     swatch,
     preview,
     meanColourHex: meanColourHex(large),
-    widthPx: oriented.width,
-    heightPx: oriented.height,
+    widthPx: width,
+    heightPx: height,
   };
+}
+
+/** Width and height after EXIF orientation, from the header. */
+async function orientedSize(input: Buffer): Promise<{ width: number; height: number }> {
+  const meta = await sharp(input, { limitInputPixels: UPLOAD_LIMITS.maxPixels }).metadata();
+  if (!meta.width || !meta.height) throw new Error('The photo has no size.');
+  return meta.autoOrient ?? { width: meta.width, height: meta.height };
 }
 
 /** The image repeated three times across and three times down. */
