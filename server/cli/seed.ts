@@ -3,6 +3,7 @@
 import type { Db } from '../db/database';
 import { hashPassword } from '../services/auth/passwords';
 import { seedDemoRooms } from './seed-rooms';
+import { demoFileStorage, seedDemoFinishes } from './seed-finishes';
 
 export const DEMO_SIGN_IN = { email: 'demo@parlour.local', password: 'parlour-demo' } as const;
 
@@ -40,6 +41,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .values({ studio_id: studio.id, client_id: other.id, name: 'Garden studio refresh', address: '17 Orchard Lane', updated_at: new Date(Date.now() - 3 * 86_400_000) })
       .execute();
     await seedDemoRooms(trx, studio.id, flat.id);
+    await seedDemoFinishes(trx, studio.id, demoFileStorage());
   });
   return true;
 }

@@ -14,6 +14,9 @@ import { checkerboard, photoLike, rawToJpeg, rawToPng, rawToSharp, zeroPng } fro
 import { textureFraction, textureRepeat } from '../../shared/geometry/texture-repeat';
 import type { Finish, PhotoFinish } from '../../shared/schemas/finish';
 import { addMember, signUpStudio, type TestApp } from '../setup/app';
+import { seedDemoFinishes } from '../../server/cli/seed-finishes';
+import { dataDirStorage } from '../../server/services/storage/local-disk';
+import { toSceneFinish } from '../../shared/finishes/scene-finish';
 
 type Agent = ReturnType<typeof request.agent>;
 
@@ -354,5 +357,22 @@ describe('bad input', () => {
     ]);
     for (const f of done) await owner.delete(`/api/finishes/${f.id}`);
     expect(storedFiles()).toEqual([]);
+  });
+});
+
+describe('demo finishes', () => {
+  it('gives a studio four drawn photo finishes, ready with swatches, and three paints', async () => {
+    const { agent } = await signUpStudio(t.app, 'Demo-like Studio');
+    const studioId = (await agent.get('/api/auth/me')).body.studio.id;
+    await t.db.transaction().execute((trx) => seedDemoFinishes(trx, studioId, dataDirStorage(dataDir)));
+    const finishes = (await agent.get('/api/finishes')).body.finishes as Finish[];
+    const photos = finishes.filter((f): f is PhotoFinish => f.kind === 'photo');
+    expect(photos.map((f) => [f.category, f.status]).sort()).toEqual([['fabric', 'ready'], ['tile', 'ready'], ['wallpaper', 'ready'], ['wood', 'ready']]);
+    for (const f of photos) {
+      expect((await fetchFile(agent, f.files.swatchUrl!)).status).toBe(200);
+      expect(toSceneFinish(f)).toMatchObject({ kind: 'photo', textureUrl: f.files.textureUrl, repeatWidthMm: f.repeatWidthMm });
+    }
+    expect(finishes.filter((f) => f.kind === 'paint').map((f) => f.name).sort()).toEqual(['Deep harbour', 'Morning oat', 'Sage hall']);
+    expect(storedFiles().filter((f) => f.startsWith('uploads/'))).toEqual([]);
   });
 });

@@ -115,6 +115,11 @@ export function failureReason(err: unknown): string {
   return 'This photo could not be processed. Try exporting it again as a JPEG.';
 }
 
+/** Runs `fn` in a transaction, or in the caller's when `db` already is one (the demo seed). */
+function inTransaction<T>(db: Db, fn: (trx: Db) => Promise<T>): Promise<T> {
+  return db.isTransaction ? fn(db) : db.transaction().execute(fn);
+}
+
 type StoredImage = ProcessedImage & { purpose: FinishFileRow['purpose']; key: string };
 
 /**
@@ -159,7 +164,7 @@ export async function runPhotoJob(db: Db, storage: FileStorage, finishId: string
   const toStore = processed.master ? [...images, master] : images;
   await Promise.all(toStore.map((img) => storage.put(img.key, img.buffer)));
 
-  const previous = await db.transaction().execute(async (trx) => {
+  const previous = await inTransaction(db, async (trx) => {
     const saved = await finishJobIfCurrent(trx, finishId, row.revision, {
       status: 'ready',
       failure_reason: null,
