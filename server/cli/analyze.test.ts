@@ -3,6 +3,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { cleanLayout, gapLayout, pieceInput, walledInLayout } from '../../shared/analysis/fit/test-plans';
 import { designExampleTakeoff, designExampleWall0 } from '../../tests/reference/rooms';
 
 const root = resolve(import.meta.dirname, '../..');
@@ -189,5 +190,50 @@ describe('analyze command: refusals', () => {
     const run = await analyze([]);
     expect(run.code).toBe(1);
     expect(run.stderr).toMatch(/no plan file given/);
+  });
+});
+
+describe('analyze command: fit check findings', () => {
+  type Layout = ReturnType<typeof cleanLayout>;
+  /** A plan file of a layout from the fit check's worked plans (their comments give the hand computation). */
+  const planOf = (layout: Layout) => ({
+    format: 'parlour-plan',
+    version: 1,
+    room: { name: 'Test room', ...layout.room },
+    option: { name: 'Option A', pieces: layout.pieces },
+  });
+  function withPieces(change: (layout: Layout) => void): Layout {
+    const layout = cleanLayout();
+    change(layout);
+    return layout;
+  }
+  async function findingsOf(layout: Layout, flags: string[] = []) {
+    return (await takeoffOf(planOf(layout), flags)).findings as { kind: string; pieces: string[]; message: string; measured_mm?: number }[];
+  }
+
+  it('reports nothing on a clean layout, nor on the example plan', async () => {
+    expect(await findingsOf(cleanLayout())).toEqual([]);
+    expect((await takeoffOf(example)).findings).toEqual([]);
+  });
+
+  const cases: [string, () => Layout, string[]][] = [
+    ['overlap', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'stool', x: 2200, y: 2500, width: 400, depth: 400, height: 450 }))), ['sofa', 'stool']],
+    ['outside-room', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'chest', x: 2000, y: 250, width: 800, depth: 600, height: 800 }))), ['chest']],
+    ['door-swing', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'wardrobe', x: 700, y: 400, width: 800, depth: 600, height: 2000 }))), ['wardrobe']],
+    ['window-blocked', () => withPieces((l) => { l.pieces[2] = { ...l.pieces[2], height: 950 }; }), ['sofa']],
+    ['narrow-walkway', () => gapLayout(), ['chest', 'bed']],
+    ['unreachable', () => walledInLayout(), ['cabinet']],
+    ['too-big-for-door', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'crate', x: 2000, y: 1400, width: 1000, depth: 1000, height: 1000 }))), ['crate']],
+  ];
+  it.each(cases)('reports %s on a plan made to show it', async (kind, layout, pieces) => {
+    const findings = await findingsOf(layout());
+    expect(findings.filter((f) => f.kind === kind).map((f) => f.pieces)).toEqual([pieces]);
+  });
+
+  it('measures the 620 mm gap and follows the walkway flag', async () => {
+    const [gap] = await findingsOf(gapLayout());
+    expect(gap.message).toBe('Only 62 cm to pass between the bed and the chest');
+    expect(gap.measured_mm).toBe(620);
+    expect(await findingsOf(gapLayout(), ['--walkway', '600'])).toEqual([]);
   });
 });

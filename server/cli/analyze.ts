@@ -1,6 +1,7 @@
 // The analysis command: reads a plan file and prints its take-off as one JSON object.
 // Usage: npm run --silent analyze -- FILE [--coats N] [--coverage M2_PER_L] [--waste PERCENT] [--walkway MM]
 import { readFile } from 'node:fs/promises';
+import { checkFit } from '../../shared/analysis/fit/index';
 import { computeTakeoff, type TakeoffOptions } from '../../shared/analysis/takeoff';
 import { readPlanFile } from '../../shared/schemas/plan-file';
 
@@ -67,7 +68,9 @@ async function main(): Promise<number> {
     process.stderr.write(`analyze: ${args.file} is not a valid plan file:\n${result.errors.map((e) => `  ${e}`).join('\n')}\n`);
     return 1;
   }
-  process.stdout.write(`${JSON.stringify(computeTakeoff(result.plan.room, args.options))}\n`);
+  const { room, option } = result.plan;
+  const findings = checkFit(room, option.pieces, { walkwayMm: args.options.walkwayMm });
+  process.stdout.write(`${JSON.stringify(computeTakeoff(room, args.options, findings))}\n`);
   return 0;
 }
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { RoomShell } from '../schemas/room';
+import { planPointSchema, type RoomShell } from '../schemas/room';
 import { areaMm2, perimeterMm } from '../geometry/polygon';
 import { distance } from '../geometry/vec';
 
@@ -34,6 +34,10 @@ export const findingSchema = z.object({
   message: z.string(),
   measured_mm: z.number().optional(),
   required_mm: z.number().optional(),
+  /** Plan point (mm) of a narrow walkway's tightest spot, for the editor to mark. */
+  at: planPointSchema.optional(),
+  /** Plan points (mm) on either side of that spot, for drawing the gap. */
+  between: z.tuple([planPointSchema, planPointSchema]).optional(),
 });
 export type Finding = z.infer<typeof findingSchema>;
 

@@ -1,0 +1,215 @@
+// Plan geometry shared by the fit checks: a piece's footprint as a rotated rectangle, convex
+// overlap by separating axes, point-in-outline and closest points between convex shapes. All in
+// plan mm (x right, y down).
+import type { Piece } from '../../schemas/option';
+import { addScaled, cross, directionDeg, dot, sub, type Vec2 } from '../../geometry/vec';
+
+/** Two footprints or height ranges may share this much (mm) and still only touch: a tape reads to about 1 mm. */
+export const TOUCH_TOLERANCE_MM = 1;
+/** A piece at most this tall (mm) is a rug: it lies under furniture and is walked over (common practice). */
+export const RUG_MAX_HEIGHT_MM = 20;
+/** A piece whose underside is at least this high (mm) is walked under, not round: wall cabinets and shelves (common practice; a usual wall cabinet sits at 1400–1500 mm). */
+export const WALK_UNDER_ELEVATION_MM = 1200;
+
+/** A placed piece's footprint in plan mm with its height range (mm above the floor). */
+export interface PieceBox {
+  piece: Piece;
+  centre: [number, number];
+  /** Unit vectors of the piece's own x (width) and y (depth, towards its front) on the plan. */
+  axisX: [number, number];
+  axisY: [number, number];
+  halfWidthMm: number;
+  halfDepthMm: number;
+  /** Footprint corners round the box: (−x,−y) (+x,−y) (+x,+y) (−x,+y) in the piece's own axes. */
+  corners: [number, number][];
+  bottomMm: number;
+  topMm: number;
+}
+
+/** A piece's box on the plan (mm): rotation turns its own axes clockwise seen from above. */
+export function pieceBox(piece: Piece): PieceBox {
+  const axisX = directionDeg(piece.rotation);
+  const axisY: [number, number] = [-axisX[1], axisX[0]];
+  const hx = piece.width / 2;
+  const hy = piece.depth / 2;
+  const centre: [number, number] = [piece.x, piece.y];
+  const corners = ([[-hx, -hy], [hx, -hy], [hx, hy], [-hx, hy]] as const).map(([a, b]) =>
+    addScaled(addScaled(centre, axisX, a), axisY, b),
+  );
+  return {
+    piece,
+    centre,
+    axisX,
+    axisY,
+    halfWidthMm: hx,
+    halfDepthMm: hy,
+    corners,
+    bottomMm: piece.elevation,
+    topMm: piece.elevation + piece.height,
+  };
+}
+
+/** Whether a piece is a rug by its height (RUG_MAX_HEIGHT_MM). */
+export function isRug(piece: Piece): boolean {
+  return piece.height <= RUG_MAX_HEIGHT_MM;
+}
+
+/** Whether a person walking the floor has to go round the piece (not a rug, not mounted overhead). */
+export function blocksWalking(piece: Piece): boolean {
+  return !isRug(piece) && piece.elevation < WALK_UNDER_ELEVATION_MM;
+}
+
+/** Boxes of the placed pieces only; pieces in the holding area take no part in the fit check. */
+export function placedBoxes(pieces: readonly Piece[]): PieceBox[] {
+  return pieces.filter((piece) => piece.placed).map(pieceBox);
+}
+
+function projectOnto(points: readonly Vec2[], axis: Vec2): [number, number] {
+  let min = Infinity;
+  let max = -Infinity;
+  for (const p of points) {
+    const s = dot(p, axis);
+    if (s < min) min = s;
+    if (s > max) max = s;
+  }
+  return [min, max];
+}
+
+function edgeNormals(points: readonly Vec2[]): [number, number][] {
+  const normals: [number, number][] = [];
+  for (let i = 0; i < points.length; i++) {
+    const e = sub(points[(i + 1) % points.length], points[i]);
+    const l = Math.hypot(e[0], e[1]);
+    if (l > 0) normals.push([-e[1] / l, e[0] / l]);
+  }
+  return normals;
+}
+
+/**
+ * How deep two convex plan polygons (mm) run into each other: the smallest overlap of their
+ * projections over every edge normal (separating axis test). Zero or less means they are apart or
+ * only touch.
+ */
+export function convexPenetrationMm(a: readonly Vec2[], b: readonly Vec2[]): number {
+  let least = Infinity;
+  for (const axis of [...edgeNormals(a), ...edgeNormals(b)]) {
+    const [minA, maxA] = projectOnto(a, axis);
+    const [minB, maxB] = projectOnto(b, axis);
+    const overlap = Math.min(maxA, maxB) - Math.max(minA, minB);
+    if (overlap < least) least = overlap;
+    if (least <= 0) return least;
+  }
+  return least;
+}
+
+/** Whether two convex plan polygons (mm) share more than a touch (TOUCH_TOLERANCE_MM). */
+export function convexOverlap(a: readonly Vec2[], b: readonly Vec2[]): boolean {
+  return convexPenetrationMm(a, b) > TOUCH_TOLERANCE_MM;
+}
+
+/**
+ * Whether plan segment ab runs through a convex polygon (mm) by more than `toleranceMm`: the polygon
+ * reaches past the segment's line on both sides, and they overlap along every edge normal of the
+ * polygon. A segment lying along an edge, or just touching, does not.
+ */
+export function segmentCrossesConvex(a: Vec2, b: Vec2, polygon: readonly Vec2[], toleranceMm: number): boolean {
+  const along = sub(b, a);
+  const l = Math.hypot(along[0], along[1]);
+  if (l === 0) return false;
+  const normal: Vec2 = [-along[1] / l, along[0] / l];
+  const line = dot(a, normal);
+  const [min, max] = projectOnto(polygon, normal);
+  if (min > line - toleranceMm || max < line + toleranceMm) return false;
+  for (const axis of edgeNormals(polygon)) {
+    const [minP, maxP] = projectOnto(polygon, axis);
+    const [minS, maxS] = projectOnto([a, b], axis);
+    if (Math.min(maxP, maxS) - Math.max(minP, minS) <= toleranceMm) return false;
+  }
+  return true;
+}
+
+/** Even-odd point-in-polygon on the plan (mm); points on an edge may fall either way. */
+export function pointInPolygon(p: Vec2, polygon: readonly Vec2[]): boolean {
+  let inside = false;
+  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
+    const [xi, yi] = polygon[i];
+    const [xj, yj] = polygon[j];
+    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}
+
+/** The point of segment ab nearest to p (plan mm). */
+export function closestOnSegment(p: Vec2, a: Vec2, b: Vec2): [number, number] {
+  const ab = sub(b, a);
+  const lengthSquared = dot(ab, ab);
+  const t = lengthSquared === 0 ? 0 : Math.min(1, Math.max(0, dot(sub(p, a), ab) / lengthSquared));
+  return addScaled(a, ab, t);
+}
+
+/** Distance (mm) from p to segment ab. */
+export function distanceToSegmentMm(p: Vec2, a: Vec2, b: Vec2): number {
+  const q = closestOnSegment(p, a, b);
+  return Math.hypot(p[0] - q[0], p[1] - q[1]);
+}
+
+/** The point of a plan shape (closed polygon, or a segment given as two points; mm) nearest to p. */
+export function closestOnShape(p: Vec2, shape: readonly Vec2[]): [number, number] {
+  let best: [number, number] = [shape[0][0], shape[0][1]];
+  let bestMm = Infinity;
+  const edges = shape.length === 2 ? 1 : shape.length;
+  for (let k = 0; k < edges; k++) {
+    const q = closestOnSegment(p, shape[k], shape[(k + 1) % shape.length]);
+    const d = Math.hypot(p[0] - q[0], p[1] - q[1]);
+    if (d < bestMm) {
+      bestMm = d;
+      best = q;
+    }
+  }
+  return best;
+}
+
+function segmentsCross(a: Vec2, b: Vec2, c: Vec2, d: Vec2): boolean {
+  const d1 = cross(sub(b, a), sub(c, a));
+  const d2 = cross(sub(b, a), sub(d, a));
+  const d3 = cross(sub(d, c), sub(a, c));
+  const d4 = cross(sub(d, c), sub(b, c));
+  return d1 * d2 < 0 && d3 * d4 < 0;
+}
+
+/** A pair of plan points (mm), one on each shape, and how far apart they are. */
+export interface ClosestPair {
+  distanceMm: number;
+  from: [number, number];
+  to: [number, number];
+}
+
+/**
+ * Closest points between two plan shapes given as closed polygons or, with two points, a segment
+ * (mm). Shapes that cross give distance 0. Boxes and walls have few edges, so all pairs are tried.
+ */
+export function closestPair(a: readonly Vec2[], b: readonly Vec2[]): ClosestPair {
+  const edges = (shape: readonly Vec2[]): [Vec2, Vec2][] =>
+    shape.length === 2 ? [[shape[0], shape[1]]] : shape.map((p, i) => [p, shape[(i + 1) % shape.length]]);
+  let best: ClosestPair = { distanceMm: Infinity, from: [a[0][0], a[0][1]], to: [b[0][0], b[0][1]] };
+  for (const [p, q] of edges(a)) {
+    for (const [r, s] of edges(b)) {
+      if (segmentsCross(p, q, r, s)) {
+        const t = cross(sub(r, p), sub(s, r)) / cross(sub(q, p), sub(s, r));
+        const hit = addScaled(p, sub(q, p), t);
+        return { distanceMm: 0, from: hit, to: hit };
+      }
+      const candidates: [Vec2, Vec2][] = [
+        [p, closestOnSegment(p, r, s)],
+        [q, closestOnSegment(q, r, s)],
+        [closestOnSegment(r, p, q), r],
+        [closestOnSegment(s, p, q), s],
+      ];
+      for (const [from, to] of candidates) {
+        const d = Math.hypot(from[0] - to[0], from[1] - to[1]);
+        if (d < best.distanceMm) best = { distanceMm: d, from: [from[0], from[1]], to: [to[0], to[1]] };
+      }
+    }
+  }
+  return best;
+}
