@@ -38,6 +38,7 @@ export {
   type HistoryStep,
 } from './history';
 export { applyPatches, diffDocs, type Patch, type PathKey, type Slot } from './patch';
+export { mergeOptionDoc, mergeShell } from './merge';
 export { normaliseRotationDeg, pieceAxes, pieceBoundsMm, pieceFootprintMm, type PiecePose, type PlanBounds } from './piece-geometry';
 export {
   nudge,

@@ -36,9 +36,11 @@ describe('rooms on a project', () => {
     await dialog.getByLabel('Ceiling height').fill(`8' 6"`);
     await dialog.getByRole('button', { name: 'Add room' }).click();
     await page.getByRole('heading', { name: 'Snug' }).waitFor();
-    // 4.2 × 3.6 m = 15.12 m²; 8 ft 6 in = 2590.8 mm (1 in = 25.4 mm, NIST SP 811).
-    await page.getByRole('row', { name: /Floor area 15\.12 m²/ }).waitFor();
+    // 8 ft 6 in = 2590.8 mm (1 in = 25.4 mm, NIST SP 811).
     expect(await page.getByLabel('Ceiling height').inputValue()).toBe('259.1 cm');
+    await page.getByRole('button', { name: /Check/ }).click();
+    // 4.2 × 3.6 m = 15.12 m².
+    await page.getByRole('row', { name: /Floor area 15\.12 m²/ }).waitFor();
     const view = page.locator('[data-testid=room-view][data-draw-calls]');
     await view.waitFor({ timeout: 30000 });
     expect(Number(await view.getAttribute('data-draw-calls'))).toBeGreaterThan(5);
@@ -46,9 +48,10 @@ describe('rooms on a project', () => {
     await page.goto(`/projects/${projectId}`);
     await page.getByLabel('Plan file to import').setInputFiles({ name: 'living-room.json', mimeType: 'application/json', buffer: Buffer.from(planText) });
     await page.getByRole('heading', { name: 'Living room' }).waitFor();
+    await page.getByRole('button', { name: /Check/ }).click();
     await page.getByRole('row', { name: /Net wall area 35\.20 m²/ }).waitFor();
     const download = page.waitForEvent('download');
-    await page.getByRole('link', { name: 'Download plan file' }).click();
+    await page.getByRole('link', { name: 'Plan file' }).click();
     const file = await download;
     expect(file.suggestedFilename()).toBe('living-room.plan.json');
 
@@ -58,7 +61,7 @@ describe('rooms on a project', () => {
     await context.close();
   });
 
-  it('two tabs saving the same room: the second sees the conflict and loses neither change', async () => {
+  it('two tabs changing the same room: the second sees the conflict and loses neither change', async () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Conflict Studio');
     const projectId = await newProject(page, 'Two tabs');
@@ -76,20 +79,21 @@ describe('rooms on a project', () => {
     await tabA.goto(url);
     await tabB.goto(url);
     await tabA.getByLabel('Ceiling height').fill('270');
-    await tabA.getByRole('button', { name: 'Save room' }).click();
-    await tabA.getByText('Saved').waitFor();
+    await tabA.getByLabel('Ceiling height').press('Enter');
+    await tabA.locator('[data-testid=save-state][data-state=saved]').waitFor();
+    await expect.poll(() => tabA.getByTestId('save-state').textContent()).toBe('All changes saved');
 
-    await tabB.getByLabel('Room name').fill('Entrance hall');
-    await tabB.getByRole('button', { name: 'Save room' }).click();
-    await tabB.getByText(/Someone saved this room after you opened it/).waitFor();
-    // Their change is shown, ours is still in the form.
-    expect(await tabB.getByText(/set the ceiling to 270 cm/).isVisible()).toBe(true);
-    expect(await tabB.getByLabel('Room name').inputValue()).toBe('Entrance hall');
-    await tabB.getByRole('button', { name: 'Keep mine' }).click();
-    await tabB.getByText('Saved').waitFor();
+    await tabB.getByLabel('Wall 1', { exact: true }).fill('320');
+    await tabB.getByLabel('Wall 1', { exact: true }).press('Enter');
+    await tabB.getByText(/Someone else saved this room’s walls and openings/).waitFor({ timeout: 10000 });
+    await tabB.getByRole('button', { name: 'Keep mine on top of theirs' }).click();
+    await tabB.locator('[data-testid=save-state][data-state=saved]').waitFor({ timeout: 10000 });
+    // Both changes are in the room: B's wall, A's ceiling.
+    expect(await tabB.getByLabel('Ceiling height').inputValue()).toBe('270 cm');
 
     await tabA.reload();
-    await tabA.getByRole('heading', { name: 'Entrance hall' }).waitFor();
+    await tabA.getByLabel('Wall 1', { exact: true }).waitFor();
+    expect(await tabA.getByLabel('Wall 1', { exact: true }).inputValue()).toBe('320 cm');
     expect(await tabA.getByLabel('Ceiling height').inputValue()).toBe('270 cm');
     await context.close();
   });

@@ -1,7 +1,7 @@
 import { useParams } from 'react-router';
-import { RoomPage } from '../../features/rooms/components/room-page';
+import { EditorPage } from '../../features/rooms/editor/editor-page';
 
 export function RoomRoute() {
   const { projectId = '', roomId = '' } = useParams();
-  return <RoomPage projectId={projectId} roomId={roomId} />;
+  return <EditorPage projectId={projectId} roomId={roomId} />;
 }

@@ -1,0 +1,404 @@
+import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent as ReactKeyboardEvent } from 'react';
+import { Link } from 'react-router';
+import { holdPiece, movePiece, NUDGE_LARGE_STEP_MM, NUDGE_STEP_MM, removeOpening, removePiece, rotatePiece, updateOpening } from '../../../../shared/commands';
+import type { LengthUnit } from '../../../../shared/units/length';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { Notice, Spinner } from '../../../components/ui/layout';
+import { errorMessage } from '../../../lib/api';
+import { useCanEdit } from '../../../lib/session';
+import { useRoom, type RoomDetail } from '../api/rooms';
+import { TakeoffTable } from '../components/takeoff-table';
+import { FurnishPanel } from './furnish-panel';
+import { OpeningsPanel } from './openings-panel';
+import { OptionsBar } from './options-bar';
+import { OutlinePanel } from './outline-panel';
+import { PlanView } from './plan-view';
+import type { Selection } from './plan-geometry';
+import { EDITOR_STEPS, type EditorStep } from './steps';
+import { useRoomEditor, type SaveState } from './use-room-editor';
+
+const RoomView = lazy(() => import('../../../scene/room-view'));
+
+const UNIT_KEY = 'parlour:length-unit';
+type Layout = 'both' | 'plan' | '3d';
+
+export function EditorPage({ projectId, roomId }: { projectId: string; roomId: string }) {
+  const room = useRoom(roomId);
+  const canEdit = useCanEdit();
+  if (room.isPending) return <div className="px-6"><Spinner label="Opening the room…" /></div>;
+  if (room.isError) {
+    return (
+      <div className="mx-auto flex max-w-6xl flex-col gap-4 px-6 py-10">
+        <Notice tone="error">{errorMessage(room.error)}</Notice>
+        <Link to={`/projects/${projectId}`} className="font-semibold text-pine">Back to the project</Link>
+      </div>
+    );
+  }
+  return <Editor key={roomId} projectId={projectId} detail={room.data} readOnly={!canEdit} />;
+}
+
+const SAVE_TEXT: Record<SaveState, string> = {
+  saved: 'All changes saved',
+  unsaved: 'Unsaved changes',
+  saving: 'Saving…',
+  retrying: 'Cannot reach the server — trying again',
+  conflict: 'Not saved: see above',
+};
+
+function Editor({ projectId, detail, readOnly }: { projectId: string; detail: RoomDetail; readOnly: boolean }) {
+  const editor = useRoomEditor(detail, readOnly);
+  const [step, setStep] = useState<EditorStep>(readOnly ? 'furnish' : 'outline');
+  const [optionId, setOptionId] = useState(detail.options[0]?.id ?? '');
+  const [selection, setSelection] = useState<Selection>(null);
+  const [layout, setLayout] = useState<Layout>('both');
+  const [split, setSplit] = useState(0.55);
+  const [unit, setUnit] = useState<LengthUnit>(() => (localStorage.getItem(UNIT_KEY) as LengthUnit | null) ?? 'cm');
+  const [drawing, setDrawing] = useState(false);
+  const [preview, setPreview] = useState<[number, number][] | null>(null);
+  const [help, setHelp] = useState(false);
+  const [renaming, setRenaming] = useState(false);
+  const splitHost = useRef<HTMLDivElement>(null);
+
+  const option = editor.doc.options[optionId] ?? Object.values(editor.doc.options)[0];
+  const activeOptionId = editor.doc.options[optionId] ? optionId : Object.keys(editor.doc.options)[0];
+  const pieces = option?.pieces ?? [];
+  const newId = useCallback((prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`, []);
+
+  useEffect(() => localStorage.setItem(UNIT_KEY, unit), [unit]);
+
+  // Keys for the whole editor, unless the designer is typing in a field.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const target = e.target as HTMLElement;
+      if (target.closest('input, textarea, select, [contenteditable=true], dialog[open]')) return;
+      const mod = e.ctrlKey || e.metaKey;
+      if (mod && e.key.toLowerCase() === 'z') {
+        e.preventDefault();
+        if (e.shiftKey) editor.redo();
+        else editor.undo();
+        return;
+      }
+      if (mod && e.key.toLowerCase() === 'y') {
+        e.preventDefault();
+        editor.redo();
+        return;
+      }
+      if (e.key === '?') {
+        setHelp(true);
+        return;
+      }
+      if (e.key === 'Escape') {
+        setSelection(null);
+        setDrawing(false);
+        return;
+      }
+      if (readOnly || !selection) return;
+      const step = e.shiftKey ? NUDGE_LARGE_STEP_MM : NUDGE_STEP_MM;
+      const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, -step], ArrowDown: [0, step] };
+      if (selection.kind === 'piece') {
+        const piece = pieces.find((p) => p.id === selection.id);
+        if (!piece) return;
+        if (arrows[e.key] && piece.placed) {
+          e.preventDefault();
+          editor.run(movePiece(activeOptionId, piece.id, piece.x + arrows[e.key][0], piece.y + arrows[e.key][1]), { gesture: `nudge-${piece.id}` });
+        } else if (e.key === 'Delete' || e.key === 'Backspace') {
+          e.preventDefault();
+          if (editor.run(removePiece(activeOptionId, piece.id))) setSelection(null);
+        } else if (e.key.toLowerCase() === 'r') {
+          e.preventDefault();
+          editor.run(rotatePiece(activeOptionId, piece.id, piece.rotation + (e.shiftKey ? -15 : 15)));
+        } else if (e.key.toLowerCase() === 'h') {
+          e.preventDefault();
+          editor.run(holdPiece(activeOptionId, piece.id));
+        }
+      } else if (selection.kind === 'opening') {
+        const opening = editor.doc.shell.openings.find((o) => o.id === selection.id);
+        if (!opening) return;
+        if (e.key === 'ArrowLeft' || e.key === 'ArrowRight') {
+          e.preventDefault();
+          editor.run(updateOpening(opening.id, { offset: Math.max(0, opening.offset + (e.key === 'ArrowLeft' ? -step : step)) }), { gesture: `nudge-${opening.id}` });
+        } else if (e.key === 'Delete' || e.key === 'Backspace') {
+          e.preventDefault();
+          if (editor.run(removeOpening(opening.id))) setSelection(null);
+        }
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [editor, selection, pieces, readOnly, activeOptionId]);
+
+  // Tab inside the plan walks through the pieces; past the last one, focus moves on as usual.
+  const onPlanKeyDown = (e: ReactKeyboardEvent) => {
+    if (e.key !== 'Tab' || pieces.length === 0) return;
+    const index = selection?.kind === 'piece' ? pieces.findIndex((p) => p.id === selection.id) : -1;
+    const next = index + (e.shiftKey ? -1 : 1);
+    if (next < 0 || next >= pieces.length) {
+      setSelection(null);
+      return;
+    }
+    e.preventDefault();
+    setSelection({ kind: 'piece', id: pieces[next].id });
+  };
+
+  const chooseStep = (s: EditorStep) => {
+    setStep(s);
+    setDrawing(false);
+    setPreview(null);
+  };
+
+  const panel = useMemo(() => {
+    if (!option) return null;
+    switch (step) {
+      case 'outline':
+        return <OutlinePanel shell={editor.doc.shell} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} onPreview={setPreview} onDraw={() => setDrawing(true)} />;
+      case 'openings':
+        return <OpeningsPanel shell={editor.doc.shell} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
+      case 'furnish':
+        return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
+      case 'finishes':
+        return <p className="text-sm text-ink-soft">Finishes for this option: choose a surface on the plan, then a finish from the library.</p>;
+      case 'check':
+        return <TakeoffTable shell={editor.doc.shell} />;
+    }
+  }, [step, editor.doc.shell, editor.run, unit, readOnly, selection, option, activeOptionId, pieces, newId]);
+
+  const startSplitDrag = (e: React.PointerEvent) => {
+    const host = splitHost.current;
+    if (!host) return;
+    (e.target as Element).setPointerCapture(e.pointerId);
+    const rect = host.getBoundingClientRect();
+    const move = (ev: PointerEvent) => setSplit(Math.min(0.8, Math.max(0.2, (ev.clientX - rect.left) / rect.width)));
+    const up = () => {
+      window.removeEventListener('pointermove', move);
+      window.removeEventListener('pointerup', up);
+    };
+    window.addEventListener('pointermove', move);
+    window.addEventListener('pointerup', up);
+  };
+
+  return (
+    <div className="flex h-[calc(100vh-4rem)] min-h-[600px] flex-col">
+      {/* Top bar: where we are, options, saving */}
+      <div className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-line bg-paper px-4 py-2">
+        <div className="min-w-0">
+          <Link to={`/projects/${projectId}`} className="text-xs text-ink-faint hover:text-ink hover:underline">Back to the project</Link>
+          <div className="flex items-center gap-2">
+            <h1 className="truncate text-lg font-bold">{editor.roomName}</h1>
+            {!readOnly && <button type="button" className="text-xs font-semibold text-pine hover:underline" onClick={() => setRenaming(true)}>Rename</button>}
+          </div>
+        </div>
+        <OptionsBar editor={editor} optionId={activeOptionId} onChoose={(id) => { setOptionId(id); setSelection(null); }} readOnly={readOnly} />
+        <div className="ml-auto flex items-center gap-2">
+          <span role="status" data-testid="save-state" data-state={editor.saveState} className={`text-xs font-medium ${editor.saveState === 'saved' ? 'text-ink-faint' : editor.saveState === 'conflict' || editor.saveState === 'retrying' ? 'text-clay' : 'text-ochre'}`}>
+            {readOnly ? 'Read only' : SAVE_TEXT[editor.saveState]}
+          </span>
+          {!readOnly && (
+            <>
+              <Button size="sm" variant="quiet" disabled={!editor.canUndo} onClick={editor.undo} title={editor.undoLabel ? `Undo: ${editor.undoLabel}` : 'Nothing to undo'} aria-label="Undo">Undo</Button>
+              <Button size="sm" variant="quiet" disabled={!editor.canRedo} onClick={editor.redo} title={editor.redoLabel ? `Redo: ${editor.redoLabel}` : 'Nothing to redo'} aria-label="Redo">Redo</Button>
+            </>
+          )}
+          <label className="sr-only" htmlFor="unit">Units</label>
+          <select id="unit" className="h-8 rounded-lg border border-line-strong bg-white px-2 text-sm" value={unit} onChange={(e) => setUnit(e.target.value as LengthUnit)}>
+            <option value="cm">cm</option>
+            <option value="mm">mm</option>
+            <option value="m">m</option>
+            <option value="ftin">ft in</option>
+          </select>
+          <a className="text-sm font-semibold text-pine hover:underline" href={`/api/rooms/${detail.room.id}/plan-file?optionId=${activeOptionId}`} download>Plan file</a>
+          <Button size="sm" variant="quiet" onClick={() => setHelp(true)} aria-label="Keys">Keys</Button>
+        </div>
+      </div>
+
+      {/* Banners */}
+      <div className="flex flex-col gap-2 px-4 empty:hidden [&:not(:empty)]:py-2">
+        {editor.conflict && (
+          <Notice tone="warn">
+            <p>Someone else saved this {editor.conflict.part === 'room' ? 'room’s walls and openings' : 'option'} while you were working. Your changes are still here, not saved.</p>
+            <div className="mt-2 flex flex-wrap items-center gap-2">
+              <Button size="sm" variant="primary" onClick={editor.keepMine}>Keep mine on top of theirs</Button>
+              <Button size="sm" onClick={editor.loadTheirs}>Load theirs, drop mine</Button>
+            </div>
+          </Notice>
+        )}
+        {editor.restored === 'restored' && (
+          <Notice tone="info">
+            We brought back changes from your last visit that had not been saved yet; they are being saved now.{' '}
+            <button type="button" className="font-semibold underline" onClick={editor.dismissRestored}>OK</button>
+          </Notice>
+        )}
+        {editor.restored === 'stale' && (
+          <Notice tone="warn">
+            <p>You have unsaved changes from an earlier visit, but the room has changed since.</p>
+            <div className="mt-2 flex gap-2">
+              <Button size="sm" variant="primary" onClick={() => editor.resolveStaleDraft(true)}>Use my changes</Button>
+              <Button size="sm" onClick={() => editor.resolveStaleDraft(false)}>Discard them</Button>
+            </div>
+          </Notice>
+        )}
+        {editor.message && (
+          <Notice tone="error">
+            {editor.message} <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>Dismiss</button>
+          </Notice>
+        )}
+        {drawing && (
+          <Notice tone="info">
+            Click each corner of the room on the plan; click the first corner again to close it. Corners keep to 15° turns unless you hold Shift. Esc stops.
+          </Notice>
+        )}
+      </div>
+
+      <div className="flex min-h-0 flex-1">
+        {/* Steps */}
+        <nav aria-label="Steps" className="flex w-40 shrink-0 flex-col gap-1 border-r border-line bg-paper p-3">
+          {EDITOR_STEPS.map((s, i) => (
+            <button
+              key={s.id}
+              type="button"
+              aria-current={step === s.id ? 'step' : undefined}
+              onClick={() => chooseStep(s.id)}
+              className="rounded-lg px-3 py-2 text-left hover:bg-sand aria-[current=step]:bg-pine-wash"
+            >
+              <span className="block text-sm font-bold text-ink"><span className="mr-1.5 text-ink-faint">{i + 1}</span>{s.label}</span>
+              <span className="block text-xs leading-snug text-ink-faint">{s.hint}</span>
+            </button>
+          ))}
+        </nav>
+
+        {/* Panel for the step and the selection */}
+        <aside aria-label={`${EDITOR_STEPS.find((s) => s.id === step)?.label} step`} className="w-80 shrink-0 overflow-y-auto border-r border-line bg-paper p-4">
+          <h2 className="mb-3 text-base font-bold">{EDITOR_STEPS.find((s) => s.id === step)?.label}</h2>
+          {panel}
+        </aside>
+
+        {/* Plan and 3D preview */}
+        <div ref={splitHost} className="relative flex min-w-0 flex-1">
+          <div className="absolute top-2 right-2 z-10 flex gap-1 rounded-lg border border-line bg-white/90 p-1 shadow-sm">
+            {(['plan', 'both', '3d'] as const).map((l) => (
+              <button key={l} type="button" aria-pressed={layout === l} onClick={() => setLayout(l)} className="rounded-md px-2.5 py-1 text-xs font-semibold text-ink-soft aria-pressed:bg-pine aria-pressed:text-white">
+                {l === 'plan' ? 'Plan' : l === 'both' ? 'Both' : '3D'}
+              </button>
+            ))}
+          </div>
+          {layout !== '3d' && option && (
+            <div className="min-w-0 bg-white" style={{ flexBasis: layout === 'both' ? `${split * 100}%` : '100%' }} tabIndex={0} onKeyDown={onPlanKeyDown} aria-label="Plan" role="group">
+              <PlanView
+                shell={editor.doc.shell}
+                optionId={activeOptionId}
+                pieces={pieces}
+                step={step}
+                selection={selection}
+                onSelect={setSelection}
+                run={editor.run}
+                finishGesture={editor.finishGesture}
+                readOnly={readOnly}
+                unit={unit}
+                newId={newId}
+                drawing={drawing}
+                onDrawingDone={() => setDrawing(false)}
+                preview={preview}
+              />
+            </div>
+          )}
+          {layout === 'both' && (
+            <div
+              role="separator"
+              aria-orientation="vertical"
+              aria-label="Move the divider between plan and 3D"
+              aria-valuenow={Math.round(split * 100)}
+              aria-valuemin={20}
+              aria-valuemax={80}
+              tabIndex={0}
+              onPointerDown={startSplitDrag}
+              onKeyDown={(e) => {
+                if (e.key === 'ArrowLeft') setSplit((s) => Math.max(0.2, s - 0.05));
+                if (e.key === 'ArrowRight') setSplit((s) => Math.min(0.8, s + 0.05));
+              }}
+              className="w-1.5 shrink-0 cursor-col-resize bg-line hover:bg-pine"
+            />
+          )}
+          {layout !== 'plan' && (
+            <section aria-label="3D preview" className="relative min-w-0 flex-1 bg-sand">
+              <Suspense fallback={<Spinner label="Loading the 3D preview…" />}>
+                <RoomView
+                  shell={editor.doc.shell}
+                  pieces={pieces}
+                  selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
+                  onPieceClick={(id) => setSelection({ kind: 'piece', id })}
+                  className="absolute inset-0"
+                  label={`${editor.roomName} in 3D`}
+                />
+              </Suspense>
+            </section>
+          )}
+        </div>
+      </div>
+
+      {help && <KeysHelp onClose={() => setHelp(false)} />}
+      {renaming && <RenameRoom name={editor.roomName} onClose={() => setRenaming(false)} onSave={editor.renameRoom} />}
+    </div>
+  );
+}
+
+const KEYS: [string, string][] = [
+  ['Ctrl Z  /  ⌘ Z', 'Undo'],
+  ['Ctrl Shift Z  /  ⌘ Shift Z', 'Redo'],
+  ['Arrow keys', 'Nudge the selection 1 cm (with Shift, 10 cm)'],
+  ['R  /  Shift R', 'Turn the selected piece 15° clockwise / anticlockwise'],
+  ['H', 'Move the selected piece to the holding area'],
+  ['Delete', 'Remove the selection'],
+  ['Esc', 'Clear the selection, stop drawing'],
+  ['Tab (on the plan)', 'Go through the pieces one by one'],
+  ['Alt while dragging', 'Do not snap to walls or pieces'],
+  ['Shift while turning', 'Turn freely instead of 15° steps'],
+  ['?', 'Show these keys'],
+];
+
+function KeysHelp({ onClose }: { onClose: () => void }) {
+  return (
+    <Dialog open onClose={onClose} title="Keys in the room editor" footer={<Button variant="primary" onClick={onClose}>Close</Button>}>
+      <table className="w-full text-sm">
+        <tbody>
+          {KEYS.map(([k, v]) => (
+            <tr key={k} className="border-b border-line last:border-0">
+              <th scope="row" className="py-2 pr-4 text-left font-semibold whitespace-nowrap"><kbd className="rounded bg-sand px-1.5 py-0.5 font-sans">{k}</kbd></th>
+              <td className="py-2 text-ink-soft">{v}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </Dialog>
+  );
+}
+
+function RenameRoom({ name, onClose, onSave }: { name: string; onClose: () => void; onSave: (name: string) => Promise<void> }) {
+  const [value, setValue] = useState(name);
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <Dialog open onClose={onClose} title="Rename room">
+      <form
+        className="flex flex-col gap-4"
+        onSubmit={async (e) => {
+          e.preventDefault();
+          try {
+            await onSave(value.trim());
+            onClose();
+          } catch (err) {
+            setError(errorMessage(err));
+          }
+        }}
+      >
+        <label className="flex flex-col gap-1.5 text-sm font-semibold">
+          Room name
+          <input className="h-10 rounded-lg border border-line-strong bg-white px-3 text-[15px] font-normal" value={value} onChange={(e) => setValue(e.target.value)} autoFocus />
+        </label>
+        {error && <Notice tone="error">{error}</Notice>}
+        <div className="flex justify-end gap-2">
+          <Button variant="quiet" onClick={onClose}>Cancel</Button>
+          <Button type="submit" variant="primary">Save</Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}

@@ -1,0 +1,191 @@
+import { useState } from 'react';
+import type { Piece } from '../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../shared/schemas/room';
+import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueKind } from '../../../../shared/catalogue/catalogue';
+import {
+  addPiece, duplicatePiece, holdPiece, placePiece, removePiece, resizePiece, rotatePiece, updatePiece, type Command,
+} from '../../../../shared/commands';
+import { formatLength, type LengthUnit } from '../../../../shared/units/length';
+import { Button } from '../../../components/ui/button';
+import { inputClass, TextField } from '../../../components/ui/field';
+import { LengthField } from '../../../components/ui/length-field';
+import { roomCentre, type Selection } from './plan-geometry';
+
+const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
+  seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', rugs: 'Rugs', other: 'Anything else',
+};
+
+/** Tall pieces can tip: at this height or more, the editor reminds the designer to fix them to the wall (common practice). */
+export const TALL_PIECE_MM = 1200;
+
+export function FurnishPanel({ shell, optionId, pieces, run, unit, readOnly, selection, onSelect, newId }: {
+  shell: RoomShell;
+  optionId: string;
+  pieces: Piece[];
+  run: (c: Command, o?: { gesture?: string }) => boolean;
+  unit: LengthUnit;
+  readOnly: boolean;
+  selection: Selection;
+  onSelect: (s: Selection) => void;
+  newId: (prefix: string) => string;
+}) {
+  const selected = selection?.kind === 'piece' ? pieces.find((p) => p.id === selection.id) : undefined;
+  if (selected) return <PieceProperties key={selected.id} piece={selected} shell={shell} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} />;
+  return <CatalogueList shell={shell} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} heldCount={pieces.filter((p) => !p.placed).length} />;
+}
+
+function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, heldCount }: {
+  shell: RoomShell; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
+  onSelect: (s: Selection) => void; newId: (prefix: string) => string; heldCount: number;
+}) {
+  const [filter, setFilter] = useState('');
+  const add = (kind: CatalogueKind, held: boolean) => {
+    const id = newId('piece');
+    const piece = pieceFromCatalogue(kind, id, roomCentre(shell));
+    if (run(addPiece(optionId, held ? { ...piece, placed: false } : piece))) onSelect({ kind: 'piece', id });
+  };
+  const shown = CATALOGUE.filter((e) => e.name.toLowerCase().includes(filter.trim().toLowerCase()));
+  return (
+    <div className="flex flex-col gap-4">
+      <p className="text-sm text-ink-soft">
+        Drag a piece onto the plan, or add it to the middle of the room. The holding area beside the room keeps pieces you are
+        still finding a place for{heldCount > 0 ? ` (${heldCount} waiting)` : ''}.
+      </p>
+      <label>
+        <span className="sr-only">Find in the catalogue</span>
+        <input className={inputClass} type="search" placeholder="Find a piece, e.g. queen or wardrobe" value={filter} onChange={(e) => setFilter(e.target.value)} />
+      </label>
+      {CATALOGUE_GROUPS.map((group) => {
+        const entries = shown.filter((e) => e.group === group);
+        if (entries.length === 0) return null;
+        return (
+          <section key={group} aria-label={GROUP_LABEL[group]}>
+            <h3 className="mb-1.5 text-xs font-bold tracking-wide text-ink-faint uppercase">{GROUP_LABEL[group]}</h3>
+            <ul className="flex flex-col gap-1">
+              {entries.map((e) => (
+                <li
+                  key={e.kind}
+                  draggable={!readOnly}
+                  onDragStart={(ev) => {
+                    ev.dataTransfer.setData('application/x-parlour-catalogue', e.kind);
+                    ev.dataTransfer.effectAllowed = 'copy';
+                  }}
+                  className={`group flex items-center gap-2 rounded-lg border border-line bg-white px-3 py-2 ${readOnly ? '' : 'cursor-grab hover:border-pine'}`}
+                  title={`${e.source}${e.note ? ` · ${e.note}` : ''}`}
+                >
+                  <div className="min-w-0 flex-1">
+                    <div className="truncate text-sm font-semibold">{e.name}</div>
+                    <div className="text-xs text-ink-faint tabular-nums">
+                      {formatLength(e.width, unit)} × {formatLength(e.depth, unit)} · {formatLength(e.height, unit)} high
+                    </div>
+                  </div>
+                  {!readOnly && (
+                    <>
+                      <Button size="sm" variant="quiet" onClick={() => add(e.kind as CatalogueKind, true)} aria-label={`Put a ${e.name} in the holding area`} title="Put it in the holding area">Hold</Button>
+                      <Button size="sm" onClick={() => add(e.kind as CatalogueKind, false)} aria-label={`Add ${e.name}`}>Add</Button>
+                    </>
+                  )}
+                </li>
+              ))}
+            </ul>
+          </section>
+        );
+      })}
+    </div>
+  );
+}
+
+function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect, newId }: {
+  piece: Piece; shell: RoomShell; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
+  onSelect: (s: Selection) => void; newId: (prefix: string) => string;
+}) {
+  const [name, setName] = useState(piece.name);
+  const [price, setPrice] = useState(piece.price == null ? '' : String(piece.price));
+  const [link, setLink] = useState(piece.supplierUrl ?? '');
+  const [linkError, setLinkError] = useState<string | null>(null);
+  const patch = (p: Parameters<typeof updatePiece>[2]) => !readOnly && run(updatePiece(optionId, piece.id, p));
+  const turnBy = (deg: number) => !readOnly && run(rotatePiece(optionId, piece.id, piece.rotation + deg));
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex items-center justify-between gap-2">
+        <button type="button" className="text-sm font-semibold text-pine hover:underline" onClick={() => onSelect(null)}>← Catalogue</button>
+        <span className="text-xs text-ink-faint">{piece.placed ? 'In the room' : 'In the holding area'}</span>
+      </div>
+      <TextField label="Name" value={name} disabled={readOnly} onChange={(e) => setName(e.target.value)} onBlur={() => name.trim() && name !== piece.name && patch({ name: name.trim() })} />
+      <div className="grid grid-cols-3 gap-2">
+        <LengthField commit="blur" label="Width" unit={unit} valueMm={piece.width} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { width: v }))} />
+        <LengthField commit="blur" label="Depth" unit={unit} valueMm={piece.depth} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { depth: v }))} />
+        <LengthField commit="blur" label="Height" unit={unit} valueMm={piece.height} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { height: v }))} />
+      </div>
+      <div className="grid grid-cols-2 gap-2">
+        <div className="flex flex-col gap-1.5">
+          <label htmlFor="piece-turn" className="text-sm font-semibold">Turn</label>
+          <div className="flex items-center gap-1">
+            <Button size="sm" onClick={() => turnBy(-15)} aria-label="Turn 15° anticlockwise" disabled={readOnly}>↺</Button>
+            <input
+              id="piece-turn"
+              className={`${inputClass} h-8 px-2 text-center`}
+              inputMode="decimal"
+              value={Math.round(piece.rotation * 10) / 10}
+              disabled={readOnly}
+              onChange={(e) => Number.isFinite(Number(e.target.value)) && e.target.value !== '' && run(rotatePiece(optionId, piece.id, Number(e.target.value)))}
+            />
+            <Button size="sm" onClick={() => turnBy(15)} aria-label="Turn 15° clockwise" disabled={readOnly}>↻</Button>
+          </div>
+        </div>
+        <LengthField commit="blur" label="Above the floor" unit={unit} valueMm={piece.elevation} onChange={(v) => v !== null && patch({ elevation: v })} />
+      </div>
+      <fieldset className="flex flex-col gap-1.5">
+        <legend className="text-sm font-semibold">The client</legend>
+        <div className="flex gap-2">
+          {(['existing', 'new'] as const).map((s) => (
+            <label key={s} className={`flex flex-1 cursor-pointer items-center justify-center rounded-lg border px-3 py-2 text-sm font-semibold ${piece.status === s ? 'border-pine bg-pine-wash text-pine-dark' : 'border-line-strong bg-white'}`}>
+              <input type="radio" className="sr-only" name="piece-status" checked={piece.status === s} disabled={readOnly} onChange={() => patch({ status: s })} />
+              {s === 'existing' ? 'Already owns it' : 'New piece'}
+            </label>
+          ))}
+        </div>
+      </fieldset>
+      <div className="grid grid-cols-[auto_1fr] items-start gap-3">
+        <label className="flex flex-col gap-1.5 text-sm font-semibold">
+          Colour
+          <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.colour ?? '#d9cfc0'} disabled={readOnly} onChange={(e) => patch({ colour: e.target.value })} />
+        </label>
+        <TextField label="Price" inputMode="decimal" value={price} disabled={readOnly} onChange={(e) => setPrice(e.target.value)} onBlur={() => {
+          const v = price.trim() === '' ? null : Number(price.replace(',', '.'));
+          if (v === null || (Number.isFinite(v) && v >= 0)) patch({ price: v });
+        }} hint="Per piece, your currency" />
+      </div>
+      <TextField label="Supplier link" type="url" value={link} disabled={readOnly} error={linkError ?? undefined} onChange={(e) => setLink(e.target.value)} onBlur={() => {
+        if (link.trim() === '') return patch({ supplierUrl: null });
+        try {
+          new URL(link.trim());
+          setLinkError(null);
+          patch({ supplierUrl: link.trim() });
+        } catch {
+          setLinkError('Paste a full link, starting with https://');
+        }
+      }} />
+      {piece.height >= TALL_PIECE_MM && (
+        <p className="rounded-lg bg-ochre-wash px-3 py-2 text-sm text-ochre">
+          A tall piece can tip over: fix it to the wall, especially where children live (see the furniture maker’s anchoring kit).
+        </p>
+      )}
+      {!readOnly && (
+        <div className="flex flex-wrap gap-2">
+          <Button size="sm" onClick={() => { const id = newId('piece'); if (run(duplicatePiece(optionId, piece.id, id))) onSelect({ kind: 'piece', id }); }}>Duplicate</Button>
+          {piece.placed ? (
+            <Button size="sm" onClick={() => run(holdPiece(optionId, piece.id))}>Move to the holding area</Button>
+          ) : (
+            <Button size="sm" onClick={() => {
+              const at = roomCentre(shell);
+              run(placePiece(optionId, piece.id, at[0], at[1]));
+            }}>Place in the room</Button>
+          )}
+          <Button size="sm" variant="danger" onClick={() => run(removePiece(optionId, piece.id)) && onSelect(null)}>Remove</Button>
+        </div>
+      )}
+    </div>
+  );
+}

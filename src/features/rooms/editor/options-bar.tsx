@@ -1,0 +1,111 @@
+import { useState, type FormEvent } from 'react';
+import { optionLabel, type OptionRecord } from '../../../../shared/schemas/room-api';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { TextAreaField, TextField } from '../../../components/ui/field';
+import { Notice } from '../../../components/ui/layout';
+import { errorMessage } from '../../../lib/api';
+import type { RoomEditor } from './use-room-editor';
+
+/** Option tabs across the top: switch, add, duplicate, rename, reorder and delete options. */
+export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
+  editor: RoomEditor;
+  optionId: string;
+  onChoose: (id: string) => void;
+  readOnly: boolean;
+}) {
+  const [dialog, setDialog] = useState<'rename' | 'delete' | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const current = editor.options.find((o) => o.id === optionId);
+
+  const act = async (f: () => Promise<unknown>) => {
+    setBusy(true);
+    setError(null);
+    try {
+      await f();
+    } catch (err) {
+      setError(errorMessage(err));
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <div className="flex min-w-0 flex-1 flex-wrap items-center gap-1">
+      <div role="tablist" aria-label="Options" className="flex flex-wrap gap-1">
+        {editor.options.map((o) => (
+          <button
+            key={o.id}
+            role="tab"
+            aria-selected={o.id === optionId}
+            onClick={() => onChoose(o.id)}
+            className="max-w-64 truncate rounded-lg px-3 py-1.5 text-sm font-semibold text-ink-soft hover:bg-sand aria-selected:bg-pine aria-selected:text-white"
+          >
+            {optionLabel(o.position, o.name)}
+          </button>
+        ))}
+      </div>
+      {!readOnly && current && (
+        <div className="ml-1 flex flex-wrap items-center gap-1">
+          <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>New option</Button>
+          <Button size="sm" variant="quiet" onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate</Button>
+          <Button size="sm" variant="quiet" onClick={() => setDialog('rename')}>Rename</Button>
+          <Button size="sm" variant="quiet" aria-label="Move option left" disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>←</Button>
+          <Button size="sm" variant="quiet" aria-label="Move option right" disabled={current.position === editor.options.length - 1} onClick={() => act(() => editor.moveOption(optionId, 1))}>→</Button>
+          <Button size="sm" variant="quiet" disabled={editor.options.length <= 1} onClick={() => setDialog('delete')}>Delete</Button>
+        </div>
+      )}
+      {error && <div className="w-full"><Notice tone="error">{error}</Notice></div>}
+      {dialog === 'rename' && current && <RenameOption option={current} editor={editor} onClose={() => setDialog(null)} />}
+      {dialog === 'delete' && current && (
+        <Dialog
+          open
+          onClose={() => setDialog(null)}
+          title={`Delete ${optionLabel(current.position, current.name)}?`}
+          footer={
+            <>
+              <Button variant="quiet" onClick={() => setDialog(null)}>Keep it</Button>
+              <Button variant="danger" onClick={() => act(async () => {
+                const next = editor.options.find((o) => o.id !== current.id);
+                await editor.deleteOption(current.id);
+                if (next) onChoose(next.id);
+                setDialog(null);
+              })}>Delete option</Button>
+            </>
+          }
+        >
+          <p className="text-ink-soft">Its pieces and finishes go with it. The room’s walls and openings stay, as they belong to every option.</p>
+        </Dialog>
+      )}
+    </div>
+  );
+}
+
+function RenameOption({ option, editor, onClose }: { option: OptionRecord; editor: RoomEditor; onClose: () => void }) {
+  const [name, setName] = useState(option.name);
+  const [note, setNote] = useState(option.note);
+  const [error, setError] = useState<string | null>(null);
+  const submit = async (e: FormEvent) => {
+    e.preventDefault();
+    try {
+      await editor.saveOptionMeta(option.id, { name: name.trim(), note });
+      onClose();
+    } catch (err) {
+      setError(errorMessage(err));
+    }
+  };
+  return (
+    <Dialog open onClose={onClose} title="Name this option">
+      <form onSubmit={submit} className="flex flex-col gap-4">
+        <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} placeholder="e.g. Calm and light" hint="The client sees it beside the option’s letter." autoFocus />
+        <TextAreaField label="Note for the client" value={note} onChange={(e) => setNote(e.target.value)} hint="A line or two on what this option is about." />
+        {error && <Notice tone="error">{error}</Notice>}
+        <div className="flex justify-end gap-2">
+          <Button variant="quiet" onClick={onClose}>Cancel</Button>
+          <Button type="submit" variant="primary">Save</Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}

@@ -1,0 +1,94 @@
+// Pure helpers for the plan view: what to draw where, in plan mm (x right, y down, as in SVG).
+import type { Piece } from '../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../shared/schemas/room';
+import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../shared/geometry/walls';
+import { placeShellOpenings } from '../../../../shared/geometry/openings';
+import { boundsMm, type Bounds2 } from '../../../../shared/geometry/polygon';
+import { pieceFootprintMm } from '../../../../shared/commands';
+
+/** Space round the room on the plan, for dimension lines and handles. */
+export const PLAN_MARGIN_MM = 900;
+/** Gap between the room and the holding area. */
+export const HOLDING_GAP_MM = 800;
+/** Space between pieces waiting in the holding area. */
+export const HOLDING_SPACING_MM = 250;
+/** Dimension lines sit this far outside the wall's outer face. */
+export const DIMENSION_OFFSET_MM = 350;
+
+export type Selection =
+  | { kind: 'piece'; id: string }
+  | { kind: 'opening'; id: string }
+  | { kind: 'wall'; index: number }
+  | null;
+
+export interface PlanLayout {
+  walls: WallLayout[];
+  outer: [number, number][];
+  roomBounds: Bounds2;
+  openings: ReturnType<typeof placeShellOpenings>;
+  holding: { x: number; y: number; width: number; height: number; slots: Record<string, [number, number]> };
+  viewBox: { x: number; y: number; w: number; h: number };
+}
+
+/** Walls, openings, the holding area's slots and the view box for a shell and its option's pieces. */
+export function planLayout(shell: RoomShell, pieces: readonly Piece[]): PlanLayout {
+  const walls = layoutShellWalls(shell);
+  const outer = outerRingMm(walls);
+  const roomBounds = boundsMm(outer);
+  const held = pieces.filter((p) => !p.placed);
+  const holdingWidth = Math.max(1600, ...held.map((p) => Math.max(p.width, p.depth) + 2 * HOLDING_SPACING_MM));
+  const x = roomBounds.maxX + HOLDING_GAP_MM;
+  const slots: Record<string, [number, number]> = {};
+  let y = roomBounds.minY + HOLDING_SPACING_MM;
+  for (const p of held) {
+    slots[p.id] = [x + holdingWidth / 2, y + p.depth / 2];
+    y += p.depth + HOLDING_SPACING_MM;
+  }
+  const holdingHeight = Math.max(roomBounds.maxY - roomBounds.minY, y - roomBounds.minY);
+  const viewBox = {
+    x: roomBounds.minX - PLAN_MARGIN_MM,
+    y: roomBounds.minY - PLAN_MARGIN_MM,
+    w: x + holdingWidth - roomBounds.minX + 2 * PLAN_MARGIN_MM,
+    h: holdingHeight + 2 * PLAN_MARGIN_MM,
+  };
+  return { walls, outer, roomBounds, openings: placeShellOpenings(shell), holding: { x, y: roomBounds.minY, width: holdingWidth, height: holdingHeight, slots }, viewBox };
+}
+
+/** SVG path data of a closed ring. */
+export function ringPath(points: readonly (readonly [number, number])[]): string {
+  return points.map((p, i) => `${i === 0 ? 'M' : 'L'}${p[0]} ${p[1]}`).join(' ') + ' Z';
+}
+
+/** The four corners of a piece's box on the plan. */
+export function pieceRing(piece: Pick<Piece, 'x' | 'y' | 'width' | 'depth' | 'rotation'>): [number, number][] {
+  return pieceFootprintMm(piece).map((p) => [p[0], p[1]] as [number, number]);
+}
+
+/** Whether a plan point is inside the holding area. */
+export function inHolding(layout: PlanLayout, point: readonly [number, number]): boolean {
+  const h = layout.holding;
+  return point[0] >= h.x - HOLDING_GAP_MM / 2 && point[1] >= h.y - PLAN_MARGIN_MM && point[1] <= h.y + h.height + PLAN_MARGIN_MM;
+}
+
+/** Point-in-polygon (even-odd), plan mm. */
+export function insideOutline(outline: readonly (readonly [number, number])[], p: readonly [number, number]): boolean {
+  let inside = false;
+  for (let i = 0, j = outline.length - 1; i < outline.length; j = i++) {
+    const [xi, yi] = outline[i];
+    const [xj, yj] = outline[j];
+    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}
+
+/** The centre of a room's outline bounds, where a new piece lands. */
+export function roomCentre(shell: RoomShell): [number, number] {
+  const b = boundsMm(shell.outline);
+  const centre: [number, number] = [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2];
+  if (insideOutline(shell.outline, centre)) return centre;
+  // An L or U whose box centre falls outside: use the first corner's inside neighbourhood instead.
+  const [x0, y0] = shell.outline[0];
+  const [x1, y1] = shell.outline[1];
+  const [x2, y2] = shell.outline[shell.outline.length - 1];
+  return [(x0 + x1 + x2) / 3, (y0 + y1 + y2) / 3];
+}
