@@ -17,6 +17,9 @@ import { projectRoomsExtra, roomRoutes } from './features/rooms/rooms.routes';
 import { finishRoutes } from './features/finishes/finishes.routes';
 import { fileRoutes } from './features/files/files.routes';
 import type { FileStorage } from './services/storage/storage';
+import { presentationRoutes } from './features/presentations/presentations.routes';
+import { clientPresentationRoutes } from './features/presentations/client.routes';
+import { mountPresentationPage } from './features/presentations/client-page';
 
 export interface AppDeps {
   db: Db;
@@ -28,7 +31,7 @@ export interface AppDeps {
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
-  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...outboxRoutes];
+  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...presentationRoutes, ...clientPresentationRoutes, ...outboxRoutes];
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -47,6 +50,7 @@ export function createApp(deps: AppDeps): Express {
   if (existsSync(join(dist, 'index.html'))) {
     app.use('/assets', express.static(join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    mountPresentationPage(app, dist);
     app.get('/{*splat}', (_req, res) => {
       res.setHeader('Cache-Control', 'no-cache');
       res.sendFile(join(dist, 'index.html'));

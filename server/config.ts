@@ -1,5 +1,12 @@
 // Configuration from the environment, parsed once with zod; defaults fit the local setup.
+import { randomBytes } from 'node:crypto';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { z } from 'zod';
+
+/** HS256 wants a key at least as long as its hash: 256 bits. */
+const MIN_PRESENTATION_KEY_BYTES = 32;
+const PRESENTATION_KEY_FILE = 'presentation-key';
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -18,9 +25,12 @@ const envSchema = z.object({
     .enum(['true', 'false'])
     .default('false')
     .transform((v) => v === 'true'),
+  // Signs presentation links (hex or base64, at least 256 bits). Without it, one is generated
+  // into DATA_DIR/presentation-key on first start; every instance must share the same key.
+  PRESENTATION_KEY: z.string().trim().min(1).optional(),
 });
 
-export type AppConfig = z.infer<typeof envSchema> & { publicUrl: string };
+export type AppConfig = Omit<z.infer<typeof envSchema>, 'PRESENTATION_KEY'> & { publicUrl: string; presentationKey: Uint8Array };
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const parsed = envSchema.safeParse(env);
@@ -28,6 +38,39 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
-  const c = parsed.data;
-  return { ...c, publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}` };
+  const { PRESENTATION_KEY, ...c } = parsed.data;
+  const presentationKey = PRESENTATION_KEY
+    ? decodeKey(PRESENTATION_KEY, 'PRESENTATION_KEY')
+    : readOrCreateKeyFile(join(c.DATA_DIR, PRESENTATION_KEY_FILE));
+  return { ...c, publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`, presentationKey };
+}
+
+/** Hex when it looks like hex, else base64 or base64url; refuses anything under 256 bits. */
+export function decodeKey(text: string, name: string): Uint8Array {
+  const value = text.trim();
+  let bytes: Buffer;
+  if (/^(?:[0-9a-fA-F]{2})+$/.test(value)) bytes = Buffer.from(value, 'hex');
+  else if (/^[A-Za-z0-9+/_-]+={0,2}$/.test(value)) bytes = Buffer.from(value, 'base64');
+  else throw new Error(`Invalid configuration:\n  ${name}: write the key as hex or base64`);
+  if (bytes.length < MIN_PRESENTATION_KEY_BYTES) {
+    throw new Error(`Invalid configuration:\n  ${name}: needs at least ${MIN_PRESENTATION_KEY_BYTES * 8} bits, this one has ${bytes.length * 8}`);
+  }
+  return new Uint8Array(bytes);
+}
+
+// First start on a machine: a fresh key, readable by this user only. 'wx' makes two processes
+// starting at once agree on one file instead of overwriting each other's.
+function readOrCreateKeyFile(path: string): Uint8Array {
+  try {
+    return decodeKey(readFileSync(path, 'utf8'), path);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== 'ENOENT') throw err;
+  }
+  mkdirSync(join(path, '..'), { recursive: true });
+  try {
+    writeFileSync(path, `${randomBytes(MIN_PRESENTATION_KEY_BYTES).toString('hex')}\n`, { mode: 0o600, flag: 'wx' });
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw err;
+  }
+  return decodeKey(readFileSync(path, 'utf8'), path);
 }

@@ -129,6 +129,58 @@ export interface FinishFilesTable {
   bytes: number;
 }
 
+export interface PresentationsTable {
+  id: Generated<string>;
+  studio_id: string;
+  project_id: string;
+  created_by: string | null;
+  token_id: string; // the token's jti: the link works only while this row says so
+  message: ColumnType<string, string | undefined, string>;
+  show_prices: ColumnType<boolean, boolean | undefined, boolean>;
+  issued_at: Timestamp;
+  token_expires_at: Timestamp;
+  expires_at: Timestamp;
+  withdrawn_at: Date | null;
+  decided_at: Date | null;
+  sent_at: Date | null;
+  sent_to: string | null;
+  first_opened_at: Date | null;
+  last_opened_at: Date | null;
+  open_count: Generated<number>;
+  created_at: Timestamp;
+}
+
+export interface PresentationRoomsTable {
+  presentation_id: string;
+  room_id: string;
+  position: number;
+}
+
+export interface PresentationOptionsTable {
+  presentation_id: string;
+  room_id: string;
+  option_id: string;
+  position: number;
+  view_count: Generated<number>;
+  first_viewed_at: Date | null;
+  last_viewed_at: Date | null;
+}
+
+export interface ChoicesTable {
+  presentation_id: string;
+  room_id: string;
+  option_id: string;
+  comment: string;
+  chosen_at: Timestamp;
+}
+
+export interface PresentationRequestsTable {
+  id: Generated<string>;
+  presentation_id: string;
+  kind: 'choice' | 'view';
+  at: Timestamp;
+}
+
 export interface Database {
   rooms: RoomsTable;
   options: OptionsTable;
@@ -141,6 +193,11 @@ export interface Database {
   projects: ProjectsTable;
   finishes: FinishesTable;
   finish_files: FinishFilesTable;
+  presentations: PresentationsTable;
+  presentation_rooms: PresentationRoomsTable;
+  presentation_options: PresentationOptionsTable;
+  choices: ChoicesTable;
+  presentation_requests: PresentationRequestsTable;
 }
 
 export type Db = Kysely<Database>;

@@ -17,6 +17,7 @@ interface Fixture {
   inviteId: string;
   finishId: string;
   fileName: string;
+  presentationId: string;
 }
 interface Case {
   /** Path parameters naming studio A's own records. */
@@ -63,6 +64,12 @@ const CASES: Record<string, Case> = {
   'patch /api/finishes/:id': { params: (f) => ({ id: f.finishId }), body: () => ({ name: 'Taken' }) },
   'delete /api/finishes/:id': { params: (f) => ({ id: f.finishId }) },
   'get /api/files/:name': { params: (f) => ({ name: f.fileName }) },
+  'get /api/projects/:projectId/presentations': { params: (f) => ({ projectId: f.projectId }) },
+  'post /api/projects/:projectId/presentations': { params: (f) => ({ projectId: f.projectId }), body: () => ({ rooms: [{ roomId: randomUUID(), optionIds: [randomUUID()] }] }) },
+  'post /api/presentations/:id/send': { params: (f) => ({ id: f.presentationId }), body: () => ({}) },
+  'post /api/presentations/:id/withdraw': { params: (f) => ({ id: f.presentationId }) },
+  'post /api/presentations/:id/extend': { params: (f) => ({ id: f.presentationId }), body: () => ({ days: 5 }) },
+  'post /api/projects/:projectId/decide': { params: (f) => ({ projectId: f.projectId }), body: () => ({ presentationId: randomUUID() }) },
 };
 
 const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
@@ -95,6 +102,7 @@ beforeAll(async () => {
   const fileName = `${randomUUID().replaceAll('-', '').repeat(2)}.webp`;
   const { studio_id: studioId } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paint.body.finish.id).executeTakeFirstOrThrow();
   await t.db.insertInto('finish_files').values({ finish_id: paint.body.finish.id, studio_id: studioId, purpose: 'swatch', key: `derived/${fileName}`, width_px: 1, height_px: 1, bytes: 1 }).execute();
+  const presentation = await a.agent.post(`/api/projects/${project.body.project.id}/presentations`).send({ rooms: [{ roomId: room.body.room.id, optionIds: [room.body.options[0].id] }] });
   fixture = {
     clientId: project.body.project.client.id,
     projectId: project.body.project.id,
@@ -104,6 +112,7 @@ beforeAll(async () => {
     inviteId: invite.body.invite.id,
     finishId: paint.body.finish.id,
     fileName,
+    presentationId: presentation.body.presentation.id,
   };
 });
 afterAll(() => t.close());

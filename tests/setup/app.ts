@@ -7,6 +7,9 @@ import { loadConfig } from '../../server/config';
 import { createDb, type Db } from '../../server/db/database';
 import type { MailMessage, Mailer } from '../../server/services/mail/mailer';
 
+/** Signs presentation links in API tests (256 bits, hex); tests craft tokens with it too. */
+export const TEST_PRESENTATION_KEY = '5e'.repeat(32);
+
 export interface TestApp {
   app: Express;
   db: Db;
@@ -18,7 +21,7 @@ export function createTestApp(): TestApp {
   const db = createDb(inject('databaseUrl'), 4);
   const mail: MailMessage[] = [];
   const mailer: Mailer = { send: async (m) => void mail.push(m) };
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent' });
+  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY });
   const app = createApp({ db, mailer, config });
   return { app, db, mail, close: () => db.destroy() };
 }

@@ -1,0 +1,117 @@
+// The client's side: public routes that authorise by the link's token alone. Every refusal is a
+// plain 404 or 410 that says nothing about the presentation behind it.
+import { z } from 'zod';
+import type { Request, Response } from 'express';
+import { choiceBodySchema, viewBodySchema, type ChoiceAnswer, type ClientPresentation } from '../../../shared/schemas/presentation';
+import { optionLabel } from '../../../shared/schemas/room-api';
+import type { RouteContext, RouteDef } from '../../http/routes';
+import { HttpError } from '../../http/errors';
+import { touchProject } from '../projects/projects.repository';
+import {
+  getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordOpened, recordViewed,
+  saveChoice, type PresentationRow,
+} from './presentations.repository';
+import {
+  CHOICE_LIMIT, RATE_WINDOW_MS, VIEW_LIMIT, choiceMail, clientPresentation, linkNotFound, presentationForToken,
+} from './presentations.service';
+
+const roomParam = z.object({ roomId: z.uuid() });
+
+// The token travels in the path; keep it out of Referer headers and caches.
+function privateAnswer(res: Response): void {
+  res.setHeader('Cache-Control', 'no-store');
+  res.setHeader('Referrer-Policy', 'no-referrer');
+}
+
+const tokenOf = (req: Request): string => (typeof req.params.token === 'string' ? req.params.token : '');
+
+// The studio's own members opening the link (to check it) are not the client: their visits and
+// looks are not recorded.
+const isStudioMember = (ctx: RouteContext, p: PresentationRow) => ctx.caller?.studioId === p.studio_id;
+
+function tooMany(res: Response): HttpError {
+  res.setHeader('Retry-After', String(Math.ceil(RATE_WINDOW_MS / 1000)));
+  return new HttpError(429, 'too_many', 'That was a lot of changes in a short time. Please wait a few minutes, then try again.');
+}
+
+async function notifyDesigner(ctx: RouteContext, p: PresentationRow, roomId: string, optionId: string, comment: string): Promise<void> {
+  const { db, mailer, config } = ctx.deps;
+  try {
+    const [project, shown, to] = await Promise.all([
+      projectForPresentation(db, p.studio_id, p.project_id),
+      listShownOptions(db, [p.id]),
+      notifyAddresses(db, p.studio_id, p.created_by),
+    ]);
+    const inRoom = shown.filter((s) => s.room_id === roomId);
+    const index = inRoom.findIndex((s) => s.option_id === optionId);
+    if (!project || index < 0) return;
+    const mail = { clientName: project.client_name, project: project.name, room: inRoom[index].room_name, option: optionLabel(index, inRoom[index].option_name), comment, projectLink: `${config.publicUrl}/projects/${project.id}` };
+    for (const address of to) await mailer.send(choiceMail({ to: address, ...mail }));
+  } catch (err) {
+    // The choice is saved either way; the project page shows it even when the mail is lost.
+    console.error('[presentations] choice notification failed:', (err as Error).message);
+  }
+}
+
+export const clientPresentationRoutes: RouteDef[] = [
+  {
+    method: 'get',
+    path: '/api/p/:token',
+    access: 'public',
+    async handler(ctx): Promise<{ presentation: ClientPresentation }> {
+      privateAnswer(ctx.res);
+      const p = await presentationForToken(ctx.deps.db, ctx.deps.config, tokenOf(ctx.req));
+      if (!isStudioMember(ctx, p)) await recordOpened(ctx.deps.db, p.id, new Date());
+      return { presentation: await clientPresentation(ctx.deps.db, p) };
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/p/:token/views',
+    access: 'public',
+    async handler(ctx) {
+      privateAnswer(ctx.res);
+      const { optionId } = viewBodySchema.parse(ctx.req.body);
+      await ctx.deps.db.transaction().execute(async (trx) => {
+        const p = await presentationForToken(trx, ctx.deps.config, tokenOf(ctx.req), { forUpdate: true });
+        if ((await logRequest(trx, p.id, 'view', new Date(Date.now() - RATE_WINDOW_MS))) > VIEW_LIMIT) throw tooMany(ctx.res);
+        const ok = isStudioMember(ctx, p) ? await isShownOption(trx, p.id, optionId) : await recordViewed(trx, p.id, optionId, new Date());
+        if (!ok) throw new HttpError(404, 'not_found', 'That option is not part of this presentation.');
+      });
+      return undefined;
+    },
+  },
+  {
+    method: 'put',
+    path: '/api/p/:token/rooms/:roomId/choice',
+    access: 'public',
+    async handler(ctx): Promise<ChoiceAnswer> {
+      privateAnswer(ctx.res);
+      const params = roomParam.safeParse(ctx.req.params);
+      const body = choiceBodySchema.parse(ctx.req.body);
+      const result = await ctx.deps.db.transaction().execute(async (trx) => {
+        // Holding the row serialises this link's posts across instances: the count below is exact.
+        const p = await presentationForToken(trx, ctx.deps.config, tokenOf(ctx.req), { forUpdate: true });
+        if (!params.success) throw linkNotFound();
+        const { roomId } = params.data;
+        if ((await logRequest(trx, p.id, 'choice', new Date(Date.now() - RATE_WINDOW_MS))) > CHOICE_LIMIT) throw tooMany(ctx.res);
+        const project = await projectForPresentation(trx, p.studio_id, p.project_id);
+        if (!project) throw linkNotFound();
+        if (project.state === 'decided' || project.state === 'archived') {
+          throw new HttpError(409, 'decided', 'Your designer has confirmed the choices for this project, so they cannot be changed here. Get in touch with them to change anything.');
+        }
+        if (!(await isShownOption(trx, p.id, body.optionId, roomId))) throw new HttpError(404, 'not_found', 'That option is not part of this presentation.');
+        const current = await getChoice(trx, p.id, roomId);
+        if (current && current.option_id === body.optionId && current.comment === body.comment) {
+          return { p, roomId, changed: false, choice: { optionId: current.option_id, comment: current.comment, chosenAt: current.chosen_at.toISOString() } };
+        }
+        const at = new Date();
+        await saveChoice(trx, { presentationId: p.id, roomId, optionId: body.optionId, comment: body.comment, at });
+        await touchProject(trx, p.project_id);
+        return { p, roomId, changed: true, choice: { optionId: body.optionId, comment: body.comment, chosenAt: at.toISOString() } };
+      });
+      if (result.changed) await notifyDesigner(ctx, result.p, result.roomId, body.optionId, body.comment);
+      return { choice: result.choice, changed: result.changed };
+    },
+  },
+];

@@ -1,0 +1,203 @@
+// The designer's side of presentations: make one, send it, watch it, withdraw or extend it, and
+// confirm the client's choices ("Mark as decided").
+import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/common';
+import {
+  LINK_LIFETIME_DAYS, createPresentationSchema, decideProjectSchema, extendPresentationSchema, sendPresentationSchema,
+  type PresentationSummary,
+} from '../../../shared/schemas/presentation';
+import { ALL_ROLES, WRITERS, requireCaller, type RouteContext, type RouteDef } from '../../http/routes';
+import { HttpError, notFound } from '../../http/errors';
+import type { Db } from '../../db/database';
+import { newTokenId, toTokenTime } from '../../services/tokens/presentation-token';
+import { listMembers } from '../studio/members.repository';
+import {
+  getPresentation, insertPresentation, insertShownRooms, listPresentations, projectForPresentation, roomsWithOptions,
+  setProjectState, studioName, updatePresentation, type PresentationRow,
+} from './presentations.repository';
+import { invitationMail, presentationLink, presentationState, presentationSummaries } from './presentations.service';
+
+const DAY_MS = 86_400_000;
+const projectParam = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
+
+async function projectOrThrow(db: Db, studioId: string, projectId: string) {
+  const project = await projectForPresentation(db, studioId, projectId);
+  if (!project) throw notFound('That project');
+  return project;
+}
+
+async function presentationOrThrow(db: Db, studioId: string, id: string) {
+  const p = await getPresentation(db, studioId, id);
+  if (!p) throw notFound('That presentation');
+  return p;
+}
+
+async function summaries(ctx: RouteContext, rows: PresentationRow[]): Promise<PresentationSummary[]> {
+  const caller = requireCaller(ctx);
+  const members = await listMembers(ctx.deps.db, caller.studioId);
+  return presentationSummaries(ctx.deps.db, ctx.deps.config, rows, {
+    // The link opens the client's page and lets its holder choose, so viewers do not get it.
+    withLinks: WRITERS.includes(caller.role),
+    memberNames: new Map(members.map((m) => [m.id, m.name])),
+  });
+}
+
+const one = async (ctx: RouteContext, row: PresentationRow) => ({ presentation: (await summaries(ctx, [row]))[0] });
+
+/** Every room must be the project's, every option that room's; names the first field that is not. */
+async function assertShownRoomsBelong(db: Db, studioId: string, projectId: string, rooms: { roomId: string; optionIds: string[] }[]) {
+  const rows = await roomsWithOptions(db, studioId, projectId, rooms.map((r) => r.roomId));
+  const fields: Record<string, string> = {};
+  rooms.forEach((room, i) => {
+    const mine = rows.filter((r) => r.room_id === room.roomId);
+    if (mine.length === 0) fields[`rooms[${i}].roomId`] = 'Not a room of this project.';
+    else if (!room.optionIds.every((id) => mine.some((r) => r.option_id === id))) fields[`rooms[${i}].optionIds`] = 'Pick options of this room only.';
+  });
+  const first = Object.values(fields)[0];
+  if (first) throw new HttpError(400, 'invalid', first, fields);
+}
+
+const refuseUnlessActive = (p: PresentationRow, doing: string) => {
+  const state = presentationState(p);
+  if (state === 'withdrawn') throw new HttpError(409, 'withdrawn', `This link was withdrawn, so it cannot be ${doing}. Make a new presentation instead.`);
+  if (state === 'expired') throw new HttpError(409, 'expired', `This link has expired. Extend it before it is ${doing}.`);
+};
+
+export const presentationRoutes: RouteDef[] = [
+  {
+    method: 'get',
+    path: '/api/projects/:projectId/presentations',
+    access: ALL_ROLES,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { projectId } = projectParam.parse(ctx.req.params);
+      await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
+      return { presentations: await summaries(ctx, await listPresentations(ctx.deps.db, caller.studioId, projectId)) };
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/projects/:projectId/presentations',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { projectId } = projectParam.parse(ctx.req.params);
+      const body = createPresentationSchema.parse(ctx.req.body);
+      const row = await ctx.deps.db.transaction().execute(async (trx) => {
+        const project = await projectOrThrow(trx, caller.studioId, projectId);
+        if (project.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it before presenting it.');
+        await assertShownRoomsBelong(trx, caller.studioId, projectId, body.rooms);
+        const issuedAt = toTokenTime(new Date());
+        const created = await insertPresentation(trx, {
+          studioId: caller.studioId,
+          projectId,
+          createdBy: caller.memberId,
+          tokenId: newTokenId(),
+          message: body.message,
+          showPrices: body.showPrices,
+          issuedAt,
+          tokenExpiresAt: new Date(issuedAt.getTime() + LINK_LIFETIME_DAYS * DAY_MS),
+          expiresAt: new Date(issuedAt.getTime() + body.expiresInDays * DAY_MS),
+        });
+        await insertShownRooms(trx, created.id, body.rooms);
+        // A link made is a link shared (sent or copied): the project is now with the client.
+        await setProjectState(trx, projectId, 'presented');
+        return created;
+      });
+      ctx.res.status(201);
+      return one(ctx, row);
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/presentations/:id/send',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const body = sendPresentationSchema.parse(ctx.req.body ?? {});
+      const { db, config, mailer } = ctx.deps;
+      const p = await presentationOrThrow(db, caller.studioId, id);
+      refuseUnlessActive(p, 'sent');
+      const project = await projectOrThrow(db, caller.studioId, p.project_id);
+      const to = body.to ?? project.client_email;
+      if (!to) throw new HttpError(400, 'invalid', 'The client has no e-mail address. Type one here, or copy the link instead.', { to: 'Enter the client’s e-mail.' });
+      const mail = invitationMail({
+        to,
+        studio: await studioName(db, caller.studioId),
+        project: project.name,
+        clientName: project.client_name,
+        message: p.message,
+        link: await presentationLink(config, p),
+        expiresAt: p.expires_at,
+      });
+      try {
+        await mailer.send(mail);
+      } catch (err) {
+        console.error('[presentations] invitation mail failed:', (err as Error).message);
+        throw new HttpError(502, 'mail_failed', 'The e-mail could not be sent. Try again in a moment, or copy the link instead.');
+      }
+      const sent = await db.transaction().execute(async (trx) => {
+        const saved = await updatePresentation(trx, p.id, { sent_at: new Date(), sent_to: to });
+        if (project.state === 'draft') await setProjectState(trx, project.id, 'presented');
+        return saved;
+      });
+      return one(ctx, sent);
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/presentations/:id/withdraw',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const p = await presentationOrThrow(ctx.deps.db, caller.studioId, id);
+      // Withdrawing twice keeps the first time: that is when the link stopped working.
+      const saved = p.withdrawn_at ? p : await updatePresentation(ctx.deps.db, p.id, { withdrawn_at: new Date() });
+      return one(ctx, saved);
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/presentations/:id/extend',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const { days } = extendPresentationSchema.parse(ctx.req.body);
+      const p = await presentationOrThrow(ctx.deps.db, caller.studioId, id);
+      if (p.withdrawn_at) throw new HttpError(409, 'withdrawn', 'This link was withdrawn, so it cannot be extended. Make a new presentation instead.');
+      const latest = p.token_expires_at.getTime();
+      if (p.expires_at.getTime() >= latest) {
+        throw new HttpError(409, 'at_latest', `A link works for at most ${LINK_LIFETIME_DAYS} days. Make a new presentation to keep going.`);
+      }
+      // From today when it has already run out, so extending an expired link opens it again.
+      const from = Math.max(Date.now(), p.expires_at.getTime());
+      const saved = await updatePresentation(ctx.deps.db, p.id, { expires_at: new Date(Math.min(from + days * DAY_MS, latest)) });
+      return one(ctx, saved);
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/projects/:projectId/decide',
+    access: WRITERS,
+    async handler(ctx) {
+      const caller = requireCaller(ctx);
+      const { projectId } = projectParam.parse(ctx.req.params);
+      const { presentationId } = decideProjectSchema.parse(ctx.req.body);
+      const saved = await ctx.deps.db.transaction().execute(async (trx) => {
+        const project = await projectOrThrow(trx, caller.studioId, projectId);
+        const p = await getPresentation(trx, caller.studioId, presentationId);
+        if (!p || p.project_id !== projectId) throw notFound('That presentation');
+        if (project.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it first.');
+        if (p.withdrawn_at) throw new HttpError(409, 'withdrawn', 'This presentation was withdrawn; its choices cannot decide the project.');
+        const [summary] = await presentationSummaries(trx, ctx.deps.config, [p], { withLinks: false, memberNames: new Map() });
+        if (!summary.complete) throw new HttpError(409, 'incomplete', 'Every room in this presentation needs a choice before the project is decided.');
+        await setProjectState(trx, projectId, 'decided');
+        return updatePresentation(trx, p.id, { decided_at: new Date() });
+      });
+      return { state: 'decided' as const, ...(await one(ctx, saved)) };
+    },
+  },
+];
