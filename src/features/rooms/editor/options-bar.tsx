@@ -49,11 +49,11 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
       {!readOnly && current && (
         <div className="ml-1 flex flex-wrap items-center gap-1">
           <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>New option</Button>
-          <Button size="sm" variant="quiet" onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate</Button>
-          <Button size="sm" variant="quiet" onClick={() => setDialog('rename')}>Rename</Button>
+          <Button size="sm" variant="quiet" onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate option</Button>
+          <Button size="sm" variant="quiet" onClick={() => setDialog('rename')}>Rename option</Button>
           <Button size="sm" variant="quiet" aria-label="Move option left" disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>←</Button>
           <Button size="sm" variant="quiet" aria-label="Move option right" disabled={current.position === editor.options.length - 1} onClick={() => act(() => editor.moveOption(optionId, 1))}>→</Button>
-          <Button size="sm" variant="quiet" disabled={editor.options.length <= 1} onClick={() => setDialog('delete')}>Delete</Button>
+          <Button size="sm" variant="quiet" disabled={editor.options.length <= 1} onClick={() => setDialog('delete')}>Delete option</Button>
         </div>
       )}
       {error && <div className="w-full"><Notice tone="error">{error}</Notice></div>}

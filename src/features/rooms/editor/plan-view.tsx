@@ -376,6 +376,9 @@ export function PlanView(props: Props) {
             key={p.id}
             data-testid={`piece-${p.id}`}
             data-placed={p.placed ? 'true' : 'false'}
+            data-x={Math.round(p.x)}
+            data-y={Math.round(p.y)}
+            data-rotation={Math.round(p.rotation)}
             className={editable && step === 'furnish' ? 'cursor-move' : 'cursor-pointer'}
             onPointerDown={(e) => onPointerDownPiece(e, p)}
             opacity={p.elevation >= 1200 ? 0.75 : 1}
