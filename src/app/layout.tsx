@@ -29,6 +29,7 @@ export function DesignerLayout({ wide = false }: { wide?: boolean }) {
           <nav aria-label="Studio" className="flex items-center gap-1">
             <NavLink to="/projects" className={navClass}>Projects</NavLink>
             <NavLink to="/clients" className={navClass}>Clients</NavLink>
+            <NavLink to="/finishes" className={navClass}>Finish library</NavLink>
             <NavLink to="/studio" className={navClass}>Studio</NavLink>
             {outbox && <NavLink to="/outbox" className={navClass}>Outbox</NavLink>}
           </nav>

@@ -9,6 +9,8 @@ import { AcceptInvitePage } from '../features/auth/components/accept-invite-page
 import { ClientsPage } from '../features/clients/components/clients-page';
 import { StudioPage } from '../features/studio/components/studio-page';
 import { OutboxPage } from '../features/outbox/components/outbox-page';
+import { FinishLibraryPage } from '../features/finishes/components/finish-library-page';
+import { FinishRoute } from './routes/finishes-route';
 
 export const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInPage /> },
@@ -23,6 +25,8 @@ export const router = createBrowserRouter([
       { path: '/projects', element: <ProjectsRoute /> },
       { path: '/projects/:projectId', element: <ProjectRoute /> },
       { path: '/clients', element: <ClientsPage /> },
+      { path: '/finishes', element: <FinishLibraryPage /> },
+      { path: '/finishes/:finishId', element: <FinishRoute /> },
       { path: '/studio', element: <StudioPage /> },
     ],
   },

@@ -1,0 +1,7 @@
+import { useParams } from 'react-router';
+import { FinishDetailPage } from '../../features/finishes/components/finish-detail-page';
+
+export function FinishRoute() {
+  const { finishId = '' } = useParams();
+  return <FinishDetailPage key={finishId} id={finishId} />;
+}

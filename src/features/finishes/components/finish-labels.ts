@@ -1,0 +1,41 @@
+import type { EdgeBlend, Finish, FinishCategory, PriceUnit, Sheen } from '../../../../shared/schemas/finish';
+import { formatLength } from '../../../../shared/units/length';
+
+export const CATEGORY_LABELS: Record<FinishCategory, string> = {
+  floor: 'Floor',
+  wall: 'Wall',
+  tile: 'Tile',
+  wood: 'Wood',
+  stone: 'Stone',
+  fabric: 'Fabric',
+  wallpaper: 'Wallpaper',
+  other: 'Other',
+};
+
+export const SHEEN_LABELS: Record<Sheen, string> = { matt: 'Matt', eggshell: 'Eggshell', satin: 'Satin', gloss: 'Gloss' };
+
+export const EDGE_BLEND_LABELS: Record<EdgeBlend, string> = {
+  none: 'None (the crop already repeats)',
+  narrow: 'Narrow',
+  wide: 'Wide',
+};
+
+export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: 'per m²', unit: 'per unit' };
+
+/** "60 × 120 cm": the real size a photo finish's crop covers. */
+export function formatRepeat(widthMm: number, heightMm: number): string {
+  return `${formatLength(widthMm, 'cm').replace(/ cm$/, '')} × ${formatLength(heightMm, 'cm')}`;
+}
+
+const priceFormat = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+
+export function formatPrice(f: Pick<Finish, 'price' | 'priceUnit'>): string | null {
+  if (f.price === null) return null;
+  return `${priceFormat.format(f.price)}${f.priceUnit ? ` ${PRICE_UNIT_LABELS[f.priceUnit]}` : ''}`;
+}
+
+/** The short line under a finish's name in the library. */
+export function finishSummary(f: Finish): string {
+  if (f.kind === 'paint') return `Paint · ${SHEEN_LABELS[f.sheen]} · ${f.colourHex}`;
+  return `${CATEGORY_LABELS[f.category]} · ${formatRepeat(f.repeatWidthMm, f.repeatHeightMm)}`;
+}

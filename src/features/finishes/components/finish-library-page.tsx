@@ -1,0 +1,89 @@
+import { useDeferredValue, useState } from 'react';
+import { Link } from 'react-router';
+import { FINISH_CATEGORIES, type FinishListQuery } from '../../../../shared/schemas/finish';
+import { Button } from '../../../components/ui/button';
+import { inputClass } from '../../../components/ui/field';
+import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
+import { errorMessage } from '../../../lib/api';
+import { useCanEdit } from '../../../lib/session';
+import { useFinishes, type Finish } from '../api/finishes';
+import { AddPaintDialog } from './add-paint-dialog';
+import { CATEGORY_LABELS, finishSummary, formatPrice } from './finish-labels';
+import { PhotoUpload } from './photo-upload';
+import { Swatch } from './swatch';
+
+type Filter = 'all' | 'paint' | (typeof FINISH_CATEGORIES)[number];
+
+const toQuery = (q: string, filter: Filter): Partial<FinishListQuery> => ({
+  q: q.trim() || undefined,
+  ...(filter === 'paint' ? { kind: 'paint' as const } : filter === 'all' ? {} : { category: filter }),
+});
+
+/** The studio's finishes: upload photos of samples, add paints, find one by name, supplier or code. */
+export function FinishLibraryPage() {
+  const canEdit = useCanEdit();
+  const [q, setQ] = useState('');
+  const [filter, setFilter] = useState<Filter>('all');
+  const [addingPaint, setAddingPaint] = useState(false);
+  const finishes = useFinishes(toQuery(useDeferredValue(q), filter));
+  const filtered = q.trim() !== '' || filter !== 'all';
+
+  return (
+    <div>
+      <PageHeader title="Finish library" actions={canEdit && <Button variant="primary" onClick={() => setAddingPaint(true)}>Add paint</Button>}>
+        Floors, tiles, fabrics, wallpapers and paints from real samples, at their real size.
+      </PageHeader>
+      {canEdit && <PhotoUpload />}
+      <div className="mb-5 flex flex-wrap items-center gap-3">
+        <label className="min-w-64 flex-1">
+          <span className="sr-only">Search finishes</span>
+          <input className={inputClass} type="search" placeholder="Search by name, supplier or code" value={q} onChange={(e) => setQ(e.target.value)} />
+        </label>
+        <label className="flex items-center gap-2 text-sm text-ink-soft">
+          Show
+          <select className={`${inputClass} w-auto`} value={filter} onChange={(e) => setFilter(e.target.value as Filter)} aria-label="Category">
+            <option value="all">All finishes</option>
+            <option value="paint">Paints</option>
+            {FINISH_CATEGORIES.map((c) => (
+              <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>
+            ))}
+          </select>
+        </label>
+      </div>
+      {finishes.isPending ? (
+        <Spinner label="Loading finishes…" />
+      ) : finishes.isError ? (
+        <Notice tone="error">{errorMessage(finishes.error)}</Notice>
+      ) : finishes.data.finishes.length === 0 ? (
+        <EmptyState title={filtered ? 'No finish matches that search.' : 'No finishes yet.'}>
+          {!filtered && canEdit && 'Upload a photo of a sample above, or add a paint colour.'}
+        </EmptyState>
+      ) : (
+        <ul className="grid grid-cols-2 gap-5 sm:grid-cols-3 lg:grid-cols-4" aria-label="Finishes">
+          {finishes.data.finishes.map((f) => (
+            <li key={f.id}>
+              <FinishCard finish={f} />
+            </li>
+          ))}
+        </ul>
+      )}
+      {addingPaint && <AddPaintDialog onClose={() => setAddingPaint(false)} />}
+    </div>
+  );
+}
+
+function FinishCard({ finish }: { finish: Finish }) {
+  const price = formatPrice(finish);
+  return (
+    <Link to={`/finishes/${finish.id}`} className="group flex h-full flex-col gap-3 rounded-2xl border border-line bg-white p-3 transition-colors hover:border-line-strong" aria-label={finish.name}>
+      <Swatch finish={finish} />
+      <div className="min-w-0 px-1 pb-1">
+        <div className="truncate font-semibold text-ink group-hover:underline" title={finish.name}>{finish.name}</div>
+        <div className="truncate text-sm text-ink-soft">{finishSummary(finish)}</div>
+        {(finish.supplier || price) && (
+          <div className="mt-0.5 truncate text-sm text-ink-faint">{[finish.supplier, price].filter(Boolean).join(' · ')}</div>
+        )}
+      </div>
+    </Link>
+  );
+}

@@ -1,0 +1,37 @@
+import { SHEENS, type Sheen } from '../../../../shared/schemas/finish';
+import { inputClass, SelectField, TextField } from '../../../components/ui/field';
+import { SHEEN_LABELS } from './finish-labels';
+
+const HEX = /^#[0-9a-fA-F]{6}$/;
+
+/** Colour (picker and hex, kept in step) and sheen of a paint. */
+export function PaintFields({ colourHex, sheen, onColour, onSheen, colourError, disabled = false }: {
+  colourHex: string;
+  sheen: Sheen;
+  onColour: (hex: string) => void;
+  onSheen: (sheen: Sheen) => void;
+  colourError?: string;
+  disabled?: boolean;
+}) {
+  return (
+    <div className="grid grid-cols-[auto_minmax(0,1fr)_minmax(0,1fr)] items-start gap-3">
+      <label className="flex flex-col gap-1.5">
+        <span className="text-sm font-semibold text-ink">Colour</span>
+        <input
+          type="color"
+          aria-label="Colour picker"
+          value={HEX.test(colourHex) ? colourHex.toLowerCase() : '#ffffff'}
+          onChange={(e) => onColour(e.target.value)}
+          disabled={disabled}
+          className={`${inputClass} w-14 cursor-pointer p-1`}
+        />
+      </label>
+      <TextField label="Hex" value={colourHex} onChange={(e) => onColour(e.target.value.trim())} error={colourError} maxLength={7} spellCheck={false} disabled={disabled} />
+      <SelectField label="Sheen" value={sheen} onChange={(e) => onSheen(e.target.value as Sheen)} disabled={disabled}>
+        {SHEENS.map((s) => (
+          <option key={s} value={s}>{SHEEN_LABELS[s]}</option>
+        ))}
+      </SelectField>
+    </div>
+  );
+}
