@@ -2,7 +2,7 @@
 import type { TestProject } from 'vitest/node';
 import { createDb } from '../../server/db/database';
 import { migrateToLatest } from '../../server/db/migrate';
-import { testDatabaseUrl } from './test-database';
+import { testDatabase } from './test-database';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -11,9 +11,10 @@ declare module 'vitest' {
 }
 
 export default async function setup(project: TestProject) {
-  const url = await testDatabaseUrl();
+  const { url, drop } = await testDatabase();
   const db = createDb(url, 1);
   await migrateToLatest(db);
   await db.destroy();
   project.provide('databaseUrl', url);
+  return drop;
 }

@@ -27,7 +27,7 @@ describe('too-big-for-door', () => {
         kind: 'too-big-for-door',
         pieces: ['sofa'],
         openings: ['d1'],
-        message: 'The sofa (85 × 90 × 200 cm) will not pass through any door of this room',
+        message: 'The sofa (85 × 90 × 200 cm) will not pass through any door of this room in one piece',
       },
     ]);
     // A 900 mm passage takes it: 850 ≤ 890 across, 900 ≤ 2090 up.

@@ -48,7 +48,7 @@ export function findTooBigForDoor(shell: RoomShell, boxes: readonly PieceBox[]):
       kind: 'too-big-for-door',
       pieces: [piece.id],
       openings: ways.map((way) => way.id).sort(),
-      message: `${capitalise(theName(piece))} (${listed.join(' × ')} cm) will not pass through any door of this room`,
+      message: `${capitalise(theName(piece))} (${listed.join(' × ')} cm) will not pass through any door of this room in one piece`,
     });
   }
   return findings;

@@ -1,6 +1,7 @@
 // `narrow-walkway` and `unreachable`: can a person walk from a door or passage to the front of each
 // piece, and how narrow is the tightest spot on the best route? Plan mm, x right, y down.
 import { placeOpening } from '../../geometry/openings';
+import { reachWidthMm } from './clearances';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
@@ -385,6 +386,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       }
     }
     const piece = box.piece;
+    const requiredMm = reachWidthMm(piece, walkwayMm);
     if (front.length < MIN_FRONT_CELLS || bottleneckMm < 0) {
       findings.push({
         kind: 'unreachable',
@@ -394,7 +396,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       });
       return;
     }
-    if (roundToCmMm(bottleneckMm) >= walkwayMm) return;
+    if (roundToCmMm(bottleneckMm) >= requiredMm) return;
 
     // Walk the route back to its way in; its narrowest cell is where the bottleneck is.
     let narrowest = bestCell;
@@ -405,13 +407,13 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     }
     if (widths.at(cell) < widths.at(narrowest)) narrowest = cell;
     const opening = ways[routes.wayIn[cell]];
-    const finding = describeGap(piece, index, narrowest, bottleneckMm);
+    const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.
-    if ((finding.measured_mm ?? 0) < walkwayMm) findings.push({ ...finding, openings: [opening.id] });
+    if ((finding.measured_mm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
   });
   return findings;
 
-  function describeGap(piece: Piece, index: number, cell: number, gridWidthMm: number): Finding {
+  function describeGap(piece: Piece, index: number, cell: number, gridWidthMm: number, requiredMm: number): Finding {
     const at = cellCentreMm(grid, cell);
     const gap = widths.gap(cell);
     let widthMm = gridWidthMm;
@@ -449,7 +451,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       openings: [],
       message: capitalise(`only ${cmText(measuredMm)} to pass${words}`),
       measured_mm: measuredMm,
-      required_mm: walkwayMm,
+      required_mm: roundToCmMm(requiredMm),
       at: roundPoint(at),
       ...(between ? { between: [roundPoint(between[0]), roundPoint(between[1])] } : {}),
     };

@@ -5,7 +5,7 @@ import { createServer } from 'node:net';
 import { join, resolve } from 'node:path';
 import { tmpdir } from 'node:os';
 import type { TestProject } from 'vitest/node';
-import { testDatabaseUrl } from '../../setup/test-database';
+import { testDatabase } from '../../setup/test-database';
 import { startStandInSmtp } from '../../../server/services/mail/stand-in-smtp';
 import { startServer } from '../../../server/index';
 
@@ -29,7 +29,7 @@ function freePort(): Promise<number> {
 
 export default async function setup(project: TestProject) {
   const root = resolve(import.meta.dirname, '../../..');
-  const databaseUrl = await testDatabaseUrl('parlour_e2e');
+  const { url: databaseUrl, drop } = await testDatabase('parlour_e2e');
   const outboxDir = mkdtempSync(join(tmpdir(), 'parlour-outbox-'));
   const smtp = await startStandInSmtp({ port: 0, dir: outboxDir });
   const port = await freePort();
@@ -49,5 +49,6 @@ export default async function setup(project: TestProject) {
     await app.close();
     await smtp.close();
     rmSync(outboxDir, { recursive: true, force: true });
+    await drop();
   };
 }
