@@ -19,7 +19,7 @@ export async function listFinishRows(db: Db, studioId: string, query: FinishList
   }
   if (query.category) qb = qb.where('category', '=', query.category);
   if (query.kind) qb = qb.where('kind', '=', query.kind);
-  return qb.orderBy('created_at', 'desc').orderBy('id').limit(LIST_LIMIT).execute();
+  return qb.orderBy('created_at', 'desc').orderBy('name').orderBy('id').limit(LIST_LIMIT).execute();
 }
 
 export async function getFinishRow(db: Db, studioId: string, id: string): Promise<FinishRow | undefined> {

@@ -310,7 +310,7 @@ function PaintDetail({ finish, canEdit }: { finish: PaintFinish; canEdit: boolea
   };
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-      <Card title="Colour">
+      <Card title="Colour" className="self-start">
         <div className="aspect-[16/9] w-full rounded-xl border border-line" style={{ backgroundColor: /^#[0-9a-fA-F]{6}$/.test(colourHex) ? colourHex : finish.colourHex }} role="img" aria-label={`Colour ${colourHex}`} />
       </Card>
       <Card title="Details" className="self-start">

@@ -20,7 +20,8 @@ export const EDGE_BLEND_LABELS: Record<EdgeBlend, string> = {
   wide: 'Wide',
 };
 
-export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: 'per m²', unit: 'per unit' };
+/** Short, so a price fits beside a supplier on a library card. */
+export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: '/ m²', unit: '/ unit' };
 
 /** "60 × 120 cm": the real size a photo finish's crop covers. */
 export function formatRepeat(widthMm: number, heightMm: number): string {

@@ -81,7 +81,10 @@ function FinishCard({ finish }: { finish: Finish }) {
         <div className="truncate font-semibold text-ink group-hover:underline" title={finish.name}>{finish.name}</div>
         <div className="truncate text-sm text-ink-soft">{finishSummary(finish)}</div>
         {(finish.supplier || price) && (
-          <div className="mt-0.5 truncate text-sm text-ink-faint">{[finish.supplier, price].filter(Boolean).join(' · ')}</div>
+          <div className="mt-0.5 flex gap-2 text-sm text-ink-faint">
+            {finish.supplier && <span className="min-w-0 flex-1 truncate" title={finish.supplier}>{finish.supplier}</span>}
+            {price && <span className="ml-auto shrink-0 tabular-nums">{price}</span>}
+          </div>
         )}
       </div>
     </Link>
