@@ -9,6 +9,15 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     chunkSizeWarningLimit: 1200,
+    // The manifest lets a test walk each entry's chunk graph; the client's page is an entry of
+    // its own so it never downloads the designer's app.
+    manifest: true,
+    rollupOptions: {
+      input: {
+        app: 'index.html',
+        presentation: 'src/features/presentation/presentation.html',
+      },
+    },
   },
   server: {
     proxy: {

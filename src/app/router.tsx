@@ -18,6 +18,8 @@ export const router = createBrowserRouter([
   { path: '/invite/:token', element: <AcceptInvitePage /> },
   { path: '/outbox', element: <OutboxPage /> },
   { path: '/outbox/:messageId', element: <OutboxPage /> },
+  // Built pages serve /p/* from the presentation entry; this lazy route covers the dev server.
+  { path: '/p/:token', lazy: () => import('../features/presentation/presentation-route') },
   {
     element: <DesignerLayout />,
     children: [

@@ -1,8 +1,15 @@
 import { useParams } from 'react-router';
 import { ProjectPage } from '../../features/projects/components/project-page';
+import { useProject } from '../../features/projects/api/projects';
 import { RoomList } from '../../features/rooms/components/room-list';
+import { PresentationsPanel } from '../../features/presentations/components/presentations-panel';
 
 export function ProjectRoute() {
   const { projectId = '' } = useParams();
-  return <ProjectPage id={projectId} rooms={<RoomList projectId={projectId} />} />;
+  // The same query the page itself runs, so this reads the cache rather than fetching twice.
+  const project = useProject(projectId);
+  const presentations = project.data && (
+    <PresentationsPanel projectId={projectId} projectState={project.data.project.state} clientEmail={project.data.client?.email ?? null} />
+  );
+  return <ProjectPage id={projectId} rooms={<RoomList projectId={projectId} />} presentations={presentations} />;
 }
