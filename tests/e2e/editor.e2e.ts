@@ -92,6 +92,7 @@ describe('the room editor', () => {
 
     // Options: duplicate, then change only the copy.
     await saved(page);
+    await page.getByText('This option ▾').click();
     await page.getByRole('button', { name: 'Duplicate option' }).click();
     await page.getByRole('tab', { name: 'Option B', selected: true }).waitFor();
     await piece(page, 'Armchair').click();

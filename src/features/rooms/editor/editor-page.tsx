@@ -8,7 +8,10 @@ import { Notice, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
 import { useRoom, type RoomDetail } from '../api/rooms';
-import { TakeoffTable } from '../components/takeoff-table';
+import { DEFAULT_WALKWAY_MM } from '../../../../shared/analysis/takeoff';
+import { formatLength } from '../../../../shared/units/length';
+import { CheckPanel } from './check-panel';
+import { useFitCheck } from './use-fit-check';
 import { FurnishPanel } from './furnish-panel';
 import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
@@ -59,10 +62,22 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
   const [help, setHelp] = useState(false);
   const [renaming, setRenaming] = useState(false);
   const splitHost = useRef<HTMLDivElement>(null);
+  const [walkwayMm, setWalkwayMm] = useState(DEFAULT_WALKWAY_MM);
+  const [chosenFinding, setChosenFinding] = useState<number | null>(null);
 
   const option = editor.doc.options[optionId] ?? Object.values(editor.doc.options)[0];
   const activeOptionId = editor.doc.options[optionId] ? optionId : Object.keys(editor.doc.options)[0];
   const pieces = option?.pieces ?? [];
+  const fit = useFitCheck(editor.doc.shell, pieces, walkwayMm);
+  const findings = fit?.findings ?? [];
+  const finding = chosenFinding !== null ? findings[chosenFinding] : undefined;
+  const highlight = step === 'check' && finding
+    ? {
+        pieceIds: finding.pieces,
+        gap: finding.between && finding.measured_mm !== undefined ? { a: finding.between[0], b: finding.between[1], label: formatLength(finding.measured_mm, unit) } : undefined,
+      }
+    : null;
+  const flaggedPieceIds = step === 'check' ? [...new Set(findings.flatMap((f) => f.pieces))] : [];
   const newId = useCallback((prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`, []);
 
   useEffect(() => localStorage.setItem(UNIT_KEY, unit), [unit]);
@@ -143,6 +158,7 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
 
   const chooseStep = (s: EditorStep) => {
     setStep(s);
+    setChosenFinding(null);
     setDrawing(false);
     setPreview(null);
   };
@@ -159,9 +175,9 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
       case 'finishes':
         return <p className="text-sm text-ink-soft">Finishes for this option: choose a surface on the plan, then a finish from the library.</p>;
       case 'check':
-        return <TakeoffTable shell={editor.doc.shell} />;
+        return <CheckPanel shell={editor.doc.shell} pieces={pieces} result={fit} walkwayMm={walkwayMm} onWalkway={setWalkwayMm} unit={unit} selected={chosenFinding} onChoose={setChosenFinding} />;
     }
-  }, [step, editor.doc.shell, editor.run, unit, readOnly, selection, option, activeOptionId, pieces, newId]);
+  }, [step, editor.doc.shell, editor.run, unit, readOnly, selection, option, activeOptionId, pieces, newId, fit, walkwayMm, chosenFinding]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
     const host = splitHost.current;
@@ -260,7 +276,12 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
               onClick={() => chooseStep(s.id)}
               className="rounded-lg px-3 py-2 text-left hover:bg-sand aria-[current=step]:bg-pine-wash"
             >
-              <span className="block text-sm font-bold text-ink"><span className="mr-1.5 text-ink-faint">{i + 1}</span>{s.label}</span>
+              <span className="flex items-center text-sm font-bold text-ink">
+                <span className="mr-1.5 text-ink-faint">{i + 1}</span>{s.label}
+                {s.id === 'check' && findings.length > 0 && (
+                  <span className="ml-auto rounded-full bg-clay px-1.5 text-xs text-white" aria-label={`${findings.length} findings`}>{findings.length}</span>
+                )}
+              </span>
               <span className="block text-xs leading-snug text-ink-faint">{s.hint}</span>
             </button>
           ))}
@@ -298,6 +319,8 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
                 drawing={drawing}
                 onDrawingDone={() => setDrawing(false)}
                 preview={preview}
+                highlight={highlight}
+                flaggedPieceIds={flaggedPieceIds}
               />
             </div>
           )}

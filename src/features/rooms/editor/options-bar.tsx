@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent, type ReactNode } from 'react';
 import { optionLabel, type OptionRecord } from '../../../../shared/schemas/room-api';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
@@ -18,6 +18,7 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const current = editor.options.find((o) => o.id === optionId);
+  const menu = useRef<HTMLDetailsElement>(null);
 
   const act = async (f: () => Promise<unknown>) => {
     setBusy(true);
@@ -47,14 +48,19 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
         ))}
       </div>
       {!readOnly && current && (
-        <div className="ml-1 flex flex-wrap items-center gap-1">
-          <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>New option</Button>
-          <Button size="sm" variant="quiet" onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate option</Button>
-          <Button size="sm" variant="quiet" onClick={() => setDialog('rename')}>Rename option</Button>
-          <Button size="sm" variant="quiet" aria-label="Move option left" disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>←</Button>
-          <Button size="sm" variant="quiet" aria-label="Move option right" disabled={current.position === editor.options.length - 1} onClick={() => act(() => editor.moveOption(optionId, 1))}>→</Button>
-          <Button size="sm" variant="quiet" disabled={editor.options.length <= 1} onClick={() => setDialog('delete')}>Delete option</Button>
-        </div>
+        <>
+          <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>+ New option</Button>
+          <details className="relative" ref={menu}>
+            <summary className="flex h-8 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-semibold text-ink-soft hover:bg-sand">This option ▾</summary>
+            <div className="absolute left-0 z-20 mt-1 flex w-52 flex-col rounded-xl border border-line bg-white p-1 shadow-lg" onClick={() => menu.current?.removeAttribute('open')}>
+              <MenuItem onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate option</MenuItem>
+              <MenuItem onClick={() => setDialog('rename')}>Rename option</MenuItem>
+              <MenuItem disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>Move left</MenuItem>
+              <MenuItem disabled={current.position === editor.options.length - 1} onClick={() => act(() => editor.moveOption(optionId, 1))}>Move right</MenuItem>
+              <MenuItem disabled={editor.options.length <= 1} onClick={() => setDialog('delete')} danger>Delete option</MenuItem>
+            </div>
+          </details>
+        </>
       )}
       {error && <div className="w-full"><Notice tone="error">{error}</Notice></div>}
       {dialog === 'rename' && current && <RenameOption option={current} editor={editor} onClose={() => setDialog(null)} />}
@@ -79,6 +85,14 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
         </Dialog>
       )}
     </div>
+  );
+}
+
+function MenuItem({ children, onClick, disabled, danger }: { children: ReactNode; onClick: () => void; disabled?: boolean; danger?: boolean }) {
+  return (
+    <button type="button" disabled={disabled} onClick={onClick} className={`rounded-lg px-3 py-2 text-left text-sm font-semibold hover:bg-sand disabled:text-ink-faint disabled:hover:bg-transparent ${danger ? 'text-clay' : 'text-ink'}`}>
+      {children}
+    </button>
   );
 }
 

@@ -1,0 +1,95 @@
+import type { Finding } from '../../../../shared/analysis/takeoff';
+import type { Piece } from '../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../shared/schemas/room';
+import { formatLength, parseLength, type LengthUnit } from '../../../../shared/units/length';
+import { inputClass } from '../../../components/ui/field';
+import { Notice, Spinner } from '../../../components/ui/layout';
+import { TakeoffTable } from '../components/takeoff-table';
+import { TALL_PIECE_MM } from './furnish-panel';
+
+const KIND_TITLE: Record<Finding['kind'], string> = {
+  overlap: 'Pieces overlap',
+  'outside-room': 'Outside the room',
+  'door-swing': 'In a door’s swing',
+  'window-blocked': 'In front of a window',
+  'narrow-walkway': 'Tight to pass',
+  unreachable: 'Cannot be reached',
+  'too-big-for-door': 'Too big for the doors',
+};
+
+export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, selected, onChoose }: {
+  shell: RoomShell;
+  pieces: Piece[];
+  result: { findings: Finding[]; ms: number; error?: string } | null;
+  walkwayMm: number;
+  onWalkway: (mm: number) => void;
+  unit: LengthUnit;
+  selected: number | null;
+  onChoose: (index: number | null) => void;
+}) {
+  const tall = pieces.filter((p) => p.placed && p.height >= TALL_PIECE_MM);
+  return (
+    <div className="flex flex-col gap-5">
+      <label className="flex items-center justify-between gap-3 text-sm font-semibold">
+        Walkway width
+        <input
+          className={`${inputClass} h-9 w-28`}
+          defaultValue={formatLength(walkwayMm, unit)}
+          onBlur={(e) => {
+            const parsed = parseLength(e.target.value, unit);
+            if (parsed.ok && parsed.mm >= 300 && parsed.mm <= 2000) onWalkway(parsed.mm);
+            else e.target.value = formatLength(walkwayMm, unit);
+          }}
+          onKeyDown={(e) => e.key === 'Enter' && (e.target as HTMLInputElement).blur()}
+          aria-describedby="walkway-hint"
+        />
+      </label>
+      <p id="walkway-hint" className="-mt-3 text-xs text-ink-faint">
+        90 cm is common practice for a main route (36 in in US codes: IRC R311.6, ADA §403.5.1). Beds, dining chairs and coffee tables need less, from published guidance.
+      </p>
+
+      {!result ? (
+        <Spinner label="Checking the layout…" />
+      ) : result.error ? (
+        <Notice tone="error">The check could not run: {result.error}</Notice>
+      ) : result.findings.length === 0 ? (
+        <Notice tone="ok">Everything fits, with room to move.</Notice>
+      ) : (
+        <ol className="flex flex-col gap-2" aria-label="Findings">
+          {result.findings.map((f, i) => (
+            <li key={`${f.kind}-${f.pieces.join('-')}-${f.openings.join('-')}`}>
+              <button
+                type="button"
+                aria-pressed={selected === i}
+                onClick={() => onChoose(selected === i ? null : i)}
+                className="w-full rounded-lg border border-clay/30 bg-white px-3 py-2 text-left hover:border-clay aria-pressed:border-clay aria-pressed:bg-clay-wash"
+              >
+                <span className="block text-xs font-bold tracking-wide text-clay uppercase">{KIND_TITLE[f.kind]}</span>
+                <span className="block text-sm text-ink">{f.message}</span>
+                {f.measured_mm !== undefined && f.required_mm !== undefined && (
+                  <span className="block text-xs text-ink-faint">{formatLength(f.measured_mm, unit)} where {formatLength(f.required_mm, unit)} is usual</span>
+                )}
+              </button>
+            </li>
+          ))}
+        </ol>
+      )}
+
+      <div className="rounded-xl bg-sand p-4 text-sm text-ink-soft">
+        <h3 className="mb-1 font-bold text-ink">Good to know</h3>
+        <ul className="list-disc space-y-1 pl-4">
+          <li>Clearances here are guidance. Local building codes and accessibility rules (for the edition in force) come first; ask a licensed professional where it matters.</li>
+          <li>Keep the routes to doors and to escape windows clear — a bedroom needs a window you can get out of.</li>
+          {tall.length > 0 && <li>Fix tall pieces ({tall.map((p) => p.name).join(', ')}) to the wall so they cannot tip, and keep climbable furniture away from windows where children live.</li>}
+          <li>Never take out or alter a wall without a structural engineer and building-control approval.</li>
+          <li>The plan and 3D are a visualisation, not a construction document: check dimensions on site before ordering.</li>
+        </ul>
+      </div>
+
+      <div>
+        <h3 className="mb-2 font-bold">Take-off</h3>
+        <TakeoffTable shell={shell} />
+      </div>
+    </div>
+  );
+}
