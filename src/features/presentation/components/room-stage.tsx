@@ -67,7 +67,7 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
           <h1 id="room-title" className="text-2xl font-bold tracking-tight">{room.name}</h1>
           <p className="text-sm text-ink-soft">Option {options.indexOf(option) + 1} of {options.length}</p>
         </div>
-        <div className="relative h-[min(64vh,42rem)] min-h-80 overflow-hidden rounded-2xl border border-line bg-sand">
+        <div className="relative h-[min(50vh,26rem)] min-h-72 overflow-hidden lg:h-[min(64vh,42rem)] rounded-2xl border border-line bg-sand">
           <Suspense fallback={<div className="flex h-full items-center justify-center text-ink-soft" role="status">Setting up the 3D view…</div>}>
             <RoomView
               shell={room.shell}
