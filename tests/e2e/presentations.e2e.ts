@@ -155,7 +155,7 @@ describe('presentations', () => {
     await client.page.getByRole('button', { name: 'Choose this option' }).click();
     const choose = client.page.getByRole('dialog');
     await choose.getByText('you are choosing').waitFor();
-    await choose.getByLabel('A note for Alder Lane Studio (optional)').fill('The hearth one, please. Could the loveseat be green?');
+    await choose.getByLabel('A comment for Alder Lane Studio (optional)').fill('The hearth one, please. Could the loveseat be green?');
     await client.page.screenshot({ path: join(shots, 'client-choose.png') });
     await choose.getByRole('button', { name: 'Choose this option' }).click();
     await choose.getByText('Thank you').waitFor();

@@ -44,6 +44,6 @@ export function useChoose(token: string, roomId: string) {
 }
 
 /** Tells the designer an option was looked at. Best effort: a lost note never bothers the client. */
-export function noteViewed(token: string, optionId: string): void {
+export function markLookedAt(token: string, optionId: string): void {
   void api(`${base(token)}/views`, { method: 'POST', body: { optionId } }).catch(() => undefined);
 }

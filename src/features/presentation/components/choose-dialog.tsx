@@ -56,7 +56,7 @@ export function ChooseDialog({ token, room, option, studioName, nextRoom, onClos
           For the <strong>{room.name}</strong> you are choosing <strong>{option.label}</strong>.
         </p>
         <TextAreaField
-          label={`A note for ${studioName} (optional)`}
+          label={`A comment for ${studioName} (optional)`}
           value={comment}
           maxLength={MAX_COMMENT_LENGTH}
           onChange={(e) => setComment(e.target.value)}

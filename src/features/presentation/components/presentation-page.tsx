@@ -66,7 +66,7 @@ function PresentationView({ token, presentation }: { token: string; presentation
             {rooms.map((r) => (
               <button key={r.id} type="button" className={tab(r.id === step)} aria-current={r.id === step ? 'page' : undefined} onClick={() => setStep(r.id)}>
                 {r.name}
-                {r.choice && <span className="ml-1.5 text-pine" aria-label="(chosen)">✓</span>}
+                {r.choice && <><span className="ml-1.5 text-pine" aria-hidden>✓</span><span className="sr-only"> (chosen)</span></>}
               </button>
             ))}
           </nav>

@@ -1,7 +1,7 @@
 import { lazy, Suspense, useEffect, useRef, useState } from 'react';
 import type { ClientRoom } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';
-import { noteViewed } from '../api/presentation';
+import { markLookedAt } from '../api/presentation';
 import { ChooseDialog } from './choose-dialog';
 import { PieceCard } from './piece-card';
 import { momentText, pieceName, SAFETY_LINE } from './wording';
@@ -36,11 +36,11 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
   };
 
   // Each option counts once per visit as "looked at", however often the client flips back to it.
-  const noted = useRef(new Set<string>());
+  const lookedAt = useRef(new Set<string>());
   useEffect(() => {
-    if (noted.current.has(option.id)) return;
-    noted.current.add(option.id);
-    noteViewed(token, option.id);
+    if (lookedAt.current.has(option.id)) return;
+    lookedAt.current.add(option.id);
+    markLookedAt(token, option.id);
   }, [token, option.id]);
 
   const options = room.options;
@@ -149,7 +149,7 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
             <p className="mt-3 text-sm text-ink-soft">{studioName} has confirmed the choices. To change anything, get in touch with them.</p>
           ) : (
             <Button variant={isChosen ? 'secondary' : 'primary'} className="mt-4 w-full" onClick={() => setChoosing(true)}>
-              {isChosen ? 'Change your note' : 'Choose this option'}
+              {isChosen ? 'Change your comment' : 'Choose this option'}
             </Button>
           )}
         </section>
