@@ -45,8 +45,10 @@ const PAINTS = [
 ] as const;
 
 /** Adds the demo finishes to `studioId`, processing each drawing exactly as an upload is processed. */
-export async function seedDemoFinishes(db: Db, studioId: string, storage: FileStorage): Promise<void> {
-  await insertFinishRows(db, PAINTS.map((p): NewFinish => ({ studio_id: studioId, kind: 'paint', ...p })));
+export async function seedDemoFinishes(db: Db, studioId: string, storage: FileStorage): Promise<Record<string, string>> {
+  const ids: Record<string, string> = {};
+  const paints = await insertFinishRows(db, PAINTS.map((p): NewFinish => ({ studio_id: studioId, kind: 'paint', ...p })));
+  PAINTS.forEach((p, i) => (ids[p.name] = paints[i].id));
   for (const photo of PHOTOS) {
     const image = await photo.draw();
     const key = uploadKey('png');
@@ -71,5 +73,7 @@ export async function seedDemoFinishes(db: Db, studioId: string, storage: FileSt
       queued_at: new Date(),
     }]);
     await runPhotoJob(db, storage, row.id);
+    ids[photo.name] = row.id;
   }
+  return ids;
 }

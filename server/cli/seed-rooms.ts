@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { Db } from '../db/database';
 import { readPlanFile, type PlanFile } from '../../shared/schemas/plan-file';
-import { optionDocSchema, type Piece } from '../../shared/schemas/option';
+import { optionDocSchema, type OptionDocInput, type Piece } from '../../shared/schemas/option';
 import { insertOption, insertRoom } from '../features/rooms/rooms.repository';
 
 const PLANS = resolve(import.meta.dirname, '../../assets/plans');
@@ -15,10 +15,13 @@ function loadPlan(file: string): PlanFile {
   return read.plan;
 }
 
-type Variant = { nameA: string; name: string; note: string; change: (pieces: Piece[]) => Piece[] };
+type Looks = (f: Record<string, string>) => { finishes: OptionDocInput['finishes']; pieceFinishes?: Record<string, string> };
+type Variant = { nameA: string; name: string; note: string; change: (pieces: Piece[]) => Piece[]; looksA: Looks; looksB: Looks };
 
 const LIVING_B: Variant = {
   nameA: 'Sofa by the wall',
+  looksA: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { sofa: f['Washed linen'] } }),
+  looksB: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } }, pieceFinishes: { sofa: f['Washed linen'] } }),
   name: 'Conversation corner',
   note: 'The sofa faces the front window; the client’s armchairs sit opposite. More open floor by the kitchen.',
   change: (pieces) =>
@@ -33,6 +36,8 @@ const LIVING_B: Variant = {
 
 const BEDROOM_B: Variant = {
   nameA: 'Bed on the long wall',
+  looksA: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { bed: f['Washed linen'] } }),
+  looksB: (f) => ({ finishes: { floor: f['Grey stone tile'], walls: f['Morning oat'], wallOverrides: { '2': f['Sprig wallpaper'] } }, pieceFinishes: { bed: f['Washed linen'] } }),
   name: 'Bed under the window',
   note: 'The bed moves to the window wall; the wardrobe stays by the door.',
   change: (pieces) =>
@@ -45,14 +50,24 @@ const BEDROOM_B: Variant = {
     }),
 };
 
-export async function seedDemoRooms(db: Db, studioId: string, projectId: string): Promise<void> {
+/** Puts each look's finishes on the option and on its pieces. */
+function dressed(pieces: Piece[], looks: ReturnType<Looks>) {
+  return optionDocSchema.parse({
+    pieces: pieces.map((p) => (looks.pieceFinishes?.[p.id] ? { ...p, finishId: looks.pieceFinishes[p.id] } : p)),
+    // A look naming a finish the studio lacks just leaves that surface plain (JSON drops undefined ids).
+    finishes: JSON.parse(JSON.stringify(looks.finishes ?? {})),
+  });
+}
+
+export async function seedDemoRooms(db: Db, studioId: string, projectId: string, finishIds: Record<string, string> = {}): Promise<void> {
   for (const [file, variant] of [['l-shaped-living-room.json', LIVING_B], ['bedroom.json', BEDROOM_B]] as const) {
     const plan = loadPlan(file);
     const { name, ...shell } = plan.room;
     const room = await insertRoom(db, { studioId, projectId, name, shell });
-    const docA = optionDocSchema.parse({ pieces: plan.option.pieces, finishes: plan.option.finishes });
+    const base = optionDocSchema.parse({ pieces: plan.option.pieces });
+    const docA = dressed(base.pieces, variant.looksA(finishIds));
     await insertOption(db, { studioId, roomId: room.id, name: variant.nameA, note: plan.option.note ?? '', doc: docA });
-    const docB = optionDocSchema.parse({ pieces: variant.change(docA.pieces), finishes: docA.finishes });
+    const docB = dressed(variant.change(base.pieces), variant.looksB(finishIds));
     await insertOption(db, { studioId, roomId: room.id, name: variant.name, note: variant.note, doc: docB });
   }
 }

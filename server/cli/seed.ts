@@ -40,8 +40,8 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .insertInto('projects')
       .values({ studio_id: studio.id, client_id: other.id, name: 'Garden studio refresh', address: '17 Orchard Lane', updated_at: new Date(Date.now() - 3 * 86_400_000) })
       .execute();
-    await seedDemoRooms(trx, studio.id, flat.id);
-    await seedDemoFinishes(trx, studio.id, demoFileStorage());
+    const finishes = await seedDemoFinishes(trx, studio.id, demoFileStorage());
+    await seedDemoRooms(trx, studio.id, flat.id, finishes);
   });
   return true;
 }

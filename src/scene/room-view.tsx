@@ -7,12 +7,16 @@ import type { RoomShell } from '../../shared/schemas/room';
 import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND, type SceneMaterials } from './materials';
 import { OverviewControls } from './overview-controls';
 import { RoomPieces } from './room-pieces';
-import { RoomShellMeshes } from './room-shell';
+import { RoomShellMeshes, type SurfaceHit } from './room-shell';
 import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
 import { SceneLights } from './scene-lights';
 import { shellParts, type ShellParts } from './shell-parts';
 import { applyWallFade } from './wall-fade';
+import { FinishMaterials, finishColourHex, type SurfaceFinishes } from './finish-materials';
 import { wallsFacingEye } from './wall-facing';
+
+export type { SurfaceHit } from './room-shell';
+export type { SurfaceFinishes } from './finish-materials';
 
 export interface RoomViewProps {
   shell: RoomShell;
@@ -27,6 +31,10 @@ export interface RoomViewProps {
   className?: string;
   /** Accessible name of the view's region. */
   label?: string;
+  /** What the option's surfaces and pieces wear. */
+  finishes?: SurfaceFinishes;
+  /** A click on the floor, the ceiling or a wall's inside face (the editor's Finishes step). */
+  onSurfaceClick?: (surface: SurfaceHit) => void;
 }
 
 const FIELD_OF_VIEW_DEG = 40;
@@ -46,6 +54,8 @@ export default function RoomView({
   fadeNearWalls = true,
   className,
   label = 'Room in 3D',
+  finishes,
+  onSurfaceClick,
 }: RoomViewProps) {
   const host = useRef<HTMLDivElement>(null);
   const [webgl] = useState(browserHasWebGL);
@@ -71,6 +81,8 @@ export default function RoomView({
               onPieceClick={onPieceClick}
               fadeNearWalls={fadeNearWalls}
               host={host}
+              finishes={finishes}
+              onSurfaceClick={onSurfaceClick}
             />
           </Canvas>
         </SceneErrorBoundary>
@@ -113,15 +125,32 @@ interface RoomSceneProps {
   onPieceClick?: (id: string) => void;
   fadeNearWalls: boolean;
   host: React.RefObject<HTMLDivElement | null>;
+  finishes?: SurfaceFinishes;
+  onSurfaceClick?: (surface: SurfaceHit) => void;
 }
 
-function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPieceClick, fadeNearWalls, host }: RoomSceneProps) {
+function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPieceClick, fadeNearWalls, host, finishes: finishesProp, onSurfaceClick }: RoomSceneProps) {
   const shell = useStableValue(shellProp);
-  const pieces = useStableValue(piecesProp.filter((p) => p.placed));
+  const finishes = useStableValue(finishesProp ?? {});
   const invalidate = useThree((state) => state.invalidate);
+  // Pieces wearing a finish are drawn in its colour (a photo's mean colour: pieces share one mesh).
+  const pieces = useStableValue(
+    piecesProp.filter((p) => p.placed).map((p) => (finishes.pieces?.[p.id] ? { ...p, colour: finishColourHex(finishes.pieces[p.id]) } : p)),
+  );
 
   const materials = useMemo(createSceneMaterials, []);
   useEffect(() => () => disposeSceneMaterials(materials), [materials]);
+  const gl = useThree((state) => state.gl);
+  const finishMaterials = useMemo(() => new FinishMaterials(() => invalidate(), Math.min(8, gl.capabilities.getMaxAnisotropy())), [invalidate, gl]);
+  useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
+  const surfaces = useMemo(() => ({
+    floor: finishes.floor ? finishMaterials.get(finishes.floor) : undefined,
+    ceiling: finishes.ceiling ? finishMaterials.get(finishes.ceiling) : undefined,
+    inside: (wall: number) => {
+      const f = finishes.wallOverrides?.[String(wall)] ?? finishes.walls ?? null;
+      return f ? finishMaterials.get(f) : undefined;
+    },
+  }), [finishes, finishMaterials]);
 
   const parts = useMemo(() => tryBuild('room', () => shellParts(buildRoomScene(shell, { pieces: [] }), shell)), [shell]);
   const pieceScene = useMemo<readonly PieceSceneData[]>(
@@ -147,13 +176,13 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
   useLayoutEffect(() => {
     if (lastCamera.current) updateView(lastCamera.current);
     invalidate();
-  }, [updateView, invalidate]);
+  }, [updateView, invalidate, surfaces]);
 
   if (!parts) return <RenderAndReport host={host} />;
   return (
     <>
       <SceneLights bounds={parts.bounds} />
-      <RoomShellMeshes parts={parts} materials={materials} wallsRef={walls} ceilingRef={ceiling} />
+      <RoomShellMeshes parts={parts} materials={materials} wallsRef={walls} ceilingRef={ceiling} surfaces={surfaces} onSurfaceClick={onSurfaceClick} />
       <RoomPieces pieceScene={pieceScene} pieces={pieces} selectedPieceId={selectedPieceId} materials={materials} onPieceClick={onPieceClick} />
       <OverviewControls bounds={parts.bounds} onView={updateView} />
       <RenderAndReport host={host} />
@@ -192,6 +221,7 @@ function RenderAndReport({ host }: { host: React.RefObject<HTMLDivElement | null
     element.dataset.drawCalls = String(gl.info.render.calls);
     element.dataset.triangles = String(gl.info.render.triangles);
     element.dataset.geometries = String(gl.info.memory.geometries);
+    element.dataset.textures = String(gl.info.memory.textures);
     element.dataset.frames = String(frames.current);
   }, 1);
   return null;

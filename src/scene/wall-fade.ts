@@ -25,9 +25,12 @@ export function applyWallFade(root: THREE.Object3D, faded: ReadonlySet<number>, 
     if (!tag) return;
     const isFaded = faded.has(tag.wallIndex);
     switch (tag.wallPart) {
-      case 'wall':
-        object.material = isFaded ? materials.wallFaded : materials.wall;
+      case 'wall': {
+        // A wall wearing a finish carries its own pair of materials.
+        const own = object.userData as { solidMaterial?: THREE.Material; fadedMaterial?: THREE.Material };
+        object.material = isFaded ? own.fadedMaterial ?? materials.wallFaded : own.solidMaterial ?? materials.wall;
         break;
+      }
       case 'frame':
         object.material = isFaded ? materials.windowFrameFaded : materials.windowFrame;
         break;

@@ -151,7 +151,7 @@ describe('a photo finish from upload to texture', () => {
       const res = await fetchFile(owner, url!);
       expect(res.status).toBe(200);
       expect(res.headers['content-type']).toBe('image/webp');
-      expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+      expect(res.headers['cache-control']).toBe('private, max-age=31536000, immutable');
       const meta = await sharp(res.body as Buffer).metadata();
       expect(meta.format).toBe('webp');
       expect(meta.exif).toBeUndefined();

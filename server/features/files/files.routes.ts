@@ -8,7 +8,8 @@ import { hashOfKey, keyFromFileName } from './file-keys';
 const fileParam = z.object({ name: z.string().max(100) });
 
 // Content-hashed names never change meaning, so a browser (and later a CDN) may keep them a year.
-const IMMUTABLE = 'public, max-age=31536000, immutable';
+// private: these files are for the studio's members (and its presentations), so shared caches must not keep them.
+const IMMUTABLE = 'private, max-age=31536000, immutable';
 
 export const fileRoutes: RouteDef[] = [
   {

@@ -1,7 +1,9 @@
 import { useParams } from 'react-router';
 import { EditorPage } from '../../features/rooms/editor/editor-page';
+import { useFinishes } from '../../features/finishes/api/finishes';
 
 export function RoomRoute() {
   const { projectId = '', roomId = '' } = useParams();
-  return <EditorPage projectId={projectId} roomId={roomId} />;
+  const finishes = useFinishes();
+  return <EditorPage projectId={projectId} roomId={roomId} finishes={finishes.data?.finishes ?? []} />;
 }

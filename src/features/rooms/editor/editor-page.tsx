@@ -12,6 +12,9 @@ import { DEFAULT_WALKWAY_MM } from '../../../../shared/analysis/takeoff';
 import { formatLength } from '../../../../shared/units/length';
 import { CheckPanel } from './check-panel';
 import { useFitCheck } from './use-fit-check';
+import { FinishesPanel, targetOf } from './finishes-panel';
+import { sceneFinishesFor } from './scene-finishes';
+import type { Finish } from '../../../../shared/schemas/finish';
 import { FurnishPanel } from './furnish-panel';
 import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
@@ -26,7 +29,7 @@ const RoomView = lazy(() => import('../../../scene/room-view'));
 const UNIT_KEY = 'parlour:length-unit';
 type Layout = 'both' | 'plan' | '3d';
 
-export function EditorPage({ projectId, roomId }: { projectId: string; roomId: string }) {
+export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: string; roomId: string; finishes?: Finish[] }) {
   const room = useRoom(roomId);
   const canEdit = useCanEdit();
   if (room.isPending) return <div className="px-6"><Spinner label="Opening the room…" /></div>;
@@ -38,7 +41,7 @@ export function EditorPage({ projectId, roomId }: { projectId: string; roomId: s
       </div>
     );
   }
-  return <Editor key={roomId} projectId={projectId} detail={room.data} readOnly={!canEdit} />;
+  return <Editor key={roomId} projectId={projectId} detail={room.data} readOnly={!canEdit} finishes={finishes} />;
 }
 
 const SAVE_TEXT: Record<SaveState, string> = {
@@ -49,7 +52,7 @@ const SAVE_TEXT: Record<SaveState, string> = {
   conflict: 'Not saved: see above',
 };
 
-function Editor({ projectId, detail, readOnly }: { projectId: string; detail: RoomDetail; readOnly: boolean }) {
+function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; detail: RoomDetail; readOnly: boolean; finishes: Finish[] }) {
   const editor = useRoomEditor(detail, readOnly);
   const [step, setStep] = useState<EditorStep>(readOnly ? 'furnish' : 'outline');
   const [optionId, setOptionId] = useState(detail.options[0]?.id ?? '');
@@ -64,6 +67,7 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
   const splitHost = useRef<HTMLDivElement>(null);
   const [walkwayMm, setWalkwayMm] = useState(DEFAULT_WALKWAY_MM);
   const [chosenFinding, setChosenFinding] = useState<number | null>(null);
+  const [finishTarget, setFinishTarget] = useState<'floor' | 'ceiling' | 'walls' | 'wall' | 'piece'>('floor');
 
   const option = editor.doc.options[optionId] ?? Object.values(editor.doc.options)[0];
   const activeOptionId = editor.doc.options[optionId] ? optionId : Object.keys(editor.doc.options)[0];
@@ -78,6 +82,13 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
       }
     : null;
   const flaggedPieceIds = step === 'check' ? [...new Set(findings.flatMap((f) => f.pieces))] : [];
+  const finishIndex = useMemo(() => new Map(finishes.map((f) => [f.id, f])), [finishes]);
+  const sceneFinishes = useMemo(() => sceneFinishesFor(option, finishIndex), [option, finishIndex]);
+  const select = useCallback((s: Selection) => {
+    setSelection(s);
+    const t = targetOf(s);
+    if (t) setFinishTarget(t);
+  }, []);
   const newId = useCallback((prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`, []);
 
   useEffect(() => localStorage.setItem(UNIT_KEY, unit), [unit]);
@@ -173,11 +184,11 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
       case 'furnish':
         return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
       case 'finishes':
-        return <p className="text-sm text-ink-soft">Finishes for this option: choose a surface on the plan, then a finish from the library.</p>;
+        return <FinishesPanel doc={option} optionId={activeOptionId} finishes={finishes} run={editor.run} readOnly={readOnly} selection={selection} onSelect={select} surface={finishTarget} onSurface={setFinishTarget} />;
       case 'check':
         return <CheckPanel shell={editor.doc.shell} pieces={pieces} result={fit} walkwayMm={walkwayMm} onWalkway={setWalkwayMm} unit={unit} selected={chosenFinding} onChoose={setChosenFinding} />;
     }
-  }, [step, editor.doc.shell, editor.run, unit, readOnly, selection, option, activeOptionId, pieces, newId, fit, walkwayMm, chosenFinding]);
+  }, [step, editor.doc.shell, editor.run, unit, readOnly, selection, option, activeOptionId, pieces, newId, fit, walkwayMm, chosenFinding, finishes, finishTarget, select]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
     const host = splitHost.current;
@@ -310,7 +321,7 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
                 pieces={pieces}
                 step={step}
                 selection={selection}
-                onSelect={setSelection}
+                onSelect={select}
                 run={editor.run}
                 finishGesture={editor.finishGesture}
                 readOnly={readOnly}
@@ -348,7 +359,14 @@ function Editor({ projectId, detail, readOnly }: { projectId: string; detail: Ro
                   shell={editor.doc.shell}
                   pieces={pieces}
                   selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
-                  onPieceClick={(id) => setSelection({ kind: 'piece', id })}
+                  onPieceClick={(id) => select({ kind: 'piece', id })}
+                  finishes={sceneFinishes}
+                  onSurfaceClick={step === 'finishes' ? (hit) => {
+                    if (hit === 'floor' || hit === 'ceiling') {
+                      setSelection(null);
+                      setFinishTarget(hit);
+                    } else select({ kind: 'wall', index: hit.wall });
+                  } : undefined}
                   className="absolute inset-0"
                   label={`${editor.roomName} in 3D`}
                 />

@@ -1,0 +1,106 @@
+// Materials for finishes: a paint is a colour; a photo finish is a texture repeating at its real
+// size. Scene uvs are in metres, so a finish whose photo covers W × H mm repeats 1000/W times per
+// metre along u and 1000/H along v.
+import * as THREE from 'three';
+import type { SceneFinish } from '../../shared/finishes/scene-finish';
+import { textureRepeat } from '../../shared/geometry/texture-repeat';
+import { FADED_WALL_OPACITY } from './materials';
+
+/** What each surface of one option wears; anything missing keeps the plain default. */
+export interface SurfaceFinishes {
+  floor?: SceneFinish | null;
+  ceiling?: SceneFinish | null;
+  /** All walls' inside faces. */
+  walls?: SceneFinish | null;
+  /** A feature wall's inside face, by wall index. */
+  wallOverrides?: Record<string, SceneFinish>;
+  /** Pieces by id (drawn in the finish's colour, or a photo's mean colour). */
+  pieces?: Record<string, SceneFinish>;
+}
+
+export interface FinishMaterialPair {
+  solid: THREE.MeshStandardMaterial;
+  /** The see-through twin used when the wall stands between the eye and the room. */
+  faded: THREE.MeshStandardMaterial;
+}
+
+/**
+ * One view's finish materials, shared by every surface wearing the same finish, with textures
+ * loaded once per URL. `onChange` is called when a texture arrives (render on demand).
+ */
+export class FinishMaterials {
+  private readonly pairs = new Map<string, FinishMaterialPair>();
+  private readonly textures = new Map<string, THREE.Texture>();
+  private readonly loader = new THREE.TextureLoader();
+  private disposed = false;
+
+  constructor(private readonly onChange: () => void, private readonly anisotropy = 4) {}
+
+  get(finish: SceneFinish): FinishMaterialPair {
+    const key = JSON.stringify(finish);
+    const known = this.pairs.get(key);
+    if (known) return known;
+    const solid = new THREE.MeshStandardMaterial({ roughness: finish.roughness, metalness: 0 });
+    if (finish.kind === 'paint') solid.color.set(finish.colourHex);
+    else {
+      // The flat mean colour first; the photo replaces it as soon as it has loaded.
+      solid.color.set(finish.meanColourHex);
+      this.loadInto(finish, [solid]);
+    }
+    const faded = solid.clone();
+    faded.transparent = true;
+    faded.opacity = FADED_WALL_OPACITY;
+    faded.depthWrite = false;
+    if (finish.kind === 'photo') this.loadInto(finish, [faded]);
+    const pair = { solid, faded };
+    this.pairs.set(key, pair);
+    return pair;
+  }
+
+  private loadInto(finish: Extract<SceneFinish, { kind: 'photo' }>, materials: THREE.MeshStandardMaterial[]): void {
+    const key = `${finish.textureUrl}|${finish.repeatWidthMm}|${finish.repeatHeightMm}`;
+    const apply = (texture: THREE.Texture) => {
+      if (this.disposed) return;
+      for (const m of materials) {
+        m.map = texture;
+        m.color.set('#ffffff');
+        m.needsUpdate = true;
+      }
+      this.onChange();
+    };
+    const ready = this.textures.get(key);
+    if (ready) {
+      if (ready.image) apply(ready);
+      else ready.userData.waiting = [...((ready.userData.waiting as (() => void)[] | undefined) ?? []), () => apply(ready)];
+      return;
+    }
+    const texture = this.loader.load(finish.textureUrl, (t) => {
+      apply(t);
+      for (const wait of (t.userData.waiting as (() => void)[] | undefined) ?? []) wait();
+      t.userData.waiting = [];
+    });
+    texture.wrapS = THREE.RepeatWrapping;
+    texture.wrapT = THREE.RepeatWrapping;
+    const { repeatU, repeatV } = textureRepeat(finish);
+    texture.repeat.set(repeatU, repeatV);
+    texture.colorSpace = THREE.SRGBColorSpace;
+    texture.anisotropy = this.anisotropy;
+    this.textures.set(key, texture);
+  }
+
+  dispose(): void {
+    this.disposed = true;
+    for (const { solid, faded } of this.pairs.values()) {
+      solid.dispose();
+      faded.dispose();
+    }
+    for (const t of this.textures.values()) t.dispose();
+    this.pairs.clear();
+    this.textures.clear();
+  }
+}
+
+/** The colour a piece is drawn in when it wears a finish. */
+export function finishColourHex(finish: SceneFinish): string {
+  return finish.kind === 'paint' ? finish.colourHex : finish.meanColourHex;
+}
