@@ -51,6 +51,7 @@ type Drag =
   | { kind: 'piece'; id: string; offset: [number, number]; gesture: string; held: boolean; ghost?: [number, number] }
   | { kind: 'turn'; id: string; gesture: string }
   | { kind: 'corner'; index: number; gesture: string }
+  | { kind: 'wall'; index: number; start: [number, number]; outline: RoomShell['outline']; gesture: string }
   | { kind: 'opening'; id: string; grab: number; gesture: string }
   | { kind: 'pan'; start: [number, number]; box: { x: number; y: number; w: number; h: number } };
 
@@ -165,6 +166,19 @@ export function PlanView(props: Props) {
       let p = snapToGrid(at, CORNER_GRID_MM) as [number, number];
       if (!e.shiftKey) p = alignToNeighbours(shell.outline, drag.index, p);
       run(moveCorner(drag.index, p[0], p[1]), { gesture: drag.gesture });
+      return;
+    }
+    if (drag.kind === 'wall') {
+      // The wall slides square to itself: both its corners move along its outward normal.
+      const wall = layout.walls[drag.index];
+      if (!wall) return;
+      const d = (at[0] - drag.start[0]) * wall.outward[0] + (at[1] - drag.start[1]) * wall.outward[1];
+      const step = Math.round(d / CORNER_GRID_MM) * CORNER_GRID_MM;
+      const n = drag.outline.length;
+      const moved = drag.outline.map((c, i) =>
+        i === drag.index || i === (drag.index + 1) % n ? [Math.round(c[0] + wall.outward[0] * step), Math.round(c[1] + wall.outward[1] * step)] as [number, number] : c,
+      );
+      run(setOutline(moved), { gesture: drag.gesture });
       return;
     }
     if (drag.kind === 'opening') {
@@ -290,6 +304,10 @@ export function PlanView(props: Props) {
             if (step !== 'outline' && step !== 'openings' && step !== 'finishes') return;
             e.stopPropagation();
             onSelect({ kind: 'wall', index: w.index });
+            if (step === 'outline' && editable && !props.drawing) {
+              (e.target as Element).setPointerCapture?.(e.pointerId);
+              setDrag({ kind: 'wall', index: w.index, start: toPlan(e.clientX, e.clientY), outline: shell.outline, gesture: nextGesture('wall') });
+            }
           }}
           data-testid={`wall-${w.index}`}
         />
