@@ -23,6 +23,16 @@ await page.getByRole('link', { name: 'Canal Row flat' }).click();
 await page.getByRole('heading', { name: /Canal Row flat/ }).waitFor();
 await page.waitForTimeout(300);
 await shot('project');
+await page.getByRole('link', { name: /L-shaped living room/ }).click();
+await page.locator('[data-testid=room-view][data-frames]').waitFor({ timeout: 30000 });
+await page.getByRole('button', { name: /Furnish/ }).click();
+await page.locator('[data-testid^=piece-sofa]').click();
+await page.waitForTimeout(2500);
+await shot('editor');
+await page.getByRole('button', { name: /Check/ }).click();
+await page.getByRole('list', { name: 'Findings' }).getByRole('button').first().click().catch(() => undefined);
+await page.waitForTimeout(1000);
+await shot('editor-check');
 for (const extra of (process.env.SHOTS ?? '').split(',').filter(Boolean)) {
   const [name, path] = extra.split('=');
   await page.goto(`${base}${path}`);

@@ -20,6 +20,7 @@ import type { FileStorage } from './services/storage/storage';
 import { presentationRoutes } from './features/presentations/presentations.routes';
 import { clientPresentationRoutes } from './features/presentations/client.routes';
 import { mountPresentationPage } from './features/presentations/client-page';
+import { scheduleRoutes } from './features/schedules/schedules.routes';
 
 export interface AppDeps {
   db: Db;
@@ -31,7 +32,7 @@ export interface AppDeps {
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
-  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...presentationRoutes, ...clientPresentationRoutes, ...outboxRoutes];
+  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...presentationRoutes, ...clientPresentationRoutes, ...scheduleRoutes, ...outboxRoutes];
 }
 
 export function createApp(deps: AppDeps): Express {

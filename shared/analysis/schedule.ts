@@ -375,6 +375,17 @@ export interface ScheduleLine {
   colourHex: string | null;
 }
 
+/** Short names of the quantity units, as the schedule page and its CSV print them. */
+export const QUANTITY_UNIT_LABELS: Record<QuantityUnit, string> = { piece: 'pcs', m2: 'm²', unit: 'units', L: 'L' };
+
+const MM_PER_CM = 10;
+const cm = (mm: number) => String(Math.round((mm / MM_PER_CM) * 10) / 10);
+
+/** "200 × 90 × 80 cm": a piece's width × depth × height. */
+export function sizeText(size: { width: number; depth: number; height: number }): string {
+  return `${cm(size.width)} × ${cm(size.depth)} × ${cm(size.height)} cm`;
+}
+
 export interface ScheduleTotals {
   newPiecesCost: number;
   finishesCost: number;

@@ -70,6 +70,10 @@ const CASES: Record<string, Case> = {
   'post /api/presentations/:id/withdraw': { params: (f) => ({ id: f.presentationId }) },
   'post /api/presentations/:id/extend': { params: (f) => ({ id: f.presentationId }), body: () => ({ days: 5 }) },
   'post /api/projects/:projectId/decide': { params: (f) => ({ projectId: f.projectId }), body: () => ({ presentationId: randomUUID() }) },
+  'get /api/projects/:projectId/takeoff': { params: (f) => ({ projectId: f.projectId }) },
+  'get /api/projects/:projectId/compare': { params: (f) => ({ projectId: f.projectId }) },
+  'get /api/options/:id/schedule': { params: (f) => ({ id: f.optionId }) },
+  'get /api/options/:id/schedule.csv': { params: (f) => ({ id: f.optionId }) },
 };
 
 const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
