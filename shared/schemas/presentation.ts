@@ -1,5 +1,6 @@
 // Presentations: the designer's bodies and answers, and what the client's page receives.
 import { z } from 'zod';
+import type { SceneFinish } from '../finishes/scene-finish';
 import { pieceSchema } from './option';
 import { roomShellSchema } from './room';
 import { emailSchema } from './studio';
@@ -128,12 +129,29 @@ export const clientPieceSchema = pieceSchema.omit({ supplierUrl: true, finishId:
 });
 export type ClientPiece = z.infer<typeof clientPieceSchema>;
 
+// Built by the server from the studio's finishes, never parsed from a client: the type is enough.
+const sceneFinishSchema = z.custom<SceneFinish>();
+
+/**
+ * What an option's surfaces wear in 3D: paints as colours, photo finishes as textures (the large
+ * size, served through the link's own file route) with their real repeat size. Pieces by piece id.
+ */
+export const clientSurfacesSchema = z.object({
+  floor: sceneFinishSchema.nullable(),
+  ceiling: sceneFinishSchema.nullable(),
+  walls: sceneFinishSchema.nullable(),
+  wallOverrides: z.record(z.string(), sceneFinishSchema),
+  pieces: z.record(z.string(), sceneFinishSchema),
+});
+export type ClientSurfaces = z.infer<typeof clientSurfacesSchema>;
+
 export const clientOptionSchema = z.object({
   id: z.string(),
   label: z.string(),
   name: z.string(),
   note: z.string(),
   pieces: z.array(clientPieceSchema),
+  surfaces: clientSurfacesSchema,
 });
 export type ClientOption = z.infer<typeof clientOptionSchema>;
 

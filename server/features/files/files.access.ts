@@ -1,6 +1,6 @@
-// Who may load a stored file. Now: signed-in members of a studio that owns a finish using it.
-// Later: a presentation's visitor, for the files of the finishes its options use (add the check
-// here, so the files route keeps one question to ask).
+// Who may load a stored file: signed-in members of a studio that owns a finish using it, and a
+// presentation's visitor for the textures of the finishes its shown options use. The files
+// routes keep one question each to ask.
 import type { Db } from '../../db/database';
 import type { Caller } from '../../http/routes';
 
@@ -13,6 +13,31 @@ export async function canReadFile(db: Db, caller: Caller | null, fileKey: string
     .where('studio_id', '=', caller.studioId)
     // The kept original is private even to the studio: only what processing made is served.
     .where('purpose', '<>', 'master')
+    .limit(1)
+    .executeTakeFirst();
+  return Boolean(row);
+}
+
+/** What a link's visitor sees of a studio's files: the textures of these finishes only. */
+export interface PresentationFileScope {
+  studioId: string;
+  /** Finishes worn by the presentation's shown options. */
+  finishIds: readonly string[];
+}
+
+/**
+ * True when `fileKey` is a texture of one of the scope's finishes. Swatches, previews and the
+ * cropping view are the designer's working files: the client's 3D view needs textures alone.
+ */
+export async function canPresentationReadFile(db: Db, scope: PresentationFileScope, fileKey: string): Promise<boolean> {
+  if (scope.finishIds.length === 0) return false;
+  const row = await db
+    .selectFrom('finish_files')
+    .select('finish_id')
+    .where('key', '=', fileKey)
+    .where('studio_id', '=', scope.studioId)
+    .where('finish_id', 'in', [...scope.finishIds])
+    .where('purpose', 'in', ['texture', 'texture-large'])
     .limit(1)
     .executeTakeFirst();
   return Boolean(row);

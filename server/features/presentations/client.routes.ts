@@ -7,12 +7,15 @@ import { optionLabel } from '../../../shared/schemas/room-api';
 import type { RouteContext, RouteDef } from '../../http/routes';
 import { HttpError } from '../../http/errors';
 import { touchProject } from '../projects/projects.repository';
+import { canPresentationReadFile } from '../files/files.access';
+import { keyFromFileName } from '../files/file-keys';
+import { fileParam, sendDerivedFile } from '../files/files.routes';
 import {
   getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordOpened, recordViewed,
   saveChoice, type PresentationRow,
 } from './presentations.repository';
 import {
-  CHOICE_LIMIT, RATE_WINDOW_MS, VIEW_LIMIT, choiceMail, clientPresentation, linkNotFound, presentationForToken,
+  CHOICE_LIMIT, RATE_WINDOW_MS, VIEW_LIMIT, choiceMail, clientPresentation, linkNotFound, presentationFinishIds, presentationForToken,
 } from './presentations.service';
 
 const roomParam = z.object({ roomId: z.uuid() });
@@ -62,7 +65,24 @@ export const clientPresentationRoutes: RouteDef[] = [
       privateAnswer(ctx.res);
       const p = await presentationForToken(ctx.deps.db, ctx.deps.config, tokenOf(ctx.req));
       if (!isStudioMember(ctx, p)) await recordOpened(ctx.deps.db, p.id, new Date());
-      return { presentation: await clientPresentation(ctx.deps.db, p) };
+      return { presentation: await clientPresentation(ctx.deps.db, p, tokenOf(ctx.req)) };
+    },
+  },
+  {
+    // The textures of the finishes the shown options wear, for a visitor without an account. The
+    // link is checked on every request (withdrawing stops it at once); the browser's own cache may
+    // keep a file it already has, as for the studio's members.
+    method: 'get',
+    path: '/api/p/:token/files/:name',
+    access: 'public',
+    async handler(ctx) {
+      const p = await presentationForToken(ctx.deps.db, ctx.deps.config, tokenOf(ctx.req));
+      const { name } = fileParam.parse(ctx.req.params);
+      const key = keyFromFileName(name);
+      const scope = { studioId: p.studio_id, finishIds: await presentationFinishIds(ctx.deps.db, p) };
+      // Another finish's file and no file at all answer the same, so names cannot be probed.
+      if (!key || !(await canPresentationReadFile(ctx.deps.db, scope, key))) throw new HttpError(404, 'not_found', 'That file was not found.');
+      return sendDerivedFile(ctx, key, { 'Referrer-Policy': 'no-referrer' });
     },
   },
   {

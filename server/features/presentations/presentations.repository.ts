@@ -163,6 +163,12 @@ export async function finishLabels(db: Db, studioId: string, ids: string[]) {
   return db.selectFrom('finishes').select(['id', 'name', 'colour_hex']).where('studio_id', '=', studioId).where('id', 'in', ids).execute();
 }
 
+/** The studio's finish rows with these ids (others are left out), for what the shown options wear. */
+export async function finishRows(db: Db, studioId: string, ids: string[]) {
+  if (ids.length === 0) return [];
+  return db.selectFrom('finishes').selectAll().where('studio_id', '=', studioId).where('id', 'in', ids).execute();
+}
+
 export async function studioName(db: Db, studioId: string): Promise<string> {
   const r = await db.selectFrom('studios').select('name').where('id', '=', studioId).executeTakeFirstOrThrow();
   return r.name;

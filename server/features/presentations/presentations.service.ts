@@ -3,16 +3,19 @@
 import type { AppConfig } from '../../config';
 import type { Db } from '../../db/database';
 import { HttpError } from '../../http/errors';
-import { optionDocSchema, type Piece } from '../../../shared/schemas/option';
+import { optionDocSchema, type OptionDoc, type Piece } from '../../../shared/schemas/option';
+import { toSceneFinish, type SceneFinish } from '../../../shared/finishes/scene-finish';
+import type { Finish } from '../../../shared/schemas/finish';
 import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionLabel } from '../../../shared/schemas/room-api';
 import type {
-  Choice, ClientPiece, ClientPresentation, ClientRoom, PresentationState, PresentationSummary,
+  Choice, ClientPiece, ClientPresentation, ClientRoom, ClientSurfaces, PresentationState, PresentationSummary,
 } from '../../../shared/schemas/presentation';
+import { toFinishes } from '../finishes/finishes.service';
 import { signPresentationToken, verifyPresentationToken } from '../../services/tokens/presentation-token';
 import { escapeHtml } from '../studio/studio.routes';
 import {
-  finishLabels, findByTokenId, listChoices, listShownOptions, projectForPresentation, studioName, type PresentationRow,
+  finishLabels, finishRows, findByTokenId, listChoices, listShownOptions, projectForPresentation, studioName, type PresentationRow,
 } from './presentations.repository';
 
 /** Choice posts per link per window: plenty for a family changing its mind, too few to flood the designer's inbox. */
@@ -144,8 +147,47 @@ export function toClientPiece(piece: Piece, showPrices: boolean, finishes: Map<s
   return out;
 }
 
-/** Everything the client's page shows, and nothing else. */
-export async function clientPresentation(db: Db, p: PresentationRow): Promise<ClientPresentation> {
+/** Every finish id an option shows: its floor, ceiling, walls, feature walls and placed pieces. */
+export function finishIdsOf(doc: OptionDoc): string[] {
+  const { floor, ceiling, walls, wallOverrides } = doc.finishes;
+  const ids = [floor, ceiling, walls, ...Object.values(wallOverrides), ...doc.pieces.filter((p) => p.placed).map((p) => p.finishId)];
+  return [...new Set(ids.filter((id): id is string => Boolean(id && UUID.test(id))))];
+}
+
+/** The finish ids the shown options of a presentation use: the finishes whose files its link may load. */
+export async function presentationFinishIds(db: Db, p: PresentationRow): Promise<string[]> {
+  const shown = await listShownOptions(db, [p.id]);
+  return [...new Set(shown.flatMap((s) => finishIdsOf(optionDocSchema.parse(s.doc))))];
+}
+
+/** `/api/files/<name>` as the link's own route, so the client loads textures without an account. */
+export function linkFileUrl(token: string, url: string): string {
+  return url.replace(/^\/api\/files\//, `/api/p/${encodeURIComponent(token)}/files/`);
+}
+
+/** What one option's surfaces and pieces wear in 3D, with textures behind the link's file route. */
+export function clientSurfaces(doc: OptionDoc, finishes: ReadonlyMap<string, Finish>, token: string): ClientSurfaces {
+  const scene = (id: string | null | undefined): SceneFinish | null => {
+    const finish = id ? finishes.get(id) : undefined;
+    if (!finish) return null;
+    const s = toSceneFinish(finish, { size: 'large' });
+    return s.kind === 'photo' ? { ...s, textureUrl: linkFileUrl(token, s.textureUrl) } : s;
+  };
+  const wallOverrides: Record<string, SceneFinish> = {};
+  for (const [wall, id] of Object.entries(doc.finishes.wallOverrides)) {
+    const f = scene(id);
+    if (f) wallOverrides[wall] = f;
+  }
+  const pieces: Record<string, SceneFinish> = {};
+  for (const piece of doc.pieces) {
+    const f = piece.placed ? scene(piece.finishId) : null;
+    if (f) pieces[piece.id] = f;
+  }
+  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces };
+}
+
+/** Everything the client's page shows, and nothing else; `token` is the link's, for its file URLs. */
+export async function clientPresentation(db: Db, p: PresentationRow, token: string): Promise<ClientPresentation> {
   const [studio, project, shown, choices] = await Promise.all([
     studioName(db, p.studio_id),
     projectForPresentation(db, p.studio_id, p.project_id),
@@ -158,7 +200,10 @@ export async function clientPresentation(db: Db, p: PresentationRow): Promise<Cl
   // Holding-area pieces are the designer's working space, not part of the proposal.
   const placed = (id: string) => docs.get(id)!.pieces.filter((piece) => piece.placed);
   const finishIds = [...new Set(shown.flatMap((s) => placed(s.option_id).map((piece) => piece.finishId)).filter((id): id is string => Boolean(id && UUID.test(id))))];
-  const finishes = new Map((await finishLabels(db, p.studio_id, finishIds)).map((f) => [f.id, { name: f.name, colourHex: f.colour_hex }]));
+  const surfaceIds = [...new Set(shown.flatMap((s) => finishIdsOf(docs.get(s.option_id)!)))];
+  const [labels, rows] = await Promise.all([finishLabels(db, p.studio_id, finishIds), finishRows(db, p.studio_id, surfaceIds)]);
+  const finishes = new Map(labels.map((f) => [f.id, { name: f.name, colourHex: f.colour_hex }]));
+  const sceneFinishes = new Map((await toFinishes(db, rows)).map((f) => [f.id, f]));
 
   const rooms: ClientRoom[] = grouped.map((room) => {
     const choice = choices.find((c) => c.room_id === room.roomId);
@@ -172,6 +217,7 @@ export async function clientPresentation(db: Db, p: PresentationRow): Promise<Cl
         name: o.option_name,
         note: o.note,
         pieces: placed(o.option_id).map((piece) => toClientPiece(piece, p.show_prices, finishes)),
+        surfaces: clientSurfaces(docs.get(o.option_id)!, sceneFinishes, token),
       })),
       choice: choice ? toChoice(choice) : null,
     };
