@@ -13,3 +13,13 @@ export const errorBodySchema = z.object({
 export type ErrorBody = z.infer<typeof errorBodySchema>;
 
 export const sortSchema = z.enum(['updated', 'name']).default('updated');
+
+/** Optional free text up to `max` characters; an empty string is stored as null. */
+export const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `Keep it under ${max} characters.`)
+    .transform((v) => (v === '' ? null : v))
+    .nullable()
+    .optional();

@@ -1,5 +1,6 @@
 // Finishes: photo finishes (a processed photo with the real size its crop covers) and paints.
 import { z } from 'zod';
+import { optionalText } from './common';
 
 export const FINISH_CATEGORIES = ['floor', 'wall', 'tile', 'wood', 'stone', 'fabric', 'wallpaper', 'other'] as const;
 export const finishCategorySchema = z.enum(FINISH_CATEGORIES, { message: 'Pick a category from the list.' });
@@ -62,15 +63,6 @@ const repeatMm = z.coerce
   .finite('Enter a size in mm.')
   .min(1, 'Make it at least 1 mm.')
   .max(100_000, 'Keep it under 100 m.');
-
-const optionalText = (max: number) =>
-  z
-    .string()
-    .trim()
-    .max(max, `Keep it under ${max} characters.`)
-    .transform((v) => (v === '' ? null : v))
-    .nullable()
-    .optional();
 
 const nameSchema = z.string().trim().min(1, 'Enter a name.').max(120, 'Keep the name under 120 characters.');
 const priceSchema = z.number({ message: 'Enter a price.' }).finite().nonnegative('A price cannot be negative.').max(1_000_000, 'Keep the price under 1,000,000.').nullable().optional();

@@ -1,18 +1,9 @@
 import { z } from 'zod';
 import { emailSchema } from './studio';
-import { sortSchema } from './common';
+import { optionalText, sortSchema } from './common';
 
 export const projectStateSchema = z.enum(['draft', 'presented', 'decided', 'archived']);
 export type ProjectState = z.infer<typeof projectStateSchema>;
-
-const optionalText = (max: number) =>
-  z
-    .string()
-    .trim()
-    .max(max, `Keep it under ${max} characters.`)
-    .transform((v) => (v === '' ? null : v))
-    .nullable()
-    .optional();
 
 export const clientBodySchema = z.object({
   name: z.string().trim().min(1, 'Enter the client’s name.').max(120, 'Keep the name under 120 characters.'),

@@ -2,7 +2,8 @@ import { useDeferredValue, useState, type FormEvent } from 'react';
 import type { ListQuery } from '../../../../shared/schemas/project';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
-import { inputClass, TextField } from '../../../components/ui/field';
+import { TextField } from '../../../components/ui/field';
+import { ListToolbar, SORT_OPTIONS, ToolbarSelect } from '../../../components/ui/list-toolbar';
 import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage, fieldError } from '../../../lib/api';
 import { formatRelative } from '../../../lib/format';
@@ -22,19 +23,9 @@ export function ClientsPage() {
       <PageHeader title="Clients" actions={canEdit && <Button variant="primary" onClick={() => setEditing('new')}>Add client</Button>}>
         The households and people your projects are for.
       </PageHeader>
-      <div className="mb-4 flex flex-wrap items-center gap-3">
-        <label className="min-w-64 flex-1">
-          <span className="sr-only">Search clients</span>
-          <input className={inputClass} type="search" placeholder="Search by name or e-mail" value={q} onChange={(e) => setQ(e.target.value)} />
-        </label>
-        <label className="flex items-center gap-2 text-sm text-ink-soft">
-          Sort
-          <select className={`${inputClass} w-auto`} value={sort} onChange={(e) => setSort(e.target.value as ListQuery['sort'])}>
-            <option value="updated">Last change</option>
-            <option value="name">Name</option>
-          </select>
-        </label>
-      </div>
+      <ListToolbar label="Search clients" placeholder="Search by name or e-mail" query={q} onQuery={setQ}>
+        <ToolbarSelect label="Sort" value={sort} onChange={setSort} options={SORT_OPTIONS} />
+      </ListToolbar>
       {clients.isPending ? (
         <Spinner />
       ) : clients.isError ? (

@@ -2,7 +2,6 @@ import { useDeferredValue, useState } from 'react';
 import { Link } from 'react-router';
 import { FINISH_CATEGORIES, type FinishListQuery } from '../../../../shared/schemas/finish';
 import { Button } from '../../../components/ui/button';
-import { inputClass } from '../../../components/ui/field';
 import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
@@ -11,6 +10,7 @@ import { AddPaintDialog } from './add-paint-dialog';
 import { CATEGORY_LABELS, finishSummary, formatPrice } from './finish-labels';
 import { PhotoUpload } from './photo-upload';
 import { Swatch } from './swatch';
+import { ListToolbar, ToolbarSelect } from '../../../components/ui/list-toolbar';
 
 type Filter = 'all' | 'paint' | (typeof FINISH_CATEGORIES)[number];
 
@@ -34,22 +34,15 @@ export function FinishLibraryPage() {
         Floors, tiles, fabrics, wallpapers and paints from real samples, at their real size.
       </PageHeader>
       {canEdit && <PhotoUpload />}
-      <div className="mb-5 flex flex-wrap items-center gap-3">
-        <label className="min-w-64 flex-1">
-          <span className="sr-only">Search finishes</span>
-          <input className={inputClass} type="search" placeholder="Search by name, supplier or code" value={q} onChange={(e) => setQ(e.target.value)} />
-        </label>
-        <label className="flex items-center gap-2 text-sm text-ink-soft">
-          Show
-          <select className={`${inputClass} w-auto`} value={filter} onChange={(e) => setFilter(e.target.value as Filter)} aria-label="Category">
-            <option value="all">All finishes</option>
-            <option value="paint">Paints</option>
-            {FINISH_CATEGORIES.map((c) => (
-              <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>
-            ))}
-          </select>
-        </label>
-      </div>
+      <ListToolbar className="mb-5" label="Search finishes" placeholder="Search by name, supplier or code" query={q} onQuery={setQ}>
+        <ToolbarSelect
+          label="Show"
+          ariaLabel="Category"
+          value={filter}
+          onChange={setFilter}
+          options={[{ value: 'all', label: 'All finishes' }, { value: 'paint', label: 'Paints' }, ...FINISH_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }))]}
+        />
+      </ListToolbar>
       {finishes.isPending ? (
         <Spinner label="Loading finishes…" />
       ) : finishes.isError ? (

@@ -2,7 +2,7 @@ import { useDeferredValue, useState } from 'react';
 import { Link } from 'react-router';
 import type { ListQuery } from '../../../../shared/schemas/project';
 import { Button } from '../../../components/ui/button';
-import { inputClass } from '../../../components/ui/field';
+import { ListToolbar, SORT_OPTIONS, ToolbarSelect } from '../../../components/ui/list-toolbar';
 import { Badge, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { formatRelative } from '../../../lib/format';
@@ -28,27 +28,15 @@ export function ProjectsPage({ clients }: { clients: { id: string; name: string 
         Every client job, with its rooms, options and presentations.
       </PageHeader>
 
-      <div className="mb-4 flex flex-wrap items-center gap-3">
-        <label className="min-w-64 flex-1">
-          <span className="sr-only">Search projects</span>
-          <input className={inputClass} type="search" placeholder="Search by project, client or address" value={q} onChange={(e) => setQ(e.target.value)} />
-        </label>
-        <label className="flex items-center gap-2 text-sm text-ink-soft">
-          Sort
-          <select className={`${inputClass} w-auto`} value={sort} onChange={(e) => setSort(e.target.value as ListQuery['sort'])}>
-            <option value="updated">Last change</option>
-            <option value="name">Name</option>
-          </select>
-        </label>
-        <label className="flex items-center gap-2 text-sm text-ink-soft">
-          Show
-          <select className={`${inputClass} w-auto`} value={archived} onChange={(e) => setArchived(e.target.value as ListQuery['archived'])}>
-            <option value="exclude">Current</option>
-            <option value="only">Archived</option>
-            <option value="include">All</option>
-          </select>
-        </label>
-      </div>
+      <ListToolbar label="Search projects" placeholder="Search by project, client or address" query={q} onQuery={setQ}>
+        <ToolbarSelect label="Sort" value={sort} onChange={setSort} options={SORT_OPTIONS} />
+        <ToolbarSelect
+          label="Show"
+          value={archived}
+          onChange={setArchived}
+          options={[{ value: 'exclude', label: 'Current' }, { value: 'only', label: 'Archived' }, { value: 'include', label: 'All' }]}
+        />
+      </ListToolbar>
 
       {projects.isPending ? (
         <Spinner label="Loading projects…" />
