@@ -59,15 +59,18 @@ function dressed(pieces: Piece[], looks: ReturnType<Looks>) {
   });
 }
 
-export async function seedDemoRooms(db: Db, studioId: string, projectId: string, finishIds: Record<string, string> = {}): Promise<void> {
+export async function seedDemoRooms(db: Db, studioId: string, projectId: string, finishIds: Record<string, string> = {}): Promise<{ roomId: string; optionIds: string[] }[]> {
+  const made: { roomId: string; optionIds: string[] }[] = [];
   for (const [file, variant] of [['l-shaped-living-room.json', LIVING_B], ['bedroom.json', BEDROOM_B]] as const) {
     const plan = loadPlan(file);
     const { name, ...shell } = plan.room;
     const room = await insertRoom(db, { studioId, projectId, name, shell });
     const base = optionDocSchema.parse({ pieces: plan.option.pieces });
     const docA = dressed(base.pieces, variant.looksA(finishIds));
-    await insertOption(db, { studioId, roomId: room.id, name: variant.nameA, note: plan.option.note ?? '', doc: docA });
+    const a = await insertOption(db, { studioId, roomId: room.id, name: variant.nameA, note: plan.option.note ?? '', doc: docA });
     const docB = dressed(variant.change(base.pieces), variant.looksB(finishIds));
-    await insertOption(db, { studioId, roomId: room.id, name: variant.name, note: variant.note, doc: docB });
+    const b = await insertOption(db, { studioId, roomId: room.id, name: variant.name, note: variant.note, doc: docB });
+    made.push({ roomId: room.id, optionIds: [a.id, b.id] });
   }
+  return made;
 }

@@ -3,6 +3,7 @@
 import type { Db } from '../db/database';
 import { hashPassword } from '../services/auth/passwords';
 import { seedDemoRooms } from './seed-rooms';
+import { seedDemoPresentation } from './seed-presentation';
 import { demoFileStorage, seedDemoFinishes } from './seed-finishes';
 
 export const DEMO_SIGN_IN = { email: 'demo@parlour.local', password: 'parlour-demo' } as const;
@@ -13,13 +14,14 @@ export async function seedDemo(db: Db): Promise<boolean> {
   const [ownerHash, otherHash] = await Promise.all([hashPassword(DEMO_SIGN_IN.password), hashPassword('parlour-demo-team')]);
   await db.transaction().execute(async (trx) => {
     const studio = await trx.insertInto('studios').values({ name: 'Wren & Tallow Interiors' }).returning('id').executeTakeFirstOrThrow();
-    await trx
+    const [owner] = await trx
       .insertInto('members')
       .values([
         { studio_id: studio.id, email: DEMO_SIGN_IN.email, name: 'Ines Calloway', role: 'owner', password_hash: ownerHash },
         { studio_id: studio.id, email: 'theo@parlour.local', name: 'Theo Marsh', role: 'designer', password_hash: otherHash },
         { studio_id: studio.id, email: 'pia@parlour.local', name: 'Pia Lund', role: 'viewer', password_hash: otherHash },
       ])
+      .returning('id')
       .execute();
     const client = await trx
       .insertInto('clients')
@@ -41,7 +43,8 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .values({ studio_id: studio.id, client_id: other.id, name: 'Garden studio refresh', address: '17 Orchard Lane', updated_at: new Date(Date.now() - 3 * 86_400_000) })
       .execute();
     const finishes = await seedDemoFinishes(trx, studio.id, demoFileStorage());
-    await seedDemoRooms(trx, studio.id, flat.id, finishes);
+    const rooms = await seedDemoRooms(trx, studio.id, flat.id, finishes);
+    await seedDemoPresentation(trx, { studioId: studio.id, projectId: flat.id, createdBy: owner.id, rooms });
   });
   return true;
 }

@@ -11,6 +11,7 @@ import { StudioPage } from '../features/studio/components/studio-page';
 import { OutboxPage } from '../features/outbox/components/outbox-page';
 import { FinishLibraryPage } from '../features/finishes/components/finish-library-page';
 import { FinishRoute } from './routes/finishes-route';
+import { ScheduleRoute, TakeoffRoute } from './routes/schedules-route';
 
 export const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInPage /> },
@@ -26,6 +27,8 @@ export const router = createBrowserRouter([
       { path: '/', element: <Navigate to="/projects" replace /> },
       { path: '/projects', element: <ProjectsRoute /> },
       { path: '/projects/:projectId', element: <ProjectRoute /> },
+      { path: '/projects/:projectId/take-off', element: <TakeoffRoute /> },
+      { path: '/projects/:projectId/rooms/:roomId/options/:optionId/schedule', element: <ScheduleRoute /> },
       { path: '/clients', element: <ClientsPage /> },
       { path: '/finishes', element: <FinishLibraryPage /> },
       { path: '/finishes/:finishId', element: <FinishRoute /> },

@@ -30,5 +30,10 @@ describe('demo data', () => {
     }
     // The L-shape (6.2 × 3.4 m plus 3.8 × 2.2 m) is 21.08 + 8.36 = 29.44 m² (derived).
     expect(rooms[0].floorAreaM2).toBeCloseTo(29.44, 2);
+    // A presentation of both rooms, ready to send; the flat is with the client.
+    expect(flat.state).toBe('presented');
+    const presentations = (await agent.get(`/api/projects/${flat.id}/presentations`)).body.presentations;
+    expect(presentations).toHaveLength(1);
+    expect(JSON.stringify(presentations[0])).toContain(rooms[0].id);
   });
 });

@@ -3,6 +3,7 @@ import { ProjectPage } from '../../features/projects/components/project-page';
 import { useProject } from '../../features/projects/api/projects';
 import { RoomList } from '../../features/rooms/components/room-list';
 import { PresentationsPanel } from '../../features/presentations/components/presentations-panel';
+import { SchedulesLink } from '../../features/schedules/components/schedules-link';
 
 export function ProjectRoute() {
   const { projectId = '' } = useParams();
@@ -11,5 +12,5 @@ export function ProjectRoute() {
   const presentations = project.data && (
     <PresentationsPanel projectId={projectId} projectState={project.data.project.state} clientEmail={project.data.client?.email ?? null} />
   );
-  return <ProjectPage id={projectId} rooms={<RoomList projectId={projectId} />} presentations={presentations} />;
+  return <ProjectPage id={projectId} rooms={<><RoomList projectId={projectId} /><SchedulesLink projectId={projectId} /></>} presentations={presentations} />;
 }
