@@ -3,12 +3,12 @@
 import { Link } from 'react-router';
 import { QUANTITY_UNIT_LABELS, sizeText, type ScheduleLine } from '../../../../shared/analysis/schedule';
 import { Button } from '../../../components/ui/button';
-import { Badge, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
-import { errorMessage } from '../../../lib/api';
+import { Badge, PageHeader, Spinner } from '../../../components/ui/layout';
 import { scheduleCsvUrl, settingsQuery, useSchedule } from '../api/schedules';
 import { useTakeoffSettings } from '../hooks/use-takeoff-settings';
 import { formatMoney, formatQuantity } from './format';
 import { PaintChip } from './paint-chip';
+import { LoadError } from './load-error';
 
 // Paper margins for the print view; the page box cannot be set from Tailwind classes.
 const PRINT_PAGE_CSS = '@page { size: A4; margin: 14mm 12mm; }';
@@ -24,14 +24,7 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
   const schedule = useSchedule(optionId, query);
 
   if (schedule.isPending) return <Spinner label="Loading the schedule…" />;
-  if (schedule.isError) {
-    return (
-      <div className="flex flex-col gap-4">
-        <Notice tone="error">{errorMessage(schedule.error)}</Notice>
-        <Link to={`/projects/${projectId}`} className="font-semibold text-pine">Back to the project</Link>
-      </div>
-    );
-  }
+  if (schedule.isError) return <LoadError error={schedule.error} projectId={projectId} />;
   const { project, room, option, schedule: s } = schedule.data;
   const pieces = s.lines.filter((l) => l.section === 'piece');
   const finishes = s.lines.filter((l) => l.section === 'finish');

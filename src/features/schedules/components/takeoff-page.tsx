@@ -10,6 +10,7 @@ import { errorMessage } from '../../../lib/api';
 import { useCompare, useProjectTakeoff, settingsQuery } from '../api/schedules';
 import { useTakeoffSettings } from '../hooks/use-takeoff-settings';
 import { CompareTable } from './compare-table';
+import { LoadError } from './load-error';
 import { NumberSetting } from './number-setting';
 import { ProjectTotals, RoomTakeoffTables } from './takeoff-tables';
 
@@ -23,14 +24,7 @@ export function TakeoffPage({ projectId }: { projectId: string }) {
   const compare = useCompare(projectId, settingsQuery(settings));
 
   if (takeoff.isPending) return <Spinner label="Counting…" />;
-  if (takeoff.isError) {
-    return (
-      <div className="flex flex-col gap-4">
-        <Notice tone="error">{errorMessage(takeoff.error)}</Notice>
-        <Link to={`/projects/${projectId}`} className="font-semibold text-pine">Back to the project</Link>
-      </div>
-    );
-  }
+  if (takeoff.isError) return <LoadError error={takeoff.error} projectId={projectId} />;
   const { project, rooms, totals } = takeoff.data;
 
   return (
