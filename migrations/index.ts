@@ -4,10 +4,12 @@ import * as m0001 from './0001_create_studios';
 import * as m0002 from './0002_create_rooms';
 import * as m0003 from './0003_create_finishes';
 import * as m0004 from './0004_create_presentations';
+import * as m0005 from './0005_create_rate_limits';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
   '0002_create_rooms': m0002,
   '0003_create_finishes': m0003,
   '0004_create_presentations': m0004,
+  '0005_create_rate_limits': m0005,
 };

@@ -21,6 +21,9 @@ import { presentationRoutes } from './features/presentations/presentations.route
 import { clientPresentationRoutes } from './features/presentations/client.routes';
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
+import { createLogger, requestLogger, type Logger } from './services/logging/logger';
+import { securityHeaders } from './services/security/headers';
+import { originCheck } from './services/security/origin-check';
 
 export interface AppDeps {
   db: Db;
@@ -28,6 +31,8 @@ export interface AppDeps {
   config: AppConfig;
   /** Where photos and textures are kept; DATA_DIR/files on local disk when not given. */
   storage?: FileStorage;
+  /** Structured logs; a logger at the configured level on stdout when not given. */
+  logger?: Logger;
 }
 
 /** Every API route with its access rule: the app mounts exactly this table. */
@@ -39,7 +44,10 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  app.use(requestLogger(deps.logger ?? createLogger({ level: deps.config.logLevel })));
+  app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
   app.use('/api', express.json({ limit: '2mb' }));
+  app.use('/api', originCheck(deps.config.publicUrl));
   app.use('/api', sessionMiddleware(deps.db));
 
   const api = Router();

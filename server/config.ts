@@ -28,9 +28,30 @@ const envSchema = z.object({
   // Signs presentation links (hex or base64, at least 256 bits). Without it, one is generated
   // into DATA_DIR/presentation-key on first start; every instance must share the same key.
   PRESENTATION_KEY: z.string().trim().min(1).optional(),
-});
+  // Structured log lines on stdout; tests are quiet unless asked.
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  // Where photos and textures are kept: DATA_DIR/files, or an S3-compatible bucket shared by
+  // every instance.
+  STORAGE: z.enum(['local', 's3']).default('local'),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_BUCKET: z.string().min(1).optional(),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  // Stand-ins and many self-hosted stores want bucket/key paths rather than bucket host names.
+  S3_FORCE_PATH_STYLE: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
+}).refine((c) => c.STORAGE !== 's3' || c.S3_BUCKET, { path: ['S3_BUCKET'], message: 'is required when STORAGE=s3' });
 
-export type AppConfig = Omit<z.infer<typeof envSchema>, 'PRESENTATION_KEY'> & { publicUrl: string; presentationKey: Uint8Array };
+type LogLevel = NonNullable<z.infer<typeof envSchema>['LOG_LEVEL']>;
+
+export type AppConfig = Omit<z.infer<typeof envSchema>, 'PRESENTATION_KEY' | 'LOG_LEVEL'> & {
+  publicUrl: string;
+  presentationKey: Uint8Array;
+  logLevel: LogLevel;
+};
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const parsed = envSchema.safeParse(env);
@@ -38,11 +59,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
-  const { PRESENTATION_KEY, ...c } = parsed.data;
+  const { PRESENTATION_KEY, LOG_LEVEL, ...c } = parsed.data;
   const presentationKey = PRESENTATION_KEY
     ? decodeKey(PRESENTATION_KEY, 'PRESENTATION_KEY')
     : readOrCreateKeyFile(join(c.DATA_DIR, PRESENTATION_KEY_FILE));
-  return { ...c, publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`, presentationKey };
+  const logLevel = LOG_LEVEL ?? (c.NODE_ENV === 'test' ? 'silent' : 'info');
+  return { ...c, publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`, presentationKey, logLevel };
 }
 
 /** Hex when it looks like hex, else base64 or base64url; refuses anything under 256 bits. */

@@ -4,13 +4,16 @@ import { createDb } from './db/database';
 import { migrateToLatest } from './db/migrate';
 import { createSmtpMailer } from './services/mail/mailer';
 import { createApp } from './app';
+import { createLogger } from './services/logging/logger';
+import { storageFromConfig } from './services/storage/from-config';
 
 export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const config = loadConfig(env);
   const db = createDb(config.DATABASE_URL);
   await migrateToLatest(db);
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
-  const app = createApp({ db, mailer, config });
+  const logger = createLogger({ level: config.logLevel });
+  const app = createApp({ db, mailer, config, logger, storage: storageFromConfig(config) });
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
@@ -21,6 +24,7 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
       await new Promise<void>((r) => server.close(() => r()));
       server.closeAllConnections();
       await db.destroy();
+      logger.flush();
     },
   };
 }

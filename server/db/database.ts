@@ -181,6 +181,13 @@ export interface PresentationRequestsTable {
   at: Timestamp;
 }
 
+export interface RateLimitCountsTable {
+  bucket: string;
+  key: string;
+  window_start: Date;
+  count: ColumnType<number, number | undefined, number>;
+}
+
 export interface Database {
   rooms: RoomsTable;
   options: OptionsTable;
@@ -198,6 +205,7 @@ export interface Database {
   presentation_options: PresentationOptionsTable;
   choices: ChoicesTable;
   presentation_requests: PresentationRequestsTable;
+  rate_limit_counts: RateLimitCountsTable;
 }
 
 export type Db = Kysely<Database>;

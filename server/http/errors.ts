@@ -29,7 +29,7 @@ export function zodFields(err: ZodError): Record<string, string> {
 
 // The one error middleware: HttpError and ZodError become { error: { code, message, fields } };
 // anything else is logged and answered as a bare 500.
-export const errorMiddleware: ErrorRequestHandler = (err, _req, res, _next) => {
+export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof HttpError) {
     res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields }, ...err.extra });
     return;
@@ -48,14 +48,29 @@ export const errorMiddleware: ErrorRequestHandler = (err, _req, res, _next) => {
     return;
   }
   if (isDatabaseDown(err)) {
+    req.log?.warn({ err }, 'database unavailable');
+    res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_S));
     res.status(503).json({ error: { code: 'unavailable', message: 'The database is not answering. Try again in a moment.' } });
     return;
   }
-  console.error('[error]', err);
+  // The request's own logger carries its id, so the line can be found from the answer's header.
+  if (req.log) req.log.error({ err }, 'unhandled error');
+  else console.error('[error]', err);
   res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side.' } });
 };
 
+/** Seconds a client is asked to wait while the database is away: a restart usually takes a few. */
+const DATABASE_RETRY_AFTER_S = 5;
+// Socket errors, PostgreSQL's "shutting down" / "starting up" / "crash recovery" codes, and the
+// driver's own messages when a connection drops mid-query or cannot be made in time.
+const DOWN_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'ENOTFOUND', 'EAI_AGAIN', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
+const DOWN_MESSAGES = /^(Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated due to connection timeout)/;
+
 function isDatabaseDown(err: unknown): boolean {
-  const code = (err as { code?: string })?.code;
-  return code === 'ECONNREFUSED' || code === '57P01' || code === '57P03' || code === 'ECONNRESET';
+  const e = err as { code?: unknown; message?: unknown; errors?: unknown } | null;
+  if (!e) return false;
+  if (typeof e.code === 'string' && DOWN_CODES.has(e.code)) return true;
+  if (typeof e.message === 'string' && DOWN_MESSAGES.test(e.message)) return true;
+  // Node reports a refused connection to every address of a host as one AggregateError.
+  return Array.isArray(e.errors) && e.errors.some(isDatabaseDown);
 }

@@ -6,6 +6,7 @@ import { HttpError, notFound } from '../../http/errors';
 import { hashToken, newToken } from '../../services/auth/tokens';
 import { hashPassword } from '../../services/auth/passwords';
 import { startSession } from '../../services/auth/session';
+import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
 import {
   countOwners, deleteMember, deleteSessionsOf, findMemberByEmail, getMember, insertMember, listMembers, setMemberRole, toMember,
 } from './members.repository';
@@ -14,6 +15,8 @@ import {
 } from './invites.repository';
 
 const INVITE_DAYS = 14;
+/** Invitations per studio per hour: a whole team at once, but not a mail cannon (common practice). */
+export const INVITE_RATE: RateRule = { bucket: 'invite', limit: 30, windowMs: 60 * 60_000 };
 const tokenParamSchema = z.object({ token: z.string().min(20).max(200) });
 
 async function openInviteOrThrow(db: Parameters<typeof findInviteByTokenHash>[0], token: string) {
@@ -86,6 +89,7 @@ export const studioRoutes: RouteDef[] = [
       const caller = requireCaller(ctx);
       const body = inviteSchema.parse(ctx.req.body);
       const { db, mailer, config } = ctx.deps;
+      await enforceRateLimit(db, ctx.res, INVITE_RATE, caller.studioId, 'That is a lot of invitations in a short time. Please wait a while, then send the rest.');
       if (await findMemberByEmail(db, body.email)) {
         throw new HttpError(409, 'email_taken', 'This person already has a Parlour account.', { email: 'Already has an account.' });
       }

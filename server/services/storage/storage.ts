@@ -1,5 +1,5 @@
-// Where uploaded photos and their derived images live. Local disk now; an S3-compatible store can
-// implement the same three calls later. Keys are server-made ("derived/<sha256>.webp"), never a
+// Where uploaded photos and their derived images live: the local disk (one machine) or an
+// S3-compatible bucket (several instances), chosen by configuration; both implement these calls. Keys are server-made ("derived/<sha256>.webp"), never a
 // name a client chose, and never served directly: the files route checks who may read them.
 
 export interface FileStorage {
@@ -9,6 +9,12 @@ export interface FileStorage {
   get(key: string): Promise<Buffer | null>;
   /** Removes `key`; removing a missing key is not an error. */
   delete(key: string): Promise<void>;
+}
+
+/** A store that can also list what it holds, for backups. */
+export interface ListableStorage extends FileStorage {
+  /** Every stored key, in no particular order. */
+  keys(): AsyncIterable<string>;
 }
 
 // Lower-case letters, digits, dots, hyphens and underscores in one or more folders: no "..", no

@@ -1,0 +1,42 @@
+// Security headers (helmet) with a content security policy that lets the page load only the
+// app's own scripts, styles, fonts, images and workers: an injected <script> or a stylesheet from
+// elsewhere is refused by the browser even if some text slipped through unescaped.
+import helmet from 'helmet';
+import type { RequestHandler } from 'express';
+
+/** Seconds a browser keeps to HTTPS once it has seen the site over HTTPS: one year (common practice). */
+const HSTS_MAX_AGE_S = 365 * 86_400;
+
+export const CONTENT_SECURITY_POLICY: Record<string, string[]> = {
+  'default-src': ["'self'"],
+  'script-src': ["'self'"],
+  'style-src': ["'self'"],
+  'font-src': ["'self'"],
+  'img-src': ["'self'"],
+  'connect-src': ["'self'"],
+  // The editor's fit check runs in a module Worker built from the app's own file; blob: is the
+  // form bundlers fall back to for inlined workers.
+  'worker-src': ["'self'", 'blob:'],
+  'object-src': ["'none'"],
+  'base-uri': ["'self'"],
+  'form-action': ["'self'"],
+  'frame-ancestors': ["'none'"],
+};
+
+/**
+ * `secure`: the app is reached over HTTPS (SECURE_COOKIES), so browsers may be told to stay on
+ * it. Over plain http (local use) both would break the page, so they are left out.
+ */
+export function securityHeaders(opts: { secure: boolean }): RequestHandler {
+  return helmet({
+    contentSecurityPolicy: {
+      useDefaults: false,
+      directives: { ...CONTENT_SECURITY_POLICY, ...(opts.secure ? { 'upgrade-insecure-requests': [] } : {}) },
+    },
+    strictTransportSecurity: opts.secure ? { maxAge: HSTS_MAX_AGE_S, includeSubDomains: true } : false,
+    // Same-origin pages get the full referrer (and browsers then send Origin on same-origin
+    // writes, which the origin check needs); other sites get none. The client's page and its API
+    // answers tighten this to no-referrer themselves, since their address holds the token.
+    referrerPolicy: { policy: 'same-origin' },
+  }) as RequestHandler;
+}
