@@ -445,7 +445,8 @@ function pieceLines(pieces: readonly Piece[], finishes: FinishLookup): ScheduleL
   });
 }
 
-const litreText = (l: number) => `${roundQuantity(l)} L`;
+// Two places of a litre (10 mL) in words: finer than any tin, and what a person reads.
+const litreText = (l: number) => `${Math.round(l * 100) / 100} L`;
 
 function paintLine(need: PaintNeed): ScheduleLine {
   const { finish } = need;

@@ -98,7 +98,16 @@ function LineTable({ title, lines, empty }: { title: string; lines: ScheduleLine
     <section>
       <h2 className="mb-2 text-lg font-bold">{title}</h2>
       {lines.length === 0 ? <p className="text-ink-soft">{empty}</p> : (
-        <table aria-label={title} className="w-full text-[15px] print:text-[12px]">
+        <table aria-label={title} className="w-full table-fixed text-[15px] print:text-[12px]">
+          {/* The same columns in both tables, so pieces and finishes line up one under the other. */}
+          <colgroup>
+            <col className="w-[25%]" />
+            <col className="w-[21%]" />
+            <col className="w-[16%]" />
+            <col className="w-[11%]" />
+            <col className="w-[11%]" />
+            <col className="w-[16%]" />
+          </colgroup>
           <thead className="border-b border-line-strong">
             <tr>
               <th className={th}>Item</th>
@@ -127,22 +136,22 @@ function Line({ line: l }: { line: ScheduleLine }) {
           {l.name}
           {l.status && <Badge value={l.status} />}
         </span>
-        {l.code && <span className="block text-sm text-ink-faint">{l.code}</span>}
+        {l.code && <span className="block text-[0.9em] text-ink-faint">{l.code}</span>}
       </td>
       <td className={`${td} text-ink-soft`}>
         {l.sizeMm ? sizeText(l.sizeMm) : l.detail}
-        {l.sizeMm && l.detail && <span className="block text-sm">{l.detail}</span>}
+        {l.sizeMm && l.detail && <span className="block text-[0.9em]">{l.detail}</span>}
       </td>
       <td className={tdNum}>
         {formatQuantity(l.quantity, l.quantityUnit)}
-        {l.quantityNote && <span className="block text-xs whitespace-normal text-ink-faint">{l.quantityNote}</span>}
+        {l.quantityNote && <span className="block text-[0.8em] whitespace-normal text-ink-faint">{l.quantityNote}</span>}
       </td>
       <td className={tdNum}>{l.unitPrice === null || !l.priceUnit ? '—' : `${formatMoney(l.unitPrice)}${l.priceUnit === 'piece' ? '' : ` / ${QUANTITY_UNIT_LABELS[l.priceUnit]}`}`}</td>
       <td className={`${tdNum} font-semibold`}>
         {l.status === 'existing' ? <span className="font-normal text-ink-soft">no cost</span> : l.total === null ? <span className="font-normal text-ochre" title={l.unpricedReason ?? undefined}>no price</span> : formatMoney(l.total)}
-        {l.total === null && l.unpricedReason && <span className="block text-xs font-normal whitespace-normal text-ink-faint">{l.unpricedReason}</span>}
+        {l.total === null && l.unpricedReason && <span className="block text-[0.8em] font-normal whitespace-normal text-ink-faint">{l.unpricedReason}</span>}
       </td>
-      <td className={`${td} pr-0 text-sm`}>
+      <td className={`${td} pr-0 text-[0.9em]`}>
         {l.supplier && <span className="block">{l.supplier}</span>}
         {l.supplierUrl && (
           <a href={l.supplierUrl} target="_blank" rel="noreferrer noopener" className="break-all text-pine hover:underline print:text-ink">

@@ -13,10 +13,15 @@ const thNum = `${th} text-right`;
 const td = 'py-2 pr-3 align-top';
 const tdNum = `${td} text-right tabular-nums whitespace-nowrap`;
 
+/** A table whose first two columns (name, where) keep the same widths in every take-off table, so they line up. */
 export function QuantityTable({ label, head, children }: { label: string; head: ReactNode; children: ReactNode }) {
   return (
     <div className="overflow-x-auto">
-      <table aria-label={label} className="w-full text-[15px]">
+      <table aria-label={label} className="w-full min-w-[40rem] table-fixed text-[15px]">
+        <colgroup>
+          <col className="w-[26%]" />
+          <col className="w-[24%]" />
+        </colgroup>
         <thead className="border-b border-line"><tr>{head}</tr></thead>
         <tbody className="[&>tr]:border-b [&>tr]:border-line [&>tr:last-child]:border-0">{children}</tbody>
       </table>
@@ -65,7 +70,7 @@ export function RoomTakeoffTables({ takeoff, roomName, onUnitCoverage }: {
         {coverings.length === 0 ? <p className="text-sm text-ink-soft">No photo finish in this option.</p> : (
           <QuantityTable
             label={`Flooring and other finishes in ${roomName}`}
-            head={<><th className={th}>Finish</th><th className={th}>Where</th><th className={thNum}>Area</th><th className={thNum}>With waste</th><th className={`${th} w-40`}>m² per box or roll</th><th className={thNum}>Boxes or rolls</th></>}
+            head={<><th className={th}>Finish</th><th className={th}>Where</th><th className={thNum}>Area</th><th className={thNum}>With waste</th><th className={`${th} w-40`}>Box or roll <span className="normal-case">(m²)</span></th><th className={thNum}>Boxes or rolls</th></>}
           >
             {coverings.map((c) => (
               <tr key={c.finishId}>
