@@ -6,7 +6,7 @@ import { useSession } from '../lib/session';
 import { useSignOut } from '../features/auth/api/session';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
-  `rounded-lg px-3 py-2 text-[15px] font-semibold transition-colors ${isActive ? 'bg-pine-wash text-pine-dark' : 'text-ink-soft hover:bg-sand hover:text-ink'}`;
+  `rounded-lg px-3 py-2 text-[15px] font-semibold whitespace-nowrap transition-colors ${isActive ? 'bg-pine-wash text-pine-dark' : 'text-ink-soft hover:bg-sand hover:text-ink'}`;
 
 /** The designer's frame: top bar with the studio's places, then the page. Signed-out visitors go to sign-in. */
 export function DesignerLayout({ wide = false }: { wide?: boolean }) {
@@ -24,9 +24,9 @@ export function DesignerLayout({ wide = false }: { wide?: boolean }) {
     <div className="min-h-screen">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-lg focus:bg-white focus:px-4 focus:py-2">Skip to content</a>
       <header className="no-print border-b border-line bg-paper/95">
-        <div className={`mx-auto flex h-16 items-center gap-6 px-6 ${wide ? '' : 'max-w-6xl'}`}>
+        <div className={`mx-auto flex h-16 items-center gap-3 px-4 sm:gap-6 sm:px-6 ${wide ? '' : 'max-w-6xl'}`}>
           <Link to="/projects" className="text-xl font-bold tracking-tight text-pine">Parlour</Link>
-          <nav aria-label="Studio" className="flex items-center gap-1">
+          <nav aria-label="Studio" className="flex min-w-0 items-center gap-1 overflow-x-auto">
             <NavLink to="/projects" className={navClass}>Projects</NavLink>
             <NavLink to="/clients" className={navClass}>Clients</NavLink>
             <NavLink to="/finishes" className={navClass}>Finish library</NavLink>
@@ -34,7 +34,7 @@ export function DesignerLayout({ wide = false }: { wide?: boolean }) {
             {outbox && <NavLink to="/outbox" className={navClass}>Outbox</NavLink>}
           </nav>
           <div className="ml-auto flex items-center gap-3">
-            <div className="hidden text-right leading-tight sm:block">
+            <div className="hidden text-right leading-tight lg:block">
               <div className="text-sm font-semibold">{member.name}</div>
               <div className="text-xs text-ink-faint">{studio.name} · {member.role}</div>
             </div>

@@ -28,6 +28,8 @@ const RoomView = lazy(() => import('../../../scene/room-view'));
 
 const UNIT_KEY = 'parlour:length-unit';
 type Layout = 'both' | 'plan' | '3d';
+/** Below this window width the plan and the 3D preview share the screen by turns. */
+const WIDE_ENOUGH_FOR_BOTH_PX = 1180;
 
 export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: string; roomId: string; finishes?: Finish[] }) {
   const room = useRoom(roomId);
@@ -57,7 +59,8 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
   const [step, setStep] = useState<EditorStep>(readOnly ? 'furnish' : 'outline');
   const [optionId, setOptionId] = useState(detail.options[0]?.id ?? '');
   const [selection, setSelection] = useState<Selection>(null);
-  const [layout, setLayout] = useState<Layout>('both');
+  // Side by side needs room; on a tablet the plan starts alone and the 3D is one tap away.
+  const [layout, setLayout] = useState<Layout>(() => (window.innerWidth >= WIDE_ENOUGH_FOR_BOTH_PX ? 'both' : 'plan'));
   const [split, setSplit] = useState(0.55);
   const [unit, setUnit] = useState<LengthUnit>(() => (localStorage.getItem(UNIT_KEY) as LengthUnit | null) ?? 'cm');
   const [drawing, setDrawing] = useState(false);
@@ -217,7 +220,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
         </div>
         <OptionsBar editor={editor} optionId={activeOptionId} onChoose={(id) => { setOptionId(id); setSelection(null); }} readOnly={readOnly} />
         <div className="ml-auto flex items-center gap-2">
-          <span role="status" data-testid="save-state" data-state={editor.saveState} className={`text-xs font-medium ${editor.saveState === 'saved' ? 'text-ink-faint' : editor.saveState === 'conflict' || editor.saveState === 'retrying' ? 'text-clay' : 'text-ochre'}`}>
+          <span role="status" data-testid="save-state" data-state={editor.saveState} className={`text-xs font-medium whitespace-nowrap ${editor.saveState === 'saved' ? 'text-ink-faint' : editor.saveState === 'conflict' || editor.saveState === 'retrying' ? 'text-clay' : 'text-ochre'}`}>
             {readOnly ? 'Read only' : SAVE_TEXT[editor.saveState]}
           </span>
           {!readOnly && (
@@ -276,9 +279,9 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
         )}
       </div>
 
-      <div className="flex min-h-0 flex-1">
+      <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
         {/* Steps */}
-        <nav aria-label="Steps" className="flex w-40 shrink-0 flex-col gap-1 border-r border-line bg-paper p-3">
+        <nav aria-label="Steps" className="flex shrink-0 gap-1 overflow-x-auto border-b border-line bg-paper p-2 lg:w-40 lg:flex-col lg:border-r lg:border-b-0 lg:p-3">
           {EDITOR_STEPS.map((s, i) => (
             <button
               key={s.id}
@@ -293,13 +296,14 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
                   <span className="ml-auto rounded-full bg-clay px-1.5 text-xs text-white" aria-label={`${findings.length} findings`}>{findings.length}</span>
                 )}
               </span>
-              <span className="block text-xs leading-snug text-ink-faint">{s.hint}</span>
+              <span className="hidden text-xs leading-snug text-ink-faint lg:block">{s.hint}</span>
             </button>
           ))}
         </nav>
 
         {/* Panel for the step and the selection */}
-        <aside aria-label={`${EDITOR_STEPS.find((s) => s.id === step)?.label} step`} className="w-80 shrink-0 overflow-y-auto border-r border-line bg-paper p-4">
+        <div className="flex min-h-0 flex-1">
+        <aside aria-label={`${EDITOR_STEPS.find((s) => s.id === step)?.label} step`} className="w-72 shrink-0 overflow-y-auto border-r border-line bg-paper p-4 xl:w-80">
           <h2 className="mb-3 text-base font-bold">{EDITOR_STEPS.find((s) => s.id === step)?.label}</h2>
           {panel}
         </aside>
@@ -373,6 +377,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
               </Suspense>
             </section>
           )}
+        </div>
         </div>
       </div>
 

@@ -33,7 +33,7 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
   };
 
   return (
-    <div className="flex min-w-0 flex-1 flex-wrap items-center gap-1">
+    <div className="order-3 flex min-w-0 basis-full flex-wrap items-center gap-1 xl:order-none xl:basis-auto xl:flex-1">
       <div role="tablist" aria-label="Options" className="flex flex-wrap gap-1">
         {editor.options.map((o) => (
           <button
@@ -51,7 +51,7 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
         <>
           <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>+ New option</Button>
           <details className="relative" ref={menu}>
-            <summary className="flex h-8 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-semibold text-ink-soft hover:bg-sand">This option ▾</summary>
+            <summary className="flex h-8 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-semibold whitespace-nowrap text-ink-soft hover:bg-sand">This option ▾</summary>
             <div className="absolute left-0 z-20 mt-1 flex w-52 flex-col rounded-xl border border-line bg-white p-1 shadow-lg" onClick={() => menu.current?.removeAttribute('open')}>
               <MenuItem onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate option</MenuItem>
               <MenuItem onClick={() => setDialog('rename')}>Rename option</MenuItem>
