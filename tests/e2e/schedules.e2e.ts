@@ -27,6 +27,9 @@ interface Made {
 describe('take-off, schedules and comparison', () => {
   it('shows the totals, downloads the CSV, prints the schedule and compares the options', async () => {
     const { context, page } = await newPage(browser);
+    // A refused style or script (the content security policy) shows up as a console error.
+    const consoleErrors: string[] = [];
+    page.on('console', (m) => { if (m.type() === 'error') consoleErrors.push(m.text()); });
     await signUpThroughForm(page, 'Schedule Studio');
     const photo = (await rawToJpeg(oakBoards(192, 384))).toString('base64');
 
@@ -168,6 +171,8 @@ describe('take-off, schedules and comparison', () => {
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     await page.emulateMedia({ media: 'screen' });
     await page.setViewportSize({ width: 1280, height: 800 });
+
+    expect(consoleErrors).toEqual([]);
 
     // Another studio's schedule link is not found.
     const other = await newPage(browser);

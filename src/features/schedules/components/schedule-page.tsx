@@ -10,9 +10,6 @@ import { formatMoney, formatQuantity } from './format';
 import { PaintChip } from './paint-chip';
 import { LoadError } from './load-error';
 
-// Paper margins for the print view; the page box cannot be set from Tailwind classes.
-const PRINT_PAGE_CSS = '@page { size: A4; margin: 14mm 12mm; }';
-
 const th = 'py-2 pr-3 text-left text-xs font-semibold tracking-wide text-ink-faint uppercase';
 const thNum = `${th} text-right`;
 const td = 'py-2.5 pr-3 align-top';
@@ -31,7 +28,6 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
 
   return (
     <article>
-      <style>{PRINT_PAGE_CSS}</style>
       <PageHeader
         eyebrow={
           <>
