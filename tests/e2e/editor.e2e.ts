@@ -137,10 +137,11 @@ describe('the room editor', () => {
     await page.route('**/api/options/*', (route) => route.abort());
     await page.getByRole('button', { name: 'Add Bookcase' }).click();
     await page.getByText('Cannot reach the server — trying again').waitFor({ timeout: 10000 });
-    await page.unroute('**/api/options/*');
+    // Reload while the server is still out of reach, so no retry can save it first.
     await page.reload();
     await page.getByText(/brought back changes from your last visit/).waitFor();
     await piece(page, 'Bookcase').waitFor();
+    await page.unroute('**/api/options/*');
     await saved(page);
     await page.reload();
     await page.getByRole('button', { name: /Furnish/ }).click();
