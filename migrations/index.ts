@@ -5,6 +5,7 @@ import * as m0002 from './0002_create_rooms';
 import * as m0003 from './0003_create_finishes';
 import * as m0004 from './0004_create_presentations';
 import * as m0005 from './0005_create_rate_limits';
+import * as m0006 from './0006_notify_presentation_changes';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
@@ -12,4 +13,5 @@ export const migrations: Record<string, Migration> = {
   '0003_create_finishes': m0003,
   '0004_create_presentations': m0004,
   '0005_create_rate_limits': m0005,
+  '0006_notify_presentation_changes': m0006,
 };

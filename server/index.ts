@@ -3,7 +3,8 @@ import { loadConfig } from './config';
 import { createDb } from './db/database';
 import { migrateToLatest } from './db/migrate';
 import { createSmtpMailer } from './services/mail/mailer';
-import { createApp } from './app';
+import { createApp, type AppDeps } from './app';
+import { closeClientLinkCache } from './features/presentations/client-cache';
 import { createLogger } from './services/logging/logger';
 import { storageFromConfig } from './services/storage/from-config';
 
@@ -13,7 +14,8 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   await migrateToLatest(db);
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
   const logger = createLogger({ level: config.logLevel });
-  const app = createApp({ db, mailer, config, logger, storage: storageFromConfig(config) });
+  const deps: AppDeps = { db, mailer, config, logger, storage: storageFromConfig(config) };
+  const app = createApp(deps);
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
@@ -23,6 +25,7 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
     async close() {
       await new Promise<void>((r) => server.close(() => r()));
       server.closeAllConnections();
+      await closeClientLinkCache(deps);
       await db.destroy();
       logger.flush();
     },

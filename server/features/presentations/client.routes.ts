@@ -11,9 +11,10 @@ import { canPresentationReadFile } from '../files/files.access';
 import { keyFromFileName } from '../files/file-keys';
 import { fileParam, sendDerivedFile } from '../files/files.routes';
 import {
-  getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordOpened, recordViewed,
+  getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordViewed,
   saveChoice, type PresentationRow,
 } from './presentations.repository';
+import { clientLinkCache, forgetPresentation } from './client-cache';
 import {
   CHOICE_LIMIT, RATE_WINDOW_MS, VIEW_LIMIT, choiceMail, clientPresentation, linkNotFound, presentationFinishIds, presentationForToken,
 } from './presentations.service';
@@ -61,11 +62,19 @@ export const clientPresentationRoutes: RouteDef[] = [
     method: 'get',
     path: '/api/p/:token',
     access: 'public',
-    async handler(ctx): Promise<{ presentation: ClientPresentation }> {
+    async handler(ctx): Promise<undefined> {
       privateAnswer(ctx.res);
-      const p = await presentationForToken(ctx.deps.db, ctx.deps.config, tokenOf(ctx.req));
-      if (!isStudioMember(ctx, p)) await recordOpened(ctx.deps.db, p.id, new Date());
-      return { presentation: await clientPresentation(ctx.deps.db, p, tokenOf(ctx.req)) };
+      const token = tokenOf(ctx.req);
+      const cache = clientLinkCache(ctx.deps);
+      // The hot path of a busy link: a ready answer, no database round trip (see client-cache.ts).
+      const link = cache.get(token) ?? (await cache.load(token, async () => {
+        const p = await presentationForToken(ctx.deps.db, ctx.deps.config, token);
+        const answer: { presentation: ClientPresentation } = { presentation: await clientPresentation(ctx.deps.db, p, token) };
+        return { presentationId: p.id, studioId: p.studio_id, expiresAt: p.expires_at, body: JSON.stringify(answer) };
+      }));
+      if (ctx.caller?.studioId !== link.studioId) cache.recordOpened(link.presentationId);
+      ctx.res.type('application/json').send(link.body);
+      return undefined;
     },
   },
   {
@@ -130,7 +139,10 @@ export const clientPresentationRoutes: RouteDef[] = [
         await touchProject(trx, p.project_id);
         return { p, roomId, changed: true, choice: { optionId: body.optionId, comment: body.comment, chosenAt: at.toISOString() } };
       });
-      if (result.changed) await notifyDesigner(ctx, result.p, result.roomId, body.optionId, body.comment);
+      if (result.changed) {
+        forgetPresentation(ctx.deps, result.p.id);
+        await notifyDesigner(ctx, result.p, result.roomId, body.optionId, body.comment);
+      }
       return { choice: result.choice, changed: result.changed };
     },
   },

@@ -112,10 +112,16 @@ export async function isShownOption(db: Db, presentationId: string, optionId: st
   return Boolean(await q.executeTakeFirst());
 }
 
-export async function recordOpened(db: Db, id: string, at: Date): Promise<void> {
+/** Adds `count` visits between `first` and `last` to the link's opened record. */
+export async function recordOpens(db: Db, id: string, v: { count: number; first: Date; last: Date }): Promise<void> {
   await db
     .updateTable('presentations')
-    .set((eb) => ({ first_opened_at: eb.fn.coalesce('first_opened_at', sql<Date>`${at}`), last_opened_at: at, open_count: sql`open_count + 1` }))
+    .set({
+      first_opened_at: sql<Date>`coalesce(first_opened_at, ${v.first})`,
+      // greatest() passes over a null, so the first visit sets it.
+      last_opened_at: sql<Date>`greatest(last_opened_at, ${v.last})`,
+      open_count: sql<number>`open_count + ${v.count}`,
+    })
     .where('id', '=', id)
     .execute();
 }

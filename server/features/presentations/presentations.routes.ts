@@ -15,6 +15,7 @@ import {
   getPresentation, insertPresentation, insertShownRooms, listPresentations, projectForPresentation, roomsWithOptions,
   setProjectState, studioName, updatePresentation, type PresentationRow,
 } from './presentations.repository';
+import { flushOpens, forgetPresentation } from './client-cache';
 import { invitationMail, presentationLink, presentationState, presentationSummaries } from './presentations.service';
 
 const DAY_MS = 86_400_000;
@@ -72,6 +73,7 @@ export const presentationRoutes: RouteDef[] = [
       const caller = requireCaller(ctx);
       const { projectId } = projectParam.parse(ctx.req.params);
       await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
+      await flushOpens(ctx.deps);
       return { presentations: await summaries(ctx, await listPresentations(ctx.deps.db, caller.studioId, projectId)) };
     },
   },
@@ -155,6 +157,7 @@ export const presentationRoutes: RouteDef[] = [
       const p = await presentationOrThrow(ctx.deps.db, caller.studioId, id);
       // Withdrawing twice keeps the first time: that is when the link stopped working.
       const saved = p.withdrawn_at ? p : await updatePresentation(ctx.deps.db, p.id, { withdrawn_at: new Date() });
+      forgetPresentation(ctx.deps, p.id);
       return one(ctx, saved);
     },
   },
@@ -175,6 +178,7 @@ export const presentationRoutes: RouteDef[] = [
       // From today when it has already run out, so extending an expired link opens it again.
       const from = Math.max(Date.now(), p.expires_at.getTime());
       const saved = await updatePresentation(ctx.deps.db, p.id, { expires_at: new Date(Math.min(from + days * DAY_MS, latest)) });
+      forgetPresentation(ctx.deps, p.id);
       return one(ctx, saved);
     },
   },
@@ -197,6 +201,7 @@ export const presentationRoutes: RouteDef[] = [
         await setProjectState(trx, projectId, 'decided');
         return updatePresentation(trx, p.id, { decided_at: new Date() });
       });
+      forgetPresentation(ctx.deps, saved.id);
       return { state: 'decided' as const, ...(await one(ctx, saved)) };
     },
   },

@@ -1,0 +1,182 @@
+// The client's presentation data, kept ready per link so that opening a link costs no database
+// round trip: the answer is built once, serialised once, and served until something it shows
+// changes. Every instance LISTENs for the database's change notices (migration 0006: any write
+// to the studio's projects, rooms, options, finishes, choices or the link itself) and drops that
+// studio's entries the moment one arrives; routes that withdraw, extend or decide also drop the
+// entry locally before they answer. While the listening connection is down nothing is cached,
+// so a withdrawn link can never be served from a stale entry.
+import pg from 'pg';
+import type { AppDeps } from '../../app';
+import type { Db } from '../../db/database';
+import { recordOpens } from './presentations.repository';
+
+export const CHANGE_CHANNEL = 'parlour_changes';
+/** A safety net only: notices normally drop entries long before this. */
+const ENTRY_TTL_MS = 60_000;
+/** Links kept at once per instance; the oldest go first. */
+const MAX_ENTRIES = 2000;
+/** "Opened" counts are written together at most this often, not once per visit. */
+const OPEN_FLUSH_MS = 1000;
+const RECONNECT_MIN_MS = 250;
+const RECONNECT_MAX_MS = 30_000;
+
+export interface CachedLink {
+  presentationId: string;
+  studioId: string;
+  expiresAt: Date;
+  /** The whole JSON answer, ready to send. */
+  body: string;
+}
+
+interface Entry extends CachedLink { storedAt: number }
+interface Opens { count: number; first: Date; last: Date }
+
+export class ClientLinkCache {
+  private readonly entries = new Map<string, Entry>();
+  private readonly opens = new Map<string, Opens>();
+  private listener: pg.Client | null = null;
+  private listening = false;
+  private closed = false;
+  private reconnectMs = RECONNECT_MIN_MS;
+  /** Bumped by every notice, so an answer built across one is not stored. */
+  private generation = 0;
+  private flushing: Promise<void> = Promise.resolve();
+  private readonly flushTimer: NodeJS.Timeout;
+
+  constructor(private readonly db: Db, private readonly databaseUrl: string) {
+    this.flushTimer = setInterval(() => void this.flushOpens(), OPEN_FLUSH_MS);
+    this.flushTimer.unref();
+    this.connect();
+  }
+
+  /** The ready answer for `token`, if one is held and the link has not run out since. */
+  get(token: string, now = Date.now()): CachedLink | undefined {
+    const e = this.entries.get(token);
+    if (!e) return undefined;
+    if (!this.listening || e.expiresAt.getTime() <= now || now - e.storedAt > ENTRY_TTL_MS) {
+      this.entries.delete(token);
+      return undefined;
+    }
+    return e;
+  }
+
+  /** Builds the answer (which throws for a link that does not work) and keeps it when it is safe to. */
+  async load(token: string, build: () => Promise<CachedLink>): Promise<CachedLink> {
+    const before = this.generation;
+    const link = await build();
+    if (this.listening && this.generation === before) {
+      if (this.entries.size >= MAX_ENTRIES) this.entries.delete(this.entries.keys().next().value!);
+      this.entries.set(token, { ...link, storedAt: Date.now() });
+    }
+    return link;
+  }
+
+  forgetStudio(studioId: string): void {
+    this.generation += 1;
+    for (const [token, e] of this.entries) if (e.studioId === studioId) this.entries.delete(token);
+  }
+
+  forgetPresentation(presentationId: string): void {
+    this.generation += 1;
+    for (const [token, e] of this.entries) if (e.presentationId === presentationId) this.entries.delete(token);
+  }
+
+  /** Counts one visit; written with the others of the next second. */
+  recordOpened(presentationId: string, at = new Date()): void {
+    const o = this.opens.get(presentationId);
+    if (o) {
+      o.count += 1;
+      o.last = at;
+    } else this.opens.set(presentationId, { count: 1, first: at, last: at });
+  }
+
+  /** Writes the visits counted so far; the designer's summary calls this before it reads them. */
+  flushOpens(): Promise<void> {
+    this.flushing = this.flushing.then(async () => {
+      if (this.opens.size === 0) return;
+      const batch = [...this.opens];
+      this.opens.clear();
+      try {
+        for (const [id, o] of batch) {
+          await recordOpens(this.db, id, o);
+        }
+      } catch {
+        // The database is away: keep the counts for the next try rather than lose them.
+        for (const [id, o] of batch) {
+          const now = this.opens.get(id);
+          this.opens.set(id, now ? { count: now.count + o.count, first: o.first, last: now.last } : o);
+        }
+      }
+    });
+    return this.flushing;
+  }
+
+  async close(): Promise<void> {
+    this.closed = true;
+    clearInterval(this.flushTimer);
+    await this.flushOpens();
+    this.listening = false;
+    await this.listener?.end().catch(() => undefined);
+  }
+
+  private connect(): void {
+    if (this.closed) return;
+    const client = new pg.Client({ connectionString: this.databaseUrl });
+    this.listener = client;
+    const lost = () => {
+      if (this.listener !== client) return;
+      this.listener = null;
+      this.listening = false;
+      this.entries.clear();
+      client.end().catch(() => undefined);
+      if (this.closed) return;
+      const wait = this.reconnectMs;
+      this.reconnectMs = Math.min(this.reconnectMs * 2, RECONNECT_MAX_MS);
+      setTimeout(() => this.connect(), wait).unref();
+    };
+    client.on('error', lost);
+    client.on('end', lost);
+    client.on('notification', (n) => {
+      if (n.channel === CHANGE_CHANNEL && n.payload) this.forgetStudio(n.payload);
+    });
+    client
+      .connect()
+      .then(() => client.query(`LISTEN ${CHANGE_CHANNEL}`))
+      .then(() => {
+        if (this.listener !== client) return;
+        // The listening connection must not keep a finished process (or test) alive.
+        (client as unknown as { connection?: { stream?: { unref?: () => void } } }).connection?.stream?.unref?.();
+        this.reconnectMs = RECONNECT_MIN_MS;
+        this.entries.clear();
+        this.listening = true;
+      })
+      .catch(lost);
+  }
+}
+
+const caches = new WeakMap<AppDeps, ClientLinkCache>();
+
+/** The link cache of one app (one per createApp, made on first use). */
+export function clientLinkCache(deps: AppDeps): ClientLinkCache {
+  let cache = caches.get(deps);
+  if (!cache) {
+    cache = new ClientLinkCache(deps.db, deps.config.DATABASE_URL);
+    caches.set(deps, cache);
+  }
+  return cache;
+}
+
+/** Drops the link's ready answer on this instance now (others hear of it from the database). */
+export function forgetPresentation(deps: AppDeps, presentationId: string): void {
+  caches.get(deps)?.forgetPresentation(presentationId);
+}
+
+/** Writes this instance's pending "opened" counts. */
+export async function flushOpens(deps: AppDeps): Promise<void> {
+  await caches.get(deps)?.flushOpens();
+}
+
+/** Stops listening and writes what is pending; for a clean shutdown. */
+export async function closeClientLinkCache(deps: AppDeps): Promise<void> {
+  await caches.get(deps)?.close();
+}

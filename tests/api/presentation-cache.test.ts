@@ -1,0 +1,95 @@
+// The client's presentation data is served from a ready answer per link; these prove the answer
+// never outlives what it shows: withdrawal stops the link at once, edits and choices show on the
+// next open, and visits are still all counted.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import type { ClientPresentation, PresentationSummary } from '../../shared/schemas/presentation';
+import { createTestApp, signUpStudio, type TestApp } from '../setup/app';
+import { presentedProject, type PresentedProject } from '../ops/lib/fixtures';
+
+type Agent = ReturnType<typeof request.agent>;
+/** How long a database change notice may take to arrive on a loaded test machine. */
+const NOTICE_WAIT_MS = 2000;
+
+let t: TestApp;
+let owner: Agent;
+beforeAll(async () => {
+  t = createTestApp();
+  owner = (await signUpStudio(t.app, 'Cache Studio')).agent;
+});
+afterAll(() => t.close());
+
+const open = async (token: string) => request(t.app).get(`/api/p/${token}`);
+
+/** Opens the link until `check` holds or the wait runs out; returns the last answer. */
+async function openUntil(token: string, check: (p: ClientPresentation) => boolean): Promise<ClientPresentation> {
+  const until = Date.now() + NOTICE_WAIT_MS;
+  for (;;) {
+    const res = await open(token);
+    expect(res.status).toBe(200);
+    const p = res.body.presentation as ClientPresentation;
+    if (check(p) || Date.now() > until) return p;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+}
+
+describe('the client link cache', () => {
+  let p: PresentedProject;
+  beforeAll(async () => {
+    p = await presentedProject(owner, 'Cached flat');
+  });
+
+  it('answers the same data again from the ready answer', async () => {
+    const first = await open(p.token);
+    const again = await open(p.token);
+    expect(first.status).toBe(200);
+    expect(again.text).toBe(first.text);
+    expect(again.headers['cache-control']).toBe('no-store');
+    expect(again.headers['content-type']).toMatch(/^application\/json/);
+  });
+
+  it('shows a designer’s edit on the next open', async () => {
+    await open(p.token);
+    const { options } = (await owner.get(`/api/rooms/${p.roomId}`)).body as { options: { id: string; version: number; doc: { pieces: { name: string }[] } }[] };
+    const o = options.find((x) => x.id === p.optionIds[0])!;
+    const doc = { ...o.doc, pieces: o.doc.pieces.map((piece, i) => (i === 0 ? { ...piece, name: 'Reading chair' } : piece)) };
+    expect((await owner.put(`/api/options/${o.id}`).send({ doc, version: o.version })).status).toBe(200);
+    const seen = await openUntil(p.token, (x) => x.rooms[0].options[0].pieces.some((piece) => piece.name === 'Reading chair'));
+    expect(seen.rooms[0].options[0].pieces.map((piece) => piece.name)).toContain('Reading chair');
+  });
+
+  it('shows the client’s own choice straight away', async () => {
+    await open(p.token);
+    const chose = await request(t.app).put(`/api/p/${p.token}/rooms/${p.roomId}/choice`).send({ optionId: p.optionIds[1], comment: 'This one' });
+    expect(chose.status).toBe(200);
+    const after = (await open(p.token)).body.presentation as ClientPresentation;
+    expect(after.rooms[0].choice?.optionId).toBe(p.optionIds[1]);
+  });
+
+  it('counts every visit, served ready or not', async () => {
+    const before = (await owner.get(`/api/projects/${p.projectId}/presentations`)).body.presentations.find((x: PresentationSummary) => x.id === p.presentationId).openCount as number;
+    for (let i = 0; i < 5; i += 1) expect((await open(p.token)).status).toBe(200);
+    const after = (await owner.get(`/api/projects/${p.projectId}/presentations`)).body.presentations.find((x: PresentationSummary) => x.id === p.presentationId) as PresentationSummary;
+    expect(after.openCount).toBe(before + 5);
+  });
+
+  it('stops a withdrawn link on the very next request', async () => {
+    const q = await presentedProject(owner, 'Withdrawn flat');
+    for (let i = 0; i < 3; i += 1) expect((await open(q.token)).status).toBe(200);
+    expect((await owner.post(`/api/presentations/${q.presentationId}/withdraw`)).status).toBe(200);
+    const res = await open(q.token);
+    expect(res.status).toBe(410);
+    expect(res.body.error.code).toBe('link_withdrawn');
+    expect(res.text).not.toContain('Withdrawn flat');
+  });
+
+  it('stops a link withdrawn by a write that bypasses the routes, once the database says so', async () => {
+    const q = await presentedProject(owner, 'Quietly withdrawn');
+    expect((await open(q.token)).status).toBe(200);
+    await t.db.updateTable('presentations').set({ withdrawn_at: new Date() }).where('id', '=', q.presentationId).execute();
+    const until = Date.now() + NOTICE_WAIT_MS;
+    let status = 200;
+    while (status === 200 && Date.now() < until) status = (await open(q.token)).status;
+    expect(status).toBe(410);
+  });
+});
