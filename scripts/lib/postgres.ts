@@ -13,7 +13,8 @@ export interface ClusterOptions {
 
 const PG_USER = 'app';
 
-function binDir(): string {
+/** The newest installed PostgreSQL server's bin folder (initdb, pg_ctl, pg_dump, pg_restore). */
+export function binDir(): string {
   const root = '/usr/lib/postgresql';
   if (!existsSync(root)) throw new Error('PostgreSQL server binaries are missing (Debian package "postgresql").');
   const versions = readdirSync(root)
