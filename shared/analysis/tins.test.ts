@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { COMMON_TIN_SIZES_L, chooseTins, describeTins } from './tins';
 
 // Tin sizes are common practice (0.75, 1, 2.5, 5, 10 L); each expected plan below is worked by hand:
-// the smallest total at or above the need, then the fewest tins.
+// the fewest tins leaving less over than the smallest tin, then the least left over.
 describe('chooseTins', () => {
   it('offers the common sizes', () => {
     expect(COMMON_TIN_SIZES_L).toEqual([0.75, 1, 2.5, 5, 10]);
@@ -10,13 +10,13 @@ describe('chooseTins', () => {
 
   it.each([
     // need, tins, total: why
-    [7.04, '5 L + 3 × 0.75 L', 7.25], // 5 + 1 + 1 = 7 falls short; 7.25 is the least above it (5 + 2.5 leaves 0.46 L)
+    [7.04, '5 L + 2.5 L', 7.5], // two tins; 5 + 3 × 0.75 = 7.25 L leaves less but takes four
     [0.5, '0.75 L', 0.75],
     [0.8, '1 L', 1], // 1 L wastes 0.2; two 0.75 L waste 0.7
     [1.6, '1 L + 0.75 L', 1.75], // 1.75 beats 2 × 1 L and 2.5 L
-    [3, '3 × 1 L', 3], // exact; 4 × 0.75 L is the same paint in more tins
-    [7, '5 L + 2 × 1 L', 7],
-    [12, '10 L + 2 × 1 L', 12],
+    [3, '2.5 L + 0.75 L', 3.25], // two tins; 3 × 1 L is exact but three tins
+    [7, '5 L + 2.5 L', 7.5], // two tins against three for 5 + 1 + 1
+    [12, '10 L + 2.5 L', 12.5],
     [10, '10 L', 10],
     [25, '2 × 10 L + 5 L', 25],
   ] as const)('%s L → %s', (need, words, total) => {
@@ -26,10 +26,11 @@ describe('chooseTins', () => {
     expect(plan.spareL).toBeCloseTo(total - need, 6);
   });
 
-  it('prefers less paint over fewer tins: 20.1 L → 20.25 L in six tins, not 21 L in three', () => {
+  it('never buys a tin for nothing: 20.1 L → 2 × 10 L + 0.75 L, not 21 L nor 20.25 L in six tins', () => {
     const plan = chooseTins(20.1);
-    expect(plan.totalL).toBe(20.25);
-    expect(plan.tins.reduce((n, t) => n + t.count, 0)).toBe(6);
+    expect(plan.totalL).toBe(20.75);
+    expect(plan.tins.reduce((n, t) => n + t.count, 0)).toBe(3);
+    expect(plan.spareL).toBeLessThan(0.75);
   });
 
   it('buys nothing for nothing, and does not add a tin for floating-point dust', () => {

@@ -1,5 +1,6 @@
-// Paint tins to buy for a need in litres: the combination of tin sizes with the least paint left
-// over, and among those the fewest tins.
+// Paint tins to buy for a need in litres: the fewest tins that cover it while leaving less over
+// than the smallest tin (a spare that big would be a tin bought for nothing), then the least left
+// over. Fewer, larger tins is how paint is usually bought; it is also usually cheaper per litre.
 
 /** Tin sizes paint is commonly sold in, litres (common practice; the maker's range wins). */
 export const COMMON_TIN_SIZES_L: readonly number[] = [0.75, 1, 2.5, 5, 10];
@@ -27,9 +28,9 @@ function gcd(a: number, b: number): number {
 }
 
 /**
- * The tins (sizes in litres) whose contents cover `needL` litres with the least left over; ties go
- * to the fewest tins, then to larger tins. Exact: sizes are counted in steps of their common
- * divisor (in mL) and every total up to the need plus the largest tin is tried.
+ * The tins (sizes in litres) covering `needL` litres: among the totals that leave less over than
+ * the smallest tin, the one needing the fewest tins; ties go to less left over, then larger tins.
+ * Exact: sizes are counted in steps of their common divisor (in mL) and every total is tried.
  */
 export function chooseTins(needL: number, sizesL: readonly number[] = COMMON_TIN_SIZES_L): TinPlan {
   if (!Number.isFinite(needL) || needL < 0) throw new RangeError(`A paint need must be 0 litres or more (got ${needL}).`);
@@ -59,8 +60,16 @@ export function chooseTins(needL: number, sizesL: readonly number[] = COMMON_TIN
       }
     }
   }
-  let total = need;
-  while (fewest[total] < 0) total++;
+  // Totals leaving less over than the smallest tin; if none is reachable, the first one above.
+  const smallest = sizes[sizes.length - 1];
+  let total = -1;
+  for (let t = need; t < need + smallest && t <= limit; t++) {
+    if (fewest[t] >= 0 && (total < 0 || fewest[t] < fewest[total])) total = t;
+  }
+  if (total < 0) {
+    total = need;
+    while (fewest[total] < 0) total++;
+  }
 
   const counts = new Array<number>(sizes.length).fill(0);
   for (let t = total; t > 0; t -= sizes[pick[t]]) counts[pick[t]]++;

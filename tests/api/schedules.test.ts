@@ -88,12 +88,12 @@ describe('GET /api/options/:id/schedule', () => {
     const byName = Object.fromEntries(res.body.schedule.lines.map((l: { name: string }) => [l.name, l]));
     expect(byName['Side chair']).toMatchObject({ quantity: 2, total: 379.98 });
     expect(byName['Armchair']).toMatchObject({ status: 'existing', total: 0 });
-    // 20 m² + 10 % = 22 m² × 40 = 880. 43 m² × 2 coats ÷ 10 m²/L = 8.6 L; 5 + 2.5 + 1 = 8.5 L falls short,
-    // 5 + 3 × 1 + 0.75 = 8.75 L is the least above it: × 12.50 = 109.375 → 109.38.
+    // 20 m² + 10 % = 22 m² × 40 = 880. 43 m² × 2 coats ÷ 10 m²/L = 8.6 L; within 0.75 L over, the fewest
+    // tins are four: 5 + 2.5 + 2 × 0.75 = 9 L (5 + 3 × 1 + 0.75 = 8.75 L takes five): × 12.50 = 112.50.
     expect(byName['Oak boards']).toMatchObject({ quantity: 22, total: 880, supplier: 'Timber yard' });
-    expect(byName['Oat']).toMatchObject({ quantityUnit: 'L', quantity: 8.75, quantityNote: '5 L + 3 × 1 L + 0.75 L for 8.6 L', total: 109.38 });
-    // 1829.98 + 880 + 109.38
-    expect(res.body.schedule.totals).toMatchObject({ newPiecesCost: 1829.98, finishesCost: 989.38, budget: 2819.36, newPieceCount: 3, existingPieceCount: 1 });
+    expect(byName['Oat']).toMatchObject({ quantityUnit: 'L', quantity: 9, quantityNote: '5 L + 2.5 L + 2 × 0.75 L for 8.6 L', total: 112.5 });
+    // 1829.98 + 880 + 112.50
+    expect(res.body.schedule.totals).toMatchObject({ newPiecesCost: 1829.98, finishesCost: 992.5, budget: 2822.48, newPieceCount: 3, existingPieceCount: 1 });
   });
 
   it('follows the coats, coverage, waste and box size asked for', async () => {
@@ -147,8 +147,8 @@ describe('GET /api/options/:id/schedule.csv', () => {
     expect(row('Armchair')[col('Total')]).toBe('0.00');
     // A code that looks like a formula is kept as text.
     expect(row('Oak boards')[col('Code')]).toBe("'=OAK");
-    expect(row('Oat')).toEqual(['Finish', 'Oat', '', 'Walls 1, 2, 3, 4 · 2 coats at 10 m²/L', '8.75', 'L', '5 L + 3 × 1 L + 0.75 L for 8.6 L', '12.50', 'L', '109.38', 'Paint mill', 'OAT-1', '']);
-    expect(records.slice(-3).map((r) => [r[col('Name')], r[col('Total')]])).toEqual([['New pieces', '1829.98'], ['Finishes', '989.38'], ['Budget', '2819.36']]);
+    expect(row('Oat')).toEqual(['Finish', 'Oat', '', 'Walls 1, 2, 3, 4 · 2 coats at 10 m²/L', '9', 'L', '5 L + 2.5 L + 2 × 0.75 L for 8.6 L', '12.50', 'L', '112.50', 'Paint mill', 'OAT-1', '']);
+    expect(records.slice(-3).map((r) => [r[col('Name')], r[col('Total')]])).toEqual([['New pieces', '1829.98'], ['Finishes', '992.50'], ['Budget', '2822.48']]);
   });
 });
 
@@ -159,7 +159,7 @@ describe('GET /api/projects/:projectId/takeoff', () => {
     const [room] = res.body.rooms;
     expect(room.options.map((o: { label: string }) => o.label)).toEqual(['Option A · Calm', 'Option B · Bold']);
     expect(room.counted.id).toBe(optionA);
-    expect(room.takeoff.paints[0]).toMatchObject({ finishId: paintId, areaM2: 43, litres: 8.6, tins: { totalL: 8.75 } });
+    expect(room.takeoff.paints[0]).toMatchObject({ finishId: paintId, areaM2: 43, litres: 8.6, tins: { totalL: 9 } });
     expect(room.takeoff.coverings[0]).toMatchObject({ finishId: oakId, orderAreaM2: 22, units: null });
     expect(res.body.totals).toMatchObject({ floorAreaM2: 20, paints: [{ litres: 8.6, rooms: ['Living room'] }] });
 
@@ -183,7 +183,7 @@ describe('GET /api/projects/:projectId/compare', () => {
     const [room] = before.body.rooms;
     expect(room.chosenOptionId).toBeNull();
     const [a, b] = room.options;
-    expect(a).toMatchObject({ id: optionA, budget: 2819.36, newPieceCount: 3, chosen: false });
+    expect(a).toMatchObject({ id: optionA, budget: 2822.48, newPieceCount: 3, chosen: false });
     expect(b).toMatchObject({ id: optionB, newPieceCount: 1, findingCount: 0 });
     // Bench 1.5 × 0.4 m on 20 m² → 97 % free.
     expect(b.freeFloorPercent).toBeCloseTo(97, 0);

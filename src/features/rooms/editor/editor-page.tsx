@@ -236,7 +236,8 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
             <option value="m">m</option>
             <option value="ftin">ft in</option>
           </select>
-          <a className="text-sm font-semibold text-pine hover:underline" href={`/api/rooms/${detail.room.id}/plan-file?optionId=${activeOptionId}`} download>Plan file</a>
+          <Link className="text-sm font-semibold whitespace-nowrap text-pine hover:underline" to={`/projects/${projectId}/rooms/${detail.room.id}/options/${activeOptionId}/schedule`}>Schedule</Link>
+          <a className="text-sm font-semibold whitespace-nowrap text-pine hover:underline" href={`/api/rooms/${detail.room.id}/plan-file?optionId=${activeOptionId}`} download>Plan file</a>
           <Button size="sm" variant="quiet" onClick={() => setHelp(true)} aria-label="Keys">Keys</Button>
         </div>
       </div>
