@@ -38,10 +38,11 @@ const PHOTOS: DemoPhoto[] = [
   { name: 'Sprig wallpaper', category: 'wallpaper', repeatWidthMm: 265, repeatHeightMm: 265, supplier: 'Sample paper studio', code: 'SPR-12', price: 29, priceUnit: 'unit', draw: () => sprigWallpaper() },
 ];
 
+// Invented paints, priced per litre (a paint's per-unit price is per litre in the schedule).
 const PAINTS = [
-  { name: 'Morning oat', colour_hex: '#e6dcc8', sheen: 'matt' },
-  { name: 'Sage hall', colour_hex: '#a3ad94', sheen: 'eggshell' },
-  { name: 'Deep harbour', colour_hex: '#2f4858', sheen: 'satin' },
+  { name: 'Morning oat', colour_hex: '#e6dcc8', sheen: 'matt', price: 14.5, price_unit: 'unit', supplier: 'Sample paint mill', code: 'MO-01' },
+  { name: 'Sage hall', colour_hex: '#a3ad94', sheen: 'eggshell', price: 16, price_unit: 'unit', supplier: 'Sample paint mill', code: 'SH-07' },
+  { name: 'Deep harbour', colour_hex: '#2f4858', sheen: 'satin', price: 18.5, price_unit: 'unit', supplier: 'Sample paint mill', code: 'DH-12' },
 ] as const;
 
 /** Adds the demo finishes to `studioId`, processing each drawing exactly as an upload is processed. */
