@@ -1,4 +1,4 @@
-// The app as a child process (server/index.ts through tsx), for the load benchmark and the crash
+// The app as a child process (server/index.ts with tsx's loader), for the load benchmark and the crash
 // tests: started with its own environment, waited for until it answers, stopped or killed.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { openSync, closeSync } from 'node:fs';
@@ -20,7 +20,9 @@ export interface ServerProcess {
 /** Starts the app on `port` with `env` on top of a minimal environment; stdout and stderr go to `logFile`. */
 export async function startServerProcess(opts: { port: number; env: Record<string, string>; logFile: string }): Promise<ServerProcess> {
   const fd = openSync(opts.logFile, 'a');
-  const child = spawn(process.execPath, [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, 'server/index.ts')], {
+  // tsx as a loader in this one process (not its CLI, which runs the server in a grandchild): a
+  // signal sent to the child reaches the server itself.
+  const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'server/index.ts')], {
     cwd: root,
     env: { PATH: process.env.PATH ?? '', HOST: '127.0.0.1', PORT: String(opts.port), ...opts.env },
     stdio: ['ignore', fd, fd],

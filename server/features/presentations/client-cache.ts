@@ -18,7 +18,7 @@ const MAX_ENTRIES = 2000;
 /** "Opened" counts are written together at most this often, not once per visit. */
 const OPEN_FLUSH_MS = 1000;
 const RECONNECT_MIN_MS = 250;
-const RECONNECT_MAX_MS = 30_000;
+const RECONNECT_MAX_MS = 5000;
 
 export interface CachedLink {
   presentationId: string;
