@@ -1,4 +1,5 @@
 // The client's entry: no router, no session, no designer code; the token comes from /p/<token>.
+import '../../lib/zod-no-eval';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import '../../styles.css';

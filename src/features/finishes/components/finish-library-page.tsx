@@ -68,7 +68,7 @@ export function FinishLibraryPage() {
 function FinishCard({ finish }: { finish: Finish }) {
   const price = formatPrice(finish);
   return (
-    <Link to={`/finishes/${finish.id}`} className="group flex h-full flex-col gap-3 rounded-2xl border border-line bg-white p-3 transition-colors hover:border-line-strong" aria-label={finish.name}>
+    <Link to={`/finishes/${finish.id}`} className="group flex h-full flex-col gap-3 rounded-2xl border border-line bg-white p-3 transition-colors hover:border-line-strong">
       <Swatch finish={finish} />
       <div className="min-w-0 px-1 pb-1">
         <div className="truncate font-semibold text-ink group-hover:underline" title={finish.name}>{finish.name}</div>

@@ -297,7 +297,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
                   <span className="ml-auto rounded-full bg-clay px-1.5 text-xs text-white" aria-label={`${findings.length} findings`}>{findings.length}</span>
                 )}
               </span>
-              <span className="hidden text-xs leading-snug text-ink-faint lg:block">{s.hint}</span>
+              <span className="hidden text-xs leading-snug text-ink-soft lg:block">{s.hint}</span>
             </button>
           ))}
         </nav>

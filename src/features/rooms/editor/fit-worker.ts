@@ -1,4 +1,5 @@
 // Runs the fit check off the main thread, so dragging stays smooth in a full room.
+import '../../../lib/zod-no-eval';
 import { checkFit } from '../../../../shared/analysis/fit';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
