@@ -1,7 +1,7 @@
 // npm run backup and npm run restore round-trip the demo studio: seeded into a throwaway database,
 // backed up, restored into another empty database and data folder; every table's row count, every
 // file's bytes and the presentation key come back, and the restored copy signs in.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
@@ -15,7 +15,7 @@ import { seedDemo, DEMO_SIGN_IN } from '../../server/cli/seed';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { tableCounts } from '../../scripts/lib/data-target';
-import { testDatabase } from '../setup/test-database';
+import { siblingDatabase, type SiblingDatabase } from './lib/sibling-database';
 
 const root = resolve(import.meta.dirname, '../..');
 const SCRIPT_TIMEOUT_MS = 60_000;
@@ -49,12 +49,13 @@ const scratch = mkdtempSync(join(tmpdir(), 'parlour-backup-test-'));
 const sourceDir = join(scratch, 'source');
 const restoredDir = join(scratch, 'restored');
 const archive = join(scratch, 'demo.tar.gz');
-let source: Awaited<ReturnType<typeof testDatabase>>;
-let target: Awaited<ReturnType<typeof testDatabase>>;
+let source: SiblingDatabase;
+let target: SiblingDatabase;
 
 beforeAll(async () => {
-  source = await testDatabase('parlour_backup_src');
-  target = await testDatabase('parlour_backup_dst');
+  // Two databases of this test's own: the restore needs an empty one.
+  source = await siblingDatabase(inject('databaseUrl'), 'parlour_backup_src');
+  target = await siblingDatabase(inject('databaseUrl'), 'parlour_backup_dst');
   const db = createDb(source.url, 2);
   await migrateToLatest(db);
   const dataDir = process.env.DATA_DIR;

@@ -2,7 +2,7 @@
 // S3-compatible store (s3rver on loopback). A session started on one continues on the other, a
 // photo uploaded through one is served by the other from the bucket, a client link works on
 // either and a withdrawal on one stops it on the other, and rate limits count across both.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -16,7 +16,7 @@ import { startStandInSmtp, type StandInSmtp } from '../../server/services/mail/s
 import { INVITE_RATE } from '../../server/features/studio/studio.routes';
 import { MAX_FAILURES } from '../../server/features/auth/auth.service';
 import { freePort } from '../../scripts/lib/throwaway-cluster';
-import { testDatabase } from '../setup/test-database';
+import { siblingDatabase, type SiblingDatabase } from './lib/sibling-database';
 
 const BUCKET = 'parlour-files';
 /** How long a database change notice may take between instances on a loaded test machine. */
@@ -25,7 +25,7 @@ const PROCESSING_WAIT_MS = 30_000;
 
 type Instance = Awaited<ReturnType<typeof startServer>>;
 const scratch = mkdtempSync(join(tmpdir(), 'parlour-two-'));
-let database: Awaited<ReturnType<typeof testDatabase>>;
+let database: SiblingDatabase;
 let s3: S3rver;
 let smtp: StandInSmtp;
 let a: Instance;
@@ -46,8 +46,20 @@ async function call(instance: Instance, method: string, path: string, body?: unk
   return { status: res.status, body: json, bytes };
 }
 
+interface ProcessedFinish { status: string; files: { swatchUrl: string | null } }
+
+/** Polls instance B until the photo uploaded through A has been processed (by A's queue). */
+async function processedOnB(id: string): Promise<ProcessedFinish> {
+  const until = Date.now() + PROCESSING_WAIT_MS;
+  for (;;) {
+    const finish = (await call(b, 'GET', `/api/finishes/${id}`)).body.finish as ProcessedFinish;
+    if (finish.status !== 'processing' || Date.now() > until) return finish;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
 beforeAll(async () => {
-  database = await testDatabase('parlour_two');
+  database = await siblingDatabase(inject('databaseUrl'), 'parlour_two');
   const db = createDb(database.url, 1);
   await migrateToLatest(db);
   await db.destroy();
@@ -97,16 +109,10 @@ describe('two instances, one database, one store', () => {
     const uploaded = await call(a, 'POST', '/api/finishes/photos', form);
     expect(uploaded.status).toBe(201);
     const id = (uploaded.body.finishes as { id: string }[])[0].id;
-    const until = Date.now() + PROCESSING_WAIT_MS;
-    let finish: { status: string; files: { swatchUrl: string | null } } | null = null;
-    while (Date.now() < until) {
-      finish = (await call(b, 'GET', `/api/finishes/${id}`)).body.finish as typeof finish;
-      if (finish?.status !== 'processing') break;
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    expect(finish?.status).toBe('ready');
-    const fromB = await call(b, 'GET', finish!.files.swatchUrl!);
-    const fromA = await call(a, 'GET', finish!.files.swatchUrl!);
+    const finish = await processedOnB(id);
+    expect(finish.status).toBe('ready');
+    const fromB = await call(b, 'GET', finish.files.swatchUrl!);
+    const fromA = await call(a, 'GET', finish.files.swatchUrl!);
     expect(fromB.status).toBe(200);
     expect(createHash('sha256').update(fromB.bytes).digest('hex')).toBe(createHash('sha256').update(fromA.bytes).digest('hex'));
     // The bytes live in the bucket; neither instance wrote files to its own disk.
