@@ -3,7 +3,7 @@ import type { Piece } from '../schemas/option';
 import { roomShellSchema, type RoomShell } from '../schemas/room';
 import { DOOR_LEAF_THICKNESS_MM } from './scene';
 import {
-  BODY_RADIUS_MM, HEAD_CLEARANCE_MM, THRESHOLD_DEPTH_MM, clearanceMm, insideOutline, moveBody, walkLine, walkObstacles, walkStart,
+  BODY_RADIUS_MM, HEAD_CLEARANCE_MM, THRESHOLD_DEPTH_MM, clearanceMm, floorCentreMm, insideOutline, moveBody, walkLine, walkObstacles, walkStart,
 } from './walk';
 
 const R = BODY_RADIUS_MM;
@@ -111,16 +111,39 @@ describe('walking to a point', () => {
     expect(y).toBeGreaterThanOrEqual(1500 + 300 + R);
     expect(y).toBeLessThan(1500 + 300 + R + R * 0.25 + 1e-6);
   });
+
+  it('walks away from a wall it rests against', () => {
+    const resting = moveBody(empty, [2000, 1500], [0, -3000]);
+    const [, y] = walkLine(empty, resting, [2000, 2000]);
+    expect(y).toBe(2000);
+  });
 });
 
 describe('where a walk starts', () => {
-  it('stands a step inside the first door, facing into the room', () => {
+  it('stands a step inside the first door, facing the middle of the floor', () => {
     const start = walkStart(shell, empty);
     expect(start.position[0]).toBeCloseTo(810, 6);
     expect(start.position[1]).toBeGreaterThan(R);
     expect(insideOutline(shell.outline, start.position)).toBe(true);
     expect(clearanceMm(empty, start.position)).toBeGreaterThanOrEqual(R);
-    expect(start.headingDeg).toBeCloseTo(90, 6);
+    const [x, y] = start.position;
+    expect(start.headingDeg).toBeCloseTo((Math.atan2(1500 - y, 2000 - x) * 180) / Math.PI, 6);
+  });
+
+  it('faces straight in where the middle of the floor is not in the room', () => {
+    // A U: its middle falls in the notch between the arms. The door is at the bottom of the left arm.
+    const u = roomShellSchema.parse({
+      outline: [[0, 0], [1500, 0], [1500, 3000], [3000, 3000], [3000, 0], [4500, 0], [4500, 4500], [0, 4500]],
+      openings: [{ id: 'door', type: 'door', wall: 7, offset: 1500, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
+    });
+    expect(insideOutline(u.outline, floorCentreMm(u.outline))).toBe(false);
+    const start = walkStart(u, walkObstacles(u, []));
+    expect(start.headingDeg).toBeCloseTo(0, 6);
+  });
+
+  it('finds the middle of a floor by area', () => {
+    expect(floorCentreMm([[0, 0], [4000, 0], [4000, 3000], [0, 3000]])).toEqual([2000, 1500]);
+    expect(floorCentreMm([[0, 0], [0, 3000], [4000, 3000], [4000, 0]])).toEqual([2000, 1500]);
   });
 
   it('without a door or passage, stands in the freest place, inside the room', () => {

@@ -24,6 +24,8 @@ const SUBSTEP_SHARE = 0.25;
 const RESOLVE_ROUNDS = 4;
 /** Below this (mm) two points are the same for the walk. */
 const WALK_EPSILON_MM = 1e-6;
+/** A body resting against a wall has exactly its radius of room; rounding must not pin it there (mm). */
+const CONTACT_TOLERANCE_MM = 0.5;
 /** A first standing place this far (mm) into the room from its door, beyond the body radius. */
 const START_STEP_MM = 500;
 /** Where no door offers a free place, standing places are tried on a grid this fine (mm). */
@@ -219,7 +221,7 @@ export function walkLine(obstacles: WalkObstacles, from: Vec2, to: Vec2, radiusM
   let reached: [number, number] = [from[0], from[1]];
   for (let i = 1; i <= steps; i++) {
     const p = addScaled(from, d, i / steps);
-    if (clearanceMm(obstacles, p) < radiusMm) break;
+    if (clearanceMm(obstacles, p) < radiusMm - CONTACT_TOLERANCE_MM) break;
     reached = p;
   }
   return reached;
@@ -243,11 +245,31 @@ export interface WalkStart {
   headingDeg: number;
 }
 
+/** The middle of a floor by area (plan mm): where a person entering looks to take the room in. */
+export function floorCentreMm(outline: readonly Vec2[]): [number, number] {
+  let twiceArea = 0;
+  let cx = 0;
+  let cy = 0;
+  for (let i = 0, j = outline.length - 1; i < outline.length; j = i++) {
+    const c = outline[j][0] * outline[i][1] - outline[i][0] * outline[j][1];
+    twiceArea += c;
+    cx += (outline[j][0] + outline[i][0]) * c;
+    cy += (outline[j][1] + outline[i][1]) * c;
+  }
+  if (twiceArea === 0) return [outline[0][0], outline[0][1]];
+  return [cx / (3 * twiceArea), cy / (3 * twiceArea)];
+}
+
+const headingDegOf = (v: Vec2) => (Math.atan2(v[1], v[0]) * 180) / Math.PI;
+
 /**
- * Where a walk begins (plan mm): a step into the room from its first door (or passage), facing in;
- * without a free place there, the freest place on the floor, facing the middle of the room.
+ * Where a walk begins (plan mm): a step into the room from its first door (or passage), facing
+ * the middle of the floor (straight in when the middle is not in the room, as in a deep L);
+ * without a free place there, the freest place on the floor, facing the middle.
  */
 export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm = BODY_RADIUS_MM): WalkStart {
+  const centre = floorCentreMm(shell.outline);
+  const centreInside = insideOutline(shell.outline, centre);
   const walls = layoutShellWalls(shell);
   const entries = [...shell.openings.filter((o) => o.type === 'door'), ...shell.openings.filter((o) => o.type === 'passage')];
   for (const entry of entries) {
@@ -259,12 +281,13 @@ export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm =
     for (let extra = 0; extra <= 4; extra++) {
       const p = addScaled(middle, inward, radiusMm + START_STEP_MM * (1 + extra / 2));
       if (insideOutline(shell.outline, p) && clearanceMm(obstacles, p) >= radiusMm) {
-        return { position: p, headingDeg: (Math.atan2(inward[1], inward[0]) * 180) / Math.PI };
+        const look = sub(centre, p);
+        const facesIn = dot(look, inward) > 0 && Math.hypot(look[0], look[1]) > START_STEP_MM;
+        return { position: p, headingDeg: headingDegOf(centreInside && facesIn ? look : inward) };
       }
     }
   }
   const b = boundsMm(shell.outline);
-  const centre: Vec2 = [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2];
   let best: { p: [number, number]; clear: number } = { p: [centre[0], centre[1]], clear: -Infinity };
   for (let x = b.minX + START_GRID_MM / 2; x < b.maxX; x += START_GRID_MM) {
     for (let y = b.minY + START_GRID_MM / 2; y < b.maxY; y += START_GRID_MM) {
@@ -274,6 +297,6 @@ export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm =
     }
   }
   const look = sub(centre, best.p);
-  const headingDeg = Math.hypot(look[0], look[1]) < START_GRID_MM ? 0 : (Math.atan2(look[1], look[0]) * 180) / Math.PI;
+  const headingDeg = Math.hypot(look[0], look[1]) < START_GRID_MM ? 0 : headingDegOf(look);
   return { position: best.p, headingDeg };
 }

@@ -24,17 +24,52 @@ export interface FinishMaterialPair {
   faded: THREE.MeshStandardMaterial;
 }
 
+/** Bytes per texel of an uploaded RGBA8 texture. */
+const RGBA_BYTES = 4;
+/** A full mipmap chain adds a third to the base level (1/4 + 1/16 + … → 1/3). */
+const MIPMAP_FACTOR = 4 / 3;
+
+/** Photo textures asked for and settled (loaded or failed), for a progress bar. */
+export interface TextureProgress {
+  settled: number;
+  total: number;
+}
+
 /**
  * One view's finish materials, shared by every surface wearing the same finish, with textures
- * loaded once per URL. `onChange` is called when a texture arrives (render on demand).
+ * loaded once per URL. `onChange` is called when a texture arrives (render on demand);
+ * `onProgress` each time a texture is asked for or settles.
  */
 export class FinishMaterials {
   private readonly pairs = new Map<string, FinishMaterialPair>();
   private readonly textures = new Map<string, THREE.Texture>();
   private readonly loader = new THREE.TextureLoader();
+  private readonly settledUrls = new Set<string>();
   private disposed = false;
 
-  constructor(private readonly onChange: () => void, private readonly anisotropy = 4) {}
+  constructor(
+    private readonly onChange: () => void,
+    private readonly anisotropy = 4,
+    private readonly onProgress?: (progress: TextureProgress) => void,
+  ) {}
+
+  /** How many of the asked-for textures have arrived or failed. */
+  progress(): TextureProgress {
+    return { settled: this.settledUrls.size, total: this.textures.size };
+  }
+
+  /**
+   * GPU memory (bytes) the loaded textures take: width × height × 4 bytes, plus a third for the
+   * mipmaps. Computed from the images' own sizes, so a larger upload shows here at once.
+   */
+  textureBytes(): number {
+    let bytes = 0;
+    for (const t of this.textures.values()) {
+      const image = t.image as { width?: number; height?: number } | null | undefined;
+      if (image?.width && image.height) bytes += image.width * image.height * RGBA_BYTES * MIPMAP_FACTOR;
+    }
+    return Math.round(bytes);
+  }
 
   get(finish: SceneFinish): FinishMaterialPair {
     const key = JSON.stringify(finish);
@@ -74,11 +109,22 @@ export class FinishMaterials {
       else ready.userData.waiting = [...((ready.userData.waiting as (() => void)[] | undefined) ?? []), () => apply(ready)];
       return;
     }
-    const texture = this.loader.load(finish.textureUrl, (t) => {
-      apply(t);
-      for (const wait of (t.userData.waiting as (() => void)[] | undefined) ?? []) wait();
-      t.userData.waiting = [];
-    });
+    const settle = () => {
+      this.settledUrls.add(key);
+      if (!this.disposed) this.onProgress?.(this.progress());
+    };
+    const texture = this.loader.load(
+      finish.textureUrl,
+      (t) => {
+        apply(t);
+        for (const wait of (t.userData.waiting as (() => void)[] | undefined) ?? []) wait();
+        t.userData.waiting = [];
+        settle();
+      },
+      undefined,
+      // A texture that cannot load leaves the surface in the finish's flat colour.
+      settle,
+    );
     texture.wrapS = THREE.RepeatWrapping;
     texture.wrapT = THREE.RepeatWrapping;
     const { repeatU, repeatV } = textureRepeat(finish);
@@ -86,6 +132,7 @@ export class FinishMaterials {
     texture.colorSpace = THREE.SRGBColorSpace;
     texture.anisotropy = this.anisotropy;
     this.textures.set(key, texture);
+    this.onProgress?.(this.progress());
   }
 
   dispose(): void {
@@ -97,6 +144,7 @@ export class FinishMaterials {
     for (const t of this.textures.values()) t.dispose();
     this.pairs.clear();
     this.textures.clear();
+    this.settledUrls.clear();
   }
 }
 

@@ -25,13 +25,17 @@ describe('overviewFrame', () => {
     camera.lookAt(...frame.target);
     camera.updateMatrixWorld();
     expect(frame.position[1]).toBeGreaterThan(bounds.max[1]);
+    let widest = 0;
     for (const corner of cornersOf(bounds)) {
       const ndc = corner.clone().project(camera);
       expect(Math.abs(ndc.x)).toBeLessThan(1);
       expect(Math.abs(ndc.y)).toBeLessThan(1);
       expect(ndc.z).toBeGreaterThan(-1);
       expect(ndc.z).toBeLessThan(1);
+      widest = Math.max(widest, Math.abs(ndc.x), Math.abs(ndc.y));
     }
+    // …and fills it: the room is as large as the margin allows, not lost in the middle.
+    expect(widest).toBeGreaterThan(0.85);
   });
 
   it('looks at the middle of the room', () => {

@@ -34,17 +34,35 @@ export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): 
     Math.hypot(bounds.max[0] - bounds.min[0], bounds.max[1] - bounds.min[1], bounds.max[2] - bounds.min[2]) / 2,
     0.01,
   );
-  const halfVertical = (fovDeg * Math.PI) / 360;
-  const halfHorizontal = Math.atan(Math.tan(halfVertical) * Math.max(aspect, 0.01));
-  // A sphere seen from outside fills the narrower half-angle exactly at this distance.
-  const distance = (radius * FRAME_MARGIN) / Math.sin(Math.min(halfVertical, halfHorizontal));
+  const tanV = Math.tan((fovDeg * Math.PI) / 360);
+  const tanH = tanV * Math.max(aspect, 0.01);
   const azimuth = (OVERVIEW_AZIMUTH_DEG * Math.PI) / 180;
   const elevation = (OVERVIEW_ELEVATION_DEG * Math.PI) / 180;
-  const position: [number, number, number] = [
-    target[0] + distance * Math.cos(elevation) * Math.sin(azimuth),
-    target[1] + distance * Math.sin(elevation),
-    target[2] + distance * Math.cos(elevation) * Math.cos(azimuth),
+  // Unit vector from the target to the eye, and the camera's right and up seen from there.
+  const back: [number, number, number] = [Math.cos(elevation) * Math.sin(azimuth), Math.sin(elevation), Math.cos(elevation) * Math.cos(azimuth)];
+  const right: [number, number, number] = [Math.cos(azimuth), 0, -Math.sin(azimuth)];
+  const up: [number, number, number] = [
+    back[1] * right[2] - back[2] * right[1],
+    back[2] * right[0] - back[0] * right[2],
+    back[0] * right[1] - back[1] * right[0],
   ];
+  // The nearest eye distance at which every corner of the box projects inside the frame (less
+  // the margin): a corner at depth z towards the eye and offsets x, y across needs
+  // distance ≥ z + |x| / tanH and ≥ z + |y| / tanV, scaled by the margin.
+  let distance = 0;
+  for (const cx of [bounds.min[0], bounds.max[0]]) {
+    for (const cy of [bounds.min[1], bounds.max[1]]) {
+      for (const cz of [bounds.min[2], bounds.max[2]]) {
+        const v = [cx - target[0], cy - target[1], cz - target[2]];
+        const x = v[0] * right[0] + v[1] * right[1] + v[2] * right[2];
+        const y = v[0] * up[0] + v[1] * up[1] + v[2] * up[2];
+        const z = v[0] * back[0] + v[1] * back[1] + v[2] * back[2];
+        distance = Math.max(distance, z + (Math.abs(x) * FRAME_MARGIN) / tanH, z + (Math.abs(y) * FRAME_MARGIN) / tanV);
+      }
+    }
+  }
+  distance = Math.max(distance, radius * 1.5);
+  const position: [number, number, number] = [target[0] + distance * back[0], target[1] + distance * back[1], target[2] + distance * back[2]];
   return {
     target,
     position,

@@ -16,6 +16,8 @@ interface RoomShellProps {
   surfaces?: { floor?: FinishMaterialPair; ceiling?: FinishMaterialPair; inside?: (wallIndex: number) => FinishMaterialPair | undefined };
   /** A click (not a drag) on the floor, the ceiling or a wall's inside face. */
   onSurfaceClick?: (surface: SurfaceHit) => void;
+  /** A click (not a drag) on the floor, with the point hit (scene metres on the floor plane). */
+  onFloorPoint?: (x: number, z: number) => void;
 }
 
 export type SurfaceHit = 'floor' | 'ceiling' | { wall: number };
@@ -28,7 +30,7 @@ function tag(wallIndex: number, wallPart: WallPartTag['wallPart']): WallPartTag 
 }
 
 /** Floor, ceiling, walls, door leaves and windows of one room, drawn from grouped scene data. */
-export function RoomShellMeshes({ parts, materials, ceilingRef, wallsRef, surfaces, onSurfaceClick }: RoomShellProps) {
+export function RoomShellMeshes({ parts, materials, ceilingRef, wallsRef, surfaces, onSurfaceClick, onFloorPoint }: RoomShellProps) {
   const click = (surface: SurfaceHit) =>
     onSurfaceClick
       ? (e: ThreeEvent<MouseEvent>) => {
@@ -37,12 +39,19 @@ export function RoomShellMeshes({ parts, materials, ceilingRef, wallsRef, surfac
           onSurfaceClick(surface);
         }
       : undefined;
+  const floorClick = onFloorPoint
+    ? (e: ThreeEvent<MouseEvent>) => {
+        if (e.delta > CLICK_SLOP_PX) return;
+        e.stopPropagation();
+        onFloorPoint(e.point.x, e.point.z);
+      }
+    : click('floor');
   const geometries = useMemo(() => shellGeometries(parts), [parts]);
   useEffect(() => () => disposeShellGeometries(geometries), [geometries]);
 
   return (
     <group>
-      {geometries.floor && <mesh geometry={geometries.floor} material={surfaces?.floor?.solid ?? materials.floor} receiveShadow onClick={click('floor')} />}
+      {geometries.floor && <mesh geometry={geometries.floor} material={surfaces?.floor?.solid ?? materials.floor} receiveShadow onClick={floorClick} />}
       {/* Walls, windows and the ceiling cast no shadows: the sun is there to seat the pieces, and a
           wall's shadow across the floor would hide the layout (the ceiling's would hide it all). */}
       {geometries.ceiling && <mesh ref={ceilingRef} geometry={geometries.ceiling} material={surfaces?.ceiling?.solid ?? materials.ceiling} receiveShadow onClick={click('ceiling')} />}

@@ -1,19 +1,20 @@
-import { Canvas, useFrame, useThree } from '@react-three/fiber';
-import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { Canvas, useThree } from '@react-three/fiber';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import * as THREE from 'three';
 import { buildRoomScene, type PieceSceneData } from '../../shared/geometry/scene';
 import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
-import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND, type SceneMaterials } from './materials';
+import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from './materials';
 import { OverviewControls } from './overview-controls';
 import { RoomPieces } from './room-pieces';
 import { RoomShellMeshes, type SurfaceHit } from './room-shell';
 import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
 import { SceneLights } from './scene-lights';
-import { shellParts, type ShellParts } from './shell-parts';
-import { applyWallFade } from './wall-fade';
-import { FinishMaterials, finishColourHex, type SurfaceFinishes } from './finish-materials';
-import { wallsFacingEye } from './wall-facing';
+import { shellParts } from './shell-parts';
+import { RenderAndReport } from './render-report';
+import { FinishMaterials, type SurfaceFinishes } from './finish-materials';
+import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from './view-helpers';
+import { windowLightRects } from './window-lights';
 
 export type { SurfaceHit } from './room-shell';
 export type { SurfaceFinishes } from './finish-materials';
@@ -101,23 +102,6 @@ function WebGLMessage() {
   );
 }
 
-/** The same value while its JSON stays the same, so memos key on content, not on object identity. */
-function useStableValue<T>(value: T): T {
-  const key = JSON.stringify(value);
-  return useMemo(() => JSON.parse(key) as T, [key]);
-}
-
-// A shell mid-edit can break a rule the geometry relies on; the view then draws nothing for it
-// rather than taking the page down, and the editor's checks say what is wrong.
-function tryBuild<T>(what: string, build: () => T): T | null {
-  try {
-    return build();
-  } catch (error) {
-    console.warn(`3D view could not build the ${what}:`, error);
-    return null;
-  }
-}
-
 interface RoomSceneProps {
   shell: RoomShell;
   pieces: Piece[];
@@ -133,24 +117,15 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
   const shell = useStableValue(shellProp);
   const finishes = useStableValue(finishesProp ?? {});
   const invalidate = useThree((state) => state.invalidate);
-  // Pieces wearing a finish are drawn in its colour (a photo's mean colour: pieces share one mesh).
-  const pieces = useStableValue(
-    piecesProp.filter((p) => p.placed).map((p) => (finishes.pieces?.[p.id] ? { ...p, colour: finishColourHex(finishes.pieces[p.id]) } : p)),
-  );
+  const pieces = useStableValue(dressedPieces(piecesProp, finishes));
 
   const materials = useMemo(createSceneMaterials, []);
   useEffect(() => () => disposeSceneMaterials(materials), [materials]);
   const gl = useThree((state) => state.gl);
   const finishMaterials = useMemo(() => new FinishMaterials(() => invalidate(), Math.min(8, gl.capabilities.getMaxAnisotropy())), [invalidate, gl]);
   useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
-  const surfaces = useMemo(() => ({
-    floor: finishes.floor ? finishMaterials.get(finishes.floor) : undefined,
-    ceiling: finishes.ceiling ? finishMaterials.get(finishes.ceiling) : undefined,
-    inside: (wall: number) => {
-      const f = finishes.wallOverrides?.[String(wall)] ?? finishes.walls ?? null;
-      return f ? finishMaterials.get(f) : undefined;
-    },
-  }), [finishes, finishMaterials]);
+  const surfaces = useMemo(() => surfaceMaterials(finishes, finishMaterials), [finishes, finishMaterials]);
+  const windows = useMemo(() => tryBuild('windows', () => windowLightRects(shell)) ?? [], [shell]);
 
   const parts = useMemo(() => tryBuild('room', () => shellParts(buildRoomScene(shell, { pieces: [] }), shell)), [shell]);
   const pieceScene = useMemo<readonly PieceSceneData[]>(
@@ -158,71 +133,16 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
     [shell, pieces],
   );
 
-  const walls = useRef<THREE.Group>(null);
-  const ceiling = useRef<THREE.Mesh>(null);
-  const lastCamera = useRef<THREE.Camera | null>(null);
-
-  // Runs on every camera move: mutates meshes and one data attribute, never React state.
-  const updateView = useCallback(
-    (camera: THREE.Camera) => {
-      lastCamera.current = camera;
-      if (!parts) return;
-      updateWallFade(parts, camera, fadeNearWalls, walls.current, ceiling.current, materials, host.current);
-    },
-    [parts, fadeNearWalls, materials, host],
-  );
-
-  // New wall meshes mount solid, and the fade setting can change without the camera moving.
-  useLayoutEffect(() => {
-    if (lastCamera.current) updateView(lastCamera.current);
-    invalidate();
-  }, [updateView, invalidate, surfaces]);
+  const { walls, ceiling, updateView } = useWallFade(parts, fadeNearWalls, materials, host, invalidate, surfaces);
 
   if (!parts) return <RenderAndReport host={host} />;
   return (
     <>
-      <SceneLights bounds={parts.bounds} />
+      <SceneLights bounds={parts.bounds} windows={windows} />
       <RoomShellMeshes parts={parts} materials={materials} wallsRef={walls} ceilingRef={ceiling} surfaces={surfaces} onSurfaceClick={onSurfaceClick} />
       <RoomPieces pieceScene={pieceScene} pieces={pieces} selectedPieceId={selectedPieceId} materials={materials} onPieceClick={onPieceClick} />
       <OverviewControls bounds={parts.bounds} onView={updateView} />
       <RenderAndReport host={host} />
     </>
   );
-}
-
-function updateWallFade(
-  parts: ShellParts,
-  camera: THREE.Camera,
-  fadeNearWalls: boolean,
-  walls: THREE.Group | null,
-  ceiling: THREE.Mesh | null,
-  materials: SceneMaterials,
-  host: HTMLElement | null,
-): void {
-  const { min, max } = parts.bounds;
-  const centre: [number, number, number] = [(min[0] + max[0]) / 2, (min[1] + max[1]) / 2, (min[2] + max[2]) / 2];
-  const eye: [number, number, number] = [camera.position.x, camera.position.y, camera.position.z];
-  const faded = fadeNearWalls ? wallsFacingEye(parts.walls, eye, centre) : [];
-  if (walls) applyWallFade(walls, new Set(faded), materials);
-  // Seen from above the ceiling faces away and only costs a draw call; from below it closes the room.
-  if (ceiling) ceiling.visible = eye[1] < max[1];
-  if (host) host.dataset.fadedWalls = faded.join(',');
-}
-
-// Takes over drawing (a frame callback with priority above zero) so renderer.info can be read
-// right after the frame it describes, and publishes it on the host for browser tests.
-function RenderAndReport({ host }: { host: React.RefObject<HTMLDivElement | null> }) {
-  const frames = useRef(0);
-  useFrame(({ gl, scene, camera }) => {
-    gl.render(scene, camera);
-    frames.current += 1;
-    const element = host.current;
-    if (!element) return;
-    element.dataset.drawCalls = String(gl.info.render.calls);
-    element.dataset.triangles = String(gl.info.render.triangles);
-    element.dataset.geometries = String(gl.info.memory.geometries);
-    element.dataset.textures = String(gl.info.memory.textures);
-    element.dataset.frames = String(frames.current);
-  }, 1);
-  return null;
 }

@@ -1,10 +1,12 @@
 import { useLayoutEffect, useMemo, useRef } from 'react';
 import * as THREE from 'three';
+import { RectAreaLightUniformsLib } from 'three/examples/jsm/lights/RectAreaLightUniformsLib.js';
 import type { Bounds3 } from '../../shared/geometry/scene';
+import type { WindowLightRect } from './window-lights';
 
 // Soft daylight without an environment map (nothing is fetched): sky and floor bounce from a
-// hemisphere, one sun for the shadows under the pieces, and a weak warm fill so the sides the sun
-// misses do not go grey.
+// hemisphere, one sun for the shadows under the pieces, a weak warm fill so the sides the sun
+// misses do not go grey, and a soft rectangle of sky light in every window shining into the room.
 
 /**
  * Towards the sun from the room centre: about 50° up and from the front-left of the plan, so the
@@ -22,12 +24,29 @@ const FILL = { colour: '#ffeedd', intensity: 0.6 } as const;
 export const SHADOW_MAP_SIZE = 2048;
 /** How much the shadow filter blurs (texels): soft edges like an overcast room, not a spotlight. */
 const SHADOW_SOFTNESS = 3;
+/**
+ * Daylight through a window: a cool-white sky colour, bright enough to wash the floor and the
+ * walls beside the window without burning them out (chosen by eye against the paint swatches).
+ */
+const WINDOW_LIGHT = { colour: '#f4f7ff', intensity: 2.2 } as const;
+
+let areaLightsReady = false;
+// The area lights' lookup tables are built in code (nothing fetched), once per page.
+function prepareAreaLights(): void {
+  if (areaLightsReady) return;
+  RectAreaLightUniformsLib.init();
+  areaLightsReady = true;
+}
 
 interface SceneLightsProps {
   bounds: Bounds3;
+  /** One soft daylight rectangle per window; none by default. */
+  windows?: readonly WindowLightRect[];
+  /** The sun draws a shadow map (default); a view with baked floor shadows turns it off. */
+  sunShadows?: boolean;
 }
 
-export function SceneLights({ bounds }: SceneLightsProps) {
+export function SceneLights({ bounds, windows = [], sunShadows = true }: SceneLightsProps) {
   const [cx, cy, cz, radius] = useMemo(() => {
     const size = bounds.max.map((max, axis) => max - bounds.min[axis]);
     return [
@@ -56,8 +75,12 @@ export function SceneLights({ bounds }: SceneLightsProps) {
   }, [radius]);
 
   const sunDistance = radius * 3;
+  if (windows.length > 0) prepareAreaLights();
   return (
     <>
+      {windows.map((w) => (
+        <WindowLight key={w.openingId} rect={w} />
+      ))}
       <hemisphereLight args={[SKY.sky, SKY.ground, SKY.intensity]} />
       <primitive object={target} position={[cx, 0, cz]} />
       <directionalLight
@@ -66,7 +89,7 @@ export function SceneLights({ bounds }: SceneLightsProps) {
         intensity={SUN.intensity}
         position={[cx + SUN_DIRECTION.x * sunDistance, cy + SUN_DIRECTION.y * sunDistance, cz + SUN_DIRECTION.z * sunDistance]}
         target={target}
-        castShadow
+        castShadow={sunShadows}
         shadow-mapSize={[SHADOW_MAP_SIZE, SHADOW_MAP_SIZE]}
         shadow-radius={SHADOW_SOFTNESS}
         shadow-bias={-0.0004}
@@ -80,4 +103,15 @@ export function SceneLights({ bounds }: SceneLightsProps) {
       />
     </>
   );
+}
+
+function WindowLight({ rect }: { rect: WindowLightRect }) {
+  const light = useRef<THREE.RectAreaLight>(null);
+  const [x, y, z] = rect.centre;
+  const [ix, , iz] = rect.inward;
+  // An area light shines along its own −z: aim it at a point just inside the room, level with it.
+  useLayoutEffect(() => {
+    light.current?.lookAt(x + ix, y, z + iz);
+  }, [x, y, z, ix, iz]);
+  return <rectAreaLight ref={light} args={[WINDOW_LIGHT.colour, WINDOW_LIGHT.intensity, rect.widthM, rect.heightM]} position={[x, y, z]} />;
 }

@@ -1,19 +1,42 @@
-import { lazy, Suspense, useEffect, useRef, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ClientRoom } from '../../../../shared/schemas/presentation';
+import { CameraLink } from '../../../scene/camera-link';
+import type { TextureProgress, ViewCommands, ViewMode } from '../../../scene/walkthrough-view';
 import { Button } from '../../../components/ui/button';
 import { markLookedAt } from '../api/presentation';
 import { ChooseDialog } from './choose-dialog';
 import { PieceCard } from './piece-card';
+import { EYE_HEIGHT, KeyHelp, LoadingBar, OverviewButtons, ViewModeBar, WalkButtons } from './view-controls';
 import { momentText, pieceName, SAFETY_LINE } from './wording';
 
 // three.js is most of the page's weight: it loads after the page itself has appeared.
-const RoomView = lazy(() => import('../../../scene/room-view'));
+const WalkthroughView = lazy(() => import('../../../scene/walkthrough-view'));
 
 /** Typing in a field must not switch options. */
 const isTyping = (target: EventTarget | null) =>
   target instanceof HTMLElement && (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName));
 
-/** One room: the Overview in 3D, its options (one click or keys 1–9), the pieces, and the choice. */
+const REDUCED_MOTION = '(prefers-reduced-motion: reduce)';
+
+/** The client's wish for less motion, followed live. */
+function usePrefersReducedMotion(): boolean {
+  const [reduced, setReduced] = useState(() => typeof window !== 'undefined' && window.matchMedia?.(REDUCED_MOTION).matches === true);
+  useEffect(() => {
+    const query = window.matchMedia?.(REDUCED_MOTION);
+    if (!query) return undefined;
+    const onChange = () => setReduced(query.matches);
+    query.addEventListener('change', onChange);
+    return () => query.removeEventListener('change', onChange);
+  }, []);
+  return reduced;
+}
+
+const NO_PROGRESS: TextureProgress = { settled: 0, total: 0 };
+
+/**
+ * One room: the walk-through in 3D (Overview or Walk, one option or two side by side), its options
+ * (one click or keys 1–9, the camera staying where it is), the pieces, and the choice.
+ */
 export function RoomStage({ token, room, studioName, showPrices, decided, nextRoom, onGoTo }: {
   token: string;
   room: ClientRoom;
@@ -29,6 +52,16 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
   const piece = option.pieces.find((p) => p.id === pieceId) ?? null;
   const [choosing, setChoosing] = useState(false);
   const chosen = room.options.find((o) => o.id === room.choice?.optionId) ?? null;
+  const [mode, setMode] = useState<ViewMode>('overview');
+  const [compare, setCompare] = useState(false);
+  const [compareId, setCompareId] = useState<string | null>(null);
+  const [eyeHeightMm, setEyeHeightMm] = useState<number>(EYE_HEIGHT.defaultMm);
+  const [help, setHelp] = useState(false);
+  const [progress, setProgress] = useState<TextureProgress>(NO_PROGRESS);
+  const reducedMotion = usePrefersReducedMotion();
+  // One link per room: the views of a comparison move together, and a view opened later starts where the others are.
+  const [link] = useState(() => new CameraLink());
+  const commands = useRef<ViewCommands>(null);
 
   const show = (id: string) => {
     setOptionId(id);
@@ -44,6 +77,9 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
   }, [token, option.id]);
 
   const options = room.options;
+  const others = options.filter((o) => o.id !== option.id);
+  const compared = others.find((o) => o.id === compareId) ?? others[0] ?? null;
+  const comparing = compare && compared !== null;
   useEffect(() => {
     if (choosing) return;
     const onKey = (e: KeyboardEvent) => {
@@ -53,40 +89,87 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
         e.preventDefault();
         setOptionId(options[n - 1].id);
         setPieceId(null);
+      } else if (e.key === '?') {
+        e.preventDefault();
+        setHelp((h) => !h);
       }
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
   }, [choosing, options]);
 
+  // Every option of the room goes to the view at once: it builds each one once and keeps it.
+  const viewOptions = useMemo(() => options.map((o) => ({ id: o.id, pieces: o.pieces, finishes: o.surfaces })), [options]);
+  const closeHelp = useCallback(() => setHelp(false), []);
+
   const isChosen = chosen?.id === option.id;
+  const chip = 'pointer-events-none absolute top-3 left-3 max-w-[calc(100%-1.5rem)] truncate rounded-full bg-white/90 px-3 py-1 text-sm font-semibold shadow-sm';
+  const viewProps = { shell: room.shell, options: viewOptions, mode, eyeHeightMm, reducedMotion, link } as const;
   return (
-    <div className="mx-auto grid max-w-7xl gap-6 px-6 py-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
-      <section aria-labelledby="room-title" className="flex min-w-0 flex-col gap-3">
-        <div className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
-          <h1 id="room-title" className="text-2xl font-bold tracking-tight">{room.name}</h1>
-          <p className="text-sm text-ink-soft">Option {options.indexOf(option) + 1} of {options.length}</p>
+    <div className="mx-auto flex max-w-[100rem] flex-col gap-4 px-4 py-4 sm:px-6 lg:h-[calc(100dvh-4.25rem)] lg:flex-row">
+      <section aria-labelledby="room-title" className="flex min-h-0 min-w-0 flex-1 flex-col gap-2">
+        <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-2">
+          <div className="flex min-w-0 items-baseline gap-3">
+            <h1 id="room-title" className="truncate text-2xl font-bold tracking-tight">{room.name}</h1>
+            <p className="shrink-0 text-sm text-ink-soft">Option {options.indexOf(option) + 1} of {options.length}</p>
+          </div>
+          <ViewModeBar mode={mode} onMode={setMode} compare={comparing} onCompare={setCompare} canCompare={others.length > 0} onHelp={() => setHelp((h) => !h)} />
         </div>
-        <div className="relative h-[min(50vh,26rem)] min-h-72 overflow-hidden lg:h-[min(64vh,42rem)] rounded-2xl border border-line bg-sand">
+        <div className="relative min-h-[22rem] flex-1 overflow-hidden rounded-2xl border border-line bg-sand max-lg:h-[min(62vh,34rem)]">
           <Suspense fallback={<div className="flex h-full items-center justify-center text-ink-soft" role="status">Setting up the 3D view…</div>}>
-            <RoomView
-              shell={room.shell}
-              pieces={option.pieces}
-              selectedPieceId={pieceId}
-              onPieceClick={setPieceId}
-              label={`${room.name}, ${option.label}, in 3D`}
-            />
+            <div className={`grid h-full gap-px bg-line ${comparing ? 'grid-cols-2' : 'grid-cols-1'}`}>
+              <div className="relative min-w-0 bg-sand">
+                <WalkthroughView
+                  {...viewProps}
+                  optionId={option.id}
+                  viewId="main"
+                  selectedPieceId={pieceId}
+                  onPieceClick={setPieceId}
+                  commandsRef={commands}
+                  onTextureProgress={setProgress}
+                  label={`${room.name}, ${option.label}, in 3D`}
+                />
+                <div className={chip}>{option.label}</div>
+              </div>
+              {comparing && compared && (
+                <div className="relative min-w-0 bg-sand">
+                  <WalkthroughView {...viewProps} optionId={compared.id} viewId="compare" label={`${room.name}, ${compared.label}, in 3D, side by side`} />
+                  <div className={chip}>{compared.label}</div>
+                </div>
+              )}
+            </div>
           </Suspense>
-          <div className="pointer-events-none absolute top-3 left-3 rounded-full bg-white/90 px-3 py-1 text-sm font-semibold shadow-sm">{option.label}</div>
+          <LoadingBar progress={progress} />
+          <div className="absolute bottom-3 left-3 z-10">
+            {mode === 'overview' ? (
+              <OverviewButtons commands={commands} />
+            ) : (
+              <WalkButtons commands={commands} eyeHeightMm={eyeHeightMm} onEyeHeight={setEyeHeightMm} />
+            )}
+          </div>
+          {comparing && others.length > 1 && (
+            <label className="absolute right-3 bottom-3 z-10 flex items-center gap-2 rounded-xl bg-white/95 px-3 py-2 text-sm font-semibold shadow-sm ring-1 ring-line-strong/70">
+              Side by side with
+              <select value={compared?.id} onChange={(e) => setCompareId(e.target.value)} className="rounded-md border border-line-strong bg-white px-2 py-1 font-normal">
+                {others.map((o) => <option key={o.id} value={o.id}>{o.label}</option>)}
+              </select>
+            </label>
+          )}
+          {help && <KeyHelp mode={mode} optionCount={options.length} onClose={closeHelp} />}
         </div>
         <p className="text-sm text-ink-soft">
-          Drag to turn the room · scroll or pinch to come closer · tap a piece to see what it is
+          {mode === 'overview' ? (
+            <>Drag to turn the room · scroll or pinch to come closer · tap a piece to see what it is</>
+          ) : (
+            <>Click the picture, then walk with W A S D or the arrow keys · drag to look round · click the floor to walk there</>
+          )}
           {options.length > 1 && <> · keys 1–{options.length} switch options</>}
+          {comparing && <> · the two views move together</>}
         </p>
         <p className="text-sm text-ink-faint">{SAFETY_LINE}</p>
       </section>
 
-      <aside className="flex flex-col gap-4" aria-label="Options and your choice">
+      <aside className="flex shrink-0 flex-col gap-4 lg:w-[22rem] lg:overflow-y-auto lg:pb-2" aria-label="Options and your choice">
         <section aria-labelledby="options-title" className="rounded-2xl border border-line bg-white p-5">
           <h2 id="options-title" className="font-bold">{options.length === 1 ? 'The option' : `${options.length} options for this room`}</h2>
           <div role="group" aria-label="Options" className="mt-3 flex flex-col gap-2">

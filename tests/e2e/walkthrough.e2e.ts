@@ -1,0 +1,475 @@
+// The client's walk-through in a real browser with software WebGL: the demo flat (its plans,
+// finishes and options, made through the API as the seed makes them) opened from its link, the
+// Overview and its buttons, Walk with keys (walls stop, a door lets through), options switched
+// with the camera kept, Compare with linked cameras, and the frame budget of a typical room.
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
+import { launchBrowser } from './lib/browser';
+import { newPage, signUpThroughForm } from './lib/session';
+import { greyStoneTile, linenWeave, oakBoards, rawToPng, sprigWallpaper, type RawImage } from '../../server/services/images/generate';
+
+const root = resolve(import.meta.dirname, '../..');
+const shots = join(root, '.test-output', 'walkthrough');
+const plan = (file: string) => JSON.parse(readFileSync(join(root, 'assets/plans', file), 'utf8'));
+
+/** Draw calls and texture memory a typical room (8 walls, 6 openings, 40 pieces) must stay under. */
+const MAX_DRAW_CALLS = 60;
+const MAX_TEXTURE_BYTES = 64 * 1024 * 1024;
+/** Triangles of a typical room: 40 boxes of 12, the shell, the frames; far above means something is drawn twice. */
+const MAX_TRIANGLES = 4000;
+const BODY_RADIUS_M = 0.25;
+const SWITCHES = 50;
+
+let browser: Browser;
+let designer: { context: BrowserContext; page: Page };
+const figures: Record<string, number | string> = {};
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  mkdirSync(shots, { recursive: true });
+  designer = await newPage(browser);
+  await signUpThroughForm(designer.page, 'Wren Lane Interiors', 'Ida Designer');
+});
+afterAll(async () => {
+  writeFileSync(join(shots, 'figures.json'), JSON.stringify(figures, null, 2));
+  await designer?.context.close();
+  await browser?.close();
+});
+
+interface DemoPhoto { name: string; category: string; repeatWidthMm: number; repeatHeightMm: number; draw: () => RawImage | Promise<RawImage> }
+// The demo library's drawings and real sizes (server/cli/seed-finishes.ts), uploaded as a designer would.
+const PHOTOS: DemoPhoto[] = [
+  { name: 'Oak boards, natural oil', category: 'wood', repeatWidthMm: 720, repeatHeightMm: 1440, draw: () => oakBoards() },
+  { name: 'Grey stone tile', category: 'tile', repeatWidthMm: 600, repeatHeightMm: 600, draw: () => greyStoneTile() },
+  { name: 'Washed linen', category: 'fabric', repeatWidthMm: 100, repeatHeightMm: 100, draw: () => linenWeave() },
+  { name: 'Sprig wallpaper', category: 'wallpaper', repeatWidthMm: 265, repeatHeightMm: 265, draw: () => sprigWallpaper() },
+];
+const PAINTS = [
+  { name: 'Morning oat', colourHex: '#e6dcc8', sheen: 'matt' },
+  { name: 'Sage hall', colourHex: '#a3ad94', sheen: 'eggshell' },
+  { name: 'Deep harbour', colourHex: '#2f4858', sheen: 'satin' },
+];
+
+async function call<T>(page: Page, path: string, method: string, body?: object): Promise<T> {
+  return page.evaluate(async ({ path, method, body }) => {
+    const res = await fetch(path, { method, headers: body ? { 'content-type': 'application/json' } : {}, body: body ? JSON.stringify(body) : undefined });
+    if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
+    return res.status === 204 ? null : res.json();
+  }, { path, method, body }) as Promise<T>;
+}
+
+/** The studio's finishes by name: the demo photos (uploaded and processed) and paints. */
+async function demoFinishes(page: Page): Promise<Record<string, string>> {
+  const ids: Record<string, string> = {};
+  for (const p of PAINTS) ids[p.name] = (await call<{ finish: { id: string } }>(page, '/api/finishes/paints', 'POST', p)).finish.id;
+  for (const photo of PHOTOS) {
+    const b64 = (await rawToPng(await photo.draw())).toString('base64');
+    const id = await page.evaluate(async ({ b64, photo }) => {
+      const form = new FormData();
+      form.append('photos', new Blob([Uint8Array.from(atob(b64), (c) => c.charCodeAt(0))], { type: 'image/png' }), `${photo.name}.png`);
+      form.append('category', photo.category);
+      form.append('repeatWidthMm', String(photo.repeatWidthMm));
+      form.append('repeatHeightMm', String(photo.repeatHeightMm));
+      const made = await (await fetch('/api/finishes/photos', { method: 'POST', body: form })).json();
+      const finishId = made.finishes[0].id as string;
+      await fetch(`/api/finishes/${finishId}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: photo.name }) });
+      return finishId;
+    }, { b64, photo: { name: photo.name, category: photo.category, repeatWidthMm: photo.repeatWidthMm, repeatHeightMm: photo.repeatHeightMm } });
+    ids[photo.name] = id;
+  }
+  for (const photo of PHOTOS) {
+    await expect.poll(async () => (await call<{ finish: { status: string } }>(page, `/api/finishes/${ids[photo.name]}`, 'GET')).finish.status, { timeout: 60_000 }).toBe('ready');
+  }
+  return ids;
+}
+
+interface Made { room: { id: string }; options: { id: string; version: number }[] }
+type Piece = { id: string; x: number; y: number; rotation?: number; placed?: boolean; finishId?: string };
+
+/** A room from a plan file with a second option, each option wearing its finishes (as the demo seed does). */
+async function roomFromPlan(page: Page, projectId: string, file: string, a: { name: string; finishes: object; pieceFinishes: Record<string, string> }, b: { name: string; note: string; finishes: object; pieceFinishes: Record<string, string>; change: (p: Piece) => Piece }) {
+  const planFile = plan(file);
+  const made = await call<Made>(page, `/api/projects/${projectId}/rooms/import`, 'POST', planFile);
+  const second = await call<{ option: { id: string; version: number } }>(page, `/api/rooms/${made.room.id}/options`, 'POST', { name: b.name });
+  const dress = (pieces: Piece[], finishes: Record<string, string>) => pieces.map((p) => (finishes[p.id] ? { ...p, finishId: finishes[p.id] } : p));
+  const pieces = planFile.option.pieces as Piece[];
+  await call(page, `/api/options/${made.options[0].id}`, 'PUT', { name: a.name, doc: { pieces: dress(pieces, a.pieceFinishes), finishes: a.finishes }, version: made.options[0].version });
+  await call(page, `/api/options/${second.option.id}`, 'PUT', { name: b.name, note: b.note, doc: { pieces: dress(pieces.map(b.change), b.pieceFinishes), finishes: b.finishes }, version: second.option.version });
+  return { roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] };
+}
+
+/** The Canal Row flat as the demo seed makes it, presented; returns the client's link. */
+async function demoPresentation(page: Page): Promise<string> {
+  const f = await demoFinishes(page);
+  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Canal Row flat', newClient: { name: 'The Harrow-Okonjo household' } });
+  const living = await roomFromPlan(page, project.id, 'l-shaped-living-room.json',
+    { name: 'Sofa by the wall', finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { sofa: f['Washed linen'] } },
+    {
+      name: 'Conversation corner', note: 'The sofa faces the front window; the client’s armchairs sit opposite.',
+      finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } }, pieceFinishes: { sofa: f['Washed linen'] },
+      change: (p) => {
+        if (p.id === 'sofa') return { ...p, x: 2000, y: 650, rotation: 0 };
+        if (p.id === 'coffee-table') return { ...p, x: 2000, y: 1650, rotation: 0 };
+        if (p.id === 'armchair') return { ...p, x: 1300, y: 2750, rotation: 180 };
+        if (p.id === 'old-armchair') return { ...p, placed: true, x: 2700, y: 2750, rotation: 180 };
+        return p;
+      },
+    });
+  const bedroom = await roomFromPlan(page, project.id, 'bedroom.json',
+    { name: 'Bed on the long wall', finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { bed: f['Washed linen'] } },
+    {
+      name: 'Bed under the window', note: 'The bed moves to the window wall; the wardrobe stays by the door.',
+      finishes: { floor: f['Grey stone tile'], walls: f['Morning oat'], wallOverrides: { '2': f['Sprig wallpaper'] } }, pieceFinishes: { bed: f['Washed linen'] },
+      change: (p) => {
+        if (p.id === 'bed') return { ...p, x: 1800, y: 1075, rotation: 0 };
+        if (p.id === 'bedside-left') return { ...p, x: 775, y: 250, rotation: 0 };
+        if (p.id === 'bedside-right') return { ...p, x: 2825, y: 250, rotation: 0 };
+        if (p.id === 'chest') return { ...p, x: 3375, y: 1500, rotation: 90 };
+        return p;
+      },
+    });
+  return present(page, project.id, [living, bedroom]);
+}
+
+async function present(page: Page, projectId: string, rooms: { roomId: string; optionIds: string[] }[]): Promise<string> {
+  const made = await call<{ presentation: { link: string } }>(page, `/api/projects/${projectId}/presentations`, 'POST', { rooms, message: 'Two ideas for each room.' });
+  return new URL(made.presentation.link).pathname;
+}
+
+const box = (id: string, x: number, y: number, w: number, d: number, h: number, extra: object = {}) => ({ id, name: id, x, y, width: w, depth: d, height: h, status: 'new', ...extra });
+
+/**
+ * A plain 4 × 3 m room with a door in the middle of its top wall (x 1590–2410 mm) and a window
+ * opposite; option A a table to the right, option B the table and a sideboard. Walking starts a
+ * step inside the door, facing the middle of the room (+z).
+ */
+async function testRoomPresentation(page: Page): Promise<string> {
+  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Test box', newClient: { name: 'T' } });
+  const shell = {
+    outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+    openings: [
+      { id: 'door', type: 'door', wall: 0, offset: 1590, width: 820, height: 2040, hinge: 'start', swing: 'in' },
+      { id: 'window', type: 'window', wall: 2, offset: 1200, width: 1600, height: 1300, sill: 850 },
+    ],
+  };
+  const made = await call<Made>(page, `/api/projects/${project.id}/rooms`, 'POST', { name: 'Box room', shell });
+  const second = await call<{ option: { id: string; version: number } }>(page, `/api/rooms/${made.room.id}/options`, 'POST', { name: 'With sideboard' });
+  await call(page, `/api/options/${made.options[0].id}`, 'PUT', { name: 'Table only', doc: { pieces: [box('table', 3000, 1500, 800, 800, 750)] }, version: made.options[0].version });
+  await call(page, `/api/options/${second.option.id}`, 'PUT', { doc: { pieces: [box('table', 3000, 1500, 800, 800, 750), box('sideboard', 3750, 1500, 1600, 450, 850, { rotation: 90 })] }, version: second.option.version });
+  return present(page, project.id, [{ roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] }]);
+}
+
+/** A typical room: 8 walls, 6 openings (3 windows, 2 doors, a passage), 40 pieces, a photo floor and a papered wall. */
+async function typicalRoomPresentation(page: Page, f: Record<string, string>): Promise<string> {
+  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Typical room', newClient: { name: 'T' } });
+  const shell = {
+    outline: [[0, 0], [6000, 0], [6000, 4000], [4500, 4000], [4500, 5500], [1500, 5500], [1500, 4500], [0, 4500]],
+    openings: [
+      { id: 'w1', type: 'window', wall: 0, offset: 800, width: 1500, height: 1300, sill: 850 },
+      { id: 'w2', type: 'window', wall: 0, offset: 3500, width: 1500, height: 1300, sill: 850 },
+      { id: 'w3', type: 'window', wall: 1, offset: 1000, width: 1800, height: 1300, sill: 850 },
+      { id: 'd1', type: 'door', wall: 4, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' },
+      { id: 'd2', type: 'door', wall: 7, offset: 1200, width: 820, height: 2040, hinge: 'end', swing: 'out' },
+      { id: 'p1', type: 'passage', wall: 2, offset: 300, width: 900, height: 2100 },
+    ],
+  };
+  const made = await call<Made>(page, `/api/projects/${project.id}/rooms`, 'POST', { name: 'Big room', shell });
+  const pieces = [];
+  for (let i = 0; i < 40; i++) pieces.push(box(`p${i}`, 700 + (i % 8) * 600, 700 + Math.floor(i / 8) * 650, 400, 350, 450 + (i % 5) * 100, i % 3 === 0 ? { finishId: f['Washed linen'] } : {}));
+  const doc = { pieces, finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'], wallOverrides: { '3': f['Sprig wallpaper'] } } };
+  await call(page, `/api/options/${made.options[0].id}`, 'PUT', { doc, version: made.options[0].version });
+  return present(page, project.id, [{ roomId: made.room.id, optionIds: [made.options[0].id] }]);
+}
+
+async function openClient(path: string, viewport = { width: 1280, height: 800 }): Promise<{ context: BrowserContext; page: Page; view: Locator }> {
+  const { context, page } = await newPage(browser);
+  await page.setViewportSize(viewport);
+  await page.goto(`${path}#room-1`);
+  const view = page.locator('[data-testid=room-view]').first();
+  await view.locator('canvas').waitFor({ timeout: 30_000 });
+  await expect.poll(async () => Number(await view.getAttribute('data-frames')), { timeout: 30_000 }).toBeGreaterThan(0);
+  return { context, page, view };
+}
+
+const cameraOf = async (view: Locator) => (await view.getAttribute('data-camera'))!.split(',').map(Number) as [number, number, number];
+const num = async (view: Locator, name: string) => Number(await view.getAttribute(`data-${name}`));
+
+/**
+ * Waits until the view has finished moving (data-moving is set the moment a move starts and
+ * cleared by the frame that ends it) and has drawn since, or a while has passed with nothing to
+ * draw; returns its camera.
+ */
+async function settledCamera(page: Page, view: Locator): Promise<[number, number, number]> {
+  const f0 = await num(view, 'frames');
+  const start = Date.now();
+  for (;;) {
+    await page.waitForTimeout(150);
+    const idle = (await view.getAttribute('data-moving')) !== 'true';
+    if (idle && ((await num(view, 'frames')) > f0 || Date.now() - start > 1500)) return cameraOf(view);
+    if (Date.now() - start > 60_000) throw new Error('the view never stopped moving');
+  }
+}
+
+/** Share of sampled canvas pixels that differ from the background colour: a blank canvas is 0. */
+async function drawnShare(view: Locator): Promise<number> {
+  return view.locator('canvas').evaluate((canvas: HTMLCanvasElement) => {
+    const copy = document.createElement('canvas');
+    copy.width = 64;
+    copy.height = 40;
+    const ctx = copy.getContext('2d')!;
+    ctx.drawImage(canvas, 0, 0, 64, 40);
+    const data = ctx.getImageData(0, 0, 64, 40).data;
+    let drawn = 0;
+    for (let i = 0; i < data.length; i += 4) if (Math.abs(data[i] - 0xf7) + Math.abs(data[i + 1] - 0xf3) + Math.abs(data[i + 2] - 0xec) > 24) drawn++;
+    return drawn / (data.length / 4);
+  });
+}
+
+/** Holds a key in the focused view until the camera stops while frames go on (or a time limit), then lets go. */
+async function holdKey(page: Page, view: Locator, key: string, maxMs: number): Promise<[number, number, number]> {
+  await view.focus();
+  await page.keyboard.down(key);
+  let last = await cameraOf(view);
+  let frames = await num(view, 'frames');
+  const start = Date.now();
+  while (Date.now() - start < maxMs) {
+    await page.waitForTimeout(400);
+    const nextFrames = await num(view, 'frames');
+    // Held keys draw a frame after frame; only frames that moved nothing mean the walker is stopped.
+    if (nextFrames < frames + 2) continue;
+    const next = await cameraOf(view);
+    if (next.every((v, k) => Math.abs(v - last[k]) < 1e-4)) break;
+    last = next;
+    frames = nextFrames;
+  }
+  await page.keyboard.up(key);
+  return settledCamera(page, view);
+}
+
+describe('the walk-through', () => {
+  let demoLink: string;
+
+  it('opens the demo presentation: the Overview draws at once in flat colours, then the photo finishes arrive', async () => {
+    demoLink = await demoPresentation(designer.page);
+    const { context, page, view } = await openClient(demoLink);
+    await page.screenshot({ path: join(shots, 'overview-first-frame.png') });
+    expect(await drawnShare(view)).toBeGreaterThan(0.15);
+    expect(await view.getAttribute('data-mode')).toBe('overview');
+    const firstView = await page.evaluate(() => performance.getEntriesByName('parlour:first-view')[0]?.startTime ?? -1);
+    expect(firstView).toBeGreaterThan(0);
+    figures.firstViewMs = Math.round(firstView);
+    // The textures arrive after: the oak floor and the linen (pieces wear its colour) load through the link.
+    await expect.poll(() => num(view, 'texture-bytes'), { timeout: 20_000 }).toBeGreaterThan(0);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    figures.demoTextureBytes = await num(view, 'texture-bytes');
+    figures.demoDrawCalls = await num(view, 'draw-calls');
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'overview.png') });
+
+    // The on-screen buttons do what dragging does.
+    const before = await cameraOf(view);
+    await page.getByRole('button', { name: 'Turn the room right' }).click();
+    const turned = await settledCamera(page, view);
+    expect(Math.hypot(turned[0] - before[0], turned[2] - before[2])).toBeGreaterThan(0.5);
+    expect(turned[1]).toBeCloseTo(before[1], 2);
+    await page.getByRole('button', { name: 'Look from above' }).click();
+    const top = await settledCamera(page, view);
+    expect(top[1]).toBeGreaterThan(before[1]);
+    await page.screenshot({ path: join(shots, 'overview-above.png') });
+    await page.getByRole('button', { name: 'Back to the first view' }).click();
+    const back = await settledCamera(page, view);
+    back.forEach((v, k) => expect(v).toBeCloseTo(before[k], 2));
+
+    // With less motion asked for, a button jumps: the first frame after the press is already the end.
+    const calm = await browser.newContext({ baseURL: inject('baseUrl'), viewport: { width: 1280, height: 800 }, reducedMotion: 'reduce' });
+    const calmPage = await calm.newPage();
+    await calmPage.goto(`${demoLink}#room-1`);
+    const calmView = calmPage.locator('[data-testid=room-view]');
+    await expect.poll(() => num(calmView, 'frames'), { timeout: 30_000 }).toBeGreaterThan(0);
+    const calmStart = await settledCamera(calmPage, calmView);
+    const f0 = await num(calmView, 'frames');
+    await calmPage.getByRole('button', { name: 'Turn the room left' }).click();
+    await expect.poll(() => num(calmView, 'frames')).toBeGreaterThan(f0);
+    const firstFrame = await cameraOf(calmView);
+    expect(await settledCamera(calmPage, calmView)).toEqual(firstFrame);
+    expect(firstFrame).not.toEqual(calmStart);
+    await calm.close();
+
+    // A tablet held upright: the view above, the options below, the key help over the view.
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await page.getByRole('button', { name: 'Keys' }).click();
+    await page.getByRole('dialog', { name: 'Keys' }).waitFor();
+    await settledCamera(page, view);
+    await page.screenshot({ path: join(shots, 'tablet-keys.png') });
+    await page.keyboard.press('Escape');
+    await expect.poll(() => page.getByRole('dialog', { name: 'Keys' }).count()).toBe(0);
+    await context.close();
+  });
+
+  it('walks with the keys: walls stop it, the door lets it through, and only while the view has focus', async () => {
+    const link = await testRoomPresentation(designer.page);
+    const { context, page, view } = await openClient(link);
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await expect.poll(() => view.getAttribute('data-mode')).toBe('walk');
+    const start = await settledCamera(page, view);
+    // A step inside the door (x 2 m), at eye height.
+    expect(start[0]).toBeCloseTo(2, 2);
+    expect(start[1]).toBeCloseTo(1.6, 3);
+    expect(start[2]).toBeGreaterThan(0.5);
+
+    // Keys do nothing while the view does not have focus.
+    await page.getByRole('heading', { name: 'Box room' }).click();
+    await page.keyboard.down('KeyW');
+    await page.waitForTimeout(500);
+    await page.keyboard.up('KeyW');
+    expect(await cameraOf(view)).toEqual(start);
+
+    // Forward into the room until the far wall (z = 3 m) stops it one body radius short.
+    const atWall = await holdKey(page, view, 'KeyW', 30_000);
+    expect(atWall[2]).toBeLessThanOrEqual(3 - BODY_RADIUS_M + 1e-3);
+    expect(atWall[2]).toBeGreaterThan(3 - BODY_RADIUS_M - 0.05);
+    expect(atWall[0]).toBeCloseTo(start[0], 2);
+    await page.screenshot({ path: join(shots, 'walk-at-window.png') });
+
+    // Back the whole way: out through the door into the threshold past the wall's outer face (z −0.1 m).
+    const outside = await holdKey(page, view, 'ArrowDown', 40_000);
+    expect(outside[2]).toBeLessThan(-0.1);
+    expect(outside[2]).toBeGreaterThan(-0.1 - 0.6);
+    await page.screenshot({ path: join(shots, 'walk-doorway.png') });
+
+    // In the doorway, stepping sideways is stopped by the reveals (x 1.59 and 2.41 m) a body radius away.
+    const sideways = await holdKey(page, view, 'KeyD', 10_000);
+    expect(sideways[0]).toBeCloseTo(1.59 + BODY_RADIUS_M, 2);
+    const otherWay = await holdKey(page, view, 'KeyA', 10_000);
+    expect(otherWay[0]).toBeCloseTo(2.41 - BODY_RADIUS_M, 2);
+
+    // A click on the floor ahead walks there in a straight line (clear of the open door leaf at x 1.59–1.63 m).
+    const b = (await view.boundingBox())!;
+    await page.mouse.click(b.x + b.width / 2, b.y + b.height * 0.97);
+    const walkedTo = await settledCamera(page, view);
+    expect(walkedTo[2]).toBeGreaterThan(otherWay[2] + 1.5);
+    expect(walkedTo[0]).toBeCloseTo(otherWay[0], 1);
+    await page.screenshot({ path: join(shots, 'walk-clicked.png') });
+
+    // The on-screen arrows do the same as the keys: "Walk back" held walks back.
+    const back = page.getByRole('button', { name: 'Walk back' });
+    const bb = (await back.boundingBox())!;
+    await page.mouse.move(bb.x + bb.width / 2, bb.y + bb.height / 2);
+    await page.mouse.down();
+    await page.waitForTimeout(1500);
+    await page.mouse.up();
+    const backed = await settledCamera(page, view);
+    expect(backed[2]).toBeLessThan(walkedTo[2] - 0.2);
+
+    const fps = await measureFps(page, view);
+    figures.walkFps = fps;
+    await context.close();
+  });
+
+  it('switches options keeping the camera exactly where it is, and memory does not grow over 50 switches', async () => {
+    const link = await testRoomPresentation(designer.page);
+    const { context, page, view } = await openClient(link);
+    await page.getByRole('button', { name: 'Come closer' }).click();
+    const camera = await settledCamera(page, view);
+    const trianglesA = await num(view, 'triangles');
+    await page.keyboard.press('2');
+    await expect.poll(() => view.getAttribute('data-option')).not.toBe(null);
+    await expect.poll(() => num(view, 'triangles')).toBeGreaterThan(trianglesA);
+    expect(await cameraOf(view)).toEqual(camera);
+    await page.getByRole('group', { name: 'Options' }).getByRole('button', { name: /Option A/ }).click();
+    await expect.poll(() => num(view, 'triangles')).toBe(trianglesA);
+    expect(await cameraOf(view)).toEqual(camera);
+
+    // A first round loads everything; after it, switching back and forth adds nothing on the GPU.
+    const frames = () => num(view, 'frames');
+    const switchTo = async (key: string) => {
+      const f = await frames();
+      await page.keyboard.press(key);
+      await expect.poll(frames).toBeGreaterThan(f);
+    };
+    await switchTo('2');
+    await switchTo('1');
+    const before = { geometries: await num(view, 'geometries'), textures: await num(view, 'textures') };
+    const t0 = Date.now();
+    for (let i = 0; i < SWITCHES; i++) await switchTo(i % 2 === 0 ? '2' : '1');
+    figures.switchMs = Math.round((Date.now() - t0) / SWITCHES);
+    const after = { geometries: await num(view, 'geometries'), textures: await num(view, 'textures') };
+    expect(after.geometries).toBeLessThanOrEqual(before.geometries);
+    expect(after.textures).toBeLessThanOrEqual(before.textures);
+    expect(await cameraOf(view)).toEqual(camera);
+    await context.close();
+  });
+
+  it('compares two options side by side with linked cameras, in the Overview and in Walk', async () => {
+    const { context, page } = await openClient(demoLink);
+    await page.getByRole('button', { name: 'Compare' }).click();
+    const views = page.locator('[data-testid=room-view]');
+    await expect.poll(() => views.count()).toBe(2);
+    const [left, right] = [views.nth(0), views.nth(1)];
+    await expect.poll(async () => num(right, 'frames'), { timeout: 20_000 }).toBeGreaterThan(0);
+    expect(await page.locator('canvas').count()).toBe(2);
+    expect(await left.getAttribute('data-option')).not.toBe(await right.getAttribute('data-option'));
+    expect(await settledCamera(page, right)).toEqual(await settledCamera(page, left));
+
+    // Dragging the left turns both.
+    const b = (await left.boundingBox())!;
+    await page.mouse.move(b.x + b.width * 0.5, b.y + b.height * 0.5);
+    await page.mouse.down();
+    await page.mouse.move(b.x + b.width * 0.3, b.y + b.height * 0.45, { steps: 8 });
+    await page.mouse.up();
+    const dragged = await settledCamera(page, left);
+    expect(await settledCamera(page, right)).toEqual(dragged);
+    expect(await drawnShare(right)).toBeGreaterThan(0.15);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'compare.png') });
+
+    // In Walk, keys in one view walk both.
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    const walkStart = await settledCamera(page, left);
+    expect(await settledCamera(page, right)).toEqual(walkStart);
+    const walked = await holdKey(page, right, 'KeyW', 1200);
+    expect(walked).not.toEqual(walkStart);
+    expect(await settledCamera(page, left)).toEqual(walked);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'compare-walk.png') });
+    await context.close();
+  });
+
+  it('draws a typical room (8 walls, 6 openings, 40 pieces) within the frame budget', async () => {
+    const finishes = Object.fromEntries((await call<{ finishes: { id: string; name: string }[] }>(designer.page, '/api/finishes', 'GET')).finishes.map((f) => [f.name, f.id]));
+    const link = await typicalRoomPresentation(designer.page, finishes);
+    const { context, page, view } = await openClient(link);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    await page.getByRole('button', { name: 'Turn the room left' }).click();
+    await settledCamera(page, view);
+    const overview = { drawCalls: await num(view, 'draw-calls'), triangles: await num(view, 'triangles'), textureBytes: await num(view, 'texture-bytes') };
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await settledCamera(page, view);
+    const walk = { drawCalls: await num(view, 'draw-calls'), triangles: await num(view, 'triangles') };
+    Object.assign(figures, { typicalOverviewDrawCalls: overview.drawCalls, typicalWalkDrawCalls: walk.drawCalls, typicalTriangles: overview.triangles, typicalTextureBytes: overview.textureBytes });
+    for (const d of [overview, walk]) {
+      expect(d.drawCalls).toBeGreaterThan(5);
+      expect(d.drawCalls).toBeLessThan(MAX_DRAW_CALLS);
+      expect(d.triangles).toBeLessThan(MAX_TRIANGLES);
+    }
+    expect(overview.textureBytes).toBeGreaterThan(0);
+    expect(overview.textureBytes).toBeLessThan(MAX_TEXTURE_BYTES);
+    figures.typicalFps = await measureFps(page, view);
+    await page.screenshot({ path: join(shots, 'typical-walk.png') });
+    await context.close();
+  });
+});
+
+/** Frames drawn per second while turning on the spot in Walk (software WebGL: a relative figure only). */
+async function measureFps(page: Page, view: Locator): Promise<number> {
+  await view.focus();
+  const f0 = await num(view, 'frames');
+  const t0 = Date.now();
+  await page.keyboard.down('ArrowLeft');
+  await page.waitForTimeout(3000);
+  await page.keyboard.up('ArrowLeft');
+  const fps = ((await num(view, 'frames')) - f0) / ((Date.now() - t0) / 1000);
+  return Math.round(fps * 10) / 10;
+}
