@@ -115,8 +115,9 @@ describe('take-off, schedules and comparison', () => {
     await counted.selectOption(made.optionA);
     const livingPaint = page.getByRole('table', { name: 'Paint in Living room' });
     await livingPaint.getByText('Deep harbour').waitFor();
-    // Wall 4 alone: 4 m × 2.6 m = 10.4 m² × 2 coats ÷ 10 m²/L = 2.08 L; 3 × 0.75 L = 2.25 L is the least above it.
-    expect(await livingPaint.getByRole('row', { name: /Deep harbour/ }).textContent()).toBe('Deep harbourWall 410.4 m²2.08 L3 × 0.75 L');
+    // Wall 4 alone: 4 m × 2.6 m = 10.4 m² × 2 coats ÷ 10 m²/L = 2.08 L; one 2.5 L tin leaves 0.42 L, less than
+    // the smallest tin (3 × 0.75 L would leave less paint but take three tins).
+    expect(await livingPaint.getByRole('row', { name: /Deep harbour/ }).textContent()).toBe('Deep harbourWall 410.4 m²2.08 L2.5 L');
 
     // Box size typed for the boards: 2.2 m² a box; living 20 m² + 10 % = 22 m² → 10 boxes.
     await page.getByLabel('m² per box or roll of Oak boards, natural oil').first().fill('2.2');
