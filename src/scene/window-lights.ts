@@ -1,4 +1,4 @@
-// Where daylight comes into a room: one soft rectangle of light per window, in the window's inside
+// Where daylight comes into a room: one light per window, in the middle of the window's inside
 // face, shining into the room. Scene metres, y up; pure so it can be tested without a renderer.
 import { placeShellOpenings } from '../../shared/geometry/openings';
 import { layoutShellWalls } from '../../shared/geometry/walls';

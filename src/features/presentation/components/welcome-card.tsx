@@ -9,8 +9,8 @@ export function WelcomeCard({ presentation, onOpenRoom }: { presentation: Client
   const { studioName, projectName, message, rooms, expiresAt, decided } = presentation;
   const next = rooms.find((r) => !r.choice) ?? rooms[0];
   const steps = [
-    { title: 'Look round', text: 'Each room is shown as a small model. Drag to turn it; scroll or pinch to come closer.' },
-    { title: 'Compare', text: 'Switch between the options with the buttons beside the model, or the number keys. Tap a piece to see what it is.' },
+    { title: 'Look round', text: 'Each room is shown as a small model. Drag to turn it; scroll or pinch to come closer. Choose Walk to stand in the room and walk through it.' },
+    { title: 'Compare', text: 'Switch between the options with the buttons beside the model or the number keys, or press Compare to see two side by side. Tap a piece to see what it is.' },
     { title: 'Choose', text: `Press “Choose this option” for the one you like. You can change your mind until ${studioName} confirms.` },
   ];
   return (
