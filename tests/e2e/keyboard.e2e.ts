@@ -1,6 +1,6 @@
 // Keyboard only: the designer signs in, opens the project and sends a presentation without the
-// mouse; the client opens the link and looks round every room and option, reads a piece's
-// details and chooses, with Tab, Enter, Space and the number keys alone.
+// mouse; the client opens the link, turns the room and walks in it, looks at every option, reads
+// a piece's details and chooses, with Tab, Enter, Space and the number keys alone.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from './lib/browser';
@@ -106,6 +106,24 @@ describe('keyboard only', () => {
     await tabTo(p, /^Start looking$/);
     await p.keyboard.press('Enter');
     await p.getByRole('heading', { name: 'Snug' }).waitFor();
+    // Look round the 3D view: the on-screen moves, then walking, each from the keyboard.
+    const view = p.locator('[data-testid=room-view][data-camera]');
+    await view.waitFor({ timeout: 30_000 });
+    const camera = () => view.getAttribute('data-camera');
+    const overviewStart = await camera();
+    await tabTo(p, /^Turn the room right$/);
+    await p.keyboard.press('Enter');
+    await expect.poll(camera, { timeout: 10_000 }).not.toBe(overviewStart);
+    await tabTo(p, /^Walk$/);
+    await p.keyboard.press('Enter');
+    await expect.poll(() => view.getAttribute('data-mode'), { timeout: 10_000 }).toBe('walk');
+    const walkStart = await camera();
+    await tabTo(p, /^Walk forward$/);
+    await p.keyboard.press('Enter');
+    await expect.poll(camera, { timeout: 10_000 }).not.toBe(walkStart);
+    await tabTo(p, /^Overview$/, 'Shift+Tab');
+    await p.keyboard.press('Enter');
+    await expect.poll(() => view.getAttribute('data-mode'), { timeout: 10_000 }).toBe('overview');
     const options = p.getByRole('group', { name: 'Options' });
     // The number keys switch options; Tab and Space reach them too.
     await p.keyboard.press('2');
