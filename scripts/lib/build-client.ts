@@ -3,7 +3,7 @@ import { existsSync, readdirSync, statSync, writeFileSync, readFileSync } from '
 import { join } from 'node:path';
 import { spawnSync } from 'node:child_process';
 
-const INPUTS = ['src', 'shared', 'assets', 'index.html', 'vite.config.ts', 'package-lock.json', 'public'];
+const INPUTS = ['src', 'shared', 'assets', 'index.html', 'vite.config.ts', 'package-lock.json'];
 
 function newestMtime(path: string): number {
   if (!existsSync(path)) return 0;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { typicalRoom } from '../../bench/typical-room';
+import { typicalRoom } from '../../scripts/bench/typical-room';
 import { optionDocSchema, type OptionDocInput } from '../schemas/option';
 import { roomShellSchema, type RoomShellInput } from '../schemas/room';
 import { buildRoomScene, meshBounds, sceneMeshes, type MeshData } from './scene';

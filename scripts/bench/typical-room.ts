@@ -1,5 +1,5 @@
-import { optionDocSchema, type OptionDoc } from '../shared/schemas/option';
-import { roomShellSchema, type RoomShell } from '../shared/schemas/room';
+import { optionDocSchema, type OptionDoc } from '../../shared/schemas/option';
+import { roomShellSchema, type RoomShell } from '../../shared/schemas/room';
 
 /**
  * A typical room for timing (invented): 8 walls with a splayed corner and a step, 6 openings and

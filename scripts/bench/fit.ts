@@ -1,14 +1,14 @@
-import { placedBoxes, type PieceBox } from '../shared/analysis/fit/boxes';
-import { findDoorSwings } from '../shared/analysis/fit/door-swing';
-import { findTooBigForDoor } from '../shared/analysis/fit/door-fit';
-import { checkFit } from '../shared/analysis/fit/index';
-import { findOutsideRoom } from '../shared/analysis/fit/outside-room';
-import { findOverlaps } from '../shared/analysis/fit/overlap';
-import { findWalkwayProblems } from '../shared/analysis/fit/walkway';
-import { findBlockedWindows } from '../shared/analysis/fit/window';
-import { DEFAULT_WALKWAY_MM } from '../shared/analysis/takeoff';
-import { optionDocSchema, type Piece } from '../shared/schemas/option';
-import type { RoomShell } from '../shared/schemas/room';
+import { placedBoxes, type PieceBox } from '../../shared/analysis/fit/boxes';
+import { findDoorSwings } from '../../shared/analysis/fit/door-swing';
+import { findTooBigForDoor } from '../../shared/analysis/fit/door-fit';
+import { checkFit } from '../../shared/analysis/fit/index';
+import { findOutsideRoom } from '../../shared/analysis/fit/outside-room';
+import { findOverlaps } from '../../shared/analysis/fit/overlap';
+import { findWalkwayProblems } from '../../shared/analysis/fit/walkway';
+import { findBlockedWindows } from '../../shared/analysis/fit/window';
+import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/takeoff';
+import { optionDocSchema, type Piece } from '../../shared/schemas/option';
+import type { RoomShell } from '../../shared/schemas/room';
 import { typicalRoom } from './typical-room';
 
 /** Repeats of each check, so one slow garbage collection does not decide the figure. */

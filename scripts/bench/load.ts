@@ -6,12 +6,12 @@ import autocannon, { type Result } from 'autocannon';
 import request from 'supertest';
 import { join } from 'node:path';
 import { statSync } from 'node:fs';
-import { createDb } from '../server/db/database';
-import { migrateToLatest } from '../server/db/migrate';
-import { SESSION_COOKIE } from '../server/services/auth/session';
-import { freePort, throwawayCluster } from '../scripts/lib/throwaway-cluster';
-import { startServerProcess } from '../scripts/lib/server-process';
-import { presentedProject } from '../tests/ops/lib/fixtures';
+import { createDb } from '../../server/db/database';
+import { migrateToLatest } from '../../server/db/migrate';
+import { SESSION_COOKIE } from '../../server/services/auth/session';
+import { freePort, throwawayCluster } from '../../scripts/lib/throwaway-cluster';
+import { startServerProcess } from '../../scripts/lib/server-process';
+import { presentedProject } from '../../tests/ops/lib/fixtures';
 
 /** Seconds per target; bounded so a run cannot go on for ever. */
 const MAX_SECONDS = 60;

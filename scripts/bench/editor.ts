@@ -1,9 +1,9 @@
 // The room editor's work per drag event in a room of 60 pieces: the command through the undo
 // history (one gesture), the plan layout, and the 3D scene data rebuilt for the preview.
-import { applyToHistory, createHistory, movePiece } from '../shared/commands';
-import { buildRoomScene } from '../shared/geometry/scene';
-import { optionDocSchema } from '../shared/schemas/option';
-import { planLayout } from '../src/features/rooms/editor/plan-geometry';
+import { applyToHistory, createHistory, movePiece } from '../../shared/commands';
+import { buildRoomScene } from '../../shared/geometry/scene';
+import { optionDocSchema } from '../../shared/schemas/option';
+import { planLayout } from '../../src/features/rooms/editor/plan-geometry';
 import { typicalRoom } from './typical-room';
 
 const PIECES = 60;

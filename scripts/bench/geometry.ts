@@ -1,5 +1,5 @@
-import { computeTakeoff } from '../shared/analysis/takeoff';
-import { buildRoomScene } from '../shared/geometry/scene';
+import { computeTakeoff } from '../../shared/analysis/takeoff';
+import { buildRoomScene } from '../../shared/geometry/scene';
 import { typicalRoom } from './typical-room';
 
 const ROOM_COUNTS = [1, 10, 100];

@@ -6,9 +6,9 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { centredSquareCrop } from '../shared/schemas/finish';
-import { photoLike, rawToSharp } from '../server/services/images/generate';
-import { processPhoto } from '../server/services/images/process-photo';
+import { centredSquareCrop } from '../../shared/schemas/finish';
+import { photoLike, rawToSharp } from '../../server/services/images/generate';
+import { processPhoto } from '../../server/services/images/process-photo';
 
 const WIDTH_PX = 4000;
 const HEIGHT_PX = 3000; // 12 megapixels, a common phone photo size
