@@ -360,7 +360,9 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
           {layout !== 'plan' && (
             <section aria-label="3D preview" className="relative min-w-0 flex-1 bg-sand">
               <Suspense fallback={<Spinner label="Loading the 3D preview…" />}>
+                {/* A new size of view gets a fresh framing of the room (the view frames itself when it mounts). */}
                 <RoomView
+                  key={layout}
                   shell={editor.doc.shell}
                   pieces={pieces}
                   selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
