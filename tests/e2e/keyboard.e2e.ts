@@ -138,6 +138,12 @@ describe('keyboard only', () => {
     await tabTo(p, /^Close the piece details$/);
     await p.keyboard.press('Enter');
     await p.getByRole('button', { name: 'Close the piece details' }).waitFor({ state: 'detached' });
+    // Escape closes them too.
+    await tabTo(p, /Two-seat sofa/);
+    await p.keyboard.press('Enter');
+    await p.getByRole('button', { name: 'Close the piece details' }).waitFor();
+    await p.keyboard.press('Escape');
+    await p.getByRole('button', { name: 'Close the piece details' }).waitFor({ state: 'detached' });
     // Choose with a comment.
     await p.keyboard.press('2');
     await tabTo(p, /^Choose this option$/);

@@ -1,9 +1,18 @@
+import { useEffect } from 'react';
 import type { ClientPiece } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';
 import { elevationText, pieceName, pieceSizeText, priceText } from './wording';
 
 /** What a tapped piece is: its name, size, finish and, when the designer shows prices, its price. */
 export function PieceCard({ piece, showPrices, onClose }: { piece: ClientPiece; showPrices: boolean; onClose: () => void }) {
+  // Escape closes the details, unless a dialog is open (it takes Escape for itself).
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === 'Escape' && !document.querySelector('dialog[open]')) onClose();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [onClose]);
   const rows: { term: string; value: React.ReactNode }[] = [
     { term: 'Size', value: <>{pieceSizeText(piece)} <span className="text-ink-faint">(width × depth × height)</span></> },
   ];
