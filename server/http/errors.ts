@@ -15,6 +15,12 @@ export class HttpError extends Error {
 
 export const notFound = (what = 'That item') => new HttpError(404, 'not_found', `${what} was not found.`);
 
+/** The value, or a 404 naming `what` ("That room") when the studio has no such record. */
+export function orNotFound<T>(value: T | null | undefined, what: string): T {
+  if (value === null || value === undefined) throw notFound(what);
+  return value;
+}
+
 /** Turns zod issues into { "a.b[1].c": "message" }, first message per field. */
 export function zodFields(err: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};

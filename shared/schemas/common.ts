@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
 export const idParamSchema = z.object({ id: z.uuid({ message: 'Not a valid id.' }) });
+export const projectIdParamSchema = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
 
 /** The one error body every 4xx and 5xx answer carries. */
 export const errorBodySchema = z.object({

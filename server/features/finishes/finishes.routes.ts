@@ -3,7 +3,7 @@ import {
   centredSquareCrop, createPaintSchema, finishListQuerySchema, finishPatchSchema, photoUploadFieldsSchema, type EdgeBlend,
 } from '../../../shared/schemas/finish';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
-import { HttpError, notFound } from '../../http/errors';
+import { HttpError, notFound, orNotFound } from '../../http/errors';
 import type { Db } from '../../db/database';
 import { uploadKey } from '../files/file-keys';
 import {
@@ -18,9 +18,7 @@ const DEFAULT_REPEAT_MM = 1000;
 const DEFAULT_EDGE_BLEND: EdgeBlend = 'narrow';
 
 async function rowOrThrow(db: Db, studioId: string, id: string): Promise<FinishRow> {
-  const row = await getFinishRow(db, studioId, id);
-  if (!row) throw notFound('That finish');
-  return row;
+  return orNotFound(await getFinishRow(db, studioId, id), 'That finish');
 }
 
 async function finishResponse(db: Db, row: FinishRow) {

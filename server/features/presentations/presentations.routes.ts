@@ -1,13 +1,12 @@
 // The designer's side of presentations: make one, send it, watch it, withdraw or extend it, and
 // confirm the client's choices ("Mark as decided").
-import { z } from 'zod';
-import { idParamSchema } from '../../../shared/schemas/common';
+import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import {
   LINK_LIFETIME_DAYS, createPresentationSchema, decideProjectSchema, extendPresentationSchema, sendPresentationSchema,
   type PresentationSummary,
 } from '../../../shared/schemas/presentation';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteContext, type RouteDef } from '../../http/routes';
-import { HttpError, notFound } from '../../http/errors';
+import { HttpError, notFound, orNotFound } from '../../http/errors';
 import type { Db } from '../../db/database';
 import { newTokenId, toTokenTime } from '../../services/tokens/presentation-token';
 import { listMembers } from '../studio/members.repository';
@@ -19,18 +18,13 @@ import { flushOpens, forgetPresentation } from './client-cache';
 import { invitationMail, presentationLink, presentationState, presentationSummaries } from './presentations.service';
 
 const DAY_MS = 86_400_000;
-const projectParam = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
 
 async function projectOrThrow(db: Db, studioId: string, projectId: string) {
-  const project = await projectForPresentation(db, studioId, projectId);
-  if (!project) throw notFound('That project');
-  return project;
+  return orNotFound(await projectForPresentation(db, studioId, projectId), 'That project');
 }
 
 async function presentationOrThrow(db: Db, studioId: string, id: string) {
-  const p = await getPresentation(db, studioId, id);
-  if (!p) throw notFound('That presentation');
-  return p;
+  return orNotFound(await getPresentation(db, studioId, id), 'That presentation');
 }
 
 async function summaries(ctx: RouteContext, rows: PresentationRow[]): Promise<PresentationSummary[]> {
@@ -71,7 +65,7 @@ export const presentationRoutes: RouteDef[] = [
     access: ALL_ROLES,
     async handler(ctx) {
       const caller = requireCaller(ctx);
-      const { projectId } = projectParam.parse(ctx.req.params);
+      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
       await flushOpens(ctx.deps);
       return { presentations: await summaries(ctx, await listPresentations(ctx.deps.db, caller.studioId, projectId)) };
@@ -83,7 +77,7 @@ export const presentationRoutes: RouteDef[] = [
     access: WRITERS,
     async handler(ctx) {
       const caller = requireCaller(ctx);
-      const { projectId } = projectParam.parse(ctx.req.params);
+      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const body = createPresentationSchema.parse(ctx.req.body);
       const row = await ctx.deps.db.transaction().execute(async (trx) => {
         const project = await projectOrThrow(trx, caller.studioId, projectId);
@@ -188,7 +182,7 @@ export const presentationRoutes: RouteDef[] = [
     access: WRITERS,
     async handler(ctx) {
       const caller = requireCaller(ctx);
-      const { projectId } = projectParam.parse(ctx.req.params);
+      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const { presentationId } = decideProjectSchema.parse(ctx.req.body);
       const saved = await ctx.deps.db.transaction().execute(async (trx) => {
         const project = await projectOrThrow(trx, caller.studioId, projectId);

@@ -1,12 +1,12 @@
 import { z } from 'zod';
-import { idParamSchema } from '../../../shared/schemas/common';
+import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { optionDocSchema } from '../../../shared/schemas/option';
 import {
   createOptionSchema, createRoomSchema, reorderOptionsSchema, saveOptionSchema, saveRoomSchema,
 } from '../../../shared/schemas/room-api';
 import { readPlanFile, writePlanFile } from '../../../shared/schemas/plan-file';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
-import { HttpError, notFound } from '../../http/errors';
+import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { getProject, touchProject } from '../projects/projects.repository';
 import type { Db } from '../../db/database';
 import {
@@ -15,26 +15,19 @@ import {
 } from './rooms.repository';
 import { assertDrawableShell, fileSlug, problemsToFields, roomSummaries } from './rooms.service';
 
-const projectParam = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
 const exportQuery = z.object({ optionId: z.uuid().optional() });
 const EMPTY_DOC = optionDocSchema.parse({});
 
 async function projectOrThrow(db: Db, studioId: string, projectId: string) {
-  const project = await getProject(db, studioId, projectId);
-  if (!project) throw notFound('That project');
-  return project;
+  return orNotFound(await getProject(db, studioId, projectId), 'That project');
 }
 
 async function roomOrThrow(db: Db, studioId: string, id: string) {
-  const room = await getRoom(db, studioId, id);
-  if (!room) throw notFound('That room');
-  return room;
+  return orNotFound(await getRoom(db, studioId, id), 'That room');
 }
 
 async function optionOrThrow(db: Db, studioId: string, id: string) {
-  const option = await getOption(db, studioId, id);
-  if (!option) throw notFound('That option');
-  return option;
+  return orNotFound(await getOption(db, studioId, id), 'That option');
 }
 
 /** A room and its first option, in one transaction. */
@@ -69,7 +62,7 @@ export const roomRoutes: RouteDef[] = [
     access: ALL_ROLES,
     async handler(ctx) {
       const caller = requireCaller(ctx);
-      const { projectId } = projectParam.parse(ctx.req.params);
+      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
       return { rooms: await roomSummaries(ctx.deps.db, caller.studioId, projectId) };
     },
@@ -80,7 +73,7 @@ export const roomRoutes: RouteDef[] = [
     access: WRITERS,
     async handler(ctx) {
       const caller = requireCaller(ctx);
-      const { projectId } = projectParam.parse(ctx.req.params);
+      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const body = createRoomSchema.parse(ctx.req.body);
       assertDrawableShell(body.shell);
       const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: body.name, shell: body.shell }, { name: '', note: '', doc: EMPTY_DOC });
@@ -94,7 +87,7 @@ export const roomRoutes: RouteDef[] = [
     access: WRITERS,
     async handler(ctx) {
       const caller = requireCaller(ctx);
-      const { projectId } = projectParam.parse(ctx.req.params);
+      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const read = readPlanFile(ctx.req.body);
       if (!read.ok) {
         const fields = problemsToFields(read.errors.map((e) => {

@@ -1,13 +1,12 @@
 // The take-off, each option's schedule (JSON and CSV) and the comparison of options: every role
 // reads them, scoped to the caller's studio.
 import { z } from 'zod';
-import { idParamSchema } from '../../../shared/schemas/common';
+import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { takeoffQuerySchema, type TakeoffSettings } from '../../../shared/analysis/schedule';
 import { ALL_ROLES, requireCaller, type RouteDef, type RouteContext } from '../../http/routes';
 import { fileSlug } from '../rooms/rooms.service';
 import { compareAnswer, projectTakeoffAnswer, scheduleAnswer, scheduleCsv } from './schedules.service';
 
-const projectParam = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
 /** `options`: the option to count for each room, comma-separated ids (one per room). */
 const countedQuery = z.object({
   options: z
@@ -30,11 +29,11 @@ function readRoute<P>(path: string, params: z.ZodType<P>, answer: (ctx: RouteCon
 }
 
 export const scheduleRoutes: RouteDef[] = [
-  readRoute('/api/projects/:projectId/takeoff', projectParam, (ctx, caller, { projectId }, settings) => {
+  readRoute('/api/projects/:projectId/takeoff', projectIdParamSchema, (ctx, caller, { projectId }, settings) => {
     const { options } = countedQuery.parse({ options: ctx.req.query.options });
     return projectTakeoffAnswer(ctx.deps.db, caller.studioId, projectId, settings, options);
   }),
-  readRoute('/api/projects/:projectId/compare', projectParam, (ctx, caller, { projectId }, settings) =>
+  readRoute('/api/projects/:projectId/compare', projectIdParamSchema, (ctx, caller, { projectId }, settings) =>
     compareAnswer(ctx.deps.db, caller.studioId, projectId, settings)),
   readRoute('/api/options/:id/schedule', idParamSchema, (ctx, caller, { id }, settings) =>
     scheduleAnswer(ctx.deps.db, caller.studioId, id, settings)),

@@ -1,7 +1,7 @@
 // Gathers a project's rooms, options, finishes and choices, and hands them to the shared take-off,
 // schedule and comparison functions, so the page, the CSV and the analysis agree.
 import type { Db } from '../../db/database';
-import { notFound } from '../../http/errors';
+import { notFound, orNotFound } from '../../http/errors';
 import { getProject } from '../projects/projects.repository';
 import { getOption, getRoom, listOptions, listRooms, toRoom } from '../rooms/rooms.repository';
 import { finishesByIds, latestChoices } from './schedules.repository';
@@ -20,9 +20,8 @@ interface RoomWithOptions {
 }
 
 async function projectOrThrow(db: Db, studioId: string, projectId: string) {
-  const project = await getProject(db, studioId, projectId);
-  if (!project) throw notFound('That project');
-  return { id: project.id, name: project.name };
+  const found = orNotFound(await getProject(db, studioId, projectId), 'That project');
+  return { id: found.id, name: found.name };
 }
 
 async function roomsOf(db: Db, studioId: string, projectId: string): Promise<RoomWithOptions[]> {
