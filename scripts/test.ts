@@ -5,24 +5,26 @@ import { join, resolve } from 'node:path';
 import { spawnSync } from 'node:child_process';
 import { clusterUrl, ensureDatabase, startCluster, stopCluster, type ClusterOptions } from './lib/postgres';
 import { buildClientIfStale } from './lib/build-client';
+import { lintChecks, printChecks } from './lint';
 
 const root = resolve(import.meta.dirname, '..');
 const out = join(root, '.test-output');
-const only = process.argv.slice(2); // e.g. `npm test -- unit` or `npm test -- e2e`
+const only = process.argv.slice(2); // e.g. `npm test -- unit`, `-- api`, `-- ops`, `-- lint`, `-- typecheck` or `-- e2e`
 
 interface Tally { passed: number; failed: number; skipped: number }
 const total: Tally = { passed: 0, failed: 0, skipped: 0 };
+let lintSummary = '';
 
 function step(name: string): boolean {
   return only.length === 0 || only.includes(name);
 }
 
-function runVitest(name: string, config: string, env: NodeJS.ProcessEnv): void {
+function runVitest(name: string, config: string, env: NodeJS.ProcessEnv, projects: string[] = []): void {
   const json = join(out, `${name}.json`);
   rmSync(json, { force: true });
   const res = spawnSync(
     process.execPath,
-    [join(root, 'node_modules/vitest/vitest.mjs'), 'run', '--config', config, '--reporter=default', '--reporter=json', `--outputFile.json=${json}`],
+    [join(root, 'node_modules/vitest/vitest.mjs'), 'run', '--config', config, ...projects.flatMap((p) => ['--project', p]), '--reporter=default', '--reporter=json', `--outputFile.json=${json}`],
     { cwd: root, stdio: 'inherit', env: { ...env, NO_COLOR: '1' } },
   );
   if (!existsSync(json)) {
@@ -55,15 +57,29 @@ async function main(): Promise<number> {
   }
   const env = { ...process.env, TEST_DATABASE_URL: databaseUrl };
   try {
+    if (step('lint')) {
+      console.log('\n[test] lint');
+      const checks = lintChecks();
+      printChecks(checks);
+      for (const c of checks) {
+        if (c.fails && c.problems > 0) total.failed += 1;
+        else total.passed += 1;
+      }
+      lintSummary = checks.map((c) => `${c.name} ${c.problems}`).join(', ');
+    }
     if (step('typecheck')) {
       console.log('\n[test] typecheck');
       const tsc = spawnSync(process.execPath, [join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json'], { cwd: root, stdio: 'inherit' });
       if (tsc.status === 0) total.passed += 1;
       else total.failed += 1;
     }
-    if (step('unit')) {
-      console.log('\n[test] unit, API and reference tests');
-      runVitest('unit', 'vitest.config.ts', env);
+    const projects = ['unit', 'api', 'ops'].filter((p) => only.includes(p));
+    if (only.length === 0) {
+      console.log('\n[test] unit, reference, API and operations tests');
+      runVitest('vitest', 'vitest.config.ts', env);
+    } else if (projects.length > 0) {
+      console.log(`\n[test] ${projects.join(', ')} tests`);
+      runVitest(projects.join('-'), 'vitest.config.ts', env, projects);
     }
     if (step('e2e')) {
       console.log('\n[test] browser tests');
@@ -73,6 +89,7 @@ async function main(): Promise<number> {
   } finally {
     if (started) stopCluster(cluster);
   }
+  if (lintSummary) console.log(`\n[test] lint problems: ${lintSummary}`);
   const skipped = total.skipped ? `, ${total.skipped} skipped` : '';
   console.log(`\n${total.passed} passed, ${total.failed} failed${skipped}`);
   return total.failed > 0 || total.passed === 0 ? 1 : 0;

@@ -2,9 +2,7 @@
 import express, { type Express, Router } from 'express';
 import { existsSync } from 'node:fs';
 import { resolve, join } from 'node:path';
-import type { AppConfig } from './config';
-import type { Db } from './db/database';
-import type { Mailer } from './services/mail/mailer';
+import type { AppDeps } from './context';
 import { errorMiddleware, HttpError } from './http/errors';
 import { mountRoutes, type RouteDef } from './http/routes';
 import { sessionMiddleware } from './services/auth/session';
@@ -16,24 +14,15 @@ import { outboxRoutes } from './features/outbox/outbox.routes';
 import { projectRoomsExtra, roomRoutes } from './features/rooms/rooms.routes';
 import { finishRoutes } from './features/finishes/finishes.routes';
 import { fileRoutes } from './features/files/files.routes';
-import type { FileStorage } from './services/storage/storage';
 import { presentationRoutes } from './features/presentations/presentations.routes';
 import { clientPresentationRoutes } from './features/presentations/client.routes';
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
-import { createLogger, requestLogger, type Logger } from './services/logging/logger';
+import { createLogger, requestLogger } from './services/logging/logger';
 import { securityHeaders } from './services/security/headers';
 import { originCheck } from './services/security/origin-check';
 
-export interface AppDeps {
-  db: Db;
-  mailer: Mailer;
-  config: AppConfig;
-  /** Where photos and textures are kept; DATA_DIR/files on local disk when not given. */
-  storage?: FileStorage;
-  /** Structured logs; a logger at the configured level on stdout when not given. */
-  logger?: Logger;
-}
+export type { AppDeps } from './context';
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {

@@ -1,7 +1,7 @@
 // Every API route declares who may call it beside its path; tests walk the whole table.
 import type { Request, Response, Router } from 'express';
 import type { Role } from '../../shared/schemas/studio';
-import type { AppDeps } from '../app';
+import type { AppDeps } from '../context';
 import { HttpError } from './errors';
 
 export type Access = 'public' | 'signed-in' | readonly Role[];

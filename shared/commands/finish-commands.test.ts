@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { assignFinish } from './finish-commands';
-import { applied, refusal, sampleDoc } from './test-fixtures';
+import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';
 
 describe('assignFinish', () => {
   it('puts finishes on the floor, the ceiling and all walls of one option', () => {

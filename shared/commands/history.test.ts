@@ -18,7 +18,7 @@ import type { Command } from './command';
 import { flipSwing, updateOpening } from './opening-commands';
 import { insertCorner, moveCorner, setWallLength, setWallThickness } from './outline-commands';
 import { addPiece, duplicatePiece, holdPiece, movePiece, removePiece, updatePiece } from './piece-commands';
-import { deepFreeze, sampleDoc } from './test-fixtures';
+import { deepFreeze, sampleDoc } from '../../tests/fixtures/commands';
 
 function run(history: History, command: Command, gesture?: string): History {
   const result = applyToHistory(history, command, gesture === undefined ? {} : { gesture });

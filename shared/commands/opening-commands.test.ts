@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { addOpening, flipHinge, flipSwing, removeOpening, updateOpening } from './opening-commands';
-import { applied, refusal, sampleDoc } from './test-fixtures';
+import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';
 
 const window2 = { id: 'w2', type: 'window' as const, wall: 1, offset: 600, width: 1200, height: 1200, sill: 900 };
 

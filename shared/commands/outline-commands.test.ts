@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { closeOutlineGap, insertCorner, moveCorner, removeCorner, setOutline, setWallHeight, setWallLength, setWallThickness } from './outline-commands';
-import { applied, lOutline, rectangleShell, refusal, sampleDoc } from './test-fixtures';
+import { applied, lOutline, rectangleShell, refusal, sampleDoc } from '../../tests/fixtures/commands';
 
 const noOpenings = { ...rectangleShell, openings: [] };
 

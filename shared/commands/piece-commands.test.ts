@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { addPiece, duplicatePiece, holdPiece, movePiece, placePiece, removePiece, resizePiece, rotatePiece, updatePiece } from './piece-commands';
-import { applied, refusal, sampleDoc } from './test-fixtures';
+import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';
 
 const stool = { id: 'stool', name: 'Stool', x: 1000, y: 1000, width: 400, depth: 400, height: 450, status: 'new' as const };
 

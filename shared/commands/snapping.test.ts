@@ -3,7 +3,7 @@ import { roomShellSchema } from '../schemas/room';
 import type { Piece } from '../schemas/option';
 import { pieceBoundsMm, pieceFootprintMm } from './piece-geometry';
 import { nudge, snapAngle, snapPieceToPieces, snapPieceToWalls, snapToGrid, NUDGE_STEP_MM, WALL_SNAP_TOLERANCE_MM } from './snapping';
-import { lOutline } from './test-fixtures';
+import { lOutline } from '../../tests/fixtures/commands';
 
 // 4200 × 3600 mm: wall 0 along the top (y = 0), 1 on the right, 2 along the bottom, 3 on the left.
 const shell = roomShellSchema.parse({ outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]] });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { removeCorner } from './outline-commands';
-import { applied, sampleDoc } from './test-fixtures';
+import { applied, sampleDoc } from '../../tests/fixtures/commands';
 import { remapThicknesses, sourcesAfterRemoval, sourcesAfterSplit, wallAfterRemoval } from './wall-edits';
 
 describe('wall renumbering', () => {

@@ -1,6 +1,6 @@
 // Finishes: turning rows into API shapes, the photo processing job, and keeping stored files
 // exactly as many as the finishes use (nothing orphaned, nothing shared deleted).
-import type { AppDeps } from '../../app';
+import type { AppDeps } from '../../context';
 import type { Db } from '../../db/database';
 import type { FileStorage } from '../../services/storage/storage';
 import { dataDirStorage } from '../../services/storage/local-disk';

@@ -6,7 +6,7 @@
 // entry locally before they answer. While the listening connection is down nothing is cached,
 // so a withdrawn link can never be served from a stale entry.
 import pg from 'pg';
-import type { AppDeps } from '../../app';
+import type { AppDeps } from '../../context';
 import type { Db } from '../../db/database';
 import { recordOpens } from './presentations.repository';
 

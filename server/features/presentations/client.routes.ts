@@ -9,7 +9,7 @@ import { HttpError } from '../../http/errors';
 import { touchProject } from '../projects/projects.repository';
 import { canPresentationReadFile } from '../files/files.access';
 import { keyFromFileName } from '../files/file-keys';
-import { fileParam, sendDerivedFile } from '../files/files.routes';
+import { fileParam, sendDerivedFile } from '../files/files.service';
 import {
   getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordViewed,
   saveChoice, type PresentationRow,

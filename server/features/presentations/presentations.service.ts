@@ -13,7 +13,7 @@ import type {
 } from '../../../shared/schemas/presentation';
 import { toFinishes } from '../finishes/finishes.service';
 import { signPresentationToken, verifyPresentationToken } from '../../services/tokens/presentation-token';
-import { escapeHtml } from '../studio/studio.routes';
+import { escapeHtml } from '../../services/mail/escape-html';
 import {
   finishLabels, finishRows, findByTokenId, listChoices, listShownOptions, projectForPresentation, studioName, type PresentationRow,
 } from './presentations.repository';

@@ -3,6 +3,7 @@ import { acceptInviteSchema, changeRoleSchema, inviteSchema } from '../../../sha
 import { idParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, OWNERS, requireCaller, type RouteDef } from '../../http/routes';
 import { HttpError, notFound } from '../../http/errors';
+import { escapeHtml } from '../../services/mail/escape-html';
 import { hashToken, newToken } from '../../services/auth/tokens';
 import { hashPassword } from '../../services/auth/passwords';
 import { startSession } from '../../services/auth/session';
@@ -157,7 +158,3 @@ export const studioRoutes: RouteDef[] = [
     },
   },
 ];
-
-export function escapeHtml(s: string): string {
-  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
-}

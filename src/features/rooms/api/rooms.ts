@@ -84,7 +84,7 @@ export function useSaveOption(roomId: string) {
   });
 }
 
-export function useDeleteOption(roomId: string) {
+export function useDeleteOption(_roomId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => api(`/api/options/${id}`, { method: 'DELETE' }),

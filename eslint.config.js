@@ -1,0 +1,46 @@
+// Lint: typescript-eslint's recommended rules and the React hooks rules, plus the import boundaries
+// that keep the tree one-way (shared ← src, shared ← server; features apart). Import circles and
+// duplicate code are checked by dependency-cruiser and jscpd in `npm run lint` (scripts/lint.ts).
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import reactHooks from 'eslint-plugin-react-hooks';
+import globals from 'globals';
+
+const noImportFrom = (groups, message) => ({
+  'no-restricted-imports': ['error', { patterns: [{ group: groups, message }] }],
+});
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'node_modules/**', 'data/**', '.test-output/**', 'coverage/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.node, ...globals.browser } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' }],
+      '@typescript-eslint/no-explicit-any': 'error',
+    },
+  },
+  {
+    files: ['**/*.d.ts'],
+    rules: { '@typescript-eslint/no-unused-vars': 'off' },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: {
+      'react-hooks/rules-of-hooks': 'error',
+      'react-hooks/exhaustive-deps': 'error',
+    },
+  },
+  {
+    files: ['shared/**/*.ts'],
+    ignores: ['shared/**/*.test.ts'],
+    rules: noImportFrom(['**/src/**', '**/server/**', '**/tests/**', '**/scripts/**', 'node:*', 'react', 'three', 'express', 'kysely', 'pg'],
+      'shared/ is pure TypeScript for client and server: it imports nothing from src, server, tests, Node, React, three or the database.'),
+  },
+  {
+    files: ['server/**/*.ts'],
+    rules: noImportFrom(['**/src/**'], 'The server never imports the client (src/).'),
+  },
+);
