@@ -3,7 +3,7 @@
 // pose on the camera link after every move and follows the poses the other views publish.
 import { OrbitControls } from '@react-three/drei';
 import { useFrame, useThree } from '@react-three/fiber';
-import { useEffect, useLayoutEffect, useRef, type ComponentRef } from 'react';
+import { useEffect, useEffectEvent, useLayoutEffect, useRef, type ComponentRef } from 'react';
 import * as THREE from 'three';
 import type { Bounds3 } from '../../shared/geometry/scene';
 import { moveBody, walkLine, walkStart, type WalkObstacles } from '../../shared/geometry/walk';
@@ -158,6 +158,12 @@ export function OverviewRig({ bounds, onView, link, viewId, memory, reducedMotio
   };
   // Repeated presses build on where the last one is going, not on where the camera is mid-move.
   const base = () => tween.current?.to ?? current();
+  // Effects call the latest apply without re-running when it is rebuilt (it reads only refs and props).
+  const applyPose = useEffectEvent(apply);
+  const placeInFrame = useEffectEvent((f: OverviewFrame) => {
+    const shared = link?.latest?.mode === 'overview' ? link.latest : null;
+    apply(memory.current ?? shared ?? framePose(f), true);
+  });
 
   const [minX, minY, minZ] = bounds.min;
   const [maxX, maxY, maxZ] = bounds.max;
@@ -174,9 +180,8 @@ export function OverviewRig({ bounds, onView, link, viewId, memory, reducedMotio
     camera.updateProjectionMatrix();
     orbit.minDistance = f.minDistance;
     orbit.maxDistance = f.maxDistance;
-    const shared = link?.latest?.mode === 'overview' ? link.latest : null;
-    apply(memory.current ?? shared ?? framePose(f), true);
-    // apply is rebuilt every render but reads only refs; the frame depends on the bounds alone.
+    placeInFrame(f);
+    // The frame depends on the bounds alone: a resize or a piece moved keeps the view.
   }, [camera, minX, minY, minZ, maxX, maxY, maxZ]);
 
   useEffect(() => {
@@ -184,7 +189,7 @@ export function OverviewRig({ bounds, onView, link, viewId, memory, reducedMotio
     return link.subscribe(viewId, (pose) => {
       if (pose.mode !== 'overview') return;
       tween.current = null;
-      apply(pose, false);
+      applyPose(pose, false);
     });
   }, [link, viewId]);
 
@@ -327,6 +332,14 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
     glide.current = { from: { ...from }, to, start: now(), durationMs: Math.max(MOVE_MS / 2, (distanceM / speed) * 1000, turnMs) };
     invalidate();
   };
+  // Effects call the latest apply without re-running when it is rebuilt (it reads only refs and props).
+  const applyView = useEffectEvent(apply);
+  const placeAtStart = useEffectEvent(() => {
+    const shared = link?.latest?.mode === 'walk' ? link.latest : null;
+    const from = memory.current ?? shared;
+    state.current = from ? walkStateOf(from) : startState();
+    apply(true);
+  });
   // Where a move from the state ends, stopped and slid along by walls and pieces.
   const moved = (s: WalkState, forwardM: number, rightM: number): WalkState => {
     const [fx, fz] = forwardOf(s.yaw);
@@ -344,15 +357,12 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
       camera.far = 100;
       camera.updateProjectionMatrix();
     }
-    const shared = link?.latest?.mode === 'walk' ? link.latest : null;
-    const from = memory.current ?? shared;
-    state.current = from ? walkStateOf(from) : startState();
-    apply(true);
-    // Runs once per mount: the rig reads everything else through refs.
+    placeAtStart();
+    // Runs once per camera: the rig reads everything else through refs.
   }, [camera]);
 
   useLayoutEffect(() => {
-    apply(true);
+    applyView(true);
   }, [eyeM]);
 
   useEffect(() => {
@@ -361,7 +371,7 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
       if (pose.mode !== 'walk') return;
       glide.current = null;
       state.current = walkStateOf(pose);
-      apply(false);
+      applyView(false);
     });
   }, [link, viewId]);
 
@@ -381,7 +391,7 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
       glide.current = null;
       const limit = MAX_PITCH_DEG * DEG;
       state.current = { ...s, yaw: s.yaw + dx * LOOK_RAD_PER_PX, pitch: Math.max(-limit, Math.min(limit, s.pitch + dy * LOOK_RAD_PER_PX)) };
-      apply(true);
+      applyView(true);
     };
     const up = () => {
       last = null;

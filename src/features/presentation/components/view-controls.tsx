@@ -61,7 +61,14 @@ function HoldButton({ label, icon, move, commands }: { label: string; icon: Reac
     commands.current?.hold(move, false);
   };
   // Let go if the button goes away mid-press (the mode changed).
-  useEffect(() => release, []);
+  useEffect(
+    () => () => {
+      if (!holding.current) return;
+      holding.current = false;
+      commands.current?.hold(move, false);
+    },
+    [commands, move],
+  );
   return (
     <button
       type="button"
