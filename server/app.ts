@@ -24,6 +24,8 @@ import { originCheck } from './services/security/origin-check';
 
 export type { AppDeps } from './context';
 
+const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
   return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...presentationRoutes, ...clientPresentationRoutes, ...scheduleRoutes, ...outboxRoutes];
@@ -35,7 +37,9 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', 'loopback');
   app.use(requestLogger(deps.logger ?? createLogger({ level: deps.config.logLevel })));
   app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
-  app.use('/api', express.json({ limit: '2mb' }));
+  const json = express.json({ limit: '2mb' });
+  // Only writes carry a body: a GET's is never read, so it can never fail as "not valid JSON".
+  app.use('/api', (req, res, next) => (BODY_METHODS.has(req.method) ? json(req, res, next) : next()));
   app.use('/api', originCheck(deps.config.publicUrl));
   app.use('/api', sessionMiddleware(deps.db));
 

@@ -62,6 +62,11 @@ export interface ProjectsTable {
   name: string;
   address: string | null;
   state: ColumnType<'draft' | 'presented' | 'decided' | 'archived', 'draft' | 'presented' | 'decided' | 'archived' | undefined>;
+  /** While archived: the state Restore goes back to. */
+  previous_state: 'draft' | 'presented' | 'decided' | null;
+  /** Who last took the project back from decided (Reopen), and when. */
+  reopened_by: string | null;
+  reopened_at: Date | null;
   created_at: Timestamp;
   updated_at: Timestamp;
 }

@@ -46,11 +46,16 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
     res.status(400).json({ error: { code: 'invalid', message: first, fields } });
     return;
   }
-  // Body parser errors (bad JSON, too large) carry a status of their own.
+  // Body parser errors (bad JSON, too large) carry a status and a type of their own; files
+  // (a missing asset, a path climbing out with "..", a malformed address) only a status.
   const status = typeof err?.status === 'number' && err.status >= 400 && err.status < 500 ? err.status : 500;
+  if (status < 500 && typeof err.type === 'string' && BODY_ERRORS[err.type]) {
+    res.status(status).json({ error: { code: 'bad_request', message: BODY_ERRORS[err.type] } });
+    return;
+  }
   if (status < 500) {
-    const message = err.type === 'entity.too.large' ? 'The request is too large.' : 'The request body is not valid JSON.';
-    res.status(status).json({ error: { code: 'bad_request', message } });
+    if (req.originalUrl.startsWith('/api/')) res.status(404).json({ error: { code: 'not_found', message: 'No such API route.' } });
+    else res.status(404).type('text/plain').send('Not found');
     return;
   }
   if (isDatabaseDown(err)) {
@@ -63,6 +68,19 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   if (req.log) req.log.error({ err }, 'unhandled error');
   else console.error('[error]', err);
   res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side.' } });
+};
+
+/** What body-parser's error types mean to the caller. */
+const BODY_ERRORS: Record<string, string> = {
+  'entity.parse.failed': 'The request body is not valid JSON.',
+  'entity.too.large': 'The request is too large.',
+  'entity.verify.failed': 'The request body could not be read.',
+  'encoding.unsupported': 'The request body could not be read.',
+  'charset.unsupported': 'The request body could not be read.',
+  'request.aborted': 'The request body could not be read.',
+  'request.size.invalid': 'The request body could not be read.',
+  'stream.encoding.set': 'The request body could not be read.',
+  'parameters.too.many': 'The request body could not be read.',
 };
 
 /** Seconds a client is asked to wait while the database is away: a restart usually takes a few. */

@@ -59,6 +59,11 @@ export const projectSummarySchema = z.object({
   name: z.string(),
   address: z.string().nullable(),
   state: projectStateSchema,
+  /** While archived: the state Restore brings it back to (send it as `state`); otherwise null. */
+  previousState: projectStateSchema.exclude(['archived']).nullable(),
+  /** When and by whom (a member's name) a decided project was last reopened. */
+  reopenedAt: z.string().nullable(),
+  reopenedBy: z.string().nullable(),
   client: z.object({ id: z.string(), name: z.string() }),
   roomCount: z.number().int(),
   updatedAt: z.string(),

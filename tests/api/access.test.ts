@@ -70,6 +70,7 @@ const CASES: Record<string, Case> = {
   'post /api/presentations/:id/withdraw': { params: (f) => ({ id: f.presentationId }) },
   'post /api/presentations/:id/extend': { params: (f) => ({ id: f.presentationId }), body: () => ({ days: 5 }) },
   'post /api/projects/:projectId/decide': { params: (f) => ({ projectId: f.projectId }), body: () => ({ presentationId: randomUUID() }) },
+  'post /api/projects/:projectId/reopen': { params: (f) => ({ projectId: f.projectId }) },
   'get /api/projects/:projectId/takeoff': { params: (f) => ({ projectId: f.projectId }) },
   'get /api/projects/:projectId/compare': { params: (f) => ({ projectId: f.projectId }) },
   'get /api/options/:id/schedule': { params: (f) => ({ id: f.optionId }) },

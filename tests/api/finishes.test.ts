@@ -330,19 +330,18 @@ describe('bad input', () => {
     expect(res.body.error.fields).toEqual({ 'photos[1]': expect.stringMatching(/not a JPEG/) });
   });
 
-  it('marks a truncated JPEG failed with the reason, keeping none of its bytes', async () => {
+  it('refuses a truncated JPEG or PNG at upload as damaged or cut short, keeping nothing of the request', async () => {
     const whole = await rawToJpeg(photoLike(800, 600));
-    const res = await upload(owner, [{ name: 'cut-short.jpg', bytes: whole.subarray(0, Math.floor(whole.length * 0.6)) }]);
-    expect(res.status).toBe(201);
-    const finish = await waitUntilProcessed(owner, res.body.finishes[0].id);
-    expect(finish.status).toBe('failed');
-    expect(finish.failureReason).toMatch(/damaged or cut short/);
-    expect(Object.values(finish.files)).toEqual([null, null, null, null, null]);
-    expect(storedFiles()).toEqual([]);
-    // Nothing to re-crop, and the designer can clear it away.
-    expect((await owner.patch(`/api/finishes/${finish.id}`).send({ crop: { x: 0, y: 0, width: 0.5, height: 0.5 } })).status).toBe(409);
-    expect((await owner.delete(`/api/finishes/${finish.id}`)).status).toBe(204);
-    expect(await countFinishes(owner)).toBe(baseline);
+    const cut = await upload(owner, [{ name: 'cut-short.jpg', bytes: whole.subarray(0, Math.floor(whole.length * 0.6)) }]);
+    await expectRefused(cut, 422, 'damaged', /“cut-short.jpg” is damaged or cut short/);
+    expect(cut.body.error.fields).toEqual({ 'photos[0]': expect.stringMatching(/damaged or cut short/) });
+    // Only the last few bytes missing, beside a good photo: the whole request is refused.
+    const good = await rawToJpeg(checkerboard(64, 2));
+    const nearly = await upload(owner, [{ name: 'good.jpg', bytes: good }, { name: 'nearly.jpg', bytes: whole.subarray(0, whole.length - 40) }]);
+    await expectRefused(nearly, 422, 'damaged', /“nearly.jpg”/);
+    expect(Object.keys(nearly.body.error.fields)).toEqual(['photos[1]']);
+    const png = await rawToPng(photoLike(400, 300));
+    await expectRefused(await upload(owner, [{ name: 'cut.png', bytes: png.subarray(0, Math.floor(png.length * 0.7)) }]), 422, 'damaged', /damaged or cut short/);
   });
 
   it('takes several good photos in one request', async () => {

@@ -171,6 +171,11 @@ export function forgetPresentation(deps: AppDeps, presentationId: string): void 
   caches.get(deps)?.forgetPresentation(presentationId);
 }
 
+/** Drops the ready answers of every link of the studio on this instance now. */
+export function forgetStudio(deps: AppDeps, studioId: string): void {
+  caches.get(deps)?.forgetStudio(studioId);
+}
+
 /** Writes this instance's pending "opened" counts. */
 export async function flushOpens(deps: AppDeps): Promise<void> {
   await caches.get(deps)?.flushOpens();

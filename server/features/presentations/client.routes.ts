@@ -6,7 +6,7 @@ import { choiceBodySchema, viewBodySchema, type ChoiceAnswer, type ClientPresent
 import { optionLabel } from '../../../shared/schemas/room-api';
 import type { RouteContext, RouteDef } from '../../http/routes';
 import { HttpError } from '../../http/errors';
-import { touchProject } from '../projects/projects.repository';
+import { lockProjectState, touchProject } from '../projects/projects.repository';
 import { canPresentationReadFile } from '../files/files.access';
 import { keyFromFileName } from '../files/file-keys';
 import { fileParam, sendDerivedFile } from '../files/files.service';
@@ -124,7 +124,8 @@ export const clientPresentationRoutes: RouteDef[] = [
         if (!params.success) throw linkNotFound();
         const { roomId } = params.data;
         if ((await logRequest(trx, p.id, 'choice', new Date(Date.now() - RATE_WINDOW_MS))) > CHOICE_LIMIT) throw tooMany(ctx.res);
-        const project = await projectForPresentation(trx, p.studio_id, p.project_id);
+        // Held until the choice is saved, so Mark as decided cannot slip in between.
+        const project = await lockProjectState(trx, p.studio_id, p.project_id, 'share');
         if (!project) throw linkNotFound();
         if (project.state === 'decided' || project.state === 'archived') {
           throw new HttpError(409, 'decided', 'Your designer has confirmed the choices for this project, so they cannot be changed here. Get in touch with them to change anything.');

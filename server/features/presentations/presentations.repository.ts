@@ -51,8 +51,10 @@ export async function listPresentations(db: Db, studioId: string, projectId: str
     .execute();
 }
 
-export async function getPresentation(db: Db, studioId: string, id: string): Promise<PresentationRow | undefined> {
-  return db.selectFrom('presentations').selectAll().where('studio_id', '=', studioId).where('id', '=', id).executeTakeFirst();
+/** `forUpdate` holds its row until the transaction ends (take it before the project's, as a choice does). */
+export async function getPresentation(db: Db, studioId: string, id: string, opts: { forUpdate?: boolean } = {}): Promise<PresentationRow | undefined> {
+  const q = db.selectFrom('presentations').selectAll().where('studio_id', '=', studioId).where('id', '=', id);
+  return (opts.forUpdate ? q.forUpdate() : q).executeTakeFirst();
 }
 
 /** The presentation a verified token names; `forUpdate` holds its row until the transaction ends. */
@@ -202,6 +204,16 @@ export async function roomsWithOptions(db: Db, studioId: string, projectId: stri
     .where('rooms.project_id', '=', projectId)
     .where('rooms.id', 'in', roomIds)
     .execute();
+}
+
+/** When the project's latest Mark as decided was made, if ever. */
+export async function latestDecision(db: Db, projectId: string): Promise<Date | undefined> {
+  const r = await db
+    .selectFrom('presentations')
+    .select((eb) => eb.fn.max('decided_at').as('at'))
+    .where('project_id', '=', projectId)
+    .executeTakeFirst();
+  return r?.at ?? undefined;
 }
 
 export async function setProjectState(db: Db, projectId: string, state: 'presented' | 'decided'): Promise<void> {

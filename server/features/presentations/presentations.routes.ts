@@ -11,10 +11,12 @@ import type { Db } from '../../db/database';
 import { newTokenId, toTokenTime } from '../../services/tokens/presentation-token';
 import { listMembers } from '../studio/members.repository';
 import {
-  getPresentation, insertPresentation, insertShownRooms, listPresentations, projectForPresentation, roomsWithOptions,
+  getPresentation, insertPresentation, insertShownRooms, latestDecision, listPresentations, projectForPresentation, roomsWithOptions,
   setProjectState, studioName, updatePresentation, type PresentationRow,
 } from './presentations.repository';
 import { flushOpens, forgetPresentation } from './client-cache';
+import { lockProjectState } from '../projects/projects.repository';
+import { DECIDED_REOPEN_FIRST, decidedRefusal } from '../projects/project-states';
 import { invitationMail, presentationLink, presentationState, presentationSummaries } from './presentations.service';
 
 const DAY_MS = 86_400_000;
@@ -80,8 +82,9 @@ export const presentationRoutes: RouteDef[] = [
       const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const body = createPresentationSchema.parse(ctx.req.body);
       const row = await ctx.deps.db.transaction().execute(async (trx) => {
-        const project = await projectOrThrow(trx, caller.studioId, projectId);
+        const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
         if (project.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it before presenting it.');
+        if (project.state === 'decided') throw decidedRefusal(DECIDED_REOPEN_FIRST);
         await assertShownRoomsBelong(trx, caller.studioId, projectId, body.rooms);
         const issuedAt = toTokenTime(new Date());
         const created = await insertPresentation(trx, {
@@ -97,7 +100,7 @@ export const presentationRoutes: RouteDef[] = [
         });
         await insertShownRooms(trx, created.id, body.rooms);
         // A link made is a link shared (sent or copied): the project is now with the client.
-        await setProjectState(trx, projectId, 'presented');
+        if (project.state === 'draft') await setProjectState(trx, projectId, 'presented');
         return created;
       });
       ctx.res.status(201);
@@ -185,10 +188,16 @@ export const presentationRoutes: RouteDef[] = [
       const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const { presentationId } = decideProjectSchema.parse(ctx.req.body);
       const saved = await ctx.deps.db.transaction().execute(async (trx) => {
-        const project = await projectOrThrow(trx, caller.studioId, projectId);
-        const p = await getPresentation(trx, caller.studioId, presentationId);
+        // The presentation's row before the project's, in the order a client's choice takes them.
+        const p = await getPresentation(trx, caller.studioId, presentationId, { forUpdate: true });
+        const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
         if (!p || p.project_id !== projectId) throw notFound('That presentation');
         if (project.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it first.');
+        if (project.state === 'decided') {
+          // Asking twice for the same decision changes nothing; another needs Reopen first.
+          if (p.decided_at && p.decided_at.getTime() === (await latestDecision(trx, projectId))?.getTime()) return p;
+          throw decidedRefusal('This project is already decided. Reopen the project first to decide it again.');
+        }
         if (p.withdrawn_at) throw new HttpError(409, 'withdrawn', 'This presentation was withdrawn; its choices cannot decide the project.');
         const [summary] = await presentationSummaries(trx, ctx.deps.config, [p], { withLinks: false, memberNames: new Map() });
         if (!summary.complete) throw new HttpError(409, 'incomplete', 'Every room in this presentation needs a choice before the project is decided.');

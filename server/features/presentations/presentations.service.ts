@@ -233,7 +233,7 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
   };
 }
 
-const dateText = (d: Date) => new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(d);
+export const dateText = (d: Date) => new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(d);
 
 /** The client's e-mail with the link. */
 export function invitationMail(v: { to: string; studio: string; project: string; clientName: string; message: string; link: string; expiresAt: Date }) {

@@ -1,9 +1,11 @@
 import { createProjectSchema, listQuerySchema, projectPatchSchema } from '../../../shared/schemas/project';
-import { idParamSchema } from '../../../shared/schemas/common';
+import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
-import { HttpError, notFound } from '../../http/errors';
+import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { getClient, insertClient } from '../clients/clients.repository';
-import { getProject, insertProject, listProjects, updateProject } from './projects.repository';
+import { getProject, insertProject, listProjects, lockProjectState, reopenProject, updateProject } from './projects.repository';
+import { patchStateChange } from './project-states';
+import { forgetStudio } from '../presentations/client-cache';
 import type { Db } from '../../db/database';
 
 /** Rooms of a project, for its page. Filled by the rooms feature through this hook. */
@@ -68,9 +70,34 @@ export function projectRoutes(extras: ProjectExtras[] = []): RouteDef[] {
       async handler(ctx) {
         const caller = requireCaller(ctx);
         const { id } = idParamSchema.parse(ctx.req.params);
-        const patch = projectPatchSchema.parse(ctx.req.body);
-        if (!(await updateProject(ctx.deps.db, caller.studioId, id, patch))) throw notFound('That project');
+        const { state, ...rest } = projectPatchSchema.parse(ctx.req.body);
+        await ctx.deps.db.transaction().execute(async (trx) => {
+          const current = orNotFound(await lockProjectState(trx, caller.studioId, id), 'That project');
+          const change = state ? patchStateChange(current.state, current.previous_state, state) : null;
+          const changes = change ? { ...rest, state: change.state, previous_state: change.previousState } : rest;
+          await updateProject(trx, caller.studioId, id, changes);
+        });
         return { project: await getProject(ctx.deps.db, caller.studioId, id) };
+      },
+    },
+    {
+      // Decided → presented, on purpose: the clients' links can change their choices again.
+      method: 'post',
+      path: '/api/projects/:projectId/reopen',
+      access: WRITERS,
+      async handler(ctx) {
+        const caller = requireCaller(ctx);
+        const { projectId } = projectIdParamSchema.parse(ctx.req.params);
+        await ctx.deps.db.transaction().execute(async (trx) => {
+          const current = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
+          if (current.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it first.');
+          if (!(await reopenProject(trx, caller.studioId, projectId, caller.memberId))) {
+            throw new HttpError(409, 'not_decided', 'Only a decided project can be reopened; this one is not decided.');
+          }
+        });
+        // Every link of the studio shows whether the project is decided: drop what this instance keeps.
+        forgetStudio(ctx.deps, caller.studioId);
+        return { project: await getProject(ctx.deps.db, caller.studioId, projectId) };
       },
     },
   ];

@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
+import { HttpError } from '../../http/errors';
 import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionDocSchema } from '../../../shared/schemas/option';
 import type { OptionRecord, RoomRecord } from '../../../shared/schemas/room-api';
@@ -51,18 +52,30 @@ export async function getRoom(db: Db, studioId: string, id: string): Promise<Roo
   return r && toRoom(r);
 }
 
+/** Tries at the next free position before giving up; each retry sees the rooms committed meanwhile. */
+const ROOM_POSITION_ATTEMPTS = 25;
+
+/**
+ * Adds the room after the project's last. Positions are unique (migration 0009): when a parallel
+ * request took the same one, the insert waits for it, does nothing, and is tried again at the
+ * next position, inside the same transaction (ON CONFLICT does not abort it).
+ */
 export async function insertRoom(db: Db, v: { studioId: string; projectId: string; name: string; shell: unknown }): Promise<RoomRecord> {
-  const next = await db
-    .selectFrom('rooms')
-    .select((eb) => eb.fn.coalesce(eb.fn.max('position'), sql<number>`-1`).as('max'))
-    .where('project_id', '=', v.projectId)
-    .executeTakeFirstOrThrow();
-  const r = await db
-    .insertInto('rooms')
-    .values({ studio_id: v.studioId, project_id: v.projectId, name: v.name, shell: json(v.shell), position: Number(next.max) + 1 })
-    .returning([...ROOM_COLUMNS])
-    .executeTakeFirstOrThrow();
-  return toRoom(r);
+  for (let attempt = 0; attempt < ROOM_POSITION_ATTEMPTS; attempt += 1) {
+    const next = await db
+      .selectFrom('rooms')
+      .select((eb) => eb.fn.coalesce(eb.fn.max('position'), sql<number>`-1`).as('max'))
+      .where('project_id', '=', v.projectId)
+      .executeTakeFirstOrThrow();
+    const r = await db
+      .insertInto('rooms')
+      .values({ studio_id: v.studioId, project_id: v.projectId, name: v.name, shell: json(v.shell), position: Number(next.max) + 1 })
+      .onConflict((oc) => oc.columns(['project_id', 'position']).doNothing())
+      .returning([...ROOM_COLUMNS])
+      .executeTakeFirst();
+    if (r) return toRoom(r);
+  }
+  throw new HttpError(503, 'busy', 'Many rooms are being added to this project at once. Try again in a moment.');
 }
 
 /** Saves when `version` is still current; returns undefined when someone saved first. */
@@ -145,4 +158,41 @@ export async function setOptionPositions(db: Db, roomId: string, ids: string[]):
 
 export async function deleteOption(db: Db, id: string): Promise<void> {
   await db.deleteFrom('options').where('id', '=', id).execute();
+}
+
+/** Room or option: what a presentation's rows point at. */
+export type Shown = { roomId: string } | { optionId: string };
+
+/**
+ * The options of this room (or this option) the client chose in the presentation that decided
+ * the project, while the project is decided: they stand as decided until it is reopened.
+ */
+export async function decidedChoices(db: Db, studioId: string, of: Shown): Promise<string[]> {
+  const rows = await db
+    .selectFrom('choices as c')
+    .innerJoin('presentations as p', 'p.id', 'c.presentation_id')
+    .innerJoin('projects as pr', 'pr.id', 'p.project_id')
+    .select('c.option_id')
+    .where('p.studio_id', '=', studioId)
+    .where('pr.state', '=', 'decided')
+    .where('p.decided_at', '=', (eb) => eb.selectFrom('presentations as q').select((q) => q.fn.max('q.decided_at').as('at')).whereRef('q.project_id', '=', 'p.project_id'))
+    .where('roomId' in of ? 'c.room_id' : 'c.option_id', '=', 'roomId' in of ? of.roomId : of.optionId)
+    .execute();
+  return rows.map((r) => r.option_id);
+}
+
+/** Presentations that show this room (or option), newest first, and whether a client chose it there. */
+export async function presentationsShowing(db: Db, studioId: string, of: Shown) {
+  const shown = 'roomId' in of
+    ? db.selectFrom('presentation_rooms').select('presentation_id').where('room_id', '=', of.roomId)
+    : db.selectFrom('presentation_options').select('presentation_id').where('option_id', '=', of.optionId);
+  const chosen = 'roomId' in of ? sql<boolean>`c.room_id = ${of.roomId}` : sql<boolean>`c.option_id = ${of.optionId}`;
+  return db
+    .selectFrom('presentations as p')
+    .select(['p.id', 'p.created_at', 'p.sent_to', 'p.withdrawn_at'])
+    .select(sql<boolean>`exists (select 1 from choices c where c.presentation_id = p.id and ${chosen})`.as('chosen'))
+    .where('p.studio_id', '=', studioId)
+    .where('p.id', 'in', shown)
+    .orderBy('p.created_at', 'desc')
+    .execute();
 }

@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from 'node:util';
 import { z } from 'zod';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { optionDocSchema } from '../../../shared/schemas/option';
@@ -7,13 +8,14 @@ import {
 import { readPlanFile, writePlanFile } from '../../../shared/schemas/plan-file';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
-import { getProject, touchProject } from '../projects/projects.repository';
+import { getProject, lockProjectState, touchProject } from '../projects/projects.repository';
 import type { Db } from '../../db/database';
 import {
   deleteOption, deleteRoom, getOption, getRoom, insertOption, insertRoom, listOptions, setOptionPositions,
   updateOptionIfVersion, updateRoomIfVersion,
 } from './rooms.repository';
 import { assertDrawableShell, fileSlug, problemsToFields, roomSummaries } from './rooms.service';
+import { assertDeletable, assertOptionEditable, assertShellEditable, choiceKeptRefusal, isChoiceKept } from './room-guards';
 
 const exportQuery = z.object({ optionId: z.uuid().optional() });
 const EMPTY_DOC = optionDocSchema.parse({});
@@ -45,6 +47,16 @@ async function createRoomWithOption(
     await touchProject(trx, projectId);
     return { room: created, options: [first] };
   });
+}
+
+/** Runs a delete; the database's refusal to take a client's choice with it becomes a 409. */
+async function deleteKeepingChoices(what: 'room' | 'option', run: () => Promise<void>): Promise<void> {
+  try {
+    await run();
+  } catch (err) {
+    if (isChoiceKept(err)) throw choiceKeptRefusal(what);
+    throw err;
+  }
 }
 
 const conflict = (what: string, current: unknown) =>
@@ -124,6 +136,11 @@ export const roomRoutes: RouteDef[] = [
       const body = saveRoomSchema.parse(ctx.req.body);
       if (body.shell) assertDrawableShell(body.shell);
       return ctx.deps.db.transaction().execute(async (trx) => {
+        if (body.shell) {
+          const room = await roomOrThrow(trx, caller.studioId, id);
+          await lockProjectState(trx, caller.studioId, room.projectId, 'share');
+          if (!isDeepStrictEqual(body.shell, room.shell)) await assertShellEditable(trx, caller.studioId, id);
+        }
         const saved = await updateRoomIfVersion(trx, caller.studioId, id, body.version, { name: body.name, shell: body.shell });
         if (!saved) throw conflict('room', await roomOrThrow(trx, caller.studioId, id));
         await touchProject(trx, saved.projectId);
@@ -138,9 +155,14 @@ export const roomRoutes: RouteDef[] = [
     async handler(ctx) {
       const caller = requireCaller(ctx);
       const { id } = idParamSchema.parse(ctx.req.params);
-      const room = await roomOrThrow(ctx.deps.db, caller.studioId, id);
-      await deleteRoom(ctx.deps.db, caller.studioId, id);
-      await touchProject(ctx.deps.db, room.projectId);
+      await deleteKeepingChoices('room', () => ctx.deps.db.transaction().execute(async (trx) => {
+        const room = await roomOrThrow(trx, caller.studioId, id);
+        // Held until the room is gone, so no presentation can start showing it in between.
+        await lockProjectState(trx, caller.studioId, room.projectId);
+        await assertDeletable(trx, caller.studioId, { roomId: id });
+        await deleteRoom(trx, caller.studioId, id);
+        await touchProject(trx, room.projectId);
+      }));
       return undefined;
     },
   },
@@ -218,6 +240,10 @@ export const roomRoutes: RouteDef[] = [
       const { id } = idParamSchema.parse(ctx.req.params);
       const body = saveOptionSchema.parse(ctx.req.body);
       return ctx.deps.db.transaction().execute(async (trx) => {
+        const current = await optionOrThrow(trx, caller.studioId, id);
+        const changes = (body.name !== undefined && body.name !== current.name) || (body.note !== undefined && body.note !== current.note) ||
+          (body.doc !== undefined && !isDeepStrictEqual(body.doc, current.doc));
+        if (changes) await assertOptionEditable(trx, caller.studioId, id);
         const saved = await updateOptionIfVersion(trx, caller.studioId, id, body.version, { name: body.name, note: body.note, doc: body.doc });
         if (!saved) throw conflict('option', await optionOrThrow(trx, caller.studioId, id));
         return { option: saved };
@@ -231,13 +257,16 @@ export const roomRoutes: RouteDef[] = [
     async handler(ctx) {
       const caller = requireCaller(ctx);
       const { id } = idParamSchema.parse(ctx.req.params);
-      await ctx.deps.db.transaction().execute(async (trx) => {
+      await deleteKeepingChoices('option', () => ctx.deps.db.transaction().execute(async (trx) => {
         const option = await optionOrThrow(trx, caller.studioId, id);
+        const room = await roomOrThrow(trx, caller.studioId, option.roomId);
+        await lockProjectState(trx, caller.studioId, room.projectId);
         const siblings = await listOptions(trx, caller.studioId, option.roomId);
         if (siblings.length <= 1) throw new HttpError(409, 'last_option', 'A room keeps at least one option.');
+        await assertDeletable(trx, caller.studioId, { optionId: id });
         await deleteOption(trx, id);
         await setOptionPositions(trx, option.roomId, siblings.filter((o) => o.id !== id).map((o) => o.id));
-      });
+      }));
       return undefined;
     },
   },

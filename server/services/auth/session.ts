@@ -8,7 +8,8 @@ import { hashToken, newToken } from './tokens';
 export const SESSION_COOKIE = 'parlour_session';
 const SESSION_DAYS = 30;
 
-function readCookie(req: Request, name: string): string | null {
+/** The one cookie reader: the session and the origin check must agree on what the cookie is. */
+export function readCookie(req: Request, name: string): string | null {
   const header = req.headers.cookie;
   if (!header) return null;
   for (const part of header.split(';')) {

@@ -1,5 +1,6 @@
 // First look at an upload, before anything is stored: its type from its bytes (never its name)
-// and its size from its header (never by decoding it), so a decompression bomb is refused unread.
+// and its size from its header (before decoding it), so a decompression bomb is refused unread;
+// only then is it decoded once, so a damaged or cut-short file is refused too.
 import sharp, { type Metadata } from 'sharp';
 import { UPLOAD_LIMITS } from '../../../shared/schemas/finish';
 
@@ -38,7 +39,30 @@ export interface PhotoHeader {
 
 export const megapixels = (px: number) => `${Math.round(px / 100_000) / 10} megapixels`;
 
-/** Reads type and size without decoding pixels; throws PhotoProblem for anything unusable. */
+/**
+ * How strictly photos are decoded, at upload and in processing alike, so that a file the upload
+ * accepts is one processing can read (a cut-short JPEG warns "premature end" and is refused).
+ */
+export const DECODE_FAIL_ON = 'warning' as const;
+/** The check decodes at this size: JPEG and WebP shrink on load, yet every byte is still read. */
+const CHECK_PX = 64;
+
+/**
+ * Decodes the whole photo (within the pixel limit already checked) and throws PhotoProblem when
+ * it is damaged or cut short; the pixels are thrown away.
+ */
+async function assertWhole(buf: Buffer, label: string): Promise<void> {
+  try {
+    await sharp(buf, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: DECODE_FAIL_ON })
+      .resize(CHECK_PX, CHECK_PX, { fit: 'inside' })
+      .raw()
+      .toBuffer();
+  } catch {
+    throw new PhotoProblem(422, 'damaged', `${label} is damaged or cut short (the file ends early). Export or download it again, then upload it.`);
+  }
+}
+
+/** Reads type and size from the header, then decodes it once to refuse a damaged file; throws PhotoProblem for anything unusable. */
 export async function inspectPhoto(buf: Buffer, fileName: string): Promise<PhotoHeader> {
   const label = `“${fileName}”`;
   if (buf.length === 0) throw new PhotoProblem(400, 'empty_file', `${label} is empty (0 bytes). Choose the photo again.`);
@@ -62,6 +86,7 @@ export async function inspectPhoto(buf: Buffer, fileName: string): Promise<Photo
       `${label} is ${meta.width} × ${meta.height} pixels (${megapixels(pixels)}); the limit is ${megapixels(UPLOAD_LIMITS.maxPixels)}. Export it smaller.`,
     );
   }
+  await assertWhole(buf, label);
   const swap = SWAPS_SIDES.has(meta.orientation ?? 1);
   return { type, widthPx: swap ? meta.height : meta.width, heightPx: swap ? meta.width : meta.height };
 }

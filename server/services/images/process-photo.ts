@@ -4,6 +4,7 @@
 import sharp, { type Sharp } from 'sharp';
 import { EDGE_BLEND_FRACTION, UPLOAD_LIMITS, type Crop, type EdgeBlend } from '../../../shared/schemas/finish';
 import { blendEdgesMirrored } from './seamless';
+import { DECODE_FAIL_ON } from './inspect';
 
 /** Longest side of the editor's texture and of the large (presentation) texture, in pixels. */
 export const TEXTURE_PX = 1024;
@@ -77,7 +78,7 @@ export async function processPhoto(source: Buffer, opts: { crop: Crop; edgeBlend
   // Each step streams through libvips from compressed bytes rather than holding the whole decoded
   // photo in JavaScript, and steps run one at a time: peak memory stays near one decoded photo.
   const normalised = (input: Buffer) =>
-    sharp(input, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: 'warning' }).rotate().flatten({ background: '#ffffff' }).toColourspace('srgb');
+    sharp(input, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: DECODE_FAIL_ON }).rotate().flatten({ background: '#ffffff' }).toColourspace('srgb');
   const master = opts.keepMaster
     ? await normalised(source)
       // Huffman optimisation would buffer the whole photo's coefficients: off, for memory.

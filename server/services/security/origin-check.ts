@@ -3,7 +3,7 @@
 // cookie when the browser says it came from another origin.
 import type { Request, RequestHandler } from 'express';
 import { HttpError } from '../../http/errors';
-import { SESSION_COOKIE } from '../auth/session';
+import { SESSION_COOKIE, readCookie } from '../auth/session';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 // The client's presentation routes authorise by the token in their path, never by the cookie, and
@@ -11,7 +11,8 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 // the token, which the cookie does not add to. Paths are relative to /api, where this is mounted.
 const TOKEN_AUTHORISED_PREFIX = '/p/';
 
-const hasSessionCookie = (req: Request) => (req.headers.cookie ?? '').split(';').some((part) => part.trim().startsWith(`${SESSION_COOKIE}=`));
+// Read exactly as the session middleware reads it: whatever it would sign in with counts here.
+const hasSessionCookie = (req: Request) => readCookie(req, SESSION_COOKIE) !== null;
 
 function originOf(url: string): string | null {
   try {

@@ -50,11 +50,20 @@ export function signPresentationToken(key: Uint8Array, claims: PresentationToken
 }
 
 /**
+ * Whether each part is the one base64url spelling of its bytes. A decoder ignores the unused low
+ * bits of the last character, so several texts decode to the same signature; only the one the
+ * signer wrote is the link.
+ */
+function isCanonical(token: string): boolean {
+  return token.split('.').every((part) => Buffer.from(part, 'base64url').toString('base64url') === part);
+}
+
+/**
  * Checks signature, algorithm, type, audience, issuer and expiry. Never throws: a bad token is an
  * answer ("invalid"), and an expired one is told apart only once its signature is good.
  */
 export async function verifyPresentationToken(key: Uint8Array, token: string): Promise<TokenCheck> {
-  if (token.length > MAX_TOKEN_LENGTH || !TOKEN_SHAPE.test(token)) return { ok: false, reason: 'invalid' };
+  if (token.length > MAX_TOKEN_LENGTH || !TOKEN_SHAPE.test(token) || !isCanonical(token)) return { ok: false, reason: 'invalid' };
   try {
     const { payload } = await jwtVerify(token, key, {
       algorithms: [PRESENTATION_ALG],

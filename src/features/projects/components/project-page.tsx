@@ -44,7 +44,7 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
               <Button
                 variant={archived ? 'secondary' : 'quiet'}
                 busy={update.isPending}
-                onClick={() => update.mutate({ state: archived ? 'draft' : 'archived' })}
+                onClick={() => update.mutate({ state: archived ? p.previousState ?? 'draft' : 'archived' })}
               >
                 {archived ? 'Restore' : 'Archive'}
               </Button>
