@@ -9,6 +9,7 @@ import { errorMiddleware, HttpError } from './http/errors';
 import { mountRoutes, type RouteDef } from './http/routes';
 import { sessionMiddleware } from './services/auth/session';
 import { authRoutes } from './features/auth/auth.routes';
+import type { PasswordVerifier } from './features/auth/auth.service';
 import { studioRoutes } from './features/studio/studio.routes';
 import { clientRoutes } from './features/clients/clients.routes';
 import { projectRoutes } from './features/projects/projects.routes';
@@ -33,6 +34,8 @@ export interface AppDeps {
   storage?: FileStorage;
   /** Structured logs; a logger at the configured level on stdout when not given. */
   logger?: Logger;
+  /** Checks a password at sign-in; scrypt when not given (tests count the calls). */
+  verifyPassword?: PasswordVerifier;
 }
 
 /** Every API route with its access rule: the app mounts exactly this table. */
