@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
-import { verifyPassword } from '../../server/services/auth/passwords';
+import { hashPassword, verifyPassword } from '../../server/services/auth/passwords';
 import { addMember, createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 
 /** `parlour_session=…` from an answer's Set-Cookie, as a browser would send it back. */
@@ -144,6 +144,54 @@ describe('members and roles', () => {
     expect((await viewer.get('/api/projects')).status).toBe(200);
     expect((await owner.delete(`/api/studio/members/${member.id}`)).status).toBe(204);
     expect((await viewer.get('/api/projects')).status).toBe(401);
+  });
+});
+
+describe('choosing a password', () => {
+  const signUpWith = (password: string, email = uniqueEmail('pw')) =>
+    request(t.app).post('/api/auth/sign-up').send({ studioName: 'Rule Studio', name: 'Rae', email, password });
+
+  it('refuses short, blank and common passwords at sign-up with a message a person understands, and makes nothing', async () => {
+    const cases: [string, RegExp][] = [
+      ['ten-chars!', /^Use at least 12 characters\./],
+      [' '.repeat(10), /^Use at least 12 characters\./],
+      [' '.repeat(12), /^A password cannot be only spaces\./],
+      ['\t \n'.repeat(5), /^A password cannot be only spaces\./],
+      // From the common-password list, whatever the case.
+      ['Password1234', /^This is one of the most common passwords/],
+      ['QWERTY123456', /^This is one of the most common passwords/],
+      ['1qaz2wsx3edc', /^This is one of the most common passwords/],
+    ];
+    for (const [password, message] of cases) {
+      const email = uniqueEmail('pw');
+      const res = await signUpWith(password, email);
+      expect(res.status, JSON.stringify(password)).toBe(400);
+      expect(Object.keys(res.body.error.fields)).toEqual(['password']);
+      expect(res.body.error.fields.password).toMatch(message);
+      expect(await t.db.selectFrom('members').select('id').where('email', '=', email).executeTakeFirst()).toBeUndefined();
+    }
+    expect((await signUpWith('maple-window')).status).toBe(201);
+  });
+
+  it('applies the same rule when an invitation is accepted', async () => {
+    const { agent: owner } = await signUpStudio(t.app);
+    const email = uniqueEmail('joiner');
+    await owner.post('/api/studio/invites').send({ email, role: 'designer' });
+    const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
+    const accept = (password: string) => request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'Jo', password });
+    expect((await accept('short-pass')).body.error.fields.password).toMatch(/at least 12 characters/);
+    expect((await accept('qwerty123456')).body.error.fields.password).toMatch(/most common passwords/);
+    // The refusals used nothing up: the link still works.
+    expect((await accept('sunflower-oak')).status).toBe(201);
+  });
+
+  it('still signs in with a password stored before the rule, of 10 characters', async () => {
+    const email = uniqueEmail('older');
+    const studio = await t.db.insertInto('studios').values({ name: 'Older Studio' }).returning('id').executeTakeFirstOrThrow();
+    await t.db.insertInto('members').values({ studio_id: studio.id, email, name: 'Old Timer', role: 'owner', password_hash: await hashPassword('tenchars!!') }).execute();
+    const res = await request(t.app).post('/api/auth/sign-in').send({ email, password: 'tenchars!!' });
+    expect(res.status).toBe(200);
+    expect(String(res.headers['set-cookie'])).toMatch(/parlour_session=/);
   });
 });
 

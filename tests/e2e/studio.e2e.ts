@@ -33,7 +33,9 @@ describe('a studio from sign-up to its first project', () => {
     await page.getByLabel('Password').fill('short');
     await page.getByRole('button', { name: 'Create studio' }).click();
     await expect.poll(() => page.getByRole('alert').count()).toBeGreaterThanOrEqual(3);
-    expect(await page.getByText('Use at least 10 characters.').isVisible()).toBe(true);
+    expect(await page.getByText('Use at least 12 characters.').isVisible()).toBe(true);
+    // The rule itself is shown under the field before anything is typed.
+    expect(await page.getByText('At least 12 characters, and not a common password.').isVisible()).toBe(true);
     expect(await page.getByText('Enter the studio name.').isVisible()).toBe(true);
     await context.close();
   });

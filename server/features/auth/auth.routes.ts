@@ -1,4 +1,5 @@
-import { signInSchema, signUpSchema, type SessionInfo } from '../../../shared/schemas/studio';
+import { signInSchema, type SessionInfo } from '../../../shared/schemas/studio';
+import { signUpSchema } from '../../../shared/schemas/account';
 import { requireCaller, type RouteDef } from '../../http/routes';
 import { notFound } from '../../http/errors';
 import { clearSessionCookie, startSession } from '../../services/auth/session';

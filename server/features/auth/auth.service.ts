@@ -1,5 +1,6 @@
 import type { Db } from '../../db/database';
-import type { SignInBody, SignUpBody } from '../../../shared/schemas/studio';
+import type { SignInBody } from '../../../shared/schemas/studio';
+import type { SignUpBody } from '../../../shared/schemas/account';
 import type { Response } from 'express';
 import type { AppConfig } from '../../config';
 import { HttpError } from '../../http/errors';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { acceptInviteSchema, changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { acceptInviteSchema } from '../../../shared/schemas/account';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, OWNERS, requireCaller, type RouteDef } from '../../http/routes';
 import { HttpError, notFound } from '../../http/errors';
