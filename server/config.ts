@@ -43,6 +43,9 @@ const envSchema = z.object({
     .enum(['true', 'false'])
     .default('false')
     .transform((v) => v === 'true'),
+  // New studios per hour from one client address (IPv6 counted per /64): sign-up is open, so this
+  // is what keeps per-studio limits from being beaten by signing up again. Tests raise it.
+  SIGN_UP_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(5),
 }).refine((c) => c.STORAGE !== 's3' || c.S3_BUCKET, { path: ['S3_BUCKET'], message: 'is required when STORAGE=s3' });
 
 type LogLevel = NonNullable<z.infer<typeof envSchema>['LOG_LEVEL']>;

@@ -5,6 +5,7 @@ import type { Db } from './db/database';
 import type { Mailer } from './services/mail/mailer';
 import type { FileStorage } from './services/storage/storage';
 import type { Logger } from './services/logging/logger';
+import type { PasswordVerifier } from './services/auth/passwords';
 
 export interface AppDeps {
   db: Db;
@@ -14,4 +15,6 @@ export interface AppDeps {
   storage?: FileStorage;
   /** Structured logs; a logger at the configured level on stdout when not given. */
   logger?: Logger;
+  /** Checks a password at sign-in; scrypt when not given (tests count the calls). */
+  verifyPassword?: PasswordVerifier;
 }

@@ -39,12 +39,6 @@ export interface InvitesTable {
   accepted_at: Date | null;
 }
 
-export interface SignInFailuresTable {
-  id: Generated<string>;
-  email: string;
-  at: Timestamp;
-}
-
 export interface ClientsTable {
   id: Generated<string>;
   studio_id: string;
@@ -200,7 +194,6 @@ export interface Database {
   members: MembersTable;
   sessions: SessionsTable;
   invites: InvitesTable;
-  sign_in_failures: SignInFailuresTable;
   clients: ClientsTable;
   projects: ProjectsTable;
   finishes: FinishesTable;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PASSWORD_MAX_LENGTH } from './password-rule';
 
 export const roleSchema = z.enum(['owner', 'designer', 'viewer']);
 export type Role = z.infer<typeof roleSchema>;
@@ -9,34 +10,17 @@ export const emailSchema = z
   .toLowerCase()
   .pipe(z.email({ message: 'Enter an e-mail address like name@example.com.' }));
 
-// At least 10 characters: long enough to resist guessing, short enough to type (common practice).
-export const passwordSchema = z
-  .string()
-  .min(10, 'Use at least 10 characters.')
-  .max(200, 'Use at most 200 characters.');
-
 const nameSchema = (what: string) =>
   z.string().trim().min(1, `Enter ${what}.`).max(120, `Keep ${what} under 120 characters.`);
 
-export const signUpSchema = z.object({
-  studioName: nameSchema('the studio name'),
-  name: nameSchema('your name'),
-  email: emailSchema,
-  password: passwordSchema,
-});
-export type SignUpBody = z.infer<typeof signUpSchema>;
-
 export const signInSchema = z.object({
   email: emailSchema,
-  password: z.string().min(1, 'Enter your password.').max(200),
+  password: z.string().min(1, 'Enter your password.').max(PASSWORD_MAX_LENGTH),
 });
 export type SignInBody = z.infer<typeof signInSchema>;
 
 export const inviteSchema = z.object({ email: emailSchema, role: roleSchema });
 export type InviteBody = z.infer<typeof inviteSchema>;
-
-export const acceptInviteSchema = z.object({ name: nameSchema('your name'), password: passwordSchema });
-export type AcceptInviteBody = z.infer<typeof acceptInviteSchema>;
 
 export const changeRoleSchema = z.object({ role: roleSchema });
 
@@ -66,3 +50,6 @@ export const inviteInfoSchema = z.object({
   acceptedAt: z.string().nullable(),
 });
 export type InviteInfo = z.infer<typeof inviteInfoSchema>;
+
+// Sign-up and invitation bodies (account.ts) name people and studios the same way.
+export { nameSchema };

@@ -13,7 +13,7 @@ import type { MailMessage } from '../../server/services/mail/mailer';
 import { checkerboard, photoLike, rawToJpeg, rawToPng, rawToSharp, zeroPng } from '../../server/services/images/generate';
 import { textureFraction, textureRepeat } from '../../shared/geometry/texture-repeat';
 import type { Finish, PhotoFinish } from '../../shared/schemas/finish';
-import { addMember, signUpStudio, type TestApp } from '../setup/app';
+import { TEST_SIGN_UP_LIMIT, addMember, signUpStudio, type TestApp } from '../setup/app';
 import { seedDemoFinishes } from '../../server/cli/seed-finishes';
 import { dataDirStorage } from '../../server/services/storage/local-disk';
 import { toSceneFinish } from '../../shared/finishes/scene-finish';
@@ -30,7 +30,7 @@ beforeAll(async () => {
   dataDir = mkdtempSync(join(tmpdir(), 'parlour-finishes-'));
   const db = createDb(inject('databaseUrl'), 4);
   const mail: MailMessage[] = [];
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', DATA_DIR: dataDir });
+  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', DATA_DIR: dataDir, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT });
   const deps: AppDeps = { db, mailer: { send: async (m) => void mail.push(m) }, config };
   t = { app: createApp(deps), db, mail, close: () => db.destroy() };
   owner = (await signUpStudio(t.app, 'Finish Studio')).agent;

@@ -10,7 +10,7 @@ import { loadConfig } from '../../server/config';
 import { createDb, type Db } from '../../server/db/database';
 import { createLogger } from '../../server/services/logging/logger';
 import { SESSION_COOKIE } from '../../server/services/auth/session';
-import { TEST_PRESENTATION_KEY, uniqueEmail } from '../setup/app';
+import { TEST_PRESENTATION_KEY, TEST_SIGN_UP_LIMIT, uniqueEmail } from '../setup/app';
 import { presentedProject } from '../ops/lib/fixtures';
 
 const PASSWORD = 'hunter2-but-much-longer';
@@ -26,7 +26,7 @@ let db: Db;
 let app: Express;
 beforeAll(() => {
   db = createDb(inject('databaseUrl'), 4);
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY });
+  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT });
   app = createApp({ db, config, mailer: { send: async () => undefined }, logger: createLogger({ level: 'info', destination: capture }) });
 });
 afterAll(() => db.destroy());

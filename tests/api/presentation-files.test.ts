@@ -15,7 +15,7 @@ import { dataDirStorage } from '../../server/services/storage/local-disk';
 import { photoLike, rawToJpeg } from '../../server/services/images/generate';
 import type { Finish, PhotoFinish } from '../../shared/schemas/finish';
 import type { ClientPresentation, PresentationSummary } from '../../shared/schemas/presentation';
-import { TEST_PRESENTATION_KEY, signUpStudio, type TestApp } from '../setup/app';
+import { TEST_PRESENTATION_KEY, TEST_SIGN_UP_LIMIT, signUpStudio, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
 const SQUARE = { outline: [[0, 0], [4000, 0], [4000, 3500], [0, 3500]] };
@@ -46,7 +46,7 @@ beforeAll(async () => {
   const db = createDb(inject('databaseUrl'), 4);
   const config = loadConfig({
     DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', DATA_DIR: dataDir,
-    PRESENTATION_KEY: TEST_PRESENTATION_KEY,
+    PRESENTATION_KEY: TEST_PRESENTATION_KEY, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
   });
   const deps: AppDeps = { db, mailer: { send: async () => undefined }, config };
   t = { app: createApp(deps), db, mail: [], close: () => db.destroy() };

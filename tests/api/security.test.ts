@@ -113,4 +113,28 @@ describe('rate limits in PostgreSQL', () => {
     const later = await hitRateLimit(t.db, rule, key, new Date(start + rule.windowMs + 1000));
     expect(later.allowed).toBe(true);
   });
+
+  it('asks a refused caller to come back exactly when the sliding window lets the next hit through', async () => {
+    const rule = { bucket: 'test-retry', limit: 10, windowMs: 60_000 };
+    const key = uniqueEmail('key');
+    const start = Math.ceil(Date.now() / rule.windowMs) * rule.windowMs;
+    for (let i = 0; i < 10; i += 1) await hitRateLimit(t.db, rule, key, new Date(start - 1000));
+    // 1 s into the new window: 1 + 10 × (59/60) > 10. The next hit is the window's second, so it
+    // fits once 2 + 10 × (1 − e) ≤ 10, at e = 0.2: 12 s into the window, 11 s from now.
+    const refused = await hitRateLimit(t.db, rule, key, new Date(start + 1000));
+    expect(refused.allowed).toBe(false);
+    expect(refused.retryAfterS).toBe(11);
+    expect((await hitRateLimit(t.db, rule, key, new Date(start + 12_000))).allowed).toBe(true);
+  });
+
+  it('over the limit within one window, the wait runs into the next window as the count slides out', async () => {
+    const rule = { bucket: 'test-retry-next', limit: 4, windowMs: 60_000 };
+    const key = uniqueEmail('key');
+    const start = Math.ceil(Date.now() / rule.windowMs) * rule.windowMs;
+    for (let i = 0; i < 4; i += 1) expect((await hitRateLimit(t.db, rule, key, new Date(start + 30_000))).allowed).toBe(true);
+    // Five in this window: in the next, 1 + 5 × (1 − f) ≤ 4 once f = 0.4, 24 s in: 54 s from now.
+    const refused = await hitRateLimit(t.db, rule, key, new Date(start + 30_000));
+    expect(refused.retryAfterS).toBe(54);
+    expect((await hitRateLimit(t.db, rule, key, new Date(start + rule.windowMs + 24_000))).allowed).toBe(true);
+  });
 });

@@ -29,11 +29,13 @@ describe('a studio from sign-up to its first project', () => {
   it('shows each form error beside its field', async () => {
     const { context, page } = await newPage(browser);
     await page.goto('/sign-up');
+    // The rule is shown under the field before anything is sent; an error takes its place.
+    await page.getByText('At least 12 characters, and not a common password.').waitFor();
     await page.getByLabel('E-mail').fill('not-an-address');
     await page.getByLabel('Password').fill('short');
     await page.getByRole('button', { name: 'Create studio' }).click();
     await expect.poll(() => page.getByRole('alert').count()).toBeGreaterThanOrEqual(3);
-    expect(await page.getByText('Use at least 10 characters.').isVisible()).toBe(true);
+    expect(await page.getByText('Use at least 12 characters.').isVisible()).toBe(true);
     expect(await page.getByText('Enter the studio name.').isVisible()).toBe(true);
     await context.close();
   });

@@ -14,7 +14,7 @@ import { migrateToLatest } from '../../server/db/migrate';
 import { startServer } from '../../server/index';
 import { startStandInSmtp, type StandInSmtp } from '../../server/services/mail/stand-in-smtp';
 import { INVITE_RATE } from '../../server/features/studio/studio.routes';
-import { MAX_FAILURES } from '../../server/features/auth/auth.service';
+import { SIGN_IN_RATE } from '../../server/features/auth/auth.service';
 import { freePort } from '../../scripts/lib/throwaway-cluster';
 import { siblingDatabase, type SiblingDatabase } from './lib/sibling-database';
 
@@ -153,7 +153,7 @@ describe('two instances, one database, one store', () => {
   });
 
   it('counts wrong passwords across both instances', async () => {
-    for (let i = 0; i < MAX_FAILURES; i += 1) {
+    for (let i = 0; i < SIGN_IN_RATE.limit; i += 1) {
       expect((await call(i % 2 === 0 ? a : b, 'POST', '/api/auth/sign-in', { email: 'twin@test.parlour', password: 'not-the-password' }, false)).status).toBe(401);
     }
     expect((await call(b, 'POST', '/api/auth/sign-in', { email: 'twin@test.parlour', password: 'a-long-twin-password' }, false)).status).toBe(429);

@@ -2,7 +2,7 @@
 import { inject } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
-import { createApp } from '../../server/app';
+import { createApp, type AppDeps } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { createDb, type Db } from '../../server/db/database';
 import type { MailMessage, Mailer } from '../../server/services/mail/mailer';
@@ -17,12 +17,25 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-export function createTestApp(): TestApp {
+/** Sign-ups per hour per client address in test apps: every test file signs up studios from loopback. */
+export const TEST_SIGN_UP_LIMIT = '100000';
+
+export interface TestAppOptions {
+  /** Environment on top of the test app's own; `undefined` leaves a variable to its default. */
+  env?: Record<string, string | undefined>;
+  /** Replaces the sign-in password check (to count the calls). */
+  verifyPassword?: AppDeps['verifyPassword'];
+}
+
+export function createTestApp(options: TestAppOptions = {}): TestApp {
   const db = createDb(inject('databaseUrl'), 4);
   const mail: MailMessage[] = [];
   const mailer: Mailer = { send: async (m) => void mail.push(m) };
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY });
-  const app = createApp({ db, mailer, config });
+  const config = loadConfig({
+    DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY,
+    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT, ...options.env,
+  });
+  const app = createApp({ db, mailer, config, verifyPassword: options.verifyPassword });
   return { app, db, mail, close: () => db.destroy() };
 }
 

@@ -1,9 +1,12 @@
-import { signInSchema, signUpSchema, type SessionInfo } from '../../../shared/schemas/studio';
+import { signInSchema, type SessionInfo } from '../../../shared/schemas/studio';
+import { signUpSchema } from '../../../shared/schemas/account';
 import { requireCaller, type RouteDef } from '../../http/routes';
 import { notFound } from '../../http/errors';
 import { clearSessionCookie, startSession } from '../../services/auth/session';
 import { getMember, toMember } from '../studio/members.repository';
-import { signIn, signUp } from './auth.service';
+import { enforceRateLimit, waitInWords } from '../../services/rate-limit/rate-limit';
+import { clientAddressKey } from '../../services/rate-limit/client-address';
+import { signIn, signUp, signUpRate } from './auth.service';
 
 export const authRoutes: RouteDef[] = [
   {
@@ -12,6 +15,8 @@ export const authRoutes: RouteDef[] = [
     access: 'public',
     async handler({ req, res, deps }) {
       const body = signUpSchema.parse(req.body);
+      await enforceRateLimit(deps.db, res, signUpRate(deps.config), clientAddressKey(req.ip), (s) =>
+        `Too many new studios were made from this address. Try again in ${waitInWords(s)}.`);
       const member = await signUp(deps.db, body);
       await startSession(deps.db, res, member.id, deps.config.SECURE_COOKIES);
       res.status(201);
@@ -24,7 +29,7 @@ export const authRoutes: RouteDef[] = [
     access: 'public',
     async handler({ req, res, deps }) {
       const body = signInSchema.parse(req.body);
-      const member = await signIn(deps.db, body);
+      const member = await signIn(deps.db, res, body, deps.verifyPassword);
       await startSession(deps.db, res, member.id, deps.config.SECURE_COOKIES);
       return { ok: true };
     },

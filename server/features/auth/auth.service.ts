@@ -1,13 +1,25 @@
 import type { Db } from '../../db/database';
-import type { SignInBody, SignUpBody } from '../../../shared/schemas/studio';
+import type { SignInBody } from '../../../shared/schemas/studio';
+import type { SignUpBody } from '../../../shared/schemas/account';
+import type { Response } from 'express';
+import type { AppConfig } from '../../config';
 import { HttpError } from '../../http/errors';
-import { dummyPasswordHash, hashPassword, verifyPassword } from '../../services/auth/passwords';
+import { clearRateLimit, enforceRateLimit, waitInWords, type RateRule } from '../../services/rate-limit/rate-limit';
+import { dummyPasswordHash, hashPassword, verifyPassword, type PasswordVerifier } from '../../services/auth/passwords';
 import { findMemberByEmail, insertMember } from '../studio/members.repository';
 
-// Five wrong passwords within 15 minutes lock that e-mail's sign-in for the rest of the window
-// (common practice; OWASP's authentication guidance recommends throttling, no fixed numbers).
-export const MAX_FAILURES = 5;
-export const FAILURE_WINDOW_MS = 15 * 60_000;
+// Five attempts per e-mail within a sliding 15 minutes (common practice; OWASP's authentication
+// guidance recommends throttling, no fixed numbers). Every attempt is counted before its password
+// is checked, so a burst in parallel cannot get past the limit; the right password clears the count.
+export const SIGN_IN_RATE: RateRule = { bucket: 'sign-in', limit: 5, windowMs: 15 * 60_000 };
+
+/** New studios per client address per hour, counted before anything is made (`SIGN_UP_LIMIT_PER_HOUR`). */
+export const signUpRate = (config: Pick<AppConfig, 'SIGN_UP_LIMIT_PER_HOUR'>): RateRule => ({
+  bucket: 'sign-up', limit: config.SIGN_UP_LIMIT_PER_HOUR, windowMs: 60 * 60_000,
+});
+
+/** Checks a password against its stored hash; the app's is scrypt, tests may count the calls. */
+export type { PasswordVerifier } from '../../services/auth/passwords';
 
 export async function signUp(db: Db, body: SignUpBody) {
   const passwordHash = await hashPassword(body.password);
@@ -22,27 +34,15 @@ export async function signUp(db: Db, body: SignUpBody) {
   });
 }
 
-export async function signIn(db: Db, body: SignInBody): Promise<{ id: string }> {
-  const since = new Date(Date.now() - FAILURE_WINDOW_MS);
-  const failures = await db
-    .selectFrom('sign_in_failures')
-    .select((eb) => [eb.fn.countAll<string>().as('n'), eb.fn.min('at').as('first')])
-    .where('email', '=', body.email)
-    .where('at', '>', since)
-    .executeTakeFirstOrThrow();
-  if (Number(failures.n) >= MAX_FAILURES) {
-    const first = failures.first ? new Date(failures.first as Date).getTime() : Date.now();
-    const minutes = Math.max(1, Math.ceil((first + FAILURE_WINDOW_MS - Date.now()) / 60_000));
-    throw new HttpError(429, 'too_many_attempts', `Too many wrong passwords. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`);
-  }
+export async function signIn(db: Db, res: Response, body: SignInBody, verify: PasswordVerifier = verifyPassword): Promise<{ id: string }> {
+  await enforceRateLimit(db, res, SIGN_IN_RATE, body.email, (s) => `Too many attempts to sign in. Try again in ${waitInWords(s)}.`);
   const member = await findMemberByEmail(db, body.email);
-  const ok = await verifyPassword(body.password, member?.password_hash ?? (await dummyPasswordHash()));
+  const ok = await verify(body.password, member?.password_hash ?? (await dummyPasswordHash()));
   if (!member || !ok) {
-    await db.insertInto('sign_in_failures').values({ email: body.email }).execute();
     throw new HttpError(401, 'wrong_password', 'That e-mail and password do not match.', {
       password: 'That e-mail and password do not match.',
     });
   }
-  await db.deleteFrom('sign_in_failures').where('email', '=', body.email).execute();
+  await clearRateLimit(db, SIGN_IN_RATE, body.email);
   return member;
 }

@@ -9,6 +9,7 @@ import { ALL_ROLES, WRITERS, requireCaller, type RouteContext, type RouteDef } f
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import type { Db } from '../../db/database';
 import { newTokenId, toTokenTime } from '../../services/tokens/presentation-token';
+import { limitPresentationMail } from '../../services/rate-limit/mail-limits';
 import { listMembers } from '../studio/members.repository';
 import {
   getPresentation, insertPresentation, insertShownRooms, latestDecision, listPresentations, projectForPresentation, roomsWithOptions,
@@ -121,6 +122,7 @@ export const presentationRoutes: RouteDef[] = [
       const project = await projectOrThrow(db, caller.studioId, p.project_id);
       const to = body.to ?? project.client_email;
       if (!to) throw new HttpError(400, 'invalid', 'The client has no e-mail address. Type one here, or copy the link instead.', { to: 'Enter the client’s e-mail.' });
+      await limitPresentationMail(db, ctx.res, caller.studioId, to);
       const mail = invitationMail({
         to,
         studio: await studioName(db, caller.studioId),

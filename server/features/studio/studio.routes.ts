@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { acceptInviteSchema, changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { acceptInviteSchema } from '../../../shared/schemas/account';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, OWNERS, requireCaller, type RouteDef } from '../../http/routes';
 import { HttpError, notFound } from '../../http/errors';
@@ -8,6 +9,7 @@ import { hashToken, newToken } from '../../services/auth/tokens';
 import { hashPassword } from '../../services/auth/passwords';
 import { startSession } from '../../services/auth/session';
 import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
+import { limitInvitationMail } from '../../services/rate-limit/mail-limits';
 import {
   countOwners, deleteMember, deleteSessionsOf, findMemberByEmail, getMember, insertMember, listMembers, setMemberRole, toMember,
 } from './members.repository';
@@ -94,6 +96,7 @@ export const studioRoutes: RouteDef[] = [
       if (await findMemberByEmail(db, body.email)) {
         throw new HttpError(409, 'email_taken', 'This person already has a Parlour account.', { email: 'Already has an account.' });
       }
+      await limitInvitationMail(db, ctx.res, body.email);
       const studio = await db.selectFrom('studios').select('name').where('id', '=', caller.studioId).executeTakeFirstOrThrow();
       const inviter = await getMember(db, caller.studioId, caller.memberId);
       const { token, hash } = newToken();

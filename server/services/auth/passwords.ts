@@ -17,6 +17,9 @@ export async function hashPassword(password: string): Promise<string> {
   return ['scrypt', PARAMS.N, PARAMS.r, PARAMS.p, salt.toString('base64url'), key.toString('base64url')].join('$');
 }
 
+/** Checks a password against its stored hash (tests may count the calls). */
+export type PasswordVerifier = (password: string, stored: string) => Promise<boolean>;
+
 export async function verifyPassword(password: string, stored: string): Promise<boolean> {
   const [scheme, n, r, p, saltText, keyText] = stored.split('$');
   if (scheme !== 'scrypt' || !saltText || !keyText) return false;

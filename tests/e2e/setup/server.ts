@@ -42,6 +42,8 @@ export default async function setup(project: TestProject) {
     DATA_DIR: join(outboxDir, 'data'),
     CLIENT_DIST: join(root, 'dist'),
     NODE_ENV: 'test',
+    // Every browser test signs up its own studios, all from loopback.
+    SIGN_UP_LIMIT_PER_HOUR: '100000',
   });
   project.provide('baseUrl', app.config.publicUrl);
   project.provide('outboxDir', outboxDir);

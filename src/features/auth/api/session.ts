@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AcceptInviteBody, InviteInfo, SignInBody, SignUpBody } from '../../../../shared/schemas/studio';
+import type { InviteInfo, SignInBody } from '../../../../shared/schemas/studio';
+import type { AcceptInviteBody, SignUpBody } from '../../../../shared/schemas/account';
 import { api } from '../../../lib/api';
 import { sessionKeys } from '../../../lib/session';
 

@@ -6,6 +6,7 @@ import { TextField } from '../../../components/ui/field';
 import { Notice, Spinner } from '../../../components/ui/layout';
 import { ApiError, errorMessage, fieldError } from '../../../lib/api';
 import { inviteQuery, useAcceptInvite } from '../api/session';
+import { NEW_PASSWORD_HINT } from '../../../../shared/schemas/password-rule';
 import { AuthFrame } from './auth-frame';
 
 export function AcceptInvitePage() {
@@ -36,7 +37,7 @@ export function AcceptInvitePage() {
       <form onSubmit={submit} className="flex flex-col gap-5" noValidate>
         {general && <Notice tone="error">{general}</Notice>}
         <TextField label="Your name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(err, 'name')} autoFocus />
-        <TextField label="Choose a password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={fieldError(err, 'password')} hint="At least 10 characters." />
+        <TextField label="Choose a password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={fieldError(err, 'password')} hint={NEW_PASSWORD_HINT} />
         <Button type="submit" variant="primary" busy={accept.isPending}>Accept and join</Button>
       </form>
     </AuthFrame>

@@ -5,6 +5,7 @@ import { TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/layout';
 import { ApiError, fieldError } from '../../../lib/api';
 import { useSignUp } from '../api/session';
+import { NEW_PASSWORD_HINT } from '../../../../shared/schemas/password-rule';
 import { AuthFrame } from './auth-frame';
 
 export function SignUpPage() {
@@ -35,7 +36,7 @@ export function SignUpPage() {
         <TextField label="Studio name" value={form.studioName} onChange={set('studioName')} error={fieldError(err, 'studioName')} autoFocus />
         <TextField label="Your name" autoComplete="name" value={form.name} onChange={set('name')} error={fieldError(err, 'name')} />
         <TextField label="E-mail" type="email" autoComplete="email" value={form.email} onChange={set('email')} error={fieldError(err, 'email')} />
-        <TextField label="Password" type="password" autoComplete="new-password" value={form.password} onChange={set('password')} error={fieldError(err, 'password')} hint="At least 10 characters." />
+        <TextField label="Password" type="password" autoComplete="new-password" value={form.password} onChange={set('password')} error={fieldError(err, 'password')} hint={NEW_PASSWORD_HINT} />
         <Button type="submit" variant="primary" busy={signUp.isPending}>Create studio</Button>
       </form>
     </AuthFrame>
