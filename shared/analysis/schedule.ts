@@ -4,7 +4,7 @@
 // litres; prices stay plain numbers in the studio's own currency.
 import { z } from 'zod';
 import type { RoomShell } from '../schemas/room';
-import type { FinishAssignments, OptionDoc, Piece } from '../schemas/option';
+import { isWebLink, type FinishAssignments, type OptionDoc, type Piece } from '../schemas/option';
 import type { FinishCategory, PriceUnit } from '../schemas/finish';
 import { checkFit } from './fit';
 import { blocksWalking, placedBoxes } from './fit/boxes';
@@ -438,7 +438,7 @@ function pieceLines(pieces: readonly Piece[], finishes: FinishLookup): ScheduleL
       total: existing ? 0 : price === null ? null : roundMoney(price * count),
       unpricedReason: !existing && price === null ? 'No price on the piece yet.' : null,
       supplier: null,
-      supplierUrl: p.supplierUrl ?? null,
+      supplierUrl: p.supplierUrl && isWebLink(p.supplierUrl) ? p.supplierUrl : null,
       code: null,
       colourHex: null,
     };

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nameText } from './common';
 
 export const roleSchema = z.enum(['owner', 'designer', 'viewer']);
 export type Role = z.infer<typeof roleSchema>;
@@ -15,8 +16,7 @@ export const passwordSchema = z
   .min(10, 'Use at least 10 characters.')
   .max(200, 'Use at most 200 characters.');
 
-const nameSchema = (what: string) =>
-  z.string().trim().min(1, `Enter ${what}.`).max(120, `Keep ${what} under 120 characters.`);
+const nameSchema = (what: string) => nameText(120, `Keep ${what} under 120 characters.`).min(1, `Enter ${what}.`);
 
 export const signUpSchema = z.object({
   studioName: nameSchema('the studio name'),
