@@ -28,7 +28,7 @@ export const ROOM_LIMITS = {
 const mm = (value: number) => `${value.toLocaleString('en-GB')} mm`;
 /** A finite length in mm; `max` bounds its size either way (±max when it may be negative). */
 export const boundedMm = (max: number) =>
-  z.number({ message: 'must be a number (mm)' }).finite('must be a finite number (mm)').min(-max, `must be at least −${mm(max)}`).max(max, `must be at most ${mm(max)}`);
+  z.number({ message: 'must be a finite number (mm)' }).finite('must be a finite number (mm)').min(-max, `must be at least −${mm(max)}`).max(max, `must be at most ${mm(max)}`);
 const coordinateMm = boundedMm(ROOM_LIMITS.coordinateMm);
 const positiveMm = (max: number) => boundedMm(max).positive({ message: 'must be more than 0 mm' });
 const nonNegativeMm = (max: number) => boundedMm(max).nonnegative({ message: 'cannot be negative' });
