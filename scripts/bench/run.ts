@@ -3,12 +3,14 @@ import { benchFit } from './fit';
 import { benchGeometry } from './geometry';
 import { benchEditor } from './editor';
 import { benchImages } from './images';
+import { benchLimits } from './limits';
 
 const benches: { name: string; run: () => Promise<void> }[] = [
   { name: 'geometry', run: benchGeometry },
   { name: 'images', run: benchImages },
   { name: 'fit', run: benchFit },
   { name: 'editor', run: benchEditor },
+  { name: 'limits', run: benchLimits },
 ];
 
 for (const bench of benches) {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import { optionDocSchema, type PieceInput } from '../schemas/option';
 import {
-  buildSchedule, compareOption, freeFloorShare, projectTakeoff, roomTakeoff, surfaceLabel, takeoffQuery, takeoffQuerySchema,
+  FREE_FLOOR_CELL_MM, MAX_FREE_FLOOR_CELLS, buildSchedule, compareOption, freeFloorCellMm, freeFloorShare, projectTakeoff, roomTakeoff, surfaceLabel, takeoffQuery, takeoffQuerySchema,
   takeoffSettingsSchema, type FinishInfo, type PaintInfo, type PhotoInfo,
 } from './schedule';
 
@@ -130,6 +130,18 @@ describe('freeFloorShare and compareOption', () => {
     }).pieces;
     // 4 m² of 12 m² covered → two thirds free
     expect(freeFloorShare(shell, pieces)).toBeCloseTo(2 / 3, 2);
+  });
+
+  it('measures a 1,000 m² room on a grid of at most 250,000 cells, as exactly', () => {
+    expect(freeFloorCellMm(shell.outline)).toBe(FREE_FLOOR_CELL_MM);
+    const side = 31_600;
+    const hall = roomShellSchema.parse({ outline: [[0, 0], [side, 0], [side, side], [0, side]] });
+    const cell = freeFloorCellMm(hall.outline);
+    expect(cell).toBe(64);
+    expect((side / cell) ** 2).toBeLessThanOrEqual(MAX_FREE_FLOOR_CELLS);
+    // A 10 m × 10 m platform in the middle: 100 m² of 998.56 m² covered (derived) → 89.99 % free.
+    const platform = optionDocSchema.parse({ pieces: [piece({ id: 'stage', x: side / 2, y: side / 2, width: 10_000, depth: 10_000, height: 500 })] }).pieces;
+    expect(freeFloorShare(hall, platform)).toBeCloseTo(1 - 100 / 998.56, 3);
   });
 
   it('puts budget, new pieces, findings and free floor side by side', () => {

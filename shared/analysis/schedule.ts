@@ -4,7 +4,8 @@
 // litres; prices stay plain numbers in the studio's own currency.
 import { z } from 'zod';
 import type { RoomShell } from '../schemas/room';
-import type { FinishAssignments, OptionDoc, Piece } from '../schemas/option';
+import { boundsMm } from '../geometry/polygon';
+import { isWebLink, type FinishAssignments, type OptionDoc, type Piece } from '../schemas/option';
 import type { FinishCategory, PriceUnit } from '../schemas/finish';
 import { checkFit } from './fit';
 import { blocksWalking, placedBoxes } from './fit/boxes';
@@ -438,7 +439,7 @@ function pieceLines(pieces: readonly Piece[], finishes: FinishLookup): ScheduleL
       total: existing ? 0 : price === null ? null : roundMoney(price * count),
       unpricedReason: !existing && price === null ? 'No price on the piece yet.' : null,
       supplier: null,
-      supplierUrl: p.supplierUrl ?? null,
+      supplierUrl: p.supplierUrl && isWebLink(p.supplierUrl) ? p.supplierUrl : null,
       code: null,
       colourHex: null,
     };
@@ -568,6 +569,18 @@ export function buildSchedule(shell: RoomShell, doc: OptionDoc, finishes: Finish
 
 /** Grid cell for measuring free floor, mm: 2 cm keeps the share within a fraction of a per cent. */
 export const FREE_FLOOR_CELL_MM = 20;
+/**
+ * The most cells the free-floor grid may have: a 10 m × 10 m box at 2 cm. A larger room gets
+ * coarser cells, so a 1,000 m² room costs what a 100 m² one does (its share, to one decimal, is
+ * no less exact: each cell is a smaller part of the floor).
+ */
+export const MAX_FREE_FLOOR_CELLS = 250_000;
+
+/** The free-floor grid's cell for an outline (plan mm): 20 mm, or coarser to stay within MAX_FREE_FLOOR_CELLS. */
+export function freeFloorCellMm(outline: readonly (readonly [number, number])[]): number {
+  const { minX, minY, maxX, maxY } = boundsMm(outline);
+  return Math.max(FREE_FLOOR_CELL_MM, Math.ceil(Math.sqrt(((maxX - minX) * (maxY - minY)) / MAX_FREE_FLOOR_CELLS)));
+}
 
 /**
  * The share (0–1) of a room's floor (plan mm) not under a placed piece one walks round: rugs and
@@ -575,7 +588,7 @@ export const FREE_FLOOR_CELL_MM = 20;
  */
 export function freeFloorShare(shell: RoomShell, pieces: readonly Piece[]): number {
   const obstacles = placedBoxes(pieces).filter((b) => blocksWalking(b.piece));
-  const grid = rasteriseFloor(shell.outline, obstacles, FREE_FLOOR_CELL_MM);
+  const grid = rasteriseFloor(shell.outline, obstacles, freeFloorCellMm(shell.outline));
   let inside = 0;
   let free = 0;
   for (const label of grid.label) {

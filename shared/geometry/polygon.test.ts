@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { areaMm2, boundsMm, findSelfCrossings, perimeterMm, signedAreaMm2, triangulatePolygon, windingOnPlan } from './polygon';
+import { MAX_REPORTED_CROSSINGS, areaMm2, boundsMm, findSelfCrossings, perimeterMm, segmentsTouch, signedAreaMm2, triangulatePolygon, windingOnPlan } from './polygon';
+import { combOutline, starOutline } from './test-outlines';
+import { cross, distance, dot, sub } from './vec';
+import { POINT_TOLERANCE_MM } from './tolerances';
 import type { Vec2 } from './vec';
 
 const rectangle: Vec2[] = [[0, 0], [4200, 0], [4200, 3600], [0, 3600]];
@@ -48,6 +51,57 @@ describe('findSelfCrossings', () => {
 
   it('finds a corner touching another wall', () => {
     expect(findSelfCrossings([[0, 0], [4000, 0], [4000, 3000], [2000, 0], [0, 3000]]).length).toBeGreaterThan(0);
+  });
+
+  it('stops after a few crossings, even when every wall crosses nearly every other', () => {
+    const star = starOutline(200);
+    expect(star).toHaveLength(200);
+    // Every pair, unlimited: the star really is the worst case for the list (thousands of pairs).
+    expect(findSelfCrossings(star, Infinity).length).toBeGreaterThan(15_000);
+    const reported = findSelfCrossings(star);
+    expect(reported).toHaveLength(MAX_REPORTED_CROSSINGS);
+    expect(MAX_REPORTED_CROSSINGS).toBe(20);
+    expect(reported[0]).toEqual({ wallA: 0, wallB: 2 });
+  });
+
+  it('finds nothing in 200-corner combs, where every pair of walls must be looked at', () => {
+    for (const comb of [combOutline(200), combOutline(200, { toothMm: 100, slantMm: 10_000 })]) {
+      expect(comb).toHaveLength(200);
+      expect(findSelfCrossings(comb)).toEqual([]);
+    }
+    // One tooth bent back across its neighbour is still found.
+    const bent = combOutline(200);
+    bent[5] = [-300, 5000];
+    expect(findSelfCrossings(bent).length).toBeGreaterThan(0);
+  });
+
+  it('agrees pair for pair with segmentsTouch on random outlines', () => {
+    // The plain definition: every pair tested with segmentsTouch, neighbours only when folded back.
+    const reference = (points: readonly Vec2[]) => {
+      const found: { wallA: number; wallB: number }[] = [];
+      const n = points.length;
+      for (let i = 0; i < n; i++) {
+        for (let j = i + 1; j < n; j++) {
+          const [a, b, c, d] = [points[i], points[(i + 1) % n], points[j], points[(j + 1) % n]];
+          if (j === i + 1 || (i === 0 && j === n - 1)) {
+            const [shared, awayA, awayB] = j === i + 1 ? [b, a, d] : [a, b, c];
+            const u = sub(awayA, shared);
+            const v = sub(awayB, shared);
+            if (Math.abs(cross(u, v)) / Math.max(distance(awayA, shared), 1) < POINT_TOLERANCE_MM && dot(u, v) > 0) found.push({ wallA: i, wallB: j });
+          } else if (segmentsTouch(a, b, c, d)) found.push({ wallA: i, wallB: j });
+        }
+      }
+      return found;
+    };
+    let seed = 12345;
+    // A small linear congruential generator (Numerical Recipes' constants), so the run repeats.
+    const random = () => ((seed = (seed * 1664525 + 1013904223) >>> 0) / 2 ** 32);
+    for (let trial = 0; trial < 300; trial++) {
+      const n = 4 + (trial % 9);
+      // Whole 500 mm steps make collinear walls and touching corners common.
+      const points: Vec2[] = Array.from({ length: n }, () => [Math.floor(random() * 9) * 500, Math.floor(random() * 9) * 500]);
+      expect(findSelfCrossings(points, Infinity)).toEqual(reference(points));
+    }
   });
 });
 

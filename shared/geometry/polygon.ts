@@ -77,28 +77,89 @@ export interface WallCrossing {
   wallB: number;
 }
 
-/** Pairs of walls of a plan outline (mm) that cross each other; empty for a simple polygon. */
-export function findSelfCrossings(points: readonly Vec2[]): WallCrossing[] {
+/** The most crossings findSelfCrossings reports: enough to show where an outline goes wrong. */
+export const MAX_REPORTED_CROSSINGS = 20;
+
+// orientation() above on plain numbers, with the wall's scale worked out once.
+function side(ax: number, ay: number, bx: number, by: number, scaleMm: number, px: number, py: number): number {
+  const value = (bx - ax) * (py - ay) - (by - ay) * (px - ax);
+  return Math.abs(value) / scaleMm < POINT_TOLERANCE_MM ? 0 : Math.sign(value);
+}
+
+// onSegment() above on plain numbers.
+function within(ax: number, ay: number, bx: number, by: number, px: number, py: number): boolean {
+  return (
+    px <= Math.max(ax, bx) + POINT_TOLERANCE_MM && px >= Math.min(ax, bx) - POINT_TOLERANCE_MM &&
+    py <= Math.max(ay, by) + POINT_TOLERANCE_MM && py >= Math.min(ay, by) - POINT_TOLERANCE_MM
+  );
+}
+
+/** segmentsTouch() on plain numbers, given each wall's scale (its length, at least 1 mm). */
+function wallsTouch(ax: number, ay: number, bx: number, by: number, sab: number, cx: number, cy: number, dx: number, dy: number, scd: number): boolean {
+  const o1 = side(ax, ay, bx, by, sab, cx, cy);
+  const o2 = side(ax, ay, bx, by, sab, dx, dy);
+  const o3 = side(cx, cy, dx, dy, scd, ax, ay);
+  const o4 = side(cx, cy, dx, dy, scd, bx, by);
+  if (o1 !== o2 && o3 !== o4 && o1 * o2 <= 0 && o3 * o4 <= 0) return true;
+  return (
+    (o1 === 0 && within(ax, ay, bx, by, cx, cy)) ||
+    (o2 === 0 && within(ax, ay, bx, by, dx, dy)) ||
+    (o3 === 0 && within(cx, cy, dx, dy, ax, ay)) ||
+    (o4 === 0 && within(cx, cy, dx, dy, bx, by))
+  );
+}
+
+/**
+ * Pairs of walls of a plan outline (mm) that cross each other, at most `limit` of them (the first
+ * found, wall by wall); empty for a simple polygon. Every pair is tested as segmentsTouch does, on
+ * plain numbers with each wall's length and box worked out once. Walls whose boxes lie more than
+ * the point tolerance apart are passed over: they cannot share a point. (segmentsTouch, whose
+ * side test is per infinite line, also calls two nearly collinear walls that do not overlap
+ * "touching"; this does not.) The 200-corner cap stays under a millisecond either way.
+ */
+export function findSelfCrossings(points: readonly Vec2[], limit = MAX_REPORTED_CROSSINGS): WallCrossing[] {
   const n = points.length;
   const crossings: WallCrossing[] = [];
+  const xs = new Float64Array(n + 1);
+  const ys = new Float64Array(n + 1);
+  for (let i = 0; i <= n; i++) [xs[i], ys[i]] = points[i % n];
+  const scales = new Float64Array(n);
+  const lows = new Float64Array(2 * n);
+  const highs = new Float64Array(2 * n);
   for (let i = 0; i < n; i++) {
-    const a = points[i];
-    const b = points[(i + 1) % n];
+    scales[i] = Math.max(Math.hypot(xs[i] - xs[i + 1], ys[i] - ys[i + 1]), 1);
+    lows[2 * i] = Math.min(xs[i], xs[i + 1]) - POINT_TOLERANCE_MM;
+    lows[2 * i + 1] = Math.min(ys[i], ys[i + 1]) - POINT_TOLERANCE_MM;
+    highs[2 * i] = Math.max(xs[i], xs[i + 1]) + POINT_TOLERANCE_MM;
+    highs[2 * i + 1] = Math.max(ys[i], ys[i + 1]) + POINT_TOLERANCE_MM;
+  }
+  for (let i = 0; i < n; i++) {
+    // A wall under 1 mm has a wider side tolerance than its box shows: test it against every wall.
+    const shortI = Math.hypot(xs[i] - xs[i + 1], ys[i] - ys[i + 1]) < 1;
     for (let j = i + 1; j < n; j++) {
-      const c = points[j];
-      const d = points[(j + 1) % n];
-      const adjacent = j === i + 1 || (i === 0 && j === n - 1);
-      if (adjacent) {
+      let touch: boolean;
+      if (j === i + 1 || (i === 0 && j === n - 1)) {
         // Neighbours share a corner; they only cross when one doubles back along the other.
-        const shared = j === i + 1 ? b : a;
-        const awayA = j === i + 1 ? a : b;
-        const awayB = j === i + 1 ? d : c;
-        const u = sub(awayA, shared);
-        const v = sub(awayB, shared);
-        const folded = Math.abs(cross(u, v)) / Math.max(distance(awayA, shared), 1) < POINT_TOLERANCE_MM && dot(u, v) > 0;
-        if (folded) crossings.push({ wallA: i, wallB: j });
-      } else if (segmentsTouch(a, b, c, d)) {
+        const shared = j === i + 1 ? i + 1 : i;
+        const awayA = j === i + 1 ? i : i + 1;
+        const awayB = j === i + 1 ? j + 1 : j;
+        const ux = xs[awayA] - xs[shared];
+        const uy = ys[awayA] - ys[shared];
+        const vx = xs[awayB] - xs[shared];
+        const vy = ys[awayB] - ys[shared];
+        touch = Math.abs(ux * vy - uy * vx) / Math.max(Math.hypot(ux, uy), 1) < POINT_TOLERANCE_MM && ux * vx + uy * vy > 0;
+      } else if (
+        !shortI && scales[j] > 1 &&
+        (lows[2 * j] > highs[2 * i] + POINT_TOLERANCE_MM || highs[2 * j] < lows[2 * i] - POINT_TOLERANCE_MM ||
+          lows[2 * j + 1] > highs[2 * i + 1] + POINT_TOLERANCE_MM || highs[2 * j + 1] < lows[2 * i + 1] - POINT_TOLERANCE_MM)
+      ) {
+        touch = false;
+      } else {
+        touch = wallsTouch(xs[i], ys[i], xs[i + 1], ys[i + 1], scales[i], xs[j], ys[j], xs[j + 1], ys[j + 1], scales[j]);
+      }
+      if (touch) {
         crossings.push({ wallA: i, wallB: j });
+        if (crossings.length >= limit) return crossings;
       }
     }
   }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema, type RoomShellInput } from '../schemas/room';
 import { validateRoomShell } from './validate';
+import { starOutline } from './test-outlines';
 
 function problems(input: Partial<RoomShellInput>) {
   const shell = roomShellSchema.parse({ outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]], ...input });
@@ -25,6 +26,12 @@ describe('validateRoomShell', () => {
 
   it('refuses a self-crossing outline', () => {
     expect(problems({ outline: [[0, 0], [3000, 0], [0, 3000], [3000, 3000]] })).toEqual([{ path: 'room.outline', message: 'wall 1 crosses wall 3' }]);
+  });
+
+  it('lists at most 20 crossings of a 200-corner star whose every wall crosses nearly all others', () => {
+    const found = problems({ outline: starOutline(200) });
+    expect(found).toHaveLength(20);
+    expect(found[0]).toEqual({ path: 'room.outline', message: 'wall 0 crosses wall 2' });
   });
 
   it('refuses an opening longer than its wall', () => {

@@ -1,6 +1,6 @@
 // Finishes: photo finishes (a processed photo with the real size its crop covers) and paints.
 import { z } from 'zod';
-import { optionalText } from './common';
+import { nameText, optionalText } from './common';
 
 export const FINISH_CATEGORIES = ['floor', 'wall', 'tile', 'wood', 'stone', 'fabric', 'wallpaper', 'other'] as const;
 export const finishCategorySchema = z.enum(FINISH_CATEGORIES, { message: 'Pick a category from the list.' });
@@ -64,7 +64,7 @@ const repeatMm = z.coerce
   .min(1, 'Make it at least 1 mm.')
   .max(100_000, 'Keep it under 100 m.');
 
-const nameSchema = z.string().trim().min(1, 'Enter a name.').max(120, 'Keep the name under 120 characters.');
+const nameSchema = nameText(120, 'Keep the name under 120 characters.').min(1, 'Enter a name.');
 const priceSchema = z.number({ message: 'Enter a price.' }).finite().nonnegative('A price cannot be negative.').max(1_000_000, 'Keep the price under 1,000,000.').nullable().optional();
 
 export const createPaintSchema = z.object({
@@ -107,7 +107,7 @@ export const finishPatchSchema = z
 export type FinishPatch = z.input<typeof finishPatchSchema>;
 
 export const finishListQuerySchema = z.object({
-  q: z.string().trim().max(120).optional(),
+  q: nameText(120).optional(),
   category: finishCategorySchema.optional(),
   kind: z.enum(['photo', 'paint']).optional(),
 });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { validateRoomShell, type FieldProblem } from '../geometry/validate';
-import { finishAssignmentsSchema, pieceSchema } from './option';
-import { roomShellSchema } from './room';
+import { finishAssignmentsSchema, optionDocSchema, optionNameSchema, optionNoteSchema } from './option';
+import { roomNameText, roomShellSchema } from './room';
 
 export const PLAN_FILE_FORMAT = 'parlour-plan';
 export const PLAN_FILE_VERSION = 1;
@@ -10,11 +10,13 @@ export const PLAN_FILE_VERSION = 1;
 export const planFileSchema = z.object({
   format: z.literal(PLAN_FILE_FORMAT),
   version: z.literal(PLAN_FILE_VERSION),
-  room: roomShellSchema.extend({ name: z.string() }),
+  // The room, option and piece schemas of the API, so a plan file meets the same limits.
+  // An empty room name is allowed here: the import names the room "Imported room".
+  room: roomShellSchema.safeExtend({ name: roomNameText }),
   option: z.object({
-    name: z.string(),
-    note: z.string().optional(),
-    pieces: z.array(pieceSchema).default([]),
+    name: optionNameSchema,
+    note: optionNoteSchema.optional(),
+    pieces: optionDocSchema.shape.pieces,
     finishes: finishAssignmentsSchema.optional(),
   }),
 });

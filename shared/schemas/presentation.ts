@@ -4,6 +4,7 @@ import type { SceneFinish } from '../finishes/scene-finish';
 import { pieceSchema } from './option';
 import { roomShellSchema } from './room';
 import { emailSchema } from './studio';
+import { noteText } from './common';
 
 /** A new link stays open this many days unless the designer picks another expiry. */
 export const DEFAULT_EXPIRY_DAYS = 30;
@@ -44,7 +45,7 @@ export const createPresentationSchema = z.object({
     .min(1, 'Pick at least one room.')
     .max(MAX_ROOMS_PER_PRESENTATION, `Show at most ${MAX_ROOMS_PER_PRESENTATION} rooms.`)
     .refine((rooms) => new Set(rooms.map((r) => r.roomId)).size === rooms.length, 'Each room once.'),
-  message: z.string().trim().max(4000, 'Keep the message under 4000 characters.').default(''),
+  message: noteText(4000, 'Keep the message under 4000 characters.').default(''),
   showPrices: z.boolean().default(false),
   expiresInDays: days.default(DEFAULT_EXPIRY_DAYS),
 });
@@ -64,7 +65,7 @@ export type DecideProjectBody = z.input<typeof decideProjectSchema>;
 
 export const choiceBodySchema = z.object({
   optionId: z.uuid({ message: 'Pick one of the options.' }),
-  comment: z.string().trim().max(MAX_COMMENT_LENGTH, `Keep the comment under ${MAX_COMMENT_LENGTH} characters.`).default(''),
+  comment: noteText(MAX_COMMENT_LENGTH, `Keep the comment under ${MAX_COMMENT_LENGTH} characters.`).default(''),
 });
 export type ChoiceBody = z.input<typeof choiceBodySchema>;
 

@@ -1,12 +1,12 @@
 import { z } from 'zod';
 import { emailSchema } from './studio';
-import { optionalText, sortSchema } from './common';
+import { nameText, optionalText, sortSchema } from './common';
 
 export const projectStateSchema = z.enum(['draft', 'presented', 'decided', 'archived']);
 export type ProjectState = z.infer<typeof projectStateSchema>;
 
 export const clientBodySchema = z.object({
-  name: z.string().trim().min(1, 'Enter the client’s name.').max(120, 'Keep the name under 120 characters.'),
+  name: nameText(120, 'Keep the name under 120 characters.').min(1, 'Enter the client’s name.'),
   email: z
     .union([z.literal(''), emailSchema])
     .transform((v) => (v === '' ? null : v))
@@ -27,9 +27,11 @@ export const clientSchema = z.object({
 });
 export type Client = z.infer<typeof clientSchema>;
 
+const projectNameSchema = nameText(120, 'Keep the name under 120 characters.').min(1, 'Enter a project name.');
+
 export const createProjectSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter a project name.').max(120, 'Keep the name under 120 characters.'),
+    name: projectNameSchema,
     address: optionalText(300),
     clientId: z.uuid({ message: 'Pick a client.' }).optional(),
     newClient: clientBodySchema.optional(),
@@ -41,14 +43,14 @@ export const createProjectSchema = z
 export type CreateProjectBody = z.infer<typeof createProjectSchema>;
 
 export const projectPatchSchema = z.object({
-  name: z.string().trim().min(1, 'Enter a project name.').max(120).optional(),
+  name: projectNameSchema.optional(),
   address: optionalText(300),
   state: projectStateSchema.optional(),
 });
 export type ProjectPatch = z.infer<typeof projectPatchSchema>;
 
 export const listQuerySchema = z.object({
-  q: z.string().trim().max(120).optional(),
+  q: nameText(120).optional(),
   sort: sortSchema,
   archived: z.enum(['include', 'exclude', 'only']).default('exclude'),
 });

@@ -1,11 +1,11 @@
 // Bodies and answers of the rooms and options API.
 import { z } from 'zod';
-import { roomShellSchema, type RoomShell } from './room';
-import { optionDocSchema, type OptionDoc } from './option';
+import { versionSchema as version } from './common';
+import { roomNameSchema as roomName, roomShellSchema, type RoomShell } from './room';
+import { optionDocSchema, optionNameSchema as optionName, optionNoteSchema, type OptionDoc } from './option';
 
-const roomName = z.string().trim().min(1, 'Give the room a name.').max(80, 'Keep the name under 80 characters.');
-const optionName = z.string().trim().max(80, 'Keep the name under 80 characters.');
-const version = z.number().int().positive();
+/** How many rooms a project and options a room may hold: more than any real job needs (common practice). */
+export const PROJECT_LIMITS = { roomsPerProject: 60, optionsPerRoom: 12 } as const;
 
 export const createRoomSchema = z.object({ name: roomName, shell: roomShellSchema });
 export type CreateRoomBody = z.input<typeof createRoomSchema>;
@@ -15,7 +15,7 @@ export type SaveRoomBody = z.input<typeof saveRoomSchema>;
 
 export const createOptionSchema = z.object({
   name: optionName.default(''),
-  note: z.string().max(2000).default(''),
+  note: optionNoteSchema.default(''),
   // Duplicate this option's pieces and finishes (it must belong to the same room).
   fromOptionId: z.uuid().optional(),
 });
@@ -23,7 +23,7 @@ export type CreateOptionBody = z.input<typeof createOptionSchema>;
 
 export const saveOptionSchema = z.object({
   name: optionName.optional(),
-  note: z.string().max(2000).optional(),
+  note: optionNoteSchema.optional(),
   doc: optionDocSchema.optional(),
   version,
 });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { PASSWORD_MAX_LENGTH } from './password-rule';
+import { nameText } from './common';
 
 export const roleSchema = z.enum(['owner', 'designer', 'viewer']);
 export type Role = z.infer<typeof roleSchema>;
@@ -10,8 +11,7 @@ export const emailSchema = z
   .toLowerCase()
   .pipe(z.email({ message: 'Enter an e-mail address like name@example.com.' }));
 
-const nameSchema = (what: string) =>
-  z.string().trim().min(1, `Enter ${what}.`).max(120, `Keep ${what} under 120 characters.`);
+const nameSchema = (what: string) => nameText(120, `Keep ${what} under 120 characters.`).min(1, `Enter ${what}.`);
 
 export const signInSchema = z.object({
   email: emailSchema,

@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { createDb, type Db } from '../../server/db/database';
-import { TEST_PRESENTATION_KEY, uniqueEmail } from '../setup/app';
+import { TEST_PRESENTATION_KEY, TEST_SIGN_UP_LIMIT, uniqueEmail } from '../setup/app';
 import type { Express } from 'express';
 
 let db: Db;
@@ -24,7 +24,7 @@ beforeAll(() => {
   writeFileSync(join(dist, 'index.html'), '<!doctype html><title>Parlour</title>');
   writeFileSync(join(dist, 'assets', 'app-1234.js'), 'console.log(1)');
   db = createDb(inject('databaseUrl'), 2);
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: dist, PRESENTATION_KEY: TEST_PRESENTATION_KEY });
+  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: dist, PRESENTATION_KEY: TEST_PRESENTATION_KEY, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT });
   app = createApp({ db, mailer: { send: async () => undefined }, config });
 });
 afterAll(async () => {

@@ -1,4 +1,4 @@
-import { idParamSchema } from '../../../shared/schemas/common';
+import { idParamSchema, withoutUncleanCharacters } from '../../../shared/schemas/common';
 import {
   centredSquareCrop, createPaintSchema, finishListQuerySchema, finishPatchSchema, photoUploadFieldsSchema, type EdgeBlend,
 } from '../../../shared/schemas/finish';
@@ -27,7 +27,7 @@ async function finishResponse(db: Db, row: FinishRow) {
 
 /** A readable finish name from a file name: "oak_boards-02.jpg" → "Oak boards 02". */
 export function nameFromFileName(fileName: string): string {
-  const stem = fileName.replace(/\.[^.]*$/, '').replace(/[_-]+/g, ' ').replace(/\s+/g, ' ').trim().slice(0, 120);
+  const stem = withoutUncleanCharacters(fileName).replace(/\.[^.]*$/, '').replace(/[_-]+/g, ' ').replace(/\s+/g, ' ').trim().slice(0, 120);
   return stem ? stem[0].toUpperCase() + stem.slice(1) : 'Photo finish';
 }
 

@@ -3,7 +3,7 @@
 import type { AppConfig } from '../../config';
 import type { Db } from '../../db/database';
 import { HttpError } from '../../http/errors';
-import { optionDocSchema, type OptionDoc, type Piece } from '../../../shared/schemas/option';
+import { optionDocSchema, withoutNonWebLinks, type OptionDoc, type Piece } from '../../../shared/schemas/option';
 import { toSceneFinish, type SceneFinish } from '../../../shared/finishes/scene-finish';
 import type { Finish } from '../../../shared/schemas/finish';
 import { roomShellSchema } from '../../../shared/schemas/room';
@@ -157,7 +157,7 @@ export function finishIdsOf(doc: OptionDoc): string[] {
 /** The finish ids the shown options of a presentation use: the finishes whose files its link may load. */
 export async function presentationFinishIds(db: Db, p: PresentationRow): Promise<string[]> {
   const shown = await listShownOptions(db, [p.id]);
-  return [...new Set(shown.flatMap((s) => finishIdsOf(optionDocSchema.parse(s.doc))))];
+  return [...new Set(shown.flatMap((s) => finishIdsOf(optionDocSchema.parse(withoutNonWebLinks(s.doc)))))];
 }
 
 /** `/api/files/<name>` as the link's own route, so the client loads textures without an account. */
@@ -196,7 +196,7 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
   ]);
   if (!project) throw linkNotFound();
   const grouped = groupByRoom(shown);
-  const docs = new Map(shown.map((s) => [s.option_id, optionDocSchema.parse(s.doc)]));
+  const docs = new Map(shown.map((s) => [s.option_id, optionDocSchema.parse(withoutNonWebLinks(s.doc))]));
   // Holding-area pieces are the designer's working space, not part of the proposal.
   const placed = (id: string) => docs.get(id)!.pieces.filter((piece) => piece.placed);
   const finishIds = [...new Set(shown.flatMap((s) => placed(s.option_id).map((piece) => piece.finishId)).filter((id): id is string => Boolean(id && UUID.test(id))))];

@@ -2,7 +2,7 @@ import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import { HttpError } from '../../http/errors';
 import { roomShellSchema } from '../../../shared/schemas/room';
-import { optionDocSchema } from '../../../shared/schemas/option';
+import { optionDocSchema, withoutNonWebLinks } from '../../../shared/schemas/option';
 import type { OptionRecord, RoomRecord } from '../../../shared/schemas/room-api';
 
 type RoomRow = { id: string; project_id: string; name: string; position: number; shell: unknown; version: number; updated_at: Date };
@@ -28,7 +28,7 @@ export const toOption = (r: OptionRow): OptionRecord => ({
   name: r.name,
   note: r.note,
   position: r.position,
-  doc: optionDocSchema.parse(r.doc),
+  doc: optionDocSchema.parse(withoutNonWebLinks(r.doc)),
   version: r.version,
   updatedAt: r.updated_at.toISOString(),
 });
@@ -45,6 +45,23 @@ export async function listRooms(db: Db, studioId: string, projectId: string) {
     .orderBy('position')
     .orderBy('created_at')
     .execute();
+}
+
+/**
+ * How many rooms a project holds, with the project's row locked until the transaction ends, so
+ * parallel creations count one after the other and a cap cannot be passed by racing it.
+ */
+export async function countRoomsLocked(trx: Db, projectId: string): Promise<number> {
+  await trx.selectFrom('projects').select('id').where('id', '=', projectId).forUpdate().execute();
+  const r = await trx.selectFrom('rooms').select((eb) => eb.fn.countAll<string>().as('n')).where('project_id', '=', projectId).executeTakeFirstOrThrow();
+  return Number(r.n);
+}
+
+/** How many options a room holds, with the room's row locked as in countRoomsLocked. */
+export async function countOptionsLocked(trx: Db, roomId: string): Promise<number> {
+  await trx.selectFrom('rooms').select('id').where('id', '=', roomId).forUpdate().execute();
+  const r = await trx.selectFrom('options').select((eb) => eb.fn.countAll<string>().as('n')).where('room_id', '=', roomId).executeTakeFirstOrThrow();
+  return Number(r.n);
 }
 
 export async function getRoom(db: Db, studioId: string, id: string): Promise<RoomRecord | undefined> {

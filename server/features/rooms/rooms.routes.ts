@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { optionDocSchema } from '../../../shared/schemas/option';
 import {
-  createOptionSchema, createRoomSchema, reorderOptionsSchema, saveOptionSchema, saveRoomSchema,
+  PROJECT_LIMITS, createOptionSchema, createRoomSchema, reorderOptionsSchema, saveOptionSchema, saveRoomSchema,
 } from '../../../shared/schemas/room-api';
 import { readPlanFile, writePlanFile } from '../../../shared/schemas/plan-file';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
@@ -11,7 +11,7 @@ import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { getProject, lockProjectState, touchProject } from '../projects/projects.repository';
 import type { Db } from '../../db/database';
 import {
-  deleteOption, deleteRoom, getOption, getRoom, insertOption, insertRoom, listOptions, setOptionPositions,
+  countOptionsLocked, countRoomsLocked, deleteOption, deleteRoom, getOption, getRoom, insertOption, insertRoom, listOptions, setOptionPositions,
   updateOptionIfVersion, updateRoomIfVersion,
 } from './rooms.repository';
 import { assertDrawableShell, fileSlug, problemsToFields, roomSummaries } from './rooms.service';
@@ -42,6 +42,9 @@ async function createRoomWithOption(
 ) {
   return db.transaction().execute(async (trx) => {
     await projectOrThrow(trx, studioId, projectId);
+    if ((await countRoomsLocked(trx, projectId)) >= PROJECT_LIMITS.roomsPerProject) {
+      throw new HttpError(409, 'too_many_rooms', `A project holds at most ${PROJECT_LIMITS.roomsPerProject} rooms. Delete one before adding another.`);
+    }
     const created = await insertRoom(trx, { studioId, projectId, ...room });
     const first = await insertOption(trx, { studioId, roomId: created.id, ...option });
     await touchProject(trx, projectId);
@@ -110,7 +113,7 @@ export const roomRoutes: RouteDef[] = [
       }
       const { room: { name, ...shell }, option } = read.plan;
       const doc = optionDocSchema.parse({ pieces: option.pieces, finishes: option.finishes });
-      const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: name.trim() || 'Imported room', shell }, { name: option.name, note: option.note ?? '', doc });
+      const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: name || 'Imported room', shell }, { name: option.name, note: option.note ?? '', doc });
       ctx.res.status(201);
       return result;
     },
@@ -198,6 +201,9 @@ export const roomRoutes: RouteDef[] = [
       const body = createOptionSchema.parse(ctx.req.body);
       const option = await ctx.deps.db.transaction().execute(async (trx) => {
         const room = await roomOrThrow(trx, caller.studioId, id);
+        if ((await countOptionsLocked(trx, id)) >= PROJECT_LIMITS.optionsPerRoom) {
+          throw new HttpError(409, 'too_many_options', `A room holds at most ${PROJECT_LIMITS.optionsPerRoom} options. Delete one before adding another.`);
+        }
         let doc = EMPTY_DOC;
         let note = body.note;
         if (body.fromOptionId) {

@@ -11,3 +11,22 @@ describe('toCsv', () => {
     expect(toCsv([['@cmd', '+1', 'fine']])).toBe("'@cmd,'+1,fine\r\n");
   });
 });
+
+describe('scheduleCsv', () => {
+  it('writes web links only, whatever the schedule line holds', async () => {
+    const { scheduleCsv } = await import('./schedules.service');
+    const line = (name: string, supplierUrl: string) => ({
+      section: 'piece', name, status: 'new', sizeMm: null, detail: null, quantity: 1, quantityUnit: 'piece', quantityNote: null,
+      unitPrice: 10, priceUnit: null, total: 10, supplier: null, code: null, supplierUrl,
+    });
+    const answer = {
+      schedule: {
+        lines: [line('Safe', 'https://supplier.example/a'), line('Script', 'javascript:alert(1)'), line('Data', 'data:text/html,<b>x</b>')],
+        totals: { newPiecesCost: 30, finishesCost: 0, budget: 30 },
+      },
+    } as unknown as Parameters<typeof scheduleCsv>[0];
+    const csv = scheduleCsv(answer);
+    expect(csv).toContain('https://supplier.example/a');
+    expect(csv).not.toMatch(/javascript|data:/);
+  });
+});

@@ -6,7 +6,7 @@ import { getProject } from '../projects/projects.repository';
 import { getOption, getRoom, listOptions, listRooms, toRoom } from '../rooms/rooms.repository';
 import { finishesByIds, latestChoices } from './schedules.repository';
 import type { Finish } from '../../../shared/schemas/finish';
-import type { OptionDoc } from '../../../shared/schemas/option';
+import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
 import {
   QUANTITY_UNIT_LABELS, buildSchedule, compareOption, projectTakeoff, roomTakeoff, sizeText,
@@ -102,24 +102,29 @@ export async function scheduleAnswer(db: Db, studioId: string, optionId: string,
   };
 }
 
-/** Every room's options side by side: budget, new pieces, findings, free floor, the client's choice. */
+/** Lets other requests run: the rest of the work continues after the event loop's pending I/O. */
+const yieldToOthers = () => new Promise<void>((resolve) => setImmediate(resolve));
+
+/**
+ * Every room's options side by side: budget, new pieces, findings, free floor, the client's choice.
+ * Each option's fit check is a slice of work of its own: between two options the event loop
+ * answers whatever else is waiting, so a large project never holds up other requests for long.
+ */
 export async function compareAnswer(db: Db, studioId: string, projectId: string, settings: TakeoffSettings): Promise<CompareAnswer> {
   const project = await projectOrThrow(db, studioId, projectId);
   const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
   const finishes = await lookupFor(db, studioId, rooms.flatMap((r) => r.options.map((o) => o.doc)));
-  return {
-    project,
-    settings,
-    rooms: rooms.map(({ room, options }) => {
-      const chosenOptionId = choices.get(room.id) ?? null;
-      return {
-        id: room.id,
-        name: room.name,
-        chosenOptionId,
-        options: withPositions(options).map((o) => ({ ...refOf(o), ...compareOption(room.shell, o.doc, finishes, settings), chosen: o.id === chosenOptionId })),
-      };
-    }),
-  };
+  const answered: CompareAnswer['rooms'] = [];
+  for (const { room, options } of rooms) {
+    const chosenOptionId = choices.get(room.id) ?? null;
+    const compared: CompareAnswer['rooms'][number]['options'] = [];
+    for (const o of withPositions(options)) {
+      await yieldToOthers();
+      compared.push({ ...refOf(o), ...compareOption(room.shell, o.doc, finishes, settings), chosen: o.id === chosenOptionId });
+    }
+    answered.push({ id: room.id, name: room.name, chosenOptionId, options: compared });
+  }
+  return { project, settings, rooms: answered };
 }
 
 export const CSV_HEADER = ['Section', 'Name', 'Status', 'Size or surfaces', 'Quantity', 'Unit', 'Made up of', 'Unit price', 'Price per', 'Total', 'Supplier', 'Code', 'Link'];
@@ -144,7 +149,8 @@ export function scheduleCsv(answer: ScheduleAnswer): string {
       l.status === 'existing' ? '0.00' : money(l.total),
       l.supplier,
       l.code,
-      l.supplierUrl,
+      // Only web links reach the file, whatever an older row may hold.
+      l.supplierUrl && isWebLink(l.supplierUrl) ? l.supplierUrl : null,
     ]);
   }
   const totalRow = (name: string, value: number): CsvCell[] => ['Total', name, null, null, null, null, null, null, null, money(value)];

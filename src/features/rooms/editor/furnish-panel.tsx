@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { Piece } from '../../../../shared/schemas/option';
+import { isWebLink, type Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueKind } from '../../../../shared/catalogue/catalogue';
 import {
@@ -159,11 +159,10 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
       </div>
       <TextField label="Supplier link" type="url" value={link} disabled={readOnly} error={linkError ?? undefined} onChange={(e) => setLink(e.target.value)} onBlur={() => {
         if (link.trim() === '') return patch({ supplierUrl: null });
-        try {
-          new URL(link.trim());
+        if (isWebLink(link.trim())) {
           setLinkError(null);
           patch({ supplierUrl: link.trim() });
-        } catch {
+        } else {
           setLinkError('Paste a full link, starting with https://');
         }
       }} />

@@ -1,0 +1,16 @@
+import { describe, expect, it } from 'vitest';
+import { nameFromFileName } from './finishes.routes';
+import { isCleanName } from '../../../shared/schemas/common';
+
+describe('nameFromFileName', () => {
+  it('reads a name from a file name', () => {
+    expect(nameFromFileName('oak_boards-02.jpg')).toBe('Oak boards 02');
+  });
+
+  it('leaves out control characters and text-direction marks, as every name does', () => {
+    // A right-to-left override would show "oak_gpj.exe" as "oak_exe.jpg".
+    const name = nameFromFileName('oak\u202egpj.exe\u0007.jpg');
+    expect(isCleanName(name)).toBe(true);
+    expect(name).toBe('Oakgpj.exe');
+  });
+});
