@@ -17,11 +17,20 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-export function createTestApp(): TestApp {
+/**
+ * `env` adds configuration, e.g. `{ OUTBOX_DIR }` for the local setup's Outbox; `refuseMail` makes
+ * the mail server refuse the messages it picks.
+ */
+export function createTestApp(env: Record<string, string> = {}, refuseMail?: (m: MailMessage) => boolean): TestApp {
   const db = createDb(inject('databaseUrl'), 4);
   const mail: MailMessage[] = [];
-  const mailer: Mailer = { send: async (m) => void mail.push(m) };
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY });
+  const mailer: Mailer = {
+    send: async (m) => {
+      if (refuseMail?.(m)) throw new Error('550 mailbox unavailable');
+      mail.push(m);
+    },
+  };
+  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY, ...env });
   const app = createApp({ db, mailer, config });
   return { app, db, mail, close: () => db.destroy() };
 }
