@@ -22,7 +22,7 @@ import { clientPresentationRoutes } from './features/presentations/client.routes
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
 import { createLogger, requestLogger, type Logger } from './services/logging/logger';
-import { securityHeaders } from './services/security/headers';
+import { apiNoStore, securityHeaders } from './services/security/headers';
 import { originCheck } from './services/security/origin-check';
 
 export interface AppDeps {
@@ -46,6 +46,7 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', 'loopback');
   app.use(requestLogger(deps.logger ?? createLogger({ level: deps.config.logLevel })));
   app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
+  app.use('/api', apiNoStore());
   app.use('/api', express.json({ limit: '2mb' }));
   app.use('/api', originCheck(deps.config.publicUrl));
   app.use('/api', sessionMiddleware(deps.db));
