@@ -41,7 +41,7 @@ export function OutboxPage() {
                     >
                       <div className="truncate text-sm text-ink-soft">To {m.to}</div>
                       <div className="truncate font-semibold">{m.subject}</div>
-                      <div className="flex items-center gap-2 text-xs text-ink-faint">
+                      <div className="flex items-center gap-2 text-xs text-ink-soft">
                         <Badge value={m.kind} label={KIND_LABELS[m.kind]} />
                         {formatDateTime(m.sentAt)}
                       </div>
