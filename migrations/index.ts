@@ -6,6 +6,7 @@ import * as m0003 from './0003_create_finishes';
 import * as m0004 from './0004_create_presentations';
 import * as m0005 from './0005_create_rate_limits';
 import * as m0006 from './0006_notify_presentation_changes';
+import * as m0007 from './0007_record_sent_mail';
 import * as m0008 from './0008_drop_sign_in_failures';
 import * as m0009 from './0009_project_states_and_kept_choices';
 
@@ -16,6 +17,7 @@ export const migrations: Record<string, Migration> = {
   '0004_create_presentations': m0004,
   '0005_create_rate_limits': m0005,
   '0006_notify_presentation_changes': m0006,
+  '0007_record_sent_mail': m0007,
   '0008_drop_sign_in_failures': m0008,
   '0009_project_states_and_kept_choices': m0009,
 };

@@ -19,7 +19,7 @@ import { clientPresentationRoutes } from './features/presentations/client.routes
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
 import { createLogger, requestLogger } from './services/logging/logger';
-import { securityHeaders } from './services/security/headers';
+import { apiNoStore, securityHeaders } from './services/security/headers';
 import { originCheck } from './services/security/origin-check';
 
 export type { AppDeps } from './context';
@@ -37,6 +37,7 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', 'loopback');
   app.use(requestLogger(deps.logger ?? createLogger({ level: deps.config.logLevel })));
   app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
+  app.use('/api', apiNoStore());
   const json = express.json({ limit: '2mb' });
   // Only writes carry a body: a GET's is never read, so it can never fail as "not valid JSON".
   app.use('/api', (req, res, next) => (BODY_METHODS.has(req.method) ? json(req, res, next) : next()));

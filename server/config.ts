@@ -17,7 +17,8 @@ const envSchema = z.object({
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(5482),
   MAIL_FROM: z.string().default('Parlour <no-reply@parlour.local>'),
-  // When set, the app shows the mail the local stand-in SMTP server received (the Outbox page).
+  // Set when mail goes to the local stand-in SMTP server (which files it here): the app then records
+  // what it sends per studio and shows each studio its own on the Outbox page.
   OUTBOX_DIR: z.string().optional(),
   DATA_DIR: z.string().default('data'),
   CLIENT_DIST: z.string().default('dist'),

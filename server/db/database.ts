@@ -187,6 +187,18 @@ export interface RateLimitCountsTable {
   count: ColumnType<number, number | undefined, number>;
 }
 
+export interface SentMailTable {
+  id: Generated<string>;
+  studio_id: string;
+  kind: 'invitation' | 'presentation' | 'choice';
+  sender: string;
+  recipient: string;
+  subject: string;
+  text_body: string;
+  html_body: string | null;
+  created_at: Timestamp; // milliseconds only: the Outbox pages by it
+}
+
 export interface Database {
   rooms: RoomsTable;
   options: OptionsTable;
@@ -204,6 +216,7 @@ export interface Database {
   choices: ChoicesTable;
   presentation_requests: PresentationRequestsTable;
   rate_limit_counts: RateLimitCountsTable;
+  sent_mail: SentMailTable;
 }
 
 export type Db = Kysely<Database>;

@@ -17,8 +17,6 @@ export const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInPage /> },
   { path: '/sign-up', element: <SignUpPage /> },
   { path: '/invite/:token', element: <AcceptInvitePage /> },
-  { path: '/outbox', element: <OutboxPage /> },
-  { path: '/outbox/:messageId', element: <OutboxPage /> },
   // Built pages serve /p/* from the presentation entry; this lazy route covers the dev server.
   { path: '/p/:token', lazy: () => import('../features/presentation/presentation-route') },
   {
@@ -33,6 +31,8 @@ export const router = createBrowserRouter([
       { path: '/finishes', element: <FinishLibraryPage /> },
       { path: '/finishes/:finishId', element: <FinishRoute /> },
       { path: '/studio', element: <StudioPage /> },
+      { path: '/outbox', element: <OutboxPage /> },
+      { path: '/outbox/:messageId', element: <OutboxPage /> },
     ],
   },
   {

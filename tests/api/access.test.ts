@@ -18,6 +18,7 @@ interface Fixture {
   finishId: string;
   fileName: string;
   presentationId: string;
+  sentMailId: string;
 }
 interface Case {
   /** Path parameters naming studio A's own records. */
@@ -75,6 +76,8 @@ const CASES: Record<string, Case> = {
   'get /api/projects/:projectId/compare': { params: (f) => ({ projectId: f.projectId }) },
   'get /api/options/:id/schedule': { params: (f) => ({ id: f.optionId }) },
   'get /api/options/:id/schedule.csv': { params: (f) => ({ id: f.optionId }) },
+  'get /api/outbox': {},
+  'get /api/outbox/:id': { params: (f) => ({ id: f.sentMailId }) },
 };
 
 const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
@@ -92,7 +95,8 @@ let other: Agent;
 let fixture: Fixture;
 
 beforeAll(async () => {
-  t = createTestApp();
+  // With the local setup's Outbox, so its routes answer rather than being absent.
+  t = createTestApp({ env: { OUTBOX_DIR: '/nonexistent/outbox' } });
   const a = await signUpStudio(t.app, 'Studio A');
   const designer = await addMember(t, a.agent, 'designer');
   const viewer = await addMember(t, a.agent, 'viewer');
@@ -118,6 +122,7 @@ beforeAll(async () => {
     finishId: paint.body.finish.id,
     fileName,
     presentationId: presentation.body.presentation.id,
+    sentMailId: (await t.db.selectFrom('sent_mail').select('id').where('studio_id', '=', studioId).executeTakeFirstOrThrow()).id,
   };
 });
 afterAll(() => t.close());

@@ -19,7 +19,7 @@ const PIECES = [
   { id: 'table', name: 'Low table', x: 2100, y: 1900, width: 1100, depth: 600, height: 420, status: 'existing' },
 ];
 
-interface Made { projectId: string; roomId: string; finishId: string; photoId: string; link: string }
+interface Made { projectId: string; roomId: string; finishId: string; photoId: string; link: string; mailId: string }
 
 /** A client, project, room with two options, a paint and a photo finish, and a sent presentation, through the API. */
 async function makeStudioContent(page: Page, clientEmail: string): Promise<Made> {
@@ -49,7 +49,8 @@ async function makeStudioContent(page: Page, clientEmail: string): Promise<Made>
     const photo = await call('/api/finishes/photos', 'POST', form);
     const presentation = await call(`/api/projects/${project.id}/presentations`, 'POST', { rooms: [{ roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] }], message: 'Two ideas.', showPrices: true });
     await call(`/api/presentations/${presentation.presentation.id}/send`, 'POST', {});
-    return { projectId: project.id, roomId: made.room.id, finishId: paint.finish.id, photoId: photo.finishes[0].id, link: presentation.presentation.link };
+    const outbox = await call('/api/outbox', 'GET');
+    return { projectId: project.id, roomId: made.room.id, finishId: paint.finish.id, photoId: photo.finishes[0].id, link: presentation.presentation.link, mailId: outbox.messages[0].id };
   }, { email: clientEmail, shell: SHELL, pieces: PIECES });
 }
 
@@ -81,6 +82,7 @@ async function everyPage(designer: Page, client: Page, visit: Visit): Promise<vo
     ['a paint', `/finishes/${made.finishId}`, 'Harbour blue'],
     ['a photo finish', `/finishes/${made.photoId}`, /boards/i],
     ['outbox', '/outbox', 'Outbox'],
+    ['a sent e-mail', `/outbox/${made.mailId}`, /your options for Quayside flat/],
   ];
   for (const [name, path, heading] of pages) {
     await designer.goto(path);

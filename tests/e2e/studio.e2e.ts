@@ -95,13 +95,14 @@ describe('a studio from sign-up to its first project', () => {
     await context.close();
   });
 
-  it('invites a designer who joins through the Outbox link and can create projects', async () => {
+  it('invites a designer who joins by the link the owner copied from the Outbox, and can create projects', async () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Linden Studio');
     const designer = await inviteAndAccept(browser, page, 'designer', 'Dee Designer');
     expect(await designer.page.getByText('Linden Studio · designer').isVisible()).toBe(true);
     expect(await designer.page.getByRole('button', { name: 'New project' }).isVisible()).toBe(true);
-    await page.reload();
+    // The owner copied the link in the Outbox; the new member is on the Studio page.
+    await page.goto('/studio');
     await page.getByText('Dee Designer', { exact: true }).waitFor();
     await designer.context.close();
     await context.close();

@@ -25,12 +25,19 @@ export interface TestAppOptions {
   env?: Record<string, string | undefined>;
   /** Replaces the sign-in password check (to count the calls). */
   verifyPassword?: AppDeps['verifyPassword'];
+  /** Makes the mail server refuse the messages it picks. */
+  refuseMail?: (m: MailMessage) => boolean;
 }
 
 export function createTestApp(options: TestAppOptions = {}): TestApp {
   const db = createDb(inject('databaseUrl'), 4);
   const mail: MailMessage[] = [];
-  const mailer: Mailer = { send: async (m) => void mail.push(m) };
+  const mailer: Mailer = {
+    send: async (m) => {
+      if (options.refuseMail?.(m)) throw new Error('550 mailbox unavailable');
+      mail.push(m);
+    },
+  };
   const config = loadConfig({
     DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY,
     SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT, ...options.env,

@@ -1,34 +1,48 @@
-import { z } from 'zod';
-import type { RouteDef } from '../../http/routes';
-import { HttpError, notFound } from '../../http/errors';
-import { listOutbox, readOutboxMessage } from '../../services/mail/outbox';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { outboxCursor, outboxQuerySchema, type OutboxMessage, type OutboxPage } from '../../../shared/schemas/outbox';
+import { requireCaller, type RouteContext, type RouteDef } from '../../http/routes';
+import { HttpError, orNotFound } from '../../http/errors';
+import { getSentMail, listSentMail } from './outbox.repository';
+import { hasOutbox, visibleKinds } from './outbox.service';
 
-// The Outbox stands in for the recipients' mailboxes in the local setup, so an invitee without an
-// account can follow their link: it is public, and absent (404) unless OUTBOX_DIR is configured.
-function outboxDir(dir: string | undefined): string {
-  if (!dir) throw new HttpError(404, 'not_found', 'There is no outbox in this setup.');
-  return dir;
+// The Outbox is the studio's own sent-mail folder in the local setup: members read their studio's
+// mail (each role the kinds it may see) and copy or forward a link from it, as they would from a
+// real mail program. Absent (404) when a real mail service is configured.
+function callerKinds(ctx: RouteContext) {
+  const caller = requireCaller(ctx);
+  if (!hasOutbox(ctx.deps.config)) throw new HttpError(404, 'not_found', 'There is no outbox in this setup.');
+  return { studioId: caller.studioId, kinds: visibleKinds(caller.role) };
 }
 
 export const outboxRoutes: RouteDef[] = [
   {
     method: 'get',
     path: '/api/outbox',
-    access: 'public',
-    async handler(ctx) {
-      const messages = await listOutbox(outboxDir(ctx.deps.config.OUTBOX_DIR));
-      return { messages: messages.map(({ html: _html, text, ...m }) => ({ ...m, preview: text.slice(0, 160) })) };
+    access: 'signed-in',
+    async handler(ctx): Promise<OutboxPage> {
+      const { studioId, kinds } = callerKinds(ctx);
+      const { before, limit } = outboxQuerySchema.parse(ctx.req.query);
+      // One row more than asked says whether another page follows.
+      const rows = await listSentMail(ctx.deps.db, studioId, kinds, limit + 1, before);
+      const page = rows.slice(0, limit);
+      const last = page.at(-1);
+      return {
+        messages: page.map((r) => ({ id: r.id, kind: r.kind, to: r.recipient, subject: r.subject, preview: r.preview, sentAt: r.created_at.toISOString() })),
+        next: rows.length > limit && last ? outboxCursor(last.created_at, last.id) : null,
+      };
     },
   },
   {
     method: 'get',
     path: '/api/outbox/:id',
-    access: 'public',
-    async handler(ctx) {
-      const { id } = z.object({ id: z.string().max(60) }).parse(ctx.req.params);
-      const message = await readOutboxMessage(outboxDir(ctx.deps.config.OUTBOX_DIR), id);
-      if (!message) throw notFound('That message');
-      return { message };
+    access: 'signed-in',
+    async handler(ctx): Promise<{ message: OutboxMessage }> {
+      const { studioId, kinds } = callerKinds(ctx);
+      const { id } = idParamSchema.parse(ctx.req.params);
+      const r = orNotFound(await getSentMail(ctx.deps.db, studioId, kinds, id), 'That message');
+      return {
+        message: { id: r.id, kind: r.kind, from: r.sender, to: r.recipient, subject: r.subject, text: r.text_body, html: r.html_body, sentAt: r.created_at.toISOString() },
+      };
     },
   },
 ];

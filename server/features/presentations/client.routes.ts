@@ -14,6 +14,7 @@ import {
   getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordViewed,
   saveChoice, type PresentationRow,
 } from './presentations.repository';
+import { sendStudioMail } from '../outbox/outbox.service';
 import { clientLinkCache, forgetPresentation } from './client-cache';
 import {
   CHOICE_LIMIT, RATE_WINDOW_MS, VIEW_LIMIT, choiceMail, clientPresentation, linkNotFound, presentationFinishIds, presentationForToken,
@@ -39,7 +40,7 @@ function tooMany(res: Response): HttpError {
 }
 
 async function notifyDesigner(ctx: RouteContext, p: PresentationRow, roomId: string, optionId: string, comment: string): Promise<void> {
-  const { db, mailer, config } = ctx.deps;
+  const { db, config } = ctx.deps;
   try {
     const [project, shown, to] = await Promise.all([
       projectForPresentation(db, p.studio_id, p.project_id),
@@ -50,7 +51,7 @@ async function notifyDesigner(ctx: RouteContext, p: PresentationRow, roomId: str
     const index = inRoom.findIndex((s) => s.option_id === optionId);
     if (!project || index < 0) return;
     const mail = { clientName: project.client_name, project: project.name, room: inRoom[index].room_name, option: optionLabel(index, inRoom[index].option_name), comment, projectLink: `${config.publicUrl}/projects/${project.id}` };
-    for (const address of to) await mailer.send(choiceMail({ to: address, ...mail }));
+    for (const address of to) await sendStudioMail(db, ctx.deps, { studioId: p.studio_id, kind: 'choice', ...choiceMail({ to: address, ...mail }) });
   } catch (err) {
     // The choice is saved either way; the project page shows it even when the mail is lost.
     console.error('[presentations] choice notification failed:', (err as Error).message);

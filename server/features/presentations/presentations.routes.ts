@@ -15,6 +15,7 @@ import {
   getPresentation, insertPresentation, insertShownRooms, latestDecision, listPresentations, projectForPresentation, roomsWithOptions,
   setProjectState, studioName, updatePresentation, type PresentationRow,
 } from './presentations.repository';
+import { sendStudioMail } from '../outbox/outbox.service';
 import { flushOpens, forgetPresentation } from './client-cache';
 import { lockProjectState } from '../projects/projects.repository';
 import { DECIDED_REOPEN_FIRST, decidedRefusal } from '../projects/project-states';
@@ -116,7 +117,7 @@ export const presentationRoutes: RouteDef[] = [
       const caller = requireCaller(ctx);
       const { id } = idParamSchema.parse(ctx.req.params);
       const body = sendPresentationSchema.parse(ctx.req.body ?? {});
-      const { db, config, mailer } = ctx.deps;
+      const { db, config } = ctx.deps;
       const p = await presentationOrThrow(db, caller.studioId, id);
       refuseUnlessActive(p, 'sent');
       const project = await projectOrThrow(db, caller.studioId, p.project_id);
@@ -132,15 +133,11 @@ export const presentationRoutes: RouteDef[] = [
         link: await presentationLink(config, p),
         expiresAt: p.expires_at,
       });
-      try {
-        await mailer.send(mail);
-      } catch (err) {
-        console.error('[presentations] invitation mail failed:', (err as Error).message);
-        throw new HttpError(502, 'mail_failed', 'The e-mail could not be sent. Try again in a moment, or copy the link instead.');
-      }
+      // Sent last inside the transaction: a refused mail leaves nothing marked sent.
       const sent = await db.transaction().execute(async (trx) => {
         const saved = await updatePresentation(trx, p.id, { sent_at: new Date(), sent_to: to });
         if (project.state === 'draft') await setProjectState(trx, project.id, 'presented');
+        await sendStudioMail(trx, ctx.deps, { studioId: caller.studioId, kind: 'presentation', ...mail }, 'The e-mail could not be sent. Try again in a moment, or copy the link instead.');
         return saved;
       });
       return one(ctx, sent);

@@ -37,13 +37,14 @@ export async function listOpenInvites(db: Db, studioId: string) {
     .execute();
 }
 
-export async function findInviteByTokenHash(db: Db, tokenHash: string) {
-  return db
+/** `forUpdate` (inside a transaction): holds the invitation until commit, so it is accepted once. */
+export async function findInviteByTokenHash(db: Db, tokenHash: string, opts: { forUpdate?: boolean } = {}) {
+  const q = db
     .selectFrom('invites')
     .innerJoin('studios', 'studios.id', 'invites.studio_id')
     .select([...INVITE_COLUMNS, 'invites.studio_id', 'studios.name as studio_name'])
-    .where('invites.token_hash', '=', tokenHash)
-    .executeTakeFirst();
+    .where('invites.token_hash', '=', tokenHash);
+  return (opts.forUpdate ? q.forUpdate(['invites']) : q).executeTakeFirst();
 }
 
 export async function deleteInvite(db: Db, studioId: string, id: string): Promise<boolean> {

@@ -10,6 +10,7 @@ import { hashPassword } from '../../services/auth/passwords';
 import { startSession } from '../../services/auth/session';
 import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
 import { limitInvitationMail } from '../../services/rate-limit/mail-limits';
+import { sendStudioMail } from '../outbox/outbox.service';
 import {
   countOwners, deleteMember, deleteSessionsOf, findMemberByEmail, getMember, insertMember, listMembers, setMemberRole, toMember,
 } from './members.repository';
@@ -22,8 +23,8 @@ const INVITE_DAYS = 14;
 export const INVITE_RATE: RateRule = { bucket: 'invite', limit: 30, windowMs: 60 * 60_000 };
 const tokenParamSchema = z.object({ token: z.string().min(20).max(200) });
 
-async function openInviteOrThrow(db: Parameters<typeof findInviteByTokenHash>[0], token: string) {
-  const invite = await findInviteByTokenHash(db, hashToken(token));
+async function openInviteOrThrow(db: Parameters<typeof findInviteByTokenHash>[0], token: string, opts: { forUpdate?: boolean } = {}) {
+  const invite = await findInviteByTokenHash(db, hashToken(token), opts);
   if (!invite) throw new HttpError(404, 'invite_not_found', 'This invitation link is not valid. Ask the studio for a new one.');
   if (invite.accepted_at) throw new HttpError(410, 'invite_used', 'This invitation has already been accepted. Sign in instead.');
   if (invite.expires_at.getTime() < Date.now()) throw new HttpError(410, 'invite_expired', 'This invitation has expired. Ask the studio for a new one.');
@@ -91,7 +92,7 @@ export const studioRoutes: RouteDef[] = [
     async handler(ctx) {
       const caller = requireCaller(ctx);
       const body = inviteSchema.parse(ctx.req.body);
-      const { db, mailer, config } = ctx.deps;
+      const { db, config } = ctx.deps;
       await enforceRateLimit(db, ctx.res, INVITE_RATE, caller.studioId, 'That is a lot of invitations in a short time. Please wait a while, then send the rest.');
       if (await findMemberByEmail(db, body.email)) {
         throw new HttpError(409, 'email_taken', 'This person already has a Parlour account.', { email: 'Already has an account.' });
@@ -100,20 +101,27 @@ export const studioRoutes: RouteDef[] = [
       const studio = await db.selectFrom('studios').select('name').where('id', '=', caller.studioId).executeTakeFirstOrThrow();
       const inviter = await getMember(db, caller.studioId, caller.memberId);
       const { token, hash } = newToken();
-      const invite = await insertInvite(db, {
-        studioId: caller.studioId,
-        email: body.email,
-        role: body.role,
-        tokenHash: hash,
-        invitedBy: caller.memberId,
-        expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
-      });
       const link = `${config.publicUrl}/invite/${token}`;
-      await mailer.send({
-        to: body.email,
-        subject: `${inviter?.name ?? 'A colleague'} invited you to ${studio.name} on Parlour`,
-        text: `${inviter?.name ?? 'A colleague'} invited you to join ${studio.name} on Parlour as ${body.role}.\n\nAccept the invitation: ${link}\n\nThe link works for ${INVITE_DAYS} days.`,
-        html: `<p>${escapeHtml(inviter?.name ?? 'A colleague')} invited you to join <strong>${escapeHtml(studio.name)}</strong> on Parlour as ${body.role}.</p><p><a href="${link}">Accept the invitation</a></p><p>The link works for ${INVITE_DAYS} days.</p>`,
+      const by = inviter?.name ?? 'A colleague';
+      // One transaction: an invitation whose mail could not be sent is not kept either.
+      const invite = await db.transaction().execute(async (trx) => {
+        const made = await insertInvite(trx, {
+          studioId: caller.studioId,
+          email: body.email,
+          role: body.role,
+          tokenHash: hash,
+          invitedBy: caller.memberId,
+          expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
+        });
+        await sendStudioMail(trx, ctx.deps, {
+          studioId: caller.studioId,
+          kind: 'invitation',
+          to: body.email,
+          subject: `${by} invited you to ${studio.name} on Parlour`,
+          text: `${by} invited you to join ${studio.name} on Parlour as ${body.role}.\n\nAccept the invitation: ${link}\n\nThe link works for ${INVITE_DAYS} days.`,
+          html: `<p>${escapeHtml(by)} invited you to join <strong>${escapeHtml(studio.name)}</strong> on Parlour as ${body.role}.</p><p><a href="${link}">Accept the invitation</a></p><p>The link works for ${INVITE_DAYS} days.</p>`,
+        }, 'The invitation e-mail could not be sent, so no invitation was made. Try again in a moment.');
+        return made;
       });
       ctx.res.status(201);
       return { invite: toInviteInfo(invite) };
@@ -148,7 +156,8 @@ export const studioRoutes: RouteDef[] = [
       const body = acceptInviteSchema.parse(ctx.req.body);
       const passwordHash = await hashPassword(body.password);
       const member = await ctx.deps.db.transaction().execute(async (trx) => {
-        const invite = await openInviteOrThrow(trx, token);
+        // Locked until commit: a second acceptance at the same moment waits, then finds it used.
+        const invite = await openInviteOrThrow(trx, token, { forUpdate: true });
         if (await findMemberByEmail(trx, invite.email)) {
           throw new HttpError(409, 'email_taken', 'This e-mail already has an account. Sign in instead.');
         }

@@ -1,11 +1,21 @@
 // The local stand-in for a mail service: an SMTP server that files every message it receives as
-// JSON in a folder, which the Outbox page reads.
+// JSON in a folder (the Outbox page lists the app's own record of what it sent, in sent_mail).
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { randomUUID } from 'node:crypto';
-import type { OutboxMessage } from './outbox';
+
+/** One message as the stand-in files it: DIR/<id>.json. */
+export interface FiledMessage {
+  id: string;
+  from: string;
+  to: string;
+  subject: string;
+  text: string;
+  html: string | null;
+  receivedAt: string;
+}
 
 export interface StandInSmtp {
   port: number;
@@ -25,7 +35,7 @@ export function startStandInSmtp(opts: { port: number; dir: string; host?: strin
       simpleParser(stream)
         .then((mail) => {
           const to = Array.isArray(mail.to) ? mail.to.map((a) => a.text).join(', ') : (mail.to?.text ?? '');
-          const message: OutboxMessage = {
+          const message: FiledMessage = {
             id: `${Date.now().toString(36)}-${randomUUID().slice(0, 8)}`,
             from: mail.from?.text ?? '',
             to,

@@ -40,3 +40,15 @@ export function securityHeaders(opts: { secure: boolean }): RequestHandler {
     referrerPolicy: { policy: 'same-origin' },
   }) as RequestHandler;
 }
+
+/**
+ * Every API answer is `Cache-Control: no-store` unless its route says otherwise: members' data,
+ * links and plan files must not stay in a browser's or a proxy's cache after signing out. Stored
+ * files (content-hashed, never changing) set their own `private` header over this one.
+ */
+export function apiNoStore(): RequestHandler {
+  return (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  };
+}

@@ -35,7 +35,26 @@ export async function signInThroughForm(page: Page, email: string, password = PA
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-/** Invites `email` with `role` from the Studio page, then accepts through the Outbox in a fresh context. */
+/**
+ * The owner opens the e-mail sent to `to` in the Outbox, copies its link with Copy link and
+ * returns it (read back from the clipboard), as one would before forwarding it.
+ */
+export async function copyLinkFromOutbox(ownerPage: Page, to: string, linkPath: RegExp): Promise<string> {
+  await ownerPage.context().grantPermissions(['clipboard-read', 'clipboard-write'], { origin: inject('baseUrl') });
+  await ownerPage.goto('/outbox');
+  await ownerPage.getByRole('link', { name: new RegExp(`To ${to.replace(/[.+]/g, '\\$&')}`) }).first().click();
+  const shown = (await ownerPage.getByRole('link', { name: linkPath }).first().getAttribute('href'))!;
+  await ownerPage.getByRole('button', { name: `Copy link for ${to}` }).first().click();
+  await ownerPage.getByText(`Copied. Send it to ${to}.`).waitFor();
+  const copied = await ownerPage.evaluate(() => navigator.clipboard.readText());
+  if (copied !== shown) throw new Error(`copied ${copied}, the e-mail shows ${shown}`);
+  return copied;
+}
+
+/**
+ * Invites `email` with `role` from the Studio page; the owner copies the link from the Outbox and
+ * the invitee, in a browser of their own that was never signed in, opens it and joins.
+ */
 export async function inviteAndAccept(browser: Browser, ownerPage: Page, role: 'designer' | 'viewer', name: string) {
   const email = uniqueEmail(role);
   await ownerPage.goto('/studio');
@@ -44,11 +63,10 @@ export async function inviteAndAccept(browser: Browser, ownerPage: Page, role: '
   await ownerPage.getByRole('dialog').getByLabel('Role').selectOption(role);
   await ownerPage.getByRole('button', { name: 'Send invitation' }).click();
   await ownerPage.getByText(email).waitFor();
+  const link = await copyLinkFromOutbox(ownerPage, email, /\/invite\//);
 
   const { context, page } = await newPage(browser);
-  await page.goto('/outbox');
-  await page.getByRole('link', { name: new RegExp(`To ${email.replace(/[.+]/g, '\\$&')}`) }).click();
-  await page.getByRole('link', { name: /\/invite\// }).click();
+  await page.goto(link);
   await page.getByRole('heading', { name: /Join/ }).waitFor();
   await page.getByLabel('Your name').fill(name);
   await page.getByLabel('Choose a password').fill(PASSWORD);

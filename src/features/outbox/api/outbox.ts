@@ -1,8 +1,6 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, queryOptions, useInfiniteQuery, useQuery } from '@tanstack/react-query';
+import type { OutboxMessage, OutboxPage } from '../../../../shared/schemas/outbox';
 import { api } from '../../../lib/api';
-
-export interface OutboxSummary { id: string; from: string; to: string; subject: string; receivedAt: string; preview: string }
-export interface OutboxMessage { id: string; from: string; to: string; subject: string; text: string; html: string | null; receivedAt: string }
 
 export const outboxKeys = {
   all: ['outbox'] as const,
@@ -10,7 +8,14 @@ export const outboxKeys = {
   detail: (id: string) => [...outboxKeys.all, 'detail', id] as const,
 };
 
+/** The studio's sent mail, newest first, one page at a time; the pages already shown are refreshed while it is open. */
 export const useOutbox = () =>
-  useQuery(queryOptions({ queryKey: outboxKeys.list(), queryFn: () => api<{ messages: OutboxSummary[] }>('/api/outbox'), refetchInterval: 3000 }));
+  useInfiniteQuery(infiniteQueryOptions({
+    queryKey: outboxKeys.list(),
+    queryFn: ({ pageParam }) => api<OutboxPage>(pageParam ? `/api/outbox?before=${encodeURIComponent(pageParam)}` : '/api/outbox'),
+    initialPageParam: '',
+    getNextPageParam: (last) => last.next ?? undefined,
+    refetchInterval: 5000,
+  }));
 export const useOutboxMessage = (id: string) =>
   useQuery(queryOptions({ queryKey: outboxKeys.detail(id), queryFn: () => api<{ message: OutboxMessage }>(`/api/outbox/${id}`) }));
