@@ -5,10 +5,10 @@ import type { Piece } from '../../../shared/schemas/option';
 import type { RoomShell } from '../../../shared/schemas/room';
 import { DEFAULT_WALKWAY_MM, findingKindSchema, type Finding } from '../../../shared/analysis/takeoff';
 import { placedBoxes } from '../../../shared/analysis/fit/boxes';
-import { findDoorSwings } from '../../../shared/analysis/fit/door-swing';
+import { findDoorSwings } from './door-swing';
 import { findTooBigForDoor } from '../../../shared/analysis/fit/door-fit';
 import { findOverlaps } from '../../../shared/analysis/fit/overlap';
-import { findOutsideRoom } from '../../../shared/analysis/fit/outside-room';
+import { findOutsideRoom } from './outside-room';
 import { findWalkwayProblems } from './walkway';
 import { findBlockedWindows } from '../../../shared/analysis/fit/window';
 
