@@ -29,12 +29,22 @@ function cellCount(widthMm: number, heightMm: number, cellMm: number): number {
  */
 export function gridCellMm(widthMm: number, heightMm: number, cellMm: number): number {
   if (cellCount(widthMm, heightMm, cellMm) <= MAX_GRID_CELLS) return cellMm;
-  // The padding's share of the cap is left out of the first guess, so it never overshoots.
-  let coarse = Math.max(cellMm, Math.ceil(Math.sqrt((widthMm * heightMm) / MAX_GRID_CELLS)));
-  // A bounded search: a few steps from the guess always suffice for finite bounds.
-  for (let k = 0; k < 64 && !(cellCount(widthMm, heightMm, coarse) <= MAX_GRID_CELLS); k++) coarse = Math.ceil(coarse * 1.05);
-  if (!(cellCount(widthMm, heightMm, coarse) <= MAX_GRID_CELLS)) throw new RangeError('The room is too large to check on a grid');
-  return coarse;
+  const fits = (c: number): boolean => cellCount(widthMm, heightMm, c) <= MAX_GRID_CELLS;
+  // Cells only get fewer as the cell grows: double until it fits, then halve the gap to the least
+  // whole millimetre that does. Bounds that no cell fits (not finite) are refused, never looped on.
+  let lo = cellMm;
+  let hi = Math.max(cellMm, Math.ceil(Math.sqrt((widthMm * heightMm) / MAX_GRID_CELLS)));
+  for (let k = 0; k < 64 && !fits(hi); k++) {
+    lo = hi;
+    hi *= 2;
+  }
+  if (!fits(hi)) throw new RangeError('The room is too large to check on a grid');
+  while (hi - lo > 1) {
+    const mid = Math.floor((lo + hi) / 2);
+    if (fits(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
 }
 
 export interface FloorGrid {
