@@ -34,23 +34,37 @@ function spread(times: number[]): Spread {
   return { median: sorted[Math.floor(sorted.length / 2)], min: sorted[0], max: sorted[sorted.length - 1] };
 }
 
+interface Timed {
+  /** Elapsed time. */
+  wall: Spread;
+  /** This process's processor time (user + system): what other work on the machine does not add to. */
+  cpu: Spread;
+}
+
+function timeOnce(run: () => unknown, wall: number[], cpu: number[]): void {
+  const cpuBefore = process.cpuUsage();
+  const started = performance.now();
+  run();
+  wall.push(performance.now() - started);
+  const used = process.cpuUsage(cpuBefore);
+  cpu.push((used.user + used.system) / 1000);
+}
+
 /** Medians and ranges (ms) of two functions run alternately, after a warm-up of each. */
-function sideBySide(ours: () => unknown, reference: () => unknown): { ours: Spread; reference: Spread } {
+function sideBySide(ours: () => unknown, reference: () => unknown): { ours: Timed; reference: Timed } {
   for (let i = 0; i < 5; i++) {
     ours();
     reference();
   }
-  const a: number[] = [];
-  const b: number[] = [];
+  const times = { oursWall: [], oursCpu: [], refWall: [], refCpu: [] } as Record<string, number[]>;
   for (let i = 0; i < REPEATS; i++) {
-    let started = performance.now();
-    ours();
-    a.push(performance.now() - started);
-    started = performance.now();
-    reference();
-    b.push(performance.now() - started);
+    timeOnce(ours, times.oursWall, times.oursCpu);
+    timeOnce(reference, times.refWall, times.refCpu);
   }
-  return { ours: spread(a), reference: spread(b) };
+  return {
+    ours: { wall: spread(times.oursWall), cpu: spread(times.oursCpu) },
+    reference: { wall: spread(times.refWall), cpu: spread(times.refCpu) },
+  };
 }
 
 function alone(run: () => unknown): Spread {
@@ -97,17 +111,19 @@ export async function benchFit(): Promise<void> {
     for (const [check, ours, reference] of pairs) {
       const before = load();
       const timed = sideBySide(ours, reference);
-      const ratio = timed.reference.median / timed.ours.median;
+      const ratio = timed.reference.wall.median / timed.ours.wall.median;
+      const cpuRatio = timed.reference.cpu.median / timed.ours.cpu.median;
       console.log(
-        `fit: ${name}: ${check}: today ${ms(timed.ours)}, reference ${ms(timed.reference)}, ` +
-          `${ratio.toFixed(1)}× faster (${REPEATS} runs each, alternating; load average ${before} → ${load()})`,
+        `fit: ${name}: ${check}: today ${ms(timed.ours.wall)}, reference ${ms(timed.reference.wall)}, ` +
+          `${ratio.toFixed(1)}× faster; processor time today ${ms(timed.ours.cpu)}, reference ${ms(timed.reference.cpu)}, ` +
+          `${cpuRatio.toFixed(1)}× (${REPEATS} runs each, alternating; load average ${before} → ${load()})`,
       );
       if (check.startsWith('checkFit')) {
         const met = ratio >= WANTED_RATIO[size];
         missed ||= !met;
         console.log(`fit: ${name}: all checks ${ratio.toFixed(1)}× faster than the reference, wanted ≥ ${WANTED_RATIO[size]}×: ${met ? 'met' : 'MISSED'}`);
         if (size === 'typical') {
-          const total = timed.ours.median;
+          const total = timed.ours.wall.median;
           console.log(`fit: typical room all checks ${total.toFixed(1)} ms, budget ${TYPICAL_BUDGET_MS} ms: ${total < TYPICAL_BUDGET_MS ? 'within' : 'OVER'}`);
         }
       }

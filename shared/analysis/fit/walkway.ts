@@ -37,6 +37,25 @@ interface Gap {
   ends: [[number, number], [number, number]];
 }
 
+/**
+ * Per-cell working arrays are kept from one check to the next for grids up to this many cells
+ * (about 8 MB), so a drag that checks the same room again and again does not churn memory; larger
+ * grids get arrays of their own that go when the check is done.
+ */
+const KEPT_SCRATCH_CELLS = 250_000;
+const kept = new Map<string, Float64Array | Int32Array>();
+
+/** A working array of `cells` entries under `name`, with whatever it held before: callers fill it. */
+function scratch<T extends Float64Array | Int32Array>(name: string, make: (cells: number) => T, cells: number): T {
+  const held = kept.get(name) as T | undefined;
+  if (held && held.length >= cells) return held.subarray(0, cells) as T;
+  const made = make(cells);
+  if (cells <= KEPT_SCRATCH_CELLS) kept.set(name, made);
+  return made;
+}
+const float64 = (cells: number) => new Float64Array(cells);
+const int32 = (cells: number) => new Int32Array(cells);
+
 /** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
 const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [[1, 0], [0, 1], [1, 1], [1, -1]];
 /** Length of one step of each run direction, in cells. */
@@ -51,7 +70,7 @@ const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
 function shortestRunsMm(grid: FloorGrid): Float64Array {
   const { nx, label, cellMm } = grid;
   const cells = label.length;
-  const shortest = new Float64Array(cells).fill(Infinity);
+  const shortest = scratch('shortest', float64, cells).fill(Infinity);
   const steps = RUN_DIRECTIONS.map(([di, dj]) => dj * nx + di);
   for (let back = 0; back < cells; back++) {
     if (label[back] === FREE) continue;
@@ -102,8 +121,8 @@ class Widths {
     this.squaredCells = field.squaredCells;
     this.shortestRunMm = shortestRunsMm(grid);
     const cells = grid.nx * grid.ny;
-    this.widthMm = new Float64Array(cells).fill(NaN);
-    this.cappedMm = new Int32Array(cells);
+    this.widthMm = scratch('width', float64, cells).fill(NaN);
+    this.cappedMm = scratch('capped', int32, cells).fill(0);
   }
 
   /**
@@ -126,6 +145,14 @@ class Widths {
     const capped = Math.floor(Math.min(widthMm, keyMm));
     this.cappedMm[cell] = capped + 1;
     return capped;
+  }
+
+  /**
+   * Whether the search's capped answer already shows the width at a cell to be more than widthMm,
+   * so it need not be measured exactly to be compared: a capped answer c means at least c.
+   */
+  knownWiderThan(cell: number, widthMm: number): boolean {
+    return this.cappedMm[cell] - 1 > Math.floor(widthMm);
   }
 
   /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
@@ -299,10 +326,10 @@ interface Routes {
 function widestRoutes(grid: FloorGrid, widths: Widths, sources: readonly { cell: number; opening: number }[], limitMm: number): Routes {
   const cells = grid.nx * grid.ny;
   const { nx, label } = grid;
-  const bottleneckMm = new Int32Array(cells);
+  const bottleneckMm = scratch('bottleneck', int32, cells);
   for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
-  const parent = new Int32Array(cells).fill(-1);
-  const wayIn = new Int32Array(cells).fill(-1);
+  const parent = scratch('parent', int32, cells).fill(-1);
+  const wayIn = scratch('way-in', int32, cells).fill(-1);
   const queue = new WidestFirst(limitMm);
   for (const { cell, opening } of sources) {
     const key = Math.floor(Math.min(widths.at(cell), limitMm));
@@ -449,12 +476,16 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
 
     // Walk the route back to its way in; its narrowest cell is where the bottleneck is.
     let narrowest = bestCell;
+    let narrowestMm = widths.at(bestCell);
     let cell = bestCell;
-    while (routes.parent[cell] >= 0) {
-      if (widths.at(cell) < widths.at(narrowest)) narrowest = cell;
+    for (;;) {
+      if (!widths.knownWiderThan(cell, narrowestMm) && widths.at(cell) < narrowestMm) {
+        narrowest = cell;
+        narrowestMm = widths.at(cell);
+      }
+      if (routes.parent[cell] < 0) break;
       cell = routes.parent[cell];
     }
-    if (widths.at(cell) < widths.at(narrowest)) narrowest = cell;
     const opening = ways[routes.wayIn[cell]];
     const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.
