@@ -27,6 +27,8 @@ const BLOCKED_KEY = 0x7fffffff;
  * land on cell centres, so a hit puts the edge half a step back. A whole-cell step may pass the
  * corner of an obstacle thinner than a cell on a slant; pieces are thicker than that. */
 const RAY_STEP_CELLS = 1;
+/** How much shorter than twice the distance to the nearest blocked centre a chord can be, in cells: 1 + √½ for the chord across, √2 for a diagonal run, rounded up. */
+const CHORD_SHORTFALL_CELLS = 1.75;
 /** Kept back from a skip ahead along a ray, in cells: twice the √½ cell a sample may stray from a centre, rounded up. */
 const RAY_SKIP_MARGIN_CELLS = 1.5;
 
@@ -148,11 +150,15 @@ class Widths {
   }
 
   /**
-   * Whether the search's capped answer already shows the width at a cell to be more than widthMm,
-   * so it need not be measured exactly to be compared: a capped answer c means at least c.
+   * Whether the width at a cell is already known to be more than widthMm, so it need not be
+   * measured exactly to be compared: the search's capped answer c means at least c; and with d the
+   * distance (cells) to the nearest blocked centre, every chord is at least (2d − 1.71) cells long
+   * (a run's ends lie at least d away on either side, less one step of at most √2 cells; the chord
+   * across reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
    */
   knownWiderThan(cell: number, widthMm: number): boolean {
-    return this.cappedMm[cell] - 1 > Math.floor(widthMm);
+    if (this.cappedMm[cell] - 1 > Math.floor(widthMm)) return true;
+    return (2 * Math.sqrt(this.squaredCells[cell]) - CHORD_SHORTFALL_CELLS) * this.grid.cellMm > widthMm;
   }
 
   /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
