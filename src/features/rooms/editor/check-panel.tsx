@@ -50,7 +50,7 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
       </p>
 
       {/* Announced politely and kept small: while a piece moves the list below is the last layout's. */}
-      <p role="status" aria-live="polite" data-testid="fit-status" data-state={!result || result.pending ? 'checking' : 'checked'} className="-mb-3 h-4 text-xs text-ink-faint">
+      <p role="status" aria-live="polite" data-testid="fit-status" data-state={!result || result.pending ? 'checking' : 'checked'} data-check-ms={result ? Math.round(result.ms) : undefined} className="-mb-3 h-4 text-xs text-ink-faint">
         {result?.pending ? 'Checking…' : ''}
       </p>
       {!result ? (
