@@ -1,3 +1,6 @@
+// The fit check timed beside the frozen copy of the one it replaced (scripts/bench/reference-fit):
+// runs alternate between the two, so whatever else the machine is doing weighs on both alike.
+import { loadavg } from 'node:os';
 import { placedBoxes, type PieceBox } from '../../shared/analysis/fit/boxes';
 import { findDoorSwings } from '../../shared/analysis/fit/door-swing';
 import { findTooBigForDoor } from '../../shared/analysis/fit/door-fit';
@@ -7,35 +10,64 @@ import { findOverlaps } from '../../shared/analysis/fit/overlap';
 import { findWalkwayProblems } from '../../shared/analysis/fit/walkway';
 import { findBlockedWindows } from '../../shared/analysis/fit/window';
 import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/takeoff';
-import { optionDocSchema, type Piece } from '../../shared/schemas/option';
+import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
-import { typicalRoom } from './typical-room';
+import { checkFit as referenceCheckFit } from './reference-fit/index';
+import { findWalkwayProblems as referenceWalkway } from './reference-fit/walkway';
+import { largeRoom, typicalRoom } from './typical-room';
 
-/** Repeats of each check, so one slow garbage collection does not decide the figure. */
+/** Timed runs of each check, so one slow garbage collection does not decide the figure. */
 const REPEATS = 30;
 /** What a fit check should take for a typical room (ms): one frame at 60 frames a second, so the editor can check as a piece is dragged. */
 const TYPICAL_BUDGET_MS = 16;
+/** Wanted: today's checks this many times faster than the reference, typical room and 200 pieces. */
+const WANTED_RATIO = { typical: 5, large: 4 };
 
-/** The typical room's shell, 5 times its floor area, with 200 pieces in a grid (invented, plan mm). */
-function largeRoom(): { shell: RoomShell; pieces: Piece[] } {
-  const { shell } = typicalRoom();
-  const grown: RoomShell = { ...shell, outline: shell.outline.map(([x, y]) => [x * Math.sqrt(5), y * Math.sqrt(5)]) };
-  const pieces = Array.from({ length: 200 }, (_, i) => ({
-    id: `piece-${i}`,
-    name: `Piece ${i}`,
-    x: 600 + (i % 20) * 620,
-    y: 600 + Math.floor(i / 20) * 1050,
-    width: 450,
-    depth: 350,
-    height: 450 + (i % 5) * 100,
-    rotation: (i * 37) % 360,
-    elevation: i % 7 === 0 ? 1400 : 0,
-    status: 'new',
-  }));
-  return { shell: grown, pieces: optionDocSchema.parse({ pieces }).pieces };
+interface Spread {
+  median: number;
+  min: number;
+  max: number;
 }
 
-function medianMs(run: () => void): { median: number; best: number } {
+function spread(times: number[]): Spread {
+  const sorted = [...times].sort((a, b) => a - b);
+  return { median: sorted[Math.floor(sorted.length / 2)], min: sorted[0], max: sorted[sorted.length - 1] };
+}
+
+interface Timed {
+  /** Elapsed time. */
+  wall: Spread;
+  /** This process's processor time (user + system): what other work on the machine does not add to. */
+  cpu: Spread;
+}
+
+function timeOnce(run: () => unknown, wall: number[], cpu: number[]): void {
+  const cpuBefore = process.cpuUsage();
+  const started = performance.now();
+  run();
+  wall.push(performance.now() - started);
+  const used = process.cpuUsage(cpuBefore);
+  cpu.push((used.user + used.system) / 1000);
+}
+
+/** Medians and ranges (ms) of two functions run alternately, after a warm-up of each. */
+function sideBySide(ours: () => unknown, reference: () => unknown): { ours: Timed; reference: Timed } {
+  for (let i = 0; i < 5; i++) {
+    ours();
+    reference();
+  }
+  const times = { oursWall: [], oursCpu: [], refWall: [], refCpu: [] } as Record<string, number[]>;
+  for (let i = 0; i < REPEATS; i++) {
+    timeOnce(ours, times.oursWall, times.oursCpu);
+    timeOnce(reference, times.refWall, times.refCpu);
+  }
+  return {
+    ours: { wall: spread(times.oursWall), cpu: spread(times.oursCpu) },
+    reference: { wall: spread(times.refWall), cpu: spread(times.refCpu) },
+  };
+}
+
+function alone(run: () => unknown): Spread {
   for (let i = 0; i < 5; i++) run();
   const times: number[] = [];
   for (let i = 0; i < REPEATS; i++) {
@@ -43,34 +75,59 @@ function medianMs(run: () => void): { median: number; best: number } {
     run();
     times.push(performance.now() - started);
   }
-  times.sort((a, b) => a - b);
-  return { median: times[Math.floor(REPEATS / 2)], best: times[0] };
+  return spread(times);
 }
 
-/** Prints milliseconds per fit check (and for all of them) on a typical room of 40 pieces and a large one of 200. */
+const ms = (s: Spread): string => `${s.median.toFixed(2)} ms median (${s.min.toFixed(2)}–${s.max.toFixed(2)})`;
+const load = (): string => loadavg().map((l) => l.toFixed(2)).join(' ');
+
+/**
+ * Prints milliseconds per fit check on a typical room of 40 pieces and a large one of 200: each
+ * check alone, then the walkway check and all checks beside the reference, with the ratio of the
+ * medians and the machine's load average (1, 5 and 15 minutes) as each was measured.
+ */
 export async function benchFit(): Promise<void> {
   const typical = typicalRoom();
   const large = largeRoom();
-  const rooms: [string, RoomShell, readonly Piece[]][] = [
-    ['typical room, 8 walls, 6 openings, 40 pieces', typical.shell, typical.option.pieces],
-    ['large room, 8 walls, 6 openings, 200 pieces', large.shell, large.pieces],
+  const rooms: [keyof typeof WANTED_RATIO, string, RoomShell, readonly Piece[]][] = [
+    ['typical', 'typical room, 8 walls, 6 openings, 40 pieces', typical.shell, typical.option.pieces],
+    ['large', 'large room, 8 walls, 6 openings, 200 pieces', large.shell, large.pieces],
   ];
-  for (const [name, shell, pieces] of rooms) {
+  let missed = false;
+  for (const [size, name, shell, pieces] of rooms) {
     const boxes: PieceBox[] = placedBoxes(pieces);
     const checks: [string, () => unknown][] = [
       ['overlap', () => findOverlaps(boxes)],
       ['outside-room', () => findOutsideRoom(shell, boxes)],
       ['door-swing', () => findDoorSwings(shell, boxes)],
       ['window-blocked', () => findBlockedWindows(shell, boxes)],
-      ['walkway (narrow-walkway, unreachable)', () => findWalkwayProblems(shell, boxes, DEFAULT_WALKWAY_MM)],
       ['too-big-for-door', () => findTooBigForDoor(shell, boxes)],
-      ['checkFit, all checks', () => checkFit(shell, pieces)],
     ];
-    for (const [check, run] of checks) {
-      const { median, best } = medianMs(run);
-      console.log(`fit: ${name}: ${check}: ${median.toFixed(3)} ms median, ${best.toFixed(3)} best (${REPEATS} runs)`);
+    for (const [check, run] of checks) console.log(`fit: ${name}: ${check}: ${ms(alone(run))} (${REPEATS} runs)`);
+    const pairs: [string, () => unknown, () => unknown][] = [
+      ['walkway (narrow-walkway, unreachable)', () => findWalkwayProblems(shell, boxes, DEFAULT_WALKWAY_MM), () => referenceWalkway(shell, boxes, DEFAULT_WALKWAY_MM)],
+      ['checkFit, all checks', () => checkFit(shell, pieces), () => referenceCheckFit(shell, pieces)],
+    ];
+    for (const [check, ours, reference] of pairs) {
+      const before = load();
+      const timed = sideBySide(ours, reference);
+      const ratio = timed.reference.wall.median / timed.ours.wall.median;
+      const cpuRatio = timed.reference.cpu.median / timed.ours.cpu.median;
+      console.log(
+        `fit: ${name}: ${check}: today ${ms(timed.ours.wall)}, reference ${ms(timed.reference.wall)}, ` +
+          `${ratio.toFixed(1)}× faster; processor time today ${ms(timed.ours.cpu)}, reference ${ms(timed.reference.cpu)}, ` +
+          `${cpuRatio.toFixed(1)}× (${REPEATS} runs each, alternating; load average ${before} → ${load()})`,
+      );
+      if (check.startsWith('checkFit')) {
+        const met = ratio >= WANTED_RATIO[size];
+        missed ||= !met;
+        console.log(`fit: ${name}: all checks ${ratio.toFixed(1)}× faster than the reference, wanted ≥ ${WANTED_RATIO[size]}×: ${met ? 'met' : 'MISSED'}`);
+        if (size === 'typical') {
+          const total = timed.ours.wall.median;
+          console.log(`fit: typical room all checks ${total.toFixed(1)} ms, budget ${TYPICAL_BUDGET_MS} ms: ${total < TYPICAL_BUDGET_MS ? 'within' : 'OVER'}`);
+        }
+      }
     }
   }
-  const total = medianMs(() => checkFit(typical.shell, typical.option.pieces)).median;
-  console.log(`fit: typical room all checks ${total.toFixed(1)} ms, budget ${TYPICAL_BUDGET_MS} ms: ${total < TYPICAL_BUDGET_MS ? 'within' : 'OVER'}`);
+  if (missed) console.log('fit: a wanted ratio was missed');
 }

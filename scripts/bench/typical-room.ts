@@ -1,4 +1,4 @@
-import { optionDocSchema, type OptionDoc } from '../../shared/schemas/option';
+import { optionDocSchema, type OptionDoc, type Piece } from '../../shared/schemas/option';
 import { roomShellSchema, type RoomShell } from '../../shared/schemas/room';
 
 /**
@@ -31,3 +31,23 @@ export function typicalRoom(): { shell: RoomShell; option: OptionDoc } {
   }));
   return { shell, option: optionDocSchema.parse({ pieces }) };
 }
+
+/** The typical room's shell, 5 times its floor area, with 200 pieces in a grid (invented, plan mm). */
+export function largeRoom(): { shell: RoomShell; pieces: Piece[] } {
+  const { shell } = typicalRoom();
+  const grown: RoomShell = { ...shell, outline: shell.outline.map(([x, y]) => [x * Math.sqrt(5), y * Math.sqrt(5)]) };
+  const pieces = Array.from({ length: 200 }, (_, i) => ({
+    id: `piece-${i}`,
+    name: `Piece ${i}`,
+    x: 600 + (i % 20) * 620,
+    y: 600 + Math.floor(i / 20) * 1050,
+    width: 450,
+    depth: 350,
+    height: 450 + (i % 5) * 100,
+    rotation: (i * 37) % 360,
+    elevation: i % 7 === 0 ? 1400 : 0,
+    status: 'new',
+  }));
+  return { shell: grown, pieces: optionDocSchema.parse({ pieces }).pieces };
+}
+

@@ -3,7 +3,7 @@ import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, directionDeg } from '../../geometry/vec';
 import type { RoomShell } from '../../schemas/room';
 import type { Finding } from '../takeoff';
-import { convexOverlap, isRug, type PieceBox } from './boxes';
+import { convexOverlap, isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 
 /** Straight pieces standing in for the leaf's arc; at 32 the chord falls short of the arc by under 0.12 % of the leaf (1 mm on an 820 mm leaf). */
@@ -31,9 +31,14 @@ export function findDoorSwings(shell: RoomShell, boxes: readonly PieceBox[]): Fi
     if (opening.type !== 'door' || opening.swing !== 'in') continue;
     const wall = walls[opening.wall];
     if (!wall) continue;
-    const sector = swingSector(doorSwing(wall, opening));
+    const swing = doorSwing(wall, opening);
+    const sector = swingSector(swing);
     for (const box of boxes) {
       if (isRug(box.piece) || box.bottomMm >= opening.height) continue;
+      // The sector lies within a leaf's length of the hinge and the box within its half-diagonal of
+      // its centre: further apart than both (and a millimetre), they cannot meet.
+      const apartMm = Math.hypot(box.centre[0] - swing.hingeMm[0], box.centre[1] - swing.hingeMm[1]);
+      if (apartMm > swing.leafLengthMm + Math.hypot(box.halfWidthMm, box.halfDepthMm) + TOUCH_TOLERANCE_MM) continue;
       if (!convexOverlap(box.corners, sector)) continue;
       findings.push({
         kind: 'door-swing',

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { pieceBox } from './boxes';
-import { cellAt, cellCentreMm, distanceField, FREE, rasteriseFloor, WALL } from './floor-grid';
+import { cellAt, cellCentreMm, distanceField, FREE, gridCellMm, MAX_GRID_CELLS, rasteriseFloor, WALL } from './floor-grid';
+import { findWalkwayProblems } from './walkway';
+import { roomShellSchema } from '../../schemas/room';
 import { pieceInput } from './test-plans';
 import { pieceSchema } from '../../schemas/option';
 
@@ -40,5 +42,48 @@ describe('floor grid', () => {
       expect(grid.label[field.nearest[cell]]).not.toBe(FREE);
       expect(((nx - x) ** 2 + (ny - y) ** 2) / 2500).toBeCloseTo(bruteCells2, 9);
     }
+  });
+});
+
+describe('the cap on grid cells', () => {
+  const square = (sideMm: number): [number, number][] => [[0, 0], [sideMm, 0], [sideMm, sideMm], [0, sideMm]];
+  const cells = (grid: { nx: number; ny: number }) => grid.nx * grid.ny;
+
+  it('keeps the asked-for cell in any room of a home', () => {
+    // 12 × 9 m at 25 mm: (480 + 4) × (360 + 4) cells, within the cap.
+    const grid = rasteriseFloor([[0, 0], [12000, 0], [12000, 9000], [0, 9000]], [], 25);
+    expect(grid.cellMm).toBe(25);
+    expect(cells(grid)).toBe(484 * 364);
+    expect(gridCellMm(12000, 9000, 25)).toBe(25);
+  });
+
+  it('makes the cell coarser, never the grid larger, for outsized rooms', () => {
+    for (const sideMm of [20000, 50000, 100000, 1_000_000]) {
+      const grid = rasteriseFloor(square(sideMm), [], 25);
+      expect(cells(grid)).toBeLessThanOrEqual(MAX_GRID_CELLS);
+      expect(grid.cellMm).toBeGreaterThan(25);
+      // The smallest whole millimetre that fits: a millimetre finer would not.
+      const finer = grid.cellMm - 1;
+      expect((Math.ceil(sideMm / finer) + 4) ** 2).toBeGreaterThan(MAX_GRID_CELLS);
+      expect(grid.label.filter((l) => l === FREE).length).toBeGreaterThan(0);
+    }
+    // 50 m square: 72 mm cells, (695 + 4)² = 488,601 (71 mm would give (705 + 4)² = 502,681).
+    expect(gridCellMm(50000, 50000, 25)).toBe(72);
+  });
+
+  it('holds for long thin rooms too', () => {
+    const grid = rasteriseFloor([[0, 0], [400000, 0], [400000, 3000], [0, 3000]], [], 25);
+    expect(cells(grid)).toBeLessThanOrEqual(MAX_GRID_CELLS);
+  });
+
+  it('still checks a walkway in an outsized room, on the coarser cell', () => {
+    const room = roomShellSchema.parse({
+      outline: square(50000),
+      openings: [{ id: 'd1', type: 'door', wall: 0, offset: 1000, width: 900, height: 2040, hinge: 'start', swing: 'out' }],
+    });
+    // A chest facing a wall 100 mm away.
+    const chest = pieceBox(pieceSchema.parse(pieceInput({ id: 'chest', x: 25000, y: 400, width: 1000, depth: 500, height: 800, rotation: 180 })));
+    const findings = findWalkwayProblems(room, [chest], 900);
+    expect(findings.map((f) => f.kind)).toEqual(['narrow-walkway']);
   });
 });

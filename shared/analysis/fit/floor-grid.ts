@@ -11,6 +11,41 @@ export const FREE = -1;
 export const WALL = -2;
 /** Blocked cells kept round the outline's bounds, so every row and column meets a wall. */
 const PAD_CELLS = 2;
+/**
+ * The most cells one grid may have. A check's time and memory grow with its cells (about 40 bytes
+ * each for the walkway check), so an outsized room must not make one check allocate without bound:
+ * past this the cell is made coarser instead. 500,000 cells of 25 mm cover a room of about
+ * 17.6 m × 17.6 m (310 m²), larger than any room of a home, so real rooms keep their cell.
+ */
+export const MAX_GRID_CELLS = 500_000;
+
+function cellCount(widthMm: number, heightMm: number, cellMm: number): number {
+  return (Math.ceil(widthMm / cellMm) + 2 * PAD_CELLS) * (Math.ceil(heightMm / cellMm) + 2 * PAD_CELLS);
+}
+
+/**
+ * The cell (mm) a grid over bounds of widthMm × heightMm uses: cellMm, or the smallest whole
+ * millimetre coarser than it that keeps the grid within MAX_GRID_CELLS.
+ */
+export function gridCellMm(widthMm: number, heightMm: number, cellMm: number): number {
+  if (cellCount(widthMm, heightMm, cellMm) <= MAX_GRID_CELLS) return cellMm;
+  const fits = (c: number): boolean => cellCount(widthMm, heightMm, c) <= MAX_GRID_CELLS;
+  // Cells only get fewer as the cell grows: double until it fits, then halve the gap to the least
+  // whole millimetre that does. Bounds that no cell fits (not finite) are refused, never looped on.
+  let lo = cellMm;
+  let hi = Math.max(cellMm, Math.ceil(Math.sqrt((widthMm * heightMm) / MAX_GRID_CELLS)));
+  for (let k = 0; k < 64 && !fits(hi); k++) {
+    lo = hi;
+    hi *= 2;
+  }
+  if (!fits(hi)) throw new RangeError('The room is too large to check on a grid');
+  while (hi - lo > 1) {
+    const mid = Math.floor((lo + hi) / 2);
+    if (fits(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
 
 export interface FloorGrid {
   cellMm: number;
@@ -38,11 +73,13 @@ export function cellAt(grid: FloorGrid, p: Vec2): number {
 }
 
 /**
- * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm: a cell is free when its
+ * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm (coarser where the room
+ * would need more than MAX_GRID_CELLS; the grid's cellMm says which): a cell is free when its
  * centre is inside the outline and in no obstacle. The first box to cover a cell names it.
  */
-export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly PieceBox[], cellMm: number): FloorGrid {
+export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly PieceBox[], requestedCellMm: number): FloorGrid {
   const bounds = boundsMm(outline);
+  const cellMm = gridCellMm(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY, requestedCellMm);
   const originX = bounds.minX - PAD_CELLS * cellMm;
   const originY = bounds.minY - PAD_CELLS * cellMm;
   const nx = Math.ceil((bounds.maxX - bounds.minX) / cellMm) + 2 * PAD_CELLS;
@@ -105,19 +142,25 @@ export interface DistanceField {
 export function distanceField(grid: FloorGrid): DistanceField {
   const { nx, ny, label } = grid;
   const cells = nx * ny;
-  // Columns: distance to the nearest blocked cell straight up or down, and its row.
+  // Columns: distance to the nearest blocked cell straight up or down, and its row. Every column is
+  // swept at once, a row at a time, so the arrays are read in the order they lie in memory.
   const columnSquared = new Float64Array(cells);
   const columnRow = new Int32Array(cells);
-  for (let i = 0; i < nx; i++) {
-    let last = -1;
-    for (let j = 0; j < ny; j++) {
-      if (label[j * nx + i] !== FREE) last = j;
-      columnRow[j * nx + i] = last;
+  const lastBlocked = new Int32Array(nx).fill(-1);
+  for (let j = 0; j < ny; j++) {
+    const row = j * nx;
+    for (let i = 0; i < nx; i++) {
+      if (label[row + i] !== FREE) lastBlocked[i] = j;
+      columnRow[row + i] = lastBlocked[i];
     }
-    let next = -1;
-    for (let j = ny - 1; j >= 0; j--) {
-      const cell = j * nx + i;
-      if (label[cell] !== FREE) next = j;
+  }
+  const nextBlocked = lastBlocked.fill(-1);
+  for (let j = ny - 1; j >= 0; j--) {
+    const rowStart = j * nx;
+    for (let i = 0; i < nx; i++) {
+      const cell = rowStart + i;
+      if (label[cell] !== FREE) nextBlocked[i] = j;
+      const next = nextBlocked[i];
       const above = columnRow[cell];
       const row = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
       columnRow[cell] = row;

@@ -22,7 +22,12 @@ export function findOutsideRoom(shell: Pick<RoomShell, 'outline'>, boxes: readon
   const outline = shell.outline;
   const findings: Finding[] = [];
   for (const box of boxes) {
-    const crossesWall = outline.some((start, i) => segmentCrossesConvex(start, outline[(i + 1) % outline.length], box.corners, TOUCH_TOLERANCE_MM));
+    // A wall further from the box's centre than its half-diagonal (and a millimetre) cannot run through it.
+    const reachMm = Math.hypot(box.halfWidthMm, box.halfDepthMm) + TOUCH_TOLERANCE_MM;
+    const crossesWall = outline.some((start, i) => {
+      const end = outline[(i + 1) % outline.length];
+      return distanceToSegmentMm(box.centre, start, end) <= reachMm && segmentCrossesConvex(start, end, box.corners, TOUCH_TOLERANCE_MM);
+    });
     const outsideCorners = box.corners.filter((corner) => cornerOutside(corner, outline)).length;
     if (!crossesWall && outsideCorners === 0) continue;
     const wholly = !crossesWall && outsideCorners === box.corners.length;

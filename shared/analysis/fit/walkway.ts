@@ -21,10 +21,14 @@ export const MIN_FRONT_CELLS = 4;
 const SNAP_CELLS = 1.5;
 /** Two ways of drawing a gap this close (mm) in length show the same gap. */
 const SNAP_TOLERANCE_MM = 0.5;
+/** The search's own mark for blocked cells: wider than any route, so never entered. */
+const BLOCKED_KEY = 0x7fffffff;
 /** Samples along a ray, in cells, starting at the next cell's centre: on a square room's grid they
  * land on cell centres, so a hit puts the edge half a step back. A whole-cell step may pass the
  * corner of an obstacle thinner than a cell on a slant; pieces are thicker than that. */
 const RAY_STEP_CELLS = 1;
+/** How much shorter than twice the distance to the nearest blocked centre a chord can be, in cells: 1 + √½ for the chord across, √2 for a diagonal run, rounded up. */
+const CHORD_SHORTFALL_CELLS = 1.75;
 /** Kept back from a skip ahead along a ray, in cells: twice the √½ cell a sample may stray from a centre, rounded up. */
 const RAY_SKIP_MARGIN_CELLS = 1.5;
 
@@ -35,29 +39,77 @@ interface Gap {
   ends: [[number, number], [number, number]];
 }
 
+/**
+ * Per-cell working arrays are kept from one check to the next for grids up to this many cells
+ * (about 8 MB), so a drag that checks the same room again and again does not churn memory; larger
+ * grids get arrays of their own that go when the check is done.
+ */
+const KEPT_SCRATCH_CELLS = 250_000;
+const kept = new Map<string, Float64Array | Int32Array>();
+
+/** A working array of `cells` entries under `name`, with whatever it held before: callers fill it. */
+function scratch<T extends Float64Array | Int32Array>(name: string, make: (cells: number) => T, cells: number): T {
+  const held = kept.get(name) as T | undefined;
+  if (held && held.length >= cells) return held.subarray(0, cells) as T;
+  const made = make(cells);
+  if (cells <= KEPT_SCRATCH_CELLS) kept.set(name, made);
+  return made;
+}
+const float64 = (cells: number) => new Float64Array(cells);
+const int32 = (cells: number) => new Int32Array(cells);
+
 /** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
 const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [[1, 0], [0, 1], [1, 1], [1, -1]];
 /** Length of one step of each run direction, in cells. */
 const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
 
 /**
+ * For every free cell, the shortest of its four straight runs (along x, y and both diagonals) from
+ * blocked cell to blocked cell, in mm, leaving out runs with a wall at both ends (the room's own
+ * shape); Infinity when none counts. Every run starts just past a blocked cell, so one sweep over
+ * the blocked cells finds each run once, measures it and hands its length to the cells along it.
+ */
+function shortestRunsMm(grid: FloorGrid): Float64Array {
+  const { nx, label, cellMm } = grid;
+  const cells = label.length;
+  const shortest = scratch('shortest', float64, cells).fill(Infinity);
+  const steps = RUN_DIRECTIONS.map(([di, dj]) => dj * nx + di);
+  for (let back = 0; back < cells; back++) {
+    if (label[back] === FREE) continue;
+    for (let k = 0; k < 4; k++) {
+      const step = steps[k];
+      const first = back + step;
+      // Off the grid, or past its edge onto the blocked ring of the next row: no run starts here.
+      if (first < 0 || first >= cells || label[first] !== FREE) continue;
+      let ahead = first;
+      while (label[ahead] === FREE) ahead += step;
+      if (label[back] === WALL && label[ahead] === WALL) continue;
+      // The free cells between the two ends, each a step long: their edges are the obstacles' edges.
+      // Every direction moves one column a step except straight down, which moves a whole row.
+      const count = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
+      const runMm = (count - 1) * cellMm * RUN_STEP_CELLS[k];
+      for (let cell = first; cell !== ahead; cell += step) if (runMm < shortest[cell]) shortest[cell] = runMm;
+    }
+  }
+  return shortest;
+}
+
+/**
  * The clear width at each free cell: the shortest chord through it from obstacle to obstacle. One
  * chord runs from the nearest obstacle straight across (at a piece's face, the room in front of it;
  * between two pieces, the gap wherever in the gap the cell lies); four more run along x, y and the
- * diagonals, so the end of a recess reads as narrow as its middle. Those four are counted once for
- * the whole grid. A chord with a wall at both ends is the room's own shape (a doorway's reveals, an
- * alcove): the designer cannot move it, so it does not count. Widths are found on demand and kept.
+ * diagonals, so the end of a recess reads as narrow as its middle. A chord with a wall at both ends
+ * is the room's own shape (a doorway's reveals, an alcove): the designer cannot move it, so it does
+ * not count. Widths are found on demand and kept; the search asks only as far as it needs.
  */
 class Widths {
+  /** Exact width (mm) at each cell, NaN until measured. */
   private readonly widthMm: Float64Array;
-  /** The cells at the two ends of the chord that gave each width (−1 before it is measured). */
-  private readonly endA: Int32Array;
-  private readonly endB: Int32Array;
+  /** Whole-mm width capped at the key it was first asked for, plus one; 0 until asked. */
+  private readonly cappedMm: Int32Array;
   private readonly nearest: Int32Array;
   private readonly squaredCells: Float64Array;
-  /** Per run direction, the blocked cell ending each free cell's run behind it and ahead of it. */
-  private readonly runBack: Int32Array[];
-  private readonly runAhead: Int32Array[];
+  private readonly shortestRunMm: Float64Array;
   /** Set by `ray`: the blocked cell it met. */
   private rayHit = -1;
 
@@ -69,33 +121,44 @@ class Widths {
     const field = distanceField(grid);
     this.nearest = field.nearest;
     this.squaredCells = field.squaredCells;
+    this.shortestRunMm = shortestRunsMm(grid);
     const cells = grid.nx * grid.ny;
-    this.widthMm = new Float64Array(cells).fill(NaN);
-    this.endA = new Int32Array(cells).fill(-1);
-    this.endB = new Int32Array(cells).fill(-1);
-    this.runBack = RUN_DIRECTIONS.map(([di, dj]) => this.runEnds(-di, -dj));
-    this.runAhead = RUN_DIRECTIONS.map(([di, dj]) => this.runEnds(di, dj));
+    this.widthMm = scratch('width', float64, cells).fill(NaN);
+    this.cappedMm = scratch('capped', int32, cells).fill(0);
   }
 
   /**
-   * For every free cell, the first blocked cell met stepping (di, dj) from it. Cells are visited so
-   * that the neighbour in that direction is settled first; the blocked ring round the grid ends every run.
+   * The width at a free cell in whole mm, capped at keyMm: as `at` gives it, but measured only as
+   * far as the cap. The search asks with keys that only fall, so the first answer is kept and
+   * serves every later, lower cap.
    */
-  private runEnds(di: number, dj: number): Int32Array {
-    const { nx, ny, label } = this.grid;
-    const ends = new Int32Array(nx * ny).fill(-1);
-    const step = dj * nx + di;
-    for (let jj = 0; jj < ny; jj++) {
-      const j = dj > 0 ? ny - 1 - jj : jj;
-      for (let ii = 0; ii < nx; ii++) {
-        const i = di > 0 ? nx - 1 - ii : ii;
-        const cell = j * nx + i;
-        if (label[cell] !== FREE) continue;
-        const next = cell + step;
-        ends[cell] = label[next] !== FREE ? next : ends[next];
-      }
+  cappedAt(cell: number, keyMm: number): number {
+    const known = this.cappedMm[cell];
+    if (known > 0) return known - 1 < keyMm ? known - 1 : keyMm;
+    const cellMm = this.grid.cellMm;
+    const nearSideMm = (Math.sqrt(this.squaredCells[cell]) - 0.5) * cellMm;
+    let widthMm: number;
+    if (2 * nearSideMm >= this.enoughMm) widthMm = 2 * nearSideMm;
+    else {
+      const runMm = this.shortestRunMm[cell];
+      // A chord across found past the cap, like one past the shortest run, cannot change the answer.
+      widthMm = runMm <= nearSideMm + cellMm / 2 ? runMm : Math.min(this.across(cell, Math.min(this.enoughMm, runMm, keyMm)), runMm);
     }
-    return ends;
+    const capped = Math.floor(Math.min(widthMm, keyMm));
+    this.cappedMm[cell] = capped + 1;
+    return capped;
+  }
+
+  /**
+   * Whether the width at a cell is already known to be more than widthMm, so it need not be
+   * measured exactly to be compared: the search's capped answer c means at least c; and with d the
+   * distance (cells) to the nearest blocked centre, every chord is at least (2d − 1.71) cells long
+   * (a run's ends lie at least d away on either side, less one step of at most √2 cells; the chord
+   * across reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
+   */
+  knownWiderThan(cell: number, widthMm: number): boolean {
+    if (this.cappedMm[cell] - 1 > Math.floor(widthMm)) return true;
+    return (2 * Math.sqrt(this.squaredCells[cell]) - CHORD_SHORTFALL_CELLS) * this.grid.cellMm > widthMm;
   }
 
   /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
@@ -107,7 +170,7 @@ class Widths {
   at(cell: number): number {
     const known = this.widthMm[cell];
     if (!Number.isNaN(known)) return known;
-    const value = this.measure(cell);
+    const value = this.value(cell);
     this.widthMm[cell] = value;
     return value;
   }
@@ -142,46 +205,63 @@ class Widths {
     return this.grid.label[a] === WALL && this.grid.label[b] === WALL;
   }
 
-  private measure(cell: number): number {
+  /** The chord across from the nearest obstacle: its length (mm) and far end, or Infinity. */
+  private across(cell: number, reachMm: number): number {
     const { nx, cellMm } = this.grid;
     const nearestCell = this.nearest[cell];
     const d1 = Math.sqrt(this.squaredCells[cell]);
-    // Cell centres stand half a cell, on average, off the obstacle's true edge.
     const nearSideMm = (d1 - 0.5) * cellMm;
-    if (2 * nearSideMm >= this.enoughMm) return 2 * nearSideMm;
     const i = cell % nx;
     const j = (cell - i) / nx;
-    let widthMm = Infinity;
-    const farSideMm = this.ray(i, j, (i - (nearestCell % nx)) / d1, (j - Math.floor(nearestCell / nx)) / d1, this.enoughMm - nearSideMm);
-    if (farSideMm < Infinity && !this.bothWalls(nearestCell, this.rayHit)) {
-      widthMm = nearSideMm + farSideMm;
-      this.endA[cell] = nearestCell;
-      this.endB[cell] = this.rayHit;
-    }
-    for (let k = 0; k < RUN_DIRECTIONS.length; k++) {
-      const back = this.runBack[k][cell];
-      const ahead = this.runAhead[k][cell];
-      // The free cells between the two ends, each a step long: their edges are the obstacles' edges.
-      // Every direction moves one column a step except straight down, which moves a whole row.
-      const steps = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
-      const runMm = (steps - 1) * cellMm * RUN_STEP_CELLS[k];
-      if (runMm < widthMm && !this.bothWalls(back, ahead)) {
-        widthMm = runMm;
-        this.endA[cell] = back;
-        this.endB[cell] = ahead;
-      }
-    }
-    return widthMm;
+    const farSideMm = this.ray(i, j, (i - (nearestCell % nx)) / d1, (j - Math.floor(nearestCell / nx)) / d1, reachMm - nearSideMm);
+    return farSideMm < Infinity && !this.bothWalls(nearestCell, this.rayHit) ? nearSideMm + farSideMm : Infinity;
+  }
+
+  /**
+   * The width alone. The straight runs are known, so the chord across need only be looked for as
+   * far as it could still be the shorter: a chord found past that is longer than a run anyway.
+   */
+  private value(cell: number): number {
+    const nearSideMm = (Math.sqrt(this.squaredCells[cell]) - 0.5) * this.grid.cellMm;
+    if (2 * nearSideMm >= this.enoughMm) return 2 * nearSideMm;
+    const runMm = this.shortestRunMm[cell];
+    // The far side lies at least half a cell off, so a run that short already wins.
+    if (runMm <= nearSideMm + this.grid.cellMm / 2) return runMm;
+    return Math.min(this.across(cell, Math.min(this.enoughMm, runMm)), runMm);
   }
 
   /** The obstacles at the two ends of a measured cell's chord and where they are (plan mm), or null if it is wide. */
   gap(cell: number): Gap | null {
-    if (!Number.isFinite(this.at(cell)) || this.endA[cell] < 0) return null;
-    const a = this.endA[cell];
-    const b = this.endB[cell];
+    const { nx, cellMm, label } = this.grid;
+    const nearSideMm = (Math.sqrt(this.squaredCells[cell]) - 0.5) * cellMm;
+    if (!Number.isFinite(this.at(cell)) || 2 * nearSideMm >= this.enoughMm) return null;
+    // The chord that gave the width: the one across first, then the runs in their order.
+    let widthMm = this.across(cell, this.enoughMm);
+    let endA = -1;
+    let endB = -1;
+    if (widthMm < Infinity) {
+      endA = this.nearest[cell];
+      endB = this.rayHit;
+    }
+    for (let k = 0; k < RUN_DIRECTIONS.length; k++) {
+      const [di, dj] = RUN_DIRECTIONS[k];
+      const step = dj * nx + di;
+      let back = cell - step;
+      while (label[back] === FREE) back -= step;
+      let ahead = cell + step;
+      while (label[ahead] === FREE) ahead += step;
+      const steps = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
+      const runMm = (steps - 1) * cellMm * RUN_STEP_CELLS[k];
+      if (runMm < widthMm && !this.bothWalls(back, ahead)) {
+        widthMm = runMm;
+        endA = back;
+        endB = ahead;
+      }
+    }
+    if (endA < 0) return null;
     return {
-      sides: [this.grid.label[a], this.grid.label[b]],
-      ends: [cellCentreMm(this.grid, a), cellCentreMm(this.grid, b)],
+      sides: [label[endA], label[endB]],
+      ends: [cellCentreMm(this.grid, endA), cellCentreMm(this.grid, endB)],
     };
   }
 }
@@ -234,7 +314,7 @@ class WidestFirst {
 }
 
 interface Routes {
-  /** Best bottleneck width (whole mm, at most the walkway width) from any way in to each cell; −1 where no route reaches. */
+  /** Best bottleneck width (whole mm, at most the walkway width) from any way in to each free cell; −1 where no route reaches. */
   bottleneckMm: Int32Array;
   /** The cell each best route came from; −1 at a way in. */
   parent: Int32Array;
@@ -246,41 +326,42 @@ interface Routes {
  * Widest routes from the way-in cells over free cells, four neighbours each (diagonal steps could
  * slip between two blocked cells meeting at a corner): a Dijkstra search that always extends the
  * route with the widest bottleneck so far, so each cell ends with the widest route that reaches it.
+ * Keys only fall as the search goes on, so a cell taken at its own key is settled: a later key
+ * cannot beat it, and no separate record of settled cells is needed.
  */
 function widestRoutes(grid: FloorGrid, widths: Widths, sources: readonly { cell: number; opening: number }[], limitMm: number): Routes {
   const cells = grid.nx * grid.ny;
-  const bottleneckMm = new Int32Array(cells).fill(-1);
-  const parent = new Int32Array(cells).fill(-1);
-  const wayIn = new Int32Array(cells).fill(-1);
-  const done = new Uint8Array(cells);
+  const { nx, label } = grid;
+  const bottleneckMm = scratch('bottleneck', int32, cells);
+  for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
+  const parent = scratch('parent', int32, cells).fill(-1);
+  const wayIn = scratch('way-in', int32, cells).fill(-1);
   const queue = new WidestFirst(limitMm);
-  const keyOf = (widthMm: number): number => Math.floor(Math.min(widthMm, limitMm));
   for (const { cell, opening } of sources) {
-    const key = keyOf(widths.at(cell));
+    const key = Math.floor(Math.min(widths.at(cell), limitMm));
     if (key <= bottleneckMm[cell]) continue;
     bottleneckMm[cell] = key;
     wayIn[cell] = opening;
     queue.push(cell, key);
   }
-  const { nx, label } = grid;
-  const steps = [-1, 1, -nx, nx];
   for (let cell = queue.pop(); cell >= 0; cell = queue.pop()) {
     const keyMm = queue.keyMm;
-    if (done[cell] || keyMm < bottleneckMm[cell]) continue;
-    done[cell] = 1;
-    for (const step of steps) {
-      // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
-      const next = cell + step;
-      if (label[next] !== FREE || done[next] || bottleneckMm[next] >= keyMm) continue;
+    if (keyMm < bottleneckMm[cell]) continue;
+    // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
+    for (let n = 0; n < 4; n++) {
+      const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
+      const known = bottleneckMm[next];
+      if (known >= keyMm) continue;
       // Where even the nearest obstacle leaves room for the route so far, the cell cannot narrow it.
-      const through = widths.lowerBoundMm(next) >= keyMm ? keyMm : Math.min(keyMm, keyOf(widths.at(next)));
-      if (through > bottleneckMm[next]) {
+      const through = widths.lowerBoundMm(next) >= keyMm ? keyMm : widths.cappedAt(next, keyMm);
+      if (through > known) {
         bottleneckMm[next] = through;
         parent[next] = cell;
         queue.push(next, through);
       }
     }
   }
+  for (let cell = 0; cell < cells; cell++) if (bottleneckMm[cell] === BLOCKED_KEY) bottleneckMm[cell] = -1;
   return { bottleneckMm, parent, wayIn };
 }
 
@@ -356,8 +437,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
   const grid = rasteriseFloor(outline, obstacles, WALKWAY_CELL_MM);
-  const widths = new Widths(grid, walkwayMm);
-
+  
   // The floor cells just inside each way in, sampled every half cell along its width.
   const walls = layoutShellWalls(shell);
   const sources: { cell: number; opening: number }[] = [];
@@ -370,7 +450,9 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       if (cell >= 0 && grid.label[cell] === FREE) sources.push({ cell, opening });
     }
   });
-  const routes = widestRoutes(grid, widths, sources, Math.ceil(walkwayMm));
+  const limitMm = Math.ceil(walkwayMm);
+  const widths = new Widths(grid, walkwayMm);
+  const routes = widestRoutes(grid, widths, sources, limitMm);
 
   const findings: Finding[] = [];
   obstacles.forEach((box, index) => {
@@ -400,12 +482,16 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
 
     // Walk the route back to its way in; its narrowest cell is where the bottleneck is.
     let narrowest = bestCell;
+    let narrowestMm = widths.at(bestCell);
     let cell = bestCell;
-    while (routes.parent[cell] >= 0) {
-      if (widths.at(cell) < widths.at(narrowest)) narrowest = cell;
+    for (;;) {
+      if (!widths.knownWiderThan(cell, narrowestMm) && widths.at(cell) < narrowestMm) {
+        narrowest = cell;
+        narrowestMm = widths.at(cell);
+      }
+      if (routes.parent[cell] < 0) break;
       cell = routes.parent[cell];
     }
-    if (widths.at(cell) < widths.at(narrowest)) narrowest = cell;
     const opening = ways[routes.wayIn[cell]];
     const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.

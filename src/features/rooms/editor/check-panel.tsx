@@ -6,6 +6,7 @@ import { inputClass } from '../../../components/ui/field';
 import { Notice, Spinner } from '../../../components/ui/layout';
 import { TakeoffTable } from '../components/takeoff-table';
 import { TALL_PIECE_MM } from './furnish-panel';
+import type { FitResult } from './use-fit-check';
 
 const KIND_TITLE: Record<Finding['kind'], string> = {
   overlap: 'Pieces overlap',
@@ -20,7 +21,7 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
 export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, selected, onChoose }: {
   shell: RoomShell;
   pieces: Piece[];
-  result: { findings: Finding[]; ms: number; error?: string } | null;
+  result: FitResult | null;
   walkwayMm: number;
   onWalkway: (mm: number) => void;
   unit: LengthUnit;
@@ -48,6 +49,10 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
         90 cm is common practice for a main route (36 in in US codes: IRC R311.6, ADA §403.5.1). Beds, dining chairs and coffee tables need less, from published guidance.
       </p>
 
+      {/* Announced politely and kept small: while a piece moves the list below is the last layout's. */}
+      <p role="status" aria-live="polite" data-testid="fit-status" data-state={!result || result.pending ? 'checking' : 'checked'} data-check-ms={result ? Math.round(result.ms) : undefined} className="-mb-3 h-4 text-xs text-ink-faint">
+        {result?.pending ? 'Checking…' : ''}
+      </p>
       {!result ? (
         <Spinner label="Checking the layout…" />
       ) : result.error ? (
@@ -55,7 +60,7 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
       ) : result.findings.length === 0 ? (
         <Notice tone="ok">Everything fits, with room to move.</Notice>
       ) : (
-        <ol className="flex flex-col gap-2" aria-label="Findings">
+        <ol className={`flex flex-col gap-2 transition-opacity ${result.pending ? 'opacity-70' : ''}`} aria-label="Findings" aria-busy={result.pending}>
           {result.findings.map((f, i) => (
             <li key={`${f.kind}-${f.pieces.join('-')}-${f.openings.join('-')}`}>
               <button

@@ -109,12 +109,14 @@ export function PlanView(props: Props) {
 
   const pieceById = useMemo(() => new Map(pieces.map((p) => [p.id, p])), [pieces]);
   const editable = !readOnly;
+  // Pieces move in Furnish, and in Check too, so the findings can be watched as a piece is dragged.
+  const movable = editable && (step === 'furnish' || step === 'check');
 
   // ——— pointer handling ———
   const onPointerDownPiece = (e: ReactPointerEvent, piece: Piece) => {
     e.stopPropagation();
     onSelect({ kind: 'piece', id: piece.id });
-    if (!editable || step !== 'furnish') return;
+    if (!movable) return;
     (e.target as Element).setPointerCapture?.(e.pointerId);
     const at = toPlan(e.clientX, e.clientY);
     const centre = piece.placed ? [piece.x, piece.y] : layout.holding.slots[piece.id] ?? [piece.x, piece.y];
@@ -397,7 +399,7 @@ export function PlanView(props: Props) {
             data-x={Math.round(p.x)}
             data-y={Math.round(p.y)}
             data-rotation={Math.round(p.rotation)}
-            className={editable && step === 'furnish' ? 'cursor-move' : 'cursor-pointer'}
+            className={movable ? 'cursor-move' : 'cursor-pointer'}
             onPointerDown={(e) => onPointerDownPiece(e, p)}
             opacity={p.elevation >= 1200 ? 0.75 : 1}
           >

@@ -1,0 +1,161 @@
+// The fit check as it stood before the speed work, frozen: the bench times it beside today's and
+// tests/reference/fit-reference.test.ts checks both give the same findings. Do not edit.
+// The room's free floor as a grid of square cells, and the exact Euclidean distance from every cell
+// to the nearest blocked one. Plan mm, x right, y down; cell (i, j) has its centre at
+// (originX + (i + ½)·cellMm, originY + (j + ½)·cellMm) and index j·nx + i.
+import { boundsMm } from '../../../shared/geometry/polygon';
+import type { Vec2 } from '../../../shared/geometry/vec';
+import type { PieceBox } from '../../../shared/analysis/fit/boxes';
+
+/** A cell label: free floor. */
+export const FREE = -1;
+/** A cell label: outside the outline (a wall or beyond). Labels 0 and up name an obstacle box by its index. */
+export const WALL = -2;
+/** Blocked cells kept round the outline's bounds, so every row and column meets a wall. */
+const PAD_CELLS = 2;
+
+export interface FloorGrid {
+  cellMm: number;
+  nx: number;
+  ny: number;
+  originX: number;
+  originY: number;
+  /** FREE, WALL, or the index of the obstacle box covering the cell's centre. */
+  label: Int32Array;
+}
+
+/** Centre of cell `index` in plan mm. */
+export function cellCentreMm(grid: FloorGrid, index: number): [number, number] {
+  const i = index % grid.nx;
+  const j = (index - i) / grid.nx;
+  return [grid.originX + (i + 0.5) * grid.cellMm, grid.originY + (j + 0.5) * grid.cellMm];
+}
+
+/** Index of the cell holding plan point p (mm), or −1 off the grid. */
+export function cellAt(grid: FloorGrid, p: Vec2): number {
+  const i = Math.floor((p[0] - grid.originX) / grid.cellMm);
+  const j = Math.floor((p[1] - grid.originY) / grid.cellMm);
+  if (i < 0 || j < 0 || i >= grid.nx || j >= grid.ny) return -1;
+  return j * grid.nx + i;
+}
+
+/**
+ * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm: a cell is free when its
+ * centre is inside the outline and in no obstacle. The first box to cover a cell names it.
+ */
+export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly PieceBox[], cellMm: number): FloorGrid {
+  const bounds = boundsMm(outline);
+  const originX = bounds.minX - PAD_CELLS * cellMm;
+  const originY = bounds.minY - PAD_CELLS * cellMm;
+  const nx = Math.ceil((bounds.maxX - bounds.minX) / cellMm) + 2 * PAD_CELLS;
+  const ny = Math.ceil((bounds.maxY - bounds.minY) / cellMm) + 2 * PAD_CELLS;
+  const label = new Int32Array(nx * ny).fill(WALL);
+  const grid: FloorGrid = { cellMm, nx, ny, originX, originY, label };
+
+  // Scanlines through the cell centres: fill between pairs of outline crossings (even-odd).
+  const crossings: number[] = [];
+  for (let j = 0; j < ny; j++) {
+    const y = originY + (j + 0.5) * cellMm;
+    crossings.length = 0;
+    for (let k = 0; k < outline.length; k++) {
+      const a = outline[k];
+      const b = outline[(k + 1) % outline.length];
+      if (a[1] > y !== b[1] > y) crossings.push(a[0] + ((y - a[1]) * (b[0] - a[0])) / (b[1] - a[1]));
+    }
+    crossings.sort((p, q) => p - q);
+    for (let k = 0; k + 1 < crossings.length; k += 2) {
+      const from = Math.max(0, Math.ceil((crossings[k] - originX) / cellMm - 0.5));
+      const to = Math.min(nx - 1, Math.floor((crossings[k + 1] - originX) / cellMm - 0.5));
+      label.fill(FREE, j * nx + from, j * nx + to + 1);
+    }
+  }
+
+  obstacles.forEach((box, index) => {
+    const b = boundsMm(box.corners);
+    const i0 = Math.max(0, Math.floor((b.minX - originX) / cellMm));
+    const i1 = Math.min(nx - 1, Math.floor((b.maxX - originX) / cellMm));
+    const j0 = Math.max(0, Math.floor((b.minY - originY) / cellMm));
+    const j1 = Math.min(ny - 1, Math.floor((b.maxY - originY) / cellMm));
+    const [ax, ay] = box.axisX;
+    for (let j = j0; j <= j1; j++) {
+      const dy = originY + (j + 0.5) * cellMm - box.centre[1];
+      for (let i = i0; i <= i1; i++) {
+        const cell = j * nx + i;
+        if (label[cell] !== FREE) continue;
+        const dx = originX + (i + 0.5) * cellMm - box.centre[0];
+        // Coordinates in the box's own axes (axisY is axisX turned a quarter clockwise).
+        const u = dx * ax + dy * ay;
+        const v = -dx * ay + dy * ax;
+        if (Math.abs(u) <= box.halfWidthMm && Math.abs(v) <= box.halfDepthMm) label[cell] = index;
+      }
+    }
+  });
+  return grid;
+}
+
+/** Squared distance (in cells²) from every cell's centre to the nearest blocked cell's centre, and which cell that is. */
+export interface DistanceField {
+  squaredCells: Float64Array;
+  nearest: Int32Array;
+}
+
+/**
+ * Exact Euclidean distance transform of the blocked cells (Felzenszwalb and Huttenlocher's lower
+ * envelope of parabolas, one pass down the columns and one along the rows), keeping the nearest
+ * blocked cell so a gap can be traced to what bounds it. Linear in the number of cells.
+ */
+export function distanceField(grid: FloorGrid): DistanceField {
+  const { nx, ny, label } = grid;
+  const cells = nx * ny;
+  // Columns: distance to the nearest blocked cell straight up or down, and its row.
+  const columnSquared = new Float64Array(cells);
+  const columnRow = new Int32Array(cells);
+  for (let i = 0; i < nx; i++) {
+    let last = -1;
+    for (let j = 0; j < ny; j++) {
+      if (label[j * nx + i] !== FREE) last = j;
+      columnRow[j * nx + i] = last;
+    }
+    let next = -1;
+    for (let j = ny - 1; j >= 0; j--) {
+      const cell = j * nx + i;
+      if (label[cell] !== FREE) next = j;
+      const above = columnRow[cell];
+      const row = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
+      columnRow[cell] = row;
+      columnSquared[cell] = row < 0 ? Infinity : (row - j) * (row - j);
+    }
+  }
+  // Rows: the lower envelope of parabolas (x − q)² + column distance² over the columns q.
+  const squaredCells = new Float64Array(cells);
+  const nearest = new Int32Array(cells);
+  const sites = new Int32Array(nx);
+  const bounds = new Float64Array(nx + 1);
+  for (let j = 0; j < ny; j++) {
+    const row = j * nx;
+    let k = -1;
+    for (let q = 0; q < nx; q++) {
+      const fq = columnSquared[row + q];
+      if (fq === Infinity) continue;
+      let s = -Infinity;
+      while (k >= 0) {
+        const p = sites[k];
+        s = (fq + q * q - (columnSquared[row + p] + p * p)) / (2 * (q - p));
+        if (s > bounds[k]) break;
+        k--;
+      }
+      k++;
+      sites[k] = q;
+      bounds[k] = k === 0 ? -Infinity : s;
+      bounds[k + 1] = Infinity;
+    }
+    let at = 0;
+    for (let x = 0; x < nx; x++) {
+      while (bounds[at + 1] < x) at++;
+      const q = sites[at];
+      squaredCells[row + x] = (x - q) * (x - q) + columnSquared[row + q];
+      nearest[row + x] = columnRow[row + q] * nx + q;
+    }
+  }
+  return { squaredCells, nearest };
+}

@@ -1,0 +1,50 @@
+// The fit check as it stood before the speed work, frozen: the bench times it beside today's and
+// tests/reference/fit-reference.test.ts checks both give the same findings. Do not edit.
+// The fit check: every finding about a layout, from the room shell and the option's pieces (plan mm).
+import type { Piece } from '../../../shared/schemas/option';
+import type { RoomShell } from '../../../shared/schemas/room';
+import { DEFAULT_WALKWAY_MM, findingKindSchema, type Finding } from '../../../shared/analysis/takeoff';
+import { placedBoxes } from '../../../shared/analysis/fit/boxes';
+import { findDoorSwings } from './door-swing';
+import { findTooBigForDoor } from '../../../shared/analysis/fit/door-fit';
+import { findOverlaps } from '../../../shared/analysis/fit/overlap';
+import { findOutsideRoom } from './outside-room';
+import { findWalkwayProblems } from './walkway';
+import { findBlockedWindows } from '../../../shared/analysis/fit/window';
+
+export interface FitCheckOptions {
+  /** Clear width (mm) a route from a door to a piece's front needs; DEFAULT_WALKWAY_MM when left out. */
+  walkwayMm?: number;
+}
+
+const KIND_ORDER = new Map(findingKindSchema.options.map((kind, index) => [kind, index]));
+
+// Plain code-unit order, not the locale's: the same ids sort the same on every machine.
+function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+function compareFindings(a: Finding, b: Finding): number {
+  const byKind = (KIND_ORDER.get(a.kind) ?? 0) - (KIND_ORDER.get(b.kind) ?? 0);
+  if (byKind !== 0) return byKind;
+  const byPieces = compareText(a.pieces.join('\u0000'), b.pieces.join('\u0000'));
+  return byPieces !== 0 ? byPieces : compareText(a.openings.join('\u0000'), b.openings.join('\u0000'));
+}
+
+/**
+ * Findings for a validated room shell and an option's pieces (plan mm): only placed pieces count.
+ * Ordered by kind (as DESIGN.md lists them), then piece ids, then opening ids, so the same layout
+ * always reads the same.
+ */
+export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: FitCheckOptions = {}): Finding[] {
+  const walkwayMm = options.walkwayMm ?? DEFAULT_WALKWAY_MM;
+  const boxes = placedBoxes(pieces);
+  return [
+    ...findOverlaps(boxes),
+    ...findOutsideRoom(shell, boxes),
+    ...findDoorSwings(shell, boxes),
+    ...findBlockedWindows(shell, boxes),
+    ...findWalkwayProblems(shell, boxes, walkwayMm),
+    ...findTooBigForDoor(shell, boxes),
+  ].sort(compareFindings);
+}
