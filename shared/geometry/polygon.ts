@@ -1,5 +1,5 @@
 import { POINT_TOLERANCE_MM } from './tolerances';
-import { cross, distance, dot, sub, type Vec2 } from './vec';
+import { cross, distance, sub, type Vec2 } from './vec';
 
 /**
  * Shoelace area in mm² of plan points (mm). Positive when the corners run counter-clockwise in a

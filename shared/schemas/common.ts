@@ -22,8 +22,10 @@ export const sortSchema = z.enum(['updated', 'name']).default('updated');
  * and the bidirectional embeddings, overrides and isolates U+202A–U+202E, U+2066–U+2069, which
  * can make a name read differently from what it holds ("Trojan Source", CVE-2021-42574).
  */
+// eslint-disable-next-line no-control-regex -- finding control characters is the point
 const NAME_FORBIDDEN = /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
 /** The same for notes and messages, where tab and line breaks (\t \n \r) are welcome. */
+// eslint-disable-next-line no-control-regex -- finding control characters is the point
 const NOTE_FORBIDDEN = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
 
 export const NAME_CHARACTERS_MESSAGE = 'Remove control characters and text-direction marks.';

@@ -77,8 +77,9 @@ describe('the cap on grid cells', () => {
   });
 
   it('still checks a walkway in an outsized room, on the coarser cell', () => {
+    // 50 m × 20 m: the largest floor the room schema allows (1,000 m²), 1.6 million cells at 25 mm.
     const room = roomShellSchema.parse({
-      outline: square(50000),
+      outline: [[0, 0], [50000, 0], [50000, 20000], [0, 20000]],
       openings: [{ id: 'd1', type: 'door', wall: 0, offset: 1000, width: 900, height: 2040, hinge: 'start', swing: 'out' }],
     });
     // A chest facing a wall 100 mm away.

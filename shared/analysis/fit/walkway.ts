@@ -504,7 +504,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     const gap = widths.gap(cell);
     let widthMm = gridWidthMm;
     let between: Finding['between'];
-    let words = '';
+    let words: string;
     const involved: string[] = [];
     if (gap) {
       const [sideA, sideB] = gap.sides;
