@@ -6,6 +6,7 @@ import * as m0003 from './0003_create_finishes';
 import * as m0004 from './0004_create_presentations';
 import * as m0005 from './0005_create_rate_limits';
 import * as m0006 from './0006_notify_presentation_changes';
+import * as m0010 from './0010_piece_kinds';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
@@ -14,4 +15,5 @@ export const migrations: Record<string, Migration> = {
   '0004_create_presentations': m0004,
   '0005_create_rate_limits': m0005,
   '0006_notify_presentation_changes': m0006,
+  '0010_piece_kinds': m0010,
 };

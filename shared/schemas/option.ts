@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { checkKindSettings, pieceKindSchema, pieceSettingsSchema } from './piece-kind';
 
 const lengthMm = z.number().finite();
 const positiveMm = lengthMm.positive({ message: 'must be more than 0 mm' });
@@ -23,7 +24,16 @@ export const pieceSchema = z.object({
     .optional(),
   finishId: z.string().nullable().optional(),
   placed: z.boolean().default(true),
-  kind: z.string().optional(),
+  /** What the piece is; it shapes only what is drawn inside the box. Missing reads as plain-block. */
+  kind: pieceKindSchema.optional(),
+  /** The kind's own choices (arms, doors, headboard…); a setting the kind does not take is refused. */
+  settings: pieceSettingsSchema.optional(),
+  /** The second finish (legs, frame, handles): a colour or a library finish, like colour and finishId for the main one. */
+  accentColour: z
+    .string()
+    .regex(/^#[0-9a-fA-F]{6}$/, { message: 'must be a colour like #a0b1c2' })
+    .optional(),
+  accentFinishId: z.string().nullable().optional(),
 });
 export type Piece = z.infer<typeof pieceSchema>;
 export type PieceInput = z.input<typeof pieceSchema>;
@@ -38,8 +48,11 @@ export const finishAssignmentsSchema = z.object({
 export type FinishAssignments = z.infer<typeof finishAssignmentsSchema>;
 
 /** The option document stored as jsonb; its name and note live in table columns. */
+/** Pieces of an option or a plan file, each with only the settings its kind takes. */
+export const piecesSchema = z.array(pieceSchema).superRefine(checkKindSettings);
+
 export const optionDocSchema = z.object({
-  pieces: z.array(pieceSchema).default([]),
+  pieces: piecesSchema.default([]),
   finishes: finishAssignmentsSchema.default({ floor: null, ceiling: null, walls: null, wallOverrides: {} }),
 });
 export type OptionDoc = z.infer<typeof optionDocSchema>;

@@ -16,6 +16,8 @@ export interface SurfaceFinishes {
   wallOverrides?: Record<string, SceneFinish>;
   /** Pieces by id (drawn in the finish's colour, or a photo's mean colour). */
   pieces?: Record<string, SceneFinish>;
+  /** Pieces' second finish (legs, frame, handles) by id. */
+  pieceAccents?: Record<string, SceneFinish>;
 }
 
 export interface FinishMaterialPair {

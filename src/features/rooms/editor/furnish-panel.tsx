@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
-import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueKind } from '../../../../shared/catalogue/catalogue';
+import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import {
   addPiece, duplicatePiece, holdPiece, placePiece, removePiece, resizePiece, rotatePiece, updatePiece, type Command,
 } from '../../../../shared/commands';
@@ -12,7 +12,7 @@ import { LengthField } from '../../../components/ui/length-field';
 import { roomCentre, type Selection } from './plan-geometry';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
-  seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', rugs: 'Rugs', other: 'Anything else',
+  seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', kitchen: 'Kitchen', lighting: 'Lighting', rugs: 'Rugs', other: 'Anything else',
 };
 
 /** Tall pieces can tip: at this height or more, the editor reminds the designer to fix them to the wall (common practice). */
@@ -39,7 +39,7 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
   onSelect: (s: Selection) => void; newId: (prefix: string) => string; heldCount: number;
 }) {
   const [filter, setFilter] = useState('');
-  const add = (kind: CatalogueKind, held: boolean) => {
+  const add = (kind: CatalogueId, held: boolean) => {
     const id = newId('piece');
     const piece = pieceFromCatalogue(kind, id, roomCentre(shell));
     if (run(addPiece(optionId, held ? { ...piece, placed: false } : piece))) onSelect({ kind: 'piece', id });
@@ -64,10 +64,10 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
             <ul className="flex flex-col gap-1">
               {entries.map((e) => (
                 <li
-                  key={e.kind}
+                  key={e.id}
                   draggable={!readOnly}
                   onDragStart={(ev) => {
-                    ev.dataTransfer.setData('application/x-parlour-catalogue', e.kind);
+                    ev.dataTransfer.setData('application/x-parlour-catalogue', e.id);
                     ev.dataTransfer.effectAllowed = 'copy';
                   }}
                   className={`group flex items-center gap-2 rounded-lg border border-line bg-white px-3 py-2 ${readOnly ? '' : 'cursor-grab hover:border-pine'}`}
@@ -81,8 +81,8 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
                   </div>
                   {!readOnly && (
                     <>
-                      <Button size="sm" variant="quiet" onClick={() => add(e.kind as CatalogueKind, true)} aria-label={`Put a ${e.name} in the holding area`} title="Put it in the holding area">Hold</Button>
-                      <Button size="sm" onClick={() => add(e.kind as CatalogueKind, false)} aria-label={`Add ${e.name}`}>Add</Button>
+                      <Button size="sm" variant="quiet" onClick={() => add(e.id as CatalogueId, true)} aria-label={`Put a ${e.name} in the holding area`} title="Put it in the holding area">Hold</Button>
+                      <Button size="sm" onClick={() => add(e.id as CatalogueId, false)} aria-label={`Add ${e.name}`}>Add</Button>
                     </>
                   )}
                 </li>

@@ -7,7 +7,7 @@ import {
   holdPiece, moveCorner, movePiece, placePiece, rotatePiece, setOutline, snapAngle, snapPieceToPieces, snapPieceToWalls, snapToGrid,
   updateOpening, addPiece, type Command,
 } from '../../../../shared/commands';
-import { pieceFromCatalogue, type CatalogueKind } from '../../../../shared/catalogue/catalogue';
+import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { distance } from '../../../../shared/geometry/vec';
 import { DIMENSION_OFFSET_MM, inHolding, pieceRing, planLayout, ringPath, type Selection } from './plan-geometry';
@@ -243,7 +243,7 @@ export function PlanView(props: Props) {
     e.preventDefault();
     const at = toPlan(e.clientX, e.clientY);
     const id = newId('piece');
-    let piece = pieceFromCatalogue(kind as CatalogueKind, id, [Math.round(at[0]), Math.round(at[1])]);
+    let piece = pieceFromCatalogue(kind as CatalogueId, id, [Math.round(at[0]), Math.round(at[1])]);
     if (inHolding(layout, at)) piece = { ...piece, placed: false };
     else piece = snapPieceToWalls(piece, shell).piece;
     if (run(addPiece(optionId, piece))) onSelect({ kind: 'piece', id });
