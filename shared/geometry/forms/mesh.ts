@@ -1,0 +1,222 @@
+// Parts (piece frame mm) as triangles in scene metres, one mesh per material slot, so a room's
+// forms can be merged per material into a few draw calls. UVs are metres along each face, so a
+// photo finish keeps its real repeat size on every part.
+import { meshFromArrays, type MeshData } from '../scene';
+import { directionDeg } from '../vec';
+import type { MaterialSlot, Part } from './parts';
+
+const MM = 1 / 1000;
+/** Segments per quarter of a rounded corner (a disc gets four of them). */
+const CORNER_SEGMENTS = 3;
+const DISC_SEGMENTS = 5;
+/** Sides round a leg: slim legs need few, lamp shades and pots more. */
+const LEG_SIDES = 8;
+const WIDE_LEG_SIDES = 14;
+const WIDE_LEG_MM = 120;
+
+/** Where a piece stands: centre (plan mm), turn (degrees clockwise seen from above), underside above the floor (mm). */
+export interface Placement {
+  x: number;
+  y: number;
+  rotation: number;
+  elevation: number;
+}
+
+/** One colour run of the own-coloured mesh: `vertexCount` vertices in a row wear `colour`. */
+export interface ColourRun {
+  colour: string;
+  vertexCount: number;
+}
+
+/** A piece's form in scene metres, one mesh per material slot; the own mesh lists which colour each run of vertices wears. */
+export interface FormMeshes {
+  main: MeshData;
+  accent: MeshData;
+  own: MeshData;
+  ownColours: ColourRun[];
+}
+
+type V3 = [number, number, number];
+
+class Writer {
+  positions: number[] = [];
+  normals: number[] = [];
+  uvs: number[] = [];
+  indices: number[] = [];
+  count = 0;
+
+  constructor(private readonly frame: Frame) {}
+
+  /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal` (local). */
+  quad(p: readonly V3[], n: readonly V3[], uv: readonly [number, number][], faceNormal: V3): void {
+    const base = this.count;
+    for (let i = 0; i < p.length; i++) this.vertex(p[i], n[i], uv[i]);
+    this.fan(base, p.length, faceNormal);
+  }
+
+  /** A flat convex polygon facing `normal` (local). */
+  polygon(p: readonly V3[], normal: V3): void {
+    const base = this.count;
+    for (const point of p) this.vertex(point, normal, [point[0] * MM, point[1] * MM]);
+    this.fan(base, p.length, normal);
+  }
+
+  private vertex(p: V3, n: V3, uv: readonly [number, number]): void {
+    const f = this.frame;
+    const px = f.cx + p[0] * f.ax[0] + p[1] * f.ay[0];
+    const py = f.cy + p[0] * f.ax[1] + p[1] * f.ay[1];
+    this.positions.push(px * MM, (f.elevation + p[2]) * MM, py * MM);
+    this.normals.push(n[0] * f.ax[0] + n[1] * f.ay[0], n[2], n[0] * f.ax[1] + n[1] * f.ay[1]);
+    this.uvs.push(uv[0], uv[1]);
+    this.count++;
+  }
+
+  // Triangles of a fan, wound so they face the normal once placed in the scene.
+  private fan(base: number, n: number, faceNormal: V3): void {
+    const sn: V3 = [
+      faceNormal[0] * this.frame.ax[0] + faceNormal[1] * this.frame.ay[0],
+      faceNormal[2],
+      faceNormal[0] * this.frame.ax[1] + faceNormal[1] * this.frame.ay[1],
+    ];
+    const P = this.positions;
+    for (let k = 1; k + 1 < n; k++) {
+      const a = base;
+      const b = base + k;
+      const c = base + k + 1;
+      const e1 = [P[b * 3] - P[a * 3], P[b * 3 + 1] - P[a * 3 + 1], P[b * 3 + 2] - P[a * 3 + 2]];
+      const e2 = [P[c * 3] - P[a * 3], P[c * 3 + 1] - P[a * 3 + 1], P[c * 3 + 2] - P[a * 3 + 2]];
+      const facing = (e1[1] * e2[2] - e1[2] * e2[1]) * sn[0] + (e1[2] * e2[0] - e1[0] * e2[2]) * sn[1] + (e1[0] * e2[1] - e1[1] * e2[0]) * sn[2];
+      if (facing >= 0) this.indices.push(a, b, c);
+      else this.indices.push(a, c, b);
+    }
+  }
+
+  toMesh(): MeshData {
+    return meshFromArrays(this.positions, this.normals, this.uvs, this.indices);
+  }
+}
+
+interface Frame {
+  cx: number;
+  cy: number;
+  ax: readonly [number, number];
+  ay: readonly [number, number];
+  elevation: number;
+}
+
+function frameOf(at: Placement): Frame {
+  const ax = directionDeg(at.rotation);
+  return { cx: at.x, cy: at.y, ax, ay: [-ax[1], ax[0]], elevation: at.elevation };
+}
+
+function writeBox(w: Writer, part: Part): void {
+  const x0 = part.x - part.w / 2, x1 = part.x + part.w / 2;
+  const y0 = part.y - part.d / 2, y1 = part.y + part.d / 2;
+  const z0 = part.z, z1 = part.z + part.h;
+  const flat = (n: V3): V3[] => [n, n, n, n];
+  const sideUv = (u0: number, u1: number): [number, number][] => [[u0 * MM, z0 * MM], [u1 * MM, z0 * MM], [u1 * MM, z1 * MM], [u0 * MM, z1 * MM]];
+  w.quad([[x0, y1, z0], [x1, y1, z0], [x1, y1, z1], [x0, y1, z1]], flat([0, 1, 0]), sideUv(x0, x1), [0, 1, 0]);
+  w.quad([[x1, y0, z0], [x0, y0, z0], [x0, y0, z1], [x1, y0, z1]], flat([0, -1, 0]), sideUv(-x1, -x0), [0, -1, 0]);
+  w.quad([[x1, y1, z0], [x1, y0, z0], [x1, y0, z1], [x1, y1, z1]], flat([1, 0, 0]), sideUv(-y1, -y0), [1, 0, 0]);
+  w.quad([[x0, y0, z0], [x0, y1, z0], [x0, y1, z1], [x0, y0, z1]], flat([-1, 0, 0]), sideUv(y0, y1), [-1, 0, 0]);
+  w.polygon([[x0, y0, z1], [x1, y0, z1], [x1, y1, z1], [x0, y1, z1]], [0, 0, 1]);
+  w.polygon([[x0, y0, z0], [x1, y0, z0], [x1, y1, z0], [x0, y1, z0]], [0, 0, -1]);
+}
+
+/** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
+export function roundedOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  const r = part.radius ?? 0;
+  const hx = part.w / 2 - r;
+  const hy = part.d / 2 - r;
+  const disc = hx < 1e-6 && hy < 1e-6;
+  const segments = disc ? DISC_SEGMENTS : CORNER_SEGMENTS;
+  const corners: [number, number, number][] = [
+    [hx, hy, 0],
+    [-hx, hy, Math.PI / 2],
+    [-hx, -hy, Math.PI],
+    [hx, -hy, (3 * Math.PI) / 2],
+  ];
+  const points: [number, number][] = [];
+  const normals: [number, number][] = [];
+  for (const [cx, cy, start] of corners) {
+    for (let i = 0; i <= segments; i++) {
+      if (disc && i === segments) continue;
+      const a = start + (i / segments) * (Math.PI / 2);
+      const n: [number, number] = [Math.cos(a), Math.sin(a)];
+      points.push([part.x + cx + n[0] * r, part.y + cy + n[1] * r]);
+      normals.push(n);
+    }
+  }
+  return { points, normals };
+}
+
+function writeExtrusion(w: Writer, points: readonly [number, number][], normals: readonly [number, number][], z0: number, z1: number, bottomScale = 1, centre: [number, number] = [0, 0]): void {
+  const n = points.length;
+  const bottom = points.map(([x, y]) => [centre[0] + (x - centre[0]) * bottomScale, centre[1] + (y - centre[1]) * bottomScale] as [number, number]);
+  let u = 0;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    const step = Math.hypot(points[j][0] - points[i][0], points[j][1] - points[i][1]);
+    const ni: V3 = [normals[i][0], normals[i][1], 0];
+    const nj: V3 = [normals[j][0], normals[j][1], 0];
+    const face: V3 = [(ni[0] + nj[0]) / 2, (ni[1] + nj[1]) / 2, 0];
+    w.quad(
+      [[bottom[i][0], bottom[i][1], z0], [bottom[j][0], bottom[j][1], z0], [points[j][0], points[j][1], z1], [points[i][0], points[i][1], z1]],
+      [ni, nj, nj, ni],
+      [[u * MM, z0 * MM], [(u + step) * MM, z0 * MM], [(u + step) * MM, z1 * MM], [u * MM, z1 * MM]],
+      face,
+    );
+    u += step;
+  }
+  w.polygon(points.map(([x, y]) => [x, y, z1] as V3), [0, 0, 1]);
+  w.polygon(bottom.map(([x, y]) => [x, y, z0] as V3), [0, 0, -1]);
+}
+
+function writeRounded(w: Writer, part: Part): void {
+  const { points, normals } = roundedOutline(part);
+  writeExtrusion(w, points, normals, part.z, part.z + part.h);
+}
+
+/** A leg's outline at its top (piece frame mm), round it. */
+export function legOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
+  const r = part.w / 2;
+  const points: [number, number][] = [];
+  const normals: [number, number][] = [];
+  for (let i = 0; i < sides; i++) {
+    const a = (i / sides) * Math.PI * 2;
+    normals.push([Math.cos(a), Math.sin(a)]);
+    points.push([part.x + Math.cos(a) * r, part.y + Math.sin(a) * r]);
+  }
+  return { points, normals };
+}
+
+function writeLeg(w: Writer, part: Part): void {
+  const { points, normals } = legOutline(part);
+  writeExtrusion(w, points, normals, part.z, part.z + part.h, part.taper ?? 1, [part.x, part.y]);
+}
+
+function writePart(w: Writer, part: Part): void {
+  if (part.shape === 'rounded') writeRounded(w, part);
+  else if (part.shape === 'leg') writeLeg(w, part);
+  else writeBox(w, part);
+}
+
+/** A piece's parts placed in the room, scene metres, one mesh per material slot. */
+export function formMeshes(parts: readonly Part[], at: Placement): FormMeshes {
+  const frame = frameOf(at);
+  const writers: Record<MaterialSlot, Writer> = { main: new Writer(frame), accent: new Writer(frame), own: new Writer(frame) };
+  const ownColours: ColourRun[] = [];
+  for (const part of parts) {
+    const writer = writers[part.slot];
+    const before = writer.count;
+    writePart(writer, part);
+    if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: writer.count - before });
+  }
+  return { main: writers.main.toMesh(), accent: writers.accent.toMesh(), own: writers.own.toMesh(), ownColours };
+}
+
+/** Triangles a form draws, over all its slots. */
+export function formTriangles(meshes: FormMeshes): number {
+  return (meshes.main.indices.length + meshes.accent.indices.length + meshes.own.indices.length) / 3;
+}
