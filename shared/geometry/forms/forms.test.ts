@@ -154,6 +154,25 @@ describe('forms in the room', () => {
     expect(Math.max(...xs)).toBeLessThan(0.45);
   });
 
+  it('winds every triangle to face outwards, whatever the turn', () => {
+    for (const kind of ['sofa', 'dining-table', 'plant', 'rug'] as const) {
+      for (const rotation of [0, 37, 180, 270]) {
+        const m = formMeshes(formParts(kind, {}, catalogueBox(kind).box), { x: 500, y: 700, rotation, elevation: 0 }).main;
+        const P = m.positions;
+        for (let t = 0; t < m.indices.length; t += 3) {
+          const [a, b, c] = [m.indices[t], m.indices[t + 1], m.indices[t + 2]];
+          const e1 = [P[b * 3] - P[a * 3], P[b * 3 + 1] - P[a * 3 + 1], P[b * 3 + 2] - P[a * 3 + 2]];
+          const e2 = [P[c * 3] - P[a * 3], P[c * 3 + 1] - P[a * 3 + 1], P[c * 3 + 2] - P[a * 3 + 2]];
+          const n = [e1[1] * e2[2] - e1[2] * e2[1], e1[2] * e2[0] - e1[0] * e2[2], e1[0] * e2[1] - e1[1] * e2[0]];
+          const v = [m.normals[a * 3], m.normals[a * 3 + 1], m.normals[a * 3 + 2]];
+          const area = Math.hypot(n[0], n[1], n[2]);
+          if (area < 1e-9) continue;
+          expect(n[0] * v[0] + n[1] * v[1] + n[2] * v[2], `${kind} at ${rotation}°`).toBeGreaterThan(0);
+        }
+      }
+    }
+  });
+
   it('lifts a wall-hung piece to its elevation and keeps uvs in metres', () => {
     const parts = formParts('wall-cabinet', {}, { width: 800, depth: 350, height: 700 });
     const m = formMeshes(parts, { x: 1000, y: 500, rotation: 0, elevation: 1400 }).main;

@@ -38,6 +38,9 @@ export interface FormMeshes {
 
 type V3 = [number, number, number];
 
+// Writes in the piece's own frame (mm). The piece frame (x, y, z up) maps to the scene (x, z, y
+// up) through a mirror whatever the turn, so triangles are wound clockwise here to face outwards
+// once placed.
 class Writer {
   positions: number[] = [];
   normals: number[] = [];
@@ -45,49 +48,38 @@ class Writer {
   indices: number[] = [];
   count = 0;
 
-  constructor(private readonly frame: Frame) {}
-
-  /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal` (local). */
+  /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal`. */
   quad(p: readonly V3[], n: readonly V3[], uv: readonly [number, number][], faceNormal: V3): void {
     const base = this.count;
-    for (let i = 0; i < p.length; i++) this.vertex(p[i], n[i], uv[i]);
+    for (let i = 0; i < p.length; i++) this.vertex(p[i], n[i], uv[i][0], uv[i][1]);
     this.fan(base, p.length, faceNormal);
   }
 
-  /** A flat convex polygon facing `normal` (local). */
+  /** A flat convex polygon facing `normal`. */
   polygon(p: readonly V3[], normal: V3): void {
     const base = this.count;
-    for (const point of p) this.vertex(point, normal, [point[0] * MM, point[1] * MM]);
+    for (const point of p) this.vertex(point, normal, point[0] * MM, point[1] * MM);
     this.fan(base, p.length, normal);
   }
 
-  private vertex(p: V3, n: V3, uv: readonly [number, number]): void {
-    const f = this.frame;
-    const px = f.cx + p[0] * f.ax[0] + p[1] * f.ay[0];
-    const py = f.cy + p[0] * f.ax[1] + p[1] * f.ay[1];
-    this.positions.push(px * MM, (f.elevation + p[2]) * MM, py * MM);
-    this.normals.push(n[0] * f.ax[0] + n[1] * f.ay[0], n[2], n[0] * f.ax[1] + n[1] * f.ay[1]);
-    this.uvs.push(uv[0], uv[1]);
+  private vertex(p: V3, n: V3, u: number, v: number): void {
+    this.positions.push(p[0], p[1], p[2]);
+    this.normals.push(n[0], n[1], n[2]);
+    this.uvs.push(u, v);
     this.count++;
   }
 
-  // Triangles of a fan, wound so they face the normal once placed in the scene.
-  private fan(base: number, n: number, faceNormal: V3): void {
-    const sn: V3 = [
-      faceNormal[0] * this.frame.ax[0] + faceNormal[1] * this.frame.ay[0],
-      faceNormal[2],
-      faceNormal[0] * this.frame.ax[1] + faceNormal[1] * this.frame.ay[1],
-    ];
+  private fan(base: number, n: number, f: V3): void {
     const P = this.positions;
+    const ax = P[base * 3], ay = P[base * 3 + 1], az = P[base * 3 + 2];
     for (let k = 1; k + 1 < n; k++) {
-      const a = base;
       const b = base + k;
-      const c = base + k + 1;
-      const e1 = [P[b * 3] - P[a * 3], P[b * 3 + 1] - P[a * 3 + 1], P[b * 3 + 2] - P[a * 3 + 2]];
-      const e2 = [P[c * 3] - P[a * 3], P[c * 3 + 1] - P[a * 3 + 1], P[c * 3 + 2] - P[a * 3 + 2]];
-      const facing = (e1[1] * e2[2] - e1[2] * e2[1]) * sn[0] + (e1[2] * e2[0] - e1[0] * e2[2]) * sn[1] + (e1[0] * e2[1] - e1[1] * e2[0]) * sn[2];
-      if (facing >= 0) this.indices.push(a, b, c);
-      else this.indices.push(a, c, b);
+      const c = b + 1;
+      const e1x = P[b * 3] - ax, e1y = P[b * 3 + 1] - ay, e1z = P[b * 3 + 2] - az;
+      const e2x = P[c * 3] - ax, e2y = P[c * 3 + 1] - ay, e2z = P[c * 3 + 2] - az;
+      const facing = (e1y * e2z - e1z * e2y) * f[0] + (e1z * e2x - e1x * e2z) * f[1] + (e1x * e2y - e1y * e2x) * f[2];
+      if (facing >= 0) this.indices.push(base, c, b);
+      else this.indices.push(base, b, c);
     }
   }
 
@@ -202,10 +194,9 @@ function writePart(w: Writer, part: Part): void {
   else writeBox(w, part);
 }
 
-/** A piece's parts placed in the room, scene metres, one mesh per material slot. */
-export function formMeshes(parts: readonly Part[], at: Placement): FormMeshes {
-  const frame = frameOf(at);
-  const writers: Record<MaterialSlot, Writer> = { main: new Writer(frame), accent: new Writer(frame), own: new Writer(frame) };
+/** A piece's parts in its own frame (mm, z up), one mesh per material slot; placeForm puts them in the room. */
+export function localFormMeshes(parts: readonly Part[]): FormMeshes {
+  const writers: Record<MaterialSlot, Writer> = { main: new Writer(), accent: new Writer(), own: new Writer() };
   const ownColours: ColourRun[] = [];
   for (const part of parts) {
     const writer = writers[part.slot];
@@ -216,6 +207,36 @@ export function formMeshes(parts: readonly Part[], at: Placement): FormMeshes {
   return { main: writers.main.toMesh(), accent: writers.accent.toMesh(), own: writers.own.toMesh(), ownColours };
 }
 
+function placeMesh(mesh: MeshData, f: Frame): MeshData {
+  const n = mesh.positions.length;
+  const positions = new Float32Array(n);
+  const normals = new Float32Array(n);
+  const p = mesh.positions;
+  const q = mesh.normals;
+  const [a0, a1] = f.ax;
+  const [b0, b1] = f.ay;
+  for (let i = 0; i < n; i += 3) {
+    positions[i] = (f.cx + p[i] * a0 + p[i + 1] * b0) * MM;
+    positions[i + 1] = (f.elevation + p[i + 2]) * MM;
+    positions[i + 2] = (f.cy + p[i] * a1 + p[i + 1] * b1) * MM;
+    normals[i] = q[i] * a0 + q[i + 1] * b0;
+    normals[i + 1] = q[i + 2];
+    normals[i + 2] = q[i] * a1 + q[i + 1] * b1;
+  }
+  // uvs and triangles do not change with where the piece stands: shared, never written to.
+  return { positions, normals, uvs: mesh.uvs, indices: mesh.indices };
+}
+
+/** A piece's form in its own frame placed in the room: scene metres, y up. */
+export function placeForm(local: FormMeshes, at: Placement): FormMeshes {
+  const frame = frameOf(at);
+  return { main: placeMesh(local.main, frame), accent: placeMesh(local.accent, frame), own: placeMesh(local.own, frame), ownColours: local.ownColours };
+}
+
+/** A piece's parts placed in the room, scene metres, one mesh per material slot. */
+export function formMeshes(parts: readonly Part[], at: Placement): FormMeshes {
+  return placeForm(localFormMeshes(parts), at);
+}
 /** Triangles a form draws, over all its slots. */
 export function formTriangles(meshes: FormMeshes): number {
   return (meshes.main.indices.length + meshes.accent.indices.length + meshes.own.indices.length) / 3;
