@@ -16,7 +16,7 @@ export function topViewParts(piece: Pick<Piece, 'kind' | 'settings' | 'width' | 
   return formParts(piece.kind, piece.settings, { width: piece.width, depth: piece.depth, height: piece.height }).slice().sort((a, b) => a.z + a.h - (b.z + b.h));
 }
 
-function PartShape({ part, fill, stroke }: { part: Part; fill: string; stroke: number }) {
+export function PartShape({ part, fill, stroke }: { part: Part; fill: string; stroke: number }) {
   if (part.shape === 'leg') {
     const r = (part.w * Math.max(1, part.taper ?? 1)) / 2;
     return <circle cx={part.x} cy={part.y} r={r} fill={fill} stroke={PART_LINE} strokeWidth={stroke} />;
