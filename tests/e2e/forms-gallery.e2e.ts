@@ -2,7 +2,7 @@
 // client's Overview, written to .test-output/forms/<kind>.png, and a labelled collage of all of
 // them for the README (assets/screenshots/forms.png).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import sharp from 'sharp';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
@@ -19,7 +19,7 @@ const COLUMNS = 6;
 /** Calm demo colours: upholstery and boards in the main finish, darker wood for legs, frames and handles. */
 const MAIN_COLOUR: Partial<Record<PieceKind, string>> = {
   sofa: '#8e9d94', 'corner-sofa': '#a69583', armchair: '#b7836a', ottoman: '#9c8aa0', bed: '#a7b4bd', rug: '#b9826a', picture: '#6f8aa0',
-  plant: '#c98e6a', 'pendant-light': '#e7dccb', 'table-lamp': '#8fa09a', radiator: '#f2f0ec', 'kitchen-base-unit': '#dfe3e0', 'kitchen-wall-unit': '#dfe3e0',
+  plant: '#c98e6a', 'pendant-light': '#e7dccb', 'table-lamp': '#8fa09a', radiator: '#d3d0c9', 'kitchen-base-unit': '#dfe3e0', 'kitchen-wall-unit': '#dfe3e0',
   'oven-housing': '#dfe3e0', dishwasher: '#dfe3e0',
 };
 const WOOD = '#b89a78';
@@ -76,6 +76,22 @@ async function galleryPresentation(page: Page, kinds: readonly PieceKind[]): Pro
 }
 
 describe('the forms gallery', () => {
+  it('draws the imported living room plan with each piece’s top view and the piece’s kind in Furnish', async () => {
+    const page = designer.page;
+    const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Plan look', newClient: { name: 'P' } });
+    const file = JSON.parse(readFileSync(join(root, 'assets/plans/l-shaped-living-room.json'), 'utf8'));
+    const made = await call<{ room: { id: string } }>(page, `/api/projects/${project.id}/rooms/import`, 'POST', file);
+    await page.goto(`/projects/${project.id}/rooms/${made.room.id}`);
+    await page.getByRole('button', { name: /Furnish/ }).click();
+    await page.locator('[data-testid=piece-sofa]').waitFor();
+    // Every typed piece carries its top view; the box outline under it is what is dragged.
+    expect(await page.locator('[data-testid=piece-top-view]').count()).toBeGreaterThanOrEqual(6);
+    await page.locator('[data-testid=piece-sofa]').click();
+    await page.getByText('Change kind').waitFor();
+    await page.waitForTimeout(500);
+    await page.screenshot({ path: join(shots, 'editor-plan.png') });
+  });
+
   it('shows every kind alone from the client’s Overview and writes a collage', { timeout: 600_000 }, async () => {
     const links = [await galleryPresentation(designer.page, PIECE_KINDS.slice(0, ROOMS_PER_LINK)), await galleryPresentation(designer.page, PIECE_KINDS.slice(ROOMS_PER_LINK))];
     const { context, page } = await newPage(browser);
@@ -93,7 +109,7 @@ describe('the forms gallery', () => {
       figures[kind] = { triangles: Number(await view.getAttribute('data-triangles')), drawCalls: Number(await view.getAttribute('data-draw-calls')) };
       // The tile keeps the middle of the view, where the room and its piece are.
       const { width = 1, height = 1 } = await sharp(file).metadata();
-      const crop = { left: Math.round(width * 0.22), top: Math.round(height * 0.25), width: Math.round(width * 0.56), height: Math.round(height * 0.62) };
+      const crop = { left: Math.round(width * 0.2), top: Math.round(height * 0.1), width: Math.round(width * 0.6), height: Math.round(height * 0.78) };
       const tile = await sharp(file).extract(crop).resize(TILE.width, TILE.height - 34, { fit: 'cover' }).png().toBuffer();
       const label = Buffer.from(
         `<svg width="${TILE.width}" height="34" xmlns="http://www.w3.org/2000/svg"><rect width="100%" height="100%" fill="#f7f3ec"/><text x="12" y="23" font-family="DejaVu Sans, sans-serif" font-size="16" fill="#2a2521">${KIND_LABELS[kind]}</text></svg>`,

@@ -11,6 +11,8 @@ const PLINTH_MM = 120;
 const WORKTOP_MM = 38;
 /** The dark glass of an oven door and a dishwasher's control strip. */
 const DARK_GLASS = '#2d2f31';
+/** A freestanding dishwasher's brushed steel front, so it reads as an appliance beside the units. */
+const STEEL = '#b4b8ba';
 
 interface BaseFrame {
   kick: number;
@@ -77,7 +79,7 @@ export function ovenHousingForm(box: FormBox): Part[] {
   ];
 }
 
-/** A dishwasher: one tall front under the worktop with a control strip and a bar handle along its top. */
+/** A dishwasher: one tall steel front under the worktop with a dark control strip and a bar handle along its top. */
 export function dishwasherForm(box: FormBox): Part[] {
   const { width: w, depth: d } = box;
   const f = baseFrame(box);
@@ -86,7 +88,7 @@ export function dishwasherForm(box: FormBox): Part[] {
   return [
     ...worktopAndPlinth(box, f),
     boxPart(-w / 2, w / 2, -d / 2, f.back - 25, f.kick, f.worktopTop - WORKTOP_MM, { colour: '#c9cbcc' }),
-    panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.kick + 2, f.frontTop - strip, { role: 'front' }),
+    panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.kick + 2, f.frontTop - strip, { colour: STEEL, role: 'front' }),
     panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.frontTop - strip, f.frontTop, { colour: DARK_GLASS, role: 'front' }),
     handlePart(0, d / 2 - 25, f.frontTop - strip - 40, w * 0.8, false),
   ];
