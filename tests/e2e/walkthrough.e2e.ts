@@ -45,7 +45,9 @@ const PHOTOS: DemoPhoto[] = [
   { name: 'Grey stone tile', category: 'tile', repeatWidthMm: 600, repeatHeightMm: 600, draw: () => greyStoneTile() },
   { name: 'Washed linen', category: 'fabric', repeatWidthMm: 100, repeatHeightMm: 100, draw: () => linenWeave() },
   { name: 'Sprig wallpaper', category: 'wallpaper', repeatWidthMm: 265, repeatHeightMm: 265, draw: () => sprigWallpaper() },
-  // Two more for the typical room's six photo finishes on pieces: the same drawings at other real sizes.
+];
+// Two more for the typical room's six photo finishes on pieces: the same drawings at other real sizes.
+const EXTRA_PHOTOS: DemoPhoto[] = [
   { name: 'Wide oak veneer', category: 'wood', repeatWidthMm: 400, repeatHeightMm: 800, draw: () => oakBoards() },
   { name: 'Coarse linen', category: 'fabric', repeatWidthMm: 200, repeatHeightMm: 200, draw: () => linenWeave() },
 ];
@@ -67,7 +69,13 @@ async function call<T>(page: Page, path: string, method: string, body?: object):
 async function demoFinishes(page: Page): Promise<Record<string, string>> {
   const ids: Record<string, string> = {};
   for (const p of PAINTS) ids[p.name] = (await call<{ finish: { id: string } }>(page, '/api/finishes/paints', 'POST', p)).finish.id;
-  for (const photo of PHOTOS) {
+  return { ...ids, ...(await uploadPhotos(page, PHOTOS)) };
+}
+
+/** Uploads photo finishes as a designer would and waits until each is processed; their ids by name. */
+async function uploadPhotos(page: Page, photos: readonly DemoPhoto[]): Promise<Record<string, string>> {
+  const ids: Record<string, string> = {};
+  for (const photo of photos) {
     const b64 = (await rawToPng(await photo.draw())).toString('base64');
     const id = await page.evaluate(async ({ b64, photo }) => {
       const form = new FormData();
@@ -82,7 +90,7 @@ async function demoFinishes(page: Page): Promise<Record<string, string>> {
     }, { b64, photo: { name: photo.name, category: photo.category, repeatWidthMm: photo.repeatWidthMm, repeatHeightMm: photo.repeatHeightMm } });
     ids[photo.name] = id;
   }
-  for (const photo of PHOTOS) {
+  for (const photo of photos) {
     await expect.poll(async () => (await call<{ finish: { status: string } }>(page, `/api/finishes/${ids[photo.name]}`, 'GET')).finish.status, { timeout: 60_000 }).toBe('ready');
   }
   return ids;
@@ -447,7 +455,8 @@ describe('the walk-through', () => {
     await context.close();
   });
 
-  it('draws a typical room (8 walls, 6 openings, 40 pieces) within the frame budget', async () => {
+  it('draws a typical room (8 walls, 6 openings, 40 pieces) within the frame budget', { timeout: 180_000 }, async () => {
+    await uploadPhotos(designer.page, EXTRA_PHOTOS);
     const finishes = Object.fromEntries((await call<{ finishes: { id: string; name: string }[] }>(designer.page, '/api/finishes', 'GET')).finishes.map((f) => [f.name, f.id]));
     const link = await typicalRoomPresentation(designer.page, finishes);
     const { context, page, view } = await openClient(link);

@@ -63,13 +63,19 @@ class Writer {
   }
 
   private vertex(p: V3, n: V3, u: number, v: number): void {
-    this.positions.push(p[0], p[1], p[2]);
-    this.normals.push(n[0], n[1], n[2]);
+    this.raw(p[0], p[1], p[2], n[0], n[1], n[2], u, v);
+  }
+
+  /** One vertex from plain numbers: the extrusions write thousands, so no arrays are made for them. */
+  raw(x: number, y: number, z: number, nx: number, ny: number, nz: number, u: number, v: number): void {
+    this.positions.push(x, y, z);
+    this.normals.push(nx, ny, nz);
     this.uvs.push(u, v);
     this.count++;
   }
 
-  private fan(base: number, n: number, f: V3): void {
+  /** Triangles of a fan over the `n` vertices written from `base`, facing the normal f. */
+  fan(base: number, n: number, f: V3): void {
     const P = this.positions;
     const ax = P[base * 3], ay = P[base * 3 + 1], az = P[base * 3 + 2];
     for (let k = 1; k + 1 < n; k++) {
@@ -144,24 +150,31 @@ export function roundedOutline(part: Part): { points: [number, number][]; normal
 
 function writeExtrusion(w: Writer, points: readonly [number, number][], normals: readonly [number, number][], z0: number, z1: number, bottomScale = 1, centre: [number, number] = [0, 0]): void {
   const n = points.length;
-  const bottom = points.map(([x, y]) => [centre[0] + (x - centre[0]) * bottomScale, centre[1] + (y - centre[1]) * bottomScale] as [number, number]);
+  const bx = (i: number) => centre[0] + (points[i][0] - centre[0]) * bottomScale;
+  const by = (i: number) => centre[1] + (points[i][1] - centre[1]) * bottomScale;
+  const face: V3 = [0, 0, 0];
   let u = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
     const step = Math.hypot(points[j][0] - points[i][0], points[j][1] - points[i][1]);
-    const ni: V3 = [normals[i][0], normals[i][1], 0];
-    const nj: V3 = [normals[j][0], normals[j][1], 0];
-    const face: V3 = [(ni[0] + nj[0]) / 2, (ni[1] + nj[1]) / 2, 0];
-    w.quad(
-      [[bottom[i][0], bottom[i][1], z0], [bottom[j][0], bottom[j][1], z0], [points[j][0], points[j][1], z1], [points[i][0], points[i][1], z1]],
-      [ni, nj, nj, ni],
-      [[u * MM, z0 * MM], [(u + step) * MM, z0 * MM], [(u + step) * MM, z1 * MM], [u * MM, z1 * MM]],
-      face,
-    );
+    const [nix, niy] = normals[i];
+    const [njx, njy] = normals[j];
+    const base = w.count;
+    w.raw(bx(i), by(i), z0, nix, niy, 0, u * MM, z0 * MM);
+    w.raw(bx(j), by(j), z0, njx, njy, 0, (u + step) * MM, z0 * MM);
+    w.raw(points[j][0], points[j][1], z1, njx, njy, 0, (u + step) * MM, z1 * MM);
+    w.raw(points[i][0], points[i][1], z1, nix, niy, 0, u * MM, z1 * MM);
+    face[0] = (nix + njx) / 2;
+    face[1] = (niy + njy) / 2;
+    w.fan(base, 4, face);
     u += step;
   }
-  w.polygon(points.map(([x, y]) => [x, y, z1] as V3), [0, 0, 1]);
-  w.polygon(bottom.map(([x, y]) => [x, y, z0] as V3), [0, 0, -1]);
+  let base = w.count;
+  for (let i = 0; i < n; i++) w.raw(points[i][0], points[i][1], z1, 0, 0, 1, points[i][0] * MM, points[i][1] * MM);
+  w.fan(base, n, [0, 0, 1]);
+  base = w.count;
+  for (let i = 0; i < n; i++) w.raw(bx(i), by(i), z0, 0, 0, -1, bx(i) * MM, by(i) * MM);
+  w.fan(base, n, [0, 0, -1]);
 }
 
 function writeRounded(w: Writer, part: Part): void {
