@@ -9,6 +9,7 @@ import * as m0006 from './0006_notify_presentation_changes';
 import * as m0007 from './0007_record_sent_mail';
 import * as m0008 from './0008_drop_sign_in_failures';
 import * as m0009 from './0009_project_states_and_kept_choices';
+import * as m0010 from './0010_piece_kinds';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
@@ -20,4 +21,5 @@ export const migrations: Record<string, Migration> = {
   '0007_record_sent_mail': m0007,
   '0008_drop_sign_in_failures': m0008,
   '0009_project_states_and_kept_choices': m0009,
+  '0010_piece_kinds': m0010,
 };

@@ -51,3 +51,18 @@ export function largeRoom(): { shell: RoomShell; pieces: Piece[] } {
   return { shell: grown, pieces: optionDocSchema.parse({ pieces }).pieces };
 }
 
+/** Kinds the typical furnished room cycles through: at least twelve, as a furnished flat has. */
+export const TYPICAL_KINDS = [
+  'sofa', 'armchair', 'dining-chair', 'coffee-table', 'dining-table', 'bed', 'wardrobe', 'chest-of-drawers', 'bookcase', 'sideboard',
+  'floor-lamp', 'plant', 'rug', 'desk', 'kitchen-base-unit', 'wall-cabinet',
+] as const;
+
+/** The typical room with each of its 40 pieces given a kind in turn (wall cabinets at their 1200 mm elevation). */
+export function typicalFurnishedRoom(): { shell: RoomShell; option: OptionDoc } {
+  const { shell, option } = typicalRoom();
+  const pieces = option.pieces.map((p, i) => {
+    const kind = TYPICAL_KINDS[i % TYPICAL_KINDS.length];
+    return { ...p, kind, elevation: kind === 'wall-cabinet' ? 1200 : 0, height: kind === 'rug' ? 10 : p.height, accentColour: '#5b4636' };
+  });
+  return { shell, option: optionDocSchema.parse({ pieces }) };
+}

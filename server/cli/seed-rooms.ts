@@ -15,13 +15,13 @@ function loadPlan(file: string): PlanFile {
   return read.plan;
 }
 
-type Looks = (f: Record<string, string>) => { finishes: OptionDocInput['finishes']; pieceFinishes?: Record<string, string> };
+type Looks = (f: Record<string, string>) => { finishes: OptionDocInput['finishes']; pieceFinishes?: Record<string, string>; pieceAccents?: Record<string, string> };
 type Variant = { nameA: string; name: string; note: string; change: (pieces: Piece[]) => Piece[]; looksA: Looks; looksB: Looks };
 
 const LIVING_B: Variant = {
   nameA: 'Sofa by the wall',
-  looksA: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { sofa: f['Washed linen'] } }),
-  looksB: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } }, pieceFinishes: { sofa: f['Washed linen'] } }),
+  looksA: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { sofa: f['Washed linen'] }, pieceAccents: { 'coffee-table': f['Oak boards, natural oil'] } }),
+  looksB: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } }, pieceFinishes: { sofa: f['Washed linen'] }, pieceAccents: { 'coffee-table': f['Oak boards, natural oil'] } }),
   name: 'Conversation corner',
   note: 'The sofa faces the front window; the client’s armchairs sit opposite. More open floor by the kitchen.',
   change: (pieces) =>
@@ -53,7 +53,11 @@ const BEDROOM_B: Variant = {
 /** Puts each look's finishes on the option and on its pieces. */
 function dressed(pieces: Piece[], looks: ReturnType<Looks>) {
   return optionDocSchema.parse({
-    pieces: pieces.map((p) => (looks.pieceFinishes?.[p.id] ? { ...p, finishId: looks.pieceFinishes[p.id] } : p)),
+    pieces: pieces.map((p) => {
+      const main = looks.pieceFinishes?.[p.id];
+      const accent = looks.pieceAccents?.[p.id];
+      return { ...p, ...(main ? { finishId: main } : {}), ...(accent ? { accentFinishId: accent } : {}) };
+    }),
     // A look naming a finish the studio lacks just leaves that surface plain (JSON drops undefined ids).
     finishes: JSON.parse(JSON.stringify(looks.finishes ?? {})),
   });

@@ -8,13 +8,18 @@ import {
   WALL_CABINET_ELEVATION_MM,
   catalogueEntry,
   pieceFromCatalogue,
-  type CatalogueKind,
+  type CatalogueId,
 } from './catalogue';
+import { KIND_SETTINGS, PIECE_KINDS } from '../schemas/piece-kind';
 
 describe('catalogue', () => {
-  it('has one entry per kind, each sized, grouped and sourced', () => {
-    const kinds = CATALOGUE.map((e) => e.kind);
-    expect(new Set(kinds).size).toBe(kinds.length);
+  it('has one entry per id, each sized, grouped, sourced and of a kind whose settings it may take', () => {
+    const ids = CATALOGUE.map((e) => e.id);
+    expect(new Set(ids).size).toBe(ids.length);
+    for (const entry of CATALOGUE) {
+      expect(PIECE_KINDS).toContain(entry.kind);
+      for (const key of Object.keys(entry.settings ?? {})) expect(KIND_SETTINGS[entry.kind]).toContain(key);
+    }
     for (const entry of CATALOGUE) {
       expect(entry.width * entry.depth * entry.height).toBeGreaterThan(0);
       expect(CATALOGUE_GROUPS).toContain(entry.group);
@@ -24,12 +29,18 @@ describe('catalogue', () => {
   });
 
   it('covers what a designer starts a living room, bedroom or dining room with', () => {
-    const wanted: CatalogueKind[] = [
+    const wanted: CatalogueId[] = [
       'sofa-2-seat', 'sofa-3-seat', 'sofa-corner', 'armchair', 'coffee-table', 'side-table', 'bedside-table', 'wardrobe',
       'chest-of-drawers', 'desk', 'dining-table-4', 'dining-table-6', 'bookcase', 'tv-unit', 'sideboard', 'rug', 'wall-cabinet', 'custom-box',
     ];
-    for (const kind of wanted) expect(catalogueEntry(kind).kind).toBe(kind);
-    expect(CATALOGUE.filter((e) => e.group === 'beds').length).toBe(15);
+    for (const id of wanted) expect(catalogueEntry(id).id).toBe(id);
+    expect(catalogueEntry('sofa-3-seat').kind).toBe('sofa');
+    expect(catalogueEntry('dining-table-4').kind).toBe('dining-set');
+    expect(catalogueEntry('bed-us-queen').kind).toBe('bed');
+    expect(catalogueEntry('custom-box').kind).toBe('plain-block');
+    expect(CATALOGUE.filter((e) => e.kind === 'bed').length).toBe(15);
+    // Every kind has at least one entry to add it from.
+    for (const kind of PIECE_KINDS) expect(CATALOGUE.some((e) => e.kind === kind)).toBe(true);
   });
 
   it('builds beds round their mattress with the frame allowance', () => {
@@ -57,7 +68,7 @@ describe('pieceFromCatalogue', () => {
     expect(pieceFromCatalogue('sofa-3-seat', 's', [0, 0]).elevation).toBe(0);
   });
 
-  it('throws for a kind the catalogue does not have', () => {
-    expect(() => pieceFromCatalogue('hammock' as CatalogueKind, 'h', [0, 0])).toThrow('The catalogue has no hammock.');
+  it('throws for an id the catalogue does not have', () => {
+    expect(() => pieceFromCatalogue('hammock' as CatalogueId, 'h', [0, 0])).toThrow('The catalogue has no hammock.');
   });
 });

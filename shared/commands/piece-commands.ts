@@ -16,6 +16,11 @@ export interface PiecePatch {
   status?: Piece['status'];
   elevation?: number;
   finishId?: string | null;
+  /** A new kind drops the old kind's settings unless new ones come with it. */
+  kind?: Piece['kind'];
+  settings?: Piece['settings'] | null;
+  accentColour?: string | null;
+  accentFinishId?: string | null;
 }
 
 /** New box sizes in mm; the centre stays where it is. */
@@ -26,8 +31,8 @@ export interface PieceSize {
 }
 
 // Fields whose null means "take the field away" because the schema has them optional, not nullable.
-const CLEARED_BY_NULL: ReadonlySet<string> = new Set(['colour', 'supplierUrl']);
-const PATCHABLE: ReadonlySet<string> = new Set(['name', 'colour', 'price', 'supplierUrl', 'status', 'elevation', 'finishId']);
+const CLEARED_BY_NULL: ReadonlySet<string> = new Set(['colour', 'supplierUrl', 'settings', 'accentColour']);
+const PATCHABLE: ReadonlySet<string> = new Set(['name', 'colour', 'price', 'supplierUrl', 'status', 'elevation', 'finishId', 'kind', 'settings', 'accentColour', 'accentFinishId']);
 
 function findPiece(doc: EditorDoc, optionId: string, id: string): Piece | undefined {
   return doc.options[optionId]?.pieces.find((p) => p.id === id);
@@ -124,6 +129,7 @@ export function updatePiece(optionId: string, id: string, patch: PiecePatch): Co
     run: (doc, args) =>
       editPiece(doc, args.optionId, args.id, (piece) => {
         const next: Record<string, unknown> = { ...piece };
+        if (args.patch.kind !== undefined && args.patch.kind !== piece.kind && args.patch.settings === undefined) delete next.settings;
         for (const [key, value] of Object.entries(definedFields(args.patch))) {
           if (!PATCHABLE.has(key)) return `${key} cannot be changed here`;
           if (value === null && CLEARED_BY_NULL.has(key)) {

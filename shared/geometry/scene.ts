@@ -120,13 +120,13 @@ class MeshWriter {
   }
 
   toMesh(): MeshData {
-    return {
-      positions: new Float32Array(this.positions),
-      normals: new Float32Array(this.normals),
-      uvs: new Float32Array(this.uvs),
-      indices: new Uint32Array(this.indices),
-    };
+    return meshFromArrays(this.positions, this.normals, this.uvs, this.indices);
   }
+}
+
+/** Plain number lists (scene metres) as a mesh's typed arrays. */
+export function meshFromArrays(positions: readonly number[], normals: readonly number[], uvs: readonly number[], indices: readonly number[]): MeshData {
+  return { positions: new Float32Array(positions), normals: new Float32Array(normals), uvs: new Float32Array(uvs), indices: new Uint32Array(indices) };
 }
 
 const QUAD_TRIANGLES = [0, 1, 2, 0, 2, 3];

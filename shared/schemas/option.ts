@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { docIdText, nameText, noteText } from './common';
 import { ROOM_LIMITS, boundedMm } from './room';
+import { checkKindSettings, pieceKindSchema, pieceSettingsSchema } from './piece-kind';
 
 /** Bounds on an option and its pieces (plan mm): sanity bounds no real option reaches (common practice). */
 export const OPTION_LIMITS = {
@@ -14,7 +15,6 @@ export const OPTION_LIMITS = {
   nameLength: 80,
   noteLength: 2_000,
   pieceNameLength: 120,
-  kindLength: 60,
   urlLength: 2_000,
 } as const;
 
@@ -77,7 +77,16 @@ export const pieceSchema = z.object({
     .optional(),
   finishId: docIdText.nullable().optional(),
   placed: z.boolean().default(true),
-  kind: nameText(OPTION_LIMITS.kindLength).optional(),
+  /** What the piece is; it shapes only what is drawn inside the box. Missing reads as plain-block. */
+  kind: pieceKindSchema.optional(),
+  /** The kind's own choices (arms, doors, headboard…); a setting the kind does not take is refused. */
+  settings: pieceSettingsSchema.optional(),
+  /** The second finish (legs, frame, handles): a colour or a library finish, like colour and finishId for the main one. */
+  accentColour: z
+    .string()
+    .regex(/^#[0-9a-fA-F]{6}$/, { message: 'must be a colour like #a0b1c2' })
+    .optional(),
+  accentFinishId: docIdText.nullable().optional(),
 });
 export type Piece = z.infer<typeof pieceSchema>;
 export type PieceInput = z.input<typeof pieceSchema>;
@@ -96,8 +105,14 @@ export const finishAssignmentsSchema = z.object({
 export type FinishAssignments = z.infer<typeof finishAssignmentsSchema>;
 
 /** The option document stored as jsonb; its name and note live in table columns. */
+/** Pieces of an option or a plan file, each with only the settings its kind takes. */
+export const piecesSchema = z
+  .array(pieceSchema)
+  .max(OPTION_LIMITS.pieces, `has more than ${OPTION_LIMITS.pieces} pieces (an option has at most ${OPTION_LIMITS.pieces})`)
+  .superRefine(checkKindSettings);
+
 export const optionDocSchema = z.object({
-  pieces: z.array(pieceSchema).max(OPTION_LIMITS.pieces, `has more than ${OPTION_LIMITS.pieces} pieces (an option has at most ${OPTION_LIMITS.pieces})`).default([]),
+  pieces: piecesSchema.default([]),
   finishes: finishAssignmentsSchema.default({ floor: null, ceiling: null, walls: null, wallOverrides: {} }),
 });
 export type OptionDoc = z.infer<typeof optionDocSchema>;

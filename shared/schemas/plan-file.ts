@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { validateRoomShell, type FieldProblem } from '../geometry/validate';
-import { finishAssignmentsSchema, optionDocSchema, optionNameSchema, optionNoteSchema } from './option';
+import { finishAssignmentsSchema, optionNameSchema, optionNoteSchema, piecesSchema } from './option';
+import { kindFromWords, pieceKindSchema } from './piece-kind';
 import { roomNameText, roomShellSchema } from './room';
 
 export const PLAN_FILE_FORMAT = 'parlour-plan';
@@ -16,7 +17,7 @@ export const planFileSchema = z.object({
   option: z.object({
     name: optionNameSchema,
     note: optionNoteSchema.optional(),
-    pieces: optionDocSchema.shape.pieces,
+    pieces: piecesSchema.default([]),
     finishes: finishAssignmentsSchema.optional(),
   }),
 });
@@ -44,6 +45,23 @@ export function zodIssuesToProblems(error: z.ZodError): FieldProblem[] {
 // one useful message in a list of missing fields.
 const headerSchema = z.object({ format: z.literal(PLAN_FILE_FORMAT), version: z.literal(PLAN_FILE_VERSION) });
 
+/**
+ * Version 1 files written before kinds were a fixed list carry any text as a piece's kind
+ * (`sofa-3`, `bed-double`): such a value is read by the words it contains, as migration 0010 did
+ * for stored options, and anything unrecognised becomes plain-block.
+ */
+function withKnownKinds(data: unknown): unknown {
+  const option = (data as { option?: { pieces?: unknown } }).option;
+  if (!option || !Array.isArray(option.pieces)) return data;
+  const pieces = option.pieces.map((p: unknown) => {
+    if (!p || typeof p !== 'object') return p;
+    const piece = p as { kind?: unknown; name?: unknown };
+    if (typeof piece.kind !== 'string' || pieceKindSchema.safeParse(piece.kind).success) return p;
+    return { ...piece, kind: kindFromWords(piece.kind, typeof piece.name === 'string' ? piece.name : '') };
+  });
+  return { ...(data as object), option: { ...option, pieces } };
+}
+
 /** Reads a plan file from JSON text or parsed JSON; every error names its field (`room.outline: wall 0 crosses wall 2`). */
 export function readPlanFile(input: unknown): ReadPlanFileResult {
   let data: unknown = input;
@@ -61,7 +79,7 @@ export function readPlanFile(input: unknown): ReadPlanFileResult {
     );
     return { ok: false, errors: problems.map((p) => `${p.path}: ${p.message}`) };
   }
-  const parsed = planFileSchema.safeParse(data);
+  const parsed = planFileSchema.safeParse(withKnownKinds(data));
   if (!parsed.success) {
     return { ok: false, errors: zodIssuesToProblems(parsed.error).map((p) => `${p.path}: ${p.message}`) };
   }

@@ -124,7 +124,7 @@ export type PresentationSummary = z.infer<typeof presentationSummarySchema>;
 // ---- What the client's page receives -----------------------------------------------------
 
 /** A piece as the client sees it: no supplier link, no ids of other records, a price only when shown. */
-export const clientPieceSchema = pieceSchema.omit({ supplierUrl: true, finishId: true, price: true }).extend({
+export const clientPieceSchema = pieceSchema.omit({ supplierUrl: true, finishId: true, accentFinishId: true, price: true }).extend({
   price: z.number().nullable().optional(),
   finish: z.object({ name: z.string(), colourHex: z.string().nullable() }).nullable(),
 });
@@ -143,6 +143,8 @@ export const clientSurfacesSchema = z.object({
   walls: sceneFinishSchema.nullable(),
   wallOverrides: z.record(z.string(), sceneFinishSchema),
   pieces: z.record(z.string(), sceneFinishSchema),
+  /** The second finish of pieces (legs, frame, handles), by piece id. */
+  pieceAccents: z.record(z.string(), sceneFinishSchema).optional(),
 });
 export type ClientSurfaces = z.infer<typeof clientSurfacesSchema>;
 

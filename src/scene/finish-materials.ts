@@ -16,6 +16,8 @@ export interface SurfaceFinishes {
   wallOverrides?: Record<string, SceneFinish>;
   /** Pieces by id (drawn in the finish's colour, or a photo's mean colour). */
   pieces?: Record<string, SceneFinish>;
+  /** Pieces' second finish (legs, frame, handles) by id. */
+  pieceAccents?: Record<string, SceneFinish>;
 }
 
 export interface FinishMaterialPair {
@@ -42,6 +44,7 @@ export interface TextureProgress {
  */
 export class FinishMaterials {
   private readonly pairs = new Map<string, FinishMaterialPair>();
+  private readonly pieceMaterials = new Map<string, THREE.MeshStandardMaterial>();
   private readonly textures = new Map<string, THREE.Texture>();
   private readonly loader = new THREE.TextureLoader();
   private readonly settledUrls = new Set<string>();
@@ -69,6 +72,21 @@ export class FinishMaterials {
       if (image?.width && image.height) bytes += image.width * image.height * RGBA_BYTES * MIPMAP_FACTOR;
     }
     return Math.round(bytes);
+  }
+
+  /**
+   * The material pieces wear for a finish: coloured per vertex (so the selected piece can be
+   * tinted) and pushed back a little so selection edges drawn on it never flicker.
+   */
+  pieceMaterial(finish: Extract<SceneFinish, { kind: 'photo' }>): THREE.MeshStandardMaterial {
+    const key = `piece|${JSON.stringify(finish)}`;
+    const known = this.pieceMaterials.get(key);
+    if (known) return known;
+    const material = new THREE.MeshStandardMaterial({ roughness: finish.roughness, metalness: 0, vertexColors: true, polygonOffset: true, polygonOffsetFactor: 1, polygonOffsetUnits: 1 });
+    material.color.set(finish.meanColourHex);
+    this.loadInto(finish, [material]);
+    this.pieceMaterials.set(key, material);
+    return material;
   }
 
   get(finish: SceneFinish): FinishMaterialPair {
@@ -141,7 +159,9 @@ export class FinishMaterials {
       solid.dispose();
       faded.dispose();
     }
+    for (const m of this.pieceMaterials.values()) m.dispose();
     for (const t of this.textures.values()) t.dispose();
+    this.pieceMaterials.clear();
     this.pairs.clear();
     this.textures.clear();
     this.settledUrls.clear();

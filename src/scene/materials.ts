@@ -8,6 +8,8 @@ export const SELECTION_COLOUR = '#2f6b5c';
 export const SELECTION_TINT = 0.55;
 /** Calm neutrals for pieces without a colour, so what the client owns and what is proposed differ a little. */
 export const PIECE_COLOURS = { existing: '#a99d8f', new: '#d8cdbd' } as const;
+/** Legs, frames and handles of pieces without an accent: a darker tone of the same neutrals. */
+export const ACCENT_COLOURS = { existing: '#6d6157', new: '#8a7a68' } as const;
 /** Opacity of a wall between the eye and the room in the Overview. */
 export const FADED_WALL_OPACITY = 0.14;
 export const SCENE_BACKGROUND = '#f7f3ec';

@@ -2,9 +2,12 @@ import type { ThreeEvent } from '@react-three/fiber';
 import { useThree } from '@react-three/fiber';
 import { useEffect, useLayoutEffect, useMemo } from 'react';
 import * as THREE from 'three';
+import type { PieceFormData } from '../../shared/geometry/forms/piece-forms';
 import type { PieceSceneData } from '../../shared/geometry/scene';
 import type { Piece } from '../../shared/schemas/option';
-import { mergeMeshData, mergedRanges, meshDataToGeometry, partOfTriangle } from './build-geometry';
+import { mergeMeshData, mergedRanges, meshDataToGeometry, partOfTriangle, type MergedRanges } from './build-geometry';
+import type { FinishMaterials, SurfaceFinishes } from './finish-materials';
+import { formGroups, groupVertexColours, type FormGroup } from './form-groups';
 import type { SceneMaterials } from './materials';
 import { pieceVertexColours } from './piece-colours';
 
@@ -13,20 +16,119 @@ export const CLICK_SLOP_PX = 5;
 /** Only corners sharper than this (degrees) get a selection edge, i.e. a box's twelve edges. */
 const EDGE_ANGLE_DEG = 30;
 
+/** How pieces are drawn: as their forms, or as the plain boxes the checks measure (kept to compare against). */
+export type PieceBuild = 'forms' | 'boxes';
+
+/** The pieces' forms and what they wear; without it the pieces are drawn as their plain boxes. */
+export interface PieceFormsInput {
+  data: readonly PieceFormData[];
+  finishes: SurfaceFinishes;
+  finishMaterials: FinishMaterials;
+}
+
 interface RoomPiecesProps {
   pieceScene: readonly PieceSceneData[];
   pieces: readonly Piece[];
   selectedPieceId: string | null;
   materials: SceneMaterials;
   onPieceClick?: (id: string) => void;
+  forms?: PieceFormsInput;
+}
+
+type ClickHandlers = ReturnType<typeof useClickHandlers>;
+
+function useClickHandlers(onPieceClick: ((id: string) => void) | undefined, pieceOfTriangle: (triangle: number) => string | null) {
+  return useMemo(() => {
+    if (!onPieceClick) return {};
+    const setCursor = (event: ThreeEvent<PointerEvent>, cursor: string) => {
+      const canvas = event.nativeEvent.target;
+      if (canvas instanceof HTMLElement) canvas.style.cursor = cursor;
+    };
+    return {
+      onClick: (event: ThreeEvent<MouseEvent>) => {
+        event.stopPropagation();
+        if (event.delta > CLICK_SLOP_PX || event.faceIndex == null) return;
+        const id = pieceOfTriangle(event.faceIndex);
+        if (id) onPieceClick(id);
+      },
+      onPointerOver: (event: ThreeEvent<PointerEvent>) => setCursor(event, 'pointer'),
+      onPointerOut: (event: ThreeEvent<PointerEvent>) => setCursor(event, ''),
+    };
+  }, [onPieceClick, pieceOfTriangle]);
+}
+
+/** The selected piece's box as edges: the box is what the checks measure, whatever form is drawn in it. */
+function SelectionEdges({ pieceScene, selectedPieceId, materials }: Pick<RoomPiecesProps, 'pieceScene' | 'selectedPieceId' | 'materials'>) {
+  const edges = useMemo(() => {
+    const selected = pieceScene.find((p) => p.id === selectedPieceId);
+    if (!selected) return null;
+    const faces = meshDataToGeometry(selected.mesh);
+    const lines = new THREE.EdgesGeometry(faces, EDGE_ANGLE_DEG);
+    faces.dispose();
+    return lines;
+  }, [pieceScene, selectedPieceId]);
+  useEffect(() => () => edges?.dispose(), [edges]);
+  return edges ? <lineSegments geometry={edges} material={materials.selectionEdge} /> : null;
 }
 
 /**
- * Every placed piece as one merged mesh (one draw call however many pieces), coloured per vertex;
- * a click is traced back to its piece through the hit triangle. The selected piece is tinted
- * towards the accent and outlined.
+ * Every placed piece as its form: parts merged per material (one mesh for all plain colours, one
+ * per photo finish worn), coloured per vertex so selection and recolouring rewrite one buffer.
  */
-export function RoomPieces({ pieceScene, pieces, selectedPieceId, materials, onPieceClick }: RoomPiecesProps) {
+function PieceForms({ forms, pieces, selectedPieceId, materials, onPieceClick }: Required<Pick<RoomPiecesProps, 'forms'>> & Omit<RoomPiecesProps, 'forms' | 'pieceScene'>) {
+  const groups = useMemo(() => formGroups(forms.data, pieces, forms.finishes), [forms.data, forms.finishes, pieces]);
+  return (
+    <>
+      {groups.map((group) => (
+        <FormGroupMesh
+          key={group.key}
+          group={group}
+          material={group.finish ? forms.finishMaterials.pieceMaterial(group.finish) : materials.piece}
+          selectedPieceId={selectedPieceId}
+          onPieceClick={onPieceClick}
+        />
+      ))}
+    </>
+  );
+}
+
+function FormGroupMesh({ group, material, selectedPieceId, onPieceClick }: { group: FormGroup; material: THREE.Material; selectedPieceId: string | null; onPieceClick?: (id: string) => void }) {
+  const invalidate = useThree((state) => state.invalidate);
+  const merged = useMemo(() => {
+    const meshes = group.entries.map((e) => e.mesh);
+    const ranges: MergedRanges = mergedRanges(meshes);
+    const geometry = meshDataToGeometry(mergeMeshData(meshes));
+    const colours = new THREE.BufferAttribute(new Float32Array(ranges.vertexStarts[ranges.vertexStarts.length - 1] * 3), 3);
+    geometry.setAttribute('color', colours);
+    return { geometry, colours, ranges };
+  }, [group]);
+  useEffect(() => () => merged.geometry.dispose(), [merged]);
+  useLayoutEffect(() => {
+    merged.colours.copyArray(groupVertexColours(group, selectedPieceId));
+    merged.colours.needsUpdate = true;
+    invalidate();
+  }, [merged, group, selectedPieceId, invalidate]);
+  const pieceOfTriangle = useMemo(() => (triangle: number) => group.entries[partOfTriangle(merged.ranges, triangle)]?.pieceId ?? null, [group, merged]);
+  const handlers: ClickHandlers = useClickHandlers(onPieceClick, pieceOfTriangle);
+  return <mesh geometry={merged.geometry} material={material} {...handlers} />;
+}
+
+/**
+ * Every placed piece, as its form or as its plain box, in a few merged meshes coloured per vertex;
+ * a click is traced back to its piece through the hit triangle. The selected piece is tinted
+ * towards the accent and its box outlined.
+ */
+export function RoomPieces(props: RoomPiecesProps) {
+  return (
+    <group>
+      {props.forms ? <PieceForms {...props} forms={props.forms} /> : <PieceBoxes {...props} />}
+      <SelectionEdges pieceScene={props.pieceScene} selectedPieceId={props.selectedPieceId} materials={props.materials} />
+    </group>
+  );
+}
+
+/** The plain boxes (what the checks measure), kept for comparing against the forms. */
+function PieceBoxes({ pieceScene, pieces, selectedPieceId, materials, onPieceClick }: RoomPiecesProps) {
   const invalidate = useThree((state) => state.invalidate);
   const merged = useMemo(() => {
     const meshes = pieceScene.map((p) => p.mesh);
@@ -54,39 +156,8 @@ export function RoomPieces({ pieceScene, pieces, selectedPieceId, materials, onP
     invalidate();
   }, [merged, looks, selectedPieceId, invalidate]);
 
-  const edges = useMemo(() => {
-    const selected = pieceScene.find((p) => p.id === selectedPieceId);
-    if (!selected) return null;
-    const faces = meshDataToGeometry(selected.mesh);
-    const lines = new THREE.EdgesGeometry(faces, EDGE_ANGLE_DEG);
-    faces.dispose();
-    return lines;
-  }, [pieceScene, selectedPieceId]);
-  useEffect(() => () => edges?.dispose(), [edges]);
-
-  const handlers = useMemo(() => {
-    if (!onPieceClick) return {};
-    const setCursor = (event: ThreeEvent<PointerEvent>, cursor: string) => {
-      const canvas = event.nativeEvent.target;
-      if (canvas instanceof HTMLElement) canvas.style.cursor = cursor;
-    };
-    return {
-      onClick: (event: ThreeEvent<MouseEvent>) => {
-        event.stopPropagation();
-        if (event.delta > CLICK_SLOP_PX || event.faceIndex == null) return;
-        const part = partOfTriangle(merged.ranges, event.faceIndex);
-        if (part >= 0) onPieceClick(pieceScene[part].id);
-      },
-      onPointerOver: (event: ThreeEvent<PointerEvent>) => setCursor(event, 'pointer'),
-      onPointerOut: (event: ThreeEvent<PointerEvent>) => setCursor(event, ''),
-    };
-  }, [onPieceClick, merged, pieceScene]);
-
+  const pieceOfTriangle = useMemo(() => (triangle: number) => pieceScene[partOfTriangle(merged.ranges, triangle)]?.id ?? null, [pieceScene, merged]);
+  const handlers = useClickHandlers(onPieceClick, pieceOfTriangle);
   if (!merged.geometry) return null;
-  return (
-    <group>
-      <mesh geometry={merged.geometry} material={materials.piece} castShadow receiveShadow {...handlers} />
-      {edges && <lineSegments geometry={edges} material={materials.selectionEdge} />}
-    </group>
-  );
+  return <mesh geometry={merged.geometry} material={materials.piece} castShadow receiveShadow {...handlers} />;
 }

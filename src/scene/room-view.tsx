@@ -7,6 +7,7 @@ import type { RoomShell } from '../../shared/schemas/room';
 import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from './materials';
 import { OverviewControls } from './overview-controls';
 import { RoomPieces } from './room-pieces';
+import { buildPieceForms } from '../../shared/geometry/forms/piece-forms';
 import { RoomShellMeshes, type SurfaceHit } from './room-shell';
 import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
 import { SceneLights } from './scene-lights';
@@ -132,6 +133,7 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
     () => tryBuild('pieces', () => buildRoomScene(shell, { pieces }).pieces) ?? [],
     [shell, pieces],
   );
+  const forms = useMemo(() => tryBuild('forms', () => buildPieceForms(pieces)), [pieces]);
 
   const { walls, ceiling, updateView } = useWallFade(parts, fadeNearWalls, materials, host, invalidate, surfaces);
 
@@ -140,7 +142,14 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
     <>
       <SceneLights bounds={parts.bounds} windows={windows} />
       <RoomShellMeshes parts={parts} materials={materials} wallsRef={walls} ceilingRef={ceiling} surfaces={surfaces} onSurfaceClick={onSurfaceClick} />
-      <RoomPieces pieceScene={pieceScene} pieces={pieces} selectedPieceId={selectedPieceId} materials={materials} onPieceClick={onPieceClick} />
+      <RoomPieces
+        pieceScene={pieceScene}
+        pieces={pieces}
+        selectedPieceId={selectedPieceId}
+        materials={materials}
+        onPieceClick={onPieceClick}
+        forms={forms ? { data: forms, finishes, finishMaterials } : undefined}
+      />
       <OverviewControls bounds={parts.bounds} onView={updateView} />
       <RenderAndReport host={host} />
     </>

@@ -9,7 +9,8 @@ import type { CameraLink, ViewMode, ViewPose } from './camera-link';
 import { FinishMaterials, type SurfaceFinishes, type TextureProgress } from './finish-materials';
 import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from './materials';
 import { RenderAndReport } from './render-report';
-import { RoomPieces } from './room-pieces';
+import { RoomPieces, type PieceBuild } from './room-pieces';
+import { buildPieceForms, type PieceFormData } from '../../shared/geometry/forms/piece-forms';
 import { RoomShellMeshes } from './room-shell';
 import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
 import { SceneLights } from './scene-lights';
@@ -64,6 +65,8 @@ export interface WalkthroughViewProps {
   viewId?: string;
   commandsRef?: React.Ref<ViewCommands>;
   onTextureProgress?: (progress: TextureProgress) => void;
+  /** Draw the pieces as their forms (the default) or as their plain boxes, for comparison. */
+  pieceBuild?: PieceBuild;
   label: string;
   className?: string;
 }
@@ -180,12 +183,13 @@ interface BuiltOption {
   id: string;
   pieces: Piece[];
   pieceScene: readonly PieceSceneData[];
+  forms: readonly PieceFormData[] | null;
   obstacles: WalkObstacles;
   finishes: SurfaceFinishes;
 }
 
 function WalkthroughScene(props: SceneProps) {
-  const { optionId, mode, eyeHeightMm, reducedMotion, selectedPieceId = null, onPieceClick, link, viewId = 'main', host, held, rig, onTextureProgress, onMoveStart } = props;
+  const { optionId, mode, eyeHeightMm, reducedMotion, selectedPieceId = null, onPieceClick, link, viewId = 'main', host, held, rig, onTextureProgress, onMoveStart, pieceBuild = 'forms' } = props;
   const shell = useStableValue(props.shell);
   const options = useStableValue(props.options);
   const invalidate = useThree((state) => state.invalidate);
@@ -214,10 +218,11 @@ function WalkthroughScene(props: SceneProps) {
           pieces,
           finishes: o.finishes,
           pieceScene: tryBuild('pieces', () => buildRoomScene(shell, { pieces }).pieces) ?? [],
+          forms: pieceBuild === 'forms' ? tryBuild('forms', () => buildPieceForms(pieces)) : null,
           obstacles: tryBuild('walk', () => walkObstacles(shell, pieces)) ?? { segments: [], boxes: [], outline: shell.outline },
         };
       }),
-    [options, shell],
+    [options, shell, pieceBuild],
   );
   // Every option's finishes are asked for at once, so their textures load while the first is shown.
   const surfacesByOption = useMemo(() => new Map(built.map((o) => [o.id, surfaceMaterials(o.finishes, finishMaterials)])), [built, finishMaterials]);
@@ -264,6 +269,7 @@ function WalkthroughScene(props: SceneProps) {
             pieces={o.pieces}
             selectedPieceId={o.id === active.id ? selectedPieceId : null}
             materials={materials}
+            forms={o.forms ? { data: o.forms, finishes: o.finishes, finishMaterials } : undefined}
             // Hidden options must not catch clicks: the pointer passes through invisible meshes.
             onPieceClick={o.id === active.id ? onPieceClick : undefined}
           />

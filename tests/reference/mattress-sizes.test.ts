@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { BED_FRAME_LENGTH_ALLOWANCE_MM, BED_FRAME_WIDTH_ALLOWANCE_MM, catalogueEntry, type CatalogueKind } from '../../shared/catalogue/catalogue';
+import { BED_FRAME_LENGTH_ALLOWANCE_MM, BED_FRAME_WIDTH_ALLOWANCE_MM, catalogueEntry, type CatalogueId } from '../../shared/catalogue/catalogue';
 import { MM_PER_INCH } from '../../shared/units/length';
 
 // There is no mandatory mattress standard, so REFERENCES.md asks for ±2 cm (metric) and ±1 in (US).
@@ -7,7 +7,7 @@ const METRIC_TOLERANCE_MM = 20;
 const INCH_TOLERANCE_MM = 25.4;
 
 // [kind, width cm, length cm], each with its source as REFERENCES.md gives it.
-const metric: [CatalogueKind, number, number][] = [
+const metric: [CatalogueId, number, number][] = [
   ['bed-uk-single', 90, 190], // National Bed Federation sizes (summary)
   ['bed-uk-small-double', 120, 190], // National Bed Federation sizes (summary)
   ['bed-uk-double', 135, 190], // National Bed Federation sizes (summary)
@@ -20,7 +20,7 @@ const metric: [CatalogueKind, number, number][] = [
 ];
 
 // [kind, width in, length in]: sleep-industry consumer charts (summary).
-const us: [CatalogueKind, number, number][] = [
+const us: [CatalogueId, number, number][] = [
   ['bed-us-twin', 38, 75],
   ['bed-us-twin-xl', 38, 80],
   ['bed-us-full', 54, 75],
@@ -29,7 +29,7 @@ const us: [CatalogueKind, number, number][] = [
   ['bed-us-california-king', 72, 84],
 ];
 
-function mattressOf(kind: CatalogueKind) {
+function mattressOf(kind: CatalogueId) {
   const { mattress } = catalogueEntry(kind);
   if (!mattress) throw new Error(`${kind} has no mattress`);
   return mattress;

@@ -143,6 +143,8 @@ export function toClientPiece(piece: Piece, showPrices: boolean, finishes: Map<s
   };
   if (piece.colour) out.colour = piece.colour;
   if (piece.kind) out.kind = piece.kind;
+  if (piece.settings) out.settings = piece.settings;
+  if (piece.accentColour) out.accentColour = piece.accentColour;
   if (showPrices && piece.price !== undefined) out.price = piece.price;
   return out;
 }
@@ -150,7 +152,7 @@ export function toClientPiece(piece: Piece, showPrices: boolean, finishes: Map<s
 /** Every finish id an option shows: its floor, ceiling, walls, feature walls and placed pieces. */
 export function finishIdsOf(doc: OptionDoc): string[] {
   const { floor, ceiling, walls, wallOverrides } = doc.finishes;
-  const ids = [floor, ceiling, walls, ...Object.values(wallOverrides), ...doc.pieces.filter((p) => p.placed).map((p) => p.finishId)];
+  const ids = [floor, ceiling, walls, ...Object.values(wallOverrides), ...doc.pieces.filter((p) => p.placed).flatMap((p) => [p.finishId, p.accentFinishId])];
   return [...new Set(ids.filter((id): id is string => Boolean(id && UUID.test(id))))];
 }
 
@@ -179,11 +181,15 @@ export function clientSurfaces(doc: OptionDoc, finishes: ReadonlyMap<string, Fin
     if (f) wallOverrides[wall] = f;
   }
   const pieces: Record<string, SceneFinish> = {};
+  const pieceAccents: Record<string, SceneFinish> = {};
   for (const piece of doc.pieces) {
-    const f = piece.placed ? scene(piece.finishId) : null;
-    if (f) pieces[piece.id] = f;
+    if (!piece.placed) continue;
+    const main = scene(piece.finishId);
+    if (main) pieces[piece.id] = main;
+    const accent = scene(piece.accentFinishId);
+    if (accent) pieceAccents[piece.id] = accent;
   }
-  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces };
+  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces, pieceAccents };
 }
 
 /** Everything the client's page shows, and nothing else; `token` is the link's, for its file URLs. */

@@ -32,7 +32,7 @@ async function roomsOf(db: Db, studioId: string, projectId: string): Promise<Roo
 function finishIdsOf(docs: readonly OptionDoc[]): Set<string> {
   const ids = new Set<string>();
   for (const { finishes, pieces } of docs) {
-    for (const id of [finishes.floor, finishes.ceiling, finishes.walls, ...Object.values(finishes.wallOverrides), ...pieces.map((p) => p.finishId)]) {
+    for (const id of [finishes.floor, finishes.ceiling, finishes.walls, ...Object.values(finishes.wallOverrides), ...pieces.flatMap((p) => [p.finishId, p.accentFinishId])]) {
       if (id) ids.add(id);
     }
   }

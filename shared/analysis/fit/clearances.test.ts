@@ -9,9 +9,9 @@ describe('reach widths by piece', () => {
     // HUD MAP vol. 4 (1973): 22 in beside a bed; NKBA guideline 8: 32 in behind a seated diner; 1 in = 25.4 mm (NIST SP 811).
     expect(BED_SIDE_MM).toBeCloseTo(558.8, 9);
     expect(BEHIND_DINER_MM).toBeCloseTo(812.8, 9);
-    expect(reachWidthMm({ kind: 'bed-uk-double', name: 'Our bed' }, 900)).toBeCloseTo(558.8, 9);
+    expect(reachWidthMm({ kind: 'bed', name: 'Our bed' }, 900)).toBeCloseTo(558.8, 9);
     expect(reachWidthMm({ name: 'Double bed' }, 900)).toBeCloseTo(558.8, 9);
-    expect(reachWidthMm({ kind: 'dining-table-6', name: 'Table' }, 900)).toBeCloseTo(812.8, 9);
+    expect(reachWidthMm({ kind: 'dining-set', name: 'Table' }, 900)).toBeCloseTo(812.8, 9);
     expect(reachWidthMm({ name: 'Coffee table' }, 900)).toBe(COFFEE_TABLE_REACH_MM);
     expect(reachWidthMm({ name: 'Wardrobe' }, 900)).toBe(900);
     // Never more than the walkway the designer asked for.

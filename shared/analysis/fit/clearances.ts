@@ -18,7 +18,7 @@ type Need = { match: RegExp; requiredMm: number };
 const NEEDS: Need[] = [
   { match: /coffee[- ]table/i, requiredMm: COFFEE_TABLE_REACH_MM },
   { match: /(side|bedside|night)[- ]?(table|stand)/i, requiredMm: SIDE_TABLE_REACH_MM },
-  { match: /dining[- ]table/i, requiredMm: BEHIND_DINER_MM },
+  { match: /dining[- ]table|^dining-set$/i, requiredMm: BEHIND_DINER_MM },
   { match: /\bbed\b|^bed-/i, requiredMm: BED_SIDE_MM },
 ];
 

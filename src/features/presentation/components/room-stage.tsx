@@ -104,7 +104,9 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
 
   const isChosen = chosen?.id === option.id;
   const chip = 'pointer-events-none absolute top-3 left-3 max-w-[calc(100%-1.5rem)] truncate rounded-full bg-white/90 px-3 py-1 text-sm font-semibold shadow-sm';
-  const viewProps = { shell: room.shell, options: viewOptions, mode, eyeHeightMm, reducedMotion, link } as const;
+  // `?pieces=boxes` draws the plain boxes instead of the forms, so the two can be compared (the bench does).
+  const pieceBuild = useMemo(() => (new URLSearchParams(window.location.search).get('pieces') === 'boxes' ? 'boxes' : 'forms'), []);
+  const viewProps = { shell: room.shell, options: viewOptions, mode, eyeHeightMm, reducedMotion, link, pieceBuild } as const;
   return (
     <div className="mx-auto flex max-w-[100rem] flex-col gap-4 px-4 py-4 sm:px-6 lg:h-[calc(100dvh-4.25rem)] lg:flex-row">
       <section aria-labelledby="room-title" className="flex min-h-0 min-w-0 flex-1 flex-col gap-2">

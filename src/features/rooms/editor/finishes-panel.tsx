@@ -27,6 +27,8 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
   onSurface: (t: Target) => void;
 }) {
   const [q, setQ] = useState('');
+  // A piece wears two finishes: the main one (upholstery, carcass, top) and the accent (legs, frame, handles).
+  const [pieceSlot, setPieceSlot] = useState<'main' | 'accent'>('main');
   const byId = new Map(finishes.map((f) => [f.id, f]));
   const wall = selection?.kind === 'wall' ? selection.index : null;
   const piece: Piece | undefined = selection?.kind === 'piece' ? doc.pieces.find((p) => p.id === selection.id) : undefined;
@@ -36,18 +38,19 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
     if (t === 'ceiling') return doc.finishes.ceiling;
     if (t === 'walls') return doc.finishes.walls;
     if (t === 'wall') return wall === null ? null : doc.finishes.wallOverrides[String(wall)] ?? null;
-    return piece?.finishId ?? null;
+    return (pieceSlot === 'accent' ? piece?.accentFinishId : piece?.finishId) ?? null;
   };
   const choose = (id: string | null) => {
     if (readOnly) return;
     if (surface === 'piece') {
-      if (piece) run(updatePiece(optionId, piece.id, { finishId: id }));
+      if (piece) run(updatePiece(optionId, piece.id, pieceSlot === 'accent' ? { accentFinishId: id } : { finishId: id }));
       return;
     }
     const s: FinishSurface | null = surface === 'wall' ? (wall === null ? null : { wall }) : surface;
     if (s !== null) run(assignFinish(optionId, s, id));
   };
 
+  const pieceColour = pieceSlot === 'accent' ? piece?.accentColour : piece?.colour;
   const targets: { id: Target; label: string; disabled?: boolean }[] = [
     { id: 'floor', label: 'Floor' },
     { id: 'walls', label: 'All walls' },
@@ -74,13 +77,29 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
               className="flex items-center gap-2 rounded-lg border border-line bg-white px-3 py-2 text-left text-sm disabled:text-ink-faint aria-checked:border-pine aria-checked:bg-pine-wash/60"
             >
               <span className="flex-1 font-semibold">{t.label}</span>
-              {assigned ? <Swatch finish={assigned} size="sm" /> : null}
-              <span className="max-w-28 truncate text-xs text-ink-soft">{assigned?.name ?? (t.id === 'wall' && wall !== null ? 'as all walls' : 'plain')}</span>
+              {assigned ? <Swatch finish={assigned} size="sm" /> : t.id === 'piece' && pieceColour ? <span className="block size-6 rounded border border-black/10" style={{ background: pieceColour }} /> : null}
+              <span className="max-w-28 truncate text-xs text-ink-soft">{assigned?.name ?? (t.id === 'wall' && wall !== null ? 'as all walls' : t.id === 'piece' && pieceColour ? 'own colour' : 'plain')}</span>
             </button>
           );
         })}
       </div>
 
+      {surface === 'piece' && piece && (
+        <div role="radiogroup" aria-label="Which finish of the piece" className="flex gap-2">
+          {(['main', 'accent'] as const).map((slot) => (
+            <button
+              key={slot}
+              type="button"
+              role="radio"
+              aria-checked={pieceSlot === slot}
+              onClick={() => setPieceSlot(slot)}
+              className="flex-1 rounded-lg border border-line bg-white px-3 py-1.5 text-sm font-semibold aria-checked:border-pine aria-checked:bg-pine-wash/60"
+            >
+              {slot === 'main' ? 'Main' : 'Accent: legs, frame, handles'}
+            </button>
+          ))}
+        </div>
+      )}
       <label>
         <span className="sr-only">Find a finish</span>
         <input className={inputClass} type="search" placeholder="Find a finish" value={q} onChange={(e) => setQ(e.target.value)} />

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { isWebLink, type Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
-import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueKind } from '../../../../shared/catalogue/catalogue';
+import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import {
   addPiece, duplicatePiece, holdPiece, placePiece, removePiece, resizePiece, rotatePiece, updatePiece, type Command,
 } from '../../../../shared/commands';
@@ -10,9 +10,10 @@ import { Button } from '../../../components/ui/button';
 import { inputClass, TextField } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { roomCentre, type Selection } from './plan-geometry';
+import { KindDrawing, KindPicker } from './kind-drawing';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
-  seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', rugs: 'Rugs', other: 'Anything else',
+  seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', kitchen: 'Kitchen', lighting: 'Lighting', rugs: 'Rugs', other: 'Anything else',
 };
 
 /** Tall pieces can tip: at this height or more, the editor reminds the designer to fix them to the wall (common practice). */
@@ -39,7 +40,7 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
   onSelect: (s: Selection) => void; newId: (prefix: string) => string; heldCount: number;
 }) {
   const [filter, setFilter] = useState('');
-  const add = (kind: CatalogueKind, held: boolean) => {
+  const add = (kind: CatalogueId, held: boolean) => {
     const id = newId('piece');
     const piece = pieceFromCatalogue(kind, id, roomCentre(shell));
     if (run(addPiece(optionId, held ? { ...piece, placed: false } : piece))) onSelect({ kind: 'piece', id });
@@ -64,15 +65,16 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
             <ul className="flex flex-col gap-1">
               {entries.map((e) => (
                 <li
-                  key={e.kind}
+                  key={e.id}
                   draggable={!readOnly}
                   onDragStart={(ev) => {
-                    ev.dataTransfer.setData('application/x-parlour-catalogue', e.kind);
+                    ev.dataTransfer.setData('application/x-parlour-catalogue', e.id);
                     ev.dataTransfer.effectAllowed = 'copy';
                   }}
                   className={`group flex items-center gap-2 rounded-lg border border-line bg-white px-3 py-2 ${readOnly ? '' : 'cursor-grab hover:border-pine'}`}
                   title={`${e.source}${e.note ? ` · ${e.note}` : ''}`}
                 >
+                  <KindDrawing kind={e.kind} settings={e.settings} box={e} size={36} />
                   <div className="min-w-0 flex-1">
                     <div className="truncate text-sm font-semibold">{e.name}</div>
                     <div className="text-xs text-ink-faint tabular-nums">
@@ -81,8 +83,8 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
                   </div>
                   {!readOnly && (
                     <>
-                      <Button size="sm" variant="quiet" onClick={() => add(e.kind as CatalogueKind, true)} aria-label={`Put a ${e.name} in the holding area`} title="Put it in the holding area">Hold</Button>
-                      <Button size="sm" onClick={() => add(e.kind as CatalogueKind, false)} aria-label={`Add ${e.name}`}>Add</Button>
+                      <Button size="sm" variant="quiet" onClick={() => add(e.id as CatalogueId, true)} aria-label={`Put a ${e.name} in the holding area`} title="Put it in the holding area">Hold</Button>
+                      <Button size="sm" onClick={() => add(e.id as CatalogueId, false)} aria-label={`Add ${e.name}`}>Add</Button>
                     </>
                   )}
                 </li>
@@ -113,6 +115,14 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
         <span className="text-xs text-ink-faint">{piece.placed ? 'In the room' : 'In the holding area'}</span>
       </div>
       <TextField label="Name" value={name} disabled={readOnly} onChange={(e) => setName(e.target.value)} onBlur={() => name.trim() && name !== piece.name && patch({ name: name.trim() })} />
+      <KindPicker
+        kind={piece.kind ?? 'plain-block'}
+        settings={piece.settings ?? {}}
+        box={piece}
+        readOnly={readOnly}
+        onKind={(kind) => patch({ kind })}
+        onSettings={(settings) => patch({ settings: Object.values(settings).some((v) => v !== undefined) ? JSON.parse(JSON.stringify(settings)) : null })}
+      />
       <div className="grid grid-cols-3 gap-2">
         <LengthField commit="blur" label="Width" unit={unit} valueMm={piece.width} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { width: v }))} />
         <LengthField commit="blur" label="Depth" unit={unit} valueMm={piece.depth} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { depth: v }))} />
@@ -148,10 +158,16 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
         </div>
       </fieldset>
       <div className="grid grid-cols-[auto_1fr] items-start gap-3">
-        <label className="flex flex-col gap-1.5 text-sm font-semibold">
-          Colour
-          <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.colour ?? '#d9cfc0'} disabled={readOnly} onChange={(e) => patch({ colour: e.target.value })} />
-        </label>
+        <div className="flex gap-2">
+          <label className="flex flex-col gap-1.5 text-sm font-semibold">
+            Colour
+            <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.colour ?? '#d9cfc0'} disabled={readOnly} onChange={(e) => patch({ colour: e.target.value })} />
+          </label>
+          <label className="flex flex-col gap-1.5 text-sm font-semibold" title="Legs, frame and handles">
+            Accent
+            <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.accentColour ?? '#8a7a68'} disabled={readOnly} onChange={(e) => patch({ accentColour: e.target.value })} />
+          </label>
+        </div>
         <TextField label="Price" inputMode="decimal" value={price} disabled={readOnly} onChange={(e) => setPrice(e.target.value)} onBlur={() => {
           const v = price.trim() === '' ? null : Number(price.replace(',', '.'));
           if (v === null || (Number.isFinite(v) && v >= 0)) patch({ price: v });

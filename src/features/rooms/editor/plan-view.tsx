@@ -7,11 +7,12 @@ import {
   holdPiece, moveCorner, movePiece, placePiece, rotatePiece, setOutline, snapAngle, snapPieceToPieces, snapPieceToWalls, snapToGrid,
   updateOpening, addPiece, type Command,
 } from '../../../../shared/commands';
-import { pieceFromCatalogue, type CatalogueKind } from '../../../../shared/catalogue/catalogue';
+import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { distance } from '../../../../shared/geometry/vec';
 import { DIMENSION_OFFSET_MM, inHolding, pieceRing, planLayout, ringPath, type Selection } from './plan-geometry';
 import type { EditorStep } from './steps';
+import { PieceLabel, PieceTopView } from './plan-piece-forms';
 
 /** Corners snap to this grid while dragged or clicked (plan mm). */
 export const CORNER_GRID_MM = 10;
@@ -245,7 +246,7 @@ export function PlanView(props: Props) {
     e.preventDefault();
     const at = toPlan(e.clientX, e.clientY);
     const id = newId('piece');
-    let piece = pieceFromCatalogue(kind as CatalogueKind, id, [Math.round(at[0]), Math.round(at[1])]);
+    let piece = pieceFromCatalogue(kind as CatalogueId, id, [Math.round(at[0]), Math.round(at[1])]);
     if (inHolding(layout, at)) piece = { ...piece, placed: false };
     else piece = snapPieceToWalls(piece, shell).piece;
     if (run(addPiece(optionId, piece))) onSelect({ kind: 'piece', id });
@@ -391,6 +392,12 @@ export function PlanView(props: Props) {
         const flaggedPiece = flagged.has(p.id);
         const front = mid(ring[2], ring[3], 0.5);
         const rug = p.height <= 20;
+        const fill = rug ? '#f1e7d6' : p.colour ?? (p.status === 'existing' ? '#ece4d6' : '#ffffff');
+        const outline = {
+          stroke: flaggedPiece ? '#a4472f' : selected ? '#2f6b5c' : '#5c534a',
+          strokeWidth: stroke * (selected || flaggedPiece ? 2.4 : 1.1),
+          strokeDasharray: p.elevation > 0 && !rug ? `${stroke * 4} ${stroke * 2}` : undefined,
+        };
         return (
           <g
             key={p.id}
@@ -403,17 +410,13 @@ export function PlanView(props: Props) {
             onPointerDown={(e) => onPointerDownPiece(e, p)}
             opacity={p.elevation >= 1200 ? 0.75 : 1}
           >
-            <path
-              d={ringPath(ring)}
-              fill={rug ? '#f1e7d6' : p.colour ?? (p.status === 'existing' ? '#ece4d6' : '#ffffff')}
-              fillOpacity={rug ? 0.8 : 0.95}
-              stroke={flaggedPiece ? '#a4472f' : selected ? '#2f6b5c' : '#5c534a'}
-              strokeWidth={stroke * (selected || flaggedPiece ? 2.4 : 1.1)}
-              strokeDasharray={p.elevation > 0 && !rug ? `${stroke * 4} ${stroke * 2}` : undefined}
-            />
+            <path d={ringPath(ring)} fill={fill} fillOpacity={rug ? 0.8 : 0.95} {...outline} />
+            <PieceTopView piece={pose} fill={fill} stroke={stroke * 0.7} />
+            {/* The box outline again over the top view: the box is what is dragged and checked. */}
+            <path d={ringPath(ring)} fill="none" pointerEvents="none" {...outline} />
             {/* The front edge, where a person sits or stands to use the piece */}
             <line x1={ring[2][0]} y1={ring[2][1]} x2={ring[3][0]} y2={ring[3][1]} stroke={selected ? '#2f6b5c' : '#786e63'} strokeWidth={stroke * 2.4} strokeLinecap="round" />
-            <PieceLabel piece={pose} text={text} />
+            <PieceLabel piece={pose} text={text} fill={fill} />
             {selected && editable && step === 'furnish' && p.placed && !ghost && (
               <g>
                 <line x1={front[0]} y1={front[1]} x2={front[0] + (front[0] - p.x) / Math.hypot(front[0] - p.x, front[1] - p.y || 1) * TURN_HANDLE_MM} y2={front[1] + (front[1] - p.y) / Math.hypot(front[0] - p.x, front[1] - p.y || 1) * TURN_HANDLE_MM} stroke="#2f6b5c" strokeWidth={stroke} />
@@ -493,23 +496,6 @@ export function PlanView(props: Props) {
 }
 
 /** A piece's name along its longer side, upright, shrunk to fit inside the box. */
-function PieceLabel({ piece, text }: { piece: Pick<Piece, 'x' | 'y' | 'width' | 'depth' | 'rotation' | 'name'>; text: number }) {
-  const along = piece.width >= piece.depth;
-  let angle = piece.rotation + (along ? 0 : 90);
-  angle = ((angle % 360) + 360) % 360;
-  if (angle > 90 && angle <= 270) angle -= 180;
-  const long = Math.max(piece.width, piece.depth);
-  const short = Math.min(piece.width, piece.depth);
-  // About 0.55 em per character in Manrope; leave a little margin at each end.
-  const fit = (long * 0.9) / Math.max(1, piece.name.length * 0.55);
-  const size = Math.max(text * 0.55, Math.min(text * 0.95, fit, short * 0.6));
-  return (
-    <text transform={`translate(${piece.x} ${piece.y}) rotate(${angle})`} textAnchor="middle" dominantBaseline="central" fontSize={size} fill="#2a2521" pointerEvents="none">
-      {piece.name}
-    </text>
-  );
-}
-
 function mid(a: readonly [number, number], b: readonly [number, number], t: number): [number, number] {
   return [a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t];
 }

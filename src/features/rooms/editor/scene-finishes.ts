@@ -16,9 +16,12 @@ export function sceneFinishesFor(doc: OptionDoc | undefined, finishes: ReadonlyM
     if (f) wallOverrides[wall] = f;
   }
   const pieces: Record<string, SceneFinish> = {};
+  const pieceAccents: Record<string, SceneFinish> = {};
   for (const p of doc.pieces) {
-    const f = scene(p.finishId);
-    if (f) pieces[p.id] = f;
+    const main = scene(p.finishId);
+    if (main) pieces[p.id] = main;
+    const accent = scene(p.accentFinishId);
+    if (accent) pieceAccents[p.id] = accent;
   }
-  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces };
+  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces, pieceAccents };
 }

@@ -1,0 +1,256 @@
+// Parts (piece frame mm) as triangles in scene metres, one mesh per material slot, so a room's
+// forms can be merged per material into a few draw calls. UVs are metres along each face, so a
+// photo finish keeps its real repeat size on every part.
+import { meshFromArrays, type MeshData } from '../scene';
+import { directionDeg } from '../vec';
+import type { MaterialSlot, Part } from './parts';
+
+const MM = 1 / 1000;
+/** Segments per quarter of a rounded corner (a disc gets four of them). */
+const CORNER_SEGMENTS = 3;
+const DISC_SEGMENTS = 5;
+/** Sides round a leg: slim legs need few, lamp shades and pots more. */
+const LEG_SIDES = 8;
+const WIDE_LEG_SIDES = 14;
+const WIDE_LEG_MM = 120;
+
+/** Where a piece stands: centre (plan mm), turn (degrees clockwise seen from above), underside above the floor (mm). */
+export interface Placement {
+  x: number;
+  y: number;
+  rotation: number;
+  elevation: number;
+}
+
+/** One colour run of the own-coloured mesh: `vertexCount` vertices in a row wear `colour`. */
+export interface ColourRun {
+  colour: string;
+  vertexCount: number;
+}
+
+/** A piece's form in scene metres, one mesh per material slot; the own mesh lists which colour each run of vertices wears. */
+export interface FormMeshes {
+  main: MeshData;
+  accent: MeshData;
+  own: MeshData;
+  ownColours: ColourRun[];
+}
+
+type V3 = [number, number, number];
+
+// Writes in the piece's own frame (mm). The piece frame (x, y, z up) maps to the scene (x, z, y
+// up) through a mirror whatever the turn, so triangles are wound clockwise here to face outwards
+// once placed.
+class Writer {
+  positions: number[] = [];
+  normals: number[] = [];
+  uvs: number[] = [];
+  indices: number[] = [];
+  count = 0;
+
+  /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal`. */
+  quad(p: readonly V3[], n: readonly V3[], uv: readonly [number, number][], faceNormal: V3): void {
+    const base = this.count;
+    for (let i = 0; i < p.length; i++) this.vertex(p[i], n[i], uv[i][0], uv[i][1]);
+    this.fan(base, p.length, faceNormal);
+  }
+
+  /** A flat convex polygon facing `normal`. */
+  polygon(p: readonly V3[], normal: V3): void {
+    const base = this.count;
+    for (const point of p) this.vertex(point, normal, point[0] * MM, point[1] * MM);
+    this.fan(base, p.length, normal);
+  }
+
+  private vertex(p: V3, n: V3, u: number, v: number): void {
+    this.raw(p[0], p[1], p[2], n[0], n[1], n[2], u, v);
+  }
+
+  /** One vertex from plain numbers: the extrusions write thousands, so no arrays are made for them. */
+  raw(x: number, y: number, z: number, nx: number, ny: number, nz: number, u: number, v: number): void {
+    this.positions.push(x, y, z);
+    this.normals.push(nx, ny, nz);
+    this.uvs.push(u, v);
+    this.count++;
+  }
+
+  /** Triangles of a fan over the `n` vertices written from `base`, facing the normal f. */
+  fan(base: number, n: number, f: V3): void {
+    const P = this.positions;
+    const ax = P[base * 3], ay = P[base * 3 + 1], az = P[base * 3 + 2];
+    for (let k = 1; k + 1 < n; k++) {
+      const b = base + k;
+      const c = b + 1;
+      const e1x = P[b * 3] - ax, e1y = P[b * 3 + 1] - ay, e1z = P[b * 3 + 2] - az;
+      const e2x = P[c * 3] - ax, e2y = P[c * 3 + 1] - ay, e2z = P[c * 3 + 2] - az;
+      const facing = (e1y * e2z - e1z * e2y) * f[0] + (e1z * e2x - e1x * e2z) * f[1] + (e1x * e2y - e1y * e2x) * f[2];
+      if (facing >= 0) this.indices.push(base, c, b);
+      else this.indices.push(base, b, c);
+    }
+  }
+
+  toMesh(): MeshData {
+    return meshFromArrays(this.positions, this.normals, this.uvs, this.indices);
+  }
+}
+
+interface Frame {
+  cx: number;
+  cy: number;
+  ax: readonly [number, number];
+  ay: readonly [number, number];
+  elevation: number;
+}
+
+function frameOf(at: Placement): Frame {
+  const ax = directionDeg(at.rotation);
+  return { cx: at.x, cy: at.y, ax, ay: [-ax[1], ax[0]], elevation: at.elevation };
+}
+
+function writeBox(w: Writer, part: Part): void {
+  const x0 = part.x - part.w / 2, x1 = part.x + part.w / 2;
+  const y0 = part.y - part.d / 2, y1 = part.y + part.d / 2;
+  const z0 = part.z, z1 = part.z + part.h;
+  const flat = (n: V3): V3[] => [n, n, n, n];
+  const sideUv = (u0: number, u1: number): [number, number][] => [[u0 * MM, z0 * MM], [u1 * MM, z0 * MM], [u1 * MM, z1 * MM], [u0 * MM, z1 * MM]];
+  w.quad([[x0, y1, z0], [x1, y1, z0], [x1, y1, z1], [x0, y1, z1]], flat([0, 1, 0]), sideUv(x0, x1), [0, 1, 0]);
+  w.quad([[x1, y0, z0], [x0, y0, z0], [x0, y0, z1], [x1, y0, z1]], flat([0, -1, 0]), sideUv(-x1, -x0), [0, -1, 0]);
+  w.quad([[x1, y1, z0], [x1, y0, z0], [x1, y0, z1], [x1, y1, z1]], flat([1, 0, 0]), sideUv(-y1, -y0), [1, 0, 0]);
+  w.quad([[x0, y0, z0], [x0, y1, z0], [x0, y1, z1], [x0, y0, z1]], flat([-1, 0, 0]), sideUv(y0, y1), [-1, 0, 0]);
+  w.polygon([[x0, y0, z1], [x1, y0, z1], [x1, y1, z1], [x0, y1, z1]], [0, 0, 1]);
+  w.polygon([[x0, y0, z0], [x1, y0, z0], [x1, y1, z0], [x0, y1, z0]], [0, 0, -1]);
+}
+
+/** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
+export function roundedOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  const r = part.radius ?? 0;
+  const hx = part.w / 2 - r;
+  const hy = part.d / 2 - r;
+  const disc = hx < 1e-6 && hy < 1e-6;
+  const segments = disc ? DISC_SEGMENTS : CORNER_SEGMENTS;
+  const corners: [number, number, number][] = [
+    [hx, hy, 0],
+    [-hx, hy, Math.PI / 2],
+    [-hx, -hy, Math.PI],
+    [hx, -hy, (3 * Math.PI) / 2],
+  ];
+  const points: [number, number][] = [];
+  const normals: [number, number][] = [];
+  for (const [cx, cy, start] of corners) {
+    for (let i = 0; i <= segments; i++) {
+      if (disc && i === segments) continue;
+      const a = start + (i / segments) * (Math.PI / 2);
+      const n: [number, number] = [Math.cos(a), Math.sin(a)];
+      points.push([part.x + cx + n[0] * r, part.y + cy + n[1] * r]);
+      normals.push(n);
+    }
+  }
+  return { points, normals };
+}
+
+function writeExtrusion(w: Writer, points: readonly [number, number][], normals: readonly [number, number][], z0: number, z1: number, bottomScale = 1, centre: [number, number] = [0, 0]): void {
+  const n = points.length;
+  const bx = (i: number) => centre[0] + (points[i][0] - centre[0]) * bottomScale;
+  const by = (i: number) => centre[1] + (points[i][1] - centre[1]) * bottomScale;
+  const face: V3 = [0, 0, 0];
+  let u = 0;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    const step = Math.hypot(points[j][0] - points[i][0], points[j][1] - points[i][1]);
+    const [nix, niy] = normals[i];
+    const [njx, njy] = normals[j];
+    const base = w.count;
+    w.raw(bx(i), by(i), z0, nix, niy, 0, u * MM, z0 * MM);
+    w.raw(bx(j), by(j), z0, njx, njy, 0, (u + step) * MM, z0 * MM);
+    w.raw(points[j][0], points[j][1], z1, njx, njy, 0, (u + step) * MM, z1 * MM);
+    w.raw(points[i][0], points[i][1], z1, nix, niy, 0, u * MM, z1 * MM);
+    face[0] = (nix + njx) / 2;
+    face[1] = (niy + njy) / 2;
+    w.fan(base, 4, face);
+    u += step;
+  }
+  let base = w.count;
+  for (let i = 0; i < n; i++) w.raw(points[i][0], points[i][1], z1, 0, 0, 1, points[i][0] * MM, points[i][1] * MM);
+  w.fan(base, n, [0, 0, 1]);
+  base = w.count;
+  for (let i = 0; i < n; i++) w.raw(bx(i), by(i), z0, 0, 0, -1, bx(i) * MM, by(i) * MM);
+  w.fan(base, n, [0, 0, -1]);
+}
+
+function writeRounded(w: Writer, part: Part): void {
+  const { points, normals } = roundedOutline(part);
+  writeExtrusion(w, points, normals, part.z, part.z + part.h);
+}
+
+/** A leg's outline at its top (piece frame mm), round it. */
+export function legOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
+  const r = part.w / 2;
+  const points: [number, number][] = [];
+  const normals: [number, number][] = [];
+  for (let i = 0; i < sides; i++) {
+    const a = (i / sides) * Math.PI * 2;
+    normals.push([Math.cos(a), Math.sin(a)]);
+    points.push([part.x + Math.cos(a) * r, part.y + Math.sin(a) * r]);
+  }
+  return { points, normals };
+}
+
+function writeLeg(w: Writer, part: Part): void {
+  const { points, normals } = legOutline(part);
+  writeExtrusion(w, points, normals, part.z, part.z + part.h, part.taper ?? 1, [part.x, part.y]);
+}
+
+function writePart(w: Writer, part: Part): void {
+  if (part.shape === 'rounded') writeRounded(w, part);
+  else if (part.shape === 'leg') writeLeg(w, part);
+  else writeBox(w, part);
+}
+
+/** A piece's parts in its own frame (mm, z up), one mesh per material slot; placeForm puts them in the room. */
+export function localFormMeshes(parts: readonly Part[]): FormMeshes {
+  const writers: Record<MaterialSlot, Writer> = { main: new Writer(), accent: new Writer(), own: new Writer() };
+  const ownColours: ColourRun[] = [];
+  for (const part of parts) {
+    const writer = writers[part.slot];
+    const before = writer.count;
+    writePart(writer, part);
+    if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: writer.count - before });
+  }
+  return { main: writers.main.toMesh(), accent: writers.accent.toMesh(), own: writers.own.toMesh(), ownColours };
+}
+
+function placeMesh(mesh: MeshData, f: Frame): MeshData {
+  const n = mesh.positions.length;
+  const positions = new Float32Array(n);
+  const normals = new Float32Array(n);
+  const p = mesh.positions;
+  const q = mesh.normals;
+  const [a0, a1] = f.ax;
+  const [b0, b1] = f.ay;
+  for (let i = 0; i < n; i += 3) {
+    positions[i] = (f.cx + p[i] * a0 + p[i + 1] * b0) * MM;
+    positions[i + 1] = (f.elevation + p[i + 2]) * MM;
+    positions[i + 2] = (f.cy + p[i] * a1 + p[i + 1] * b1) * MM;
+    normals[i] = q[i] * a0 + q[i + 1] * b0;
+    normals[i + 1] = q[i + 2];
+    normals[i + 2] = q[i] * a1 + q[i + 1] * b1;
+  }
+  // uvs and triangles do not change with where the piece stands: shared, never written to.
+  return { positions, normals, uvs: mesh.uvs, indices: mesh.indices };
+}
+
+/** A piece's form in its own frame placed in the room: scene metres, y up. */
+export function placeForm(local: FormMeshes, at: Placement): FormMeshes {
+  const frame = frameOf(at);
+  return { main: placeMesh(local.main, frame), accent: placeMesh(local.accent, frame), own: placeMesh(local.own, frame), ownColours: local.ownColours };
+}
+
+/** A piece's parts placed in the room, scene metres, one mesh per material slot. */
+export function formMeshes(parts: readonly Part[], at: Placement): FormMeshes {
+  return placeForm(localFormMeshes(parts), at);
+}
+/** Triangles a form draws, over all its slots. */
+export function formTriangles(meshes: FormMeshes): number {
+  return (meshes.main.indices.length + meshes.accent.indices.length + meshes.own.indices.length) / 3;
+}
