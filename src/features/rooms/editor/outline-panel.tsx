@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { Notice } from '../../../components/ui/layout';
+import { useCommitText } from '../../../components/ui/use-commit-text';
 import type { Selection } from './plan-geometry';
 
 /** A gap smaller than this between the last corner and the first counts as closed (plan mm). */
@@ -34,9 +35,13 @@ export function parseMeasuredWall(text: string, unit: LengthUnit): { ok: true; w
   return { ok: true, wall: { lengthMm: length.mm, turn, cornerDeg } };
 }
 
-export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, onPreview, onDraw }: {
+/** Runs a command for a field: null when done, else the sentence saying why not (shown beside the field). */
+export type FieldRun = (c: Command, o?: { gesture?: string }) => string | null;
+
+export function OutlinePanel({ shell, run, commit, unit, readOnly, selection, onSelect, onPreview, onDraw }: {
   shell: RoomShell;
   run: (c: Command) => boolean;
+  commit: FieldRun;
   unit: LengthUnit;
   readOnly: boolean;
   selection: Selection;
@@ -74,8 +79,8 @@ export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, 
   return (
     <div className="flex flex-col gap-5">
       <div className="grid grid-cols-2 gap-3">
-        <LengthField commit="blur" label="Ceiling height" unit={unit} valueMm={shell.wallHeight} onChange={(v) => v && !readOnly && run(setWallHeight(v))} />
-        <LengthField commit="blur" label="Wall thickness" unit={unit} valueMm={shell.wallThickness} onChange={(v) => v && !readOnly && run(setWallThickness(v))} hint="All walls" />
+        <LengthField commit="blur" label="Ceiling height" unit={unit} valueMm={shell.wallHeight} disabled={readOnly} onChange={(v) => (v ? commit(setWallHeight(v)) : 'Enter a height.')} />
+        <LengthField commit="blur" label="Wall thickness" unit={unit} valueMm={shell.wallThickness} disabled={readOnly} onChange={(v) => (v ? commit(setWallThickness(v)) : 'Enter a thickness.')} hint="All walls" />
       </div>
       <div>
         <h3 className="mb-2 text-sm font-semibold text-ink">Walls</h3>
@@ -90,8 +95,8 @@ export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, 
                 readOnly={readOnly}
                 selected={selection?.kind === 'wall' && selection.index === w.index}
                 onFocus={() => onSelect({ kind: 'wall', index: w.index })}
-                onLength={(mm) => run(setWallLength(w.index, mm))}
-                onThickness={(mm) => run(setWallThickness(mm, w.index))}
+                onLength={(mm) => commit(setWallLength(w.index, mm))}
+                onThickness={(mm) => commit(setWallThickness(mm, w.index))}
               />
             </li>
           ))}
@@ -110,37 +115,36 @@ export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, 
 
 function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected, onFocus, onLength, onThickness }: {
   index: number; lengthMm: number; thicknessOverride: number | null; unit: LengthUnit; readOnly: boolean; selected: boolean;
-  onFocus: () => void; onLength: (mm: number) => void; onThickness: (mm: number | null) => void;
+  onFocus: () => void; onLength: (mm: number) => string | null; onThickness: (mm: number | null) => string | null;
 }) {
-  const [text, setText] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const commit = () => {
-    if (text === null) return;
-    const parsed = parseLength(text, unit);
-    if (!parsed.ok) {
-      setError(parsed.message);
-      return;
-    }
-    setError(null);
-    setText(null);
-    if (Math.abs(parsed.mm - lengthMm) > 0.05) onLength(parsed.mm);
-  };
+  const length = useCommitText<number>({
+    value: lengthMm,
+    format: (mm) => formatLength(mm, unit),
+    parse: (text) => {
+      const parsed = parseLength(text, unit);
+      if (!parsed.ok) return parsed;
+      return parsed.mm > 0 ? { ok: true, value: parsed.mm } : { ok: false, message: 'A wall needs a length above zero.' };
+    },
+    equal: (a, b) => Math.abs(a - b) <= 0.05,
+    onCommit: onLength,
+  });
+  const errorId = `wall-length-${index}-error`;
   return (
     <div className={`rounded-lg border px-3 py-2 ${selected ? 'border-pine bg-pine-wash/50' : 'border-line bg-white'}`}>
       <div className="flex items-center gap-2">
-        <label className="w-16 shrink-0 text-sm font-semibold text-ink-soft" htmlFor={`wall-length-${index}`}>Wall {index + 1}</label>
+        <label className="shrink-0 text-sm font-semibold whitespace-nowrap text-ink-soft" htmlFor={`wall-length-${index}`}>Wall {index + 1}</label>
         <input
           id={`wall-length-${index}`}
-          className={`${inputClass} h-9`}
-          value={text ?? formatLength(lengthMm, unit)}
+          className={`${inputClass} h-9 min-w-0 px-2`}
+          {...length.inputProps}
           disabled={readOnly}
           onFocus={onFocus}
-          onChange={(e) => setText(e.target.value)}
-          onBlur={commit}
-          onKeyDown={(e) => e.key === 'Enter' && commit()}
-          aria-invalid={error ? true : undefined}
+          inputMode="decimal"
+          autoComplete="off"
+          aria-invalid={length.error ? true : undefined}
+          aria-describedby={length.error ? errorId : undefined}
         />
-        <label className="flex shrink-0 items-center gap-1 text-xs text-ink-faint" title="This wall’s own thickness">
+        <label className="flex shrink-0 items-center gap-1 text-xs whitespace-nowrap text-ink-faint" title="This wall’s own thickness">
           <input
             type="checkbox"
             disabled={readOnly}
@@ -152,10 +156,10 @@ function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected,
       </div>
       {thicknessOverride !== null && (
         <div className="mt-2">
-          <LengthField commit="blur" label={`Wall ${index + 1} thickness`} unit={unit} valueMm={thicknessOverride} onChange={(v) => v && onThickness(v)} />
+          <LengthField commit="blur" label={`Wall ${index + 1} thickness`} unit={unit} valueMm={thicknessOverride} disabled={readOnly} onChange={(v) => (v ? onThickness(v) : 'Enter a thickness.')} />
         </div>
       )}
-      {error && <p className="mt-1 text-sm text-clay" role="alert">{error}</p>}
+      {length.error && <p id={errorId} className="mt-1 text-sm text-clay" role="alert">{length.error}</p>}
     </div>
   );
 }
