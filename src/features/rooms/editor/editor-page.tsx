@@ -20,7 +20,7 @@ import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
 import { OutlinePanel } from './outline-panel';
 import { PlanView } from './plan-view';
-import type { Selection } from './plan-geometry';
+import { roomCentre, type Selection } from './plan-geometry';
 import { EDITOR_STEPS, type EditorStep } from './steps';
 import { useRoomEditor, type SaveState } from './use-room-editor';
 import { refusalText } from './refusal-text';
@@ -124,6 +124,8 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
     if (t) setFinishTarget(t);
   }, []);
   const newId = useCallback((prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`, []);
+  const viewCentreRef = useRef<[number, number] | null>(null);
+  const viewCentre = useCallback((): [number, number] => viewCentreRef.current ?? roomCentre(shellRef.current), []);
   const shellRef = useRef(editor.doc.shell);
   shellRef.current = editor.doc.shell;
   const commitField = useCallback((command: Command, options?: { gesture?: string }) => {
@@ -224,13 +226,13 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
       case 'openings':
         return <OpeningsPanel shell={editor.doc.shell} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
       case 'furnish':
-        return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
+        return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} viewCentre={viewCentre} />;
       case 'finishes':
         return <FinishesPanel doc={option} optionId={activeOptionId} finishes={finishes} run={editor.run} readOnly={readOnly} selection={selection} onSelect={select} surface={finishTarget} onSurface={setFinishTarget} />;
       case 'check':
         return <CheckPanel shell={editor.doc.shell} pieces={pieces} result={fit} walkwayMm={walkwayMm} onWalkway={setWalkwayMm} unit={unit} selected={chosenFinding} onChoose={setChosenFinding} />;
     }
-  }, [step, editor.doc.shell, editor.run, commitField, unit, readOnly, selection, option, activeOptionId, pieces, newId, fit, walkwayMm, chosenFinding, finishes, finishTarget, select]);
+  }, [step, editor.doc.shell, editor.run, commitField, unit, readOnly, selection, option, activeOptionId, pieces, newId, viewCentre, fit, walkwayMm, chosenFinding, finishes, finishTarget, select]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
     const host = splitHost.current;
@@ -381,6 +383,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
                 preview={preview}
                 highlight={highlight}
                 flaggedPieceIds={flaggedPieceIds}
+                viewCentre={viewCentreRef}
               />
             </div>
           )}

@@ -12,7 +12,7 @@ import { CommitTextField } from '../../../components/ui/commit-field';
 import { numberParser, textParser, useCommitText, type Parsed } from '../../../components/ui/use-commit-text';
 import type { FieldRun } from './outline-panel';
 import { LengthField } from '../../../components/ui/length-field';
-import { roomCentre, type Selection } from './plan-geometry';
+import { placedNear, type Selection } from './plan-geometry';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
   seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', rugs: 'Rugs', other: 'Anything else',
@@ -33,7 +33,7 @@ function parseSupplierLink(text: string): Parsed<string | null> {
 /** Tall pieces can tip: at this height or more, the editor reminds the designer to fix them to the wall (common practice). */
 export const TALL_PIECE_MM = 1200;
 
-export function FurnishPanel({ shell, optionId, pieces, run, commit, unit, readOnly, selection, onSelect, newId }: {
+export function FurnishPanel({ shell, optionId, pieces, run, commit, unit, readOnly, selection, onSelect, newId, viewCentre }: {
   shell: RoomShell;
   optionId: string;
   pieces: Piece[];
@@ -44,21 +44,23 @@ export function FurnishPanel({ shell, optionId, pieces, run, commit, unit, readO
   selection: Selection;
   onSelect: (s: Selection) => void;
   newId: (prefix: string) => string;
+  /** Where added and placed pieces should land near: the middle of the plan's view of the room. */
+  viewCentre: () => [number, number];
 }) {
   const selected = selection?.kind === 'piece' ? pieces.find((p) => p.id === selection.id) : undefined;
-  if (selected) return <PieceProperties key={selected.id} piece={selected} shell={shell} optionId={optionId} run={run} commit={commit} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} />;
-  return <CatalogueList shell={shell} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} heldCount={pieces.filter((p) => !p.placed).length} />;
+  if (selected) return <PieceProperties key={selected.id} piece={selected} shell={shell} pieces={pieces} viewCentre={viewCentre} optionId={optionId} run={run} commit={commit} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} />;
+  return <CatalogueList shell={shell} pieces={pieces} viewCentre={viewCentre} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} heldCount={pieces.filter((p) => !p.placed).length} />;
 }
 
-function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, heldCount }: {
-  shell: RoomShell; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
+function CatalogueList({ shell, pieces, viewCentre, optionId, run, unit, readOnly, onSelect, newId, heldCount }: {
+  shell: RoomShell; pieces: Piece[]; viewCentre: () => [number, number]; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
   onSelect: (s: Selection) => void; newId: (prefix: string) => string; heldCount: number;
 }) {
   const [filter, setFilter] = useState('');
   const add = (kind: CatalogueKind, held: boolean) => {
     const id = newId('piece');
-    const piece = pieceFromCatalogue(kind, id, roomCentre(shell));
-    if (run(addPiece(optionId, held ? { ...piece, placed: false } : piece))) onSelect({ kind: 'piece', id });
+    const piece = pieceFromCatalogue(kind, id, viewCentre());
+    if (run(addPiece(optionId, held ? { ...piece, placed: false } : placedNear(shell, pieces, piece, viewCentre())))) onSelect({ kind: 'piece', id });
   };
   const shown = CATALOGUE.filter((e) => e.name.toLowerCase().includes(filter.trim().toLowerCase()));
   return (
@@ -111,8 +113,8 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
   );
 }
 
-function PieceProperties({ piece, shell, optionId, run, commit, unit, readOnly, onSelect, newId }: {
-  piece: Piece; shell: RoomShell; optionId: string; run: (c: Command) => boolean; commit: FieldRun; unit: LengthUnit; readOnly: boolean;
+function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, commit, unit, readOnly, onSelect, newId }: {
+  piece: Piece; shell: RoomShell; pieces: Piece[]; viewCentre: () => [number, number]; optionId: string; run: (c: Command) => boolean; commit: FieldRun; unit: LengthUnit; readOnly: boolean;
   onSelect: (s: Selection) => void; newId: (prefix: string) => string;
 }) {
   const patch = (p: Parameters<typeof updatePiece>[2]) => !readOnly && run(updatePiece(optionId, piece.id, p));
@@ -189,8 +191,8 @@ function PieceProperties({ piece, shell, optionId, run, commit, unit, readOnly, 
             <Button size="sm" onClick={() => run(holdPiece(optionId, piece.id))}>Move to the holding area</Button>
           ) : (
             <Button size="sm" onClick={() => {
-              const at = roomCentre(shell);
-              run(placePiece(optionId, piece.id, at[0], at[1]));
+              const at = placedNear(shell, pieces, piece, viewCentre());
+              run(placePiece(optionId, piece.id, at.x, at.y));
             }}>Place in the room</Button>
           )}
           <Button size="sm" variant="danger" onClick={() => run(removePiece(optionId, piece.id)) && onSelect(null)}>Remove</Button>
