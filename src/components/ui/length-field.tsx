@@ -58,7 +58,8 @@ function FormLengthField({ label, valueMm, onChange, unit = 'cm', error, hint, c
     setText((t) => {
       const parsed = parseLength(t, unit, { allowNegative });
       if (!unitChanged && parsed.ok && valueMm !== null && Math.abs(parsed.mm - valueMm) < 0.5) return t;
-      if (valueMm === null) return unitChanged ? t : '';
+      // A text that does not read as a length stays as typed, marked, rather than wiped.
+      if (valueMm === null) return unitChanged || (t.trim() !== '' && !parsed.ok) ? t : '';
       return formatLength(valueMm, unit);
     });
   }, [valueMm, unit, allowNegative]);

@@ -164,12 +164,13 @@ function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected,
   );
 }
 
-function MeasureWalls({ walls, unit, onChange, onCancel, onUse }: {
+export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus = true }: {
   walls: MeasuredWall[];
   unit: LengthUnit;
   onChange: (w: MeasuredWall[]) => void;
   onCancel: () => void;
   onUse: (command: Command) => void;
+  autoFocus?: boolean;
 }) {
   const [entry, setEntry] = useState('');
   const [error, setError] = useState<string | null>(null);
@@ -216,7 +217,7 @@ function MeasureWalls({ walls, unit, onChange, onCancel, onUse }: {
       </ol>
       <div>
         <label htmlFor="next-wall" className="text-sm font-semibold">Wall {walls.length + 1}</label>
-        <input id="next-wall" className={`${inputClass} mt-1`} placeholder="e.g. 420, or 350 l 135" value={entry} onChange={(e) => setEntry(e.target.value)} onKeyDown={add} autoFocus aria-invalid={error ? true : undefined} />
+        <input id="next-wall" className={`${inputClass} mt-1`} placeholder="e.g. 420, or 350 l 135" value={entry} onChange={(e) => setEntry(e.target.value)} onKeyDown={add} autoFocus={autoFocus} aria-invalid={error ? true : undefined} />
         {error && <p className="mt-1 text-sm text-clay" role="alert">{error}</p>}
       </div>
       {walls.length >= 3 && (gap < CLOSED_GAP_MM ? (
