@@ -200,18 +200,24 @@ export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus
       </p>
       <ol className="flex flex-col gap-1.5">
         {walls.map((w, i) => (
-          <li key={i} className="flex items-center gap-2 rounded-lg border border-line bg-white px-2 py-1.5 text-sm">
-            <span className="w-14 shrink-0 font-semibold text-ink-soft">Wall {i + 1}</span>
-            <span className="w-20 shrink-0 tabular-nums">{formatLength(w.lengthMm, unit)}</span>
-            <label className="sr-only" htmlFor={`turn-${i}`}>Turn after wall {i + 1}</label>
-            <select id={`turn-${i}`} className={`${inputClass} h-8 w-auto px-1 text-sm`} value={w.turn} onChange={(e) => update(i, { turn: e.target.value as MeasuredWall['turn'] })}>
-              <option value="right">then right</option>
-              <option value="left">then left</option>
-            </select>
-            <label className="sr-only" htmlFor={`corner-${i}`}>Corner angle after wall {i + 1}</label>
-            <input id={`corner-${i}`} className={`${inputClass} h-8 w-16 px-2 text-sm`} inputMode="decimal" value={w.cornerDeg} onChange={(e) => Number(e.target.value) > 0 && Number(e.target.value) < 180 && update(i, { cornerDeg: Number(e.target.value) })} />
-            <span className="text-ink-faint">°</span>
-            <button type="button" className="ml-auto rounded px-1.5 text-ink-faint hover:bg-sand hover:text-clay" aria-label={`Remove wall ${i + 1}`} onClick={() => onChange(walls.filter((_, j) => j !== i))}>×</button>
+          <li key={i} className="flex flex-col gap-1.5 rounded-lg border border-line bg-white px-2 py-1.5 text-sm">
+            <div className="flex items-center gap-2">
+              <span className="shrink-0 font-semibold whitespace-nowrap text-ink-soft">Wall {i + 1}</span>
+              <span className="min-w-0 flex-1 whitespace-nowrap tabular-nums">{formatLength(w.lengthMm, unit)}</span>
+              <button type="button" className="rounded px-1.5 text-ink-faint hover:bg-sand hover:text-clay" aria-label={`Remove wall ${i + 1}`} onClick={() => onChange(walls.filter((_, j) => j !== i))}>×</button>
+            </div>
+            <div className="flex items-center gap-2">
+              <label className="sr-only" htmlFor={`turn-${i}`}>Turn after wall {i + 1}</label>
+              <select id={`turn-${i}`} className={`${inputClass} h-8 min-w-0 px-2 text-sm`} value={w.turn} onChange={(e) => update(i, { turn: e.target.value as MeasuredWall['turn'] })}>
+                <option value="right">then right</option>
+                <option value="left">then left</option>
+              </select>
+              <label className="sr-only" htmlFor={`corner-${i}`}>Corner angle after wall {i + 1}</label>
+              <span className="w-16 shrink-0">
+                <input id={`corner-${i}`} className={`${inputClass} h-8 px-2 text-sm`} inputMode="decimal" value={w.cornerDeg} onChange={(e) => Number(e.target.value) > 0 && Number(e.target.value) < 180 && update(i, { cornerDeg: Number(e.target.value) })} />
+              </span>
+              <span className="text-ink-faint">°</span>
+            </div>
           </li>
         ))}
       </ol>
