@@ -12,7 +12,8 @@ import type { LengthUnit } from '../../../../shared/units/length';
 import { MeasureWalls, type MeasuredWall } from '../editor/outline-panel';
 import { formatRelative } from '../../../lib/format';
 import { useCanEdit } from '../../../lib/session';
-import { useCreateRoom, useImportPlan, useRooms } from '../api/rooms';
+import { useCreateRoom, useDeleteRoom, useImportPlan, useRoom, useRooms } from '../api/rooms';
+import { optionLabel } from '../../../../shared/schemas/room-api';
 
 /** The rooms of one project, with adding by size and importing a plan file. */
 export function RoomList({ projectId }: { projectId: string }) {
@@ -23,6 +24,7 @@ export function RoomList({ projectId }: { projectId: string }) {
   const fileInput = useRef<HTMLInputElement>(null);
   const navigate = useNavigate();
   const [badFile, setBadFile] = useState<string | null>(null);
+  const [deleting, setDeleting] = useState<{ id: string; name: string } | null>(null);
 
   const onFile = async (file: File | undefined) => {
     if (!file) return;
@@ -59,19 +61,50 @@ export function RoomList({ projectId }: { projectId: string }) {
       ) : (
         <ul className="grid gap-3 sm:grid-cols-2">
           {rooms.data.rooms.map((r) => (
-            <li key={r.id}>
-              <Link to={`/projects/${projectId}/rooms/${r.id}`} className="block rounded-xl border border-line p-4 transition-colors hover:border-pine hover:bg-pine-wash/40">
+            <li key={r.id} className="relative">
+              <Link to={`/projects/${projectId}/rooms/${r.id}`} className="block rounded-xl border border-line p-4 pr-24 transition-colors hover:border-pine hover:bg-pine-wash/40">
                 <div className="font-semibold">{r.name}</div>
                 <div className="mt-1 text-sm text-ink-soft">
                   {r.floorAreaM2.toFixed(1)} m² · {r.optionCount} option{r.optionCount === 1 ? '' : 's'} · changed {formatRelative(r.updatedAt)}
                 </div>
               </Link>
+              {canEdit && (
+                <Button size="sm" variant="quiet" className="absolute top-3 right-3" aria-label={`Delete ${r.name}`} onClick={() => setDeleting({ id: r.id, name: r.name })}>Delete</Button>
+              )}
             </li>
           ))}
         </ul>
       )}
+      {deleting && <DeleteRoomDialog roomId={deleting.id} name={deleting.name} onClose={() => setDeleting(null)} />}
       {adding && <AddRoomDialog projectId={projectId} onClose={() => setAdding(false)} onImport={() => { setAdding(false); fileInput.current?.click(); }} />}
     </div>
+  );
+}
+
+/** Asks before a room goes, naming the options that go with it; a refusal (a presentation still shows it) is shown as the server words it. */
+function DeleteRoomDialog({ roomId, name, onClose }: { roomId: string; name: string; onClose: () => void }) {
+  const detail = useRoom(roomId);
+  const remove = useDeleteRoom(roomId);
+  const options = detail.data?.options.map((o) => optionLabel(o.position, o.name)) ?? [];
+  return (
+    <Dialog
+      open
+      onClose={onClose}
+      title={`Delete ${name}?`}
+      footer={
+        <>
+          <Button variant="quiet" onClick={onClose}>Keep it</Button>
+          <Button variant="danger" busy={remove.isPending} disabled={detail.isPending} onClick={() => remove.mutate(undefined, { onSuccess: onClose })}>Delete room</Button>
+        </>
+      }
+    >
+      {detail.isPending ? <Spinner /> : (
+        <p className="text-ink-soft">
+          Its walls, openings and {options.length === 1 ? 'its one option' : `all ${options.length} options`} go with it: <strong className="text-ink">{options.join(', ')}</strong>. This cannot be undone.
+        </p>
+      )}
+      {remove.isError && <div className="mt-4"><Notice tone="error">{errorMessage(remove.error)}</Notice></div>}
+    </Dialog>
   );
 }
 
