@@ -37,8 +37,13 @@ describe('where added pieces land', () => {
       await page.getByRole('button', { name: `Add ${name}`, exact: true }).first().click();
       await page.getByRole('button', { name: '← Catalogue' }).click();
     }
-    // The eighth waits in the holding area first, then is placed in the room.
-    await page.getByRole('button', { name: 'Put a Armchair in the holding area' }).click();
+    // The eighth waits in the holding area first, then is placed in the room; the plan keeps its scale.
+    const plan = page.getByTestId('plan');
+    const scaleBefore = await plan.getAttribute('viewBox');
+    // A piece wider than the holding area widens it.
+    await page.getByRole('button', { name: 'Put a Desk in the holding area' }).click();
+    await page.getByText('In the holding area', { exact: true }).waitFor();
+    expect(await plan.getAttribute('viewBox')).toBe(scaleBefore);
     await page.getByRole('button', { name: 'Place in the room' }).click();
     await page.getByText('In the room', { exact: true }).waitFor();
     await page.locator('[data-testid=save-state][data-state=saved]').waitFor({ timeout: 15000 });

@@ -70,18 +70,20 @@ export function PlanView(props: Props) {
   const [pointer, setPointer] = useState<[number, number] | null>(null);
   const fitted = useRef(false);
 
-  // Fit the view to the room when it first appears and when the outline grows past the view.
+  // Fit the view to the room when it first appears and when the outline grows past the view. Only
+  // the room counts: pieces joining the holding area never change the plan's scale.
   useEffect(() => {
     const vb = layout.viewBox;
+    const rb = layout.roomBounds;
     setView((v) => {
       if (!fitted.current) {
         fitted.current = true;
         return vb;
       }
-      const outside = vb.x < v.x || vb.y < v.y || vb.x + vb.w > v.x + v.w || vb.y + vb.h > v.y + v.h;
+      const outside = rb.minX < v.x || rb.minY < v.y || rb.maxX > v.x + v.w || rb.maxY > v.y + v.h;
       return outside ? vb : v;
     });
-  }, [layout.viewBox]);
+  }, [layout.viewBox, layout.roomBounds]);
 
   useEffect(() => {
     if (!props.drawing) setDraft([]);
