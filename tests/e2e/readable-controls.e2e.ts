@@ -67,6 +67,9 @@ describe('controls are readable', () => {
         await page.getByLabel('Units').selectOption(unit);
         const at = `${width}×${height} ${unit}`;
         await page.getByRole('button', { name: /Outline/ }).click();
+        // Every length in the panel follows the unit: 2600 mm = 8' 6 3/8", 100 mm = 3 7/8".
+        expect(await page.getByLabel('Ceiling height').inputValue()).toBe(unit === 'cm' ? '260 cm' : '8\' 6 3/8"');
+        expect(await page.getByLabel('Wall thickness').inputValue()).toBe(unit === 'cm' ? '10 cm' : '3 7/8"');
         problems.push(...(await clipped(page, `${at} Outline`)));
         await page.getByRole('button', { name: 'Type the walls afresh' }).click();
         for (const wall of ['20\' 4 1/8"', '248.9cm l 135', '600']) {
