@@ -34,7 +34,7 @@ export type CommandName =
 export type RunResult = { ok: true; doc: EditorDoc } | { ok: false; reason: string };
 
 /** What applying a command gives: the new document, or a sentence for the designer saying why not. */
-export type CommandResult = { ok: true; doc: EditorDoc } | { ok: false; message: string };
+export type CommandResult = { ok: true; doc: EditorDoc } | { ok: false; message: string; problems?: FieldProblem[] };
 
 /**
  * A named, pure change to an editor document with its arguments bound. `label` names it for the
@@ -135,13 +135,13 @@ function lowerFirst(text: string): string {
  */
 export function apply(doc: EditorDoc, command: Command): CommandResult {
   const result = command.run(doc);
-  const refusal = (reason: string): CommandResult => ({ ok: false, message: `Can't ${lowerFirst(command.label(doc))}: ${reason}.` });
+  const refusal = (reason: string, problems?: FieldProblem[]): CommandResult => ({ ok: false, message: `Can't ${lowerFirst(command.label(doc))}: ${reason}.`, problems });
   if (!result.ok) return refusal(result.reason);
   if (result.doc.shell !== doc.shell) {
     const problems = newShellProblems(doc.shell, result.doc.shell);
     if (problems.length > 0) {
       const more = problems.length > 1 ? ` (and ${problems.length - 1} more)` : '';
-      return refusal(`${describeProblem(result.doc.shell, problems[0])}${more}`);
+      return refusal(`${describeProblem(result.doc.shell, problems[0])}${more}`, problems);
     }
   }
   return { ok: true, doc: result.doc };

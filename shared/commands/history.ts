@@ -8,6 +8,7 @@
 // new step.
 import { apply, type Command, type CommandName } from './command';
 import type { EditorDoc } from './editor-doc';
+import type { FieldProblem } from '../geometry/validate';
 import { applyPatches, diffDocs, type Patch } from './patch';
 
 /** Steps kept for undo; older ones are forgotten (bounded memory on a long session). */
@@ -44,7 +45,7 @@ export interface ApplyOptions {
 }
 
 /** The history after an apply: changed on success; the same history, and the designer's sentence, on refusal. */
-export type HistoryResult = { ok: true; history: History } | { ok: false; message: string; history: History };
+export type HistoryResult = { ok: true; history: History } | { ok: false; message: string; problems?: FieldProblem[]; history: History };
 
 /** A history with nothing to undo or redo. */
 export function createHistory(doc: EditorDoc, options: HistoryOptions = {}): History {
@@ -59,7 +60,7 @@ function keepLast(steps: readonly HistoryStep[], limit: number): readonly Histor
 /** Applies a command and records it: a new undo step, or folded into the open step of the same gesture. Clears redo. */
 export function applyToHistory(history: History, command: Command, options: ApplyOptions = {}): HistoryResult {
   const result = apply(history.doc, command);
-  if (!result.ok) return { ok: false, message: result.message, history };
+  if (!result.ok) return { ok: false, message: result.message, problems: result.problems, history };
   const gesture = options.gesture ?? null;
   const last = history.undoSteps[history.undoSteps.length - 1];
   const joins = gesture !== null && history.openGesture === gesture && last !== undefined && last.gesture === gesture;

@@ -40,6 +40,7 @@ export {
 export { applyPatches, diffDocs, type Patch, type PathKey, type Slot } from './patch';
 export { mergeOptionDoc, mergeShell } from './merge';
 export { normaliseRotationDeg, pieceAxes, pieceBoundsMm, pieceFootprintMm, type PiecePose, type PlanBounds } from './piece-geometry';
+export { findPlacement, boxInsideOutline, boxesOverlap, PLACEMENT_STEP_MM, type PlacementRequest } from './placement';
 export {
   nudge,
   snapAngle,

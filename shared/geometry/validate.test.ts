@@ -5,7 +5,12 @@ import { starOutline } from './test-outlines';
 
 function problems(input: Partial<RoomShellInput>) {
   const shell = roomShellSchema.parse({ outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]], ...input });
-  return validateRoomShell(shell, 'room');
+  return worded(validateRoomShell(shell, 'room'));
+}
+
+/** The plan-file wording alone (path and message), as the readers print it. */
+function worded(list: ReturnType<typeof validateRoomShell>) {
+  return list.map(({ path, message }) => ({ path, message }));
 }
 
 describe('validateRoomShell', () => {
@@ -15,7 +20,7 @@ describe('validateRoomShell', () => {
 
   it('refuses fewer than 3 corners', () => {
     const shell = { ...roomShellSchema.parse({ outline: [[0, 0], [1, 0], [1, 1]] }), outline: [[0, 0], [1000, 0]] as [number, number][] };
-    expect(validateRoomShell(shell)).toEqual([{ path: 'outline', message: 'needs at least 3 corners (has 2)' }]);
+    expect(worded(validateRoomShell(shell))).toEqual([{ path: 'outline', message: 'needs at least 3 corners (has 2)' }]);
   });
 
   it('refuses a zero-length wall and names the repeated corner', () => {
@@ -84,5 +89,20 @@ describe('validateRoomShell', () => {
 
   it('refuses more thickness overrides than walls', () => {
     expect(problems({ wallThicknesses: [100, 100, 100, 100, 100] })[0].path).toBe('room.wallThicknesses');
+  });
+
+  it('carries each problem’s facts as values for screens that word them in their own unit', () => {
+    const shell = roomShellSchema.parse({
+      outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]],
+      wallHeight: 2400,
+      openings: [
+        { id: 'w1', type: 'window', wall: 1, offset: 500, width: 1000, height: 1300, sill: 1500 },
+        { id: 'd1', type: 'door', wall: 2, offset: 2500, width: 800, height: 2000, hinge: 'start', swing: 'in' },
+      ],
+    });
+    const [head, end] = validateRoomShell(shell);
+    expect(head).toMatchObject({ rule: 'window-above-ceiling', field: 'height', opening: 0, wall: 1, sillMm: 1500, heightMm: 1300, valueMm: 2800, limitMm: 2400 });
+    // 3000 mm wall less the 50 mm corner margin less the 800 mm door: the offset may be at most 2150 mm.
+    expect(end).toMatchObject({ rule: 'opening-past-end', field: 'offset', opening: 1, wall: 2, valueMm: 2500, limitMm: 2150 });
   });
 });

@@ -133,6 +133,8 @@ describe('designer makes and sends a presentation', () => {
     expect(mail.subject).toBe('Marrow & Finch: your options for Larkspur flat');
     expect(mail.text).toContain(p.link);
     expect(mail.text).toContain('Here are the two rooms. Take your time.');
+    // The designer's message is the greeting: nothing is put above it.
+    expect(mail.text.startsWith('Here are the two rooms.')).toBe(true);
     expect(mail.html).toContain('Marrow &amp; Finch');
   });
 
@@ -376,7 +378,7 @@ describe('choices', () => {
     expect(first.body).toMatchObject({ changed: true, choice: { optionId: room.options[0].id, comment: 'Love the linen.' } });
     const notice = t.mail.slice(before);
     expect(notice.map((m) => m.to)).toEqual([designerEmail]);
-    expect(notice[0].subject).toBe('Choice for Sitting room: Option B');
+    expect(notice[0].subject).toBe('Ada and Rui Penhale chose Option B for Sitting room (Larkspur flat)');
     expect(notice[0].text).toContain('Ada and Rui Penhale chose Option B for Sitting room in Larkspur flat.');
     expect(notice[0].text).toContain('Love the linen.');
     expect(notice[0].text).toContain(`/projects/${flat.projectId}`);

@@ -32,6 +32,21 @@ describe('rooms', () => {
     expect(page.body.project.roomCount).toBe(1);
   });
 
+  it('a room’s "changed" time counts edits to its options too', async () => {
+    const { agent } = await signUpStudio(t.app);
+    const projectId = await projectOf(agent);
+    const created = await agent.post(`/api/projects/${projectId}/rooms`).send({ name: 'Den', shell: RECT });
+    const before = (await agent.get(`/api/projects/${projectId}/rooms`)).body.rooms[0].updatedAt as string;
+    await new Promise((r) => setTimeout(r, 20));
+    const option = created.body.options[0];
+    const pieces = [{ id: 'p1', name: 'Chair', x: 1000, y: 1000, width: 800, depth: 800, height: 800, rotation: 0, elevation: 0, status: 'new', price: null, placed: true }];
+    const saved = await agent.put(`/api/options/${option.id}`).send({ version: option.version, doc: { ...option.doc, pieces } });
+    expect(saved.status).toBe(200);
+    const after = (await agent.get(`/api/projects/${projectId}/rooms`)).body.rooms[0].updatedAt as string;
+    expect(Date.parse(after)).toBeGreaterThan(Date.parse(before));
+    expect(after).toBe(saved.body.option.updatedAt);
+  });
+
   it('refuses shells that cannot be drawn, naming the field', async () => {
     const { agent } = await signUpStudio(t.app);
     const projectId = await projectOf(agent);

@@ -102,8 +102,11 @@ describe('the room editor', () => {
     await expect.poll(() => piece(page, 'Armchair').count()).toBe(1);
     await saved(page);
 
-    // Everything is there after a reload.
+    // Everything is there after a reload, which reopens the step and option the designer was on.
     await page.reload();
+    await page.getByRole('button', { name: /Furnish/ }).and(page.locator('[aria-current=step]')).waitFor();
+    await page.getByRole('tab', { name: 'Option A', selected: true }).waitFor();
+    await page.getByRole('button', { name: /Outline/ }).click();
     await page.getByLabel('Wall 7', { exact: true }).waitFor();
     await page.getByRole('button', { name: /Openings/ }).click();
     await expect.poll(() => page.locator('[data-testid^=opening-]').count()).toBe(2);

@@ -221,6 +221,8 @@ describe('presentations', () => {
     await page.goto('/p/eyJhbGciOiJub25lIn0.eyJqdGkiOiJ4In0.');
     await page.getByRole('heading', { name: 'This link does not work' }).waitFor();
     expect(await page.getByText(/ask your designer for a new one/).isVisible()).toBe(true);
+    // The title is not repeated as the first sentence.
+    expect(await page.getByText('This link does not work').count()).toBe(1);
     await context.close();
   });
 });

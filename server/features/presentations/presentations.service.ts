@@ -244,14 +244,14 @@ export const dateText = (d: Date) => new Intl.DateTimeFormat('en-GB', { day: 'nu
 /** The client's e-mail with the link. */
 export function invitationMail(v: { to: string; studio: string; project: string; clientName: string; message: string; link: string; expiresAt: Date }) {
   const until = dateText(v.expiresAt);
-  const message = v.message ? `${v.message}\n\n` : '';
+  // The designer's own message carries their greeting; only without one does the mail greet for them.
+  const message = v.message ? `${v.message}\n\n` : `Hello ${v.clientName},\n\n`;
   return {
     to: v.to,
     subject: `${v.studio}: your options for ${v.project}`,
-    text: `Hello ${v.clientName},\n\n${message}Walk round each option in 3D and choose one per room:\n${v.link}\n\nThe link works until ${until}. No account or password is needed.\n\n${v.studio}`,
+    text: `${message}Walk round each option in 3D and choose one per room:\n${v.link}\n\nThe link works until ${until}. No account or password is needed.\n\n${v.studio}`,
     html:
-      `<p>Hello ${escapeHtml(v.clientName)},</p>` +
-      (v.message ? `<p style="white-space:pre-wrap">${escapeHtml(v.message)}</p>` : '') +
+      (v.message ? `<p style="white-space:pre-wrap">${escapeHtml(v.message)}</p>` : `<p>Hello ${escapeHtml(v.clientName)},</p>`) +
       `<p><a href="${escapeHtml(v.link)}">Walk round each option in 3D and choose one per room</a></p>` +
       `<p>The link works until ${until}. No account or password is needed.</p><p>${escapeHtml(v.studio)}</p>`,
   };
@@ -262,7 +262,7 @@ export function choiceMail(v: { to: string; clientName: string; project: string;
   const comment = v.comment ? `\n\nTheir comment: “${v.comment}”` : '';
   return {
     to: v.to,
-    subject: `Choice for ${v.room}: ${v.option}`,
+    subject: `${v.clientName} chose ${v.option} for ${v.room} (${v.project})`,
     text: `${v.clientName} chose ${v.option} for ${v.room} in ${v.project}.${comment}\n\nSee the choices on the project: ${v.projectLink}`,
     html:
       `<p>${escapeHtml(v.clientName)} chose <strong>${escapeHtml(v.option)}</strong> for ${escapeHtml(v.room)} in ${escapeHtml(v.project)}.</p>` +

@@ -40,6 +40,8 @@ export async function listRooms(db: Db, studioId: string, projectId: string) {
     .selectFrom('rooms')
     .select([...ROOM_COLUMNS])
     .select((eb) => eb.selectFrom('options').whereRef('options.room_id', '=', 'rooms.id').select(eb.fn.countAll<number>().as('n')).as('option_count'))
+    // A piece moved or an option renamed is a change to the room as the designer sees it.
+    .select((eb) => eb.selectFrom('options').whereRef('options.room_id', '=', 'rooms.id').select((sub) => sub.fn.max('options.updated_at').as('t')).as('options_updated_at'))
     .where('studio_id', '=', studioId)
     .where('project_id', '=', projectId)
     .orderBy('position')

@@ -21,6 +21,13 @@ export function assertDrawableShell(shell: RoomShell, prefix = 'shell'): void {
   }
 }
 
+/** The later of the room's own change and its options' (an ISO time). */
+function latest(roomIso: string, options: Date | string | null): string {
+  if (options === null) return roomIso;
+  const t = new Date(options);
+  return t.getTime() > Date.parse(roomIso) ? t.toISOString() : roomIso;
+}
+
 /** Rooms of a project with their option count and floor area, for the project page. */
 export async function roomSummaries(db: Db, studioId: string, projectId: string): Promise<RoomSummary[]> {
   const rows = await listRooms(db, studioId, projectId);
@@ -32,7 +39,7 @@ export async function roomSummaries(db: Db, studioId: string, projectId: string)
       position: room.position,
       optionCount: Number(r.option_count),
       floorAreaM2: computeTakeoff(room.shell).floorArea_m2,
-      updatedAt: room.updatedAt,
+      updatedAt: latest(room.updatedAt, r.options_updated_at),
     };
   });
 }

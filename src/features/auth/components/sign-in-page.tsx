@@ -5,6 +5,7 @@ import { TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/layout';
 import { ApiError, fieldError } from '../../../lib/api';
 import { useSignIn } from '../api/session';
+import { safeNextPath } from '../../../lib/next-path';
 import { AuthFrame } from './auth-frame';
 
 export function SignInPage() {
@@ -16,7 +17,7 @@ export function SignInPage() {
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    signIn.mutate({ email, password }, { onSuccess: () => navigate(params.get('next') ?? '/projects', { replace: true }) });
+    signIn.mutate({ email, password }, { onSuccess: () => navigate(safeNextPath(params.get('next')), { replace: true }) });
   };
   const err = signIn.error;
   const general = err instanceof ApiError && Object.keys(err.fields).length === 0 ? err.message : null;

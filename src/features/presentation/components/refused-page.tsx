@@ -6,7 +6,9 @@ export function RefusedPage({ error, onRetry }: { error: unknown; onRetry: () =>
   const status = error instanceof ApiError ? error.status : 0;
   const refused = status === 404 || status === 410;
   const title = status === 410 ? 'This link is closed' : status === 404 ? 'This link does not work' : 'The page could not load';
-  const message = error instanceof ApiError ? error.message : 'Something went wrong. Please try again.';
+  const said = error instanceof ApiError ? error.message : 'Something went wrong. Please try again.';
+  // The heading already says what the server's first sentence says; the page goes on from there.
+  const message = withoutRepeatedTitle(said, title);
   return (
     <main className="flex min-h-screen items-center justify-center px-6">
       <div className="max-w-md rounded-2xl border border-line bg-white p-8 text-center">
@@ -20,4 +22,11 @@ export function RefusedPage({ error, onRetry }: { error: unknown; onRetry: () =>
       </div>
     </main>
   );
+}
+
+/** The message without a first sentence that repeats the title ("This link does not work. Check…" → "Check…"). */
+export function withoutRepeatedTitle(message: string, title: string): string {
+  if (!message.toLowerCase().startsWith(title.toLowerCase())) return message;
+  const rest = message.slice(message.indexOf('.') + 1).trim();
+  return rest === '' ? message : rest;
 }

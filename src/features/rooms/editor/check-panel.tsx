@@ -1,8 +1,8 @@
 import type { Finding } from '../../../../shared/analysis/takeoff';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
-import { formatLength, parseLength, type LengthUnit } from '../../../../shared/units/length';
-import { inputClass } from '../../../components/ui/field';
+import { formatLength, type LengthUnit } from '../../../../shared/units/length';
+import { LengthField } from '../../../components/ui/length-field';
 import { Notice, Spinner } from '../../../components/ui/layout';
 import { TakeoffTable } from '../components/takeoff-table';
 import { TALL_PIECE_MM } from './furnish-panel';
@@ -18,6 +18,10 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   'too-big-for-door': 'Too big for the doors',
 };
 
+/** The walkway widths the check accepts: narrower is not a route, wider is not a walkway. */
+const MIN_WALKWAY_MM = 300;
+const MAX_WALKWAY_MM = 2000;
+
 export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, selected, onChoose }: {
   shell: RoomShell;
   pieces: Piece[];
@@ -31,23 +35,19 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
   const tall = pieces.filter((p) => p.placed && p.height >= TALL_PIECE_MM);
   return (
     <div className="flex flex-col gap-5">
-      <label className="flex items-center justify-between gap-3 text-sm font-semibold">
-        Walkway width
-        <input
-          className={`${inputClass} h-9 w-28`}
-          defaultValue={formatLength(walkwayMm, unit)}
-          onBlur={(e) => {
-            const parsed = parseLength(e.target.value, unit);
-            if (parsed.ok && parsed.mm >= 300 && parsed.mm <= 2000) onWalkway(parsed.mm);
-            else e.target.value = formatLength(walkwayMm, unit);
-          }}
-          onKeyDown={(e) => e.key === 'Enter' && (e.target as HTMLInputElement).blur()}
-          aria-describedby="walkway-hint"
-        />
-      </label>
-      <p id="walkway-hint" className="-mt-3 text-xs text-ink-faint">
-        90 cm is common practice for a main route (36 in in US codes: IRC R311.6, ADA §403.5.1). Beds, dining chairs and coffee tables need less, from published guidance.
-      </p>
+      <LengthField
+        commit="blur"
+        label="Walkway width"
+        unit={unit}
+        valueMm={walkwayMm}
+        onChange={(mm) => {
+          if (mm === null) return 'Enter a width.';
+          if (mm < MIN_WALKWAY_MM || mm > MAX_WALKWAY_MM) return `Between ${formatLength(MIN_WALKWAY_MM, unit)} and ${formatLength(MAX_WALKWAY_MM, unit)}.`;
+          onWalkway(mm);
+          return null;
+        }}
+        hint={`${formatLength(900, unit)} is common practice for a main route (36 in in US codes: IRC R311.6, ADA §403.5.1). Beds, dining chairs and coffee tables need less, from published guidance.`}
+      />
 
       {/* Announced politely and kept small: while a piece moves the list below is the last layout's. */}
       <p role="status" aria-live="polite" data-testid="fit-status" data-state={!result || result.pending ? 'checking' : 'checked'} data-check-ms={result ? Math.round(result.ms) : undefined} className="-mb-3 h-4 text-xs text-ink-faint">

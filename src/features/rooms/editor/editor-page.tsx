@@ -1,6 +1,6 @@
 import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent as ReactKeyboardEvent } from 'react';
 import { Link } from 'react-router';
-import { holdPiece, movePiece, NUDGE_LARGE_STEP_MM, NUDGE_STEP_MM, removeOpening, removePiece, rotatePiece, updateOpening } from '../../../../shared/commands';
+import { holdPiece, movePiece, type Command, NUDGE_LARGE_STEP_MM, NUDGE_STEP_MM, removeOpening, removePiece, rotatePiece, updateOpening } from '../../../../shared/commands';
 import type { LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
@@ -20,11 +20,41 @@ import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
 import { OutlinePanel } from './outline-panel';
 import { PlanView } from './plan-view';
-import type { Selection } from './plan-geometry';
+import { roomCentre, type Selection } from './plan-geometry';
 import { EDITOR_STEPS, type EditorStep } from './steps';
 import { useRoomEditor, type SaveState } from './use-room-editor';
+import { refusalText } from './refusal-text';
 
 const RoomView = lazy(() => import('../../../scene/room-view'));
+
+interface EditorPlace {
+  step: EditorStep;
+  optionId: string;
+  walkwayMm: number;
+}
+const placeKey = (roomId: string) => `parlour:editor-place:${roomId}`;
+
+function readPlace(roomId: string): Partial<EditorPlace> | null {
+  try {
+    const raw = JSON.parse(localStorage.getItem(placeKey(roomId)) ?? 'null') as Partial<EditorPlace> | null;
+    if (!raw || typeof raw !== 'object') return null;
+    return {
+      step: EDITOR_STEPS.some((s) => s.id === raw.step) ? raw.step : undefined,
+      optionId: typeof raw.optionId === 'string' ? raw.optionId : undefined,
+      walkwayMm: typeof raw.walkwayMm === 'number' && raw.walkwayMm >= 300 && raw.walkwayMm <= 2000 ? raw.walkwayMm : undefined,
+    };
+  } catch {
+    return null;
+  }
+}
+
+function writePlace(roomId: string, place: EditorPlace) {
+  try {
+    localStorage.setItem(placeKey(roomId), JSON.stringify(place));
+  } catch {
+    // Blocked storage only costs reopening on the same step.
+  }
+}
 
 const UNIT_KEY = 'parlour:length-unit';
 type Layout = 'both' | 'plan' | '3d';
@@ -56,8 +86,9 @@ const SAVE_TEXT: Record<SaveState, string> = {
 
 function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; detail: RoomDetail; readOnly: boolean; finishes: Finish[] }) {
   const editor = useRoomEditor(detail, readOnly);
-  const [step, setStep] = useState<EditorStep>(readOnly ? 'furnish' : 'outline');
-  const [optionId, setOptionId] = useState(detail.options[0]?.id ?? '');
+  const [place] = useState(() => readPlace(detail.room.id));
+  const [step, setStep] = useState<EditorStep>(place?.step ?? (readOnly ? 'furnish' : 'outline'));
+  const [optionId, setOptionId] = useState(place?.optionId && detail.options.some((o) => o.id === place.optionId) ? place.optionId : detail.options[0]?.id ?? '');
   const [selection, setSelection] = useState<Selection>(null);
   // Side by side needs room; on a tablet the plan starts alone and the 3D is one tap away.
   const [layout, setLayout] = useState<Layout>(() => (window.innerWidth >= WIDE_ENOUGH_FOR_BOTH_PX ? 'both' : 'plan'));
@@ -68,7 +99,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
   const [help, setHelp] = useState(false);
   const [renaming, setRenaming] = useState(false);
   const splitHost = useRef<HTMLDivElement>(null);
-  const [walkwayMm, setWalkwayMm] = useState(DEFAULT_WALKWAY_MM);
+  const [walkwayMm, setWalkwayMm] = useState(place?.walkwayMm ?? DEFAULT_WALKWAY_MM);
   const [chosenFinding, setChosenFinding] = useState<number | null>(null);
   const [finishTarget, setFinishTarget] = useState<'floor' | 'ceiling' | 'walls' | 'wall' | 'piece'>('floor');
 
@@ -93,8 +124,18 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
     if (t) setFinishTarget(t);
   }, []);
   const newId = useCallback((prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`, []);
+  const viewCentreRef = useRef<[number, number] | null>(null);
+  const viewCentre = useCallback((): [number, number] => viewCentreRef.current ?? roomCentre(shellRef.current), []);
+  const shellRef = useRef(editor.doc.shell);
+  shellRef.current = editor.doc.shell;
+  const commitField = useCallback((command: Command, options?: { gesture?: string }) => {
+    const failure = editor.attempt(command, options);
+    return failure ? refusalText(failure, shellRef.current, unit) : null;
+  }, [editor.attempt, unit]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useEffect(() => localStorage.setItem(UNIT_KEY, unit), [unit]);
+  // A reload reopens the step and option the designer was on (and the walkway they checked with).
+  useEffect(() => writePlace(detail.room.id, { step, optionId, walkwayMm }), [detail.room.id, step, optionId, walkwayMm]);
 
   // Keys for the whole editor, unless the designer is typing in a field.
   useEffect(() => {
@@ -181,17 +222,17 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
     if (!option) return null;
     switch (step) {
       case 'outline':
-        return <OutlinePanel shell={editor.doc.shell} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} onPreview={setPreview} onDraw={() => setDrawing(true)} />;
+        return <OutlinePanel shell={editor.doc.shell} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} onPreview={setPreview} onDraw={() => setDrawing(true)} />;
       case 'openings':
-        return <OpeningsPanel shell={editor.doc.shell} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
+        return <OpeningsPanel shell={editor.doc.shell} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
       case 'furnish':
-        return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
+        return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} viewCentre={viewCentre} />;
       case 'finishes':
         return <FinishesPanel doc={option} optionId={activeOptionId} finishes={finishes} run={editor.run} readOnly={readOnly} selection={selection} onSelect={select} surface={finishTarget} onSurface={setFinishTarget} />;
       case 'check':
         return <CheckPanel shell={editor.doc.shell} pieces={pieces} result={fit} walkwayMm={walkwayMm} onWalkway={setWalkwayMm} unit={unit} selected={chosenFinding} onChoose={setChosenFinding} />;
     }
-  }, [step, editor.doc.shell, editor.run, unit, readOnly, selection, option, activeOptionId, pieces, newId, fit, walkwayMm, chosenFinding, finishes, finishTarget, select]);
+  }, [step, editor.doc.shell, editor.run, commitField, unit, readOnly, selection, option, activeOptionId, pieces, newId, viewCentre, fit, walkwayMm, chosenFinding, finishes, finishTarget, select]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
     const host = splitHost.current;
@@ -268,6 +309,11 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
             </div>
           </Notice>
         )}
+        {editor.refusal && (
+          <Notice tone="error">
+            {refusalText(editor.refusal, editor.doc.shell, unit)} <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>Dismiss</button>
+          </Notice>
+        )}
         {editor.message && (
           <Notice tone="error">
             {editor.message} <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>Dismiss</button>
@@ -337,6 +383,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
                 preview={preview}
                 highlight={highlight}
                 flaggedPieceIds={flaggedPieceIds}
+                viewCentre={viewCentreRef}
               />
             </div>
           )}

@@ -7,43 +7,55 @@ import {
 } from '../../../../shared/commands';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
-import { inputClass, TextField } from '../../../components/ui/field';
+import { inputClass } from '../../../components/ui/field';
+import { CommitTextField } from '../../../components/ui/commit-field';
+import { numberParser, textParser, useCommitText, type Parsed } from '../../../components/ui/use-commit-text';
+import type { FieldRun } from './outline-panel';
 import { LengthField } from '../../../components/ui/length-field';
-import { roomCentre, type Selection } from './plan-geometry';
+import { placedNear, type Selection } from './plan-geometry';
 import { KindDrawing, KindPicker } from './kind-drawing';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
   seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', kitchen: 'Kitchen', lighting: 'Lighting', rugs: 'Rugs', other: 'Anything else',
 };
 
+function parseSupplierLink(text: string): Parsed<string | null> {
+  const t = text.trim();
+  if (t === '') return { ok: true, value: null };
+  return isWebLink(t) ? { ok: true, value: t } : { ok: false, message: 'Paste a full link, starting with https://' };
+}
+
 /** Tall pieces can tip: at this height or more, the editor reminds the designer to fix them to the wall (common practice). */
 export const TALL_PIECE_MM = 1200;
 
-export function FurnishPanel({ shell, optionId, pieces, run, unit, readOnly, selection, onSelect, newId }: {
+export function FurnishPanel({ shell, optionId, pieces, run, commit, unit, readOnly, selection, onSelect, newId, viewCentre }: {
   shell: RoomShell;
   optionId: string;
   pieces: Piece[];
   run: (c: Command, o?: { gesture?: string }) => boolean;
+  commit: FieldRun;
   unit: LengthUnit;
   readOnly: boolean;
   selection: Selection;
   onSelect: (s: Selection) => void;
   newId: (prefix: string) => string;
+  /** Where added and placed pieces should land near: the middle of the plan's view of the room. */
+  viewCentre: () => [number, number];
 }) {
   const selected = selection?.kind === 'piece' ? pieces.find((p) => p.id === selection.id) : undefined;
-  if (selected) return <PieceProperties key={selected.id} piece={selected} shell={shell} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} />;
-  return <CatalogueList shell={shell} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} heldCount={pieces.filter((p) => !p.placed).length} />;
+  if (selected) return <PieceProperties key={selected.id} piece={selected} shell={shell} pieces={pieces} viewCentre={viewCentre} optionId={optionId} run={run} commit={commit} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} />;
+  return <CatalogueList shell={shell} pieces={pieces} viewCentre={viewCentre} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} heldCount={pieces.filter((p) => !p.placed).length} />;
 }
 
-function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, heldCount }: {
-  shell: RoomShell; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
+function CatalogueList({ shell, pieces, viewCentre, optionId, run, unit, readOnly, onSelect, newId, heldCount }: {
+  shell: RoomShell; pieces: Piece[]; viewCentre: () => [number, number]; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
   onSelect: (s: Selection) => void; newId: (prefix: string) => string; heldCount: number;
 }) {
   const [filter, setFilter] = useState('');
   const add = (kind: CatalogueId, held: boolean) => {
     const id = newId('piece');
-    const piece = pieceFromCatalogue(kind, id, roomCentre(shell));
-    if (run(addPiece(optionId, held ? { ...piece, placed: false } : piece))) onSelect({ kind: 'piece', id });
+    const piece = pieceFromCatalogue(kind, id, viewCentre());
+    if (run(addPiece(optionId, held ? { ...piece, placed: false } : placedNear(shell, pieces, piece, viewCentre())))) onSelect({ kind: 'piece', id });
   };
   const shown = CATALOGUE.filter((e) => e.name.toLowerCase().includes(filter.trim().toLowerCase()));
   return (
@@ -97,15 +109,19 @@ function CatalogueList({ shell, optionId, run, unit, readOnly, onSelect, newId, 
   );
 }
 
-function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect, newId }: {
-  piece: Piece; shell: RoomShell; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
+function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, commit, unit, readOnly, onSelect, newId }: {
+  piece: Piece; shell: RoomShell; pieces: Piece[]; viewCentre: () => [number, number]; optionId: string; run: (c: Command) => boolean; commit: FieldRun; unit: LengthUnit; readOnly: boolean;
   onSelect: (s: Selection) => void; newId: (prefix: string) => string;
 }) {
-  const [name, setName] = useState(piece.name);
-  const [price, setPrice] = useState(piece.price == null ? '' : String(piece.price));
-  const [link, setLink] = useState(piece.supplierUrl ?? '');
-  const [linkError, setLinkError] = useState<string | null>(null);
   const patch = (p: Parameters<typeof updatePiece>[2]) => !readOnly && run(updatePiece(optionId, piece.id, p));
+  const field = (p: Parameters<typeof updatePiece>[2]) => commit(updatePiece(optionId, piece.id, p));
+  const size = (p: Parameters<typeof resizePiece>[2]) => commit(resizePiece(optionId, piece.id, p));
+  const turn = useCommitText<number | null>({
+    value: Math.round(piece.rotation * 10) / 10,
+    format: (deg) => String(deg ?? ''),
+    parse: numberParser({ what: 'a turn in degrees' }),
+    onCommit: (deg) => commit(rotatePiece(optionId, piece.id, deg ?? 0)),
+  });
   const turnBy = (deg: number) => !readOnly && run(rotatePiece(optionId, piece.id, piece.rotation + deg));
 
   return (
@@ -114,7 +130,7 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
         <button type="button" className="text-sm font-semibold text-pine hover:underline" onClick={() => onSelect(null)}>← Catalogue</button>
         <span className="text-xs text-ink-faint">{piece.placed ? 'In the room' : 'In the holding area'}</span>
       </div>
-      <TextField label="Name" value={name} disabled={readOnly} onChange={(e) => setName(e.target.value)} onBlur={() => name.trim() && name !== piece.name && patch({ name: name.trim() })} />
+      <CommitTextField label="Name" value={piece.name} format={(v) => v} parse={textParser('A piece needs a name.')} onCommit={(v) => field({ name: v })} disabled={readOnly} />
       <KindPicker
         kind={piece.kind ?? 'plain-block'}
         settings={piece.settings ?? {}}
@@ -124,9 +140,9 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
         onSettings={(settings) => patch({ settings: Object.values(settings).some((v) => v !== undefined) ? JSON.parse(JSON.stringify(settings)) : null })}
       />
       <div className="grid grid-cols-3 gap-2">
-        <LengthField commit="blur" label="Width" unit={unit} valueMm={piece.width} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { width: v }))} />
-        <LengthField commit="blur" label="Depth" unit={unit} valueMm={piece.depth} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { depth: v }))} />
-        <LengthField commit="blur" label="Height" unit={unit} valueMm={piece.height} onChange={(v) => v && !readOnly && run(resizePiece(optionId, piece.id, { height: v }))} />
+        <LengthField commit="blur" label="Width" unit={unit} valueMm={piece.width} disabled={readOnly} onChange={(v) => (v ? size({ width: v }) : 'Enter a width.')} />
+        <LengthField commit="blur" label="Depth" unit={unit} valueMm={piece.depth} disabled={readOnly} onChange={(v) => (v ? size({ depth: v }) : 'Enter a depth.')} />
+        <LengthField commit="blur" label="Height" unit={unit} valueMm={piece.height} disabled={readOnly} onChange={(v) => (v ? size({ height: v }) : 'Enter a height.')} />
       </div>
       <div className="grid grid-cols-2 gap-2">
         <div className="flex flex-col gap-1.5">
@@ -135,16 +151,18 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
             <Button size="sm" onClick={() => turnBy(-15)} aria-label="Turn 15° anticlockwise" disabled={readOnly}>↺</Button>
             <input
               id="piece-turn"
-              className={`${inputClass} h-8 px-2 text-center`}
+              className={`${inputClass} h-8 min-w-0 px-2 text-center`}
               inputMode="decimal"
-              value={Math.round(piece.rotation * 10) / 10}
+              autoComplete="off"
+              {...turn.inputProps}
               disabled={readOnly}
-              onChange={(e) => Number.isFinite(Number(e.target.value)) && e.target.value !== '' && run(rotatePiece(optionId, piece.id, Number(e.target.value)))}
+              aria-invalid={turn.error ? true : undefined}
+              title={turn.error}
             />
             <Button size="sm" onClick={() => turnBy(15)} aria-label="Turn 15° clockwise" disabled={readOnly}>↻</Button>
           </div>
         </div>
-        <LengthField commit="blur" label="Above the floor" unit={unit} valueMm={piece.elevation} onChange={(v) => v !== null && patch({ elevation: v })} />
+        <LengthField commit="blur" label="Above the floor" unit={unit} valueMm={piece.elevation} disabled={readOnly} onChange={(v) => (v !== null ? field({ elevation: v }) : 'Enter a height (0 stands on the floor).')} />
       </div>
       <fieldset className="flex flex-col gap-1.5">
         <legend className="text-sm font-semibold">The client</legend>
@@ -168,20 +186,9 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
             <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.accentColour ?? '#8a7a68'} disabled={readOnly} onChange={(e) => patch({ accentColour: e.target.value })} />
           </label>
         </div>
-        <TextField label="Price" inputMode="decimal" value={price} disabled={readOnly} onChange={(e) => setPrice(e.target.value)} onBlur={() => {
-          const v = price.trim() === '' ? null : Number(price.replace(',', '.'));
-          if (v === null || (Number.isFinite(v) && v >= 0)) patch({ price: v });
-        }} hint="Per piece, your currency" />
+        <CommitTextField label="Price" inputMode="decimal" value={piece.price ?? null} format={(v) => (v === null ? '' : String(v))} parse={numberParser({ what: 'a price', min: 0, optional: true })} onCommit={(v) => field({ price: v })} disabled={readOnly} hint="Per piece, your currency" />
       </div>
-      <TextField label="Supplier link" type="url" value={link} disabled={readOnly} error={linkError ?? undefined} onChange={(e) => setLink(e.target.value)} onBlur={() => {
-        if (link.trim() === '') return patch({ supplierUrl: null });
-        if (isWebLink(link.trim())) {
-          setLinkError(null);
-          patch({ supplierUrl: link.trim() });
-        } else {
-          setLinkError('Paste a full link, starting with https://');
-        }
-      }} />
+      <CommitTextField label="Supplier link" type="url" value={piece.supplierUrl ?? null} format={(v) => v ?? ''} parse={parseSupplierLink} onCommit={(v) => field({ supplierUrl: v })} disabled={readOnly} />
       {piece.height >= TALL_PIECE_MM && (
         <p className="rounded-lg bg-ochre-wash px-3 py-2 text-sm text-ochre">
           A tall piece can tip over: fix it to the wall, especially where children live (see the furniture maker’s anchoring kit).
@@ -194,8 +201,8 @@ function PieceProperties({ piece, shell, optionId, run, unit, readOnly, onSelect
             <Button size="sm" onClick={() => run(holdPiece(optionId, piece.id))}>Move to the holding area</Button>
           ) : (
             <Button size="sm" onClick={() => {
-              const at = roomCentre(shell);
-              run(placePiece(optionId, piece.id, at[0], at[1]));
+              const at = placedNear(shell, pieces, piece, viewCentre());
+              run(placePiece(optionId, piece.id, at.x, at.y));
             }}>Place in the room</Button>
           )}
           <Button size="sm" variant="danger" onClick={() => run(removePiece(optionId, piece.id)) && onSelect(null)}>Remove</Button>

@@ -8,12 +8,14 @@ import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import type { Selection } from './plan-geometry';
+import type { FieldRun } from './outline-panel';
 
 const TYPE_WORD: Record<Opening['type'], string> = { door: 'Door', window: 'Window', passage: 'Passage' };
 
-export function OpeningsPanel({ shell, run, unit, readOnly, selection, onSelect, newId }: {
+export function OpeningsPanel({ shell, run, commit, unit, readOnly, selection, onSelect, newId }: {
   shell: RoomShell;
   run: (c: Command) => boolean;
+  commit: FieldRun;
   unit: LengthUnit;
   readOnly: boolean;
   selection: Selection;
@@ -62,7 +64,7 @@ export function OpeningsPanel({ shell, run, unit, readOnly, selection, onSelect,
       )}
 
       {selected ? (
-        <OpeningProperties key={selected.id} opening={selected} shell={shell} run={run} unit={unit} readOnly={readOnly} onRemoved={() => onSelect(null)} />
+        <OpeningProperties key={selected.id} opening={selected} shell={shell} run={run} commit={commit} unit={unit} readOnly={readOnly} onRemoved={() => onSelect(null)} />
       ) : (
         <ul className="flex flex-col gap-1.5">
           {shell.openings.length === 0 && <li className="text-sm text-ink-soft">No openings yet.</li>}
@@ -79,10 +81,11 @@ export function OpeningsPanel({ shell, run, unit, readOnly, selection, onSelect,
   );
 }
 
-function OpeningProperties({ opening, shell, run, unit, readOnly, onRemoved }: {
-  opening: Opening; shell: RoomShell; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean; onRemoved: () => void;
+function OpeningProperties({ opening, shell, run, commit, unit, readOnly, onRemoved }: {
+  opening: Opening; shell: RoomShell; run: (c: Command) => boolean; commit: FieldRun; unit: LengthUnit; readOnly: boolean; onRemoved: () => void;
 }) {
   const set = (patch: Parameters<typeof updateOpening>[1]) => !readOnly && run(updateOpening(opening.id, patch));
+  const field = (patch: Parameters<typeof updateOpening>[1]) => commit(updateOpening(opening.id, patch));
   const presets = opening.type === 'door' ? DOOR_PRESETS : opening.type === 'window' ? WINDOW_PRESETS : PASSAGE_PRESETS;
   return (
     <div className="flex flex-col gap-4">
@@ -105,10 +108,10 @@ function OpeningProperties({ opening, shell, run, unit, readOnly, onRemoved }: {
         </div>
       </div>
       <div className="grid grid-cols-2 gap-3">
-        <LengthField commit="blur" label="Width" unit={unit} valueMm={opening.width} onChange={(v) => v && set({ width: v })} />
-        <LengthField commit="blur" label="Height" unit={unit} valueMm={opening.height} onChange={(v) => v && set({ height: v })} />
-        <LengthField commit="blur" label="From wall start" unit={unit} valueMm={opening.offset} onChange={(v) => v !== null && set({ offset: v })} />
-        {opening.type === 'window' && <LengthField commit="blur" label="Sill height" unit={unit} valueMm={opening.sill} onChange={(v) => v !== null && set({ sill: v })} />}
+        <LengthField commit="blur" label="Width" unit={unit} valueMm={opening.width} disabled={readOnly} onChange={(v) => (v ? field({ width: v }) : 'Enter a width.')} />
+        <LengthField commit="blur" label="Height" unit={unit} valueMm={opening.height} disabled={readOnly} onChange={(v) => (v ? field({ height: v }) : 'Enter a height.')} />
+        <LengthField commit="blur" label="From wall start" unit={unit} valueMm={opening.offset} disabled={readOnly} onChange={(v) => (v !== null ? field({ offset: v }) : 'Enter a distance.')} />
+        {opening.type === 'window' && <LengthField commit="blur" label="Sill height" unit={unit} valueMm={opening.sill} disabled={readOnly} onChange={(v) => (v !== null ? field({ sill: v }) : 'Enter a height.')} />}
       </div>
       {opening.type === 'window' && opening.sill + opening.height > shell.wallHeight - 50 && (
         <p className="text-sm text-ochre">The window’s head is close to the ceiling.</p>

@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { Notice } from '../../../components/ui/layout';
+import { useCommitText } from '../../../components/ui/use-commit-text';
 import type { Selection } from './plan-geometry';
 
 /** A gap smaller than this between the last corner and the first counts as closed (plan mm). */
@@ -34,9 +35,13 @@ export function parseMeasuredWall(text: string, unit: LengthUnit): { ok: true; w
   return { ok: true, wall: { lengthMm: length.mm, turn, cornerDeg } };
 }
 
-export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, onPreview, onDraw }: {
+/** Runs a command for a field: null when done, else the sentence saying why not (shown beside the field). */
+export type FieldRun = (c: Command, o?: { gesture?: string }) => string | null;
+
+export function OutlinePanel({ shell, run, commit, unit, readOnly, selection, onSelect, onPreview, onDraw }: {
   shell: RoomShell;
   run: (c: Command) => boolean;
+  commit: FieldRun;
   unit: LengthUnit;
   readOnly: boolean;
   selection: Selection;
@@ -74,8 +79,8 @@ export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, 
   return (
     <div className="flex flex-col gap-5">
       <div className="grid grid-cols-2 gap-3">
-        <LengthField commit="blur" label="Ceiling height" unit={unit} valueMm={shell.wallHeight} onChange={(v) => v && !readOnly && run(setWallHeight(v))} />
-        <LengthField commit="blur" label="Wall thickness" unit={unit} valueMm={shell.wallThickness} onChange={(v) => v && !readOnly && run(setWallThickness(v))} hint="All walls" />
+        <LengthField commit="blur" label="Ceiling height" unit={unit} valueMm={shell.wallHeight} disabled={readOnly} onChange={(v) => (v ? commit(setWallHeight(v)) : 'Enter a height.')} />
+        <LengthField commit="blur" label="Wall thickness" unit={unit} valueMm={shell.wallThickness} disabled={readOnly} onChange={(v) => (v ? commit(setWallThickness(v)) : 'Enter a thickness.')} hint="All walls" />
       </div>
       <div>
         <h3 className="mb-2 text-sm font-semibold text-ink">Walls</h3>
@@ -90,8 +95,8 @@ export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, 
                 readOnly={readOnly}
                 selected={selection?.kind === 'wall' && selection.index === w.index}
                 onFocus={() => onSelect({ kind: 'wall', index: w.index })}
-                onLength={(mm) => run(setWallLength(w.index, mm))}
-                onThickness={(mm) => run(setWallThickness(mm, w.index))}
+                onLength={(mm) => commit(setWallLength(w.index, mm))}
+                onThickness={(mm) => commit(setWallThickness(mm, w.index))}
               />
             </li>
           ))}
@@ -110,37 +115,36 @@ export function OutlinePanel({ shell, run, unit, readOnly, selection, onSelect, 
 
 function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected, onFocus, onLength, onThickness }: {
   index: number; lengthMm: number; thicknessOverride: number | null; unit: LengthUnit; readOnly: boolean; selected: boolean;
-  onFocus: () => void; onLength: (mm: number) => void; onThickness: (mm: number | null) => void;
+  onFocus: () => void; onLength: (mm: number) => string | null; onThickness: (mm: number | null) => string | null;
 }) {
-  const [text, setText] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const commit = () => {
-    if (text === null) return;
-    const parsed = parseLength(text, unit);
-    if (!parsed.ok) {
-      setError(parsed.message);
-      return;
-    }
-    setError(null);
-    setText(null);
-    if (Math.abs(parsed.mm - lengthMm) > 0.05) onLength(parsed.mm);
-  };
+  const length = useCommitText<number>({
+    value: lengthMm,
+    format: (mm) => formatLength(mm, unit),
+    parse: (text) => {
+      const parsed = parseLength(text, unit);
+      if (!parsed.ok) return parsed;
+      return parsed.mm > 0 ? { ok: true, value: parsed.mm } : { ok: false, message: 'A wall needs a length above zero.' };
+    },
+    equal: (a, b) => Math.abs(a - b) <= 0.05,
+    onCommit: onLength,
+  });
+  const errorId = `wall-length-${index}-error`;
   return (
     <div className={`rounded-lg border px-3 py-2 ${selected ? 'border-pine bg-pine-wash/50' : 'border-line bg-white'}`}>
       <div className="flex items-center gap-2">
-        <label className="w-16 shrink-0 text-sm font-semibold text-ink-soft" htmlFor={`wall-length-${index}`}>Wall {index + 1}</label>
+        <label className="shrink-0 text-sm font-semibold whitespace-nowrap text-ink-soft" htmlFor={`wall-length-${index}`}>Wall {index + 1}</label>
         <input
           id={`wall-length-${index}`}
-          className={`${inputClass} h-9`}
-          value={text ?? formatLength(lengthMm, unit)}
+          className={`${inputClass} h-9 min-w-0 px-2`}
+          {...length.inputProps}
           disabled={readOnly}
           onFocus={onFocus}
-          onChange={(e) => setText(e.target.value)}
-          onBlur={commit}
-          onKeyDown={(e) => e.key === 'Enter' && commit()}
-          aria-invalid={error ? true : undefined}
+          inputMode="decimal"
+          autoComplete="off"
+          aria-invalid={length.error ? true : undefined}
+          aria-describedby={length.error ? errorId : undefined}
         />
-        <label className="flex shrink-0 items-center gap-1 text-xs text-ink-faint" title="This wall’s own thickness">
+        <label className="flex shrink-0 items-center gap-1 text-xs whitespace-nowrap text-ink-faint" title="This wall’s own thickness">
           <input
             type="checkbox"
             disabled={readOnly}
@@ -152,20 +156,21 @@ function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected,
       </div>
       {thicknessOverride !== null && (
         <div className="mt-2">
-          <LengthField commit="blur" label={`Wall ${index + 1} thickness`} unit={unit} valueMm={thicknessOverride} onChange={(v) => v && onThickness(v)} />
+          <LengthField commit="blur" label={`Wall ${index + 1} thickness`} unit={unit} valueMm={thicknessOverride} disabled={readOnly} onChange={(v) => (v ? onThickness(v) : 'Enter a thickness.')} />
         </div>
       )}
-      {error && <p className="mt-1 text-sm text-clay" role="alert">{error}</p>}
+      {length.error && <p id={errorId} className="mt-1 text-sm text-clay" role="alert">{length.error}</p>}
     </div>
   );
 }
 
-function MeasureWalls({ walls, unit, onChange, onCancel, onUse }: {
+export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus = true }: {
   walls: MeasuredWall[];
   unit: LengthUnit;
   onChange: (w: MeasuredWall[]) => void;
   onCancel: () => void;
   onUse: (command: Command) => void;
+  autoFocus?: boolean;
 }) {
   const [entry, setEntry] = useState('');
   const [error, setError] = useState<string | null>(null);
@@ -195,24 +200,30 @@ function MeasureWalls({ walls, unit, onChange, onCancel, onUse }: {
       </p>
       <ol className="flex flex-col gap-1.5">
         {walls.map((w, i) => (
-          <li key={i} className="flex items-center gap-2 rounded-lg border border-line bg-white px-2 py-1.5 text-sm">
-            <span className="w-14 shrink-0 font-semibold text-ink-soft">Wall {i + 1}</span>
-            <span className="w-20 shrink-0 tabular-nums">{formatLength(w.lengthMm, unit)}</span>
-            <label className="sr-only" htmlFor={`turn-${i}`}>Turn after wall {i + 1}</label>
-            <select id={`turn-${i}`} className={`${inputClass} h-8 w-auto px-1 text-sm`} value={w.turn} onChange={(e) => update(i, { turn: e.target.value as MeasuredWall['turn'] })}>
-              <option value="right">then right</option>
-              <option value="left">then left</option>
-            </select>
-            <label className="sr-only" htmlFor={`corner-${i}`}>Corner angle after wall {i + 1}</label>
-            <input id={`corner-${i}`} className={`${inputClass} h-8 w-16 px-2 text-sm`} inputMode="decimal" value={w.cornerDeg} onChange={(e) => Number(e.target.value) > 0 && Number(e.target.value) < 180 && update(i, { cornerDeg: Number(e.target.value) })} />
-            <span className="text-ink-faint">°</span>
-            <button type="button" className="ml-auto rounded px-1.5 text-ink-faint hover:bg-sand hover:text-clay" aria-label={`Remove wall ${i + 1}`} onClick={() => onChange(walls.filter((_, j) => j !== i))}>×</button>
+          <li key={i} className="flex flex-col gap-1.5 rounded-lg border border-line bg-white px-2 py-1.5 text-sm">
+            <div className="flex items-center gap-2">
+              <span className="shrink-0 font-semibold whitespace-nowrap text-ink-soft">Wall {i + 1}</span>
+              <span className="min-w-0 flex-1 whitespace-nowrap tabular-nums">{formatLength(w.lengthMm, unit)}</span>
+              <button type="button" className="rounded px-1.5 text-ink-faint hover:bg-sand hover:text-clay" aria-label={`Remove wall ${i + 1}`} onClick={() => onChange(walls.filter((_, j) => j !== i))}>×</button>
+            </div>
+            <div className="flex items-center gap-2">
+              <label className="sr-only" htmlFor={`turn-${i}`}>Turn after wall {i + 1}</label>
+              <select id={`turn-${i}`} className={`${inputClass} h-8 min-w-0 px-2 text-sm`} value={w.turn} onChange={(e) => update(i, { turn: e.target.value as MeasuredWall['turn'] })}>
+                <option value="right">then right</option>
+                <option value="left">then left</option>
+              </select>
+              <label className="sr-only" htmlFor={`corner-${i}`}>Corner angle after wall {i + 1}</label>
+              <span className="w-16 shrink-0">
+                <input id={`corner-${i}`} className={`${inputClass} h-8 px-2 text-sm`} inputMode="decimal" value={w.cornerDeg} onChange={(e) => Number(e.target.value) > 0 && Number(e.target.value) < 180 && update(i, { cornerDeg: Number(e.target.value) })} />
+              </span>
+              <span className="text-ink-faint">°</span>
+            </div>
           </li>
         ))}
       </ol>
       <div>
         <label htmlFor="next-wall" className="text-sm font-semibold">Wall {walls.length + 1}</label>
-        <input id="next-wall" className={`${inputClass} mt-1`} placeholder="e.g. 420, or 350 l 135" value={entry} onChange={(e) => setEntry(e.target.value)} onKeyDown={add} autoFocus aria-invalid={error ? true : undefined} />
+        <input id="next-wall" className={`${inputClass} mt-1`} placeholder="e.g. 420, or 350 l 135" value={entry} onChange={(e) => setEntry(e.target.value)} onKeyDown={add} autoFocus={autoFocus} aria-invalid={error ? true : undefined} />
         {error && <p className="mt-1 text-sm text-clay" role="alert">{error}</p>}
       </div>
       {walls.length >= 3 && (gap < CLOSED_GAP_MM ? (

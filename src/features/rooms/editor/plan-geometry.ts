@@ -4,7 +4,10 @@ import type { RoomShell } from '../../../../shared/schemas/room';
 import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../shared/geometry/walls';
 import { placeShellOpenings } from '../../../../shared/geometry/openings';
 import { boundsMm, type Bounds2 } from '../../../../shared/geometry/polygon';
-import { pieceFootprintMm } from '../../../../shared/commands';
+import { insideOutline } from '../../../../shared/geometry/walk';
+
+export { insideOutline };
+import { boxesOverlap, boxInsideOutline, findPlacement, pieceFootprintMm, snapPieceToWalls } from '../../../../shared/commands';
 
 /** Space round the room on the plan, for dimension lines and handles. */
 export const PLAN_MARGIN_MM = 900;
@@ -70,15 +73,19 @@ export function inHolding(layout: PlanLayout, point: readonly [number, number]):
   return point[0] >= h.x - HOLDING_GAP_MM / 2 && point[1] >= h.y - PLAN_MARGIN_MM && point[1] <= h.y + h.height + PLAN_MARGIN_MM;
 }
 
-/** Point-in-polygon (even-odd), plan mm. */
-export function insideOutline(outline: readonly (readonly [number, number])[], p: readonly [number, number]): boolean {
-  let inside = false;
-  for (let i = 0, j = outline.length - 1; i < outline.length; j = i++) {
-    const [xi, yi] = outline[i];
-    const [xj, yj] = outline[j];
-    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
+/**
+ * The piece moved to free floor inside the outline nearest to `near` (plan mm), snapped to a wall
+ * when the snap keeps it on free floor. Its turn and size stay as they are.
+ */
+export function placedNear<P extends Piece>(shell: RoomShell, pieces: readonly Piece[], piece: P, near: readonly [number, number]): P {
+  const request = { id: piece.id, width: piece.width, depth: piece.depth, rotation: piece.rotation };
+  const [x, y] = findPlacement(shell, pieces, { ...request, near });
+  const at = { ...piece, x, y, placed: true };
+  const snapped = snapPieceToWalls(at, shell).piece;
+  // A snapped piece touches its wall, so it is tested a hair smaller than it is.
+  const fit = pieceFootprintMm({ ...snapped, width: snapped.width - 2, depth: snapped.depth - 2 });
+  const free = boxInsideOutline(shell.outline, fit) && pieces.every((p) => !p.placed || p.id === piece.id || !boxesOverlap(fit, pieceFootprintMm(p)));
+  return free ? snapped : at;
 }
 
 /** The centre of a room's outline bounds, where a new piece lands. */

@@ -10,7 +10,7 @@ import {
 import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { distance } from '../../../../shared/geometry/vec';
-import { DIMENSION_OFFSET_MM, inHolding, pieceRing, planLayout, ringPath, type Selection } from './plan-geometry';
+import { DIMENSION_OFFSET_MM, inHolding, pieceRing, placedNear, planLayout, ringPath, type Selection } from './plan-geometry';
 import type { EditorStep } from './steps';
 import { PieceLabel, PieceTopView } from './plan-piece-forms';
 
@@ -46,6 +46,8 @@ interface Props {
   flaggedPieceIds?: string[];
   /** A typed walk being measured, drawn dashed before it replaces the outline. */
   preview?: [number, number][] | null;
+  /** Kept up to date with the middle of what the plan shows of the room, where added pieces land. */
+  viewCentre?: { current: [number, number] | null };
 }
 
 type Drag =
@@ -69,18 +71,20 @@ export function PlanView(props: Props) {
   const [pointer, setPointer] = useState<[number, number] | null>(null);
   const fitted = useRef(false);
 
-  // Fit the view to the room when it first appears and when the outline grows past the view.
+  // Fit the view to the room when it first appears and when the outline grows past the view. Only
+  // the room counts: pieces joining the holding area never change the plan's scale.
   useEffect(() => {
     const vb = layout.viewBox;
+    const rb = layout.roomBounds;
     setView((v) => {
       if (!fitted.current) {
         fitted.current = true;
         return vb;
       }
-      const outside = vb.x < v.x || vb.y < v.y || vb.x + vb.w > v.x + v.w || vb.y + vb.h > v.y + v.h;
+      const outside = rb.minX < v.x || rb.minY < v.y || rb.maxX > v.x + v.w || rb.maxY > v.y + v.h;
       return outside ? vb : v;
     });
-  }, [layout.viewBox]);
+  }, [layout.viewBox, layout.roomBounds]);
 
   useEffect(() => {
     if (!props.drawing) setDraft([]);
@@ -105,6 +109,15 @@ export function PlanView(props: Props) {
     return () => observer.disconnect();
   }, []);
   const mmPerPx = Math.max(view.w / box.w, view.h / box.h);
+  if (props.viewCentre) {
+    // The visible part of the room's box, so a view panned half off the room still adds into it.
+    const rb = layout.roomBounds;
+    const x0 = Math.max(view.x, rb.minX);
+    const x1 = Math.min(view.x + view.w, rb.maxX);
+    const y0 = Math.max(view.y, rb.minY);
+    const y1 = Math.min(view.y + view.h, rb.maxY);
+    props.viewCentre.current = x0 < x1 && y0 < y1 ? [(x0 + x1) / 2, (y0 + y1) / 2] : null;
+  }
   const text = 12 * mmPerPx;
   const stroke = 1 * mmPerPx;
 
@@ -248,7 +261,7 @@ export function PlanView(props: Props) {
     const id = newId('piece');
     let piece = pieceFromCatalogue(kind as CatalogueId, id, [Math.round(at[0]), Math.round(at[1])]);
     if (inHolding(layout, at)) piece = { ...piece, placed: false };
-    else piece = snapPieceToWalls(piece, shell).piece;
+    else piece = placedNear(shell, pieces, piece, at);
     if (run(addPiece(optionId, piece))) onSelect({ kind: 'piece', id });
   };
 

@@ -9,6 +9,13 @@ import {
   applyToHistory, canRedo, canUndo, createEditorDoc, createHistory, endGesture, mergeOptionDoc, mergeShell, redo, redoLabel, undo, undoLabel,
   type ApplyOptions, type Command, type EditorDoc, type History,
 } from '../../../../shared/commands';
+import type { FieldProblem } from '../../../../shared/geometry/validate';
+
+/** Why a field's change was refused: the sentence, and the rules it would break. */
+export interface HistoryFailure {
+  message: string;
+  problems: FieldProblem[];
+}
 import { api, ApiError } from '../../../lib/api';
 import { roomKeys, type RoomDetail } from '../api/rooms';
 
@@ -100,6 +107,7 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
   const [saveState, setSaveState] = useState<SaveState>('saved');
   const [conflict, setConflict] = useState<Conflict | null>(null);
   const [message, setMessage] = useState<string | null>(null);
+  const [refusal, setRefusal] = useState<HistoryFailure | null>(null);
   const attempt = useRef(0);
   const saving = useRef(false);
   const historyRef = useRef(history);
@@ -206,13 +214,27 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
       if (readOnly) return false;
       const result = applyToHistory(historyRef.current, command, options);
       if (!result.ok) {
-        setMessage(result.message);
+        setRefusal({ message: result.message, problems: result.problems ?? [] });
         return false;
       }
-      setMessage(null);
+      setRefusal(null);
       historyRef.current = result.history;
       setHistory(result.history);
       return true;
+    },
+    [readOnly],
+  );
+
+  /** Like run, for a field: a refusal comes back to be shown beside the field instead of in the banner. */
+  const attemptField = useCallback(
+    (command: Command, options?: ApplyOptions): HistoryFailure | null => {
+      if (readOnly) return null;
+      const result = applyToHistory(historyRef.current, command, options);
+      if (!result.ok) return { message: result.message, problems: result.problems ?? [] };
+      setRefusal(null);
+      historyRef.current = result.history;
+      setHistory(result.history);
+      return null;
     },
     [readOnly],
   );
@@ -360,6 +382,7 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
     doc,
     history,
     run,
+    attempt: attemptField,
     finishGesture,
     undo: doUndo,
     redo: doRedo,
@@ -377,7 +400,11 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
     dismissRestored: () => setRestored(null),
     resolveStaleDraft,
     message,
-    clearMessage: () => setMessage(null),
+    refusal,
+    clearMessage: () => {
+      setMessage(null);
+      setRefusal(null);
+    },
     syncOptions,
   };
 }
