@@ -1,6 +1,7 @@
 import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent as ReactKeyboardEvent } from 'react';
 import { Link } from 'react-router';
 import { holdPiece, movePiece, type Command, NUDGE_LARGE_STEP_MM, NUDGE_STEP_MM, removeOpening, removePiece, rotatePiece, updateOpening } from '../../../../shared/commands';
+import type { Piece } from '../../../../shared/schemas/option';
 import type { LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
@@ -76,6 +77,9 @@ export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: st
   return <Editor key={roomId} projectId={projectId} detail={room.data} readOnly={!canEdit} finishes={finishes} />;
 }
 
+/** One empty list for an option-less moment, so hooks keyed on the pieces do not re-run each render. */
+const NO_PIECES: Piece[] = [];
+
 const SAVE_TEXT: Record<SaveState, string> = {
   saved: 'All changes saved',
   unsaved: 'Unsaved changes',
@@ -105,7 +109,7 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
 
   const option = editor.doc.options[optionId] ?? Object.values(editor.doc.options)[0];
   const activeOptionId = editor.doc.options[optionId] ? optionId : Object.keys(editor.doc.options)[0];
-  const pieces = option?.pieces ?? [];
+  const pieces = option?.pieces ?? NO_PIECES;
   const fit = useFitCheck(editor.doc.shell, pieces, walkwayMm);
   const findings = fit?.findings ?? [];
   const finding = chosenFinding !== null ? findings[chosenFinding] : undefined;
