@@ -188,7 +188,7 @@ describe('presentations', () => {
     await designer.page.screenshot({ path: join(shots, 'designer-choices.png'), fullPage: true });
 
     await designer.page.goto('/outbox');
-    await designer.page.getByRole('link', { name: new RegExp(`To ${designerEmail.replace(/[.+]/g, '\\$&')}.*Choice for Sitting room: Option B · Around the hearth`) }).click();
+    await designer.page.getByRole('link', { name: new RegExp(`To ${designerEmail.replace(/[.+]/g, '\\$&')}.*Juno and Amir Castellane chose Option B · Around the hearth for Sitting room \\(Fernhill cottage\\)`) }).click();
     await designer.page.getByText('Juno and Amir Castellane chose Option B · Around the hearth for Sitting room in Fernhill cottage.').waitFor();
 
     // Mark as decided: the project is decided, and the client's page says so.
