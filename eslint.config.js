@@ -36,8 +36,10 @@ export default tseslint.config(
   {
     files: ['shared/**/*.ts'],
     ignores: ['shared/**/*.test.ts'],
-    rules: noImportFrom(['**/src/**', '**/server/**', '**/tests/**', '**/scripts/**', 'node:*', 'react', 'three', 'express', 'kysely', 'pg'],
-      'shared/ is pure TypeScript for client and server: it imports nothing from src, server, tests, Node, React, three or the database.'),
+    rules: noImportFrom(
+      ['**/src/**', '**/server/**', '**/tests/**', '**/scripts/**', 'node:*', 'react', 'three', 'express', 'kysely', 'pg'],
+      'shared/ is pure TypeScript for client and server: it imports nothing from src, server, tests, Node, React, three or the database.',
+    ),
   },
   {
     files: ['server/**/*.ts'],

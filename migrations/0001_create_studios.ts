@@ -71,7 +71,10 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('address', 'text')
     .addColumn('state', 'text', (c) =>
-      c.notNull().defaultTo('draft').check(sql`state in ('draft', 'presented', 'decided', 'archived')`),
+      c
+        .notNull()
+        .defaultTo('draft')
+        .check(sql`state in ('draft', 'presented', 'decided', 'archived')`),
     )
     .addColumn('created_at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))
     .addColumn('updated_at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))

@@ -17,7 +17,9 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .addColumn('colour_hex', 'text')
     .addColumn('sheen', 'text', (c) => c.check(sql`sheen in ('matt', 'eggshell', 'satin', 'gloss')`))
     // photo finishes
-    .addColumn('category', 'text', (c) => c.check(sql`category in ('floor', 'wall', 'tile', 'wood', 'stone', 'fabric', 'wallpaper', 'other')`))
+    .addColumn('category', 'text', (c) =>
+      c.check(sql`category in ('floor', 'wall', 'tile', 'wood', 'stone', 'fabric', 'wallpaper', 'other')`),
+    )
     .addColumn('repeat_width_mm', 'double precision', (c) => c.check(sql`repeat_width_mm > 0`))
     .addColumn('repeat_height_mm', 'double precision', (c) => c.check(sql`repeat_height_mm > 0`))
     .addColumn('crop', 'jsonb')
@@ -44,7 +46,9 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .createTable('finish_files')
     .addColumn('finish_id', 'uuid', (c) => c.notNull().references('finishes.id').onDelete('cascade'))
     .addColumn('studio_id', 'uuid', (c) => c.notNull().references('studios.id').onDelete('cascade'))
-    .addColumn('purpose', 'text', (c) => c.notNull().check(sql`purpose in ('master', 'photo', 'texture', 'texture-large', 'swatch', 'preview')`))
+    .addColumn('purpose', 'text', (c) =>
+      c.notNull().check(sql`purpose in ('master', 'photo', 'texture', 'texture-large', 'swatch', 'preview')`),
+    )
     .addColumn('key', 'text', (c) => c.notNull())
     .addColumn('width_px', 'integer', (c) => c.notNull())
     .addColumn('height_px', 'integer', (c) => c.notNull())

@@ -46,7 +46,13 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .addColumn('first_viewed_at', 'timestamptz')
     .addColumn('last_viewed_at', 'timestamptz')
     .addPrimaryKeyConstraint('presentation_options_pk', ['presentation_id', 'option_id'])
-    .addForeignKeyConstraint('presentation_options_room_fk', ['presentation_id', 'room_id'], 'presentation_rooms', ['presentation_id', 'room_id'], (c) => c.onDelete('cascade'))
+    .addForeignKeyConstraint(
+      'presentation_options_room_fk',
+      ['presentation_id', 'room_id'],
+      'presentation_rooms',
+      ['presentation_id', 'room_id'],
+      (c) => c.onDelete('cascade'),
+    )
     .execute();
 
   // One choice per room of a presentation; changing it updates the row with a new time.
@@ -58,8 +64,20 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .addColumn('comment', 'text', (c) => c.notNull().defaultTo(''))
     .addColumn('chosen_at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))
     .addPrimaryKeyConstraint('choices_pk', ['presentation_id', 'room_id'])
-    .addForeignKeyConstraint('choices_room_fk', ['presentation_id', 'room_id'], 'presentation_rooms', ['presentation_id', 'room_id'], (c) => c.onDelete('cascade'))
-    .addForeignKeyConstraint('choices_option_fk', ['presentation_id', 'option_id'], 'presentation_options', ['presentation_id', 'option_id'], (c) => c.onDelete('cascade'))
+    .addForeignKeyConstraint(
+      'choices_room_fk',
+      ['presentation_id', 'room_id'],
+      'presentation_rooms',
+      ['presentation_id', 'room_id'],
+      (c) => c.onDelete('cascade'),
+    )
+    .addForeignKeyConstraint(
+      'choices_option_fk',
+      ['presentation_id', 'option_id'],
+      'presentation_options',
+      ['presentation_id', 'option_id'],
+      (c) => c.onDelete('cascade'),
+    )
     .execute();
 
   await db.schema
@@ -69,7 +87,11 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .addColumn('kind', 'text', (c) => c.notNull().check(sql`kind in ('choice', 'view')`))
     .addColumn('at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))
     .execute();
-  await db.schema.createIndex('presentation_requests_window_idx').on('presentation_requests').columns(['presentation_id', 'kind', 'at']).execute();
+  await db.schema
+    .createIndex('presentation_requests_window_idx')
+    .on('presentation_requests')
+    .columns(['presentation_id', 'kind', 'at'])
+    .execute();
 }
 
 export async function down(db: Kysely<unknown>): Promise<void> {

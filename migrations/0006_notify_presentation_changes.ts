@@ -15,7 +15,11 @@ const WATCHED: { table: string; column: string; events: string }[] = [
   { table: 'finishes', column: 'studio_id', events: 'update or delete' },
   { table: 'finish_files', column: 'studio_id', events: 'insert or update or delete' },
   // Only what the link shows or whether it works; the opened counts change on every visit.
-  { table: 'presentations', column: 'studio_id', events: 'update of withdrawn_at, expires_at, message, show_prices, decided_at, token_expires_at or delete' },
+  {
+    table: 'presentations',
+    column: 'studio_id',
+    events: 'update of withdrawn_at, expires_at, message, show_prices, decided_at, token_expires_at or delete',
+  },
 ];
 
 export async function up(db: Kysely<unknown>): Promise<void> {

@@ -18,7 +18,11 @@ export async function up(db: Kysely<unknown>): Promise<void> {
     .addColumn('created_at', sql`timestamptz(3)`, (c) => c.notNull().defaultTo(sql`now()`))
     .addCheckConstraint('sent_mail_kind_check', sql`kind in ('invitation', 'presentation', 'choice')`)
     .execute();
-  await db.schema.createIndex('sent_mail_studio_idx').on('sent_mail').columns(['studio_id', 'created_at desc', 'id desc']).execute();
+  await db.schema
+    .createIndex('sent_mail_studio_idx')
+    .on('sent_mail')
+    .columns(['studio_id', 'created_at desc', 'id desc'])
+    .execute();
   await sql`comment on table sent_mail is 'Mail the app sent, per studio: the local Outbox reads it'`.execute(db);
 }
 

@@ -34,15 +34,29 @@ export async function up(db: Kysely<unknown>): Promise<void> {
   await db.schema.alterTable('choices').dropConstraint('choices_option_fk').execute();
   await db.schema
     .alterTable('choices')
-    .addForeignKeyConstraint('choices_presentation_fk', ['presentation_id'], 'presentations', ['id'], (c) => c.onDelete('cascade'))
+    .addForeignKeyConstraint('choices_presentation_fk', ['presentation_id'], 'presentations', ['id'], (c) =>
+      c.onDelete('cascade'),
+    )
     .execute();
   await db.schema
     .alterTable('choices')
-    .addForeignKeyConstraint('choices_room_fk', ['presentation_id', 'room_id'], 'presentation_rooms', ['presentation_id', 'room_id'], (c) => c.onDelete('no action'))
+    .addForeignKeyConstraint(
+      'choices_room_fk',
+      ['presentation_id', 'room_id'],
+      'presentation_rooms',
+      ['presentation_id', 'room_id'],
+      (c) => c.onDelete('no action'),
+    )
     .execute();
   await db.schema
     .alterTable('choices')
-    .addForeignKeyConstraint('choices_option_fk', ['presentation_id', 'option_id'], 'presentation_options', ['presentation_id', 'option_id'], (c) => c.onDelete('no action'))
+    .addForeignKeyConstraint(
+      'choices_option_fk',
+      ['presentation_id', 'option_id'],
+      'presentation_options',
+      ['presentation_id', 'option_id'],
+      (c) => c.onDelete('no action'),
+    )
     .execute();
 }
 
@@ -52,12 +66,29 @@ export async function down(db: Kysely<unknown>): Promise<void> {
   await db.schema.alterTable('choices').dropConstraint('choices_presentation_fk').execute();
   await db.schema
     .alterTable('choices')
-    .addForeignKeyConstraint('choices_room_fk', ['presentation_id', 'room_id'], 'presentation_rooms', ['presentation_id', 'room_id'], (c) => c.onDelete('cascade'))
+    .addForeignKeyConstraint(
+      'choices_room_fk',
+      ['presentation_id', 'room_id'],
+      'presentation_rooms',
+      ['presentation_id', 'room_id'],
+      (c) => c.onDelete('cascade'),
+    )
     .execute();
   await db.schema
     .alterTable('choices')
-    .addForeignKeyConstraint('choices_option_fk', ['presentation_id', 'option_id'], 'presentation_options', ['presentation_id', 'option_id'], (c) => c.onDelete('cascade'))
+    .addForeignKeyConstraint(
+      'choices_option_fk',
+      ['presentation_id', 'option_id'],
+      'presentation_options',
+      ['presentation_id', 'option_id'],
+      (c) => c.onDelete('cascade'),
+    )
     .execute();
   await db.schema.alterTable('rooms').dropConstraint('rooms_project_position_key').execute();
-  await db.schema.alterTable('projects').dropColumn('reopened_at').dropColumn('reopened_by').dropColumn('previous_state').execute();
+  await db.schema
+    .alterTable('projects')
+    .dropColumn('reopened_at')
+    .dropColumn('reopened_by')
+    .dropColumn('previous_state')
+    .execute();
 }

@@ -6,11 +6,42 @@ import { sql, type Kysely, type RawBuilder } from 'kysely';
 // The lists below are this migration's own copy and never change with the app.
 
 const KINDS = [
-  'sofa', 'corner-sofa', 'armchair', 'dining-chair', 'stool', 'bench', 'ottoman', 'dining-table', 'dining-set',
-  'coffee-table', 'side-table', 'bedside-table', 'desk', 'bed', 'cot', 'wardrobe', 'chest-of-drawers', 'sideboard',
-  'media-unit', 'open-shelving', 'bookcase', 'wall-shelf', 'wall-cabinet', 'kitchen-base-unit', 'kitchen-wall-unit',
-  'oven-housing', 'dishwasher', 'rug', 'floor-lamp', 'table-lamp', 'pendant-light', 'mirror', 'picture', 'plant',
-  'radiator', 'plain-block',
+  'sofa',
+  'corner-sofa',
+  'armchair',
+  'dining-chair',
+  'stool',
+  'bench',
+  'ottoman',
+  'dining-table',
+  'dining-set',
+  'coffee-table',
+  'side-table',
+  'bedside-table',
+  'desk',
+  'bed',
+  'cot',
+  'wardrobe',
+  'chest-of-drawers',
+  'sideboard',
+  'media-unit',
+  'open-shelving',
+  'bookcase',
+  'wall-shelf',
+  'wall-cabinet',
+  'kitchen-base-unit',
+  'kitchen-wall-unit',
+  'oven-housing',
+  'dishwasher',
+  'rug',
+  'floor-lamp',
+  'table-lamp',
+  'pendant-light',
+  'mirror',
+  'picture',
+  'plant',
+  'radiator',
+  'plain-block',
 ];
 
 // PostgreSQL regular expressions, matched case-insensitively (~*); \y is a word boundary. The
@@ -56,8 +87,13 @@ const WORDS: [string, string][] = [
 // The catalogue's ids as they stood before kinds, each with its kind (words would read
 // 'custom-box' as plain-block too, but the round trip is clearer spelled out).
 const CATALOGUE_IDS: [string, string][] = [
-  ['sofa-2-seat', 'sofa'], ['sofa-3-seat', 'sofa'], ['sofa-corner', 'corner-sofa'], ['tv-unit', 'media-unit'],
-  ['dining-table-4', 'dining-set'], ['dining-table-6', 'dining-set'], ['custom-box', 'plain-block'],
+  ['sofa-2-seat', 'sofa'],
+  ['sofa-3-seat', 'sofa'],
+  ['sofa-corner', 'corner-sofa'],
+  ['tv-unit', 'media-unit'],
+  ['dining-table-4', 'dining-set'],
+  ['dining-table-6', 'dining-set'],
+  ['custom-box', 'plain-block'],
 ];
 
 function kindOf(piece: RawBuilder<unknown>): RawBuilder<string> {

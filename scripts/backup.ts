@@ -19,13 +19,21 @@ async function main(): Promise<void> {
   const target = await openDataTarget();
   const stage = mkdtempSync(join(tmpdir(), 'parlour-backup-'));
   try {
-    const out = resolve(argValue('--out') ?? join(target.dataDir, 'backups', `parlour-${new Date().toISOString().replace(/[:.]/g, '-')}.tar.gz`));
+    const out = resolve(
+      argValue('--out') ?? join(target.dataDir, 'backups', `parlour-${new Date().toISOString().replace(/[:.]/g, '-')}.tar.gz`),
+    );
     // The rows counted and the dump taken in one snapshot would need pg_dump's own snapshot; the
     // counts are taken first, so a busy database may hold a few more rows than the manifest says.
     const client = new pg.Client({ connectionString: target.databaseUrl });
     await client.connect();
     const rows = await tableCounts((text) => client.query(text)).finally(() => client.end());
-    run(join(binDir(), 'pg_dump'), ['--format=custom', '--no-owner', '--no-privileges', `--file=${join(stage, 'database.dump')}`, `--dbname=${target.databaseUrl}`]);
+    run(join(binDir(), 'pg_dump'), [
+      '--format=custom',
+      '--no-owner',
+      '--no-privileges',
+      `--file=${join(stage, 'database.dump')}`,
+      `--dbname=${target.databaseUrl}`,
+    ]);
 
     let files = 0;
     let fileBytes = 0;
@@ -41,7 +49,15 @@ async function main(): Promise<void> {
     const keyFile = join(target.dataDir, PRESENTATION_KEY_FILE);
     const presentationKey = existsSync(keyFile);
     if (presentationKey) copyFileSync(keyFile, join(stage, PRESENTATION_KEY_FILE));
-    const manifest: BackupManifest = { format: BACKUP_FORMAT, version: BACKUP_VERSION, createdAt: new Date().toISOString(), rows, files, fileBytes, presentationKey };
+    const manifest: BackupManifest = {
+      format: BACKUP_FORMAT,
+      version: BACKUP_VERSION,
+      createdAt: new Date().toISOString(),
+      rows,
+      files,
+      fileBytes,
+      presentationKey,
+    };
     writeFileSync(join(stage, 'manifest.json'), `${JSON.stringify(manifest, null, 2)}\n`);
 
     mkdirSync(dirname(out), { recursive: true });
@@ -49,7 +65,9 @@ async function main(): Promise<void> {
     chmodSync(out, 0o600);
     run('tar', ['-czf', out, '-C', stage, '.']);
     const totalRows = Object.values(rows).reduce((a, b) => a + b, 0);
-    console.log(`Backed up ${totalRows} rows in ${Object.keys(rows).length} tables and ${files} files (${fileBytes} bytes) to ${out}`);
+    console.log(
+      `Backed up ${totalRows} rows in ${Object.keys(rows).length} tables and ${files} files (${fileBytes} bytes) to ${out}`,
+    );
     console.log(`archive: ${statSync(out).size} bytes, ${((Date.now() - started) / 1000).toFixed(1)} s`);
   } finally {
     rmSync(stage, { recursive: true, force: true });

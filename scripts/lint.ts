@@ -10,7 +10,12 @@ const root = resolve(import.meta.dirname, '..');
 const out = join(root, '.test-output');
 const bin = (name: string) => join(root, 'node_modules', '.bin', name);
 
-export interface LintCheck { name: string; problems: number; fails: boolean; detail: string }
+export interface LintCheck {
+  name: string;
+  problems: number;
+  fails: boolean;
+  detail: string;
+}
 
 function run(cmd: string, args: string[]): { status: number | null; stdout: string; stderr: string } {
   const res = spawnSync(cmd, args, { cwd: root, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
@@ -25,17 +30,35 @@ function eslint(): LintCheck {
   } catch {
     return { name: 'eslint', problems: 1, fails: true, detail: `eslint did not run: ${res.stderr.trim().slice(0, 400)}` };
   }
-  const lines = results.flatMap((f) => f.messages.map((m) => `${f.filePath.slice(root.length + 1)}:${m.line} ${m.message} (${m.ruleId ?? 'parse'})`));
+  const lines = results.flatMap((f) =>
+    f.messages.map((m) => `${f.filePath.slice(root.length + 1)}:${m.line} ${m.message} (${m.ruleId ?? 'parse'})`),
+  );
   return { name: 'eslint', problems: lines.length, fails: true, detail: lines.join('\n') };
 }
 
 function imports(): LintCheck {
-  const res = run(bin('depcruise'), ['src', 'server', 'shared', 'migrations', 'tests', 'scripts', '--config', '.dependency-cruiser.cjs', '--output-type', 'json']);
+  const res = run(bin('depcruise'), [
+    'src',
+    'server',
+    'shared',
+    'migrations',
+    'tests',
+    'scripts',
+    '--config',
+    '.dependency-cruiser.cjs',
+    '--output-type',
+    'json',
+  ]);
   let summary: { violations: { from: string; to: string; rule: { name: string } }[] };
   try {
     summary = JSON.parse(res.stdout).summary;
   } catch {
-    return { name: 'imports', problems: 1, fails: true, detail: `dependency-cruiser did not run: ${res.stderr.trim().slice(0, 400)}` };
+    return {
+      name: 'imports',
+      problems: 1,
+      fails: true,
+      detail: `dependency-cruiser did not run: ${res.stderr.trim().slice(0, 400)}`,
+    };
   }
   const lines = summary.violations.map((v) => `${v.rule.name}: ${v.from} → ${v.to}`);
   return { name: 'imports', problems: lines.length, fails: true, detail: lines.join('\n') };
@@ -51,7 +74,9 @@ function duplicates(): LintCheck {
   const report = JSON.parse(readFileSync(file, 'utf8')) as {
     duplicates: { lines: number; firstFile: { name: string; start: number }; secondFile: { name: string; start: number } }[];
   };
-  const lines = report.duplicates.map((d) => `${d.lines} lines: ${d.firstFile.name}:${d.firstFile.start} = ${d.secondFile.name}:${d.secondFile.start}`);
+  const lines = report.duplicates.map(
+    (d) => `${d.lines} lines: ${d.firstFile.name}:${d.firstFile.start} = ${d.secondFile.name}:${d.secondFile.start}`,
+  );
   // Reported only for now: the codebase issue that removes the remaining repetition turns this on.
   return { name: 'duplicates', problems: lines.length, fails: false, detail: lines.join('\n') };
 }
@@ -64,7 +89,13 @@ export function printChecks(checks: LintCheck[]): void {
   for (const c of checks) {
     const verdict = c.problems === 0 ? 'clean' : c.fails ? `${c.problems} problem(s)` : `${c.problems} reported`;
     console.log(`[lint] ${c.name}: ${verdict}`);
-    if (c.problems > 0 && c.detail) console.log(c.detail.split('\n').map((l) => `  ${l}`).join('\n'));
+    if (c.problems > 0 && c.detail)
+      console.log(
+        c.detail
+          .split('\n')
+          .map((l) => `  ${l}`)
+          .join('\n'),
+      );
   }
 }
 

@@ -47,7 +47,13 @@ async function buildInMemory(): Promise<Chunk[]> {
   process.env.NODE_ENV = 'production';
   let out: Awaited<ReturnType<typeof build>>;
   try {
-    out = await build({ root, mode: 'production', configFile: resolve(root, 'vite.config.ts'), logLevel: 'silent', build: { write: false } });
+    out = await build({
+      root,
+      mode: 'production',
+      configFile: resolve(root, 'vite.config.ts'),
+      logLevel: 'silent',
+      build: { write: false },
+    });
   } finally {
     if (nodeEnv === undefined) delete process.env.NODE_ENV;
     else process.env.NODE_ENV = nodeEnv;
@@ -110,15 +116,25 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   console.log('Client page (/p/<token>), gzip:');
   for (const c of r.initial) console.log(`  initial  ${kb(c.gzipBytes).padStart(9)}  ${c.file}`);
   for (const c of r.lazy) console.log(`  3D view  ${kb(c.gzipBytes).padStart(9)}  ${c.file}`);
-  console.log(`  before the page shows: ${kb(r.initialGzipBytes)}; with the 3D view: ${kb(r.initialGzipBytes + r.lazyGzipBytes)}`);
+  console.log(
+    `  before the page shows: ${kb(r.initialGzipBytes)}; with the 3D view: ${kb(r.initialGzipBytes + r.lazyGzipBytes)}`,
+  );
   console.log(`Designer app entry for comparison: ${kb(r.appInitialGzipBytes)}`);
   const designer = [...r.initialModules, ...r.lazyModules].filter((m) => DESIGNER_MODULE.test(m));
-  console.log(designer.length === 0 ? 'No designer modules in the client page.' : `Designer modules found:\n  ${designer.join('\n  ')}`);
+  console.log(
+    designer.length === 0 ? 'No designer modules in the client page.' : `Designer modules found:\n  ${designer.join('\n  ')}`,
+  );
   const heaviest = new Map<string, number>();
   for (const m of r.initialModules) {
     const pkg = /node_modules\/((?:@[^/]+\/)?[^/]+)/.exec(m)?.[1] ?? m.split('/').slice(0, 2).join('/');
     heaviest.set(pkg, (heaviest.get(pkg) ?? 0) + 1);
   }
-  if (process.argv.includes('--modules')) console.log([...heaviest.entries()].sort((a, b) => b[1] - a[1]).map(([k, n]) => `  ${n}\t${k}`).join('\n'));
+  if (process.argv.includes('--modules'))
+    console.log(
+      [...heaviest.entries()]
+        .sort((a, b) => b[1] - a[1])
+        .map(([k, n]) => `  ${n}\t${k}`)
+        .join('\n'),
+    );
   process.exit(designer.length === 0 ? 0 : 1);
 }

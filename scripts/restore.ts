@@ -27,21 +27,37 @@ async function main(): Promise<void> {
     run('tar', ['-xzf', resolve(file), '-C', stage]);
     const manifest = JSON.parse(readFileSync(join(stage, 'manifest.json'), 'utf8')) as BackupManifest;
     if (manifest.format !== BACKUP_FORMAT || manifest.version !== BACKUP_VERSION) {
-      throw new Error(`not a Parlour backup this version can read (format ${String(manifest.format)}, version ${String(manifest.version)})`);
+      throw new Error(
+        `not a Parlour backup this version can read (format ${String(manifest.format)}, version ${String(manifest.version)})`,
+      );
     }
 
     const client = new pg.Client({ connectionString: target.databaseUrl });
     await client.connect();
     try {
       const existing = await client.query(`select count(*)::int as n from pg_tables where schemaname = 'public'`);
-      if (Number(existing.rows[0].n) > 0) throw new Error('the database already has tables: restore needs an empty one (a new database, or a fresh DATA_DIR)');
-      for await (const key of target.storage.keys()) throw new Error(`the file store already holds files (${key}, …): restore needs an empty one`);
+      if (Number(existing.rows[0].n) > 0)
+        throw new Error('the database already has tables: restore needs an empty one (a new database, or a fresh DATA_DIR)');
+      for await (const key of target.storage.keys())
+        throw new Error(`the file store already holds files (${key}, …): restore needs an empty one`);
       const keyFile = join(target.dataDir, PRESENTATION_KEY_FILE);
-      if (manifest.presentationKey && existsSync(keyFile) && readFileSync(keyFile, 'utf8') !== readFileSync(join(stage, PRESENTATION_KEY_FILE), 'utf8')) {
-        throw new Error(`${keyFile} holds another key: links signed with the backed-up key would stop working. Move it away first.`);
+      if (
+        manifest.presentationKey &&
+        existsSync(keyFile) &&
+        readFileSync(keyFile, 'utf8') !== readFileSync(join(stage, PRESENTATION_KEY_FILE), 'utf8')
+      ) {
+        throw new Error(
+          `${keyFile} holds another key: links signed with the backed-up key would stop working. Move it away first.`,
+        );
       }
 
-      run(join(binDir(), 'pg_restore'), ['--no-owner', '--no-privileges', '--exit-on-error', `--dbname=${target.databaseUrl}`, join(stage, 'database.dump')]);
+      run(join(binDir(), 'pg_restore'), [
+        '--no-owner',
+        '--no-privileges',
+        '--exit-on-error',
+        `--dbname=${target.databaseUrl}`,
+        join(stage, 'database.dump'),
+      ]);
       const stagedFiles = join(stage, 'files');
       const keys = filesUnder(stagedFiles);
       for (const key of keys) await target.storage.put(key, readFileSync(join(stagedFiles, key)));
@@ -54,9 +70,12 @@ async function main(): Promise<void> {
       const rows = await tableCounts((text) => client.query(text));
       const differ = Object.keys({ ...manifest.rows, ...rows }).filter((t) => manifest.rows[t] !== rows[t]);
       if (differ.length > 0) throw new Error(`restored row counts differ from the backup's in: ${differ.join(', ')}`);
-      if (keys.length !== manifest.files) throw new Error(`the archive holds ${keys.length} files, its manifest says ${manifest.files}`);
+      if (keys.length !== manifest.files)
+        throw new Error(`the archive holds ${keys.length} files, its manifest says ${manifest.files}`);
       const totalRows = Object.values(rows).reduce((a, b) => a + b, 0);
-      console.log(`Restored ${totalRows} rows in ${Object.keys(rows).length} tables and ${keys.length} files from ${file} in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+      console.log(
+        `Restored ${totalRows} rows in ${Object.keys(rows).length} tables and ${keys.length} files from ${file} in ${((Date.now() - started) / 1000).toFixed(1)} s`,
+      );
     } finally {
       await client.end();
     }

@@ -30,7 +30,12 @@ await page.locator('[data-testid^=piece-sofa]').click();
 await page.waitForTimeout(2500);
 await shot('editor');
 await page.getByRole('button', { name: /Check/ }).click();
-await page.getByRole('list', { name: 'Findings' }).getByRole('button').first().click().catch(() => undefined);
+await page
+  .getByRole('list', { name: 'Findings' })
+  .getByRole('button')
+  .first()
+  .click()
+  .catch(() => undefined);
 await page.waitForTimeout(1000);
 await shot('editor-check');
 for (const extra of (process.env.SHOTS ?? '').split(',').filter(Boolean)) {

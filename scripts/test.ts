@@ -11,7 +11,11 @@ const root = resolve(import.meta.dirname, '..');
 const out = join(root, '.test-output');
 const only = process.argv.slice(2); // e.g. `npm test -- unit`, `-- api`, `-- ops`, `-- lint`, `-- typecheck` or `-- e2e`
 
-interface Tally { passed: number; failed: number; skipped: number }
+interface Tally {
+  passed: number;
+  failed: number;
+  skipped: number;
+}
 const total: Tally = { passed: 0, failed: 0, skipped: 0 };
 let lintSummary = '';
 
@@ -24,7 +28,16 @@ function runVitest(name: string, config: string, env: NodeJS.ProcessEnv, project
   rmSync(json, { force: true });
   const res = spawnSync(
     process.execPath,
-    [join(root, 'node_modules/vitest/vitest.mjs'), 'run', '--config', config, ...projects.flatMap((p) => ['--project', p]), '--reporter=default', '--reporter=json', `--outputFile.json=${json}`],
+    [
+      join(root, 'node_modules/vitest/vitest.mjs'),
+      'run',
+      '--config',
+      config,
+      ...projects.flatMap((p) => ['--project', p]),
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${json}`,
+    ],
     { cwd: root, stdio: 'inherit', env: { ...env, NO_COLOR: '1' } },
   );
   if (!existsSync(json)) {
@@ -33,7 +46,10 @@ function runVitest(name: string, config: string, env: NodeJS.ProcessEnv, project
     return;
   }
   const r = JSON.parse(readFileSync(json, 'utf8')) as {
-    numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests?: number;
+    numPassedTests: number;
+    numFailedTests: number;
+    numPendingTests: number;
+    numTodoTests?: number;
     numFailedTestSuites?: number;
   };
   total.passed += r.numPassedTests;
@@ -69,7 +85,11 @@ async function main(): Promise<number> {
     }
     if (step('typecheck')) {
       console.log('\n[test] typecheck');
-      const tsc = spawnSync(process.execPath, [join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json'], { cwd: root, stdio: 'inherit' });
+      const tsc = spawnSync(
+        process.execPath,
+        [join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json'],
+        { cwd: root, stdio: 'inherit' },
+      );
       if (tsc.status === 0) total.passed += 1;
       else total.failed += 1;
     }

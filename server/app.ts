@@ -28,7 +28,19 @@ const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
-  return [...authRoutes, ...studioRoutes, ...clientRoutes, ...projectRoutes([projectRoomsExtra]), ...roomRoutes, ...finishRoutes, ...fileRoutes, ...presentationRoutes, ...clientPresentationRoutes, ...scheduleRoutes, ...outboxRoutes];
+  return [
+    ...authRoutes,
+    ...studioRoutes,
+    ...clientRoutes,
+    ...projectRoutes([projectRoomsExtra]),
+    ...roomRoutes,
+    ...finishRoutes,
+    ...fileRoutes,
+    ...presentationRoutes,
+    ...clientPresentationRoutes,
+    ...scheduleRoutes,
+    ...outboxRoutes,
+  ];
 }
 
 export function createApp(deps: AppDeps): Express {

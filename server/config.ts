@@ -8,46 +8,48 @@ import { z } from 'zod';
 const MIN_PRESENTATION_KEY_BYTES = 32;
 const PRESENTATION_KEY_FILE = 'presentation-key';
 
-const envSchema = z.object({
-  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
-  HOST: z.string().default('127.0.0.1'),
-  PORT: z.coerce.number().int().min(0).max(65535).default(5480),
-  DATABASE_URL: z.string().min(1, 'DATABASE_URL is required'),
-  PUBLIC_URL: z.string().url().optional(),
-  SMTP_HOST: z.string().default('127.0.0.1'),
-  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(5482),
-  MAIL_FROM: z.string().default('Parlour <no-reply@parlour.local>'),
-  // Set when mail goes to the local stand-in SMTP server (which files it here): the app then records
-  // what it sends per studio and shows each studio its own on the Outbox page.
-  OUTBOX_DIR: z.string().optional(),
-  DATA_DIR: z.string().default('data'),
-  CLIENT_DIST: z.string().default('dist'),
-  SECURE_COOKIES: z
-    .enum(['true', 'false'])
-    .default('false')
-    .transform((v) => v === 'true'),
-  // Signs presentation links (hex or base64, at least 256 bits). Without it, one is generated
-  // into DATA_DIR/presentation-key on first start; every instance must share the same key.
-  PRESENTATION_KEY: z.string().trim().min(1).optional(),
-  // Structured log lines on stdout; tests are quiet unless asked.
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
-  // Where photos and textures are kept: DATA_DIR/files, or an S3-compatible bucket shared by
-  // every instance.
-  STORAGE: z.enum(['local', 's3']).default('local'),
-  S3_ENDPOINT: z.string().url().optional(),
-  S3_BUCKET: z.string().min(1).optional(),
-  S3_REGION: z.string().min(1).default('us-east-1'),
-  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
-  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
-  // Stand-ins and many self-hosted stores want bucket/key paths rather than bucket host names.
-  S3_FORCE_PATH_STYLE: z
-    .enum(['true', 'false'])
-    .default('false')
-    .transform((v) => v === 'true'),
-  // New studios per hour from one client address (IPv6 counted per /64): sign-up is open, so this
-  // is what keeps per-studio limits from being beaten by signing up again. Tests raise it.
-  SIGN_UP_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(5),
-}).refine((c) => c.STORAGE !== 's3' || c.S3_BUCKET, { path: ['S3_BUCKET'], message: 'is required when STORAGE=s3' });
+const envSchema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+    HOST: z.string().default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(5480),
+    DATABASE_URL: z.string().min(1, 'DATABASE_URL is required'),
+    PUBLIC_URL: z.string().url().optional(),
+    SMTP_HOST: z.string().default('127.0.0.1'),
+    SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(5482),
+    MAIL_FROM: z.string().default('Parlour <no-reply@parlour.local>'),
+    // Set when mail goes to the local stand-in SMTP server (which files it here): the app then records
+    // what it sends per studio and shows each studio its own on the Outbox page.
+    OUTBOX_DIR: z.string().optional(),
+    DATA_DIR: z.string().default('data'),
+    CLIENT_DIST: z.string().default('dist'),
+    SECURE_COOKIES: z
+      .enum(['true', 'false'])
+      .default('false')
+      .transform((v) => v === 'true'),
+    // Signs presentation links (hex or base64, at least 256 bits). Without it, one is generated
+    // into DATA_DIR/presentation-key on first start; every instance must share the same key.
+    PRESENTATION_KEY: z.string().trim().min(1).optional(),
+    // Structured log lines on stdout; tests are quiet unless asked.
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+    // Where photos and textures are kept: DATA_DIR/files, or an S3-compatible bucket shared by
+    // every instance.
+    STORAGE: z.enum(['local', 's3']).default('local'),
+    S3_ENDPOINT: z.string().url().optional(),
+    S3_BUCKET: z.string().min(1).optional(),
+    S3_REGION: z.string().min(1).default('us-east-1'),
+    S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+    S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+    // Stand-ins and many self-hosted stores want bucket/key paths rather than bucket host names.
+    S3_FORCE_PATH_STYLE: z
+      .enum(['true', 'false'])
+      .default('false')
+      .transform((v) => v === 'true'),
+    // New studios per hour from one client address (IPv6 counted per /64): sign-up is open, so this
+    // is what keeps per-studio limits from being beaten by signing up again. Tests raise it.
+    SIGN_UP_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(5),
+  })
+  .refine((c) => c.STORAGE !== 's3' || c.S3_BUCKET, { path: ['S3_BUCKET'], message: 'is required when STORAGE=s3' });
 
 type LogLevel = NonNullable<z.infer<typeof envSchema>['LOG_LEVEL']>;
 
@@ -79,7 +81,9 @@ export function decodeKey(text: string, name: string): Uint8Array {
   else if (/^[A-Za-z0-9+/_-]+={0,2}$/.test(value)) bytes = Buffer.from(value, 'base64');
   else throw new Error(`Invalid configuration:\n  ${name}: write the key as hex or base64`);
   if (bytes.length < MIN_PRESENTATION_KEY_BYTES) {
-    throw new Error(`Invalid configuration:\n  ${name}: needs at least ${MIN_PRESENTATION_KEY_BYTES * 8} bits, this one has ${bytes.length * 8}`);
+    throw new Error(
+      `Invalid configuration:\n  ${name}: needs at least ${MIN_PRESENTATION_KEY_BYTES * 8} bits, this one has ${bytes.length * 8}`,
+    );
   }
   return new Uint8Array(bytes);
 }

@@ -17,8 +17,15 @@ function median(values: number[]): number {
 export async function benchEditor(): Promise<void> {
   const { shell } = typicalRoom();
   const pieces = Array.from({ length: PIECES }, (_, i) => ({
-    id: `p${i}`, name: `Piece ${i}`, x: 500 + (i % 10) * 450, y: 500 + Math.floor(i / 10) * 600,
-    width: 380, depth: 300, height: 500, rotation: (i * 15) % 360, status: 'new' as const,
+    id: `p${i}`,
+    name: `Piece ${i}`,
+    x: 500 + (i % 10) * 450,
+    y: 500 + Math.floor(i / 10) * 600,
+    width: 380,
+    depth: 300,
+    height: 500,
+    rotation: (i * 15) % 360,
+    status: 'new' as const,
   }));
   const option = optionDocSchema.parse({ pieces });
   let history = createHistory({ shell, options: { a: option } });
@@ -40,5 +47,7 @@ export async function benchEditor(): Promise<void> {
     scene.push(t3 - t2);
   }
   const steps = history.undoSteps.length;
-  console.log(`editor: drag event in a room of ${PIECES} pieces (${EVENTS} events, median ms): command ${median(command).toFixed(3)}, plan layout ${median(layout).toFixed(3)}, 3D scene data ${median(scene).toFixed(3)}; total ${(median(command) + median(layout) + median(scene)).toFixed(3)} ms of a 16.7 ms frame; the drag is ${steps} undo step`);
+  console.log(
+    `editor: drag event in a room of ${PIECES} pieces (${EVENTS} events, median ms): command ${median(command).toFixed(3)}, plan layout ${median(layout).toFixed(3)}, 3D scene data ${median(scene).toFixed(3)}; total ${(median(command) + median(layout) + median(scene)).toFixed(3)} ms of a 16.7 ms frame; the drag is ${steps} undo step`,
+  );
 }

@@ -79,7 +79,10 @@ function alone(run: () => unknown): Spread {
 }
 
 const ms = (s: Spread): string => `${s.median.toFixed(2)} ms median (${s.min.toFixed(2)}–${s.max.toFixed(2)})`;
-const load = (): string => loadavg().map((l) => l.toFixed(2)).join(' ');
+const load = (): string =>
+  loadavg()
+    .map((l) => l.toFixed(2))
+    .join(' ');
 
 /**
  * Prints milliseconds per fit check on a typical room of 40 pieces and a large one of 200: each
@@ -105,7 +108,11 @@ export async function benchFit(): Promise<void> {
     ];
     for (const [check, run] of checks) console.log(`fit: ${name}: ${check}: ${ms(alone(run))} (${REPEATS} runs)`);
     const pairs: [string, () => unknown, () => unknown][] = [
-      ['walkway (narrow-walkway, unreachable)', () => findWalkwayProblems(shell, boxes, DEFAULT_WALKWAY_MM), () => referenceWalkway(shell, boxes, DEFAULT_WALKWAY_MM)],
+      [
+        'walkway (narrow-walkway, unreachable)',
+        () => findWalkwayProblems(shell, boxes, DEFAULT_WALKWAY_MM),
+        () => referenceWalkway(shell, boxes, DEFAULT_WALKWAY_MM),
+      ],
       ['checkFit, all checks', () => checkFit(shell, pieces), () => referenceCheckFit(shell, pieces)],
     ];
     for (const [check, ours, reference] of pairs) {
@@ -121,10 +128,14 @@ export async function benchFit(): Promise<void> {
       if (check.startsWith('checkFit')) {
         const met = ratio >= WANTED_RATIO[size];
         missed ||= !met;
-        console.log(`fit: ${name}: all checks ${ratio.toFixed(1)}× faster than the reference, wanted ≥ ${WANTED_RATIO[size]}×: ${met ? 'met' : 'MISSED'}`);
+        console.log(
+          `fit: ${name}: all checks ${ratio.toFixed(1)}× faster than the reference, wanted ≥ ${WANTED_RATIO[size]}×: ${met ? 'met' : 'MISSED'}`,
+        );
         if (size === 'typical') {
           const total = timed.ours.wall.median;
-          console.log(`fit: typical room all checks ${total.toFixed(1)} ms, budget ${TYPICAL_BUDGET_MS} ms: ${total < TYPICAL_BUDGET_MS ? 'within' : 'OVER'}`);
+          console.log(
+            `fit: typical room all checks ${total.toFixed(1)} ms, budget ${TYPICAL_BUDGET_MS} ms: ${total < TYPICAL_BUDGET_MS ? 'within' : 'OVER'}`,
+          );
         }
       }
     }

@@ -67,13 +67,21 @@ export async function benchImages(): Promise<void> {
       .jpeg({ quality: 90 })
       .toBuffer();
     writeFileSync(file, photo);
-    const child = spawnSync(process.execPath, ['--import', 'tsx', fileURLToPath(import.meta.url), WORKER_FLAG, file], { encoding: 'utf8' });
+    const child = spawnSync(process.execPath, ['--import', 'tsx', fileURLToPath(import.meta.url), WORKER_FLAG, file], {
+      encoding: 'utf8',
+    });
     if (child.status !== 0) throw new Error(`images bench worker failed: ${child.stderr}`);
     const r = JSON.parse(child.stdout.trim().split('\n').pop()!) as WorkerResult;
     const verdict = (ms: number) => (ms < TARGET_MS ? 'within' : 'OVER');
-    console.log(`images: ${WIDTH_PX} × ${HEIGHT_PX} JPEG, ${(photo.length / 1e6).toFixed(1)} MB, EXIF orientation 6 + GPS; ${REPEATS} runs each in one process`);
-    console.log(`images: upload processing ${median(r.uploadMs).toFixed(0)} ms median, ${Math.min(...r.uploadMs).toFixed(0)} best — ${verdict(median(r.uploadMs))} the ${TARGET_MS} ms target`);
-    console.log(`images: re-crop from the kept original ${median(r.recropMs).toFixed(0)} ms median, ${Math.min(...r.recropMs).toFixed(0)} best`);
+    console.log(
+      `images: ${WIDTH_PX} × ${HEIGHT_PX} JPEG, ${(photo.length / 1e6).toFixed(1)} MB, EXIF orientation 6 + GPS; ${REPEATS} runs each in one process`,
+    );
+    console.log(
+      `images: upload processing ${median(r.uploadMs).toFixed(0)} ms median, ${Math.min(...r.uploadMs).toFixed(0)} best — ${verdict(median(r.uploadMs))} the ${TARGET_MS} ms target`,
+    );
+    console.log(
+      `images: re-crop from the kept original ${median(r.recropMs).toFixed(0)} ms median, ${Math.min(...r.recropMs).toFixed(0)} best`,
+    );
     console.log(
       `images: peak rss ${r.firstRssMb.toFixed(0)} MB for the first photo, ${r.maxRssMb.toFixed(0)} MB after all ${REPEATS * 2} ` +
         `(Node and sharp loaded: ${r.baselineRssMb.toFixed(0)} MB) — ${r.maxRssMb < TARGET_RSS_MB ? 'within' : 'OVER'} the ${TARGET_RSS_MB} MB target`,

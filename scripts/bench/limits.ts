@@ -26,7 +26,10 @@ const PIECES_PER_OPTION = 300;
 const REQUEST_REPEATS = 10;
 const CHECK_REPEATS = 300;
 
-const load = () => `load ${loadavg().map((v) => v.toFixed(2)).join(' ')}`;
+const load = () =>
+  `load ${loadavg()
+    .map((v) => v.toFixed(2))
+    .join(' ')}`;
 const ms = (v: number) => v.toFixed(v < 1 ? 3 : 1);
 
 // The slowest run on a shared, busy machine is mostly the process waiting for a core, so the
@@ -65,7 +68,14 @@ export async function benchLimits(): Promise<void> {
   let server: Server | null = null;
   try {
     await migrateToLatest(db);
-    const config = loadConfig({ DATABASE_URL: database.url, NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.bench', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: 'c4'.repeat(32), LOG_LEVEL: 'silent' });
+    const config = loadConfig({
+      DATABASE_URL: database.url,
+      NODE_ENV: 'test',
+      PUBLIC_URL: 'http://parlour.bench',
+      CLIENT_DIST: '/nonexistent',
+      PRESENTATION_KEY: 'c4'.repeat(32),
+      LOG_LEVEL: 'silent',
+    });
     const app = createApp({ db, mailer: { send: async () => undefined }, config });
     server = createServer(app);
     // The timed checks below leave the connections idle for a while: keep them open meanwhile.
@@ -76,33 +86,54 @@ export async function benchLimits(): Promise<void> {
     const signUp = await fetch(`${base}/api/auth/sign-up`, {
       method: 'POST',
       headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ studioName: 'Bench Studio', name: 'Bea Bench', email: `limits-${process.pid}@bench.parlour`, password: 'a-long-benchmark-password' }),
+      body: JSON.stringify({
+        studioName: 'Bench Studio',
+        name: 'Bea Bench',
+        email: `limits-${process.pid}@bench.parlour`,
+        password: 'a-long-benchmark-password',
+      }),
     });
     if (signUp.status !== 201) throw new Error(`sign-up failed: ${signUp.status}`);
-    const cookie = signUp.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const cookie = signUp.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .join('; ');
     const call = async (method: string, path: string, body?: unknown) => {
-      const res = await fetch(`${base}${path}`, { method, headers: { cookie, 'content-type': 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) });
+      const res = await fetch(`${base}${path}`, {
+        method,
+        headers: { cookie, 'content-type': 'application/json' },
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
       // eslint-disable-next-line @typescript-eslint/no-explicit-any -- the bench reads whatever JSON the API answers
       return { status: res.status, body: (await res.json()) as Record<string, any> };
     };
     const me = () => timed(() => call('GET', '/api/auth/me'));
-    const projectId = (await call('POST', '/api/projects', { name: 'Bench project', newClient: { name: 'Bench client' } })).body.project.id as string;
+    const projectId = (await call('POST', '/api/projects', { name: 'Bench project', newClient: { name: 'Bench client' } })).body
+      .project.id as string;
 
     const alone: number[] = [];
     for (let i = 0; i < REQUEST_REPEATS * 2; i++) alone.push((await me()).ms);
     console.log(`limits: GET /api/auth/me alone: ${summary(alone)}; ${load()}`);
 
     // A refused 4,000-corner outline (88 KB), with GET /api/auth/me sent while it is on its way.
-    const drum = Array.from({ length: 4000 }, (_, i) => [Math.round(5000 * Math.cos((2 * Math.PI * i) / 4000)), Math.round(5000 * Math.sin((2 * Math.PI * i) / 4000))]);
+    const drum = Array.from({ length: 4000 }, (_, i) => [
+      Math.round(5000 * Math.cos((2 * Math.PI * i) / 4000)),
+      Math.round(5000 * Math.sin((2 * Math.PI * i) / 4000)),
+    ]);
     const refused: number[] = [];
     const waited: number[] = [];
     for (let i = 0; i < REQUEST_REPEATS; i++) {
-      const [big, other] = await Promise.all([timed(() => call('POST', `/api/projects/${projectId}/rooms`, { name: 'Drum', shell: { outline: drum } })), me()]);
+      const [big, other] = await Promise.all([
+        timed(() => call('POST', `/api/projects/${projectId}/rooms`, { name: 'Drum', shell: { outline: drum } })),
+        me(),
+      ]);
       if (big.value.status !== 400) throw new Error(`the 4,000-corner room was not refused: ${big.value.status}`);
       refused.push(big.ms);
       waited.push(other.ms);
     }
-    console.log(`limits: refused 4,000-corner room (POST, ${Math.round(JSON.stringify({ outline: drum }).length / 1024)} KB): ${summary(refused)}; ${load()}`);
+    console.log(
+      `limits: refused 4,000-corner room (POST, ${Math.round(JSON.stringify({ outline: drum }).length / 1024)} KB): ${summary(refused)}; ${load()}`,
+    );
     console.log(`limits:   GET /api/auth/me sent beside it: ${summary(waited)}; ${load()}`);
 
     // The crossing check at the cap: a star (every wall crosses ~196 others; the list stops at 20),
@@ -125,13 +156,23 @@ export async function benchLimits(): Promise<void> {
         validateRoomShell(roomShellSchema.parse({ outline }));
         whole.push(performance.now() - started);
       }
-      console.log(`limits: 200-corner crossing check, ${name} (${validateRoomShell(shell).length} problems listed): ${summary(check)}; schema + all rules ${summary(whole)}; ${load()}`);
+      console.log(
+        `limits: 200-corner crossing check, ${name} (${validateRoomShell(shell).length} problems listed): ${summary(check)}; schema + all rules ${summary(whole)}; ${load()}`,
+      );
     }
 
     // A compare of 3 rooms of 998.6 m², 2 options each of 300 pieces, with GET /api/auth/me sent
     // one after another while it runs.
-    const bigShell = { outline: [[0, 0], [BIG_SIDE_MM, 0], [BIG_SIDE_MM, BIG_SIDE_MM], [0, BIG_SIDE_MM]] };
-    const bigProject = (await call('POST', '/api/projects', { name: 'Big project', newClient: { name: 'Big client' } })).body.project.id as string;
+    const bigShell = {
+      outline: [
+        [0, 0],
+        [BIG_SIDE_MM, 0],
+        [BIG_SIDE_MM, BIG_SIDE_MM],
+        [0, BIG_SIDE_MM],
+      ],
+    };
+    const bigProject = (await call('POST', '/api/projects', { name: 'Big project', newClient: { name: 'Big client' } })).body
+      .project.id as string;
     const slices: number[] = [];
     const fits: number[] = [];
     const floors: number[] = [];
@@ -139,7 +180,8 @@ export async function benchLimits(): Promise<void> {
       const created = await call('POST', `/api/projects/${bigProject}/rooms`, { name: `Hall ${r + 1}`, shell: bigShell });
       if (created.status !== 201) throw new Error(`big room refused: ${JSON.stringify(created.body)}`);
       const optionIds = [created.body.options[0].id as string];
-      for (let o = 1; o < OPTIONS_PER_ROOM; o++) optionIds.push((await call('POST', `/api/rooms/${created.body.room.id}/options`, { name: `O${o}` })).body.option.id);
+      for (let o = 1; o < OPTIONS_PER_ROOM; o++)
+        optionIds.push((await call('POST', `/api/rooms/${created.body.room.id}/options`, { name: `O${o}` })).body.option.id);
       for (const [o, id] of optionIds.entries()) {
         const doc = { pieces: bigPieces(r * OPTIONS_PER_ROOM + o) };
         const saved = await call('PUT', `/api/options/${id}`, { version: 1, doc });
@@ -169,10 +211,16 @@ export async function benchLimits(): Promise<void> {
       compares.push(took);
     }
     const options = BIG_ROOMS * OPTIONS_PER_ROOM;
-    console.log(`limits: compare, ${BIG_ROOMS} rooms of 998.6 m² × ${OPTIONS_PER_ROOM} options × ${PIECES_PER_OPTION} pieces: ${summary(compares)}; ${load()}`);
-    console.log(`limits:   one option's fit check and free floor (the longest slice between yields): ${summary(slices)}; ${load()}`);
+    console.log(
+      `limits: compare, ${BIG_ROOMS} rooms of 998.6 m² × ${OPTIONS_PER_ROOM} options × ${PIECES_PER_OPTION} pieces: ${summary(compares)}; ${load()}`,
+    );
+    console.log(
+      `limits:   one option's fit check and free floor (the longest slice between yields): ${summary(slices)}; ${load()}`,
+    );
     console.log(`limits:     of which the fit check ${summary(fits)}, the free floor ${summary(floors)}; ${load()}`);
-    console.log(`limits:   GET /api/auth/me one after another meanwhile: ${summary(meanwhile)}; ${load()} (${options} options, so about ${options + 1} waits per compare)`);
+    console.log(
+      `limits:   GET /api/auth/me one after another meanwhile: ${summary(meanwhile)}; ${load()} (${options} options, so about ${options + 1} waits per compare)`,
+    );
   } finally {
     if (server) await new Promise((resolve) => server!.close(resolve));
     await db.destroy();

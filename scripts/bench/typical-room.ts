@@ -7,7 +7,16 @@ import { roomShellSchema, type RoomShell } from '../../shared/schemas/room';
  */
 export function typicalRoom(): { shell: RoomShell; option: OptionDoc } {
   const shell = roomShellSchema.parse({
-    outline: [[0, 0], [6000, 0], [6000, 2500], [5000, 3500], [5000, 5000], [2000, 5000], [2000, 4000], [0, 4000]],
+    outline: [
+      [0, 0],
+      [6000, 0],
+      [6000, 2500],
+      [5000, 3500],
+      [5000, 5000],
+      [2000, 5000],
+      [2000, 4000],
+      [0, 4000],
+    ],
     openings: [
       { id: 'door-hall', type: 'door', wall: 0, offset: 300, width: 850, height: 2040, hinge: 'start', swing: 'in' },
       { id: 'window-east', type: 'window', wall: 0, offset: 2500, width: 1800, height: 1300, sill: 850 },
@@ -53,8 +62,22 @@ export function largeRoom(): { shell: RoomShell; pieces: Piece[] } {
 
 /** Kinds the typical furnished room cycles through: at least twelve, as a furnished flat has. */
 export const TYPICAL_KINDS = [
-  'sofa', 'armchair', 'dining-chair', 'coffee-table', 'dining-table', 'bed', 'wardrobe', 'chest-of-drawers', 'bookcase', 'sideboard',
-  'floor-lamp', 'plant', 'rug', 'desk', 'kitchen-base-unit', 'wall-cabinet',
+  'sofa',
+  'armchair',
+  'dining-chair',
+  'coffee-table',
+  'dining-table',
+  'bed',
+  'wardrobe',
+  'chest-of-drawers',
+  'bookcase',
+  'sideboard',
+  'floor-lamp',
+  'plant',
+  'rug',
+  'desk',
+  'kitchen-base-unit',
+  'wall-cabinet',
 ] as const;
 
 /** The typical room with each of its 40 pieces given a kind in turn (wall cabinets at their 1200 mm elevation). */
@@ -62,7 +85,13 @@ export function typicalFurnishedRoom(): { shell: RoomShell; option: OptionDoc } 
   const { shell, option } = typicalRoom();
   const pieces = option.pieces.map((p, i) => {
     const kind = TYPICAL_KINDS[i % TYPICAL_KINDS.length];
-    return { ...p, kind, elevation: kind === 'wall-cabinet' ? 1200 : 0, height: kind === 'rug' ? 10 : p.height, accentColour: '#5b4636' };
+    return {
+      ...p,
+      kind,
+      elevation: kind === 'wall-cabinet' ? 1200 : 0,
+      height: kind === 'rug' ? 10 : p.height,
+      accentColour: '#5b4636',
+    };
   });
   return { shell, option: optionDocSchema.parse({ pieces }) };
 }

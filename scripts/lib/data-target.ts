@@ -48,7 +48,9 @@ export async function openDataTarget(env: NodeJS.ProcessEnv = process.env): Prom
 }
 
 /** Rows per table in the public schema, by table name, for the manifest and for checking a restore. */
-export async function tableCounts(query: (text: string) => Promise<{ rows: Record<string, unknown>[] }>): Promise<Record<string, number>> {
+export async function tableCounts(
+  query: (text: string) => Promise<{ rows: Record<string, unknown>[] }>,
+): Promise<Record<string, number>> {
   const tables = await query(`select tablename from pg_tables where schemaname = 'public' order by tablename`);
   const counts: Record<string, number> = {};
   for (const { tablename } of tables.rows as { tablename: string }[]) {

@@ -49,7 +49,9 @@ function paths(o: ClusterOptions) {
 export function clusterRunning(o: ClusterOptions): boolean {
   if (!existsSync(join(o.dataDir, 'PG_VERSION'))) return false;
   const full = join(binDir(), 'pg_ctl');
-  const [file, argv] = isRoot() ? ['runuser', ['-u', 'postgres', '--', full, 'status', '-D', o.dataDir]] : [full, ['status', '-D', o.dataDir]];
+  const [file, argv] = isRoot()
+    ? ['runuser', ['-u', 'postgres', '--', full, 'status', '-D', o.dataDir]]
+    : [full, ['status', '-D', o.dataDir]];
   return spawnSync(file, argv, { stdio: 'pipe' }).status === 0;
 }
 
@@ -68,7 +70,8 @@ export function startCluster(o: ClusterOptions): boolean {
     writeFileSync(p.log, '');
     chownSync(p.log, uidOf('postgres'), gidOf('postgres'));
   }
-  const opts = `-c listen_addresses=127.0.0.1 -p ${o.port} -k ${p.socket} -c fsync=${o.fsync ? 'on' : 'off'}` +
+  const opts =
+    `-c listen_addresses=127.0.0.1 -p ${o.port} -k ${p.socket} -c fsync=${o.fsync ? 'on' : 'off'}` +
     (o.fsync ? '' : ' -c synchronous_commit=off -c full_page_writes=off');
   run('pg_ctl', ['-D', o.dataDir, '-l', p.log, '-w', '-t', '60', '-o', opts, 'start']);
   return true;

@@ -18,7 +18,11 @@ export interface ServerProcess {
 }
 
 /** Starts the app on `port` with `env` on top of a minimal environment; stdout and stderr go to `logFile`. */
-export async function startServerProcess(opts: { port: number; env: Record<string, string>; logFile: string }): Promise<ServerProcess> {
+export async function startServerProcess(opts: {
+  port: number;
+  env: Record<string, string>;
+  logFile: string;
+}): Promise<ServerProcess> {
   const fd = openSync(opts.logFile, 'a');
   // tsx as a loader in this one process (not its CLI, which runs the server in a grandchild): a
   // signal sent to the child reaches the server itself.
@@ -28,7 +32,9 @@ export async function startServerProcess(opts: { port: number; env: Record<strin
     stdio: ['ignore', fd, fd],
   });
   closeSync(fd);
-  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((res) => child.once('exit', (code, signal) => res({ code, signal })));
+  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((res) =>
+    child.once('exit', (code, signal) => res({ code, signal })),
+  );
   const url = `http://127.0.0.1:${opts.port}`;
   await waitUntilAnswering(url, exited);
   return {

@@ -68,7 +68,14 @@ describe('analyze command: measurements', () => {
   // skirting 18 − 0.8 − 0.9 = 16.3 m; flooring 17 × 1.1 = 18.7 m²; volume 17 × 2.5 = 42.5 m³.
   const lPlan = variant((plan) => {
     plan.room.wallHeight = 2500;
-    plan.room.outline = [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]];
+    plan.room.outline = [
+      [0, 0],
+      [5000, 0],
+      [5000, 2500],
+      [3000, 2500],
+      [3000, 4000],
+      [0, 4000],
+    ];
     plan.room.openings = [
       { id: 'w', type: 'window', wall: 0, offset: 1000, width: 1200, height: 1000, sill: 900 },
       { id: 'p', type: 'passage', wall: 3, offset: 300, width: 900, height: 2000 },
@@ -103,16 +110,25 @@ describe('analyze command: measurements', () => {
       });
     });
     const [asDrawn, other] = await Promise.all([takeoffOf(lPlan), takeoffOf(reversed)]);
-    for (const key of ['floorArea_m2', 'perimeter_m', 'netWallArea_m2', 'skirting_m', 'volume_m3'] as const) expect(other[key]).toBe(asDrawn[key]);
+    for (const key of ['floorArea_m2', 'perimeter_m', 'netWallArea_m2', 'skirting_m', 'volume_m3'] as const)
+      expect(other[key]).toBe(asDrawn[key]);
   });
 
   it('measures a splayed corner', async () => {
     // 4 × 3 m less a 0.7 m × 0.7 m triangle = 11.755 m²; perimeter 3.3 + 0.7√2 + 2.3 + 4 + 3 m
-    const t = await takeoffOf(variant((plan) => {
-      plan.room.outline = [[0, 0], [3300, 0], [4000, 700], [4000, 3000], [0, 3000]];
-      plan.room.openings = [];
-      plan.option.pieces = [];
-    }));
+    const t = await takeoffOf(
+      variant((plan) => {
+        plan.room.outline = [
+          [0, 0],
+          [3300, 0],
+          [4000, 700],
+          [4000, 3000],
+          [0, 3000],
+        ];
+        plan.room.openings = [];
+        plan.option.pieces = [];
+      }),
+    );
     within(t.floorArea_m2, 12 - 0.49 / 2);
     within(t.perimeter_m, 3.3 + 0.7 * Math.SQRT2 + 2.3 + 4 + 3);
     within(t.walls[1].grossArea_m2, 0.7 * Math.SQRT2 * 2.6);
@@ -120,9 +136,19 @@ describe('analyze command: measurements', () => {
 
   it('subtracts several openings on one wall', async () => {
     // wall 0 is 4.2 m × 2.6 m = 10.92 m²; three windows of 0.9 × 1.2 m = 3.24 m² → 7.68 m²
-    const t = await takeoffOf(variant((plan) => {
-      plan.room.openings = [0, 1, 2].map((k) => ({ id: `w${k}`, type: 'window', wall: 0, offset: 200 + k * 1300, width: 900, height: 1200, sill: 900 }));
-    }));
+    const t = await takeoffOf(
+      variant((plan) => {
+        plan.room.openings = [0, 1, 2].map((k) => ({
+          id: `w${k}`,
+          type: 'window',
+          wall: 0,
+          offset: 200 + k * 1300,
+          width: 900,
+          height: 1200,
+          sill: 900,
+        }));
+      }),
+    );
     within(t.walls[0].openingsArea_m2, 3.24);
     within(t.walls[0].netArea_m2, 7.68);
     within(t.skirting_m, 15.6);
@@ -152,16 +178,114 @@ describe('analyze command: refusals', () => {
   const cases: [string, () => string, RegExp][] = [
     ['a file that is not JSON', () => planFile('{"format": "parlour-plan",'), /not valid JSON/],
     ['a missing file', () => join(dir, 'no-such-plan.json'), /cannot read the file \(ENOENT\)/],
-    ['fewer than 3 corners', () => planFile(variant((p) => { p.room.outline = [[0, 0], [4200, 0]]; })), /room\.outline: needs at least 3 corners/],
-    ['crossing walls', () => planFile(variant((p) => { p.room.outline = [[0, 0], [4200, 0], [0, 3600], [4200, 3600]]; })), /room\.outline: wall 1 crosses wall 3/],
-    ['an opening longer than its wall', () => planFile(variant((p) => { p.room.openings[0].width = 4300; })), /room\.openings\[0\]\.width: longer than wall 0 \(4200 mm\)/],
-    ['overlapping openings', () => planFile(variant((p) => { p.room.openings.push({ id: 'w2', type: 'window', wall: 0, offset: 900, width: 1000, height: 1000, sill: 900 }); })), /room\.openings\[3\]\.offset: overlaps d1/],
-    ['a piece with a non-positive size', () => planFile(variant((p) => { p.option.pieces[0].width = 0; })), /option\.pieces\[0\]\.width: must be more than 0 mm/],
-    ['a negative piece height', () => planFile(variant((p) => { p.option.pieces[0].height = -850; })), /option\.pieces\[0\]\.height: must be more than 0 mm/],
-    ['the wrong format', () => planFile(variant((p) => { p.format = 'room-sketch'; })), /format: must be "parlour-plan"/],
-    ['the wrong version', () => planFile(variant((p) => { p.version = 2; })), /version: must be 1/],
-    ['a missing field', () => planFile(variant((p) => { delete p.room.openings[1].sill; })), /room\.openings\[1\]\.sill/],
-    ['a window above the wall', () => planFile(variant((p) => { p.room.openings[1].sill = 1800; })), /room\.openings\[1\]\.height: window head/],
+    [
+      'fewer than 3 corners',
+      () =>
+        planFile(
+          variant((p) => {
+            p.room.outline = [
+              [0, 0],
+              [4200, 0],
+            ];
+          }),
+        ),
+      /room\.outline: needs at least 3 corners/,
+    ],
+    [
+      'crossing walls',
+      () =>
+        planFile(
+          variant((p) => {
+            p.room.outline = [
+              [0, 0],
+              [4200, 0],
+              [0, 3600],
+              [4200, 3600],
+            ];
+          }),
+        ),
+      /room\.outline: wall 1 crosses wall 3/,
+    ],
+    [
+      'an opening longer than its wall',
+      () =>
+        planFile(
+          variant((p) => {
+            p.room.openings[0].width = 4300;
+          }),
+        ),
+      /room\.openings\[0\]\.width: longer than wall 0 \(4200 mm\)/,
+    ],
+    [
+      'overlapping openings',
+      () =>
+        planFile(
+          variant((p) => {
+            p.room.openings.push({ id: 'w2', type: 'window', wall: 0, offset: 900, width: 1000, height: 1000, sill: 900 });
+          }),
+        ),
+      /room\.openings\[3\]\.offset: overlaps d1/,
+    ],
+    [
+      'a piece with a non-positive size',
+      () =>
+        planFile(
+          variant((p) => {
+            p.option.pieces[0].width = 0;
+          }),
+        ),
+      /option\.pieces\[0\]\.width: must be more than 0 mm/,
+    ],
+    [
+      'a negative piece height',
+      () =>
+        planFile(
+          variant((p) => {
+            p.option.pieces[0].height = -850;
+          }),
+        ),
+      /option\.pieces\[0\]\.height: must be more than 0 mm/,
+    ],
+    [
+      'the wrong format',
+      () =>
+        planFile(
+          variant((p) => {
+            p.format = 'room-sketch';
+          }),
+        ),
+      /format: must be "parlour-plan"/,
+    ],
+    [
+      'the wrong version',
+      () =>
+        planFile(
+          variant((p) => {
+            p.version = 2;
+          }),
+        ),
+      /version: must be 1/,
+    ],
+    [
+      'a missing field',
+      () =>
+        planFile(
+          variant((p) => {
+            delete p.room.openings[1].sill;
+          }),
+        ),
+      /room\.openings\[1\]\.sill/,
+    ],
+    [
+      'a window above the wall',
+      () =>
+        planFile(
+          variant((p) => {
+            p.room.openings[1].sill = 1800;
+          }),
+        ),
+      /room\.openings\[1\]\.height: window head/,
+    ],
   ];
 
   for (const [name, file, message] of cases) {
@@ -208,7 +332,12 @@ describe('analyze command: fit check findings', () => {
     return layout;
   }
   async function findingsOf(layout: Layout, flags: string[] = []) {
-    return (await takeoffOf(planOf(layout), flags)).findings as { kind: string; pieces: string[]; message: string; measured_mm?: number }[];
+    return (await takeoffOf(planOf(layout), flags)).findings as {
+      kind: string;
+      pieces: string[];
+      message: string;
+      measured_mm?: number;
+    }[];
   }
 
   it('reports nothing on a clean layout, nor on the example plan', async () => {
@@ -217,13 +346,38 @@ describe('analyze command: fit check findings', () => {
   });
 
   const cases: [string, () => Layout, string[]][] = [
-    ['overlap', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'stool', x: 2200, y: 2500, width: 400, depth: 400, height: 450 }))), ['sofa', 'stool']],
-    ['outside-room', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'chest', x: 2000, y: 250, width: 800, depth: 600, height: 800 }))), ['chest']],
-    ['door-swing', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'wardrobe', x: 700, y: 400, width: 800, depth: 600, height: 2000 }))), ['wardrobe']],
-    ['window-blocked', () => withPieces((l) => { l.pieces[2] = { ...l.pieces[2], height: 950 }; }), ['sofa']],
+    [
+      'overlap',
+      () => withPieces((l) => l.pieces.push(pieceInput({ id: 'stool', x: 2200, y: 2500, width: 400, depth: 400, height: 450 }))),
+      ['sofa', 'stool'],
+    ],
+    [
+      'outside-room',
+      () => withPieces((l) => l.pieces.push(pieceInput({ id: 'chest', x: 2000, y: 250, width: 800, depth: 600, height: 800 }))),
+      ['chest'],
+    ],
+    [
+      'door-swing',
+      () =>
+        withPieces((l) => l.pieces.push(pieceInput({ id: 'wardrobe', x: 700, y: 400, width: 800, depth: 600, height: 2000 }))),
+      ['wardrobe'],
+    ],
+    [
+      'window-blocked',
+      () =>
+        withPieces((l) => {
+          l.pieces[2] = { ...l.pieces[2], height: 950 };
+        }),
+      ['sofa'],
+    ],
     ['narrow-walkway', () => gapLayout(), ['chest', 'bed']],
     ['unreachable', () => walledInLayout(), ['cabinet']],
-    ['too-big-for-door', () => withPieces((l) => l.pieces.push(pieceInput({ id: 'crate', x: 2000, y: 1400, width: 1000, depth: 1000, height: 1000 }))), ['crate']],
+    [
+      'too-big-for-door',
+      () =>
+        withPieces((l) => l.pieces.push(pieceInput({ id: 'crate', x: 2000, y: 1400, width: 1000, depth: 1000, height: 1000 }))),
+      ['crate'],
+    ],
   ];
   it.each(cases)('reports %s on a plan made to show it', async (kind, layout, pieces) => {
     const findings = await findingsOf(layout());

@@ -34,7 +34,10 @@ function parseAnalyzeArgs(args: readonly string[]): ParsedArgs {
       const text = inline ?? args[++i];
       const value = text === undefined || text.trim() === '' ? NaN : Number(text);
       if (!Number.isFinite(value) || !rule.accepts(value)) {
-        return { ok: false, message: `${flag}: expected ${rule.expected}, got ${text === undefined ? 'nothing' : JSON.stringify(text)}` };
+        return {
+          ok: false,
+          message: `${flag}: expected ${rule.expected}, got ${text === undefined ? 'nothing' : JSON.stringify(text)}`,
+        };
       }
       options[rule.key] = value;
     } else if (word.startsWith('-') && word !== '-') {

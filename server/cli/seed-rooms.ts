@@ -15,13 +15,25 @@ function loadPlan(file: string): PlanFile {
   return read.plan;
 }
 
-type Looks = (f: Record<string, string>) => { finishes: OptionDocInput['finishes']; pieceFinishes?: Record<string, string>; pieceAccents?: Record<string, string> };
+type Looks = (f: Record<string, string>) => {
+  finishes: OptionDocInput['finishes'];
+  pieceFinishes?: Record<string, string>;
+  pieceAccents?: Record<string, string>;
+};
 type Variant = { nameA: string; name: string; note: string; change: (pieces: Piece[]) => Piece[]; looksA: Looks; looksB: Looks };
 
 const LIVING_B: Variant = {
   nameA: 'Sofa by the wall',
-  looksA: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { sofa: f['Washed linen'] }, pieceAccents: { 'coffee-table': f['Oak boards, natural oil'] } }),
-  looksB: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } }, pieceFinishes: { sofa: f['Washed linen'] }, pieceAccents: { 'coffee-table': f['Oak boards, natural oil'] } }),
+  looksA: (f) => ({
+    finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] },
+    pieceFinishes: { sofa: f['Washed linen'] },
+    pieceAccents: { 'coffee-table': f['Oak boards, natural oil'] },
+  }),
+  looksB: (f) => ({
+    finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } },
+    pieceFinishes: { sofa: f['Washed linen'] },
+    pieceAccents: { 'coffee-table': f['Oak boards, natural oil'] },
+  }),
   name: 'Conversation corner',
   note: 'The sofa faces the front window; the client’s armchairs sit opposite. More open floor by the kitchen.',
   change: (pieces) =>
@@ -36,8 +48,14 @@ const LIVING_B: Variant = {
 
 const BEDROOM_B: Variant = {
   nameA: 'Bed on the long wall',
-  looksA: (f) => ({ finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { bed: f['Washed linen'] } }),
-  looksB: (f) => ({ finishes: { floor: f['Grey stone tile'], walls: f['Morning oat'], wallOverrides: { '2': f['Sprig wallpaper'] } }, pieceFinishes: { bed: f['Washed linen'] } }),
+  looksA: (f) => ({
+    finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] },
+    pieceFinishes: { bed: f['Washed linen'] },
+  }),
+  looksB: (f) => ({
+    finishes: { floor: f['Grey stone tile'], walls: f['Morning oat'], wallOverrides: { '2': f['Sprig wallpaper'] } },
+    pieceFinishes: { bed: f['Washed linen'] },
+  }),
   name: 'Bed under the window',
   note: 'The bed moves to the window wall; the wardrobe stays by the door.',
   change: (pieces) =>
@@ -63,9 +81,17 @@ function dressed(pieces: Piece[], looks: ReturnType<Looks>) {
   });
 }
 
-export async function seedDemoRooms(db: Db, studioId: string, projectId: string, finishIds: Record<string, string> = {}): Promise<{ roomId: string; optionIds: string[] }[]> {
+export async function seedDemoRooms(
+  db: Db,
+  studioId: string,
+  projectId: string,
+  finishIds: Record<string, string> = {},
+): Promise<{ roomId: string; optionIds: string[] }[]> {
   const made: { roomId: string; optionIds: string[] }[] = [];
-  for (const [file, variant] of [['l-shaped-living-room.json', LIVING_B], ['bedroom.json', BEDROOM_B]] as const) {
+  for (const [file, variant] of [
+    ['l-shaped-living-room.json', LIVING_B],
+    ['bedroom.json', BEDROOM_B],
+  ] as const) {
     const plan = loadPlan(file);
     const { name, ...shell } = plan.room;
     const room = await insertRoom(db, { studioId, projectId, name, shell });

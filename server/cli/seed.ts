@@ -13,7 +13,11 @@ export async function seedDemo(db: Db): Promise<boolean> {
   if (exists) return false;
   const [ownerHash, otherHash] = await Promise.all([hashPassword(DEMO_SIGN_IN.password), hashPassword('parlour-demo-team')]);
   await db.transaction().execute(async (trx) => {
-    const studio = await trx.insertInto('studios').values({ name: 'Wren & Tallow Interiors' }).returning('id').executeTakeFirstOrThrow();
+    const studio = await trx
+      .insertInto('studios')
+      .values({ name: 'Wren & Tallow Interiors' })
+      .returning('id')
+      .executeTakeFirstOrThrow();
     const [owner] = await trx
       .insertInto('members')
       .values([
@@ -25,7 +29,12 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .execute();
     const client = await trx
       .insertInto('clients')
-      .values({ studio_id: studio.id, name: 'The Harrow-Okonjo household', email: 'harrow-okonjo@example.com', phone: '0100 555 0142' })
+      .values({
+        studio_id: studio.id,
+        name: 'The Harrow-Okonjo household',
+        email: 'harrow-okonjo@example.com',
+        phone: '0100 555 0142',
+      })
       .returning('id')
       .executeTakeFirstOrThrow();
     const other = await trx
@@ -40,7 +49,13 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .executeTakeFirstOrThrow();
     await trx
       .insertInto('projects')
-      .values({ studio_id: studio.id, client_id: other.id, name: 'Garden studio refresh', address: '17 Orchard Lane', updated_at: new Date(Date.now() - 3 * 86_400_000) })
+      .values({
+        studio_id: studio.id,
+        client_id: other.id,
+        name: 'Garden studio refresh',
+        address: '17 Orchard Lane',
+        updated_at: new Date(Date.now() - 3 * 86_400_000),
+      })
       .execute();
     const finishes = await seedDemoFinishes(trx, studio.id, demoFileStorage());
     const rooms = await seedDemoRooms(trx, studio.id, flat.id, finishes);

@@ -25,9 +25,8 @@ export function orNotFound<T>(value: T | null | undefined, what: string): T {
 export function zodFields(err: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of err.issues) {
-    const key = issue.path
-      .map((p, i) => (typeof p === 'number' ? `[${p}]` : i === 0 ? String(p) : `.${String(p)}`))
-      .join('') || '_';
+    const key =
+      issue.path.map((p, i) => (typeof p === 'number' ? `[${p}]` : i === 0 ? String(p) : `.${String(p)}`)).join('') || '_';
     fields[key] ??= issue.message;
   }
   return fields;
@@ -54,7 +53,8 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (status < 500) {
-    if (req.originalUrl.startsWith('/api/')) res.status(404).json({ error: { code: 'not_found', message: 'No such API route.' } });
+    if (req.originalUrl.startsWith('/api/'))
+      res.status(404).json({ error: { code: 'not_found', message: 'No such API route.' } });
     else res.status(404).type('text/plain').send('Not found');
     return;
   }
@@ -87,8 +87,23 @@ const BODY_ERRORS: Record<string, string> = {
 const DATABASE_RETRY_AFTER_S = 5;
 // Socket errors, PostgreSQL's "shutting down" / "starting up" / "crash recovery" codes, and the
 // driver's own messages when a connection drops mid-query or cannot be made in time.
-const DOWN_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'ENOTFOUND', 'EAI_AGAIN', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
-const DOWN_MESSAGES = /^(Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated due to connection timeout)/;
+const DOWN_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'EPIPE',
+  'ETIMEDOUT',
+  'ENOTFOUND',
+  'EAI_AGAIN',
+  '57P01',
+  '57P02',
+  '57P03',
+  '08000',
+  '08001',
+  '08003',
+  '08006',
+]);
+const DOWN_MESSAGES =
+  /^(Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated due to connection timeout)/;
 
 function isDatabaseDown(err: unknown): boolean {
   const e = err as { code?: unknown; message?: unknown; errors?: unknown } | null;

@@ -10,9 +10,7 @@ import type { FinishCategory, PriceUnit } from '../schemas/finish';
 import { checkFit } from './fit';
 import { blocksWalking, placedBoxes } from './fit/boxes';
 import { FREE, WALL, rasteriseFloor } from './fit/floor-grid';
-import {
-  DEFAULT_COVERAGE_M2_PER_L, DEFAULT_PAINT_COATS, DEFAULT_WASTE_PERCENT, computeTakeoff, roundQuantity,
-} from './takeoff';
+import { DEFAULT_COVERAGE_M2_PER_L, DEFAULT_PAINT_COATS, DEFAULT_WASTE_PERCENT, computeTakeoff, roundQuantity } from './takeoff';
 import { chooseTins, describeTins, type TinPlan } from './tins';
 
 // ——— Settings the designer can change on the take-off page ———
@@ -28,15 +26,26 @@ export const MAX_WASTE_PERCENT = 100;
 export const MAX_UNIT_COVERAGE_M2 = 1000;
 
 export const takeoffSettingsSchema = z.object({
-  coats: z.number().int('Coats are whole numbers.').min(1, 'At least 1 coat.').max(MAX_COATS, `At most ${MAX_COATS} coats.`).default(DEFAULT_PAINT_COATS),
+  coats: z
+    .number()
+    .int('Coats are whole numbers.')
+    .min(1, 'At least 1 coat.')
+    .max(MAX_COATS, `At most ${MAX_COATS} coats.`)
+    .default(DEFAULT_PAINT_COATS),
   coverageM2PerL: z
     .number()
     .min(MIN_COVERAGE_M2_PER_L, `Coverage is at least ${MIN_COVERAGE_M2_PER_L} m² per litre.`)
     .max(MAX_COVERAGE_M2_PER_L, `Coverage is at most ${MAX_COVERAGE_M2_PER_L} m² per litre.`)
     .default(DEFAULT_COVERAGE_M2_PER_L),
-  wastePercent: z.number().min(0, 'Waste cannot be negative.').max(MAX_WASTE_PERCENT, `Waste is at most ${MAX_WASTE_PERCENT} %.`).default(DEFAULT_WASTE_PERCENT),
+  wastePercent: z
+    .number()
+    .min(0, 'Waste cannot be negative.')
+    .max(MAX_WASTE_PERCENT, `Waste is at most ${MAX_WASTE_PERCENT} %.`)
+    .default(DEFAULT_WASTE_PERCENT),
   /** m² one unit (a box of boards, a roll of paper) covers, by finish id; finishes without one are ordered by area. */
-  unitCoverageM2: z.record(z.string(), z.number().positive('A box or roll covers more than 0 m².').max(MAX_UNIT_COVERAGE_M2)).default({}),
+  unitCoverageM2: z
+    .record(z.string(), z.number().positive('A box or roll covers more than 0 m².').max(MAX_UNIT_COVERAGE_M2))
+    .default({}),
 });
 export type TakeoffSettings = z.infer<typeof takeoffSettingsSchema>;
 export type TakeoffSettingsInput = z.input<typeof takeoffSettingsSchema>;
@@ -57,11 +66,17 @@ export const takeoffQuerySchema = z
   })
   .transform((q, ctx) => {
     const unitCoverageM2: Record<string, number> = {};
-    const entries = (Array.isArray(q.unitM2) ? q.unitM2 : q.unitM2 ? [q.unitM2] : []).flatMap((v) => v.split(',')).filter(Boolean);
+    const entries = (Array.isArray(q.unitM2) ? q.unitM2 : q.unitM2 ? [q.unitM2] : [])
+      .flatMap((v) => v.split(','))
+      .filter(Boolean);
     for (const entry of entries) {
       const match = unitCoverageEntry.exec(entry.trim());
       if (!match) {
-        ctx.addIssue({ code: 'custom', path: ['unitM2'], message: 'Give the m² per box or roll as finishId:m2, e.g. 1a2b…:2.2.' });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['unitM2'],
+          message: 'Give the m² per box or roll as finishId:m2, e.g. 1a2b…:2.2.',
+        });
         return z.NEVER;
       }
       unitCoverageM2[match[1]] = Number(match[2]);
@@ -76,8 +91,13 @@ export const takeoffQuerySchema = z
 
 /** The query string the take-off and schedule routes read (see takeoffQuerySchema). */
 export function takeoffQuery(settings: TakeoffSettings): URLSearchParams {
-  const query = new URLSearchParams({ coats: String(settings.coats), coverage: String(settings.coverageM2PerL), waste: String(settings.wastePercent) });
-  for (const [id, m2] of Object.entries(settings.unitCoverageM2).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) query.append('unitM2', `${id}:${m2}`);
+  const query = new URLSearchParams({
+    coats: String(settings.coats),
+    coverage: String(settings.coverageM2PerL),
+    waste: String(settings.wastePercent),
+  });
+  for (const [id, m2] of Object.entries(settings.unitCoverageM2).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
+    query.append('unitM2', `${id}:${m2}`);
   return query;
 }
 
@@ -131,7 +151,14 @@ interface FinishArea {
   areaM2: number;
 }
 
-function areasByFinish(shell: RoomShell, assignments: FinishAssignments): { byFinish: FinishArea[]; bare: { floorM2: number; ceilingM2: number; wallsM2: number }; takeoff: ReturnType<typeof computeTakeoff> } {
+function areasByFinish(
+  shell: RoomShell,
+  assignments: FinishAssignments,
+): {
+  byFinish: FinishArea[];
+  bare: { floorM2: number; ceilingM2: number; wallsM2: number };
+  takeoff: ReturnType<typeof computeTakeoff>;
+} {
   const takeoff = computeTakeoff(shell);
   const byId = new Map<string, FinishArea>();
   const add = (finishId: string, areaM2: number, mark: (s: SurfaceSet) => void) => {
@@ -141,14 +168,23 @@ function areasByFinish(shell: RoomShell, assignments: FinishAssignments): { byFi
     byId.set(finishId, entry);
   };
   const bare = { floorM2: 0, ceilingM2: 0, wallsM2: 0 };
-  if (assignments.floor) add(assignments.floor, takeoff.floorArea_m2, (s) => { s.floor = true; });
+  if (assignments.floor)
+    add(assignments.floor, takeoff.floorArea_m2, (s) => {
+      s.floor = true;
+    });
   else bare.floorM2 = takeoff.floorArea_m2;
   for (const wall of takeoff.walls) {
     const finishId = assignments.wallOverrides[String(wall.index)] ?? assignments.walls;
-    if (finishId) add(finishId, wall.netArea_m2, (s) => { s.walls.push(wall.index); });
+    if (finishId)
+      add(finishId, wall.netArea_m2, (s) => {
+        s.walls.push(wall.index);
+      });
     else bare.wallsM2 += wall.netArea_m2;
   }
-  if (assignments.ceiling) add(assignments.ceiling, takeoff.ceilingArea_m2, (s) => { s.ceiling = true; });
+  if (assignments.ceiling)
+    add(assignments.ceiling, takeoff.ceilingArea_m2, (s) => {
+      s.ceiling = true;
+    });
   else bare.ceilingM2 = takeoff.ceilingArea_m2;
   return { byFinish: [...byId.values()], bare, takeoff };
 }
@@ -226,7 +262,12 @@ export interface RoomTakeoff {
  * photo finishes by area with waste and whole units. Paint and coverings come in the order the
  * surfaces are met: floor, walls, ceiling.
  */
-export function roomTakeoff(shell: RoomShell, assignments: FinishAssignments, finishes: FinishLookup, settings: TakeoffSettings): RoomTakeoff {
+export function roomTakeoff(
+  shell: RoomShell,
+  assignments: FinishAssignments,
+  finishes: FinishLookup,
+  settings: TakeoffSettings,
+): RoomTakeoff {
   const { byFinish, bare, takeoff } = areasByFinish(shell, assignments);
   const paints: PaintNeed[] = [];
   const coverings: CoveringNeed[] = [];
@@ -309,7 +350,10 @@ export interface ProjectTakeoff {
  * A project's totals from its rooms' take-offs: paint per colour summed and bought as one set of
  * tins (one colour's tins serve every room), coverings per finish with whole units over the sum.
  */
-export function projectTakeoff(rooms: readonly { name: string; takeoff: RoomTakeoff }[], settings: TakeoffSettings): ProjectTakeoff {
+export function projectTakeoff(
+  rooms: readonly { name: string; takeoff: RoomTakeoff }[],
+  settings: TakeoffSettings,
+): ProjectTakeoff {
   const paints = new Map<string, { finish: PaintInfo; rooms: string[]; litres: number }>();
   const coverings = new Map<string, { finish: PhotoInfo; rooms: string[]; orderAreaM2: number }>();
   let floorAreaM2 = 0;
@@ -333,7 +377,11 @@ export function projectTakeoff(rooms: readonly { name: string; takeoff: RoomTake
   return {
     floorAreaM2: roundQuantity(floorAreaM2),
     skirtingM: roundQuantity(skirtingM),
-    paints: [...paints.values()].map((p) => ({ ...p, litres: roundQuantity(p.litres), tins: chooseTins(roundQuantity(p.litres)) })),
+    paints: [...paints.values()].map((p) => ({
+      ...p,
+      litres: roundQuantity(p.litres),
+      tins: chooseTins(roundQuantity(p.litres)),
+    })),
     coverings: [...coverings.values()].map((c) => {
       const unitCoverageM2 = settings.unitCoverageM2[c.finish.id] ?? null;
       // Waste is already in each room's order area: only the whole units are worked out again.
@@ -471,8 +519,16 @@ function paintLine(need: PaintNeed): ScheduleLine {
 function coveringLine(need: CoveringNeed): ScheduleLine {
   const { finish } = need;
   const boughtM2 = need.units !== null && need.unitCoverageM2 !== null ? need.units * need.unitCoverageM2 : need.orderAreaM2;
-  const unitsNote = need.units !== null ? `${need.units} × ${need.unitCoverageM2} m² for ${need.orderAreaM2} m² with ${need.wastePercent} % waste` : `${need.areaM2} m² + ${need.wastePercent} % waste`;
-  const base = { ...finishLineBase(finish, need.surfaces), detail: surfaceLabel(need.surfaces), quantityNote: unitsNote, colourHex: null };
+  const unitsNote =
+    need.units !== null
+      ? `${need.units} × ${need.unitCoverageM2} m² for ${need.orderAreaM2} m² with ${need.wastePercent} % waste`
+      : `${need.areaM2} m² + ${need.wastePercent} % waste`;
+  const base = {
+    ...finishLineBase(finish, need.surfaces),
+    detail: surfaceLabel(need.surfaces),
+    quantityNote: unitsNote,
+    colourHex: null,
+  };
   if (finish.priceUnit === 'unit') {
     const total = finish.price !== null && need.units !== null ? roundMoney(finish.price * need.units) : null;
     return {
@@ -482,7 +538,12 @@ function coveringLine(need: CoveringNeed): ScheduleLine {
       unitPrice: finish.price,
       priceUnit: finish.price === null ? null : 'unit',
       total,
-      unpricedReason: finish.price === null ? 'No price on the finish yet.' : need.units === null ? 'Priced per box or roll: enter what one covers.' : null,
+      unpricedReason:
+        finish.price === null
+          ? 'No price on the finish yet.'
+          : need.units === null
+            ? 'Priced per box or roll: enter what one covers.'
+            : null,
     };
   }
   // Priced per m² (or not yet priced): full boxes are what is paid for, when their size is known.
@@ -544,7 +605,11 @@ export function buildSchedule(shell: RoomShell, doc: OptionDoc, finishes: Finish
   const placed = doc.pieces.filter((p) => p.placed);
   const takeoff = roomTakeoff(shell, doc.finishes, finishes, settings);
   const pieces = pieceLines(placed, finishes);
-  const finishRows = [...takeoff.coverings.map(coveringLine), ...takeoff.paints.map(paintLine), ...takeoff.missing.map(missingLine)];
+  const finishRows = [
+    ...takeoff.coverings.map(coveringLine),
+    ...takeoff.paints.map(paintLine),
+    ...takeoff.missing.map(missingLine),
+  ];
   const sum = (lines: ScheduleLine[]) => roundMoney(lines.reduce((s, l) => s + (l.total ?? 0), 0));
   const newPieces = pieces.filter((l) => l.status === 'new');
   const newPiecesCost = sum(newPieces);
@@ -609,7 +674,12 @@ export interface OptionComparison {
 }
 
 /** The figures the compare table puts side by side for one option of a room (plan mm). */
-export function compareOption(shell: RoomShell, doc: OptionDoc, finishes: FinishLookup, settings: TakeoffSettings): OptionComparison {
+export function compareOption(
+  shell: RoomShell,
+  doc: OptionDoc,
+  finishes: FinishLookup,
+  settings: TakeoffSettings,
+): OptionComparison {
   const { totals } = buildSchedule(shell, doc, finishes, settings);
   return {
     budget: totals.budget,
@@ -630,7 +700,14 @@ export interface OptionRef {
 export interface ProjectTakeoffAnswer {
   project: { id: string; name: string };
   settings: TakeoffSettings;
-  rooms: { id: string; name: string; options: OptionRef[]; counted: OptionRef | null; chosenOptionId: string | null; takeoff: RoomTakeoff | null }[];
+  rooms: {
+    id: string;
+    name: string;
+    options: OptionRef[];
+    counted: OptionRef | null;
+    chosenOptionId: string | null;
+    takeoff: RoomTakeoff | null;
+  }[];
   totals: ProjectTakeoff;
 }
 

@@ -18,14 +18,28 @@ describe('computeTakeoff', () => {
   });
 
   it('runs the skirting under windows but not across doors and passages', () => {
-    const noWindow = computeTakeoff(roomShellSchema.parse({ ...example, openings: example.openings!.filter((o) => o.type !== 'window') }));
+    const noWindow = computeTakeoff(
+      roomShellSchema.parse({ ...example, openings: example.openings!.filter((o) => o.type !== 'window') }),
+    );
     expect(noWindow.skirting_m).toBe(13.88);
     const noOpenings = computeTakeoff(roomShellSchema.parse({ ...example, openings: [] }));
     expect(noOpenings.skirting_m).toBe(15.6);
   });
 
   it('measures an L-shaped room on its inside faces', () => {
-    const takeoff = computeTakeoff(roomShellSchema.parse({ wallHeight: 2500, outline: [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]] }));
+    const takeoff = computeTakeoff(
+      roomShellSchema.parse({
+        wallHeight: 2500,
+        outline: [
+          [0, 0],
+          [5000, 0],
+          [5000, 2500],
+          [3000, 2500],
+          [3000, 4000],
+          [0, 4000],
+        ],
+      }),
+    );
     expect(takeoff.floorArea_m2).toBe(17);
     expect(takeoff.perimeter_m).toBe(18);
     expect(takeoff.netWallArea_m2).toBe(45);
@@ -33,7 +47,14 @@ describe('computeTakeoff', () => {
   });
 
   it('passes findings through in the shared finding shape', () => {
-    const finding = findingSchema.parse({ kind: 'narrow-walkway', pieces: ['bed', 'chest'], openings: [], message: 'Only 62 cm to pass between the bed and the chest', measured_mm: 620, required_mm: 900 });
+    const finding = findingSchema.parse({
+      kind: 'narrow-walkway',
+      pieces: ['bed', 'chest'],
+      openings: [],
+      message: 'Only 62 cm to pass between the bed and the chest',
+      measured_mm: 620,
+      required_mm: 900,
+    });
     expect(computeTakeoff(roomShellSchema.parse(example), {}, [finding]).findings).toEqual([finding]);
     expect(findingSchema.safeParse({ ...finding, kind: 'too-close' }).success).toBe(false);
   });

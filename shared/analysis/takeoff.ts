@@ -88,7 +88,11 @@ const MM_PER_M = 1000;
  * (litres). Sums use unrounded values; only the reported numbers are rounded. The fit check's
  * findings are passed in and reported as they are.
  */
-export function computeTakeoff(shell: RoomShell, options: Partial<TakeoffOptions> = {}, findings: readonly Finding[] = []): Takeoff {
+export function computeTakeoff(
+  shell: RoomShell,
+  options: Partial<TakeoffOptions> = {},
+  findings: readonly Finding[] = [],
+): Takeoff {
   const settings = takeoffOptionsSchema.parse(options);
   const n = shell.outline.length;
   const floorMm2 = areaMm2(shell.outline);

@@ -30,8 +30,24 @@ describe('catalogue', () => {
 
   it('covers what a designer starts a living room, bedroom or dining room with', () => {
     const wanted: CatalogueId[] = [
-      'sofa-2-seat', 'sofa-3-seat', 'sofa-corner', 'armchair', 'coffee-table', 'side-table', 'bedside-table', 'wardrobe',
-      'chest-of-drawers', 'desk', 'dining-table-4', 'dining-table-6', 'bookcase', 'tv-unit', 'sideboard', 'rug', 'wall-cabinet', 'custom-box',
+      'sofa-2-seat',
+      'sofa-3-seat',
+      'sofa-corner',
+      'armchair',
+      'coffee-table',
+      'side-table',
+      'bedside-table',
+      'wardrobe',
+      'chest-of-drawers',
+      'desk',
+      'dining-table-4',
+      'dining-table-6',
+      'bookcase',
+      'tv-unit',
+      'sideboard',
+      'rug',
+      'wall-cabinet',
+      'custom-box',
     ];
     for (const id of wanted) expect(catalogueEntry(id).id).toBe(id);
     expect(catalogueEntry('sofa-3-seat').kind).toBe('sofa');
@@ -61,8 +77,18 @@ describe('pieceFromCatalogue', () => {
   it('makes a new placed piece at the point, sized from its entry, that the piece schema accepts', () => {
     const piece = pieceFromCatalogue('wall-cabinet', 'cab-1', [1200, 40]);
     expect(piece).toEqual({
-      id: 'cab-1', name: 'Wall cabinet', kind: 'wall-cabinet', x: 1200, y: 40, width: 800, depth: 350, height: 700,
-      rotation: 0, elevation: 1400, status: 'new', placed: true,
+      id: 'cab-1',
+      name: 'Wall cabinet',
+      kind: 'wall-cabinet',
+      x: 1200,
+      y: 40,
+      width: 800,
+      depth: 350,
+      height: 700,
+      rotation: 0,
+      elevation: 1400,
+      status: 'new',
+      placed: true,
     });
     expect(pieceSchema.parse(piece)).toEqual(piece);
     expect(pieceFromCatalogue('sofa-3-seat', 's', [0, 0]).elevation).toBe(0);

@@ -79,12 +79,37 @@ function bed<K extends string>(id: K, name: string, mattress: Mattress): Catalog
   };
 }
 
-function metricBed<K extends string>(id: K, name: string, standard: 'uk' | 'continental', sizeName: string, widthCm: number, lengthCm: number): CatalogueEntry & { id: K } {
-  return bed(id, name, { standard, sizeName, widthMm: widthCm * 10, lengthMm: lengthCm * 10, source: standard === 'uk' ? NBF : CONTINENTAL });
+function metricBed<K extends string>(
+  id: K,
+  name: string,
+  standard: 'uk' | 'continental',
+  sizeName: string,
+  widthCm: number,
+  lengthCm: number,
+): CatalogueEntry & { id: K } {
+  return bed(id, name, {
+    standard,
+    sizeName,
+    widthMm: widthCm * 10,
+    lengthMm: lengthCm * 10,
+    source: standard === 'uk' ? NBF : CONTINENTAL,
+  });
 }
 
-function usBed<K extends string>(id: K, name: string, sizeName: string, widthIn: number, lengthIn: number): CatalogueEntry & { id: K } {
-  return bed(id, name, { standard: 'us', sizeName, widthMm: widthIn * MM_PER_INCH, lengthMm: lengthIn * MM_PER_INCH, source: US_CHARTS });
+function usBed<K extends string>(
+  id: K,
+  name: string,
+  sizeName: string,
+  widthIn: number,
+  lengthIn: number,
+): CatalogueEntry & { id: K } {
+  return bed(id, name, {
+    standard: 'us',
+    sizeName,
+    widthMm: widthIn * MM_PER_INCH,
+    lengthMm: lengthIn * MM_PER_INCH,
+    source: US_CHARTS,
+  });
 }
 
 function common<K extends string>(
@@ -104,7 +129,10 @@ function common<K extends string>(
 export const CATALOGUE = [
   common('sofa-2-seat', 'sofa', 'Two-seat sofa', 'seating', 1700, 900, 850),
   common('sofa-3-seat', 'sofa', 'Three-seat sofa', 'seating', 2100, 900, 850),
-  common('sofa-corner', 'corner-sofa', 'Corner sofa', 'seating', 2600, 1700, 850, { note: 'Drawn as the box round both arms of the L.', settings: { hand: 'right' } }),
+  common('sofa-corner', 'corner-sofa', 'Corner sofa', 'seating', 2600, 1700, 850, {
+    note: 'Drawn as the box round both arms of the L.',
+    settings: { hand: 'right' },
+  }),
   common('armchair', 'armchair', 'Armchair', 'seating', 850, 850, 900),
   common('dining-chair', 'dining-chair', 'Dining chair', 'seating', 450, 520, 880),
   common('stool', 'stool', 'Stool', 'seating', 380, 380, 650, { settings: { top: 'round' } }),
@@ -140,28 +168,41 @@ export const CATALOGUE = [
   usBed('bed-us-california-king', 'California King bed', 'California King', 72, 84),
   common('cot', 'cot', 'Cot', 'beds', 1260, 660, 900, { note: 'For a 120 × 60 cm cot mattress.' }),
   common('bedside-table', 'bedside-table', 'Bedside table', 'storage', 450, 400, 550),
-  common('wardrobe', 'wardrobe', 'Wardrobe', 'storage', 1000, 600, 2000, { note: 'Two doors; leave room in front for them to open.', settings: { count: 2 } }),
+  common('wardrobe', 'wardrobe', 'Wardrobe', 'storage', 1000, 600, 2000, {
+    note: 'Two doors; leave room in front for them to open.',
+    settings: { count: 2 },
+  }),
   common('chest-of-drawers', 'chest-of-drawers', 'Chest of drawers', 'storage', 800, 450, 800),
   common('bookcase', 'bookcase', 'Bookcase', 'storage', 800, 300, 1800),
   common('open-shelving', 'open-shelving', 'Open shelving', 'storage', 1000, 350, 1800),
   common('tv-unit', 'media-unit', 'TV unit', 'storage', 1600, 400, 500),
   common('sideboard', 'sideboard', 'Sideboard', 'storage', 1600, 450, 800),
   common('wall-shelf', 'wall-shelf', 'Wall shelf', 'storage', 1000, 250, 40, { elevation: WALL_SHELF_ELEVATION_MM }),
-  common('wall-cabinet', 'wall-cabinet', 'Wall cabinet', 'storage', 800, 350, 700, { elevation: WALL_CABINET_ELEVATION_MM, note: 'Hung on the wall; the elevation is its underside.' }),
+  common('wall-cabinet', 'wall-cabinet', 'Wall cabinet', 'storage', 800, 350, 700, {
+    elevation: WALL_CABINET_ELEVATION_MM,
+    note: 'Hung on the wall; the elevation is its underside.',
+  }),
   common('kitchen-base-unit', 'kitchen-base-unit', 'Kitchen base unit with worktop', 'kitchen', 600, 600, 900),
-  common('kitchen-wall-unit', 'kitchen-wall-unit', 'Kitchen wall unit', 'kitchen', 600, 330, 720, { elevation: KITCHEN_WALL_UNIT_ELEVATION_MM }),
+  common('kitchen-wall-unit', 'kitchen-wall-unit', 'Kitchen wall unit', 'kitchen', 600, 330, 720, {
+    elevation: KITCHEN_WALL_UNIT_ELEVATION_MM,
+  }),
   common('oven-housing', 'oven-housing', 'Oven housing', 'kitchen', 600, 600, 2100),
   common('dishwasher', 'dishwasher', 'Dishwasher', 'kitchen', 600, 600, 900),
   common('rug', 'rug', 'Rug', 'rugs', 2000, 1400, 10),
   common('rug-round', 'rug', 'Round rug', 'rugs', 1600, 1600, 10, { settings: { top: 'round' } }),
   common('floor-lamp', 'floor-lamp', 'Floor lamp', 'lighting', 450, 450, 1600),
   common('table-lamp', 'table-lamp', 'Table lamp', 'lighting', 300, 300, 500),
-  common('pendant-light', 'pendant-light', 'Pendant light', 'lighting', 400, 400, 700, { elevation: PENDANT_ELEVATION_MM, note: 'Hangs from the ceiling: the elevation is its lowest point.' }),
+  common('pendant-light', 'pendant-light', 'Pendant light', 'lighting', 400, 400, 700, {
+    elevation: PENDANT_ELEVATION_MM,
+    note: 'Hangs from the ceiling: the elevation is its lowest point.',
+  }),
   common('mirror', 'mirror', 'Mirror', 'other', 600, 30, 900, { elevation: PICTURE_ELEVATION_MM }),
   common('picture', 'picture', 'Picture', 'other', 700, 30, 500, { elevation: PICTURE_ELEVATION_MM }),
   common('plant', 'plant', 'Plant in a pot', 'other', 500, 500, 1200),
   common('radiator', 'radiator', 'Radiator', 'other', 1000, 100, 600, { elevation: RADIATOR_ELEVATION_MM }),
-  common('custom-box', 'plain-block', 'Box', 'other', 1000, 600, 800, { note: 'Any piece not in the catalogue: set its size and name.' }),
+  common('custom-box', 'plain-block', 'Box', 'other', 1000, 600, 800, {
+    note: 'Any piece not in the catalogue: set its size and name.',
+  }),
 ];
 
 /** The ids of the catalogue, e.g. 'sofa-3-seat' or 'bed-us-queen'. */

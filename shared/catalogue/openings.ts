@@ -14,7 +14,12 @@ const US_LEAVES = 'US interior door leaves, 80 in (6 ft 8 in) high (trade conven
 /** Door widths by leaf size: metric 626/726/826/926 × 2040 mm, US 24–36 in × 80 in (1 in = 25.4 mm, NIST SP 811). */
 export const DOOR_PRESETS: OpeningPreset[] = [
   ...[626, 726, 826, 926].map((width) => ({ label: `${width / 10} cm`, width, height: 2040, source: METRIC_LEAVES })),
-  ...[24, 28, 30, 32, 36].map((inches) => ({ label: `${inches} in`, width: inches * MM_PER_INCH, height: 80 * MM_PER_INCH, source: US_LEAVES })),
+  ...[24, 28, 30, 32, 36].map((inches) => ({
+    label: `${inches} in`,
+    width: inches * MM_PER_INCH,
+    height: 80 * MM_PER_INCH,
+    source: US_LEAVES,
+  })),
 ];
 
 /** A door leaf needs 34 in for a nominal 32 in (812.8 mm) clear opening (HUD Fair Housing Accessibility Guidelines). */

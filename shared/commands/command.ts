@@ -54,7 +54,11 @@ export interface CommandSpec<A> {
 }
 
 /** Binds arguments to a command spec. */
-export function makeCommand<A extends Readonly<Record<string, unknown>>>(name: CommandName, args: A, spec: CommandSpec<A>): Command {
+export function makeCommand<A extends Readonly<Record<string, unknown>>>(
+  name: CommandName,
+  args: A,
+  spec: CommandSpec<A>,
+): Command {
   return { name, args, label: (doc) => spec.label(doc, args), run: (doc) => spec.run(doc, args) };
 }
 
@@ -91,7 +95,8 @@ export function checkNumber(value: number, what: string): string | null {
 /** Checks a plan length or coordinate in mm is a finite number; `minMm` makes it a size. */
 export function checkMm(value: number, what: string, minMm?: number): string | null {
   if (typeof value !== 'number' || !Number.isFinite(value)) return `${what} must be a number of millimetres`;
-  if (minMm !== undefined && value < minMm) return minMm === 0 ? `${what} cannot be negative` : `${what} must be at least ${minMm} mm`;
+  if (minMm !== undefined && value < minMm)
+    return minMm === 0 ? `${what} cannot be negative` : `${what} must be at least ${minMm} mm`;
   return null;
 }
 
@@ -135,7 +140,11 @@ function lowerFirst(text: string): string {
  */
 export function apply(doc: EditorDoc, command: Command): CommandResult {
   const result = command.run(doc);
-  const refusal = (reason: string, problems?: FieldProblem[]): CommandResult => ({ ok: false, message: `Can't ${lowerFirst(command.label(doc))}: ${reason}.`, problems });
+  const refusal = (reason: string, problems?: FieldProblem[]): CommandResult => ({
+    ok: false,
+    message: `Can't ${lowerFirst(command.label(doc))}: ${reason}.`,
+    problems,
+  });
   if (!result.ok) return refusal(result.reason);
   if (result.doc.shell !== doc.shell) {
     const problems = newShellProblems(doc.shell, result.doc.shell);

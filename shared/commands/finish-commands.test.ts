@@ -17,14 +17,18 @@ describe('assignFinish', () => {
     const doc = sampleDoc();
     const feature = applied(doc, assignFinish('opt-a', { wall: 3 }, 'paper-fern'));
     expect(feature.options['opt-a'].finishes.wallOverrides).toEqual({ '1': 'paint-sage', '3': 'paper-fern' });
-    expect(applied(feature, assignFinish('opt-a', { wall: 1 }, null)).options['opt-a'].finishes.wallOverrides).toEqual({ '3': 'paper-fern' });
+    expect(applied(feature, assignFinish('opt-a', { wall: 1 }, null)).options['opt-a'].finishes.wallOverrides).toEqual({
+      '3': 'paper-fern',
+    });
     expect(assignFinish('opt-a', { wall: 3 }, null).label(doc)).toBe('Clear wall 3 finish');
   });
 
   it('refuses an unknown option, a missing wall and an empty finish id', () => {
     const doc = sampleDoc();
     expect(refusal(doc, assignFinish('opt-x', 'floor', 'tiles'))).toBe("Can't change floor finish: there is no option opt-x.");
-    expect(refusal(doc, assignFinish('opt-a', { wall: 4 }, 'tiles'))).toBe("Can't change wall 4 finish: there is no wall 4 (the room has walls 0 to 3).");
+    expect(refusal(doc, assignFinish('opt-a', { wall: 4 }, 'tiles'))).toBe(
+      "Can't change wall 4 finish: there is no wall 4 (the room has walls 0 to 3).",
+    );
     expect(refusal(doc, assignFinish('opt-a', 'floor', ''))).toBe("Can't change floor finish: the finish needs an id.");
   });
 });

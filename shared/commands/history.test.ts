@@ -68,7 +68,11 @@ describe('undo and redo', () => {
       ['options', 'opt-a', 'pieces', 0, 'x'],
       ['options', 'opt-a', 'pieces', 0, 'y'],
     ]);
-    expect(history.undoSteps[0].patches[0]).toEqual({ path: ['options', 'opt-a', 'pieces', 0, 'x'], before: { present: true, value: 2100 }, after: { present: true, value: 2000 } });
+    expect(history.undoSteps[0].patches[0]).toEqual({
+      path: ['options', 'opt-a', 'pieces', 0, 'x'],
+      before: { present: true, value: 2100 },
+      after: { present: true, value: 2000 },
+    });
   });
 
   it('labels the next undo and redo for the menu', () => {
@@ -168,7 +172,10 @@ describe('EditorHistory', () => {
     const holder = new EditorHistory(sampleDoc(), { limit: 10 });
     expect(holder.apply(movePiece('opt-a', 'sofa', 0, 0), { gesture: 'g' })).toEqual({ ok: true });
     expect(holder.apply(movePiece('opt-a', 'sofa', 10, 0), { gesture: 'g' })).toEqual({ ok: true });
-    expect(holder.apply(movePiece('opt-a', 'nothing', 0, 0))).toEqual({ ok: false, message: "Can't move piece: there is no piece nothing in option opt-a." });
+    expect(holder.apply(movePiece('opt-a', 'nothing', 0, 0))).toEqual({
+      ok: false,
+      message: "Can't move piece: there is no piece nothing in option opt-a.",
+    });
     expect([holder.canUndo, holder.undoLabel, holder.state.undoSteps.length]).toEqual([true, 'Move Sofa', 1]);
     holder.undo();
     expect(holder.doc).toStrictEqual(sampleDoc());

@@ -45,7 +45,8 @@ export interface ApplyOptions {
 }
 
 /** The history after an apply: changed on success; the same history, and the designer's sentence, on refusal. */
-export type HistoryResult = { ok: true; history: History } | { ok: false; message: string; problems?: FieldProblem[]; history: History };
+export type HistoryResult =
+  { ok: true; history: History } | { ok: false; message: string; problems?: FieldProblem[]; history: History };
 
 /** A history with nothing to undo or redo. */
 export function createHistory(doc: EditorDoc, options: HistoryOptions = {}): History {

@@ -2,7 +2,17 @@
 // gestures, and snapping helpers. Everything is plan mm (x right, y down) and degrees clockwise.
 export { createEditorDoc, type EditorDoc } from './editor-doc';
 export { apply, type Command, type CommandName, type CommandResult, type RunResult } from './command';
-export { closeOutlineGap, insertCorner, moveCorner, removeCorner, setOutline, setWallHeight, setWallLength, setWallThickness, MIN_CORNERS } from './outline-commands';
+export {
+  closeOutlineGap,
+  insertCorner,
+  moveCorner,
+  removeCorner,
+  setOutline,
+  setWallHeight,
+  setWallLength,
+  setWallThickness,
+  MIN_CORNERS,
+} from './outline-commands';
 export { addOpening, flipHinge, flipSwing, removeOpening, updateOpening, type OpeningPatch } from './opening-commands';
 export {
   addPiece,
@@ -39,7 +49,14 @@ export {
 } from './history';
 export { applyPatches, diffDocs, type Patch, type PathKey, type Slot } from './patch';
 export { mergeOptionDoc, mergeShell } from './merge';
-export { normaliseRotationDeg, pieceAxes, pieceBoundsMm, pieceFootprintMm, type PiecePose, type PlanBounds } from './piece-geometry';
+export {
+  normaliseRotationDeg,
+  pieceAxes,
+  pieceBoundsMm,
+  pieceFootprintMm,
+  type PiecePose,
+  type PlanBounds,
+} from './piece-geometry';
 export { findPlacement, boxInsideOutline, boxesOverlap, PLACEMENT_STEP_MM, type PlacementRequest } from './placement';
 export {
   nudge,

@@ -5,14 +5,25 @@ import { mergeOptionDoc, mergeShell } from './merge';
 
 const base = roomShellSchema.parse({
   wallHeight: 2600,
-  outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+  outline: [
+    [0, 0],
+    [4000, 0],
+    [4000, 3000],
+    [0, 3000],
+  ],
   openings: [{ id: 'd1', type: 'door', wall: 0, offset: 300, width: 826, height: 2040, hinge: 'start', swing: 'in' }],
 });
 
 describe('mergeShell', () => {
   it('keeps my ceiling height and their new window', () => {
     const mine = { ...base, wallHeight: 2700 };
-    const theirs = { ...base, openings: [...base.openings, { id: 'w1', type: 'window' as const, wall: 2, offset: 1000, width: 1200, height: 1200, sill: 900 }] };
+    const theirs = {
+      ...base,
+      openings: [
+        ...base.openings,
+        { id: 'w1', type: 'window' as const, wall: 2, offset: 1000, width: 1200, height: 1200, sill: 900 },
+      ],
+    };
     const merged = mergeShell(base, mine, theirs);
     expect(merged.wallHeight).toBe(2700);
     expect(merged.openings.map((o) => o.id)).toEqual(['d1', 'w1']);
@@ -20,7 +31,15 @@ describe('mergeShell', () => {
 
   it('my moved door wins over their untouched one; their outline change stays when I did not touch the outline', () => {
     const mine = { ...base, openings: [{ ...base.openings[0], offset: 900 }] };
-    const theirs = { ...base, outline: [[0, 0], [4500, 0], [4500, 3000], [0, 3000]] as [number, number][] };
+    const theirs = {
+      ...base,
+      outline: [
+        [0, 0],
+        [4500, 0],
+        [4500, 3000],
+        [0, 3000],
+      ] as [number, number][],
+    };
     const merged = mergeShell(base, mine, theirs);
     expect(merged.openings[0].offset).toBe(900);
     expect(merged.outline[1]).toEqual([4500, 0]);
@@ -35,7 +54,15 @@ describe('mergeShell', () => {
   it('falls back to mine when the combination cannot be drawn', () => {
     // They shortened wall 0 to 1000 mm; I widened the door to 1500 mm: together the door no longer fits.
     const mine = { ...base, openings: [{ ...base.openings[0], width: 1500 }] };
-    const theirs = { ...base, outline: [[0, 0], [1000, 0], [1000, 3000], [0, 3000]] as [number, number][] };
+    const theirs = {
+      ...base,
+      outline: [
+        [0, 0],
+        [1000, 0],
+        [1000, 3000],
+        [0, 3000],
+      ] as [number, number][],
+    };
     expect(mergeShell(base, mine, theirs)).toBe(mine);
   });
 });

@@ -17,8 +17,12 @@ describe('addOpening', () => {
     const doc = sampleDoc();
     expect(refusal(doc, addOpening({ ...window2, id: 'd1' }))).toBe("Can't add window: there is already an opening d1.");
     expect(refusal(doc, addOpening({ ...window2, width: 0 }))).toBe("Can't add window: width must be more than 0 mm.");
-    expect(refusal(doc, addOpening({ ...window2, wall: 4 }))).toBe("Can't add window: there is no wall 4 (the room has walls 0 to 3).");
-    expect(refusal(doc, addOpening({ ...window2, wall: 0, offset: 1000 }))).toBe("Can't add window: window w2: overlaps d1 (openings[0]) on wall 0.");
+    expect(refusal(doc, addOpening({ ...window2, wall: 4 }))).toBe(
+      "Can't add window: there is no wall 4 (the room has walls 0 to 3).",
+    );
+    expect(refusal(doc, addOpening({ ...window2, wall: 0, offset: 1000 }))).toBe(
+      "Can't add window: window w2: overlaps d1 (openings[0]) on wall 0.",
+    );
   });
 });
 
@@ -34,8 +38,14 @@ describe('updateOpening', () => {
 
   it('changes a window sill and size, and a door hinge', () => {
     const doc = sampleDoc();
-    expect(applied(doc, updateOpening('w1', { sill: 800, height: 1300 })).shell.openings[1]).toMatchObject({ sill: 800, height: 1300 });
-    expect(applied(doc, updateOpening('d1', { hinge: 'end', width: 900 })).shell.openings[0]).toMatchObject({ hinge: 'end', width: 900 });
+    expect(applied(doc, updateOpening('w1', { sill: 800, height: 1300 })).shell.openings[1]).toMatchObject({
+      sill: 800,
+      height: 1300,
+    });
+    expect(applied(doc, updateOpening('d1', { hinge: 'end', width: 900 })).shell.openings[0]).toMatchObject({
+      hinge: 'end',
+      width: 900,
+    });
   });
 
   it('refuses fields the opening does not have, a run past the wall end and an unknown id', () => {

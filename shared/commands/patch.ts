@@ -29,7 +29,8 @@ function walk(before: unknown, after: unknown, path: PathKey[], out: Patch[]): v
       else out.push({ path: [...path, key], before: { present: true, value: before[key] }, after: ABSENT });
     }
     for (const key of Object.keys(after)) {
-      if (!Object.hasOwn(before, key)) out.push({ path: [...path, key], before: ABSENT, after: { present: true, value: after[key] } });
+      if (!Object.hasOwn(before, key))
+        out.push({ path: [...path, key], before: ABSENT, after: { present: true, value: after[key] } });
     }
     return;
   }

@@ -1,5 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { addPiece, duplicatePiece, holdPiece, movePiece, placePiece, removePiece, resizePiece, rotatePiece, updatePiece } from './piece-commands';
+import {
+  addPiece,
+  duplicatePiece,
+  holdPiece,
+  movePiece,
+  placePiece,
+  removePiece,
+  resizePiece,
+  rotatePiece,
+  updatePiece,
+} from './piece-commands';
 import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';
 
 const stool = { id: 'stool', name: 'Stool', x: 1000, y: 1000, width: 400, depth: 400, height: 450, status: 'new' as const };
@@ -21,7 +31,9 @@ describe('addPiece', () => {
   it('refuses an unknown option, a taken id and a bad size', () => {
     const doc = sampleDoc();
     expect(refusal(doc, addPiece('opt-z', stool))).toBe("Can't add Stool: there is no option opt-z.");
-    expect(refusal(doc, addPiece('opt-a', { ...stool, id: 'sofa' }))).toBe("Can't add Stool: option opt-a already has a piece sofa.");
+    expect(refusal(doc, addPiece('opt-a', { ...stool, id: 'sofa' }))).toBe(
+      "Can't add Stool: option opt-a already has a piece sofa.",
+    );
     expect(refusal(doc, addPiece('opt-a', { ...stool, depth: -1 }))).toBe("Can't add Stool: depth must be more than 0 mm.");
   });
 });
@@ -38,7 +50,9 @@ describe('movePiece', () => {
   it('refuses a missing piece and a position that is not a number', () => {
     const doc = sampleDoc();
     expect(refusal(doc, movePiece('opt-a', 'bed', 0, 0))).toBe("Can't move piece: there is no piece bed in option opt-a.");
-    expect(refusal(doc, movePiece('opt-a', 'sofa', Number.POSITIVE_INFINITY, 0))).toBe("Can't move Sofa: x must be a number of millimetres.");
+    expect(refusal(doc, movePiece('opt-a', 'sofa', Number.POSITIVE_INFINITY, 0))).toBe(
+      "Can't move Sofa: x must be a number of millimetres.",
+    );
   });
 });
 
@@ -72,20 +86,40 @@ describe('updatePiece', () => {
     const doc = sampleDoc();
     const next = applied(
       doc,
-      updatePiece('opt-a', 'chair', { name: 'Reading chair', price: 320, status: 'new', elevation: 0, finishId: 'velvet-moss', colour: null, supplierUrl: 'https://example.com/chair' }),
+      updatePiece('opt-a', 'chair', {
+        name: 'Reading chair',
+        price: 320,
+        status: 'new',
+        elevation: 0,
+        finishId: 'velvet-moss',
+        colour: null,
+        supplierUrl: 'https://example.com/chair',
+      }),
     );
     const chair = pieceOf(next, 'opt-a', 'chair');
-    expect(chair).toMatchObject({ name: 'Reading chair', price: 320, status: 'new', finishId: 'velvet-moss', supplierUrl: 'https://example.com/chair' });
+    expect(chair).toMatchObject({
+      name: 'Reading chair',
+      price: 320,
+      status: 'new',
+      finishId: 'velvet-moss',
+      supplierUrl: 'https://example.com/chair',
+    });
     expect(chair && 'colour' in chair).toBe(false);
-    expect(pieceOf(applied(next, updatePiece('opt-a', 'chair', { supplierUrl: null, price: null })), 'opt-a', 'chair')).not.toHaveProperty('supplierUrl');
+    expect(
+      pieceOf(applied(next, updatePiece('opt-a', 'chair', { supplierUrl: null, price: null })), 'opt-a', 'chair'),
+    ).not.toHaveProperty('supplierUrl');
     expect(updatePiece('opt-a', 'chair', { name: 'Reading chair' }).label(doc)).toBe('Rename Armchair');
     expect(updatePiece('opt-a', 'chair', { price: 1 }).label(doc)).toBe('Change Armchair');
   });
 
   it('refuses values the schema does not allow and fields that other commands own', () => {
     const doc = sampleDoc();
-    expect(refusal(doc, updatePiece('opt-a', 'sofa', { colour: 'red' }))).toBe("Can't change Sofa: colour must be a colour like #a0b1c2.");
-    expect(refusal(doc, updatePiece('opt-a', 'sofa', { elevation: -10 }))).toBe("Can't change Sofa: elevation cannot be below the floor.");
+    expect(refusal(doc, updatePiece('opt-a', 'sofa', { colour: 'red' }))).toBe(
+      "Can't change Sofa: colour must be a colour like #a0b1c2.",
+    );
+    expect(refusal(doc, updatePiece('opt-a', 'sofa', { elevation: -10 }))).toBe(
+      "Can't change Sofa: elevation cannot be below the floor.",
+    );
     expect(refusal(doc, updatePiece('opt-a', 'sofa', { x: 5 } as never))).toBe("Can't change Sofa: x cannot be changed here.");
   });
 });
@@ -96,13 +130,18 @@ describe('duplicatePiece', () => {
     const next = applied(doc, duplicatePiece('opt-a', 'chair', 'chair-2', [0, 1000]));
     expect(next.options['opt-a'].pieces.map((p) => p.id)).toEqual(['sofa', 'chair', 'chair-2', 'lamp']);
     expect(pieceOf(next, 'opt-a', 'chair-2')).toEqual({ ...pieceOf(doc, 'opt-a', 'chair'), id: 'chair-2', x: 700, y: 2500 });
-    expect(pieceOf(applied(doc, duplicatePiece('opt-a', 'chair', 'chair-3')), 'opt-a', 'chair-3')).toMatchObject({ x: 900, y: 1700 });
+    expect(pieceOf(applied(doc, duplicatePiece('opt-a', 'chair', 'chair-3')), 'opt-a', 'chair-3')).toMatchObject({
+      x: 900,
+      y: 1700,
+    });
     expect(duplicatePiece('opt-a', 'chair', 'c').label(doc)).toBe('Duplicate Armchair');
   });
 
   it('refuses a taken or empty id', () => {
     const doc = sampleDoc();
-    expect(refusal(doc, duplicatePiece('opt-a', 'chair', 'sofa'))).toBe("Can't duplicate Armchair: option opt-a already has a piece sofa.");
+    expect(refusal(doc, duplicatePiece('opt-a', 'chair', 'sofa'))).toBe(
+      "Can't duplicate Armchair: option opt-a already has a piece sofa.",
+    );
     expect(refusal(doc, duplicatePiece('opt-a', 'chair', ''))).toBe("Can't duplicate Armchair: the copy needs an id.");
   });
 });
@@ -130,6 +169,8 @@ describe('placePiece and holdPiece', () => {
   it('refuse an unknown option or a place that is not a number', () => {
     const doc = sampleDoc();
     expect(refusal(doc, holdPiece('opt-q', 'sofa'))).toBe("Can't move piece to the holding area: there is no option opt-q.");
-    expect(refusal(doc, placePiece('opt-a', 'lamp', 0, Number.NaN))).toBe("Can't place piece: y must be a number of millimetres.");
+    expect(refusal(doc, placePiece('opt-a', 'lamp', 0, Number.NaN))).toBe(
+      "Can't place piece: y must be a number of millimetres.",
+    );
   });
 });

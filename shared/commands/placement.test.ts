@@ -3,20 +3,47 @@ import type { Piece } from '../schemas/option';
 import { boxesOverlap, boxInsideOutline, findPlacement } from './placement';
 import { pieceFootprintMm } from './piece-geometry';
 
-const rect: [number, number][] = [[0, 0], [4000, 0], [4000, 3000], [0, 3000]];
+const rect: [number, number][] = [
+  [0, 0],
+  [4000, 0],
+  [4000, 3000],
+  [0, 3000],
+];
 // An L: 6 m × 5 m with a 3.5 m × 3 m block taken out of its top right. Its bounding box's centre,
 // (3000, 2500), falls outside the room, beyond the inner walls — where "Add" used to pile pieces.
-const ell: [number, number][] = [[0, 0], [2500, 0], [2500, 3000], [6000, 3000], [6000, 5000], [0, 5000]];
+const ell: [number, number][] = [
+  [0, 0],
+  [2500, 0],
+  [2500, 3000],
+  [6000, 3000],
+  [6000, 5000],
+  [0, 5000],
+];
 
 function piece(id: string, x: number, y: number, width = 1000, depth = 800, rotation = 0): Piece {
-  return { id, name: id, x, y, width, depth, height: 800, rotation, elevation: 0, status: 'new', price: null, placed: true } as Piece;
+  return {
+    id,
+    name: id,
+    x,
+    y,
+    width,
+    depth,
+    height: 800,
+    rotation,
+    elevation: 0,
+    status: 'new',
+    price: null,
+    placed: true,
+  } as Piece;
 }
 
 const fits = (outline: [number, number][], p: Piece) => boxInsideOutline(outline, pieceFootprintMm(p));
 
 describe('findPlacement', () => {
   it('keeps the asked-for spot when it is free floor', () => {
-    expect(findPlacement({ outline: rect }, [], { width: 1000, depth: 800, rotation: 0, near: [2000, 1500] })).toEqual([2000, 1500]);
+    expect(findPlacement({ outline: rect }, [], { width: 1000, depth: 800, rotation: 0, near: [2000, 1500] })).toEqual([
+      2000, 1500,
+    ]);
   });
 
   it('in an L-shaped room, never lands across the inner wall, and lands near the asked-for spot', () => {
@@ -38,7 +65,16 @@ describe('findPlacement', () => {
 
   it('eight pieces added one after another in the L all stand on free floor, none over a wall or another', () => {
     const placed: Piece[] = [];
-    const sizes: [number, number][] = [[2100, 900], [800, 800], [800, 800], [1200, 600], [1600, 400], [500, 500], [1800, 1000], [450, 450]];
+    const sizes: [number, number][] = [
+      [2100, 900],
+      [800, 800],
+      [800, 800],
+      [1200, 600],
+      [1600, 400],
+      [500, 500],
+      [1800, 1000],
+      [450, 450],
+    ];
     sizes.forEach(([w, d], i) => {
       const at = findPlacement({ outline: ell }, placed, { width: w, depth: d, rotation: 0, near: [3000, 2500] });
       placed.push(piece(`p${i}`, at[0], at[1], w, d));
@@ -58,7 +94,9 @@ describe('findPlacement', () => {
   it('ignores the piece being placed and holding-area pieces', () => {
     const self = piece('self', 2000, 1500);
     const held = { ...piece('held', 2000, 1500), placed: false };
-    expect(findPlacement({ outline: rect }, [self, held], { id: 'self', width: 1000, depth: 800, rotation: 0, near: [2000, 1500] })).toEqual([2000, 1500]);
+    expect(
+      findPlacement({ outline: rect }, [self, held], { id: 'self', width: 1000, depth: 800, rotation: 0, near: [2000, 1500] }),
+    ).toEqual([2000, 1500]);
   });
 
   it('with no free floor left, still lands inside the room', () => {

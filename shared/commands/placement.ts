@@ -76,7 +76,11 @@ export interface PlacementRequest {
  * to `near`. With no free spot, the nearest spot inside the outline (it may overlap a piece); with
  * not even that (a piece larger than the room), the inside point nearest to `near`.
  */
-export function findPlacement(shell: Pick<RoomShell, 'outline'>, pieces: readonly Piece[], request: PlacementRequest): [number, number] {
+export function findPlacement(
+  shell: Pick<RoomShell, 'outline'>,
+  pieces: readonly Piece[],
+  request: PlacementRequest,
+): [number, number] {
   const { outline } = shell;
   const others = pieces.filter((p) => p.placed && p.id !== request.id).map((p) => pieceFootprintMm(p));
   const xs = outline.map((p) => p[0]);
@@ -87,7 +91,13 @@ export function findPlacement(shell: Pick<RoomShell, 'outline'>, pieces: readonl
   const maxY = Math.max(...ys);
   const step = Math.max(PLACEMENT_STEP_MM, (maxX - minX) / MAX_STEPS_PER_AXIS, (maxY - minY) / MAX_STEPS_PER_AXIS);
   const [nx, ny] = request.near;
-  const pose = (x: number, y: number): PiecePose => ({ x, y, width: request.width, depth: request.depth, rotation: request.rotation });
+  const pose = (x: number, y: number): PiecePose => ({
+    x,
+    y,
+    width: request.width,
+    depth: request.depth,
+    rotation: request.rotation,
+  });
 
   // Spots on a grid through the asked-for point itself, so a free `near` is kept exactly.
   const spots: { x: number; y: number; d: number }[] = [];

@@ -2,11 +2,26 @@ import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import type { Piece } from '../schemas/option';
 import { pieceBoundsMm, pieceFootprintMm } from './piece-geometry';
-import { nudge, snapAngle, snapPieceToPieces, snapPieceToWalls, snapToGrid, NUDGE_STEP_MM, WALL_SNAP_TOLERANCE_MM } from './snapping';
+import {
+  nudge,
+  snapAngle,
+  snapPieceToPieces,
+  snapPieceToWalls,
+  snapToGrid,
+  NUDGE_STEP_MM,
+  WALL_SNAP_TOLERANCE_MM,
+} from './snapping';
 import { lOutline } from '../../tests/fixtures/commands';
 
 // 4200 × 3600 mm: wall 0 along the top (y = 0), 1 on the right, 2 along the bottom, 3 on the left.
-const shell = roomShellSchema.parse({ outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]] });
+const shell = roomShellSchema.parse({
+  outline: [
+    [0, 0],
+    [4200, 0],
+    [4200, 3600],
+    [0, 3600],
+  ],
+});
 
 function box(id: string, x: number, y: number, width: number, depth: number, rotation = 0, placed = true): Piece {
   return { id, name: id, x, y, width, depth, height: 800, rotation, elevation: 0, status: 'new', placed };

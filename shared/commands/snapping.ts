@@ -57,7 +57,11 @@ function rotationFacingDeg(direction: readonly [number, number]): number {
  * flush against that face and turns it to face into the room, keeping its place along the wall. The
  * nearest wall wins; the piece's centre must be in front of the wall and alongside it.
  */
-export function snapPieceToWalls<P extends PiecePose>(piece: P, shell: Pick<RoomShell, 'outline' | 'wallThickness' | 'wallThicknesses'>, toleranceMm: number = WALL_SNAP_TOLERANCE_MM): WallSnap<P> {
+export function snapPieceToWalls<P extends PiecePose>(
+  piece: P,
+  shell: Pick<RoomShell, 'outline' | 'wallThickness' | 'wallThicknesses'>,
+  toleranceMm: number = WALL_SNAP_TOLERANCE_MM,
+): WallSnap<P> {
   const corners = pieceFootprintMm(piece);
   const walls = layoutShellWalls(shell);
   let best: { wall: number; gapMm: number; alongMm: number; inward: [number, number] } | null = null;
@@ -91,7 +95,11 @@ export interface PieceSnap<P> {
 
 type Axis = 'x' | 'y';
 
-function nearestEdge(moving: { min: number; max: number }, others: readonly { id: string; min: number; max: number }[], toleranceMm: number): { shiftMm: number; snap: EdgeSnap } | null {
+function nearestEdge(
+  moving: { min: number; max: number },
+  others: readonly { id: string; min: number; max: number }[],
+  toleranceMm: number,
+): { shiftMm: number; snap: EdgeSnap } | null {
   let best: { shiftMm: number; snap: EdgeSnap } | null = null;
   for (const other of others) {
     // Butting up against either side of the other piece, or lining up with either of its edges.
@@ -114,13 +122,23 @@ function nearestEdge(moving: { min: number; max: number }, others: readonly { id
  * of another piece's plan box within toleranceMm of one of this piece's edges pulls it level. Pieces
  * in the holding area and the piece itself are ignored.
  */
-export function snapPieceToPieces<P extends PiecePose & Pick<Piece, 'id'>>(piece: P, others: readonly Piece[], toleranceMm: number = PIECE_SNAP_TOLERANCE_MM): PieceSnap<P> {
+export function snapPieceToPieces<P extends PiecePose & Pick<Piece, 'id'>>(
+  piece: P,
+  others: readonly Piece[],
+  toleranceMm: number = PIECE_SNAP_TOLERANCE_MM,
+): PieceSnap<P> {
   const own = pieceBoundsMm(piece);
-  const boxes = others.filter((o) => o.id !== piece.id && o.placed !== false).map((o) => ({ id: o.id, bounds: pieceBoundsMm(o) }));
+  const boxes = others
+    .filter((o) => o.id !== piece.id && o.placed !== false)
+    .map((o) => ({ id: o.id, bounds: pieceBoundsMm(o) }));
   const along = (axis: Axis) =>
     nearestEdge(
       axis === 'x' ? { min: own.minX, max: own.maxX } : { min: own.minY, max: own.maxY },
-      boxes.map((b) => (axis === 'x' ? { id: b.id, min: b.bounds.minX, max: b.bounds.maxX } : { id: b.id, min: b.bounds.minY, max: b.bounds.maxY })),
+      boxes.map((b) =>
+        axis === 'x'
+          ? { id: b.id, min: b.bounds.minX, max: b.bounds.maxX }
+          : { id: b.id, min: b.bounds.minY, max: b.bounds.maxY },
+      ),
       toleranceMm,
     );
   const x = along('x');

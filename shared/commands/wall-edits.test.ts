@@ -21,11 +21,28 @@ describe('wall renumbering', () => {
       wallHeight: 2600,
       wallThickness: 100,
       // corner 0 sits halfway along the top wall, which walls 4 and 0 share
-      outline: [[2000, 0], [4200, 0], [4200, 3600], [0, 3600], [0, 0]],
-      openings: [{ ...door, id: 'a', wall: 0 }, { ...door, id: 'b', wall: 4 }],
+      outline: [
+        [2000, 0],
+        [4200, 0],
+        [4200, 3600],
+        [0, 3600],
+        [0, 0],
+      ],
+      openings: [
+        { ...door, id: 'a', wall: 0 },
+        { ...door, id: 'b', wall: 4 },
+      ],
     });
     const next = applied(doc, removeCorner(0));
-    expect(next.shell.outline).toEqual([[4200, 0], [4200, 3600], [0, 3600], [0, 0]]);
-    expect(next.shell.openings.map((o) => [o.id, o.wall, o.offset])).toEqual([['a', 3, 2300], ['b', 3, 300]]);
+    expect(next.shell.outline).toEqual([
+      [4200, 0],
+      [4200, 3600],
+      [0, 3600],
+      [0, 0],
+    ]);
+    expect(next.shell.openings.map((o) => [o.id, o.wall, o.offset])).toEqual([
+      ['a', 3, 2300],
+      ['b', 3, 300],
+    ]);
   });
 });

@@ -35,12 +35,18 @@ export function refitOpenings(openings: readonly Opening[], outline: readonly Pl
   const refitted: Opening[] = [];
   for (const opening of openings) {
     if (opening.wall >= outline.length) {
-      return { ok: false, reason: `${openingWords(opening)} is on wall ${opening.wall}, which the new outline does not have (remove it first)` };
+      return {
+        ok: false,
+        reason: `${openingWords(opening)} is on wall ${opening.wall}, which the new outline does not have (remove it first)`,
+      };
     }
     const lengthMm = wallLengthMm(outline, opening.wall);
     const latestOffsetMm = lengthMm - CORNER_MARGIN_MM - opening.width;
     if (latestOffsetMm < CORNER_MARGIN_MM) {
-      return { ok: false, reason: `${openingWords(opening)} (${mm(opening.width)} wide) would no longer fit on wall ${opening.wall} (${mm(lengthMm)} long)` };
+      return {
+        ok: false,
+        reason: `${openingWords(opening)} (${mm(opening.width)} wide) would no longer fit on wall ${opening.wall} (${mm(lengthMm)} long)`,
+      };
     }
     if (opening.offset > latestOffsetMm) {
       refitted.push({ ...opening, offset: latestOffsetMm });

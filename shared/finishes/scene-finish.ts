@@ -3,7 +3,14 @@ import type { Finish, FinishCategory, PhotoFinish, Sheen } from '../schemas/fini
 
 export type SceneFinish =
   | { kind: 'paint'; colourHex: string; roughness: number }
-  | { kind: 'photo'; textureUrl: string; repeatWidthMm: number; repeatHeightMm: number; roughness: number; meanColourHex: string };
+  | {
+      kind: 'photo';
+      textureUrl: string;
+      repeatWidthMm: number;
+      repeatHeightMm: number;
+      roughness: number;
+      meanColourHex: string;
+    };
 
 // Physically based roughness (0 mirror-smooth … 1 fully diffuse). Chosen by eye against how these
 // surfaces look in daylight: common practice in real-time rendering, no published source.
@@ -45,5 +52,5 @@ export function toSceneFinish(finish: Finish, opts: { size?: 'standard' | 'large
 }
 
 function pickTexture(finish: PhotoFinish, size: 'standard' | 'large'): string | null {
-  return size === 'large' ? finish.files.textureLargeUrl ?? finish.files.textureUrl : finish.files.textureUrl;
+  return size === 'large' ? (finish.files.textureLargeUrl ?? finish.files.textureUrl) : finish.files.textureUrl;
 }

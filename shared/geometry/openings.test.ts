@@ -3,7 +3,15 @@ import type { Door } from '../schemas/room';
 import { doorSwing, placeOpening, placeShellOpenings } from './openings';
 import { layoutWalls } from './walls';
 
-const walls = layoutWalls([[0, 0], [4200, 0], [4200, 3600], [0, 3600]], [100, 100, 100, 100]);
+const walls = layoutWalls(
+  [
+    [0, 0],
+    [4200, 0],
+    [4200, 3600],
+    [0, 3600],
+  ],
+  [100, 100, 100, 100],
+);
 const door: Door = { id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' };
 
 describe('placeOpening', () => {
@@ -17,7 +25,15 @@ describe('placeOpening', () => {
   });
 
   it('lifts a window by its sill', () => {
-    const placed = placeOpening(walls[2], { id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 });
+    const placed = placeOpening(walls[2], {
+      id: 'w1',
+      type: 'window',
+      wall: 2,
+      offset: 1000,
+      width: 1500,
+      height: 1200,
+      sill: 900,
+    });
     // wall 2 runs from (4200, 3600) towards (0, 3600)
     expect(placed.insideStart).toEqual([3200, 3600]);
     expect(placed.outsideEnd).toEqual([1700, 3700]);
@@ -56,10 +72,19 @@ describe('doorSwing', () => {
 describe('placeShellOpenings', () => {
   it('places every opening of a shell and swings its doors, honouring per-wall thickness', () => {
     const { placements, swings } = placeShellOpenings({
-      outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
+      outline: [
+        [0, 0],
+        [4200, 0],
+        [4200, 3600],
+        [0, 3600],
+      ],
       wallThickness: 100,
       wallThicknesses: [250],
-      openings: [door, { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 }, { ...door, id: 'lost', wall: 9 }],
+      openings: [
+        door,
+        { id: 'p1', type: 'passage', wall: 3, offset: 800, width: 900, height: 2100 },
+        { ...door, id: 'lost', wall: 9 },
+      ],
     });
     expect(placements.map((p) => p.id)).toEqual(['d1', 'p1']);
     expect(placements[0].outsideStart).toEqual([300, -250]);

@@ -69,9 +69,14 @@ export interface DoorSwing {
 export function doorSwing(wall: WallLayout, door: Door): DoorSwing {
   const placement = placeOpening(wall, door);
   const outside = door.swing === 'out';
-  const hingeMm = door.hinge === 'start'
-    ? (outside ? placement.outsideStart : placement.insideStart)
-    : (outside ? placement.outsideEnd : placement.insideEnd);
+  const hingeMm =
+    door.hinge === 'start'
+      ? outside
+        ? placement.outsideStart
+        : placement.insideStart
+      : outside
+        ? placement.outsideEnd
+        : placement.insideEnd;
   const closed: Vec2 = door.hinge === 'start' ? wall.direction : [-wall.direction[0], -wall.direction[1]];
   const open: Vec2 = outside ? wall.outward : [-wall.outward[0], -wall.outward[1]];
   const closedAngleDeg = angleDegOf(closed);

@@ -13,7 +13,12 @@ function expectCorners(actual: [number, number][], expected: [number, number][])
 describe('outlineFromWalk', () => {
   it('walks a rectangle with the default right-angle right turns', () => {
     const walk = outlineFromWalk([{ lengthMm: 4200 }, { lengthMm: 3600 }, { lengthMm: 4200 }, { lengthMm: 3600 }]);
-    expectCorners(walk.corners, [[0, 0], [4200, 0], [4200, 3600], [0, 3600]]);
+    expectCorners(walk.corners, [
+      [0, 0],
+      [4200, 0],
+      [4200, 3600],
+      [0, 3600],
+    ]);
     expect(walk.closure.gapMm).toBeCloseTo(0, 9);
     expect(walk.closure.angleErrorDeg).toBeCloseTo(0, 9);
   });
@@ -28,7 +33,14 @@ describe('outlineFromWalk', () => {
       { lengthMm: 4000 },
     ];
     const walk = outlineFromWalk(steps);
-    expectCorners(walk.corners, [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]]);
+    expectCorners(walk.corners, [
+      [0, 0],
+      [5000, 0],
+      [5000, 2500],
+      [3000, 2500],
+      [3000, 4000],
+      [0, 4000],
+    ]);
     expect(walk.closure.gapMm).toBeCloseTo(0, 6);
   });
 
@@ -56,8 +68,17 @@ describe('outlineFromWalk', () => {
   });
 
   it('starts from a given corner and heading', () => {
-    const walk = outlineFromWalk([{ lengthMm: 1000 }, { lengthMm: 1000 }, { lengthMm: 1000 }, { lengthMm: 1000 }], { x: 500, y: 500, headingDeg: 90 });
-    expectCorners(walk.corners, [[500, 500], [500, 1500], [-500, 1500], [-500, 500]]);
+    const walk = outlineFromWalk([{ lengthMm: 1000 }, { lengthMm: 1000 }, { lengthMm: 1000 }, { lengthMm: 1000 }], {
+      x: 500,
+      y: 500,
+      headingDeg: 90,
+    });
+    expectCorners(walk.corners, [
+      [500, 500],
+      [500, 1500],
+      [-500, 1500],
+      [-500, 500],
+    ]);
   });
 });
 
@@ -65,7 +86,12 @@ describe('closeOutline', () => {
   it('stretches the last two walls and keeps the right angles', () => {
     const closed = closeOutline([{ lengthMm: 4200 }, { lengthMm: 3600 }, { lengthMm: 4190 }, { lengthMm: 3590 }]);
     expect(closed.method).toBe('last-two-walls');
-    expectCorners(closed.corners, [[0, 0], [4200, 0], [4200, 3600], [0, 3600]]);
+    expectCorners(closed.corners, [
+      [0, 0],
+      [4200, 0],
+      [4200, 3600],
+      [0, 3600],
+    ]);
     expect(closed.changes).toEqual([
       { wall: 2, measuredMm: 4190, closedMm: expect.closeTo(4200, 6) },
       { wall: 3, measuredMm: 3590, closedMm: expect.closeTo(3600, 6) },
@@ -74,21 +100,61 @@ describe('closeOutline', () => {
 
   it('falls back to running the last wall straight home when the last two are parallel', () => {
     // The west wall is measured in two parts (no turn between them), so the last two walls are parallel.
-    const closed = closeOutline([{ lengthMm: 4000 }, { lengthMm: 3000 }, { lengthMm: 4000 }, { lengthMm: 1500, turnDeg: 0 }, { lengthMm: 1490 }]);
+    const closed = closeOutline([
+      { lengthMm: 4000 },
+      { lengthMm: 3000 },
+      { lengthMm: 4000 },
+      { lengthMm: 1500, turnDeg: 0 },
+      { lengthMm: 1490 },
+    ]);
     expect(closed.method).toBe('last-wall');
     expect(closed.changes).toEqual([{ wall: 4, measuredMm: 1490, closedMm: expect.closeTo(1500, 6) }]);
-    expectCorners(closed.corners, [[0, 0], [4000, 0], [4000, 3000], [0, 3000], [0, 1500]]);
+    expectCorners(closed.corners, [
+      [0, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+      [0, 1500],
+    ]);
   });
 });
 
 describe('corners and walks', () => {
   it('drops a repeated closing corner only', () => {
-    expect(outlineFromCorners([[0, 0], [10, 0], [10, 10], [0, 0]])).toEqual([[0, 0], [10, 0], [10, 10]]);
-    expect(outlineFromCorners([[0, 0], [10, 0], [10, 10]])).toEqual([[0, 0], [10, 0], [10, 10]]);
+    expect(
+      outlineFromCorners([
+        [0, 0],
+        [10, 0],
+        [10, 10],
+        [0, 0],
+      ]),
+    ).toEqual([
+      [0, 0],
+      [10, 0],
+      [10, 10],
+    ]);
+    expect(
+      outlineFromCorners([
+        [0, 0],
+        [10, 0],
+        [10, 10],
+      ]),
+    ).toEqual([
+      [0, 0],
+      [10, 0],
+      [10, 10],
+    ]);
   });
 
   it('retraces an outline as a walk that rebuilds it, in either winding', () => {
-    const lShape: [number, number][] = [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]];
+    const lShape: [number, number][] = [
+      [0, 0],
+      [5000, 0],
+      [5000, 2500],
+      [3000, 2500],
+      [3000, 4000],
+      [0, 4000],
+    ];
     for (const shape of [lShape, [...lShape].reverse()]) {
       const { start, steps } = walkFromOutline(shape);
       const rebuilt = outlineFromWalk(steps, start);
@@ -99,7 +165,14 @@ describe('corners and walks', () => {
   });
 
   it('gives interior angles with the re-entrant corner above 180°, either winding', () => {
-    const lShape: [number, number][] = [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]];
+    const lShape: [number, number][] = [
+      [0, 0],
+      [5000, 0],
+      [5000, 2500],
+      [3000, 2500],
+      [3000, 4000],
+      [0, 4000],
+    ];
     expect(interiorAnglesDeg(lShape).map((a) => Math.round(a))).toEqual([90, 90, 90, 270, 90, 90]);
     expect(interiorAnglesDeg([...lShape].reverse()).map((a) => Math.round(a))).toEqual([90, 90, 270, 90, 90, 90]);
     expect(findSelfCrossings(lShape)).toEqual([]);

@@ -132,7 +132,11 @@ export function walkFromOutline(corners: readonly Vec2[]): { start: WalkStart; s
     const here = sub(corners[(i + 1) % n], corners[i]);
     const next = sub(corners[(i + 2) % n], corners[(i + 1) % n]);
     const turn = normaliseAngleDeg(angleDegOf(next) - angleDegOf(here));
-    steps.push({ lengthMm: distance(corners[i], corners[(i + 1) % n]), turnDeg: Math.abs(turn), turn: turn < 0 ? 'left' : 'right' });
+    steps.push({
+      lengthMm: distance(corners[i], corners[(i + 1) % n]),
+      turnDeg: Math.abs(turn),
+      turn: turn < 0 ? 'left' : 'right',
+    });
   }
   const first = n > 1 ? sub(corners[1], corners[0]) : ([1, 0] as const);
   return { start: { x: corners[0]?.[0] ?? 0, y: corners[0]?.[1] ?? 0, headingDeg: angleDegOf(first) }, steps };

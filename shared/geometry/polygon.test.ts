@@ -1,16 +1,39 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_REPORTED_CROSSINGS, areaMm2, boundsMm, findSelfCrossings, perimeterMm, segmentsTouch, signedAreaMm2, triangulatePolygon, windingOnPlan } from './polygon';
+import {
+  MAX_REPORTED_CROSSINGS,
+  areaMm2,
+  boundsMm,
+  findSelfCrossings,
+  perimeterMm,
+  segmentsTouch,
+  signedAreaMm2,
+  triangulatePolygon,
+  windingOnPlan,
+} from './polygon';
 import { combOutline, starOutline } from './test-outlines';
 import { cross, distance, dot, sub } from './vec';
 import { POINT_TOLERANCE_MM } from './tolerances';
 import type { Vec2 } from './vec';
 
-const rectangle: Vec2[] = [[0, 0], [4200, 0], [4200, 3600], [0, 3600]];
-const lShape: Vec2[] = [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]];
+const rectangle: Vec2[] = [
+  [0, 0],
+  [4200, 0],
+  [4200, 3600],
+  [0, 3600],
+];
+const lShape: Vec2[] = [
+  [0, 0],
+  [5000, 0],
+  [5000, 2500],
+  [3000, 2500],
+  [3000, 4000],
+  [0, 4000],
+];
 
 function triangleArea(points: readonly Vec2[], triangles: number[]): number {
   let total = 0;
-  for (let k = 0; k < triangles.length; k += 3) total += Math.abs(signedAreaMm2([points[triangles[k]], points[triangles[k + 1]], points[triangles[k + 2]]]));
+  for (let k = 0; k < triangles.length; k += 3)
+    total += Math.abs(signedAreaMm2([points[triangles[k]], points[triangles[k + 1]], points[triangles[k + 2]]]));
   return total;
 }
 
@@ -38,19 +61,52 @@ describe('findSelfCrossings', () => {
   it('accepts simple outlines, L shapes and bays', () => {
     expect(findSelfCrossings(rectangle)).toEqual([]);
     expect(findSelfCrossings(lShape)).toEqual([]);
-    expect(findSelfCrossings([[0, 0], [3000, 0], [3000, 1000], [3400, 1400], [3400, 2600], [3000, 3000], [3000, 4000], [0, 4000]])).toEqual([]);
+    expect(
+      findSelfCrossings([
+        [0, 0],
+        [3000, 0],
+        [3000, 1000],
+        [3400, 1400],
+        [3400, 2600],
+        [3000, 3000],
+        [3000, 4000],
+        [0, 4000],
+      ]),
+    ).toEqual([]);
   });
 
   it('finds walls that cross in a bow tie', () => {
-    expect(findSelfCrossings([[0, 0], [4000, 0], [0, 3000], [4000, 3000]])).toEqual([{ wallA: 1, wallB: 3 }]);
+    expect(
+      findSelfCrossings([
+        [0, 0],
+        [4000, 0],
+        [0, 3000],
+        [4000, 3000],
+      ]),
+    ).toEqual([{ wallA: 1, wallB: 3 }]);
   });
 
   it('finds a wall that doubles back along its neighbour', () => {
-    expect(findSelfCrossings([[0, 0], [4000, 0], [2000, 0], [2000, 3000]]).length).toBeGreaterThan(0);
+    expect(
+      findSelfCrossings([
+        [0, 0],
+        [4000, 0],
+        [2000, 0],
+        [2000, 3000],
+      ]).length,
+    ).toBeGreaterThan(0);
   });
 
   it('finds a corner touching another wall', () => {
-    expect(findSelfCrossings([[0, 0], [4000, 0], [4000, 3000], [2000, 0], [0, 3000]]).length).toBeGreaterThan(0);
+    expect(
+      findSelfCrossings([
+        [0, 0],
+        [4000, 0],
+        [4000, 3000],
+        [2000, 0],
+        [0, 3000],
+      ]).length,
+    ).toBeGreaterThan(0);
   });
 
   it('stops after a few crossings, even when every wall crosses nearly every other', () => {
@@ -87,7 +143,8 @@ describe('findSelfCrossings', () => {
             const [shared, awayA, awayB] = j === i + 1 ? [b, a, d] : [a, b, c];
             const u = sub(awayA, shared);
             const v = sub(awayB, shared);
-            if (Math.abs(cross(u, v)) / Math.max(distance(awayA, shared), 1) < POINT_TOLERANCE_MM && dot(u, v) > 0) found.push({ wallA: i, wallB: j });
+            if (Math.abs(cross(u, v)) / Math.max(distance(awayA, shared), 1) < POINT_TOLERANCE_MM && dot(u, v) > 0)
+              found.push({ wallA: i, wallB: j });
           } else if (segmentsTouch(a, b, c, d)) found.push({ wallA: i, wallB: j });
         }
       }
@@ -95,7 +152,7 @@ describe('findSelfCrossings', () => {
     };
     let seed = 12345;
     // A small linear congruential generator (Numerical Recipes' constants), so the run repeats.
-    const random = () => ((seed = (seed * 1664525 + 1013904223) >>> 0) / 2 ** 32);
+    const random = () => (seed = (seed * 1664525 + 1013904223) >>> 0) / 2 ** 32;
     for (let trial = 0; trial < 300; trial++) {
       const n = 4 + (trial % 9);
       // Whole 500 mm steps make collinear walls and touching corners common.
@@ -115,20 +172,44 @@ describe('triangulatePolygon', () => {
   });
 
   it('copes with a straight-through corner', () => {
-    const withMidpoint: Vec2[] = [[0, 0], [2000, 0], [4000, 0], [4000, 3000], [0, 3000]];
+    const withMidpoint: Vec2[] = [
+      [0, 0],
+      [2000, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ];
     expect(triangleArea(withMidpoint, triangulatePolygon(withMidpoint))).toBeCloseTo(12_000_000, 3);
   });
 
   it('keeps a bump-out whose corners line up with the long wall inside the room', () => {
     // 7.0 × 4.5 m plus a 2.6 × 1.5 m bay: 31.5 + 3.9 = 35.4 m² (derived).
-    const bay: Vec2[] = [[0, 0], [7000, 0], [7000, 4500], [4800, 4500], [4800, 6000], [2200, 6000], [2200, 4500], [0, 4500]];
+    const bay: Vec2[] = [
+      [0, 0],
+      [7000, 0],
+      [7000, 4500],
+      [4800, 4500],
+      [4800, 6000],
+      [2200, 6000],
+      [2200, 4500],
+      [0, 4500],
+    ];
     for (const shape of [bay, [...bay].reverse()]) {
       expect(triangleArea(shape, triangulatePolygon(shape))).toBeCloseTo(35_400_000, 0);
     }
   });
 
   it('covers a U shape', () => {
-    const u: Vec2[] = [[0, 0], [1000, 0], [1000, 2000], [2000, 2000], [2000, 0], [3000, 0], [3000, 3000], [0, 3000]];
+    const u: Vec2[] = [
+      [0, 0],
+      [1000, 0],
+      [1000, 2000],
+      [2000, 2000],
+      [2000, 0],
+      [3000, 0],
+      [3000, 3000],
+      [0, 3000],
+    ];
     expect(triangleArea(u, triangulatePolygon(u))).toBeCloseTo(areaMm2(u), 3);
   });
 });

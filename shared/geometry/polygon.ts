@@ -89,13 +89,26 @@ function side(ax: number, ay: number, bx: number, by: number, scaleMm: number, p
 // onSegment() above on plain numbers.
 function within(ax: number, ay: number, bx: number, by: number, px: number, py: number): boolean {
   return (
-    px <= Math.max(ax, bx) + POINT_TOLERANCE_MM && px >= Math.min(ax, bx) - POINT_TOLERANCE_MM &&
-    py <= Math.max(ay, by) + POINT_TOLERANCE_MM && py >= Math.min(ay, by) - POINT_TOLERANCE_MM
+    px <= Math.max(ax, bx) + POINT_TOLERANCE_MM &&
+    px >= Math.min(ax, bx) - POINT_TOLERANCE_MM &&
+    py <= Math.max(ay, by) + POINT_TOLERANCE_MM &&
+    py >= Math.min(ay, by) - POINT_TOLERANCE_MM
   );
 }
 
 /** segmentsTouch() on plain numbers, given each wall's scale (its length, at least 1 mm). */
-function wallsTouch(ax: number, ay: number, bx: number, by: number, sab: number, cx: number, cy: number, dx: number, dy: number, scd: number): boolean {
+function wallsTouch(
+  ax: number,
+  ay: number,
+  bx: number,
+  by: number,
+  sab: number,
+  cx: number,
+  cy: number,
+  dx: number,
+  dy: number,
+  scd: number,
+): boolean {
   const o1 = side(ax, ay, bx, by, sab, cx, cy);
   const o2 = side(ax, ay, bx, by, sab, dx, dy);
   const o3 = side(cx, cy, dx, dy, scd, ax, ay);
@@ -149,9 +162,12 @@ export function findSelfCrossings(points: readonly Vec2[], limit = MAX_REPORTED_
         const vy = ys[awayB] - ys[shared];
         touch = Math.abs(ux * vy - uy * vx) / Math.max(Math.hypot(ux, uy), 1) < POINT_TOLERANCE_MM && ux * vx + uy * vy > 0;
       } else if (
-        !shortI && scales[j] > 1 &&
-        (lows[2 * j] > highs[2 * i] + POINT_TOLERANCE_MM || highs[2 * j] < lows[2 * i] - POINT_TOLERANCE_MM ||
-          lows[2 * j + 1] > highs[2 * i + 1] + POINT_TOLERANCE_MM || highs[2 * j + 1] < lows[2 * i + 1] - POINT_TOLERANCE_MM)
+        !shortI &&
+        scales[j] > 1 &&
+        (lows[2 * j] > highs[2 * i] + POINT_TOLERANCE_MM ||
+          highs[2 * j] < lows[2 * i] - POINT_TOLERANCE_MM ||
+          lows[2 * j + 1] > highs[2 * i + 1] + POINT_TOLERANCE_MM ||
+          highs[2 * j + 1] < lows[2 * i + 1] - POINT_TOLERANCE_MM)
       ) {
         touch = false;
       } else {

@@ -43,17 +43,38 @@ function misfacedTriangles(mesh: MeshData): number {
 
 describe('buildRoomScene', () => {
   it('faces every triangle the way its normal points', () => {
-    for (const data of [scene(), scene({ ...example, outline: [...(example.outline as [number, number][])].reverse(), openings: [] }), (() => {
-      const { shell, option } = typicalRoom();
-      return buildRoomScene(shell, option);
-    })()]) {
+    for (const data of [
+      scene(),
+      scene({ ...example, outline: [...(example.outline as [number, number][])].reverse(), openings: [] }),
+      (() => {
+        const { shell, option } = typicalRoom();
+        return buildRoomScene(shell, option);
+      })(),
+    ]) {
       for (const mesh of sceneMeshes(data)) expect(misfacedTriangles(mesh)).toBe(0);
     }
   });
 
   it('faces square-cut joins outward at thickness steps and sharp corners', () => {
-    const stepped = scene({ outline: [[0, 0], [2000, 0], [4000, 0], [4000, 3000], [0, 3000]], wallThicknesses: [100, 250], openings: [] });
-    const sharp = scene({ outline: [[0, 0], [5000, 0], [0, 300]], openings: [] });
+    const stepped = scene({
+      outline: [
+        [0, 0],
+        [2000, 0],
+        [4000, 0],
+        [4000, 3000],
+        [0, 3000],
+      ],
+      wallThicknesses: [100, 250],
+      openings: [],
+    });
+    const sharp = scene({
+      outline: [
+        [0, 0],
+        [5000, 0],
+        [0, 300],
+      ],
+      openings: [],
+    });
     for (const data of [stepped, sharp]) for (const mesh of sceneMeshes(data)) expect(misfacedTriangles(mesh)).toBe(0);
     // the step face (150 mm × 2.6 m) is part of wall 1's outside
     expect(area(stepped.walls[1].outside)).toBeCloseTo(0.15 * 2.6 + 2.1 * 2.6, 4);
@@ -123,7 +144,21 @@ describe('buildRoomScene', () => {
     expect(leafIn.max[2]).toBeCloseTo(0.82, 6);
     expect(leafIn.min[0]).toBeCloseTo(0.3, 6);
     expect(leafIn.max[0]).toBeCloseTo(0.34, 6);
-    const outward = { ...example, openings: [{ id: 'd1', type: 'door' as const, wall: 0, offset: 300, width: 820, height: 2040, hinge: 'end' as const, swing: 'out' as const }] };
+    const outward = {
+      ...example,
+      openings: [
+        {
+          id: 'd1',
+          type: 'door' as const,
+          wall: 0,
+          offset: 300,
+          width: 820,
+          height: 2040,
+          hinge: 'end' as const,
+          swing: 'out' as const,
+        },
+      ],
+    };
     const leafOut = meshBounds(scene(outward).doorLeaves[0].mesh);
     expect(leafOut.max[2]).toBeCloseTo(-0.1, 6);
     expect(leafOut.min[2]).toBeCloseTo(-0.92, 6);
@@ -166,7 +201,9 @@ describe('buildRoomScene', () => {
 
   it('turns a piece clockwise seen from above', () => {
     // A 2 m × 0.1 m bar turned 45° clockwise on the plan points its +x end down the page (+z).
-    const data = scene(example, { pieces: [{ id: 'bar', name: 'Bar', x: 2000, y: 2000, width: 2000, depth: 10, height: 100, rotation: 45, status: 'new' }] });
+    const data = scene(example, {
+      pieces: [{ id: 'bar', name: 'Bar', x: 2000, y: 2000, width: 2000, depth: 10, height: 100, rotation: 45, status: 'new' }],
+    });
     const mesh = data.pieces[0].mesh;
     let far: V = [0, 0, 0];
     for (let i = 0; i < mesh.positions.length / 3; i++) if (vertex(mesh, i)[0] > far[0]) far = vertex(mesh, i);
@@ -180,7 +217,16 @@ describe('buildRoomScene', () => {
   });
 
   it('keeps inside faces facing in when the outline is drawn the other way round', () => {
-    const reversed = scene({ ...example, outline: [[0, 0], [0, 3600], [4200, 3600], [4200, 0]], openings: [] });
+    const reversed = scene({
+      ...example,
+      outline: [
+        [0, 0],
+        [0, 3600],
+        [4200, 3600],
+        [4200, 0],
+      ],
+      openings: [],
+    });
     // wall 0 now runs down the left side; into the room is +x
     expect(reversed.walls[0].inside.normals[0]).toBeCloseTo(1, 9);
     expect(reversed.walls[0].inside.normals[2]).toBeCloseTo(0, 9);

@@ -100,8 +100,12 @@ class MeshWriter {
     const pa = points[a];
     const pb = points[b];
     const pc = points[c];
-    const e1x = pb[0] - pa[0], e1y = pb[1] - pa[1], e1z = pb[2] - pa[2];
-    const e2x = pc[0] - pa[0], e2y = pc[1] - pa[1], e2z = pc[2] - pa[2];
+    const e1x = pb[0] - pa[0],
+      e1y = pb[1] - pa[1],
+      e1z = pb[2] - pa[2];
+    const e2x = pc[0] - pa[0],
+      e2y = pc[1] - pa[1],
+      e2z = pc[2] - pa[2];
     const facing = (e1y * e2z - e1z * e2y) * n[0] + (e1z * e2x - e1x * e2z) * n[1] + (e1x * e2y - e1y * e2x) * n[2];
     if (facing >= 0) this.indices.push(base + a, base + b, base + c);
     else this.indices.push(base + a, base + c, base + b);
@@ -111,7 +115,8 @@ class MeshWriter {
   polygon(points: readonly Vec3[], uvs: readonly (readonly [number, number])[], triangles: readonly number[], n: Vec3): void {
     const base = this.count;
     for (let i = 0; i < points.length; i++) this.vertex(points[i], n, uvs[i][0], uvs[i][1]);
-    for (let k = 0; k + 2 < triangles.length; k += 3) this.triangle(base, triangles[k], triangles[k + 1], triangles[k + 2], points, n);
+    for (let k = 0; k + 2 < triangles.length; k += 3)
+      this.triangle(base, triangles[k], triangles[k + 1], triangles[k + 2], points, n);
   }
 
   /** A flat convex quad, corners in order round it. */
@@ -125,8 +130,18 @@ class MeshWriter {
 }
 
 /** Plain number lists (scene metres) as a mesh's typed arrays. */
-export function meshFromArrays(positions: readonly number[], normals: readonly number[], uvs: readonly number[], indices: readonly number[]): MeshData {
-  return { positions: new Float32Array(positions), normals: new Float32Array(normals), uvs: new Float32Array(uvs), indices: new Uint32Array(indices) };
+export function meshFromArrays(
+  positions: readonly number[],
+  normals: readonly number[],
+  uvs: readonly number[],
+  indices: readonly number[],
+): MeshData {
+  return {
+    positions: new Float32Array(positions),
+    normals: new Float32Array(normals),
+    uvs: new Float32Array(uvs),
+    indices: new Uint32Array(indices),
+  };
 }
 
 const QUAD_TRIANGLES = [0, 1, 2, 0, 2, 3];
@@ -177,8 +192,16 @@ function writeWallFace(
   holes: readonly Hole[],
   normal: Vec3,
 ): void {
-  const us = sortedStops(holes.flatMap((h) => [h.fromMm, h.toMm]), fromMm, toMm);
-  const vs = sortedStops(holes.flatMap((h) => [h.bottomMm, h.topMm]), 0, heightMm);
+  const us = sortedStops(
+    holes.flatMap((h) => [h.fromMm, h.toMm]),
+    fromMm,
+    toMm,
+  );
+  const vs = sortedStops(
+    holes.flatMap((h) => [h.bottomMm, h.topMm]),
+    0,
+    heightMm,
+  );
   const base = addScaled(wall.start, wall.outward, faceOffsetMm);
   const at = (u: number, v: number) => planToScene(addScaled(base, wall.direction, u), v);
   for (let i = 0; i + 1 < us.length; i++) {
@@ -194,7 +217,12 @@ function writeWallFace(
       const tu1 = (u1 - fromMm) * MM_TO_M;
       writer.quad(
         [at(u0, v0), at(u1, v0), at(u1, v1), at(u0, v1)],
-        [[tu0, v0 * MM_TO_M], [tu1, v0 * MM_TO_M], [tu1, v1 * MM_TO_M], [tu0, v1 * MM_TO_M]],
+        [
+          [tu0, v0 * MM_TO_M],
+          [tu1, v0 * MM_TO_M],
+          [tu1, v1 * MM_TO_M],
+          [tu0, v1 * MM_TO_M],
+        ],
         normal,
       );
     }
@@ -208,22 +236,48 @@ function writeReveals(writer: MeshWriter, wall: WallLayout, placement: OpeningPl
   const d = sceneDirection(wall.direction);
   const back: Vec3 = [-d[0], 0, -d[2]];
   const tM = t * MM_TO_M;
-  for (const [alongMm, normal] of [[placement.fromMm, d], [placement.toMm, back]] as const) {
+  for (const [alongMm, normal] of [
+    [placement.fromMm, d],
+    [placement.toMm, back],
+  ] as const) {
     const inner = addScaled(wall.start, wall.direction, alongMm);
     const outer = addScaled(inner, wall.outward, t);
     const s = placement.sillMm * MM_TO_M;
     const h = placement.headMm * MM_TO_M;
     writer.quad(
-      [planToScene(inner, placement.sillMm), planToScene(outer, placement.sillMm), planToScene(outer, placement.headMm), planToScene(inner, placement.headMm)],
-      [[0, s], [tM, s], [tM, h], [0, h]],
+      [
+        planToScene(inner, placement.sillMm),
+        planToScene(outer, placement.sillMm),
+        planToScene(outer, placement.headMm),
+        planToScene(inner, placement.headMm),
+      ],
+      [
+        [0, s],
+        [tM, s],
+        [tM, h],
+        [0, h],
+      ],
       normal,
     );
   }
   const lengthM = (placement.toMm - placement.fromMm) * MM_TO_M;
-  for (const [heightMm, normal] of [[placement.headMm, DOWN], [placement.sillMm, UP]] as const) {
+  for (const [heightMm, normal] of [
+    [placement.headMm, DOWN],
+    [placement.sillMm, UP],
+  ] as const) {
     writer.quad(
-      [planToScene(placement.insideStart, heightMm), planToScene(placement.insideEnd, heightMm), planToScene(placement.outsideEnd, heightMm), planToScene(placement.outsideStart, heightMm)],
-      [[0, 0], [lengthM, 0], [lengthM, tM], [0, tM]],
+      [
+        planToScene(placement.insideStart, heightMm),
+        planToScene(placement.insideEnd, heightMm),
+        planToScene(placement.outsideEnd, heightMm),
+        planToScene(placement.outsideStart, heightMm),
+      ],
+      [
+        [0, 0],
+        [lengthM, 0],
+        [lengthM, tM],
+        [0, tM],
+      ],
       normal,
     );
   }
@@ -263,15 +317,38 @@ function writeBox(
     const w = widthMm * MM_TO_M;
     writer.quad(
       [planToScene(foot[a], bottomMm), planToScene(foot[b], bottomMm), planToScene(foot[b], topMm), planToScene(foot[a], topMm)],
-      [[0, vb], [w, vb], [w, vt], [0, vt]],
+      [
+        [0, vb],
+        [w, vb],
+        [w, vt],
+        [0, vt],
+      ],
       sceneDirection(outward),
     );
   }
   const x = sizeXMm * MM_TO_M;
   const y = sizeYMm * MM_TO_M;
-  const capUvs = [[0, 0], [x, 0], [x, y], [0, y]] as const;
-  writer.quad([planToScene(foot[0], topMm), planToScene(foot[1], topMm), planToScene(foot[2], topMm), planToScene(foot[3], topMm)], capUvs, UP);
-  writer.quad([planToScene(foot[0], bottomMm), planToScene(foot[1], bottomMm), planToScene(foot[2], bottomMm), planToScene(foot[3], bottomMm)], capUvs, DOWN);
+  const capUvs = [
+    [0, 0],
+    [x, 0],
+    [x, y],
+    [0, y],
+  ] as const;
+  writer.quad(
+    [planToScene(foot[0], topMm), planToScene(foot[1], topMm), planToScene(foot[2], topMm), planToScene(foot[3], topMm)],
+    capUvs,
+    UP,
+  );
+  writer.quad(
+    [
+      planToScene(foot[0], bottomMm),
+      planToScene(foot[1], bottomMm),
+      planToScene(foot[2], bottomMm),
+      planToScene(foot[3], bottomMm),
+    ],
+    capUvs,
+    DOWN,
+  );
 }
 
 function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], heightMm: number): WallSceneData {
@@ -293,7 +370,12 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
     const h = heightMm * MM_TO_M;
     outside.quad(
       [planToScene(join.from, 0), planToScene(join.to, 0), planToScene(join.to, heightMm), planToScene(join.from, heightMm)],
-      [[0, 0], [widthM, 0], [widthM, h], [0, h]],
+      [
+        [0, 0],
+        [widthM, 0],
+        [widthM, h],
+        [0, h],
+      ],
       sceneDirection(join.normal),
     );
     // A step between collinear walls has no top to fill; a cut corner leaves a triangle.
@@ -341,7 +423,15 @@ function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowScene
   writeBox(frame, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm, placement.sillMm, f);
   writeBox(frame, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm, placement.headMm - f, f);
   const glass = new MeshWriter();
-  writeBox(glass, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, GLASS_THICKNESS_MM, placement.sillMm + f, fullHeight - 2 * f);
+  writeBox(
+    glass,
+    at((innerFrom + innerTo) / 2),
+    wall.direction,
+    innerTo - innerFrom,
+    GLASS_THICKNESS_MM,
+    placement.sillMm + f,
+    fullHeight - 2 * f,
+  );
   return { openingId: placement.id, frame: frame.toMesh(), glass: glass.toMesh() };
 }
 

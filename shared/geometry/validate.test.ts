@@ -4,7 +4,15 @@ import { validateRoomShell } from './validate';
 import { starOutline } from './test-outlines';
 
 function problems(input: Partial<RoomShellInput>) {
-  const shell = roomShellSchema.parse({ outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]], ...input });
+  const shell = roomShellSchema.parse({
+    outline: [
+      [0, 0],
+      [3000, 0],
+      [3000, 3000],
+      [0, 3000],
+    ],
+    ...input,
+  });
   return worded(validateRoomShell(shell, 'room'));
 }
 
@@ -15,22 +23,54 @@ function worded(list: ReturnType<typeof validateRoomShell>) {
 
 describe('validateRoomShell', () => {
   it('accepts a sound room', () => {
-    expect(problems({ openings: [{ id: 'd1', type: 'door', wall: 0, offset: 100, width: 800, height: 2000, hinge: 'start', swing: 'in' }] })).toEqual([]);
+    expect(
+      problems({
+        openings: [{ id: 'd1', type: 'door', wall: 0, offset: 100, width: 800, height: 2000, hinge: 'start', swing: 'in' }],
+      }),
+    ).toEqual([]);
   });
 
   it('refuses fewer than 3 corners', () => {
-    const shell = { ...roomShellSchema.parse({ outline: [[0, 0], [1, 0], [1, 1]] }), outline: [[0, 0], [1000, 0]] as [number, number][] };
+    const shell = {
+      ...roomShellSchema.parse({
+        outline: [
+          [0, 0],
+          [1, 0],
+          [1, 1],
+        ],
+      }),
+      outline: [
+        [0, 0],
+        [1000, 0],
+      ] as [number, number][],
+    };
     expect(worded(validateRoomShell(shell))).toEqual([{ path: 'outline', message: 'needs at least 3 corners (has 2)' }]);
   });
 
   it('refuses a zero-length wall and names the repeated corner', () => {
-    expect(problems({ outline: [[0, 0], [3000, 0], [3000, 0], [0, 3000]] })).toEqual([
-      { path: 'room.outline[2]', message: 'wall 1 has zero length (corner 2 repeats corner 1)' },
-    ]);
+    expect(
+      problems({
+        outline: [
+          [0, 0],
+          [3000, 0],
+          [3000, 0],
+          [0, 3000],
+        ],
+      }),
+    ).toEqual([{ path: 'room.outline[2]', message: 'wall 1 has zero length (corner 2 repeats corner 1)' }]);
   });
 
   it('refuses a self-crossing outline', () => {
-    expect(problems({ outline: [[0, 0], [3000, 0], [0, 3000], [3000, 3000]] })).toEqual([{ path: 'room.outline', message: 'wall 1 crosses wall 3' }]);
+    expect(
+      problems({
+        outline: [
+          [0, 0],
+          [3000, 0],
+          [0, 3000],
+          [3000, 3000],
+        ],
+      }),
+    ).toEqual([{ path: 'room.outline', message: 'wall 1 crosses wall 3' }]);
   });
 
   it('lists at most 20 crossings of a 200-corner star whose every wall crosses nearly all others', () => {
@@ -58,11 +98,21 @@ describe('validateRoomShell', () => {
   it('refuses overlapping openings on one wall but not on different walls', () => {
     const a = { id: 'w1', type: 'window' as const, wall: 0, offset: 200, width: 1000, height: 1000, sill: 900 };
     const b = { id: 'w2', type: 'window' as const, wall: 0, offset: 1100, width: 1000, height: 1000, sill: 900 };
-    expect(problems({ openings: [a, b] })).toEqual([{ path: 'room.openings[1].offset', message: 'overlaps w1 (openings[0]) on wall 0' }]);
+    expect(problems({ openings: [a, b] })).toEqual([
+      { path: 'room.openings[1].offset', message: 'overlaps w1 (openings[0]) on wall 0' },
+    ]);
     expect(problems({ openings: [a, { ...b, wall: 1 }] })).toEqual([]);
     expect(problems({ openings: [a, { ...b, offset: 1200 }] })).toEqual([]);
     const wide = { id: 'p1', type: 'passage' as const, wall: 1, offset: 100, width: 2500, height: 2000 };
-    const small = (id: string, offset: number) => ({ id, type: 'window' as const, wall: 1, offset, width: 300, height: 500, sill: 900 });
+    const small = (id: string, offset: number) => ({
+      id,
+      type: 'window' as const,
+      wall: 1,
+      offset,
+      width: 300,
+      height: 500,
+      sill: 900,
+    });
     expect(problems({ openings: [wide, small('s1', 500), small('s2', 1500)] }).map((p) => p.message)).toEqual([
       'overlaps p1 (openings[0]) on wall 1',
       'overlaps p1 (openings[0]) on wall 1',
@@ -93,7 +143,12 @@ describe('validateRoomShell', () => {
 
   it('carries each problem’s facts as values for screens that word them in their own unit', () => {
     const shell = roomShellSchema.parse({
-      outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]],
+      outline: [
+        [0, 0],
+        [3000, 0],
+        [3000, 3000],
+        [0, 3000],
+      ],
       wallHeight: 2400,
       openings: [
         { id: 'w1', type: 'window', wall: 1, offset: 500, width: 1000, height: 1300, sill: 1500 },
@@ -101,7 +156,16 @@ describe('validateRoomShell', () => {
       ],
     });
     const [head, end] = validateRoomShell(shell);
-    expect(head).toMatchObject({ rule: 'window-above-ceiling', field: 'height', opening: 0, wall: 1, sillMm: 1500, heightMm: 1300, valueMm: 2800, limitMm: 2400 });
+    expect(head).toMatchObject({
+      rule: 'window-above-ceiling',
+      field: 'height',
+      opening: 0,
+      wall: 1,
+      sillMm: 1500,
+      heightMm: 1300,
+      valueMm: 2800,
+      limitMm: 2400,
+    });
     // 3000 mm wall less the 50 mm corner margin less the 800 mm door: the offset may be at most 2150 mm.
     expect(end).toMatchObject({ rule: 'opening-past-end', field: 'offset', opening: 1, wall: 2, valueMm: 2500, limitMm: 2150 });
   });

@@ -54,13 +54,26 @@ function outlineProblems(shell: RoomShell, prefix: string): FieldProblem[] {
   const n = outline.length;
   for (let i = 0; i < n; i++) {
     if (distance(outline[i], outline[(i + 1) % n]) < MIN_WALL_LENGTH_MM) {
-      problems.push({ path: join(prefix, `outline[${(i + 1) % n}]`), message: `wall ${i} has zero length (corner ${(i + 1) % n} repeats corner ${i})`, rule: 'zero-length-wall', field: 'outline', wall: i });
+      problems.push({
+        path: join(prefix, `outline[${(i + 1) % n}]`),
+        message: `wall ${i} has zero length (corner ${(i + 1) % n} repeats corner ${i})`,
+        rule: 'zero-length-wall',
+        field: 'outline',
+        wall: i,
+      });
     }
   }
   // Zero-length walls make every neighbour "cross", so only look for crossings in an outline without them.
   if (problems.length === 0) {
     for (const { wallA, wallB } of findSelfCrossings(outline)) {
-      problems.push({ path: join(prefix, 'outline'), message: `wall ${wallA} crosses wall ${wallB}`, rule: 'walls-cross', field: 'outline', wall: wallA, otherWall: wallB });
+      problems.push({
+        path: join(prefix, 'outline'),
+        message: `wall ${wallA} crosses wall ${wallB}`,
+        rule: 'walls-cross',
+        field: 'outline',
+        wall: wallA,
+        otherWall: wallB,
+      });
     }
   }
   return problems;
@@ -69,7 +82,14 @@ function outlineProblems(shell: RoomShell, prefix: string): FieldProblem[] {
 function thicknessProblems(shell: RoomShell, prefix: string): FieldProblem[] {
   const count = shell.wallThicknesses?.length ?? 0;
   if (count <= shell.outline.length) return [];
-  return [{ path: join(prefix, 'wallThicknesses'), message: `has ${count} entries but the outline has ${shell.outline.length} walls`, rule: 'too-many-thicknesses', field: 'wallThicknesses' }];
+  return [
+    {
+      path: join(prefix, 'wallThicknesses'),
+      message: `has ${count} entries but the outline has ${shell.outline.length} walls`,
+      rule: 'too-many-thicknesses',
+      field: 'wallThicknesses',
+    },
+  ];
 }
 
 function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
@@ -79,7 +99,14 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
   shell.openings.forEach((opening, index) => {
     const at = (field: string) => join(prefix, `openings[${index}].${field}`);
     if (opening.wall >= n) {
-      problems.push({ path: at('wall'), message: `there is no wall ${opening.wall} (the outline has ${n} walls, 0 to ${n - 1})`, rule: 'no-such-wall', field: 'wall', opening: index, wall: opening.wall });
+      problems.push({
+        path: at('wall'),
+        message: `there is no wall ${opening.wall} (the outline has ${n} walls, 0 to ${n - 1})`,
+        rule: 'no-such-wall',
+        field: 'wall',
+        opening: index,
+        wall: opening.wall,
+      });
       return;
     }
     const wallLengthMm = distance(shell.outline[opening.wall], shell.outline[(opening.wall + 1) % n]);
@@ -88,20 +115,34 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
       problems.push({
         path: at('width'),
         message: `longer than wall ${opening.wall} (${mm(wallLengthMm)}) less ${CORNER_MARGIN_MM} mm at each corner`,
-        rule: 'opening-longer-than-wall', field: 'width', opening: index, wall: opening.wall, valueMm: opening.width, limitMm: usableMm,
+        rule: 'opening-longer-than-wall',
+        field: 'width',
+        opening: index,
+        wall: opening.wall,
+        valueMm: opening.width,
+        limitMm: usableMm,
       });
     } else if (opening.offset < CORNER_MARGIN_MM) {
       problems.push({
         path: at('offset'),
         message: `closer than ${CORNER_MARGIN_MM} mm to the start corner of wall ${opening.wall}`,
-        rule: 'opening-near-start', field: 'offset', opening: index, wall: opening.wall, valueMm: opening.offset, limitMm: CORNER_MARGIN_MM,
+        rule: 'opening-near-start',
+        field: 'offset',
+        opening: index,
+        wall: opening.wall,
+        valueMm: opening.offset,
+        limitMm: CORNER_MARGIN_MM,
       });
     } else if (opening.offset + opening.width > wallLengthMm - CORNER_MARGIN_MM) {
       problems.push({
         path: at('offset'),
         message: `runs past the end of wall ${opening.wall} (${mm(wallLengthMm)}): ends at ${mm(opening.offset + opening.width)}, at most ${mm(wallLengthMm - CORNER_MARGIN_MM)}`,
-        rule: 'opening-past-end', field: 'offset', opening: index, wall: opening.wall,
-        valueMm: opening.offset, limitMm: wallLengthMm - CORNER_MARGIN_MM - opening.width,
+        rule: 'opening-past-end',
+        field: 'offset',
+        opening: index,
+        wall: opening.wall,
+        valueMm: opening.offset,
+        limitMm: wallLengthMm - CORNER_MARGIN_MM - opening.width,
       });
     }
     const wallHeightMm = shell.wallHeight;
@@ -110,14 +151,26 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
         problems.push({
           path: at('height'),
           message: `window head (sill ${mm(opening.sill)} + height ${mm(opening.height)}) is above the wall height (${mm(wallHeightMm)})`,
-          rule: 'window-above-ceiling', field: 'height', opening: index, wall: opening.wall,
-          valueMm: opening.sill + opening.height, limitMm: wallHeightMm, sillMm: opening.sill, heightMm: opening.height,
+          rule: 'window-above-ceiling',
+          field: 'height',
+          opening: index,
+          wall: opening.wall,
+          valueMm: opening.sill + opening.height,
+          limitMm: wallHeightMm,
+          sillMm: opening.sill,
+          heightMm: opening.height,
         });
       }
     } else if (opening.height > wallHeightMm) {
       problems.push({
-        path: at('height'), message: `${opening.type} is taller than the wall (${mm(wallHeightMm)})`,
-        rule: 'opening-taller-than-wall', field: 'height', opening: index, wall: opening.wall, valueMm: opening.height, limitMm: wallHeightMm,
+        path: at('height'),
+        message: `${opening.type} is taller than the wall (${mm(wallHeightMm)})`,
+        rule: 'opening-taller-than-wall',
+        field: 'height',
+        opening: index,
+        wall: opening.wall,
+        valueMm: opening.height,
+        limitMm: wallHeightMm,
       });
     }
     const list = byWall.get(opening.wall) ?? [];
@@ -135,7 +188,11 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
         problems.push({
           path: join(prefix, `openings[${here.index}].offset`),
           message: `overlaps ${shell.openings[before.index].id} (openings[${before.index}]) on wall ${wall}`,
-          rule: 'openings-overlap', field: 'offset', opening: here.index, otherOpening: before.index, wall,
+          rule: 'openings-overlap',
+          field: 'offset',
+          opening: here.index,
+          otherOpening: before.index,
+          wall,
         });
       }
       if (here.to > before.to) before = here;
@@ -150,7 +207,14 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
  */
 export function validateRoomShell(shell: RoomShell, prefix = ''): FieldProblem[] {
   if (shell.outline.length < 3) {
-    return [{ path: join(prefix, 'outline'), message: `needs at least 3 corners (has ${shell.outline.length})`, rule: 'too-few-corners', field: 'outline' }];
+    return [
+      {
+        path: join(prefix, 'outline'),
+        message: `needs at least 3 corners (has ${shell.outline.length})`,
+        rule: 'too-few-corners',
+        field: 'outline',
+      },
+    ];
   }
   const outline = outlineProblems(shell, prefix);
   // Openings are measured along walls, which mean nothing until the outline itself is sound.

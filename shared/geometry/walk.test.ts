@@ -3,7 +3,16 @@ import type { Piece } from '../schemas/option';
 import { roomShellSchema, type RoomShell } from '../schemas/room';
 import { DOOR_LEAF_THICKNESS_MM } from './scene';
 import {
-  BODY_RADIUS_MM, HEAD_CLEARANCE_MM, THRESHOLD_DEPTH_MM, clearanceMm, floorCentreMm, insideOutline, moveBody, walkLine, walkObstacles, walkStart,
+  BODY_RADIUS_MM,
+  HEAD_CLEARANCE_MM,
+  THRESHOLD_DEPTH_MM,
+  clearanceMm,
+  floorCentreMm,
+  insideOutline,
+  moveBody,
+  walkLine,
+  walkObstacles,
+  walkStart,
 } from './walk';
 
 const R = BODY_RADIUS_MM;
@@ -12,7 +21,12 @@ const WALL_MM = 100;
 // 4 m × 3 m; a door on the top wall (wall 0) from x 400 to 1220, hinged at its start, opening in;
 // a window on the right wall, a passage on the bottom wall from x 2600 to 3500.
 const shell: RoomShell = roomShellSchema.parse({
-  outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+  outline: [
+    [0, 0],
+    [4000, 0],
+    [4000, 3000],
+    [0, 3000],
+  ],
   wallThickness: WALL_MM,
   openings: [
     { id: 'door', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' },
@@ -23,7 +37,18 @@ const shell: RoomShell = roomShellSchema.parse({
 });
 
 const piece = (id: string, x: number, y: number, width: number, depth: number, extra: Partial<Piece> = {}): Piece => ({
-  id, name: id, x, y, width, depth, height: 800, rotation: 0, elevation: 0, status: 'new', placed: true, ...extra,
+  id,
+  name: id,
+  x,
+  y,
+  width,
+  depth,
+  height: 800,
+  rotation: 0,
+  elevation: 0,
+  status: 'new',
+  placed: true,
+  ...extra,
 });
 
 const empty = walkObstacles(shell, []);
@@ -133,7 +158,16 @@ describe('where a walk starts', () => {
   it('faces straight in where the middle of the floor is not in the room', () => {
     // A U: its middle falls in the notch between the arms. The door is at the bottom of the left arm.
     const u = roomShellSchema.parse({
-      outline: [[0, 0], [1500, 0], [1500, 3000], [3000, 3000], [3000, 0], [4500, 0], [4500, 4500], [0, 4500]],
+      outline: [
+        [0, 0],
+        [1500, 0],
+        [1500, 3000],
+        [3000, 3000],
+        [3000, 0],
+        [4500, 0],
+        [4500, 4500],
+        [0, 4500],
+      ],
       openings: [{ id: 'door', type: 'door', wall: 7, offset: 1500, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
     });
     expect(insideOutline(u.outline, floorCentreMm(u.outline))).toBe(false);
@@ -142,12 +176,33 @@ describe('where a walk starts', () => {
   });
 
   it('finds the middle of a floor by area', () => {
-    expect(floorCentreMm([[0, 0], [4000, 0], [4000, 3000], [0, 3000]])).toEqual([2000, 1500]);
-    expect(floorCentreMm([[0, 0], [0, 3000], [4000, 3000], [4000, 0]])).toEqual([2000, 1500]);
+    expect(
+      floorCentreMm([
+        [0, 0],
+        [4000, 0],
+        [4000, 3000],
+        [0, 3000],
+      ]),
+    ).toEqual([2000, 1500]);
+    expect(
+      floorCentreMm([
+        [0, 0],
+        [0, 3000],
+        [4000, 3000],
+        [4000, 0],
+      ]),
+    ).toEqual([2000, 1500]);
   });
 
   it('without a door or passage, stands in the freest place, inside the room', () => {
-    const closed = roomShellSchema.parse({ outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] });
+    const closed = roomShellSchema.parse({
+      outline: [
+        [0, 0],
+        [3000, 0],
+        [3000, 3000],
+        [0, 3000],
+      ],
+    });
     const obstacles = walkObstacles(closed, [piece('rug-table', 1500, 1500, 800, 800)]);
     const start = walkStart(closed, obstacles);
     expect(insideOutline(closed.outline, start.position)).toBe(true);
@@ -155,7 +210,14 @@ describe('where a walk starts', () => {
   });
 
   it('tells inside from outside of an L-shaped outline', () => {
-    const l: [number, number][] = [[0, 0], [6000, 0], [6000, 3000], [3000, 3000], [3000, 5000], [0, 5000]];
+    const l: [number, number][] = [
+      [0, 0],
+      [6000, 0],
+      [6000, 3000],
+      [3000, 3000],
+      [3000, 5000],
+      [0, 5000],
+    ];
     expect(insideOutline(l, [1000, 4000])).toBe(true);
     expect(insideOutline(l, [5000, 4000])).toBe(false);
     expect(insideOutline(l, [5000, 1000])).toBe(true);

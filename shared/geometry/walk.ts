@@ -86,11 +86,23 @@ export function walkObstacles(shell: RoomShell, pieces: readonly Piece[]): WalkO
     const open = directionDeg(swing.openAngleDeg);
     const closed = directionDeg(swing.closedAngleDeg);
     const centre = addScaled(addScaled(swing.hingeMm, open, opening.width / 2), closed, DOOR_LEAF_THICKNESS_MM / 2);
-    boxes.push({ id: `door:${opening.id}`, centre, axisX: open, halfXMm: opening.width / 2, halfYMm: DOOR_LEAF_THICKNESS_MM / 2 });
+    boxes.push({
+      id: `door:${opening.id}`,
+      centre,
+      axisX: open,
+      halfXMm: opening.width / 2,
+      halfYMm: DOOR_LEAF_THICKNESS_MM / 2,
+    });
   }
   for (const piece of pieces) {
     if (!piece.placed || piece.elevation >= HEAD_CLEARANCE_MM) continue;
-    boxes.push({ id: piece.id, centre: [piece.x, piece.y], axisX: directionDeg(piece.rotation), halfXMm: piece.width / 2, halfYMm: piece.depth / 2 });
+    boxes.push({
+      id: piece.id,
+      centre: [piece.x, piece.y],
+      axisX: directionDeg(piece.rotation),
+      halfXMm: piece.width / 2,
+      halfYMm: piece.depth / 2,
+    });
   }
   return { segments, boxes, outline: shell.outline };
 }

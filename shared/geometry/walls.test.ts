@@ -3,8 +3,20 @@ import { areaMm2 } from './polygon';
 import { layoutShellWalls, layoutWalls, outerRingMm, wallThicknessMm } from './walls';
 import type { Vec2 } from './vec';
 
-const rectangle: Vec2[] = [[0, 0], [4200, 0], [4200, 3600], [0, 3600]];
-const lShape: Vec2[] = [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]];
+const rectangle: Vec2[] = [
+  [0, 0],
+  [4200, 0],
+  [4200, 3600],
+  [0, 3600],
+];
+const lShape: Vec2[] = [
+  [0, 0],
+  [5000, 0],
+  [5000, 2500],
+  [3000, 2500],
+  [3000, 4000],
+  [0, 4000],
+];
 
 function expectPoint(actual: Vec2, expected: Vec2): void {
   expect(actual[0]).toBeCloseTo(expected[0], 6);
@@ -42,7 +54,10 @@ describe('layoutWalls', () => {
   });
 
   it('pulls the outside corner in at a re-entrant corner', () => {
-    const walls = layoutWalls(lShape, lShape.map(() => 100));
+    const walls = layoutWalls(
+      lShape,
+      lShape.map(() => 100),
+    );
     // inner corner (3000, 2500): the outside faces meet at (3100, 2600)
     expectPoint(walls[2].outerEnd, [3100, 2600]);
     expectPoint(walls[3].outerStart, [3100, 2600]);
@@ -50,22 +65,46 @@ describe('layoutWalls', () => {
   });
 
   it('mitres a 45° bay corner at thickness / cos(22.5°) from the inside corner', () => {
-    const bay: Vec2[] = [[0, 0], [3000, 0], [3000, 1000], [3400, 1400], [3400, 2600], [3000, 3000], [3000, 4000], [0, 4000]];
-    const walls = layoutWalls(bay, bay.map(() => 100));
+    const bay: Vec2[] = [
+      [0, 0],
+      [3000, 0],
+      [3000, 1000],
+      [3400, 1400],
+      [3400, 2600],
+      [3000, 3000],
+      [3000, 4000],
+      [0, 4000],
+    ];
+    const walls = layoutWalls(
+      bay,
+      bay.map(() => 100),
+    );
     const corner = bay[3];
     const mitre = walls[3].outerStart;
     expect(Math.hypot(mitre[0] - corner[0], mitre[1] - corner[1])).toBeCloseTo(100 / Math.cos(Math.PI / 8), 6);
   });
 
   it('continues straight through a corner between collinear walls of equal thickness', () => {
-    const withMidpoint: Vec2[] = [[0, 0], [2000, 0], [4000, 0], [4000, 3000], [0, 3000]];
+    const withMidpoint: Vec2[] = [
+      [0, 0],
+      [2000, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ];
     const walls = layoutWalls(withMidpoint, [100, 100, 100, 100, 100]);
     expectPoint(walls[1].outerStart, [2000, -100]);
     expect(walls[1].startJoin).toBeNull();
   });
 
   it('steps square between collinear walls of different thickness', () => {
-    const withMidpoint: Vec2[] = [[0, 0], [2000, 0], [4000, 0], [4000, 3000], [0, 3000]];
+    const withMidpoint: Vec2[] = [
+      [0, 0],
+      [2000, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ];
     const walls = layoutWalls(withMidpoint, [100, 250, 100, 100, 100]);
     expect(walls[1].startJoin).not.toBeNull();
     expectPoint(walls[0].outerEnd, [2000, -100]);
@@ -75,7 +114,11 @@ describe('layoutWalls', () => {
   });
 
   it('cuts a very sharp corner square instead of a long spike', () => {
-    const sharp: Vec2[] = [[0, 0], [5000, 0], [0, 300]];
+    const sharp: Vec2[] = [
+      [0, 0],
+      [5000, 0],
+      [0, 300],
+    ];
     const walls = layoutWalls(sharp, [100, 100, 100]);
     const join = walls[1].startJoin;
     expect(join).not.toBeNull();
@@ -86,7 +129,11 @@ describe('layoutWalls', () => {
 
 describe('wall thickness of a shell', () => {
   it('uses a per-wall override and falls back to the room thickness', () => {
-    const shell = { outline: rectangle.map((p): [number, number] => [p[0], p[1]]), wallThickness: 120, wallThicknesses: [null, 250] };
+    const shell = {
+      outline: rectangle.map((p): [number, number] => [p[0], p[1]]),
+      wallThickness: 120,
+      wallThicknesses: [null, 250],
+    };
     expect(wallThicknessMm(shell, 0)).toBe(120);
     expect(wallThicknessMm(shell, 1)).toBe(250);
     expect(wallThicknessMm(shell, 3)).toBe(120);

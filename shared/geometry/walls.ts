@@ -53,15 +53,7 @@ interface Corner {
 
 // The outer corner is where the two walls' outside lines meet. It falls back to a square cut when the
 // walls are (nearly) parallel or the mitre would run further than MITRE_LIMIT_THICKNESSES.
-function outerCorner(
-  corner: Vec2,
-  dPrev: Vec2,
-  nPrev: Vec2,
-  tPrev: number,
-  dNext: Vec2,
-  nNext: Vec2,
-  tNext: number,
-): Corner {
+function outerCorner(corner: Vec2, dPrev: Vec2, nPrev: Vec2, tPrev: number, dNext: Vec2, nNext: Vec2, tNext: number): Corner {
   const prevPoint = addScaled(corner, nPrev, tPrev);
   const nextPoint = addScaled(corner, nNext, tNext);
   const sine = cross(dPrev, dNext);
@@ -101,7 +93,15 @@ export function layoutWalls(outline: readonly Vec2[], thicknessesMm: readonly nu
   const outwards = directions.map((d): [number, number] => [sign * d[1], -sign * d[0]]);
   const corners = outline.map((corner, i) => {
     const prev = (i + n - 1) % n;
-    return outerCorner(corner, directions[prev], outwards[prev], thicknessesMm[prev], directions[i], outwards[i], thicknessesMm[i]);
+    return outerCorner(
+      corner,
+      directions[prev],
+      outwards[prev],
+      thicknessesMm[prev],
+      directions[i],
+      outwards[i],
+      thicknessesMm[i],
+    );
   });
   return outline.map((start, i) => {
     const next = (i + 1) % n;

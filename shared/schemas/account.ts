@@ -15,7 +15,10 @@ export const newPasswordSchema = z
   .min(NEW_PASSWORD_MIN_LENGTH, `Use at least ${NEW_PASSWORD_MIN_LENGTH} characters. A few words you will remember work well.`)
   .max(PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters.`)
   .refine((p) => p.trim().length > 0, 'A password cannot be only spaces. Use letters, numbers or words.')
-  .refine((p) => !isCommonPassword(p), 'This is one of the most common passwords, so it is among the first to be guessed. Choose another.');
+  .refine(
+    (p) => !isCommonPassword(p),
+    'This is one of the most common passwords, so it is among the first to be guessed. Choose another.',
+  );
 
 export const signUpSchema = z.object({
   studioName: nameSchema('the studio name'),

@@ -4,12 +4,23 @@ import { isCleanName, isCleanNote, nameText, noteText, versionSchema, withoutUnc
 describe('names and notes', () => {
   it('refuses every C0 and C1 control character and the bidirectional controls in a name', () => {
     const forbidden = [
-      ...Array.from({ length: 0x20 }, (_, c) => c), 0x7f, ...Array.from({ length: 0x20 }, (_, c) => 0x80 + c),
-      0x202a, 0x202b, 0x202c, 0x202d, 0x202e, 0x2066, 0x2067, 0x2068, 0x2069,
+      ...Array.from({ length: 0x20 }, (_, c) => c),
+      0x7f,
+      ...Array.from({ length: 0x20 }, (_, c) => 0x80 + c),
+      0x202a,
+      0x202b,
+      0x202c,
+      0x202d,
+      0x202e,
+      0x2066,
+      0x2067,
+      0x2068,
+      0x2069,
     ];
     for (const code of forbidden) expect(isCleanName(`a${String.fromCharCode(code)}b`), code.toString(16)).toBe(false);
     // Marks that only hint a direction (LRM, RLM, ALM) and ordinary letters of every script stay.
-    for (const text of ['Café Ölçü', 'غرفة المعيشة', 'リビング', 'a\u200eb', 'Wren & Tallow — studio']) expect(isCleanName(text), text).toBe(true);
+    for (const text of ['Café Ölçü', 'غرفة المعيشة', 'リビング', 'a\u200eb', 'Wren & Tallow — studio'])
+      expect(isCleanName(text), text).toBe(true);
   });
 
   it('allows tab and line breaks in notes only', () => {
@@ -23,7 +34,9 @@ describe('names and notes', () => {
   it('trims, limits the length and names the problem', () => {
     expect(nameText(5).parse('  Den  ')).toBe('Den');
     expect(nameText(5, 'Too long.').safeParse('Dining').error?.issues[0].message).toBe('Too long.');
-    expect(nameText(5).safeParse('D\u0000n').error?.issues[0].message).toBe('Remove control characters and text-direction marks.');
+    expect(nameText(5).safeParse('D\u0000n').error?.issues[0].message).toBe(
+      'Remove control characters and text-direction marks.',
+    );
     expect(noteText(20).parse(' a\nb ')).toBe('a\nb');
   });
 

@@ -47,7 +47,11 @@ export const nameText = (max: number, tooLong = `Keep it under ${max} characters
 
 /** Notes, messages and comments: trimmed, at most `max` characters; tab and line breaks allowed. */
 export const noteText = (max: number, tooLong = `Keep it under ${max} characters.`) =>
-  z.string().trim().max(max, tooLong).refine(isCleanNote, 'Remove control characters and text-direction marks (tabs and line breaks are fine).');
+  z
+    .string()
+    .trim()
+    .max(max, tooLong)
+    .refine(isCleanNote, 'Remove control characters and text-direction marks (tabs and line breaks are fine).');
 
 /** Ids chosen by the editor or a plan file (pieces, openings, finishes): up to 100 plain characters. */
 export const MAX_DOC_ID_LENGTH = 100;

@@ -35,7 +35,11 @@ export const colourHexSchema = z
 /** The smallest crop side, as a fraction of the photo: anything smaller is too few pixels to tile. */
 export const MIN_CROP_FRACTION = 0.02;
 const CROP_EPSILON = 1e-6;
-const fraction = z.number({ message: 'Enter a number between 0 and 1.' }).finite().min(0, 'Cannot be below 0.').max(1, 'Cannot be above 1.');
+const fraction = z
+  .number({ message: 'Enter a number between 0 and 1.' })
+  .finite()
+  .min(0, 'Cannot be below 0.')
+  .max(1, 'Cannot be above 1.');
 
 /** The part of the photo the real size covers: fractions of the photo after EXIF orientation, origin top left. */
 export const cropSchema = z
@@ -65,7 +69,13 @@ const repeatMm = z.coerce
   .max(100_000, 'Keep it under 100 m.');
 
 const nameSchema = nameText(120, 'Keep the name under 120 characters.').min(1, 'Enter a name.');
-const priceSchema = z.number({ message: 'Enter a price.' }).finite().nonnegative('A price cannot be negative.').max(1_000_000, 'Keep the price under 1,000,000.').nullable().optional();
+const priceSchema = z
+  .number({ message: 'Enter a price.' })
+  .finite()
+  .nonnegative('A price cannot be negative.')
+  .max(1_000_000, 'Keep the price under 1,000,000.')
+  .nullable()
+  .optional();
 
 export const createPaintSchema = z.object({
   name: nameSchema,

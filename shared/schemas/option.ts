@@ -24,7 +24,10 @@ const positiveMm = (max: number) => boundedMm(max).positive({ message: 'must be 
 /** An option's name (may be empty: the label "Option A" stands alone then), up to 80 characters. */
 export const optionNameSchema = nameText(OPTION_LIMITS.nameLength, `Keep the name under ${OPTION_LIMITS.nameLength} characters.`);
 /** An option's note for the client: up to 2,000 characters, line breaks allowed. */
-export const optionNoteSchema = noteText(OPTION_LIMITS.noteLength, `Keep the note under ${OPTION_LIMITS.noteLength.toLocaleString('en-GB')} characters.`);
+export const optionNoteSchema = noteText(
+  OPTION_LIMITS.noteLength,
+  `Keep the note under ${OPTION_LIMITS.noteLength.toLocaleString('en-GB')} characters.`,
+);
 
 /** Whether a link is a web address (http or https); the only links Parlour stores or writes out. */
 export function isWebLink(link: string): boolean {
@@ -69,7 +72,13 @@ export const pieceSchema = z.object({
   rotation: z.number().finite().min(-OPTION_LIMITS.rotationDeg).max(OPTION_LIMITS.rotationDeg).default(0),
   elevation: boundedMm(ROOM_LIMITS.wallHeightMm).nonnegative({ message: 'cannot be below the floor' }).default(0),
   status: z.enum(['existing', 'new']),
-  price: z.number().finite().nonnegative().max(OPTION_LIMITS.price, `must be at most ${OPTION_LIMITS.price.toLocaleString('en-GB')}`).nullable().optional(),
+  price: z
+    .number()
+    .finite()
+    .nonnegative()
+    .max(OPTION_LIMITS.price, `must be at most ${OPTION_LIMITS.price.toLocaleString('en-GB')}`)
+    .nullable()
+    .optional(),
   supplierUrl: supplierUrlSchema.optional(),
   colour: z
     .string()
@@ -99,7 +108,13 @@ export const finishAssignmentsSchema = z.object({
   walls: finishRef,
   // A wall index below the corner cap, so the record holds at most one entry per possible wall.
   wallOverrides: z
-    .record(z.string().regex(/^(0|[1-9]\d{0,2})$/, { message: 'must be a wall index' }).refine((k) => Number(k) < ROOM_LIMITS.corners, `must be below ${ROOM_LIMITS.corners}`), docIdText)
+    .record(
+      z
+        .string()
+        .regex(/^(0|[1-9]\d{0,2})$/, { message: 'must be a wall index' })
+        .refine((k) => Number(k) < ROOM_LIMITS.corners, `must be below ${ROOM_LIMITS.corners}`),
+      docIdText,
+    )
     .default({}),
 });
 export type FinishAssignments = z.infer<typeof finishAssignmentsSchema>;

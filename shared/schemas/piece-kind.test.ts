@@ -3,7 +3,17 @@ import { optionDocSchema } from './option';
 import { kindFromWords, pieceKindSchema } from './piece-kind';
 import { readPlanFile } from './plan-file';
 
-const piece = (extra: Record<string, unknown>) => ({ id: 'p', name: 'P', x: 0, y: 0, width: 500, depth: 500, height: 500, status: 'new', ...extra });
+const piece = (extra: Record<string, unknown>) => ({
+  id: 'p',
+  name: 'P',
+  x: 0,
+  y: 0,
+  width: 500,
+  depth: 500,
+  height: 500,
+  status: 'new',
+  ...extra,
+});
 
 describe('piece kinds', () => {
   it('reads a kind from a stored value or a name by the words it contains, else plain-block', () => {
@@ -18,14 +28,23 @@ describe('piece kinds', () => {
   });
 
   it('accepts the kinds, settings the kind takes and accent fields, and refuses the rest naming the field', () => {
-    const ok = optionDocSchema.safeParse({ pieces: [piece({ kind: 'corner-sofa', settings: { hand: 'left', arms: 'none' }, accentColour: '#334455', accentFinishId: 'f1' })] });
+    const ok = optionDocSchema.safeParse({
+      pieces: [
+        piece({ kind: 'corner-sofa', settings: { hand: 'left', arms: 'none' }, accentColour: '#334455', accentFinishId: 'f1' }),
+      ],
+    });
     expect(ok.success).toBe(true);
     const wrongKind = optionDocSchema.safeParse({ pieces: [piece({ kind: 'hammock' })] });
     expect(wrongKind.success).toBe(false);
     expect(wrongKind.error!.issues[0].path).toEqual(['pieces', 0, 'kind']);
-    const wrongSetting = optionDocSchema.safeParse({ pieces: [piece({ kind: 'rug' }), piece({ kind: 'wardrobe', settings: { hand: 'left' } })] });
+    const wrongSetting = optionDocSchema.safeParse({
+      pieces: [piece({ kind: 'rug' }), piece({ kind: 'wardrobe', settings: { hand: 'left' } })],
+    });
     expect(wrongSetting.success).toBe(false);
-    expect(wrongSetting.error!.issues[0]).toMatchObject({ path: ['pieces', 1, 'settings', 'hand'], message: 'a wardrobe takes no hand' });
+    expect(wrongSetting.error!.issues[0]).toMatchObject({
+      path: ['pieces', 1, 'settings', 'hand'],
+      message: 'a wardrobe takes no hand',
+    });
     const badCount = optionDocSchema.safeParse({ pieces: [piece({ kind: 'wardrobe', settings: { count: 40 } })] });
     expect(badCount.error!.issues[0].path).toEqual(['pieces', 0, 'settings', 'count']);
     const badAccent = optionDocSchema.safeParse({ pieces: [piece({ accentColour: 'brown' })] });
@@ -35,9 +54,24 @@ describe('piece kinds', () => {
 
   it('reads version 1 plan files with older free-text kinds, and the new settings and accents', () => {
     const file = {
-      format: 'parlour-plan', version: 1,
-      room: { name: 'R', outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]] },
-      option: { name: 'A', pieces: [piece({ kind: 'sofa-3' }), piece({ id: 'q', kind: 'bed', settings: { footboard: true }, accentColour: '#112233' })] },
+      format: 'parlour-plan',
+      version: 1,
+      room: {
+        name: 'R',
+        outline: [
+          [0, 0],
+          [4000, 0],
+          [4000, 3000],
+          [0, 3000],
+        ],
+      },
+      option: {
+        name: 'A',
+        pieces: [
+          piece({ kind: 'sofa-3' }),
+          piece({ id: 'q', kind: 'bed', settings: { footboard: true }, accentColour: '#112233' }),
+        ],
+      },
     };
     const read = readPlanFile(file);
     expect(read.ok).toBe(true);

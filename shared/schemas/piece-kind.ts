@@ -62,7 +62,12 @@ export const pieceSettingsSchema = z.object({
   /** Dining set: how many chairs round the table. */
   chairs: z.number().int().min(2, { message: 'must be at least 2' }).max(12, { message: 'must be 12 or fewer' }).optional(),
   /** Bed: headboard height above the floor, mm. */
-  headboardHeight: z.number().finite().min(0, { message: 'cannot be below the floor' }).max(2000, { message: 'must be 2000 mm or less' }).optional(),
+  headboardHeight: z
+    .number()
+    .finite()
+    .min(0, { message: 'cannot be below the floor' })
+    .max(2000, { message: 'must be 2000 mm or less' })
+    .optional(),
   /** Bed: a raised board at the foot. */
   footboard: z.boolean().optional(),
 });
@@ -152,13 +157,20 @@ export const KIND_LABELS: Record<PieceKind, string> = {
 type SettingsIssueSink = { addIssue: (issue: { code: 'custom'; path: PropertyKey[]; message: string }) => void };
 
 /** Refuses settings the piece's kind does not take, naming the field (`pieces[2].settings.hand`). */
-export function checkKindSettings(pieces: readonly { kind?: PieceKind; settings?: PieceSettings }[], ctx: SettingsIssueSink): void {
+export function checkKindSettings(
+  pieces: readonly { kind?: PieceKind; settings?: PieceSettings }[],
+  ctx: SettingsIssueSink,
+): void {
   pieces.forEach((piece, index) => {
     if (!piece.settings) return;
     const allowed = KIND_SETTINGS[piece.kind ?? 'plain-block'];
     for (const key of Object.keys(piece.settings) as PieceSettingKey[]) {
       if (piece.settings[key] === undefined || allowed.includes(key)) continue;
-      ctx.addIssue({ code: 'custom', path: [index, 'settings', key], message: `a ${piece.kind ?? 'plain-block'} takes no ${key}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: [index, 'settings', key],
+        message: `a ${piece.kind ?? 'plain-block'} takes no ${key}`,
+      });
     }
   });
 }

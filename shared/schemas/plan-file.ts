@@ -75,7 +75,11 @@ export function readPlanFile(input: unknown): ReadPlanFileResult {
   const header = headerSchema.safeParse(data);
   if (!header.success) {
     const problems = zodIssuesToProblems(header.error).map((p) =>
-      p.path === 'format' ? { ...p, message: `must be "${PLAN_FILE_FORMAT}"` } : p.path === 'version' ? { ...p, message: `must be ${PLAN_FILE_VERSION} (this version of Parlour reads version ${PLAN_FILE_VERSION})` } : p,
+      p.path === 'format'
+        ? { ...p, message: `must be "${PLAN_FILE_FORMAT}"` }
+        : p.path === 'version'
+          ? { ...p, message: `must be ${PLAN_FILE_VERSION} (this version of Parlour reads version ${PLAN_FILE_VERSION})` }
+          : p,
     );
     return { ok: false, errors: problems.map((p) => `${p.path}: ${p.message}`) };
   }
@@ -92,6 +96,7 @@ export function readPlanFile(input: unknown): ReadPlanFileResult {
 export function writePlanFile(plan: Omit<PlanFileInput, 'format' | 'version'>): string {
   const full = planFileSchema.parse({ format: PLAN_FILE_FORMAT, version: PLAN_FILE_VERSION, ...plan });
   const problems = validateRoomShell(full.room, 'room');
-  if (problems.length > 0) throw new Error(`cannot write the plan file: ${problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`);
+  if (problems.length > 0)
+    throw new Error(`cannot write the plan file: ${problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`);
   return `${JSON.stringify(full, null, 2)}\n`;
 }

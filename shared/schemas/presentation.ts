@@ -124,10 +124,12 @@ export type PresentationSummary = z.infer<typeof presentationSummarySchema>;
 // ---- What the client's page receives -----------------------------------------------------
 
 /** A piece as the client sees it: no supplier link, no ids of other records, a price only when shown. */
-export const clientPieceSchema = pieceSchema.omit({ supplierUrl: true, finishId: true, accentFinishId: true, price: true }).extend({
-  price: z.number().nullable().optional(),
-  finish: z.object({ name: z.string(), colourHex: z.string().nullable() }).nullable(),
-});
+export const clientPieceSchema = pieceSchema
+  .omit({ supplierUrl: true, finishId: true, accentFinishId: true, price: true })
+  .extend({
+    price: z.number().nullable().optional(),
+    finish: z.object({ name: z.string(), colourHex: z.string().nullable() }).nullable(),
+  });
 export type ClientPiece = z.infer<typeof clientPieceSchema>;
 
 // Built by the server from the studio's finishes, never parsed from a client: the type is enough.
@@ -181,4 +183,3 @@ export type ClientPresentation = z.infer<typeof clientPresentationSchema>;
 
 export const choiceAnswerSchema = z.object({ choice: choiceSchema, changed: z.boolean() });
 export type ChoiceAnswer = z.infer<typeof choiceAnswerSchema>;
-

@@ -28,7 +28,11 @@ export const ROOM_LIMITS = {
 const mm = (value: number) => `${value.toLocaleString('en-GB')} mm`;
 /** A finite length in mm; `max` bounds its size either way (±max when it may be negative). */
 export const boundedMm = (max: number) =>
-  z.number({ message: 'must be a finite number (mm)' }).finite('must be a finite number (mm)').min(-max, `must be at least −${mm(max)}`).max(max, `must be at most ${mm(max)}`);
+  z
+    .number({ message: 'must be a finite number (mm)' })
+    .finite('must be a finite number (mm)')
+    .min(-max, `must be at least −${mm(max)}`)
+    .max(max, `must be at most ${mm(max)}`);
 const coordinateMm = boundedMm(ROOM_LIMITS.coordinateMm);
 const positiveMm = (max: number) => boundedMm(max).positive({ message: 'must be more than 0 mm' });
 const nonNegativeMm = (max: number) => boundedMm(max).nonnegative({ message: 'cannot be negative' });
@@ -46,7 +50,11 @@ export type PlanPoint = z.infer<typeof planPointSchema>;
 // A wall is at most the bounding box's diagonal long, so an offset or width is below 2 × side.
 const openingBase = {
   id: docIdText,
-  wall: z.number().int('must be a whole wall number').nonnegative().max(ROOM_LIMITS.corners - 1, `must be below ${ROOM_LIMITS.corners} (a room has at most ${ROOM_LIMITS.corners} walls)`),
+  wall: z
+    .number()
+    .int('must be a whole wall number')
+    .nonnegative()
+    .max(ROOM_LIMITS.corners - 1, `must be below ${ROOM_LIMITS.corners} (a room has at most ${ROOM_LIMITS.corners} walls)`),
   offset: nonNegativeMm(2 * ROOM_LIMITS.sideMm),
   width: positiveMm(2 * ROOM_LIMITS.sideMm),
   height: positiveMm(ROOM_LIMITS.wallHeightMm),
@@ -90,7 +98,10 @@ export const roomShellSchema = z
       .array(planPointSchema)
       .min(3, { message: 'needs at least 3 corners' })
       .max(ROOM_LIMITS.corners, `has more than ${ROOM_LIMITS.corners} corners (a room has at most ${ROOM_LIMITS.corners})`),
-    openings: z.array(openingSchema).max(ROOM_LIMITS.openings, `has more than ${ROOM_LIMITS.openings} openings (a room has at most ${ROOM_LIMITS.openings})`).default([]),
+    openings: z
+      .array(openingSchema)
+      .max(ROOM_LIMITS.openings, `has more than ${ROOM_LIMITS.openings} openings (a room has at most ${ROOM_LIMITS.openings})`)
+      .default([]),
   })
   .superRefine((shell, ctx) => {
     const problem = outlineSizeProblem(shell.outline);
@@ -124,6 +135,7 @@ export function outlineSizeProblem(outline: readonly (readonly [number, number])
     return `is ${mm(Math.round(maxX - minX))} × ${mm(Math.round(maxY - minY))}, more than ${sideMm / 1000} m × ${sideMm / 1000} m`;
   }
   const areaM2 = Math.abs(twiceArea) / 2 / 1e6;
-  if (areaM2 > floorM2) return `encloses ${Math.round(areaM2).toLocaleString('en-GB')} m², more than ${floorM2.toLocaleString('en-GB')} m²`;
+  if (areaM2 > floorM2)
+    return `encloses ${Math.round(areaM2).toLocaleString('en-GB')} m², more than ${floorM2.toLocaleString('en-GB')} m²`;
   return null;
 }

@@ -31,11 +31,30 @@ const MM_PER_UNIT: Record<string, number> = {
 
 // Every spelling people type, mapped to one unit key; quotes and primes are the imperial marks.
 const UNIT_WORDS: Record<string, string> = {
-  mm: 'mm', millimetre: 'mm', millimetres: 'mm', millimeter: 'mm', millimeters: 'mm',
-  cm: 'cm', centimetre: 'cm', centimetres: 'cm', centimeter: 'cm', centimeters: 'cm',
-  m: 'm', metre: 'm', metres: 'm', meter: 'm', meters: 'm',
-  in: 'in', inch: 'in', inches: 'in', '"': 'in', "''": 'in',
-  ft: 'ft', foot: 'ft', feet: 'ft', "'": 'ft',
+  mm: 'mm',
+  millimetre: 'mm',
+  millimetres: 'mm',
+  millimeter: 'mm',
+  millimeters: 'mm',
+  cm: 'cm',
+  centimetre: 'cm',
+  centimetres: 'cm',
+  centimeter: 'cm',
+  centimeters: 'cm',
+  m: 'm',
+  metre: 'm',
+  metres: 'm',
+  meter: 'm',
+  meters: 'm',
+  in: 'in',
+  inch: 'in',
+  inches: 'in',
+  '"': 'in',
+  "''": 'in',
+  ft: 'ft',
+  foot: 'ft',
+  feet: 'ft',
+  "'": 'ft',
 };
 
 const EXAMPLE_HINT = 'Try 420, 4.2m or 13\' 9".';
@@ -127,7 +146,11 @@ function termsToMm(terms: Term[], bareUnit: LengthUnit): number | null {
 }
 
 /** Reads a typed length into millimetres; a bare number is in `unit` (feet for 'ftin'). */
-export function parseLength(text: string, unit: LengthUnit = DEFAULT_LENGTH_UNIT, options: ParseLengthOptions = {}): ParseLengthResult {
+export function parseLength(
+  text: string,
+  unit: LengthUnit = DEFAULT_LENGTH_UNIT,
+  options: ParseLengthOptions = {},
+): ParseLengthResult {
   const marked = normaliseMarks(text);
   if (marked === '') return { ok: false, message: `Enter a length. ${EXAMPLE_HINT}` };
   const negative = marked.startsWith('-');

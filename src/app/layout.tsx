@@ -15,30 +15,66 @@ export function DesignerLayout({ wide = false }: { wide?: boolean }) {
   const signOut = useSignOut();
   const navigate = useNavigate();
 
-  if (session.isPending) return <div className="mx-auto max-w-6xl px-6"><Spinner /></div>;
-  if (session.isError) return <div className="mx-auto max-w-6xl px-6 py-10"><Notice tone="error">{errorMessage(session.error)}</Notice></div>;
+  if (session.isPending)
+    return (
+      <div className="mx-auto max-w-6xl px-6">
+        <Spinner />
+      </div>
+    );
+  if (session.isError)
+    return (
+      <div className="mx-auto max-w-6xl px-6 py-10">
+        <Notice tone="error">{errorMessage(session.error)}</Notice>
+      </div>
+    );
   if (!session.data) return <Navigate to={`/sign-in?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   const { member, studio, outbox } = session.data;
 
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-lg focus:bg-white focus:px-4 focus:py-2">Skip to content</a>
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-lg focus:bg-white focus:px-4 focus:py-2"
+      >
+        Skip to content
+      </a>
       <header className="no-print border-b border-line bg-paper/95">
         <div className={`mx-auto flex h-16 items-center gap-3 px-4 sm:gap-6 sm:px-6 ${wide ? '' : 'max-w-6xl'}`}>
-          <Link to="/projects" className="text-xl font-bold tracking-tight text-pine">Parlour</Link>
+          <Link to="/projects" className="text-xl font-bold tracking-tight text-pine">
+            Parlour
+          </Link>
           <nav aria-label="Studio" className="flex min-w-0 items-center gap-1 overflow-x-auto">
-            <NavLink to="/projects" className={navClass}>Projects</NavLink>
-            <NavLink to="/clients" className={navClass}>Clients</NavLink>
-            <NavLink to="/finishes" className={navClass}>Finish library</NavLink>
-            <NavLink to="/studio" className={navClass}>Studio</NavLink>
-            {outbox && <NavLink to="/outbox" className={navClass}>Outbox</NavLink>}
+            <NavLink to="/projects" className={navClass}>
+              Projects
+            </NavLink>
+            <NavLink to="/clients" className={navClass}>
+              Clients
+            </NavLink>
+            <NavLink to="/finishes" className={navClass}>
+              Finish library
+            </NavLink>
+            <NavLink to="/studio" className={navClass}>
+              Studio
+            </NavLink>
+            {outbox && (
+              <NavLink to="/outbox" className={navClass}>
+                Outbox
+              </NavLink>
+            )}
           </nav>
           <div className="ml-auto flex items-center gap-3">
             <div className="hidden text-right leading-tight lg:block">
               <div className="text-sm font-semibold">{member.name}</div>
-              <div className="text-xs text-ink-faint">{studio.name} · {member.role}</div>
+              <div className="text-xs text-ink-faint">
+                {studio.name} · {member.role}
+              </div>
             </div>
-            <Button size="sm" variant="quiet" busy={signOut.isPending} onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in', { replace: true }) })}>
+            <Button
+              size="sm"
+              variant="quiet"
+              busy={signOut.isPending}
+              onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in', { replace: true }) })}
+            >
               Sign out
             </Button>
           </div>
@@ -56,7 +92,9 @@ export function NotFoundPage() {
     <div className="mx-auto flex min-h-[60vh] max-w-lg flex-col items-center justify-center gap-4 px-6 text-center">
       <h1 className="text-2xl font-bold">This page is not here.</h1>
       <p className="text-ink-soft">The link may be old, or the page may belong to another studio.</p>
-      <Link to="/projects" className="font-semibold text-pine underline">Go to projects</Link>
+      <Link to="/projects" className="font-semibold text-pine underline">
+        Go to projects
+      </Link>
     </div>
   );
 }

@@ -21,7 +21,10 @@ export async function api<T>(path: string, opts: { method?: Method; body?: unkno
     res = await fetch(path, {
       method: opts.method ?? 'GET',
       credentials: 'same-origin',
-      headers: opts.body === undefined ? { accept: 'application/json' } : { 'content-type': 'application/json', accept: 'application/json' },
+      headers:
+        opts.body === undefined
+          ? { accept: 'application/json' }
+          : { 'content-type': 'application/json', accept: 'application/json' },
       body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
       signal: opts.signal,
     });

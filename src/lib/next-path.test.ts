@@ -7,7 +7,17 @@ describe('safeNextPath', () => {
     expect(safeNextPath('/')).toBe('/');
   });
   it('sends anything else to the projects list', () => {
-    for (const bad of [null, '', 'projects', 'https://elsewhere.example/x', '//elsewhere.example', '/\\elsewhere.example', 'javascript:alert(1)', '/a\nb', '/sign-in?next=/x']) {
+    for (const bad of [
+      null,
+      '',
+      'projects',
+      'https://elsewhere.example/x',
+      '//elsewhere.example',
+      '/\\elsewhere.example',
+      'javascript:alert(1)',
+      '/a\nb',
+      '/sign-in?next=/x',
+    ]) {
       expect(safeNextPath(bad)).toBe('/projects');
     }
   });

@@ -3,10 +3,25 @@ import type { Piece } from '../../shared/schemas/option';
 import { SHADOW_DARKNESS, SHADOW_LIFT_M, contactShadows, daylightDirection } from './contact-shadows';
 
 const piece = (extra: Partial<Piece> = {}): Piece => ({
-  id: 'p', name: 'p', x: 2000, y: 1500, width: 1000, depth: 600, height: 800, rotation: 0, elevation: 0, status: 'new', placed: true, ...extra,
+  id: 'p',
+  name: 'p',
+  x: 2000,
+  y: 1500,
+  width: 1000,
+  depth: 600,
+  height: 800,
+  rotation: 0,
+  elevation: 0,
+  status: 'new',
+  placed: true,
+  ...extra,
 });
 
-const vertex = (d: ReturnType<typeof contactShadows>, i: number) => [d.positions[i * 3], d.positions[i * 3 + 1], d.positions[i * 3 + 2]];
+const vertex = (d: ReturnType<typeof contactShadows>, i: number) => [
+  d.positions[i * 3],
+  d.positions[i * 3 + 1],
+  d.positions[i * 3 + 2],
+];
 
 describe('contactShadows', () => {
   it('darkens the footprint of each placed piece and fades out round it, facing up', () => {

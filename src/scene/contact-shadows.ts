@@ -56,10 +56,18 @@ export function contactShadows(pieces: readonly Piece[], awayFromLight: readonly
     const hx = piece.width / 2000;
     const hy = piece.depth / 2000;
     // Inner corners (the footprint) then outer corners (pushed out along both axes), in order round.
-    const signs = [[-1, -1], [1, -1], [1, 1], [-1, 1]];
+    const signs = [
+      [-1, -1],
+      [1, -1],
+      [1, 1],
+      [-1, 1],
+    ];
     const base = n * 8;
     signs.forEach(([sx, sy], k) => {
-      for (const [ring, grow] of [[0, 0], [1, spread]] as const) {
+      for (const [ring, grow] of [
+        [0, 0],
+        [1, spread],
+      ] as const) {
         const u = sx * (hx + grow);
         const v = sy * (hy + grow);
         const i = base + ring * 4 + k;
@@ -82,7 +90,9 @@ export function contactShadows(pieces: readonly Piece[], awayFromLight: readonly
 }
 
 /** The direction daylight travels into the room: the mean inward normal of the windows, weighted by their size. */
-export function daylightDirection(windows: readonly { inward: readonly [number, number, number]; widthM: number; heightM: number }[]): [number, number] {
+export function daylightDirection(
+  windows: readonly { inward: readonly [number, number, number]; widthM: number; heightM: number }[],
+): [number, number] {
   let x = 0;
   let z = 0;
   for (const w of windows) {

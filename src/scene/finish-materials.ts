@@ -82,7 +82,14 @@ export class FinishMaterials {
     const key = `piece|${JSON.stringify(finish)}`;
     const known = this.pieceMaterials.get(key);
     if (known) return known;
-    const material = new THREE.MeshStandardMaterial({ roughness: finish.roughness, metalness: 0, vertexColors: true, polygonOffset: true, polygonOffsetFactor: 1, polygonOffsetUnits: 1 });
+    const material = new THREE.MeshStandardMaterial({
+      roughness: finish.roughness,
+      metalness: 0,
+      vertexColors: true,
+      polygonOffset: true,
+      polygonOffsetFactor: 1,
+      polygonOffsetUnits: 1,
+    });
     material.color.set(finish.meanColourHex);
     this.loadInto(finish, [material]);
     this.pieceMaterials.set(key, material);

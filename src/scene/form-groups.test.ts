@@ -5,7 +5,14 @@ import { typicalFurnishedRoom } from '../../scripts/bench/typical-room';
 import { accentColourOf, formGroups, groupVertexColours } from './form-groups';
 import { ACCENT_COLOURS } from './materials';
 
-const photo = (name: string): SceneFinish => ({ kind: 'photo', textureUrl: `/api/files/${name}.webp`, repeatWidthMm: 600, repeatHeightMm: 600, meanColourHex: '#887766', roughness: 0.8 });
+const photo = (name: string): SceneFinish => ({
+  kind: 'photo',
+  textureUrl: `/api/files/${name}.webp`,
+  repeatWidthMm: 600,
+  repeatHeightMm: 600,
+  meanColourHex: '#887766',
+  roughness: 0.8,
+});
 const paint: SceneFinish = { kind: 'paint', colourHex: '#335577', roughness: 0.9 };
 
 describe('piece forms merged per material', () => {
@@ -20,14 +27,20 @@ describe('piece forms merged per material', () => {
       if (i % 7 === 1) pieces[p.id] = paint;
     });
     const groups = formGroups(forms, option.pieces, { pieces, pieceAccents });
-    const photos = new Set([...Object.values(pieces), ...Object.values(pieceAccents)].filter((f) => f.kind === 'photo').map((f) => JSON.stringify(f)));
+    const photos = new Set(
+      [...Object.values(pieces), ...Object.values(pieceAccents)].filter((f) => f.kind === 'photo').map((f) => JSON.stringify(f)),
+    );
     expect(groups.length).toBe(1 + photos.size);
     expect(groups[0].key).toBe('colour');
     // Every vertex of every form is in exactly one group.
-    const formVertices = forms.reduce((n, f) => n + (f.meshes.main.positions.length + f.meshes.accent.positions.length + f.meshes.own.positions.length) / 3, 0);
+    const formVertices = forms.reduce(
+      (n, f) => n + (f.meshes.main.positions.length + f.meshes.accent.positions.length + f.meshes.own.positions.length) / 3,
+      0,
+    );
     const groupVertices = groups.reduce((n, g) => n + g.entries.reduce((m, e) => m + e.mesh.positions.length / 3, 0), 0);
     expect(groupVertices).toBe(formVertices);
-    for (const g of groups) expect(groupVertexColours(g, null).length).toBe(g.entries.reduce((m, e) => m + e.mesh.positions.length, 0));
+    for (const g of groups)
+      expect(groupVertexColours(g, null).length).toBe(g.entries.reduce((m, e) => m + e.mesh.positions.length, 0));
   });
 
   it('tints only the selected piece', () => {
@@ -36,7 +49,9 @@ describe('piece forms merged per material', () => {
     const [group] = formGroups(forms, option.pieces, {});
     const plain = groupVertexColours(group, null);
     const tinted = groupVertexColours(group, option.pieces[1].id);
-    const firstCount = group.entries.filter((e) => e.pieceId === option.pieces[0].id).reduce((n, e) => n + e.mesh.positions.length, 0);
+    const firstCount = group.entries
+      .filter((e) => e.pieceId === option.pieces[0].id)
+      .reduce((n, e) => n + e.mesh.positions.length, 0);
     expect(Array.from(tinted.slice(0, firstCount))).toEqual(Array.from(plain.slice(0, firstCount)));
     expect(Array.from(tinted.slice(firstCount))).not.toEqual(Array.from(plain.slice(firstCount)));
   });

@@ -50,7 +50,11 @@ export function formGroups(forms: readonly PieceFormData[], pieces: readonly Pie
       const group = photos.get(key) ?? { key, finish, entries: [] };
       photos.set(key, group);
       group.entries.push({ ...entry, runs: [{ colour: WHITE, vertexCount: vertices(entry.mesh) }] });
-    } else colour.entries.push({ ...entry, runs: entry.runs.length ? entry.runs : [{ colour: plainColour, vertexCount: vertices(entry.mesh) }] });
+    } else
+      colour.entries.push({
+        ...entry,
+        runs: entry.runs.length ? entry.runs : [{ colour: plainColour, vertexCount: vertices(entry.mesh) }],
+      });
   };
   for (const form of forms) {
     const piece = byId.get(form.id);

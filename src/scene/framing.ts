@@ -39,7 +39,11 @@ export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): 
   const azimuth = (OVERVIEW_AZIMUTH_DEG * Math.PI) / 180;
   const elevation = (OVERVIEW_ELEVATION_DEG * Math.PI) / 180;
   // Unit vector from the target to the eye, and the camera's right and up seen from there.
-  const back: [number, number, number] = [Math.cos(elevation) * Math.sin(azimuth), Math.sin(elevation), Math.cos(elevation) * Math.cos(azimuth)];
+  const back: [number, number, number] = [
+    Math.cos(elevation) * Math.sin(azimuth),
+    Math.sin(elevation),
+    Math.cos(elevation) * Math.cos(azimuth),
+  ];
   const right: [number, number, number] = [Math.cos(azimuth), 0, -Math.sin(azimuth)];
   const up: [number, number, number] = [
     back[1] * right[2] - back[2] * right[1],
@@ -62,7 +66,11 @@ export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): 
     }
   }
   distance = Math.max(distance, radius * 1.5);
-  const position: [number, number, number] = [target[0] + distance * back[0], target[1] + distance * back[1], target[2] + distance * back[2]];
+  const position: [number, number, number] = [
+    target[0] + distance * back[0],
+    target[1] + distance * back[1],
+    target[2] + distance * back[2],
+  ];
   return {
     target,
     position,

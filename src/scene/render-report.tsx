@@ -24,7 +24,11 @@ export function RenderAndReport({ host, extra }: RenderAndReportProps) {
     gl.render(scene, camera);
     if (baking) invalidate();
     frames.current += 1;
-    if (frames.current === 1 && typeof performance !== 'undefined' && performance.getEntriesByName(FIRST_VIEW_MARK).length === 0) {
+    if (
+      frames.current === 1 &&
+      typeof performance !== 'undefined' &&
+      performance.getEntriesByName(FIRST_VIEW_MARK).length === 0
+    ) {
       performance.mark(FIRST_VIEW_MARK);
     }
     const element = host.current;

@@ -37,7 +37,10 @@ interface RoomPiecesProps {
 
 type ClickHandlers = ReturnType<typeof useClickHandlers>;
 
-function useClickHandlers(onPieceClick: ((id: string) => void) | undefined, pieceOfTriangle: (triangle: number) => string | null) {
+function useClickHandlers(
+  onPieceClick: ((id: string) => void) | undefined,
+  pieceOfTriangle: (triangle: number) => string | null,
+) {
   return useMemo(() => {
     if (!onPieceClick) return {};
     const setCursor = (event: ThreeEvent<PointerEvent>, cursor: string) => {
@@ -58,7 +61,11 @@ function useClickHandlers(onPieceClick: ((id: string) => void) | undefined, piec
 }
 
 /** The selected piece's box as edges: the box is what the checks measure, whatever form is drawn in it. */
-function SelectionEdges({ pieceScene, selectedPieceId, materials }: Pick<RoomPiecesProps, 'pieceScene' | 'selectedPieceId' | 'materials'>) {
+function SelectionEdges({
+  pieceScene,
+  selectedPieceId,
+  materials,
+}: Pick<RoomPiecesProps, 'pieceScene' | 'selectedPieceId' | 'materials'>) {
   const edges = useMemo(() => {
     const selected = pieceScene.find((p) => p.id === selectedPieceId);
     if (!selected) return null;
@@ -75,7 +82,13 @@ function SelectionEdges({ pieceScene, selectedPieceId, materials }: Pick<RoomPie
  * Every placed piece as its form: parts merged per material (one mesh for all plain colours, one
  * per photo finish worn), coloured per vertex so selection and recolouring rewrite one buffer.
  */
-function PieceForms({ forms, pieces, selectedPieceId, materials, onPieceClick }: Required<Pick<RoomPiecesProps, 'forms'>> & Omit<RoomPiecesProps, 'forms' | 'pieceScene'>) {
+function PieceForms({
+  forms,
+  pieces,
+  selectedPieceId,
+  materials,
+  onPieceClick,
+}: Required<Pick<RoomPiecesProps, 'forms'>> & Omit<RoomPiecesProps, 'forms' | 'pieceScene'>) {
   const groups = useMemo(() => formGroups(forms.data, pieces, forms.finishes), [forms.data, forms.finishes, pieces]);
   return (
     <>
@@ -92,7 +105,17 @@ function PieceForms({ forms, pieces, selectedPieceId, materials, onPieceClick }:
   );
 }
 
-function FormGroupMesh({ group, material, selectedPieceId, onPieceClick }: { group: FormGroup; material: THREE.Material; selectedPieceId: string | null; onPieceClick?: (id: string) => void }) {
+function FormGroupMesh({
+  group,
+  material,
+  selectedPieceId,
+  onPieceClick,
+}: {
+  group: FormGroup;
+  material: THREE.Material;
+  selectedPieceId: string | null;
+  onPieceClick?: (id: string) => void;
+}) {
   const invalidate = useThree((state) => state.invalidate);
   const merged = useMemo(() => {
     const meshes = group.entries.map((e) => e.mesh);
@@ -108,7 +131,10 @@ function FormGroupMesh({ group, material, selectedPieceId, onPieceClick }: { gro
     merged.colours.needsUpdate = true;
     invalidate();
   }, [merged, group, selectedPieceId, invalidate]);
-  const pieceOfTriangle = useMemo(() => (triangle: number) => group.entries[partOfTriangle(merged.ranges, triangle)]?.pieceId ?? null, [group, merged]);
+  const pieceOfTriangle = useMemo(
+    () => (triangle: number) => group.entries[partOfTriangle(merged.ranges, triangle)]?.pieceId ?? null,
+    [group, merged],
+  );
   const handlers: ClickHandlers = useClickHandlers(onPieceClick, pieceOfTriangle);
   return <mesh geometry={merged.geometry} material={material} {...handlers} />;
 }
@@ -156,7 +182,10 @@ function PieceBoxes({ pieceScene, pieces, selectedPieceId, materials, onPieceCli
     invalidate();
   }, [merged, looks, selectedPieceId, invalidate]);
 
-  const pieceOfTriangle = useMemo(() => (triangle: number) => pieceScene[partOfTriangle(merged.ranges, triangle)]?.id ?? null, [pieceScene, merged]);
+  const pieceOfTriangle = useMemo(
+    () => (triangle: number) => pieceScene[partOfTriangle(merged.ranges, triangle)]?.id ?? null,
+    [pieceScene, merged],
+  );
   const handlers = useClickHandlers(onPieceClick, pieceOfTriangle);
   if (!merged.geometry) return null;
   return <mesh geometry={merged.geometry} material={materials.piece} castShadow receiveShadow {...handlers} />;

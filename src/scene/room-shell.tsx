@@ -13,7 +13,11 @@ interface RoomShellProps {
   /** Receives the group holding the tagged wall meshes, for fading. */
   wallsRef: React.RefObject<THREE.Group | null>;
   /** Finishes on the floor, the ceiling and each wall's inside face; missing ones keep the defaults. */
-  surfaces?: { floor?: FinishMaterialPair; ceiling?: FinishMaterialPair; inside?: (wallIndex: number) => FinishMaterialPair | undefined };
+  surfaces?: {
+    floor?: FinishMaterialPair;
+    ceiling?: FinishMaterialPair;
+    inside?: (wallIndex: number) => FinishMaterialPair | undefined;
+  };
   /** A click (not a drag) on the floor, the ceiling or a wall's inside face. */
   onSurfaceClick?: (surface: SurfaceHit) => void;
   /** A click (not a drag) on the floor, with the point hit (scene metres on the floor plane). */
@@ -30,7 +34,15 @@ function tag(wallIndex: number, wallPart: WallPartTag['wallPart']): WallPartTag 
 }
 
 /** Floor, ceiling, walls, door leaves and windows of one room, drawn from grouped scene data. */
-export function RoomShellMeshes({ parts, materials, ceilingRef, wallsRef, surfaces, onSurfaceClick, onFloorPoint }: RoomShellProps) {
+export function RoomShellMeshes({
+  parts,
+  materials,
+  ceilingRef,
+  wallsRef,
+  surfaces,
+  onSurfaceClick,
+  onFloorPoint,
+}: RoomShellProps) {
   const click = (surface: SurfaceHit) =>
     onSurfaceClick
       ? (e: ThreeEvent<MouseEvent>) => {
@@ -51,29 +63,48 @@ export function RoomShellMeshes({ parts, materials, ceilingRef, wallsRef, surfac
 
   return (
     <group>
-      {geometries.floor && <mesh geometry={geometries.floor} material={surfaces?.floor?.solid ?? materials.floor} receiveShadow onClick={floorClick} />}
+      {geometries.floor && (
+        <mesh
+          geometry={geometries.floor}
+          material={surfaces?.floor?.solid ?? materials.floor}
+          receiveShadow
+          onClick={floorClick}
+        />
+      )}
       {/* Walls, windows and the ceiling cast no shadows: the sun is there to seat the pieces, and a
           wall's shadow across the floor would hide the layout (the ceiling's would hide it all). */}
-      {geometries.ceiling && <mesh ref={ceilingRef} geometry={geometries.ceiling} material={surfaces?.ceiling?.solid ?? materials.ceiling} receiveShadow onClick={click('ceiling')} />}
+      {geometries.ceiling && (
+        <mesh
+          ref={ceilingRef}
+          geometry={geometries.ceiling}
+          material={surfaces?.ceiling?.solid ?? materials.ceiling}
+          receiveShadow
+          onClick={click('ceiling')}
+        />
+      )}
       {geometries.doorLeaves && <mesh geometry={geometries.doorLeaves} material={materials.doorLeaf} castShadow receiveShadow />}
       <group ref={wallsRef}>
         {geometries.walls.map((wall) => {
           const own = surfaces?.inside?.(wall.index);
           return (
-          <group key={wall.index}>
-            {wall.inside && (
-              <mesh
-                geometry={wall.inside}
-                material={own?.solid ?? materials.wall}
-                userData={{ ...tag(wall.index, 'wall'), solidMaterial: own?.solid, fadedMaterial: own?.faded }}
-                receiveShadow
-                onClick={click({ wall: wall.index })}
-              />
-            )}
-            {wall.body && <mesh geometry={wall.body} material={materials.wall} userData={tag(wall.index, 'wall')} receiveShadow />}
-            {wall.frames && <mesh geometry={wall.frames} material={materials.windowFrame} userData={tag(wall.index, 'frame')} receiveShadow />}
-            {wall.glass && <mesh geometry={wall.glass} material={materials.glass} userData={tag(wall.index, 'glass')} />}
-          </group>
+            <group key={wall.index}>
+              {wall.inside && (
+                <mesh
+                  geometry={wall.inside}
+                  material={own?.solid ?? materials.wall}
+                  userData={{ ...tag(wall.index, 'wall'), solidMaterial: own?.solid, fadedMaterial: own?.faded }}
+                  receiveShadow
+                  onClick={click({ wall: wall.index })}
+                />
+              )}
+              {wall.body && (
+                <mesh geometry={wall.body} material={materials.wall} userData={tag(wall.index, 'wall')} receiveShadow />
+              )}
+              {wall.frames && (
+                <mesh geometry={wall.frames} material={materials.windowFrame} userData={tag(wall.index, 'frame')} receiveShadow />
+              )}
+              {wall.glass && <mesh geometry={wall.glass} material={materials.glass} userData={tag(wall.index, 'glass')} />}
+            </group>
           );
         })}
       </group>

@@ -71,7 +71,12 @@ export default function RoomView({
             shadows="percentage"
             dpr={[1, 2]}
             // Neutral tone mapping keeps a lit paint close to its swatch; the output is sRGB.
-            gl={{ preserveDrawingBuffer: true, antialias: true, toneMapping: THREE.NeutralToneMapping, outputColorSpace: THREE.SRGBColorSpace }}
+            gl={{
+              preserveDrawingBuffer: true,
+              antialias: true,
+              toneMapping: THREE.NeutralToneMapping,
+              outputColorSpace: THREE.SRGBColorSpace,
+            }}
             camera={{ fov: FIELD_OF_VIEW_DEG, near: 0.05, far: 200, position: [0, 8, 8] }}
             fallback={fallback}
           >
@@ -114,7 +119,16 @@ interface RoomSceneProps {
   onSurfaceClick?: (surface: SurfaceHit) => void;
 }
 
-function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPieceClick, fadeNearWalls, host, finishes: finishesProp, onSurfaceClick }: RoomSceneProps) {
+function RoomScene({
+  shell: shellProp,
+  pieces: piecesProp,
+  selectedPieceId,
+  onPieceClick,
+  fadeNearWalls,
+  host,
+  finishes: finishesProp,
+  onSurfaceClick,
+}: RoomSceneProps) {
   const shell = useStableValue(shellProp);
   const finishes = useStableValue(finishesProp ?? {});
   const invalidate = useThree((state) => state.invalidate);
@@ -123,7 +137,10 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
   const materials = useMemo(createSceneMaterials, []);
   useEffect(() => () => disposeSceneMaterials(materials), [materials]);
   const gl = useThree((state) => state.gl);
-  const finishMaterials = useMemo(() => new FinishMaterials(() => invalidate(), Math.min(8, gl.capabilities.getMaxAnisotropy())), [invalidate, gl]);
+  const finishMaterials = useMemo(
+    () => new FinishMaterials(() => invalidate(), Math.min(8, gl.capabilities.getMaxAnisotropy())),
+    [invalidate, gl],
+  );
   useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
   const surfaces = useMemo(() => surfaceMaterials(finishes, finishMaterials), [finishes, finishMaterials]);
   const windows = useMemo(() => tryBuild('windows', () => windowLightRects(shell)) ?? [], [shell]);
@@ -141,7 +158,14 @@ function RoomScene({ shell: shellProp, pieces: piecesProp, selectedPieceId, onPi
   return (
     <>
       <SceneLights bounds={parts.bounds} windows={windows} />
-      <RoomShellMeshes parts={parts} materials={materials} wallsRef={walls} ceilingRef={ceiling} surfaces={surfaces} onSurfaceClick={onSurfaceClick} />
+      <RoomShellMeshes
+        parts={parts}
+        materials={materials}
+        wallsRef={walls}
+        ceilingRef={ceiling}
+        surfaces={surfaces}
+        onSurfaceClick={onSurfaceClick}
+      />
       <RoomPieces
         pieceScene={pieceScene}
         pieces={pieces}

@@ -105,7 +105,10 @@ function WindowLight({ rect }: { rect: WindowLightRect }) {
   const target = useMemo(() => new THREE.Object3D(), []);
   return (
     <>
-      <primitive object={target} position={[x + ix * WINDOW_AIM.inwardM, Math.max(0, y - WINDOW_AIM.dropM), z + iz * WINDOW_AIM.inwardM]} />
+      <primitive
+        object={target}
+        position={[x + ix * WINDOW_AIM.inwardM, Math.max(0, y - WINDOW_AIM.dropM), z + iz * WINDOW_AIM.inwardM]}
+      />
       <spotLight
         color={WINDOW_LIGHT.colour}
         intensity={WINDOW_LIGHT.intensity * rect.widthM * rect.heightM}

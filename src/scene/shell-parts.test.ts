@@ -15,7 +15,9 @@ describe('shellParts', () => {
     const scene = buildRoomScene(exampleShell, { pieces: [] });
     const parts = shellParts(scene, exampleShell);
     scene.walls.forEach((wall, i) => {
-      expect(parts.walls[i].body.indices.length).toBe(wall.outside.indices.length + wall.top.indices.length + wall.reveals.indices.length);
+      expect(parts.walls[i].body.indices.length).toBe(
+        wall.outside.indices.length + wall.top.indices.length + wall.reveals.indices.length,
+      );
     });
     expect(parts.doorLeaves.indices.length).toBe(scene.doorLeaves[0].mesh.indices.length);
   });

@@ -10,7 +10,14 @@ export const exampleShell: RoomShell = roomShellSchema.parse(designExampleRoom);
 /** An L: the bottom-right quarter is cut away, so walls 2 and 3 are the cut's inner corner. */
 export const lShapedShell: RoomShell = roomShellSchema.parse({
   wallHeight: 2700,
-  outline: [[0, 0], [6200, 0], [6200, 3400], [3800, 3400], [3800, 5600], [0, 5600]],
+  outline: [
+    [0, 0],
+    [6200, 0],
+    [6200, 3400],
+    [3800, 3400],
+    [3800, 5600],
+    [0, 5600],
+  ],
   openings: [
     { id: 'front-window', type: 'window', wall: 0, offset: 1200, width: 1800, height: 1400, sill: 800 },
     { id: 'side-window', type: 'window', wall: 1, offset: 900, width: 1500, height: 1400, sill: 800 },

@@ -46,7 +46,9 @@ export function surfaceMaterials(finishes: SurfaceFinishes, finishMaterials: Fin
 
 /** Placed pieces, each wearing its finish's colour (a photo's mean colour: pieces share one mesh). */
 export function dressedPieces(pieces: readonly Piece[], finishes: SurfaceFinishes): Piece[] {
-  return pieces.filter((p) => p.placed).map((p) => (finishes.pieces?.[p.id] ? { ...p, colour: finishColourHex(finishes.pieces[p.id]) } : p));
+  return pieces
+    .filter((p) => p.placed)
+    .map((p) => (finishes.pieces?.[p.id] ? { ...p, colour: finishColourHex(finishes.pieces[p.id]) } : p));
 }
 
 /**

@@ -1,9 +1,19 @@
 import { describe, expect, it } from 'vitest';
 import { CameraLink, type ViewPose } from './camera-link';
-import { forwardOf, orbitBetween, orbitTurn, orbitZoom, topViewPose, walkPose, walkStateOf, yawOfPlanHeading } from './view-moves';
+import {
+  forwardOf,
+  orbitBetween,
+  orbitTurn,
+  orbitZoom,
+  topViewPose,
+  walkPose,
+  walkStateOf,
+  yawOfPlanHeading,
+} from './view-moves';
 
 const pose: ViewPose = { mode: 'overview', target: [2, 1, 1.5], position: [2, 5, 5.5] };
-const distance = (p: ViewPose) => Math.hypot(p.position[0] - p.target[0], p.position[1] - p.target[1], p.position[2] - p.target[2]);
+const distance = (p: ViewPose) =>
+  Math.hypot(p.position[0] - p.target[0], p.position[1] - p.target[1], p.position[2] - p.target[2]);
 
 describe('Overview moves', () => {
   it('turns round the target keeping height and distance', () => {

@@ -33,7 +33,11 @@ export function orbitZoom(pose: ViewPose, factor: number, minDistance: number, m
 
 /** Straight down onto `target` from `distance` metres, the plan's top edge at the top of the screen. */
 export function topViewPose(target: Vec3, distance: number): ViewPose {
-  return { mode: 'overview', target, position: [target[0], target[1] + distance * Math.cos(TOP_VIEW_TILT), target[2] + distance * Math.sin(TOP_VIEW_TILT)] };
+  return {
+    mode: 'overview',
+    target,
+    position: [target[0], target[1] + distance * Math.cos(TOP_VIEW_TILT), target[2] + distance * Math.sin(TOP_VIEW_TILT)],
+  };
 }
 
 /** A walker's state: plan position in scene metres, eye height, which way they face and look. */
@@ -61,7 +65,11 @@ export function yawOfPlanHeading(headingDeg: number): number {
 export function walkPose(state: WalkState, eyeM: number): ViewPose {
   const [fx, fz] = forwardOf(state.yaw);
   const c = Math.cos(state.pitch);
-  return { mode: 'walk', position: [state.x, eyeM, state.z], target: [state.x + fx * c, eyeM + Math.sin(state.pitch), state.z + fz * c] };
+  return {
+    mode: 'walk',
+    position: [state.x, eyeM, state.z],
+    target: [state.x + fx * c, eyeM + Math.sin(state.pitch), state.z + fz * c],
+  };
 }
 
 /** The walker standing where a pose's camera is, facing where it looks (pitch clamped). */
@@ -95,7 +103,11 @@ export function orbitBetween(a: ViewPose, b: ViewPose, t: number): ViewPose {
   return {
     mode: b.mode,
     target,
-    position: [target[0] + r * Math.sin(phi) * Math.sin(theta), target[1] + r * Math.cos(phi), target[2] + r * Math.sin(phi) * Math.cos(theta)],
+    position: [
+      target[0] + r * Math.sin(phi) * Math.sin(theta),
+      target[1] + r * Math.cos(phi),
+      target[2] + r * Math.sin(phi) * Math.cos(theta),
+    ],
   };
 }
 
@@ -105,4 +117,8 @@ function spherical(v: Vec3): { r: number; theta: number; phi: number } {
 }
 
 const sub = (a: Vec3, b: Vec3): Vec3 => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
-const lerp3 = (a: Vec3, b: Vec3, t: number): Vec3 => [a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t, a[2] + (b[2] - a[2]) * t];
+const lerp3 = (a: Vec3, b: Vec3, t: number): Vec3 => [
+  a[0] + (b[0] - a[0]) * t,
+  a[1] + (b[1] - a[1]) * t,
+  a[2] + (b[2] - a[2]) * t,
+];

@@ -11,7 +11,16 @@ import type { RoomShell } from '../../shared/schemas/room';
 import type { CameraLink, ViewPose } from './camera-link';
 import { overviewFrame, type OverviewFrame } from './framing';
 import {
-  MAX_PITCH_DEG, easeInOut, forwardOf, orbitBetween, orbitTurn, orbitZoom, topViewPose, walkPose, walkStateOf, yawOfPlanHeading,
+  MAX_PITCH_DEG,
+  easeInOut,
+  forwardOf,
+  orbitBetween,
+  orbitTurn,
+  orbitZoom,
+  topViewPose,
+  walkPose,
+  walkStateOf,
+  yawOfPlanHeading,
   type WalkState,
 } from './view-moves';
 
@@ -111,7 +120,8 @@ interface OverviewRigProps {
 }
 
 const framePose = (f: OverviewFrame): ViewPose => ({ mode: 'overview', position: f.position, target: f.target });
-const frameDistance = (f: OverviewFrame) => Math.hypot(f.position[0] - f.target[0], f.position[1] - f.target[1], f.position[2] - f.target[2]);
+const frameDistance = (f: OverviewFrame) =>
+  Math.hypot(f.position[0] - f.target[0], f.position[1] - f.target[1], f.position[2] - f.target[2]);
 
 export function OverviewRig({ bounds, onView, link, viewId, memory, reducedMotion, held, rig, onMoveStart }: OverviewRigProps) {
   const controls = useRef<ComponentRef<typeof OrbitControls>>(null);
@@ -293,7 +303,19 @@ function turnBetween(a: number, b: number, t: number): number {
   return a + d * t;
 }
 
-export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, reducedMotion, held, rig, onMoveStart }: WalkRigProps) {
+export function WalkRig({
+  shell,
+  obstacles,
+  eyeM,
+  onView,
+  link,
+  viewId,
+  memory,
+  reducedMotion,
+  held,
+  rig,
+  onMoveStart,
+}: WalkRigProps) {
   const camera = useThree((state) => state.camera);
   const gl = useThree((state) => state.gl);
   const invalidate = useThree((state) => state.invalidate);
@@ -316,7 +338,12 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
   };
   const startState = (): WalkState => {
     const start = walkStart(live.current.shell, live.current.obstacles);
-    return { x: start.position[0] / MM_PER_M, z: start.position[1] / MM_PER_M, yaw: yawOfPlanHeading(start.headingDeg), pitch: 0 };
+    return {
+      x: start.position[0] / MM_PER_M,
+      z: start.position[1] / MM_PER_M,
+      yaw: yawOfPlanHeading(start.headingDeg),
+      pitch: 0,
+    };
   };
   const glideTo = (to: WalkState, distanceM: number, speed: number) => {
     const from = state.current;
@@ -329,7 +356,12 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
       return;
     }
     const turnMs = (Math.abs(turnBetween(from.yaw, to.yaw, 1) - from.yaw) / (TURN_SPEED_DEG_S * DEG)) * 1000;
-    glide.current = { from: { ...from }, to, start: now(), durationMs: Math.max(MOVE_MS / 2, (distanceM / speed) * 1000, turnMs) };
+    glide.current = {
+      from: { ...from },
+      to,
+      start: now(),
+      durationMs: Math.max(MOVE_MS / 2, (distanceM / speed) * 1000, turnMs),
+    };
     invalidate();
   };
   // Effects call the latest apply without re-running when it is rebuilt (it reads only refs and props).
@@ -390,7 +422,11 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
       last = { x: e.clientX, y: e.clientY };
       glide.current = null;
       const limit = MAX_PITCH_DEG * DEG;
-      state.current = { ...s, yaw: s.yaw + dx * LOOK_RAD_PER_PX, pitch: Math.max(-limit, Math.min(limit, s.pitch + dy * LOOK_RAD_PER_PX)) };
+      state.current = {
+        ...s,
+        yaw: s.yaw + dx * LOOK_RAD_PER_PX,
+        pitch: Math.max(-limit, Math.min(limit, s.pitch + dy * LOOK_RAD_PER_PX)),
+      };
       applyView(true);
     };
     const up = () => {
@@ -463,7 +499,12 @@ export function WalkRig({ shell, obstacles, eyeM, onView, link, viewId, memory, 
     if (g) {
       const k = Math.min(1, (now() - g.start) / g.durationMs);
       const e = easeInOut(k);
-      next = { x: g.from.x + (g.to.x - g.from.x) * e, z: g.from.z + (g.to.z - g.from.z) * e, yaw: turnBetween(g.from.yaw, g.to.yaw, e), pitch: g.from.pitch + (g.to.pitch - g.from.pitch) * e };
+      next = {
+        x: g.from.x + (g.to.x - g.from.x) * e,
+        z: g.from.z + (g.to.z - g.from.z) * e,
+        yaw: turnBetween(g.from.yaw, g.to.yaw, e),
+        pitch: g.from.pitch + (g.to.pitch - g.from.pitch) * e,
+      };
       if (k >= 1) glide.current = null;
     }
     const keys = held.current;

@@ -104,31 +104,38 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
     if (host.current) host.current.dataset.moving = 'true';
   }, []);
 
-  useImperativeHandle(commandsRef, () => ({
-    turn: (d) => rig.current?.turn(d),
-    zoom: (d) => rig.current?.zoom(d),
-    topView: () => rig.current?.topView(),
-    reset: () => rig.current?.reset(),
-    hold: (move, on) => {
-      if (on) held.current.buttons.add(move);
-      else held.current.buttons.delete(move);
+  useImperativeHandle(
+    commandsRef,
+    () => ({
+      turn: (d) => rig.current?.turn(d),
+      zoom: (d) => rig.current?.zoom(d),
+      topView: () => rig.current?.topView(),
+      reset: () => rig.current?.reset(),
+      hold: (move, on) => {
+        if (on) held.current.buttons.add(move);
+        else held.current.buttons.delete(move);
+        markMoving();
+        rig.current?.wake();
+      },
+      step: (move) => rig.current?.step(move),
+    }),
+    [markMoving],
+  );
+
+  // Keys move the camera only while the view has focus, so the page's own keys keep working.
+  const onKey = useCallback(
+    (e: KeyboardEvent<HTMLDivElement>, down: boolean) => {
+      if (e.altKey || e.ctrlKey || e.metaKey) return;
+      const move = KEY_MOVES[e.code];
+      if (!move) return;
+      e.preventDefault();
+      if (down) held.current.keys.add(move);
+      else held.current.keys.delete(move);
       markMoving();
       rig.current?.wake();
     },
-    step: (move) => rig.current?.step(move),
-  }), [markMoving]);
-
-  // Keys move the camera only while the view has focus, so the page's own keys keep working.
-  const onKey = useCallback((e: KeyboardEvent<HTMLDivElement>, down: boolean) => {
-    if (e.altKey || e.ctrlKey || e.metaKey) return;
-    const move = KEY_MOVES[e.code];
-    if (!move) return;
-    e.preventDefault();
-    if (down) held.current.keys.add(move);
-    else held.current.keys.delete(move);
-    markMoving();
-    rig.current?.wake();
-  }, [markMoving]);
+    [markMoving],
+  );
 
   const fallback = (
     <div className="flex h-full w-full items-center justify-center bg-sand p-4 text-sm text-ink-soft">
@@ -148,7 +155,9 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
       onKeyDown={(e) => onKey(e, true)}
       onKeyUp={(e) => onKey(e, false)}
       onBlur={() => held.current.keys.clear()}
-      className={className ?? 'relative h-full w-full outline-none focus-visible:ring-2 focus-visible:ring-pine focus-visible:ring-inset'}
+      className={
+        className ?? 'relative h-full w-full outline-none focus-visible:ring-2 focus-visible:ring-pine focus-visible:ring-inset'
+      }
     >
       {webgl ? (
         <SceneErrorBoundary fallback={fallback}>
@@ -157,7 +166,12 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
             // No shadow maps: the soft shadows under the pieces are baked into the floor per option.
             dpr={[1, 2]}
             // Neutral tone mapping keeps a lit paint close to its swatch; the output is sRGB.
-            gl={{ preserveDrawingBuffer: true, antialias: true, toneMapping: THREE.NeutralToneMapping, outputColorSpace: THREE.SRGBColorSpace }}
+            gl={{
+              preserveDrawingBuffer: true,
+              antialias: true,
+              toneMapping: THREE.NeutralToneMapping,
+              outputColorSpace: THREE.SRGBColorSpace,
+            }}
             camera={{ fov: 40, near: 0.05, far: 200, position: [0, 8, 8] }}
             fallback={fallback}
           >
@@ -189,7 +203,22 @@ interface BuiltOption {
 }
 
 function WalkthroughScene(props: SceneProps) {
-  const { optionId, mode, eyeHeightMm, reducedMotion, selectedPieceId = null, onPieceClick, link, viewId = 'main', host, held, rig, onTextureProgress, onMoveStart, pieceBuild = 'forms' } = props;
+  const {
+    optionId,
+    mode,
+    eyeHeightMm,
+    reducedMotion,
+    selectedPieceId = null,
+    onPieceClick,
+    link,
+    viewId = 'main',
+    host,
+    held,
+    rig,
+    onTextureProgress,
+    onMoveStart,
+    pieceBuild = 'forms',
+  } = props;
   const shell = useStableValue(props.shell);
   const options = useStableValue(props.options);
   const invalidate = useThree((state) => state.invalidate);
@@ -201,7 +230,12 @@ function WalkthroughScene(props: SceneProps) {
   progressRef.current = onTextureProgress;
   const finishMaterials = useMemo(
     // Progress is reported after the current render: materials are asked for while rendering.
-    () => new FinishMaterials(() => invalidate(), Math.min(8, gl.capabilities.getMaxAnisotropy()), (p) => queueMicrotask(() => progressRef.current?.(p))),
+    () =>
+      new FinishMaterials(
+        () => invalidate(),
+        Math.min(8, gl.capabilities.getMaxAnisotropy()),
+        (p) => queueMicrotask(() => progressRef.current?.(p)),
+      ),
     [invalidate, gl],
   );
   useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
@@ -225,14 +259,33 @@ function WalkthroughScene(props: SceneProps) {
     [options, shell, pieceBuild],
   );
   // Every option's finishes are asked for at once, so their textures load while the first is shown.
-  const surfacesByOption = useMemo(() => new Map(built.map((o) => [o.id, surfaceMaterials(o.finishes, finishMaterials)])), [built, finishMaterials]);
+  const surfacesByOption = useMemo(
+    () => new Map(built.map((o) => [o.id, surfaceMaterials(o.finishes, finishMaterials)])),
+    [built, finishMaterials],
+  );
   const active = built.find((o) => o.id === optionId) ?? built[0];
   const surfaces = active ? surfacesByOption.get(active.id) : undefined;
 
-  const { walls, ceiling, lastCamera, updateView } = useWallFade(parts, mode === 'overview', materials, host, invalidate, surfaces);
+  const { walls, ceiling, lastCamera, updateView } = useWallFade(
+    parts,
+    mode === 'overview',
+    materials,
+    host,
+    invalidate,
+    surfaces,
+  );
 
   const shadowMaterial = useMemo(
-    () => new THREE.MeshBasicMaterial({ color: '#000000', vertexColors: true, transparent: true, depthWrite: false, polygonOffset: true, polygonOffsetFactor: -1, polygonOffsetUnits: -1 }),
+    () =>
+      new THREE.MeshBasicMaterial({
+        color: '#000000',
+        vertexColors: true,
+        transparent: true,
+        depthWrite: false,
+        polygonOffset: true,
+        polygonOffsetFactor: -1,
+        polygonOffsetUnits: -1,
+      }),
     [],
   );
   useEffect(() => () => shadowMaterial.dispose(), [shadowMaterial]);
@@ -243,11 +296,19 @@ function WalkthroughScene(props: SceneProps) {
   const walkPoseRef = useRef<ViewPose | null>(null);
   const onFloorPoint = useCallback((x: number, z: number) => rig.current?.walkTo(x, z), [rig]);
 
-  const textureBytes = useCallback(() => ({
-    textureBytes: String(finishMaterials.textureBytes()),
-    camera: lastCamera.current ? lastCamera.current.position.toArray().map((v) => v.toFixed(3)).join(',') : '',
-    moving: String(rig.current?.busy() ?? false),
-  }), [finishMaterials, lastCamera, rig]);
+  const textureBytes = useCallback(
+    () => ({
+      textureBytes: String(finishMaterials.textureBytes()),
+      camera: lastCamera.current
+        ? lastCamera.current.position
+            .toArray()
+            .map((v) => v.toFixed(3))
+            .join(',')
+        : '',
+      moving: String(rig.current?.busy() ?? false),
+    }),
+    [finishMaterials, lastCamera, rig],
+  );
 
   if (!parts || !active) return <RenderAndReport host={host} extra={textureBytes} />;
   return (
@@ -276,7 +337,17 @@ function WalkthroughScene(props: SceneProps) {
         </group>
       ))}
       {mode === 'overview' ? (
-        <OverviewRig bounds={parts.bounds} onView={updateView} link={link} viewId={viewId} memory={overviewPose} reducedMotion={reducedMotion} held={held} rig={rig} onMoveStart={onMoveStart} />
+        <OverviewRig
+          bounds={parts.bounds}
+          onView={updateView}
+          link={link}
+          viewId={viewId}
+          memory={overviewPose}
+          reducedMotion={reducedMotion}
+          held={held}
+          rig={rig}
+          onMoveStart={onMoveStart}
+        />
       ) : (
         <WalkRig
           shell={shell}
@@ -298,7 +369,15 @@ function WalkthroughScene(props: SceneProps) {
 }
 
 /** One option's soft floor shadows: built once, kept while the option is, disposed with it. */
-function FloorShadows({ pieces, daylight, material }: { pieces: readonly Piece[]; daylight: [number, number]; material: THREE.Material }) {
+function FloorShadows({
+  pieces,
+  daylight,
+  material,
+}: {
+  pieces: readonly Piece[];
+  daylight: [number, number];
+  material: THREE.Material;
+}) {
   const [dx, dz] = daylight;
   const geometry = useMemo(() => {
     const data = contactShadows(pieces, [dx, dz]);

@@ -28,7 +28,7 @@ export function applyWallFade(root: THREE.Object3D, faded: ReadonlySet<number>, 
       case 'wall': {
         // A wall wearing a finish carries its own pair of materials.
         const own = object.userData as { solidMaterial?: THREE.Material; fadedMaterial?: THREE.Material };
-        object.material = isFaded ? own.fadedMaterial ?? materials.wallFaded : own.solidMaterial ?? materials.wall;
+        object.material = isFaded ? (own.fadedMaterial ?? materials.wallFaded) : (own.solidMaterial ?? materials.wall);
         break;
       }
       case 'frame':

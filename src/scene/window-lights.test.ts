@@ -5,7 +5,12 @@ import { WINDOW_LIGHT_INSET_M, windowLightRects } from './window-lights';
 describe('windowLightRects', () => {
   it('puts one light in each window’s inside face, its size, shining into the room', () => {
     const shell = roomShellSchema.parse({
-      outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+      outline: [
+        [0, 0],
+        [4000, 0],
+        [4000, 3000],
+        [0, 3000],
+      ],
       openings: [
         { id: 'w-top', type: 'window', wall: 0, offset: 1000, width: 1500, height: 1200, sill: 900 },
         { id: 'door', type: 'door', wall: 2, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' },

@@ -48,7 +48,10 @@ const CASES: Record<string, Case> = {
   'get /api/projects/:id': { params: (f) => ({ id: f.projectId }) },
   'patch /api/projects/:id': { params: (f) => ({ id: f.projectId }), body: () => ({ name: 'Renamed project' }) },
   'get /api/projects/:projectId/rooms': { params: (f) => ({ projectId: f.projectId }) },
-  'post /api/projects/:projectId/rooms': { params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Den', shell: SQUARE }) },
+  'post /api/projects/:projectId/rooms': {
+    params: (f) => ({ projectId: f.projectId }),
+    body: () => ({ name: 'Den', shell: SQUARE }),
+  },
   'post /api/projects/:projectId/rooms/import': { params: (f) => ({ projectId: f.projectId }), body: () => PLAN },
   'get /api/rooms/:id': { params: (f) => ({ id: f.roomId }) },
   'put /api/rooms/:id': { params: (f) => ({ id: f.roomId }), body: () => ({ name: 'Taken', version: 1 }) },
@@ -66,11 +69,17 @@ const CASES: Record<string, Case> = {
   'delete /api/finishes/:id': { params: (f) => ({ id: f.finishId }) },
   'get /api/files/:name': { params: (f) => ({ name: f.fileName }) },
   'get /api/projects/:projectId/presentations': { params: (f) => ({ projectId: f.projectId }) },
-  'post /api/projects/:projectId/presentations': { params: (f) => ({ projectId: f.projectId }), body: () => ({ rooms: [{ roomId: randomUUID(), optionIds: [randomUUID()] }] }) },
+  'post /api/projects/:projectId/presentations': {
+    params: (f) => ({ projectId: f.projectId }),
+    body: () => ({ rooms: [{ roomId: randomUUID(), optionIds: [randomUUID()] }] }),
+  },
   'post /api/presentations/:id/send': { params: (f) => ({ id: f.presentationId }), body: () => ({}) },
   'post /api/presentations/:id/withdraw': { params: (f) => ({ id: f.presentationId }) },
   'post /api/presentations/:id/extend': { params: (f) => ({ id: f.presentationId }), body: () => ({ days: 5 }) },
-  'post /api/projects/:projectId/decide': { params: (f) => ({ projectId: f.projectId }), body: () => ({ presentationId: randomUUID() }) },
+  'post /api/projects/:projectId/decide': {
+    params: (f) => ({ projectId: f.projectId }),
+    body: () => ({ presentationId: randomUUID() }),
+  },
   'post /api/projects/:projectId/reopen': { params: (f) => ({ projectId: f.projectId }) },
   'get /api/projects/:projectId/takeoff': { params: (f) => ({ projectId: f.projectId }) },
   'get /api/projects/:projectId/compare': { params: (f) => ({ projectId: f.projectId }) },
@@ -80,10 +89,18 @@ const CASES: Record<string, Case> = {
   'get /api/outbox/:id': { params: (f) => ({ id: f.sentMailId }) },
 };
 
-const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
+const SQUARE = {
+  outline: [
+    [0, 0],
+    [3000, 0],
+    [3000, 3000],
+    [0, 3000],
+  ],
+};
 const PLAN = { format: 'parlour-plan', version: 1, room: { name: 'Imported', ...SQUARE }, option: { name: 'A', pieces: [] } };
 
-const fill = (path: string, params: Record<string, string>) => path.replace(/:(\w+)/g, (_m, k: string) => params[k] ?? randomUUID());
+const fill = (path: string, params: Record<string, string>) =>
+  path.replace(/:(\w+)/g, (_m, k: string) => params[k] ?? randomUUID());
 const call = (agent: Agent | ReturnType<typeof request>, method: string, path: string, body?: object) => {
   const r = (agent as unknown as Record<string, (p: string) => request.Test>)[method](path);
   return body ? r.send(body) : r;
@@ -109,9 +126,26 @@ beforeAll(async () => {
   const paint = await a.agent.post('/api/finishes/paints').send({ name: 'Fixture paint', colourHex: '#cccccc' });
   // A file row of studio A's (no bytes needed: the files route asks whose it is before reading it).
   const fileName = `${randomUUID().replaceAll('-', '').repeat(2)}.webp`;
-  const { studio_id: studioId } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paint.body.finish.id).executeTakeFirstOrThrow();
-  await t.db.insertInto('finish_files').values({ finish_id: paint.body.finish.id, studio_id: studioId, purpose: 'swatch', key: `derived/${fileName}`, width_px: 1, height_px: 1, bytes: 1 }).execute();
-  const presentation = await a.agent.post(`/api/projects/${project.body.project.id}/presentations`).send({ rooms: [{ roomId: room.body.room.id, optionIds: [room.body.options[0].id] }] });
+  const { studio_id: studioId } = await t.db
+    .selectFrom('finishes')
+    .select('studio_id')
+    .where('id', '=', paint.body.finish.id)
+    .executeTakeFirstOrThrow();
+  await t.db
+    .insertInto('finish_files')
+    .values({
+      finish_id: paint.body.finish.id,
+      studio_id: studioId,
+      purpose: 'swatch',
+      key: `derived/${fileName}`,
+      width_px: 1,
+      height_px: 1,
+      bytes: 1,
+    })
+    .execute();
+  const presentation = await a.agent
+    .post(`/api/projects/${project.body.project.id}/presentations`)
+    .send({ rooms: [{ roomId: room.body.room.id, optionIds: [room.body.options[0].id] }] });
   fixture = {
     clientId: project.body.project.client.id,
     projectId: project.body.project.id,
@@ -140,11 +174,15 @@ describe('route table', () => {
     expect(res.status).toBe(401);
   });
 
-  const roleRows = guarded.flatMap((r) => (['owner', 'designer', 'viewer'] as Role[]).map((role) => [`${r.method} ${r.path}`, role, r] as const));
+  const roleRows = guarded.flatMap((r) =>
+    (['owner', 'designer', 'viewer'] as Role[]).map((role) => [`${r.method} ${r.path}`, role, r] as const),
+  );
   it.each(roleRows)('%s as %s: allowed roles pass the guard, others get 403', async (key, role, r) => {
     // Random ids: nothing of the fixture is changed, so rows stay independent of order.
     const agent = CASES[key].ownSession
-      ? role === 'owner' ? (await signUpStudio(t.app)).agent : (await addMember(t, agents.owner, role)).agent
+      ? role === 'owner'
+        ? (await signUpStudio(t.app)).agent
+        : (await addMember(t, agents.owner, role)).agent
       : agents[role];
     const res = await call(agent, r.method, fill(r.path, {}), CASES[key]?.body?.());
     const allowed = r.access === 'signed-in' || r.access.includes(role);
@@ -153,11 +191,14 @@ describe('route table', () => {
   });
 
   const scoped = guarded.filter((r) => r.path.includes(':'));
-  it.each(scoped.map((r) => [`${r.method} ${r.path}`, r] as const))('%s with studio A’s id answers 404 to studio B', async (key, r) => {
-    const c = CASES[key];
-    const res = await call(other, r.method, fill(r.path, c.params!(fixture)), c.body?.());
-    expect(res.status).toBe(404);
-  });
+  it.each(scoped.map((r) => [`${r.method} ${r.path}`, r] as const))(
+    '%s with studio A’s id answers 404 to studio B',
+    async (key, r) => {
+      const c = CASES[key];
+      const res = await call(other, r.method, fill(r.path, c.params!(fixture)), c.body?.());
+      expect(res.status).toBe(404);
+    },
+  );
 
   it('studio A still sees its own records after all of the above', async () => {
     expect((await agents.viewer.get(`/api/projects/${fixture.projectId}`)).status).toBe(200);

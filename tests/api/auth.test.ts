@@ -21,7 +21,9 @@ describe('sign-up, sign-in and sign-out', () => {
   it('signs up a studio owner and keeps them signed in with an httpOnly SameSite cookie', async () => {
     const agent = request.agent(t.app);
     const email = uniqueEmail('signup');
-    const res = await agent.post('/api/auth/sign-up').send({ studioName: 'Fern Studio', name: 'Ada', email, password: 'long-enough-pass' });
+    const res = await agent
+      .post('/api/auth/sign-up')
+      .send({ studioName: 'Fern Studio', name: 'Ada', email, password: 'long-enough-pass' });
     expect(res.status).toBe(201);
     const cookie = String(res.headers['set-cookie']);
     expect(cookie).toMatch(/parlour_session=/);
@@ -36,13 +38,17 @@ describe('sign-up, sign-in and sign-out', () => {
 
   it('refuses a second account with the same e-mail, field named', async () => {
     const { email } = await signUpStudio(t.app);
-    const res = await request(t.app).post('/api/auth/sign-up').send({ studioName: 'X', name: 'Y', email: email.toUpperCase(), password: 'long-enough-pass' });
+    const res = await request(t.app)
+      .post('/api/auth/sign-up')
+      .send({ studioName: 'X', name: 'Y', email: email.toUpperCase(), password: 'long-enough-pass' });
     expect(res.status).toBe(409);
     expect(res.body.error.fields.email).toBeTruthy();
   });
 
   it('answers invalid bodies with 400 and a message per field', async () => {
-    const res = await request(t.app).post('/api/auth/sign-up').send({ studioName: '', name: 'A', email: 'not-an-email', password: 'short' });
+    const res = await request(t.app)
+      .post('/api/auth/sign-up')
+      .send({ studioName: '', name: 'A', email: 'not-an-email', password: 'short' });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid');
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['email', 'password', 'studioName']);
@@ -55,7 +61,9 @@ describe('sign-up, sign-in and sign-out', () => {
     const { email } = await signUpStudio(t.app);
     const wrong = await request(t.app).post('/api/auth/sign-in').send({ email, password: 'not-the-password' });
     expect(wrong.status).toBe(401);
-    const unknown = await request(t.app).post('/api/auth/sign-in').send({ email: uniqueEmail('nobody'), password: 'not-the-password' });
+    const unknown = await request(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail('nobody'), password: 'not-the-password' });
     expect(unknown.status).toBe(401);
     expect(unknown.body.error.message).toBe(wrong.body.error.message);
     const right = await request(t.app).post('/api/auth/sign-in').send({ email, password: 'correct-horse-battery' });
@@ -65,7 +73,13 @@ describe('sign-up, sign-in and sign-out', () => {
   it('locks sign-in for an e-mail after five wrong passwords, even with the right one', async () => {
     const { email } = await signUpStudio(t.app);
     for (let i = 0; i < 5; i += 1) {
-      expect((await request(t.app).post('/api/auth/sign-in').send({ email, password: `wrong-${i}-password` })).status).toBe(401);
+      expect(
+        (
+          await request(t.app)
+            .post('/api/auth/sign-in')
+            .send({ email, password: `wrong-${i}-password` })
+        ).status,
+      ).toBe(401);
     }
     const locked = await request(t.app).post('/api/auth/sign-in').send({ email, password: 'correct-horse-battery' });
     expect(locked.status).toBe(429);
@@ -76,14 +90,25 @@ describe('sign-up, sign-in and sign-out', () => {
   it('the right password clears the count of earlier attempts', async () => {
     const { email } = await signUpStudio(t.app);
     for (let round = 0; round < 3; round += 1) {
-      for (let i = 0; i < 3; i += 1) expect((await request(t.app).post('/api/auth/sign-in').send({ email, password: `wrong-${i}-password` })).status).toBe(401);
-      expect((await request(t.app).post('/api/auth/sign-in').send({ email, password: 'correct-horse-battery' })).status).toBe(200);
+      for (let i = 0; i < 3; i += 1)
+        expect(
+          (
+            await request(t.app)
+              .post('/api/auth/sign-in')
+              .send({ email, password: `wrong-${i}-password` })
+          ).status,
+        ).toBe(401);
+      expect((await request(t.app).post('/api/auth/sign-in').send({ email, password: 'correct-horse-battery' })).status).toBe(
+        200,
+      );
     }
   });
 
   it('sign-out revokes the session at once, and the old cookie replayed does not work either', async () => {
     const agent = request.agent(t.app);
-    const signUp = await agent.post('/api/auth/sign-up').send({ studioName: 'Exit Studio', name: 'Eve', email: uniqueEmail('exit'), password: 'correct-horse-battery' });
+    const signUp = await agent
+      .post('/api/auth/sign-up')
+      .send({ studioName: 'Exit Studio', name: 'Eve', email: uniqueEmail('exit'), password: 'correct-horse-battery' });
     expect(signUp.status).toBe(201);
     const cookie = sessionCookie(signUp);
     expect((await request(t.app).get('/api/auth/me').set('cookie', cookie)).status).toBe(200);
@@ -118,8 +143,12 @@ describe('members and roles', () => {
     await owner.post('/api/studio/invites').send({ email, role: 'viewer' });
     const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
     expect((await request(t.app).get(`/api/invites/${token}`)).body.invite.role).toBe('viewer');
-    expect((await request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'V', password: 'correct-horse-battery' })).status).toBe(201);
-    const again = await request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'V', password: 'correct-horse-battery' });
+    expect(
+      (await request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'V', password: 'correct-horse-battery' })).status,
+    ).toBe(201);
+    const again = await request(t.app)
+      .post(`/api/invites/${token}/accept`)
+      .send({ name: 'V', password: 'correct-horse-battery' });
     expect(again.status).toBe(410);
     expect((await request(t.app).get('/api/invites/not-a-real-token-at-all-xx')).status).toBe(404);
   });
@@ -188,7 +217,10 @@ describe('choosing a password', () => {
   it('still signs in with a password stored before the rule, of 10 characters', async () => {
     const email = uniqueEmail('older');
     const studio = await t.db.insertInto('studios').values({ name: 'Older Studio' }).returning('id').executeTakeFirstOrThrow();
-    await t.db.insertInto('members').values({ studio_id: studio.id, email, name: 'Old Timer', role: 'owner', password_hash: await hashPassword('tenchars!!') }).execute();
+    await t.db
+      .insertInto('members')
+      .values({ studio_id: studio.id, email, name: 'Old Timer', role: 'owner', password_hash: await hashPassword('tenchars!!') })
+      .execute();
     const res = await request(t.app).post('/api/auth/sign-in').send({ email, password: 'tenchars!!' });
     expect(res.status).toBe(200);
     expect(String(res.headers['set-cookie'])).toMatch(/parlour_session=/);
@@ -228,7 +260,9 @@ describe('sign-in throttling under parallel attempts', () => {
     const { email } = await signUpStudio(throttled.app);
     checks = 0;
     let open!: () => void;
-    gate = new Promise((resolve) => { open = resolve; });
+    gate = new Promise((resolve) => {
+      open = resolve;
+    });
     // Eleven wrong passwords at once; the five let through are held inside the password check…
     const burst = Promise.all(Array.from({ length: 11 }, (_, i) => attempt(email, `wrong-${i}-password`)));
     await vi.waitFor(() => expect(checks).toBe(5));
@@ -255,7 +289,9 @@ describe('sign-up limit per client address', () => {
   // counter lives in the shared test database.
   const run = (process.pid % 250) + 1;
   const signUpFrom = (address: string, email = uniqueEmail('limit')) =>
-    request(limited.app).post('/api/auth/sign-up').set('X-Forwarded-For', address)
+    request(limited.app)
+      .post('/api/auth/sign-up')
+      .set('X-Forwarded-For', address)
       .send({ studioName: 'Many Studios', name: 'Mo', email, password: 'correct-horse-battery' });
 
   it('makes five studios an hour from one address, then answers 429 with Retry-After and makes nothing', async () => {
@@ -264,7 +300,9 @@ describe('sign-up limit per client address', () => {
     const email = uniqueEmail('sixth');
     const refused = await signUpFrom(address, email);
     expect(refused.status).toBe(429);
-    expect(refused.body.error.message).toMatch(/Too many new studios were made from this address\. Try again in \d+ (minutes?|hours)\./);
+    expect(refused.body.error.message).toMatch(
+      /Too many new studios were made from this address\. Try again in \d+ (minutes?|hours)\./,
+    );
     const retryAfter = Number(refused.headers['retry-after']);
     expect(retryAfter).toBeGreaterThan(0);
     expect(retryAfter).toBeLessThanOrEqual(2 * 3600);

@@ -6,7 +6,14 @@ import { randomUUID } from 'node:crypto';
 import { addMember, createTestApp, signUpStudio, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
-const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
+const SQUARE = {
+  outline: [
+    [0, 0],
+    [3000, 0],
+    [3000, 3000],
+    [0, 3000],
+  ],
+};
 
 let t: TestApp;
 let owner: Agent;
@@ -18,14 +25,33 @@ beforeAll(async () => {
   const a = await signUpStudio(t.app, 'Larch Studio');
   owner = a.agent;
   viewer = (await addMember(t, owner, 'viewer')).agent;
-  const project = await owner.post('/api/projects').send({ name: 'Tarn cottage', newClient: { name: 'Cas Hollin', email: 'cas@example.com' } });
+  const project = await owner
+    .post('/api/projects')
+    .send({ name: 'Tarn cottage', newClient: { name: 'Cas Hollin', email: 'cas@example.com' } });
   const room = await owner.post(`/api/projects/${project.body.project.id}/rooms`).send({ name: 'Snug', shell: SQUARE });
-  await owner.post(`/api/projects/${project.body.project.id}/presentations`).send({ rooms: [{ roomId: room.body.room.id, optionIds: [room.body.options[0].id] }] });
+  await owner
+    .post(`/api/projects/${project.body.project.id}/presentations`)
+    .send({ rooms: [{ roomId: room.body.room.id, optionIds: [room.body.options[0].id] }] });
   const paint = await owner.post('/api/finishes/paints').send({ name: 'Slate', colourHex: '#556070' });
   // A stored file's row (the files route answers a matching ETag without reading the bytes).
-  const { studio_id: studioId } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paint.body.finish.id).executeTakeFirstOrThrow();
+  const { studio_id: studioId } = await t.db
+    .selectFrom('finishes')
+    .select('studio_id')
+    .where('id', '=', paint.body.finish.id)
+    .executeTakeFirstOrThrow();
   ids.file = `${randomUUID().replaceAll('-', '').repeat(2)}.webp`;
-  await t.db.insertInto('finish_files').values({ finish_id: paint.body.finish.id, studio_id: studioId, purpose: 'swatch', key: `derived/${ids.file}`, width_px: 1, height_px: 1, bytes: 1 }).execute();
+  await t.db
+    .insertInto('finish_files')
+    .values({
+      finish_id: paint.body.finish.id,
+      studio_id: studioId,
+      purpose: 'swatch',
+      key: `derived/${ids.file}`,
+      width_px: 1,
+      height_px: 1,
+      bytes: 1,
+    })
+    .execute();
   ids.client = project.body.project.client.id;
   ids.project = project.body.project.id;
   ids.room = room.body.room.id;

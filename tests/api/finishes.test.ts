@@ -30,7 +30,14 @@ beforeAll(async () => {
   dataDir = mkdtempSync(join(tmpdir(), 'parlour-finishes-'));
   const db = createDb(inject('databaseUrl'), 4);
   const mail: MailMessage[] = [];
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', DATA_DIR: dataDir, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT });
+  const config = loadConfig({
+    DATABASE_URL: inject('databaseUrl'),
+    NODE_ENV: 'test',
+    PUBLIC_URL: 'http://parlour.test',
+    CLIENT_DIST: '/nonexistent',
+    DATA_DIR: dataDir,
+    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
+  });
   const deps: AppDeps = { db, mailer: { send: async (m) => void mail.push(m) }, config };
   t = { app: createApp(deps), db, mail, close: () => db.destroy() };
   owner = (await signUpStudio(t.app, 'Finish Studio')).agent;
@@ -79,7 +86,8 @@ const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => 
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => cb(null, Buffer.concat(chunks)));
 };
-const fetchFile = (agent: Agent | ReturnType<typeof request>, url: string) => (agent as Agent).get(url).buffer(true).parse(binary);
+const fetchFile = (agent: Agent | ReturnType<typeof request>, url: string) =>
+  (agent as Agent).get(url).buffer(true).parse(binary);
 
 async function countFinishes(agent: Agent): Promise<number> {
   return ((await agent.get('/api/finishes')).body.finishes as Finish[]).length;
@@ -91,7 +99,9 @@ describe('paints', () => {
     expect(res.status).toBe(201);
     expect(res.body.finish).toMatchObject({ kind: 'paint', name: 'Morning oat', colourHex: '#e8dcc4', sheen: 'eggshell' });
     const id = res.body.finish.id;
-    const patched = await owner.patch(`/api/finishes/${id}`).send({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'unit' });
+    const patched = await owner
+      .patch(`/api/finishes/${id}`)
+      .send({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'unit' });
     expect(patched.body.finish).toMatchObject({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'unit' });
     const wrong = await owner.patch(`/api/finishes/${id}`).send({ repeatWidthMm: 600 });
     expect(wrong.status).toBe(400);
@@ -114,15 +124,28 @@ describe('a photo finish from upload to texture', () => {
     // A 1200 × 800 photo lying on its side (EXIF orientation 6) with a GPS position in its EXIF.
     input = await rawToSharp(photoLike(1200, 800))
       .withMetadata({ orientation: 6 })
-      .withExif({ IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' } })
+      .withExif({
+        IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' },
+      })
       .jpeg({ quality: 90 })
       .toBuffer();
     const meta = await sharp(input).metadata();
     expect(meta.exif?.includes(Buffer.from([0x25, 0x88]))).toBe(true); // the GPS IFD pointer tag, 0x8825
-    const res = await upload(owner, [{ name: 'oak_boards-02.jpg', bytes: input }], { category: 'wood', repeatWidthMm: '600', repeatHeightMm: '900' });
+    const res = await upload(owner, [{ name: 'oak_boards-02.jpg', bytes: input }], {
+      category: 'wood',
+      repeatWidthMm: '600',
+      repeatHeightMm: '900',
+    });
     expect(res.status).toBe(201);
     expect(res.body.finishes).toHaveLength(1);
-    expect(res.body.finishes[0]).toMatchObject({ kind: 'photo', name: 'Oak boards 02', category: 'wood', status: 'processing', repeatWidthMm: 600, repeatHeightMm: 900 });
+    expect(res.body.finishes[0]).toMatchObject({
+      kind: 'photo',
+      name: 'Oak boards 02',
+      category: 'wood',
+      status: 'processing',
+      repeatWidthMm: 600,
+      repeatHeightMm: 900,
+    });
     finish = await waitUntilProcessed(owner, res.body.finishes[0].id);
   });
 
@@ -213,8 +236,18 @@ describe('a photo finish from upload to texture', () => {
   });
 
   it('edits the real size, supplier and price without re-processing', async () => {
-    const res = await owner.patch(`/api/finishes/${finish.id}`).send({ repeatWidthMm: 200, repeatHeightMm: 1200, supplier: 'Timber yard', code: 'OB-2', price: 64, priceUnit: 'm2' });
-    expect(res.body.finish).toMatchObject({ status: 'ready', repeatWidthMm: 200, repeatHeightMm: 1200, supplier: 'Timber yard', code: 'OB-2', price: 64, priceUnit: 'm2' });
+    const res = await owner
+      .patch(`/api/finishes/${finish.id}`)
+      .send({ repeatWidthMm: 200, repeatHeightMm: 1200, supplier: 'Timber yard', code: 'OB-2', price: 64, priceUnit: 'm2' });
+    expect(res.body.finish).toMatchObject({
+      status: 'ready',
+      repeatWidthMm: 200,
+      repeatHeightMm: 1200,
+      supplier: 'Timber yard',
+      code: 'OB-2',
+      price: 64,
+      priceUnit: 'm2',
+    });
     expect(res.body.finish.files).toEqual(finish.files);
     expect((await viewer.patch(`/api/finishes/${finish.id}`).send({ name: 'Mine now' })).status).toBe(403);
   });
@@ -227,7 +260,7 @@ describe('a photo finish from upload to texture', () => {
     expect(await names('category=fabric')).toEqual([]);
     expect(await names('kind=paint')).toContain('Morning oat');
     expect((await owner.get('/api/finishes?category=velvet')).status).toBe(400);
-    expect(((await stranger.get('/api/finishes')).body.finishes as Finish[])).toEqual([]);
+    expect((await stranger.get('/api/finishes')).body.finishes as Finish[]).toEqual([]);
   });
 
   it('deletes the finish and every file only it used', async () => {
@@ -242,10 +275,16 @@ describe('a 10 cm checkerboard photo set to its real size', () => {
     // 4 × 4 squares of 25 mm: 100 mm across, photographed at 10 px per mm. It already repeats,
     // so no edge blending.
     const photo = await rawToPng(checkerboard(1000, 4));
-    const res = await upload(owner, [{ name: 'checker.png', bytes: photo }], { repeatWidthMm: '100', repeatHeightMm: '100', edgeBlend: 'none' });
+    const res = await upload(owner, [{ name: 'checker.png', bytes: photo }], {
+      repeatWidthMm: '100',
+      repeatHeightMm: '100',
+      edgeBlend: 'none',
+    });
     expect(res.status).toBe(201);
     const finish = await waitUntilProcessed(owner, res.body.finishes[0].id);
-    const { data, info } = await sharp((await fetchFile(owner, finish.files.textureLargeUrl!)).body as Buffer).raw().toBuffer({ resolveWithObject: true });
+    const { data, info } = await sharp((await fetchFile(owner, finish.files.textureLargeUrl!)).body as Buffer)
+      .raw()
+      .toBuffer({ resolveWithObject: true });
     const { repeatU, repeatV } = textureRepeat(finish);
     expect(repeatU).toBeCloseTo(10, 12); // 10 repeats per metre
     expect(repeatV).toBeCloseTo(10, 12);
@@ -285,17 +324,32 @@ describe('bad input', () => {
   });
 
   it('refuses a zero-byte file', async () => {
-    await expectRefused(await upload(owner, [{ name: 'empty.jpg', bytes: Buffer.alloc(0) }]), 400, 'empty_file', /“empty.jpg” is empty/);
+    await expectRefused(
+      await upload(owner, [{ name: 'empty.jpg', bytes: Buffer.alloc(0) }]),
+      400,
+      'empty_file',
+      /“empty.jpg” is empty/,
+    );
   });
 
   it('refuses a text file named .jpg (the type comes from the content)', async () => {
-    await expectRefused(await upload(owner, [{ name: 'notes.jpg', bytes: Buffer.from('Measure the bay window again.\n') }]), 415, 'unsupported_type', /not a JPEG, PNG or WebP/);
+    await expectRefused(
+      await upload(owner, [{ name: 'notes.jpg', bytes: Buffer.from('Measure the bay window again.\n') }]),
+      415,
+      'unsupported_type',
+      /not a JPEG, PNG or WebP/,
+    );
   });
 
   it('refuses a 20000 × 20000 image by its pixel count', async () => {
     const huge = zeroPng(20_000, 20_000, 8, 50);
     expect(huge.length).toBeLessThan(1_000_000);
-    await expectRefused(await upload(owner, [{ name: 'huge.png', bytes: huge }]), 413, 'too_many_pixels', /20000 × 20000 pixels \(400 megapixels\); the limit is 40 megapixels/);
+    await expectRefused(
+      await upload(owner, [{ name: 'huge.png', bytes: huge }]),
+      413,
+      'too_many_pixels',
+      /20000 × 20000 pixels \(400 megapixels\); the limit is 40 megapixels/,
+    );
   });
 
   it('refuses a small PNG that decodes to gigabytes before decoding it', async () => {
@@ -303,7 +357,13 @@ describe('bad input', () => {
     const bomb = zeroPng(60_000, 60_000, 1, 100);
     expect(bomb.length).toBeLessThan(1_000_000);
     // The same builder's small PNGs decode, so this one is a real PNG, not noise.
-    expect((await sharp(zeroPng(64, 64, 1, 8)).raw().toBuffer({ resolveWithObject: true })).info.width).toBe(64);
+    expect(
+      (
+        await sharp(zeroPng(64, 64, 1, 8))
+          .raw()
+          .toBuffer({ resolveWithObject: true })
+      ).info.width,
+    ).toBe(64);
     const rssBefore = process.memoryUsage().rss;
     const started = performance.now();
     await expectRefused(await upload(owner, [{ name: 'bomb.png', bytes: bomb }]), 413, 'too_many_pixels', /3600 megapixels/);
@@ -325,7 +385,10 @@ describe('bad input', () => {
 
   it('refuses the whole request when one photo of several is bad, storing none of them', async () => {
     const good = await rawToJpeg(checkerboard(64, 2));
-    const res = await upload(owner, [{ name: 'good.jpg', bytes: good }, { name: 'bad.jpg', bytes: Buffer.from('nope') }]);
+    const res = await upload(owner, [
+      { name: 'good.jpg', bytes: good },
+      { name: 'bad.jpg', bytes: Buffer.from('nope') },
+    ]);
     await expectRefused(res, 415, 'unsupported_type', /“bad.jpg”/);
     expect(res.body.error.fields).toEqual({ 'photos[1]': expect.stringMatching(/not a JPEG/) });
   });
@@ -337,16 +400,28 @@ describe('bad input', () => {
     expect(cut.body.error.fields).toEqual({ 'photos[0]': expect.stringMatching(/damaged or cut short/) });
     // Only the last few bytes missing, beside a good photo: the whole request is refused.
     const good = await rawToJpeg(checkerboard(64, 2));
-    const nearly = await upload(owner, [{ name: 'good.jpg', bytes: good }, { name: 'nearly.jpg', bytes: whole.subarray(0, whole.length - 40) }]);
+    const nearly = await upload(owner, [
+      { name: 'good.jpg', bytes: good },
+      { name: 'nearly.jpg', bytes: whole.subarray(0, whole.length - 40) },
+    ]);
     await expectRefused(nearly, 422, 'damaged', /“nearly.jpg”/);
     expect(Object.keys(nearly.body.error.fields)).toEqual(['photos[1]']);
     const png = await rawToPng(photoLike(400, 300));
-    await expectRefused(await upload(owner, [{ name: 'cut.png', bytes: png.subarray(0, Math.floor(png.length * 0.7)) }]), 422, 'damaged', /damaged or cut short/);
+    await expectRefused(
+      await upload(owner, [{ name: 'cut.png', bytes: png.subarray(0, Math.floor(png.length * 0.7)) }]),
+      422,
+      'damaged',
+      /damaged or cut short/,
+    );
   });
 
   it('takes several good photos in one request', async () => {
     const photos = await Promise.all([1, 2, 3].map((n) => rawToJpeg(checkerboard(120 * n, 2))));
-    const res = await upload(owner, photos.map((bytes, i) => ({ name: `sample ${i + 1}.jpg`, bytes })), { category: 'tile' });
+    const res = await upload(
+      owner,
+      photos.map((bytes, i) => ({ name: `sample ${i + 1}.jpg`, bytes })),
+      { category: 'tile' },
+    );
     expect(res.status).toBe(201);
     const done = await Promise.all((res.body.finishes as Finish[]).map((f) => waitUntilProcessed(owner, f.id)));
     expect(done.map((f) => [f.name, f.status, f.category])).toEqual([
@@ -366,12 +441,22 @@ describe('demo finishes', () => {
     await t.db.transaction().execute((trx) => seedDemoFinishes(trx, studioId, dataDirStorage(dataDir)));
     const finishes = (await agent.get('/api/finishes')).body.finishes as Finish[];
     const photos = finishes.filter((f): f is PhotoFinish => f.kind === 'photo');
-    expect(photos.map((f) => [f.category, f.status]).sort()).toEqual([['fabric', 'ready'], ['tile', 'ready'], ['wallpaper', 'ready'], ['wood', 'ready']]);
+    expect(photos.map((f) => [f.category, f.status]).sort()).toEqual([
+      ['fabric', 'ready'],
+      ['tile', 'ready'],
+      ['wallpaper', 'ready'],
+      ['wood', 'ready'],
+    ]);
     for (const f of photos) {
       expect((await fetchFile(agent, f.files.swatchUrl!)).status).toBe(200);
       expect(toSceneFinish(f)).toMatchObject({ kind: 'photo', textureUrl: f.files.textureUrl, repeatWidthMm: f.repeatWidthMm });
     }
-    expect(finishes.filter((f) => f.kind === 'paint').map((f) => f.name).sort()).toEqual(['Deep harbour', 'Morning oat', 'Sage hall']);
+    expect(
+      finishes
+        .filter((f) => f.kind === 'paint')
+        .map((f) => f.name)
+        .sort(),
+    ).toEqual(['Deep harbour', 'Morning oat', 'Sage hall']);
     expect(storedFiles().filter((f) => f.startsWith('uploads/'))).toEqual([]);
   });
 });

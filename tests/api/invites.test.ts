@@ -23,7 +23,8 @@ async function invite(role: 'designer' | 'viewer' = 'designer') {
 
 const accept = (token: string, name = 'Rhea Joiner') =>
   request(t.app).post(`/api/invites/${token}/accept`).send({ name, password: 'correct-horse-battery' });
-const membersWith = (email: string) => t.db.selectFrom('members').select(['id', 'name', 'role']).where('email', '=', email).execute();
+const membersWith = (email: string) =>
+  t.db.selectFrom('members').select(['id', 'name', 'role']).where('email', '=', email).execute();
 
 describe('invitation links', () => {
   it('work once: accepting again is refused and signs nobody in', async () => {
@@ -46,10 +47,19 @@ describe('invitation links', () => {
       const answers = await side.transaction().execute(async (trx) => {
         await trx.selectFrom('invites').select('id').where('email', '=', email).forUpdate().execute();
         const inFlight = Promise.all(['First Hand', 'Second Hand', 'Third Hand'].map((name) => accept(token, name)));
-        await expect.poll(async () => {
-          const r = await sql<{ n: string }>`select count(*) as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'`.execute(side);
-          return Number(r.rows[0].n);
-        }, { timeout: 10_000, interval: 20 }).toBeGreaterThanOrEqual(3);
+        await expect
+          .poll(
+            async () => {
+              const r = await sql<{
+                n: string;
+              }>`select count(*) as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'`.execute(
+                side,
+              );
+              return Number(r.rows[0].n);
+            },
+            { timeout: 10_000, interval: 20 },
+          )
+          .toBeGreaterThanOrEqual(3);
         return { inFlight };
       });
       const statuses = (await answers.inFlight).map((a) => a.status).sort();
@@ -62,7 +72,11 @@ describe('invitation links', () => {
 
   it('expire: an old link is refused, to look at and to accept, and makes no member', async () => {
     const { owner, email, token } = await invite('viewer');
-    await t.db.updateTable('invites').set({ expires_at: new Date(Date.now() - 1000) }).where('email', '=', email).execute();
+    await t.db
+      .updateTable('invites')
+      .set({ expires_at: new Date(Date.now() - 1000) })
+      .where('email', '=', email)
+      .execute();
     const looked = await request(t.app).get(`/api/invites/${token}`);
     expect(looked.status).toBe(410);
     expect(looked.body.error.code).toBe('invite_expired');
@@ -76,7 +90,11 @@ describe('invitation links', () => {
 
   it('expire fourteen days after they are sent', async () => {
     const { email } = await invite();
-    const row = await t.db.selectFrom('invites').select(['created_at', 'expires_at']).where('email', '=', email).executeTakeFirstOrThrow();
+    const row = await t.db
+      .selectFrom('invites')
+      .select(['created_at', 'expires_at'])
+      .where('email', '=', email)
+      .executeTakeFirstOrThrow();
     const days = (row.expires_at.getTime() - row.created_at.getTime()) / 86_400_000;
     expect(days).toBeGreaterThan(13.99);
     expect(days).toBeLessThan(14.01);

@@ -22,7 +22,13 @@ afterAll(() => t.close());
 const choose = (p: PresentedProject, optionId: string) =>
   request(t.app).put(`/api/p/${p.token}/rooms/${p.roomId}/choice`).send({ optionId, comment: 'This one' });
 const choiceCount = async (presentationId: string) =>
-  (await t.db.selectFrom('choices').select((eb) => eb.fn.countAll<string>().as('n')).where('presentation_id', '=', presentationId).executeTakeFirstOrThrow()).n;
+  (
+    await t.db
+      .selectFrom('choices')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .where('presentation_id', '=', presentationId)
+      .executeTakeFirstOrThrow()
+  ).n;
 const today = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(new Date());
 
 /** A presented project with a third option that no presentation shows. */
@@ -41,13 +47,17 @@ describe('rooms and options a presentation shows', () => {
     const room = await designer.delete(`/api/rooms/${p.roomId}`);
     expect(room.status).toBe(409);
     expect(room.body.error).toMatchObject({ code: 'in_presentation' });
-    expect(room.body.error.message).toBe(`This room is shown in the presentation made on ${today} for ida@example.com. Withdraw that presentation first, then delete the room.`);
+    expect(room.body.error.message).toBe(
+      `This room is shown in the presentation made on ${today} for ida@example.com. Withdraw that presentation first, then delete the room.`,
+    );
     expect(room.body.presentationId).toBe(p.presentationId);
 
     // An option shown but not chosen is refused as well.
     const option = await designer.delete(`/api/options/${p.optionIds[0]}`);
     expect(option.status).toBe(409);
-    expect(option.body.error.message).toMatch(/^This option is shown in the presentation made on .* Withdraw that presentation first/);
+    expect(option.body.error.message).toMatch(
+      /^This option is shown in the presentation made on .* Withdraw that presentation first/,
+    );
 
     expect((await designer.get(`/api/rooms/${p.roomId}`)).body.options).toHaveLength(3);
     expect(await choiceCount(p.presentationId)).toBe('1');
@@ -56,7 +66,9 @@ describe('rooms and options a presentation shows', () => {
 
   it('names the newest of several presentations and counts the others', async () => {
     const p = await flat();
-    await designer.post(`/api/projects/${p.projectId}/presentations`).send({ rooms: [{ roomId: p.roomId, optionIds: [p.optionIds[0]] }] });
+    await designer
+      .post(`/api/projects/${p.projectId}/presentations`)
+      .send({ rooms: [{ roomId: p.roomId, optionIds: [p.optionIds[0]] }] });
     const res = await designer.delete(`/api/options/${p.optionIds[0]}`);
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/^This option is shown in the presentation made on [^(]+ \(and 1 more\)\./);
@@ -70,7 +82,12 @@ describe('rooms and options a presentation shows', () => {
     expect((await designer.delete(`/api/options/${p.optionIds[0]}`)).status).toBe(204);
     const chosen = await designer.delete(`/api/options/${p.optionIds[1]}`);
     expect(chosen.status).toBe(409);
-    expect(chosen.body.error).toMatchObject({ code: 'in_presentation', message: expect.stringMatching(/^A client chose this option in the presentation made on .* \(withdrawn\)\. Their choice is kept/) });
+    expect(chosen.body.error).toMatchObject({
+      code: 'in_presentation',
+      message: expect.stringMatching(
+        /^A client chose this option in the presentation made on .* \(withdrawn\)\. Their choice is kept/,
+      ),
+    });
     const room = await designer.delete(`/api/rooms/${p.roomId}`);
     expect(room.status).toBe(409);
     expect(room.body.error.message).toMatch(/^A client chose an option of this room/);
@@ -83,7 +100,10 @@ describe('rooms and options a presentation shows', () => {
   it('the database refuses too: deleting a chosen room or option directly fails and keeps the choice', async () => {
     const p = await flat();
     expect((await choose(p, p.optionIds[0])).status).toBe(200);
-    await expect(t.db.deleteFrom('options').where('id', '=', p.optionIds[0]).execute()).rejects.toMatchObject({ code: '23503', constraint: 'choices_option_fk' });
+    await expect(t.db.deleteFrom('options').where('id', '=', p.optionIds[0]).execute()).rejects.toMatchObject({
+      code: '23503',
+      constraint: 'choices_option_fk',
+    });
     await expect(t.db.deleteFrom('rooms').where('id', '=', p.roomId).execute()).rejects.toMatchObject({ code: '23503' });
     expect(await choiceCount(p.presentationId)).toBe('1');
     // Choices still go with their presentation, and so with the project.
@@ -94,12 +114,27 @@ describe('rooms and options a presentation shows', () => {
 
 describe('deleting a room is one transaction', () => {
   it('a failure after the room is deleted leaves it, its options and the project as they were', async () => {
-    const projectId = (await designer.post('/api/projects').send({ name: 'Half-deleted', newClient: { name: 'Hal' } })).body.project.id as string;
-    const room = (await designer.post(`/api/projects/${projectId}/rooms`).send({ name: 'Box room', shell: { outline: [[0, 0], [2000, 0], [2000, 2000], [0, 2000]] } })).body.room;
+    const projectId = (await designer.post('/api/projects').send({ name: 'Half-deleted', newClient: { name: 'Hal' } })).body
+      .project.id as string;
+    const room = (
+      await designer.post(`/api/projects/${projectId}/rooms`).send({
+        name: 'Box room',
+        shell: {
+          outline: [
+            [0, 0],
+            [2000, 0],
+            [2000, 2000],
+            [0, 2000],
+          ],
+        },
+      })
+    ).body.room;
     // The project's "changed" stamp, written after the room is gone, fails for this project only.
     const fn = sql.id(`fail_touch_${projectId.replaceAll('-', '')}`);
     await sql`create function ${fn}() returns trigger language plpgsql as $$
-      begin if new.id = ${sql.lit(projectId)}::uuid then raise exception 'touch refused for the test'; end if; return new; end $$`.execute(t.db);
+      begin if new.id = ${sql.lit(projectId)}::uuid then raise exception 'touch refused for the test'; end if; return new; end $$`.execute(
+      t.db,
+    );
     await sql`create trigger ${fn} before update on projects for each row execute function ${fn}()`.execute(t.db);
     try {
       const res = await designer.delete(`/api/rooms/${room.id}`);

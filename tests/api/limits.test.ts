@@ -23,10 +23,34 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const RECT = { outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]] };
+const RECT = {
+  outline: [
+    [0, 0],
+    [4200, 0],
+    [4200, 3600],
+    [0, 3600],
+  ],
+};
 const example = JSON.parse(readFileSync(resolve(import.meta.dirname, '../../assets/plans/living-room.json'), 'utf8'));
-const piece = (extra: Record<string, unknown> = {}) => ({ id: 'sofa', name: 'Sofa', x: 2100, y: 1800, width: 2000, depth: 900, height: 850, status: 'new', ...extra });
-const square = (sideMm: number, at = 0) => ({ outline: [[at, at], [at + sideMm, at], [at + sideMm, at + sideMm], [at, at + sideMm]] });
+const piece = (extra: Record<string, unknown> = {}) => ({
+  id: 'sofa',
+  name: 'Sofa',
+  x: 2100,
+  y: 1800,
+  width: 2000,
+  depth: 900,
+  height: 850,
+  status: 'new',
+  ...extra,
+});
+const square = (sideMm: number, at = 0) => ({
+  outline: [
+    [at, at],
+    [at + sideMm, at],
+    [at + sideMm, at + sideMm],
+    [at, at + sideMm],
+  ],
+});
 
 async function newProject(agent: Agent = owner): Promise<string> {
   return (await agent.post('/api/projects').send({ name: 'Limits project', newClient: { name: 'A client' } })).body.project.id;
@@ -48,7 +72,10 @@ const rawJson = (req: request.Test, text: string) => req.set('Content-Type', 'ap
 describe('corners, openings and pieces are capped by the schema', () => {
   it('refuses a 4,000-corner outline at once, naming the field, and keeps nothing', async () => {
     const projectId = await newProject();
-    const outline = Array.from({ length: 4000 }, (_, i) => [Math.round(5000 * Math.cos((2 * Math.PI * i) / 4000)), Math.round(5000 * Math.sin((2 * Math.PI * i) / 4000))]);
+    const outline = Array.from({ length: 4000 }, (_, i) => [
+      Math.round(5000 * Math.cos((2 * Math.PI * i) / 4000)),
+      Math.round(5000 * Math.sin((2 * Math.PI * i) / 4000)),
+    ]);
     const res = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Drum', shell: { outline } });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['shell.outline']).toBe('has more than 200 corners (a room has at most 200)');
@@ -57,7 +84,9 @@ describe('corners, openings and pieces are capped by the schema', () => {
 
   it('takes 200 corners, refuses 201, on create, save and import alike', async () => {
     const projectId = await newProject();
-    const created = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Comb', shell: { outline: combOutline(200) } });
+    const created = await owner
+      .post(`/api/projects/${projectId}/rooms`)
+      .send({ name: 'Comb', shell: { outline: combOutline(200) } });
     expect(created.status).toBe(201);
     const tooMany = { outline: [...combOutline(200), [-100, -500]] };
     const create = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Comb', shell: tooMany });
@@ -66,9 +95,13 @@ describe('corners, openings and pieces are capped by the schema', () => {
     const save = await owner.put(`/api/rooms/${created.body.room.id}`).send({ version: 1, shell: tooMany });
     expect(save.status).toBe(400);
     expect(save.body.error.fields['shell.outline']).toMatch(/at most 200/);
-    const imported = await owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, room: { ...example.room, outline: tooMany.outline, openings: [] } });
+    const imported = await owner
+      .post(`/api/projects/${projectId}/rooms/import`)
+      .send({ ...example, room: { ...example.room, outline: tooMany.outline, openings: [] } });
     expect(imported.status).toBe(400);
-    expect(imported.body.error.message).toBe('This plan file cannot be read: room.outline: has more than 200 corners (a room has at most 200)');
+    expect(imported.body.error.message).toBe(
+      'This plan file cannot be read: room.outline: has more than 200 corners (a room has at most 200)',
+    );
     expect(await roomCount(projectId)).toBe(1);
   });
 
@@ -82,10 +115,31 @@ describe('corners, openings and pieces are capped by the schema', () => {
   it('refuses 61 openings and 401 pieces', async () => {
     const projectId = await newProject();
     // 61 windows of 100 mm on the 25.2 m top wall of a 25.2 × 3.6 m room.
-    const long = { outline: [[0, 0], [25_200, 0], [25_200, 3600], [0, 3600]] };
-    const windows = (count: number) => Array.from({ length: count }, (_, i) => ({ id: `w${i}`, type: 'window', wall: 0, offset: 100 + i * 400, width: 100, height: 1000, sill: 900 }));
-    expect((await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Gallery', shell: { ...long, openings: windows(60) } })).status).toBe(201);
-    const over = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Gallery', shell: { ...long, openings: windows(61) } });
+    const long = {
+      outline: [
+        [0, 0],
+        [25_200, 0],
+        [25_200, 3600],
+        [0, 3600],
+      ],
+    };
+    const windows = (count: number) =>
+      Array.from({ length: count }, (_, i) => ({
+        id: `w${i}`,
+        type: 'window',
+        wall: 0,
+        offset: 100 + i * 400,
+        width: 100,
+        height: 1000,
+        sill: 900,
+      }));
+    expect(
+      (await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Gallery', shell: { ...long, openings: windows(60) } }))
+        .status,
+    ).toBe(201);
+    const over = await owner
+      .post(`/api/projects/${projectId}/rooms`)
+      .send({ name: 'Gallery', shell: { ...long, openings: windows(61) } });
     expect(over.status).toBe(400);
     expect(over.body.error.fields['shell.openings']).toBe('has more than 60 openings (a room has at most 60)');
 
@@ -95,7 +149,9 @@ describe('corners, openings and pieces are capped by the schema', () => {
     expect(many.status).toBe(400);
     expect(many.body.error.fields['doc.pieces']).toBe('has more than 400 pieces (an option has at most 400)');
     expect((await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: pieces(400) } })).status).toBe(200);
-    const file = await owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, option: { name: 'Full', pieces: pieces(401) } });
+    const file = await owner
+      .post(`/api/projects/${projectId}/rooms/import`)
+      .send({ ...example, option: { name: 'Full', pieces: pieces(401) } });
     expect(file.status).toBe(400);
     expect(file.body.error.fields['option.pieces']).toMatch(/at most 400/);
   });
@@ -104,7 +160,17 @@ describe('corners, openings and pieces are capped by the schema', () => {
 describe('the outline and every number are bounded', () => {
   it('refuses an outline wider than 50 m, a floor over 1,000 m² and corners beyond ±100 m', async () => {
     const projectId = await newProject();
-    const wide = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Hall', shell: { outline: [[0, 0], [60_000, 0], [60_000, 10_000], [0, 10_000]] } });
+    const wide = await owner.post(`/api/projects/${projectId}/rooms`).send({
+      name: 'Hall',
+      shell: {
+        outline: [
+          [0, 0],
+          [60_000, 0],
+          [60_000, 10_000],
+          [0, 10_000],
+        ],
+      },
+    });
     expect(wide.status).toBe(400);
     expect(wide.body.error.fields['shell.outline']).toBe('is 60,000 mm × 10,000 mm, more than 50 m × 50 m');
     const big = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Hall', shell: square(40_000) });
@@ -121,10 +187,23 @@ describe('the outline and every number are bounded', () => {
   it('refuses 1e300 and numbers JSON reads as Infinity, so compare keeps working for the project', async () => {
     const projectId = await newProject();
     const { roomId, optionId } = await newRoom(projectId);
-    const huge = await owner.put(`/api/rooms/${roomId}`).send({ version: 1, shell: { outline: [[0, 0], [1e300, 0], [1e300, 1e300], [0, 1e300]] } });
+    const huge = await owner.put(`/api/rooms/${roomId}`).send({
+      version: 1,
+      shell: {
+        outline: [
+          [0, 0],
+          [1e300, 0],
+          [1e300, 1e300],
+          [0, 1e300],
+        ],
+      },
+    });
     expect(huge.status).toBe(400);
     expect(huge.body.error.fields['shell.outline[1][0]']).toBe('must be at most 100,000 mm');
-    const infinite = await rawJson(owner.put(`/api/rooms/${roomId}`), `{"version":1,"shell":{"wallHeight":1e400,"outline":[[0,0],[4200,0],[4200,3600],[0,3600]]}}`);
+    const infinite = await rawJson(
+      owner.put(`/api/rooms/${roomId}`),
+      `{"version":1,"shell":{"wallHeight":1e400,"outline":[[0,0],[4200,0],[4200,3600],[0,3600]]}}`,
+    );
     expect(infinite.status).toBe(400);
     expect(Object.keys(infinite.body.error.fields)).toEqual(['shell.wallHeight']);
     const far = await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: [piece({ x: 1e300 })] } });
@@ -146,7 +225,10 @@ describe('the outline and every number are bounded', () => {
       [{ ...RECT, openings: [{ ...door, wall: 4_000_000_000 }] }, 'shell.openings[0].wall'],
       [{ ...RECT, openings: [{ ...door, offset: 1e300 }] }, 'shell.openings[0].offset'],
       [{ ...RECT, openings: [{ ...door, height: 1e300 }] }, 'shell.openings[0].height'],
-      [{ ...RECT, openings: [{ id: 'w', type: 'window', wall: 1, offset: 300, width: 900, height: 900, sill: 1e300 }] }, 'shell.openings[0].sill'],
+      [
+        { ...RECT, openings: [{ id: 'w', type: 'window', wall: 1, offset: 300, width: 900, height: 900, sill: 1e300 }] },
+        'shell.openings[0].sill',
+      ],
     ];
     for (const [shell, field] of shells) {
       const res = await owner.put(`/api/rooms/${roomId}`).send({ version: 1, shell });
@@ -154,8 +236,13 @@ describe('the outline and every number are bounded', () => {
       expect(Object.keys(res.body.error.fields), field).toEqual([field]);
     }
     const pieces: [Record<string, unknown>, string][] = [
-      [{ width: 1e300 }, 'width'], [{ depth: 90_000 }, 'depth'], [{ height: 1e9 }, 'height'], [{ y: -1e300 }, 'y'],
-      [{ rotation: 1e300 }, 'rotation'], [{ elevation: 1e300 }, 'elevation'], [{ price: 1e300 }, 'price'],
+      [{ width: 1e300 }, 'width'],
+      [{ depth: 90_000 }, 'depth'],
+      [{ height: 1e9 }, 'height'],
+      [{ y: -1e300 }, 'y'],
+      [{ rotation: 1e300 }, 'rotation'],
+      [{ elevation: 1e300 }, 'elevation'],
+      [{ price: 1e300 }, 'price'],
     ];
     for (const [extra, field] of pieces) {
       const res = await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: [piece(extra)] } });
@@ -170,12 +257,26 @@ describe('rooms per project and options per room', () => {
   it('refuses a 61st room on create and import, even when created in parallel', async () => {
     const projectId = await newProject();
     // 58 rooms written straight to the table, as the API would, to keep the test short.
-    await t.db.insertInto('rooms').values(Array.from({ length: 58 }, (_, i) => ({
-      studio_id: studioId, project_id: projectId, name: `Room ${i}`, shell: sql`${JSON.stringify({ ...RECT, wallHeight: 2600, wallThickness: 100, openings: [] })}::jsonb`, position: i,
-    }))).execute();
-    const racing = await Promise.all(Array.from({ length: 5 }, () => owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Spare', shell: RECT })));
+    await t.db
+      .insertInto('rooms')
+      .values(
+        Array.from({ length: 58 }, (_, i) => ({
+          studio_id: studioId,
+          project_id: projectId,
+          name: `Room ${i}`,
+          shell: sql`${JSON.stringify({ ...RECT, wallHeight: 2600, wallThickness: 100, openings: [] })}::jsonb`,
+          position: i,
+        })),
+      )
+      .execute();
+    const racing = await Promise.all(
+      Array.from({ length: 5 }, () => owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Spare', shell: RECT })),
+    );
     expect(racing.map((r) => r.status).sort()).toEqual([201, 201, 409, 409, 409]);
-    expect(racing.find((r) => r.status === 409)!.body.error).toMatchObject({ code: 'too_many_rooms', message: 'A project holds at most 60 rooms. Delete one before adding another.' });
+    expect(racing.find((r) => r.status === 409)!.body.error).toMatchObject({
+      code: 'too_many_rooms',
+      message: 'A project holds at most 60 rooms. Delete one before adding another.',
+    });
     const imported = await owner.post(`/api/projects/${projectId}/rooms/import`).send(example);
     expect(imported.status).toBe(409);
     expect(await roomCount(projectId)).toBe(60);
@@ -184,10 +285,14 @@ describe('rooms per project and options per room', () => {
   it('refuses a 13th option on add and on duplicate', async () => {
     const projectId = await newProject();
     const { roomId, optionId } = await newRoom(projectId);
-    for (let i = 1; i < 12; i++) expect((await owner.post(`/api/rooms/${roomId}/options`).send({ name: `O${i}` })).status).toBe(201);
+    for (let i = 1; i < 12; i++)
+      expect((await owner.post(`/api/rooms/${roomId}/options`).send({ name: `O${i}` })).status).toBe(201);
     const add = await owner.post(`/api/rooms/${roomId}/options`).send({ name: 'One more' });
     expect(add.status).toBe(409);
-    expect(add.body.error).toMatchObject({ code: 'too_many_options', message: 'A room holds at most 12 options. Delete one before adding another.' });
+    expect(add.body.error).toMatchObject({
+      code: 'too_many_options',
+      message: 'A room holds at most 12 options. Delete one before adding another.',
+    });
     expect((await owner.post(`/api/rooms/${roomId}/options`).send({ fromOptionId: optionId })).status).toBe(409);
     expect((await owner.get(`/api/rooms/${roomId}`)).body.options).toHaveLength(12);
   });
@@ -197,7 +302,11 @@ describe('compare yields to other requests between options', () => {
   it('gives the event loop a turn before each option’s fit check', async () => {
     const projectId = await newProject();
     const { roomId } = await newRoom(projectId);
-    for (let i = 0; i < 3; i++) await owner.post(`/api/rooms/${roomId}/options`).send({ name: `O${i}` }).expect(201);
+    for (let i = 0; i < 3; i++)
+      await owner
+        .post(`/api/rooms/${roomId}/options`)
+        .send({ name: `O${i}` })
+        .expect(201);
     await newRoom(projectId);
     const turns = vi.spyOn(globalThis, 'setImmediate');
     try {
@@ -232,8 +341,14 @@ describe('names and versions (control characters, text-direction marks, 32-bit v
         [owner.post('/api/clients').send({ name }), 'name'],
         [owner.patch(`/api/clients/${clientId}`).send({ name }), 'name'],
         [owner.post('/api/finishes/paints').send({ name, colourHex: '#aabbcc' }), 'name'],
-        [owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, room: { ...example.room, name } }), 'room.name'],
-        [owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, option: { ...example.option, name } }), 'option.name'],
+        [
+          owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, room: { ...example.room, name } }),
+          'room.name',
+        ],
+        [
+          owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, option: { ...example.option, name } }),
+          'option.name',
+        ],
       ];
       for (const [req, field] of checks) {
         const res = await req;
@@ -246,8 +361,13 @@ describe('names and versions (control characters, text-direction marks, 32-bit v
   });
 
   it('refuses the same in the studio’s and the owner’s name at sign-up', async () => {
-    for (const [body, field] of [[{ studioName: `Wren${NUL}`, name: 'Ana' }, 'studioName'], [{ studioName: 'Wren', name: `Ana${RLO}` }, 'name']] as const) {
-      const res = await request(t.app).post('/api/auth/sign-up').send({ ...body, email: uniqueEmail('names'), password: 'correct-horse-battery' });
+    for (const [body, field] of [
+      [{ studioName: `Wren${NUL}`, name: 'Ana' }, 'studioName'],
+      [{ studioName: 'Wren', name: `Ana${RLO}` }, 'name'],
+    ] as const) {
+      const res = await request(t.app)
+        .post('/api/auth/sign-up')
+        .send({ ...body, email: uniqueEmail('names'), password: 'correct-horse-battery' });
       expect(res.status).toBe(400);
       expect(res.body.error.fields[field]).toBe('Remove control characters and text-direction marks.');
     }
@@ -258,11 +378,16 @@ describe('names and versions (control characters, text-direction marks, 32-bit v
     const email = uniqueEmail('invitee');
     await studio.agent.post('/api/studio/invites').send({ email, role: 'designer' }).expect(201);
     const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
-    const res = await request(t.app).post(`/api/invites/${token}/accept`).send({ name: `Theo${RLO}`, password: 'correct-horse-battery' });
+    const res = await request(t.app)
+      .post(`/api/invites/${token}/accept`)
+      .send({ name: `Theo${RLO}`, password: 'correct-horse-battery' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.name).toBe('Remove control characters and text-direction marks.');
     // The invitation is still open.
-    expect((await request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'Theo', password: 'correct-horse-battery' })).status).toBe(201);
+    expect(
+      (await request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'Theo', password: 'correct-horse-battery' }))
+        .status,
+    ).toBe(201);
   });
 
   it('takes tabs and line breaks in notes and messages, but not NUL or text-direction marks', async () => {
@@ -276,7 +401,9 @@ describe('names and versions (control characters, text-direction marks, 32-bit v
       expect(res.status).toBe(400);
       expect(Object.keys(res.body.error.fields)).toEqual(['note']);
     }
-    const message = await owner.post(`/api/projects/${projectId}/presentations`).send({ rooms: [{ roomId, optionIds: [optionId] }], message: `Hello${NUL}` });
+    const message = await owner
+      .post(`/api/projects/${projectId}/presentations`)
+      .send({ rooms: [{ roomId, optionIds: [optionId] }], message: `Hello${NUL}` });
     expect(message.status).toBe(400);
     expect(Object.keys(message.body.error.fields)).toEqual(['message']);
   });
@@ -297,15 +424,21 @@ describe('names and versions (control characters, text-direction marks, 32-bit v
 describe('the same length limits in the API and in plan files', () => {
   it('refuses a 10,000-character room name and a 100,000-character note in a plan file, as the API does', async () => {
     const projectId = await newProject();
-    const longName = await owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, room: { ...example.room, name: 'R'.repeat(10_000) } });
+    const longName = await owner
+      .post(`/api/projects/${projectId}/rooms/import`)
+      .send({ ...example, room: { ...example.room, name: 'R'.repeat(10_000) } });
     expect(longName.status).toBe(400);
     expect(longName.body.error.fields['room.name']).toBe('Keep the name under 80 characters.');
     const api = await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'R'.repeat(81), shell: RECT });
     expect(api.body.error.fields.name).toBe('Keep the name under 80 characters.');
-    const longNote = await owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, option: { ...example.option, note: 'n'.repeat(100_000) } });
+    const longNote = await owner
+      .post(`/api/projects/${projectId}/rooms/import`)
+      .send({ ...example, option: { ...example.option, note: 'n'.repeat(100_000) } });
     expect(longNote.status).toBe(400);
     expect(longNote.body.error.fields['option.note']).toBe('Keep the note under 2,000 characters.');
-    const longPiece = await owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, option: { name: 'A', pieces: [piece({ name: 'p'.repeat(121) })] } });
+    const longPiece = await owner
+      .post(`/api/projects/${projectId}/rooms/import`)
+      .send({ ...example, option: { name: 'A', pieces: [piece({ name: 'p'.repeat(121) })] } });
     expect(longPiece.body.error.fields['option.pieces[0].name']).toBe('Keep the name under 120 characters.');
     expect(await roomCount(projectId)).toBe(0);
   });
@@ -313,11 +446,19 @@ describe('the same length limits in the API and in plan files', () => {
   it('refuses a 1.5 M-character piece name on PUT /api/options/:id', async () => {
     const projectId = await newProject();
     const { optionId } = await newRoom(projectId);
-    const res = await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: [piece({ name: 'p'.repeat(1_500_000) })] } });
+    const res = await owner
+      .put(`/api/options/${optionId}`)
+      .send({ version: 1, doc: { pieces: [piece({ name: 'p'.repeat(1_500_000) })] } });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['doc.pieces[0].name']).toBe('Keep the name under 120 characters.');
-    const long = await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: [piece({ id: 'i'.repeat(101), kind: 'k'.repeat(61), finishId: 'f'.repeat(101) })] } });
-    expect(Object.keys(long.body.error.fields).sort()).toEqual(['doc.pieces[0].finishId', 'doc.pieces[0].id', 'doc.pieces[0].kind']);
+    const long = await owner
+      .put(`/api/options/${optionId}`)
+      .send({ version: 1, doc: { pieces: [piece({ id: 'i'.repeat(101), kind: 'k'.repeat(61), finishId: 'f'.repeat(101) })] } });
+    expect(Object.keys(long.body.error.fields).sort()).toEqual([
+      'doc.pieces[0].finishId',
+      'doc.pieces[0].id',
+      'doc.pieces[0].kind',
+    ]);
   });
 });
 
@@ -325,32 +466,59 @@ describe('supplier links', () => {
   it('takes http(s) links only', async () => {
     const projectId = await newProject();
     const { optionId } = await newRoom(projectId);
-    for (const link of ['javascript:alert(document.cookie)', 'data:text/html,<script>alert(1)</script>', 'JavaScript:alert(1)', 'ftp://files.example/x', 'vbscript:msgbox']) {
-      const res = await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: [piece({ supplierUrl: link })] } });
+    for (const link of [
+      'javascript:alert(document.cookie)',
+      'data:text/html,<script>alert(1)</script>',
+      'JavaScript:alert(1)',
+      'ftp://files.example/x',
+      'vbscript:msgbox',
+    ]) {
+      const res = await owner
+        .put(`/api/options/${optionId}`)
+        .send({ version: 1, doc: { pieces: [piece({ supplierUrl: link })] } });
       expect(res.status, link).toBe(400);
-      expect(res.body.error.fields['doc.pieces[0].supplierUrl'], link).toBe('must be a web link starting with http:// or https://');
+      expect(res.body.error.fields['doc.pieces[0].supplierUrl'], link).toBe(
+        'must be a web link starting with http:// or https://',
+      );
     }
-    const ok = await owner.put(`/api/options/${optionId}`).send({ version: 1, doc: { pieces: [piece({ supplierUrl: 'https://supplier.example/sofa?c=oat' })] } });
+    const ok = await owner
+      .put(`/api/options/${optionId}`)
+      .send({ version: 1, doc: { pieces: [piece({ supplierUrl: 'https://supplier.example/sofa?c=oat' })] } });
     expect(ok.status).toBe(200);
-    const file = await owner.post(`/api/projects/${projectId}/rooms/import`).send({ ...example, option: { name: 'A', pieces: [piece({ supplierUrl: 'javascript:alert(1)' })] } });
+    const file = await owner
+      .post(`/api/projects/${projectId}/rooms/import`)
+      .send({ ...example, option: { name: 'A', pieces: [piece({ supplierUrl: 'javascript:alert(1)' })] } });
     expect(file.body.error.fields['option.pieces[0].supplierUrl']).toBe('must be a web link starting with http:// or https://');
   });
 
   it('never writes another kind of link to the schedule or its CSV, even one an older row holds', async () => {
     const projectId = await newProject();
     const { optionId } = await newRoom(projectId);
-    const pieces = [piece({ id: 'a', supplierUrl: 'javascript:alert(1)', price: 10 }), piece({ id: 'b', name: 'Chair', supplierUrl: 'https://supplier.example/chair', price: 20 })];
+    const pieces = [
+      piece({ id: 'a', supplierUrl: 'javascript:alert(1)', price: 10 }),
+      piece({ id: 'b', name: 'Chair', supplierUrl: 'https://supplier.example/chair', price: 20 }),
+    ];
     // An option saved before links were limited: written straight to the table.
-    await t.db.updateTable('options').set({ doc: sql`${JSON.stringify({ pieces, finishes: {} })}::jsonb` }).where('id', '=', optionId).execute();
+    await t.db
+      .updateTable('options')
+      .set({ doc: sql`${JSON.stringify({ pieces, finishes: {} })}::jsonb` })
+      .where('id', '=', optionId)
+      .execute();
     const viewer = (await addMember(t, owner, 'viewer')).agent;
     const schedule = await viewer.get(`/api/options/${optionId}/schedule`);
     expect(schedule.status).toBe(200);
-    expect(schedule.body.schedule.lines.map((l: { supplierUrl: string | null }) => l.supplierUrl).sort()).toEqual(['https://supplier.example/chair', null]);
-    const csv = await viewer.get(`/api/options/${optionId}/schedule.csv`).buffer(true).parse((r, done) => {
-      let text = '';
-      r.on('data', (c: Buffer) => (text += c.toString('utf8')));
-      r.on('end', () => done(null, text));
-    });
+    expect(schedule.body.schedule.lines.map((l: { supplierUrl: string | null }) => l.supplierUrl).sort()).toEqual([
+      'https://supplier.example/chair',
+      null,
+    ]);
+    const csv = await viewer
+      .get(`/api/options/${optionId}/schedule.csv`)
+      .buffer(true)
+      .parse((r, done) => {
+        let text = '';
+        r.on('data', (c: Buffer) => (text += c.toString('utf8')));
+        r.on('end', () => done(null, text));
+      });
     expect(csv.status).toBe(200);
     expect(csv.body).toContain('https://supplier.example/chair');
     expect(csv.body).not.toMatch(/javascript/i);

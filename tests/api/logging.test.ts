@@ -26,8 +26,20 @@ let db: Db;
 let app: Express;
 beforeAll(() => {
   db = createDb(inject('databaseUrl'), 4);
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT });
-  app = createApp({ db, config, mailer: { send: async () => undefined }, logger: createLogger({ level: 'info', destination: capture }) });
+  const config = loadConfig({
+    DATABASE_URL: inject('databaseUrl'),
+    NODE_ENV: 'test',
+    PUBLIC_URL: 'http://parlour.test',
+    CLIENT_DIST: '/nonexistent',
+    PRESENTATION_KEY: TEST_PRESENTATION_KEY,
+    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
+  });
+  app = createApp({
+    db,
+    config,
+    mailer: { send: async () => undefined },
+    logger: createLogger({ level: 'info', destination: capture }),
+  });
 });
 afterAll(() => db.destroy());
 
@@ -44,11 +56,15 @@ describe('request logs', () => {
   it('logs sign-up, sign-in, a presentation open and a choice without a secret in any line', async () => {
     const email = uniqueEmail('logged');
     const agent = request.agent(app);
-    const signUp = await agent.post('/api/auth/sign-up').send({ studioName: 'Ledger Studio', name: 'Lou Ledger', email, password: PASSWORD });
+    const signUp = await agent
+      .post('/api/auth/sign-up')
+      .send({ studioName: 'Ledger Studio', name: 'Lou Ledger', email, password: PASSWORD });
     expect(signUp.status).toBe(201);
     secrets.push(sessionToken(signUp.headers['set-cookie'])!);
 
-    const wrong = await request(app).post('/api/auth/sign-in').send({ email, password: `${PASSWORD}-typo` });
+    const wrong = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email, password: `${PASSWORD}-typo` });
     expect(wrong.status).toBe(401);
     secrets.push(`${PASSWORD}-typo`);
     const signIn = await agent.post('/api/auth/sign-in').send({ email, password: PASSWORD });
@@ -61,7 +77,13 @@ describe('request logs', () => {
     const client = request(app);
     expect((await client.get(`/api/p/${token}`)).status).toBe(200);
     expect((await client.get(`/p/${token}`)).status).toBe(404); // no client build here; the path is still logged
-    expect((await client.put(`/api/p/${token}/rooms/${p.roomId}/choice`).send({ optionId: p.optionIds[1], comment: 'The walnut, please' })).status).toBe(200);
+    expect(
+      (
+        await client
+          .put(`/api/p/${token}/rooms/${p.roomId}/choice`)
+          .send({ optionId: p.optionIds[1], comment: 'The walnut, please' })
+      ).status,
+    ).toBe(200);
     expect((await client.get(`/api/p/${token}x`)).status).toBe(404);
 
     const text = lines.join('\n');
@@ -80,7 +102,9 @@ describe('request logs', () => {
     const forged = await request(app).get('/api/auth/me').set('x-request-id', 'bad id {"level":60}');
     expect(forged.headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
 
-    const requestLines = lines.map((l) => JSON.parse(l) as { reqId?: string; req?: { id?: string; url?: string }; res?: { statusCode: number } }).filter((l) => l.req);
+    const requestLines = lines
+      .map((l) => JSON.parse(l) as { reqId?: string; req?: { id?: string; url?: string }; res?: { statusCode: number } })
+      .filter((l) => l.req);
     expect(requestLines.length).toBeGreaterThanOrEqual(10);
     for (const l of requestLines) {
       expect(typeof l.reqId).toBe('string');

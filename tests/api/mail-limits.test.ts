@@ -4,7 +4,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type request from 'supertest';
 import {
-  NEW_STUDIO_PRESENTATION_MAIL_LIMIT, PRESENTATION_MAIL_RATE, RECIPIENT_MAIL_RATE, recipientKey,
+  NEW_STUDIO_PRESENTATION_MAIL_LIMIT,
+  PRESENTATION_MAIL_RATE,
+  RECIPIENT_MAIL_RATE,
+  recipientKey,
 } from '../../server/services/rate-limit/mail-limits';
 import { createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 import { presentedProject } from '../ops/lib/fixtures';
@@ -19,12 +22,18 @@ afterAll(() => t.close());
 async function studio(name: string, ageDays = 0) {
   const { agent } = await signUpStudio(t.app, name);
   const studioId = (await agent.get('/api/auth/me')).body.studio.id as string;
-  if (ageDays) await t.db.updateTable('studios').set({ created_at: new Date(Date.now() - ageDays * 86_400_000) }).where('id', '=', studioId).execute();
+  if (ageDays)
+    await t.db
+      .updateTable('studios')
+      .set({ created_at: new Date(Date.now() - ageDays * 86_400_000) })
+      .where('id', '=', studioId)
+      .execute();
   const { presentationId } = await presentedProject(agent);
   return { agent, studioId, presentationId };
 }
 
-const send = (s: { agent: Agent; presentationId: string }, to: string) => s.agent.post(`/api/presentations/${s.presentationId}/send`).send({ to });
+const send = (s: { agent: Agent; presentationId: string }, to: string) =>
+  s.agent.post(`/api/presentations/${s.presentationId}/send`).send({ to });
 const invite = (agent: Agent, email: string) => agent.post('/api/studio/invites').send({ email, role: 'designer' });
 
 function expectTooMany(res: request.Response, message: RegExp) {
@@ -37,7 +46,12 @@ function expectTooMany(res: request.Response, message: RegExp) {
 }
 
 async function counted(bucket: string, key: string): Promise<number> {
-  const rows = await t.db.selectFrom('rate_limit_counts').select('count').where('bucket', '=', bucket).where('key', '=', key).execute();
+  const rows = await t.db
+    .selectFrom('rate_limit_counts')
+    .select('count')
+    .where('bucket', '=', bucket)
+    .where('key', '=', key)
+    .execute();
   return rows.reduce((n, r) => n + r.count, 0);
 }
 
@@ -47,10 +61,17 @@ describe('presentation mails per studio', () => {
     const s = await studio('Fresh Studio');
     for (let i = 0; i < 10; i += 1) expect((await send(s, uniqueEmail('stranger'))).status).toBe(200);
     const to = uniqueEmail('stranger');
-    expectTooMany(await send(s, to), /Your studio has sent 10 presentation e-mails today, the limit for its first day\. Try again in .+, or copy the link/);
+    expectTooMany(
+      await send(s, to),
+      /Your studio has sent 10 presentation e-mails today, the limit for its first day\. Try again in .+, or copy the link/,
+    );
     expect(t.mail.some((m) => m.to === to)).toBe(false);
     // The presentation keeps its last real send.
-    const row = await t.db.selectFrom('presentations').select('sent_to').where('id', '=', s.presentationId).executeTakeFirstOrThrow();
+    const row = await t.db
+      .selectFrom('presentations')
+      .select('sent_to')
+      .where('id', '=', s.presentationId)
+      .executeTakeFirstOrThrow();
     expect(row.sent_to).not.toBe(to);
   });
 
@@ -78,7 +99,12 @@ describe('mails to one address from every studio together', () => {
     expect(t.mail.filter((m) => recipientKey(m.to) === address)).toHaveLength(3);
 
     const before = await counted(PRESENTATION_MAIL_RATE.bucket, a.studioId);
-    expectTooMany(await send(a, address), new RegExp(`${address.replace(/[.+]/g, '\\$&')} has already been sent 3 e-mails from Parlour today\\. Try again in .+, or copy the link`));
+    expectTooMany(
+      await send(a, address),
+      new RegExp(
+        `${address.replace(/[.+]/g, '\\$&')} has already been sent 3 e-mails from Parlour today\\. Try again in .+, or copy the link`,
+      ),
+    );
     // Refused for its recipient, so the studio's own allowance is untouched.
     expect(await counted(PRESENTATION_MAIL_RATE.bucket, a.studioId)).toBe(before);
     const invited = await invite(c.agent, address);

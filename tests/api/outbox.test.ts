@@ -7,7 +7,14 @@ import type { OutboxPage, OutboxSummary } from '../../shared/schemas/outbox';
 import { addMember, createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
-const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
+const SQUARE = {
+  outline: [
+    [0, 0],
+    [3000, 0],
+    [3000, 3000],
+    [0, 3000],
+  ],
+};
 // The Outbox is on when the stand-in's folder is configured; the app never reads that folder.
 const LOCAL = { OUTBOX_DIR: '/nonexistent/outbox' };
 
@@ -25,7 +32,9 @@ async function presentAndChoose(agent: Agent, to: string) {
   const project = await agent.post('/api/projects').send({ name: 'Sorrel house', newClient: { name: 'Ines Marr', email: to } });
   const room = await agent.post(`/api/projects/${project.body.project.id}/rooms`).send({ name: 'Hall', shell: SQUARE });
   const optionId = room.body.options[0].id as string;
-  const made = await agent.post(`/api/projects/${project.body.project.id}/presentations`).send({ rooms: [{ roomId: room.body.room.id, optionIds: [optionId] }] });
+  const made = await agent
+    .post(`/api/projects/${project.body.project.id}/presentations`)
+    .send({ rooms: [{ roomId: room.body.room.id, optionIds: [optionId] }] });
   expect((await agent.post(`/api/presentations/${made.body.presentation.id}/send`).send({})).status).toBe(200);
   const token = new URL(made.body.presentation.link as string).pathname.split('/').pop()!;
   expect((await request(t.app).put(`/api/p/${token}/rooms/${room.body.room.id}/choice`).send({ optionId })).status).toBe(200);
@@ -45,7 +54,11 @@ beforeAll(async () => {
   owner = a.agent;
   designer = (await addMember(t, owner, 'designer')).agent;
   viewer = (await addMember(t, owner, 'viewer')).agent;
-  ({ studio_id: studioId } = await t.db.selectFrom('members').select('studio_id').where('email', '=', a.email).executeTakeFirstOrThrow());
+  ({ studio_id: studioId } = await t.db
+    .selectFrom('members')
+    .select('studio_id')
+    .where('email', '=', a.email)
+    .executeTakeFirstOrThrow());
   inviteeEmail = uniqueEmail('invitee');
   expect((await owner.post('/api/studio/invites').send({ email: inviteeEmail, role: 'designer' })).status).toBe(201);
   clientEmail = uniqueEmail('client');
@@ -79,7 +92,11 @@ describe('the Outbox', () => {
     expect(byKind('choice')).toHaveLength(1);
     // The record holds what was sent, word for word.
     const sent = t.mail.find((m) => m.to === inviteeEmail)!;
-    expect(byKind('invitation').find((r) => r.recipient === inviteeEmail)).toMatchObject({ subject: sent.subject, text_body: sent.text, html_body: sent.html });
+    expect(byKind('invitation').find((r) => r.recipient === inviteeEmail)).toMatchObject({
+      subject: sent.subject,
+      text_body: sent.text,
+      html_body: sent.html,
+    });
   });
 
   it('shows an owner every kind of their studio’s mail, and nothing of another studio’s', async () => {
@@ -113,12 +130,22 @@ describe('the Outbox', () => {
 
   it('pages through many messages newest first, none twice or left out, ties broken by id', async () => {
     const paged = await signUpStudio(t.app, 'Paged');
-    const { studio_id: pagedId } = await t.db.selectFrom('members').select('studio_id').where('email', '=', paged.email).executeTakeFirstOrThrow();
+    const { studio_id: pagedId } = await t.db
+      .selectFrom('members')
+      .select('studio_id')
+      .where('email', '=', paged.email)
+      .executeTakeFirstOrThrow();
     // 45 messages, five at each of nine instants: pages must not split ties wrongly.
     const base = Date.now() - 3_600_000;
     const rows = Array.from({ length: 45 }, (_, i) => ({
-      studio_id: pagedId, kind: 'choice' as const, sender: 'Parlour <no-reply@parlour.local>', recipient: `n${i}@example.com`,
-      subject: `Message ${i}`, text_body: `Body ${i}`, html_body: null, created_at: new Date(base + Math.floor(i / 5) * 1000),
+      studio_id: pagedId,
+      kind: 'choice' as const,
+      sender: 'Parlour <no-reply@parlour.local>',
+      recipient: `n${i}@example.com`,
+      subject: `Message ${i}`,
+      text_body: `Body ${i}`,
+      html_body: null,
+      created_at: new Date(base + Math.floor(i / 5) * 1000),
     }));
     await t.db.insertInto('sent_mail').values(rows).execute();
     const seen: OutboxSummary[] = [];

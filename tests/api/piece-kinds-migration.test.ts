@@ -14,8 +14,19 @@ const ROLLBACK = new Error('rollback');
 describe('migration 0010: piece kinds', () => {
   it('maps catalogue ids, the older demo values and names to kinds, keeps known kinds, and leaves the rest plain-block', async () => {
     const { agent } = await signUpStudio(t.app);
-    const projectId = (await agent.post('/api/projects').send({ name: 'Kinds', newClient: { name: 'C' } })).body.project.id as string;
-    const room = await agent.post(`/api/projects/${projectId}/rooms`).send({ name: 'Room', shell: { outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]] } });
+    const projectId = (await agent.post('/api/projects').send({ name: 'Kinds', newClient: { name: 'C' } })).body.project
+      .id as string;
+    const room = await agent.post(`/api/projects/${projectId}/rooms`).send({
+      name: 'Room',
+      shell: {
+        outline: [
+          [0, 0],
+          [4000, 0],
+          [4000, 3000],
+          [0, 3000],
+        ],
+      },
+    });
     const optionId = room.body.options[0].id as string;
     const stored: [string | undefined, string, string][] = [
       ['sofa-3-seat', 'Three-seat sofa', 'sofa'],
@@ -41,7 +52,17 @@ describe('migration 0010: piece kinds', () => {
       ['open-shelving', 'Anything', 'open-shelving'],
     ];
     const pieces = stored.map(([kind, name], i) => ({
-      id: `p${i}`, name, x: 500, y: 500, width: 400, depth: 400, height: 400, rotation: 0, elevation: 0, status: 'new', placed: true,
+      id: `p${i}`,
+      name,
+      x: 500,
+      y: 500,
+      width: 400,
+      depth: 400,
+      height: 400,
+      rotation: 0,
+      elevation: 0,
+      status: 'new',
+      placed: true,
       ...(kind === undefined ? {} : { kind }),
     }));
     const doc = { pieces, finishes: { floor: null, ceiling: null, walls: null, wallOverrides: {} } };

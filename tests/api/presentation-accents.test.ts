@@ -10,8 +10,32 @@ const paint = (id: string, colourHex: string) => ({ id, kind: 'paint', name: id,
 describe('accent finishes on the client’s link', () => {
   const doc = optionDocSchema.parse({
     pieces: [
-      { id: 'table', name: 'Table', kind: 'dining-table', x: 1000, y: 1000, width: 1600, depth: 900, height: 740, status: 'new', finishId: MAIN, accentFinishId: ACCENT, accentColour: '#5b4636' },
-      { id: 'held', name: 'Held', x: 0, y: 0, width: 500, depth: 500, height: 500, status: 'new', placed: false, accentFinishId: '33333333-3333-4333-8333-333333333333' },
+      {
+        id: 'table',
+        name: 'Table',
+        kind: 'dining-table',
+        x: 1000,
+        y: 1000,
+        width: 1600,
+        depth: 900,
+        height: 740,
+        status: 'new',
+        finishId: MAIN,
+        accentFinishId: ACCENT,
+        accentColour: '#5b4636',
+      },
+      {
+        id: 'held',
+        name: 'Held',
+        x: 0,
+        y: 0,
+        width: 500,
+        depth: 500,
+        height: 500,
+        status: 'new',
+        placed: false,
+        accentFinishId: '33333333-3333-4333-8333-333333333333',
+      },
     ],
   });
 
@@ -20,7 +44,10 @@ describe('accent finishes on the client’s link', () => {
   });
 
   it('gives the 3D view the accent as a scene finish by piece id, and the client piece its kind and accent colour but no finish id', () => {
-    const finishes = new Map([[MAIN, paint(MAIN, '#d8cdbd')], [ACCENT, paint(ACCENT, '#3d342c')]]);
+    const finishes = new Map([
+      [MAIN, paint(MAIN, '#d8cdbd')],
+      [ACCENT, paint(ACCENT, '#3d342c')],
+    ]);
     const surfaces = clientSurfaces(doc, finishes, 'token');
     expect(surfaces.pieces.table).toMatchObject({ kind: 'paint', colourHex: '#d8cdbd' });
     expect(surfaces.pieceAccents?.table).toMatchObject({ kind: 'paint', colourHex: '#3d342c' });

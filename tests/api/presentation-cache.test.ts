@@ -50,7 +50,9 @@ describe('the client link cache', () => {
 
   it('shows a designer’s edit on the next open', async () => {
     await open(p.token);
-    const { options } = (await owner.get(`/api/rooms/${p.roomId}`)).body as { options: { id: string; version: number; doc: { pieces: { name: string }[] } }[] };
+    const { options } = (await owner.get(`/api/rooms/${p.roomId}`)).body as {
+      options: { id: string; version: number; doc: { pieces: { name: string }[] } }[];
+    };
     const o = options.find((x) => x.id === p.optionIds[0])!;
     const doc = { ...o.doc, pieces: o.doc.pieces.map((piece, i) => (i === 0 ? { ...piece, name: 'Reading chair' } : piece)) };
     expect((await owner.put(`/api/options/${o.id}`).send({ doc, version: o.version })).status).toBe(200);
@@ -60,16 +62,22 @@ describe('the client link cache', () => {
 
   it('shows the client’s own choice straight away', async () => {
     await open(p.token);
-    const chose = await request(t.app).put(`/api/p/${p.token}/rooms/${p.roomId}/choice`).send({ optionId: p.optionIds[1], comment: 'This one' });
+    const chose = await request(t.app)
+      .put(`/api/p/${p.token}/rooms/${p.roomId}/choice`)
+      .send({ optionId: p.optionIds[1], comment: 'This one' });
     expect(chose.status).toBe(200);
     const after = (await open(p.token)).body.presentation as ClientPresentation;
     expect(after.rooms[0].choice?.optionId).toBe(p.optionIds[1]);
   });
 
   it('counts every visit, served ready or not', async () => {
-    const before = (await owner.get(`/api/projects/${p.projectId}/presentations`)).body.presentations.find((x: PresentationSummary) => x.id === p.presentationId).openCount as number;
+    const before = (await owner.get(`/api/projects/${p.projectId}/presentations`)).body.presentations.find(
+      (x: PresentationSummary) => x.id === p.presentationId,
+    ).openCount as number;
     for (let i = 0; i < 5; i += 1) expect((await open(p.token)).status).toBe(200);
-    const after = (await owner.get(`/api/projects/${p.projectId}/presentations`)).body.presentations.find((x: PresentationSummary) => x.id === p.presentationId) as PresentationSummary;
+    const after = (await owner.get(`/api/projects/${p.projectId}/presentations`)).body.presentations.find(
+      (x: PresentationSummary) => x.id === p.presentationId,
+    ) as PresentationSummary;
     expect(after.openCount).toBe(before + 5);
   });
 

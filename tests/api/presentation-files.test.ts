@@ -18,7 +18,14 @@ import type { ClientPresentation, PresentationSummary } from '../../shared/schem
 import { TEST_PRESENTATION_KEY, TEST_SIGN_UP_LIMIT, signUpStudio, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
-const SQUARE = { outline: [[0, 0], [4000, 0], [4000, 3500], [0, 3500]] };
+const SQUARE = {
+  outline: [
+    [0, 0],
+    [4000, 0],
+    [4000, 3500],
+    [0, 3500],
+  ],
+};
 
 let t: TestApp;
 let dataDir: string;
@@ -45,8 +52,13 @@ beforeAll(async () => {
   dataDir = mkdtempSync(join(tmpdir(), 'parlour-presentation-files-'));
   const db = createDb(inject('databaseUrl'), 4);
   const config = loadConfig({
-    DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', DATA_DIR: dataDir,
-    PRESENTATION_KEY: TEST_PRESENTATION_KEY, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
+    DATABASE_URL: inject('databaseUrl'),
+    NODE_ENV: 'test',
+    PUBLIC_URL: 'http://parlour.test',
+    CLIENT_DIST: '/nonexistent',
+    DATA_DIR: dataDir,
+    PRESENTATION_KEY: TEST_PRESENTATION_KEY,
+    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
   });
   const deps: AppDeps = { db, mailer: { send: async () => undefined }, config };
   t = { app: createApp(deps), db, mail: [], close: () => db.destroy() };
@@ -74,14 +86,32 @@ beforeAll(async () => {
   const hidden = (await owner.post(`/api/rooms/${room.room.id}/options`).send({ name: 'Not shown' })).body.option;
   // Shown: oak floor, a paint on the walls, the wallpaper on wall 1, linen on a sofa.
   const shownDoc = {
-    pieces: [{ id: 'sofa', name: 'Sofa', x: 2000, y: 2800, width: 2000, depth: 900, height: 800, status: 'new', finishId: photos.get('Washed linen')!.id }],
-    finishes: { floor: photos.get('Oak boards, natural oil')!.id, walls: paints.get('Morning oat')!.id, wallOverrides: { '1': photos.get('Sprig wallpaper')!.id } },
+    pieces: [
+      {
+        id: 'sofa',
+        name: 'Sofa',
+        x: 2000,
+        y: 2800,
+        width: 2000,
+        depth: 900,
+        height: 800,
+        status: 'new',
+        finishId: photos.get('Washed linen')!.id,
+      },
+    ],
+    finishes: {
+      floor: photos.get('Oak boards, natural oil')!.id,
+      walls: paints.get('Morning oat')!.id,
+      wallOverrides: { '1': photos.get('Sprig wallpaper')!.id },
+    },
   };
   // Not shown: the stone tile, which the link must not reach.
   const hiddenDoc = { pieces: [], finishes: { floor: photos.get('Grey stone tile')!.id } };
   expect((await owner.put(`/api/options/${shown.id}`).send({ doc: shownDoc, version: shown.version })).status).toBe(200);
   expect((await owner.put(`/api/options/${hidden.id}`).send({ doc: hiddenDoc, version: hidden.version })).status).toBe(200);
-  const made = await owner.post(`/api/projects/${project.id}/presentations`).send({ rooms: [{ roomId: room.room.id, optionIds: [shown.id] }] });
+  const made = await owner
+    .post(`/api/projects/${project.id}/presentations`)
+    .send({ rooms: [{ roomId: room.room.id, optionIds: [shown.id] }] });
   expect(made.status).toBe(201);
   const summary = made.body.presentation as PresentationSummary;
   token = summary.link!.split('/p/')[1];
@@ -111,7 +141,10 @@ describe('textures for presentations', () => {
     });
     expect(option.surfaces.walls).toMatchObject({ kind: 'paint', colourHex: '#e6dcc8' });
     expect(option.surfaces.wallOverrides['1']).toMatchObject({ kind: 'photo', repeatWidthMm: 265 });
-    expect(option.surfaces.pieces.sofa).toMatchObject({ kind: 'photo', meanColourHex: photos.get('Washed linen')!.meanColourHex });
+    expect(option.surfaces.pieces.sofa).toMatchObject({
+      kind: 'photo',
+      meanColourHex: photos.get('Washed linen')!.meanColourHex,
+    });
     // Nothing in the payload points at the studio's own file route or names a finish.
     expect(res.text).not.toContain('"/api/files/');
     for (const f of [...photos.values(), ...paints.values()]) expect(res.text).not.toContain(f.id);

@@ -7,15 +7,20 @@ import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { SignJWT } from 'jose';
 import { decodeKey, loadConfig } from '../../server/config';
-import {
-  PRESENTATION_AUDIENCE, PRESENTATION_ISSUER, PRESENTATION_TYP,
-} from '../../server/services/tokens/presentation-token';
+import { PRESENTATION_AUDIENCE, PRESENTATION_ISSUER, PRESENTATION_TYP } from '../../server/services/tokens/presentation-token';
 import type { ClientPresentation, PresentationSummary } from '../../shared/schemas/presentation';
 import { TEST_PRESENTATION_KEY, addMember, createTestApp, signUpStudio, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
 const KEY = new Uint8Array(Buffer.from(TEST_PRESENTATION_KEY, 'hex'));
-const SQUARE = { outline: [[0, 0], [4000, 0], [4000, 3500], [0, 3500]] };
+const SQUARE = {
+  outline: [
+    [0, 0],
+    [4000, 0],
+    [4000, 3500],
+    [0, 3500],
+  ],
+};
 
 let t: TestApp;
 let owner: Agent;
@@ -41,12 +46,24 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const piece = (id: string, extra: object = {}) => ({
-  id, name: `Piece ${id}`, x: 1500, y: 1500, width: 900, depth: 600, height: 800, status: 'new', price: 640, supplierUrl: 'https://supplier.example/item', ...extra,
+  id,
+  name: `Piece ${id}`,
+  x: 1500,
+  y: 1500,
+  width: 900,
+  depth: 600,
+  height: 800,
+  status: 'new',
+  price: 640,
+  supplierUrl: 'https://supplier.example/item',
+  ...extra,
 });
 
 /** A project with two rooms of three options each; every option has priced pieces, one with a finish, one in the holding area. */
 async function makeFlat(agent: Agent, clientEmail: string | null = 'client@example.com'): Promise<Flat> {
-  const project = await agent.post('/api/projects').send({ name: 'Larkspur flat', newClient: { name: 'Ada and Rui Penhale', email: clientEmail ?? '' } });
+  const project = await agent
+    .post('/api/projects')
+    .send({ name: 'Larkspur flat', newClient: { name: 'Ada and Rui Penhale', email: clientEmail ?? '' } });
   const projectId = project.body.project.id as string;
   const paint = await agent.post('/api/finishes/paints').send({ name: 'Moss velvet', colourHex: '#5a6b4a' });
   const finishId = paint.body.finish.id as string;
@@ -94,7 +111,11 @@ async function tokenIdOf(p: PresentationSummary): Promise<string> {
 }
 
 /** A token signed with the right key, with any header and claims a test wants. */
-function craft(claims: { jti: string; aud?: string; iss?: string; exp?: number; iat?: number }, typ = PRESENTATION_TYP, key = KEY) {
+function craft(
+  claims: { jti: string; aud?: string; iss?: string; exp?: number; iat?: number },
+  typ = PRESENTATION_TYP,
+  key = KEY,
+) {
   const now = Math.floor(Date.now() / 1000);
   return new SignJWT({})
     .setProtectedHeader({ alg: 'HS256', typ })
@@ -118,7 +139,14 @@ describe('designer makes and sends a presentation', () => {
   it('creates one with rooms and options in order, e-mails the client, and the project is presented', async () => {
     const flat = await makeFlat(designer);
     const p = await present(designer, flat);
-    expect(p).toMatchObject({ state: 'active', showPrices: false, openCount: 0, firstOpenedAt: null, createdBy: 'Member designer', complete: false });
+    expect(p).toMatchObject({
+      state: 'active',
+      showPrices: false,
+      openCount: 0,
+      firstOpenedAt: null,
+      createdBy: 'Member designer',
+      complete: false,
+    });
     expect(p.rooms.map((r) => r.roomId)).toEqual([flat.rooms[0].id, flat.rooms[1].id]);
     expect(p.rooms[0].options.map((o) => o.label)).toEqual(['Option A · Walnut', 'Option B']);
     // The default expiry is 30 days.
@@ -141,15 +169,25 @@ describe('designer makes and sends a presentation', () => {
   it('refuses rooms of another project and options of another room, naming the field', async () => {
     const flat = await makeFlat(designer);
     const other = await makeFlat(designer);
-    const wrongRoom = await designer.post(`/api/projects/${flat.projectId}/presentations`).send({ rooms: [{ roomId: other.rooms[0].id, optionIds: [other.rooms[0].options[0].id] }] });
+    const wrongRoom = await designer
+      .post(`/api/projects/${flat.projectId}/presentations`)
+      .send({ rooms: [{ roomId: other.rooms[0].id, optionIds: [other.rooms[0].options[0].id] }] });
     expect(wrongRoom.status).toBe(400);
     expect(wrongRoom.body.error.fields).toEqual({ 'rooms[0].roomId': 'Not a room of this project.' });
-    const wrongOption = await designer.post(`/api/projects/${flat.projectId}/presentations`).send({ rooms: [{ roomId: flat.rooms[0].id, optionIds: [flat.rooms[1].options[0].id] }] });
+    const wrongOption = await designer
+      .post(`/api/projects/${flat.projectId}/presentations`)
+      .send({ rooms: [{ roomId: flat.rooms[0].id, optionIds: [flat.rooms[1].options[0].id] }] });
     expect(wrongOption.status).toBe(400);
     expect(wrongOption.body.error.fields).toEqual({ 'rooms[0].optionIds': 'Pick options of this room only.' });
-    const twice = await designer.post(`/api/projects/${flat.projectId}/presentations`).send({ rooms: [{ roomId: flat.rooms[0].id, optionIds: [flat.rooms[0].options[0].id, flat.rooms[0].options[0].id] }], expiresInDays: 0 });
+    const twice = await designer.post(`/api/projects/${flat.projectId}/presentations`).send({
+      rooms: [{ roomId: flat.rooms[0].id, optionIds: [flat.rooms[0].options[0].id, flat.rooms[0].options[0].id] }],
+      expiresInDays: 0,
+    });
     expect(twice.status).toBe(400);
-    expect(twice.body.error.fields).toMatchObject({ 'rooms[0].optionIds': 'Each option once.', expiresInDays: 'At least 1 day.' });
+    expect(twice.body.error.fields).toMatchObject({
+      'rooms[0].optionIds': 'Each option once.',
+      expiresInDays: 'At least 1 day.',
+    });
     // Nothing was made by the refused requests.
     expect((await designer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations).toEqual([]);
     expect((await designer.get(`/api/projects/${flat.projectId}`)).body.project.state).toBe('draft');
@@ -170,7 +208,13 @@ describe('designer makes and sends a presentation', () => {
     const list = await viewer.get(`/api/projects/${flat.projectId}/presentations`);
     expect(list.status).toBe(200);
     expect(list.body.presentations[0]).toMatchObject({ id: p.id, link: null });
-    expect((await viewer.post(`/api/projects/${flat.projectId}/presentations`).send({ rooms: [{ roomId: flat.rooms[0].id, optionIds: [flat.rooms[0].options[0].id] }] })).status).toBe(403);
+    expect(
+      (
+        await viewer
+          .post(`/api/projects/${flat.projectId}/presentations`)
+          .send({ rooms: [{ roomId: flat.rooms[0].id, optionIds: [flat.rooms[0].options[0].id] }] })
+      ).status,
+    ).toBe(403);
     expect((await viewer.post(`/api/presentations/${p.id}/withdraw`)).status).toBe(403);
     expect((await viewer.post(`/api/presentations/${p.id}/send`).send({})).status).toBe(403);
     expect((await openLink(tokenOf(p))).status).toBe(200);
@@ -193,7 +237,13 @@ describe('what the client link shows', () => {
   });
 
   it('shows the studio name, project and message, and only the chosen rooms and options in order', () => {
-    expect(body).toMatchObject({ studioName: 'Marrow & Finch', projectName: 'Larkspur flat', message: 'Here are the two rooms. Take your time.', showPrices: false, decided: false });
+    expect(body).toMatchObject({
+      studioName: 'Marrow & Finch',
+      projectName: 'Larkspur flat',
+      message: 'Here are the two rooms. Take your time.',
+      showPrices: false,
+      decided: false,
+    });
     expect(body.rooms.map((r) => r.name)).toEqual(['Sitting room', 'Bedroom']);
     expect(body.rooms[0].options.map((o) => [o.id, o.label, o.note])).toEqual([
       [flat.rooms[0].options[2].id, 'Option A · Walnut', 'Note 2'],
@@ -204,14 +254,19 @@ describe('what the client link shows', () => {
   });
 
   it('never carries unselected options, hidden prices, supplier links, finish ids or other records’ ids', async () => {
-    for (const hidden of [flat.rooms[0].options[1].id, flat.rooms[1].options[0].id, flat.rooms[1].options[2].id]) expect(raw).not.toContain(hidden);
+    for (const hidden of [flat.rooms[0].options[1].id, flat.rooms[1].options[0].id, flat.rooms[1].options[2].id])
+      expect(raw).not.toContain(hidden);
     expect(raw).not.toContain('price');
     expect(raw).not.toContain('supplier');
     expect(raw).not.toContain('finishId');
     expect(raw).not.toContain(flat.finishId);
     expect(raw).not.toContain(flat.projectId);
     expect(raw).not.toContain(p.id);
-    const { studio_id } = await t.db.selectFrom('presentations').select('studio_id').where('id', '=', p.id).executeTakeFirstOrThrow();
+    const { studio_id } = await t.db
+      .selectFrom('presentations')
+      .select('studio_id')
+      .where('id', '=', p.id)
+      .executeTakeFirstOrThrow();
     expect(raw).not.toContain(studio_id);
     expect(raw).not.toContain(designerEmail);
     expect(raw).not.toContain('client@example.com');
@@ -239,7 +294,9 @@ describe('what the client link shows', () => {
     await designer.get(`/api/p/${token}`);
     await designer.post(`/api/p/${token}/views`).send({ optionId: flat.rooms[0].options[0].id });
 
-    const [summary] = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations.filter((x: PresentationSummary) => x.id === p.id);
+    const [summary] = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations.filter(
+      (x: PresentationSummary) => x.id === p.id,
+    );
     expect(summary.openCount).toBe(2);
     expect(summary.firstOpenedAt).not.toBeNull();
     expect(new Date(summary.lastOpenedAt).getTime()).toBeGreaterThanOrEqual(new Date(summary.firstOpenedAt).getTime());
@@ -305,7 +362,14 @@ describe('bad tokens are refused with a plain message', () => {
     expectRefused(await openLink(`${b64({ alg: 'none', typ: PRESENTATION_TYP })}.${b64(claims)}.`), 404);
     expectRefused(await openLink(`${b64({ alg: 'none', typ: PRESENTATION_TYP })}.${b64(claims)}`), 404);
     // And a none token cannot post a choice either.
-    expectRefused(await choose(`${b64({ alg: 'none', typ: PRESENTATION_TYP })}.${b64(claims)}.`, flat.rooms[0].id, flat.rooms[0].options[0].id), 404);
+    expectRefused(
+      await choose(
+        `${b64({ alg: 'none', typ: PRESENTATION_TYP })}.${b64(claims)}.`,
+        flat.rooms[0].id,
+        flat.rooms[0].options[0].id,
+      ),
+      404,
+    );
   });
 
   it('an unknown id, rubbish, or something far too long', async () => {
@@ -332,16 +396,23 @@ describe('bad tokens are refused with a plain message', () => {
   it('past its stored expiry the link stops; extending opens the same link again', async () => {
     const q = await present(designer, flat, { expiresInDays: 3 });
     const token = tokenOf(q);
-    await t.db.updateTable('presentations').set({ expires_at: new Date(Date.now() - 1000) }).where('id', '=', q.id).execute();
+    await t.db
+      .updateTable('presentations')
+      .set({ expires_at: new Date(Date.now() - 1000) })
+      .where('id', '=', q.id)
+      .execute();
     expectRefused(await openLink(token), 410);
-    const list = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations as PresentationSummary[];
+    const list = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body
+      .presentations as PresentationSummary[];
     expect(list.find((x) => x.id === q.id)!.state).toBe('expired');
     const extended = await designer.post(`/api/presentations/${q.id}/extend`).send({ days: 14 });
     expect(extended.status).toBe(200);
     expect(extended.body.presentation.state).toBe('active');
     expect(extended.body.presentation.link).toBe(q.link);
     expect((await openLink(token)).status).toBe(200);
-    expect((await designer.post(`/api/presentations/${q.id}/extend`).send({ days: 400 })).body.error.fields).toEqual({ days: 'At most 90 days at a time.' });
+    expect((await designer.post(`/api/presentations/${q.id}/extend`).send({ days: 400 })).body.error.fields).toEqual({
+      days: 'At most 90 days at a time.',
+    });
   });
 });
 
@@ -355,7 +426,9 @@ describe('one studio’s link never reaches another’s records', () => {
     const tokenB = tokenOf(pB);
     expect((await choose(tokenB, flatA.rooms[0].id, flatA.rooms[0].options[2].id)).status).toBe(404);
     expect((await choose(tokenB, flatB.rooms[0].id, flatA.rooms[0].options[2].id)).status).toBe(404);
-    expect((await request(t.app).post(`/api/p/${tokenB}/views`).send({ optionId: flatA.rooms[0].options[2].id })).status).toBe(404);
+    expect((await request(t.app).post(`/api/p/${tokenB}/views`).send({ optionId: flatA.rooms[0].options[2].id })).status).toBe(
+      404,
+    );
     const bOpens = JSON.stringify((await openLink(tokenB)).body);
     expect(bOpens).not.toContain('Marrow');
     expect(bOpens).not.toContain(flatA.rooms[0].id);
@@ -393,7 +466,8 @@ describe('choices', () => {
     expect(new Date(changed.body.choice.chosenAt).getTime()).toBeGreaterThan(new Date(first.body.choice.chosenAt).getTime());
     expect(t.mail.length).toBe(before + 2);
 
-    const summary = (await viewer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations[0] as PresentationSummary;
+    const summary = (await viewer.get(`/api/projects/${flat.projectId}/presentations`)).body
+      .presentations[0] as PresentationSummary;
     expect(summary.rooms[0].choice).toMatchObject({ optionId: room.options[2].id, comment: 'Actually the walnut.' });
     expect((await openLink(token)).body.presentation.rooms[0].choice.optionId).toBe(room.options[2].id);
   });
@@ -406,7 +480,14 @@ describe('choices', () => {
     const long = await choose(tokenOf(p), flat.rooms[0].id, flat.rooms[0].options[0].id, 'x'.repeat(1001));
     expect(long.status).toBe(400);
     expect(long.body.error.fields.comment).toMatch(/under 1000/);
-    expect((await request(t.app).put(`/api/p/${tokenOf(p)}/rooms/${flat.rooms[0].id}/choice`).set('content-type', 'application/json').send('{"optionId":')).status).toBe(400);
+    expect(
+      (
+        await request(t.app)
+          .put(`/api/p/${tokenOf(p)}/rooms/${flat.rooms[0].id}/choice`)
+          .set('content-type', 'application/json')
+          .send('{"optionId":')
+      ).status,
+    ).toBe(400);
   });
 
   it('is rate-limited per link, counted in the database', async () => {
@@ -422,13 +503,22 @@ describe('choices', () => {
     expect(refused.status).toBe(429);
     expect(refused.headers['retry-after']).toBe('600');
     expect(refused.body.error.message).toMatch(/wait a few minutes/);
-    const counted = await t.db.selectFrom('presentation_requests').select((eb) => eb.fn.countAll<string>().as('n')).where('presentation_id', '=', p.id).where('kind', '=', 'choice').executeTakeFirstOrThrow();
+    const counted = await t.db
+      .selectFrom('presentation_requests')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .where('presentation_id', '=', p.id)
+      .where('kind', '=', 'choice')
+      .executeTakeFirstOrThrow();
     expect(Number(counted.n)).toBe(20);
     // Another link of the same project has a count of its own.
     const q = await present(designer, flat);
     expect((await choose(tokenOf(q), room.id, room.options[0].id)).status).toBe(200);
     // Once the window has passed, the link may choose again.
-    await t.db.updateTable('presentation_requests').set({ at: new Date(Date.now() - 11 * 60_000) }).where('presentation_id', '=', p.id).execute();
+    await t.db
+      .updateTable('presentation_requests')
+      .set({ at: new Date(Date.now() - 11 * 60_000) })
+      .where('presentation_id', '=', p.id)
+      .execute();
     expect((await choose(token, room.id, room.options[2].id)).status).toBe(200);
   });
 
@@ -441,7 +531,8 @@ describe('choices', () => {
     expect(early.status).toBe(409);
     expect(early.body.error.message).toMatch(/Every room/);
     await choose(token, flat.rooms[1].id, flat.rooms[1].options[1].id, 'Yes please');
-    const list = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations as PresentationSummary[];
+    const list = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body
+      .presentations as PresentationSummary[];
     expect(list[0].complete).toBe(true);
     expect((await viewer.post(`/api/projects/${flat.projectId}/decide`).send({ presentationId: p.id })).status).toBe(403);
     const decided = await designer.post(`/api/projects/${flat.projectId}/decide`).send({ presentationId: p.id });
@@ -489,7 +580,9 @@ describe('the signing key', () => {
     expect(decodeKey('ab'.repeat(32), 'K').length).toBe(32);
     expect(decodeKey(Buffer.alloc(48, 3).toString('base64'), 'K').length).toBe(48);
     expect(() => decodeKey('ab'.repeat(16), 'K')).toThrow(/at least 256 bits/);
-    expect(() => loadConfig({ DATABASE_URL: 'postgres://unused', PRESENTATION_KEY: 'short' })).toThrow(/PRESENTATION_KEY: needs at least 256 bits/);
+    expect(() => loadConfig({ DATABASE_URL: 'postgres://unused', PRESENTATION_KEY: 'short' })).toThrow(
+      /PRESENTATION_KEY: needs at least 256 bits/,
+    );
     expect(() => decodeKey('not base64 at all!', 'K')).toThrow(/hex or base64/);
   });
 });

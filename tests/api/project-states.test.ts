@@ -86,10 +86,17 @@ describe('decided stays decided until Reopen', () => {
 describe('PATCH state: Archive from anywhere, Restore to the state before, nothing else', () => {
   it('refuses every other change with 409 naming the way', async () => {
     const draft = (await designer.post('/api/projects').send({ name: 'Draft flat', newClient: { name: 'Dee' } })).body.project;
-    for (const [state, way] of [['presented', /make a presentation/], ['decided', /Mark as decided/]] as const) {
+    for (const [state, way] of [
+      ['presented', /make a presentation/],
+      ['decided', /Mark as decided/],
+    ] as const) {
       const res = await patchState(draft.id, state);
       expect(res.status).toBe(409);
-      expect(res.body.error).toMatchObject({ code: 'state_change', message: expect.stringMatching(way), fields: { state: expect.any(String) } });
+      expect(res.body.error).toMatchObject({
+        code: 'state_change',
+        message: expect.stringMatching(way),
+        fields: { state: expect.any(String) },
+      });
     }
     expect((await stateOf(draft.id)).state).toBe('draft');
 
@@ -109,7 +116,9 @@ describe('PATCH state: Archive from anywhere, Restore to the state before, nothi
 
   it('Restore brings back the state the project had before it was archived, not draft', async () => {
     for (const make of [
-      async () => (await designer.post('/api/projects').send({ name: 'Draft to archive', newClient: { name: 'Dee' } })).body.project.id as string,
+      async () =>
+        (await designer.post('/api/projects').send({ name: 'Draft to archive', newClient: { name: 'Dee' } })).body.project
+          .id as string,
       async () => (await presentedProject(designer, 'Presented to archive')).projectId,
       async () => (await decidedProject()).projectId,
     ]) {
@@ -148,12 +157,17 @@ describe('while decided, the chosen option stands still', () => {
 
     const edit = await designer.put(`/api/options/${chosen.id}`).send({ version: chosen.version, doc: { pieces: [] } });
     expect(edit.status).toBe(409);
-    expect(edit.body.error).toEqual({ code: 'decided', message: 'This option was chosen and the project is decided. Reopen the project or duplicate the option to change it.' });
+    expect(edit.body.error).toEqual({
+      code: 'decided',
+      message: 'This option was chosen and the project is decided. Reopen the project or duplicate the option to change it.',
+    });
     expect((await designer.put(`/api/options/${chosen.id}`).send({ version: chosen.version, name: 'Renamed' })).status).toBe(409);
     const del = await designer.delete(`/api/options/${chosen.id}`);
     expect(del.status).toBe(409);
     expect(del.body.error.code).toBe('decided');
-    const walls = await designer.put(`/api/rooms/${p.roomId}`).send({ version: room.room.version, shell: { ...room.room.shell, wallHeight: 2400 } });
+    const walls = await designer
+      .put(`/api/rooms/${p.roomId}`)
+      .send({ version: room.room.version, shell: { ...room.room.shell, wallHeight: 2400 } });
     expect(walls.status).toBe(409);
     expect(walls.body.error.code).toBe('decided');
     const gone = await designer.delete(`/api/rooms/${p.roomId}`);
@@ -163,16 +177,29 @@ describe('while decided, the chosen option stands still', () => {
     // Saving what is already there, a new room name, the other option and a duplicate are fine.
     const same = await designer.put(`/api/options/${chosen.id}`).send({ version: chosen.version, doc: chosen.doc });
     expect(same.status).toBe(200);
-    expect((await designer.put(`/api/rooms/${p.roomId}`).send({ version: room.room.version, name: 'Front room', shell: room.room.shell })).status).toBe(200);
-    expect((await designer.put(`/api/options/${other.id}`).send({ version: other.version, doc: { pieces: [] } })).status).toBe(200);
+    expect(
+      (
+        await designer
+          .put(`/api/rooms/${p.roomId}`)
+          .send({ version: room.room.version, name: 'Front room', shell: room.room.shell })
+      ).status,
+    ).toBe(200);
+    expect((await designer.put(`/api/options/${other.id}`).send({ version: other.version, doc: { pieces: [] } })).status).toBe(
+      200,
+    );
     const copy = await designer.post(`/api/rooms/${p.roomId}/options`).send({ name: 'Variation', fromOptionId: chosen.id });
     expect(copy.status).toBe(201);
-    expect((await designer.put(`/api/options/${copy.body.option.id}`).send({ version: copy.body.option.version, doc: { pieces: [] } })).status).toBe(200);
+    expect(
+      (await designer.put(`/api/options/${copy.body.option.id}`).send({ version: copy.body.option.version, doc: { pieces: [] } }))
+        .status,
+    ).toBe(200);
 
     const after = (await designer.get(`/api/rooms/${p.roomId}`)).body.options.find((o: { id: string }) => o.id === chosen.id);
     expect(after.doc.pieces).toHaveLength(chosen.doc.pieces.length);
 
     expect((await designer.post(`/api/projects/${p.projectId}/reopen`)).status).toBe(200);
-    expect((await designer.put(`/api/options/${chosen.id}`).send({ version: after.version, doc: { pieces: [] } })).status).toBe(200);
+    expect((await designer.put(`/api/options/${chosen.id}`).send({ version: after.version, doc: { pieces: [] } })).status).toBe(
+      200,
+    );
   });
 });

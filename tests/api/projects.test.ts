@@ -10,11 +10,15 @@ afterAll(() => t.close());
 describe('clients and projects', () => {
   it('creates a project with a new client in one transaction and lists it', async () => {
     const { agent } = await signUpStudio(t.app);
-    const res = await agent.post('/api/projects').send({ name: 'Mill House', address: '2 Weir Road', newClient: { name: 'Jo Bright', email: 'JO@example.com' } });
+    const res = await agent
+      .post('/api/projects')
+      .send({ name: 'Mill House', address: '2 Weir Road', newClient: { name: 'Jo Bright', email: 'JO@example.com' } });
     expect(res.status).toBe(201);
     expect(res.body.project).toMatchObject({ name: 'Mill House', state: 'draft', client: { name: 'Jo Bright' }, roomCount: 0 });
     const clients = await agent.get('/api/clients');
-    expect(clients.body.clients).toEqual([expect.objectContaining({ name: 'Jo Bright', email: 'jo@example.com', projectCount: 1 })]);
+    expect(clients.body.clients).toEqual([
+      expect.objectContaining({ name: 'Jo Bright', email: 'jo@example.com', projectCount: 1 }),
+    ]);
   });
 
   it('leaves nothing half-written when the new client is invalid', async () => {
@@ -50,11 +54,15 @@ describe('clients and projects', () => {
     // A search for a wildcard character matches it literally.
     expect((await agent.get('/api/projects?q=%25')).body.projects).toHaveLength(0);
 
-    expect((await agent.patch(`/api/projects/${alpha.id}`).send({ name: 'Alpha studio' })).body.project.name).toBe('Alpha studio');
+    expect((await agent.patch(`/api/projects/${alpha.id}`).send({ name: 'Alpha studio' })).body.project.name).toBe(
+      'Alpha studio',
+    );
     expect((await agent.get('/api/projects')).body.projects[0].name).toBe('Alpha studio');
     await agent.patch(`/api/projects/${alpha.id}`).send({ state: 'archived' });
     expect((await agent.get('/api/projects')).body.projects.map((p: { name: string }) => p.name)).not.toContain('Alpha studio');
-    expect((await agent.get('/api/projects?archived=only')).body.projects.map((p: { name: string }) => p.name)).toEqual(['Alpha studio']);
+    expect((await agent.get('/api/projects?archived=only')).body.projects.map((p: { name: string }) => p.name)).toEqual([
+      'Alpha studio',
+    ]);
   });
 
   it('answers a malformed id or query with 400, not a crash', async () => {

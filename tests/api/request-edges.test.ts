@@ -24,7 +24,14 @@ beforeAll(() => {
   writeFileSync(join(dist, 'index.html'), '<!doctype html><title>Parlour</title>');
   writeFileSync(join(dist, 'assets', 'app-1234.js'), 'console.log(1)');
   db = createDb(inject('databaseUrl'), 2);
-  const config = loadConfig({ DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: dist, PRESENTATION_KEY: TEST_PRESENTATION_KEY, SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT });
+  const config = loadConfig({
+    DATABASE_URL: inject('databaseUrl'),
+    NODE_ENV: 'test',
+    PUBLIC_URL: 'http://parlour.test',
+    CLIENT_DIST: dist,
+    PRESENTATION_KEY: TEST_PRESENTATION_KEY,
+    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
+  });
   app = createApp({ db, mailer: { send: async () => undefined }, config });
 });
 afterAll(async () => {
@@ -34,7 +41,9 @@ afterAll(async () => {
 
 describe('one cookie reader', () => {
   it('a session cookie spelled loosely is still the session to the origin check', async () => {
-    const signUp = await request(app).post('/api/auth/sign-up').send({ studioName: 'Cookie Studio', name: 'Cy', email: uniqueEmail('owner'), password: 'correct-horse-battery' });
+    const signUp = await request(app)
+      .post('/api/auth/sign-up')
+      .send({ studioName: 'Cookie Studio', name: 'Cy', email: uniqueEmail('owner'), password: 'correct-horse-battery' });
     expect(signUp.status).toBe(201);
     const setCookie = ([] as string[]).concat(signUp.headers['set-cookie'] ?? []);
     const token = setCookie.map((c) => /^parlour_session=([^;]+)/.exec(c)?.[1]).find(Boolean);
@@ -42,10 +51,16 @@ describe('one cookie reader', () => {
     // A space before "=": the session reads it as the session cookie, so the origin check must too.
     const loose = `other=1; parlour_session =${token}`;
     expect((await request(app).get('/api/auth/me').set('Cookie', loose)).status).toBe(200);
-    const forged = await request(app).post('/api/clients').set('Cookie', loose).set('Origin', 'https://evil.example').send({ name: 'Forged', email: uniqueEmail('client') });
+    const forged = await request(app)
+      .post('/api/clients')
+      .set('Cookie', loose)
+      .set('Origin', 'https://evil.example')
+      .send({ name: 'Forged', email: uniqueEmail('client') });
     expect(forged.status).toBe(403);
     expect(forged.body.error.code).toBe('cross_site');
-    const clients = (await request(app).get('/api/clients').set('Cookie', `parlour_session=${token}`)).body.clients.map((c: { name: string }) => c.name);
+    const clients = (await request(app).get('/api/clients').set('Cookie', `parlour_session=${token}`)).body.clients.map(
+      (c: { name: string }) => c.name,
+    );
     expect(clients).not.toContain('Forged');
   });
 });

@@ -9,18 +9,29 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-const SQUARE = { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] };
+const SQUARE = {
+  outline: [
+    [0, 0],
+    [3000, 0],
+    [3000, 3000],
+    [0, 3000],
+  ],
+};
 const PARALLEL = 12;
 
 describe('room positions', () => {
   it('rooms created in parallel get distinct positions, in one sequence', async () => {
     const { agent } = await signUpStudio(t.app);
-    const projectId = (await agent.post('/api/projects').send({ name: 'Busy flat', newClient: { name: 'Pat' } })).body.project.id as string;
+    const projectId = (await agent.post('/api/projects').send({ name: 'Busy flat', newClient: { name: 'Pat' } })).body.project
+      .id as string;
     const plan = { format: 'parlour-plan', version: 1, room: { name: 'Imported', ...SQUARE }, option: { name: 'A', pieces: [] } };
-    const answers = await Promise.all(Array.from({ length: PARALLEL }, (_, i) =>
-      i % 3 === 2
-        ? agent.post(`/api/projects/${projectId}/rooms/import`).send(plan)
-        : agent.post(`/api/projects/${projectId}/rooms`).send({ name: `Room ${i}`, shell: SQUARE })));
+    const answers = await Promise.all(
+      Array.from({ length: PARALLEL }, (_, i) =>
+        i % 3 === 2
+          ? agent.post(`/api/projects/${projectId}/rooms/import`).send(plan)
+          : agent.post(`/api/projects/${projectId}/rooms`).send({ name: `Room ${i}`, shell: SQUARE }),
+      ),
+    );
     expect(answers.map((a) => a.status)).toEqual(Array(PARALLEL).fill(201));
     const positions = answers.map((a) => a.body.room.position as number).sort((a, b) => a - b);
     expect(positions).toEqual(Array.from({ length: PARALLEL }, (_, i) => i));
@@ -30,11 +41,25 @@ describe('room positions', () => {
 
   it('the database refuses a second room at a position already taken', async () => {
     const { agent } = await signUpStudio(t.app);
-    const projectId = (await agent.post('/api/projects').send({ name: 'Strict flat', newClient: { name: 'Sam' } })).body.project.id as string;
+    const projectId = (await agent.post('/api/projects').send({ name: 'Strict flat', newClient: { name: 'Sam' } })).body.project
+      .id as string;
     const first = (await agent.post(`/api/projects/${projectId}/rooms`).send({ name: 'Hall', shell: SQUARE })).body.room;
-    const row = await t.db.selectFrom('rooms').select(['studio_id', 'shell']).where('id', '=', first.id).executeTakeFirstOrThrow();
+    const row = await t.db
+      .selectFrom('rooms')
+      .select(['studio_id', 'shell'])
+      .where('id', '=', first.id)
+      .executeTakeFirstOrThrow();
     await expect(
-      t.db.insertInto('rooms').values({ studio_id: row.studio_id, project_id: projectId, name: 'Twin', position: first.position, shell: JSON.stringify(row.shell) }).execute(),
+      t.db
+        .insertInto('rooms')
+        .values({
+          studio_id: row.studio_id,
+          project_id: projectId,
+          name: 'Twin',
+          position: first.position,
+          shell: JSON.stringify(row.shell),
+        })
+        .execute(),
     ).rejects.toMatchObject({ code: '23505', constraint: 'rooms_project_position_key' });
   });
 });

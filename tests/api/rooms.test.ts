@@ -9,7 +9,15 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-const RECT = { wallHeight: 2600, outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]] };
+const RECT = {
+  wallHeight: 2600,
+  outline: [
+    [0, 0],
+    [4200, 0],
+    [4200, 3600],
+    [0, 3600],
+  ],
+};
 const designExample = JSON.parse(readFileSync(resolve(import.meta.dirname, '../../assets/plans/living-room.json'), 'utf8'));
 
 async function projectOf(agent: Awaited<ReturnType<typeof signUpStudio>>['agent']) {
@@ -23,7 +31,9 @@ describe('rooms', () => {
     const res = await agent.post(`/api/projects/${projectId}/rooms`).send({ name: 'Living room', shell: RECT });
     expect(res.status).toBe(201);
     expect(res.body.room).toMatchObject({ name: 'Living room', version: 1, shell: { wallThickness: 100, openings: [] } });
-    expect(res.body.options).toEqual([expect.objectContaining({ position: 0, doc: { pieces: [], finishes: expect.any(Object) } })]);
+    expect(res.body.options).toEqual([
+      expect.objectContaining({ position: 0, doc: { pieces: [], finishes: expect.any(Object) } }),
+    ]);
     const list = await agent.get(`/api/projects/${projectId}/rooms`);
     // 4.2 m × 3.6 m = 15.12 m² (DESIGN.md example).
     expect(list.body.rooms).toEqual([expect.objectContaining({ name: 'Living room', optionCount: 1, floorAreaM2: 15.12 })]);
@@ -39,7 +49,22 @@ describe('rooms', () => {
     const before = (await agent.get(`/api/projects/${projectId}/rooms`)).body.rooms[0].updatedAt as string;
     await new Promise((r) => setTimeout(r, 20));
     const option = created.body.options[0];
-    const pieces = [{ id: 'p1', name: 'Chair', x: 1000, y: 1000, width: 800, depth: 800, height: 800, rotation: 0, elevation: 0, status: 'new', price: null, placed: true }];
+    const pieces = [
+      {
+        id: 'p1',
+        name: 'Chair',
+        x: 1000,
+        y: 1000,
+        width: 800,
+        depth: 800,
+        height: 800,
+        rotation: 0,
+        elevation: 0,
+        status: 'new',
+        price: null,
+        placed: true,
+      },
+    ];
     const saved = await agent.put(`/api/options/${option.id}`).send({ version: option.version, doc: { ...option.doc, pieces } });
     expect(saved.status).toBe(200);
     const after = (await agent.get(`/api/projects/${projectId}/rooms`)).body.rooms[0].updatedAt as string;
@@ -50,12 +75,25 @@ describe('rooms', () => {
   it('refuses shells that cannot be drawn, naming the field', async () => {
     const { agent } = await signUpStudio(t.app);
     const projectId = await projectOf(agent);
-    const bow = await agent.post(`/api/projects/${projectId}/rooms`).send({ name: 'Bow', shell: { outline: [[0, 0], [1000, 1000], [1000, 0], [0, 1000]] } });
+    const bow = await agent.post(`/api/projects/${projectId}/rooms`).send({
+      name: 'Bow',
+      shell: {
+        outline: [
+          [0, 0],
+          [1000, 1000],
+          [1000, 0],
+          [0, 1000],
+        ],
+      },
+    });
     expect(bow.status).toBe(400);
     expect(Object.keys(bow.body.error.fields)[0]).toMatch(/^shell\.outline/);
     const wide = await agent.post(`/api/projects/${projectId}/rooms`).send({
       name: 'Wide door',
-      shell: { ...RECT, openings: [{ id: 'd1', type: 'door', wall: 1, offset: 100, width: 4000, height: 2040, hinge: 'start', swing: 'in' }] },
+      shell: {
+        ...RECT,
+        openings: [{ id: 'd1', type: 'door', wall: 1, offset: 100, width: 4000, height: 2040, hinge: 'start', swing: 'in' }],
+      },
     });
     expect(wide.status).toBe(400);
     expect(Object.keys(wide.body.error.fields)).toContain('shell.openings[0].width');
@@ -81,7 +119,17 @@ describe('rooms', () => {
     const projectId = await projectOf(agent);
     const created = (await agent.post(`/api/projects/${projectId}/rooms`).send({ name: 'Bedroom', shell: RECT })).body;
     const a = created.options[0];
-    const sofa = { id: 'sofa', name: 'Sofa', x: 2100, y: 3100, width: 2100, depth: 900, height: 850, rotation: 180, status: 'new' };
+    const sofa = {
+      id: 'sofa',
+      name: 'Sofa',
+      x: 2100,
+      y: 3100,
+      width: 2100,
+      depth: 900,
+      height: 850,
+      rotation: 180,
+      status: 'new',
+    };
     const saved = await agent.put(`/api/options/${a.id}`).send({ version: 1, name: 'Calm', doc: { pieces: [sofa] } });
     expect(saved.status).toBe(200);
     expect(saved.body.option.doc.pieces[0]).toMatchObject({ id: 'sofa', elevation: 0, placed: true });
@@ -91,8 +139,14 @@ describe('rooms', () => {
 
     const dup = await agent.post(`/api/rooms/${created.room.id}/options`).send({ name: 'Bold', fromOptionId: a.id });
     expect(dup.status).toBe(201);
-    expect(dup.body.option).toMatchObject({ position: 1, name: 'Bold', doc: { pieces: [expect.objectContaining({ id: 'sofa' })] } });
-    const reordered = await agent.put(`/api/rooms/${created.room.id}/option-order`).send({ optionIds: [dup.body.option.id, a.id] });
+    expect(dup.body.option).toMatchObject({
+      position: 1,
+      name: 'Bold',
+      doc: { pieces: [expect.objectContaining({ id: 'sofa' })] },
+    });
+    const reordered = await agent
+      .put(`/api/rooms/${created.room.id}/option-order`)
+      .send({ optionIds: [dup.body.option.id, a.id] });
     expect(reordered.body.options.map((o: { name: string }) => o.name)).toEqual(['Bold', 'Calm']);
     expect((await agent.put(`/api/rooms/${created.room.id}/option-order`).send({ optionIds: [a.id] })).status).toBe(400);
 

@@ -15,13 +15,22 @@ function parseCsv(text: string): string[][] {
   for (let i = 0; i < text.length; i++) {
     const c = text[i];
     if (quoted) {
-      if (c === '"' && text[i + 1] === '"') { field += '"'; i++; }
-      else if (c === '"') quoted = false;
+      if (c === '"' && text[i + 1] === '"') {
+        field += '"';
+        i++;
+      } else if (c === '"') quoted = false;
       else field += c;
     } else if (c === '"') quoted = true;
-    else if (c === ',') { record.push(field); field = ''; }
-    else if (c === '\r' && text[i + 1] === '\n') { record.push(field); records.push(record); record = []; field = ''; i++; }
-    else field += c;
+    else if (c === ',') {
+      record.push(field);
+      field = '';
+    } else if (c === '\r' && text[i + 1] === '\n') {
+      record.push(field);
+      records.push(record);
+      record = [];
+      field = '';
+      i++;
+    } else field += c;
   }
   if (field !== '' || record.length > 0) throw new Error('the last record does not end with CRLF');
   return records;
@@ -41,12 +50,26 @@ let paintId: string;
 // 5 m × 4 m, 2.5 m high; a 1 × 2 m door on wall 0 (2 m² off 12.5 m²): net walls 43 m², floor 20 m².
 const SHELL = {
   wallHeight: 2500,
-  outline: [[0, 0], [5000, 0], [5000, 4000], [0, 4000]],
+  outline: [
+    [0, 0],
+    [5000, 0],
+    [5000, 4000],
+    [0, 4000],
+  ],
   openings: [{ id: 'd1', type: 'door', wall: 0, offset: 500, width: 1000, height: 2000, hinge: 'start', swing: 'in' }],
 };
 const at = { y: 2500, depth: 800, height: 800 };
 const PIECES_A = [
-  { id: 'sofa', name: 'Sofa, "Linen"', x: 2500, ...at, width: 2000, status: 'new', price: 1450, supplierUrl: 'https://example.com/sofa' },
+  {
+    id: 'sofa',
+    name: 'Sofa, "Linen"',
+    x: 2500,
+    ...at,
+    width: 2000,
+    status: 'new',
+    price: 1450,
+    supplierUrl: 'https://example.com/sofa',
+  },
   { id: 'chair-1', name: 'Side chair', x: 800, ...at, width: 500, status: 'new', price: 189.99 },
   { id: 'chair-2', name: 'Side chair', x: 4200, ...at, width: 500, status: 'new', price: 189.99 },
   { id: 'armchair', name: 'Armchair', x: 2500, y: 3500, width: 800, depth: 800, height: 900, status: 'existing', price: 600 },
@@ -58,24 +81,57 @@ beforeAll(async () => {
   owner = a.agent;
   viewer = (await addMember(t, owner, 'viewer')).agent;
   stranger = (await signUpStudio(t.app, 'Other Studio')).agent;
-  projectId = (await owner.post('/api/projects').send({ name: 'Canal flat', newClient: { name: 'A household' } })).body.project.id;
+  projectId = (await owner.post('/api/projects').send({ name: 'Canal flat', newClient: { name: 'A household' } })).body.project
+    .id;
   const room = (await owner.post(`/api/projects/${projectId}/rooms`).send({ name: 'Living room', shell: SHELL })).body;
   roomId = room.room.id;
   optionA = room.options[0].id;
-  paintId = (await owner.post('/api/finishes/paints').send({ name: 'Oat', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'unit', supplier: 'Paint mill', code: 'OAT-1' })).body.finish.id;
+  paintId = (
+    await owner
+      .post('/api/finishes/paints')
+      .send({ name: 'Oat', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'unit', supplier: 'Paint mill', code: 'OAT-1' })
+  ).body.finish.id;
   // A photo finish row as processing leaves it; the schedule needs only its name, category and price.
   const { studio_id } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paintId).executeTakeFirstOrThrow();
-  const oak = await t.db.insertInto('finishes').values({
-    studio_id, kind: 'photo', name: 'Oak boards', category: 'wood', repeat_width_mm: 720, repeat_height_mm: 1440, price: 40, price_unit: 'm2',
-    supplier: 'Timber yard', code: '=OAK', crop: JSON.stringify({ x: 0, y: 0, width: 1, height: 1 }), edge_blend: 'none', status: 'ready', photo_width_px: 8, photo_height_px: 8,
-  }).returning('id').executeTakeFirstOrThrow();
+  const oak = await t.db
+    .insertInto('finishes')
+    .values({
+      studio_id,
+      kind: 'photo',
+      name: 'Oak boards',
+      category: 'wood',
+      repeat_width_mm: 720,
+      repeat_height_mm: 1440,
+      price: 40,
+      price_unit: 'm2',
+      supplier: 'Timber yard',
+      code: '=OAK',
+      crop: JSON.stringify({ x: 0, y: 0, width: 1, height: 1 }),
+      edge_blend: 'none',
+      status: 'ready',
+      photo_width_px: 8,
+      photo_height_px: 8,
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   oakId = oak.id;
-  await owner.put(`/api/options/${optionA}`).send({ version: 1, name: 'Calm', doc: { pieces: PIECES_A, finishes: { floor: oakId, walls: paintId } } }).expect(200);
+  await owner
+    .put(`/api/options/${optionA}`)
+    .send({ version: 1, name: 'Calm', doc: { pieces: PIECES_A, finishes: { floor: oakId, walls: paintId } } })
+    .expect(200);
   optionB = (await owner.post(`/api/rooms/${roomId}/options`).send({ name: 'Bold' })).body.option.id;
-  await owner.put(`/api/options/${optionB}`).send({
-    version: 1,
-    doc: { pieces: [{ id: 'bench', name: 'Bench', x: 2500, y: 1000, width: 1500, depth: 400, height: 450, status: 'new', price: 300 }], finishes: { walls: paintId, ceiling: paintId } },
-  }).expect(200);
+  await owner
+    .put(`/api/options/${optionB}`)
+    .send({
+      version: 1,
+      doc: {
+        pieces: [
+          { id: 'bench', name: 'Bench', x: 2500, y: 1000, width: 1500, depth: 400, height: 450, status: 'new', price: 300 },
+        ],
+        finishes: { walls: paintId, ceiling: paintId },
+      },
+    })
+    .expect(200);
 });
 afterAll(() => t.close());
 
@@ -91,13 +147,26 @@ describe('GET /api/options/:id/schedule', () => {
     // 20 m² + 10 % = 22 m² × 40 = 880. 43 m² × 2 coats ÷ 10 m²/L = 8.6 L; within 0.75 L over, the fewest
     // tins are four: 5 + 2.5 + 2 × 0.75 = 9 L (5 + 3 × 1 + 0.75 = 8.75 L takes five): × 12.50 = 112.50.
     expect(byName['Oak boards']).toMatchObject({ quantity: 22, total: 880, supplier: 'Timber yard' });
-    expect(byName['Oat']).toMatchObject({ quantityUnit: 'L', quantity: 9, quantityNote: '5 L + 2.5 L + 2 × 0.75 L for 8.6 L', total: 112.5 });
+    expect(byName['Oat']).toMatchObject({
+      quantityUnit: 'L',
+      quantity: 9,
+      quantityNote: '5 L + 2.5 L + 2 × 0.75 L for 8.6 L',
+      total: 112.5,
+    });
     // 1829.98 + 880 + 112.50
-    expect(res.body.schedule.totals).toMatchObject({ newPiecesCost: 1829.98, finishesCost: 992.5, budget: 2822.48, newPieceCount: 3, existingPieceCount: 1 });
+    expect(res.body.schedule.totals).toMatchObject({
+      newPiecesCost: 1829.98,
+      finishesCost: 992.5,
+      budget: 2822.48,
+      newPieceCount: 3,
+      existingPieceCount: 1,
+    });
   });
 
   it('follows the coats, coverage, waste and box size asked for', async () => {
-    const res = await owner.get(`/api/options/${optionA}/schedule`).query({ coats: 1, coverage: 8.6, waste: 5, unitM2: `${oakId}:2.2` });
+    const res = await owner
+      .get(`/api/options/${optionA}/schedule`)
+      .query({ coats: 1, coverage: 8.6, waste: 5, unitM2: `${oakId}:2.2` });
     expect(res.status).toBe(200);
     const byName = Object.fromEntries(res.body.schedule.lines.map((l: { name: string }) => [l.name, l]));
     // 43 m² ÷ 8.6 = 5 L exactly; 21 m² ÷ 2.2 = 9.55 → 10 boxes = 22 m²
@@ -125,12 +194,17 @@ describe('GET /api/options/:id/schedule', () => {
 
 describe('GET /api/options/:id/schedule.csv', () => {
   it('downloads RFC 4180 CSV that parses back to the schedule', async () => {
-    const res = await viewer.get(`/api/options/${optionA}/schedule.csv`).buffer(true).parse((r, done) => {
-      let text = '';
-      r.setEncoding('utf8');
-      r.on('data', (chunk: string) => { text += chunk; });
-      r.on('end', () => done(null, text));
-    });
+    const res = await viewer
+      .get(`/api/options/${optionA}/schedule.csv`)
+      .buffer(true)
+      .parse((r, done) => {
+        let text = '';
+        r.setEncoding('utf8');
+        r.on('data', (chunk: string) => {
+          text += chunk;
+        });
+        r.on('end', () => done(null, text));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
     expect(res.headers['content-disposition']).toBe('attachment; filename="canal-flat-living-room-option-a-schedule.csv"');
@@ -142,13 +216,33 @@ describe('GET /api/options/:id/schedule.csv', () => {
     const col = (name: string) => CSV_HEADER.indexOf(name);
     const row = (name: string) => records.find((r) => r[col('Name')] === name)!;
     // A name with a comma and quotes survives the round trip.
-    expect(row('Sofa, "Linen"')).toEqual(expect.arrayContaining(['Piece', 'new', '200 × 80 × 80 cm', '1', 'pcs', '1450.00', 'https://example.com/sofa']));
+    expect(row('Sofa, "Linen"')).toEqual(
+      expect.arrayContaining(['Piece', 'new', '200 × 80 × 80 cm', '1', 'pcs', '1450.00', 'https://example.com/sofa']),
+    );
     expect(row('Side chair')[col('Total')]).toBe('379.98');
     expect(row('Armchair')[col('Total')]).toBe('0.00');
     // A code that looks like a formula is kept as text.
     expect(row('Oak boards')[col('Code')]).toBe("'=OAK");
-    expect(row('Oat')).toEqual(['Finish', 'Oat', '', 'Walls 1, 2, 3, 4 · 2 coats at 10 m²/L', '9', 'L', '5 L + 2.5 L + 2 × 0.75 L for 8.6 L', '12.50', 'L', '112.50', 'Paint mill', 'OAT-1', '']);
-    expect(records.slice(-3).map((r) => [r[col('Name')], r[col('Total')]])).toEqual([['New pieces', '1829.98'], ['Finishes', '992.50'], ['Budget', '2822.48']]);
+    expect(row('Oat')).toEqual([
+      'Finish',
+      'Oat',
+      '',
+      'Walls 1, 2, 3, 4 · 2 coats at 10 m²/L',
+      '9',
+      'L',
+      '5 L + 2.5 L + 2 × 0.75 L for 8.6 L',
+      '12.50',
+      'L',
+      '112.50',
+      'Paint mill',
+      'OAT-1',
+      '',
+    ]);
+    expect(records.slice(-3).map((r) => [r[col('Name')], r[col('Total')]])).toEqual([
+      ['New pieces', '1829.98'],
+      ['Finishes', '992.50'],
+      ['Budget', '2822.48'],
+    ]);
   });
 });
 
@@ -165,7 +259,10 @@ describe('GET /api/projects/:projectId/takeoff', () => {
 
     const b = await viewer.get(`/api/projects/${projectId}/takeoff`).query({ options: optionB });
     // Walls 43 m² + ceiling 20 m² = 63 m² × 2 ÷ 10 = 12.6 L; no floor finish: 22 m² to order, unassigned.
-    expect(b.body.rooms[0]).toMatchObject({ counted: { id: optionB }, takeoff: { paints: [{ litres: 12.6 }], coverings: [], bare: { floorOrderM2: 22 } } });
+    expect(b.body.rooms[0]).toMatchObject({
+      counted: { id: optionB },
+      takeoff: { paints: [{ litres: 12.6 }], coverings: [], bare: { floorOrderM2: 22 } },
+    });
   });
 
   it('refuses a counted option that is not an id, and another studio’s project', async () => {
@@ -190,9 +287,14 @@ describe('GET /api/projects/:projectId/compare', () => {
     expect(a.freeFloorPercent).toBeLessThan(b.freeFloorPercent);
 
     // The client chooses B through a presentation (the choice row as the client route writes it).
-    const p = await owner.post(`/api/projects/${projectId}/presentations`).send({ rooms: [{ roomId, optionIds: [optionA, optionB] }] });
+    const p = await owner
+      .post(`/api/projects/${projectId}/presentations`)
+      .send({ rooms: [{ roomId, optionIds: [optionA, optionB] }] });
     expect(p.status).toBe(201);
-    await t.db.insertInto('choices').values({ presentation_id: p.body.presentation.id, room_id: roomId, option_id: optionB, comment: '' }).execute();
+    await t.db
+      .insertInto('choices')
+      .values({ presentation_id: p.body.presentation.id, room_id: roomId, option_id: optionB, comment: '' })
+      .execute();
     const after = await viewer.get(`/api/projects/${projectId}/compare`);
     expect(after.body.rooms[0].chosenOptionId).toBe(optionB);
     expect(after.body.rooms[0].options.map((o: { chosen: boolean }) => o.chosen)).toEqual([false, true]);

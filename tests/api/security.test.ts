@@ -15,7 +15,13 @@ afterAll(() => t.close());
 
 /** The directives of a Content-Security-Policy header, by name. */
 function directives(header: string): Map<string, string[]> {
-  return new Map(header.split(';').map((d) => d.trim().split(/\s+/)).filter((d) => d[0]).map(([name, ...values]) => [name, values]));
+  return new Map(
+    header
+      .split(';')
+      .map((d) => d.trim().split(/\s+/))
+      .filter((d) => d[0])
+      .map(([name, ...values]) => [name, values]),
+  );
 }
 
 describe('security headers', () => {
@@ -65,22 +71,46 @@ describe('cross-site request forgery', () => {
   it('refuses by Referer when the Origin is missing or "null"', async () => {
     expect((await agent.post('/api/clients').set('Referer', 'https://evil.example/page').send(newClient())).status).toBe(403);
     expect((await agent.post('/api/clients').set('Origin', 'null').send(newClient())).status).toBe(403);
-    expect((await agent.post('/api/clients').set('Origin', 'null').set('Referer', 'https://evil.example/').send(newClient())).status).toBe(403);
+    expect(
+      (await agent.post('/api/clients').set('Origin', 'null').set('Referer', 'https://evil.example/').send(newClient())).status,
+    ).toBe(403);
   });
 
   it('allows the configured public origin and the request’s own origin', async () => {
     expect((await agent.post('/api/clients').set('Origin', 'http://parlour.test').send(newClient())).status).toBe(201);
     expect((await agent.post('/api/clients').set('Referer', 'http://parlour.test/clients').send(newClient())).status).toBe(201);
-    expect((await agent.post('/api/clients').set('Host', 'studio.local:8080').set('Origin', 'http://studio.local:8080').send(newClient())).status).toBe(201);
-    expect((await agent.post('/api/clients').set('Host', 'studio.local:8080').set('Origin', 'http://studio.local:9090').send(newClient())).status).toBe(403);
+    expect(
+      (
+        await agent
+          .post('/api/clients')
+          .set('Host', 'studio.local:8080')
+          .set('Origin', 'http://studio.local:8080')
+          .send(newClient())
+      ).status,
+    ).toBe(201);
+    expect(
+      (
+        await agent
+          .post('/api/clients')
+          .set('Host', 'studio.local:8080')
+          .set('Origin', 'http://studio.local:9090')
+          .send(newClient())
+      ).status,
+    ).toBe(403);
   });
 
   it('leaves reads, cookie-less requests and the client link routes alone', async () => {
     expect((await agent.get('/api/clients').set('Origin', 'https://evil.example')).status).toBe(200);
-    const signIn = await request(t.app).post('/api/auth/sign-in').set('Origin', 'https://evil.example').send({ email: 'nobody@test.parlour', password: 'wrong-password-here' });
+    const signIn = await request(t.app)
+      .post('/api/auth/sign-in')
+      .set('Origin', 'https://evil.example')
+      .send({ email: 'nobody@test.parlour', password: 'wrong-password-here' });
     expect(signIn.status).toBe(401);
     const p = await presentedProject(agent);
-    const choice = await agent.put(`/api/p/${p.token}/rooms/${p.roomId}/choice`).set('Origin', 'null').send({ optionId: p.optionIds[1], comment: '' });
+    const choice = await agent
+      .put(`/api/p/${p.token}/rooms/${p.roomId}/choice`)
+      .set('Origin', 'null')
+      .send({ optionId: p.optionIds[1], comment: '' });
     expect(choice.status).toBe(200);
   });
 });
@@ -98,7 +128,9 @@ describe('rate limits in PostgreSQL', () => {
     expect(Number(over.headers['retry-after'])).toBeGreaterThan(0);
     // Another studio has its own count.
     const other = await signUpStudio(t.app, 'Quiet Studio');
-    expect((await other.agent.post('/api/studio/invites').send({ email: uniqueEmail('invitee'), role: 'viewer' })).status).toBe(201);
+    expect((await other.agent.post('/api/studio/invites').send({ email: uniqueEmail('invitee'), role: 'viewer' })).status).toBe(
+      201,
+    );
   });
 
   it('weighs the previous window so a burst at the boundary cannot double the limit', async () => {

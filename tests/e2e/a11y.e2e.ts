@@ -13,45 +13,93 @@ beforeAll(async () => {
 });
 afterAll(() => browser?.close());
 
-const SHELL = { outline: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]], openings: [{ id: 'd1', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }] };
+const SHELL = {
+  outline: [
+    [0, 0],
+    [4200, 0],
+    [4200, 3600],
+    [0, 3600],
+  ],
+  openings: [{ id: 'd1', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
+};
 const PIECES = [
-  { id: 'sofa', name: 'Three-seat sofa', x: 2100, y: 3000, width: 2100, depth: 900, height: 850, rotation: 180, status: 'new', price: 1450 },
+  {
+    id: 'sofa',
+    name: 'Three-seat sofa',
+    x: 2100,
+    y: 3000,
+    width: 2100,
+    depth: 900,
+    height: 850,
+    rotation: 180,
+    status: 'new',
+    price: 1450,
+  },
   { id: 'table', name: 'Low table', x: 2100, y: 1900, width: 1100, depth: 600, height: 420, status: 'existing' },
 ];
 
-interface Made { projectId: string; roomId: string; finishId: string; photoId: string; link: string; mailId: string }
+interface Made {
+  projectId: string;
+  roomId: string;
+  finishId: string;
+  photoId: string;
+  link: string;
+  mailId: string;
+}
 
 /** A client, project, room with two options, a paint and a photo finish, and a sent presentation, through the API. */
 async function makeStudioContent(page: Page, clientEmail: string): Promise<Made> {
-  return page.evaluate(async ({ email, shell, pieces }) => {
-    const call = async (path: string, method: string, body?: object | FormData) => {
-      const form = body instanceof FormData;
-      const res = await fetch(path, { method, headers: form || !body ? {} : { 'content-type': 'application/json' }, body: form ? body : body ? JSON.stringify(body) : undefined });
-      if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
-      return res.json();
-    };
-    const { project } = await call('/api/projects', 'POST', { name: 'Quayside flat', newClient: { name: 'Noor Ashby', email } });
-    const made = await call(`/api/projects/${project.id}/rooms`, 'POST', { name: 'Living room', shell });
-    const second = await call(`/api/rooms/${made.room.id}/options`, 'POST', { name: 'Walnut' });
-    for (const o of [made.options[0], second.option]) await call(`/api/options/${o.id}`, 'PUT', { doc: { pieces }, version: o.version });
-    const paint = await call('/api/finishes/paints', 'POST', { name: 'Harbour blue', colourHex: '#3d5a73' });
-    const canvas = document.createElement('canvas');
-    canvas.width = 320;
-    canvas.height = 240;
-    const g = canvas.getContext('2d')!;
-    for (let x = 0; x < 320; x += 20) {
-      g.fillStyle = x % 40 ? '#a0784c' : '#8a6440';
-      g.fillRect(x, 0, 20, 240);
-    }
-    const blob = await new Promise<Blob>((r) => canvas.toBlob((b) => r(b!), 'image/png'));
-    const form = new FormData();
-    form.append('photos', blob, 'boards.png');
-    const photo = await call('/api/finishes/photos', 'POST', form);
-    const presentation = await call(`/api/projects/${project.id}/presentations`, 'POST', { rooms: [{ roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] }], message: 'Two ideas.', showPrices: true });
-    await call(`/api/presentations/${presentation.presentation.id}/send`, 'POST', {});
-    const outbox = await call('/api/outbox', 'GET');
-    return { projectId: project.id, roomId: made.room.id, finishId: paint.finish.id, photoId: photo.finishes[0].id, link: presentation.presentation.link, mailId: outbox.messages[0].id };
-  }, { email: clientEmail, shell: SHELL, pieces: PIECES });
+  return page.evaluate(
+    async ({ email, shell, pieces }) => {
+      const call = async (path: string, method: string, body?: object | FormData) => {
+        const form = body instanceof FormData;
+        const res = await fetch(path, {
+          method,
+          headers: form || !body ? {} : { 'content-type': 'application/json' },
+          body: form ? body : body ? JSON.stringify(body) : undefined,
+        });
+        if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
+        return res.json();
+      };
+      const { project } = await call('/api/projects', 'POST', {
+        name: 'Quayside flat',
+        newClient: { name: 'Noor Ashby', email },
+      });
+      const made = await call(`/api/projects/${project.id}/rooms`, 'POST', { name: 'Living room', shell });
+      const second = await call(`/api/rooms/${made.room.id}/options`, 'POST', { name: 'Walnut' });
+      for (const o of [made.options[0], second.option])
+        await call(`/api/options/${o.id}`, 'PUT', { doc: { pieces }, version: o.version });
+      const paint = await call('/api/finishes/paints', 'POST', { name: 'Harbour blue', colourHex: '#3d5a73' });
+      const canvas = document.createElement('canvas');
+      canvas.width = 320;
+      canvas.height = 240;
+      const g = canvas.getContext('2d')!;
+      for (let x = 0; x < 320; x += 20) {
+        g.fillStyle = x % 40 ? '#a0784c' : '#8a6440';
+        g.fillRect(x, 0, 20, 240);
+      }
+      const blob = await new Promise<Blob>((r) => canvas.toBlob((b) => r(b!), 'image/png'));
+      const form = new FormData();
+      form.append('photos', blob, 'boards.png');
+      const photo = await call('/api/finishes/photos', 'POST', form);
+      const presentation = await call(`/api/projects/${project.id}/presentations`, 'POST', {
+        rooms: [{ roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] }],
+        message: 'Two ideas.',
+        showPrices: true,
+      });
+      await call(`/api/presentations/${presentation.presentation.id}/send`, 'POST', {});
+      const outbox = await call('/api/outbox', 'GET');
+      return {
+        projectId: project.id,
+        roomId: made.room.id,
+        finishId: paint.finish.id,
+        photoId: photo.finishes[0].id,
+        link: presentation.presentation.link,
+        mailId: outbox.messages[0].id,
+      };
+    },
+    { email: clientEmail, shell: SHELL, pieces: PIECES },
+  );
 }
 
 /** Waits until the page has settled: the heading shows and no request is still running. */

@@ -12,7 +12,11 @@ afterAll(() => browser?.close());
 
 async function newProject(page: Page): Promise<string> {
   return page.evaluate(async () => {
-    const res = await fetch('/api/projects', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: 'Shapes', newClient: { name: 'Shape client' } }) });
+    const res = await fetch('/api/projects', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ name: 'Shapes', newClient: { name: 'Shape client' } }),
+    });
     return (await res.json()).project.id as string;
   });
 }

@@ -14,22 +14,55 @@ describe('the Check step', () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Check Studio');
     const url = await page.evaluate(async () => {
-      const json = (method: string, body: unknown) => ({ method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-      const project = (await (await fetch('/api/projects', json('POST', { name: 'Check flat', newClient: { name: 'C' } }))).json()).project;
-      const created = await (await fetch(`/api/projects/${project.id}/rooms`, json('POST', {
-        name: 'Bedroom',
-        shell: {
-          outline: [[0, 0], [4000, 0], [4000, 3500], [0, 3500]],
-          // Door in the top wall, 300–1120 mm from the left corner, opening into the room.
-          openings: [{ id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
-        },
-      }))).json();
+      const json = (method: string, body: unknown) => ({
+        method,
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(body),
+      });
+      const project = (
+        await (await fetch('/api/projects', json('POST', { name: 'Check flat', newClient: { name: 'C' } }))).json()
+      ).project;
+      const created = await (
+        await fetch(
+          `/api/projects/${project.id}/rooms`,
+          json('POST', {
+            name: 'Bedroom',
+            shell: {
+              outline: [
+                [0, 0],
+                [4000, 0],
+                [4000, 3500],
+                [0, 3500],
+              ],
+              // Door in the top wall, 300–1120 mm from the left corner, opening into the room.
+              openings: [{ id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
+            },
+          }),
+        )
+      ).json();
       const option = created.options[0];
       // A wardrobe right inside the door, in the leaf's sweep (x 300–1120, y 0–820).
-      await fetch(`/api/options/${option.id}`, json('PUT', {
-        version: option.version,
-        doc: { pieces: [{ id: 'wardrobe', name: 'Wardrobe', x: 800, y: 700, width: 1000, depth: 600, height: 2000, rotation: 0, status: 'existing' }] },
-      }));
+      await fetch(
+        `/api/options/${option.id}`,
+        json('PUT', {
+          version: option.version,
+          doc: {
+            pieces: [
+              {
+                id: 'wardrobe',
+                name: 'Wardrobe',
+                x: 800,
+                y: 700,
+                width: 1000,
+                depth: 600,
+                height: 2000,
+                rotation: 0,
+                status: 'existing',
+              },
+            ],
+          },
+        }),
+      );
       return `/projects/${project.id}/rooms/${created.room.id}`;
     });
     await page.goto(url);

@@ -14,18 +14,47 @@ beforeAll(async () => {
 });
 afterAll(() => browser?.close());
 
-const pct = (values: number[], p: number) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(values.length * p))];
+const pct = (values: number[], p: number) =>
+  [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(values.length * p))];
 
 describe('editor speed (measured, not judged)', () => {
   it('drags a piece across a room of 60 pieces', async () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Speed Studio');
     const url = await page.evaluate(async () => {
-      const json = (method: string, body: unknown) => ({ method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-      const project = (await (await fetch('/api/projects', json('POST', { name: 'Busy flat', newClient: { name: 'S' } }))).json()).project;
-      const room = await (await fetch(`/api/projects/${project.id}/rooms`, json('POST', { name: 'Big room', shell: { outline: [[0, 0], [8000, 0], [8000, 6000], [0, 6000]] } }))).json();
+      const json = (method: string, body: unknown) => ({
+        method,
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(body),
+      });
+      const project = (await (await fetch('/api/projects', json('POST', { name: 'Busy flat', newClient: { name: 'S' } }))).json())
+        .project;
+      const room = await (
+        await fetch(
+          `/api/projects/${project.id}/rooms`,
+          json('POST', {
+            name: 'Big room',
+            shell: {
+              outline: [
+                [0, 0],
+                [8000, 0],
+                [8000, 6000],
+                [0, 6000],
+              ],
+            },
+          }),
+        )
+      ).json();
       const pieces = Array.from({ length: 60 }, (_, i) => ({
-        id: `p${i}`, name: `Piece ${i}`, x: 600 + (i % 10) * 700, y: 600 + Math.floor(i / 10) * 900, width: 400, depth: 350, height: 600, rotation: 0, status: 'new',
+        id: `p${i}`,
+        name: `Piece ${i}`,
+        x: 600 + (i % 10) * 700,
+        y: 600 + Math.floor(i / 10) * 900,
+        width: 400,
+        depth: 350,
+        height: 600,
+        rotation: 0,
+        status: 'new',
       }));
       await fetch(`/api/options/${room.options[0].id}`, json('PUT', { version: 1, doc: { pieces } }));
       return `/projects/${project.id}/rooms/${room.room.id}`;

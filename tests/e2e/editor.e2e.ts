@@ -11,9 +11,28 @@ afterAll(() => browser?.close());
 
 async function newRoom(page: Page): Promise<string> {
   return page.evaluate(async () => {
-    const json = (body: unknown) => ({ method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
+    const json = (body: unknown) => ({
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify(body),
+    });
     const project = await (await fetch('/api/projects', json({ name: 'Editor flat', newClient: { name: 'E client' } }))).json();
-    const room = await (await fetch(`/api/projects/${project.project.id}/rooms`, json({ name: 'Sitting room', shell: { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] } }))).json();
+    const room = await (
+      await fetch(
+        `/api/projects/${project.project.id}/rooms`,
+        json({
+          name: 'Sitting room',
+          shell: {
+            outline: [
+              [0, 0],
+              [3000, 0],
+              [3000, 3000],
+              [0, 3000],
+            ],
+          },
+        }),
+      )
+    ).json();
     return `/projects/${project.project.id}/rooms/${room.room.id}`;
   });
 }
@@ -104,7 +123,10 @@ describe('the room editor', () => {
 
     // Everything is there after a reload, which reopens the step and option the designer was on.
     await page.reload();
-    await page.getByRole('button', { name: /Furnish/ }).and(page.locator('[aria-current=step]')).waitFor();
+    await page
+      .getByRole('button', { name: /Furnish/ })
+      .and(page.locator('[aria-current=step]'))
+      .waitFor();
     await page.getByRole('tab', { name: 'Option A', selected: true }).waitFor();
     await page.getByRole('button', { name: /Outline/ }).click();
     await page.getByLabel('Wall 7', { exact: true }).waitFor();

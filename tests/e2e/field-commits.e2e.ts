@@ -30,22 +30,58 @@ async function typeThenEnter(page: Page, field: Locator, text: string) {
 
 async function roomWithPieces(page: Page) {
   return page.evaluate(async () => {
-    const post = async (url: string, body: unknown) => (await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json();
+    const post = async (url: string, body: unknown) =>
+      (await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json();
     const { project } = await post('/api/projects', { name: 'Field walk', newClient: { name: 'Field client' } });
     const { room } = await post(`/api/projects/${project.id}/rooms`, {
       name: 'Study',
       shell: {
-        outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+        outline: [
+          [0, 0],
+          [4000, 0],
+          [4000, 3000],
+          [0, 3000],
+        ],
         openings: [{ id: 'window-1', type: 'window', wall: 0, offset: 1000, width: 1200, height: 1200, sill: 900 }],
       },
     });
     const detail = await (await fetch(`/api/rooms/${room.id}`)).json();
     const option = detail.options[0];
     const pieces = [
-      { id: 'armchair', name: 'Armchair', x: 1000, y: 1500, width: 800, depth: 800, height: 800, rotation: 0, elevation: 0, status: 'new', price: null, placed: true },
-      { id: 'tv-unit', name: 'TV unit', x: 3000, y: 1500, width: 1200, depth: 400, height: 500, rotation: 0, elevation: 0, status: 'new', price: null, placed: true },
+      {
+        id: 'armchair',
+        name: 'Armchair',
+        x: 1000,
+        y: 1500,
+        width: 800,
+        depth: 800,
+        height: 800,
+        rotation: 0,
+        elevation: 0,
+        status: 'new',
+        price: null,
+        placed: true,
+      },
+      {
+        id: 'tv-unit',
+        name: 'TV unit',
+        x: 3000,
+        y: 1500,
+        width: 1200,
+        depth: 400,
+        height: 500,
+        rotation: 0,
+        elevation: 0,
+        status: 'new',
+        price: null,
+        placed: true,
+      },
     ];
-    await fetch(`/api/options/${option.id}`, { method: 'PUT', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ version: option.version, doc: { ...option.doc, pieces } }) });
+    await fetch(`/api/options/${option.id}`, {
+      method: 'PUT',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ version: option.version, doc: { ...option.doc, pieces } }),
+    });
     return { projectId: project.id as string, roomId: room.id as string };
   });
 }

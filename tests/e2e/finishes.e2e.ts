@@ -16,7 +16,10 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 async function setSize(page: Page, rowName: string, category: string, widthCm: string, heightCm: string) {
-  await page.getByRole('listitem', { name: `Upload of ${rowName}` }).getByRole('link', { name: 'Set size and crop' }).click();
+  await page
+    .getByRole('listitem', { name: `Upload of ${rowName}` })
+    .getByRole('link', { name: 'Set size and crop' })
+    .click();
   await page.getByRole('heading', { name: 'Crop' }).waitFor();
   await page.getByLabel('Category').selectOption({ label: category });
   await page.getByLabel('Real width').fill(widthCm);
@@ -40,7 +43,10 @@ describe('the finish library', () => {
       { name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not a photo at all') },
     ]);
     for (const name of ['oak-boards.jpg', 'stone-tile.jpg']) {
-      await page.getByRole('listitem', { name: `Upload of ${name}` }).getByText('Ready').waitFor({ timeout: 30_000 });
+      await page
+        .getByRole('listitem', { name: `Upload of ${name}` })
+        .getByText('Ready')
+        .waitFor({ timeout: 30_000 });
     }
     const refused = page.getByRole('listitem', { name: 'Upload of notes.jpg' });
     await refused.getByText('Failed').waitFor();
@@ -57,7 +63,13 @@ describe('the finish library', () => {
     ]);
     await page.getByText('Processing', { exact: true }).waitFor({ state: 'hidden', timeout: 30_000 });
     await page.getByRole('img', { name: 'Oak boards repeated three by three' }).waitFor();
-    await expect.poll(() => page.getByRole('img', { name: 'Oak boards repeated three by three' }).evaluate((el) => (el as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('img', { name: 'Oak boards repeated three by three' })
+          .evaluate((el) => (el as HTMLImageElement).naturalWidth),
+      )
+      .toBeGreaterThan(0);
     await page.screenshot({ path: join(SHOTS, 'finish-detail.png'), fullPage: true });
     await page.getByRole('link', { name: 'Finish library' }).first().click();
 

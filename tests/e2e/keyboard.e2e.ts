@@ -20,7 +20,10 @@ const focusedName = (page: Page) =>
   page.evaluate(() => {
     const el = document.activeElement as HTMLElement | null;
     if (!el || el === document.body) return '';
-    const byIds = (el.getAttribute('aria-labelledby') ?? '').split(/\s+/).map((id) => document.getElementById(id)?.innerText ?? '').join(' ');
+    const byIds = (el.getAttribute('aria-labelledby') ?? '')
+      .split(/\s+/)
+      .map((id) => document.getElementById(id)?.innerText ?? '')
+      .join(' ');
     const labels = 'labels' in el ? [...((el as HTMLInputElement).labels ?? [])].map((l) => l.innerText).join(' ') : '';
     return (el.getAttribute('aria-label') || byIds.trim() || labels || el.innerText || '').replace(/\s+/g, ' ').trim();
   });
@@ -37,26 +40,56 @@ async function tabTo(page: Page, name: RegExp, key: 'Tab' | 'Shift+Tab' = 'Tab')
   throw new Error(`Tab never reached a control named ${name}`);
 }
 
-const SHELL = { outline: [[0, 0], [4000, 0], [4000, 3400], [0, 3400]], openings: [{ id: 'd1', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }] };
+const SHELL = {
+  outline: [
+    [0, 0],
+    [4000, 0],
+    [4000, 3400],
+    [0, 3400],
+  ],
+  openings: [{ id: 'd1', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
+};
 
 async function makeProject(page: Page, clientEmail: string): Promise<string> {
-  return page.evaluate(async ({ email, shell }) => {
-    const call = async (path: string, method: string, body: object) => {
-      const res = await fetch(path, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-      if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
-      return res.json();
-    };
-    const { project } = await call('/api/projects', 'POST', { name: 'Keyside cottage', newClient: { name: 'Tove Keyes', email } });
-    for (const name of ['Snug', 'Study']) {
-      const made = await call(`/api/projects/${project.id}/rooms`, 'POST', { name, shell });
-      const second = await call(`/api/rooms/${made.room.id}/options`, 'POST', { name: 'Second thoughts' });
-      for (const [i, o] of [made.options[0], second.option].entries()) {
-        const pieces = [{ id: `sofa${i}`, name: i ? 'Corner sofa' : 'Two-seat sofa', x: 2000, y: 2800, width: 1800, depth: 900, height: 820, rotation: 180, status: 'new' }];
-        await call(`/api/options/${o.id}`, 'PUT', { name: i ? 'Second thoughts' : 'First idea', doc: { pieces }, version: o.version });
+  return page.evaluate(
+    async ({ email, shell }) => {
+      const call = async (path: string, method: string, body: object) => {
+        const res = await fetch(path, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
+        if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
+        return res.json();
+      };
+      const { project } = await call('/api/projects', 'POST', {
+        name: 'Keyside cottage',
+        newClient: { name: 'Tove Keyes', email },
+      });
+      for (const name of ['Snug', 'Study']) {
+        const made = await call(`/api/projects/${project.id}/rooms`, 'POST', { name, shell });
+        const second = await call(`/api/rooms/${made.room.id}/options`, 'POST', { name: 'Second thoughts' });
+        for (const [i, o] of [made.options[0], second.option].entries()) {
+          const pieces = [
+            {
+              id: `sofa${i}`,
+              name: i ? 'Corner sofa' : 'Two-seat sofa',
+              x: 2000,
+              y: 2800,
+              width: 1800,
+              depth: 900,
+              height: 820,
+              rotation: 180,
+              status: 'new',
+            },
+          ];
+          await call(`/api/options/${o.id}`, 'PUT', {
+            name: i ? 'Second thoughts' : 'First idea',
+            doc: { pieces },
+            version: o.version,
+          });
+        }
       }
-    }
-    return project.id as string;
-  }, { email: clientEmail, shell: SHELL });
+      return project.id as string;
+    },
+    { email: clientEmail, shell: SHELL },
+  );
 }
 
 describe('keyboard only', () => {

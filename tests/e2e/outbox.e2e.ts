@@ -24,7 +24,11 @@ describe('the Outbox', () => {
     const invited = Array.from({ length: 21 }, () => uniqueEmail('pending'));
     await owner.page.evaluate(async (emails) => {
       for (const email of emails) {
-        const res = await fetch('/api/studio/invites', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, role: 'viewer' }) });
+        const res = await fetch('/api/studio/invites', {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ email, role: 'viewer' }),
+        });
         if (res.status !== 201) throw new Error(`invite: ${res.status}`);
       }
     }, invited);

@@ -14,7 +14,14 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 // 6 m × 5 m with a 3.5 m × 3 m block out of its top right: the bounding box's centre is outside the room.
-const ELL: [number, number][] = [[0, 0], [2500, 0], [2500, 3000], [6000, 3000], [6000, 5000], [0, 5000]];
+const ELL: [number, number][] = [
+  [0, 0],
+  [2500, 0],
+  [2500, 3000],
+  [6000, 3000],
+  [6000, 5000],
+  [0, 5000],
+];
 const ADDS = ['Three-seat sofa', 'Armchair', 'Armchair', 'Coffee table', 'Side table', 'Bedside table', 'Two-seat sofa'];
 
 async function savedPieces(page: Page, roomId: string): Promise<Piece[]> {
@@ -26,7 +33,10 @@ describe('where added pieces land', () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Placement Studio');
     const { projectId, roomId } = await page.evaluate(async (outline) => {
-      const post = async (url: string, body: unknown) => (await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json();
+      const post = async (url: string, body: unknown) =>
+        (
+          await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })
+        ).json();
       const { project } = await post('/api/projects', { name: 'Corner flat', newClient: { name: 'Corner client' } });
       const { room } = await post(`/api/projects/${project.id}/rooms`, { name: 'Sitting room', shell: { outline } });
       return { projectId: project.id as string, roomId: room.id as string };
@@ -34,7 +44,10 @@ describe('where added pieces land', () => {
     await page.goto(`/projects/${projectId}/rooms/${roomId}`);
     await page.getByRole('button', { name: /Furnish/ }).click();
     for (const name of ADDS) {
-      await page.getByRole('button', { name: `Add ${name}`, exact: true }).first().click();
+      await page
+        .getByRole('button', { name: `Add ${name}`, exact: true })
+        .first()
+        .click();
       await page.getByRole('button', { name: '← Catalogue' }).click();
     }
     // The eighth waits in the holding area first, then is placed in the room; the plan keeps its scale.
@@ -56,7 +69,8 @@ describe('where added pieces land', () => {
       const within = pieceFootprintMm({ ...p, width: p.width - 2, depth: p.depth - 2 });
       expect(boxInsideOutline(ELL, within), `${p.name} at ${p.x}, ${p.y} stands across a wall`).toBe(true);
       for (const q of pieces) {
-        if (q.id !== p.id) expect(boxesOverlap(pieceFootprintMm(p), pieceFootprintMm(q)), `${p.name} overlaps ${q.name}`).toBe(false);
+        if (q.id !== p.id)
+          expect(boxesOverlap(pieceFootprintMm(p), pieceFootprintMm(q)), `${p.name} overlaps ${q.name}`).toBe(false);
       }
     }
     await context.close();

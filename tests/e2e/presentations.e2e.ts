@@ -19,7 +19,9 @@ beforeAll(async () => {
 });
 afterAll(() => browser?.close());
 
-interface Manifest { [key: string]: { file: string; imports?: string[]; dynamicImports?: string[]; isEntry?: boolean } }
+interface Manifest {
+  [key: string]: { file: string; imports?: string[]; dynamicImports?: string[]; isEntry?: boolean };
+}
 
 /** Every JS file the presentation entry can load, by the build's own manifest. */
 function presentationFiles(): { allowed: Set<string>; appEntry: string } {
@@ -35,51 +37,108 @@ function presentationFiles(): { allowed: Set<string>; appEntry: string } {
   return { allowed, appEntry: manifest['index.html'].file };
 }
 
-const SHELL = (w: number, h: number) => ({ outline: [[0, 0], [w, 0], [w, h], [0, h]], openings: [{ id: 'd1', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }] });
-const box = (id: string, name: string, x: number, y: number, w: number, d: number, h: number, extra: object = {}) => ({ id, name, x, y, width: w, depth: d, height: h, status: 'new', ...extra });
+const SHELL = (w: number, h: number) => ({
+  outline: [
+    [0, 0],
+    [w, 0],
+    [w, h],
+    [0, h],
+  ],
+  openings: [{ id: 'd1', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
+});
+const box = (id: string, name: string, x: number, y: number, w: number, d: number, h: number, extra: object = {}) => ({
+  id,
+  name,
+  x,
+  y,
+  width: w,
+  depth: d,
+  height: h,
+  status: 'new',
+  ...extra,
+});
 
 /** A project with two rooms of two named options each, made through the API as the signed-in designer. */
 async function makeProject(page: Page, clientEmail: string): Promise<string> {
-  return page.evaluate(async ({ email, rooms }) => {
-    const call = async (path: string, method: string, body: object) => {
-      const res = await fetch(path, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-      if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
-      return res.json();
-    };
-    const { project } = await call('/api/projects', 'POST', { name: 'Fernhill cottage', newClient: { name: 'Juno and Amir Castellane', email } });
-    for (const r of rooms) {
-      const made = await call(`/api/projects/${project.id}/rooms`, 'POST', { name: r.name, shell: r.shell });
-      const second = await call(`/api/rooms/${made.room.id}/options`, 'POST', { name: r.options[1].name });
-      const ids = [made.options[0], second.option];
-      for (const [i, o] of ids.entries()) {
-        await call(`/api/options/${o.id}`, 'PUT', { name: r.options[i].name, note: r.options[i].note, doc: { pieces: r.options[i].pieces }, version: o.version });
+  return page.evaluate(
+    async ({ email, rooms }) => {
+      const call = async (path: string, method: string, body: object) => {
+        const res = await fetch(path, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
+        if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
+        return res.json();
+      };
+      const { project } = await call('/api/projects', 'POST', {
+        name: 'Fernhill cottage',
+        newClient: { name: 'Juno and Amir Castellane', email },
+      });
+      for (const r of rooms) {
+        const made = await call(`/api/projects/${project.id}/rooms`, 'POST', { name: r.name, shell: r.shell });
+        const second = await call(`/api/rooms/${made.room.id}/options`, 'POST', { name: r.options[1].name });
+        const ids = [made.options[0], second.option];
+        for (const [i, o] of ids.entries()) {
+          await call(`/api/options/${o.id}`, 'PUT', {
+            name: r.options[i].name,
+            note: r.options[i].note,
+            doc: { pieces: r.options[i].pieces },
+            version: o.version,
+          });
+        }
       }
-    }
-    return project.id as string;
-  }, {
-    email: clientEmail,
-    rooms: [
-      {
-        name: 'Sitting room',
-        shell: SHELL(4600, 3800),
-        options: [
-          { name: 'Window seat', note: 'The sofa under the window, the reading chair by the stove.', pieces: [box('sofa', 'Two-seat sofa', 2300, 3300, 1800, 900, 820, { price: 1280, supplierUrl: 'https://supplier.example/sofa', rotation: 180 }), box('chair', 'Reading chair', 900, 1200, 800, 800, 900, { status: 'existing' })] },
-          { name: 'Around the hearth', note: 'Two sofas facing each other across a low table.', pieces: [box('sofa-a', 'Three-seat sofa', 1000, 1900, 2100, 900, 820, { price: 1650, rotation: 90 }), box('sofa-b', 'Loveseat', 3600, 1900, 1500, 880, 820, { price: 990, rotation: 270 }), box('table', 'Low table', 2300, 1900, 1100, 600, 420, { price: 340 })] },
-        ],
-      },
-      {
-        name: 'Bedroom',
-        shell: SHELL(3600, 3400),
-        options: [
-          { name: 'Bed on the long wall', note: '', pieces: [box('bed', 'Double bed', 1800, 1100, 1400, 2000, 1000, { price: 900 })] },
-          { name: 'Bed facing the window', note: '', pieces: [box('bed', 'Double bed', 1100, 1700, 1400, 2000, 1000, { price: 900, rotation: 90 })] },
-        ],
-      },
-    ],
-  });
+      return project.id as string;
+    },
+    {
+      email: clientEmail,
+      rooms: [
+        {
+          name: 'Sitting room',
+          shell: SHELL(4600, 3800),
+          options: [
+            {
+              name: 'Window seat',
+              note: 'The sofa under the window, the reading chair by the stove.',
+              pieces: [
+                box('sofa', 'Two-seat sofa', 2300, 3300, 1800, 900, 820, {
+                  price: 1280,
+                  supplierUrl: 'https://supplier.example/sofa',
+                  rotation: 180,
+                }),
+                box('chair', 'Reading chair', 900, 1200, 800, 800, 900, { status: 'existing' }),
+              ],
+            },
+            {
+              name: 'Around the hearth',
+              note: 'Two sofas facing each other across a low table.',
+              pieces: [
+                box('sofa-a', 'Three-seat sofa', 1000, 1900, 2100, 900, 820, { price: 1650, rotation: 90 }),
+                box('sofa-b', 'Loveseat', 3600, 1900, 1500, 880, 820, { price: 990, rotation: 270 }),
+                box('table', 'Low table', 2300, 1900, 1100, 600, 420, { price: 340 }),
+              ],
+            },
+          ],
+        },
+        {
+          name: 'Bedroom',
+          shell: SHELL(3600, 3400),
+          options: [
+            {
+              name: 'Bed on the long wall',
+              note: '',
+              pieces: [box('bed', 'Double bed', 1800, 1100, 1400, 2000, 1000, { price: 900 })],
+            },
+            {
+              name: 'Bed facing the window',
+              note: '',
+              pieces: [box('bed', 'Double bed', 1100, 1700, 1400, 2000, 1000, { price: 900, rotation: 90 })],
+            },
+          ],
+        },
+      ],
+    },
+  );
 }
 
-const pressed = (page: Page, name: RegExp) => page.getByRole('group', { name: 'Options' }).getByRole('button', { name }).getAttribute('aria-pressed');
+const pressed = (page: Page, name: RegExp) =>
+  page.getByRole('group', { name: 'Options' }).getByRole('button', { name }).getAttribute('aria-pressed');
 
 describe('presentations', () => {
   it('the designer sends one; the client opens the link the designer copied from the Outbox, compares, chooses; the designer sees it and marks the project decided', async () => {
@@ -94,7 +153,9 @@ describe('presentations', () => {
     await designer.page.getByRole('button', { name: 'New presentation' }).click();
     const form = designer.page.getByRole('dialog');
     await form.getByText('Sitting room').waitFor();
-    await form.getByLabel('Message to the client').fill('Two ideas for each room. Have a wander round and tell us which feels right.');
+    await form
+      .getByLabel('Message to the client')
+      .fill('Two ideas for each room. Have a wander round and tell us which feels right.');
     await form.getByLabel('Show prices to the client').check();
     await form.getByRole('button', { name: 'Move Sitting room down' }).click();
     await form.getByRole('button', { name: 'Move Bedroom down' }).waitFor();
@@ -138,7 +199,10 @@ describe('presentations', () => {
     expect(await client.page.getByText('The sofa under the window').isVisible()).toBe(true);
 
     // One click, then the keys.
-    await client.page.getByRole('group', { name: 'Options' }).getByRole('button', { name: /Option B · Around the hearth/ }).click();
+    await client.page
+      .getByRole('group', { name: 'Options' })
+      .getByRole('button', { name: /Option B · Around the hearth/ })
+      .click();
     expect(await pressed(client.page, /Option B/)).toBe('true');
     await client.page.getByText('Two sofas facing each other').waitFor();
     await client.page.keyboard.press('1');
@@ -159,7 +223,9 @@ describe('presentations', () => {
     await client.page.getByRole('button', { name: 'Choose this option' }).click();
     const choose = client.page.getByRole('dialog');
     await choose.getByText('you are choosing').waitFor();
-    await choose.getByLabel('A comment for Alder Lane Studio (optional)').fill('The hearth one, please. Could the loveseat be green?');
+    await choose
+      .getByLabel('A comment for Alder Lane Studio (optional)')
+      .fill('The hearth one, please. Could the loveseat be green?');
     await client.page.screenshot({ path: join(shots, 'client-choose.png') });
     await choose.getByRole('button', { name: 'Choose this option' }).click();
     await choose.getByText('Thank you').waitFor();
@@ -188,8 +254,16 @@ describe('presentations', () => {
     await designer.page.screenshot({ path: join(shots, 'designer-choices.png'), fullPage: true });
 
     await designer.page.goto('/outbox');
-    await designer.page.getByRole('link', { name: new RegExp(`To ${designerEmail.replace(/[.+]/g, '\\$&')}.*Juno and Amir Castellane chose Option B · Around the hearth for Sitting room \\(Fernhill cottage\\)`) }).click();
-    await designer.page.getByText('Juno and Amir Castellane chose Option B · Around the hearth for Sitting room in Fernhill cottage.').waitFor();
+    await designer.page
+      .getByRole('link', {
+        name: new RegExp(
+          `To ${designerEmail.replace(/[.+]/g, '\\$&')}.*Juno and Amir Castellane chose Option B · Around the hearth for Sitting room \\(Fernhill cottage\\)`,
+        ),
+      })
+      .click();
+    await designer.page
+      .getByText('Juno and Amir Castellane chose Option B · Around the hearth for Sitting room in Fernhill cottage.')
+      .waitFor();
 
     // Mark as decided: the project is decided, and the client's page says so.
     await designer.page.goto(`/projects/${projectId}`);

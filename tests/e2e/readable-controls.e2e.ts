@@ -17,8 +17,14 @@ async function clipped(page: Page, where: string): Promise<string[]> {
   const found = await page.evaluate(() => {
     const canvas = document.createElement('canvas').getContext('2d')!;
     const out: string[] = [];
-    const name = (el: Element) => `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ''} "${(el as HTMLInputElement).value ?? el.textContent ?? ''}"`.slice(0, 80);
-    const scope = document.querySelectorAll('main input:not([type=checkbox]):not([type=radio]):not([type=color]):not(.sr-only), main select, main button, main label');
+    const name = (el: Element) =>
+      `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ''} "${(el as HTMLInputElement).value ?? el.textContent ?? ''}"`.slice(
+        0,
+        80,
+      );
+    const scope = document.querySelectorAll(
+      'main input:not([type=checkbox]):not([type=radio]):not([type=color]):not(.sr-only), main select, main button, main label',
+    );
     for (const el of scope) {
       const box = el as HTMLElement;
       if (box.offsetParent === null || box.closest('.sr-only') || box.classList.contains('sr-only')) continue;
@@ -44,23 +50,55 @@ describe('controls are readable', () => {
     const page = await context.newPage();
     await signUpThroughForm(page, 'Readable Studio');
     const { projectId, roomId } = await page.evaluate(async () => {
-      const post = async (url: string, body: unknown) => (await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json();
+      const post = async (url: string, body: unknown) =>
+        (
+          await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })
+        ).json();
       const { project } = await post('/api/projects', { name: 'Widths', newClient: { name: 'Width client' } });
       const { room } = await post(`/api/projects/${project.id}/rooms`, {
         name: 'Sitting room',
         shell: {
-          outline: [[0, 0], [6198, 0], [6198, 2489], [3000, 2489], [3000, 5000], [0, 5000]],
+          outline: [
+            [0, 0],
+            [6198, 0],
+            [6198, 2489],
+            [3000, 2489],
+            [3000, 5000],
+            [0, 5000],
+          ],
           openings: [{ id: 'door-1', type: 'door', wall: 0, offset: 300, width: 838, height: 2032, hinge: 'start', swing: 'in' }],
         },
       });
       const detail = await (await fetch(`/api/rooms/${room.id}`)).json();
       const option = detail.options[0];
-      const pieces = [{ id: 'sofa', name: 'Three-seat sofa', x: 1500, y: 1500, width: 2134, depth: 914, height: 851, rotation: 0, elevation: 0, status: 'new', price: 1450, placed: true }];
-      await fetch(`/api/options/${option.id}`, { method: 'PUT', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ version: option.version, doc: { ...option.doc, pieces } }) });
+      const pieces = [
+        {
+          id: 'sofa',
+          name: 'Three-seat sofa',
+          x: 1500,
+          y: 1500,
+          width: 2134,
+          depth: 914,
+          height: 851,
+          rotation: 0,
+          elevation: 0,
+          status: 'new',
+          price: 1450,
+          placed: true,
+        },
+      ];
+      await fetch(`/api/options/${option.id}`, {
+        method: 'PUT',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ version: option.version, doc: { ...option.doc, pieces } }),
+      });
       return { projectId: project.id as string, roomId: room.id as string };
     });
     const problems: string[] = [];
-    for (const [width, height] of [[1280, 800], [1440, 900]]) {
+    for (const [width, height] of [
+      [1280, 800],
+      [1440, 900],
+    ]) {
       await page.setViewportSize({ width, height });
       for (const unit of ['cm', 'ftin']) {
         await page.goto(`/projects/${projectId}/rooms/${roomId}`);

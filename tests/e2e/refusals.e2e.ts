@@ -23,11 +23,23 @@ describe('refused values', () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Refusal Studio');
     const { projectId, roomId } = await page.evaluate(async () => {
-      const post = async (url: string, body: unknown) => (await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json();
+      const post = async (url: string, body: unknown) =>
+        (
+          await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })
+        ).json();
       const { project } = await post('/api/projects', { name: 'Tall windows', newClient: { name: 'Window client' } });
       const { room } = await post(`/api/projects/${project.id}/rooms`, {
         name: 'Bedroom',
-        shell: { outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]], wallHeight: 2400, openings: [{ id: 'window-962a2f30', type: 'window', wall: 0, offset: 1000, width: 1000, height: 1300, sill: 900 }] },
+        shell: {
+          outline: [
+            [0, 0],
+            [4000, 0],
+            [4000, 3000],
+            [0, 3000],
+          ],
+          wallHeight: 2400,
+          openings: [{ id: 'window-962a2f30', type: 'window', wall: 0, offset: 1000, width: 1000, height: 1300, sill: 900 }],
+        },
       });
       return { projectId: project.id as string, roomId: room.id as string };
     });

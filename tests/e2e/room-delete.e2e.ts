@@ -16,9 +16,17 @@ describe('deleting a room', () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Delete Studio');
     const projectId = await page.evaluate(async () => {
-      const post = async (url: string, body: unknown) => (await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json();
+      const post = async (url: string, body: unknown) =>
+        (
+          await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })
+        ).json();
       const { project } = await post('/api/projects', { name: 'Two rooms', newClient: { name: 'Delete client' } });
-      const outline = [[0, 0], [3000, 0], [3000, 3000], [0, 3000]];
+      const outline = [
+        [0, 0],
+        [3000, 0],
+        [3000, 3000],
+        [0, 3000],
+      ];
       const { room } = await post(`/api/projects/${project.id}/rooms`, { name: 'Box room', shell: { outline } });
       await post(`/api/rooms/${room.id}/options`, {});
       await post(`/api/projects/${project.id}/rooms`, { name: 'Landing', shell: { outline } });
@@ -30,7 +38,11 @@ describe('deleting a room', () => {
     const refusal = 'A presentation still shows this room. Withdraw it first.';
     await page.route('**/api/rooms/*', (route) =>
       route.request().method() === 'DELETE'
-        ? route.fulfill({ status: 409, contentType: 'application/json', body: JSON.stringify({ error: { code: 'presented', message: refusal } }) })
+        ? route.fulfill({
+            status: 409,
+            contentType: 'application/json',
+            body: JSON.stringify({ error: { code: 'presented', message: refusal } }),
+          })
         : route.continue(),
     );
     await page.getByRole('button', { name: 'Delete Landing' }).click();

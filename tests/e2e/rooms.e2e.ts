@@ -15,7 +15,11 @@ const planText = readFileSync(resolve(import.meta.dirname, '../../assets/plans/l
 
 async function newProject(page: Page, name: string): Promise<string> {
   return page.evaluate(async (n) => {
-    const res = await fetch('/api/projects', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: n, newClient: { name: 'Room client' } }) });
+    const res = await fetch('/api/projects', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ name: n, newClient: { name: 'Room client' } }),
+    });
     return (await res.json()).project.id as string;
   }, name);
 }
@@ -46,7 +50,9 @@ describe('rooms on a project', () => {
     expect(Number(await view.getAttribute('data-draw-calls'))).toBeGreaterThan(5);
 
     await page.goto(`/projects/${projectId}`);
-    await page.getByLabel('Plan file to import').setInputFiles({ name: 'living-room.json', mimeType: 'application/json', buffer: Buffer.from(planText) });
+    await page
+      .getByLabel('Plan file to import')
+      .setInputFiles({ name: 'living-room.json', mimeType: 'application/json', buffer: Buffer.from(planText) });
     await page.getByRole('heading', { name: 'Living room' }).waitFor();
     await page.getByRole('button', { name: /Check/ }).click();
     await page.getByRole('row', { name: /Net wall area 35\.20 m²/ }).waitFor();
@@ -56,7 +62,13 @@ describe('rooms on a project', () => {
     expect(file.suggestedFilename()).toBe('living-room.plan.json');
 
     await page.goto(`/projects/${projectId}`);
-    await page.getByLabel('Plan file to import').setInputFiles({ name: 'notes.json', mimeType: 'application/json', buffer: Buffer.from('{"format":"parlour-plan","version":1,"room":{"name":"x","outline":[[0,0],[1000,0]]},"option":{"name":"a"}}') });
+    await page.getByLabel('Plan file to import').setInputFiles({
+      name: 'notes.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(
+        '{"format":"parlour-plan","version":1,"room":{"name":"x","outline":[[0,0],[1000,0]]},"option":{"name":"a"}}',
+      ),
+    });
     await page.getByText(/This plan file cannot be read: room\.outline/).waitFor();
     await context.close();
   });
@@ -69,7 +81,17 @@ describe('rooms on a project', () => {
       const res = await fetch(`/api/projects/${pid}/rooms`, {
         method: 'POST',
         headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ name: 'Hall', shell: { outline: [[0, 0], [3000, 0], [3000, 2000], [0, 2000]] } }),
+        body: JSON.stringify({
+          name: 'Hall',
+          shell: {
+            outline: [
+              [0, 0],
+              [3000, 0],
+              [3000, 2000],
+              [0, 2000],
+            ],
+          },
+        }),
       });
       return (await res.json()).room.id as string;
     }, projectId);

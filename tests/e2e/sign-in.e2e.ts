@@ -22,7 +22,11 @@ describe('first sign-in', () => {
     const owner = await newPage(browser);
     const email = await signUpThroughForm(owner.page, 'Deep Link Studio');
     const projectId = await owner.page.evaluate(async () => {
-      const res = await fetch('/api/projects', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: 'Mill house', newClient: { name: 'Mill client' } }) });
+      const res = await fetch('/api/projects', {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ name: 'Mill house', newClient: { name: 'Mill client' } }),
+      });
       return (await res.json()).project.id as string;
     });
     await owner.context.close();

@@ -78,7 +78,11 @@ describe('a studio from sign-up to its first project', () => {
     // Even a hand-made request is refused.
     const status = await viewer.page.evaluate(async (url) => {
       const id = url.split('/').pop();
-      const res = await fetch(`/api/projects/${id}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: 'Hijacked' }) });
+      const res = await fetch(`/api/projects/${id}`, {
+        method: 'PATCH',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ name: 'Hijacked' }),
+      });
       return res.status;
     }, projectUrl);
     expect(status).toBe(403);
@@ -89,7 +93,10 @@ describe('a studio from sign-up to its first project', () => {
     await signUpThroughForm(stranger.page, 'Other Studio');
     await stranger.page.goto(projectUrl);
     await stranger.page.getByText('That project was not found.').waitFor();
-    const apiStatus = await stranger.page.evaluate(async (url) => (await fetch(`/api/projects/${url.split('/').pop()}`)).status, projectUrl);
+    const apiStatus = await stranger.page.evaluate(
+      async (url) => (await fetch(`/api/projects/${url.split('/').pop()}`)).status,
+      projectUrl,
+    );
     expect(apiStatus).toBe(404);
     await stranger.context.close();
     await context.close();

@@ -8,7 +8,14 @@ import { join, resolve } from 'node:path';
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import { launchBrowser } from './lib/browser';
 import { newPage, signUpThroughForm } from './lib/session';
-import { greyStoneTile, linenWeave, oakBoards, rawToPng, sprigWallpaper, type RawImage } from '../../server/services/images/generate';
+import {
+  greyStoneTile,
+  linenWeave,
+  oakBoards,
+  rawToPng,
+  sprigWallpaper,
+  type RawImage,
+} from '../../server/services/images/generate';
 
 const root = resolve(import.meta.dirname, '../..');
 const shots = join(root, '.test-output', 'walkthrough');
@@ -38,7 +45,13 @@ afterAll(async () => {
   await browser?.close();
 });
 
-interface DemoPhoto { name: string; category: string; repeatWidthMm: number; repeatHeightMm: number; draw: () => RawImage | Promise<RawImage> }
+interface DemoPhoto {
+  name: string;
+  category: string;
+  repeatWidthMm: number;
+  repeatHeightMm: number;
+  draw: () => RawImage | Promise<RawImage>;
+}
 // The demo library's drawings and real sizes (server/cli/seed-finishes.ts), uploaded as a designer would.
 const PHOTOS: DemoPhoto[] = [
   { name: 'Oak boards, natural oil', category: 'wood', repeatWidthMm: 720, repeatHeightMm: 1440, draw: () => oakBoards() },
@@ -58,17 +71,25 @@ const PAINTS = [
 ];
 
 async function call<T>(page: Page, path: string, method: string, body?: object): Promise<T> {
-  return page.evaluate(async ({ path, method, body }) => {
-    const res = await fetch(path, { method, headers: body ? { 'content-type': 'application/json' } : {}, body: body ? JSON.stringify(body) : undefined });
-    if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
-    return res.status === 204 ? null : res.json();
-  }, { path, method, body }) as Promise<T>;
+  return page.evaluate(
+    async ({ path, method, body }) => {
+      const res = await fetch(path, {
+        method,
+        headers: body ? { 'content-type': 'application/json' } : {},
+        body: body ? JSON.stringify(body) : undefined,
+      });
+      if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
+      return res.status === 204 ? null : res.json();
+    },
+    { path, method, body },
+  ) as Promise<T>;
 }
 
 /** The studio's finishes by name: the demo photos (uploaded and processed) and paints. */
 async function demoFinishes(page: Page): Promise<Record<string, string>> {
   const ids: Record<string, string> = {};
-  for (const p of PAINTS) ids[p.name] = (await call<{ finish: { id: string } }>(page, '/api/finishes/paints', 'POST', p)).finish.id;
+  for (const p of PAINTS)
+    ids[p.name] = (await call<{ finish: { id: string } }>(page, '/api/finishes/paints', 'POST', p)).finish.id;
   return { ...ids, ...(await uploadPhotos(page, PHOTOS)) };
 }
 
@@ -77,49 +98,106 @@ async function uploadPhotos(page: Page, photos: readonly DemoPhoto[]): Promise<R
   const ids: Record<string, string> = {};
   for (const photo of photos) {
     const b64 = (await rawToPng(await photo.draw())).toString('base64');
-    const id = await page.evaluate(async ({ b64, photo }) => {
-      const form = new FormData();
-      form.append('photos', new Blob([Uint8Array.from(atob(b64), (c) => c.charCodeAt(0))], { type: 'image/png' }), `${photo.name}.png`);
-      form.append('category', photo.category);
-      form.append('repeatWidthMm', String(photo.repeatWidthMm));
-      form.append('repeatHeightMm', String(photo.repeatHeightMm));
-      const made = await (await fetch('/api/finishes/photos', { method: 'POST', body: form })).json();
-      const finishId = made.finishes[0].id as string;
-      await fetch(`/api/finishes/${finishId}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: photo.name }) });
-      return finishId;
-    }, { b64, photo: { name: photo.name, category: photo.category, repeatWidthMm: photo.repeatWidthMm, repeatHeightMm: photo.repeatHeightMm } });
+    const id = await page.evaluate(
+      async ({ b64, photo }) => {
+        const form = new FormData();
+        form.append(
+          'photos',
+          new Blob([Uint8Array.from(atob(b64), (c) => c.charCodeAt(0))], { type: 'image/png' }),
+          `${photo.name}.png`,
+        );
+        form.append('category', photo.category);
+        form.append('repeatWidthMm', String(photo.repeatWidthMm));
+        form.append('repeatHeightMm', String(photo.repeatHeightMm));
+        const made = await (await fetch('/api/finishes/photos', { method: 'POST', body: form })).json();
+        const finishId = made.finishes[0].id as string;
+        await fetch(`/api/finishes/${finishId}`, {
+          method: 'PATCH',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ name: photo.name }),
+        });
+        return finishId;
+      },
+      {
+        b64,
+        photo: {
+          name: photo.name,
+          category: photo.category,
+          repeatWidthMm: photo.repeatWidthMm,
+          repeatHeightMm: photo.repeatHeightMm,
+        },
+      },
+    );
     ids[photo.name] = id;
   }
   for (const photo of photos) {
-    await expect.poll(async () => (await call<{ finish: { status: string } }>(page, `/api/finishes/${ids[photo.name]}`, 'GET')).finish.status, { timeout: 60_000 }).toBe('ready');
+    await expect
+      .poll(
+        async () => (await call<{ finish: { status: string } }>(page, `/api/finishes/${ids[photo.name]}`, 'GET')).finish.status,
+        { timeout: 60_000 },
+      )
+      .toBe('ready');
   }
   return ids;
 }
 
-interface Made { room: { id: string }; options: { id: string; version: number }[] }
+interface Made {
+  room: { id: string };
+  options: { id: string; version: number }[];
+}
 type Piece = { id: string; x: number; y: number; rotation?: number; placed?: boolean; finishId?: string };
 
 /** A room from a plan file with a second option, each option wearing its finishes (as the demo seed does). */
-async function roomFromPlan(page: Page, projectId: string, file: string, a: { name: string; finishes: object; pieceFinishes: Record<string, string> }, b: { name: string; note: string; finishes: object; pieceFinishes: Record<string, string>; change: (p: Piece) => Piece }) {
+async function roomFromPlan(
+  page: Page,
+  projectId: string,
+  file: string,
+  a: { name: string; finishes: object; pieceFinishes: Record<string, string> },
+  b: { name: string; note: string; finishes: object; pieceFinishes: Record<string, string>; change: (p: Piece) => Piece },
+) {
   const planFile = plan(file);
   const made = await call<Made>(page, `/api/projects/${projectId}/rooms/import`, 'POST', planFile);
-  const second = await call<{ option: { id: string; version: number } }>(page, `/api/rooms/${made.room.id}/options`, 'POST', { name: b.name });
-  const dress = (pieces: Piece[], finishes: Record<string, string>) => pieces.map((p) => (finishes[p.id] ? { ...p, finishId: finishes[p.id] } : p));
+  const second = await call<{ option: { id: string; version: number } }>(page, `/api/rooms/${made.room.id}/options`, 'POST', {
+    name: b.name,
+  });
+  const dress = (pieces: Piece[], finishes: Record<string, string>) =>
+    pieces.map((p) => (finishes[p.id] ? { ...p, finishId: finishes[p.id] } : p));
   const pieces = planFile.option.pieces as Piece[];
-  await call(page, `/api/options/${made.options[0].id}`, 'PUT', { name: a.name, doc: { pieces: dress(pieces, a.pieceFinishes), finishes: a.finishes }, version: made.options[0].version });
-  await call(page, `/api/options/${second.option.id}`, 'PUT', { name: b.name, note: b.note, doc: { pieces: dress(pieces.map(b.change), b.pieceFinishes), finishes: b.finishes }, version: second.option.version });
+  await call(page, `/api/options/${made.options[0].id}`, 'PUT', {
+    name: a.name,
+    doc: { pieces: dress(pieces, a.pieceFinishes), finishes: a.finishes },
+    version: made.options[0].version,
+  });
+  await call(page, `/api/options/${second.option.id}`, 'PUT', {
+    name: b.name,
+    note: b.note,
+    doc: { pieces: dress(pieces.map(b.change), b.pieceFinishes), finishes: b.finishes },
+    version: second.option.version,
+  });
   return { roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] };
 }
 
 /** The Canal Row flat as the demo seed makes it, presented; returns the client's link. */
 async function demoPresentation(page: Page): Promise<string> {
   const f = await demoFinishes(page);
-  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Canal Row flat', newClient: { name: 'The Harrow-Okonjo household' } });
-  const living = await roomFromPlan(page, project.id, 'l-shaped-living-room.json',
-    { name: 'Sofa by the wall', finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { sofa: f['Washed linen'] } },
+  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', {
+    name: 'Canal Row flat',
+    newClient: { name: 'The Harrow-Okonjo household' },
+  });
+  const living = await roomFromPlan(
+    page,
+    project.id,
+    'l-shaped-living-room.json',
     {
-      name: 'Conversation corner', note: 'The sofa faces the front window; the client’s armchairs sit opposite.',
-      finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } }, pieceFinishes: { sofa: f['Washed linen'] },
+      name: 'Sofa by the wall',
+      finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] },
+      pieceFinishes: { sofa: f['Washed linen'] },
+    },
+    {
+      name: 'Conversation corner',
+      note: 'The sofa faces the front window; the client’s armchairs sit opposite.',
+      finishes: { floor: f['Oak boards, natural oil'], walls: f['Sage hall'], wallOverrides: { '0': f['Deep harbour'] } },
+      pieceFinishes: { sofa: f['Washed linen'] },
       change: (p) => {
         if (p.id === 'sofa') return { ...p, x: 2000, y: 650, rotation: 0 };
         if (p.id === 'coffee-table') return { ...p, x: 2000, y: 1650, rotation: 0 };
@@ -127,12 +205,22 @@ async function demoPresentation(page: Page): Promise<string> {
         if (p.id === 'old-armchair') return { ...p, placed: true, x: 2700, y: 2750, rotation: 180 };
         return p;
       },
-    });
-  const bedroom = await roomFromPlan(page, project.id, 'bedroom.json',
-    { name: 'Bed on the long wall', finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] }, pieceFinishes: { bed: f['Washed linen'] } },
+    },
+  );
+  const bedroom = await roomFromPlan(
+    page,
+    project.id,
+    'bedroom.json',
     {
-      name: 'Bed under the window', note: 'The bed moves to the window wall; the wardrobe stays by the door.',
-      finishes: { floor: f['Grey stone tile'], walls: f['Morning oat'], wallOverrides: { '2': f['Sprig wallpaper'] } }, pieceFinishes: { bed: f['Washed linen'] },
+      name: 'Bed on the long wall',
+      finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'] },
+      pieceFinishes: { bed: f['Washed linen'] },
+    },
+    {
+      name: 'Bed under the window',
+      note: 'The bed moves to the window wall; the wardrobe stays by the door.',
+      finishes: { floor: f['Grey stone tile'], walls: f['Morning oat'], wallOverrides: { '2': f['Sprig wallpaper'] } },
+      pieceFinishes: { bed: f['Washed linen'] },
       change: (p) => {
         if (p.id === 'bed') return { ...p, x: 1800, y: 1075, rotation: 0 };
         if (p.id === 'bedside-left') return { ...p, x: 775, y: 250, rotation: 0 };
@@ -140,16 +228,30 @@ async function demoPresentation(page: Page): Promise<string> {
         if (p.id === 'chest') return { ...p, x: 3375, y: 1500, rotation: 90 };
         return p;
       },
-    });
+    },
+  );
   return present(page, project.id, [living, bedroom]);
 }
 
 async function present(page: Page, projectId: string, rooms: { roomId: string; optionIds: string[] }[]): Promise<string> {
-  const made = await call<{ presentation: { link: string } }>(page, `/api/projects/${projectId}/presentations`, 'POST', { rooms, message: 'Two ideas for each room.' });
+  const made = await call<{ presentation: { link: string } }>(page, `/api/projects/${projectId}/presentations`, 'POST', {
+    rooms,
+    message: 'Two ideas for each room.',
+  });
   return new URL(made.presentation.link).pathname;
 }
 
-const box = (id: string, x: number, y: number, w: number, d: number, h: number, extra: object = {}) => ({ id, name: id, x, y, width: w, depth: d, height: h, status: 'new', ...extra });
+const box = (id: string, x: number, y: number, w: number, d: number, h: number, extra: object = {}) => ({
+  id,
+  name: id,
+  x,
+  y,
+  width: w,
+  depth: d,
+  height: h,
+  status: 'new',
+  ...extra,
+});
 
 /**
  * A plain 4 × 3 m room with a door in the middle of its top wall (x 1590–2410 mm) and a window
@@ -157,26 +259,55 @@ const box = (id: string, x: number, y: number, w: number, d: number, h: number, 
  * step inside the door, facing the middle of the room (+z).
  */
 async function testRoomPresentation(page: Page): Promise<string> {
-  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Test box', newClient: { name: 'T' } });
+  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', {
+    name: 'Test box',
+    newClient: { name: 'T' },
+  });
   const shell = {
-    outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+    outline: [
+      [0, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ],
     openings: [
       { id: 'door', type: 'door', wall: 0, offset: 1590, width: 820, height: 2040, hinge: 'start', swing: 'in' },
       { id: 'window', type: 'window', wall: 2, offset: 1200, width: 1600, height: 1300, sill: 850 },
     ],
   };
   const made = await call<Made>(page, `/api/projects/${project.id}/rooms`, 'POST', { name: 'Box room', shell });
-  const second = await call<{ option: { id: string; version: number } }>(page, `/api/rooms/${made.room.id}/options`, 'POST', { name: 'With sideboard' });
-  await call(page, `/api/options/${made.options[0].id}`, 'PUT', { name: 'Table only', doc: { pieces: [box('table', 3000, 1500, 800, 800, 750)] }, version: made.options[0].version });
-  await call(page, `/api/options/${second.option.id}`, 'PUT', { doc: { pieces: [box('table', 3000, 1500, 800, 800, 750), box('sideboard', 3750, 1500, 1600, 450, 850, { rotation: 90 })] }, version: second.option.version });
+  const second = await call<{ option: { id: string; version: number } }>(page, `/api/rooms/${made.room.id}/options`, 'POST', {
+    name: 'With sideboard',
+  });
+  await call(page, `/api/options/${made.options[0].id}`, 'PUT', {
+    name: 'Table only',
+    doc: { pieces: [box('table', 3000, 1500, 800, 800, 750)] },
+    version: made.options[0].version,
+  });
+  await call(page, `/api/options/${second.option.id}`, 'PUT', {
+    doc: { pieces: [box('table', 3000, 1500, 800, 800, 750), box('sideboard', 3750, 1500, 1600, 450, 850, { rotation: 90 })] },
+    version: second.option.version,
+  });
   return present(page, project.id, [{ roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] }]);
 }
 
 /** A typical room: 8 walls, 6 openings (3 windows, 2 doors, a passage), 40 pieces, a photo floor and a papered wall. */
 async function typicalRoomPresentation(page: Page, f: Record<string, string>): Promise<string> {
-  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', { name: 'Typical room', newClient: { name: 'T' } });
+  const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', {
+    name: 'Typical room',
+    newClient: { name: 'T' },
+  });
   const shell = {
-    outline: [[0, 0], [6000, 0], [6000, 4000], [4500, 4000], [4500, 5500], [1500, 5500], [1500, 4500], [0, 4500]],
+    outline: [
+      [0, 0],
+      [6000, 0],
+      [6000, 4000],
+      [4500, 4000],
+      [4500, 5500],
+      [1500, 5500],
+      [1500, 4500],
+      [0, 4500],
+    ],
     openings: [
       { id: 'w1', type: 'window', wall: 0, offset: 800, width: 1500, height: 1300, sill: 850 },
       { id: 'w2', type: 'window', wall: 0, offset: 3500, width: 1500, height: 1300, sill: 850 },
@@ -189,19 +320,57 @@ async function typicalRoomPresentation(page: Page, f: Record<string, string>): P
   const made = await call<Made>(page, `/api/projects/${project.id}/rooms`, 'POST', { name: 'Big room', shell });
   const pieces = [];
   // 40 pieces of 16 kinds, six photo finishes worn as main and accent finishes across them.
-  const kinds = ['sofa', 'armchair', 'dining-chair', 'coffee-table', 'dining-table', 'bed', 'wardrobe', 'chest-of-drawers', 'bookcase', 'sideboard', 'floor-lamp', 'plant', 'rug', 'desk', 'kitchen-base-unit', 'wall-cabinet'];
-  const photos = ['Washed linen', 'Oak boards, natural oil', 'Grey stone tile', 'Sprig wallpaper', 'Wide oak veneer', 'Coarse linen'].map((n) => f[n]);
+  const kinds = [
+    'sofa',
+    'armchair',
+    'dining-chair',
+    'coffee-table',
+    'dining-table',
+    'bed',
+    'wardrobe',
+    'chest-of-drawers',
+    'bookcase',
+    'sideboard',
+    'floor-lamp',
+    'plant',
+    'rug',
+    'desk',
+    'kitchen-base-unit',
+    'wall-cabinet',
+  ];
+  const photos = [
+    'Washed linen',
+    'Oak boards, natural oil',
+    'Grey stone tile',
+    'Sprig wallpaper',
+    'Wide oak veneer',
+    'Coarse linen',
+  ].map((n) => f[n]);
   for (let i = 0; i < 40; i++) {
     const kind = kinds[i % kinds.length];
-    const look = { kind, elevation: kind === 'wall-cabinet' ? 1200 : 0, finishId: i % 2 === 0 ? photos[i % 6] : undefined, accentFinishId: i % 3 === 0 ? photos[(i + 1) % 6] : undefined, accentColour: '#5b4636' };
-    pieces.push(box(`p${i}`, 700 + (i % 8) * 600, 700 + Math.floor(i / 8) * 650, 400, 350, kind === 'rug' ? 10 : 450 + (i % 5) * 100, look));
+    const look = {
+      kind,
+      elevation: kind === 'wall-cabinet' ? 1200 : 0,
+      finishId: i % 2 === 0 ? photos[i % 6] : undefined,
+      accentFinishId: i % 3 === 0 ? photos[(i + 1) % 6] : undefined,
+      accentColour: '#5b4636',
+    };
+    pieces.push(
+      box(`p${i}`, 700 + (i % 8) * 600, 700 + Math.floor(i / 8) * 650, 400, 350, kind === 'rug' ? 10 : 450 + (i % 5) * 100, look),
+    );
   }
-  const doc = { pieces, finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'], wallOverrides: { '3': f['Sprig wallpaper'] } } };
+  const doc = {
+    pieces,
+    finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'], wallOverrides: { '3': f['Sprig wallpaper'] } },
+  };
   await call(page, `/api/options/${made.options[0].id}`, 'PUT', { doc, version: made.options[0].version });
   return present(page, project.id, [{ roomId: made.room.id, optionIds: [made.options[0].id] }]);
 }
 
-async function openClient(path: string, viewport = { width: 1280, height: 800 }): Promise<{ context: BrowserContext; page: Page; view: Locator }> {
+async function openClient(
+  path: string,
+  viewport = { width: 1280, height: 800 },
+): Promise<{ context: BrowserContext; page: Page; view: Locator }> {
   const { context, page } = await newPage(browser);
   await page.setViewportSize(viewport);
   await page.goto(`${path}#room-1`);
@@ -211,7 +380,8 @@ async function openClient(path: string, viewport = { width: 1280, height: 800 })
   return { context, page, view };
 }
 
-const cameraOf = async (view: Locator) => (await view.getAttribute('data-camera'))!.split(',').map(Number) as [number, number, number];
+const cameraOf = async (view: Locator) =>
+  (await view.getAttribute('data-camera'))!.split(',').map(Number) as [number, number, number];
 const num = async (view: Locator, name: string) => Number(await view.getAttribute(`data-${name}`));
 
 /**
@@ -240,7 +410,8 @@ async function drawnShare(view: Locator): Promise<number> {
     ctx.drawImage(canvas, 0, 0, 64, 40);
     const data = ctx.getImageData(0, 0, 64, 40).data;
     let drawn = 0;
-    for (let i = 0; i < data.length; i += 4) if (Math.abs(data[i] - 0xf7) + Math.abs(data[i + 1] - 0xf3) + Math.abs(data[i + 2] - 0xec) > 24) drawn++;
+    for (let i = 0; i < data.length; i += 4)
+      if (Math.abs(data[i] - 0xf7) + Math.abs(data[i + 1] - 0xf3) + Math.abs(data[i + 2] - 0xec) > 24) drawn++;
     return drawn / (data.length / 4);
   });
 }
@@ -301,7 +472,11 @@ describe('the walk-through', () => {
     back.forEach((v, k) => expect(v).toBeCloseTo(before[k], 2));
 
     // With less motion asked for, a button jumps: the first frame after the press is already the end.
-    const calm = await browser.newContext({ baseURL: inject('baseUrl'), viewport: { width: 1280, height: 800 }, reducedMotion: 'reduce' });
+    const calm = await browser.newContext({
+      baseURL: inject('baseUrl'),
+      viewport: { width: 1280, height: 800 },
+      reducedMotion: 'reduce',
+    });
     const calmPage = await calm.newPage();
     await calmPage.goto(`${demoLink}#room-1`);
     const calmView = calmPage.locator('[data-testid=room-view]');
@@ -396,7 +571,10 @@ describe('the walk-through', () => {
     await expect.poll(() => view.getAttribute('data-option')).not.toBe(null);
     await expect.poll(() => num(view, 'triangles')).toBeGreaterThan(trianglesA);
     expect(await cameraOf(view)).toEqual(camera);
-    await page.getByRole('group', { name: 'Options' }).getByRole('button', { name: /Option A/ }).click();
+    await page
+      .getByRole('group', { name: 'Options' })
+      .getByRole('button', { name: /Option A/ })
+      .click();
     await expect.poll(() => num(view, 'triangles')).toBe(trianglesA);
     expect(await cameraOf(view)).toEqual(camera);
 
@@ -457,17 +635,31 @@ describe('the walk-through', () => {
 
   it('draws a typical room (8 walls, 6 openings, 40 pieces) within the frame budget', { timeout: 180_000 }, async () => {
     await uploadPhotos(designer.page, EXTRA_PHOTOS);
-    const finishes = Object.fromEntries((await call<{ finishes: { id: string; name: string }[] }>(designer.page, '/api/finishes', 'GET')).finishes.map((f) => [f.name, f.id]));
+    const finishes = Object.fromEntries(
+      (await call<{ finishes: { id: string; name: string }[] }>(designer.page, '/api/finishes', 'GET')).finishes.map((f) => [
+        f.name,
+        f.id,
+      ]),
+    );
     const link = await typicalRoomPresentation(designer.page, finishes);
     const { context, page, view } = await openClient(link);
     await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
     await page.getByRole('button', { name: 'Turn the room left' }).click();
     await settledCamera(page, view);
-    const overview = { drawCalls: await num(view, 'draw-calls'), triangles: await num(view, 'triangles'), textureBytes: await num(view, 'texture-bytes') };
+    const overview = {
+      drawCalls: await num(view, 'draw-calls'),
+      triangles: await num(view, 'triangles'),
+      textureBytes: await num(view, 'texture-bytes'),
+    };
     await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
     await settledCamera(page, view);
     const walk = { drawCalls: await num(view, 'draw-calls'), triangles: await num(view, 'triangles') };
-    Object.assign(figures, { typicalOverviewDrawCalls: overview.drawCalls, typicalWalkDrawCalls: walk.drawCalls, typicalTriangles: overview.triangles, typicalTextureBytes: overview.textureBytes });
+    Object.assign(figures, {
+      typicalOverviewDrawCalls: overview.drawCalls,
+      typicalWalkDrawCalls: walk.drawCalls,
+      typicalTriangles: overview.triangles,
+      typicalTextureBytes: overview.textureBytes,
+    });
     for (const d of [overview, walk]) {
       expect(d.drawCalls).toBeGreaterThan(5);
       expect(d.drawCalls).toBeLessThan(MAX_DRAW_CALLS);

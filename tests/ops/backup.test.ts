@@ -22,7 +22,10 @@ const SCRIPT_TIMEOUT_MS = 60_000;
 
 function tsx(script: string, args: string[], env: Record<string, string>) {
   const res = spawnSync(process.execPath, [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, script), ...args], {
-    cwd: root, env: { PATH: process.env.PATH ?? '', ...env }, encoding: 'utf8', timeout: SCRIPT_TIMEOUT_MS,
+    cwd: root,
+    env: { PATH: process.env.PATH ?? '', ...env },
+    encoding: 'utf8',
+    timeout: SCRIPT_TIMEOUT_MS,
   });
   return { status: res.status, out: `${res.stdout}${res.stderr}` };
 }
@@ -30,7 +33,10 @@ function tsx(script: string, args: string[], env: Record<string, string>) {
 function fileHashes(dir: string): Record<string, string> {
   const out: Record<string, string> = {};
   for (const e of readdirSync(dir, { recursive: true, withFileTypes: true })) {
-    if (e.isFile()) out[relative(dir, join(e.parentPath, e.name))] = createHash('sha256').update(readFileSync(join(e.parentPath, e.name))).digest('hex');
+    if (e.isFile())
+      out[relative(dir, join(e.parentPath, e.name))] = createHash('sha256')
+        .update(readFileSync(join(e.parentPath, e.name)))
+        .digest('hex');
   }
   return out;
 }
@@ -96,7 +102,9 @@ describe('backup and restore', () => {
     const files = fileHashes(join(sourceDir, 'files'));
     expect(Object.keys(files).length).toBeGreaterThan(10);
     expect(fileHashes(join(restoredDir, 'files'))).toEqual(files);
-    expect(readFileSync(join(restoredDir, 'presentation-key'), 'utf8')).toBe(readFileSync(join(sourceDir, 'presentation-key'), 'utf8'));
+    expect(readFileSync(join(restoredDir, 'presentation-key'), 'utf8')).toBe(
+      readFileSync(join(sourceDir, 'presentation-key'), 'utf8'),
+    );
     expect(statSync(join(restoredDir, 'presentation-key')).mode & 0o777).toBe(0o600);
   });
 
@@ -104,7 +112,11 @@ describe('backup and restore', () => {
     const db: Db = createDb(target.url, 2);
     try {
       await migrateToLatest(db); // nothing to do: the migration record came back too
-      const app = createApp({ db, mailer: { send: async () => undefined }, config: loadConfig({ DATABASE_URL: target.url, DATA_DIR: restoredDir, NODE_ENV: 'test', CLIENT_DIST: '/nonexistent' }) });
+      const app = createApp({
+        db,
+        mailer: { send: async () => undefined },
+        config: loadConfig({ DATABASE_URL: target.url, DATA_DIR: restoredDir, NODE_ENV: 'test', CLIENT_DIST: '/nonexistent' }),
+      });
       const agent = request.agent(app);
       expect((await agent.post('/api/auth/sign-in').send(DEMO_SIGN_IN)).status).toBe(200);
       const finishes = (await agent.get('/api/finishes')).body.finishes as { files?: { swatchUrl: string | null } }[];
@@ -123,7 +135,10 @@ describe('backup and restore', () => {
     expect(again.status).toBe(1);
     expect(again.out).toMatch(/already has tables: restore needs an empty one/);
     expect(await counts(target.url)).toEqual(before);
-    const missing = tsx('scripts/restore.ts', [join(scratch, 'nope.tar.gz')], { DATABASE_URL: target.url, DATA_DIR: restoredDir });
+    const missing = tsx('scripts/restore.ts', [join(scratch, 'nope.tar.gz')], {
+      DATABASE_URL: target.url,
+      DATA_DIR: restoredDir,
+    });
     expect(missing.status).toBe(1);
     expect(missing.out).toMatch(/no such file/);
     expect(existsSync(join(restoredDir, 'files'))).toBe(true);

@@ -20,9 +20,24 @@ const KILL_EVERY_MS = [700, 1100, 500, 900, 1300];
 const LOOP_LIMIT_MS = 60_000;
 const RETRY_PAUSE_MS = 30;
 
-interface Attempt { kind: 'create' | 'update'; roomId: string | null; name: string; wallHeight: number; answered: boolean; version: number | null }
+interface Attempt {
+  kind: 'create' | 'update';
+  roomId: string | null;
+  name: string;
+  wallHeight: number;
+  answered: boolean;
+  version: number | null;
+}
 
-const shell = (wallHeight: number) => ({ wallHeight, outline: [[0, 0], [3600, 0], [3600, 3000], [0, 3000]] });
+const shell = (wallHeight: number) => ({
+  wallHeight,
+  outline: [
+    [0, 0],
+    [3600, 0],
+    [3600, 3000],
+    [0, 3000],
+  ],
+});
 
 const scratch = mkdtempSync(join(tmpdir(), 'parlour-crash-'));
 let database: SiblingDatabase;
@@ -47,12 +62,24 @@ beforeAll(async () => {
   sup = await supervise({
     port: await freePort(),
     logFile: join(scratch, 'server.log'),
-    env: { DATABASE_URL: database.url, DATA_DIR: join(scratch, 'data'), PRESENTATION_KEY: 'c4'.repeat(32), NODE_ENV: 'production', LOG_LEVEL: 'warn', CLIENT_DIST: '/nonexistent' },
+    env: {
+      DATABASE_URL: database.url,
+      DATA_DIR: join(scratch, 'data'),
+      PRESENTATION_KEY: 'c4'.repeat(32),
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'warn',
+      CLIENT_DIST: '/nonexistent',
+    },
   });
   const res = await fetch(`${sup.url}/api/auth/sign-up`, {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ studioName: 'Crash Studio', name: 'Cy Crash', email: 'crash@test.parlour', password: 'a-long-crash-password' }),
+    body: JSON.stringify({
+      studioName: 'Crash Studio',
+      name: 'Cy Crash',
+      email: 'crash@test.parlour',
+      password: 'a-long-crash-password',
+    }),
   });
   cookie = (res.headers.get('set-cookie') ?? '').split(';')[0];
   expect(res.status).toBe(201);
@@ -84,11 +111,22 @@ describe('saving rooms while the server is killed', () => {
         const rooms = [...known.keys()];
         const update = rooms.length > 0 && n % 3 !== 0;
         const roomId = update ? rooms[n % rooms.length] : null;
-        const attempt: Attempt = { kind: update ? 'update' : 'create', roomId, name: `Room ${n}`, wallHeight: 2000 + n, answered: false, version: null };
+        const attempt: Attempt = {
+          kind: update ? 'update' : 'create',
+          roomId,
+          name: `Room ${n}`,
+          wallHeight: 2000 + n,
+          answered: false,
+          version: null,
+        };
         attempts.push(attempt);
         try {
           const res = update
-            ? await api('PUT', `/api/rooms/${roomId}`, { name: attempt.name, shell: shell(attempt.wallHeight), version: known.get(roomId!) })
+            ? await api('PUT', `/api/rooms/${roomId}`, {
+                name: attempt.name,
+                shell: shell(attempt.wallHeight),
+                version: known.get(roomId!),
+              })
             : await api('POST', `/api/projects/${projectId}/rooms`, { name: attempt.name, shell: shell(attempt.wallHeight) });
           const room = res.body.room as { id: string; version: number } | undefined;
           if (res.status === 200 || res.status === 201) {
@@ -128,11 +166,21 @@ describe('saving rooms while the server is killed', () => {
     expect(sup.restarts.length).toBe(KILLS);
     const answered = attempts.filter((a) => a.answered);
     const lost = attempts.filter((a) => !a.answered);
-    console.log(`[crash] ${attempts.length} saves, ${answered.length} answered, ${lost.length} cut off or refused by ${KILLS} kills; restarts answered after ${sup.restarts.join(', ')} ms`);
+    console.log(
+      `[crash] ${attempts.length} saves, ${answered.length} answered, ${lost.length} cut off or refused by ${KILLS} kills; restarts answered after ${sup.restarts.join(', ')} ms`,
+    );
     expect(answered.length).toBeGreaterThanOrEqual(2 * KILLS);
 
     const rooms = await db.selectFrom('rooms').selectAll().where('project_id', '=', projectId).execute();
-    const options = await db.selectFrom('options').select(['room_id', 'doc']).where('room_id', 'in', rooms.map((r) => r.id)).execute();
+    const options = await db
+      .selectFrom('options')
+      .select(['room_id', 'doc'])
+      .where(
+        'room_id',
+        'in',
+        rooms.map((r) => r.id),
+      )
+      .execute();
     // No half-written rows: every room parses and has its first option, every option parses.
     for (const r of rooms) {
       expect(() => roomShellSchema.parse(r.shell)).not.toThrow();
@@ -149,7 +197,10 @@ describe('saving rooms while the server is killed', () => {
       const last = answered.filter((a) => a.roomId === roomId).at(-1)!;
       expect(row!.version).toBeGreaterThanOrEqual(last.version!);
       const shown = { name: row!.name, wallHeight: (row!.shell as { wallHeight: number }).wallHeight };
-      const candidates = [last, ...lost.filter((a) => a.roomId === roomId || a.kind === 'create')].map((a) => ({ name: a.name, wallHeight: a.wallHeight }));
+      const candidates = [last, ...lost.filter((a) => a.roomId === roomId || a.kind === 'create')].map((a) => ({
+        name: a.name,
+        wallHeight: a.wallHeight,
+      }));
       expect(candidates).toContainEqual(shown);
       expect(version).toBeLessThanOrEqual(row!.version);
     }

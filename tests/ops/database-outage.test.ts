@@ -28,7 +28,11 @@ async function call(method: string, path: string, body?: unknown) {
     signal: AbortSignal.timeout(ANSWER_WITHIN_MS),
   });
   const text = await res.text();
-  return { status: res.status, retryAfter: res.headers.get('retry-after'), body: text ? (JSON.parse(text) as { error?: { code: string; message: string } }) : {} };
+  return {
+    status: res.status,
+    retryAfter: res.headers.get('retry-after'),
+    body: text ? (JSON.parse(text) as { error?: { code: string; message: string } }) : {},
+  };
 }
 
 beforeAll(async () => {
@@ -38,12 +42,20 @@ beforeAll(async () => {
   await migrateToLatest(db);
   await db.destroy();
   app = await startServer({
-    DATABASE_URL: databaseUrl, PORT: String(await freePort()), HOST: '127.0.0.1', DATA_DIR: join(cluster.dir, 'data'),
-    CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: 'd5'.repeat(32), NODE_ENV: 'production', LOG_LEVEL: 'silent',
+    DATABASE_URL: databaseUrl,
+    PORT: String(await freePort()),
+    HOST: '127.0.0.1',
+    DATA_DIR: join(cluster.dir, 'data'),
+    CLIENT_DIST: '/nonexistent',
+    PRESENTATION_KEY: 'd5'.repeat(32),
+    NODE_ENV: 'production',
+    LOG_LEVEL: 'silent',
   });
   url = app.config.publicUrl;
   const agent = request.agent(url);
-  const signUp = await agent.post('/api/auth/sign-up').send({ studioName: 'Outage Studio', name: 'Oz Out', email: 'outage@test.parlour', password: 'a-long-outage-password' });
+  const signUp = await agent
+    .post('/api/auth/sign-up')
+    .send({ studioName: 'Outage Studio', name: 'Oz Out', email: 'outage@test.parlour', password: 'a-long-outage-password' });
   cookie = (signUp.headers['set-cookie'] as unknown as string[])[0].split(';')[0];
   shown = await presentedProject(agent, 'Outage flat');
   // Open the link once so its ready answer is cached before the outage.
@@ -88,6 +100,9 @@ describe('the database going away under a running app', () => {
     console.log(`[outage] answering again ${Date.now() - back} ms after the database came back`);
     expect((await call('POST', '/api/clients', { name: 'Bo Back', email: '' })).status).toBe(201);
     expect((await call('GET', `/api/p/${shown.token}`)).status).toBe(200);
-    expect((await call('PUT', `/api/p/${shown.token}/rooms/${shown.roomId}/choice`, { optionId: shown.optionIds[0], comment: '' })).status).toBe(200);
+    expect(
+      (await call('PUT', `/api/p/${shown.token}/rooms/${shown.roomId}/choice`, { optionId: shown.optionIds[0], comment: '' }))
+        .status,
+    ).toBe(200);
   }, 60_000);
 });

@@ -32,21 +32,34 @@ let a: Instance;
 let b: Instance;
 let cookie = '';
 
-interface Answer { status: number; body: Record<string, unknown>; bytes: Buffer }
+interface Answer {
+  status: number;
+  body: Record<string, unknown>;
+  bytes: Buffer;
+}
 
 async function call(instance: Instance, method: string, path: string, body?: unknown, withCookie = true): Promise<Answer> {
   const res = await fetch(`${instance.config.publicUrl}${path}`, {
     method,
-    headers: { ...(body instanceof FormData ? {} : { 'content-type': 'application/json' }), ...(withCookie && cookie ? { cookie } : {}) },
+    headers: {
+      ...(body instanceof FormData ? {} : { 'content-type': 'application/json' }),
+      ...(withCookie && cookie ? { cookie } : {}),
+    },
     body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
   });
   const bytes = Buffer.from(await res.arrayBuffer());
-  const json = (res.headers.get('content-type') ?? '').includes('json') && bytes.length ? (JSON.parse(bytes.toString('utf8')) as Record<string, unknown>) : {};
+  const json =
+    (res.headers.get('content-type') ?? '').includes('json') && bytes.length
+      ? (JSON.parse(bytes.toString('utf8')) as Record<string, unknown>)
+      : {};
   if (res.headers.get('set-cookie')) cookie = res.headers.get('set-cookie')!.split(';')[0];
   return { status: res.status, body: json, bytes };
 }
 
-interface ProcessedFinish { status: string; files: { swatchUrl: string | null } }
+interface ProcessedFinish {
+  status: string;
+  files: { swatchUrl: string | null };
+}
 
 /** Polls instance B until the photo uploaded through A has been processed (by A's queue). */
 async function processedOnB(id: string): Promise<ProcessedFinish> {
@@ -63,14 +76,32 @@ beforeAll(async () => {
   const db = createDb(database.url, 1);
   await migrateToLatest(db);
   await db.destroy();
-  s3 = new S3rver({ port: 0, address: '127.0.0.1', silent: true, directory: join(scratch, 's3'), configureBuckets: [{ name: BUCKET, configs: [] }] });
+  s3 = new S3rver({
+    port: 0,
+    address: '127.0.0.1',
+    silent: true,
+    directory: join(scratch, 's3'),
+    configureBuckets: [{ name: BUCKET, configs: [] }],
+  });
   const { port: s3Port } = await s3.run();
   smtp = await startStandInSmtp({ port: 0, dir: join(scratch, 'outbox') });
   const env = (name: string, port: number) => ({
-    DATABASE_URL: database.url, HOST: '127.0.0.1', PORT: String(port), DATA_DIR: join(scratch, name), CLIENT_DIST: '/nonexistent',
-    PRESENTATION_KEY: 'e6'.repeat(32), NODE_ENV: 'production', LOG_LEVEL: 'silent', SMTP_PORT: String(smtp.port),
-    STORAGE: 's3', S3_ENDPOINT: `http://127.0.0.1:${s3Port}`, S3_BUCKET: BUCKET, S3_REGION: 'us-east-1',
-    S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER', S3_FORCE_PATH_STYLE: 'true',
+    DATABASE_URL: database.url,
+    HOST: '127.0.0.1',
+    PORT: String(port),
+    DATA_DIR: join(scratch, name),
+    CLIENT_DIST: '/nonexistent',
+    PRESENTATION_KEY: 'e6'.repeat(32),
+    NODE_ENV: 'production',
+    LOG_LEVEL: 'silent',
+    SMTP_PORT: String(smtp.port),
+    STORAGE: 's3',
+    S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+    S3_BUCKET: BUCKET,
+    S3_REGION: 'us-east-1',
+    S3_ACCESS_KEY_ID: 'S3RVER',
+    S3_SECRET_ACCESS_KEY: 'S3RVER',
+    S3_FORCE_PATH_STYLE: 'true',
   });
   a = await startServer(env('a', await freePort()));
   b = await startServer(env('b', await freePort()));
@@ -91,19 +122,29 @@ describe('two instances, one database, one store', () => {
   let optionId = '';
 
   it('continues on B a session started on A', async () => {
-    const signUp = await call(a, 'POST', '/api/auth/sign-up', { studioName: 'Twin Studio', name: 'Tam Twin', email: 'twin@test.parlour', password: 'a-long-twin-password' });
+    const signUp = await call(a, 'POST', '/api/auth/sign-up', {
+      studioName: 'Twin Studio',
+      name: 'Tam Twin',
+      email: 'twin@test.parlour',
+      password: 'a-long-twin-password',
+    });
     expect(signUp.status).toBe(201);
     const me = await call(b, 'GET', '/api/auth/me');
     expect(me.status).toBe(200);
     expect((me.body.member as { email: string }).email).toBe('twin@test.parlour');
-    const project = await call(b, 'POST', '/api/projects', { name: 'Twin flat', newClient: { name: 'Ro Twin', email: 'ro@example.com' } });
+    const project = await call(b, 'POST', '/api/projects', {
+      name: 'Twin flat',
+      newClient: { name: 'Ro Twin', email: 'ro@example.com' },
+    });
     expect(project.status).toBe(201);
     projectId = (project.body.project as { id: string }).id;
     expect(((await call(a, 'GET', '/api/projects')).body.projects as { id: string }[]).map((p) => p.id)).toContain(projectId);
   });
 
   it('serves from B, out of the shared bucket, a photo uploaded through A', async () => {
-    const photo = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 150, g: 110, b: 70 } } }).jpeg().toBuffer();
+    const photo = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 150, g: 110, b: 70 } } })
+      .jpeg()
+      .toBuffer();
     const form = new FormData();
     form.append('photos', new Blob([photo], { type: 'image/jpeg' }), 'oak.jpg');
     const uploaded = await call(a, 'POST', '/api/finishes/photos', form);
@@ -122,10 +163,22 @@ describe('two instances, one database, one store', () => {
   });
 
   it('opens a client link on either, and a withdrawal on one stops it on the other', async () => {
-    const room = await call(a, 'POST', `/api/projects/${projectId}/rooms`, { name: 'Twin room', shell: { outline: [[0, 0], [3000, 0], [3000, 3000], [0, 3000]] } });
+    const room = await call(a, 'POST', `/api/projects/${projectId}/rooms`, {
+      name: 'Twin room',
+      shell: {
+        outline: [
+          [0, 0],
+          [3000, 0],
+          [3000, 3000],
+          [0, 3000],
+        ],
+      },
+    });
     roomId = (room.body.room as { id: string }).id;
     optionId = (room.body.options as { id: string }[])[0].id;
-    const made = await call(a, 'POST', `/api/projects/${projectId}/presentations`, { rooms: [{ roomId, optionIds: [optionId] }] });
+    const made = await call(a, 'POST', `/api/projects/${projectId}/presentations`, {
+      rooms: [{ roomId, optionIds: [optionId] }],
+    });
     expect(made.status).toBe(201);
     const { id: presentationId, link } = made.body.presentation as { id: string; link: string };
     const token = link.split('/p/')[1];
@@ -137,7 +190,8 @@ describe('two instances, one database, one store', () => {
     expect((await call(b, 'POST', `/api/presentations/${presentationId}/withdraw`)).status).toBe(200);
     const withdrawnAt = Date.now();
     let status = 200;
-    while (status === 200 && Date.now() - withdrawnAt < NOTICE_WAIT_MS) status = (await call(a, 'GET', `/api/p/${token}`, undefined, false)).status;
+    while (status === 200 && Date.now() - withdrawnAt < NOTICE_WAIT_MS)
+      status = (await call(a, 'GET', `/api/p/${token}`, undefined, false)).status;
     expect(status).toBe(410);
     console.log(`[two] link stopped on the other instance ${Date.now() - withdrawnAt} ms after the withdrawal was answered`);
     expect((await call(b, 'GET', `/api/p/${token}`, undefined, false)).status).toBe(410);
@@ -145,17 +199,35 @@ describe('two instances, one database, one store', () => {
 
   it('counts the invitation limit across both instances', async () => {
     for (let i = 0; i < INVITE_RATE.limit; i += 1) {
-      const res = await call(i % 2 === 0 ? a : b, 'POST', '/api/studio/invites', { email: `invitee${i}@test.parlour`, role: 'viewer' });
+      const res = await call(i % 2 === 0 ? a : b, 'POST', '/api/studio/invites', {
+        email: `invitee${i}@test.parlour`,
+        role: 'viewer',
+      });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
     }
     expect((await call(a, 'POST', '/api/studio/invites', { email: 'one-more@test.parlour', role: 'viewer' })).status).toBe(429);
-    expect((await call(b, 'POST', '/api/studio/invites', { email: 'and-another@test.parlour', role: 'viewer' })).status).toBe(429);
+    expect((await call(b, 'POST', '/api/studio/invites', { email: 'and-another@test.parlour', role: 'viewer' })).status).toBe(
+      429,
+    );
   });
 
   it('counts wrong passwords across both instances', async () => {
     for (let i = 0; i < SIGN_IN_RATE.limit; i += 1) {
-      expect((await call(i % 2 === 0 ? a : b, 'POST', '/api/auth/sign-in', { email: 'twin@test.parlour', password: 'not-the-password' }, false)).status).toBe(401);
+      expect(
+        (
+          await call(
+            i % 2 === 0 ? a : b,
+            'POST',
+            '/api/auth/sign-in',
+            { email: 'twin@test.parlour', password: 'not-the-password' },
+            false,
+          )
+        ).status,
+      ).toBe(401);
     }
-    expect((await call(b, 'POST', '/api/auth/sign-in', { email: 'twin@test.parlour', password: 'a-long-twin-password' }, false)).status).toBe(429);
+    expect(
+      (await call(b, 'POST', '/api/auth/sign-in', { email: 'twin@test.parlour', password: 'a-long-twin-password' }, false))
+        .status,
+    ).toBe(429);
   });
 });

@@ -41,7 +41,16 @@ describe('walkway width', () => {
 });
 
 describe('door clear width', () => {
-  const leaf34: Opening = { id: 'd', type: 'door', wall: 0, offset: 0, width: HUD_LEAF_MM, height: 2032, hinge: 'start', swing: 'in' };
+  const leaf34: Opening = {
+    id: 'd',
+    type: 'door',
+    wall: 0,
+    offset: 0,
+    width: HUD_LEAF_MM,
+    height: 2032,
+    hinge: 'start',
+    swing: 'in',
+  };
 
   it('takes a 34 in leaf to a 32 in clear opening, as HUD FHAG does', () => {
     expect(clearPassMm(leaf34).widthMm).toBeCloseTo(HUD_LEAF_CLEAR_MM, 9);

@@ -21,10 +21,35 @@ function outline(rand: () => number): [number, number][] {
   const w = 2500 + Math.round(rand() * 4000);
   const h = 2500 + Math.round(rand() * 3500);
   const shapes: [number, number][][] = [
-    [[0, 0], [w, 0], [w, h], [0, h]],
-    [[0, 0], [w, 0], [w, h / 2], [w / 2, h / 2], [w / 2, h], [0, h]],
-    [[0, 0], [w, 0], [w, h - 900], [w - 900, h], [0, h]],
-    [[0, 0], [w, 0], [w, h], [w / 3, h], [w / 3, h - 700], [0, h - 700]],
+    [
+      [0, 0],
+      [w, 0],
+      [w, h],
+      [0, h],
+    ],
+    [
+      [0, 0],
+      [w, 0],
+      [w, h / 2],
+      [w / 2, h / 2],
+      [w / 2, h],
+      [0, h],
+    ],
+    [
+      [0, 0],
+      [w, 0],
+      [w, h - 900],
+      [w - 900, h],
+      [0, h],
+    ],
+    [
+      [0, 0],
+      [w, 0],
+      [w, h],
+      [w / 3, h],
+      [w / 3, h - 700],
+      [0, h - 700],
+    ],
   ];
   const shape = shapes[Math.floor(rand() * shapes.length)];
   return rand() < 0.3 ? [...shape].reverse() : shape;
@@ -42,7 +67,17 @@ function randomLayout(seed: number): Layout {
     const offset = 60 + Math.round(rand() * (lengthMm - width - 120));
     const id = `o${wall}`;
     const kind = rand();
-    if (kind < 0.45) openings.push({ id, type: 'door', wall, offset, width, height: 2040, hinge: rand() < 0.5 ? 'start' : 'end', swing: rand() < 0.5 ? 'in' : 'out' });
+    if (kind < 0.45)
+      openings.push({
+        id,
+        type: 'door',
+        wall,
+        offset,
+        width,
+        height: 2040,
+        hinge: rand() < 0.5 ? 'start' : 'end',
+        swing: rand() < 0.5 ? 'in' : 'out',
+      });
     else if (kind < 0.6) openings.push({ id, type: 'passage', wall, offset, width, height: 2100 });
     else openings.push({ id, type: 'window', wall, offset, width, height: 1200, sill: 900 });
   });
@@ -79,7 +114,11 @@ function expectSameFindings(layout: Layout, walkwayMm?: number): number {
 
 describe('the fit check gives the same findings as before the speed work', () => {
   it('on the test plans, at several walkway widths', () => {
-    const layouts: Layout[] = [cleanLayout(), walledInLayout(), ...[480, 555, 620, 700, 830, 900, 950].map((gap) => gapLayout(gap))];
+    const layouts: Layout[] = [
+      cleanLayout(),
+      walledInLayout(),
+      ...[480, 555, 620, 700, 830, 900, 950].map((gap) => gapLayout(gap)),
+    ];
     const crowded = cleanLayout();
     crowded.pieces.push(
       pieceInput({ id: 'b-wardrobe', name: 'Wardrobe', x: 700, y: 400, width: 800, depth: 600, height: 2000 }),
@@ -87,7 +126,8 @@ describe('the fit check gives the same findings as before the speed work', () =>
       pieceInput({ id: 'crate', name: 'Crate', x: 3600, y: 2400, width: 1000, depth: 1000, height: 1000 }),
     );
     layouts.push(crowded);
-    for (const layout of layouts) for (const walkwayMm of [undefined, 600, 650, 800, 900.5, 1200]) expectSameFindings(layout, walkwayMm);
+    for (const layout of layouts)
+      for (const walkwayMm of [undefined, 600, 650, 800, 900.5, 1200]) expectSameFindings(layout, walkwayMm);
   }, 120_000);
 
   it('on the bench’s typical room (40 pieces) and large room (200 pieces)', () => {

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { BED_FRAME_LENGTH_ALLOWANCE_MM, BED_FRAME_WIDTH_ALLOWANCE_MM, catalogueEntry, type CatalogueId } from '../../shared/catalogue/catalogue';
+import {
+  BED_FRAME_LENGTH_ALLOWANCE_MM,
+  BED_FRAME_WIDTH_ALLOWANCE_MM,
+  catalogueEntry,
+  type CatalogueId,
+} from '../../shared/catalogue/catalogue';
 import { MM_PER_INCH } from '../../shared/units/length';
 
 // There is no mandatory mattress standard, so REFERENCES.md asks for ±2 cm (metric) and ±1 in (US).

@@ -13,7 +13,12 @@ describe('paint against the published worked example', () => {
   // Built here as a real room: doors 3 × 7 ft (21 ft²), windows 3 × 5 ft (15 ft²) on a 2 ft 6 in sill.
   const shell = roomShellSchema.parse({
     wallHeight: ft(8),
-    outline: [[0, 0], [ft(15), 0], [ft(15), ft(10)], [0, ft(10)]],
+    outline: [
+      [0, 0],
+      [ft(15), 0],
+      [ft(15), ft(10)],
+      [0, ft(10)],
+    ],
     openings: [
       { id: 'door-a', type: 'door', wall: 0, offset: ft(1), width: ft(3), height: ft(7), hinge: 'start', swing: 'in' },
       { id: 'door-b', type: 'door', wall: 1, offset: ft(1), width: ft(3), height: ft(7), hinge: 'end', swing: 'in' },

@@ -17,7 +17,12 @@ describe('paint per colour against the published worked example', () => {
   // Doors 3 × 7 ft (21 ft²), windows 3 × 5 ft (15 ft²) on a 2 ft 6 in sill.
   const shell = roomShellSchema.parse({
     wallHeight: ft(8),
-    outline: [[0, 0], [ft(15), 0], [ft(15), ft(10)], [0, ft(10)]],
+    outline: [
+      [0, 0],
+      [ft(15), 0],
+      [ft(15), ft(10)],
+      [0, ft(10)],
+    ],
     openings: [
       { id: 'door-a', type: 'door', wall: 0, offset: ft(1), width: ft(3), height: ft(7), hinge: 'start', swing: 'in' },
       { id: 'door-b', type: 'door', wall: 1, offset: ft(1), width: ft(3), height: ft(7), hinge: 'end', swing: 'in' },
@@ -31,7 +36,12 @@ describe('paint per colour against the published worked example', () => {
     const coverageM2PerL = (400 * FT2_IN_M2) / US_GALLON_L; // 400 ft²/gal = 9.817 m²/L (REFERENCES.md, derived)
     expect(coverageM2PerL).toBeCloseTo(9.817, 3);
     const settings = takeoffSettingsSchema.parse({ coats: 1, coverageM2PerL });
-    const [need] = roomTakeoff(shell, { floor: null, ceiling: null, walls: 'paint', wallOverrides: {} }, new Map([['paint', paint]]), settings).paints;
+    const [need] = roomTakeoff(
+      shell,
+      { floor: null, ceiling: null, walls: 'paint', wallOverrides: {} },
+      new Map([['paint', paint]]),
+      settings,
+    ).paints;
     expect(need.areaM2 / FT2_IN_M2).toBeCloseTo(328, 1);
     expect(need.litres / US_GALLON_L).toBeCloseTo(0.82, 3);
   });
@@ -39,7 +49,15 @@ describe('paint per colour against the published worked example', () => {
   it('splits the same room between two colours without losing any paint', () => {
     const accent: FinishInfo = { ...paint, id: 'accent', name: 'Accent' };
     const settings = takeoffSettingsSchema.parse({ coats: 1, coverageM2PerL: (400 * FT2_IN_M2) / US_GALLON_L });
-    const { paints } = roomTakeoff(shell, { floor: null, ceiling: null, walls: 'paint', wallOverrides: { '3': 'accent' } }, new Map([['paint', paint], ['accent', accent]]), settings);
+    const { paints } = roomTakeoff(
+      shell,
+      { floor: null, ceiling: null, walls: 'paint', wallOverrides: { '3': 'accent' } },
+      new Map([
+        ['paint', paint],
+        ['accent', accent],
+      ]),
+      settings,
+    );
     // Wall 3 is a plain 10 × 8 ft wall: 80 ft²; the other walls keep 248 ft².
     expect(paints[1].areaM2 / FT2_IN_M2).toBeCloseTo(80, 1);
     expect(paints[0].areaM2 / FT2_IN_M2).toBeCloseTo(248, 1);
@@ -51,10 +69,22 @@ describe('flooring against the published retailer example', () => {
   // Published retailer worked example (summary, REFERENCES.md): 10 × 12 ft = 120 ft², +10 % = 132 ft²,
   // boxes of 24 ft² → 6 boxes (full boxes only).
   it('orders 132 ft² in 6 boxes of 24 ft²', () => {
-    const shell = roomShellSchema.parse({ outline: [[0, 0], [ft(12), 0], [ft(12), ft(10)], [0, ft(10)]] });
+    const shell = roomShellSchema.parse({
+      outline: [
+        [0, 0],
+        [ft(12), 0],
+        [ft(12), ft(10)],
+        [0, ft(10)],
+      ],
+    });
     const boards: FinishInfo = { ...none, id: 'boards', name: 'Boards', kind: 'photo', category: 'wood', swatchUrl: null };
     const settings = takeoffSettingsSchema.parse({ wastePercent: 10, unitCoverageM2: { boards: 24 * FT2_IN_M2 } });
-    const [floor] = roomTakeoff(shell, { floor: 'boards', ceiling: null, walls: null, wallOverrides: {} }, new Map([['boards', boards]]), settings).coverings;
+    const [floor] = roomTakeoff(
+      shell,
+      { floor: 'boards', ceiling: null, walls: null, wallOverrides: {} },
+      new Map([['boards', boards]]),
+      settings,
+    ).coverings;
     expect(floor.areaM2 / FT2_IN_M2).toBeCloseTo(120, 1);
     expect(floor.orderAreaM2 / FT2_IN_M2).toBeCloseTo(132, 1);
     expect(floor.units).toBe(6);
@@ -65,7 +95,11 @@ describe('tins (common-practice sizes, hand-worked)', () => {
   it('marks 0.75, 1, 2.5, 5 and 10 L as the sizes and picks the least paint that covers the need', () => {
     expect(COMMON_TIN_SIZES_L).toEqual([0.75, 1, 2.5, 5, 10]);
     // 9 L: 5 + 2.5 + 0.75 + 0.75 is exact in four tins (5 + 4 × 1 is exact in five).
-    expect(chooseTins(9).tins).toEqual([{ sizeL: 5, count: 1 }, { sizeL: 2.5, count: 1 }, { sizeL: 0.75, count: 2 }]);
+    expect(chooseTins(9).tins).toEqual([
+      { sizeL: 5, count: 1 },
+      { sizeL: 2.5, count: 1 },
+      { sizeL: 0.75, count: 2 },
+    ]);
     // 0.82 US gal = 3.104 L: 2.5 + 0.75 = 3.25 L is the least above (4 × 1 L, 2.5 + 1 = 3.5 L waste more).
     expect(chooseTins(0.82 * US_GALLON_L).totalL).toBe(3.25);
   });
@@ -73,9 +107,31 @@ describe('tins (common-practice sizes, hand-worked)', () => {
 
 describe('schedule totals against a hand-worked example', () => {
   // 5 m × 4 m, 2.5 m high, no openings: floor 20 m², walls 18 m × 2.5 m = 45 m².
-  const shell = roomShellSchema.parse({ wallHeight: 2500, outline: [[0, 0], [5000, 0], [5000, 4000], [0, 4000]] });
+  const shell = roomShellSchema.parse({
+    wallHeight: 2500,
+    outline: [
+      [0, 0],
+      [5000, 0],
+      [5000, 4000],
+      [0, 4000],
+    ],
+  });
   const library = new Map<string, FinishInfo>([
-    ['oak', { ...none, id: 'oak', name: 'Oak boards', kind: 'photo', category: 'wood', swatchUrl: null, price: 40, priceUnit: 'm2', supplier: 'Timber yard', code: 'OAK-1' }],
+    [
+      'oak',
+      {
+        ...none,
+        id: 'oak',
+        name: 'Oak boards',
+        kind: 'photo',
+        category: 'wood',
+        swatchUrl: null,
+        price: 40,
+        priceUnit: 'm2',
+        supplier: 'Timber yard',
+        code: 'OAK-1',
+      },
+    ],
     ['oat', { ...none, id: 'oat', name: 'Oat', kind: 'paint', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'unit' }],
   ]);
   const at = { y: 2000, depth: 800, height: 800 };
@@ -105,6 +161,13 @@ describe('schedule totals against a hand-worked example', () => {
 
   it('adds up to the hand-worked budget', () => {
     // New pieces 1450 + 379.98 = 1829.98; finishes 880 + 112.50 = 992.50; budget 2822.48.
-    expect(s.totals).toEqual({ newPiecesCost: 1829.98, finishesCost: 992.5, budget: 2822.48, newPieceCount: 3, existingPieceCount: 1, unpricedCount: 0 });
+    expect(s.totals).toEqual({
+      newPiecesCost: 1829.98,
+      finishesCost: 992.5,
+      budget: 2822.48,
+      newPieceCount: 3,
+      existingPieceCount: 1,
+      unpricedCount: 0,
+    });
   });
 });

@@ -22,8 +22,22 @@ describe('length units against their definitions', () => {
 
   it('gives 1 ft² = 0.09290304 m² and 1 in² = 6.4516 cm²', () => {
     const foot = MM_PER_FOOT;
-    expect(areaMm2([[0, 0], [foot, 0], [foot, foot], [0, foot]]) / 1e6).toBeCloseTo(0.09290304, 12); // 16 CFR 500.19
-    expect(areaMm2([[0, 0], [MM_PER_INCH, 0], [MM_PER_INCH, MM_PER_INCH], [0, MM_PER_INCH]]) / 100).toBeCloseTo(6.4516, 12); // 16 CFR 500.19
+    expect(
+      areaMm2([
+        [0, 0],
+        [foot, 0],
+        [foot, foot],
+        [0, foot],
+      ]) / 1e6,
+    ).toBeCloseTo(0.09290304, 12); // 16 CFR 500.19
+    expect(
+      areaMm2([
+        [0, 0],
+        [MM_PER_INCH, 0],
+        [MM_PER_INCH, MM_PER_INCH],
+        [0, MM_PER_INCH],
+      ]) / 100,
+    ).toBeCloseTo(6.4516, 12); // 16 CFR 500.19
   });
 
   it('writes the rounded and exact code widths the way a designer reads them', () => {

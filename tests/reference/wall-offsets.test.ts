@@ -10,7 +10,11 @@ const SCALE = 1000;
 function clipperOuterRing(outline: P[], thicknessMm: number): P[] {
   // A high mitre limit so clipper mitres every corner these shapes have, as Parlour does.
   const offset = new ClipperLib.ClipperOffset(10, 0.25);
-  offset.AddPath(outline.map(([x, y]) => ({ X: Math.round(x * SCALE), Y: Math.round(y * SCALE) })), ClipperLib.JoinType.jtMiter, ClipperLib.EndType.etClosedPolygon);
+  offset.AddPath(
+    outline.map(([x, y]) => ({ X: Math.round(x * SCALE), Y: Math.round(y * SCALE) })),
+    ClipperLib.JoinType.jtMiter,
+    ClipperLib.EndType.etClosedPolygon,
+  );
   const solution: { X: number; Y: number }[][] = [];
   offset.Execute(solution, thicknessMm * SCALE);
   expect(solution).toHaveLength(1);
@@ -18,11 +22,47 @@ function clipperOuterRing(outline: P[], thicknessMm: number): P[] {
 }
 
 const shapes: Record<string, P[]> = {
-  rectangle: [[0, 0], [4200, 0], [4200, 3600], [0, 3600]],
-  'L shape': [[0, 0], [5000, 0], [5000, 2500], [3000, 2500], [3000, 4000], [0, 4000]],
-  'U shape': [[0, 0], [1000, 0], [1000, 2000], [2000, 2000], [2000, 0], [3000, 0], [3000, 3000], [0, 3000]],
-  'bay window': [[0, 0], [3000, 0], [3000, 1000], [3400, 1400], [3400, 2600], [3000, 3000], [3000, 4000], [0, 4000]],
-  'splayed corner': [[0, 0], [3300, 0], [4000, 700], [4000, 3000], [0, 3000]],
+  rectangle: [
+    [0, 0],
+    [4200, 0],
+    [4200, 3600],
+    [0, 3600],
+  ],
+  'L shape': [
+    [0, 0],
+    [5000, 0],
+    [5000, 2500],
+    [3000, 2500],
+    [3000, 4000],
+    [0, 4000],
+  ],
+  'U shape': [
+    [0, 0],
+    [1000, 0],
+    [1000, 2000],
+    [2000, 2000],
+    [2000, 0],
+    [3000, 0],
+    [3000, 3000],
+    [0, 3000],
+  ],
+  'bay window': [
+    [0, 0],
+    [3000, 0],
+    [3000, 1000],
+    [3400, 1400],
+    [3400, 2600],
+    [3000, 3000],
+    [3000, 4000],
+    [0, 4000],
+  ],
+  'splayed corner': [
+    [0, 0],
+    [3300, 0],
+    [4000, 700],
+    [4000, 3000],
+    [0, 3000],
+  ],
 };
 
 describe('outward wall growth against clipper-lib offsetting (ClipperOffset, jtMiter)', () => {
@@ -30,7 +70,12 @@ describe('outward wall growth against clipper-lib offsetting (ClipperOffset, jtM
     for (const winding of ['as drawn', 'reversed'] as const) {
       it(`matches for the ${name} (${winding}) at 100 mm`, () => {
         const shape = winding === 'as drawn' ? outline : [...outline].reverse();
-        const ours = outerRingMm(layoutWalls(shape, shape.map(() => 100)));
+        const ours = outerRingMm(
+          layoutWalls(
+            shape,
+            shape.map(() => 100),
+          ),
+        );
         const theirs = clipperOuterRing(shape, 100);
         expect(areaMm2(ours)).toBeCloseTo(areaMm2(theirs), 0);
         expect(ours).toHaveLength(theirs.length);

@@ -39,8 +39,13 @@ export function createTestApp(options: TestAppOptions = {}): TestApp {
     },
   };
   const config = loadConfig({
-    DATABASE_URL: inject('databaseUrl'), NODE_ENV: 'test', PUBLIC_URL: 'http://parlour.test', CLIENT_DIST: '/nonexistent', PRESENTATION_KEY: TEST_PRESENTATION_KEY,
-    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT, ...options.env,
+    DATABASE_URL: inject('databaseUrl'),
+    NODE_ENV: 'test',
+    PUBLIC_URL: 'http://parlour.test',
+    CLIENT_DIST: '/nonexistent',
+    PRESENTATION_KEY: TEST_PRESENTATION_KEY,
+    SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
+    ...options.env,
   });
   const app = createApp({ db, mailer, config, verifyPassword: options.verifyPassword });
   return { app, db, mail, close: () => db.destroy() };
@@ -57,7 +62,9 @@ export function uniqueEmail(tag: string): string {
 export async function signUpStudio(app: Express, studioName = 'Test Studio') {
   const agent = request.agent(app);
   const email = uniqueEmail('owner');
-  const res = await agent.post('/api/auth/sign-up').send({ studioName, name: 'Olive Owner', email, password: 'correct-horse-battery' });
+  const res = await agent
+    .post('/api/auth/sign-up')
+    .send({ studioName, name: 'Olive Owner', email, password: 'correct-horse-battery' });
   if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
   return { agent, email, member: res.body.member as { id: string } };
 }
@@ -71,7 +78,9 @@ export async function addMember(t: TestApp, owner: request.Agent, role: 'owner' 
   const token = mail?.text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
   if (!token) throw new Error('no invite link in the mail');
   const agent = request.agent(t.app);
-  const accepted = await agent.post(`/api/invites/${token}/accept`).send({ name: `Member ${role}`, password: 'correct-horse-battery' });
+  const accepted = await agent
+    .post(`/api/invites/${token}/accept`)
+    .send({ name: `Member ${role}`, password: 'correct-horse-battery' });
   if (accepted.status !== 201) throw new Error(`accept failed: ${accepted.status} ${JSON.stringify(accepted.body)}`);
   return { agent, email, member: accepted.body.member as { id: string } };
 }

@@ -12,7 +12,10 @@ declare module 'vitest' {
   }
 }
 
-interface Shared { ready: Promise<{ url: string; drop: () => Promise<void> }>; users: number }
+interface Shared {
+  ready: Promise<{ url: string; drop: () => Promise<void> }>;
+  users: number;
+}
 const holder = globalThis as typeof globalThis & { __parlourTestDatabase?: Shared };
 
 async function migrated(): Promise<{ url: string; drop: () => Promise<void> }> {

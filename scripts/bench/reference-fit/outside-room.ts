@@ -2,7 +2,13 @@
 // tests/reference/fit-reference.test.ts checks both give the same findings. Do not edit.
 import type { RoomShell } from '../../../shared/schemas/room';
 import type { Finding } from '../../../shared/analysis/takeoff';
-import { distanceToSegmentMm, pointInPolygon, segmentCrossesConvex, TOUCH_TOLERANCE_MM, type PieceBox } from '../../../shared/analysis/fit/boxes';
+import {
+  distanceToSegmentMm,
+  pointInPolygon,
+  segmentCrossesConvex,
+  TOUCH_TOLERANCE_MM,
+  type PieceBox,
+} from '../../../shared/analysis/fit/boxes';
 import { capitalise, theName } from '../../../shared/analysis/fit/messages';
 import type { Vec2 } from '../../../shared/geometry/vec';
 
@@ -24,7 +30,9 @@ export function findOutsideRoom(shell: Pick<RoomShell, 'outline'>, boxes: readon
   const outline = shell.outline;
   const findings: Finding[] = [];
   for (const box of boxes) {
-    const crossesWall = outline.some((start, i) => segmentCrossesConvex(start, outline[(i + 1) % outline.length], box.corners, TOUCH_TOLERANCE_MM));
+    const crossesWall = outline.some((start, i) =>
+      segmentCrossesConvex(start, outline[(i + 1) % outline.length], box.corners, TOUCH_TOLERANCE_MM),
+    );
     const outsideCorners = box.corners.filter((corner) => cornerOutside(corner, outline)).length;
     if (!crossesWall && outsideCorners === 0) continue;
     const wholly = !crossesWall && outsideCorners === box.corners.length;

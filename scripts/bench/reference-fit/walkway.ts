@@ -9,7 +9,14 @@ import { addScaled, type Vec2 } from '../../../shared/geometry/vec';
 import type { Piece } from '../../../shared/schemas/option';
 import type { RoomShell } from '../../../shared/schemas/room';
 import type { Finding } from '../../../shared/analysis/takeoff';
-import { blocksWalking, closestOnShape, closestPair, distanceToSegmentMm, pointInPolygon, type PieceBox } from '../../../shared/analysis/fit/boxes';
+import {
+  blocksWalking,
+  closestOnShape,
+  closestPair,
+  distanceToSegmentMm,
+  pointInPolygon,
+  type PieceBox,
+} from '../../../shared/analysis/fit/boxes';
 import { cellAt, cellCentreMm, distanceField, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
 import { capitalise, cmText, roundToCmMm, theName } from '../../../shared/analysis/fit/messages';
 
@@ -38,7 +45,12 @@ interface Gap {
 }
 
 /** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
-const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [[1, 0], [0, 1], [1, 1], [1, -1]];
+const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [
+  [1, 0],
+  [0, 1],
+  [1, 1],
+  [1, -1],
+];
 /** Length of one step of each run direction, in cells. */
 const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
 
@@ -154,7 +166,13 @@ class Widths {
     const i = cell % nx;
     const j = (cell - i) / nx;
     let widthMm = Infinity;
-    const farSideMm = this.ray(i, j, (i - (nearestCell % nx)) / d1, (j - Math.floor(nearestCell / nx)) / d1, this.enoughMm - nearSideMm);
+    const farSideMm = this.ray(
+      i,
+      j,
+      (i - (nearestCell % nx)) / d1,
+      (j - Math.floor(nearestCell / nx)) / d1,
+      this.enoughMm - nearSideMm,
+    );
     if (farSideMm < Infinity && !this.bothWalls(nearestCell, this.rayHit)) {
       widthMm = nearSideMm + farSideMm;
       this.endA[cell] = nearestCell;
@@ -249,7 +267,12 @@ interface Routes {
  * slip between two blocked cells meeting at a corner): a Dijkstra search that always extends the
  * route with the widest bottleneck so far, so each cell ends with the widest route that reaches it.
  */
-function widestRoutes(grid: FloorGrid, widths: Widths, sources: readonly { cell: number; opening: number }[], limitMm: number): Routes {
+function widestRoutes(
+  grid: FloorGrid,
+  widths: Widths,
+  sources: readonly { cell: number; opening: number }[],
+  limitMm: number,
+): Routes {
   const cells = grid.nx * grid.ny;
   const bottleneckMm = new Int32Array(cells).fill(-1);
   const parent = new Int32Array(cells).fill(-1);

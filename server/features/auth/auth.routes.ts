@@ -15,8 +15,13 @@ export const authRoutes: RouteDef[] = [
     access: 'public',
     async handler({ req, res, deps }) {
       const body = signUpSchema.parse(req.body);
-      await enforceRateLimit(deps.db, res, signUpRate(deps.config), clientAddressKey(req.ip), (s) =>
-        `Too many new studios were made from this address. Try again in ${waitInWords(s)}.`);
+      await enforceRateLimit(
+        deps.db,
+        res,
+        signUpRate(deps.config),
+        clientAddressKey(req.ip),
+        (s) => `Too many new studios were made from this address. Try again in ${waitInWords(s)}.`,
+      );
       const member = await signUp(deps.db, body);
       await startSession(deps.db, res, member.id, deps.config.SECURE_COOKIES);
       res.status(201);
@@ -52,7 +57,11 @@ export const authRoutes: RouteDef[] = [
     async handler(ctx): Promise<SessionInfo> {
       const caller = requireCaller(ctx);
       const member = await getMember(ctx.deps.db, caller.studioId, caller.memberId);
-      const studio = await ctx.deps.db.selectFrom('studios').select(['id', 'name']).where('id', '=', caller.studioId).executeTakeFirst();
+      const studio = await ctx.deps.db
+        .selectFrom('studios')
+        .select(['id', 'name'])
+        .where('id', '=', caller.studioId)
+        .executeTakeFirst();
       if (!member || !studio) throw notFound('Your account');
       return { member: toMember(member), studio, outbox: Boolean(ctx.deps.config.OUTBOX_DIR) };
     },

@@ -15,7 +15,9 @@ export const SIGN_IN_RATE: RateRule = { bucket: 'sign-in', limit: 5, windowMs: 1
 
 /** New studios per client address per hour, counted before anything is made (`SIGN_UP_LIMIT_PER_HOUR`). */
 export const signUpRate = (config: Pick<AppConfig, 'SIGN_UP_LIMIT_PER_HOUR'>): RateRule => ({
-  bucket: 'sign-up', limit: config.SIGN_UP_LIMIT_PER_HOUR, windowMs: 60 * 60_000,
+  bucket: 'sign-up',
+  limit: config.SIGN_UP_LIMIT_PER_HOUR,
+  windowMs: 60 * 60_000,
 });
 
 /** Checks a password against its stored hash; the app's is scrypt, tests may count the calls. */
@@ -34,8 +36,19 @@ export async function signUp(db: Db, body: SignUpBody) {
   });
 }
 
-export async function signIn(db: Db, res: Response, body: SignInBody, verify: PasswordVerifier = verifyPassword): Promise<{ id: string }> {
-  await enforceRateLimit(db, res, SIGN_IN_RATE, body.email, (s) => `Too many attempts to sign in. Try again in ${waitInWords(s)}.`);
+export async function signIn(
+  db: Db,
+  res: Response,
+  body: SignInBody,
+  verify: PasswordVerifier = verifyPassword,
+): Promise<{ id: string }> {
+  await enforceRateLimit(
+    db,
+    res,
+    SIGN_IN_RATE,
+    body.email,
+    (s) => `Too many attempts to sign in. Try again in ${waitInWords(s)}.`,
+  );
   const member = await findMemberByEmail(db, body.email);
   const ok = await verify(body.password, member?.password_hash ?? (await dummyPasswordHash()));
   if (!member || !ok) {

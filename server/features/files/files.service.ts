@@ -29,4 +29,3 @@ export async function sendDerivedFile(ctx: RouteContext, key: string, extra: Rec
   res.set(cacheHeaders).type('image/webp').send(bytes);
   return undefined;
 }
-

@@ -35,7 +35,12 @@ export async function insertFinishRows(db: Db, rows: NewFinish[]): Promise<Finis
   return db.insertInto('finishes').values(rows).returningAll().execute();
 }
 
-export async function updateFinishRow(db: Db, studioId: string, id: string, changes: FinishChanges): Promise<FinishRow | undefined> {
+export async function updateFinishRow(
+  db: Db,
+  studioId: string,
+  id: string,
+  changes: FinishChanges,
+): Promise<FinishRow | undefined> {
   return db
     .updateTable('finishes')
     .set({ ...changes, updated_at: new Date() })

@@ -1,14 +1,26 @@
 import { idParamSchema, withoutUncleanCharacters } from '../../../shared/schemas/common';
 import {
-  centredSquareCrop, createPaintSchema, finishListQuerySchema, finishPatchSchema, photoUploadFieldsSchema, type EdgeBlend,
+  centredSquareCrop,
+  createPaintSchema,
+  finishListQuerySchema,
+  finishPatchSchema,
+  photoUploadFieldsSchema,
+  type EdgeBlend,
 } from '../../../shared/schemas/finish';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import type { Db } from '../../db/database';
 import { uploadKey } from '../files/file-keys';
 import {
-  deleteFinishRow, filesOf, getFinishRow, insertFinishRows, listFinishRows, updateFinishRow,
-  type FinishChanges, type FinishRow, type NewFinish,
+  deleteFinishRow,
+  filesOf,
+  getFinishRow,
+  insertFinishRows,
+  listFinishRows,
+  updateFinishRow,
+  type FinishChanges,
+  type FinishRow,
+  type NewFinish,
 } from './finishes.repository';
 import { finishServices, removeUnreferenced, resumeStalled, toFinish, toFinishes } from './finishes.service';
 import { readPhotoUpload, type UploadedPhoto } from './finishes.uploads';
@@ -27,7 +39,12 @@ async function finishResponse(db: Db, row: FinishRow) {
 
 /** A readable finish name from a file name: "oak_boards-02.jpg" → "Oak boards 02". */
 export function nameFromFileName(fileName: string): string {
-  const stem = withoutUncleanCharacters(fileName).replace(/\.[^.]*$/, '').replace(/[_-]+/g, ' ').replace(/\s+/g, ' ').trim().slice(0, 120);
+  const stem = withoutUncleanCharacters(fileName)
+    .replace(/\.[^.]*$/, '')
+    .replace(/[_-]+/g, ' ')
+    .replace(/\s+/g, ' ')
+    .trim()
+    .slice(0, 120);
   return stem ? stem[0].toUpperCase() + stem.slice(1) : 'Photo finish';
 }
 
@@ -35,7 +52,10 @@ const PHOTO_ONLY = ['category', 'repeatWidthMm', 'repeatHeightMm', 'crop', 'edge
 const PAINT_ONLY = ['colourHex', 'sheen'] as const;
 
 /** Column changes for a patch, refusing fields that belong to the other kind of finish. */
-function changesFor(row: FinishRow, patch: ReturnType<typeof finishPatchSchema.parse>): { changes: FinishChanges; reprocess: boolean } {
+function changesFor(
+  row: FinishRow,
+  patch: ReturnType<typeof finishPatchSchema.parse>,
+): { changes: FinishChanges; reprocess: boolean } {
   const wrong = (row.kind === 'paint' ? PHOTO_ONLY : PAINT_ONLY).filter((k) => patch[k] !== undefined);
   if (wrong.length > 0) {
     const message = row.kind === 'paint' ? 'A paint has no photo, size or crop.' : 'A photo finish has no paint colour or sheen.';
@@ -59,13 +79,24 @@ function changesFor(row: FinishRow, patch: ReturnType<typeof finishPatchSchema.p
   const sameBlend = patch.edgeBlend === undefined || patch.edgeBlend === row.edge_blend;
   const reprocess = row.kind === 'photo' && !(sameCrop && sameBlend);
   if (reprocess) {
-    if (!row.source_key) throw new HttpError(409, 'no_original', 'This photo could not be processed, so there is nothing to crop. Upload it again.');
-    Object.assign(changes, { status: 'processing', failure_reason: null, revision: row.revision + 1, queued_at: new Date() } satisfies FinishChanges);
+    if (!row.source_key)
+      throw new HttpError(409, 'no_original', 'This photo could not be processed, so there is nothing to crop. Upload it again.');
+    Object.assign(changes, {
+      status: 'processing',
+      failure_reason: null,
+      revision: row.revision + 1,
+      queued_at: new Date(),
+    } satisfies FinishChanges);
   }
   return { changes, reprocess };
 }
 
-function photoRows(studioId: string, photos: UploadedPhoto[], keys: string[], fields: ReturnType<typeof photoUploadFieldsSchema.parse>): NewFinish[] {
+function photoRows(
+  studioId: string,
+  photos: UploadedPhoto[],
+  keys: string[],
+  fields: ReturnType<typeof photoUploadFieldsSchema.parse>,
+): NewFinish[] {
   return photos.map((p, i) => ({
     studio_id: studioId,
     kind: 'photo',
@@ -112,17 +143,19 @@ export const finishRoutes: RouteDef[] = [
     async handler(ctx) {
       const caller = requireCaller(ctx);
       const body = createPaintSchema.parse(ctx.req.body);
-      const [row] = await insertFinishRows(ctx.deps.db, [{
-        studio_id: caller.studioId,
-        kind: 'paint',
-        name: body.name,
-        colour_hex: body.colourHex,
-        sheen: body.sheen,
-        supplier: body.supplier ?? null,
-        code: body.code ?? null,
-        price: body.price ?? null,
-        price_unit: body.priceUnit ?? null,
-      }]);
+      const [row] = await insertFinishRows(ctx.deps.db, [
+        {
+          studio_id: caller.studioId,
+          kind: 'paint',
+          name: body.name,
+          colour_hex: body.colourHex,
+          sheen: body.sheen,
+          supplier: body.supplier ?? null,
+          code: body.code ?? null,
+          price: body.price ?? null,
+          price_unit: body.priceUnit ?? null,
+        },
+      ]);
       ctx.res.status(201);
       return { finish: toFinish(row, []) };
     },
@@ -140,7 +173,9 @@ export const finishRoutes: RouteDef[] = [
       let rows: FinishRow[];
       try {
         await Promise.all(photos.map((p, i) => storage.put(keys[i], p.buffer)));
-        rows = await ctx.deps.db.transaction().execute((trx) => insertFinishRows(trx, photoRows(caller.studioId, photos, keys, parsed)));
+        rows = await ctx.deps.db
+          .transaction()
+          .execute((trx) => insertFinishRows(trx, photoRows(caller.studioId, photos, keys, parsed)));
       } catch (err) {
         // All or nothing: a failure part-way leaves no upload behind.
         await Promise.all(keys.map((k) => storage.delete(k).catch(() => undefined)));

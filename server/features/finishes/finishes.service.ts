@@ -10,8 +10,15 @@ import { megapixels } from '../../services/images/inspect';
 import { cropSchema, UPLOAD_LIMITS, type Finish, type PhotoFiles } from '../../../shared/schemas/finish';
 import { derivedKey, fileUrl, masterKey } from '../files/file-keys';
 import {
-  filesOf, finishJobIfCurrent, getFinishRowById, keysInUse, replaceFiles, stalledIds, updateFinishRow,
-  type FinishFileRow, type FinishRow,
+  filesOf,
+  finishJobIfCurrent,
+  getFinishRowById,
+  keysInUse,
+  replaceFiles,
+  stalledIds,
+  updateFinishRow,
+  type FinishFileRow,
+  type FinishRow,
 } from './finishes.repository';
 
 /** Photos processed at once: each needs a few hundred MB at the pixel limit, so keep it small. */
@@ -61,7 +68,8 @@ export function toFinish(row: FinishRow, files: FinishFileRow[]): Finish {
     createdAt: row.created_at.toISOString(),
     updatedAt: row.updated_at.toISOString(),
   };
-  if (row.kind === 'paint') return { ...common, kind: 'paint', colourHex: row.colour_hex ?? '#ffffff', sheen: row.sheen ?? 'matt' };
+  if (row.kind === 'paint')
+    return { ...common, kind: 'paint', colourHex: row.colour_hex ?? '#ffffff', sheen: row.sheen ?? 'matt' };
   const urls: PhotoFiles = { ...NO_FILES };
   for (const f of files) {
     if (f.finish_id === row.id && f.purpose !== 'master') urls[URL_OF_PURPOSE[f.purpose]] = fileUrl(f.key);
@@ -84,7 +92,10 @@ export function toFinish(row: FinishRow, files: FinishFileRow[]): Finish {
 }
 
 export async function toFinishes(db: Db, rows: FinishRow[]): Promise<Finish[]> {
-  const files = await filesOf(db, rows.filter((r) => r.kind === 'photo').map((r) => r.id));
+  const files = await filesOf(
+    db,
+    rows.filter((r) => r.kind === 'photo').map((r) => r.id),
+  );
   return rows.map((r) => toFinish(r, files));
 }
 
@@ -108,8 +119,11 @@ export async function resumeStalled(deps: AppDeps, studioId: string): Promise<vo
 /** The sentence a designer sees for a photo that could not be processed. */
 export function failureReason(err: unknown): string {
   const message = err instanceof Error ? err.message : String(err);
-  if (/pixel limit/i.test(message)) return `This photo is larger than ${megapixels(UPLOAD_LIMITS.maxPixels)}. Export it smaller and upload it again.`;
-  if (/premature end|truncated|corrupt|end of (file|stream)|read error|invalid|bad (huffman|seek)|unexpected end/i.test(message)) {
+  if (/pixel limit/i.test(message))
+    return `This photo is larger than ${megapixels(UPLOAD_LIMITS.maxPixels)}. Export it smaller and upload it again.`;
+  if (
+    /premature end|truncated|corrupt|end of (file|stream)|read error|invalid|bad (huffman|seek)|unexpected end/i.test(message)
+  ) {
     return 'This photo is damaged or cut short (the file ends early). Export or download it again, then upload it.';
   }
   return 'This photo could not be processed. Try exporting it again as a JPEG.';
@@ -134,12 +148,20 @@ export async function runPhotoJob(db: Db, storage: FileStorage, finishId: string
   const fromUpload = sourceKey.startsWith('uploads/');
   const source = await storage.get(sourceKey);
   if (!source) {
-    await finishJobIfCurrent(db, finishId, row.revision, { status: 'failed', failure_reason: 'The original photo is missing. Upload it again.', source_key: null });
+    await finishJobIfCurrent(db, finishId, row.revision, {
+      status: 'failed',
+      failure_reason: 'The original photo is missing. Upload it again.',
+      source_key: null,
+    });
     return;
   }
   let processed;
   try {
-    processed = await processPhoto(source, { crop: cropSchema.parse(row.crop), edgeBlend: row.edge_blend ?? 'none', keepMaster: fromUpload });
+    processed = await processPhoto(source, {
+      crop: cropSchema.parse(row.crop),
+      edgeBlend: row.edge_blend ?? 'none',
+      keepMaster: fromUpload,
+    });
   } catch (err) {
     // A bad upload is not worth keeping; a kept original stays so the crop can be tried again.
     const failed = await finishJobIfCurrent(db, finishId, row.revision, {
@@ -175,19 +197,27 @@ export async function runPhotoJob(db: Db, storage: FileStorage, finishId: string
     });
     if (!saved) return null;
     const before = await filesOf(trx, [finishId]);
-    await replaceFiles(trx, finishId, [...images, master].map((img) => ({
-      finish_id: finishId,
-      studio_id: row.studio_id,
-      purpose: img.purpose,
-      key: img.key,
-      width_px: img.widthPx,
-      height_px: img.heightPx,
-      bytes: img.buffer.length,
-    })));
+    await replaceFiles(
+      trx,
+      finishId,
+      [...images, master].map((img) => ({
+        finish_id: finishId,
+        studio_id: row.studio_id,
+        purpose: img.purpose,
+        key: img.key,
+        width_px: img.widthPx,
+        height_px: img.heightPx,
+        bytes: img.buffer.length,
+      })),
+    );
     return before.map((f) => f.key);
   });
   if (previous === null) {
-    await removeUnreferenced(db, storage, toStore.map((img) => img.key));
+    await removeUnreferenced(
+      db,
+      storage,
+      toStore.map((img) => img.key),
+    );
     return;
   }
   await removeUnreferenced(db, storage, [...previous, fromUpload ? sourceKey : null]);

@@ -24,7 +24,11 @@ const upload = multer({
 function multerProblem(err: multer.MulterError): HttpError {
   switch (err.code) {
     case 'LIMIT_FILE_SIZE':
-      return new HttpError(413, 'file_too_large', `A photo is larger than ${UPLOAD_LIMITS.maxFileBytes / MB} MB. Export it smaller and try again.`);
+      return new HttpError(
+        413,
+        'file_too_large',
+        `A photo is larger than ${UPLOAD_LIMITS.maxFileBytes / MB} MB. Export it smaller and try again.`,
+      );
     case 'LIMIT_FILE_COUNT':
     case 'LIMIT_UNEXPECTED_FILE':
       return err.field && err.field !== PHOTOS_FIELD
@@ -42,7 +46,10 @@ export interface UploadedPhoto {
 }
 
 /** The request's photos and text fields, each photo inspected; throws HttpError for any problem. */
-export async function readPhotoUpload(req: Request, res: Response): Promise<{ photos: UploadedPhoto[]; fields: Record<string, unknown> }> {
+export async function readPhotoUpload(
+  req: Request,
+  res: Response,
+): Promise<{ photos: UploadedPhoto[]; fields: Record<string, unknown> }> {
   await new Promise<void>((resolve, reject) => {
     upload(req, res, (err: unknown) => {
       if (!err) resolve();
@@ -52,14 +59,21 @@ export async function readPhotoUpload(req: Request, res: Response): Promise<{ ph
   });
   const files = (Array.isArray(req.files) ? req.files : []) as Express.Multer.File[];
   if (files.length === 0) {
-    throw new HttpError(400, 'no_photos', 'Choose at least one photo (JPEG, PNG or WebP).', { [PHOTOS_FIELD]: 'Choose at least one photo.' });
+    throw new HttpError(400, 'no_photos', 'Choose at least one photo (JPEG, PNG or WebP).', {
+      [PHOTOS_FIELD]: 'Choose at least one photo.',
+    });
   }
   const photos: UploadedPhoto[] = [];
   for (const [i, file] of files.entries()) {
     try {
-      photos.push({ fileName: file.originalname, buffer: file.buffer, header: await inspectPhoto(file.buffer, file.originalname) });
+      photos.push({
+        fileName: file.originalname,
+        buffer: file.buffer,
+        header: await inspectPhoto(file.buffer, file.originalname),
+      });
     } catch (err) {
-      if (err instanceof PhotoProblem) throw new HttpError(err.status, err.code, err.message, { [`${PHOTOS_FIELD}[${i}]`]: err.message });
+      if (err instanceof PhotoProblem)
+        throw new HttpError(err.status, err.code, err.message, { [`${PHOTOS_FIELD}[${i}]`]: err.message });
       throw err;
     }
   }

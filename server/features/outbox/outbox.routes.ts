@@ -27,7 +27,14 @@ export const outboxRoutes: RouteDef[] = [
       const page = rows.slice(0, limit);
       const last = page.at(-1);
       return {
-        messages: page.map((r) => ({ id: r.id, kind: r.kind, to: r.recipient, subject: r.subject, preview: r.preview, sentAt: r.created_at.toISOString() })),
+        messages: page.map((r) => ({
+          id: r.id,
+          kind: r.kind,
+          to: r.recipient,
+          subject: r.subject,
+          preview: r.preview,
+          sentAt: r.created_at.toISOString(),
+        })),
         next: rows.length > limit && last ? outboxCursor(last.created_at, last.id) : null,
       };
     },
@@ -41,7 +48,16 @@ export const outboxRoutes: RouteDef[] = [
       const { id } = idParamSchema.parse(ctx.req.params);
       const r = orNotFound(await getSentMail(ctx.deps.db, studioId, kinds, id), 'That message');
       return {
-        message: { id: r.id, kind: r.kind, from: r.sender, to: r.recipient, subject: r.subject, text: r.text_body, html: r.html_body, sentAt: r.created_at.toISOString() },
+        message: {
+          id: r.id,
+          kind: r.kind,
+          from: r.sender,
+          to: r.recipient,
+          subject: r.subject,
+          text: r.text_body,
+          html: r.html_body,
+          sentAt: r.created_at.toISOString(),
+        },
       };
     },
   },

@@ -40,7 +40,15 @@ export async function sendStudioMail(
     });
   if (!hasOutbox(deps.config)) return send();
   const run = async (trx: Db) => {
-    await insertSentMail(trx, { studioId, kind, from: deps.config.MAIL_FROM, to: message.to, subject: message.subject, text: message.text, html: message.html ?? null });
+    await insertSentMail(trx, {
+      studioId,
+      kind,
+      from: deps.config.MAIL_FROM,
+      to: message.to,
+      subject: message.subject,
+      text: message.text,
+      html: message.html ?? null,
+    });
     await send();
   };
   await (db.isTransaction ? run(db) : db.transaction().execute(run));

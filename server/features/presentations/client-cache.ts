@@ -28,8 +28,14 @@ export interface CachedLink {
   body: string;
 }
 
-interface Entry extends CachedLink { storedAt: number }
-interface Opens { count: number; first: Date; last: Date }
+interface Entry extends CachedLink {
+  storedAt: number;
+}
+interface Opens {
+  count: number;
+  first: Date;
+  last: Date;
+}
 
 export class ClientLinkCache {
   private readonly entries = new Map<string, Entry>();
@@ -43,7 +49,10 @@ export class ClientLinkCache {
   private flushing: Promise<void> = Promise.resolve();
   private readonly flushTimer: NodeJS.Timeout;
 
-  constructor(private readonly db: Db, private readonly databaseUrl: string) {
+  constructor(
+    private readonly db: Db,
+    private readonly databaseUrl: string,
+  ) {
     this.flushTimer = setInterval(() => void this.flushOpens(), OPEN_FLUSH_MS);
     this.flushTimer.unref();
     this.connect();

@@ -2,7 +2,12 @@
 // plain 404 or 410 that says nothing about the presentation behind it.
 import { z } from 'zod';
 import type { Request, Response } from 'express';
-import { choiceBodySchema, viewBodySchema, type ChoiceAnswer, type ClientPresentation } from '../../../shared/schemas/presentation';
+import {
+  choiceBodySchema,
+  viewBodySchema,
+  type ChoiceAnswer,
+  type ClientPresentation,
+} from '../../../shared/schemas/presentation';
 import { optionLabel } from '../../../shared/schemas/room-api';
 import type { RouteContext, RouteDef } from '../../http/routes';
 import { HttpError } from '../../http/errors';
@@ -11,13 +16,27 @@ import { canPresentationReadFile } from '../files/files.access';
 import { keyFromFileName } from '../files/file-keys';
 import { fileParam, sendDerivedFile } from '../files/files.service';
 import {
-  getChoice, isShownOption, listShownOptions, logRequest, notifyAddresses, projectForPresentation, recordViewed,
-  saveChoice, type PresentationRow,
+  getChoice,
+  isShownOption,
+  listShownOptions,
+  logRequest,
+  notifyAddresses,
+  projectForPresentation,
+  recordViewed,
+  saveChoice,
+  type PresentationRow,
 } from './presentations.repository';
 import { sendStudioMail } from '../outbox/outbox.service';
 import { clientLinkCache, forgetPresentation } from './client-cache';
 import {
-  CHOICE_LIMIT, RATE_WINDOW_MS, VIEW_LIMIT, choiceMail, clientPresentation, linkNotFound, presentationFinishIds, presentationForToken,
+  CHOICE_LIMIT,
+  RATE_WINDOW_MS,
+  VIEW_LIMIT,
+  choiceMail,
+  clientPresentation,
+  linkNotFound,
+  presentationFinishIds,
+  presentationForToken,
 } from './presentations.service';
 
 const roomParam = z.object({ roomId: z.uuid() });
@@ -39,7 +58,13 @@ function tooMany(res: Response): HttpError {
   return new HttpError(429, 'too_many', 'That was a lot of changes in a short time. Please wait a few minutes, then try again.');
 }
 
-async function notifyDesigner(ctx: RouteContext, p: PresentationRow, roomId: string, optionId: string, comment: string): Promise<void> {
+async function notifyDesigner(
+  ctx: RouteContext,
+  p: PresentationRow,
+  roomId: string,
+  optionId: string,
+  comment: string,
+): Promise<void> {
   const { db, config } = ctx.deps;
   try {
     const [project, shown, to] = await Promise.all([
@@ -50,8 +75,16 @@ async function notifyDesigner(ctx: RouteContext, p: PresentationRow, roomId: str
     const inRoom = shown.filter((s) => s.room_id === roomId);
     const index = inRoom.findIndex((s) => s.option_id === optionId);
     if (!project || index < 0) return;
-    const mail = { clientName: project.client_name, project: project.name, room: inRoom[index].room_name, option: optionLabel(index, inRoom[index].option_name), comment, projectLink: `${config.publicUrl}/projects/${project.id}` };
-    for (const address of to) await sendStudioMail(db, ctx.deps, { studioId: p.studio_id, kind: 'choice', ...choiceMail({ to: address, ...mail }) });
+    const mail = {
+      clientName: project.client_name,
+      project: project.name,
+      room: inRoom[index].room_name,
+      option: optionLabel(index, inRoom[index].option_name),
+      comment,
+      projectLink: `${config.publicUrl}/projects/${project.id}`,
+    };
+    for (const address of to)
+      await sendStudioMail(db, ctx.deps, { studioId: p.studio_id, kind: 'choice', ...choiceMail({ to: address, ...mail }) });
   } catch (err) {
     // The choice is saved either way; the project page shows it even when the mail is lost.
     console.error('[presentations] choice notification failed:', (err as Error).message);
@@ -68,11 +101,13 @@ export const clientPresentationRoutes: RouteDef[] = [
       const token = tokenOf(ctx.req);
       const cache = clientLinkCache(ctx.deps);
       // The hot path of a busy link: a ready answer, no database round trip (see client-cache.ts).
-      const link = cache.get(token) ?? (await cache.load(token, async () => {
-        const p = await presentationForToken(ctx.deps.db, ctx.deps.config, token);
-        const answer: { presentation: ClientPresentation } = { presentation: await clientPresentation(ctx.deps.db, p, token) };
-        return { presentationId: p.id, studioId: p.studio_id, expiresAt: p.expires_at, body: JSON.stringify(answer) };
-      }));
+      const link =
+        cache.get(token) ??
+        (await cache.load(token, async () => {
+          const p = await presentationForToken(ctx.deps.db, ctx.deps.config, token);
+          const answer: { presentation: ClientPresentation } = { presentation: await clientPresentation(ctx.deps.db, p, token) };
+          return { presentationId: p.id, studioId: p.studio_id, expiresAt: p.expires_at, body: JSON.stringify(answer) };
+        }));
       if (ctx.caller?.studioId !== link.studioId) cache.recordOpened(link.presentationId);
       ctx.res.type('application/json').send(link.body);
       return undefined;
@@ -91,7 +126,8 @@ export const clientPresentationRoutes: RouteDef[] = [
       const key = keyFromFileName(name);
       const scope = { studioId: p.studio_id, finishIds: await presentationFinishIds(ctx.deps.db, p) };
       // Another finish's file and no file at all answer the same, so names cannot be probed.
-      if (!key || !(await canPresentationReadFile(ctx.deps.db, scope, key))) throw new HttpError(404, 'not_found', 'That file was not found.');
+      if (!key || !(await canPresentationReadFile(ctx.deps.db, scope, key)))
+        throw new HttpError(404, 'not_found', 'That file was not found.');
       return sendDerivedFile(ctx, key, { 'Referrer-Policy': 'no-referrer' });
     },
   },
@@ -105,7 +141,9 @@ export const clientPresentationRoutes: RouteDef[] = [
       await ctx.deps.db.transaction().execute(async (trx) => {
         const p = await presentationForToken(trx, ctx.deps.config, tokenOf(ctx.req), { forUpdate: true });
         if ((await logRequest(trx, p.id, 'view', new Date(Date.now() - RATE_WINDOW_MS))) > VIEW_LIMIT) throw tooMany(ctx.res);
-        const ok = isStudioMember(ctx, p) ? await isShownOption(trx, p.id, optionId) : await recordViewed(trx, p.id, optionId, new Date());
+        const ok = isStudioMember(ctx, p)
+          ? await isShownOption(trx, p.id, optionId)
+          : await recordViewed(trx, p.id, optionId, new Date());
         if (!ok) throw new HttpError(404, 'not_found', 'That option is not part of this presentation.');
       });
       return undefined;
@@ -129,17 +167,32 @@ export const clientPresentationRoutes: RouteDef[] = [
         const project = await lockProjectState(trx, p.studio_id, p.project_id, 'share');
         if (!project) throw linkNotFound();
         if (project.state === 'decided' || project.state === 'archived') {
-          throw new HttpError(409, 'decided', 'Your designer has confirmed the choices for this project, so they cannot be changed here. Get in touch with them to change anything.');
+          throw new HttpError(
+            409,
+            'decided',
+            'Your designer has confirmed the choices for this project, so they cannot be changed here. Get in touch with them to change anything.',
+          );
         }
-        if (!(await isShownOption(trx, p.id, body.optionId, roomId))) throw new HttpError(404, 'not_found', 'That option is not part of this presentation.');
+        if (!(await isShownOption(trx, p.id, body.optionId, roomId)))
+          throw new HttpError(404, 'not_found', 'That option is not part of this presentation.');
         const current = await getChoice(trx, p.id, roomId);
         if (current && current.option_id === body.optionId && current.comment === body.comment) {
-          return { p, roomId, changed: false, choice: { optionId: current.option_id, comment: current.comment, chosenAt: current.chosen_at.toISOString() } };
+          return {
+            p,
+            roomId,
+            changed: false,
+            choice: { optionId: current.option_id, comment: current.comment, chosenAt: current.chosen_at.toISOString() },
+          };
         }
         const at = new Date();
         await saveChoice(trx, { presentationId: p.id, roomId, optionId: body.optionId, comment: body.comment, at });
         await touchProject(trx, p.project_id);
-        return { p, roomId, changed: true, choice: { optionId: body.optionId, comment: body.comment, chosenAt: at.toISOString() } };
+        return {
+          p,
+          roomId,
+          changed: true,
+          choice: { optionId: body.optionId, comment: body.comment, chosenAt: at.toISOString() },
+        };
       });
       if (result.changed) {
         forgetPresentation(ctx.deps, result.p.id);

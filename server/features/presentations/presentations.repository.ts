@@ -8,8 +8,15 @@ export type PresentationRow = Selectable<PresentationsTable>;
 export async function insertPresentation(
   db: Db,
   v: {
-    studioId: string; projectId: string; createdBy: string; tokenId: string; message: string; showPrices: boolean;
-    issuedAt: Date; tokenExpiresAt: Date; expiresAt: Date;
+    studioId: string;
+    projectId: string;
+    createdBy: string;
+    tokenId: string;
+    message: string;
+    showPrices: boolean;
+    issuedAt: Date;
+    tokenExpiresAt: Date;
+    expiresAt: Date;
   },
 ): Promise<PresentationRow> {
   return db
@@ -30,14 +37,27 @@ export async function insertPresentation(
 }
 
 /** The rooms and options a presentation shows, each list in the order given. */
-export async function insertShownRooms(db: Db, presentationId: string, rooms: { roomId: string; optionIds: string[] }[]): Promise<void> {
+export async function insertShownRooms(
+  db: Db,
+  presentationId: string,
+  rooms: { roomId: string; optionIds: string[] }[],
+): Promise<void> {
   await db
     .insertInto('presentation_rooms')
     .values(rooms.map((r, position) => ({ presentation_id: presentationId, room_id: r.roomId, position })))
     .execute();
   await db
     .insertInto('presentation_options')
-    .values(rooms.flatMap((r) => r.optionIds.map((optionId, position) => ({ presentation_id: presentationId, room_id: r.roomId, option_id: optionId, position }))))
+    .values(
+      rooms.flatMap((r) =>
+        r.optionIds.map((optionId, position) => ({
+          presentation_id: presentationId,
+          room_id: r.roomId,
+          option_id: optionId,
+          position,
+        })),
+      ),
+    )
     .execute();
 }
 
@@ -52,13 +72,22 @@ export async function listPresentations(db: Db, studioId: string, projectId: str
 }
 
 /** `forUpdate` holds its row until the transaction ends (take it before the project's, as a choice does). */
-export async function getPresentation(db: Db, studioId: string, id: string, opts: { forUpdate?: boolean } = {}): Promise<PresentationRow | undefined> {
+export async function getPresentation(
+  db: Db,
+  studioId: string,
+  id: string,
+  opts: { forUpdate?: boolean } = {},
+): Promise<PresentationRow | undefined> {
   const q = db.selectFrom('presentations').selectAll().where('studio_id', '=', studioId).where('id', '=', id);
   return (opts.forUpdate ? q.forUpdate() : q).executeTakeFirst();
 }
 
 /** The presentation a verified token names; `forUpdate` holds its row until the transaction ends. */
-export async function findByTokenId(db: Db, tokenId: string, opts: { forUpdate?: boolean } = {}): Promise<PresentationRow | undefined> {
+export async function findByTokenId(
+  db: Db,
+  tokenId: string,
+  opts: { forUpdate?: boolean } = {},
+): Promise<PresentationRow | undefined> {
   const q = db.selectFrom('presentations').selectAll().where('token_id', '=', tokenId);
   return (opts.forUpdate ? q.forUpdate() : q).executeTakeFirst();
 }
@@ -68,12 +97,24 @@ export async function listShownOptions(db: Db, presentationIds: string[]) {
   if (presentationIds.length === 0) return [];
   return db
     .selectFrom('presentation_options as po')
-    .innerJoin('presentation_rooms as pr', (j) => j.onRef('pr.presentation_id', '=', 'po.presentation_id').onRef('pr.room_id', '=', 'po.room_id'))
+    .innerJoin('presentation_rooms as pr', (j) =>
+      j.onRef('pr.presentation_id', '=', 'po.presentation_id').onRef('pr.room_id', '=', 'po.room_id'),
+    )
     .innerJoin('rooms', 'rooms.id', 'po.room_id')
     .innerJoin('options', 'options.id', 'po.option_id')
     .select([
-      'po.presentation_id', 'po.room_id', 'po.option_id', 'po.position as option_position', 'po.view_count', 'po.last_viewed_at',
-      'pr.position as room_position', 'rooms.name as room_name', 'rooms.shell', 'options.name as option_name', 'options.note', 'options.doc',
+      'po.presentation_id',
+      'po.room_id',
+      'po.option_id',
+      'po.position as option_position',
+      'po.view_count',
+      'po.last_viewed_at',
+      'pr.position as room_position',
+      'rooms.name as room_name',
+      'rooms.shell',
+      'options.name as option_name',
+      'options.note',
+      'options.doc',
     ])
     .where('po.presentation_id', 'in', presentationIds)
     .orderBy('pr.position')
@@ -99,17 +140,26 @@ export async function getChoice(db: Db, presentationId: string, roomId: string) 
     .executeTakeFirst();
 }
 
-export async function saveChoice(db: Db, v: { presentationId: string; roomId: string; optionId: string; comment: string; at: Date }): Promise<void> {
+export async function saveChoice(
+  db: Db,
+  v: { presentationId: string; roomId: string; optionId: string; comment: string; at: Date },
+): Promise<void> {
   await db
     .insertInto('choices')
     .values({ presentation_id: v.presentationId, room_id: v.roomId, option_id: v.optionId, comment: v.comment, chosen_at: v.at })
-    .onConflict((oc) => oc.columns(['presentation_id', 'room_id']).doUpdateSet({ option_id: v.optionId, comment: v.comment, chosen_at: v.at }))
+    .onConflict((oc) =>
+      oc.columns(['presentation_id', 'room_id']).doUpdateSet({ option_id: v.optionId, comment: v.comment, chosen_at: v.at }),
+    )
     .execute();
 }
 
 /** Whether the presentation shows this option (in this room, when one is named). */
 export async function isShownOption(db: Db, presentationId: string, optionId: string, roomId?: string): Promise<boolean> {
-  let q = db.selectFrom('presentation_options').select('option_id').where('presentation_id', '=', presentationId).where('option_id', '=', optionId);
+  let q = db
+    .selectFrom('presentation_options')
+    .select('option_id')
+    .where('presentation_id', '=', presentationId)
+    .where('option_id', '=', optionId);
   if (roomId) q = q.where('room_id', '=', roomId);
   return Boolean(await q.executeTakeFirst());
 }
@@ -132,7 +182,11 @@ export async function recordOpens(db: Db, id: string, v: { count: number; first:
 export async function recordViewed(db: Db, presentationId: string, optionId: string, at: Date): Promise<boolean> {
   const r = await db
     .updateTable('presentation_options')
-    .set((eb) => ({ first_viewed_at: eb.fn.coalesce('first_viewed_at', sql<Date>`${at}`), last_viewed_at: at, view_count: sql`view_count + 1` }))
+    .set((eb) => ({
+      first_viewed_at: eb.fn.coalesce('first_viewed_at', sql<Date>`${at}`),
+      last_viewed_at: at,
+      view_count: sql`view_count + 1`,
+    }))
     .where('presentation_id', '=', presentationId)
     .where('option_id', '=', optionId)
     .executeTakeFirst();
@@ -145,7 +199,12 @@ export async function recordViewed(db: Db, presentationId: string, optionId: str
  */
 export async function logRequest(db: Db, presentationId: string, kind: 'choice' | 'view', since: Date): Promise<number> {
   // Older entries no longer count towards anything.
-  await db.deleteFrom('presentation_requests').where('presentation_id', '=', presentationId).where('kind', '=', kind).where('at', '<', since).execute();
+  await db
+    .deleteFrom('presentation_requests')
+    .where('presentation_id', '=', presentationId)
+    .where('kind', '=', kind)
+    .where('at', '<', since)
+    .execute();
   await db.insertInto('presentation_requests').values({ presentation_id: presentationId, kind }).execute();
   const r = await db
     .selectFrom('presentation_requests')
@@ -168,7 +227,12 @@ export async function updatePresentation(
 /** Names and paint colours of the studio's finishes with these ids (others are left out). */
 export async function finishLabels(db: Db, studioId: string, ids: string[]) {
   if (ids.length === 0) return [];
-  return db.selectFrom('finishes').select(['id', 'name', 'colour_hex']).where('studio_id', '=', studioId).where('id', 'in', ids).execute();
+  return db
+    .selectFrom('finishes')
+    .select(['id', 'name', 'colour_hex'])
+    .where('studio_id', '=', studioId)
+    .where('id', 'in', ids)
+    .execute();
 }
 
 /** The studio's finish rows with these ids (others are left out), for what the shown options wear. */
@@ -223,9 +287,19 @@ export async function setProjectState(db: Db, projectId: string, state: 'present
 /** Who hears of a choice: the presentation's creator while still a member, else the studio's owners. */
 export async function notifyAddresses(db: Db, studioId: string, createdBy: string | null): Promise<string[]> {
   if (createdBy) {
-    const creator = await db.selectFrom('members').select('email').where('studio_id', '=', studioId).where('id', '=', createdBy).executeTakeFirst();
+    const creator = await db
+      .selectFrom('members')
+      .select('email')
+      .where('studio_id', '=', studioId)
+      .where('id', '=', createdBy)
+      .executeTakeFirst();
     if (creator) return [creator.email];
   }
-  const owners = await db.selectFrom('members').select('email').where('studio_id', '=', studioId).where('role', '=', 'owner').execute();
+  const owners = await db
+    .selectFrom('members')
+    .select('email')
+    .where('studio_id', '=', studioId)
+    .where('role', '=', 'owner')
+    .execute();
   return owners.map((o) => o.email);
 }

@@ -2,7 +2,11 @@
 // confirm the client's choices ("Mark as decided").
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import {
-  LINK_LIFETIME_DAYS, createPresentationSchema, decideProjectSchema, extendPresentationSchema, sendPresentationSchema,
+  LINK_LIFETIME_DAYS,
+  createPresentationSchema,
+  decideProjectSchema,
+  extendPresentationSchema,
+  sendPresentationSchema,
   type PresentationSummary,
 } from '../../../shared/schemas/presentation';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteContext, type RouteDef } from '../../http/routes';
@@ -12,8 +16,17 @@ import { newTokenId, toTokenTime } from '../../services/tokens/presentation-toke
 import { limitPresentationMail } from '../../services/rate-limit/mail-limits';
 import { listMembers } from '../studio/members.repository';
 import {
-  getPresentation, insertPresentation, insertShownRooms, latestDecision, listPresentations, projectForPresentation, roomsWithOptions,
-  setProjectState, studioName, updatePresentation, type PresentationRow,
+  getPresentation,
+  insertPresentation,
+  insertShownRooms,
+  latestDecision,
+  listPresentations,
+  projectForPresentation,
+  roomsWithOptions,
+  setProjectState,
+  studioName,
+  updatePresentation,
+  type PresentationRow,
 } from './presentations.repository';
 import { sendStudioMail } from '../outbox/outbox.service';
 import { flushOpens, forgetPresentation } from './client-cache';
@@ -44,13 +57,24 @@ async function summaries(ctx: RouteContext, rows: PresentationRow[]): Promise<Pr
 const one = async (ctx: RouteContext, row: PresentationRow) => ({ presentation: (await summaries(ctx, [row]))[0] });
 
 /** Every room must be the project's, every option that room's; names the first field that is not. */
-async function assertShownRoomsBelong(db: Db, studioId: string, projectId: string, rooms: { roomId: string; optionIds: string[] }[]) {
-  const rows = await roomsWithOptions(db, studioId, projectId, rooms.map((r) => r.roomId));
+async function assertShownRoomsBelong(
+  db: Db,
+  studioId: string,
+  projectId: string,
+  rooms: { roomId: string; optionIds: string[] }[],
+) {
+  const rows = await roomsWithOptions(
+    db,
+    studioId,
+    projectId,
+    rooms.map((r) => r.roomId),
+  );
   const fields: Record<string, string> = {};
   rooms.forEach((room, i) => {
     const mine = rows.filter((r) => r.room_id === room.roomId);
     if (mine.length === 0) fields[`rooms[${i}].roomId`] = 'Not a room of this project.';
-    else if (!room.optionIds.every((id) => mine.some((r) => r.option_id === id))) fields[`rooms[${i}].optionIds`] = 'Pick options of this room only.';
+    else if (!room.optionIds.every((id) => mine.some((r) => r.option_id === id)))
+      fields[`rooms[${i}].optionIds`] = 'Pick options of this room only.';
   });
   const first = Object.values(fields)[0];
   if (first) throw new HttpError(400, 'invalid', first, fields);
@@ -58,7 +82,8 @@ async function assertShownRoomsBelong(db: Db, studioId: string, projectId: strin
 
 const refuseUnlessActive = (p: PresentationRow, doing: string) => {
   const state = presentationState(p);
-  if (state === 'withdrawn') throw new HttpError(409, 'withdrawn', `This link was withdrawn, so it cannot be ${doing}. Make a new presentation instead.`);
+  if (state === 'withdrawn')
+    throw new HttpError(409, 'withdrawn', `This link was withdrawn, so it cannot be ${doing}. Make a new presentation instead.`);
   if (state === 'expired') throw new HttpError(409, 'expired', `This link has expired. Extend it before it is ${doing}.`);
 };
 
@@ -85,7 +110,8 @@ export const presentationRoutes: RouteDef[] = [
       const body = createPresentationSchema.parse(ctx.req.body);
       const row = await ctx.deps.db.transaction().execute(async (trx) => {
         const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
-        if (project.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it before presenting it.');
+        if (project.state === 'archived')
+          throw new HttpError(409, 'archived', 'This project is archived. Restore it before presenting it.');
         if (project.state === 'decided') throw decidedRefusal(DECIDED_REOPEN_FIRST);
         await assertShownRoomsBelong(trx, caller.studioId, projectId, body.rooms);
         const issuedAt = toTokenTime(new Date());
@@ -122,7 +148,10 @@ export const presentationRoutes: RouteDef[] = [
       refuseUnlessActive(p, 'sent');
       const project = await projectOrThrow(db, caller.studioId, p.project_id);
       const to = body.to ?? project.client_email;
-      if (!to) throw new HttpError(400, 'invalid', 'The client has no e-mail address. Type one here, or copy the link instead.', { to: 'Enter the client’s e-mail.' });
+      if (!to)
+        throw new HttpError(400, 'invalid', 'The client has no e-mail address. Type one here, or copy the link instead.', {
+          to: 'Enter the client’s e-mail.',
+        });
       await limitPresentationMail(db, ctx.res, caller.studioId, to);
       const mail = invitationMail({
         to,
@@ -137,7 +166,12 @@ export const presentationRoutes: RouteDef[] = [
       const sent = await db.transaction().execute(async (trx) => {
         const saved = await updatePresentation(trx, p.id, { sent_at: new Date(), sent_to: to });
         if (project.state === 'draft') await setProjectState(trx, project.id, 'presented');
-        await sendStudioMail(trx, ctx.deps, { studioId: caller.studioId, kind: 'presentation', ...mail }, 'The e-mail could not be sent. Try again in a moment, or copy the link instead.');
+        await sendStudioMail(
+          trx,
+          ctx.deps,
+          { studioId: caller.studioId, kind: 'presentation', ...mail },
+          'The e-mail could not be sent. Try again in a moment, or copy the link instead.',
+        );
         return saved;
       });
       return one(ctx, sent);
@@ -166,10 +200,19 @@ export const presentationRoutes: RouteDef[] = [
       const { id } = idParamSchema.parse(ctx.req.params);
       const { days } = extendPresentationSchema.parse(ctx.req.body);
       const p = await presentationOrThrow(ctx.deps.db, caller.studioId, id);
-      if (p.withdrawn_at) throw new HttpError(409, 'withdrawn', 'This link was withdrawn, so it cannot be extended. Make a new presentation instead.');
+      if (p.withdrawn_at)
+        throw new HttpError(
+          409,
+          'withdrawn',
+          'This link was withdrawn, so it cannot be extended. Make a new presentation instead.',
+        );
       const latest = p.token_expires_at.getTime();
       if (p.expires_at.getTime() >= latest) {
-        throw new HttpError(409, 'at_latest', `A link works for at most ${LINK_LIFETIME_DAYS} days. Make a new presentation to keep going.`);
+        throw new HttpError(
+          409,
+          'at_latest',
+          `A link works for at most ${LINK_LIFETIME_DAYS} days. Make a new presentation to keep going.`,
+        );
       }
       // From today when it has already run out, so extending an expired link opens it again.
       const from = Math.max(Date.now(), p.expires_at.getTime());
@@ -197,9 +240,11 @@ export const presentationRoutes: RouteDef[] = [
           if (p.decided_at && p.decided_at.getTime() === (await latestDecision(trx, projectId))?.getTime()) return p;
           throw decidedRefusal('This project is already decided. Reopen the project first to decide it again.');
         }
-        if (p.withdrawn_at) throw new HttpError(409, 'withdrawn', 'This presentation was withdrawn; its choices cannot decide the project.');
+        if (p.withdrawn_at)
+          throw new HttpError(409, 'withdrawn', 'This presentation was withdrawn; its choices cannot decide the project.');
         const [summary] = await presentationSummaries(trx, ctx.deps.config, [p], { withLinks: false, memberNames: new Map() });
-        if (!summary.complete) throw new HttpError(409, 'incomplete', 'Every room in this presentation needs a choice before the project is decided.');
+        if (!summary.complete)
+          throw new HttpError(409, 'incomplete', 'Every room in this presentation needs a choice before the project is decided.');
         await setProjectState(trx, projectId, 'decided');
         return updatePresentation(trx, p.id, { decided_at: new Date() });
       });

@@ -9,13 +9,26 @@ import type { Finish } from '../../../shared/schemas/finish';
 import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionLabel } from '../../../shared/schemas/room-api';
 import type {
-  Choice, ClientPiece, ClientPresentation, ClientRoom, ClientSurfaces, PresentationState, PresentationSummary,
+  Choice,
+  ClientPiece,
+  ClientPresentation,
+  ClientRoom,
+  ClientSurfaces,
+  PresentationState,
+  PresentationSummary,
 } from '../../../shared/schemas/presentation';
 import { toFinishes } from '../finishes/finishes.service';
 import { signPresentationToken, verifyPresentationToken } from '../../services/tokens/presentation-token';
 import { escapeHtml } from '../../services/mail/escape-html';
 import {
-  finishLabels, finishRows, findByTokenId, listChoices, listShownOptions, projectForPresentation, studioName, type PresentationRow,
+  finishLabels,
+  finishRows,
+  findByTokenId,
+  listChoices,
+  listShownOptions,
+  projectForPresentation,
+  studioName,
+  type PresentationRow,
 } from './presentations.repository';
 
 /** Choice posts per link per window: plenty for a family changing its mind, too few to flood the designer's inbox. */
@@ -32,20 +45,35 @@ export function presentationState(p: Pick<PresentationRow, 'withdrawn_at' | 'exp
 }
 
 export async function presentationLink(config: AppConfig, p: PresentationRow): Promise<string> {
-  const token = await signPresentationToken(config.presentationKey, { tokenId: p.token_id, issuedAt: p.issued_at, expiresAt: p.token_expires_at });
+  const token = await signPresentationToken(config.presentationKey, {
+    tokenId: p.token_id,
+    issuedAt: p.issued_at,
+    expiresAt: p.token_expires_at,
+  });
   return `${config.publicUrl}/p/${token}`;
 }
 
 // The client's answers say only what happened to the link, never why in detail.
-export const linkNotFound = () => new HttpError(404, 'link_not_found', 'This link does not work. Check that it was copied whole, or ask your designer for a new one.');
+export const linkNotFound = () =>
+  new HttpError(
+    404,
+    'link_not_found',
+    'This link does not work. Check that it was copied whole, or ask your designer for a new one.',
+  );
 export const linkExpired = () => new HttpError(410, 'link_expired', 'This link has expired. Ask your designer for a new one.');
-export const linkWithdrawn = () => new HttpError(410, 'link_withdrawn', 'This link is no longer available. Ask your designer if you need it again.');
+export const linkWithdrawn = () =>
+  new HttpError(410, 'link_withdrawn', 'This link is no longer available. Ask your designer if you need it again.');
 
 /**
  * The presentation behind a client's token, refused unless the link still works. Any failure of
  * the token itself reads the same as an unknown link.
  */
-export async function presentationForToken(db: Db, config: AppConfig, token: string, opts: { forUpdate?: boolean } = {}): Promise<PresentationRow> {
+export async function presentationForToken(
+  db: Db,
+  config: AppConfig,
+  token: string,
+  opts: { forUpdate?: boolean } = {},
+): Promise<PresentationRow> {
   const check = await verifyPresentationToken(config.presentationKey, token);
   if (!check.ok) throw check.reason === 'expired' ? linkExpired() : linkNotFound();
   const p = await findByTokenId(db, check.tokenId, opts);
@@ -59,7 +87,11 @@ export async function presentationForToken(db: Db, config: AppConfig, token: str
 type ShownRow = Awaited<ReturnType<typeof listShownOptions>>[number];
 type ChoiceRow = Awaited<ReturnType<typeof listChoices>>[number];
 
-const toChoice = (c: Pick<ChoiceRow, 'option_id' | 'comment' | 'chosen_at'>): Choice => ({ optionId: c.option_id, comment: c.comment, chosenAt: c.chosen_at.toISOString() });
+const toChoice = (c: Pick<ChoiceRow, 'option_id' | 'comment' | 'chosen_at'>): Choice => ({
+  optionId: c.option_id,
+  comment: c.comment,
+  chosenAt: c.chosen_at.toISOString(),
+});
 
 /** Shown rows grouped by room, both in the presentation's order. */
 function groupByRoom(rows: ShownRow[]): { roomId: string; name: string; shell: unknown; options: ShownRow[] }[] {
@@ -104,7 +136,7 @@ export async function presentationSummaries(
         message: p.message,
         showPrices: p.show_prices,
         createdAt: p.created_at.toISOString(),
-        createdBy: p.created_by ? opts.memberNames.get(p.created_by) ?? null : null,
+        createdBy: p.created_by ? (opts.memberNames.get(p.created_by) ?? null) : null,
         expiresAt: p.expires_at.toISOString(),
         latestExpiry: p.token_expires_at.toISOString(),
         withdrawnAt: p.withdrawn_at?.toISOString() ?? null,
@@ -126,7 +158,11 @@ export async function presentationSummaries(
  * A piece as the client may see it, built field by field so nothing added to pieces later leaks
  * by default: no supplier link, no finish id, a price only when the designer shows prices.
  */
-export function toClientPiece(piece: Piece, showPrices: boolean, finishes: Map<string, { name: string; colourHex: string | null }>): ClientPiece {
+export function toClientPiece(
+  piece: Piece,
+  showPrices: boolean,
+  finishes: Map<string, { name: string; colourHex: string | null }>,
+): ClientPiece {
   const out: ClientPiece = {
     id: piece.id,
     name: piece.name,
@@ -139,7 +175,7 @@ export function toClientPiece(piece: Piece, showPrices: boolean, finishes: Map<s
     elevation: piece.elevation,
     status: piece.status,
     placed: piece.placed,
-    finish: piece.finishId ? finishes.get(piece.finishId) ?? null : null,
+    finish: piece.finishId ? (finishes.get(piece.finishId) ?? null) : null,
   };
   if (piece.colour) out.colour = piece.colour;
   if (piece.kind) out.kind = piece.kind;
@@ -152,7 +188,13 @@ export function toClientPiece(piece: Piece, showPrices: boolean, finishes: Map<s
 /** Every finish id an option shows: its floor, ceiling, walls, feature walls and placed pieces. */
 export function finishIdsOf(doc: OptionDoc): string[] {
   const { floor, ceiling, walls, wallOverrides } = doc.finishes;
-  const ids = [floor, ceiling, walls, ...Object.values(wallOverrides), ...doc.pieces.filter((p) => p.placed).flatMap((p) => [p.finishId, p.accentFinishId])];
+  const ids = [
+    floor,
+    ceiling,
+    walls,
+    ...Object.values(wallOverrides),
+    ...doc.pieces.filter((p) => p.placed).flatMap((p) => [p.finishId, p.accentFinishId]),
+  ];
   return [...new Set(ids.filter((id): id is string => Boolean(id && UUID.test(id))))];
 }
 
@@ -189,7 +231,14 @@ export function clientSurfaces(doc: OptionDoc, finishes: ReadonlyMap<string, Fin
     const accent = scene(piece.accentFinishId);
     if (accent) pieceAccents[piece.id] = accent;
   }
-  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces, pieceAccents };
+  return {
+    floor: scene(doc.finishes.floor),
+    ceiling: scene(doc.finishes.ceiling),
+    walls: scene(doc.finishes.walls),
+    wallOverrides,
+    pieces,
+    pieceAccents,
+  };
 }
 
 /** Everything the client's page shows, and nothing else; `token` is the link's, for its file URLs. */
@@ -205,7 +254,13 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
   const docs = new Map(shown.map((s) => [s.option_id, optionDocSchema.parse(withoutNonWebLinks(s.doc))]));
   // Holding-area pieces are the designer's working space, not part of the proposal.
   const placed = (id: string) => docs.get(id)!.pieces.filter((piece) => piece.placed);
-  const finishIds = [...new Set(shown.flatMap((s) => placed(s.option_id).map((piece) => piece.finishId)).filter((id): id is string => Boolean(id && UUID.test(id))))];
+  const finishIds = [
+    ...new Set(
+      shown
+        .flatMap((s) => placed(s.option_id).map((piece) => piece.finishId))
+        .filter((id): id is string => Boolean(id && UUID.test(id))),
+    ),
+  ];
   const surfaceIds = [...new Set(shown.flatMap((s) => finishIdsOf(docs.get(s.option_id)!)))];
   const [labels, rows] = await Promise.all([finishLabels(db, p.studio_id, finishIds), finishRows(db, p.studio_id, surfaceIds)]);
   const finishes = new Map(labels.map((f) => [f.id, { name: f.name, colourHex: f.colour_hex }]));
@@ -239,10 +294,19 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
   };
 }
 
-export const dateText = (d: Date) => new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(d);
+export const dateText = (d: Date) =>
+  new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(d);
 
 /** The client's e-mail with the link. */
-export function invitationMail(v: { to: string; studio: string; project: string; clientName: string; message: string; link: string; expiresAt: Date }) {
+export function invitationMail(v: {
+  to: string;
+  studio: string;
+  project: string;
+  clientName: string;
+  message: string;
+  link: string;
+  expiresAt: Date;
+}) {
   const until = dateText(v.expiresAt);
   // The designer's own message carries their greeting; only without one does the mail greet for them.
   const message = v.message ? `${v.message}\n\n` : `Hello ${v.clientName},\n\n`;
@@ -258,7 +322,15 @@ export function invitationMail(v: { to: string; studio: string; project: string;
 }
 
 /** The designer's e-mail when the client chooses. */
-export function choiceMail(v: { to: string; clientName: string; project: string; room: string; option: string; comment: string; projectLink: string }) {
+export function choiceMail(v: {
+  to: string;
+  clientName: string;
+  project: string;
+  room: string;
+  option: string;
+  comment: string;
+  projectLink: string;
+}) {
   const comment = v.comment ? `\n\nTheir comment: “${v.comment}”` : '';
   return {
     to: v.to,

@@ -26,9 +26,11 @@ export function patchStateChange(current: ProjectState, previous: KeptState | nu
     if (wanted === back) return { state: back, previousState: null };
     throw refused(`Restore brings this project back to “${back}”, the state it had before it was archived.`);
   }
-  if (wanted === 'presented' && current === 'decided') throw refused('A decided project goes back to “presented” only by Reopen.');
+  if (wanted === 'presented' && current === 'decided')
+    throw refused('A decided project goes back to “presented” only by Reopen.');
   if (wanted === 'presented') throw refused('A project becomes “presented” when you make a presentation for it.');
-  if (wanted === 'decided') throw refused('A project becomes “decided” by Mark as decided on a presentation whose rooms all have a choice.');
+  if (wanted === 'decided')
+    throw refused('A project becomes “decided” by Mark as decided on a presentation whose rooms all have a choice.');
   throw refused('A project that has been presented does not go back to “draft”. Archive it instead.');
 }
 

@@ -10,9 +10,17 @@ export async function listProjects(db: Db, studioId: string, query: ListQuery): 
     .innerJoin('clients', 'clients.id', 'projects.client_id')
     .leftJoin('members as reopener', 'reopener.id', 'projects.reopened_by')
     .select([
-      'projects.id', 'projects.name', 'projects.address', 'projects.state', 'projects.created_at', 'projects.updated_at',
-      'projects.previous_state', 'projects.reopened_at', 'reopener.name as reopened_by_name',
-      'clients.id as client_id', 'clients.name as client_name',
+      'projects.id',
+      'projects.name',
+      'projects.address',
+      'projects.state',
+      'projects.created_at',
+      'projects.updated_at',
+      'projects.previous_state',
+      'projects.reopened_at',
+      'reopener.name as reopened_by_name',
+      'clients.id as client_id',
+      'clients.name as client_name',
     ])
     .select(roomCount)
     .where('projects.studio_id', '=', studioId);
@@ -20,7 +28,9 @@ export async function listProjects(db: Db, studioId: string, query: ListQuery): 
   if (query.archived === 'only') qb = qb.where('projects.state', '=', 'archived');
   if (query.q) {
     const p = likePattern(query.q);
-    qb = qb.where((eb) => eb.or([eb('projects.name', 'ilike', p), eb('clients.name', 'ilike', p), eb('projects.address', 'ilike', p)]));
+    qb = qb.where((eb) =>
+      eb.or([eb('projects.name', 'ilike', p), eb('clients.name', 'ilike', p), eb('projects.address', 'ilike', p)]),
+    );
   }
   qb = query.sort === 'name' ? qb.orderBy(sql`lower(projects.name)`) : qb.orderBy('projects.updated_at', 'desc');
   const rows = await qb.limit(500).execute();
@@ -30,9 +40,18 @@ export async function listProjects(db: Db, studioId: string, query: ListQuery): 
 const roomCount = sql<number>`(select count(*)::int from rooms where rooms.project_id = projects.id)`.as('room_count');
 
 type SummaryRow = {
-  id: string; name: string; address: string | null; state: ProjectState; created_at: Date; updated_at: Date;
-  previous_state: KeptState | null; reopened_at: Date | null; reopened_by_name: string | null;
-  client_id: string; client_name: string; room_count: number;
+  id: string;
+  name: string;
+  address: string | null;
+  state: ProjectState;
+  created_at: Date;
+  updated_at: Date;
+  previous_state: KeptState | null;
+  reopened_at: Date | null;
+  reopened_by_name: string | null;
+  client_id: string;
+  client_name: string;
+  room_count: number;
 };
 
 const toSummary = (r: SummaryRow): ProjectSummary => ({
@@ -40,7 +59,7 @@ const toSummary = (r: SummaryRow): ProjectSummary => ({
   name: r.name,
   address: r.address,
   state: r.state,
-  previousState: r.state === 'archived' ? r.previous_state ?? 'draft' : null,
+  previousState: r.state === 'archived' ? (r.previous_state ?? 'draft') : null,
   reopenedAt: r.reopened_at?.toISOString() ?? null,
   reopenedBy: r.reopened_by_name,
   client: { id: r.client_id, name: r.client_name },
@@ -55,9 +74,17 @@ export async function getProject(db: Db, studioId: string, id: string): Promise<
     .innerJoin('clients', 'clients.id', 'projects.client_id')
     .leftJoin('members as reopener', 'reopener.id', 'projects.reopened_by')
     .select([
-      'projects.id', 'projects.name', 'projects.address', 'projects.state', 'projects.created_at', 'projects.updated_at',
-      'projects.previous_state', 'projects.reopened_at', 'reopener.name as reopened_by_name',
-      'clients.id as client_id', 'clients.name as client_name',
+      'projects.id',
+      'projects.name',
+      'projects.address',
+      'projects.state',
+      'projects.created_at',
+      'projects.updated_at',
+      'projects.previous_state',
+      'projects.reopened_at',
+      'reopener.name as reopened_by_name',
+      'clients.id as client_id',
+      'clients.name as client_name',
     ])
     .select(roomCount)
     .where('projects.studio_id', '=', studioId)

@@ -38,7 +38,9 @@ export function projectRoutes(extras: ProjectExtras[] = []): RouteDef[] {
           } else {
             clientId = (await insertClient(trx, caller.studioId, body.newClient!)).id;
           }
-          return (await insertProject(trx, { studioId: caller.studioId, clientId, name: body.name, address: body.address ?? null })).id;
+          return (
+            await insertProject(trx, { studioId: caller.studioId, clientId, name: body.name, address: body.address ?? null })
+          ).id;
         });
         ctx.res.status(201);
         return { project: await getProject(ctx.deps.db, caller.studioId, id) };

@@ -38,9 +38,11 @@ const chosenRefusal = (p: ShowingRow, what: 'room' | 'option') =>
 export async function assertDeletable(db: Db, studioId: string, of: Shown): Promise<void> {
   const what = 'roomId' in of ? 'room' : 'option';
   if ((await decidedChoices(db, studioId, of)).length > 0) {
-    throw decidedRefusal(what === 'room'
-      ? 'An option of this room was chosen and the project is decided. Reopen the project to delete the room.'
-      : CHOSEN_OPTION_FROZEN);
+    throw decidedRefusal(
+      what === 'room'
+        ? 'An option of this room was chosen and the project is decided. Reopen the project to delete the room.'
+        : CHOSEN_OPTION_FROZEN,
+    );
   }
   const rows = await presentationsShowing(db, studioId, of);
   const live = rows.filter((p) => !p.withdrawn_at);
@@ -57,7 +59,9 @@ export async function assertOptionEditable(db: Db, studioId: string, optionId: s
 /** Refuses changing the walls, doors and windows around an option the decided project stands on. */
 export async function assertShellEditable(db: Db, studioId: string, roomId: string): Promise<void> {
   if ((await decidedChoices(db, studioId, { roomId })).length > 0) {
-    throw decidedRefusal('An option of this room was chosen and the project is decided, so its outline and openings cannot change. Reopen the project to change them.');
+    throw decidedRefusal(
+      'An option of this room was chosen and the project is decided, so its outline and openings cannot change. Reopen the project to change them.',
+    );
   }
 }
 
@@ -68,4 +72,8 @@ export function isChoiceKept(err: unknown): boolean {
 }
 
 export const choiceKeptRefusal = (what: 'room' | 'option') =>
-  new HttpError(409, 'in_presentation', `A client chose ${what === 'room' ? 'an option of this room' : 'this option'} in a presentation. Their choice is kept, so the ${what} cannot be deleted.`);
+  new HttpError(
+    409,
+    'in_presentation',
+    `A client chose ${what === 'room' ? 'an option of this room' : 'this option'} in a presentation. Their choice is kept, so the ${what} cannot be deleted.`,
+  );

@@ -5,8 +5,25 @@ import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionDocSchema, withoutNonWebLinks } from '../../../shared/schemas/option';
 import type { OptionRecord, RoomRecord } from '../../../shared/schemas/room-api';
 
-type RoomRow = { id: string; project_id: string; name: string; position: number; shell: unknown; version: number; updated_at: Date };
-type OptionRow = { id: string; room_id: string; name: string; note: string; position: number; doc: unknown; version: number; updated_at: Date };
+type RoomRow = {
+  id: string;
+  project_id: string;
+  name: string;
+  position: number;
+  shell: unknown;
+  version: number;
+  updated_at: Date;
+};
+type OptionRow = {
+  id: string;
+  room_id: string;
+  name: string;
+  note: string;
+  position: number;
+  doc: unknown;
+  version: number;
+  updated_at: Date;
+};
 
 const ROOM_COLUMNS = ['id', 'project_id', 'name', 'position', 'shell', 'version', 'updated_at'] as const;
 const OPTION_COLUMNS = ['id', 'room_id', 'name', 'note', 'position', 'doc', 'version', 'updated_at'] as const;
@@ -36,17 +53,31 @@ export const toOption = (r: OptionRow): OptionRecord => ({
 const json = (value: unknown) => sql<unknown>`${JSON.stringify(value)}::jsonb`;
 
 export async function listRooms(db: Db, studioId: string, projectId: string) {
-  return db
-    .selectFrom('rooms')
-    .select([...ROOM_COLUMNS])
-    .select((eb) => eb.selectFrom('options').whereRef('options.room_id', '=', 'rooms.id').select(eb.fn.countAll<number>().as('n')).as('option_count'))
-    // A piece moved or an option renamed is a change to the room as the designer sees it.
-    .select((eb) => eb.selectFrom('options').whereRef('options.room_id', '=', 'rooms.id').select((sub) => sub.fn.max('options.updated_at').as('t')).as('options_updated_at'))
-    .where('studio_id', '=', studioId)
-    .where('project_id', '=', projectId)
-    .orderBy('position')
-    .orderBy('created_at')
-    .execute();
+  return (
+    db
+      .selectFrom('rooms')
+      .select([...ROOM_COLUMNS])
+      .select((eb) =>
+        eb
+          .selectFrom('options')
+          .whereRef('options.room_id', '=', 'rooms.id')
+          .select(eb.fn.countAll<number>().as('n'))
+          .as('option_count'),
+      )
+      // A piece moved or an option renamed is a change to the room as the designer sees it.
+      .select((eb) =>
+        eb
+          .selectFrom('options')
+          .whereRef('options.room_id', '=', 'rooms.id')
+          .select((sub) => sub.fn.max('options.updated_at').as('t'))
+          .as('options_updated_at'),
+      )
+      .where('studio_id', '=', studioId)
+      .where('project_id', '=', projectId)
+      .orderBy('position')
+      .orderBy('created_at')
+      .execute()
+  );
 }
 
 /**
@@ -55,19 +86,32 @@ export async function listRooms(db: Db, studioId: string, projectId: string) {
  */
 export async function countRoomsLocked(trx: Db, projectId: string): Promise<number> {
   await trx.selectFrom('projects').select('id').where('id', '=', projectId).forUpdate().execute();
-  const r = await trx.selectFrom('rooms').select((eb) => eb.fn.countAll<string>().as('n')).where('project_id', '=', projectId).executeTakeFirstOrThrow();
+  const r = await trx
+    .selectFrom('rooms')
+    .select((eb) => eb.fn.countAll<string>().as('n'))
+    .where('project_id', '=', projectId)
+    .executeTakeFirstOrThrow();
   return Number(r.n);
 }
 
 /** How many options a room holds, with the room's row locked as in countRoomsLocked. */
 export async function countOptionsLocked(trx: Db, roomId: string): Promise<number> {
   await trx.selectFrom('rooms').select('id').where('id', '=', roomId).forUpdate().execute();
-  const r = await trx.selectFrom('options').select((eb) => eb.fn.countAll<string>().as('n')).where('room_id', '=', roomId).executeTakeFirstOrThrow();
+  const r = await trx
+    .selectFrom('options')
+    .select((eb) => eb.fn.countAll<string>().as('n'))
+    .where('room_id', '=', roomId)
+    .executeTakeFirstOrThrow();
   return Number(r.n);
 }
 
 export async function getRoom(db: Db, studioId: string, id: string): Promise<RoomRecord | undefined> {
-  const r = await db.selectFrom('rooms').select([...ROOM_COLUMNS]).where('studio_id', '=', studioId).where('id', '=', id).executeTakeFirst();
+  const r = await db
+    .selectFrom('rooms')
+    .select([...ROOM_COLUMNS])
+    .where('studio_id', '=', studioId)
+    .where('id', '=', id)
+    .executeTakeFirst();
   return r && toRoom(r);
 }
 
@@ -79,7 +123,10 @@ const ROOM_POSITION_ATTEMPTS = 25;
  * request took the same one, the insert waits for it, does nothing, and is tried again at the
  * next position, inside the same transaction (ON CONFLICT does not abort it).
  */
-export async function insertRoom(db: Db, v: { studioId: string; projectId: string; name: string; shell: unknown }): Promise<RoomRecord> {
+export async function insertRoom(
+  db: Db,
+  v: { studioId: string; projectId: string; name: string; shell: unknown },
+): Promise<RoomRecord> {
   for (let attempt = 0; attempt < ROOM_POSITION_ATTEMPTS; attempt += 1) {
     const next = await db
       .selectFrom('rooms')
@@ -88,7 +135,13 @@ export async function insertRoom(db: Db, v: { studioId: string; projectId: strin
       .executeTakeFirstOrThrow();
     const r = await db
       .insertInto('rooms')
-      .values({ studio_id: v.studioId, project_id: v.projectId, name: v.name, shell: json(v.shell), position: Number(next.max) + 1 })
+      .values({
+        studio_id: v.studioId,
+        project_id: v.projectId,
+        name: v.name,
+        shell: json(v.shell),
+        position: Number(next.max) + 1,
+      })
       .onConflict((oc) => oc.columns(['project_id', 'position']).doNothing())
       .returning([...ROOM_COLUMNS])
       .executeTakeFirst();
@@ -98,7 +151,13 @@ export async function insertRoom(db: Db, v: { studioId: string; projectId: strin
 }
 
 /** Saves when `version` is still current; returns undefined when someone saved first. */
-export async function updateRoomIfVersion(db: Db, studioId: string, id: string, version: number, patch: { name?: string; shell?: unknown }) {
+export async function updateRoomIfVersion(
+  db: Db,
+  studioId: string,
+  id: string,
+  version: number,
+  patch: { name?: string; shell?: unknown },
+) {
   const r = await db
     .updateTable('rooms')
     .set({
@@ -133,11 +192,19 @@ export async function listOptions(db: Db, studioId: string, roomId: string): Pro
 }
 
 export async function getOption(db: Db, studioId: string, id: string): Promise<OptionRecord | undefined> {
-  const r = await db.selectFrom('options').select([...OPTION_COLUMNS]).where('studio_id', '=', studioId).where('id', '=', id).executeTakeFirst();
+  const r = await db
+    .selectFrom('options')
+    .select([...OPTION_COLUMNS])
+    .where('studio_id', '=', studioId)
+    .where('id', '=', id)
+    .executeTakeFirst();
   return r && toOption(r);
 }
 
-export async function insertOption(db: Db, v: { studioId: string; roomId: string; name: string; note: string; doc: unknown }): Promise<OptionRecord> {
+export async function insertOption(
+  db: Db,
+  v: { studioId: string; roomId: string; name: string; note: string; doc: unknown },
+): Promise<OptionRecord> {
   const next = await db
     .selectFrom('options')
     .select((eb) => eb.fn.coalesce(eb.fn.max('position'), sql<number>`-1`).as('max'))
@@ -145,13 +212,26 @@ export async function insertOption(db: Db, v: { studioId: string; roomId: string
     .executeTakeFirstOrThrow();
   const r = await db
     .insertInto('options')
-    .values({ studio_id: v.studioId, room_id: v.roomId, name: v.name, note: v.note, doc: json(v.doc), position: Number(next.max) + 1 })
+    .values({
+      studio_id: v.studioId,
+      room_id: v.roomId,
+      name: v.name,
+      note: v.note,
+      doc: json(v.doc),
+      position: Number(next.max) + 1,
+    })
     .returning([...OPTION_COLUMNS])
     .executeTakeFirstOrThrow();
   return toOption(r);
 }
 
-export async function updateOptionIfVersion(db: Db, studioId: string, id: string, version: number, patch: { name?: string; note?: string; doc?: unknown }) {
+export async function updateOptionIfVersion(
+  db: Db,
+  studioId: string,
+  id: string,
+  version: number,
+  patch: { name?: string; note?: string; doc?: unknown },
+) {
   const r = await db
     .updateTable('options')
     .set({
@@ -194,7 +274,12 @@ export async function decidedChoices(db: Db, studioId: string, of: Shown): Promi
     .select('c.option_id')
     .where('p.studio_id', '=', studioId)
     .where('pr.state', '=', 'decided')
-    .where('p.decided_at', '=', (eb) => eb.selectFrom('presentations as q').select((q) => q.fn.max('q.decided_at').as('at')).whereRef('q.project_id', '=', 'p.project_id'))
+    .where('p.decided_at', '=', (eb) =>
+      eb
+        .selectFrom('presentations as q')
+        .select((q) => q.fn.max('q.decided_at').as('at'))
+        .whereRef('q.project_id', '=', 'p.project_id'),
+    )
     .where('roomId' in of ? 'c.room_id' : 'c.option_id', '=', 'roomId' in of ? of.roomId : of.optionId)
     .execute();
   return rows.map((r) => r.option_id);
@@ -202,9 +287,10 @@ export async function decidedChoices(db: Db, studioId: string, of: Shown): Promi
 
 /** Presentations that show this room (or option), newest first, and whether a client chose it there. */
 export async function presentationsShowing(db: Db, studioId: string, of: Shown) {
-  const shown = 'roomId' in of
-    ? db.selectFrom('presentation_rooms').select('presentation_id').where('room_id', '=', of.roomId)
-    : db.selectFrom('presentation_options').select('presentation_id').where('option_id', '=', of.optionId);
+  const shown =
+    'roomId' in of
+      ? db.selectFrom('presentation_rooms').select('presentation_id').where('room_id', '=', of.roomId)
+      : db.selectFrom('presentation_options').select('presentation_id').where('option_id', '=', of.optionId);
   const chosen = 'roomId' in of ? sql<boolean>`c.room_id = ${of.roomId}` : sql<boolean>`c.option_id = ${of.optionId}`;
   return db
     .selectFrom('presentations as p')

@@ -3,7 +3,12 @@ import { z } from 'zod';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { optionDocSchema } from '../../../shared/schemas/option';
 import {
-  PROJECT_LIMITS, createOptionSchema, createRoomSchema, reorderOptionsSchema, saveOptionSchema, saveRoomSchema,
+  PROJECT_LIMITS,
+  createOptionSchema,
+  createRoomSchema,
+  reorderOptionsSchema,
+  saveOptionSchema,
+  saveRoomSchema,
 } from '../../../shared/schemas/room-api';
 import { readPlanFile, writePlanFile } from '../../../shared/schemas/plan-file';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
@@ -11,8 +16,18 @@ import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { getProject, lockProjectState, touchProject } from '../projects/projects.repository';
 import type { Db } from '../../db/database';
 import {
-  countOptionsLocked, countRoomsLocked, deleteOption, deleteRoom, getOption, getRoom, insertOption, insertRoom, listOptions, setOptionPositions,
-  updateOptionIfVersion, updateRoomIfVersion,
+  countOptionsLocked,
+  countRoomsLocked,
+  deleteOption,
+  deleteRoom,
+  getOption,
+  getRoom,
+  insertOption,
+  insertRoom,
+  listOptions,
+  setOptionPositions,
+  updateOptionIfVersion,
+  updateRoomIfVersion,
 } from './rooms.repository';
 import { assertDrawableShell, fileSlug, problemsToFields, roomSummaries } from './rooms.service';
 import { assertDeletable, assertOptionEditable, assertShellEditable, choiceKeptRefusal, isChoiceKept } from './room-guards';
@@ -43,7 +58,11 @@ async function createRoomWithOption(
   return db.transaction().execute(async (trx) => {
     await projectOrThrow(trx, studioId, projectId);
     if ((await countRoomsLocked(trx, projectId)) >= PROJECT_LIMITS.roomsPerProject) {
-      throw new HttpError(409, 'too_many_rooms', `A project holds at most ${PROJECT_LIMITS.roomsPerProject} rooms. Delete one before adding another.`);
+      throw new HttpError(
+        409,
+        'too_many_rooms',
+        `A project holds at most ${PROJECT_LIMITS.roomsPerProject} rooms. Delete one before adding another.`,
+      );
     }
     const created = await insertRoom(trx, { studioId, projectId, ...room });
     const first = await insertOption(trx, { studioId, roomId: created.id, ...option });
@@ -63,7 +82,9 @@ async function deleteKeepingChoices(what: 'room' | 'option', run: () => Promise<
 }
 
 const conflict = (what: string, current: unknown) =>
-  new HttpError(409, 'conflict', `Someone saved this ${what} after you opened it. Reload theirs or keep yours.`, undefined, { current });
+  new HttpError(409, 'conflict', `Someone saved this ${what} after you opened it. Reload theirs or keep yours.`, undefined, {
+    current,
+  });
 
 /** Project pages list their rooms through this. */
 export const projectRoomsExtra = async (db: Db, studioId: string, projectId: string) => ({
@@ -91,7 +112,13 @@ export const roomRoutes: RouteDef[] = [
       const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const body = createRoomSchema.parse(ctx.req.body);
       assertDrawableShell(body.shell);
-      const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: body.name, shell: body.shell }, { name: '', note: '', doc: EMPTY_DOC });
+      const result = await createRoomWithOption(
+        ctx.deps.db,
+        caller.studioId,
+        projectId,
+        { name: body.name, shell: body.shell },
+        { name: '', note: '', doc: EMPTY_DOC },
+      );
       ctx.res.status(201);
       return result;
     },
@@ -105,15 +132,26 @@ export const roomRoutes: RouteDef[] = [
       const { projectId } = projectIdParamSchema.parse(ctx.req.params);
       const read = readPlanFile(ctx.req.body);
       if (!read.ok) {
-        const fields = problemsToFields(read.errors.map((e) => {
-          const at = e.indexOf(': ');
-          return { path: e.slice(0, at), message: e.slice(at + 2) };
-        }));
+        const fields = problemsToFields(
+          read.errors.map((e) => {
+            const at = e.indexOf(': ');
+            return { path: e.slice(0, at), message: e.slice(at + 2) };
+          }),
+        );
         throw new HttpError(400, 'invalid_plan_file', `This plan file cannot be read: ${read.errors[0]}`, fields);
       }
-      const { room: { name, ...shell }, option } = read.plan;
+      const {
+        room: { name, ...shell },
+        option,
+      } = read.plan;
       const doc = optionDocSchema.parse({ pieces: option.pieces, finishes: option.finishes });
-      const result = await createRoomWithOption(ctx.deps.db, caller.studioId, projectId, { name: name || 'Imported room', shell }, { name: option.name, note: option.note ?? '', doc });
+      const result = await createRoomWithOption(
+        ctx.deps.db,
+        caller.studioId,
+        projectId,
+        { name: name || 'Imported room', shell },
+        { name: option.name, note: option.note ?? '', doc },
+      );
       ctx.res.status(201);
       return result;
     },
@@ -158,14 +196,16 @@ export const roomRoutes: RouteDef[] = [
     async handler(ctx) {
       const caller = requireCaller(ctx);
       const { id } = idParamSchema.parse(ctx.req.params);
-      await deleteKeepingChoices('room', () => ctx.deps.db.transaction().execute(async (trx) => {
-        const room = await roomOrThrow(trx, caller.studioId, id);
-        // Held until the room is gone, so no presentation can start showing it in between.
-        await lockProjectState(trx, caller.studioId, room.projectId);
-        await assertDeletable(trx, caller.studioId, { roomId: id });
-        await deleteRoom(trx, caller.studioId, id);
-        await touchProject(trx, room.projectId);
-      }));
+      await deleteKeepingChoices('room', () =>
+        ctx.deps.db.transaction().execute(async (trx) => {
+          const room = await roomOrThrow(trx, caller.studioId, id);
+          // Held until the room is gone, so no presentation can start showing it in between.
+          await lockProjectState(trx, caller.studioId, room.projectId);
+          await assertDeletable(trx, caller.studioId, { roomId: id });
+          await deleteRoom(trx, caller.studioId, id);
+          await touchProject(trx, room.projectId);
+        }),
+      );
       return undefined;
     },
   },
@@ -183,7 +223,12 @@ export const roomRoutes: RouteDef[] = [
       if (!option) throw notFound('That option');
       const text = writePlanFile({
         room: { name: room.name, ...room.shell },
-        option: { name: option.name || `Option ${String.fromCharCode(65 + option.position)}`, note: option.note || undefined, pieces: option.doc.pieces, finishes: option.doc.finishes },
+        option: {
+          name: option.name || `Option ${String.fromCharCode(65 + option.position)}`,
+          note: option.note || undefined,
+          pieces: option.doc.pieces,
+          finishes: option.doc.finishes,
+        },
       });
       ctx.res.setHeader('Content-Type', 'application/json; charset=utf-8');
       ctx.res.setHeader('Content-Disposition', `attachment; filename="${fileSlug(room.name)}.plan.json"`);
@@ -202,13 +247,20 @@ export const roomRoutes: RouteDef[] = [
       const option = await ctx.deps.db.transaction().execute(async (trx) => {
         const room = await roomOrThrow(trx, caller.studioId, id);
         if ((await countOptionsLocked(trx, id)) >= PROJECT_LIMITS.optionsPerRoom) {
-          throw new HttpError(409, 'too_many_options', `A room holds at most ${PROJECT_LIMITS.optionsPerRoom} options. Delete one before adding another.`);
+          throw new HttpError(
+            409,
+            'too_many_options',
+            `A room holds at most ${PROJECT_LIMITS.optionsPerRoom} options. Delete one before adding another.`,
+          );
         }
         let doc = EMPTY_DOC;
         let note = body.note;
         if (body.fromOptionId) {
           const from = await getOption(trx, caller.studioId, body.fromOptionId);
-          if (!from || from.roomId !== id) throw new HttpError(400, 'invalid', 'Duplicate an option of this room.', { fromOptionId: 'Not an option of this room.' });
+          if (!from || from.roomId !== id)
+            throw new HttpError(400, 'invalid', 'Duplicate an option of this room.', {
+              fromOptionId: 'Not an option of this room.',
+            });
           doc = from.doc;
           note = note || from.note;
         }
@@ -231,7 +283,10 @@ export const roomRoutes: RouteDef[] = [
         await roomOrThrow(trx, caller.studioId, id);
         const current = await listOptions(trx, caller.studioId, id);
         const same = current.length === optionIds.length && current.every((o) => optionIds.includes(o.id));
-        if (!same) throw new HttpError(400, 'invalid', 'List every option of this room exactly once.', { optionIds: 'Must list every option of this room once.' });
+        if (!same)
+          throw new HttpError(400, 'invalid', 'List every option of this room exactly once.', {
+            optionIds: 'Must list every option of this room once.',
+          });
         await setOptionPositions(trx, id, optionIds);
         return { options: await listOptions(trx, caller.studioId, id) };
       });
@@ -247,10 +302,16 @@ export const roomRoutes: RouteDef[] = [
       const body = saveOptionSchema.parse(ctx.req.body);
       return ctx.deps.db.transaction().execute(async (trx) => {
         const current = await optionOrThrow(trx, caller.studioId, id);
-        const changes = (body.name !== undefined && body.name !== current.name) || (body.note !== undefined && body.note !== current.note) ||
+        const changes =
+          (body.name !== undefined && body.name !== current.name) ||
+          (body.note !== undefined && body.note !== current.note) ||
           (body.doc !== undefined && !isDeepStrictEqual(body.doc, current.doc));
         if (changes) await assertOptionEditable(trx, caller.studioId, id);
-        const saved = await updateOptionIfVersion(trx, caller.studioId, id, body.version, { name: body.name, note: body.note, doc: body.doc });
+        const saved = await updateOptionIfVersion(trx, caller.studioId, id, body.version, {
+          name: body.name,
+          note: body.note,
+          doc: body.doc,
+        });
         if (!saved) throw conflict('option', await optionOrThrow(trx, caller.studioId, id));
         return { option: saved };
       });
@@ -263,16 +324,22 @@ export const roomRoutes: RouteDef[] = [
     async handler(ctx) {
       const caller = requireCaller(ctx);
       const { id } = idParamSchema.parse(ctx.req.params);
-      await deleteKeepingChoices('option', () => ctx.deps.db.transaction().execute(async (trx) => {
-        const option = await optionOrThrow(trx, caller.studioId, id);
-        const room = await roomOrThrow(trx, caller.studioId, option.roomId);
-        await lockProjectState(trx, caller.studioId, room.projectId);
-        const siblings = await listOptions(trx, caller.studioId, option.roomId);
-        if (siblings.length <= 1) throw new HttpError(409, 'last_option', 'A room keeps at least one option.');
-        await assertDeletable(trx, caller.studioId, { optionId: id });
-        await deleteOption(trx, id);
-        await setOptionPositions(trx, option.roomId, siblings.filter((o) => o.id !== id).map((o) => o.id));
-      }));
+      await deleteKeepingChoices('option', () =>
+        ctx.deps.db.transaction().execute(async (trx) => {
+          const option = await optionOrThrow(trx, caller.studioId, id);
+          const room = await roomOrThrow(trx, caller.studioId, option.roomId);
+          await lockProjectState(trx, caller.studioId, room.projectId);
+          const siblings = await listOptions(trx, caller.studioId, option.roomId);
+          if (siblings.length <= 1) throw new HttpError(409, 'last_option', 'A room keeps at least one option.');
+          await assertDeletable(trx, caller.studioId, { optionId: id });
+          await deleteOption(trx, id);
+          await setOptionPositions(
+            trx,
+            option.roomId,
+            siblings.filter((o) => o.id !== id).map((o) => o.id),
+          );
+        }),
+      );
       return undefined;
     },
   },

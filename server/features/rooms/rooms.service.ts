@@ -46,5 +46,10 @@ export async function roomSummaries(db: Db, studioId: string, projectId: string)
 
 /** A file name for a download: lower-case words joined by hyphens. */
 export function fileSlug(name: string): string {
-  return name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'room';
+  return (
+    name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '') || 'room'
+  );
 }

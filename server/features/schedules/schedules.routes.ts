@@ -19,7 +19,11 @@ const countedQuery = z.object({
 type Caller = ReturnType<typeof requireCaller>;
 
 /** A read-only route for every role: parsed path params and take-off settings in, the answer out. */
-function readRoute<P>(path: string, params: z.ZodType<P>, answer: (ctx: RouteContext, caller: Caller, params: P, settings: TakeoffSettings) => Promise<unknown>): RouteDef {
+function readRoute<P>(
+  path: string,
+  params: z.ZodType<P>,
+  answer: (ctx: RouteContext, caller: Caller, params: P, settings: TakeoffSettings) => Promise<unknown>,
+): RouteDef {
   return {
     method: 'get',
     path,
@@ -34,9 +38,11 @@ export const scheduleRoutes: RouteDef[] = [
     return projectTakeoffAnswer(ctx.deps.db, caller.studioId, projectId, settings, options);
   }),
   readRoute('/api/projects/:projectId/compare', projectIdParamSchema, (ctx, caller, { projectId }, settings) =>
-    compareAnswer(ctx.deps.db, caller.studioId, projectId, settings)),
+    compareAnswer(ctx.deps.db, caller.studioId, projectId, settings),
+  ),
   readRoute('/api/options/:id/schedule', idParamSchema, (ctx, caller, { id }, settings) =>
-    scheduleAnswer(ctx.deps.db, caller.studioId, id, settings)),
+    scheduleAnswer(ctx.deps.db, caller.studioId, id, settings),
+  ),
   readRoute('/api/options/:id/schedule.csv', idParamSchema, async (ctx, caller, { id }, settings) => {
     const answer = await scheduleAnswer(ctx.deps.db, caller.studioId, id, settings);
     const letter = answer.option.label.replace(/ · .*/, '');

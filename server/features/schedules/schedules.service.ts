@@ -9,8 +9,18 @@ import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
 import {
-  QUANTITY_UNIT_LABELS, buildSchedule, compareOption, projectTakeoff, roomTakeoff, sizeText,
-  type CompareAnswer, type FinishInfo, type FinishLookup, type ProjectTakeoffAnswer, type ScheduleAnswer, type TakeoffSettings,
+  QUANTITY_UNIT_LABELS,
+  buildSchedule,
+  compareOption,
+  projectTakeoff,
+  roomTakeoff,
+  sizeText,
+  type CompareAnswer,
+  type FinishInfo,
+  type FinishLookup,
+  type ProjectTakeoffAnswer,
+  type ScheduleAnswer,
+  type TakeoffSettings,
 } from '../../../shared/analysis/schedule';
 import { toCsv, type CsvCell } from './csv';
 
@@ -32,7 +42,13 @@ async function roomsOf(db: Db, studioId: string, projectId: string): Promise<Roo
 function finishIdsOf(docs: readonly OptionDoc[]): Set<string> {
   const ids = new Set<string>();
   for (const { finishes, pieces } of docs) {
-    for (const id of [finishes.floor, finishes.ceiling, finishes.walls, ...Object.values(finishes.wallOverrides), ...pieces.flatMap((p) => [p.finishId, p.accentFinishId])]) {
+    for (const id of [
+      finishes.floor,
+      finishes.ceiling,
+      finishes.walls,
+      ...Object.values(finishes.wallOverrides),
+      ...pieces.flatMap((p) => [p.finishId, p.accentFinishId]),
+    ]) {
       if (id) ids.add(id);
     }
   }
@@ -59,10 +75,20 @@ const withPositions = (options: OptionRecord[]) => options.map((o, position) => 
  * The project's take-off: each room counted with one option (the one asked for, else the client's
  * choice, else the first), and the totals over the rooms.
  */
-export async function projectTakeoffAnswer(db: Db, studioId: string, projectId: string, settings: TakeoffSettings, countedIds: readonly string[]): Promise<ProjectTakeoffAnswer> {
+export async function projectTakeoffAnswer(
+  db: Db,
+  studioId: string,
+  projectId: string,
+  settings: TakeoffSettings,
+  countedIds: readonly string[],
+): Promise<ProjectTakeoffAnswer> {
   const project = await projectOrThrow(db, studioId, projectId);
   const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
-  const finishes = await lookupFor(db, studioId, rooms.flatMap((r) => r.options.map((o) => o.doc)));
+  const finishes = await lookupFor(
+    db,
+    studioId,
+    rooms.flatMap((r) => r.options.map((o) => o.doc)),
+  );
   const asked = new Set(countedIds);
   const answered = rooms.map(({ room, options }) => {
     const listed = withPositions(options);
@@ -77,12 +103,20 @@ export async function projectTakeoffAnswer(db: Db, studioId: string, projectId: 
       takeoff: counted && roomTakeoff(room.shell, counted.doc.finishes, finishes, settings),
     };
   });
-  const totals = projectTakeoff(answered.flatMap((r) => (r.takeoff ? [{ name: r.name, takeoff: r.takeoff }] : [])), settings);
+  const totals = projectTakeoff(
+    answered.flatMap((r) => (r.takeoff ? [{ name: r.name, takeoff: r.takeoff }] : [])),
+    settings,
+  );
   return { project, settings, rooms: answered, totals };
 }
 
 /** One option's schedule in its room and project. */
-export async function scheduleAnswer(db: Db, studioId: string, optionId: string, settings: TakeoffSettings): Promise<ScheduleAnswer> {
+export async function scheduleAnswer(
+  db: Db,
+  studioId: string,
+  optionId: string,
+  settings: TakeoffSettings,
+): Promise<ScheduleAnswer> {
   const option = await getOption(db, studioId, optionId);
   if (!option) throw notFound('That option');
   const room = await getRoom(db, studioId, option.roomId);
@@ -92,7 +126,10 @@ export async function scheduleAnswer(db: Db, studioId: string, optionId: string,
     listOptions(db, studioId, room.id),
     lookupFor(db, studioId, [option.doc]),
   ]);
-  const position = Math.max(0, siblings.findIndex((o) => o.id === option.id));
+  const position = Math.max(
+    0,
+    siblings.findIndex((o) => o.id === option.id),
+  );
   return {
     project,
     room: { id: room.id, name: room.name },
@@ -110,10 +147,19 @@ const yieldToOthers = () => new Promise<void>((resolve) => setImmediate(resolve)
  * Each option's fit check is a slice of work of its own: between two options the event loop
  * answers whatever else is waiting, so a large project never holds up other requests for long.
  */
-export async function compareAnswer(db: Db, studioId: string, projectId: string, settings: TakeoffSettings): Promise<CompareAnswer> {
+export async function compareAnswer(
+  db: Db,
+  studioId: string,
+  projectId: string,
+  settings: TakeoffSettings,
+): Promise<CompareAnswer> {
   const project = await projectOrThrow(db, studioId, projectId);
   const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
-  const finishes = await lookupFor(db, studioId, rooms.flatMap((r) => r.options.map((o) => o.doc)));
+  const finishes = await lookupFor(
+    db,
+    studioId,
+    rooms.flatMap((r) => r.options.map((o) => o.doc)),
+  );
   const answered: CompareAnswer['rooms'] = [];
   for (const { room, options } of rooms) {
     const chosenOptionId = choices.get(room.id) ?? null;
@@ -127,7 +173,21 @@ export async function compareAnswer(db: Db, studioId: string, projectId: string,
   return { project, settings, rooms: answered };
 }
 
-export const CSV_HEADER = ['Section', 'Name', 'Status', 'Size or surfaces', 'Quantity', 'Unit', 'Made up of', 'Unit price', 'Price per', 'Total', 'Supplier', 'Code', 'Link'];
+export const CSV_HEADER = [
+  'Section',
+  'Name',
+  'Status',
+  'Size or surfaces',
+  'Quantity',
+  'Unit',
+  'Made up of',
+  'Unit price',
+  'Price per',
+  'Total',
+  'Supplier',
+  'Code',
+  'Link',
+];
 
 const money = (v: number | null) => (v === null ? null : v.toFixed(2));
 
@@ -153,7 +213,22 @@ export function scheduleCsv(answer: ScheduleAnswer): string {
       l.supplierUrl && isWebLink(l.supplierUrl) ? l.supplierUrl : null,
     ]);
   }
-  const totalRow = (name: string, value: number): CsvCell[] => ['Total', name, null, null, null, null, null, null, null, money(value)];
-  records.push(totalRow('New pieces', totals.newPiecesCost), totalRow('Finishes', totals.finishesCost), totalRow('Budget', totals.budget));
+  const totalRow = (name: string, value: number): CsvCell[] => [
+    'Total',
+    name,
+    null,
+    null,
+    null,
+    null,
+    null,
+    null,
+    null,
+    money(value),
+  ];
+  records.push(
+    totalRow('New pieces', totals.newPiecesCost),
+    totalRow('Finishes', totals.finishesCost),
+    totalRow('Budget', totals.budget),
+  );
   return toCsv(records);
 }

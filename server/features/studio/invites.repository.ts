@@ -13,7 +13,14 @@ export const toInviteInfo = (r: InviteRow, studioName?: string): InviteInfo => (
   acceptedAt: r.accepted_at ? r.accepted_at.toISOString() : null,
 });
 
-const INVITE_COLUMNS = ['invites.id', 'invites.email', 'invites.role', 'invites.created_at', 'invites.expires_at', 'invites.accepted_at'] as const;
+const INVITE_COLUMNS = [
+  'invites.id',
+  'invites.email',
+  'invites.role',
+  'invites.created_at',
+  'invites.expires_at',
+  'invites.accepted_at',
+] as const;
 
 export async function insertInvite(
   db: Db,
@@ -21,7 +28,14 @@ export async function insertInvite(
 ) {
   return db
     .insertInto('invites')
-    .values({ studio_id: v.studioId, email: v.email, role: v.role, token_hash: v.tokenHash, invited_by: v.invitedBy, expires_at: v.expiresAt })
+    .values({
+      studio_id: v.studioId,
+      email: v.email,
+      role: v.role,
+      token_hash: v.tokenHash,
+      invited_by: v.invitedBy,
+      expires_at: v.expiresAt,
+    })
     .returning(['id', 'email', 'role', 'created_at', 'expires_at', 'accepted_at'])
     .executeTakeFirstOrThrow();
 }
@@ -48,7 +62,12 @@ export async function findInviteByTokenHash(db: Db, tokenHash: string, opts: { f
 }
 
 export async function deleteInvite(db: Db, studioId: string, id: string): Promise<boolean> {
-  const r = await db.deleteFrom('invites').where('studio_id', '=', studioId).where('id', '=', id).where('accepted_at', 'is', null).executeTakeFirst();
+  const r = await db
+    .deleteFrom('invites')
+    .where('studio_id', '=', studioId)
+    .where('id', '=', id)
+    .where('accepted_at', 'is', null)
+    .executeTakeFirst();
   return Number(r.numDeletedRows) > 0;
 }
 

@@ -12,10 +12,23 @@ import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-
 import { limitInvitationMail } from '../../services/rate-limit/mail-limits';
 import { sendStudioMail } from '../outbox/outbox.service';
 import {
-  countOwners, deleteMember, deleteSessionsOf, findMemberByEmail, getMember, insertMember, listMembers, setMemberRole, toMember,
+  countOwners,
+  deleteMember,
+  deleteSessionsOf,
+  findMemberByEmail,
+  getMember,
+  insertMember,
+  listMembers,
+  setMemberRole,
+  toMember,
 } from './members.repository';
 import {
-  deleteInvite, findInviteByTokenHash, insertInvite, listOpenInvites, markInviteAccepted, toInviteInfo,
+  deleteInvite,
+  findInviteByTokenHash,
+  insertInvite,
+  listOpenInvites,
+  markInviteAccepted,
+  toInviteInfo,
 } from './invites.repository';
 
 const INVITE_DAYS = 14;
@@ -23,11 +36,16 @@ const INVITE_DAYS = 14;
 export const INVITE_RATE: RateRule = { bucket: 'invite', limit: 30, windowMs: 60 * 60_000 };
 const tokenParamSchema = z.object({ token: z.string().min(20).max(200) });
 
-async function openInviteOrThrow(db: Parameters<typeof findInviteByTokenHash>[0], token: string, opts: { forUpdate?: boolean } = {}) {
+async function openInviteOrThrow(
+  db: Parameters<typeof findInviteByTokenHash>[0],
+  token: string,
+  opts: { forUpdate?: boolean } = {},
+) {
   const invite = await findInviteByTokenHash(db, hashToken(token), opts);
   if (!invite) throw new HttpError(404, 'invite_not_found', 'This invitation link is not valid. Ask the studio for a new one.');
   if (invite.accepted_at) throw new HttpError(410, 'invite_used', 'This invitation has already been accepted. Sign in instead.');
-  if (invite.expires_at.getTime() < Date.now()) throw new HttpError(410, 'invite_expired', 'This invitation has expired. Ask the studio for a new one.');
+  if (invite.expires_at.getTime() < Date.now())
+    throw new HttpError(410, 'invite_expired', 'This invitation has expired. Ask the studio for a new one.');
   return invite;
 }
 
@@ -93,9 +111,17 @@ export const studioRoutes: RouteDef[] = [
       const caller = requireCaller(ctx);
       const body = inviteSchema.parse(ctx.req.body);
       const { db, config } = ctx.deps;
-      await enforceRateLimit(db, ctx.res, INVITE_RATE, caller.studioId, 'That is a lot of invitations in a short time. Please wait a while, then send the rest.');
+      await enforceRateLimit(
+        db,
+        ctx.res,
+        INVITE_RATE,
+        caller.studioId,
+        'That is a lot of invitations in a short time. Please wait a while, then send the rest.',
+      );
       if (await findMemberByEmail(db, body.email)) {
-        throw new HttpError(409, 'email_taken', 'This person already has a Parlour account.', { email: 'Already has an account.' });
+        throw new HttpError(409, 'email_taken', 'This person already has a Parlour account.', {
+          email: 'Already has an account.',
+        });
       }
       await limitInvitationMail(db, ctx.res, body.email);
       const studio = await db.selectFrom('studios').select('name').where('id', '=', caller.studioId).executeTakeFirstOrThrow();
@@ -113,14 +139,19 @@ export const studioRoutes: RouteDef[] = [
           invitedBy: caller.memberId,
           expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
         });
-        await sendStudioMail(trx, ctx.deps, {
-          studioId: caller.studioId,
-          kind: 'invitation',
-          to: body.email,
-          subject: `${by} invited you to ${studio.name} on Parlour`,
-          text: `${by} invited you to join ${studio.name} on Parlour as ${body.role}.\n\nAccept the invitation: ${link}\n\nThe link works for ${INVITE_DAYS} days.`,
-          html: `<p>${escapeHtml(by)} invited you to join <strong>${escapeHtml(studio.name)}</strong> on Parlour as ${body.role}.</p><p><a href="${link}">Accept the invitation</a></p><p>The link works for ${INVITE_DAYS} days.</p>`,
-        }, 'The invitation e-mail could not be sent, so no invitation was made. Try again in a moment.');
+        await sendStudioMail(
+          trx,
+          ctx.deps,
+          {
+            studioId: caller.studioId,
+            kind: 'invitation',
+            to: body.email,
+            subject: `${by} invited you to ${studio.name} on Parlour`,
+            text: `${by} invited you to join ${studio.name} on Parlour as ${body.role}.\n\nAccept the invitation: ${link}\n\nThe link works for ${INVITE_DAYS} days.`,
+            html: `<p>${escapeHtml(by)} invited you to join <strong>${escapeHtml(studio.name)}</strong> on Parlour as ${body.role}.</p><p><a href="${link}">Accept the invitation</a></p><p>The link works for ${INVITE_DAYS} days.</p>`,
+          },
+          'The invitation e-mail could not be sent, so no invitation was made. Try again in a moment.',
+        );
         return made;
       });
       ctx.res.status(201);
@@ -162,7 +193,13 @@ export const studioRoutes: RouteDef[] = [
           throw new HttpError(409, 'email_taken', 'This e-mail already has an account. Sign in instead.');
         }
         await markInviteAccepted(trx, invite.id);
-        return insertMember(trx, { studioId: invite.studio_id, email: invite.email, name: body.name, role: invite.role, passwordHash });
+        return insertMember(trx, {
+          studioId: invite.studio_id,
+          email: invite.email,
+          name: body.name,
+          role: invite.role,
+          passwordHash,
+        });
       });
       await startSession(ctx.deps.db, ctx.res, member.id, ctx.deps.config.SECURE_COOKIES);
       ctx.res.status(201);

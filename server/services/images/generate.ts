@@ -29,7 +29,7 @@ export function seededRandom(seed: number): () => number {
 function periodicNoise(cellsX: number, cellsY: number, seed: number): (u: number, v: number) => number {
   const rand = seededRandom(seed);
   const lattice = Float32Array.from({ length: cellsX * cellsY }, () => rand());
-  const at = (i: number, j: number) => lattice[((j % cellsY) + cellsY) % cellsY * cellsX + ((i % cellsX) + cellsX) % cellsX];
+  const at = (i: number, j: number) => lattice[(((j % cellsY) + cellsY) % cellsY) * cellsX + (((i % cellsX) + cellsX) % cellsX)];
   const ease = (t: number) => t * t * (3 - 2 * t);
   return (u, v) => {
     const x = u * cellsX;
@@ -59,7 +59,11 @@ function fill(width: number, height: number, colourAt: (x: number, y: number) =>
 }
 
 const clampByte = (v: number) => Math.max(0, Math.min(255, Math.round(v)));
-const shade = (rgb: [number, number, number], k: number): [number, number, number] => [clampByte(rgb[0] * k), clampByte(rgb[1] * k), clampByte(rgb[2] * k)];
+const shade = (rgb: [number, number, number], k: number): [number, number, number] => [
+  clampByte(rgb[0] * k),
+  clampByte(rgb[1] * k),
+  clampByte(rgb[2] * k),
+];
 
 /**
  * Oak floor boards running down the picture: `boards` boards across, each with its own tone, a
@@ -70,7 +74,7 @@ export function oakBoards(width = 768, height = 1536, boards = 4, seed = 7): Raw
   const fine = periodicNoise(boards * 24, 48, seed + 1);
   const rand = seededRandom(seed + 2);
   const tones = Array.from({ length: boards }, () => 0.86 + rand() * 0.24);
-  const joints = Array.from({ length: boards }, (_, i) => ((i * 0.37 + rand() * 0.2) % 1));
+  const joints = Array.from({ length: boards }, (_, i) => (i * 0.37 + rand() * 0.2) % 1);
   const boardPx = width / boards;
   const gapPx = Math.max(1, Math.round(width / 400));
   const base: [number, number, number] = [176, 136, 92];
@@ -140,14 +144,20 @@ export async function sprigWallpaper(size = 1024): Promise<RawImage> {
     }
   }
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}"><rect width="100%" height="100%" fill="#efe6d2"/>${motifs.join('')}</svg>`;
-  const { data, info } = await sharp(Buffer.from(svg)).flatten({ background: '#efe6d2' }).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+  const { data, info } = await sharp(Buffer.from(svg))
+    .flatten({ background: '#efe6d2' })
+    .removeAlpha()
+    .raw()
+    .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, channels: 3 };
 }
 
 /** A checkerboard of `squares` × `squares`, starting dark at the top left. */
 export function checkerboard(sizePx: number, squares: number): RawImage {
   const squarePx = sizePx / squares;
-  return fill(sizePx, sizePx, (x, y) => ((Math.floor(x / squarePx) + Math.floor(y / squarePx)) % 2 === 0 ? [30, 30, 30] : [225, 225, 225]));
+  return fill(sizePx, sizePx, (x, y) =>
+    (Math.floor(x / squarePx) + Math.floor(y / squarePx)) % 2 === 0 ? [30, 30, 30] : [225, 225, 225],
+  );
 }
 
 /**
@@ -166,7 +176,8 @@ export function photoLike(width: number, height: number, seed = 3): RawImage {
   });
 }
 
-export const rawToSharp = (img: RawImage) => sharp(img.data, { raw: { width: img.width, height: img.height, channels: img.channels } });
+export const rawToSharp = (img: RawImage) =>
+  sharp(img.data, { raw: { width: img.width, height: img.height, channels: img.channels } });
 export const rawToJpeg = (img: RawImage, quality = 90) => rawToSharp(img).jpeg({ quality }).toBuffer();
 export const rawToPng = (img: RawImage) => rawToSharp(img).png().toBuffer();
 
@@ -185,13 +196,23 @@ export function zeroPng(width: number, height: number, bitDepth: 1 | 8 = 1, rows
   // Adler-32 of n zero bytes: a stays 1, b adds a once per byte.
   const adler = Buffer.alloc(4);
   adler.writeUInt32BE((((total % 65521) << 16) | 1) >>> 0);
-  const idat = Buffer.concat([Buffer.from([0x78, 0x9c]), ...Array.from({ length: height / rowsPerBlock }, () => block), last, adler]);
+  const idat = Buffer.concat([
+    Buffer.from([0x78, 0x9c]),
+    ...Array.from({ length: height / rowsPerBlock }, () => block),
+    last,
+    adler,
+  ]);
   const ihdr = Buffer.alloc(13);
   ihdr.writeUInt32BE(width, 0);
   ihdr.writeUInt32BE(height, 4);
   ihdr[8] = bitDepth;
   ihdr[9] = 0; // greyscale
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), pngChunk('IHDR', ihdr), pngChunk('IDAT', idat), pngChunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    pngChunk('IHDR', ihdr),
+    pngChunk('IDAT', idat),
+    pngChunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 function pngChunk(type: string, data: Buffer): Buffer {

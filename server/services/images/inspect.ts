@@ -17,7 +17,8 @@ export class PhotoProblem extends Error {
   }
 }
 
-const startsWith = (buf: Buffer, bytes: number[], at = 0) => buf.length >= at + bytes.length && bytes.every((b, i) => buf[at + i] === b);
+const startsWith = (buf: Buffer, bytes: number[], at = 0) =>
+  buf.length >= at + bytes.length && bytes.every((b, i) => buf[at + i] === b);
 
 /** The photo type told by its first bytes (file signatures), or null for anything else. */
 export function sniffPhotoType(buf: Buffer): PhotoType | null {
@@ -58,7 +59,11 @@ async function assertWhole(buf: Buffer, label: string): Promise<void> {
       .raw()
       .toBuffer();
   } catch {
-    throw new PhotoProblem(422, 'damaged', `${label} is damaged or cut short (the file ends early). Export or download it again, then upload it.`);
+    throw new PhotoProblem(
+      422,
+      'damaged',
+      `${label} is damaged or cut short (the file ends early). Export or download it again, then upload it.`,
+    );
   }
 }
 
@@ -67,16 +72,25 @@ export async function inspectPhoto(buf: Buffer, fileName: string): Promise<Photo
   const label = `“${fileName}”`;
   if (buf.length === 0) throw new PhotoProblem(400, 'empty_file', `${label} is empty (0 bytes). Choose the photo again.`);
   const type = sniffPhotoType(buf);
-  if (!type) throw new PhotoProblem(415, 'unsupported_type', `${label} is not a JPEG, PNG or WebP photo, whatever its name says.`);
+  if (!type)
+    throw new PhotoProblem(415, 'unsupported_type', `${label} is not a JPEG, PNG or WebP photo, whatever its name says.`);
   let meta: Metadata;
   try {
     // metadata() reads the header only; the pixel limit is checked below so the message can say the size.
     meta = await sharp(buf, { limitInputPixels: false }).metadata();
   } catch {
-    throw new PhotoProblem(422, 'unreadable', `${label} looks like a ${type.toUpperCase()} but cannot be read. It may be damaged.`);
+    throw new PhotoProblem(
+      422,
+      'unreadable',
+      `${label} looks like a ${type.toUpperCase()} but cannot be read. It may be damaged.`,
+    );
   }
   if (meta.format !== type || !meta.width || !meta.height) {
-    throw new PhotoProblem(422, 'unreadable', `${label} looks like a ${type.toUpperCase()} but cannot be read. It may be damaged.`);
+    throw new PhotoProblem(
+      422,
+      'unreadable',
+      `${label} looks like a ${type.toUpperCase()} but cannot be read. It may be damaged.`,
+    );
   }
   const pixels = meta.width * meta.height;
   if (pixels > UPLOAD_LIMITS.maxPixels) {

@@ -50,7 +50,9 @@ interface Raw {
 
 const fromRaw = (r: Raw) => sharp(r.data, { raw: { width: r.width, height: r.height, channels: r.channels } });
 const webp = async (pipeline: Sharp): Promise<ProcessedImage> => {
-  const { data, info } = await pipeline.webp({ quality: WEBP_QUALITY, effort: WEBP_EFFORT }).toBuffer({ resolveWithObject: true });
+  const { data, info } = await pipeline
+    .webp({ quality: WEBP_QUALITY, effort: WEBP_EFFORT })
+    .toBuffer({ resolveWithObject: true });
   return { buffer: data, widthPx: info.width, heightPx: info.height };
 };
 // libvips keeps recent operations to reuse them; each photo is processed once, so the cache only
@@ -74,16 +76,22 @@ export function cropPixels(crop: Crop, widthPx: number, heightPx: number) {
  * With `keepMaster`, the source is first rewritten as the master (oriented, sRGB, no metadata) and
  * everything else is made from that, so a later re-crop from the master gives the same pixels.
  */
-export async function processPhoto(source: Buffer, opts: { crop: Crop; edgeBlend: EdgeBlend; keepMaster: boolean }): Promise<ProcessedPhoto> {
+export async function processPhoto(
+  source: Buffer,
+  opts: { crop: Crop; edgeBlend: EdgeBlend; keepMaster: boolean },
+): Promise<ProcessedPhoto> {
   // Each step streams through libvips from compressed bytes rather than holding the whole decoded
   // photo in JavaScript, and steps run one at a time: peak memory stays near one decoded photo.
   const normalised = (input: Buffer) =>
-    sharp(input, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: DECODE_FAIL_ON }).rotate().flatten({ background: '#ffffff' }).toColourspace('srgb');
+    sharp(input, { limitInputPixels: UPLOAD_LIMITS.maxPixels, failOn: DECODE_FAIL_ON })
+      .rotate()
+      .flatten({ background: '#ffffff' })
+      .toColourspace('srgb');
   const master = opts.keepMaster
     ? await normalised(source)
-      // Huffman optimisation would buffer the whole photo's coefficients: off, for memory.
-      .jpeg({ quality: MASTER_JPEG_QUALITY, chromaSubsampling: '4:4:4', optimiseCoding: false })
-      .toBuffer({ resolveWithObject: true })
+        // Huffman optimisation would buffer the whole photo's coefficients: off, for memory.
+        .jpeg({ quality: MASTER_JPEG_QUALITY, chromaSubsampling: '4:4:4', optimiseCoding: false })
+        .toBuffer({ resolveWithObject: true })
     : null;
   const base = master ? master.data : source;
   const { width, height } = master ? master.info : await orientedSize(base);
@@ -94,11 +102,21 @@ export async function processPhoto(source: Buffer, opts: { crop: Crop; edgeBlend
     .resize(fitInside(TEXTURE_LARGE_PX))
     .raw()
     .toBuffer({ resolveWithObject: true });
-  const large: Raw = { data: cropped.data, width: cropped.info.width, height: cropped.info.height, channels: cropped.info.channels };
+  const large: Raw = {
+    data: cropped.data,
+    width: cropped.info.width,
+    height: cropped.info.height,
+    channels: cropped.info.channels,
+  };
   blendEdgesMirrored(large.data, large.width, large.height, large.channels, EDGE_BLEND_FRACTION[opts.edgeBlend]);
 
   const previewTile = await fromRaw(large).resize(fitInside(PREVIEW_TILE_PX)).raw().toBuffer({ resolveWithObject: true });
-  const tile: Raw = { data: previewTile.data, width: previewTile.info.width, height: previewTile.info.height, channels: previewTile.info.channels };
+  const tile: Raw = {
+    data: previewTile.data,
+    width: previewTile.info.width,
+    height: previewTile.info.height,
+    channels: previewTile.info.channels,
+  };
   const textureLarge = await webp(fromRaw(large));
   const texture = await webp(fromRaw(large).resize(fitInside(TEXTURE_PX)));
   const swatch = await webp(fromRaw(large).resize(SWATCH_PX, SWATCH_PX, { fit: 'cover' }));
@@ -128,7 +146,7 @@ function repeat3x3(r: Raw): Raw {
   const rowBytes = r.width * r.channels;
   const out = Buffer.alloc(rowBytes * 3 * r.height * 3);
   for (let y = 0; y < r.height * 3; y++) {
-    const src = r.data.subarray((y % r.height) * rowBytes, (y % r.height + 1) * rowBytes);
+    const src = r.data.subarray((y % r.height) * rowBytes, ((y % r.height) + 1) * rowBytes);
     for (let k = 0; k < 3; k++) src.copy(out, y * rowBytes * 3 + k * rowBytes);
   }
   return { data: out, width: r.width * 3, height: r.height * 3, channels: r.channels };
@@ -154,5 +172,11 @@ export function meanColourHex(r: Raw): string {
     const at = i * r.channels;
     for (let c = 0; c < 3; c++) sums[c] += toLinear[r.data[at + (colour ? c : 0)]];
   }
-  return `#${sums.map((s) => toSrgbByte(s / pixels).toString(16).padStart(2, '0')).join('')}`;
+  return `#${sums
+    .map((s) =>
+      toSrgbByte(s / pixels)
+        .toString(16)
+        .padStart(2, '0'),
+    )
+    .join('')}`;
 }

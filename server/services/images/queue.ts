@@ -11,7 +11,10 @@ export interface JobQueue {
   idle(): Promise<void>;
 }
 
-export function createJobQueue(run: (id: string) => Promise<void>, opts: { concurrency: number; onError: (id: string, err: unknown) => void }): JobQueue {
+export function createJobQueue(
+  run: (id: string) => Promise<void>,
+  opts: { concurrency: number; onError: (id: string, err: unknown) => void },
+): JobQueue {
   const waiting: string[] = [];
   const running = new Set<string>();
   let idleWaiters: (() => void)[] = [];

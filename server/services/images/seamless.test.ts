@@ -21,13 +21,19 @@ function steps(p: Uint8Array, w: number, h: number, ch: number) {
       for (let y = 1; y < h; y++) insideY += Math.abs(at(x, y, c) - at(x, y - 1, c));
     }
   }
-  return { joinX: joinX / (h * ch), insideX: insideX / (h * ch * (w - 1)), joinY: joinY / (w * ch), insideY: insideY / (w * ch * (h - 1)) };
+  return {
+    joinX: joinX / (h * ch),
+    insideX: insideX / (h * ch * (w - 1)),
+    joinY: joinY / (w * ch),
+    insideY: insideY / (w * ch * (h - 1)),
+  };
 }
 
 /** A left-to-right and top-to-bottom ramp: the worst case for a seam, 0 on one edge and 255 on the other. */
 function ramp(w: number, h: number): Uint8Array {
   const p = new Uint8Array(w * h);
-  for (let y = 0; y < h; y++) for (let x = 0; x < w; x++) p[y * w + x] = Math.round(((x / (w - 1)) * 0.5 + (y / (h - 1)) * 0.5) * 255);
+  for (let y = 0; y < h; y++)
+    for (let x = 0; x < w; x++) p[y * w + x] = Math.round(((x / (w - 1)) * 0.5 + (y / (h - 1)) * 0.5) * 255);
   return p;
 }
 

@@ -20,7 +20,13 @@ function ownWeight(d: number, bandPx: number): number {
  * Blends the edges of an interleaved 8-bit image in place (`channels` values per pixel, rows top
  * to bottom). `bandFraction` is the band's width as a fraction of each side; 0 leaves it as it is.
  */
-export function blendEdgesMirrored(pixels: Uint8Array, widthPx: number, heightPx: number, channels: number, bandFraction: number): void {
+export function blendEdgesMirrored(
+  pixels: Uint8Array,
+  widthPx: number,
+  heightPx: number,
+  channels: number,
+  bandFraction: number,
+): void {
   if (bandFraction <= 0) return;
   const bandX = Math.min(Math.floor(widthPx / 2), Math.round(widthPx * bandFraction));
   const bandY = Math.min(Math.floor(heightPx / 2), Math.round(heightPx * bandFraction));
@@ -52,4 +58,3 @@ function mixPair(p: Uint8Array, a: number, b: number, w: number): void {
   p[a] = Math.round(w * va + (1 - w) * vb);
   p[b] = Math.round(w * vb + (1 - w) * va);
 }
-

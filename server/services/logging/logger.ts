@@ -17,7 +17,16 @@ export const REDACTED = '[redacted]';
 
 // Field names that can carry a secret anywhere in a logged object (bodies are never logged, but
 // an error or a future log call might include one).
-const SECRET_FIELDS = ['password', 'currentPassword', 'newPassword', 'token', 'link', 'cookie', 'authorization', 'presentationKey'];
+const SECRET_FIELDS = [
+  'password',
+  'currentPassword',
+  'newPassword',
+  'token',
+  'link',
+  'cookie',
+  'authorization',
+  'presentationKey',
+];
 const REDACT_PATHS = [
   ...SECRET_FIELDS,
   ...SECRET_FIELDS.map((f) => `*.${f}`),
@@ -61,8 +70,15 @@ export function createLogger(opts: LoggerOptions): Logger {
   );
 }
 
-interface SerializedReq { id: unknown; method: string; url: string; remoteAddress?: string }
-interface SerializedRes { statusCode: number }
+interface SerializedReq {
+  id: unknown;
+  method: string;
+  url: string;
+  remoteAddress?: string;
+}
+interface SerializedRes {
+  statusCode: number;
+}
 
 /**
  * Logs each request once it is answered, under a request id: the caller's `x-request-id` when it
@@ -84,7 +100,12 @@ export function requestLogger(logger: Logger): RequestHandler {
       return res.statusCode >= 400 ? 'warn' : 'info';
     },
     serializers: {
-      req: (req: SerializedReq) => ({ id: req.id, method: req.method, url: redactText(req.url), remoteAddress: req.remoteAddress }),
+      req: (req: SerializedReq) => ({
+        id: req.id,
+        method: req.method,
+        url: redactText(req.url),
+        remoteAddress: req.remoteAddress,
+      }),
       res: (res: SerializedRes) => ({ statusCode: res.statusCode }),
     },
   });

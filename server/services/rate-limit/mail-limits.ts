@@ -35,12 +35,19 @@ function recipientHit(to: string, advice = ''): RateHit {
   return {
     rule: RECIPIENT_MAIL_RATE,
     key: recipientKey(to),
-    message: (s) => `${to} has already been sent ${RECIPIENT_MAIL_RATE.limit} e-mails from Parlour today. Try again in ${waitInWords(s)}${advice}.`,
+    message: (s) =>
+      `${to} has already been sent ${RECIPIENT_MAIL_RATE.limit} e-mails from Parlour today. Try again in ${waitInWords(s)}${advice}.`,
   };
 }
 
 /** Counts a presentation mail against the studio's day and the recipient's, or answers 429 counting neither. */
-export async function limitPresentationMail(db: Db, res: Response, studioId: string, to: string, now = new Date()): Promise<void> {
+export async function limitPresentationMail(
+  db: Db,
+  res: Response,
+  studioId: string,
+  to: string,
+  now = new Date(),
+): Promise<void> {
   const studio = await db.selectFrom('studios').select('created_at').where('id', '=', studioId).executeTakeFirstOrThrow();
   const young = now.getTime() - new Date(studio.created_at).getTime() < NEW_STUDIO_AGE_MS;
   const limit = young ? NEW_STUDIO_PRESENTATION_MAIL_LIMIT : PRESENTATION_MAIL_RATE.limit;
@@ -48,7 +55,8 @@ export async function limitPresentationMail(db: Db, res: Response, studioId: str
     {
       rule: { ...PRESENTATION_MAIL_RATE, limit },
       key: studioId,
-      message: (s) => `Your studio has sent ${limit} presentation e-mails today${young ? ', the limit for its first day' : ''}. Try again in ${waitInWords(s)}${COPY_INSTEAD}.`,
+      message: (s) =>
+        `Your studio has sent ${limit} presentation e-mails today${young ? ', the limit for its first day' : ''}. Try again in ${waitInWords(s)}${COPY_INSTEAD}.`,
     },
     recipientHit(to, COPY_INSTEAD),
   ]);

@@ -43,13 +43,22 @@ export async function hitRateLimit(db: Db, rule: RateRule, key: string, now = ne
     .executeTakeFirst();
   // The first hit of a window clears this key's windows that can no longer count.
   if (row.count === 1) {
-    await db.deleteFrom('rate_limit_counts').where('bucket', '=', rule.bucket).where('key', '=', key).where('window_start', '<', previous).execute();
+    await db
+      .deleteFrom('rate_limit_counts')
+      .where('bucket', '=', rule.bucket)
+      .where('key', '=', key)
+      .where('window_start', '<', previous)
+      .execute();
   }
   const priorCount = prior?.count ?? 0;
   const elapsed = (now.getTime() - windowStart) / rule.windowMs;
   const count = row.count + priorCount * (1 - elapsed);
   const allowed = count <= rule.limit;
-  return { allowed, count, retryAfterS: allowed ? 1 : secondsUntilAllowed(rule, windowStart, now.getTime(), row.count, priorCount) };
+  return {
+    allowed,
+    count,
+    retryAfterS: allowed ? 1 : secondsUntilAllowed(rule, windowStart, now.getTime(), row.count, priorCount),
+  };
 }
 
 /**
@@ -59,9 +68,10 @@ export async function hitRateLimit(db: Db, rule: RateRule, key: string, now = ne
  */
 function secondsUntilAllowed(rule: RateRule, windowStart: number, nowMs: number, current: number, prior: number): number {
   const w = rule.windowMs;
-  const at = prior > 0 && current + 1 <= rule.limit
-    ? windowStart + w * (1 - (rule.limit - current - 1) / prior)
-    : windowStart + w + w * Math.max(0, 1 - (rule.limit - 1) / current);
+  const at =
+    prior > 0 && current + 1 <= rule.limit
+      ? windowStart + w * (1 - (rule.limit - current - 1) / prior)
+      : windowStart + w + w * Math.max(0, 1 - (rule.limit - 1) / current);
   return Math.max(1, Math.ceil((at - nowMs) / 1000));
 }
 

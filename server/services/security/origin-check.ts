@@ -36,9 +36,16 @@ export function originCheck(publicUrl: string): RequestHandler {
     const origin = req.headers.origin;
     const referer = req.headers.referer;
     if (origin === undefined && referer === undefined) return next();
-    const claimed = origin !== undefined && origin !== 'null' ? originOf(origin) : referer !== undefined ? originOf(referer) : null;
+    const claimed =
+      origin !== undefined && origin !== 'null' ? originOf(origin) : referer !== undefined ? originOf(referer) : null;
     const own = `${req.protocol}://${req.get('host') ?? ''}`;
     if (claimed !== null && (claimed === publicOrigin || claimed === own)) return next();
-    next(new HttpError(403, 'cross_site', 'This request came from another site, so it was refused. Open Parlour directly and try again.'));
+    next(
+      new HttpError(
+        403,
+        'cross_site',
+        'This request came from another site, so it was refused. Open Parlour directly and try again.',
+      ),
+    );
   };
 }

@@ -2,7 +2,13 @@
 // photo uploaded through one instance is served by any other. Keys are the same server-made keys
 // the local disk uses; the bucket stays private (the files route still checks who may read).
 import {
-  DeleteObjectCommand, GetObjectCommand, ListObjectsV2Command, NoSuchKey, PutObjectCommand, S3Client, S3ServiceException,
+  DeleteObjectCommand,
+  GetObjectCommand,
+  ListObjectsV2Command,
+  NoSuchKey,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
 } from '@aws-sdk/client-s3';
 import { assertStorageKey, type ListableStorage } from './storage';
 
@@ -40,7 +46,9 @@ export function s3Storage(opts: S3StorageOptions): ListableStorage {
     async put(key, buffer) {
       assertStorageKey(key);
       // A PUT replaces the object whole or not at all: a reader never sees half a file.
-      await client.send(new PutObjectCommand({ Bucket, Key: key, Body: buffer, ContentLength: buffer.length, CacheControl: IMMUTABLE }));
+      await client.send(
+        new PutObjectCommand({ Bucket, Key: key, Body: buffer, ContentLength: buffer.length, CacheControl: IMMUTABLE }),
+      );
     },
     async get(key) {
       assertStorageKey(key);

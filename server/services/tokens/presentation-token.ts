@@ -72,7 +72,8 @@ export async function verifyPresentationToken(key: Uint8Array, token: string): P
       typ: PRESENTATION_TYP,
       requiredClaims: ['jti', 'iat', 'exp'],
     });
-    if (typeof payload.jti !== 'string' || payload.jti.length === 0 || payload.jti.length > 64) return { ok: false, reason: 'invalid' };
+    if (typeof payload.jti !== 'string' || payload.jti.length === 0 || payload.jti.length > 64)
+      return { ok: false, reason: 'invalid' };
     return { ok: true, tokenId: payload.jti };
   } catch (err) {
     if (err instanceof errors.JWTExpired) return { ok: false, reason: 'expired' };

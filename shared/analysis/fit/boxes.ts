@@ -33,9 +33,14 @@ export function pieceBox(piece: Piece): PieceBox {
   const hx = piece.width / 2;
   const hy = piece.depth / 2;
   const centre: [number, number] = [piece.x, piece.y];
-  const corners = ([[-hx, -hy], [hx, -hy], [hx, hy], [-hx, hy]] as const).map(([a, b]) =>
-    addScaled(addScaled(centre, axisX, a), axisY, b),
-  );
+  const corners = (
+    [
+      [-hx, -hy],
+      [hx, -hy],
+      [hx, hy],
+      [-hx, hy],
+    ] as const
+  ).map(([a, b]) => addScaled(addScaled(centre, axisX, a), axisY, b));
   return {
     piece,
     centre,

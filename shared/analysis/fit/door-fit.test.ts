@@ -8,7 +8,15 @@ import { roomShellSchema, type Opening } from '../../schemas/room';
 const door820: Opening = { id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in' };
 
 function tooBig(pieces: PieceInput[], openings: Opening[] = [door820]) {
-  const shell = roomShellSchema.parse({ outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]], openings });
+  const shell = roomShellSchema.parse({
+    outline: [
+      [0, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ],
+    openings,
+  });
   return findTooBigForDoor(shell, placedBoxes(pieces.map((p) => pieceSchema.parse(p))));
 }
 

@@ -9,7 +9,12 @@ import { roomShellSchema, type Door } from '../../schemas/room';
 // in, its leaf sweeps the quarter disc of radius 820 round (300, 0) with x ≥ 300 and y ≥ 0.
 function swings(pieces: PieceInput[], door: Partial<Door> = {}) {
   const shell = roomShellSchema.parse({
-    outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+    outline: [
+      [0, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ],
     openings: [{ id: 'd1', type: 'door', wall: 0, offset: 300, width: 820, height: 2040, hinge: 'start', swing: 'in', ...door }],
   });
   return findDoorSwings(shell, placedBoxes(pieces.map((p) => pieceSchema.parse(p))));

@@ -27,13 +27,22 @@ describe('checkFit', () => {
     const findings = fit(layout);
     for (const finding of findings) findingSchema.parse(finding);
     const kinds = findings.map((f) => f.kind);
-    for (const kind of ['overlap', 'outside-room', 'door-swing', 'window-blocked', 'too-big-for-door'] as const) expect(kinds).toContain(kind);
+    for (const kind of ['overlap', 'outside-room', 'door-swing', 'window-blocked', 'too-big-for-door'] as const)
+      expect(kinds).toContain(kind);
     expect(findings.find((f) => f.kind === 'overlap')?.pieces).toEqual(['a-chest', 'b-wardrobe']);
     expect(findings.filter((f) => f.kind === 'door-swing').map((f) => f.pieces[0])).toEqual(['a-chest', 'b-wardrobe']);
     expect(findings.find((f) => f.kind === 'outside-room')?.pieces).toEqual(['crate']);
     expect(findings.find((f) => f.kind === 'window-blocked')?.pieces).toEqual(['sofa']);
     expect(findings.find((f) => f.kind === 'too-big-for-door')?.pieces).toEqual(['crate']);
-    const order = ['overlap', 'outside-room', 'door-swing', 'window-blocked', 'narrow-walkway', 'unreachable', 'too-big-for-door'];
+    const order = [
+      'overlap',
+      'outside-room',
+      'door-swing',
+      'window-blocked',
+      'narrow-walkway',
+      'unreachable',
+      'too-big-for-door',
+    ];
     const ranks = findings.map((f) => order.indexOf(f.kind));
     expect(ranks).toEqual([...ranks].sort((a, b) => a - b));
     // The same layout checked again reads the same.

@@ -26,7 +26,10 @@ export function findOutsideRoom(shell: Pick<RoomShell, 'outline'>, boxes: readon
     const reachMm = Math.hypot(box.halfWidthMm, box.halfDepthMm) + TOUCH_TOLERANCE_MM;
     const crossesWall = outline.some((start, i) => {
       const end = outline[(i + 1) % outline.length];
-      return distanceToSegmentMm(box.centre, start, end) <= reachMm && segmentCrossesConvex(start, end, box.corners, TOUCH_TOLERANCE_MM);
+      return (
+        distanceToSegmentMm(box.centre, start, end) <= reachMm &&
+        segmentCrossesConvex(start, end, box.corners, TOUCH_TOLERANCE_MM)
+      );
     });
     const outsideCorners = box.corners.filter((corner) => cornerOutside(corner, outline)).length;
     if (!crossesWall && outsideCorners === 0) continue;

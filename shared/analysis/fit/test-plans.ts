@@ -30,7 +30,12 @@ export function plan(room: RoomShellInput, pieces: readonly PieceInput[]): PlanF
 export function cleanLayout(): { room: RoomShellInput; pieces: PieceInput[] } {
   return {
     room: {
-      outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+      outline: [
+        [0, 0],
+        [4000, 0],
+        [4000, 3000],
+        [0, 3000],
+      ],
       openings: [
         { id: 'd1', type: 'door', wall: 0, offset: 300, width: 920, height: 2040, hinge: 'start', swing: 'in' },
         { id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 },
@@ -39,7 +44,17 @@ export function cleanLayout(): { room: RoomShellInput; pieces: PieceInput[] } {
     pieces: [
       // Turned 270°: its width runs down the wall and its front faces +x, into the room.
       pieceInput({ id: 'sideboard', name: 'Sideboard', x: 225, y: 1800, width: 1600, depth: 450, height: 850, rotation: 270 }),
-      pieceInput({ id: 'wall-cabinet', name: 'Wall cabinet', x: 175, y: 1800, width: 1600, depth: 350, height: 700, rotation: 270, elevation: 1400 }),
+      pieceInput({
+        id: 'wall-cabinet',
+        name: 'Wall cabinet',
+        x: 175,
+        y: 1800,
+        width: 1600,
+        depth: 350,
+        height: 700,
+        rotation: 270,
+        elevation: 1400,
+      }),
       // Turned 180°: front faces −y, back flush on the bottom wall (y 2100–3000).
       pieceInput({ id: 'sofa', name: 'Sofa', x: 2200, y: 2550, width: 2000, depth: 900, height: 800, rotation: 180 }),
       // Turned 90°: front faces −x; x 3650–4000, y 600–1800.
@@ -60,12 +75,25 @@ export function gapLayout(gapMm = 620): { room: RoomShellInput; pieces: PieceInp
   const chestWidthMm = 2000 - gapMm;
   return {
     room: {
-      outline: [[0, 0], [4000, 0], [4000, 4000], [0, 4000]],
+      outline: [
+        [0, 0],
+        [4000, 0],
+        [4000, 4000],
+        [0, 4000],
+      ],
       openings: [{ id: 'd1', type: 'door', wall: 0, offset: 2800, width: 820, height: 2040, hinge: 'start', swing: 'out' }],
     },
     pieces: [
       pieceInput({ id: 'bed', name: 'Bed', x: 1000, y: 2200, width: 1400, depth: 2000, height: 500, rotation: 270 }),
-      pieceInput({ id: 'chest', name: 'Chest', x: 4000 - chestWidthMm / 2, y: 2000, width: chestWidthMm, depth: 500, height: 800 }),
+      pieceInput({
+        id: 'chest',
+        name: 'Chest',
+        x: 4000 - chestWidthMm / 2,
+        y: 2000,
+        width: chestWidthMm,
+        depth: 500,
+        height: 800,
+      }),
     ],
   };
 }
@@ -78,7 +106,12 @@ export function gapLayout(gapMm = 620): { room: RoomShellInput; pieces: PieceInp
 export function walledInLayout(): { room: RoomShellInput; pieces: PieceInput[] } {
   return {
     room: {
-      outline: [[0, 0], [4000, 0], [4000, 4000], [0, 4000]],
+      outline: [
+        [0, 0],
+        [4000, 0],
+        [4000, 4000],
+        [0, 4000],
+      ],
       openings: [{ id: 'd1', type: 'door', wall: 3, offset: 1000, width: 820, height: 2040, hinge: 'start', swing: 'out' }],
     },
     pieces: [

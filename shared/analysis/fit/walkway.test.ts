@@ -28,7 +28,10 @@ describe('narrow-walkway', () => {
     expect(x).toBeLessThan(2620);
     expect(y).toBeGreaterThanOrEqual(1750 - WALKWAY_CELL_MM);
     expect(y).toBeLessThanOrEqual(2250 + WALKWAY_CELL_MM);
-    const [from, to] = gap.between ?? [[0, 0], [0, 0]];
+    const [from, to] = gap.between ?? [
+      [0, 0],
+      [0, 0],
+    ];
     expect(Math.hypot(from[0] - to[0], from[1] - to[1])).toBeCloseTo(620, 0);
     expect([from[0], to[0]].sort((a, b) => a - b)).toEqual([2000, 2620]);
   });
@@ -51,7 +54,9 @@ describe('narrow-walkway', () => {
     // A bookcase turned 180° so its front faces the top wall, 100 mm off it (y 100–400).
     const findings = walkway({
       room: gapLayout().room,
-      pieces: [pieceInput({ id: 'bookcase', name: 'Bookcase', x: 1500, y: 250, width: 1000, depth: 300, height: 1800, rotation: 180 })],
+      pieces: [
+        pieceInput({ id: 'bookcase', name: 'Bookcase', x: 1500, y: 250, width: 1000, depth: 300, height: 1800, rotation: 180 }),
+      ],
     });
     expect(findings).toHaveLength(1);
     expect(findings[0].kind).toBe('narrow-walkway');
@@ -62,7 +67,9 @@ describe('narrow-walkway', () => {
   it('names the piece to reach when the gap is between two others', () => {
     // A desk in the bottom half of the gap plan, facing down: its route also squeezes through the gap.
     const layout = gapLayout();
-    layout.pieces.push(pieceInput({ id: 'desk', name: 'Desk', x: 3000, y: 3700, width: 1200, depth: 600, height: 750, rotation: 180 }));
+    layout.pieces.push(
+      pieceInput({ id: 'desk', name: 'Desk', x: 3000, y: 3700, width: 1200, depth: 600, height: 750, rotation: 180 }),
+    );
     const desk = walkway(layout).find((f) => f.pieces[0] === 'desk');
     expect(desk?.message).toBe('Only 62 cm to pass between the bed and the chest to reach the desk');
     expect(desk?.pieces).toEqual(['desk', 'bed', 'chest']);
@@ -85,7 +92,9 @@ describe('unreachable', () => {
   it('reports a piece whose front is flush against a wall', () => {
     const findings = walkway({
       room: gapLayout().room,
-      pieces: [pieceInput({ id: 'bookcase', name: 'Bookcase', x: 1500, y: 150, width: 1000, depth: 300, height: 1800, rotation: 180 })],
+      pieces: [
+        pieceInput({ id: 'bookcase', name: 'Bookcase', x: 1500, y: 150, width: 1000, depth: 300, height: 1800, rotation: 180 }),
+      ],
     });
     expect(findings.map((f) => f.kind)).toEqual(['unreachable']);
   });
@@ -117,18 +126,28 @@ describe('walkway rules', () => {
     const layout = gapLayout();
     // Filling the gap with a rug or a cabinet at 1400 mm leaves the route as it was.
     layout.pieces.push(pieceInput({ id: 'rug', name: 'Rug', x: 2310, y: 2000, width: 620, depth: 500, height: 15 }));
-    layout.pieces.push(pieceInput({ id: 'cabinet', name: 'Cabinet', x: 2310, y: 2000, width: 620, depth: 500, height: 600, elevation: 1400 }));
+    layout.pieces.push(
+      pieceInput({ id: 'cabinet', name: 'Cabinet', x: 2310, y: 2000, width: 620, depth: 500, height: 600, elevation: 1400 }),
+    );
     expect(walkway(layout).map((f) => f.pieces[0])).toEqual(['chest']);
     // A floor-standing stool in the gap shuts it: the chest's front and the stool's own (facing the
     // bottom half) are cut off.
     layout.pieces.push(pieceInput({ id: 'stool', name: 'Stool', x: 2310, y: 2000, width: 620, depth: 500, height: 450 }));
-    expect(walkway(layout).filter((f) => f.kind === 'unreachable').map((f) => f.pieces[0]).sort()).toEqual(['chest', 'stool']);
+    expect(
+      walkway(layout)
+        .filter((f) => f.kind === 'unreachable')
+        .map((f) => f.pieces[0])
+        .sort(),
+    ).toEqual(['chest', 'stool']);
   });
 
   it('starts from passages as well as doors', () => {
     const layout = walledInLayout();
     // A passage in the pocket's own right wall (x 4000, y 600–900) reaches the cabinet's front.
-    layout.room.openings = [...(layout.room.openings ?? []), { id: 'p1', type: 'passage', wall: 1, offset: 600, width: 300, height: 2100 }];
+    layout.room.openings = [
+      ...(layout.room.openings ?? []),
+      { id: 'p1', type: 'passage', wall: 1, offset: 600, width: 300, height: 2100 },
+    ];
     const cabinet = walkway(layout).find((f) => f.pieces[0] === 'cabinet');
     expect(cabinet?.kind).toBe('narrow-walkway');
     expect(cabinet?.openings).toEqual(['p1']);
@@ -142,7 +161,15 @@ describe('walkway rules', () => {
 
   it('checks a room drawn the other way round the same', () => {
     const layout = gapLayout();
-    const reversed = { ...layout.room, outline: [[0, 0], [0, 4000], [4000, 4000], [4000, 0]] as [number, number][] };
+    const reversed = {
+      ...layout.room,
+      outline: [
+        [0, 0],
+        [0, 4000],
+        [4000, 4000],
+        [4000, 0],
+      ] as [number, number][],
+    };
     // The top wall is now wall 3, from (4000, 0) to (0, 0): the door's near edge is 4000 − 3620 = 380 from its start.
     reversed.openings = [{ id: 'd1', type: 'door', wall: 3, offset: 380, width: 820, height: 2040, hinge: 'end', swing: 'out' }];
     const [gap] = checkFit(plan(reversed, layout.pieces).room, plan(reversed, layout.pieces).option.pieces);

@@ -59,7 +59,12 @@ const float64 = (cells: number) => new Float64Array(cells);
 const int32 = (cells: number) => new Int32Array(cells);
 
 /** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
-const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [[1, 0], [0, 1], [1, 1], [1, -1]];
+const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [
+  [1, 0],
+  [0, 1],
+  [1, 1],
+  [1, -1],
+];
 /** Length of one step of each run direction, in cells. */
 const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
 
@@ -142,7 +147,8 @@ class Widths {
     else {
       const runMm = this.shortestRunMm[cell];
       // A chord across found past the cap, like one past the shortest run, cannot change the answer.
-      widthMm = runMm <= nearSideMm + cellMm / 2 ? runMm : Math.min(this.across(cell, Math.min(this.enoughMm, runMm, keyMm)), runMm);
+      widthMm =
+        runMm <= nearSideMm + cellMm / 2 ? runMm : Math.min(this.across(cell, Math.min(this.enoughMm, runMm, keyMm)), runMm);
     }
     const capped = Math.floor(Math.min(widthMm, keyMm));
     this.cappedMm[cell] = capped + 1;
@@ -213,7 +219,13 @@ class Widths {
     const nearSideMm = (d1 - 0.5) * cellMm;
     const i = cell % nx;
     const j = (cell - i) / nx;
-    const farSideMm = this.ray(i, j, (i - (nearestCell % nx)) / d1, (j - Math.floor(nearestCell / nx)) / d1, reachMm - nearSideMm);
+    const farSideMm = this.ray(
+      i,
+      j,
+      (i - (nearestCell % nx)) / d1,
+      (j - Math.floor(nearestCell / nx)) / d1,
+      reachMm - nearSideMm,
+    );
     return farSideMm < Infinity && !this.bothWalls(nearestCell, this.rayHit) ? nearSideMm + farSideMm : Infinity;
   }
 
@@ -329,7 +341,12 @@ interface Routes {
  * Keys only fall as the search goes on, so a cell taken at its own key is settled: a later key
  * cannot beat it, and no separate record of settled cells is needed.
  */
-function widestRoutes(grid: FloorGrid, widths: Widths, sources: readonly { cell: number; opening: number }[], limitMm: number): Routes {
+function widestRoutes(
+  grid: FloorGrid,
+  widths: Widths,
+  sources: readonly { cell: number; opening: number }[],
+  limitMm: number,
+): Routes {
   const cells = grid.nx * grid.ny;
   const { nx, label } = grid;
   const bottleneckMm = scratch('bottleneck', int32, cells);
@@ -437,7 +454,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
   const grid = rasteriseFloor(outline, obstacles, WALKWAY_CELL_MM);
-  
+
   // The floor cells just inside each way in, sampled every half cell along its width.
   const walls = layoutShellWalls(shell);
   const sources: { cell: number; opening: number }[] = [];

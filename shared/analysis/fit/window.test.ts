@@ -9,7 +9,12 @@ import { roomShellSchema } from '../../schemas/room';
 // along it is x 3000, so the window spans x 1500–3000. Sill 900, head 2100.
 function blocked(pieces: PieceInput[]) {
   const shell = roomShellSchema.parse({
-    outline: [[0, 0], [4000, 0], [4000, 3000], [0, 3000]],
+    outline: [
+      [0, 0],
+      [4000, 0],
+      [4000, 3000],
+      [0, 3000],
+    ],
     openings: [{ id: 'w1', type: 'window', wall: 2, offset: 1000, width: 1500, height: 1200, sill: 900 }],
   });
   return findBlockedWindows(shell, placedBoxes(pieces.map((p) => pieceSchema.parse(p))));

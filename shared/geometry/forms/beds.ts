@@ -27,17 +27,40 @@ export function bedForm(box: FormBox, settings: PieceSettings): Part[] {
     roundedPart(-w / 2 + 20, w / 2 - 20, -d / 2 + head, d / 2 - foot - 10, mattressBottom, mattressTop, 40, { colour: LINEN }),
   );
   // The duvet's turned-down fold over the lower two thirds, in the main finish like a throw.
-  parts.push(roundedPart(-w / 2 + 10, w / 2 - 10, -d / 2 + head + (d - head) * 0.33, d / 2 - foot, mattressTop, Math.min(h, mattressTop + 25), 30, { role: 'front' }));
+  parts.push(
+    roundedPart(
+      -w / 2 + 10,
+      w / 2 - 10,
+      -d / 2 + head + (d - head) * 0.33,
+      d / 2 - foot,
+      mattressTop,
+      Math.min(h, mattressTop + 25),
+      30,
+      { role: 'front' },
+    ),
+  );
   const pillows = Math.max(1, Math.round((w - 100) / PILLOW_WIDTH_MM));
   const span = (w - 120) / pillows;
   const pillowTop = Math.min(h, mattressTop + 120);
   if (pillowTop > mattressTop + 20) {
     for (let i = 0; i < pillows; i++) {
       const x0 = -w / 2 + 60 + i * span + 15;
-      parts.push(roundedPart(x0, x0 + span - 30, -d / 2 + head + 40, -d / 2 + head + 40 + Math.min(450, d * 0.2), mattressTop, pillowTop, 60, { colour: PILLOW, role: 'back' }));
+      parts.push(
+        roundedPart(
+          x0,
+          x0 + span - 30,
+          -d / 2 + head + 40,
+          -d / 2 + head + 40 + Math.min(450, d * 0.2),
+          mattressTop,
+          pillowTop,
+          60,
+          { colour: PILLOW, role: 'back' },
+        ),
+      );
     }
   }
-  if (foot > 0) parts.push(roundedPart(-w / 2, w / 2, d / 2 - foot, d / 2, 0, Math.min(h, mattressTop + 100), Math.min(10, foot / 2)));
+  if (foot > 0)
+    parts.push(roundedPart(-w / 2, w / 2, d / 2 - foot, d / 2, 0, Math.min(h, mattressTop + 100), Math.min(10, foot / 2)));
   return parts;
 }
 
@@ -50,7 +73,9 @@ export function cotForm(box: FormBox): Part[] {
   const parts: Part[] = [
     ...fourLegs(-w / 2, w / 2, -d / 2, d / 2, h, post, 0, 1, { slot: 'main' }),
     boxPart(-w / 2 + post, w / 2 - post, -d / 2 + post, d / 2 - post, base - 30, base, { slot: 'main' }),
-    roundedPart(-w / 2 + post + 5, w / 2 - post - 5, -d / 2 + post + 5, d / 2 - post - 5, base, base + 100, 25, { colour: LINEN }),
+    roundedPart(-w / 2 + post + 5, w / 2 - post - 5, -d / 2 + post + 5, d / 2 - post - 5, base, base + 100, 25, {
+      colour: LINEN,
+    }),
   ];
   // Top and bottom rails round all four sides, slats between them on the long sides.
   for (const z of [base - 30 - rail, h - rail]) {
@@ -64,7 +89,8 @@ export function cotForm(box: FormBox): Part[] {
   for (let i = 1; i < slats; i++) {
     const x = -w / 2 + post + i * step;
     const t = Math.min(20, post / 2);
-    for (const y of [-d / 2 + post / 4, d / 2 - post / 4]) parts.push(panelPart(x - t / 2, x + t / 2, y - t / 2, y + t / 2, base - 30, h - rail, { slot: 'accent' }));
+    for (const y of [-d / 2 + post / 4, d / 2 - post / 4])
+      parts.push(panelPart(x - t / 2, x + t / 2, y - t / 2, y + t / 2, base - 30, h - rail, { slot: 'accent' }));
   }
   return parts;
 }

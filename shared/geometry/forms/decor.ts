@@ -68,7 +68,10 @@ function frame(w: number, h: number, y0: number, y1: number, bar: number): Part[
 export function mirrorForm(box: FormBox): Part[] {
   const { width: w, depth: d, height: h } = box;
   const bar = clamp(Math.min(w, h) * 0.05, 10, 60);
-  return [...frame(w, h, -d / 2, d / 2, bar), panelPart(-w / 2 + bar, w / 2 - bar, -d / 2 + d * 0.3, d / 2 - d * 0.1, bar, h - bar, { colour: GLASS, role: 'front' })];
+  return [
+    ...frame(w, h, -d / 2, d / 2, bar),
+    panelPart(-w / 2 + bar, w / 2 - bar, -d / 2 + d * 0.3, d / 2 - d * 0.1, bar, h - bar, { colour: GLASS, role: 'front' }),
+  ];
 }
 
 /** A picture: a frame, a pale mount and the picture itself in the main finish. */
@@ -79,7 +82,9 @@ export function pictureForm(box: FormBox): Part[] {
   return [
     ...frame(w, h, -d / 2, d / 2, bar),
     panelPart(-w / 2 + bar, w / 2 - bar, -d / 2, d / 2 - d * 0.5, bar, h - bar, { colour: MOUNT }),
-    panelPart(-w / 2 + bar + mount, w / 2 - bar - mount, d / 2 - d * 0.5, d / 2 - d * 0.2, bar + mount, h - bar - mount, { role: 'front' }),
+    panelPart(-w / 2 + bar + mount, w / 2 - bar - mount, d / 2 - d * 0.5, d / 2 - d * 0.2, bar + mount, h - bar - mount, {
+      role: 'front',
+    }),
   ];
 }
 
@@ -109,7 +114,10 @@ export function radiatorForm(box: FormBox): Part[] {
   const header = clamp(h * 0.06, 15, 50);
   const columns = clamp(Math.floor(w / 55), 2, 40);
   const step = w / columns;
-  const parts: Part[] = [boxPart(-w / 2, w / 2, -d / 2 + d * 0.25, d / 2 - d * 0.25, 0, header), boxPart(-w / 2, w / 2, -d / 2 + d * 0.25, d / 2 - d * 0.25, h - header, h)];
+  const parts: Part[] = [
+    boxPart(-w / 2, w / 2, -d / 2 + d * 0.25, d / 2 - d * 0.25, 0, header),
+    boxPart(-w / 2, w / 2, -d / 2 + d * 0.25, d / 2 - d * 0.25, h - header, h),
+  ];
   for (let i = 0; i < columns; i++) {
     const x0 = -w / 2 + i * step + step * 0.12;
     parts.push(panelPart(x0, x0 + step * 0.76, -d / 2, d / 2, header, h - header, { role: 'front' }));

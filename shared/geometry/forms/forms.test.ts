@@ -2,8 +2,17 @@ import { describe, expect, it } from 'vitest';
 import { CATALOGUE } from '../../catalogue/catalogue';
 import { KIND_SETTINGS, PIECE_KINDS, type PieceKind, type PieceSettings } from '../../schemas/piece-kind';
 import {
-  CHAIR_SEAT_DEPTH, CHAIR_SEAT_HEIGHT, DESK_HEIGHT, DINING_TABLE_HEIGHT, MATTRESS_TOP, SEAT_CUSHION_MAX_WIDTH, SHELF_SPACING, SOFA_SEAT_DEPTH,
-  SOFA_SEAT_HEIGHT, WORKTOP_HEIGHT, type RangedDefault,
+  CHAIR_SEAT_DEPTH,
+  CHAIR_SEAT_HEIGHT,
+  DESK_HEIGHT,
+  DINING_TABLE_HEIGHT,
+  MATTRESS_TOP,
+  SEAT_CUSHION_MAX_WIDTH,
+  SHELF_SPACING,
+  SOFA_SEAT_DEPTH,
+  SOFA_SEAT_HEIGHT,
+  WORKTOP_HEIGHT,
+  type RangedDefault,
 } from './ergonomics';
 import { HANGING_KINDS, formParts, type FormBox, type Part } from './index';
 import { formMeshes, formTriangles } from './mesh';
@@ -26,11 +35,18 @@ function random(seed: number) {
 
 /** Every catalogue size of the kind, and twelve random boxes from 0.4× to 2.5× of its first entry per side. */
 function boxesOf(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
-  const own = CATALOGUE.filter((c) => c.kind === kind).map((e) => ({ box: { width: e.width, depth: e.depth, height: e.height }, settings: e.settings ?? {} }));
+  const own = CATALOGUE.filter((c) => c.kind === kind).map((e) => ({
+    box: { width: e.width, depth: e.depth, height: e.height },
+    settings: e.settings ?? {},
+  }));
   const base = own[0].box;
   const next = random(PIECE_KINDS.indexOf(kind) + 1);
   const scaled = Array.from({ length: 12 }, () => ({
-    box: { width: base.width * (0.4 + next() * 2.1), depth: base.depth * (0.4 + next() * 2.1), height: base.height * (0.4 + next() * 2.1) },
+    box: {
+      width: base.width * (0.4 + next() * 2.1),
+      depth: base.depth * (0.4 + next() * 2.1),
+      height: base.height * (0.4 + next() * 2.1),
+    },
     settings: own[0].settings,
   }));
   return [...own, ...scaled];
@@ -39,8 +55,15 @@ function boxesOf(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
 /** Every setting value a kind takes, one at a time, on the kind's catalogue box. */
 function settingVariants(kind: PieceKind): PieceSettings[] {
   const values: Record<string, unknown[]> = {
-    arms: ['both', 'none'], base: ['legs', 'plinth'], hand: ['left', 'right'], top: ['rectangular', 'round'], fronts: ['doors', 'drawers'],
-    count: [1, 3, 5], chairs: [2, 4, 6, 8], headboardHeight: [600, 1200], footboard: [true, false],
+    arms: ['both', 'none'],
+    base: ['legs', 'plinth'],
+    hand: ['left', 'right'],
+    top: ['rectangular', 'round'],
+    fronts: ['doors', 'drawers'],
+    count: [1, 3, 5],
+    chairs: [2, 4, 6, 8],
+    headboardHeight: [600, 1200],
+    footboard: [true, false],
   };
   return KIND_SETTINGS[kind].flatMap((key) => values[key].map((v) => ({ [key]: v }) as PieceSettings));
 }
@@ -53,7 +76,14 @@ const footprint = (p: Part) => {
 function outside(parts: Part[], box: FormBox): Part[] {
   return parts.filter((p) => {
     const f = footprint(p);
-    return f.x0 < -box.width / 2 - TOL || f.x1 > box.width / 2 + TOL || f.y0 < -box.depth / 2 - TOL || f.y1 > box.depth / 2 + TOL || p.z < -TOL || p.z + p.h > box.height + TOL;
+    return (
+      f.x0 < -box.width / 2 - TOL ||
+      f.x1 > box.width / 2 + TOL ||
+      f.y0 < -box.depth / 2 - TOL ||
+      f.y1 > box.depth / 2 + TOL ||
+      p.z < -TOL ||
+      p.z + p.h > box.height + TOL
+    );
   });
 }
 
@@ -61,7 +91,14 @@ const touching = (a: Part, b: Part) => {
   const fa = footprint(a);
   const fb = footprint(b);
   const gap = 0.5;
-  return fa.x0 <= fb.x1 + gap && fb.x0 <= fa.x1 + gap && fa.y0 <= fb.y1 + gap && fb.y0 <= fa.y1 + gap && a.z <= b.z + b.h + gap && b.z <= a.z + a.h + gap;
+  return (
+    fa.x0 <= fb.x1 + gap &&
+    fb.x0 <= fa.x1 + gap &&
+    fa.y0 <= fb.y1 + gap &&
+    fb.y0 <= fa.y1 + gap &&
+    a.z <= b.z + b.h + gap &&
+    b.z <= a.z + a.h + gap
+  );
 };
 
 /** Parts not held: not on the floor (or, hanging, from the top) and touching nothing that is, however indirectly. */
@@ -86,8 +123,26 @@ function floating(parts: Part[], box: FormBox, hanging: boolean): Part[] {
 
 /** Kinds with a front (seat, doors, drawers, the open side of a bed) and, for some, a back. */
 const FRONTED: PieceKind[] = [
-  'sofa', 'corner-sofa', 'armchair', 'dining-chair', 'bedside-table', 'desk', 'bed', 'wardrobe', 'chest-of-drawers', 'sideboard', 'media-unit',
-  'wall-cabinet', 'kitchen-base-unit', 'kitchen-wall-unit', 'oven-housing', 'dishwasher', 'mirror', 'picture', 'radiator', 'cot',
+  'sofa',
+  'corner-sofa',
+  'armchair',
+  'dining-chair',
+  'bedside-table',
+  'desk',
+  'bed',
+  'wardrobe',
+  'chest-of-drawers',
+  'sideboard',
+  'media-unit',
+  'wall-cabinet',
+  'kitchen-base-unit',
+  'kitchen-wall-unit',
+  'oven-housing',
+  'dishwasher',
+  'mirror',
+  'picture',
+  'radiator',
+  'cot',
 ];
 const mean = (values: number[]) => values.reduce((a, b) => a + b, 0) / values.length;
 /** Rugs and flat wall pieces stay under this many triangles; every other piece under 2,000. */
@@ -193,7 +248,8 @@ describe('sofa cushions', () => {
     expect(seats(2100).length).toBe(3);
     expect(seats(3000).length).toBe(4);
     expect(formParts('armchair', {}, { width: 850, depth: 850, height: 900 }).filter((p) => p.role === 'front').length).toBe(1);
-    for (const width of [1200, 1700, 2100, 2600, 3000, 4000]) for (const c of seats(width)) expect(c.w).toBeLessThanOrEqual(SEAT_CUSHION_MAX_WIDTH.valueMm);
+    for (const width of [1200, 1700, 2100, 2600, 3000, 4000])
+      for (const c of seats(width)) expect(c.w).toBeLessThanOrEqual(SEAT_CUSHION_MAX_WIDTH.valueMm);
     expect(seatCushionCount(1500)).toBe(2);
     expect(seatCushionCount(1501)).toBe(3);
   });
@@ -201,9 +257,16 @@ describe('sofa cushions', () => {
 
 describe('heights and depths the forms set themselves', () => {
   const ranged: [string, RangedDefault][] = [
-    ['sofa seat height', SOFA_SEAT_HEIGHT], ['sofa seat depth', SOFA_SEAT_DEPTH], ['chair seat height', CHAIR_SEAT_HEIGHT], ['chair seat depth', CHAIR_SEAT_DEPTH],
-    ['dining table height', DINING_TABLE_HEIGHT], ['desk height', DESK_HEIGHT], ['worktop height', WORKTOP_HEIGHT], ['mattress top', MATTRESS_TOP],
-    ['shelf spacing', SHELF_SPACING], ['seat cushion width', SEAT_CUSHION_MAX_WIDTH],
+    ['sofa seat height', SOFA_SEAT_HEIGHT],
+    ['sofa seat depth', SOFA_SEAT_DEPTH],
+    ['chair seat height', CHAIR_SEAT_HEIGHT],
+    ['chair seat depth', CHAIR_SEAT_DEPTH],
+    ['dining table height', DINING_TABLE_HEIGHT],
+    ['desk height', DESK_HEIGHT],
+    ['worktop height', WORKTOP_HEIGHT],
+    ['mattress top', MATTRESS_TOP],
+    ['shelf spacing', SHELF_SPACING],
+    ['seat cushion width', SEAT_CUSHION_MAX_WIDTH],
   ];
   it.each(ranged)('the %s default lies within its published range', (_, d) => {
     expect(d.valueMm).toBeGreaterThanOrEqual(d.minMm);
@@ -226,7 +289,9 @@ describe('heights and depths the forms set themselves', () => {
     const bed = formParts('bed', {}, catalogueBox('bed').box);
     const mattress = bed.filter((p) => p.slot === 'own').sort((a, b) => b.w * b.d - a.w * a.d)[0];
     expect(mattress.z + mattress.h).toBeCloseTo(MATTRESS_TOP.valueMm, 6);
-    const shelves = formParts('bookcase', {}, catalogueBox('bookcase').box).filter((p) => p.role === 'top').map((p) => p.z);
+    const shelves = formParts('bookcase', {}, catalogueBox('bookcase').box)
+      .filter((p) => p.role === 'top')
+      .map((p) => p.z);
     for (let i = 1; i < shelves.length; i++) {
       expect(shelves[i] - shelves[i - 1]).toBeGreaterThanOrEqual(SHELF_SPACING.minMm);
       expect(shelves[i] - shelves[i - 1]).toBeLessThanOrEqual(SHELF_SPACING.maxMm);

@@ -2,11 +2,30 @@
 // plan. Pure and deterministic, so the editor, the client's views and the tests all see the same.
 import type { PieceKind, PieceSettings } from '../../schemas/piece-kind';
 import { bedForm, cotForm } from './beds';
-import { floorLampForm, mirrorForm, pendantLightForm, pictureForm, plainBlockForm, plantForm, radiatorForm, rugForm, tableLampForm } from './decor';
+import {
+  floorLampForm,
+  mirrorForm,
+  pendantLightForm,
+  pictureForm,
+  plainBlockForm,
+  plantForm,
+  radiatorForm,
+  rugForm,
+  tableLampForm,
+} from './decor';
 import { dishwasherForm, kitchenBaseUnitForm, kitchenWallUnitForm, ovenHousingForm } from './kitchen';
 import type { FormBox, FormBuilder, Part } from './parts';
 import { armchairForm, benchForm, cornerSofaForm, diningChairForm, ottomanForm, sofaForm, stoolForm } from './seating';
-import { bookcaseForm, chestOfDrawersForm, mediaUnitForm, openShelvingForm, sideboardForm, wallCabinetForm, wallShelfForm, wardrobeForm } from './storage';
+import {
+  bookcaseForm,
+  chestOfDrawersForm,
+  mediaUnitForm,
+  openShelvingForm,
+  sideboardForm,
+  wallCabinetForm,
+  wallShelfForm,
+  wardrobeForm,
+} from './storage';
 import { bedsideTableForm, coffeeTableForm, deskForm, diningSetForm, diningTableForm, sideTableForm } from './tables';
 
 export type { FormBox, Part, MaterialSlot, PartRole, PartShape } from './parts';

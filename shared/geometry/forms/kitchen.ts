@@ -43,12 +43,14 @@ export function kitchenBaseUnitForm(box: FormBox, settings: PieceSettings): Part
   const parts = [...worktopAndPlinth(box, f), boxPart(-w / 2, w / 2, -d / 2, f.back, f.kick, f.worktopTop - WORKTOP_MM)];
   if (settings.fronts === 'drawers') {
     const step = w / count;
-    for (let i = 0; i < count; i++) parts.push(...drawerFronts(-w / 2 + i * step, -w / 2 + (i + 1) * step, d / 2 - 25, f.kick, f.frontTop, 3));
+    for (let i = 0; i < count; i++)
+      parts.push(...drawerFronts(-w / 2 + i * step, -w / 2 + (i + 1) * step, d / 2 - 25, f.kick, f.frontTop, 3));
   } else {
     // A drawer over the doors, as most base units have.
     const drawerBottom = f.frontTop - Math.min(150, (f.frontTop - f.kick) * 0.2);
     const step = w / count;
-    for (let i = 0; i < count; i++) parts.push(...drawerFronts(-w / 2 + i * step, -w / 2 + (i + 1) * step, d / 2 - 25, drawerBottom, f.frontTop, 1));
+    for (let i = 0; i < count; i++)
+      parts.push(...drawerFronts(-w / 2 + i * step, -w / 2 + (i + 1) * step, d / 2 - 25, drawerBottom, f.frontTop, 1));
     parts.push(...doorFronts(-w / 2, w / 2, d / 2 - 25, f.kick, drawerBottom, count, 'top'));
   }
   return parts;
@@ -58,7 +60,10 @@ export function kitchenBaseUnitForm(box: FormBox, settings: PieceSettings): Part
 export function kitchenWallUnitForm(box: FormBox, settings: PieceSettings): Part[] {
   const { width: w, depth: d, height: h } = box;
   const doors = settings.count ?? Math.max(1, Math.round(w / 500));
-  return [boxPart(-w / 2, w / 2, -d / 2, d / 2 - FRONTS_DEPTH_MM, 0, h), ...doorFronts(-w / 2, w / 2, d / 2, 0, h, doors, 'bottom')];
+  return [
+    boxPart(-w / 2, w / 2, -d / 2, d / 2 - FRONTS_DEPTH_MM, 0, h),
+    ...doorFronts(-w / 2, w / 2, d / 2, 0, h, doors, 'bottom'),
+  ];
 }
 
 /** A tall housing: plinth, a drawer, the oven's dark glass door with a bar handle at eye level, a cupboard above. */
@@ -73,7 +78,10 @@ export function ovenHousingForm(box: FormBox): Part[] {
     boxPart(-w / 2, w / 2, -d / 2, back - 50, 0, kick, { slot: 'accent' }),
     boxPart(-w / 2, w / 2, -d / 2, back, kick, h),
     ...drawerFronts(-w / 2, w / 2, d / 2, kick, ovenBottom, 2),
-    panelPart(-w / 2 + 4, w / 2 - 4, face - FRONT_THICKNESS_MM, face, ovenBottom + 2, ovenTop - 2, { colour: DARK_GLASS, role: 'front' }),
+    panelPart(-w / 2 + 4, w / 2 - 4, face - FRONT_THICKNESS_MM, face, ovenBottom + 2, ovenTop - 2, {
+      colour: DARK_GLASS,
+      role: 'front',
+    }),
     handlePart(0, d / 2, ovenTop - 50, w * 0.7, false),
     ...doorFronts(-w / 2, w / 2, d / 2, ovenTop, h, 1, 'bottom'),
   ];
@@ -88,8 +96,14 @@ export function dishwasherForm(box: FormBox): Part[] {
   return [
     ...worktopAndPlinth(box, f),
     boxPart(-w / 2, w / 2, -d / 2, f.back - 25, f.kick, f.worktopTop - WORKTOP_MM, { colour: '#c9cbcc' }),
-    panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.kick + 2, f.frontTop - strip, { colour: STEEL, role: 'front' }),
-    panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.frontTop - strip, f.frontTop, { colour: DARK_GLASS, role: 'front' }),
+    panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.kick + 2, f.frontTop - strip, {
+      colour: STEEL,
+      role: 'front',
+    }),
+    panelPart(-w / 2 + 2, w / 2 - 2, face - FRONT_THICKNESS_MM, face, f.frontTop - strip, f.frontTop, {
+      colour: DARK_GLASS,
+      role: 'front',
+    }),
     handlePart(0, d / 2 - 25, f.frontTop - strip - 40, w * 0.8, false),
   ];
 }

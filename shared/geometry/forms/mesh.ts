@@ -77,12 +77,18 @@ class Writer {
   /** Triangles of a fan over the `n` vertices written from `base`, facing the normal f. */
   fan(base: number, n: number, f: V3): void {
     const P = this.positions;
-    const ax = P[base * 3], ay = P[base * 3 + 1], az = P[base * 3 + 2];
+    const ax = P[base * 3],
+      ay = P[base * 3 + 1],
+      az = P[base * 3 + 2];
     for (let k = 1; k + 1 < n; k++) {
       const b = base + k;
       const c = b + 1;
-      const e1x = P[b * 3] - ax, e1y = P[b * 3 + 1] - ay, e1z = P[b * 3 + 2] - az;
-      const e2x = P[c * 3] - ax, e2y = P[c * 3 + 1] - ay, e2z = P[c * 3 + 2] - az;
+      const e1x = P[b * 3] - ax,
+        e1y = P[b * 3 + 1] - ay,
+        e1z = P[b * 3 + 2] - az;
+      const e2x = P[c * 3] - ax,
+        e2y = P[c * 3 + 1] - ay,
+        e2z = P[c * 3 + 2] - az;
       const facing = (e1y * e2z - e1z * e2y) * f[0] + (e1z * e2x - e1x * e2z) * f[1] + (e1x * e2y - e1y * e2x) * f[2];
       if (facing >= 0) this.indices.push(base, c, b);
       else this.indices.push(base, b, c);
@@ -108,17 +114,81 @@ function frameOf(at: Placement): Frame {
 }
 
 function writeBox(w: Writer, part: Part): void {
-  const x0 = part.x - part.w / 2, x1 = part.x + part.w / 2;
-  const y0 = part.y - part.d / 2, y1 = part.y + part.d / 2;
-  const z0 = part.z, z1 = part.z + part.h;
+  const x0 = part.x - part.w / 2,
+    x1 = part.x + part.w / 2;
+  const y0 = part.y - part.d / 2,
+    y1 = part.y + part.d / 2;
+  const z0 = part.z,
+    z1 = part.z + part.h;
   const flat = (n: V3): V3[] => [n, n, n, n];
-  const sideUv = (u0: number, u1: number): [number, number][] => [[u0 * MM, z0 * MM], [u1 * MM, z0 * MM], [u1 * MM, z1 * MM], [u0 * MM, z1 * MM]];
-  w.quad([[x0, y1, z0], [x1, y1, z0], [x1, y1, z1], [x0, y1, z1]], flat([0, 1, 0]), sideUv(x0, x1), [0, 1, 0]);
-  w.quad([[x1, y0, z0], [x0, y0, z0], [x0, y0, z1], [x1, y0, z1]], flat([0, -1, 0]), sideUv(-x1, -x0), [0, -1, 0]);
-  w.quad([[x1, y1, z0], [x1, y0, z0], [x1, y0, z1], [x1, y1, z1]], flat([1, 0, 0]), sideUv(-y1, -y0), [1, 0, 0]);
-  w.quad([[x0, y0, z0], [x0, y1, z0], [x0, y1, z1], [x0, y0, z1]], flat([-1, 0, 0]), sideUv(y0, y1), [-1, 0, 0]);
-  w.polygon([[x0, y0, z1], [x1, y0, z1], [x1, y1, z1], [x0, y1, z1]], [0, 0, 1]);
-  w.polygon([[x0, y0, z0], [x1, y0, z0], [x1, y1, z0], [x0, y1, z0]], [0, 0, -1]);
+  const sideUv = (u0: number, u1: number): [number, number][] => [
+    [u0 * MM, z0 * MM],
+    [u1 * MM, z0 * MM],
+    [u1 * MM, z1 * MM],
+    [u0 * MM, z1 * MM],
+  ];
+  w.quad(
+    [
+      [x0, y1, z0],
+      [x1, y1, z0],
+      [x1, y1, z1],
+      [x0, y1, z1],
+    ],
+    flat([0, 1, 0]),
+    sideUv(x0, x1),
+    [0, 1, 0],
+  );
+  w.quad(
+    [
+      [x1, y0, z0],
+      [x0, y0, z0],
+      [x0, y0, z1],
+      [x1, y0, z1],
+    ],
+    flat([0, -1, 0]),
+    sideUv(-x1, -x0),
+    [0, -1, 0],
+  );
+  w.quad(
+    [
+      [x1, y1, z0],
+      [x1, y0, z0],
+      [x1, y0, z1],
+      [x1, y1, z1],
+    ],
+    flat([1, 0, 0]),
+    sideUv(-y1, -y0),
+    [1, 0, 0],
+  );
+  w.quad(
+    [
+      [x0, y0, z0],
+      [x0, y1, z0],
+      [x0, y1, z1],
+      [x0, y0, z1],
+    ],
+    flat([-1, 0, 0]),
+    sideUv(y0, y1),
+    [-1, 0, 0],
+  );
+  w.polygon(
+    [
+      [x0, y0, z1],
+      [x1, y0, z1],
+      [x1, y1, z1],
+      [x0, y1, z1],
+    ],
+    [0, 0, 1],
+  );
+  w.polygon(
+    [
+      [x0, y0, z0],
+      [x1, y0, z0],
+      [x1, y1, z0],
+      [x0, y1, z0],
+    ],
+    [0, 0, -1],
+  );
 }
 
 /** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
@@ -148,7 +218,15 @@ export function roundedOutline(part: Part): { points: [number, number][]; normal
   return { points, normals };
 }
 
-function writeExtrusion(w: Writer, points: readonly [number, number][], normals: readonly [number, number][], z0: number, z1: number, bottomScale = 1, centre: [number, number] = [0, 0]): void {
+function writeExtrusion(
+  w: Writer,
+  points: readonly [number, number][],
+  normals: readonly [number, number][],
+  z0: number,
+  z1: number,
+  bottomScale = 1,
+  centre: [number, number] = [0, 0],
+): void {
   const n = points.length;
   const bx = (i: number) => centre[0] + (points[i][0] - centre[0]) * bottomScale;
   const by = (i: number) => centre[1] + (points[i][1] - centre[1]) * bottomScale;
@@ -243,7 +321,12 @@ function placeMesh(mesh: MeshData, f: Frame): MeshData {
 /** A piece's form in its own frame placed in the room: scene metres, y up. */
 export function placeForm(local: FormMeshes, at: Placement): FormMeshes {
   const frame = frameOf(at);
-  return { main: placeMesh(local.main, frame), accent: placeMesh(local.accent, frame), own: placeMesh(local.own, frame), ownColours: local.ownColours };
+  return {
+    main: placeMesh(local.main, frame),
+    accent: placeMesh(local.accent, frame),
+    own: placeMesh(local.own, frame),
+    ownColours: local.ownColours,
+  };
 }
 
 /** A piece's parts placed in the room, scene metres, one mesh per material slot. */

@@ -55,7 +55,17 @@ type PartOptions = { slot?: MaterialSlot; role?: PartRole; colour?: string };
 
 /** A box from its x, y, z extents (piece frame mm). */
 export function boxPart(x0: number, x1: number, y0: number, y1: number, z0: number, z1: number, o: PartOptions = {}): Part {
-  const part: Part = { shape: 'box', x: (x0 + x1) / 2, y: (y0 + y1) / 2, z: z0, w: x1 - x0, d: y1 - y0, h: z1 - z0, slot: o.slot ?? 'main', role: o.role ?? 'body' };
+  const part: Part = {
+    shape: 'box',
+    x: (x0 + x1) / 2,
+    y: (y0 + y1) / 2,
+    z: z0,
+    w: x1 - x0,
+    d: y1 - y0,
+    h: z1 - z0,
+    slot: o.slot ?? 'main',
+    role: o.role ?? 'body',
+  };
   if (o.colour) {
     part.slot = 'own';
     part.colour = o.colour;
@@ -69,7 +79,16 @@ export function panelPart(x0: number, x1: number, y0: number, y1: number, z0: nu
 }
 
 /** A box with rounded plan corners, at most half its shorter side. */
-export function roundedPart(x0: number, x1: number, y0: number, y1: number, z0: number, z1: number, radius: number, o: PartOptions = {}): Part {
+export function roundedPart(
+  x0: number,
+  x1: number,
+  y0: number,
+  y1: number,
+  z0: number,
+  z1: number,
+  radius: number,
+  o: PartOptions = {},
+): Part {
   const r = Math.max(0, Math.min(radius, (x1 - x0) / 2, (y1 - y0) / 2));
   return { ...boxPart(x0, x1, y0, y1, z0, z1, o), shape: 'rounded', radius: r };
 }
@@ -81,7 +100,18 @@ export function discPart(x: number, y: number, diameter: number, z0: number, z1:
 
 /** An upright round post at (x, y), `diameter` at its top, from z0 to z1; `taper` is its foot's share of that. */
 export function legPart(x: number, y: number, diameter: number, z0: number, z1: number, taper = 1, o: PartOptions = {}): Part {
-  const part: Part = { shape: 'leg', x, y, z: z0, w: diameter, d: diameter, h: z1 - z0, slot: o.slot ?? 'accent', role: o.role ?? 'leg', taper };
+  const part: Part = {
+    shape: 'leg',
+    x,
+    y,
+    z: z0,
+    w: diameter,
+    d: diameter,
+    h: z1 - z0,
+    slot: o.slot ?? 'accent',
+    role: o.role ?? 'leg',
+    taper,
+  };
   if (o.colour) {
     part.slot = 'own';
     part.colour = o.colour;
@@ -90,7 +120,17 @@ export function legPart(x: number, y: number, diameter: number, z0: number, z1: 
 }
 
 /** Four legs inset `inset` from the corners of the rectangle x0..x1, y0..y1, from the floor up to `top`. */
-export function fourLegs(x0: number, x1: number, y0: number, y1: number, top: number, diameter: number, inset: number, taper = 1, o: PartOptions = {}): Part[] {
+export function fourLegs(
+  x0: number,
+  x1: number,
+  y0: number,
+  y1: number,
+  top: number,
+  diameter: number,
+  inset: number,
+  taper = 1,
+  o: PartOptions = {},
+): Part[] {
   const r = diameter / 2 + inset;
   return [
     legPart(x0 + r, y0 + r, diameter, 0, top, taper, o),

@@ -1,6 +1,13 @@
 // Seating: sofas, corner sofas, armchairs, dining chairs, stools, benches and ottomans.
 import type { PieceSettings } from '../../schemas/piece-kind';
-import { CHAIR_SEAT_DEPTH, CHAIR_SEAT_HEIGHT, SEAT_CUSHION_MAX_WIDTH, SOFA_SEAT_DEPTH, SOFA_SEAT_HEIGHT, fitDefault } from './ergonomics';
+import {
+  CHAIR_SEAT_DEPTH,
+  CHAIR_SEAT_HEIGHT,
+  SEAT_CUSHION_MAX_WIDTH,
+  SOFA_SEAT_DEPTH,
+  SOFA_SEAT_HEIGHT,
+  fitDefault,
+} from './ergonomics';
 import { boxPart, clamp, discPart, fourLegs, mirrorParts, panelPart, roundedPart, type FormBox, type Part } from './parts';
 
 /** Gap between neighbouring cushions, mm (drawn so each cushion reads). */
@@ -24,7 +31,16 @@ function cushionsAcross(x0: number, x1: number, y0: number, y1: number, z0: numb
   const n = seatCushionCount(x1 - x0);
   const step = (x1 - x0) / n;
   return Array.from({ length: n }, (_, i) =>
-    roundedPart(x0 + i * step + (i > 0 ? CUSHION_GAP_MM / 2 : 0), x0 + (i + 1) * step - (i < n - 1 ? CUSHION_GAP_MM / 2 : 0), y0, y1, z0, z1, SOFT_RADIUS_MM, { role }),
+    roundedPart(
+      x0 + i * step + (i > 0 ? CUSHION_GAP_MM / 2 : 0),
+      x0 + (i + 1) * step - (i < n - 1 ? CUSHION_GAP_MM / 2 : 0),
+      y0,
+      y1,
+      z0,
+      z1,
+      SOFT_RADIUS_MM,
+      { role },
+    ),
   );
 }
 
@@ -65,7 +81,18 @@ export function sofaForm(box: FormBox, settings: PieceSettings): Part[] {
     roundedPart(-w / 2, w / 2, back, back + f.backDepth, f.cushionBottom, h, SOFT_RADIUS_MM / 2, { role: 'back' }),
     ...cushionsAcross(x0, x1, back + f.backDepth + f.backCushion, d / 2, f.cushionBottom, f.seatTop, 'front'),
   ];
-  if (f.backCushion > 0) parts.push(...cushionsAcross(x0, x1, back + f.backDepth, back + f.backDepth + f.backCushion, f.cushionBottom, h - clamp(h * 0.05, 0, 40), 'back'));
+  if (f.backCushion > 0)
+    parts.push(
+      ...cushionsAcross(
+        x0,
+        x1,
+        back + f.backDepth,
+        back + f.backDepth + f.backCushion,
+        f.cushionBottom,
+        h - clamp(h * 0.05, 0, 40),
+        'back',
+      ),
+    );
   if (arms) {
     parts.push(roundedPart(-w / 2, x0, back + f.backDepth, d / 2, f.cushionBottom, f.armTop, SOFT_RADIUS_MM));
     parts.push(roundedPart(x1, w / 2, back + f.backDepth, d / 2, f.cushionBottom, f.armTop, SOFT_RADIUS_MM));
@@ -92,13 +119,27 @@ export function cornerSofaForm(box: FormBox, settings: PieceSettings): Part[] {
     boxPart(side - run, side, seatFront, d / 2, f.legTop, f.cushionBottom),
     roundedPart(-w / 2, side, back, back + f.backDepth, f.cushionBottom, h, SOFT_RADIUS_MM / 2, { role: 'back' }),
     roundedPart(side - f.backDepth, side, back + f.backDepth, d / 2, f.cushionBottom, h, SOFT_RADIUS_MM / 2, { role: 'back' }),
-    ...cushionsAcross(-w / 2 + f.armWidth, side - f.backDepth, back + f.backDepth, seatFront, f.cushionBottom, f.seatTop, 'front'),
+    ...cushionsAcross(
+      -w / 2 + f.armWidth,
+      side - f.backDepth,
+      back + f.backDepth,
+      seatFront,
+      f.cushionBottom,
+      f.seatTop,
+      'front',
+    ),
     // The return's seat runs front to back: its cushions are laid across it the other way.
     ...turnedCushions(side - run, side - f.backDepth, seatFront, d / 2 - f.armWidth, f.cushionBottom, f.seatTop),
   ];
   if (arms) {
-    parts.push(roundedPart(-w / 2, -w / 2 + f.armWidth, back + f.backDepth, seatFront, f.cushionBottom, f.armTop, SOFT_RADIUS_MM));
-    parts.push(roundedPart(side - run, side - f.backDepth, d / 2 - f.armWidth, d / 2, f.cushionBottom, f.armTop, SOFT_RADIUS_MM, { role: 'front' }));
+    parts.push(
+      roundedPart(-w / 2, -w / 2 + f.armWidth, back + f.backDepth, seatFront, f.cushionBottom, f.armTop, SOFT_RADIUS_MM),
+    );
+    parts.push(
+      roundedPart(side - run, side - f.backDepth, d / 2 - f.armWidth, d / 2, f.cushionBottom, f.armTop, SOFT_RADIUS_MM, {
+        role: 'front',
+      }),
+    );
   }
   return settings.hand === 'left' ? mirrorParts(parts) : parts;
 }
@@ -108,7 +149,16 @@ function turnedCushions(x0: number, x1: number, y0: number, y1: number, z0: numb
   const n = seatCushionCount(y1 - y0);
   const step = (y1 - y0) / n;
   return Array.from({ length: n }, (_, i) =>
-    roundedPart(x0, x1, y0 + i * step + (i > 0 ? CUSHION_GAP_MM / 2 : 0), y0 + (i + 1) * step - (i < n - 1 ? CUSHION_GAP_MM / 2 : 0), z0, z1, SOFT_RADIUS_MM, { role: 'front' }),
+    roundedPart(
+      x0,
+      x1,
+      y0 + i * step + (i > 0 ? CUSHION_GAP_MM / 2 : 0),
+      y0 + (i + 1) * step - (i < n - 1 ? CUSHION_GAP_MM / 2 : 0),
+      z0,
+      z1,
+      SOFT_RADIUS_MM,
+      { role: 'front' },
+    ),
   );
 }
 
@@ -140,9 +190,10 @@ export function stoolForm(box: FormBox, settings: PieceSettings): Part[] {
   const size = Math.min(w, d);
   const leg = clamp(size * 0.08, 14, 35);
   const inset = size * 0.12;
-  const top = settings.top === 'rectangular'
-    ? roundedPart(-w / 2, w / 2, -d / 2, d / 2, h - seat, h, 20, { role: 'top' })
-    : discPart(0, 0, size, h - seat, h, { role: 'top' });
+  const top =
+    settings.top === 'rectangular'
+      ? roundedPart(-w / 2, w / 2, -d / 2, d / 2, h - seat, h, 20, { role: 'top' })
+      : discPart(0, 0, size, h - seat, h, { role: 'top' });
   const legs = fourLegs(-size / 2 + inset, size / 2 - inset, -size / 2 + inset, size / 2 - inset, h - seat, leg, 0, 0.8);
   // A footrest rail on each side, joining the legs a third of the way up.
   const c = size / 2 - inset - leg / 2;
@@ -182,10 +233,27 @@ export function ottomanForm(box: FormBox, settings: PieceSettings): Part[] {
   const cushion = clamp(h * 0.18, 20, 90);
   const round = settings.top === 'round';
   const size = Math.min(w, d);
-  const body = round ? discPart(0, 0, size, feet, h - cushion) : roundedPart(-w / 2, w / 2, -d / 2, d / 2, feet, h - cushion, SOFT_RADIUS_MM);
-  const top = round ? discPart(0, 0, size, h - cushion, h, { role: 'top' }) : roundedPart(-w / 2, w / 2, -d / 2, d / 2, h - cushion, h, SOFT_RADIUS_MM * 1.5, { role: 'top' });
+  const body = round
+    ? discPart(0, 0, size, feet, h - cushion)
+    : roundedPart(-w / 2, w / 2, -d / 2, d / 2, feet, h - cushion, SOFT_RADIUS_MM);
+  const top = round
+    ? discPart(0, 0, size, h - cushion, h, { role: 'top' })
+    : roundedPart(-w / 2, w / 2, -d / 2, d / 2, h - cushion, h, SOFT_RADIUS_MM * 1.5, { role: 'top' });
   const footInset = round ? size * 0.2 : 40;
   const fx = round ? size / 2 : w / 2;
   const fy = round ? size / 2 : d / 2;
-  return [...fourLegs(-fx + footInset / 2, fx - footInset / 2, -fy + footInset / 2, fy - footInset / 2, feet, clamp(size * 0.06, 25, 50), 0, 0.8), body, top];
+  return [
+    ...fourLegs(
+      -fx + footInset / 2,
+      fx - footInset / 2,
+      -fy + footInset / 2,
+      fy - footInset / 2,
+      feet,
+      clamp(size * 0.06, 25, 50),
+      0,
+      0.8,
+    ),
+    body,
+    top,
+  ];
 }

@@ -65,14 +65,24 @@ function lowCabinet(box: FormBox, settings: PieceSettings, openMiddle: boolean):
     const side = Math.floor(count / 2);
     parts.push(...fronted(-w / 2, x0, d / 2, z0, z1, side, fronts));
     parts.push(...fronted(x1, w / 2, d / 2, z0, z1, count - side, fronts));
-    parts.push(panelPart(x0, x1, back - 40, back, (z0 + z1) / 2 - BOARD_MM / 2, (z0 + z1) / 2 + BOARD_MM / 2, { slot: 'accent' }));
+    parts.push(
+      panelPart(x0, x1, back - 40, back, (z0 + z1) / 2 - BOARD_MM / 2, (z0 + z1) / 2 + BOARD_MM / 2, { slot: 'accent' }),
+    );
     return parts;
   }
   parts.push(...fronted(-w / 2, w / 2, d / 2, z0, z1, count, fronts));
   return parts;
 }
 
-function fronted(x0: number, x1: number, front: number, z0: number, z1: number, count: number, fronts: 'doors' | 'drawers'): Part[] {
+function fronted(
+  x0: number,
+  x1: number,
+  front: number,
+  z0: number,
+  z1: number,
+  count: number,
+  fronts: 'doors' | 'drawers',
+): Part[] {
   if (count <= 0) return [];
   if (fronts === 'doors') return doorFronts(x0, x1, front, z0, z1, count);
   // Drawers side by side in columns, two high.
@@ -102,10 +112,14 @@ function books(x0: number, x1: number, y0: number, y1: number, z: number, room: 
   const step = (x1 - x0) / runs;
   for (let i = 0; i < runs; i++) {
     if ((seed + i) % 4 === 3) continue;
-    const tall = room * (0.55 + (((seed * 7 + i * 3) % 5) * 0.08));
+    const tall = room * (0.55 + ((seed * 7 + i * 3) % 5) * 0.08);
     const a = x0 + i * step + step * 0.05;
     const b = a + step * (0.5 + ((seed + i) % 3) * 0.15);
-    parts.push(boxPart(a, Math.min(b, x1), y0, y1, z, z + Math.min(tall, room - 5), { colour: BOOK_COLOURS[(seed + i * 2) % BOOK_COLOURS.length] }));
+    parts.push(
+      boxPart(a, Math.min(b, x1), y0, y1, z, z + Math.min(tall, room - 5), {
+        colour: BOOK_COLOURS[(seed + i * 2) % BOOK_COLOURS.length],
+      }),
+    );
   }
   return parts;
 }
@@ -140,7 +154,8 @@ export function bookcaseForm(box: FormBox, settings: PieceSettings): Part[] {
   levels.forEach((z, i) => {
     parts.push(panelPart(-w / 2 + t, w / 2 - t, -d / 2 + back, d / 2, z, z + board, { role: 'top' }));
     const next = levels[i + 1];
-    if (next !== undefined && next - z - board > 80) parts.push(...books(-w / 2 + t + 10, w / 2 - t - 10, -d / 2 + back, d / 2 - d * 0.15, z + board, next - z - board, i));
+    if (next !== undefined && next - z - board > 80)
+      parts.push(...books(-w / 2 + t + 10, w / 2 - t - 10, -d / 2 + back, d / 2 - d * 0.15, z + board, next - z - board, i));
   });
   return parts;
 }
@@ -151,7 +166,10 @@ export function wallShelfForm(box: FormBox): Part[] {
   const board = Math.min(30, h);
   const parts: Part[] = [panelPart(-w / 2, w / 2, -d / 2, d / 2, 0, board, { role: 'top' })];
   if (h > board + 60) parts.push(...books(-w / 2 + 20, w / 2 - 20, -d / 2, d / 2 - d * 0.2, board, h - board, 1));
-  else if (h > board + 5) parts.push(panelPart(-w / 2 + 20, w / 2 - 20, -d / 2, -d / 2 + Math.min(15, d / 4), board, h, { slot: 'accent', role: 'back' }));
+  else if (h > board + 5)
+    parts.push(
+      panelPart(-w / 2 + 20, w / 2 - 20, -d / 2, -d / 2 + Math.min(15, d / 4), board, h, { slot: 'accent', role: 'back' }),
+    );
   return parts;
 }
 
@@ -159,5 +177,8 @@ export function wallShelfForm(box: FormBox): Part[] {
 export function wallCabinetForm(box: FormBox, settings: PieceSettings): Part[] {
   const { width: w, depth: d, height: h } = box;
   const doors = settings.count ?? Math.max(1, Math.round(w / 450));
-  return [boxPart(-w / 2, w / 2, -d / 2, d / 2 - FRONTS_DEPTH_MM, 0, h), ...doorFronts(-w / 2, w / 2, d / 2, 0, h, doors, 'bottom')];
+  return [
+    boxPart(-w / 2, w / 2, -d / 2, d / 2 - FRONTS_DEPTH_MM, 0, h),
+    ...doorFronts(-w / 2, w / 2, d / 2, 0, h, doors, 'bottom'),
+  ];
 }

@@ -2,13 +2,29 @@
 // and bedside tables, and desks.
 import type { PieceSettings } from '../../schemas/piece-kind';
 import { DINING_TABLE_HEIGHT, fitDefault } from './ergonomics';
-import { HANDLE_PROUD_MM, boxPart, clamp, discPart, fourLegs, handlePart, legPart, moveParts, panelPart, roundedPart, turnParts, type FormBox, type Part } from './parts';
+import {
+  HANDLE_PROUD_MM,
+  boxPart,
+  clamp,
+  discPart,
+  fourLegs,
+  handlePart,
+  legPart,
+  moveParts,
+  panelPart,
+  roundedPart,
+  turnParts,
+  type FormBox,
+  type Part,
+} from './parts';
 import { diningChairForm } from './seating';
 
 const TOP_RADIUS_MM = 12;
 
 function tableTop(w: number, d: number, z0: number, z1: number, round: boolean): Part {
-  return round ? discPart(0, 0, Math.min(w, d), z0, z1, { role: 'top' }) : roundedPart(-w / 2, w / 2, -d / 2, d / 2, z0, z1, TOP_RADIUS_MM, { role: 'top' });
+  return round
+    ? discPart(0, 0, Math.min(w, d), z0, z1, { role: 'top' })
+    : roundedPart(-w / 2, w / 2, -d / 2, d / 2, z0, z1, TOP_RADIUS_MM, { role: 'top' });
 }
 
 /** A table `top` high: a top on four legs, or on a central pedestal and foot when it is round. */
@@ -25,7 +41,10 @@ function table(w: number, d: number, top: number, round: boolean): Part[] {
     ];
   }
   const leg = clamp(size * 0.06, 25, 70);
-  return [...fourLegs(-w / 2, w / 2, -d / 2, d / 2, under, leg, clamp(size * 0.04, 10, 60), 0.7), tableTop(w, d, under, top, false)];
+  return [
+    ...fourLegs(-w / 2, w / 2, -d / 2, d / 2, under, leg, clamp(size * 0.04, 10, 60), 0.7),
+    tableTop(w, d, under, top, false),
+  ];
 }
 
 /** A dining table: its top at the box's height. */
@@ -62,8 +81,10 @@ export function diningSetForm(box: FormBox, settings: PieceSettings): Part[] {
   const front = Math.ceil(chairs / 2) > perSide ? perSide : Math.ceil(Math.min(chairs, 2 * perSide) / 2);
   const back = Math.min(chairs, 2 * perSide) - front;
   // Chairs on the +y side turn round to face the table; those at −y already do.
-  for (let i = 0; i < front; i++) parts.push(...moveParts(turnParts(chair, 2), -tableW / 2 + step * (i + 0.5 + (perSide - front) / 2), d / 2 - chairD / 2));
-  for (let i = 0; i < back; i++) parts.push(...moveParts(chair, -tableW / 2 + step * (i + 0.5 + (perSide - back) / 2), -d / 2 + chairD / 2));
+  for (let i = 0; i < front; i++)
+    parts.push(...moveParts(turnParts(chair, 2), -tableW / 2 + step * (i + 0.5 + (perSide - front) / 2), d / 2 - chairD / 2));
+  for (let i = 0; i < back; i++)
+    parts.push(...moveParts(chair, -tableW / 2 + step * (i + 0.5 + (perSide - back) / 2), -d / 2 + chairD / 2));
   const endD = Math.min(chairD, w * 0.3);
   const endChair = diningChairForm({ width: Math.min(SET_CHAIR_WIDTH_MM, tableD * 0.8), depth: endD, height: h });
   if (ends > 0) parts.push(...moveParts(turnParts(endChair, 1), w / 2 - endD / 2, 0));
@@ -109,7 +130,16 @@ export function drawerFronts(x0: number, x1: number, front: number, z0: number, 
 }
 
 /** Doors side by side across x0..x1 from z0 to z1, handles at their meeting edges (or their free edge), reaching out to `front`. */
-export function doorFronts(x0: number, x1: number, front: number, z0: number, z1: number, count: number, handleAt: 'middle' | 'top' | 'bottom' = 'middle', gap = 4): Part[] {
+export function doorFronts(
+  x0: number,
+  x1: number,
+  front: number,
+  z0: number,
+  z1: number,
+  count: number,
+  handleAt: 'middle' | 'top' | 'bottom' = 'middle',
+  gap = 4,
+): Part[] {
   const parts: Part[] = [];
   const step = (x1 - x0) / count;
   const face = front - HANDLE_PROUD_MM;
@@ -121,7 +151,15 @@ export function doorFronts(x0: number, x1: number, front: number, z0: number, z1
     parts.push(panelPart(a, b, face - FRONT_THICKNESS_MM, face, z0 + gap / 2, z1 - gap / 2, { role: 'front' }));
     // Pairs open from where they meet: the left door of a pair has its handle on its right edge.
     const edge = i % 2 === 0 ? b - 40 : a + 40;
-    parts.push(handlePart(Math.min(Math.max(edge, a + 15), b - 15), front, Math.min(Math.max(hz, z0 + length / 2), z1 - length / 2), length, true));
+    parts.push(
+      handlePart(
+        Math.min(Math.max(edge, a + 15), b - 15),
+        front,
+        Math.min(Math.max(hz, z0 + length / 2), z1 - length / 2),
+        length,
+        true,
+      ),
+    );
   }
   return parts;
 }
@@ -150,7 +188,10 @@ export function deskForm(box: FormBox, settings: PieceSettings): Part[] {
   const parts: Part[] = [
     panelPart(-w / 2, -w / 2 + panel, -d / 2, d / 2 - 20, 0, under, { slot: 'accent' }),
     panelPart(w / 2 - panel, w / 2, -d / 2, d / 2 - 20, 0, under, { slot: 'accent' }),
-    panelPart(-w / 2 + panel, w / 2 - panel, -d / 2 + 20, -d / 2 + 20 + panel, under * 0.4, under, { slot: 'accent', role: 'back' }),
+    panelPart(-w / 2 + panel, w / 2 - panel, -d / 2 + 20, -d / 2 + 20 + panel, under * 0.4, under, {
+      slot: 'accent',
+      role: 'back',
+    }),
     roundedPart(-w / 2, w / 2, -d / 2, d / 2, under, h, 8, { role: 'top' }),
   ];
   if (drawers > 0) {

@@ -10,7 +10,22 @@ export function ProjectRoute() {
   // The same query the page itself runs, so this reads the cache rather than fetching twice.
   const project = useProject(projectId);
   const presentations = project.data && (
-    <PresentationsPanel projectId={projectId} projectState={project.data.project.state} clientEmail={project.data.client?.email ?? null} />
+    <PresentationsPanel
+      projectId={projectId}
+      projectState={project.data.project.state}
+      clientEmail={project.data.client?.email ?? null}
+    />
   );
-  return <ProjectPage id={projectId} rooms={<><RoomList projectId={projectId} /><SchedulesLink projectId={projectId} /></>} presentations={presentations} />;
+  return (
+    <ProjectPage
+      id={projectId}
+      rooms={
+        <>
+          <RoomList projectId={projectId} />
+          <SchedulesLink projectId={projectId} />
+        </>
+      }
+      presentations={presentations}
+    />
+  );
 }

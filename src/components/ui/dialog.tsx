@@ -1,7 +1,13 @@
 import { useEffect, useRef, type ReactNode } from 'react';
 
 /** A modal built on <dialog>: focus is trapped by the browser, Escape closes it. */
-export function Dialog({ open, onClose, title, children, footer }: {
+export function Dialog({
+  open,
+  onClose,
+  title,
+  children,
+  footer,
+}: {
   open: boolean;
   onClose: () => void;
   title: string;

@@ -1,6 +1,16 @@
 import type { ReactNode } from 'react';
 
-export function PageHeader({ title, eyebrow, actions, children }: { title: ReactNode; eyebrow?: ReactNode; actions?: ReactNode; children?: ReactNode }) {
+export function PageHeader({
+  title,
+  eyebrow,
+  actions,
+  children,
+}: {
+  title: ReactNode;
+  eyebrow?: ReactNode;
+  actions?: ReactNode;
+  children?: ReactNode;
+}) {
   return (
     <header className="mb-8 flex flex-wrap items-end justify-between gap-4">
       <div className="min-w-0">
@@ -13,7 +23,17 @@ export function PageHeader({ title, eyebrow, actions, children }: { title: React
   );
 }
 
-export function Card({ children, className = '', title, actions }: { children: ReactNode; className?: string; title?: ReactNode; actions?: ReactNode }) {
+export function Card({
+  children,
+  className = '',
+  title,
+  actions,
+}: {
+  children: ReactNode;
+  className?: string;
+  title?: ReactNode;
+  actions?: ReactNode;
+}) {
   return (
     <section className={`rounded-2xl border border-line bg-white p-6 ${className}`}>
       {(title || actions) && (
@@ -77,7 +97,9 @@ const STATE_STYLES: Record<string, string> = {
 
 export function Badge({ value, label }: { value: string; label?: string }) {
   return (
-    <span className={`inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold capitalize ${STATE_STYLES[value] ?? 'bg-sand text-ink'}`}>
+    <span
+      className={`inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold capitalize ${STATE_STYLES[value] ?? 'bg-sand text-ink'}`}
+    >
       {label ?? value}
     </span>
   );

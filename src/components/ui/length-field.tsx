@@ -30,7 +30,17 @@ export function LengthField(props: LengthFieldProps) {
   return props.commit === 'blur' ? <CommittedLengthField {...props} /> : <FormLengthField {...props} />;
 }
 
-function CommittedLengthField({ label, valueMm, onChange, unit = 'cm', error, hint, commit: _commit, allowNegative, ...rest }: LengthFieldProps) {
+function CommittedLengthField({
+  label,
+  valueMm,
+  onChange,
+  unit = 'cm',
+  error,
+  hint,
+  commit: _commit,
+  allowNegative,
+  ...rest
+}: LengthFieldProps) {
   const field = useCommitText<number | null>({
     value: valueMm,
     format: (mm) => (mm === null ? '' : formatLength(mm, unit)),
@@ -45,10 +55,30 @@ function CommittedLengthField({ label, valueMm, onChange, unit = 'cm', error, hi
     },
     error,
   });
-  return <TextField {...rest} {...field.inputProps} label={label} inputMode="decimal" autoComplete="off" error={field.error} hint={hint} />;
+  return (
+    <TextField
+      {...rest}
+      {...field.inputProps}
+      label={label}
+      inputMode="decimal"
+      autoComplete="off"
+      error={field.error}
+      hint={hint}
+    />
+  );
 }
 
-function FormLengthField({ label, valueMm, onChange, unit = 'cm', error, hint, commit: _commit, allowNegative, ...rest }: LengthFieldProps) {
+function FormLengthField({
+  label,
+  valueMm,
+  onChange,
+  unit = 'cm',
+  error,
+  hint,
+  commit: _commit,
+  allowNegative,
+  ...rest
+}: LengthFieldProps) {
   const [text, setText] = useState(valueMm === null ? '' : formatLength(valueMm, unit));
   const [local, setLocal] = useState<string | undefined>();
   const shownUnit = useRef(unit);

@@ -34,7 +34,14 @@ export interface CommitText {
   commit: () => void;
 }
 
-export function useCommitText<T>({ value, format, parse, onCommit, equal = Object.is, error: outside }: CommitTextOptions<T>): CommitText {
+export function useCommitText<T>({
+  value,
+  format,
+  parse,
+  onCommit,
+  equal = Object.is,
+  error: outside,
+}: CommitTextOptions<T>): CommitText {
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | undefined>();
   const latest = useRef({ draft, value, parse, onCommit, equal });
@@ -115,14 +122,26 @@ export function textParser(required: string | null): (text: string) => Parsed<st
 }
 
 /** A number typed by a person: a decimal point or comma; empty means none when `optional`. */
-export function numberParser({ min, max, optional, what }: { min?: number; max?: number; optional?: boolean; what: string }): (text: string) => Parsed<number | null> {
+export function numberParser({
+  min,
+  max,
+  optional,
+  what,
+}: {
+  min?: number;
+  max?: number;
+  optional?: boolean;
+  what: string;
+}): (text: string) => Parsed<number | null> {
   return (text) => {
     const t = text.trim().replace(',', '.');
     if (t === '') return optional ? { ok: true, value: null } : { ok: false, message: `Enter ${what}.` };
     const n = Number(t);
     if (!Number.isFinite(n)) return { ok: false, message: `“${text.trim()}” is not a number.` };
-    if (min !== undefined && n < min) return { ok: false, message: `${what.charAt(0).toUpperCase()}${what.slice(1)} cannot be below ${min}.` };
-    if (max !== undefined && n > max) return { ok: false, message: `${what.charAt(0).toUpperCase()}${what.slice(1)} cannot be above ${max}.` };
+    if (min !== undefined && n < min)
+      return { ok: false, message: `${what.charAt(0).toUpperCase()}${what.slice(1)} cannot be below ${min}.` };
+    if (max !== undefined && n > max)
+      return { ok: false, message: `${what.charAt(0).toUpperCase()}${what.slice(1)} cannot be above ${max}.` };
     return { ok: true, value: n };
   };
 }

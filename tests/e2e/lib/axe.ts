@@ -7,20 +7,34 @@ const AXE_PATH = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
 /** The impacts that fail a page; minor and moderate findings are printed but allowed. */
 const FAILING_IMPACTS = new Set(['serious', 'critical']);
 
-export interface AxeFinding { page: string; id: string; impact: string; help: string; targets: string[] }
+export interface AxeFinding {
+  page: string;
+  id: string;
+  impact: string;
+  help: string;
+  targets: string[];
+}
 
-interface AxeResult { violations: { id: string; impact: string | null; help: string; nodes: { target: unknown[] }[] }[] }
+interface AxeResult {
+  violations: { id: string; impact: string | null; help: string; nodes: { target: unknown[] }[] }[];
+}
 
 /** Runs axe on the page as it is now; returns the serious and critical findings. */
 export async function axeFindings(page: Page, name: string): Promise<AxeFinding[]> {
   if (!(await page.evaluate(() => 'axe' in window))) await page.addScriptTag({ path: AXE_PATH });
-  const result = await page.evaluate(async () => {
+  const result = (await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<unknown> } }).axe;
     return (await axe.run(document, { resultTypes: ['violations'] })) as unknown;
-  }) as AxeResult;
+  })) as AxeResult;
   return result.violations
     .filter((v) => FAILING_IMPACTS.has(v.impact ?? ''))
-    .map((v) => ({ page: name, id: v.id, impact: v.impact!, help: v.help, targets: v.nodes.slice(0, 5).map((n) => n.target.map(String).join(' ')) }));
+    .map((v) => ({
+      page: name,
+      id: v.id,
+      impact: v.impact!,
+      help: v.help,
+      targets: v.nodes.slice(0, 5).map((n) => n.target.map(String).join(' ')),
+    }));
 }
 
 /** Records every content security policy violation the context's pages report. */
@@ -35,7 +49,13 @@ export async function watchPolicy(context: BrowserContext): Promise<() => Promis
     if (/Content Security Policy/i.test(m.text())) messages.push(m.text());
   });
   return async () => {
-    const fromPages = await Promise.all(context.pages().map((p) => p.evaluate(() => (window as unknown as { __cspViolations?: string[] }).__cspViolations ?? []).catch(() => [])));
+    const fromPages = await Promise.all(
+      context
+        .pages()
+        .map((p) =>
+          p.evaluate(() => (window as unknown as { __cspViolations?: string[] }).__cspViolations ?? []).catch(() => []),
+        ),
+    );
     return [...messages, ...fromPages.flat()];
   };
 }

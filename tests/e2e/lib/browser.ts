@@ -14,5 +14,9 @@ export const CHROMIUM_ARGS = [
 ];
 
 export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS, headless: true });
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: CHROMIUM_ARGS,
+    headless: true,
+  });
 }

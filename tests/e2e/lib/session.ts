@@ -42,9 +42,15 @@ export async function signInThroughForm(page: Page, email: string, password = PA
 export async function copyLinkFromOutbox(ownerPage: Page, to: string, linkPath: RegExp): Promise<string> {
   await ownerPage.context().grantPermissions(['clipboard-read', 'clipboard-write'], { origin: inject('baseUrl') });
   await ownerPage.goto('/outbox');
-  await ownerPage.getByRole('link', { name: new RegExp(`To ${to.replace(/[.+]/g, '\\$&')}`) }).first().click();
+  await ownerPage
+    .getByRole('link', { name: new RegExp(`To ${to.replace(/[.+]/g, '\\$&')}`) })
+    .first()
+    .click();
   const shown = (await ownerPage.getByRole('link', { name: linkPath }).first().getAttribute('href'))!;
-  await ownerPage.getByRole('button', { name: `Copy link for ${to}` }).first().click();
+  await ownerPage
+    .getByRole('button', { name: `Copy link for ${to}` })
+    .first()
+    .click();
   await ownerPage.getByText(`Copied. Send it to ${to}.`).waitFor();
   const copied = await ownerPage.evaluate(() => navigator.clipboard.readText());
   if (copied !== shown) throw new Error(`copied ${copied}, the e-mail shows ${shown}`);

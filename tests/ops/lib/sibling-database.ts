@@ -2,7 +2,10 @@
 // two empty databases of their own even when npm test hands every file the same one.
 import pg from 'pg';
 
-export interface SiblingDatabase { url: string; drop(): Promise<void> }
+export interface SiblingDatabase {
+  url: string;
+  drop(): Promise<void>;
+}
 
 async function onServer(baseUrl: string, text: string): Promise<void> {
   const admin = new URL(baseUrl);

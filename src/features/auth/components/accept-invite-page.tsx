@@ -17,10 +17,22 @@ export function AcceptInvitePage() {
   const [name, setName] = useState('');
   const [password, setPassword] = useState('');
 
-  if (invite.isPending) return <AuthFrame title="Invitation"><Spinner /></AuthFrame>;
+  if (invite.isPending)
+    return (
+      <AuthFrame title="Invitation">
+        <Spinner />
+      </AuthFrame>
+    );
   if (invite.isError) {
     return (
-      <AuthFrame title="Invitation" footer={<Link className="font-semibold text-pine" to="/sign-in">Go to sign in</Link>}>
+      <AuthFrame
+        title="Invitation"
+        footer={
+          <Link className="font-semibold text-pine" to="/sign-in">
+            Go to sign in
+          </Link>
+        }
+      >
         <Notice tone="error">{errorMessage(invite.error)}</Notice>
       </AuthFrame>
     );
@@ -33,12 +45,36 @@ export function AcceptInvitePage() {
   const err = accept.error;
   const general = err instanceof ApiError && Object.keys(err.fields).length === 0 ? err.message : null;
   return (
-    <AuthFrame title={`Join ${info.studioName ?? 'the studio'}`} subtitle={<>You were invited as <strong>{info.role}</strong> with {info.email}.</>}>
+    <AuthFrame
+      title={`Join ${info.studioName ?? 'the studio'}`}
+      subtitle={
+        <>
+          You were invited as <strong>{info.role}</strong> with {info.email}.
+        </>
+      }
+    >
       <form onSubmit={submit} className="flex flex-col gap-5" noValidate>
         {general && <Notice tone="error">{general}</Notice>}
-        <TextField label="Your name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(err, 'name')} autoFocus />
-        <TextField label="Choose a password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={fieldError(err, 'password')} hint={NEW_PASSWORD_HINT} />
-        <Button type="submit" variant="primary" busy={accept.isPending}>Accept and join</Button>
+        <TextField
+          label="Your name"
+          autoComplete="name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldError(err, 'name')}
+          autoFocus
+        />
+        <TextField
+          label="Choose a password"
+          type="password"
+          autoComplete="new-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={fieldError(err, 'password')}
+          hint={NEW_PASSWORD_HINT}
+        />
+        <Button type="submit" variant="primary" busy={accept.isPending}>
+          Accept and join
+        </Button>
       </form>
     </AuthFrame>
   );

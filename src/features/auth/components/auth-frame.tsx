@@ -2,16 +2,28 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 
 /** The calm two-column frame of the sign-in, sign-up and invitation pages. */
-export function AuthFrame({ title, subtitle, children, footer }: { title: string; subtitle?: ReactNode; children: ReactNode; footer?: ReactNode }) {
+export function AuthFrame({
+  title,
+  subtitle,
+  children,
+  footer,
+}: {
+  title: string;
+  subtitle?: ReactNode;
+  children: ReactNode;
+  footer?: ReactNode;
+}) {
   return (
     <div className="grid min-h-screen lg:grid-cols-[1fr_minmax(28rem,34rem)]">
       <aside className="relative hidden overflow-hidden bg-pine text-paper lg:flex lg:flex-col lg:justify-between lg:p-12">
-        <Link to="/" className="text-2xl font-bold tracking-tight">Parlour</Link>
+        <Link to="/" className="text-2xl font-bold tracking-tight">
+          Parlour
+        </Link>
         <div className="max-w-md">
           <p className="text-3xl leading-snug font-semibold">From a tape measure to a decision.</p>
           <p className="mt-4 text-paper/85">
-            Rebuild the room true to size, furnish it in two or three options, check that everything fits, and let your
-            client walk round each one before choosing.
+            Rebuild the room true to size, furnish it in two or three options, check that everything fits, and let your client
+            walk round each one before choosing.
           </p>
         </div>
         <PlanSketch />

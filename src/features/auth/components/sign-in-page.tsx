@@ -28,15 +28,37 @@ export function SignInPage() {
       subtitle="Welcome back to your studio."
       footer={
         <>
-          New to Parlour? <Link className="font-semibold text-pine underline-offset-2 hover:underline" to="/sign-up">Create a studio</Link>
+          New to Parlour?{' '}
+          <Link className="font-semibold text-pine underline-offset-2 hover:underline" to="/sign-up">
+            Create a studio
+          </Link>
         </>
       }
     >
       <form onSubmit={submit} className="flex flex-col gap-5" noValidate>
         {general && <Notice tone="error">{general}</Notice>}
-        <TextField label="E-mail" type="email" autoComplete="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldError(err, 'email')} required autoFocus />
-        <TextField label="Password" type="password" autoComplete="current-password" value={password} onChange={(e) => setPassword(e.target.value)} error={fieldError(err, 'password')} required />
-        <Button type="submit" variant="primary" busy={signIn.isPending}>Sign in</Button>
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="email"
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={fieldError(err, 'email')}
+          required
+          autoFocus
+        />
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={fieldError(err, 'password')}
+          required
+        />
+        <Button type="submit" variant="primary" busy={signIn.isPending}>
+          Sign in
+        </Button>
       </form>
     </AuthFrame>
   );

@@ -27,17 +27,49 @@ export function SignUpPage() {
       subtitle="You will be its owner and can invite your team afterwards."
       footer={
         <>
-          Already have an account? <Link className="font-semibold text-pine underline-offset-2 hover:underline" to="/sign-in">Sign in</Link>
+          Already have an account?{' '}
+          <Link className="font-semibold text-pine underline-offset-2 hover:underline" to="/sign-in">
+            Sign in
+          </Link>
         </>
       }
     >
       <form onSubmit={submit} className="flex flex-col gap-5" noValidate>
         {general && <Notice tone="error">{general}</Notice>}
-        <TextField label="Studio name" value={form.studioName} onChange={set('studioName')} error={fieldError(err, 'studioName')} autoFocus />
-        <TextField label="Your name" autoComplete="name" value={form.name} onChange={set('name')} error={fieldError(err, 'name')} />
-        <TextField label="E-mail" type="email" autoComplete="email" value={form.email} onChange={set('email')} error={fieldError(err, 'email')} />
-        <TextField label="Password" type="password" autoComplete="new-password" value={form.password} onChange={set('password')} error={fieldError(err, 'password')} hint={NEW_PASSWORD_HINT} />
-        <Button type="submit" variant="primary" busy={signUp.isPending}>Create studio</Button>
+        <TextField
+          label="Studio name"
+          value={form.studioName}
+          onChange={set('studioName')}
+          error={fieldError(err, 'studioName')}
+          autoFocus
+        />
+        <TextField
+          label="Your name"
+          autoComplete="name"
+          value={form.name}
+          onChange={set('name')}
+          error={fieldError(err, 'name')}
+        />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="email"
+          value={form.email}
+          onChange={set('email')}
+          error={fieldError(err, 'email')}
+        />
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="new-password"
+          value={form.password}
+          onChange={set('password')}
+          error={fieldError(err, 'password')}
+          hint={NEW_PASSWORD_HINT}
+        />
+        <Button type="submit" variant="primary" busy={signUp.isPending}>
+          Create studio
+        </Button>
       </form>
     </AuthFrame>
   );

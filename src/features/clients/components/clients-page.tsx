@@ -20,7 +20,16 @@ export function ClientsPage() {
 
   return (
     <div>
-      <PageHeader title="Clients" actions={canEdit && <Button variant="primary" onClick={() => setEditing('new')}>Add client</Button>}>
+      <PageHeader
+        title="Clients"
+        actions={
+          canEdit && (
+            <Button variant="primary" onClick={() => setEditing('new')}>
+              Add client
+            </Button>
+          )
+        }
+      >
         The households and people your projects are for.
       </PageHeader>
       <ListToolbar label="Search clients" placeholder="Search by name or e-mail" query={q} onQuery={setQ}>
@@ -37,11 +46,23 @@ export function ClientsPage() {
           <table className="w-full text-left text-[15px]">
             <thead className="border-b border-line bg-paper/60 text-sm text-ink-soft">
               <tr>
-                <th scope="col" className="px-5 py-3 font-semibold">Name</th>
-                <th scope="col" className="px-5 py-3 font-semibold">E-mail</th>
-                <th scope="col" className="px-5 py-3 font-semibold">Projects</th>
-                <th scope="col" className="px-5 py-3 font-semibold">Last change</th>
-                {canEdit && <th scope="col" className="px-5 py-3"><span className="sr-only">Actions</span></th>}
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Name
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  E-mail
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Projects
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Last change
+                </th>
+                {canEdit && (
+                  <th scope="col" className="px-5 py-3">
+                    <span className="sr-only">Actions</span>
+                  </th>
+                )}
               </tr>
             </thead>
             <tbody>
@@ -53,7 +74,9 @@ export function ClientsPage() {
                   <td className="px-5 py-4 text-ink-soft">{formatRelative(c.updatedAt)}</td>
                   {canEdit && (
                     <td className="px-5 py-4 text-right">
-                      <Button size="sm" variant="quiet" onClick={() => setEditing(c)} aria-label={`Edit ${c.name}`}>Edit</Button>
+                      <Button size="sm" variant="quiet" onClick={() => setEditing(c)} aria-label={`Edit ${c.name}`}>
+                        Edit
+                      </Button>
                     </td>
                   )}
                 </tr>
@@ -82,13 +105,31 @@ function ClientDialog({ client, onClose }: { client: Client | null; onClose: () 
   return (
     <Dialog open onClose={onClose} title={client ? 'Edit client' : 'Add client'}>
       <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-        {err && Object.keys((err as { fields?: object }).fields ?? {}).length === 0 && <Notice tone="error">{errorMessage(err)}</Notice>}
-        <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(err, 'name')} autoFocus />
-        <TextField label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldError(err, 'email')} />
+        {err && Object.keys((err as { fields?: object }).fields ?? {}).length === 0 && (
+          <Notice tone="error">{errorMessage(err)}</Notice>
+        )}
+        <TextField
+          label="Name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldError(err, 'name')}
+          autoFocus
+        />
+        <TextField
+          label="E-mail"
+          type="email"
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={fieldError(err, 'email')}
+        />
         <TextField label="Phone" value={phone} onChange={(e) => setPhone(e.target.value)} error={fieldError(err, 'phone')} />
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" busy={mutation.isPending}>{client ? 'Save' : 'Add client'}</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary" busy={mutation.isPending}>
+            {client ? 'Save' : 'Add client'}
+          </Button>
         </div>
       </form>
     </Dialog>

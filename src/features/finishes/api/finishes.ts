@@ -2,7 +2,12 @@
 // and turns each into a scene material with toSceneFinish (shared/finishes/scene-finish).
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
-  CreatePaintBody, Finish, FinishListQuery, FinishPatch, PaintFinish, PhotoFinish,
+  CreatePaintBody,
+  Finish,
+  FinishListQuery,
+  FinishPatch,
+  PaintFinish,
+  PhotoFinish,
 } from '../../../../shared/schemas/finish';
 import type { ErrorBody } from '../../../../shared/schemas/common';
 import { api, ApiError } from '../../../lib/api';
@@ -99,9 +104,12 @@ export function uploadPhoto(file: File, onProgress: (fraction: number) => void, 
       const body = xhr.response as { finishes?: PhotoFinish[] } & Partial<ErrorBody>;
       if (xhr.status === 201 && body?.finishes?.[0]) return resolve(body.finishes[0]);
       const e = body?.error;
-      reject(new ApiError(xhr.status, e?.code ?? 'error', e?.message ?? `The server answered ${xhr.status}.`, e?.fields ?? {}, body));
+      reject(
+        new ApiError(xhr.status, e?.code ?? 'error', e?.message ?? `The server answered ${xhr.status}.`, e?.fields ?? {}, body),
+      );
     };
-    xhr.onerror = () => reject(new ApiError(0, 'offline', 'Parlour cannot reach the server. Check your connection and try again.'));
+    xhr.onerror = () =>
+      reject(new ApiError(0, 'offline', 'Parlour cannot reach the server. Check your connection and try again.'));
     xhr.onabort = () => reject(new DOMException('The upload was stopped.', 'AbortError'));
     signal?.addEventListener('abort', () => xhr.abort());
     const form = new FormData();

@@ -25,15 +25,36 @@ export function AddPaintDialog({ onClose }: { onClose: () => void }) {
     <Dialog open onClose={onClose} title="Add paint">
       <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
         {general && <Notice tone="error">{errorMessage(err)}</Notice>}
-        <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(err, 'name')} autoFocus />
-        <PaintFields colourHex={colourHex} sheen={sheen} onColour={setColourHex} onSheen={setSheen} colourError={fieldError(err, 'colourHex')} />
+        <TextField
+          label="Name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldError(err, 'name')}
+          autoFocus
+        />
+        <PaintFields
+          colourHex={colourHex}
+          sheen={sheen}
+          onColour={setColourHex}
+          onSheen={setSheen}
+          colourError={fieldError(err, 'colourHex')}
+        />
         <div className="grid grid-cols-2 gap-3">
-          <TextField label="Supplier" value={supplier} onChange={(e) => setSupplier(e.target.value)} error={fieldError(err, 'supplier')} />
+          <TextField
+            label="Supplier"
+            value={supplier}
+            onChange={(e) => setSupplier(e.target.value)}
+            error={fieldError(err, 'supplier')}
+          />
           <TextField label="Code" value={code} onChange={(e) => setCode(e.target.value)} error={fieldError(err, 'code')} />
         </div>
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" busy={create.isPending}>Add paint</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary" busy={create.isPending}>
+            Add paint
+          </Button>
         </div>
       </form>
     </Dialog>

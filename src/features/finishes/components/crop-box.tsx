@@ -33,7 +33,14 @@ const HANDLES: { drag: Exclude<Drag, 'move'>; className: string; label: string }
 ];
 
 /** The photo with the crop drawn on it; drag the box to move it, a corner to resize it. */
-export function CropBox({ src, widthPx, heightPx, crop, onChange, disabled = false }: {
+export function CropBox({
+  src,
+  widthPx,
+  heightPx,
+  crop,
+  onChange,
+  disabled = false,
+}: {
   src: string;
   widthPx: number;
   heightPx: number;
@@ -62,7 +69,9 @@ export function CropBox({ src, widthPx, heightPx, crop, onChange, disabled = fal
     dragging.current = null;
   };
   const onKey = (e: KeyboardEvent) => {
-    const step = { ArrowLeft: [-KEY_STEP, 0], ArrowRight: [KEY_STEP, 0], ArrowUp: [0, -KEY_STEP], ArrowDown: [0, KEY_STEP] }[e.key];
+    const step = { ArrowLeft: [-KEY_STEP, 0], ArrowRight: [KEY_STEP, 0], ArrowUp: [0, -KEY_STEP], ArrowDown: [0, KEY_STEP] }[
+      e.key
+    ];
     if (!step || disabled) return;
     e.preventDefault();
     onChange(dragCrop(crop, e.shiftKey ? 'se' : 'move', step[0], step[1]));
@@ -85,7 +94,12 @@ export function CropBox({ src, widthPx, heightPx, crop, onChange, disabled = fal
         onKeyDown={onKey}
         onPointerDown={begin('move')}
         className={`absolute border-2 border-white shadow-[0_0_0_9999px_rgba(42,37,33,0.5)] ${disabled ? '' : 'cursor-move'}`}
-        style={{ left: `${crop.x * 100}%`, top: `${crop.y * 100}%`, width: `${crop.width * 100}%`, height: `${crop.height * 100}%` }}
+        style={{
+          left: `${crop.x * 100}%`,
+          top: `${crop.y * 100}%`,
+          width: `${crop.width * 100}%`,
+          height: `${crop.height * 100}%`,
+        }}
       >
         {!disabled &&
           HANDLES.map((h) => (

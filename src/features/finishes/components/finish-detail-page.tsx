@@ -1,8 +1,17 @@
 import { useEffect, useState, type FormEvent, type ReactNode } from 'react';
 import { Link, useNavigate } from 'react-router';
 import {
-  EDGE_BLENDS, FINISH_CATEGORIES, MIN_CROP_FRACTION, type Crop, type EdgeBlend, type FinishCategory, type FinishPatch,
-  type PaintFinish, type PhotoFinish, type PriceUnit, type Sheen,
+  EDGE_BLENDS,
+  FINISH_CATEGORIES,
+  MIN_CROP_FRACTION,
+  type Crop,
+  type EdgeBlend,
+  type FinishCategory,
+  type FinishPatch,
+  type PaintFinish,
+  type PhotoFinish,
+  type PriceUnit,
+  type Sheen,
 } from '../../../../shared/schemas/finish';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
@@ -31,7 +40,9 @@ export function FinishDetailPage({ id }: { id: string }) {
     return (
       <div className="flex flex-col gap-4">
         <Notice tone="error">{errorMessage(finish.error)}</Notice>
-        <Link to="/finishes" className="font-semibold text-pine">Back to the finish library</Link>
+        <Link to="/finishes" className="font-semibold text-pine">
+          Back to the finish library
+        </Link>
       </div>
     );
   }
@@ -39,18 +50,32 @@ export function FinishDetailPage({ id }: { id: string }) {
   return (
     <div>
       <PageHeader
-        eyebrow={<Link to="/finishes" className="hover:text-ink hover:underline">Finish library</Link>}
+        eyebrow={
+          <Link to="/finishes" className="hover:text-ink hover:underline">
+            Finish library
+          </Link>
+        }
         title={
           <span className="flex flex-wrap items-center gap-3">
             {f.name}
             {f.kind === 'photo' && f.status !== 'ready' && <StatusChip failed={f.status === 'failed'} />}
           </span>
         }
-        actions={canEdit && <Button variant="danger" onClick={() => setDeleting(true)}>Delete</Button>}
+        actions={
+          canEdit && (
+            <Button variant="danger" onClick={() => setDeleting(true)}>
+              Delete
+            </Button>
+          )
+        }
       >
         {finishSummary(f)}
       </PageHeader>
-      {f.kind === 'photo' ? <PhotoFinishDetail key={f.id} finish={f} canEdit={canEdit} /> : <PaintDetail key={f.id} finish={f} canEdit={canEdit} />}
+      {f.kind === 'photo' ? (
+        <PhotoFinishDetail key={f.id} finish={f} canEdit={canEdit} />
+      ) : (
+        <PaintDetail key={f.id} finish={f} canEdit={canEdit} />
+      )}
       {deleting && <DeleteDialog finish={f} onClose={() => setDeleting(false)} />}
     </div>
   );
@@ -58,7 +83,9 @@ export function FinishDetailPage({ id }: { id: string }) {
 
 function StatusChip({ failed }: { failed: boolean }) {
   return (
-    <span className={`inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold ${failed ? 'bg-clay-wash text-clay' : 'bg-ochre-wash text-ochre'}`}>
+    <span
+      className={`inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold ${failed ? 'bg-clay-wash text-clay' : 'bg-ochre-wash text-ochre'}`}
+    >
       {failed ? 'Failed' : 'Processing'}
     </span>
   );
@@ -86,31 +113,70 @@ function PhotoFinishDetail({ finish, canEdit }: { finish: PhotoFinish; canEdit: 
           {finish.files.photoUrl ? (
             <div className="flex flex-col gap-4">
               <p className="text-sm text-ink-soft">
-                Frame the part of the photo that covers the real size. Drag the box, or a corner to resize it; or type the edges below.
+                Frame the part of the photo that covers the real size. Drag the box, or a corner to resize it; or type the edges
+                below.
               </p>
-              <CropBox src={finish.files.photoUrl} widthPx={finish.photoWidthPx} heightPx={finish.photoHeightPx} crop={crop} onChange={setCrop} disabled={!canEdit} />
+              <CropBox
+                src={finish.files.photoUrl}
+                widthPx={finish.photoWidthPx}
+                heightPx={finish.photoHeightPx}
+                crop={crop}
+                onChange={setCrop}
+                disabled={!canEdit}
+              />
               <CropFields crop={crop} onChange={setCrop} disabled={!canEdit} error={fieldError(update.error, 'crop')} />
               {stretched && (
                 <Notice tone="warn">
-                  The crop is {cropAspect.toFixed(2)} : 1 but the real size is {realAspect.toFixed(2)} : 1, so the texture will be stretched to fit.
+                  The crop is {cropAspect.toFixed(2)} : 1 but the real size is {realAspect.toFixed(2)} : 1, so the texture will be
+                  stretched to fit.
                   {canEdit && (
                     <>
                       {' '}
-                      <button type="button" className="font-semibold underline" onClick={() => setCrop(matchProportions(crop, finish))}>Match the real size</button>
+                      <button
+                        type="button"
+                        className="font-semibold underline"
+                        onClick={() => setCrop(matchProportions(crop, finish))}
+                      >
+                        Match the real size
+                      </button>
                     </>
                   )}
                 </Notice>
               )}
               {canEdit && (
                 <div className="flex flex-wrap items-end justify-between gap-3">
-                  <SelectField label="Edge blend" value={edgeBlend} onChange={(e) => setEdgeBlend(e.target.value as EdgeBlend)} className="min-w-0 flex-1" hint="Blends each edge with its mirror image so copies meet without a seam.">
+                  <SelectField
+                    label="Edge blend"
+                    value={edgeBlend}
+                    onChange={(e) => setEdgeBlend(e.target.value as EdgeBlend)}
+                    className="min-w-0 flex-1"
+                    hint="Blends each edge with its mirror image so copies meet without a seam."
+                  >
                     {EDGE_BLENDS.map((b) => (
-                      <option key={b} value={b}>{EDGE_BLEND_LABELS[b]}</option>
+                      <option key={b} value={b}>
+                        {EDGE_BLEND_LABELS[b]}
+                      </option>
                     ))}
                   </SelectField>
                   <div className="flex gap-2">
-                    <Button variant="quiet" disabled={!changed} onClick={() => { setCrop(finish.crop); setEdgeBlend(finish.edgeBlend); }}>Reset</Button>
-                    <Button variant="primary" disabled={!changed} busy={update.isPending} onClick={() => update.mutate({ crop, edgeBlend })}>Apply crop</Button>
+                    <Button
+                      variant="quiet"
+                      disabled={!changed}
+                      onClick={() => {
+                        setCrop(finish.crop);
+                        setEdgeBlend(finish.edgeBlend);
+                      }}
+                    >
+                      Reset
+                    </Button>
+                    <Button
+                      variant="primary"
+                      disabled={!changed}
+                      busy={update.isPending}
+                      onClick={() => update.mutate({ crop, edgeBlend })}
+                    >
+                      Apply crop
+                    </Button>
                   </div>
                 </div>
               )}
@@ -144,7 +210,8 @@ function RepeatPreview({ finish }: { finish: PhotoFinish }) {
         style={{ aspectRatio: `${finish.repeatWidthMm} / ${finish.repeatHeightMm}`, width: `min(100%, ${24 * aspect}rem)` }}
       />
       <figcaption className="text-center text-sm text-ink-soft">
-        Nine copies side by side: {formatRepeat(finish.repeatWidthMm * 3, finish.repeatHeightMm * 3)} of surface. Look for seams and repeating marks.
+        Nine copies side by side: {formatRepeat(finish.repeatWidthMm * 3, finish.repeatHeightMm * 3)} of surface. Look for seams
+        and repeating marks.
       </figcaption>
     </figure>
   );
@@ -172,7 +239,17 @@ const PERCENT_FIELDS = [
 ] as const;
 
 /** The crop typed as percentages of the photo. */
-function CropFields({ crop, onChange, disabled, error }: { crop: Crop; onChange: (c: Crop) => void; disabled: boolean; error?: string }) {
+function CropFields({
+  crop,
+  onChange,
+  disabled,
+  error,
+}: {
+  crop: Crop;
+  onChange: (c: Crop) => void;
+  disabled: boolean;
+  error?: string;
+}) {
   return (
     <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-4" disabled={disabled}>
       <legend className="sr-only">Crop, in percent of the photo</legend>
@@ -186,12 +263,28 @@ function CropFields({ crop, onChange, disabled, error }: { crop: Crop; onChange:
           onChange={(v) => onChange({ ...crop, [key]: v })}
         />
       ))}
-      {error && <p className="col-span-full text-sm text-clay" role="alert">{error}</p>}
+      {error && (
+        <p className="col-span-full text-sm text-clay" role="alert">
+          {error}
+        </p>
+      )}
     </fieldset>
   );
 }
 
-function PercentField({ label, value, min, max, onChange }: { label: string; value: number; min: number; max: number; onChange: (v: number) => void }) {
+function PercentField({
+  label,
+  value,
+  min,
+  max,
+  onChange,
+}: {
+  label: string;
+  value: number;
+  min: number;
+  max: number;
+  onChange: (v: number) => void;
+}) {
   const shown = (value * 100).toFixed(1);
   const [text, setText] = useState(shown);
   useEffect(() => setText(shown), [shown]);
@@ -225,14 +318,50 @@ function useCommonFields(finish: Finish) {
   const [price, setPrice] = useState(finish.price === null ? '' : String(finish.price));
   const [priceUnit, setPriceUnit] = useState<PriceUnit>(finish.priceUnit ?? 'm2');
   const priceNumber = price.trim() === '' ? null : Number(price.replace(',', '.'));
-  const body = { name, supplier, code, price: priceNumber, priceUnit: priceNumber === null ? null : priceUnit } satisfies FinishPatch;
+  const body = {
+    name,
+    supplier,
+    code,
+    price: priceNumber,
+    priceUnit: priceNumber === null ? null : priceUnit,
+  } satisfies FinishPatch;
   const fields = (err: unknown, disabled: boolean): Record<'supplier' | 'code' | 'price', ReactNode> => ({
-    supplier: <TextField label="Supplier" value={supplier} onChange={(e) => setSupplier(e.target.value)} error={fieldError(err, 'supplier')} disabled={disabled} />,
-    code: <TextField label="Code" value={code} onChange={(e) => setCode(e.target.value)} error={fieldError(err, 'code')} disabled={disabled} />,
+    supplier: (
+      <TextField
+        label="Supplier"
+        value={supplier}
+        onChange={(e) => setSupplier(e.target.value)}
+        error={fieldError(err, 'supplier')}
+        disabled={disabled}
+      />
+    ),
+    code: (
+      <TextField
+        label="Code"
+        value={code}
+        onChange={(e) => setCode(e.target.value)}
+        error={fieldError(err, 'code')}
+        disabled={disabled}
+      />
+    ),
     price: (
       <div className="grid grid-cols-[minmax(0,1fr)_auto] gap-3">
-        <TextField label="Price" value={price} inputMode="decimal" onChange={(e) => setPrice(e.target.value)} error={fieldError(err, 'price') ?? (priceNumber !== null && !Number.isFinite(priceNumber) ? 'Enter a number.' : undefined)} disabled={disabled} />
-        <SelectField label="Per" value={priceUnit} onChange={(e) => setPriceUnit(e.target.value as PriceUnit)} disabled={disabled}>
+        <TextField
+          label="Price"
+          value={price}
+          inputMode="decimal"
+          onChange={(e) => setPrice(e.target.value)}
+          error={
+            fieldError(err, 'price') ?? (priceNumber !== null && !Number.isFinite(priceNumber) ? 'Enter a number.' : undefined)
+          }
+          disabled={disabled}
+        />
+        <SelectField
+          label="Per"
+          value={priceUnit}
+          onChange={(e) => setPriceUnit(e.target.value as PriceUnit)}
+          disabled={disabled}
+        >
           <option value="m2">m²</option>
           <option value="unit">unit</option>
         </SelectField>
@@ -242,15 +371,31 @@ function useCommonFields(finish: Finish) {
   return { name, setName, body, fields, priceValid: priceNumber === null || Number.isFinite(priceNumber) };
 }
 
-function SaveRow({ mutation, canEdit, saved }: { mutation: { isPending: boolean; error: unknown }; canEdit: boolean; saved: boolean }) {
+function SaveRow({
+  mutation,
+  canEdit,
+  saved,
+}: {
+  mutation: { isPending: boolean; error: unknown };
+  canEdit: boolean;
+  saved: boolean;
+}) {
   const err = mutation.error;
   return (
     <>
-      {err !== null && !(err instanceof ApiError && Object.keys(err.fields).length > 0) && <Notice tone="error">{errorMessage(err)}</Notice>}
+      {err !== null && !(err instanceof ApiError && Object.keys(err.fields).length > 0) && (
+        <Notice tone="error">{errorMessage(err)}</Notice>
+      )}
       {canEdit && (
         <div className="flex items-center justify-end gap-3">
-          {saved && <span className="text-sm font-semibold text-pine-dark" role="status">Saved</span>}
-          <Button type="submit" variant="primary" busy={mutation.isPending}>Save</Button>
+          {saved && (
+            <span className="text-sm font-semibold text-pine-dark" role="status">
+              Saved
+            </span>
+          )}
+          <Button type="submit" variant="primary" busy={mutation.isPending}>
+            Save
+          </Button>
         </div>
       )}
     </>
@@ -272,18 +417,42 @@ function PhotoDetailsForm({ finish, canEdit }: { finish: PhotoFinish; canEdit: b
   };
   return (
     <form onSubmit={submit} className="grid gap-x-5 gap-y-4 sm:grid-cols-2 lg:grid-cols-4" noValidate>
-      <TextField label="Name" value={common.name} onChange={(e) => common.setName(e.target.value)} error={fieldError(err, 'name')} disabled={!canEdit} className="sm:col-span-2" />
-      <SelectField label="Category" value={category} onChange={(e) => setCategory(e.target.value as FinishCategory)} disabled={!canEdit}>
+      <TextField
+        label="Name"
+        value={common.name}
+        onChange={(e) => common.setName(e.target.value)}
+        error={fieldError(err, 'name')}
+        disabled={!canEdit}
+        className="sm:col-span-2"
+      />
+      <SelectField
+        label="Category"
+        value={category}
+        onChange={(e) => setCategory(e.target.value as FinishCategory)}
+        disabled={!canEdit}
+      >
         {FINISH_CATEGORIES.map((c) => (
-          <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>
+          <option key={c} value={c}>
+            {CATEGORY_LABELS[c]}
+          </option>
         ))}
       </SelectField>
       {fields.supplier}
       <fieldset className="flex flex-col gap-2 sm:col-span-2" disabled={!canEdit}>
         <legend className="sr-only">Real size of the crop</legend>
         <div className="grid grid-cols-2 gap-3">
-          <LengthField label="Real width" valueMm={widthMm} onChange={setWidthMm} error={fieldError(err, 'repeatWidthMm') ?? (widthMm === null ? 'Enter a size.' : undefined)} />
-          <LengthField label="Real height" valueMm={heightMm} onChange={setHeightMm} error={fieldError(err, 'repeatHeightMm') ?? (heightMm === null ? 'Enter a size.' : undefined)} />
+          <LengthField
+            label="Real width"
+            valueMm={widthMm}
+            onChange={setWidthMm}
+            error={fieldError(err, 'repeatWidthMm') ?? (widthMm === null ? 'Enter a size.' : undefined)}
+          />
+          <LengthField
+            label="Real height"
+            valueMm={heightMm}
+            onChange={setHeightMm}
+            error={fieldError(err, 'repeatHeightMm') ?? (heightMm === null ? 'Enter a size.' : undefined)}
+          />
         </div>
         <p className="text-sm text-ink-faint">The real size the crop covers: one 60 × 60 cm tile, four 18 cm boards across…</p>
       </fieldset>
@@ -311,12 +480,30 @@ function PaintDetail({ finish, canEdit }: { finish: PaintFinish; canEdit: boolea
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <Card title="Colour" className="self-start">
-        <div className="aspect-[16/9] w-full rounded-xl border border-line" style={{ backgroundColor: /^#[0-9a-fA-F]{6}$/.test(colourHex) ? colourHex : finish.colourHex }} role="img" aria-label={`Colour ${colourHex}`} />
+        <div
+          className="aspect-[16/9] w-full rounded-xl border border-line"
+          style={{ backgroundColor: /^#[0-9a-fA-F]{6}$/.test(colourHex) ? colourHex : finish.colourHex }}
+          role="img"
+          aria-label={`Colour ${colourHex}`}
+        />
       </Card>
       <Card title="Details" className="self-start">
         <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-          <TextField label="Name" value={common.name} onChange={(e) => common.setName(e.target.value)} error={fieldError(err, 'name')} disabled={!canEdit} />
-          <PaintFields colourHex={colourHex} sheen={sheen} onColour={setColourHex} onSheen={setSheen} colourError={fieldError(err, 'colourHex')} disabled={!canEdit} />
+          <TextField
+            label="Name"
+            value={common.name}
+            onChange={(e) => common.setName(e.target.value)}
+            error={fieldError(err, 'name')}
+            disabled={!canEdit}
+          />
+          <PaintFields
+            colourHex={colourHex}
+            sheen={sheen}
+            onColour={setColourHex}
+            onSheen={setSheen}
+            colourError={fieldError(err, 'colourHex')}
+            disabled={!canEdit}
+          />
           {fields.supplier}
           {fields.code}
           {fields.price}
@@ -337,15 +524,25 @@ function DeleteDialog({ finish, onClose }: { finish: Finish; onClose: () => void
       title="Delete this finish?"
       footer={
         <>
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button variant="danger" busy={remove.isPending} onClick={() => remove.mutate(finish.id, { onSuccess: () => navigate('/finishes', { replace: true }) })}>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button
+            variant="danger"
+            busy={remove.isPending}
+            onClick={() => remove.mutate(finish.id, { onSuccess: () => navigate('/finishes', { replace: true }) })}
+          >
             Delete {finish.name}
           </Button>
         </>
       }
     >
       <p className="text-ink-soft">Surfaces of options that use it will have no finish until you choose another.</p>
-      {remove.isError && <div className="mt-4"><Notice tone="error">{errorMessage(remove.error)}</Notice></div>}
+      {remove.isError && (
+        <div className="mt-4">
+          <Notice tone="error">{errorMessage(remove.error)}</Notice>
+        </div>
+      )}
     </Dialog>
   );
 }

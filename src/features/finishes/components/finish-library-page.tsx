@@ -30,17 +30,36 @@ export function FinishLibraryPage() {
 
   return (
     <div>
-      <PageHeader title="Finish library" actions={canEdit && <Button variant="primary" onClick={() => setAddingPaint(true)}>Add paint</Button>}>
+      <PageHeader
+        title="Finish library"
+        actions={
+          canEdit && (
+            <Button variant="primary" onClick={() => setAddingPaint(true)}>
+              Add paint
+            </Button>
+          )
+        }
+      >
         Floors, tiles, fabrics, wallpapers and paints from real samples, at their real size.
       </PageHeader>
       {canEdit && <PhotoUpload />}
-      <ListToolbar className="mb-5" label="Search finishes" placeholder="Search by name, supplier or code" query={q} onQuery={setQ}>
+      <ListToolbar
+        className="mb-5"
+        label="Search finishes"
+        placeholder="Search by name, supplier or code"
+        query={q}
+        onQuery={setQ}
+      >
         <ToolbarSelect
           label="Show"
           ariaLabel="Category"
           value={filter}
           onChange={setFilter}
-          options={[{ value: 'all', label: 'All finishes' }, { value: 'paint', label: 'Paints' }, ...FINISH_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }))]}
+          options={[
+            { value: 'all', label: 'All finishes' },
+            { value: 'paint', label: 'Paints' },
+            ...FINISH_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] })),
+          ]}
         />
       </ListToolbar>
       {finishes.isPending ? (
@@ -68,14 +87,23 @@ export function FinishLibraryPage() {
 function FinishCard({ finish }: { finish: Finish }) {
   const price = formatPrice(finish);
   return (
-    <Link to={`/finishes/${finish.id}`} className="group flex h-full flex-col gap-3 rounded-2xl border border-line bg-white p-3 transition-colors hover:border-line-strong">
+    <Link
+      to={`/finishes/${finish.id}`}
+      className="group flex h-full flex-col gap-3 rounded-2xl border border-line bg-white p-3 transition-colors hover:border-line-strong"
+    >
       <Swatch finish={finish} />
       <div className="min-w-0 px-1 pb-1">
-        <div className="truncate font-semibold text-ink group-hover:underline" title={finish.name}>{finish.name}</div>
+        <div className="truncate font-semibold text-ink group-hover:underline" title={finish.name}>
+          {finish.name}
+        </div>
         <div className="truncate text-sm text-ink-soft">{finishSummary(finish)}</div>
         {(finish.supplier || price) && (
           <div className="mt-0.5 flex gap-2 text-sm text-ink-faint">
-            {finish.supplier && <span className="min-w-0 flex-1 truncate" title={finish.supplier}>{finish.supplier}</span>}
+            {finish.supplier && (
+              <span className="min-w-0 flex-1 truncate" title={finish.supplier}>
+                {finish.supplier}
+              </span>
+            )}
             {price && <span className="ml-auto shrink-0 tabular-nums">{price}</span>}
           </div>
         )}

@@ -5,7 +5,14 @@ import { SHEEN_LABELS } from './finish-labels';
 const HEX = /^#[0-9a-fA-F]{6}$/;
 
 /** Colour (picker and hex, kept in step) and sheen of a paint. */
-export function PaintFields({ colourHex, sheen, onColour, onSheen, colourError, disabled = false }: {
+export function PaintFields({
+  colourHex,
+  sheen,
+  onColour,
+  onSheen,
+  colourError,
+  disabled = false,
+}: {
   colourHex: string;
   sheen: Sheen;
   onColour: (hex: string) => void;
@@ -26,10 +33,20 @@ export function PaintFields({ colourHex, sheen, onColour, onSheen, colourError, 
           className={`${inputClass} w-14 cursor-pointer p-1`}
         />
       </label>
-      <TextField label="Hex" value={colourHex} onChange={(e) => onColour(e.target.value.trim())} error={colourError} maxLength={7} spellCheck={false} disabled={disabled} />
+      <TextField
+        label="Hex"
+        value={colourHex}
+        onChange={(e) => onColour(e.target.value.trim())}
+        error={colourError}
+        maxLength={7}
+        spellCheck={false}
+        disabled={disabled}
+      />
       <SelectField label="Sheen" value={sheen} onChange={(e) => onSheen(e.target.value as Sheen)} disabled={disabled}>
         {SHEENS.map((s) => (
-          <option key={s} value={s}>{SHEEN_LABELS[s]}</option>
+          <option key={s} value={s}>
+            {SHEEN_LABELS[s]}
+          </option>
         ))}
       </SelectField>
     </div>

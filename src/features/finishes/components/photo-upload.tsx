@@ -39,7 +39,8 @@ const uploads = {
     for (const l of listeners) l();
   },
 };
-const patch = (key: string, change: Partial<UploadItem>) => uploads.update((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i)));
+const patch = (key: string, change: Partial<UploadItem>) =>
+  uploads.update((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i)));
 
 function pump(qc: QueryClient) {
   while (active < PARALLEL_UPLOADS && waiting.length > 0) {
@@ -63,14 +64,20 @@ function addUploads(files: File[], qc: QueryClient) {
     nextKey += 1;
     // Said here so a large file is not sent only to be refused; the server checks again.
     const tooBig = file.size > UPLOAD_LIMITS.maxFileBytes;
-    return { key: `u${nextKey}`, file, progress: 0, error: tooBig ? `Larger than ${UPLOAD_LIMITS.maxFileBytes / MB} MB. Export it smaller and try again.` : undefined };
+    return {
+      key: `u${nextKey}`,
+      file,
+      progress: 0,
+      error: tooBig ? `Larger than ${UPLOAD_LIMITS.maxFileBytes / MB} MB. Export it smaller and try again.` : undefined,
+    };
   });
   uploads.update((all) => [...fresh, ...all]);
   waiting.push(...fresh.filter((i) => !i.error));
   pump(qc);
 }
 
-const formatBytes = (bytes: number) => (bytes < MB ? `${Math.max(1, Math.round(bytes / 1024))} KB` : `${(bytes / MB).toFixed(1)} MB`);
+const formatBytes = (bytes: number) =>
+  bytes < MB ? `${Math.max(1, Math.round(bytes / 1024))} KB` : `${(bytes / MB).toFixed(1)} MB`;
 
 /** Drop or pick photos of samples; each gets its own row with progress and status. */
 export function PhotoUpload() {
@@ -104,10 +111,12 @@ export function PhotoUpload() {
       >
         <p className="font-semibold text-ink">Drop photos of your samples here</p>
         <p className="max-w-lg text-sm text-ink-soft">
-          Floor boards, tiles, fabrics, wallpapers: photographed flat and square-on. JPEG, PNG or WebP, up to {UPLOAD_LIMITS.maxFileBytes / MB} MB
-          and {UPLOAD_LIMITS.maxPixels / 1_000_000} megapixels each.
+          Floor boards, tiles, fabrics, wallpapers: photographed flat and square-on. JPEG, PNG or WebP, up to{' '}
+          {UPLOAD_LIMITS.maxFileBytes / MB} MB and {UPLOAD_LIMITS.maxPixels / 1_000_000} megapixels each.
         </p>
-        <Button variant="primary" onClick={() => input.current?.click()}>Choose photos</Button>
+        <Button variant="primary" onClick={() => input.current?.click()}>
+          Choose photos
+        </Button>
         <input
           ref={input}
           type="file"
@@ -126,7 +135,9 @@ export function PhotoUpload() {
         <div className="mt-4 rounded-2xl border border-line bg-white">
           <div className="flex items-center justify-between border-b border-line px-5 py-3">
             <h2 className="text-sm font-semibold text-ink-soft">Uploads</h2>
-            <Button size="sm" variant="quiet" onClick={() => uploads.update((all) => all.filter((i) => !i.finishId && !i.error))}>Clear list</Button>
+            <Button size="sm" variant="quiet" onClick={() => uploads.update((all) => all.filter((i) => !i.finishId && !i.error))}>
+              Clear list
+            </Button>
           </div>
           <ul>
             {list.map((item) => (
@@ -142,17 +153,23 @@ export function PhotoUpload() {
 function UploadRow({ item }: { item: UploadItem }) {
   const finish = useFinish(item.finishId ?? '');
   const photo = item.finishId && finish.data?.finish.kind === 'photo' ? finish.data.finish : null;
-  const state = item.error ? 'failed' : !item.finishId ? 'uploading' : photo?.status ?? 'processing';
+  const state = item.error ? 'failed' : !item.finishId ? 'uploading' : (photo?.status ?? 'processing');
   const reason = item.error ?? (photo?.status === 'failed' ? photo.failureReason : null);
   const percent = Math.round((state === 'uploading' ? item.progress : 1) * 100);
   const label = { uploading: `Uploading ${percent}%`, processing: 'Processing…', ready: 'Ready', failed: 'Failed' }[state];
   const barColour = state === 'failed' ? 'bg-clay' : state === 'ready' ? 'bg-pine' : 'bg-pine/70';
   return (
-    <li className="grid grid-cols-[minmax(0,1fr)_9.5rem] items-center gap-x-4 gap-y-1.5 border-b border-line px-5 py-3 last:border-0" aria-label={`Upload of ${item.file.name}`}>
+    <li
+      className="grid grid-cols-[minmax(0,1fr)_9.5rem] items-center gap-x-4 gap-y-1.5 border-b border-line px-5 py-3 last:border-0"
+      aria-label={`Upload of ${item.file.name}`}
+    >
       <div className="min-w-0 truncate text-[15px] font-semibold" title={item.file.name}>
         {item.file.name} <span className="font-normal text-ink-faint">· {formatBytes(item.file.size)}</span>
       </div>
-      <div className={`text-right text-sm font-semibold ${state === 'failed' ? 'text-clay' : state === 'ready' ? 'text-pine-dark' : 'text-ink-soft'}`} role="status">
+      <div
+        className={`text-right text-sm font-semibold ${state === 'failed' ? 'text-clay' : state === 'ready' ? 'text-pine-dark' : 'text-ink-soft'}`}
+        role="status"
+      >
         {label}
       </div>
       <div
@@ -163,11 +180,16 @@ function UploadRow({ item }: { item: UploadItem }) {
         aria-valuemax={100}
         aria-valuenow={percent}
       >
-        <div className={`h-full rounded-full transition-[width] ${barColour} ${state === 'processing' ? 'animate-pulse' : ''}`} style={{ width: `${percent}%` }} />
+        <div
+          className={`h-full rounded-full transition-[width] ${barColour} ${state === 'processing' ? 'animate-pulse' : ''}`}
+          style={{ width: `${percent}%` }}
+        />
       </div>
       <div className="text-right text-sm">
         {state === 'ready' && photo && (
-          <Link to={`/finishes/${photo.id}`} className="font-semibold text-pine hover:underline">Set size and crop</Link>
+          <Link to={`/finishes/${photo.id}`} className="font-semibold text-pine hover:underline">
+            Set size and crop
+          </Link>
         )}
       </div>
       {reason && <p className="col-span-2 text-sm text-clay">{reason}</p>}

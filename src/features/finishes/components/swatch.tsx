@@ -4,7 +4,9 @@ import type { Finish } from '../../../../shared/schemas/finish';
 export function Swatch({ finish, className = '' }: { finish: Finish; className?: string }) {
   const frame = `relative aspect-square overflow-hidden rounded-xl border border-line ${className}`;
   if (finish.kind === 'paint') {
-    return <div className={frame} style={{ backgroundColor: finish.colourHex }} role="img" aria-label={`Colour ${finish.colourHex}`} />;
+    return (
+      <div className={frame} style={{ backgroundColor: finish.colourHex }} role="img" aria-label={`Colour ${finish.colourHex}`} />
+    );
   }
   if (finish.status === 'ready' && finish.files.swatchUrl) {
     return (
@@ -14,7 +16,9 @@ export function Swatch({ finish, className = '' }: { finish: Finish; className?:
     );
   }
   return (
-    <div className={`${frame} flex items-center justify-center bg-sand text-sm font-medium ${finish.status === 'failed' ? 'text-clay' : 'text-ink-soft'}`}>
+    <div
+      className={`${frame} flex items-center justify-center bg-sand text-sm font-medium ${finish.status === 'failed' ? 'text-clay' : 'text-ink-soft'}`}
+    >
       {finish.status === 'failed' ? (
         'Could not be processed'
       ) : (

@@ -10,12 +10,17 @@ export const outboxKeys = {
 
 /** The studio's sent mail, newest first, one page at a time; the pages already shown are refreshed while it is open. */
 export const useOutbox = () =>
-  useInfiniteQuery(infiniteQueryOptions({
-    queryKey: outboxKeys.list(),
-    queryFn: ({ pageParam }) => api<OutboxPage>(pageParam ? `/api/outbox?before=${encodeURIComponent(pageParam)}` : '/api/outbox'),
-    initialPageParam: '',
-    getNextPageParam: (last) => last.next ?? undefined,
-    refetchInterval: 5000,
-  }));
+  useInfiniteQuery(
+    infiniteQueryOptions({
+      queryKey: outboxKeys.list(),
+      queryFn: ({ pageParam }) =>
+        api<OutboxPage>(pageParam ? `/api/outbox?before=${encodeURIComponent(pageParam)}` : '/api/outbox'),
+      initialPageParam: '',
+      getNextPageParam: (last) => last.next ?? undefined,
+      refetchInterval: 5000,
+    }),
+  );
 export const useOutboxMessage = (id: string) =>
-  useQuery(queryOptions({ queryKey: outboxKeys.detail(id), queryFn: () => api<{ message: OutboxMessage }>(`/api/outbox/${id}`) }));
+  useQuery(
+    queryOptions({ queryKey: outboxKeys.detail(id), queryFn: () => api<{ message: OutboxMessage }>(`/api/outbox/${id}`) }),
+  );

@@ -21,13 +21,17 @@ export function OutboxPage() {
   return (
     <div>
       <PageHeader title="Outbox">
-        The e-mails {session.data?.studio.name ?? 'your studio'} sent. In this local setup they go to a stand-in mail
-        server instead of real inboxes, so copy a link and pass it on to its person.
+        The e-mails {session.data?.studio.name ?? 'your studio'} sent. In this local setup they go to a stand-in mail server
+        instead of real inboxes, so copy a link and pass it on to its person.
         {!isOwner && ' Invitations are shown to owners only.'}
       </PageHeader>
       <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
         <Card className="p-3">
-          {outbox.isPending ? <Spinner /> : outbox.isError ? <Notice tone="error">{errorMessage(outbox.error)}</Notice> : messages.length === 0 ? (
+          {outbox.isPending ? (
+            <Spinner />
+          ) : outbox.isError ? (
+            <Notice tone="error">{errorMessage(outbox.error)}</Notice>
+          ) : messages.length === 0 ? (
             <EmptyState title="No e-mails yet." />
           ) : (
             <>
@@ -51,13 +55,21 @@ export function OutboxPage() {
               </ul>
               {outbox.hasNextPage && (
                 <div className="mt-2 px-3 pb-1">
-                  <Button size="sm" busy={outbox.isFetchingNextPage} onClick={() => void outbox.fetchNextPage()}>Show older e-mails</Button>
+                  <Button size="sm" busy={outbox.isFetchingNextPage} onClick={() => void outbox.fetchNextPage()}>
+                    Show older e-mails
+                  </Button>
                 </div>
               )}
             </>
           )}
         </Card>
-        {messageId ? <MessageView id={messageId} /> : <Card><p className="text-ink-soft">Choose an e-mail to read it.</p></Card>}
+        {messageId ? (
+          <MessageView id={messageId} />
+        ) : (
+          <Card>
+            <p className="text-ink-soft">Choose an e-mail to read it.</p>
+          </Card>
+        )}
       </div>
     </div>
   );
@@ -65,8 +77,18 @@ export function OutboxPage() {
 
 function MessageView({ id }: { id: string }) {
   const msg = useOutboxMessage(id);
-  if (msg.isPending) return <Card><Spinner /></Card>;
-  if (msg.isError) return <Card><Notice tone="error">{errorMessage(msg.error)}</Notice></Card>;
+  if (msg.isPending)
+    return (
+      <Card>
+        <Spinner />
+      </Card>
+    );
+  if (msg.isError)
+    return (
+      <Card>
+        <Notice tone="error">{errorMessage(msg.error)}</Notice>
+      </Card>
+    );
   const m = msg.data.message;
   const links = [...new Set(m.text.match(LINK_PATTERN) ?? [])];
   return (
@@ -82,7 +104,9 @@ function MessageView({ id }: { id: string }) {
         <div className="mt-6 border-t border-line pt-4">
           <h3 className="mb-2 text-sm font-semibold text-ink-soft">Pass it on</h3>
           <ul className="flex flex-col gap-2">
-            {links.map((href) => <CopyLink key={href} href={href} to={m.to} />)}
+            {links.map((href) => (
+              <CopyLink key={href} href={href} to={m.to} />
+            ))}
           </ul>
         </div>
       )}
@@ -102,9 +126,15 @@ function CopyLink({ href, to }: { href: string; to: string }) {
   };
   return (
     <li className="flex flex-wrap items-center gap-3">
-      <Button size="sm" onClick={() => void copy()} aria-label={`Copy link for ${to}`}>Copy link</Button>
+      <Button size="sm" onClick={() => void copy()} aria-label={`Copy link for ${to}`}>
+        Copy link
+      </Button>
       <span className="text-sm text-ink-soft" role="status">
-        {copied === 'yes' ? `Copied. Send it to ${to}.` : copied === 'no' ? 'This browser would not copy it: select the link above and copy it by hand.' : ''}
+        {copied === 'yes'
+          ? `Copied. Send it to ${to}.`
+          : copied === 'no'
+            ? 'This browser would not copy it: select the link above and copy it by hand.'
+            : ''}
       </span>
     </li>
   );
@@ -113,6 +143,12 @@ function CopyLink({ href, to }: { href: string; to: string }) {
 // Links in the plain-text body become real links; the HTML part is never injected into the page.
 function linkify(text: string) {
   return text.split(LINK_PATTERN).map((part, i) =>
-    /^https?:\/\//.test(part) ? <a key={i} href={part} className="font-semibold break-all text-pine underline">{part}</a> : <span key={i}>{part}</span>,
+    /^https?:\/\//.test(part) ? (
+      <a key={i} href={part} className="font-semibold break-all text-pine underline">
+        {part}
+      </a>
+    ) : (
+      <span key={i}>{part}</span>
+    ),
   );
 }

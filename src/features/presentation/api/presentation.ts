@@ -37,8 +37,9 @@ export function useChoose(token: string, roomId: string) {
   return useMutation({
     mutationFn: (body: ChoiceBody) => api<ChoiceAnswer>(`${base(token)}/rooms/${roomId}/choice`, { method: 'PUT', body }),
     onSuccess: ({ choice }) =>
-      qc.setQueryData<ClientPresentation>(presentationKeys.detail(token), (p) =>
-        p && { ...p, rooms: p.rooms.map((r) => (r.id === roomId ? { ...r, choice } : r)) },
+      qc.setQueryData<ClientPresentation>(
+        presentationKeys.detail(token),
+        (p) => p && { ...p, rooms: p.rooms.map((r) => (r.id === roomId ? { ...r, choice } : r)) },
       ),
   });
 }

@@ -11,7 +11,15 @@ import { useChoose } from '../api/presentation';
  * "Choose this option": a short confirmation with an optional comment, then a thank-you that
  * leads on to the next room still to choose.
  */
-export function ChooseDialog({ token, room, option, studioName, nextRoom, onClose, onGoTo }: {
+export function ChooseDialog({
+  token,
+  room,
+  option,
+  studioName,
+  nextRoom,
+  onClose,
+  onGoTo,
+}: {
   token: string;
   room: ClientRoom;
   option: ClientOption;
@@ -38,11 +46,17 @@ export function ChooseDialog({ token, room, option, studioName, nextRoom, onClos
         </p>
         <p className="mt-2 text-sm text-ink-soft">You can come back and change it until {studioName} confirms the choices.</p>
         <div className="mt-6 flex flex-wrap justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Stay in this room</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Stay in this room
+          </Button>
           {nextRoom ? (
-            <Button variant="primary" onClick={() => onGoTo(nextRoom.id)} autoFocus>Go on to {nextRoom.name}</Button>
+            <Button variant="primary" onClick={() => onGoTo(nextRoom.id)} autoFocus>
+              Go on to {nextRoom.name}
+            </Button>
           ) : (
-            <Button variant="primary" onClick={() => onGoTo('welcome')} autoFocus>See all your choices</Button>
+            <Button variant="primary" onClick={() => onGoTo('welcome')} autoFocus>
+              See all your choices
+            </Button>
           )}
         </div>
       </Dialog>
@@ -67,8 +81,12 @@ export function ChooseDialog({ token, room, option, studioName, nextRoom, onClos
         {choose.isError && !fieldError(choose.error, 'comment') && <Notice tone="error">{errorMessage(choose.error)}</Notice>}
         <p className="text-sm text-ink-soft">{studioName} will be told. You can change your choice until they confirm it.</p>
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Not yet</Button>
-          <Button type="submit" variant="primary" busy={choose.isPending}>Choose this option</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Not yet
+          </Button>
+          <Button type="submit" variant="primary" busy={choose.isPending}>
+            Choose this option
+          </Button>
         </div>
       </form>
     </Dialog>

@@ -14,7 +14,14 @@ export function PieceCard({ piece, showPrices, onClose }: { piece: ClientPiece; 
     return () => window.removeEventListener('keydown', onKey);
   }, [onClose]);
   const rows: { term: string; value: React.ReactNode }[] = [
-    { term: 'Size', value: <>{pieceSizeText(piece)} <span className="text-ink-faint">(width × depth × height)</span></> },
+    {
+      term: 'Size',
+      value: (
+        <>
+          {pieceSizeText(piece)} <span className="text-ink-faint">(width × depth × height)</span>
+        </>
+      ),
+    },
   ];
   if (piece.elevation > 0) rows.push({ term: 'Hangs', value: elevationText(piece.elevation) });
   if (piece.finish) {
@@ -22,7 +29,13 @@ export function PieceCard({ piece, showPrices, onClose }: { piece: ClientPiece; 
       term: 'Finish',
       value: (
         <span className="inline-flex items-center gap-2">
-          {piece.finish.colourHex && <span className="size-4 rounded border border-line-strong" style={{ background: piece.finish.colourHex }} aria-hidden />}
+          {piece.finish.colourHex && (
+            <span
+              className="size-4 rounded border border-line-strong"
+              style={{ background: piece.finish.colourHex }}
+              aria-hidden
+            />
+          )}
           {piece.finish.name}
         </span>
       ),
@@ -36,7 +49,9 @@ export function PieceCard({ piece, showPrices, onClose }: { piece: ClientPiece; 
           <h3 className="font-bold">{pieceName(piece)}</h3>
           <p className="text-sm text-ink-soft">{piece.status === 'existing' ? 'Something you already have' : 'A new piece'}</p>
         </div>
-        <Button size="sm" variant="quiet" onClick={onClose} aria-label="Close the piece details">Close</Button>
+        <Button size="sm" variant="quiet" onClick={onClose} aria-label="Close the piece details">
+          Close
+        </Button>
       </div>
       <dl className="mt-3 flex flex-col gap-1.5 text-[15px]">
         {rows.map((r) => (

@@ -10,7 +10,12 @@ import { SAFETY_LINE } from './wording';
 /** The client's page behind the link: welcome, then one room at a time. */
 export function PresentationPage({ token }: { token: string }) {
   const presentation = usePresentation(token);
-  if (presentation.isPending) return <div className="flex min-h-screen items-center justify-center"><Spinner label="Opening your presentation…" /></div>;
+  if (presentation.isPending)
+    return (
+      <div className="flex min-h-screen items-center justify-center">
+        <Spinner label="Opening your presentation…" />
+      </div>
+    );
   if (presentation.isError) return <RefusedPage error={presentation.error} onRetry={() => void presentation.refetch()} />;
   return <PresentationView token={token} presentation={presentation.data} />;
 }
@@ -28,12 +33,15 @@ function useStep(roomIds: string[]): [string, (step: string) => void] {
     window.addEventListener('hashchange', onHash);
     return () => window.removeEventListener('hashchange', onHash);
   }, [read]);
-  const setStep = useCallback((next: string) => {
-    const index = roomIds.indexOf(next);
-    window.location.hash = index >= 0 ? `room-${index + 1}` : '';
-    setStepState(index >= 0 ? next : 'welcome');
-    window.scrollTo({ top: 0 });
-  }, [roomIds]);
+  const setStep = useCallback(
+    (next: string) => {
+      const index = roomIds.indexOf(next);
+      window.location.hash = index >= 0 ? `room-${index + 1}` : '';
+      setStepState(index >= 0 ? next : 'welcome');
+      window.scrollTo({ top: 0 });
+    },
+    [roomIds],
+  );
   return [step, setStep];
 }
 
@@ -44,7 +52,9 @@ function PresentationView({ token, presentation }: { token: string; presentation
   const room = rooms.find((r) => r.id === step) ?? null;
   const chosenCount = rooms.filter((r) => r.choice).length;
   // After choosing, lead on to the next room still open, looking forward first.
-  const nextRoom = room ? [...rooms.slice(rooms.indexOf(room) + 1), ...rooms.slice(0, rooms.indexOf(room))].find((r) => !r.choice) ?? null : null;
+  const nextRoom = room
+    ? ([...rooms.slice(rooms.indexOf(room) + 1), ...rooms.slice(0, rooms.indexOf(room))].find((r) => !r.choice) ?? null)
+    : null;
 
   useEffect(() => {
     document.title = `${projectName} · ${studioName}`;
@@ -62,11 +72,31 @@ function PresentationView({ token, presentation }: { token: string; presentation
             <div className="truncate font-bold">{projectName}</div>
           </div>
           <nav aria-label="Rooms" className="flex flex-wrap items-center gap-1">
-            <button type="button" className={tab(step === 'welcome')} aria-current={step === 'welcome' ? 'page' : undefined} onClick={() => setStep('welcome')}>Welcome</button>
+            <button
+              type="button"
+              className={tab(step === 'welcome')}
+              aria-current={step === 'welcome' ? 'page' : undefined}
+              onClick={() => setStep('welcome')}
+            >
+              Welcome
+            </button>
             {rooms.map((r) => (
-              <button key={r.id} type="button" className={tab(r.id === step)} aria-current={r.id === step ? 'page' : undefined} onClick={() => setStep(r.id)}>
+              <button
+                key={r.id}
+                type="button"
+                className={tab(r.id === step)}
+                aria-current={r.id === step ? 'page' : undefined}
+                onClick={() => setStep(r.id)}
+              >
                 {r.name}
-                {r.choice && <><span className="ml-1.5 text-pine" aria-hidden>✓</span><span className="sr-only"> (chosen)</span></>}
+                {r.choice && (
+                  <>
+                    <span className="ml-1.5 text-pine" aria-hidden>
+                      ✓
+                    </span>
+                    <span className="sr-only"> (chosen)</span>
+                  </>
+                )}
               </button>
             ))}
           </nav>
@@ -78,7 +108,9 @@ function PresentationView({ token, presentation }: { token: string; presentation
       <main className="flex-1">
         {decided && (
           <div className="mx-auto max-w-7xl px-6 pt-6">
-            <Notice tone="ok">{studioName} has confirmed your choices. Thank you! To change anything now, get in touch with them.</Notice>
+            <Notice tone="ok">
+              {studioName} has confirmed your choices. Thank you! To change anything now, get in touch with them.
+            </Notice>
           </div>
         )}
         {room ? (
@@ -97,7 +129,11 @@ function PresentationView({ token, presentation }: { token: string; presentation
         )}
       </main>
       {/* The room view carries the same line right under the picture. */}
-      {!room && <footer className="mx-auto max-w-3xl px-6 pt-2 pb-8 text-center text-sm leading-relaxed text-ink-faint">{SAFETY_LINE}</footer>}
+      {!room && (
+        <footer className="mx-auto max-w-3xl px-6 pt-2 pb-8 text-center text-sm leading-relaxed text-ink-faint">
+          {SAFETY_LINE}
+        </footer>
+      )}
     </div>
   );
 }

@@ -16,7 +16,9 @@ export function RefusedPage({ error, onRetry }: { error: unknown; onRetry: () =>
         <p className="mt-3 text-[15px] leading-relaxed text-ink-soft">{message}</p>
         {!refused && (
           <div className="mt-6">
-            <Button variant="primary" onClick={onRetry}>Try again</Button>
+            <Button variant="primary" onClick={onRetry}>
+              Try again
+            </Button>
           </div>
         )}
       </div>

@@ -20,7 +20,9 @@ const REDUCED_MOTION = '(prefers-reduced-motion: reduce)';
 
 /** The client's wish for less motion, followed live. */
 function usePrefersReducedMotion(): boolean {
-  const [reduced, setReduced] = useState(() => typeof window !== 'undefined' && window.matchMedia?.(REDUCED_MOTION).matches === true);
+  const [reduced, setReduced] = useState(
+    () => typeof window !== 'undefined' && window.matchMedia?.(REDUCED_MOTION).matches === true,
+  );
   useEffect(() => {
     const query = window.matchMedia?.(REDUCED_MOTION);
     if (!query) return undefined;
@@ -37,7 +39,15 @@ const NO_PROGRESS: TextureProgress = { settled: 0, total: 0 };
  * One room: the walk-through in 3D (Overview or Walk, one option or two side by side), its options
  * (one click or keys 1–9, the camera staying where it is), the pieces, and the choice.
  */
-export function RoomStage({ token, room, studioName, showPrices, decided, nextRoom, onGoTo }: {
+export function RoomStage({
+  token,
+  room,
+  studioName,
+  showPrices,
+  decided,
+  nextRoom,
+  onGoTo,
+}: {
   token: string;
   room: ClientRoom;
   studioName: string;
@@ -103,22 +113,43 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
   const closeHelp = useCallback(() => setHelp(false), []);
 
   const isChosen = chosen?.id === option.id;
-  const chip = 'pointer-events-none absolute top-3 left-3 max-w-[calc(100%-1.5rem)] truncate rounded-full bg-white/90 px-3 py-1 text-sm font-semibold shadow-sm';
+  const chip =
+    'pointer-events-none absolute top-3 left-3 max-w-[calc(100%-1.5rem)] truncate rounded-full bg-white/90 px-3 py-1 text-sm font-semibold shadow-sm';
   // `?pieces=boxes` draws the plain boxes instead of the forms, so the two can be compared (the bench does).
-  const pieceBuild = useMemo(() => (new URLSearchParams(window.location.search).get('pieces') === 'boxes' ? 'boxes' : 'forms'), []);
+  const pieceBuild = useMemo(
+    () => (new URLSearchParams(window.location.search).get('pieces') === 'boxes' ? 'boxes' : 'forms'),
+    [],
+  );
   const viewProps = { shell: room.shell, options: viewOptions, mode, eyeHeightMm, reducedMotion, link, pieceBuild } as const;
   return (
     <div className="mx-auto flex max-w-[100rem] flex-col gap-4 px-4 py-4 sm:px-6 lg:h-[calc(100dvh-4.25rem)] lg:flex-row">
       <section aria-labelledby="room-title" className="flex min-h-0 min-w-0 flex-1 flex-col gap-2">
         <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-2">
           <div className="flex min-w-0 items-baseline gap-3">
-            <h1 id="room-title" className="truncate text-2xl font-bold tracking-tight">{room.name}</h1>
-            <p className="shrink-0 text-sm text-ink-soft">Option {options.indexOf(option) + 1} of {options.length}</p>
+            <h1 id="room-title" className="truncate text-2xl font-bold tracking-tight">
+              {room.name}
+            </h1>
+            <p className="shrink-0 text-sm text-ink-soft">
+              Option {options.indexOf(option) + 1} of {options.length}
+            </p>
           </div>
-          <ViewModeBar mode={mode} onMode={setMode} compare={comparing} onCompare={setCompare} canCompare={others.length > 0} onHelp={() => setHelp((h) => !h)} />
+          <ViewModeBar
+            mode={mode}
+            onMode={setMode}
+            compare={comparing}
+            onCompare={setCompare}
+            canCompare={others.length > 0}
+            onHelp={() => setHelp((h) => !h)}
+          />
         </div>
         <div className="relative min-h-[22rem] flex-1 overflow-hidden rounded-2xl border border-line bg-sand max-lg:h-[min(62vh,34rem)]">
-          <Suspense fallback={<div className="flex h-full items-center justify-center text-ink-soft" role="status">Setting up the 3D view…</div>}>
+          <Suspense
+            fallback={
+              <div className="flex h-full items-center justify-center text-ink-soft" role="status">
+                Setting up the 3D view…
+              </div>
+            }
+          >
             <div className={`grid h-full gap-px bg-line ${comparing ? 'grid-cols-2' : 'grid-cols-1'}`}>
               <div className="relative min-w-0 bg-sand">
                 <WalkthroughView
@@ -135,7 +166,12 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
               </div>
               {comparing && compared && (
                 <div className="relative min-w-0 bg-sand">
-                  <WalkthroughView {...viewProps} optionId={compared.id} viewId="compare" label={`${room.name}, ${compared.label}, in 3D, side by side`} />
+                  <WalkthroughView
+                    {...viewProps}
+                    optionId={compared.id}
+                    viewId="compare"
+                    label={`${room.name}, ${compared.label}, in 3D, side by side`}
+                  />
                   <div className={chip}>{compared.label}</div>
                 </div>
               )}
@@ -152,8 +188,16 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
           {comparing && others.length > 1 && (
             <label className="absolute right-3 bottom-3 z-10 flex items-center gap-2 rounded-xl bg-white/95 px-3 py-2 text-sm font-semibold shadow-sm ring-1 ring-line-strong/70">
               Side by side with
-              <select value={compared?.id} onChange={(e) => setCompareId(e.target.value)} className="rounded-md border border-line-strong bg-white px-2 py-1 font-normal">
-                {others.map((o) => <option key={o.id} value={o.id}>{o.label}</option>)}
+              <select
+                value={compared?.id}
+                onChange={(e) => setCompareId(e.target.value)}
+                className="rounded-md border border-line-strong bg-white px-2 py-1 font-normal"
+              >
+                {others.map((o) => (
+                  <option key={o.id} value={o.id}>
+                    {o.label}
+                  </option>
+                ))}
               </select>
             </label>
           )}
@@ -171,9 +215,14 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
         <p className="text-sm text-ink-faint">{SAFETY_LINE}</p>
       </section>
 
-      <aside className="flex shrink-0 flex-col gap-4 lg:w-[22rem] lg:overflow-y-auto lg:pb-2" aria-label="Options and your choice">
+      <aside
+        className="flex shrink-0 flex-col gap-4 lg:w-[22rem] lg:overflow-y-auto lg:pb-2"
+        aria-label="Options and your choice"
+      >
         <section aria-labelledby="options-title" className="rounded-2xl border border-line bg-white p-5">
-          <h2 id="options-title" className="font-bold">{options.length === 1 ? 'The option' : `${options.length} options for this room`}</h2>
+          <h2 id="options-title" className="font-bold">
+            {options.length === 1 ? 'The option' : `${options.length} options for this room`}
+          </h2>
           <div role="group" aria-label="Options" className="mt-3 flex flex-col gap-2">
             {options.map((o, i) => (
               <button
@@ -183,9 +232,13 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
                 onClick={() => show(o.id)}
                 className="flex items-center gap-3 rounded-xl border border-line px-3 py-2.5 text-left transition-colors hover:border-pine aria-pressed:border-pine aria-pressed:bg-pine-wash"
               >
-                <kbd className="flex size-7 shrink-0 items-center justify-center rounded-md border border-line-strong bg-white font-sans text-sm font-semibold">{i + 1}</kbd>
+                <kbd className="flex size-7 shrink-0 items-center justify-center rounded-md border border-line-strong bg-white font-sans text-sm font-semibold">
+                  {i + 1}
+                </kbd>
                 <span className="min-w-0 flex-1 font-semibold">{o.label}</span>
-                {chosen?.id === o.id && <span className="shrink-0 rounded-full bg-pine px-2 py-0.5 text-xs font-semibold text-white">Your choice</span>}
+                {chosen?.id === o.id && (
+                  <span className="shrink-0 rounded-full bg-pine px-2 py-0.5 text-xs font-semibold text-white">Your choice</span>
+                )}
               </button>
             ))}
           </div>
@@ -193,9 +246,13 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
         </section>
 
         <section aria-labelledby="pieces-title" className="rounded-2xl border border-line bg-white p-5">
-          <h2 id="pieces-title" className="font-bold">In this option</h2>
+          <h2 id="pieces-title" className="font-bold">
+            In this option
+          </h2>
           {piece ? (
-            <div className="mt-3"><PieceCard piece={piece} showPrices={showPrices} onClose={() => setPieceId(null)} /></div>
+            <div className="mt-3">
+              <PieceCard piece={piece} showPrices={showPrices} onClose={() => setPieceId(null)} />
+            </div>
           ) : (
             <p className="mt-1 text-sm text-ink-soft">Tap a piece in the picture, or a name below, to see its size and finish.</p>
           )}
@@ -220,18 +277,26 @@ export function RoomStage({ token, room, studioName, showPrices, decided, nextRo
         </section>
 
         <section aria-labelledby="choice-title" className="rounded-2xl border border-line bg-white p-5">
-          <h2 id="choice-title" className="font-bold">Your choice</h2>
+          <h2 id="choice-title" className="font-bold">
+            Your choice
+          </h2>
           {chosen && room.choice ? (
             <div className="mt-1 text-[15px]">
-              <p><strong>{chosen.label}</strong>, chosen {momentText(room.choice.chosenAt)}.</p>
+              <p>
+                <strong>{chosen.label}</strong>, chosen {momentText(room.choice.chosenAt)}.
+              </p>
               {room.choice.comment && <p className="mt-1 text-ink-soft">“{room.choice.comment}”</p>}
             </div>
           ) : (
             <p className="mt-1 text-[15px] text-ink-soft">Not chosen yet. Look at each option, then choose the one you like.</p>
           )}
-          {chosen && !isChosen && !decided && <p className="mt-3 text-sm text-ink-soft">Choosing {option.label} replaces your choice.</p>}
+          {chosen && !isChosen && !decided && (
+            <p className="mt-3 text-sm text-ink-soft">Choosing {option.label} replaces your choice.</p>
+          )}
           {decided ? (
-            <p className="mt-3 text-sm text-ink-soft">{studioName} has confirmed the choices. To change anything, get in touch with them.</p>
+            <p className="mt-3 text-sm text-ink-soft">
+              {studioName} has confirmed the choices. To change anything, get in touch with them.
+            </p>
           ) : (
             <Button variant={isChosen ? 'secondary' : 'primary'} className="mt-4 w-full" onClick={() => setChoosing(true)}>
               {isChosen ? 'Change your comment' : 'Choose this option'}

@@ -7,27 +7,81 @@ import type { TextureProgress, ViewCommands, ViewMode, WalkMove } from '../../..
 /** Eye height limits for Walk (mm): a child or a seated person up to a tall adult. */
 export const EYE_HEIGHT = { minMm: 1000, maxMm: 2000, stepMm: 50, defaultMm: 1600 } as const;
 
-const round = 'flex size-10 items-center justify-center rounded-full bg-white/95 text-ink shadow-sm ring-1 ring-line-strong/70 transition-colors hover:bg-pine-wash hover:text-pine-dark active:bg-pine-wash';
+const round =
+  'flex size-10 items-center justify-center rounded-full bg-white/95 text-ink shadow-sm ring-1 ring-line-strong/70 transition-colors hover:bg-pine-wash hover:text-pine-dark active:bg-pine-wash';
 
 function Icon({ children }: { children: ReactNode }) {
   return (
-    <svg viewBox="0 0 24 24" className="size-5" fill="none" stroke="currentColor" strokeWidth={2} strokeLinecap="round" strokeLinejoin="round" aria-hidden>
+    <svg
+      viewBox="0 0 24 24"
+      className="size-5"
+      fill="none"
+      stroke="currentColor"
+      strokeWidth={2}
+      strokeLinecap="round"
+      strokeLinejoin="round"
+      aria-hidden
+    >
       {children}
     </svg>
   );
 }
 
 const ICONS = {
-  turnLeft: <Icon><path d="M8 5 4 9l4 4" /><path d="M4 9h10a6 6 0 0 1 0 12h-3" /></Icon>,
-  turnRight: <Icon><path d="m16 5 4 4-4 4" /><path d="M20 9H10a6 6 0 0 0 0 12h3" /></Icon>,
-  closer: <Icon><path d="M12 6v12M6 12h12" /></Icon>,
-  further: <Icon><path d="M6 12h12" /></Icon>,
-  above: <Icon><rect x="5" y="5" width="14" height="14" rx="1.5" /><path d="M5 12h6M15 5v8" /></Icon>,
-  start: <Icon><path d="M4 12a8 8 0 1 0 2.4-5.7" /><path d="M4 4v4h4" /></Icon>,
-  up: <Icon><path d="M12 19V5M6 11l6-6 6 6" /></Icon>,
-  down: <Icon><path d="M12 5v14M6 13l6 6 6-6" /></Icon>,
-  left: <Icon><path d="M19 12H5M11 6l-6 6 6 6" /></Icon>,
-  right: <Icon><path d="M5 12h14M13 6l6 6-6 6" /></Icon>,
+  turnLeft: (
+    <Icon>
+      <path d="M8 5 4 9l4 4" />
+      <path d="M4 9h10a6 6 0 0 1 0 12h-3" />
+    </Icon>
+  ),
+  turnRight: (
+    <Icon>
+      <path d="m16 5 4 4-4 4" />
+      <path d="M20 9H10a6 6 0 0 0 0 12h3" />
+    </Icon>
+  ),
+  closer: (
+    <Icon>
+      <path d="M12 6v12M6 12h12" />
+    </Icon>
+  ),
+  further: (
+    <Icon>
+      <path d="M6 12h12" />
+    </Icon>
+  ),
+  above: (
+    <Icon>
+      <rect x="5" y="5" width="14" height="14" rx="1.5" />
+      <path d="M5 12h6M15 5v8" />
+    </Icon>
+  ),
+  start: (
+    <Icon>
+      <path d="M4 12a8 8 0 1 0 2.4-5.7" />
+      <path d="M4 4v4h4" />
+    </Icon>
+  ),
+  up: (
+    <Icon>
+      <path d="M12 19V5M6 11l6-6 6 6" />
+    </Icon>
+  ),
+  down: (
+    <Icon>
+      <path d="M12 5v14M6 13l6 6 6-6" />
+    </Icon>
+  ),
+  left: (
+    <Icon>
+      <path d="M19 12H5M11 6l-6 6 6 6" />
+    </Icon>
+  ),
+  right: (
+    <Icon>
+      <path d="M5 12h14M13 6l6 6-6 6" />
+    </Icon>
+  ),
 };
 
 function CommandButton({ label, icon, onPress }: { label: string; icon: ReactNode; onPress: () => void }) {
@@ -53,7 +107,17 @@ export function OverviewButtons({ commands }: { commands: React.RefObject<ViewCo
 }
 
 // Held with a pointer it keeps moving, like a held key; pressed from the keyboard it takes one step.
-function HoldButton({ label, icon, move, commands }: { label: string; icon: ReactNode; move: WalkMove; commands: React.RefObject<ViewCommands | null> }) {
+function HoldButton({
+  label,
+  icon,
+  move,
+  commands,
+}: {
+  label: string;
+  icon: ReactNode;
+  move: WalkMove;
+  commands: React.RefObject<ViewCommands | null>;
+}) {
   const holding = useRef(false);
   const release = () => {
     if (!holding.current) return;
@@ -95,7 +159,11 @@ function HoldButton({ label, icon, move, commands }: { label: string; icon: Reac
 }
 
 /** Forward, back, sideways and turning, and the eye height, for Walk. */
-export function WalkButtons({ commands, eyeHeightMm, onEyeHeight }: {
+export function WalkButtons({
+  commands,
+  eyeHeightMm,
+  onEyeHeight,
+}: {
   commands: React.RefObject<ViewCommands | null>;
   eyeHeightMm: number;
   onEyeHeight: (mm: number) => void;
@@ -127,7 +195,14 @@ export function WalkButtons({ commands, eyeHeightMm, onEyeHeight }: {
 }
 
 /** Overview or Walk, and Compare: the three ways to look. */
-export function ViewModeBar({ mode, onMode, compare, onCompare, canCompare, onHelp }: {
+export function ViewModeBar({
+  mode,
+  onMode,
+  compare,
+  onCompare,
+  canCompare,
+  onHelp,
+}: {
   mode: ViewMode;
   onMode: (mode: ViewMode) => void;
   compare: boolean;
@@ -135,12 +210,22 @@ export function ViewModeBar({ mode, onMode, compare, onCompare, canCompare, onHe
   canCompare: boolean;
   onHelp: () => void;
 }) {
-  const seg = (on: boolean) => `rounded-md px-3 py-1.5 text-sm font-semibold transition-colors ${on ? 'bg-white text-pine-dark shadow-sm' : 'text-ink-soft hover:text-ink'}`;
+  const seg = (on: boolean) =>
+    `rounded-md px-3 py-1.5 text-sm font-semibold transition-colors ${on ? 'bg-white text-pine-dark shadow-sm' : 'text-ink-soft hover:text-ink'}`;
   return (
     <div className="flex flex-wrap items-center gap-2">
       <div role="group" aria-label="How to look" className="flex rounded-lg bg-sand p-1">
-        <button type="button" className={seg(mode === 'overview')} aria-pressed={mode === 'overview'} onClick={() => onMode('overview')}>Overview</button>
-        <button type="button" className={seg(mode === 'walk')} aria-pressed={mode === 'walk'} onClick={() => onMode('walk')}>Walk</button>
+        <button
+          type="button"
+          className={seg(mode === 'overview')}
+          aria-pressed={mode === 'overview'}
+          onClick={() => onMode('overview')}
+        >
+          Overview
+        </button>
+        <button type="button" className={seg(mode === 'walk')} aria-pressed={mode === 'walk'} onClick={() => onMode('walk')}>
+          Walk
+        </button>
       </div>
       {canCompare && (
         <button
@@ -152,7 +237,12 @@ export function ViewModeBar({ mode, onMode, compare, onCompare, canCompare, onHe
           Compare
         </button>
       )}
-      <button type="button" onClick={onHelp} className="rounded-lg border border-line-strong bg-white px-3 py-1.5 text-sm font-semibold text-ink hover:bg-sand" aria-haspopup="dialog">
+      <button
+        type="button"
+        onClick={onHelp}
+        className="rounded-lg border border-line-strong bg-white px-3 py-1.5 text-sm font-semibold text-ink hover:bg-sand"
+        aria-haspopup="dialog"
+      >
         Keys
       </button>
     </div>
@@ -168,9 +258,18 @@ export function LoadingBar({ progress }: { progress: TextureProgress }) {
       <div className="w-64 rounded-full bg-white/95 px-3 py-2 shadow-sm ring-1 ring-line-strong/70">
         <div className="flex justify-between text-xs font-semibold text-ink-soft">
           <span>Loading the finishes</span>
-          <span>{progress.settled} of {progress.total}</span>
+          <span>
+            {progress.settled} of {progress.total}
+          </span>
         </div>
-        <div role="progressbar" aria-label="Loading the finishes" aria-valuemin={0} aria-valuemax={progress.total} aria-valuenow={progress.settled} className="mt-1.5 h-1.5 overflow-hidden rounded-full bg-sand">
+        <div
+          role="progressbar"
+          aria-label="Loading the finishes"
+          aria-valuemin={0}
+          aria-valuemax={progress.total}
+          aria-valuenow={progress.settled}
+          className="mt-1.5 h-1.5 overflow-hidden rounded-full bg-sand"
+        >
           <div className="h-full rounded-full bg-pine transition-[width]" style={{ width: `${Math.max(6, share * 100)}%` }} />
         </div>
       </div>
@@ -208,16 +307,31 @@ export function KeyHelp({ mode, optionCount, onClose }: { mode: ViewMode; option
   }, [onClose]);
   const rows = [...KEYS[mode], ...(optionCount > 1 ? [[`1–${optionCount}`, 'show another option'] as [string, string]] : [])];
   return (
-    <div role="dialog" aria-label="Keys" className="absolute top-3 right-3 z-20 w-72 rounded-2xl bg-white/97 p-4 shadow-lg ring-1 ring-line-strong/70">
+    <div
+      role="dialog"
+      aria-label="Keys"
+      className="absolute top-3 right-3 z-20 w-72 rounded-2xl bg-white/97 p-4 shadow-lg ring-1 ring-line-strong/70"
+    >
       <div className="flex items-center justify-between">
         <h2 className="font-bold">Keys in {mode === 'walk' ? 'Walk' : 'the Overview'}</h2>
-        <button ref={close} type="button" onClick={onClose} className="rounded-md px-2 py-1 text-sm font-semibold text-ink-soft hover:bg-sand">Close</button>
+        <button
+          ref={close}
+          type="button"
+          onClick={onClose}
+          className="rounded-md px-2 py-1 text-sm font-semibold text-ink-soft hover:bg-sand"
+        >
+          Close
+        </button>
       </div>
       <p className="mt-1 text-sm text-ink-soft">Click the picture first, so the keys reach it.</p>
       <dl className="mt-3 grid grid-cols-[7rem_1fr] gap-x-3 gap-y-1.5 text-sm">
         {rows.map(([key, what]) => (
           <div key={key} className="contents">
-            <dt><kbd className="rounded border border-line-strong bg-paper px-1.5 py-0.5 font-sans text-xs font-semibold">{key}</kbd></dt>
+            <dt>
+              <kbd className="rounded border border-line-strong bg-paper px-1.5 py-0.5 font-sans text-xs font-semibold">
+                {key}
+              </kbd>
+            </dt>
             <dd className="text-ink-soft">{what}</dd>
           </div>
         ))}

@@ -1,7 +1,10 @@
 // Presentations of a project, for the designer: one key factory, mutations invalidate through it.
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
-  CreatePresentationBody, ExtendPresentationBody, PresentationSummary, SendPresentationBody,
+  CreatePresentationBody,
+  ExtendPresentationBody,
+  PresentationSummary,
+  SendPresentationBody,
 } from '../../../../shared/schemas/presentation';
 import type { OptionRecord, RoomRecord, RoomSummary } from '../../../../shared/schemas/room-api';
 import { api } from '../../../lib/api';
@@ -17,7 +20,8 @@ export const presentationKeys = {
 export const presentationListQuery = (projectId: string) =>
   queryOptions({
     queryKey: presentationKeys.list(projectId),
-    queryFn: () => api<{ presentations: PresentationSummary[] }>(`/api/projects/${projectId}/presentations`).then((r) => r.presentations),
+    queryFn: () =>
+      api<{ presentations: PresentationSummary[] }>(`/api/projects/${projectId}/presentations`).then((r) => r.presentations),
   });
 
 export const usePresentations = (projectId: string) => useQuery(presentationListQuery(projectId));
@@ -68,7 +72,8 @@ export function useCreatePresentation(projectId: string) {
 export function useSendPresentation(projectId: string) {
   const invalidate = useInvalidate(projectId);
   return useMutation({
-    mutationFn: ({ id, ...body }: SendPresentationBody & { id: string }) => api<One>(`/api/presentations/${id}/send`, { method: 'POST', body }),
+    mutationFn: ({ id, ...body }: SendPresentationBody & { id: string }) =>
+      api<One>(`/api/presentations/${id}/send`, { method: 'POST', body }),
     onSuccess: invalidate,
   });
 }
@@ -84,7 +89,8 @@ export function useWithdrawPresentation(projectId: string) {
 export function useExtendPresentation(projectId: string) {
   const invalidate = useInvalidate(projectId);
   return useMutation({
-    mutationFn: ({ id, ...body }: ExtendPresentationBody & { id: string }) => api<One>(`/api/presentations/${id}/extend`, { method: 'POST', body }),
+    mutationFn: ({ id, ...body }: ExtendPresentationBody & { id: string }) =>
+      api<One>(`/api/presentations/${id}/extend`, { method: 'POST', body }),
     onSuccess: invalidate,
   });
 }
@@ -92,7 +98,8 @@ export function useExtendPresentation(projectId: string) {
 export function useDecideProject(projectId: string) {
   const invalidate = useInvalidate(projectId);
   return useMutation({
-    mutationFn: (presentationId: string) => api<One>(`/api/projects/${projectId}/decide`, { method: 'POST', body: { presentationId } }),
+    mutationFn: (presentationId: string) =>
+      api<One>(`/api/projects/${projectId}/decide`, { method: 'POST', body: { presentationId } }),
     onSuccess: invalidate,
   });
 }

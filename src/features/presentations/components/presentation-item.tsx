@@ -11,7 +11,13 @@ import { useDecideProject, useExtendPresentation, useSendPresentation, useWithdr
 const EXTEND_CHOICES = [7, 14, 30, 60, 90];
 
 /** One presentation: its state, when it was opened, what was looked at and chosen, and its actions. */
-export function PresentationItem({ p, projectId, projectState, clientEmail, canEdit }: {
+export function PresentationItem({
+  p,
+  projectId,
+  projectState,
+  clientEmail,
+  canEdit,
+}: {
   p: PresentationSummary;
   projectId: string;
   projectState: string;
@@ -33,7 +39,10 @@ export function PresentationItem({ p, projectId, projectState, clientEmail, canE
   };
 
   const sent = p.sentAt ? `Sent to ${p.sentTo} on ${formatDate(p.sentAt)}` : 'Not e-mailed yet';
-  const until = p.state === 'withdrawn' ? `withdrawn ${formatDateTime(p.withdrawnAt!)}` : `${p.state === 'expired' ? 'expired' : 'works until'} ${formatDate(p.expiresAt)}`;
+  const until =
+    p.state === 'withdrawn'
+      ? `withdrawn ${formatDateTime(p.withdrawnAt!)}`
+      : `${p.state === 'expired' ? 'expired' : 'works until'} ${formatDate(p.expiresAt)}`;
   return (
     <li className="rounded-xl border border-line p-4" aria-label={`Presentation of ${formatDateTime(p.createdAt)}`}>
       <div className="flex flex-wrap items-start justify-between gap-2">
@@ -43,7 +52,9 @@ export function PresentationItem({ p, projectId, projectState, clientEmail, canE
             {p.decidedAt && <Badge value="decided" label="decided" />}
           </div>
           <p className="mt-0.5 text-sm text-ink-soft">
-            {[p.createdBy && `by ${p.createdBy}`, sent, `link ${until}`, p.showPrices ? 'prices shown' : 'prices hidden'].filter(Boolean).join(' · ')}
+            {[p.createdBy && `by ${p.createdBy}`, sent, `link ${until}`, p.showPrices ? 'prices shown' : 'prices hidden']
+              .filter(Boolean)
+              .join(' · ')}
           </p>
           <p className="mt-0.5 text-sm text-ink-soft">
             {p.lastOpenedAt && p.firstOpenedAt
@@ -51,13 +62,23 @@ export function PresentationItem({ p, projectId, projectState, clientEmail, canE
               : 'Not opened yet'}
           </p>
         </div>
-        <p className="text-sm font-semibold text-ink-soft">{chosen} of {p.rooms.length} chosen</p>
+        <p className="text-sm font-semibold text-ink-soft">
+          {chosen} of {p.rooms.length} chosen
+        </p>
       </div>
 
       <table className="mt-3 w-full table-fixed text-left text-sm">
-        <colgroup><col className="w-[26%]" /><col className="w-[40%]" /><col /></colgroup>
+        <colgroup>
+          <col className="w-[26%]" />
+          <col className="w-[40%]" />
+          <col />
+        </colgroup>
         <thead className="text-ink-faint">
-          <tr><th className="py-1 pr-3 font-medium">Room</th><th className="py-1 pr-3 font-medium">Options shown · looked at</th><th className="py-1 font-medium">Choice</th></tr>
+          <tr>
+            <th className="py-1 pr-3 font-medium">Room</th>
+            <th className="py-1 pr-3 font-medium">Options shown · looked at</th>
+            <th className="py-1 font-medium">Choice</th>
+          </tr>
         </thead>
         <tbody className="align-top">
           {p.rooms.map((r) => {
@@ -94,20 +115,44 @@ export function PresentationItem({ p, projectId, projectState, clientEmail, canE
 
       {canEdit && p.state !== 'withdrawn' && (
         <div className="mt-3 flex flex-wrap items-center gap-2 border-t border-line pt-3">
-          {p.state === 'active' && <Button size="sm" onClick={() => setDialog('send')}>Send by e-mail</Button>}
-          {p.state === 'active' && p.link && <Button size="sm" onClick={() => void copy()}>Copy link</Button>}
-          <Button size="sm" onClick={() => setDialog('extend')}>Extend</Button>
-          <Button size="sm" variant="danger" onClick={() => setDialog('withdraw')}>Withdraw</Button>
+          {p.state === 'active' && (
+            <Button size="sm" onClick={() => setDialog('send')}>
+              Send by e-mail
+            </Button>
+          )}
+          {p.state === 'active' && p.link && (
+            <Button size="sm" onClick={() => void copy()}>
+              Copy link
+            </Button>
+          )}
+          <Button size="sm" onClick={() => setDialog('extend')}>
+            Extend
+          </Button>
+          <Button size="sm" variant="danger" onClick={() => setDialog('withdraw')}>
+            Withdraw
+          </Button>
           {p.complete && projectState !== 'decided' && projectState !== 'archived' && (
-            <Button size="sm" variant="primary" className="ml-auto" busy={decide.isPending} onClick={() => decide.mutate(p.id)}>Mark as decided</Button>
+            <Button size="sm" variant="primary" className="ml-auto" busy={decide.isPending} onClick={() => decide.mutate(p.id)}>
+              Mark as decided
+            </Button>
           )}
         </div>
       )}
-      {copied === 'yes' && <p className="mt-2 text-sm text-pine-dark" role="status">Link copied. Paste it into a message to your client.</p>}
-      {copied === 'no' && p.link && (
-        <div className="mt-2"><TextField label="Link (select and copy it)" readOnly value={p.link} onFocus={(e) => e.target.select()} /></div>
+      {copied === 'yes' && (
+        <p className="mt-2 text-sm text-pine-dark" role="status">
+          Link copied. Paste it into a message to your client.
+        </p>
       )}
-      {decide.isError && <div className="mt-2"><Notice tone="error">{errorMessage(decide.error)}</Notice></div>}
+      {copied === 'no' && p.link && (
+        <div className="mt-2">
+          <TextField label="Link (select and copy it)" readOnly value={p.link} onFocus={(e) => e.target.select()} />
+        </div>
+      )}
+      {decide.isError && (
+        <div className="mt-2">
+          <Notice tone="error">{errorMessage(decide.error)}</Notice>
+        </div>
+      )}
 
       {dialog === 'send' && <SendDialog p={p} projectId={projectId} clientEmail={clientEmail} onClose={() => setDialog(null)} />}
       {dialog === 'extend' && <ExtendDialog p={p} projectId={projectId} onClose={() => setDialog(null)} />}
@@ -116,7 +161,17 @@ export function PresentationItem({ p, projectId, projectState, clientEmail, canE
   );
 }
 
-function SendDialog({ p, projectId, clientEmail, onClose }: { p: PresentationSummary; projectId: string; clientEmail: string | null; onClose: () => void }) {
+function SendDialog({
+  p,
+  projectId,
+  clientEmail,
+  onClose,
+}: {
+  p: PresentationSummary;
+  projectId: string;
+  clientEmail: string | null;
+  onClose: () => void;
+}) {
   const send = useSendPresentation(projectId);
   const [to, setTo] = useState(p.sentTo ?? clientEmail ?? '');
   const submit = (e: FormEvent) => {
@@ -126,12 +181,23 @@ function SendDialog({ p, projectId, clientEmail, onClose }: { p: PresentationSum
   return (
     <Dialog open onClose={onClose} title="Send the link by e-mail">
       <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-        <TextField label="E-mail" type="email" value={to} onChange={(e) => setTo(e.target.value)} error={fieldError(send.error, 'to')} autoFocus />
+        <TextField
+          label="E-mail"
+          type="email"
+          value={to}
+          onChange={(e) => setTo(e.target.value)}
+          error={fieldError(send.error, 'to')}
+          autoFocus
+        />
         <p className="text-sm text-ink-soft">The e-mail carries your message and the link; the client needs no account.</p>
         {send.isError && !fieldError(send.error, 'to') && <Notice tone="error">{errorMessage(send.error)}</Notice>}
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" busy={send.isPending}>Send</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary" busy={send.isPending}>
+            Send
+          </Button>
         </div>
       </form>
     </Dialog>
@@ -151,14 +217,26 @@ function ExtendDialog({ p, projectId, onClose }: { p: PresentationSummary; proje
         <p className="text-[15px]">
           The link {p.state === 'expired' ? 'expired' : 'works until'} {formatDate(p.expiresAt)}. The client keeps the same link.
         </p>
-        <SelectField label={p.state === 'expired' ? 'Open it again for' : 'Add'} value={days} onChange={(e) => setDays(Number(e.target.value))}>
-          {EXTEND_CHOICES.map((d) => <option key={d} value={d}>{d} days</option>)}
+        <SelectField
+          label={p.state === 'expired' ? 'Open it again for' : 'Add'}
+          value={days}
+          onChange={(e) => setDays(Number(e.target.value))}
+        >
+          {EXTEND_CHOICES.map((d) => (
+            <option key={d} value={d}>
+              {d} days
+            </option>
+          ))}
         </SelectField>
         <p className="text-sm text-ink-faint">A link can be kept open until {formatDate(p.latestExpiry)} at the latest.</p>
         {extend.isError && <Notice tone="error">{errorMessage(extend.error)}</Notice>}
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" busy={extend.isPending}>Extend</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary" busy={extend.isPending}>
+            Extend
+          </Button>
         </div>
       </form>
     </Dialog>
@@ -169,11 +247,22 @@ function WithdrawDialog({ p, projectId, onClose }: { p: PresentationSummary; pro
   const withdraw = useWithdrawPresentation(projectId);
   return (
     <Dialog open onClose={onClose} title="Withdraw this link?">
-      <p className="text-[15px]">The link stops working straight away. The client’s choices so far stay on the project. A withdrawn link cannot be opened again; you can make a new presentation.</p>
-      {withdraw.isError && <div className="mt-4"><Notice tone="error">{errorMessage(withdraw.error)}</Notice></div>}
+      <p className="text-[15px]">
+        The link stops working straight away. The client’s choices so far stay on the project. A withdrawn link cannot be opened
+        again; you can make a new presentation.
+      </p>
+      {withdraw.isError && (
+        <div className="mt-4">
+          <Notice tone="error">{errorMessage(withdraw.error)}</Notice>
+        </div>
+      )}
       <div className="mt-6 flex justify-end gap-2">
-        <Button variant="quiet" onClick={onClose}>Keep it</Button>
-        <Button variant="danger" busy={withdraw.isPending} onClick={() => withdraw.mutate(p.id, { onSuccess: onClose })}>Withdraw</Button>
+        <Button variant="quiet" onClick={onClose}>
+          Keep it
+        </Button>
+        <Button variant="danger" busy={withdraw.isPending} onClick={() => withdraw.mutate(p.id, { onSuccess: onClose })}>
+          Withdraw
+        </Button>
       </div>
     </Dialog>
   );

@@ -9,7 +9,15 @@ import { NewPresentationDialog } from './new-presentation-dialog';
 import { PresentationItem } from './presentation-item';
 
 /** The project's presentations: make one, send it, follow it, and confirm the client's choices. */
-export function PresentationsPanel({ projectId, projectState, clientEmail }: { projectId: string; projectState: string; clientEmail: string | null }) {
+export function PresentationsPanel({
+  projectId,
+  projectState,
+  clientEmail,
+}: {
+  projectId: string;
+  projectState: string;
+  clientEmail: string | null;
+}) {
   const list = usePresentations(projectId);
   const canEdit = useCanEdit() && projectState !== 'archived';
   const create = useCreatePresentation(projectId);
@@ -30,7 +38,10 @@ export function PresentationsPanel({ projectId, projectState, clientEmail }: { p
       await send.mutateAsync({ id: presentation.id });
       setNotice({ tone: 'ok', text: `Sent to ${clientEmail}.` });
     } catch (err) {
-      setNotice({ tone: 'error', text: `The link is made, but the e-mail did not go: ${errorMessage(err)} Use “Send by e-mail” to try again.` });
+      setNotice({
+        tone: 'error',
+        text: `The link is made, but the e-mail did not go: ${errorMessage(err)} Use “Send by e-mail” to try again.`,
+      });
     }
   };
 
@@ -38,20 +49,56 @@ export function PresentationsPanel({ projectId, projectState, clientEmail }: { p
     <div>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
         <p className="text-sm text-ink-soft">A link for your client to walk round the options in 3D and choose one per room.</p>
-        {canEdit && <Button size="sm" variant="primary" onClick={() => { create.reset(); setMaking(true); }}>New presentation</Button>}
+        {canEdit && (
+          <Button
+            size="sm"
+            variant="primary"
+            onClick={() => {
+              create.reset();
+              setMaking(true);
+            }}
+          >
+            New presentation
+          </Button>
+        )}
       </div>
-      {projectState === 'decided' && <div className="mb-4"><Notice tone="ok">The project is decided: the client’s choices are confirmed and can no longer be changed from the link.</Notice></div>}
-      {notice && <div className="mb-4"><Notice tone={notice.tone}>{notice.text}</Notice></div>}
-      {list.isPending ? <Spinner /> : list.isError ? <Notice tone="error">{errorMessage(list.error)}</Notice> : list.data.length === 0 ? (
-        <EmptyState title="No presentations yet.">When the rooms have their options, send your client a link to walk through them and choose.</EmptyState>
+      {projectState === 'decided' && (
+        <div className="mb-4">
+          <Notice tone="ok">
+            The project is decided: the client’s choices are confirmed and can no longer be changed from the link.
+          </Notice>
+        </div>
+      )}
+      {notice && (
+        <div className="mb-4">
+          <Notice tone={notice.tone}>{notice.text}</Notice>
+        </div>
+      )}
+      {list.isPending ? (
+        <Spinner />
+      ) : list.isError ? (
+        <Notice tone="error">{errorMessage(list.error)}</Notice>
+      ) : list.data.length === 0 ? (
+        <EmptyState title="No presentations yet.">
+          When the rooms have their options, send your client a link to walk through them and choose.
+        </EmptyState>
       ) : (
         <ul className="flex flex-col gap-3">
           {list.data.map((p) => (
-            <PresentationItem key={p.id} p={p} projectId={projectId} projectState={projectState} clientEmail={clientEmail} canEdit={canEdit} />
+            <PresentationItem
+              key={p.id}
+              p={p}
+              projectId={projectId}
+              projectState={projectState}
+              clientEmail={clientEmail}
+              canEdit={canEdit}
+            />
           ))}
         </ul>
       )}
-      <p className="mt-3 text-xs text-ink-faint">Opening the link while signed in to Parlour is not counted as the client’s visit.</p>
+      <p className="mt-3 text-xs text-ink-faint">
+        Opening the link while signed in to Parlour is not counted as the client’s visit.
+      </p>
       {making && (
         <NewPresentationDialog
           projectId={projectId}

@@ -48,7 +48,8 @@ export function useCreateProject() {
 export function useUpdateProject(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (patch: ProjectPatch) => api<{ project: ProjectSummary }>(`/api/projects/${id}`, { method: 'PATCH', body: patch }),
+    mutationFn: (patch: ProjectPatch) =>
+      api<{ project: ProjectSummary }>(`/api/projects/${id}`, { method: 'PATCH', body: patch }),
     onSuccess: () => qc.invalidateQueries({ queryKey: projectKeys.all }),
   });
 }

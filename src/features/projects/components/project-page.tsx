@@ -21,7 +21,9 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
     return (
       <div className="flex flex-col gap-4">
         <Notice tone="error">{errorMessage(project.error)}</Notice>
-        <Link to="/projects" className="font-semibold text-pine">Back to projects</Link>
+        <Link to="/projects" className="font-semibold text-pine">
+          Back to projects
+        </Link>
       </div>
     );
   }
@@ -31,7 +33,11 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
   return (
     <div>
       <PageHeader
-        eyebrow={<Link to="/projects" className="hover:text-ink hover:underline">Projects</Link>}
+        eyebrow={
+          <Link to="/projects" className="hover:text-ink hover:underline">
+            Projects
+          </Link>
+        }
         title={
           <span className="flex flex-wrap items-center gap-3">
             {p.name} <Badge value={p.state} />
@@ -44,7 +50,7 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
               <Button
                 variant={archived ? 'secondary' : 'quiet'}
                 busy={update.isPending}
-                onClick={() => update.mutate({ state: archived ? p.previousState ?? 'draft' : 'archived' })}
+                onClick={() => update.mutate({ state: archived ? (p.previousState ?? 'draft') : 'archived' })}
               >
                 {archived ? 'Restore' : 'Archive'}
               </Button>
@@ -54,8 +60,16 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
       >
         {[p.address, `changed ${formatRelative(p.updatedAt)}`].filter(Boolean).join(' · ')}
       </PageHeader>
-      {update.isError && <div className="mb-4"><Notice tone="error">{errorMessage(update.error)}</Notice></div>}
-      {archived && <div className="mb-6"><Notice tone="info">This project is archived. Restore it to keep working on it.</Notice></div>}
+      {update.isError && (
+        <div className="mb-4">
+          <Notice tone="error">{errorMessage(update.error)}</Notice>
+        </div>
+      )}
+      {archived && (
+        <div className="mb-6">
+          <Notice tone="info">This project is archived. Restore it to keep working on it.</Notice>
+        </div>
+      )}
 
       <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
         <div className="flex flex-col gap-6">
@@ -71,9 +85,18 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
         <Card title="Client" className="self-start">
           {client ? (
             <dl className="flex flex-col gap-3 text-[15px]">
-              <div><dt className="text-sm text-ink-faint">Name</dt><dd className="font-semibold">{client.name}</dd></div>
-              <div><dt className="text-sm text-ink-faint">E-mail</dt><dd>{client.email ?? '—'}</dd></div>
-              <div><dt className="text-sm text-ink-faint">Phone</dt><dd>{client.phone ?? '—'}</dd></div>
+              <div>
+                <dt className="text-sm text-ink-faint">Name</dt>
+                <dd className="font-semibold">{client.name}</dd>
+              </div>
+              <div>
+                <dt className="text-sm text-ink-faint">E-mail</dt>
+                <dd>{client.email ?? '—'}</dd>
+              </div>
+              <div>
+                <dt className="text-sm text-ink-faint">Phone</dt>
+                <dd>{client.phone ?? '—'}</dd>
+              </div>
             </dl>
           ) : (
             <p className="text-ink-soft">No client.</p>
@@ -95,10 +118,20 @@ function RenameDialog({ current, onClose, projectId }: { current: string; onClos
   return (
     <Dialog open onClose={onClose} title="Rename project">
       <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-        <TextField label="Project name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(update.error, 'name')} autoFocus />
+        <TextField
+          label="Project name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldError(update.error, 'name')}
+          autoFocus
+        />
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" busy={update.isPending}>Save</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary" busy={update.isPending}>
+            Save
+          </Button>
         </div>
       </form>
     </Dialog>

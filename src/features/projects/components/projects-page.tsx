@@ -23,7 +23,13 @@ export function ProjectsPage({ clients }: { clients: { id: string; name: string 
     <div>
       <PageHeader
         title="Projects"
-        actions={canEdit && <Button variant="primary" onClick={() => setCreating(true)}>New project</Button>}
+        actions={
+          canEdit && (
+            <Button variant="primary" onClick={() => setCreating(true)}>
+              New project
+            </Button>
+          )
+        }
       >
         Every client job, with its rooms, options and presentations.
       </PageHeader>
@@ -34,7 +40,11 @@ export function ProjectsPage({ clients }: { clients: { id: string; name: string 
           label="Show"
           value={archived}
           onChange={setArchived}
-          options={[{ value: 'exclude', label: 'Current' }, { value: 'only', label: 'Archived' }, { value: 'include', label: 'All' }]}
+          options={[
+            { value: 'exclude', label: 'Current' },
+            { value: 'only', label: 'Archived' },
+            { value: 'include', label: 'All' },
+          ]}
         />
       </ListToolbar>
 
@@ -45,7 +55,14 @@ export function ProjectsPage({ clients }: { clients: { id: string; name: string 
       ) : projects.data.projects.length === 0 ? (
         <EmptyState
           title={q ? 'No project matches that search.' : 'No projects yet.'}
-          action={canEdit && !q && <Button variant="primary" onClick={() => setCreating(true)}>Start your first project</Button>}
+          action={
+            canEdit &&
+            !q && (
+              <Button variant="primary" onClick={() => setCreating(true)}>
+                Start your first project
+              </Button>
+            )
+          }
         >
           {!q && 'A project is one client job at one address. Add its rooms, then prepare options to present.'}
         </EmptyState>
@@ -54,24 +71,40 @@ export function ProjectsPage({ clients }: { clients: { id: string; name: string 
           <table className="w-full text-left text-[15px]">
             <thead className="border-b border-line bg-paper/60 text-sm text-ink-soft">
               <tr>
-                <th scope="col" className="px-5 py-3 font-semibold">Project</th>
-                <th scope="col" className="px-5 py-3 font-semibold">Client</th>
-                <th scope="col" className="px-5 py-3 font-semibold">Rooms</th>
-                <th scope="col" className="px-5 py-3 font-semibold">State</th>
-                <th scope="col" className="px-5 py-3 font-semibold">Last change</th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Project
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Client
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Rooms
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  State
+                </th>
+                <th scope="col" className="px-5 py-3 font-semibold">
+                  Last change
+                </th>
               </tr>
             </thead>
             <tbody>
               {projects.data.projects.map((p) => (
                 <tr key={p.id} className="border-b border-line last:border-0 hover:bg-paper/50">
                   <td className="px-5 py-4">
-                    <Link to={`/projects/${p.id}`} className="font-semibold text-ink hover:text-pine hover:underline">{p.name}</Link>
+                    <Link to={`/projects/${p.id}`} className="font-semibold text-ink hover:text-pine hover:underline">
+                      {p.name}
+                    </Link>
                     {p.address && <div className="text-sm text-ink-faint">{p.address}</div>}
                   </td>
                   <td className="px-5 py-4 text-ink-soft">{p.client.name}</td>
                   <td className="px-5 py-4 text-ink-soft tabular-nums">{p.roomCount}</td>
-                  <td className="px-5 py-4"><Badge value={p.state} /></td>
-                  <td className="px-5 py-4 text-ink-soft" title={new Date(p.updatedAt).toLocaleString()}>{formatRelative(p.updatedAt)}</td>
+                  <td className="px-5 py-4">
+                    <Badge value={p.state} />
+                  </td>
+                  <td className="px-5 py-4 text-ink-soft" title={new Date(p.updatedAt).toLocaleString()}>
+                    {formatRelative(p.updatedAt)}
+                  </td>
                 </tr>
               ))}
             </tbody>

@@ -1,6 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
-  CreateOptionBody, CreateRoomBody, OptionRecord, RoomRecord, RoomSummary, SaveOptionBody, SaveRoomBody,
+  CreateOptionBody,
+  CreateRoomBody,
+  OptionRecord,
+  RoomRecord,
+  RoomSummary,
+  SaveOptionBody,
+  SaveRoomBody,
 } from '../../../../shared/schemas/room-api';
 import type { PlanFileInput } from '../../../../shared/schemas/plan-file';
 import { api } from '../../../lib/api';
@@ -19,7 +25,10 @@ export interface RoomDetail {
 }
 
 export const roomListQuery = (projectId: string) =>
-  queryOptions({ queryKey: roomKeys.list(projectId), queryFn: () => api<{ rooms: RoomSummary[] }>(`/api/projects/${projectId}/rooms`) });
+  queryOptions({
+    queryKey: roomKeys.list(projectId),
+    queryFn: () => api<{ rooms: RoomSummary[] }>(`/api/projects/${projectId}/rooms`),
+  });
 
 export const roomQuery = (id: string) =>
   queryOptions({ queryKey: roomKeys.detail(id), queryFn: () => api<RoomDetail>(`/api/rooms/${id}`) });
@@ -46,7 +55,8 @@ export function useCreateRoom(projectId: string) {
 export function useImportPlan(projectId: string) {
   const invalidate = useInvalidateProject();
   return useMutation({
-    mutationFn: (plan: PlanFileInput | unknown) => api<RoomDetail>(`/api/projects/${projectId}/rooms/import`, { method: 'POST', body: plan }),
+    mutationFn: (plan: PlanFileInput | unknown) =>
+      api<RoomDetail>(`/api/projects/${projectId}/rooms/import`, { method: 'POST', body: plan }),
     onSuccess: invalidate,
   });
 }
@@ -70,7 +80,8 @@ export function useDeleteRoom(id: string) {
 export function useCreateOption(roomId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateOptionBody) => api<{ option: OptionRecord }>(`/api/rooms/${roomId}/options`, { method: 'POST', body }),
+    mutationFn: (body: CreateOptionBody) =>
+      api<{ option: OptionRecord }>(`/api/rooms/${roomId}/options`, { method: 'POST', body }),
     onSuccess: () => qc.invalidateQueries({ queryKey: roomKeys.all }),
   });
 }
@@ -78,9 +89,12 @@ export function useCreateOption(roomId: string) {
 export function useSaveOption(roomId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...body }: SaveOptionBody & { id: string }) => api<{ option: OptionRecord }>(`/api/options/${id}`, { method: 'PUT', body }),
+    mutationFn: ({ id, ...body }: SaveOptionBody & { id: string }) =>
+      api<{ option: OptionRecord }>(`/api/options/${id}`, { method: 'PUT', body }),
     onSuccess: ({ option }) =>
-      qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, options: d.options.map((o) => (o.id === option.id ? option : o)) } : d)),
+      qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) =>
+        d ? { ...d, options: d.options.map((o) => (o.id === option.id ? option : o)) } : d,
+      ),
   });
 }
 
@@ -95,7 +109,8 @@ export function useDeleteOption(_roomId: string) {
 export function useReorderOptions(roomId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (optionIds: string[]) => api<{ options: OptionRecord[] }>(`/api/rooms/${roomId}/option-order`, { method: 'PUT', body: { optionIds } }),
+    mutationFn: (optionIds: string[]) =>
+      api<{ options: OptionRecord[] }>(`/api/rooms/${roomId}/option-order`, { method: 'PUT', body: { optionIds } }),
     onSuccess: ({ options }) => qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, options } : d)),
   });
 }

@@ -42,9 +42,23 @@ export function RoomList({ projectId }: { projectId: string }) {
 
   const actions = canEdit && (
     <div className="flex gap-2">
-      <Button size="sm" onClick={() => fileInput.current?.click()} busy={importPlan.isPending}>Import plan file</Button>
-      <Button size="sm" variant="primary" onClick={() => setAdding(true)}>Add room</Button>
-      <input ref={fileInput} type="file" accept="application/json,.json" className="hidden" aria-label="Plan file to import" onChange={(e) => { void onFile(e.target.files?.[0]); e.target.value = ''; }} />
+      <Button size="sm" onClick={() => fileInput.current?.click()} busy={importPlan.isPending}>
+        Import plan file
+      </Button>
+      <Button size="sm" variant="primary" onClick={() => setAdding(true)}>
+        Add room
+      </Button>
+      <input
+        ref={fileInput}
+        type="file"
+        accept="application/json,.json"
+        className="hidden"
+        aria-label="Plan file to import"
+        onChange={(e) => {
+          void onFile(e.target.files?.[0]);
+          e.target.value = '';
+        }}
+      />
     </div>
   );
 
@@ -54,29 +68,62 @@ export function RoomList({ projectId }: { projectId: string }) {
         <p className="text-sm text-ink-soft">Each room holds its measured shell and the options you prepare for it.</p>
         {actions}
       </div>
-      {importPlan.isError && <div className="mb-4"><Notice tone="error">{errorMessage(importPlan.error)}</Notice></div>}
-      {badFile && <div className="mb-4"><Notice tone="error">{badFile}</Notice></div>}
-      {rooms.isPending ? <Spinner /> : rooms.isError ? <Notice tone="error">{errorMessage(rooms.error)}</Notice> : rooms.data.rooms.length === 0 ? (
+      {importPlan.isError && (
+        <div className="mb-4">
+          <Notice tone="error">{errorMessage(importPlan.error)}</Notice>
+        </div>
+      )}
+      {badFile && (
+        <div className="mb-4">
+          <Notice tone="error">{badFile}</Notice>
+        </div>
+      )}
+      {rooms.isPending ? (
+        <Spinner />
+      ) : rooms.isError ? (
+        <Notice tone="error">{errorMessage(rooms.error)}</Notice>
+      ) : rooms.data.rooms.length === 0 ? (
         <EmptyState title="No rooms yet.">Add a room from its measurements, or import a plan file.</EmptyState>
       ) : (
         <ul className="grid gap-3 sm:grid-cols-2">
           {rooms.data.rooms.map((r) => (
             <li key={r.id} className="relative">
-              <Link to={`/projects/${projectId}/rooms/${r.id}`} className="block rounded-xl border border-line p-4 pr-24 transition-colors hover:border-pine hover:bg-pine-wash/40">
+              <Link
+                to={`/projects/${projectId}/rooms/${r.id}`}
+                className="block rounded-xl border border-line p-4 pr-24 transition-colors hover:border-pine hover:bg-pine-wash/40"
+              >
                 <div className="font-semibold">{r.name}</div>
                 <div className="mt-1 text-sm text-ink-soft">
-                  {r.floorAreaM2.toFixed(1)} m² · {r.optionCount} option{r.optionCount === 1 ? '' : 's'} · changed {formatRelative(r.updatedAt)}
+                  {r.floorAreaM2.toFixed(1)} m² · {r.optionCount} option{r.optionCount === 1 ? '' : 's'} · changed{' '}
+                  {formatRelative(r.updatedAt)}
                 </div>
               </Link>
               {canEdit && (
-                <Button size="sm" variant="quiet" className="absolute top-3 right-3" aria-label={`Delete ${r.name}`} onClick={() => setDeleting({ id: r.id, name: r.name })}>Delete</Button>
+                <Button
+                  size="sm"
+                  variant="quiet"
+                  className="absolute top-3 right-3"
+                  aria-label={`Delete ${r.name}`}
+                  onClick={() => setDeleting({ id: r.id, name: r.name })}
+                >
+                  Delete
+                </Button>
               )}
             </li>
           ))}
         </ul>
       )}
       {deleting && <DeleteRoomDialog roomId={deleting.id} name={deleting.name} onClose={() => setDeleting(null)} />}
-      {adding && <AddRoomDialog projectId={projectId} onClose={() => setAdding(false)} onImport={() => { setAdding(false); fileInput.current?.click(); }} />}
+      {adding && (
+        <AddRoomDialog
+          projectId={projectId}
+          onClose={() => setAdding(false)}
+          onImport={() => {
+            setAdding(false);
+            fileInput.current?.click();
+          }}
+        />
+      )}
     </div>
   );
 }
@@ -93,17 +140,33 @@ function DeleteRoomDialog({ roomId, name, onClose }: { roomId: string; name: str
       title={`Delete ${name}?`}
       footer={
         <>
-          <Button variant="quiet" onClick={onClose}>Keep it</Button>
-          <Button variant="danger" busy={remove.isPending} disabled={detail.isPending} onClick={() => remove.mutate(undefined, { onSuccess: onClose })}>Delete room</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Keep it
+          </Button>
+          <Button
+            variant="danger"
+            busy={remove.isPending}
+            disabled={detail.isPending}
+            onClick={() => remove.mutate(undefined, { onSuccess: onClose })}
+          >
+            Delete room
+          </Button>
         </>
       }
     >
-      {detail.isPending ? <Spinner /> : (
+      {detail.isPending ? (
+        <Spinner />
+      ) : (
         <p className="text-ink-soft">
-          Its walls, openings and {options.length === 1 ? 'its one option' : `all ${options.length} options`} go with it: <strong className="text-ink">{options.join(', ')}</strong>. This cannot be undone.
+          Its walls, openings and {options.length === 1 ? 'its one option' : `all ${options.length} options`} go with it:{' '}
+          <strong className="text-ink">{options.join(', ')}</strong>. This cannot be undone.
         </p>
       )}
-      {remove.isError && <div className="mt-4"><Notice tone="error">{errorMessage(remove.error)}</Notice></div>}
+      {remove.isError && (
+        <div className="mt-4">
+          <Notice tone="error">{errorMessage(remove.error)}</Notice>
+        </div>
+      )}
     </Dialog>
   );
 }
@@ -115,7 +178,12 @@ const WAYS: { id: AddWay; label: string }[] = [
   { id: 'file', label: 'A plan file' },
 ];
 /** The outline a typed walk is checked against until it replaces it (any sound shell would do). */
-const PLACEHOLDER_OUTLINE: [number, number][] = [[0, 0], [1000, 0], [1000, 1000], [0, 1000]];
+const PLACEHOLDER_OUTLINE: [number, number][] = [
+  [0, 0],
+  [1000, 0],
+  [1000, 1000],
+  [0, 1000],
+];
 
 function AddRoomDialog({ projectId, onClose, onImport }: { projectId: string; onClose: () => void; onImport: () => void }) {
   const create = useCreateRoom(projectId);
@@ -144,7 +212,12 @@ function AddRoomDialog({ projectId, onClose, onImport }: { projectId: string; on
     e.preventDefault();
     setTried(true);
     if (way !== 'rectangle' || !widthMm || !lengthMm || !heightMm) return;
-    createWith([[0, 0], [widthMm, 0], [widthMm, lengthMm], [0, lengthMm]]);
+    createWith([
+      [0, 0],
+      [widthMm, 0],
+      [widthMm, lengthMm],
+      [0, lengthMm],
+    ]);
   };
   const useWalls = (command: Command) => {
     const result = apply(createEditorDoc({ outline: PLACEHOLDER_OUTLINE }), command);
@@ -161,12 +234,22 @@ function AddRoomDialog({ projectId, onClose, onImport }: { projectId: string; on
   return (
     <Dialog open onClose={onClose} title="Add a room">
       <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-        <TextField label="Room name" value={name} onChange={(e) => setName(e.target.value)} error={fieldError(err, 'name')} placeholder="e.g. Living room" autoFocus />
+        <TextField
+          label="Room name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldError(err, 'name')}
+          placeholder="e.g. Living room"
+          autoFocus
+        />
         <fieldset>
           <legend className="mb-1.5 text-sm font-semibold">Start from</legend>
           <div className="flex flex-wrap gap-2" role="radiogroup">
             {WAYS.map((w) => (
-              <label key={w.id} className={`cursor-pointer rounded-lg border px-3 py-2 text-sm font-semibold ${way === w.id ? 'border-pine bg-pine-wash text-pine-dark' : 'border-line-strong bg-white'}`}>
+              <label
+                key={w.id}
+                className={`cursor-pointer rounded-lg border px-3 py-2 text-sm font-semibold ${way === w.id ? 'border-pine bg-pine-wash text-pine-dark' : 'border-line-strong bg-white'}`}
+              >
                 <input type="radio" name="add-way" className="sr-only" checked={way === w.id} onChange={() => setWay(w.id)} />
                 {w.label}
               </label>
@@ -174,31 +257,61 @@ function AddRoomDialog({ projectId, onClose, onImport }: { projectId: string; on
           </div>
         </fieldset>
         {way !== 'file' && (
-          <LengthField label="Ceiling height" unit={unit} valueMm={heightMm} onChange={setHeight} error={fieldError(err, 'shell.wallHeight') ?? needed(heightMm, 'ceiling height')} />
+          <LengthField
+            label="Ceiling height"
+            unit={unit}
+            valueMm={heightMm}
+            onChange={setHeight}
+            error={fieldError(err, 'shell.wallHeight') ?? needed(heightMm, 'ceiling height')}
+          />
         )}
         {way === 'rectangle' && (
           <>
             <p className="text-sm text-ink-soft">The overall size; you can shape the outline wall by wall in the room editor.</p>
             <div className="grid gap-4 sm:grid-cols-2">
               <LengthField label="Width" unit={unit} valueMm={widthMm} onChange={setWidth} error={needed(widthMm, 'width')} />
-              <LengthField label="Length" unit={unit} valueMm={lengthMm} onChange={setLength} error={needed(lengthMm, 'length')} />
+              <LengthField
+                label="Length"
+                unit={unit}
+                valueMm={lengthMm}
+                onChange={setLength}
+                error={needed(lengthMm, 'length')}
+              />
             </div>
           </>
         )}
         {way === 'walls' && (
-          <MeasureWalls walls={walls} unit={unit} onChange={setWalls} onCancel={() => setWay('rectangle')} onUse={useWalls} autoFocus={false} />
+          <MeasureWalls
+            walls={walls}
+            unit={unit}
+            onChange={setWalls}
+            onCancel={() => setWay('rectangle')}
+            onUse={useWalls}
+            autoFocus={false}
+          />
         )}
         {way === 'file' && (
           <div className="flex flex-col gap-2">
-            <p className="text-sm text-ink-soft">A plan file holds one room with one option (a .json file downloaded from Parlour or written by hand; see the README). Its name and ceiling come from the file.</p>
-            <div><Button onClick={onImport}>Choose a plan file…</Button></div>
+            <p className="text-sm text-ink-soft">
+              A plan file holds one room with one option (a .json file downloaded from Parlour or written by hand; see the
+              README). Its name and ceiling come from the file.
+            </p>
+            <div>
+              <Button onClick={onImport}>Choose a plan file…</Button>
+            </div>
           </div>
         )}
         {wallsError && <Notice tone="error">{wallsError}</Notice>}
         {err && !serverField && <Notice tone="error">{errorMessage(err)}</Notice>}
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          {way === 'rectangle' && <Button type="submit" variant="primary" busy={create.isPending}>Add room</Button>}
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          {way === 'rectangle' && (
+            <Button type="submit" variant="primary" busy={create.isPending}>
+              Add room
+            </Button>
+          )}
         </div>
       </form>
     </Dialog>

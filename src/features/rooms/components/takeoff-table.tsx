@@ -22,7 +22,9 @@ export function TakeoffTable({ shell }: { shell: RoomShell }) {
         <tbody>
           {rows.map(([k, v]) => (
             <tr key={k} className="border-b border-line last:border-0">
-              <th scope="row" className="py-2 pr-3 text-left font-normal text-ink-soft">{k}</th>
+              <th scope="row" className="py-2 pr-3 text-left font-normal text-ink-soft">
+                {k}
+              </th>
               <td className="py-2 text-right font-semibold tabular-nums">{v}</td>
             </tr>
           ))}
@@ -31,15 +33,28 @@ export function TakeoffTable({ shell }: { shell: RoomShell }) {
       <details className="mt-3 text-sm">
         <summary className="cursor-pointer font-semibold text-ink-soft">Walls one by one</summary>
         <table className="mt-2 w-full tabular-nums">
-          <thead className="text-ink-faint"><tr><th className="text-left font-normal">Wall</th><th className="text-right font-normal">Length</th><th className="text-right font-normal">Net area</th></tr></thead>
+          <thead className="text-ink-faint">
+            <tr>
+              <th className="text-left font-normal">Wall</th>
+              <th className="text-right font-normal">Length</th>
+              <th className="text-right font-normal">Net area</th>
+            </tr>
+          </thead>
           <tbody>
             {t.walls.map((w) => (
-              <tr key={w.index}><td>{w.index + 1}</td><td className="text-right">{n(w.length_m)} m</td><td className="text-right">{n(w.netArea_m2)} m²</td></tr>
+              <tr key={w.index}>
+                <td>{w.index + 1}</td>
+                <td className="text-right">{n(w.length_m)} m</td>
+                <td className="text-right">{n(w.netArea_m2)} m²</td>
+              </tr>
             ))}
           </tbody>
         </table>
       </details>
-      <p className="mt-3 text-xs text-ink-faint">Measured on the inside faces. Paint coverage and flooring waste are common-practice defaults; the tin’s label and your fitter win.</p>
+      <p className="mt-3 text-xs text-ink-faint">
+        Measured on the inside faces. Paint coverage and flooring waste are common-practice defaults; the tin’s label and your
+        fitter win.
+      </p>
     </div>
   );
 }

@@ -22,7 +22,16 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
 const MIN_WALKWAY_MM = 300;
 const MAX_WALKWAY_MM = 2000;
 
-export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, selected, onChoose }: {
+export function CheckPanel({
+  shell,
+  pieces,
+  result,
+  walkwayMm,
+  onWalkway,
+  unit,
+  selected,
+  onChoose,
+}: {
   shell: RoomShell;
   pieces: Piece[];
   result: FitResult | null;
@@ -42,7 +51,8 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
         valueMm={walkwayMm}
         onChange={(mm) => {
           if (mm === null) return 'Enter a width.';
-          if (mm < MIN_WALKWAY_MM || mm > MAX_WALKWAY_MM) return `Between ${formatLength(MIN_WALKWAY_MM, unit)} and ${formatLength(MAX_WALKWAY_MM, unit)}.`;
+          if (mm < MIN_WALKWAY_MM || mm > MAX_WALKWAY_MM)
+            return `Between ${formatLength(MIN_WALKWAY_MM, unit)} and ${formatLength(MAX_WALKWAY_MM, unit)}.`;
           onWalkway(mm);
           return null;
         }}
@@ -50,7 +60,14 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
       />
 
       {/* Announced politely and kept small: while a piece moves the list below is the last layout's. */}
-      <p role="status" aria-live="polite" data-testid="fit-status" data-state={!result || result.pending ? 'checking' : 'checked'} data-check-ms={result ? Math.round(result.ms) : undefined} className="-mb-3 h-4 text-xs text-ink-faint">
+      <p
+        role="status"
+        aria-live="polite"
+        data-testid="fit-status"
+        data-state={!result || result.pending ? 'checking' : 'checked'}
+        data-check-ms={result ? Math.round(result.ms) : undefined}
+        className="-mb-3 h-4 text-xs text-ink-faint"
+      >
         {result?.pending ? 'Checking…' : ''}
       </p>
       {!result ? (
@@ -60,7 +77,11 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
       ) : result.findings.length === 0 ? (
         <Notice tone="ok">Everything fits, with room to move.</Notice>
       ) : (
-        <ol className={`flex flex-col gap-2 transition-opacity ${result.pending ? 'opacity-70' : ''}`} aria-label="Findings" aria-busy={result.pending}>
+        <ol
+          className={`flex flex-col gap-2 transition-opacity ${result.pending ? 'opacity-70' : ''}`}
+          aria-label="Findings"
+          aria-busy={result.pending}
+        >
           {result.findings.map((f, i) => (
             <li key={`${f.kind}-${f.pieces.join('-')}-${f.openings.join('-')}`}>
               <button
@@ -72,7 +93,9 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
                 <span className="block text-xs font-bold tracking-wide text-clay uppercase">{KIND_TITLE[f.kind]}</span>
                 <span className="block text-sm text-ink">{f.message}</span>
                 {f.measured_mm !== undefined && f.required_mm !== undefined && (
-                  <span className="block text-xs text-ink-faint">{formatLength(f.measured_mm, unit)} where {formatLength(f.required_mm, unit)} is usual</span>
+                  <span className="block text-xs text-ink-faint">
+                    {formatLength(f.measured_mm, unit)} where {formatLength(f.required_mm, unit)} is usual
+                  </span>
                 )}
               </button>
             </li>
@@ -83,9 +106,17 @@ export function CheckPanel({ shell, pieces, result, walkwayMm, onWalkway, unit, 
       <div className="rounded-xl bg-sand p-4 text-sm text-ink-soft">
         <h3 className="mb-1 font-bold text-ink">Good to know</h3>
         <ul className="list-disc space-y-1 pl-4">
-          <li>Clearances here are guidance. Local building codes and accessibility rules (for the edition in force) come first; ask a licensed professional where it matters.</li>
+          <li>
+            Clearances here are guidance. Local building codes and accessibility rules (for the edition in force) come first; ask
+            a licensed professional where it matters.
+          </li>
           <li>Keep the routes to doors and to escape windows clear — a bedroom needs a window you can get out of.</li>
-          {tall.length > 0 && <li>Fix tall pieces ({tall.map((p) => p.name).join(', ')}) to the wall so they cannot tip, and keep climbable furniture away from windows where children live.</li>}
+          {tall.length > 0 && (
+            <li>
+              Fix tall pieces ({tall.map((p) => p.name).join(', ')}) to the wall so they cannot tip, and keep climbable furniture
+              away from windows where children live.
+            </li>
+          )}
           <li>Never take out or alter a wall without a structural engineer and building-control approval.</li>
           <li>The plan and 3D are a visualisation, not a construction document: check dimensions on site before ordering.</li>
         </ul>

@@ -1,6 +1,25 @@
-import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent as ReactKeyboardEvent } from 'react';
+import {
+  lazy,
+  Suspense,
+  useCallback,
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type KeyboardEvent as ReactKeyboardEvent,
+} from 'react';
 import { Link } from 'react-router';
-import { holdPiece, movePiece, type Command, NUDGE_LARGE_STEP_MM, NUDGE_STEP_MM, removeOpening, removePiece, rotatePiece, updateOpening } from '../../../../shared/commands';
+import {
+  holdPiece,
+  movePiece,
+  type Command,
+  NUDGE_LARGE_STEP_MM,
+  NUDGE_STEP_MM,
+  removeOpening,
+  removePiece,
+  rotatePiece,
+  updateOpening,
+} from '../../../../shared/commands';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
@@ -65,12 +84,19 @@ const WIDE_ENOUGH_FOR_BOTH_PX = 1180;
 export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: string; roomId: string; finishes?: Finish[] }) {
   const room = useRoom(roomId);
   const canEdit = useCanEdit();
-  if (room.isPending) return <div className="px-6"><Spinner label="Opening the room…" /></div>;
+  if (room.isPending)
+    return (
+      <div className="px-6">
+        <Spinner label="Opening the room…" />
+      </div>
+    );
   if (room.isError) {
     return (
       <div className="mx-auto flex max-w-6xl flex-col gap-4 px-6 py-10">
         <Notice tone="error">{errorMessage(room.error)}</Notice>
-        <Link to={`/projects/${projectId}`} className="font-semibold text-pine">Back to the project</Link>
+        <Link to={`/projects/${projectId}`} className="font-semibold text-pine">
+          Back to the project
+        </Link>
       </div>
     );
   }
@@ -88,11 +114,23 @@ const SAVE_TEXT: Record<SaveState, string> = {
   conflict: 'Not saved: see above',
 };
 
-function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; detail: RoomDetail; readOnly: boolean; finishes: Finish[] }) {
+function Editor({
+  projectId,
+  detail,
+  readOnly,
+  finishes,
+}: {
+  projectId: string;
+  detail: RoomDetail;
+  readOnly: boolean;
+  finishes: Finish[];
+}) {
   const editor = useRoomEditor(detail, readOnly);
   const [place] = useState(() => readPlace(detail.room.id));
   const [step, setStep] = useState<EditorStep>(place?.step ?? (readOnly ? 'furnish' : 'outline'));
-  const [optionId, setOptionId] = useState(place?.optionId && detail.options.some((o) => o.id === place.optionId) ? place.optionId : detail.options[0]?.id ?? '');
+  const [optionId, setOptionId] = useState(
+    place?.optionId && detail.options.some((o) => o.id === place.optionId) ? place.optionId : (detail.options[0]?.id ?? ''),
+  );
   const [selection, setSelection] = useState<Selection>(null);
   // Side by side needs room; on a tablet the plan starts alone and the 3D is one tap away.
   const [layout, setLayout] = useState<Layout>(() => (window.innerWidth >= WIDE_ENOUGH_FOR_BOTH_PX ? 'both' : 'plan'));
@@ -113,12 +151,16 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
   const fit = useFitCheck(editor.doc.shell, pieces, walkwayMm);
   const findings = fit?.findings ?? [];
   const finding = chosenFinding !== null ? findings[chosenFinding] : undefined;
-  const highlight = step === 'check' && finding
-    ? {
-        pieceIds: finding.pieces,
-        gap: finding.between && finding.measured_mm !== undefined ? { a: finding.between[0], b: finding.between[1], label: formatLength(finding.measured_mm, unit) } : undefined,
-      }
-    : null;
+  const highlight =
+    step === 'check' && finding
+      ? {
+          pieceIds: finding.pieces,
+          gap:
+            finding.between && finding.measured_mm !== undefined
+              ? { a: finding.between[0], b: finding.between[1], label: formatLength(finding.measured_mm, unit) }
+              : undefined,
+        }
+      : null;
   const flaggedPieceIds = step === 'check' ? [...new Set(findings.flatMap((f) => f.pieces))] : [];
   const finishIndex = useMemo(() => new Map(finishes.map((f) => [f.id, f])), [finishes]);
   const sceneFinishes = useMemo(() => sceneFinishesFor(option, finishIndex), [option, finishIndex]);
@@ -132,10 +174,13 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
   const viewCentre = useCallback((): [number, number] => viewCentreRef.current ?? roomCentre(shellRef.current), []);
   const shellRef = useRef(editor.doc.shell);
   shellRef.current = editor.doc.shell;
-  const commitField = useCallback((command: Command, options?: { gesture?: string }) => {
-    const failure = editor.attempt(command, options);
-    return failure ? refusalText(failure, shellRef.current, unit) : null;
-  }, [editor.attempt, unit]); // eslint-disable-line react-hooks/exhaustive-deps
+  const commitField = useCallback(
+    (command: Command, options?: { gesture?: string }) => {
+      const failure = editor.attempt(command, options);
+      return failure ? refusalText(failure, shellRef.current, unit) : null;
+    },
+    [editor.attempt, unit], // eslint-disable-line react-hooks/exhaustive-deps
+  );
 
   useEffect(() => localStorage.setItem(UNIT_KEY, unit), [unit]);
   // A reload reopens the step and option the designer was on (and the walkway they checked with).
@@ -169,13 +214,20 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
       }
       if (readOnly || !selection) return;
       const step = e.shiftKey ? NUDGE_LARGE_STEP_MM : NUDGE_STEP_MM;
-      const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, -step], ArrowDown: [0, step] };
+      const arrows: Record<string, [number, number]> = {
+        ArrowLeft: [-step, 0],
+        ArrowRight: [step, 0],
+        ArrowUp: [0, -step],
+        ArrowDown: [0, step],
+      };
       if (selection.kind === 'piece') {
         const piece = pieces.find((p) => p.id === selection.id);
         if (!piece) return;
         if (arrows[e.key] && piece.placed) {
           e.preventDefault();
-          editor.run(movePiece(activeOptionId, piece.id, piece.x + arrows[e.key][0], piece.y + arrows[e.key][1]), { gesture: `nudge-${piece.id}` });
+          editor.run(movePiece(activeOptionId, piece.id, piece.x + arrows[e.key][0], piece.y + arrows[e.key][1]), {
+            gesture: `nudge-${piece.id}`,
+          });
         } else if (e.key === 'Delete' || e.key === 'Backspace') {
           e.preventDefault();
           if (editor.run(removePiece(activeOptionId, piece.id))) setSelection(null);
@@ -191,7 +243,10 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
         if (!opening) return;
         if (e.key === 'ArrowLeft' || e.key === 'ArrowRight') {
           e.preventDefault();
-          editor.run(updateOpening(opening.id, { offset: Math.max(0, opening.offset + (e.key === 'ArrowLeft' ? -step : step)) }), { gesture: `nudge-${opening.id}` });
+          editor.run(
+            updateOpening(opening.id, { offset: Math.max(0, opening.offset + (e.key === 'ArrowLeft' ? -step : step)) }),
+            { gesture: `nudge-${opening.id}` },
+          );
         } else if (e.key === 'Delete' || e.key === 'Backspace') {
           e.preventDefault();
           if (editor.run(removeOpening(opening.id))) setSelection(null);
@@ -226,17 +281,96 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
     if (!option) return null;
     switch (step) {
       case 'outline':
-        return <OutlinePanel shell={editor.doc.shell} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} onPreview={setPreview} onDraw={() => setDrawing(true)} />;
+        return (
+          <OutlinePanel
+            shell={editor.doc.shell}
+            run={editor.run}
+            commit={commitField}
+            unit={unit}
+            readOnly={readOnly}
+            selection={selection}
+            onSelect={setSelection}
+            onPreview={setPreview}
+            onDraw={() => setDrawing(true)}
+          />
+        );
       case 'openings':
-        return <OpeningsPanel shell={editor.doc.shell} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} />;
+        return (
+          <OpeningsPanel
+            shell={editor.doc.shell}
+            run={editor.run}
+            commit={commitField}
+            unit={unit}
+            readOnly={readOnly}
+            selection={selection}
+            onSelect={setSelection}
+            newId={newId}
+          />
+        );
       case 'furnish':
-        return <FurnishPanel shell={editor.doc.shell} optionId={activeOptionId} pieces={pieces} run={editor.run} commit={commitField} unit={unit} readOnly={readOnly} selection={selection} onSelect={setSelection} newId={newId} viewCentre={viewCentre} />;
+        return (
+          <FurnishPanel
+            shell={editor.doc.shell}
+            optionId={activeOptionId}
+            pieces={pieces}
+            run={editor.run}
+            commit={commitField}
+            unit={unit}
+            readOnly={readOnly}
+            selection={selection}
+            onSelect={setSelection}
+            newId={newId}
+            viewCentre={viewCentre}
+          />
+        );
       case 'finishes':
-        return <FinishesPanel doc={option} optionId={activeOptionId} finishes={finishes} run={editor.run} readOnly={readOnly} selection={selection} onSelect={select} surface={finishTarget} onSurface={setFinishTarget} />;
+        return (
+          <FinishesPanel
+            doc={option}
+            optionId={activeOptionId}
+            finishes={finishes}
+            run={editor.run}
+            readOnly={readOnly}
+            selection={selection}
+            onSelect={select}
+            surface={finishTarget}
+            onSurface={setFinishTarget}
+          />
+        );
       case 'check':
-        return <CheckPanel shell={editor.doc.shell} pieces={pieces} result={fit} walkwayMm={walkwayMm} onWalkway={setWalkwayMm} unit={unit} selected={chosenFinding} onChoose={setChosenFinding} />;
+        return (
+          <CheckPanel
+            shell={editor.doc.shell}
+            pieces={pieces}
+            result={fit}
+            walkwayMm={walkwayMm}
+            onWalkway={setWalkwayMm}
+            unit={unit}
+            selected={chosenFinding}
+            onChoose={setChosenFinding}
+          />
+        );
     }
-  }, [step, editor.doc.shell, editor.run, commitField, unit, readOnly, selection, option, activeOptionId, pieces, newId, viewCentre, fit, walkwayMm, chosenFinding, finishes, finishTarget, select]);
+  }, [
+    step,
+    editor.doc.shell,
+    editor.run,
+    commitField,
+    unit,
+    readOnly,
+    selection,
+    option,
+    activeOptionId,
+    pieces,
+    newId,
+    viewCentre,
+    fit,
+    walkwayMm,
+    chosenFinding,
+    finishes,
+    finishTarget,
+    select,
+  ]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
     const host = splitHost.current;
@@ -257,33 +391,90 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
       {/* Top bar: where we are, options, saving */}
       <div className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-line bg-paper px-4 py-2">
         <div className="min-w-0">
-          <Link to={`/projects/${projectId}`} className="text-xs text-ink-faint hover:text-ink hover:underline">Back to the project</Link>
+          <Link to={`/projects/${projectId}`} className="text-xs text-ink-faint hover:text-ink hover:underline">
+            Back to the project
+          </Link>
           <div className="flex items-center gap-2">
             <h1 className="truncate text-lg font-bold">{editor.roomName}</h1>
-            {!readOnly && <button type="button" className="text-xs font-semibold text-pine hover:underline" onClick={() => setRenaming(true)}>Rename</button>}
+            {!readOnly && (
+              <button type="button" className="text-xs font-semibold text-pine hover:underline" onClick={() => setRenaming(true)}>
+                Rename
+              </button>
+            )}
           </div>
         </div>
-        <OptionsBar editor={editor} optionId={activeOptionId} onChoose={(id) => { setOptionId(id); setSelection(null); }} readOnly={readOnly} />
+        <OptionsBar
+          editor={editor}
+          optionId={activeOptionId}
+          onChoose={(id) => {
+            setOptionId(id);
+            setSelection(null);
+          }}
+          readOnly={readOnly}
+        />
         <div className="ml-auto flex items-center gap-2">
-          <span role="status" data-testid="save-state" data-state={editor.saveState} className={`text-xs font-medium whitespace-nowrap ${editor.saveState === 'saved' ? 'text-ink-faint' : editor.saveState === 'conflict' || editor.saveState === 'retrying' ? 'text-clay' : 'text-ochre'}`}>
+          <span
+            role="status"
+            data-testid="save-state"
+            data-state={editor.saveState}
+            className={`text-xs font-medium whitespace-nowrap ${editor.saveState === 'saved' ? 'text-ink-faint' : editor.saveState === 'conflict' || editor.saveState === 'retrying' ? 'text-clay' : 'text-ochre'}`}
+          >
             {readOnly ? 'Read only' : SAVE_TEXT[editor.saveState]}
           </span>
           {!readOnly && (
             <>
-              <Button size="sm" variant="quiet" disabled={!editor.canUndo} onClick={editor.undo} title={editor.undoLabel ? `Undo: ${editor.undoLabel}` : 'Nothing to undo'} aria-label="Undo">Undo</Button>
-              <Button size="sm" variant="quiet" disabled={!editor.canRedo} onClick={editor.redo} title={editor.redoLabel ? `Redo: ${editor.redoLabel}` : 'Nothing to redo'} aria-label="Redo">Redo</Button>
+              <Button
+                size="sm"
+                variant="quiet"
+                disabled={!editor.canUndo}
+                onClick={editor.undo}
+                title={editor.undoLabel ? `Undo: ${editor.undoLabel}` : 'Nothing to undo'}
+                aria-label="Undo"
+              >
+                Undo
+              </Button>
+              <Button
+                size="sm"
+                variant="quiet"
+                disabled={!editor.canRedo}
+                onClick={editor.redo}
+                title={editor.redoLabel ? `Redo: ${editor.redoLabel}` : 'Nothing to redo'}
+                aria-label="Redo"
+              >
+                Redo
+              </Button>
             </>
           )}
-          <label className="sr-only" htmlFor="unit">Units</label>
-          <select id="unit" className="h-8 rounded-lg border border-line-strong bg-white px-2 text-sm" value={unit} onChange={(e) => setUnit(e.target.value as LengthUnit)}>
+          <label className="sr-only" htmlFor="unit">
+            Units
+          </label>
+          <select
+            id="unit"
+            className="h-8 rounded-lg border border-line-strong bg-white px-2 text-sm"
+            value={unit}
+            onChange={(e) => setUnit(e.target.value as LengthUnit)}
+          >
             <option value="cm">cm</option>
             <option value="mm">mm</option>
             <option value="m">m</option>
             <option value="ftin">ft in</option>
           </select>
-          <Link className="text-sm font-semibold whitespace-nowrap text-pine hover:underline" to={`/projects/${projectId}/rooms/${detail.room.id}/options/${activeOptionId}/schedule`}>Schedule</Link>
-          <a className="text-sm font-semibold whitespace-nowrap text-pine hover:underline" href={`/api/rooms/${detail.room.id}/plan-file?optionId=${activeOptionId}`} download>Plan file</a>
-          <Button size="sm" variant="quiet" onClick={() => setHelp(true)} aria-label="Keys">Keys</Button>
+          <Link
+            className="text-sm font-semibold whitespace-nowrap text-pine hover:underline"
+            to={`/projects/${projectId}/rooms/${detail.room.id}/options/${activeOptionId}/schedule`}
+          >
+            Schedule
+          </Link>
+          <a
+            className="text-sm font-semibold whitespace-nowrap text-pine hover:underline"
+            href={`/api/rooms/${detail.room.id}/plan-file?optionId=${activeOptionId}`}
+            download
+          >
+            Plan file
+          </a>
+          <Button size="sm" variant="quiet" onClick={() => setHelp(true)} aria-label="Keys">
+            Keys
+          </Button>
         </div>
       </div>
 
@@ -291,48 +482,71 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
       <div className="flex flex-col gap-2 px-4 empty:hidden [&:not(:empty)]:py-2">
         {editor.conflict && (
           <Notice tone="warn">
-            <p>Someone else saved this {editor.conflict.part === 'room' ? 'room’s walls and openings' : 'option'} while you were working. Your changes are still here, not saved.</p>
+            <p>
+              Someone else saved this {editor.conflict.part === 'room' ? 'room’s walls and openings' : 'option'} while you were
+              working. Your changes are still here, not saved.
+            </p>
             <div className="mt-2 flex flex-wrap items-center gap-2">
-              <Button size="sm" variant="primary" onClick={editor.keepMine}>Keep mine on top of theirs</Button>
-              <Button size="sm" onClick={editor.loadTheirs}>Load theirs, drop mine</Button>
+              <Button size="sm" variant="primary" onClick={editor.keepMine}>
+                Keep mine on top of theirs
+              </Button>
+              <Button size="sm" onClick={editor.loadTheirs}>
+                Load theirs, drop mine
+              </Button>
             </div>
           </Notice>
         )}
         {editor.restored === 'restored' && (
           <Notice tone="info">
             We brought back changes from your last visit that had not been saved yet; they are being saved now.{' '}
-            <button type="button" className="font-semibold underline" onClick={editor.dismissRestored}>OK</button>
+            <button type="button" className="font-semibold underline" onClick={editor.dismissRestored}>
+              OK
+            </button>
           </Notice>
         )}
         {editor.restored === 'stale' && (
           <Notice tone="warn">
             <p>You have unsaved changes from an earlier visit, but the room has changed since.</p>
             <div className="mt-2 flex gap-2">
-              <Button size="sm" variant="primary" onClick={() => editor.resolveStaleDraft(true)}>Use my changes</Button>
-              <Button size="sm" onClick={() => editor.resolveStaleDraft(false)}>Discard them</Button>
+              <Button size="sm" variant="primary" onClick={() => editor.resolveStaleDraft(true)}>
+                Use my changes
+              </Button>
+              <Button size="sm" onClick={() => editor.resolveStaleDraft(false)}>
+                Discard them
+              </Button>
             </div>
           </Notice>
         )}
         {editor.refusal && (
           <Notice tone="error">
-            {refusalText(editor.refusal, editor.doc.shell, unit)} <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>Dismiss</button>
+            {refusalText(editor.refusal, editor.doc.shell, unit)}{' '}
+            <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>
+              Dismiss
+            </button>
           </Notice>
         )}
         {editor.message && (
           <Notice tone="error">
-            {editor.message} <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>Dismiss</button>
+            {editor.message}{' '}
+            <button type="button" className="ml-2 font-semibold underline" onClick={editor.clearMessage}>
+              Dismiss
+            </button>
           </Notice>
         )}
         {drawing && (
           <Notice tone="info">
-            Click each corner of the room on the plan; click the first corner again to close it. Corners keep to 15° turns unless you hold Shift. Esc stops.
+            Click each corner of the room on the plan; click the first corner again to close it. Corners keep to 15° turns unless
+            you hold Shift. Esc stops.
           </Notice>
         )}
       </div>
 
       <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
         {/* Steps */}
-        <nav aria-label="Steps" className="flex shrink-0 gap-1 overflow-x-auto border-b border-line bg-paper p-2 lg:w-40 lg:flex-col lg:border-r lg:border-b-0 lg:p-3">
+        <nav
+          aria-label="Steps"
+          className="flex shrink-0 gap-1 overflow-x-auto border-b border-line bg-paper p-2 lg:w-40 lg:flex-col lg:border-r lg:border-b-0 lg:p-3"
+        >
           {EDITOR_STEPS.map((s, i) => (
             <button
               key={s.id}
@@ -342,9 +556,15 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
               className="rounded-lg px-3 py-2 text-left hover:bg-sand aria-[current=step]:bg-pine-wash"
             >
               <span className="flex items-center text-sm font-bold text-ink">
-                <span className="mr-1.5 text-ink-faint">{i + 1}</span>{s.label}
+                <span className="mr-1.5 text-ink-faint">{i + 1}</span>
+                {s.label}
                 {s.id === 'check' && findings.length > 0 && (
-                  <span className="ml-auto rounded-full bg-clay px-1.5 text-xs text-white" aria-label={`${findings.length} findings`}>{findings.length}</span>
+                  <span
+                    className="ml-auto rounded-full bg-clay px-1.5 text-xs text-white"
+                    aria-label={`${findings.length} findings`}
+                  >
+                    {findings.length}
+                  </span>
                 )}
               </span>
               <span className="hidden text-xs leading-snug text-ink-soft lg:block">{s.hint}</span>
@@ -354,84 +574,104 @@ function Editor({ projectId, detail, readOnly, finishes }: { projectId: string; 
 
         {/* Panel for the step and the selection */}
         <div className="flex min-h-0 flex-1">
-        <aside aria-label={`${EDITOR_STEPS.find((s) => s.id === step)?.label} step`} className="w-72 shrink-0 overflow-y-auto border-r border-line bg-paper p-4 xl:w-80">
-          <h2 className="mb-3 text-base font-bold">{EDITOR_STEPS.find((s) => s.id === step)?.label}</h2>
-          {panel}
-        </aside>
+          <aside
+            aria-label={`${EDITOR_STEPS.find((s) => s.id === step)?.label} step`}
+            className="w-72 shrink-0 overflow-y-auto border-r border-line bg-paper p-4 xl:w-80"
+          >
+            <h2 className="mb-3 text-base font-bold">{EDITOR_STEPS.find((s) => s.id === step)?.label}</h2>
+            {panel}
+          </aside>
 
-        {/* Plan and 3D preview */}
-        <div ref={splitHost} className="relative flex min-w-0 flex-1">
-          <div className="absolute top-2 right-2 z-10 flex gap-1 rounded-lg border border-line bg-white/90 p-1 shadow-sm">
-            {(['plan', 'both', '3d'] as const).map((l) => (
-              <button key={l} type="button" aria-pressed={layout === l} onClick={() => setLayout(l)} className="rounded-md px-2.5 py-1 text-xs font-semibold text-ink-soft aria-pressed:bg-pine aria-pressed:text-white">
-                {l === 'plan' ? 'Plan' : l === 'both' ? 'Both' : '3D'}
-              </button>
-            ))}
-          </div>
-          {layout !== '3d' && option && (
-            <div className="min-w-0 bg-white" style={{ flexBasis: layout === 'both' ? `${split * 100}%` : '100%' }} tabIndex={0} onKeyDown={onPlanKeyDown} aria-label="Plan" role="group">
-              <PlanView
-                shell={editor.doc.shell}
-                optionId={activeOptionId}
-                pieces={pieces}
-                step={step}
-                selection={selection}
-                onSelect={select}
-                run={editor.run}
-                finishGesture={editor.finishGesture}
-                readOnly={readOnly}
-                unit={unit}
-                newId={newId}
-                drawing={drawing}
-                onDrawingDone={() => setDrawing(false)}
-                preview={preview}
-                highlight={highlight}
-                flaggedPieceIds={flaggedPieceIds}
-                viewCentre={viewCentreRef}
-              />
+          {/* Plan and 3D preview */}
+          <div ref={splitHost} className="relative flex min-w-0 flex-1">
+            <div className="absolute top-2 right-2 z-10 flex gap-1 rounded-lg border border-line bg-white/90 p-1 shadow-sm">
+              {(['plan', 'both', '3d'] as const).map((l) => (
+                <button
+                  key={l}
+                  type="button"
+                  aria-pressed={layout === l}
+                  onClick={() => setLayout(l)}
+                  className="rounded-md px-2.5 py-1 text-xs font-semibold text-ink-soft aria-pressed:bg-pine aria-pressed:text-white"
+                >
+                  {l === 'plan' ? 'Plan' : l === 'both' ? 'Both' : '3D'}
+                </button>
+              ))}
             </div>
-          )}
-          {layout === 'both' && (
-            <div
-              role="separator"
-              aria-orientation="vertical"
-              aria-label="Move the divider between plan and 3D"
-              aria-valuenow={Math.round(split * 100)}
-              aria-valuemin={20}
-              aria-valuemax={80}
-              tabIndex={0}
-              onPointerDown={startSplitDrag}
-              onKeyDown={(e) => {
-                if (e.key === 'ArrowLeft') setSplit((s) => Math.max(0.2, s - 0.05));
-                if (e.key === 'ArrowRight') setSplit((s) => Math.min(0.8, s + 0.05));
-              }}
-              className="w-1.5 shrink-0 cursor-col-resize bg-line hover:bg-pine"
-            />
-          )}
-          {layout !== 'plan' && (
-            <section aria-label="3D preview" className="relative min-w-0 flex-1 bg-sand">
-              <Suspense fallback={<Spinner label="Loading the 3D preview…" />}>
-                {/* A new size of view gets a fresh framing of the room (the view frames itself when it mounts). */}
-                <RoomView
-                  key={layout}
+            {layout !== '3d' && option && (
+              <div
+                className="min-w-0 bg-white"
+                style={{ flexBasis: layout === 'both' ? `${split * 100}%` : '100%' }}
+                tabIndex={0}
+                onKeyDown={onPlanKeyDown}
+                aria-label="Plan"
+                role="group"
+              >
+                <PlanView
                   shell={editor.doc.shell}
+                  optionId={activeOptionId}
                   pieces={pieces}
-                  selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
-                  onPieceClick={(id) => select({ kind: 'piece', id })}
-                  finishes={sceneFinishes}
-                  onSurfaceClick={step === 'finishes' ? (hit) => {
-                    if (hit === 'floor' || hit === 'ceiling') {
-                      setSelection(null);
-                      setFinishTarget(hit);
-                    } else select({ kind: 'wall', index: hit.wall });
-                  } : undefined}
-                  className="absolute inset-0"
-                  label={`${editor.roomName} in 3D`}
+                  step={step}
+                  selection={selection}
+                  onSelect={select}
+                  run={editor.run}
+                  finishGesture={editor.finishGesture}
+                  readOnly={readOnly}
+                  unit={unit}
+                  newId={newId}
+                  drawing={drawing}
+                  onDrawingDone={() => setDrawing(false)}
+                  preview={preview}
+                  highlight={highlight}
+                  flaggedPieceIds={flaggedPieceIds}
+                  viewCentre={viewCentreRef}
                 />
-              </Suspense>
-            </section>
-          )}
-        </div>
+              </div>
+            )}
+            {layout === 'both' && (
+              <div
+                role="separator"
+                aria-orientation="vertical"
+                aria-label="Move the divider between plan and 3D"
+                aria-valuenow={Math.round(split * 100)}
+                aria-valuemin={20}
+                aria-valuemax={80}
+                tabIndex={0}
+                onPointerDown={startSplitDrag}
+                onKeyDown={(e) => {
+                  if (e.key === 'ArrowLeft') setSplit((s) => Math.max(0.2, s - 0.05));
+                  if (e.key === 'ArrowRight') setSplit((s) => Math.min(0.8, s + 0.05));
+                }}
+                className="w-1.5 shrink-0 cursor-col-resize bg-line hover:bg-pine"
+              />
+            )}
+            {layout !== 'plan' && (
+              <section aria-label="3D preview" className="relative min-w-0 flex-1 bg-sand">
+                <Suspense fallback={<Spinner label="Loading the 3D preview…" />}>
+                  {/* A new size of view gets a fresh framing of the room (the view frames itself when it mounts). */}
+                  <RoomView
+                    key={layout}
+                    shell={editor.doc.shell}
+                    pieces={pieces}
+                    selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
+                    onPieceClick={(id) => select({ kind: 'piece', id })}
+                    finishes={sceneFinishes}
+                    onSurfaceClick={
+                      step === 'finishes'
+                        ? (hit) => {
+                            if (hit === 'floor' || hit === 'ceiling') {
+                              setSelection(null);
+                              setFinishTarget(hit);
+                            } else select({ kind: 'wall', index: hit.wall });
+                          }
+                        : undefined
+                    }
+                    className="absolute inset-0"
+                    label={`${editor.roomName} in 3D`}
+                  />
+                </Suspense>
+              </section>
+            )}
+          </div>
         </div>
       </div>
 
@@ -457,12 +697,23 @@ const KEYS: [string, string][] = [
 
 function KeysHelp({ onClose }: { onClose: () => void }) {
   return (
-    <Dialog open onClose={onClose} title="Keys in the room editor" footer={<Button variant="primary" onClick={onClose}>Close</Button>}>
+    <Dialog
+      open
+      onClose={onClose}
+      title="Keys in the room editor"
+      footer={
+        <Button variant="primary" onClick={onClose}>
+          Close
+        </Button>
+      }
+    >
       <table className="w-full text-sm">
         <tbody>
           {KEYS.map(([k, v]) => (
             <tr key={k} className="border-b border-line last:border-0">
-              <th scope="row" className="py-2 pr-4 text-left font-semibold whitespace-nowrap"><kbd className="rounded bg-sand px-1.5 py-0.5 font-sans">{k}</kbd></th>
+              <th scope="row" className="py-2 pr-4 text-left font-semibold whitespace-nowrap">
+                <kbd className="rounded bg-sand px-1.5 py-0.5 font-sans">{k}</kbd>
+              </th>
               <td className="py-2 text-ink-soft">{v}</td>
             </tr>
           ))}
@@ -491,12 +742,21 @@ function RenameRoom({ name, onClose, onSave }: { name: string; onClose: () => vo
       >
         <label className="flex flex-col gap-1.5 text-sm font-semibold">
           Room name
-          <input className="h-10 rounded-lg border border-line-strong bg-white px-3 text-[15px] font-normal" value={value} onChange={(e) => setValue(e.target.value)} autoFocus />
+          <input
+            className="h-10 rounded-lg border border-line-strong bg-white px-3 text-[15px] font-normal"
+            value={value}
+            onChange={(e) => setValue(e.target.value)}
+            autoFocus
+          />
         </label>
         {error && <Notice tone="error">{error}</Notice>}
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary">Save</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary">
+            Save
+          </Button>
         </div>
       </form>
     </Dialog>

@@ -15,7 +15,17 @@ export function targetOf(selection: Selection): Target | null {
   return null;
 }
 
-export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selection, onSelect, surface, onSurface }: {
+export function FinishesPanel({
+  doc,
+  optionId,
+  finishes,
+  run,
+  readOnly,
+  selection,
+  onSelect,
+  surface,
+  onSurface,
+}: {
   doc: OptionDoc;
   optionId: string;
   finishes: Finish[];
@@ -37,7 +47,7 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
     if (t === 'floor') return doc.finishes.floor;
     if (t === 'ceiling') return doc.finishes.ceiling;
     if (t === 'walls') return doc.finishes.walls;
-    if (t === 'wall') return wall === null ? null : doc.finishes.wallOverrides[String(wall)] ?? null;
+    if (t === 'wall') return wall === null ? null : (doc.finishes.wallOverrides[String(wall)] ?? null);
     return (pieceSlot === 'accent' ? piece?.accentFinishId : piece?.finishId) ?? null;
   };
   const choose = (id: string | null) => {
@@ -58,11 +68,16 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
     { id: 'ceiling', label: 'Ceiling' },
     { id: 'piece', label: piece ? piece.name : 'A piece (click it)', disabled: !piece },
   ];
-  const shown = finishes.filter((f) => f.name.toLowerCase().includes(q.trim().toLowerCase()) && (f.kind === 'paint' || f.status !== 'failed'));
+  const shown = finishes.filter(
+    (f) => f.name.toLowerCase().includes(q.trim().toLowerCase()) && (f.kind === 'paint' || f.status !== 'failed'),
+  );
 
   return (
     <div className="flex flex-col gap-4">
-      <p className="text-sm text-ink-soft">Choose a surface, then a finish. Click a wall or a piece on the plan, or a surface in the 3D view. Each option keeps its own finishes.</p>
+      <p className="text-sm text-ink-soft">
+        Choose a surface, then a finish. Click a wall or a piece on the plan, or a surface in the 3D view. Each option keeps its
+        own finishes.
+      </p>
       <div role="radiogroup" aria-label="Surface" className="flex flex-col gap-1">
         {targets.map((t) => {
           const assigned = currentId(t.id) ? byId.get(currentId(t.id)!) : undefined;
@@ -77,8 +92,15 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
               className="flex items-center gap-2 rounded-lg border border-line bg-white px-3 py-2 text-left text-sm disabled:text-ink-faint aria-checked:border-pine aria-checked:bg-pine-wash/60"
             >
               <span className="flex-1 font-semibold">{t.label}</span>
-              {assigned ? <Swatch finish={assigned} size="sm" /> : t.id === 'piece' && pieceColour ? <span className="block size-6 rounded border border-black/10" style={{ background: pieceColour }} /> : null}
-              <span className="max-w-28 truncate text-xs text-ink-soft">{assigned?.name ?? (t.id === 'wall' && wall !== null ? 'as all walls' : t.id === 'piece' && pieceColour ? 'own colour' : 'plain')}</span>
+              {assigned ? (
+                <Swatch finish={assigned} size="sm" />
+              ) : t.id === 'piece' && pieceColour ? (
+                <span className="block size-6 rounded border border-black/10" style={{ background: pieceColour }} />
+              ) : null}
+              <span className="max-w-28 truncate text-xs text-ink-soft">
+                {assigned?.name ??
+                  (t.id === 'wall' && wall !== null ? 'as all walls' : t.id === 'piece' && pieceColour ? 'own colour' : 'plain')}
+              </span>
             </button>
           );
         })}
@@ -102,17 +124,32 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
       )}
       <label>
         <span className="sr-only">Find a finish</span>
-        <input className={inputClass} type="search" placeholder="Find a finish" value={q} onChange={(e) => setQ(e.target.value)} />
+        <input
+          className={inputClass}
+          type="search"
+          placeholder="Find a finish"
+          value={q}
+          onChange={(e) => setQ(e.target.value)}
+        />
       </label>
       {finishes.length === 0 ? (
         <p className="text-sm text-ink-soft">
-          The studio has no finishes yet. <Link to="/finishes" className="font-semibold text-pine underline">Add photos and paints in the Finish library</Link>.
+          The studio has no finishes yet.{' '}
+          <Link to="/finishes" className="font-semibold text-pine underline">
+            Add photos and paints in the Finish library
+          </Link>
+          .
         </p>
       ) : (
         <ul className="grid grid-cols-3 gap-2" aria-label="Finishes">
           {!readOnly && (
             <li>
-              <button type="button" onClick={() => choose(null)} aria-pressed={currentId(surface) === null} className="flex h-full w-full flex-col items-center gap-1 rounded-lg border border-dashed border-line-strong p-2 text-xs text-ink-soft hover:border-pine aria-pressed:border-pine">
+              <button
+                type="button"
+                onClick={() => choose(null)}
+                aria-pressed={currentId(surface) === null}
+                className="flex h-full w-full flex-col items-center gap-1 rounded-lg border border-dashed border-line-strong p-2 text-xs text-ink-soft hover:border-pine aria-pressed:border-pine"
+              >
                 <span className="flex aspect-square w-full items-center justify-center rounded bg-paper">—</span>
                 Plain
               </button>
@@ -125,7 +162,11 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
                 disabled={readOnly}
                 aria-pressed={currentId(surface) === f.id}
                 onClick={() => choose(f.id)}
-                title={f.kind === 'photo' ? `${f.name}: repeats every ${f.repeatWidthMm / 10} × ${f.repeatHeightMm / 10} cm` : `${f.name}: paint, ${f.sheen}`}
+                title={
+                  f.kind === 'photo'
+                    ? `${f.name}: repeats every ${f.repeatWidthMm / 10} × ${f.repeatHeightMm / 10} cm`
+                    : `${f.name}: paint, ${f.sheen}`
+                }
                 className="flex w-full flex-col items-center gap-1 rounded-lg border border-line bg-white p-2 text-xs hover:border-pine aria-pressed:border-pine aria-pressed:ring-2 aria-pressed:ring-pine"
               >
                 <Swatch finish={f} />
@@ -136,7 +177,16 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
         </ul>
       )}
       {(selection?.kind === 'wall' || selection?.kind === 'piece') && (
-        <button type="button" className="self-start text-sm font-semibold text-pine hover:underline" onClick={() => { onSelect(null); onSurface('floor'); }}>Clear the selection</button>
+        <button
+          type="button"
+          className="self-start text-sm font-semibold text-pine hover:underline"
+          onClick={() => {
+            onSelect(null);
+            onSurface('floor');
+          }}
+        >
+          Clear the selection
+        </button>
       )}
     </div>
   );
@@ -144,7 +194,8 @@ export function FinishesPanel({ doc, optionId, finishes, run, readOnly, selectio
 
 function Swatch({ finish, size = 'md' }: { finish: Finish; size?: 'sm' | 'md' }) {
   const cls = size === 'sm' ? 'size-6 rounded' : 'aspect-square w-full rounded';
-  if (finish.kind === 'paint') return <span className={`${cls} block border border-black/10`} style={{ background: finish.colourHex }} />;
+  if (finish.kind === 'paint')
+    return <span className={`${cls} block border border-black/10`} style={{ background: finish.colourHex }} />;
   if (finish.files.swatchUrl) return <img src={finish.files.swatchUrl} alt="" className={`${cls} object-cover`} />;
   return <span className={`${cls} block`} style={{ background: finish.meanColourHex ?? '#c8c2b8' }} />;
 }

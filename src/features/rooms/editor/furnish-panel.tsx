@@ -3,7 +3,15 @@ import { isWebLink, type Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import {
-  addPiece, duplicatePiece, holdPiece, placePiece, removePiece, resizePiece, rotatePiece, updatePiece, type Command,
+  addPiece,
+  duplicatePiece,
+  holdPiece,
+  placePiece,
+  removePiece,
+  resizePiece,
+  rotatePiece,
+  updatePiece,
+  type Command,
 } from '../../../../shared/commands';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
@@ -16,7 +24,14 @@ import { placedNear, type Selection } from './plan-geometry';
 import { KindDrawing, KindPicker } from './kind-drawing';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
-  seating: 'Seating', tables: 'Tables', beds: 'Beds', storage: 'Storage', kitchen: 'Kitchen', lighting: 'Lighting', rugs: 'Rugs', other: 'Anything else',
+  seating: 'Seating',
+  tables: 'Tables',
+  beds: 'Beds',
+  storage: 'Storage',
+  kitchen: 'Kitchen',
+  lighting: 'Lighting',
+  rugs: 'Rugs',
+  other: 'Anything else',
 };
 
 function parseSupplierLink(text: string): Parsed<string | null> {
@@ -28,7 +43,19 @@ function parseSupplierLink(text: string): Parsed<string | null> {
 /** Tall pieces can tip: at this height or more, the editor reminds the designer to fix them to the wall (common practice). */
 export const TALL_PIECE_MM = 1200;
 
-export function FurnishPanel({ shell, optionId, pieces, run, commit, unit, readOnly, selection, onSelect, newId, viewCentre }: {
+export function FurnishPanel({
+  shell,
+  optionId,
+  pieces,
+  run,
+  commit,
+  unit,
+  readOnly,
+  selection,
+  onSelect,
+  newId,
+  viewCentre,
+}: {
   shell: RoomShell;
   optionId: string;
   pieces: Piece[];
@@ -43,19 +70,68 @@ export function FurnishPanel({ shell, optionId, pieces, run, commit, unit, readO
   viewCentre: () => [number, number];
 }) {
   const selected = selection?.kind === 'piece' ? pieces.find((p) => p.id === selection.id) : undefined;
-  if (selected) return <PieceProperties key={selected.id} piece={selected} shell={shell} pieces={pieces} viewCentre={viewCentre} optionId={optionId} run={run} commit={commit} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} />;
-  return <CatalogueList shell={shell} pieces={pieces} viewCentre={viewCentre} optionId={optionId} run={run} unit={unit} readOnly={readOnly} onSelect={onSelect} newId={newId} heldCount={pieces.filter((p) => !p.placed).length} />;
+  if (selected)
+    return (
+      <PieceProperties
+        key={selected.id}
+        piece={selected}
+        shell={shell}
+        pieces={pieces}
+        viewCentre={viewCentre}
+        optionId={optionId}
+        run={run}
+        commit={commit}
+        unit={unit}
+        readOnly={readOnly}
+        onSelect={onSelect}
+        newId={newId}
+      />
+    );
+  return (
+    <CatalogueList
+      shell={shell}
+      pieces={pieces}
+      viewCentre={viewCentre}
+      optionId={optionId}
+      run={run}
+      unit={unit}
+      readOnly={readOnly}
+      onSelect={onSelect}
+      newId={newId}
+      heldCount={pieces.filter((p) => !p.placed).length}
+    />
+  );
 }
 
-function CatalogueList({ shell, pieces, viewCentre, optionId, run, unit, readOnly, onSelect, newId, heldCount }: {
-  shell: RoomShell; pieces: Piece[]; viewCentre: () => [number, number]; optionId: string; run: (c: Command) => boolean; unit: LengthUnit; readOnly: boolean;
-  onSelect: (s: Selection) => void; newId: (prefix: string) => string; heldCount: number;
+function CatalogueList({
+  shell,
+  pieces,
+  viewCentre,
+  optionId,
+  run,
+  unit,
+  readOnly,
+  onSelect,
+  newId,
+  heldCount,
+}: {
+  shell: RoomShell;
+  pieces: Piece[];
+  viewCentre: () => [number, number];
+  optionId: string;
+  run: (c: Command) => boolean;
+  unit: LengthUnit;
+  readOnly: boolean;
+  onSelect: (s: Selection) => void;
+  newId: (prefix: string) => string;
+  heldCount: number;
 }) {
   const [filter, setFilter] = useState('');
   const add = (kind: CatalogueId, held: boolean) => {
     const id = newId('piece');
     const piece = pieceFromCatalogue(kind, id, viewCentre());
-    if (run(addPiece(optionId, held ? { ...piece, placed: false } : placedNear(shell, pieces, piece, viewCentre())))) onSelect({ kind: 'piece', id });
+    if (run(addPiece(optionId, held ? { ...piece, placed: false } : placedNear(shell, pieces, piece, viewCentre()))))
+      onSelect({ kind: 'piece', id });
   };
   const shown = CATALOGUE.filter((e) => e.name.toLowerCase().includes(filter.trim().toLowerCase()));
   return (
@@ -66,7 +142,13 @@ function CatalogueList({ shell, pieces, viewCentre, optionId, run, unit, readOnl
       </p>
       <label>
         <span className="sr-only">Find in the catalogue</span>
-        <input className={inputClass} type="search" placeholder="Find a piece, e.g. queen or wardrobe" value={filter} onChange={(e) => setFilter(e.target.value)} />
+        <input
+          className={inputClass}
+          type="search"
+          placeholder="Find a piece, e.g. queen or wardrobe"
+          value={filter}
+          onChange={(e) => setFilter(e.target.value)}
+        />
       </label>
       {CATALOGUE_GROUPS.map((group) => {
         const entries = shown.filter((e) => e.group === group);
@@ -95,8 +177,18 @@ function CatalogueList({ shell, pieces, viewCentre, optionId, run, unit, readOnl
                   </div>
                   {!readOnly && (
                     <>
-                      <Button size="sm" variant="quiet" onClick={() => add(e.id as CatalogueId, true)} aria-label={`Put a ${e.name} in the holding area`} title="Put it in the holding area">Hold</Button>
-                      <Button size="sm" onClick={() => add(e.id as CatalogueId, false)} aria-label={`Add ${e.name}`}>Add</Button>
+                      <Button
+                        size="sm"
+                        variant="quiet"
+                        onClick={() => add(e.id as CatalogueId, true)}
+                        aria-label={`Put a ${e.name} in the holding area`}
+                        title="Put it in the holding area"
+                      >
+                        Hold
+                      </Button>
+                      <Button size="sm" onClick={() => add(e.id as CatalogueId, false)} aria-label={`Add ${e.name}`}>
+                        Add
+                      </Button>
                     </>
                   )}
                 </li>
@@ -109,9 +201,30 @@ function CatalogueList({ shell, pieces, viewCentre, optionId, run, unit, readOnl
   );
 }
 
-function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, commit, unit, readOnly, onSelect, newId }: {
-  piece: Piece; shell: RoomShell; pieces: Piece[]; viewCentre: () => [number, number]; optionId: string; run: (c: Command) => boolean; commit: FieldRun; unit: LengthUnit; readOnly: boolean;
-  onSelect: (s: Selection) => void; newId: (prefix: string) => string;
+function PieceProperties({
+  piece,
+  shell,
+  pieces,
+  viewCentre,
+  optionId,
+  run,
+  commit,
+  unit,
+  readOnly,
+  onSelect,
+  newId,
+}: {
+  piece: Piece;
+  shell: RoomShell;
+  pieces: Piece[];
+  viewCentre: () => [number, number];
+  optionId: string;
+  run: (c: Command) => boolean;
+  commit: FieldRun;
+  unit: LengthUnit;
+  readOnly: boolean;
+  onSelect: (s: Selection) => void;
+  newId: (prefix: string) => string;
 }) {
   const patch = (p: Parameters<typeof updatePiece>[2]) => !readOnly && run(updatePiece(optionId, piece.id, p));
   const field = (p: Parameters<typeof updatePiece>[2]) => commit(updatePiece(optionId, piece.id, p));
@@ -127,28 +240,64 @@ function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, comm
   return (
     <div className="flex flex-col gap-4">
       <div className="flex items-center justify-between gap-2">
-        <button type="button" className="text-sm font-semibold text-pine hover:underline" onClick={() => onSelect(null)}>← Catalogue</button>
+        <button type="button" className="text-sm font-semibold text-pine hover:underline" onClick={() => onSelect(null)}>
+          ← Catalogue
+        </button>
         <span className="text-xs text-ink-faint">{piece.placed ? 'In the room' : 'In the holding area'}</span>
       </div>
-      <CommitTextField label="Name" value={piece.name} format={(v) => v} parse={textParser('A piece needs a name.')} onCommit={(v) => field({ name: v })} disabled={readOnly} />
+      <CommitTextField
+        label="Name"
+        value={piece.name}
+        format={(v) => v}
+        parse={textParser('A piece needs a name.')}
+        onCommit={(v) => field({ name: v })}
+        disabled={readOnly}
+      />
       <KindPicker
         kind={piece.kind ?? 'plain-block'}
         settings={piece.settings ?? {}}
         box={piece}
         readOnly={readOnly}
         onKind={(kind) => patch({ kind })}
-        onSettings={(settings) => patch({ settings: Object.values(settings).some((v) => v !== undefined) ? JSON.parse(JSON.stringify(settings)) : null })}
+        onSettings={(settings) =>
+          patch({ settings: Object.values(settings).some((v) => v !== undefined) ? JSON.parse(JSON.stringify(settings)) : null })
+        }
       />
       <div className="grid grid-cols-3 gap-2">
-        <LengthField commit="blur" label="Width" unit={unit} valueMm={piece.width} disabled={readOnly} onChange={(v) => (v ? size({ width: v }) : 'Enter a width.')} />
-        <LengthField commit="blur" label="Depth" unit={unit} valueMm={piece.depth} disabled={readOnly} onChange={(v) => (v ? size({ depth: v }) : 'Enter a depth.')} />
-        <LengthField commit="blur" label="Height" unit={unit} valueMm={piece.height} disabled={readOnly} onChange={(v) => (v ? size({ height: v }) : 'Enter a height.')} />
+        <LengthField
+          commit="blur"
+          label="Width"
+          unit={unit}
+          valueMm={piece.width}
+          disabled={readOnly}
+          onChange={(v) => (v ? size({ width: v }) : 'Enter a width.')}
+        />
+        <LengthField
+          commit="blur"
+          label="Depth"
+          unit={unit}
+          valueMm={piece.depth}
+          disabled={readOnly}
+          onChange={(v) => (v ? size({ depth: v }) : 'Enter a depth.')}
+        />
+        <LengthField
+          commit="blur"
+          label="Height"
+          unit={unit}
+          valueMm={piece.height}
+          disabled={readOnly}
+          onChange={(v) => (v ? size({ height: v }) : 'Enter a height.')}
+        />
       </div>
       <div className="grid grid-cols-2 gap-2">
         <div className="flex flex-col gap-1.5">
-          <label htmlFor="piece-turn" className="text-sm font-semibold">Turn</label>
+          <label htmlFor="piece-turn" className="text-sm font-semibold">
+            Turn
+          </label>
           <div className="flex items-center gap-1">
-            <Button size="sm" onClick={() => turnBy(-15)} aria-label="Turn 15° anticlockwise" disabled={readOnly}>↺</Button>
+            <Button size="sm" onClick={() => turnBy(-15)} aria-label="Turn 15° anticlockwise" disabled={readOnly}>
+              ↺
+            </Button>
             <input
               id="piece-turn"
               className={`${inputClass} h-8 min-w-0 px-2 text-center`}
@@ -159,17 +308,36 @@ function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, comm
               aria-invalid={turn.error ? true : undefined}
               title={turn.error}
             />
-            <Button size="sm" onClick={() => turnBy(15)} aria-label="Turn 15° clockwise" disabled={readOnly}>↻</Button>
+            <Button size="sm" onClick={() => turnBy(15)} aria-label="Turn 15° clockwise" disabled={readOnly}>
+              ↻
+            </Button>
           </div>
         </div>
-        <LengthField commit="blur" label="Above the floor" unit={unit} valueMm={piece.elevation} disabled={readOnly} onChange={(v) => (v !== null ? field({ elevation: v }) : 'Enter a height (0 stands on the floor).')} />
+        <LengthField
+          commit="blur"
+          label="Above the floor"
+          unit={unit}
+          valueMm={piece.elevation}
+          disabled={readOnly}
+          onChange={(v) => (v !== null ? field({ elevation: v }) : 'Enter a height (0 stands on the floor).')}
+        />
       </div>
       <fieldset className="flex flex-col gap-1.5">
         <legend className="text-sm font-semibold">The client</legend>
         <div className="flex gap-2">
           {(['existing', 'new'] as const).map((s) => (
-            <label key={s} className={`flex flex-1 cursor-pointer items-center justify-center rounded-lg border px-3 py-2 text-sm font-semibold ${piece.status === s ? 'border-pine bg-pine-wash text-pine-dark' : 'border-line-strong bg-white'}`}>
-              <input type="radio" className="sr-only" name="piece-status" checked={piece.status === s} disabled={readOnly} onChange={() => patch({ status: s })} />
+            <label
+              key={s}
+              className={`flex flex-1 cursor-pointer items-center justify-center rounded-lg border px-3 py-2 text-sm font-semibold ${piece.status === s ? 'border-pine bg-pine-wash text-pine-dark' : 'border-line-strong bg-white'}`}
+            >
+              <input
+                type="radio"
+                className="sr-only"
+                name="piece-status"
+                checked={piece.status === s}
+                disabled={readOnly}
+                onChange={() => patch({ status: s })}
+              />
               {s === 'existing' ? 'Already owns it' : 'New piece'}
             </label>
           ))}
@@ -179,16 +347,45 @@ function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, comm
         <div className="flex gap-2">
           <label className="flex flex-col gap-1.5 text-sm font-semibold">
             Colour
-            <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.colour ?? '#d9cfc0'} disabled={readOnly} onChange={(e) => patch({ colour: e.target.value })} />
+            <input
+              type="color"
+              className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1"
+              value={piece.colour ?? '#d9cfc0'}
+              disabled={readOnly}
+              onChange={(e) => patch({ colour: e.target.value })}
+            />
           </label>
           <label className="flex flex-col gap-1.5 text-sm font-semibold" title="Legs, frame and handles">
             Accent
-            <input type="color" className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1" value={piece.accentColour ?? '#8a7a68'} disabled={readOnly} onChange={(e) => patch({ accentColour: e.target.value })} />
+            <input
+              type="color"
+              className="h-10 w-14 cursor-pointer rounded-lg border border-line-strong bg-white p-1"
+              value={piece.accentColour ?? '#8a7a68'}
+              disabled={readOnly}
+              onChange={(e) => patch({ accentColour: e.target.value })}
+            />
           </label>
         </div>
-        <CommitTextField label="Price" inputMode="decimal" value={piece.price ?? null} format={(v) => (v === null ? '' : String(v))} parse={numberParser({ what: 'a price', min: 0, optional: true })} onCommit={(v) => field({ price: v })} disabled={readOnly} hint="Per piece, your currency" />
+        <CommitTextField
+          label="Price"
+          inputMode="decimal"
+          value={piece.price ?? null}
+          format={(v) => (v === null ? '' : String(v))}
+          parse={numberParser({ what: 'a price', min: 0, optional: true })}
+          onCommit={(v) => field({ price: v })}
+          disabled={readOnly}
+          hint="Per piece, your currency"
+        />
       </div>
-      <CommitTextField label="Supplier link" type="url" value={piece.supplierUrl ?? null} format={(v) => v ?? ''} parse={parseSupplierLink} onCommit={(v) => field({ supplierUrl: v })} disabled={readOnly} />
+      <CommitTextField
+        label="Supplier link"
+        type="url"
+        value={piece.supplierUrl ?? null}
+        format={(v) => v ?? ''}
+        parse={parseSupplierLink}
+        onCommit={(v) => field({ supplierUrl: v })}
+        disabled={readOnly}
+      />
       {piece.height >= TALL_PIECE_MM && (
         <p className="rounded-lg bg-ochre-wash px-3 py-2 text-sm text-ochre">
           A tall piece can tip over: fix it to the wall, especially where children live (see the furniture maker’s anchoring kit).
@@ -196,16 +393,33 @@ function PieceProperties({ piece, shell, pieces, viewCentre, optionId, run, comm
       )}
       {!readOnly && (
         <div className="flex flex-wrap gap-2">
-          <Button size="sm" onClick={() => { const id = newId('piece'); if (run(duplicatePiece(optionId, piece.id, id))) onSelect({ kind: 'piece', id }); }}>Duplicate</Button>
+          <Button
+            size="sm"
+            onClick={() => {
+              const id = newId('piece');
+              if (run(duplicatePiece(optionId, piece.id, id))) onSelect({ kind: 'piece', id });
+            }}
+          >
+            Duplicate
+          </Button>
           {piece.placed ? (
-            <Button size="sm" onClick={() => run(holdPiece(optionId, piece.id))}>Move to the holding area</Button>
+            <Button size="sm" onClick={() => run(holdPiece(optionId, piece.id))}>
+              Move to the holding area
+            </Button>
           ) : (
-            <Button size="sm" onClick={() => {
-              const at = placedNear(shell, pieces, piece, viewCentre());
-              run(placePiece(optionId, piece.id, at.x, at.y));
-            }}>Place in the room</Button>
+            <Button
+              size="sm"
+              onClick={() => {
+                const at = placedNear(shell, pieces, piece, viewCentre());
+                run(placePiece(optionId, piece.id, at.x, at.y));
+              }}
+            >
+              Place in the room
+            </Button>
           )}
-          <Button size="sm" variant="danger" onClick={() => run(removePiece(optionId, piece.id)) && onSelect(null)}>Remove</Button>
+          <Button size="sm" variant="danger" onClick={() => run(removePiece(optionId, piece.id)) && onSelect(null)}>
+            Remove
+          </Button>
         </div>
       )}
     </div>

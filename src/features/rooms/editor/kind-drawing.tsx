@@ -2,7 +2,13 @@
 // size for the kind, fitted into a square. Used in the Furnish panel's kind list and catalogue.
 import { memo, useMemo, useState } from 'react';
 import { CATALOGUE } from '../../../../shared/catalogue/catalogue';
-import { KIND_LABELS, KIND_SETTINGS, PIECE_KINDS, type PieceKind, type PieceSettings } from '../../../../shared/schemas/piece-kind';
+import {
+  KIND_LABELS,
+  KIND_SETTINGS,
+  PIECE_KINDS,
+  type PieceKind,
+  type PieceSettings,
+} from '../../../../shared/schemas/piece-kind';
 import { inputClass } from '../../../components/ui/field';
 import { PartShape, topViewParts } from './plan-piece-forms';
 
@@ -12,26 +18,64 @@ export function kindBox(kind: PieceKind): { width: number; depth: number; height
   return entry ? { width: entry.width, depth: entry.depth, height: entry.height } : { width: 1000, depth: 600, height: 800 };
 }
 
-export const KindDrawing = memo(function KindDrawing({ kind, settings, box, size = 40 }: {
-  kind: PieceKind; settings?: PieceSettings; box?: { width: number; depth: number; height: number }; size?: number;
+export const KindDrawing = memo(function KindDrawing({
+  kind,
+  settings,
+  box,
+  size = 40,
+}: {
+  kind: PieceKind;
+  settings?: PieceSettings;
+  box?: { width: number; depth: number; height: number };
+  size?: number;
 }) {
   const b = box ?? kindBox(kind);
   const parts = useMemo(() => topViewParts({ kind, settings, ...b }), [kind, settings, b.width, b.depth, b.height]); // eslint-disable-line react-hooks/exhaustive-deps
   const side = Math.max(b.width, b.depth) * 1.08;
   return (
-    <svg viewBox={`${-side / 2} ${-side / 2} ${side} ${side}`} width={size} height={size} aria-hidden="true" className="shrink-0 rounded bg-paper">
-      <rect x={-b.width / 2} y={-b.depth / 2} width={b.width} height={b.depth} fill="#ffffff" stroke="#5c534a" strokeWidth={side / 70} />
+    <svg
+      viewBox={`${-side / 2} ${-side / 2} ${side} ${side}`}
+      width={size}
+      height={size}
+      aria-hidden="true"
+      className="shrink-0 rounded bg-paper"
+    >
+      <rect
+        x={-b.width / 2}
+        y={-b.depth / 2}
+        width={b.width}
+        height={b.depth}
+        fill="#ffffff"
+        stroke="#5c534a"
+        strokeWidth={side / 70}
+      />
       {parts.map((part, i) => (
-        <PartShape key={i} part={part} fill={part.slot === 'own' ? part.colour ?? '#ffffff' : part.slot === 'accent' ? '#b8ab9b' : '#ece4d6'} stroke={side / 110} />
+        <PartShape
+          key={i}
+          part={part}
+          fill={part.slot === 'own' ? (part.colour ?? '#ffffff') : part.slot === 'accent' ? '#b8ab9b' : '#ece4d6'}
+          stroke={side / 110}
+        />
       ))}
     </svg>
   );
 });
 
 /** The piece's kind with its drawing, a short searchable list to change it, and the kind's settings. */
-export function KindPicker({ kind, settings, box, readOnly, onKind, onSettings }: {
-  kind: PieceKind; settings: PieceSettings; box: { width: number; depth: number; height: number }; readOnly: boolean;
-  onKind: (kind: PieceKind) => void; onSettings: (settings: PieceSettings) => void;
+export function KindPicker({
+  kind,
+  settings,
+  box,
+  readOnly,
+  onKind,
+  onSettings,
+}: {
+  kind: PieceKind;
+  settings: PieceSettings;
+  box: { width: number; depth: number; height: number };
+  readOnly: boolean;
+  onKind: (kind: PieceKind) => void;
+  onSettings: (settings: PieceSettings) => void;
 }) {
   const [open, setOpen] = useState(false);
   const [q, setQ] = useState('');
@@ -45,7 +89,12 @@ export function KindPicker({ kind, settings, box, readOnly, onKind, onSettings }
           <div className="truncate text-sm font-semibold">{KIND_LABELS[kind]}</div>
         </div>
         {!readOnly && (
-          <button type="button" className="text-sm font-semibold text-pine hover:underline" aria-expanded={open} onClick={() => setOpen((o) => !o)}>
+          <button
+            type="button"
+            className="text-sm font-semibold text-pine hover:underline"
+            aria-expanded={open}
+            onClick={() => setOpen((o) => !o)}
+          >
             {open ? 'Done' : 'Change kind'}
           </button>
         )}
@@ -54,7 +103,14 @@ export function KindPicker({ kind, settings, box, readOnly, onKind, onSettings }
         <div className="flex flex-col gap-1.5 rounded-lg border border-line bg-paper p-2">
           <label>
             <span className="sr-only">Find a kind</span>
-            <input className={inputClass} type="search" placeholder="Find a kind, e.g. lamp" value={q} onChange={(e) => setQ(e.target.value)} autoFocus />
+            <input
+              className={inputClass}
+              type="search"
+              placeholder="Find a kind, e.g. lamp"
+              value={q}
+              onChange={(e) => setQ(e.target.value)}
+              autoFocus
+            />
           </label>
           <ul className="flex max-h-56 flex-col gap-1 overflow-y-auto" aria-label="Kinds">
             {shown.map((k) => (
@@ -82,11 +138,26 @@ export function KindPicker({ kind, settings, box, readOnly, onKind, onSettings }
 }
 
 const CHOICES: Partial<Record<keyof PieceSettings, [string, string][]>> = {
-  arms: [['both', 'Arms'], ['none', 'No arms']],
-  base: [['legs', 'On legs'], ['plinth', 'On a plinth']],
-  hand: [['left', 'Return on the left'], ['right', 'Return on the right']],
-  top: [['rectangular', 'Square corners'], ['round', 'Round']],
-  fronts: [['doors', 'Doors'], ['drawers', 'Drawers']],
+  arms: [
+    ['both', 'Arms'],
+    ['none', 'No arms'],
+  ],
+  base: [
+    ['legs', 'On legs'],
+    ['plinth', 'On a plinth'],
+  ],
+  hand: [
+    ['left', 'Return on the left'],
+    ['right', 'Return on the right'],
+  ],
+  top: [
+    ['rectangular', 'Square corners'],
+    ['round', 'Round'],
+  ],
+  fronts: [
+    ['doors', 'Doors'],
+    ['drawers', 'Drawers'],
+  ],
 };
 const NUMBERS: Partial<Record<keyof PieceSettings, { label: string; min: number; max: number }>> = {
   count: { label: 'Doors, drawers or shelves', min: 1, max: 12 },
@@ -95,7 +166,17 @@ const NUMBERS: Partial<Record<keyof PieceSettings, { label: string; min: number;
 };
 
 /** The settings the kind takes, each a small field; a change replaces that one setting. */
-function KindSettings({ kind, settings, readOnly, onSettings }: { kind: PieceKind; settings: PieceSettings; readOnly: boolean; onSettings: (s: PieceSettings) => void }) {
+function KindSettings({
+  kind,
+  settings,
+  readOnly,
+  onSettings,
+}: {
+  kind: PieceKind;
+  settings: PieceSettings;
+  readOnly: boolean;
+  onSettings: (s: PieceSettings) => void;
+}) {
   const keys = KIND_SETTINGS[kind];
   if (keys.length === 0) return null;
   return (
@@ -106,9 +187,18 @@ function KindSettings({ kind, settings, readOnly, onSettings }: { kind: PieceKin
           return (
             <label key={key} className="flex flex-col gap-1 text-xs font-semibold">
               {key === 'hand' ? 'Corner' : key[0].toUpperCase() + key.slice(1)}
-              <select className={`${inputClass} h-8 px-2`} disabled={readOnly} value={String(settings[key] ?? '')} onChange={(e) => onSettings({ ...settings, [key]: e.target.value || undefined })}>
+              <select
+                className={`${inputClass} h-8 px-2`}
+                disabled={readOnly}
+                value={String(settings[key] ?? '')}
+                onChange={(e) => onSettings({ ...settings, [key]: e.target.value || undefined })}
+              >
                 <option value="">As drawn</option>
-                {choices.map(([v, label]) => <option key={v} value={v}>{label}</option>)}
+                {choices.map(([v, label]) => (
+                  <option key={v} value={v}>
+                    {label}
+                  </option>
+                ))}
               </select>
             </label>
           );
@@ -116,7 +206,12 @@ function KindSettings({ kind, settings, readOnly, onSettings }: { kind: PieceKin
         if (key === 'footboard') {
           return (
             <label key={key} className="flex items-center gap-2 text-xs font-semibold">
-              <input type="checkbox" disabled={readOnly} checked={settings.footboard === true} onChange={(e) => onSettings({ ...settings, footboard: e.target.checked })} />
+              <input
+                type="checkbox"
+                disabled={readOnly}
+                checked={settings.footboard === true}
+                onChange={(e) => onSettings({ ...settings, footboard: e.target.checked })}
+              />
               Footboard
             </label>
           );

@@ -8,7 +8,12 @@ import { errorMessage } from '../../../lib/api';
 import type { RoomEditor } from './use-room-editor';
 
 /** Option tabs across the top: switch, add, duplicate, rename, reorder and delete options. */
-export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
+export function OptionsBar({
+  editor,
+  optionId,
+  onChoose,
+  readOnly,
+}: {
   editor: RoomEditor;
   optionId: string;
   onChoose: (id: string) => void;
@@ -49,20 +54,40 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
       </div>
       {!readOnly && current && (
         <>
-          <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>+ New option</Button>
+          <Button size="sm" variant="quiet" busy={busy} onClick={() => act(async () => onChoose(await editor.addOption()))}>
+            + New option
+          </Button>
           <details className="relative" ref={menu}>
-            <summary className="flex h-8 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-semibold whitespace-nowrap text-ink-soft hover:bg-sand">This option ▾</summary>
-            <div className="absolute left-0 z-20 mt-1 flex w-52 flex-col rounded-xl border border-line bg-white p-1 shadow-lg" onClick={() => menu.current?.removeAttribute('open')}>
+            <summary className="flex h-8 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-semibold whitespace-nowrap text-ink-soft hover:bg-sand">
+              This option ▾
+            </summary>
+            <div
+              className="absolute left-0 z-20 mt-1 flex w-52 flex-col rounded-xl border border-line bg-white p-1 shadow-lg"
+              onClick={() => menu.current?.removeAttribute('open')}
+            >
               <MenuItem onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate option</MenuItem>
               <MenuItem onClick={() => setDialog('rename')}>Rename option</MenuItem>
-              <MenuItem disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>Move left</MenuItem>
-              <MenuItem disabled={current.position === editor.options.length - 1} onClick={() => act(() => editor.moveOption(optionId, 1))}>Move right</MenuItem>
-              <MenuItem disabled={editor.options.length <= 1} onClick={() => setDialog('delete')} danger>Delete option</MenuItem>
+              <MenuItem disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>
+                Move left
+              </MenuItem>
+              <MenuItem
+                disabled={current.position === editor.options.length - 1}
+                onClick={() => act(() => editor.moveOption(optionId, 1))}
+              >
+                Move right
+              </MenuItem>
+              <MenuItem disabled={editor.options.length <= 1} onClick={() => setDialog('delete')} danger>
+                Delete option
+              </MenuItem>
             </div>
           </details>
         </>
       )}
-      {error && <div className="w-full"><Notice tone="error">{error}</Notice></div>}
+      {error && (
+        <div className="w-full">
+          <Notice tone="error">{error}</Notice>
+        </div>
+      )}
       {dialog === 'rename' && current && <RenameOption option={current} editor={editor} onClose={() => setDialog(null)} />}
       {dialog === 'delete' && current && (
         <Dialog
@@ -71,26 +96,52 @@ export function OptionsBar({ editor, optionId, onChoose, readOnly }: {
           title={`Delete ${optionLabel(current.position, current.name)}?`}
           footer={
             <>
-              <Button variant="quiet" onClick={() => setDialog(null)}>Keep it</Button>
-              <Button variant="danger" onClick={() => act(async () => {
-                const next = editor.options.find((o) => o.id !== current.id);
-                await editor.deleteOption(current.id);
-                if (next) onChoose(next.id);
-                setDialog(null);
-              })}>Delete option</Button>
+              <Button variant="quiet" onClick={() => setDialog(null)}>
+                Keep it
+              </Button>
+              <Button
+                variant="danger"
+                onClick={() =>
+                  act(async () => {
+                    const next = editor.options.find((o) => o.id !== current.id);
+                    await editor.deleteOption(current.id);
+                    if (next) onChoose(next.id);
+                    setDialog(null);
+                  })
+                }
+              >
+                Delete option
+              </Button>
             </>
           }
         >
-          <p className="text-ink-soft">Its pieces and finishes go with it. The room’s walls and openings stay, as they belong to every option.</p>
+          <p className="text-ink-soft">
+            Its pieces and finishes go with it. The room’s walls and openings stay, as they belong to every option.
+          </p>
         </Dialog>
       )}
     </div>
   );
 }
 
-function MenuItem({ children, onClick, disabled, danger }: { children: ReactNode; onClick: () => void; disabled?: boolean; danger?: boolean }) {
+function MenuItem({
+  children,
+  onClick,
+  disabled,
+  danger,
+}: {
+  children: ReactNode;
+  onClick: () => void;
+  disabled?: boolean;
+  danger?: boolean;
+}) {
   return (
-    <button type="button" disabled={disabled} onClick={onClick} className={`rounded-lg px-3 py-2 text-left text-sm font-semibold hover:bg-sand disabled:text-ink-faint disabled:hover:bg-transparent ${danger ? 'text-clay' : 'text-ink'}`}>
+    <button
+      type="button"
+      disabled={disabled}
+      onClick={onClick}
+      className={`rounded-lg px-3 py-2 text-left text-sm font-semibold hover:bg-sand disabled:text-ink-faint disabled:hover:bg-transparent ${danger ? 'text-clay' : 'text-ink'}`}
+    >
       {children}
     </button>
   );
@@ -112,12 +163,28 @@ function RenameOption({ option, editor, onClose }: { option: OptionRecord; edito
   return (
     <Dialog open onClose={onClose} title="Name this option">
       <form onSubmit={submit} className="flex flex-col gap-4">
-        <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} placeholder="e.g. Calm and light" hint="The client sees it beside the option’s letter." autoFocus />
-        <TextAreaField label="Note for the client" value={note} onChange={(e) => setNote(e.target.value)} hint="A line or two on what this option is about." />
+        <TextField
+          label="Name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          placeholder="e.g. Calm and light"
+          hint="The client sees it beside the option’s letter."
+          autoFocus
+        />
+        <TextAreaField
+          label="Note for the client"
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+          hint="A line or two on what this option is about."
+        />
         {error && <Notice tone="error">{error}</Notice>}
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary">Save</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary">
+            Save
+          </Button>
         </div>
       </form>
     </Dialog>

@@ -1,6 +1,13 @@
 import { useMemo, useState, type KeyboardEvent } from 'react';
 import type { RoomShell } from '../../../../shared/schemas/room';
-import { closeOutlineGap, setOutline, setWallHeight, setWallLength, setWallThickness, type Command } from '../../../../shared/commands';
+import {
+  closeOutlineGap,
+  setOutline,
+  setWallHeight,
+  setWallLength,
+  setWallThickness,
+  type Command,
+} from '../../../../shared/commands';
 import { outlineFromWalk, walkFromOutline, type WalkStep } from '../../../../shared/geometry/outline';
 import { layoutShellWalls } from '../../../../shared/geometry/walls';
 import { formatLength, parseLength, type LengthUnit } from '../../../../shared/units/length';
@@ -20,25 +27,41 @@ export interface MeasuredWall {
   cornerDeg: number;
 }
 
-export const toWalk = (walls: readonly MeasuredWall[]): WalkStep[] => walls.map((w) => ({ lengthMm: w.lengthMm, turn: w.turn, turnDeg: 180 - w.cornerDeg }));
+export const toWalk = (walls: readonly MeasuredWall[]): WalkStep[] =>
+  walls.map((w) => ({ lengthMm: w.lengthMm, turn: w.turn, turnDeg: 180 - w.cornerDeg }));
 
 /** Reads "420", "420 l 135", "4.2m r", "13' 9\" l" in the user's unit: a length, then an optional turn and corner angle. */
-export function parseMeasuredWall(text: string, unit: LengthUnit): { ok: true; wall: MeasuredWall } | { ok: false; message: string } {
+export function parseMeasuredWall(
+  text: string,
+  unit: LengthUnit,
+): { ok: true; wall: MeasuredWall } | { ok: false; message: string } {
   const match = text.trim().match(/^(.*?)(?:\s+([lr]|left|right)\b\s*(\d+(?:\.\d+)?)?\s*°?)?$/i);
-  if (!match || !match[1]) return { ok: false, message: 'Type a length, e.g. 420 or 4.2m, then optionally l or r and the corner angle.' };
+  if (!match || !match[1])
+    return { ok: false, message: 'Type a length, e.g. 420 or 4.2m, then optionally l or r and the corner angle.' };
   const length = parseLength(match[1], unit);
   if (!length.ok) return length;
   if (length.mm <= 0) return { ok: false, message: 'A wall needs a length above zero.' };
   const turn = match[2]?.toLowerCase().startsWith('l') ? 'left' : 'right';
   const cornerDeg = match[3] ? Number(match[3]) : 90;
-  if (!(cornerDeg > 0 && cornerDeg < 180)) return { ok: false, message: 'A corner angle is between 0° and 180° (90° is square).' };
+  if (!(cornerDeg > 0 && cornerDeg < 180))
+    return { ok: false, message: 'A corner angle is between 0° and 180° (90° is square).' };
   return { ok: true, wall: { lengthMm: length.mm, turn, cornerDeg } };
 }
 
 /** Runs a command for a field: null when done, else the sentence saying why not (shown beside the field). */
 export type FieldRun = (c: Command, o?: { gesture?: string }) => string | null;
 
-export function OutlinePanel({ shell, run, commit, unit, readOnly, selection, onSelect, onPreview, onDraw }: {
+export function OutlinePanel({
+  shell,
+  run,
+  commit,
+  unit,
+  readOnly,
+  selection,
+  onSelect,
+  onPreview,
+  onDraw,
+}: {
   shell: RoomShell;
   run: (c: Command) => boolean;
   commit: FieldRun;
@@ -79,8 +102,23 @@ export function OutlinePanel({ shell, run, commit, unit, readOnly, selection, on
   return (
     <div className="flex flex-col gap-5">
       <div className="grid grid-cols-2 gap-3">
-        <LengthField commit="blur" label="Ceiling height" unit={unit} valueMm={shell.wallHeight} disabled={readOnly} onChange={(v) => (v ? commit(setWallHeight(v)) : 'Enter a height.')} />
-        <LengthField commit="blur" label="Wall thickness" unit={unit} valueMm={shell.wallThickness} disabled={readOnly} onChange={(v) => (v ? commit(setWallThickness(v)) : 'Enter a thickness.')} hint="All walls" />
+        <LengthField
+          commit="blur"
+          label="Ceiling height"
+          unit={unit}
+          valueMm={shell.wallHeight}
+          disabled={readOnly}
+          onChange={(v) => (v ? commit(setWallHeight(v)) : 'Enter a height.')}
+        />
+        <LengthField
+          commit="blur"
+          label="Wall thickness"
+          unit={unit}
+          valueMm={shell.wallThickness}
+          disabled={readOnly}
+          onChange={(v) => (v ? commit(setWallThickness(v)) : 'Enter a thickness.')}
+          hint="All walls"
+        />
       </div>
       <div>
         <h3 className="mb-2 text-sm font-semibold text-ink">Walls</h3>
@@ -101,21 +139,44 @@ export function OutlinePanel({ shell, run, commit, unit, readOnly, selection, on
             </li>
           ))}
         </ol>
-        <p className="mt-2 text-xs text-ink-faint">Lengths are the inside faces, as you measure them. Changing one wall keeps every corner’s angle.</p>
+        <p className="mt-2 text-xs text-ink-faint">
+          Lengths are the inside faces, as you measure them. Changing one wall keeps every corner’s angle.
+        </p>
       </div>
       {!readOnly && (
         <div className="flex flex-wrap gap-2">
-          <Button size="sm" onClick={() => setMeasuring([])}>Type the walls afresh</Button>
-          <Button size="sm" onClick={onDraw}>Draw by clicking corners</Button>
+          <Button size="sm" onClick={() => setMeasuring([])}>
+            Type the walls afresh
+          </Button>
+          <Button size="sm" onClick={onDraw}>
+            Draw by clicking corners
+          </Button>
         </div>
       )}
     </div>
   );
 }
 
-function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected, onFocus, onLength, onThickness }: {
-  index: number; lengthMm: number; thicknessOverride: number | null; unit: LengthUnit; readOnly: boolean; selected: boolean;
-  onFocus: () => void; onLength: (mm: number) => string | null; onThickness: (mm: number | null) => string | null;
+function WallRow({
+  index,
+  lengthMm,
+  thicknessOverride,
+  unit,
+  readOnly,
+  selected,
+  onFocus,
+  onLength,
+  onThickness,
+}: {
+  index: number;
+  lengthMm: number;
+  thicknessOverride: number | null;
+  unit: LengthUnit;
+  readOnly: boolean;
+  selected: boolean;
+  onFocus: () => void;
+  onLength: (mm: number) => string | null;
+  onThickness: (mm: number | null) => string | null;
 }) {
   const length = useCommitText<number>({
     value: lengthMm,
@@ -132,7 +193,9 @@ function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected,
   return (
     <div className={`rounded-lg border px-3 py-2 ${selected ? 'border-pine bg-pine-wash/50' : 'border-line bg-white'}`}>
       <div className="flex items-center gap-2">
-        <label className="shrink-0 text-sm font-semibold whitespace-nowrap text-ink-soft" htmlFor={`wall-length-${index}`}>Wall {index + 1}</label>
+        <label className="shrink-0 text-sm font-semibold whitespace-nowrap text-ink-soft" htmlFor={`wall-length-${index}`}>
+          Wall {index + 1}
+        </label>
         <input
           id={`wall-length-${index}`}
           className={`${inputClass} h-9 min-w-0 px-2`}
@@ -144,7 +207,10 @@ function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected,
           aria-invalid={length.error ? true : undefined}
           aria-describedby={length.error ? errorId : undefined}
         />
-        <label className="flex shrink-0 items-center gap-1 text-xs whitespace-nowrap text-ink-faint" title="This wall’s own thickness">
+        <label
+          className="flex shrink-0 items-center gap-1 text-xs whitespace-nowrap text-ink-faint"
+          title="This wall’s own thickness"
+        >
           <input
             type="checkbox"
             disabled={readOnly}
@@ -156,15 +222,33 @@ function WallRow({ index, lengthMm, thicknessOverride, unit, readOnly, selected,
       </div>
       {thicknessOverride !== null && (
         <div className="mt-2">
-          <LengthField commit="blur" label={`Wall ${index + 1} thickness`} unit={unit} valueMm={thicknessOverride} disabled={readOnly} onChange={(v) => (v ? onThickness(v) : 'Enter a thickness.')} />
+          <LengthField
+            commit="blur"
+            label={`Wall ${index + 1} thickness`}
+            unit={unit}
+            valueMm={thicknessOverride}
+            disabled={readOnly}
+            onChange={(v) => (v ? onThickness(v) : 'Enter a thickness.')}
+          />
         </div>
       )}
-      {length.error && <p id={errorId} className="mt-1 text-sm text-clay" role="alert">{length.error}</p>}
+      {length.error && (
+        <p id={errorId} className="mt-1 text-sm text-clay" role="alert">
+          {length.error}
+        </p>
+      )}
     </div>
   );
 }
 
-export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus = true }: {
+export function MeasureWalls({
+  walls,
+  unit,
+  onChange,
+  onCancel,
+  onUse,
+  autoFocus = true,
+}: {
   walls: MeasuredWall[];
   unit: LengthUnit;
   onChange: (w: MeasuredWall[]) => void;
@@ -196,7 +280,8 @@ export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus
     <div className="flex flex-col gap-4">
       <p className="text-sm text-ink-soft">
         Walk round the room and type each wall as you measured it, then Enter. After the length you can add the turn:
-        <strong> r</strong> or <strong>l</strong> and the corner’s angle (90° is square, 135° a splayed corner), e.g. <code className="rounded bg-sand px-1">350 l 135</code>.
+        <strong> r</strong> or <strong>l</strong> and the corner’s angle (90° is square, 135° a splayed corner), e.g.{' '}
+        <code className="rounded bg-sand px-1">350 l 135</code>.
       </p>
       <ol className="flex flex-col gap-1.5">
         {walls.map((w, i) => (
@@ -204,17 +289,41 @@ export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus
             <div className="flex items-center gap-2">
               <span className="shrink-0 font-semibold whitespace-nowrap text-ink-soft">Wall {i + 1}</span>
               <span className="min-w-0 flex-1 whitespace-nowrap tabular-nums">{formatLength(w.lengthMm, unit)}</span>
-              <button type="button" className="rounded px-1.5 text-ink-faint hover:bg-sand hover:text-clay" aria-label={`Remove wall ${i + 1}`} onClick={() => onChange(walls.filter((_, j) => j !== i))}>×</button>
+              <button
+                type="button"
+                className="rounded px-1.5 text-ink-faint hover:bg-sand hover:text-clay"
+                aria-label={`Remove wall ${i + 1}`}
+                onClick={() => onChange(walls.filter((_, j) => j !== i))}
+              >
+                ×
+              </button>
             </div>
             <div className="flex items-center gap-2">
-              <label className="sr-only" htmlFor={`turn-${i}`}>Turn after wall {i + 1}</label>
-              <select id={`turn-${i}`} className={`${inputClass} h-8 min-w-0 px-2 text-sm`} value={w.turn} onChange={(e) => update(i, { turn: e.target.value as MeasuredWall['turn'] })}>
+              <label className="sr-only" htmlFor={`turn-${i}`}>
+                Turn after wall {i + 1}
+              </label>
+              <select
+                id={`turn-${i}`}
+                className={`${inputClass} h-8 min-w-0 px-2 text-sm`}
+                value={w.turn}
+                onChange={(e) => update(i, { turn: e.target.value as MeasuredWall['turn'] })}
+              >
                 <option value="right">then right</option>
                 <option value="left">then left</option>
               </select>
-              <label className="sr-only" htmlFor={`corner-${i}`}>Corner angle after wall {i + 1}</label>
+              <label className="sr-only" htmlFor={`corner-${i}`}>
+                Corner angle after wall {i + 1}
+              </label>
               <span className="w-16 shrink-0">
-                <input id={`corner-${i}`} className={`${inputClass} h-8 px-2 text-sm`} inputMode="decimal" value={w.cornerDeg} onChange={(e) => Number(e.target.value) > 0 && Number(e.target.value) < 180 && update(i, { cornerDeg: Number(e.target.value) })} />
+                <input
+                  id={`corner-${i}`}
+                  className={`${inputClass} h-8 px-2 text-sm`}
+                  inputMode="decimal"
+                  value={w.cornerDeg}
+                  onChange={(e) =>
+                    Number(e.target.value) > 0 && Number(e.target.value) < 180 && update(i, { cornerDeg: Number(e.target.value) })
+                  }
+                />
               </span>
               <span className="text-ink-faint">°</span>
             </div>
@@ -222,26 +331,48 @@ export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus
         ))}
       </ol>
       <div>
-        <label htmlFor="next-wall" className="text-sm font-semibold">Wall {walls.length + 1}</label>
-        <input id="next-wall" className={`${inputClass} mt-1`} placeholder="e.g. 420, or 350 l 135" value={entry} onChange={(e) => setEntry(e.target.value)} onKeyDown={add} autoFocus={autoFocus} aria-invalid={error ? true : undefined} />
-        {error && <p className="mt-1 text-sm text-clay" role="alert">{error}</p>}
+        <label htmlFor="next-wall" className="text-sm font-semibold">
+          Wall {walls.length + 1}
+        </label>
+        <input
+          id="next-wall"
+          className={`${inputClass} mt-1`}
+          placeholder="e.g. 420, or 350 l 135"
+          value={entry}
+          onChange={(e) => setEntry(e.target.value)}
+          onKeyDown={add}
+          autoFocus={autoFocus}
+          aria-invalid={error ? true : undefined}
+        />
+        {error && (
+          <p className="mt-1 text-sm text-clay" role="alert">
+            {error}
+          </p>
+        )}
       </div>
-      {walls.length >= 3 && (gap < CLOSED_GAP_MM ? (
-        <Notice tone="ok">The walls close. {walls.length} walls, ready to use.</Notice>
-      ) : (
-        <Notice tone="warn">
-          The last corner misses the first by <strong>{formatLength(gap, unit)}</strong>. Tapes and walls are never perfect: close it by
-          adjusting the last walls, or check a measurement.
-        </Notice>
-      ))}
+      {walls.length >= 3 &&
+        (gap < CLOSED_GAP_MM ? (
+          <Notice tone="ok">The walls close. {walls.length} walls, ready to use.</Notice>
+        ) : (
+          <Notice tone="warn">
+            The last corner misses the first by <strong>{formatLength(gap, unit)}</strong>. Tapes and walls are never perfect:
+            close it by adjusting the last walls, or check a measurement.
+          </Notice>
+        ))}
       <div className="flex flex-wrap gap-2">
         {walls.length >= 3 && gap >= CLOSED_GAP_MM && (
-          <Button variant="primary" size="sm" onClick={() => onUse(closeOutlineGap(toWalk(walls)))}>Close the outline</Button>
+          <Button variant="primary" size="sm" onClick={() => onUse(closeOutlineGap(toWalk(walls)))}>
+            Close the outline
+          </Button>
         )}
         {walls.length >= 3 && gap < CLOSED_GAP_MM && (
-          <Button variant="primary" size="sm" onClick={() => onUse(setOutline(corners.slice(0, walls.length)))}>Use these walls</Button>
+          <Button variant="primary" size="sm" onClick={() => onUse(setOutline(corners.slice(0, walls.length)))}>
+            Use these walls
+          </Button>
         )}
-        <Button size="sm" variant="quiet" onClick={onCancel}>Cancel</Button>
+        <Button size="sm" variant="quiet" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </div>
   );
@@ -249,5 +380,9 @@ export function MeasureWalls({ walls, unit, onChange, onCancel, onUse, autoFocus
 
 /** The measured walls of an existing outline, for starting a fresh measurement from it. */
 export function measuredWallsOf(outline: RoomShell['outline']): MeasuredWall[] {
-  return walkFromOutline(outline).steps.map((s) => ({ lengthMm: s.lengthMm, turn: s.turn ?? 'right', cornerDeg: 180 - (s.turnDeg ?? 90) }));
+  return walkFromOutline(outline).steps.map((s) => ({
+    lengthMm: s.lengthMm,
+    turn: s.turn ?? 'right',
+    cornerDeg: 180 - (s.turnDeg ?? 90),
+  }));
 }

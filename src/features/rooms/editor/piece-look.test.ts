@@ -16,7 +16,8 @@ describe('piece labels on the plan', () => {
     expect(labelColourOn('#d8cdbd')).toBe(LABEL_DARK);
     expect(labelColourOn('#2f4858')).toBe(LABEL_LIGHT);
     expect(labelColourOn('#5b4636')).toBe(LABEL_LIGHT);
-    for (const fill of ['#ffffff', '#ece4d6', '#8a6a4f', '#2f4858', '#5b4636', '#a3ad94', '#000000']) expect(contrastRatio(fill, labelColourOn(fill))).toBeGreaterThanOrEqual(4.5);
+    for (const fill of ['#ffffff', '#ece4d6', '#8a6a4f', '#2f4858', '#5b4636', '#a3ad94', '#000000'])
+      expect(contrastRatio(fill, labelColourOn(fill))).toBeGreaterThanOrEqual(4.5);
   });
 
   it('keeps the label inside a piece it fits, and puts it beside one too small to read it in', () => {

@@ -18,11 +18,7 @@ export const HOLDING_SPACING_MM = 250;
 /** Dimension lines sit this far outside the wall's outer face. */
 export const DIMENSION_OFFSET_MM = 350;
 
-export type Selection =
-  | { kind: 'piece'; id: string }
-  | { kind: 'opening'; id: string }
-  | { kind: 'wall'; index: number }
-  | null;
+export type Selection = { kind: 'piece'; id: string } | { kind: 'opening'; id: string } | { kind: 'wall'; index: number } | null;
 
 export interface PlanLayout {
   walls: WallLayout[];
@@ -54,7 +50,14 @@ export function planLayout(shell: RoomShell, pieces: readonly Piece[]): PlanLayo
     w: x + holdingWidth - roomBounds.minX + 2 * PLAN_MARGIN_MM,
     h: holdingHeight + 2 * PLAN_MARGIN_MM,
   };
-  return { walls, outer, roomBounds, openings: placeShellOpenings(shell), holding: { x, y: roomBounds.minY, width: holdingWidth, height: holdingHeight, slots }, viewBox };
+  return {
+    walls,
+    outer,
+    roomBounds,
+    openings: placeShellOpenings(shell),
+    holding: { x, y: roomBounds.minY, width: holdingWidth, height: holdingHeight, slots },
+    viewBox,
+  };
 }
 
 /** SVG path data of a closed ring. */
@@ -77,14 +80,21 @@ export function inHolding(layout: PlanLayout, point: readonly [number, number]):
  * The piece moved to free floor inside the outline nearest to `near` (plan mm), snapped to a wall
  * when the snap keeps it on free floor. Its turn and size stay as they are.
  */
-export function placedNear<P extends Piece>(shell: RoomShell, pieces: readonly Piece[], piece: P, near: readonly [number, number]): P {
+export function placedNear<P extends Piece>(
+  shell: RoomShell,
+  pieces: readonly Piece[],
+  piece: P,
+  near: readonly [number, number],
+): P {
   const request = { id: piece.id, width: piece.width, depth: piece.depth, rotation: piece.rotation };
   const [x, y] = findPlacement(shell, pieces, { ...request, near });
   const at = { ...piece, x, y, placed: true };
   const snapped = snapPieceToWalls(at, shell).piece;
   // A snapped piece touches its wall, so it is tested a hair smaller than it is.
   const fit = pieceFootprintMm({ ...snapped, width: snapped.width - 2, depth: snapped.depth - 2 });
-  const free = boxInsideOutline(shell.outline, fit) && pieces.every((p) => !p.placed || p.id === piece.id || !boxesOverlap(fit, pieceFootprintMm(p)));
+  const free =
+    boxInsideOutline(shell.outline, fit) &&
+    pieces.every((p) => !p.placed || p.id === piece.id || !boxesOverlap(fit, pieceFootprintMm(p)));
   return free ? snapped : at;
 }
 

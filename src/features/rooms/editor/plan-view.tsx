@@ -4,8 +4,19 @@ import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import {
-  holdPiece, moveCorner, movePiece, placePiece, rotatePiece, setOutline, snapAngle, snapPieceToPieces, snapPieceToWalls, snapToGrid,
-  updateOpening, addPiece, type Command,
+  holdPiece,
+  moveCorner,
+  movePiece,
+  placePiece,
+  rotatePiece,
+  setOutline,
+  snapAngle,
+  snapPieceToPieces,
+  snapPieceToWalls,
+  snapToGrid,
+  updateOpening,
+  addPiece,
+  type Command,
 } from '../../../../shared/commands';
 import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
@@ -104,7 +115,9 @@ export function PlanView(props: Props) {
   useEffect(() => {
     const svg = svgRef.current;
     if (!svg) return;
-    const observer = new ResizeObserver(([entry]) => setBox({ w: entry.contentRect.width || 800, h: entry.contentRect.height || 600 }));
+    const observer = new ResizeObserver(([entry]) =>
+      setBox({ w: entry.contentRect.width || 800, h: entry.contentRect.height || 600 }),
+    );
     observer.observe(svg);
     return () => observer.disconnect();
   }, []);
@@ -133,8 +146,14 @@ export function PlanView(props: Props) {
     if (!movable) return;
     (e.target as Element).setPointerCapture?.(e.pointerId);
     const at = toPlan(e.clientX, e.clientY);
-    const centre = piece.placed ? [piece.x, piece.y] : layout.holding.slots[piece.id] ?? [piece.x, piece.y];
-    setDrag({ kind: 'piece', id: piece.id, offset: [at[0] - centre[0], at[1] - centre[1]], gesture: nextGesture('move'), held: !piece.placed });
+    const centre = piece.placed ? [piece.x, piece.y] : (layout.holding.slots[piece.id] ?? [piece.x, piece.y]);
+    setDrag({
+      kind: 'piece',
+      id: piece.id,
+      offset: [at[0] - centre[0], at[1] - centre[1]],
+      gesture: nextGesture('move'),
+      held: !piece.placed,
+    });
   };
 
   const onPointerMove = (e: ReactPointerEvent) => {
@@ -192,7 +211,9 @@ export function PlanView(props: Props) {
       const step = Math.round(d / CORNER_GRID_MM) * CORNER_GRID_MM;
       const n = drag.outline.length;
       const moved = drag.outline.map((c, i) =>
-        i === drag.index || i === (drag.index + 1) % n ? [Math.round(c[0] + wall.outward[0] * step), Math.round(c[1] + wall.outward[1] * step)] as [number, number] : c,
+        i === drag.index || i === (drag.index + 1) % n
+          ? ([Math.round(c[0] + wall.outward[0] * step), Math.round(c[1] + wall.outward[1] * step)] as [number, number])
+          : c,
       );
       run(setOutline(moved), { gesture: drag.gesture });
       return;
@@ -217,7 +238,10 @@ export function PlanView(props: Props) {
       } else if (piece && !piece.placed && drag.ghost) {
         let pose = { ...piece, x: centre[0], y: centre[1] };
         if (!e.altKey) pose = snapPieceToWalls(pose, shell).piece;
-        if (run(placePiece(optionId, piece.id, Math.round(pose.x), Math.round(pose.y)), { gesture: drag.gesture }) && pose.rotation !== piece.rotation) {
+        if (
+          run(placePiece(optionId, piece.id, Math.round(pose.x), Math.round(pose.y)), { gesture: drag.gesture }) &&
+          pose.rotation !== piece.rotation
+        ) {
           run(rotatePiece(optionId, piece.id, pose.rotation), { gesture: drag.gesture });
         }
       }
@@ -296,13 +320,41 @@ export function PlanView(props: Props) {
           <path d="M1000 0H0V1000" fill="none" stroke="#dcd2c2" strokeWidth={1 * mmPerPx} />
         </pattern>
       </defs>
-      <rect x={view.x - view.w} y={view.y - view.h} width={view.w * 3} height={view.h * 3} fill="url(#plan-grid-major)" onPointerDown={onBackgroundPointerDown} data-testid="plan-background" />
+      <rect
+        x={view.x - view.w}
+        y={view.y - view.h}
+        width={view.w * 3}
+        height={view.h * 3}
+        fill="url(#plan-grid-major)"
+        onPointerDown={onBackgroundPointerDown}
+        data-testid="plan-background"
+      />
 
       {/* Holding area */}
       {(step === 'furnish' || pieces.some((p) => !p.placed)) && (
         <g aria-label="Holding area">
-          <rect x={layout.holding.x} y={layout.holding.y} width={layout.holding.width} height={layout.holding.height} rx={120} fill="#efe8dc" stroke="#c9bca8" strokeDasharray={`${stroke * 4} ${stroke * 3}`} strokeWidth={stroke} onPointerDown={onBackgroundPointerDown} />
-          <text x={layout.holding.x + layout.holding.width / 2} y={layout.holding.y - text * 0.7} textAnchor="middle" fontSize={text} fill="#5c534a" fontWeight={600}>Holding area</text>
+          <rect
+            x={layout.holding.x}
+            y={layout.holding.y}
+            width={layout.holding.width}
+            height={layout.holding.height}
+            rx={120}
+            fill="#efe8dc"
+            stroke="#c9bca8"
+            strokeDasharray={`${stroke * 4} ${stroke * 3}`}
+            strokeWidth={stroke}
+            onPointerDown={onBackgroundPointerDown}
+          />
+          <text
+            x={layout.holding.x + layout.holding.width / 2}
+            y={layout.holding.y - text * 0.7}
+            textAnchor="middle"
+            fontSize={text}
+            fill="#5c534a"
+            fontWeight={600}
+          >
+            Holding area
+          </text>
         </g>
       )}
 
@@ -312,7 +364,10 @@ export function PlanView(props: Props) {
       {layout.walls.map((w) => (
         <line
           key={`wall-${w.index}`}
-          x1={w.start[0]} y1={w.start[1]} x2={w.end[0]} y2={w.end[1]}
+          x1={w.start[0]}
+          y1={w.start[1]}
+          x2={w.end[0]}
+          y2={w.end[1]}
           stroke={selection?.kind === 'wall' && selection.index === w.index ? '#2f6b5c' : 'transparent'}
           strokeWidth={Math.max(w.thicknessMm, stroke * 6)}
           className={step === 'outline' || step === 'openings' || step === 'finishes' ? 'cursor-pointer' : ''}
@@ -322,7 +377,13 @@ export function PlanView(props: Props) {
             onSelect({ kind: 'wall', index: w.index });
             if (step === 'outline' && editable && !props.drawing) {
               (e.target as Element).setPointerCapture?.(e.pointerId);
-              setDrag({ kind: 'wall', index: w.index, start: toPlan(e.clientX, e.clientY), outline: shell.outline, gesture: nextGesture('wall') });
+              setDrag({
+                kind: 'wall',
+                index: w.index,
+                start: toPlan(e.clientX, e.clientY),
+                outline: shell.outline,
+                gesture: nextGesture('wall'),
+              });
             }
           }}
           data-testid={`wall-${w.index}`}
@@ -349,11 +410,30 @@ export function PlanView(props: Props) {
               setDrag({ kind: 'opening', id: o.id, grab: along - opening.offset, gesture: nextGesture('opening') });
             }}
           >
-            <path d={ringPath([o.insideStart, o.insideEnd, o.outsideEnd, o.outsideStart])} fill={selected ? '#e3eee9' : '#fbf8f3'} stroke={selected ? '#2f6b5c' : 'none'} strokeWidth={stroke * 1.5} />
+            <path
+              d={ringPath([o.insideStart, o.insideEnd, o.outsideEnd, o.outsideStart])}
+              fill={selected ? '#e3eee9' : '#fbf8f3'}
+              stroke={selected ? '#2f6b5c' : 'none'}
+              strokeWidth={stroke * 1.5}
+            />
             {opening.type === 'window' && (
               <>
-                <line x1={mid(o.insideStart, o.outsideStart, 0.35)[0]} y1={mid(o.insideStart, o.outsideStart, 0.35)[1]} x2={mid(o.insideEnd, o.outsideEnd, 0.35)[0]} y2={mid(o.insideEnd, o.outsideEnd, 0.35)[1]} stroke="#5b8fa8" strokeWidth={stroke} />
-                <line x1={mid(o.insideStart, o.outsideStart, 0.65)[0]} y1={mid(o.insideStart, o.outsideStart, 0.65)[1]} x2={mid(o.insideEnd, o.outsideEnd, 0.65)[0]} y2={mid(o.insideEnd, o.outsideEnd, 0.65)[1]} stroke="#5b8fa8" strokeWidth={stroke} />
+                <line
+                  x1={mid(o.insideStart, o.outsideStart, 0.35)[0]}
+                  y1={mid(o.insideStart, o.outsideStart, 0.35)[1]}
+                  x2={mid(o.insideEnd, o.outsideEnd, 0.35)[0]}
+                  y2={mid(o.insideEnd, o.outsideEnd, 0.35)[1]}
+                  stroke="#5b8fa8"
+                  strokeWidth={stroke}
+                />
+                <line
+                  x1={mid(o.insideStart, o.outsideStart, 0.65)[0]}
+                  y1={mid(o.insideStart, o.outsideStart, 0.65)[1]}
+                  x2={mid(o.insideEnd, o.outsideEnd, 0.65)[0]}
+                  y2={mid(o.insideEnd, o.outsideEnd, 0.65)[1]}
+                  stroke="#5b8fa8"
+                  strokeWidth={stroke}
+                />
               </>
             )}
           </g>
@@ -364,8 +444,21 @@ export function PlanView(props: Props) {
         const sweepFlag = s.sweepDeg > 0 ? 1 : 0;
         return (
           <g key={`swing-${s.openingId}`} pointerEvents="none">
-            <line x1={s.hingeMm[0]} y1={s.hingeMm[1]} x2={s.openTipMm[0]} y2={s.openTipMm[1]} stroke="#3a332d" strokeWidth={stroke * 1.2} />
-            <path d={`M${s.closedTipMm[0]} ${s.closedTipMm[1]} A${r} ${r} 0 0 ${sweepFlag} ${s.openTipMm[0]} ${s.openTipMm[1]}`} fill="none" stroke="#786e63" strokeWidth={stroke * 0.8} strokeDasharray={`${stroke * 3} ${stroke * 2.5}`} />
+            <line
+              x1={s.hingeMm[0]}
+              y1={s.hingeMm[1]}
+              x2={s.openTipMm[0]}
+              y2={s.openTipMm[1]}
+              stroke="#3a332d"
+              strokeWidth={stroke * 1.2}
+            />
+            <path
+              d={`M${s.closedTipMm[0]} ${s.closedTipMm[1]} A${r} ${r} 0 0 ${sweepFlag} ${s.openTipMm[0]} ${s.openTipMm[1]}`}
+              fill="none"
+              stroke="#786e63"
+              strokeWidth={stroke * 0.8}
+              strokeDasharray={`${stroke * 3} ${stroke * 2.5}`}
+            />
           </g>
         );
       })}
@@ -379,13 +472,41 @@ export function PlanView(props: Props) {
         let angle = (Math.atan2(w.direction[1], w.direction[0]) * 180) / Math.PI;
         if (angle > 90 || angle < -90) angle += 180;
         return (
-          <g key={`dim-${w.index}`} className="cursor-pointer" onPointerDown={(e) => { e.stopPropagation(); onSelect({ kind: 'wall', index: w.index }); }} data-testid={`wall-length-${w.index}`}>
+          <g
+            key={`dim-${w.index}`}
+            className="cursor-pointer"
+            onPointerDown={(e) => {
+              e.stopPropagation();
+              onSelect({ kind: 'wall', index: w.index });
+            }}
+            data-testid={`wall-length-${w.index}`}
+          >
             <line x1={a[0]} y1={a[1]} x2={b[0]} y2={b[1]} stroke="#a39889" strokeWidth={stroke * 0.7} />
-            <line x1={a[0] - w.outward[0] * 80} y1={a[1] - w.outward[1] * 80} x2={a[0] + w.outward[0] * 80} y2={a[1] + w.outward[1] * 80} stroke="#a39889" strokeWidth={stroke * 0.7} />
-            <line x1={b[0] - w.outward[0] * 80} y1={b[1] - w.outward[1] * 80} x2={b[0] + w.outward[0] * 80} y2={b[1] + w.outward[1] * 80} stroke="#a39889" strokeWidth={stroke * 0.7} />
+            <line
+              x1={a[0] - w.outward[0] * 80}
+              y1={a[1] - w.outward[1] * 80}
+              x2={a[0] + w.outward[0] * 80}
+              y2={a[1] + w.outward[1] * 80}
+              stroke="#a39889"
+              strokeWidth={stroke * 0.7}
+            />
+            <line
+              x1={b[0] - w.outward[0] * 80}
+              y1={b[1] - w.outward[1] * 80}
+              x2={b[0] + w.outward[0] * 80}
+              y2={b[1] + w.outward[1] * 80}
+              stroke="#a39889"
+              strokeWidth={stroke * 0.7}
+            />
             <g transform={`translate(${m[0]} ${m[1]}) rotate(${angle})`}>
               <rect x={-text * 2.6} y={-text * 0.75} width={text * 5.2} height={text * 1.5} rx={text * 0.3} fill="#f7f3ec" />
-              <text textAnchor="middle" dominantBaseline="central" fontSize={text * 0.95} fill={selection?.kind === 'wall' && selection.index === w.index ? '#24564a' : '#2a2521'} fontWeight={600}>
+              <text
+                textAnchor="middle"
+                dominantBaseline="central"
+                fontSize={text * 0.95}
+                fill={selection?.kind === 'wall' && selection.index === w.index ? '#24564a' : '#2a2521'}
+                fontWeight={600}
+              >
                 {formatLength(w.lengthMm, unit)}
               </text>
             </g>
@@ -405,7 +526,7 @@ export function PlanView(props: Props) {
         const flaggedPiece = flagged.has(p.id);
         const front = mid(ring[2], ring[3], 0.5);
         const rug = p.height <= 20;
-        const fill = rug ? '#f1e7d6' : p.colour ?? (p.status === 'existing' ? '#ece4d6' : '#ffffff');
+        const fill = rug ? '#f1e7d6' : (p.colour ?? (p.status === 'existing' ? '#ece4d6' : '#ffffff'));
         const outline = {
           stroke: flaggedPiece ? '#a4472f' : selected ? '#2f6b5c' : '#5c534a',
           strokeWidth: stroke * (selected || flaggedPiece ? 2.4 : 1.1),
@@ -428,11 +549,26 @@ export function PlanView(props: Props) {
             {/* The box outline again over the top view: the box is what is dragged and checked. */}
             <path d={ringPath(ring)} fill="none" pointerEvents="none" {...outline} />
             {/* The front edge, where a person sits or stands to use the piece */}
-            <line x1={ring[2][0]} y1={ring[2][1]} x2={ring[3][0]} y2={ring[3][1]} stroke={selected ? '#2f6b5c' : '#786e63'} strokeWidth={stroke * 2.4} strokeLinecap="round" />
+            <line
+              x1={ring[2][0]}
+              y1={ring[2][1]}
+              x2={ring[3][0]}
+              y2={ring[3][1]}
+              stroke={selected ? '#2f6b5c' : '#786e63'}
+              strokeWidth={stroke * 2.4}
+              strokeLinecap="round"
+            />
             <PieceLabel piece={pose} text={text} fill={fill} />
             {selected && editable && step === 'furnish' && p.placed && !ghost && (
               <g>
-                <line x1={front[0]} y1={front[1]} x2={front[0] + (front[0] - p.x) / Math.hypot(front[0] - p.x, front[1] - p.y || 1) * TURN_HANDLE_MM} y2={front[1] + (front[1] - p.y) / Math.hypot(front[0] - p.x, front[1] - p.y || 1) * TURN_HANDLE_MM} stroke="#2f6b5c" strokeWidth={stroke} />
+                <line
+                  x1={front[0]}
+                  y1={front[1]}
+                  x2={front[0] + ((front[0] - p.x) / Math.hypot(front[0] - p.x, front[1] - p.y || 1)) * TURN_HANDLE_MM}
+                  y2={front[1] + ((front[1] - p.y) / Math.hypot(front[0] - p.x, front[1] - p.y || 1)) * TURN_HANDLE_MM}
+                  stroke="#2f6b5c"
+                  strokeWidth={stroke}
+                />
                 <circle
                   data-testid="turn-handle"
                   cx={front[0] + ((front[0] - p.x) / (Math.hypot(front[0] - p.x, front[1] - p.y) || 1)) * TURN_HANDLE_MM}
@@ -459,15 +595,31 @@ export function PlanView(props: Props) {
       {/* A finding's narrow gap, drawn with its measurement */}
       {props.highlight?.gap && (
         <g pointerEvents="none">
-          <line x1={props.highlight.gap.a[0]} y1={props.highlight.gap.a[1]} x2={props.highlight.gap.b[0]} y2={props.highlight.gap.b[1]} stroke="#a4472f" strokeWidth={stroke * 2} />
-          <text x={mid(props.highlight.gap.a, props.highlight.gap.b, 0.5)[0]} y={mid(props.highlight.gap.a, props.highlight.gap.b, 0.5)[1] - text} textAnchor="middle" fontSize={text} fill="#a4472f" fontWeight={700}>
+          <line
+            x1={props.highlight.gap.a[0]}
+            y1={props.highlight.gap.a[1]}
+            x2={props.highlight.gap.b[0]}
+            y2={props.highlight.gap.b[1]}
+            stroke="#a4472f"
+            strokeWidth={stroke * 2}
+          />
+          <text
+            x={mid(props.highlight.gap.a, props.highlight.gap.b, 0.5)[0]}
+            y={mid(props.highlight.gap.a, props.highlight.gap.b, 0.5)[1] - text}
+            textAnchor="middle"
+            fontSize={text}
+            fill="#a4472f"
+            fontWeight={700}
+          >
             {props.highlight.gap.label}
           </text>
         </g>
       )}
 
       {/* Corners, in the Outline step */}
-      {step === 'outline' && editable && !props.drawing &&
+      {step === 'outline' &&
+        editable &&
+        !props.drawing &&
         shell.outline.map((c, i) => (
           <circle
             key={`corner-${i}`}
@@ -492,8 +644,23 @@ export function PlanView(props: Props) {
       {/* Drawing an outline by clicking corners */}
       {props.drawing && draft.length > 0 && (
         <g pointerEvents="none">
-          <polyline points={[...draft, ...(pointer ? [drawPoint(draft, pointer, false)] : [])].map((p) => p.join(',')).join(' ')} fill="none" stroke="#2f6b5c" strokeWidth={stroke * 2} />
-          {draft.map((p, i) => <circle key={i} cx={p[0]} cy={p[1]} r={stroke * 4} fill={i === 0 ? '#2f6b5c' : '#ffffff'} stroke="#2f6b5c" strokeWidth={stroke} />)}
+          <polyline
+            points={[...draft, ...(pointer ? [drawPoint(draft, pointer, false)] : [])].map((p) => p.join(',')).join(' ')}
+            fill="none"
+            stroke="#2f6b5c"
+            strokeWidth={stroke * 2}
+          />
+          {draft.map((p, i) => (
+            <circle
+              key={i}
+              cx={p[0]}
+              cy={p[1]}
+              r={stroke * 4}
+              fill={i === 0 ? '#2f6b5c' : '#ffffff'}
+              stroke="#2f6b5c"
+              strokeWidth={stroke}
+            />
+          ))}
           {pointer && (
             <text x={pointer[0] + text} y={pointer[1] - text} fontSize={text} fill="#24564a" fontWeight={600}>
               {formatLength(distance(draft[draft.length - 1], drawPoint(draft, pointer, false)), unit)}
@@ -502,7 +669,15 @@ export function PlanView(props: Props) {
         </g>
       )}
       {props.preview && props.preview.length > 1 && (
-        <polyline data-testid="walk-preview" points={props.preview.map((p) => p.join(',')).join(' ')} fill="none" stroke="#2f6b5c" strokeWidth={stroke * 2} strokeDasharray={`${stroke * 6} ${stroke * 4}`} pointerEvents="none" />
+        <polyline
+          data-testid="walk-preview"
+          points={props.preview.map((p) => p.join(',')).join(' ')}
+          fill="none"
+          stroke="#2f6b5c"
+          strokeWidth={stroke * 2}
+          strokeDasharray={`${stroke * 6} ${stroke * 4}`}
+          pointerEvents="none"
+        />
       )}
     </svg>
   );

@@ -4,7 +4,11 @@ import { toSceneFinish, type SceneFinish } from '../../../../shared/finishes/sce
 import type { SurfaceFinishes } from '../../../scene/room-view';
 
 /** What an option's surfaces and pieces wear in 3D, from its finish ids and the studio's finishes. */
-export function sceneFinishesFor(doc: OptionDoc | undefined, finishes: ReadonlyMap<string, Finish>, size: 'standard' | 'large' = 'standard'): SurfaceFinishes {
+export function sceneFinishesFor(
+  doc: OptionDoc | undefined,
+  finishes: ReadonlyMap<string, Finish>,
+  size: 'standard' | 'large' = 'standard',
+): SurfaceFinishes {
   if (!doc) return {};
   const scene = (id: string | null | undefined): SceneFinish | null => {
     const f = id ? finishes.get(id) : undefined;
@@ -23,5 +27,12 @@ export function sceneFinishesFor(doc: OptionDoc | undefined, finishes: ReadonlyM
     const accent = scene(p.accentFinishId);
     if (accent) pieceAccents[p.id] = accent;
   }
-  return { floor: scene(doc.finishes.floor), ceiling: scene(doc.finishes.ceiling), walls: scene(doc.finishes.walls), wallOverrides, pieces, pieceAccents };
+  return {
+    floor: scene(doc.finishes.floor),
+    ceiling: scene(doc.finishes.ceiling),
+    walls: scene(doc.finishes.walls),
+    wallOverrides,
+    pieces,
+    pieceAccents,
+  };
 }

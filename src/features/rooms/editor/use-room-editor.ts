@@ -6,8 +6,22 @@ import type { OptionDoc } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import type { OptionRecord, RoomRecord } from '../../../../shared/schemas/room-api';
 import {
-  applyToHistory, canRedo, canUndo, createEditorDoc, createHistory, endGesture, mergeOptionDoc, mergeShell, redo, redoLabel, undo, undoLabel,
-  type ApplyOptions, type Command, type EditorDoc, type History,
+  applyToHistory,
+  canRedo,
+  canUndo,
+  createEditorDoc,
+  createHistory,
+  endGesture,
+  mergeOptionDoc,
+  mergeShell,
+  redo,
+  redoLabel,
+  undo,
+  undoLabel,
+  type ApplyOptions,
+  type Command,
+  type EditorDoc,
+  type History,
 } from '../../../../shared/commands';
 import type { FieldProblem } from '../../../../shared/geometry/validate';
 
@@ -71,7 +85,10 @@ const docOf = (b: Baseline): EditorDoc => ({ shell: b.shell, options: b.options 
 
 /** The draft's document over the server's, keeping only options that still exist. */
 function withDraft(base: Baseline, draft: Draft): EditorDoc {
-  const options = { ...base.options, ...Object.fromEntries(Object.entries(draft.doc.options).filter(([id]) => id in base.options)) };
+  const options = {
+    ...base.options,
+    ...Object.fromEntries(Object.entries(draft.doc.options).filter(([id]) => id in base.options)),
+  };
   return { shell: draft.doc.shell, options };
 }
 
@@ -80,7 +97,9 @@ function startingPoint(base: Baseline, draft: Draft | null) {
   if (!draft) return { history: createHistory(docOf(base)), restored: null, staleDraft: null };
   const sameVersions =
     draft.roomVersion === base.roomVersion &&
-    Object.keys(draft.optionVersions).every((id) => !(id in base.optionVersions) || base.optionVersions[id] === draft.optionVersions[id]);
+    Object.keys(draft.optionVersions).every(
+      (id) => !(id in base.optionVersions) || base.optionVersions[id] === draft.optionVersions[id],
+    );
   // Nothing changed on the server since the draft was written: carry on from it.
   if (sameVersions) return { history: createHistory(withDraft(base, draft)), restored: 'restored' as const, staleDraft: null };
   return { history: createHistory(docOf(base)), restored: 'stale' as const, staleDraft: draft };
@@ -149,20 +168,28 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
     setSaveState('saving');
     try {
       if (parts.shell) {
-        const { room } = await api<{ room: RoomRecord }>(`/api/rooms/${roomId}`, { method: 'PUT', body: { version: base.roomVersion, shell: current.shell } });
+        const { room } = await api<{ room: RoomRecord }>(`/api/rooms/${roomId}`, {
+          method: 'PUT',
+          body: { version: base.roomVersion, shell: current.shell },
+        });
         baseline.current = { ...baseline.current, shell: current.shell, roomVersion: room.version };
         qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, room } : d));
       }
       for (const optionId of parts.options) {
         const version = baseline.current.optionVersions[optionId];
         const optionDoc = current.options[optionId];
-        const { option } = await api<{ option: OptionRecord }>(`/api/options/${optionId}`, { method: 'PUT', body: { version, doc: optionDoc } });
+        const { option } = await api<{ option: OptionRecord }>(`/api/options/${optionId}`, {
+          method: 'PUT',
+          body: { version, doc: optionDoc },
+        });
         baseline.current = {
           ...baseline.current,
           options: { ...baseline.current.options, [optionId]: optionDoc },
           optionVersions: { ...baseline.current.optionVersions, [optionId]: option.version },
         };
-        qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, options: d.options.map((o) => (o.id === optionId ? option : o)) } : d));
+        qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) =>
+          d ? { ...d, options: d.options.map((o) => (o.id === optionId ? option : o)) } : d,
+        );
       }
       attempt.current = 0;
       setMessage(null);
@@ -294,16 +321,19 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
   }, [conflict]);
 
   /** The draft from an earlier visit was written against older versions: use it anyway, or drop it. */
-  const resolveStaleDraft = useCallback((use: boolean) => {
-    const draft = staleDraft.current;
-    staleDraft.current = null;
-    setRestored(null);
-    if (!draft) return;
-    if (use) setHistory(createHistory(withDraft(baseline.current, draft)));
-    else {
-      localStorage.removeItem(draftKey(roomId));
-    }
-  }, [roomId]);
+  const resolveStaleDraft = useCallback(
+    (use: boolean) => {
+      const draft = staleDraft.current;
+      staleDraft.current = null;
+      setRestored(null);
+      if (!draft) return;
+      if (use) setHistory(createHistory(withDraft(baseline.current, draft)));
+      else {
+        localStorage.removeItem(draftKey(roomId));
+      }
+    },
+    [roomId],
+  );
 
   /** Options added, duplicated or deleted through the API: fold them into the document without an undo step. */
   const syncOptions = useCallback((options: OptionRecord[]) => {
@@ -322,11 +352,14 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
   }, []);
 
   // ——— things saved straight away, outside the undo history ———
-  const afterOptionsChange = useCallback((options: OptionRecord[]) => {
-    setOptionList(options);
-    syncOptions(options);
-    qc.invalidateQueries({ queryKey: roomKeys.lists() });
-  }, [qc, syncOptions]);
+  const afterOptionsChange = useCallback(
+    (options: OptionRecord[]) => {
+      setOptionList(options);
+      syncOptions(options);
+      qc.invalidateQueries({ queryKey: roomKeys.lists() });
+    },
+    [qc, syncOptions],
+  );
 
   const refetchOptions = useCallback(async () => {
     const fresh = await api<RoomDetail>(`/api/rooms/${roomId}`);
@@ -334,42 +367,71 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
     return fresh.options;
   }, [afterOptionsChange, roomId]);
 
-  const renameRoom = useCallback(async (name: string) => {
-    const { room } = await api<{ room: RoomRecord }>(`/api/rooms/${roomId}`, { method: 'PUT', body: { version: baseline.current.roomVersion, name } });
-    baseline.current = { ...baseline.current, roomVersion: room.version };
-    setRoomName(room.name);
-    qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, room: { ...room, shell: d.room.shell } } : d));
-    qc.invalidateQueries({ queryKey: roomKeys.lists() });
-  }, [qc, roomId]);
+  const renameRoom = useCallback(
+    async (name: string) => {
+      const { room } = await api<{ room: RoomRecord }>(`/api/rooms/${roomId}`, {
+        method: 'PUT',
+        body: { version: baseline.current.roomVersion, name },
+      });
+      baseline.current = { ...baseline.current, roomVersion: room.version };
+      setRoomName(room.name);
+      qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, room: { ...room, shell: d.room.shell } } : d));
+      qc.invalidateQueries({ queryKey: roomKeys.lists() });
+    },
+    [qc, roomId],
+  );
 
   const saveOptionMeta = useCallback(async (optionId: string, meta: { name?: string; note?: string }) => {
-    const { option } = await api<{ option: OptionRecord }>(`/api/options/${optionId}`, { method: 'PUT', body: { version: baseline.current.optionVersions[optionId], ...meta } });
-    baseline.current = { ...baseline.current, optionVersions: { ...baseline.current.optionVersions, [optionId]: option.version } };
-    setOptionList((list) => list.map((o) => (o.id === optionId ? { ...o, name: option.name, note: option.note, version: option.version } : o)));
+    const { option } = await api<{ option: OptionRecord }>(`/api/options/${optionId}`, {
+      method: 'PUT',
+      body: { version: baseline.current.optionVersions[optionId], ...meta },
+    });
+    baseline.current = {
+      ...baseline.current,
+      optionVersions: { ...baseline.current.optionVersions, [optionId]: option.version },
+    };
+    setOptionList((list) =>
+      list.map((o) => (o.id === optionId ? { ...o, name: option.name, note: option.note, version: option.version } : o)),
+    );
   }, []);
 
-  const addOption = useCallback(async (fromOptionId?: string) => {
-    // A duplicate copies what the server has, so save first.
-    if (fromOptionId) await saveRef.current();
-    const { option } = await api<{ option: OptionRecord }>(`/api/rooms/${roomId}/options`, { method: 'POST', body: fromOptionId ? { fromOptionId } : {} });
-    await refetchOptions();
-    return option.id;
-  }, [refetchOptions, roomId]);
+  const addOption = useCallback(
+    async (fromOptionId?: string) => {
+      // A duplicate copies what the server has, so save first.
+      if (fromOptionId) await saveRef.current();
+      const { option } = await api<{ option: OptionRecord }>(`/api/rooms/${roomId}/options`, {
+        method: 'POST',
+        body: fromOptionId ? { fromOptionId } : {},
+      });
+      await refetchOptions();
+      return option.id;
+    },
+    [refetchOptions, roomId],
+  );
 
-  const deleteOption = useCallback(async (optionId: string) => {
-    await api(`/api/options/${optionId}`, { method: 'DELETE' });
-    await refetchOptions();
-  }, [refetchOptions]);
+  const deleteOption = useCallback(
+    async (optionId: string) => {
+      await api(`/api/options/${optionId}`, { method: 'DELETE' });
+      await refetchOptions();
+    },
+    [refetchOptions],
+  );
 
-  const moveOption = useCallback(async (optionId: string, by: -1 | 1) => {
-    const ids = optionList.map((o) => o.id);
-    const i = ids.indexOf(optionId);
-    const j = i + by;
-    if (i < 0 || j < 0 || j >= ids.length) return;
-    [ids[i], ids[j]] = [ids[j], ids[i]];
-    const { options } = await api<{ options: OptionRecord[] }>(`/api/rooms/${roomId}/option-order`, { method: 'PUT', body: { optionIds: ids } });
-    setOptionList((list) => options.map((o) => ({ ...o, version: list.find((l) => l.id === o.id)?.version ?? o.version })));
-  }, [optionList, roomId]);
+  const moveOption = useCallback(
+    async (optionId: string, by: -1 | 1) => {
+      const ids = optionList.map((o) => o.id);
+      const i = ids.indexOf(optionId);
+      const j = i + by;
+      if (i < 0 || j < 0 || j >= ids.length) return;
+      [ids[i], ids[j]] = [ids[j], ids[i]];
+      const { options } = await api<{ options: OptionRecord[] }>(`/api/rooms/${roomId}/option-order`, {
+        method: 'PUT',
+        body: { optionIds: ids },
+      });
+      setOptionList((list) => options.map((o) => ({ ...o, version: list.find((l) => l.id === o.id)?.version ?? o.version })));
+    },
+    [optionList, roomId],
+  );
 
   return {
     roomName,

@@ -1,6 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import {
-  takeoffQuery, type CompareAnswer, type ProjectTakeoffAnswer, type ScheduleAnswer, type TakeoffSettings,
+  takeoffQuery,
+  type CompareAnswer,
+  type ProjectTakeoffAnswer,
+  type ScheduleAnswer,
+  type TakeoffSettings,
 } from '../../../../shared/analysis/schedule';
 import { api } from '../../../lib/api';
 
@@ -22,18 +26,30 @@ export function settingsQuery(settings: TakeoffSettings, countedOptionIds: reado
 }
 
 export const projectTakeoffQuery = (projectId: string, query: string) =>
-  queryOptions({ queryKey: scheduleKeys.takeoff(projectId, query), queryFn: () => api<ProjectTakeoffAnswer>(`/api/projects/${projectId}/takeoff?${query}`) });
+  queryOptions({
+    queryKey: scheduleKeys.takeoff(projectId, query),
+    queryFn: () => api<ProjectTakeoffAnswer>(`/api/projects/${projectId}/takeoff?${query}`),
+  });
 
 export const compareQuery = (projectId: string, query: string) =>
-  queryOptions({ queryKey: scheduleKeys.compare(projectId, query), queryFn: () => api<CompareAnswer>(`/api/projects/${projectId}/compare?${query}`) });
+  queryOptions({
+    queryKey: scheduleKeys.compare(projectId, query),
+    queryFn: () => api<CompareAnswer>(`/api/projects/${projectId}/compare?${query}`),
+  });
 
 export const scheduleQuery = (optionId: string, query: string) =>
-  queryOptions({ queryKey: scheduleKeys.schedule(optionId, query), queryFn: () => api<ScheduleAnswer>(`/api/options/${optionId}/schedule?${query}`) });
+  queryOptions({
+    queryKey: scheduleKeys.schedule(optionId, query),
+    queryFn: () => api<ScheduleAnswer>(`/api/options/${optionId}/schedule?${query}`),
+  });
 
 // The previous answer stays on screen while a changed setting is fetched, so typing does not flash.
-export const useProjectTakeoff = (projectId: string, query: string) => useQuery({ ...projectTakeoffQuery(projectId, query), placeholderData: keepPreviousData });
-export const useCompare = (projectId: string, query: string) => useQuery({ ...compareQuery(projectId, query), placeholderData: keepPreviousData });
-export const useSchedule = (optionId: string, query: string) => useQuery({ ...scheduleQuery(optionId, query), placeholderData: keepPreviousData });
+export const useProjectTakeoff = (projectId: string, query: string) =>
+  useQuery({ ...projectTakeoffQuery(projectId, query), placeholderData: keepPreviousData });
+export const useCompare = (projectId: string, query: string) =>
+  useQuery({ ...compareQuery(projectId, query), placeholderData: keepPreviousData });
+export const useSchedule = (optionId: string, query: string) =>
+  useQuery({ ...scheduleQuery(optionId, query), placeholderData: keepPreviousData });
 
 /** Where the CSV of an option's schedule downloads from, with the same settings as the page. */
 export const scheduleCsvUrl = (optionId: string, query: string) => `/api/options/${optionId}/schedule.csv?${query}`;

@@ -20,7 +20,10 @@ export function CompareTable({ projectId, room }: { projectId: string; room: Com
             {room.options.map((o) => (
               <th key={o.id} scope="col" className={`px-3 py-2 text-right align-bottom ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
                 <span className="block font-bold text-ink">{o.label}</span>
-                <Link to={`/projects/${projectId}/rooms/${room.id}/options/${o.id}/schedule`} className="text-sm font-semibold text-pine hover:underline">
+                <Link
+                  to={`/projects/${projectId}/rooms/${room.id}/options/${o.id}/schedule`}
+                  className="text-sm font-semibold text-pine hover:underline"
+                >
                   Schedule
                 </Link>
               </th>
@@ -29,20 +32,32 @@ export function CompareTable({ projectId, room }: { projectId: string; room: Com
         </thead>
         <tbody className="[&>tr]:border-b [&>tr]:border-line [&>tr:last-child]:border-0">
           <tr>
-            <th scope="row" className={rowHead}>Budget</th>
+            <th scope="row" className={rowHead}>
+              Budget
+            </th>
             {room.options.map((o) => (
               <td key={o.id} className={`${cell} font-semibold ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
                 {formatMoney(o.budget)}
-                {o.unpricedCount > 0 && <span className="block text-xs font-normal text-ochre">{o.unpricedCount} without a price</span>}
+                {o.unpricedCount > 0 && (
+                  <span className="block text-xs font-normal text-ochre">{o.unpricedCount} without a price</span>
+                )}
               </td>
             ))}
           </tr>
           <tr>
-            <th scope="row" className={rowHead}>New pieces</th>
-            {room.options.map((o) => <td key={o.id} className={`${cell} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>{o.newPieceCount}</td>)}
+            <th scope="row" className={rowHead}>
+              New pieces
+            </th>
+            {room.options.map((o) => (
+              <td key={o.id} className={`${cell} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
+                {o.newPieceCount}
+              </td>
+            ))}
           </tr>
           <tr>
-            <th scope="row" className={rowHead}>Fit check findings</th>
+            <th scope="row" className={rowHead}>
+              Fit check findings
+            </th>
             {room.options.map((o) => (
               <td key={o.id} className={`${cell} ${o.findingCount > 0 ? 'text-clay' : ''} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
                 {o.findingCount === 0 ? 'None' : o.findingCount}
@@ -50,14 +65,26 @@ export function CompareTable({ projectId, room }: { projectId: string; room: Com
             ))}
           </tr>
           <tr>
-            <th scope="row" className={rowHead}>Free floor</th>
-            {room.options.map((o) => <td key={o.id} className={`${cell} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>{formatNumber(o.freeFloorPercent)} %</td>)}
-          </tr>
-          <tr>
-            <th scope="row" className={rowHead}>Client’s choice</th>
+            <th scope="row" className={rowHead}>
+              Free floor
+            </th>
             {room.options.map((o) => (
               <td key={o.id} className={`${cell} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
-                {o.chosen ? <Badge value="decided" label="Chosen" /> : <span className="text-ink-faint">{anyChoice ? '—' : 'Not yet'}</span>}
+                {formatNumber(o.freeFloorPercent)} %
+              </td>
+            ))}
+          </tr>
+          <tr>
+            <th scope="row" className={rowHead}>
+              Client’s choice
+            </th>
+            {room.options.map((o) => (
+              <td key={o.id} className={`${cell} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
+                {o.chosen ? (
+                  <Badge value="decided" label="Chosen" />
+                ) : (
+                  <span className="text-ink-faint">{anyChoice ? '—' : 'Not yet'}</span>
+                )}
               </td>
             ))}
           </tr>

@@ -7,7 +7,9 @@ export function LoadError({ error, projectId }: { error: unknown; projectId: str
   return (
     <div className="flex flex-col gap-4">
       <Notice tone="error">{errorMessage(error)}</Notice>
-      <Link to={`/projects/${projectId}`} className="font-semibold text-pine">Back to the project</Link>
+      <Link to={`/projects/${projectId}`} className="font-semibold text-pine">
+        Back to the project
+      </Link>
     </div>
   );
 }

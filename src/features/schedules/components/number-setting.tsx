@@ -6,7 +6,15 @@ import { TextField } from '../../../components/ui/field';
  * A number typed into a take-off setting: the text stays as typed, the value is passed on only when
  * `schema` accepts it, and its message shows otherwise.
  */
-export function NumberSetting({ label, value, schema, onChange, hint, className, emptyMeans }: {
+export function NumberSetting({
+  label,
+  value,
+  schema,
+  onChange,
+  hint,
+  className,
+  emptyMeans,
+}: {
   label: string;
   value: number | null;
   schema: z.ZodType<number>;

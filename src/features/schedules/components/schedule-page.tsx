@@ -31,25 +31,41 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
       <PageHeader
         eyebrow={
           <>
-            <Link to={`/projects/${projectId}`} className="hover:text-ink hover:underline">{project.name}</Link> /{' '}
-            <Link to={`/projects/${projectId}/rooms/${room.id}`} className="hover:text-ink hover:underline">{room.name}</Link>
+            <Link to={`/projects/${projectId}`} className="hover:text-ink hover:underline">
+              {project.name}
+            </Link>{' '}
+            /{' '}
+            <Link to={`/projects/${projectId}/rooms/${room.id}`} className="hover:text-ink hover:underline">
+              {room.name}
+            </Link>
           </>
         }
         title={`Schedule · ${option.label}`}
         actions={
           <div className="no-print flex flex-wrap gap-2">
-            <Link to={`/projects/${projectId}/take-off`} className="inline-flex h-10 items-center rounded-lg px-4 text-[15px] font-semibold text-ink-soft hover:bg-sand hover:text-ink">
+            <Link
+              to={`/projects/${projectId}/take-off`}
+              className="inline-flex h-10 items-center rounded-lg px-4 text-[15px] font-semibold text-ink-soft hover:bg-sand hover:text-ink"
+            >
               Take-off and comparison
             </Link>
-            <a href={scheduleCsvUrl(optionId, query)} download className="inline-flex h-10 items-center rounded-lg border border-line-strong bg-white px-4 text-[15px] font-semibold hover:bg-sand">
+            <a
+              href={scheduleCsvUrl(optionId, query)}
+              download
+              className="inline-flex h-10 items-center rounded-lg border border-line-strong bg-white px-4 text-[15px] font-semibold hover:bg-sand"
+            >
               Download CSV
             </a>
-            <Button variant="primary" onClick={() => window.print()}>Print</Button>
+            <Button variant="primary" onClick={() => window.print()}>
+              Print
+            </Button>
           </div>
         }
       >
         {option.note && <span className="block">{option.note}</span>}
-        <span className="text-sm">{settings.coats} coats at {settings.coverageM2PerL} m² per litre · flooring +{settings.wastePercent} % waste</span>
+        <span className="text-sm">
+          {settings.coats} coats at {settings.coverageM2PerL} m² per litre · flooring +{settings.wastePercent} % waste
+        </span>
       </PageHeader>
 
       <div className="flex flex-col gap-8 rounded-2xl border border-line bg-white p-6 print:border-0 print:p-0">
@@ -62,18 +78,34 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
             <Total label="Finishes" value={s.totals.finishesCost} />
             <div className="mt-1 flex justify-between border-t-2 border-ink py-2 text-lg font-bold">
               <dt>Budget</dt>
-              <dd className="tabular-nums" data-testid="budget">{formatMoney(s.totals.budget)}</dd>
+              <dd className="tabular-nums" data-testid="budget">
+                {formatMoney(s.totals.budget)}
+              </dd>
             </div>
           </dl>
           <p className="text-sm text-ink-soft">
-            {s.totals.newPieceCount} new piece{s.totals.newPieceCount === 1 ? '' : 's'}, {s.totals.existingPieceCount} the client already owns (at no cost).
+            {s.totals.newPieceCount} new piece{s.totals.newPieceCount === 1 ? '' : 's'}, {s.totals.existingPieceCount} the client
+            already owns (at no cost).
           </p>
         </section>
 
         <div className="flex flex-col gap-1 text-sm text-ink-faint">
-          {s.totals.unpricedCount > 0 && <p className="font-medium text-ochre">{s.totals.unpricedCount} line{s.totals.unpricedCount === 1 ? ' has' : 's have'} no price yet and {s.totals.unpricedCount === 1 ? 'is' : 'are'} left out of the budget.</p>}
-          {s.heldPieceCount > 0 && <p>{s.heldPieceCount} piece{s.heldPieceCount === 1 ? '' : 's'} in the holding area {s.heldPieceCount === 1 ? 'is' : 'are'} not counted.</p>}
-          <p>Quantities are measured on the inside faces with common-practice allowances; check on site before ordering. Prices are as entered, without currency.</p>
+          {s.totals.unpricedCount > 0 && (
+            <p className="font-medium text-ochre">
+              {s.totals.unpricedCount} line{s.totals.unpricedCount === 1 ? ' has' : 's have'} no price yet and{' '}
+              {s.totals.unpricedCount === 1 ? 'is' : 'are'} left out of the budget.
+            </p>
+          )}
+          {s.heldPieceCount > 0 && (
+            <p>
+              {s.heldPieceCount} piece{s.heldPieceCount === 1 ? '' : 's'} in the holding area{' '}
+              {s.heldPieceCount === 1 ? 'is' : 'are'} not counted.
+            </p>
+          )}
+          <p>
+            Quantities are measured on the inside faces with common-practice allowances; check on site before ordering. Prices are
+            as entered, without currency.
+          </p>
         </div>
       </div>
     </article>
@@ -93,7 +125,9 @@ function LineTable({ title, lines, empty }: { title: string; lines: ScheduleLine
   return (
     <section>
       <h2 className="mb-2 text-lg font-bold">{title}</h2>
-      {lines.length === 0 ? <p className="text-ink-soft">{empty}</p> : (
+      {lines.length === 0 ? (
+        <p className="text-ink-soft">{empty}</p>
+      ) : (
         <table aria-label={title} className="w-full table-fixed text-[15px] print:text-[12px]">
           {/* The same columns in both tables, so pieces and finishes line up one under the other. */}
           <colgroup>
@@ -115,7 +149,9 @@ function LineTable({ title, lines, empty }: { title: string; lines: ScheduleLine
             </tr>
           </thead>
           <tbody className="[&>tr]:border-b [&>tr]:border-line [&>tr]:break-inside-avoid">
-            {lines.map((l) => <Line key={l.key} line={l} />)}
+            {lines.map((l) => (
+              <Line key={l.key} line={l} />
+            ))}
           </tbody>
         </table>
       )}
@@ -142,15 +178,34 @@ function Line({ line: l }: { line: ScheduleLine }) {
         {formatQuantity(l.quantity, l.quantityUnit)}
         {l.quantityNote && <span className="block text-[0.8em] whitespace-normal text-ink-faint">{l.quantityNote}</span>}
       </td>
-      <td className={tdNum}>{l.unitPrice === null || !l.priceUnit ? '—' : `${formatMoney(l.unitPrice)}${l.priceUnit === 'piece' ? '' : ` / ${QUANTITY_UNIT_LABELS[l.priceUnit]}`}`}</td>
+      <td className={tdNum}>
+        {l.unitPrice === null || !l.priceUnit
+          ? '—'
+          : `${formatMoney(l.unitPrice)}${l.priceUnit === 'piece' ? '' : ` / ${QUANTITY_UNIT_LABELS[l.priceUnit]}`}`}
+      </td>
       <td className={`${tdNum} font-semibold`}>
-        {l.status === 'existing' ? <span className="font-normal text-ink-soft">no cost</span> : l.total === null ? <span className="font-normal text-ochre" title={l.unpricedReason ?? undefined}>no price</span> : formatMoney(l.total)}
-        {l.total === null && l.unpricedReason && <span className="block text-[0.8em] font-normal whitespace-normal text-ink-faint">{l.unpricedReason}</span>}
+        {l.status === 'existing' ? (
+          <span className="font-normal text-ink-soft">no cost</span>
+        ) : l.total === null ? (
+          <span className="font-normal text-ochre" title={l.unpricedReason ?? undefined}>
+            no price
+          </span>
+        ) : (
+          formatMoney(l.total)
+        )}
+        {l.total === null && l.unpricedReason && (
+          <span className="block text-[0.8em] font-normal whitespace-normal text-ink-faint">{l.unpricedReason}</span>
+        )}
       </td>
       <td className={`${td} pr-0 text-[0.9em]`}>
         {l.supplier && <span className="block">{l.supplier}</span>}
         {l.supplierUrl && (
-          <a href={l.supplierUrl} target="_blank" rel="noreferrer noopener" className="break-all text-pine hover:underline print:text-ink">
+          <a
+            href={l.supplierUrl}
+            target="_blank"
+            rel="noreferrer noopener"
+            className="break-all text-pine hover:underline print:text-ink"
+          >
             {linkText(l.supplierUrl)}
           </a>
         )}

@@ -9,9 +9,13 @@ export function SchedulesLink({ projectId }: { projectId: string }) {
     >
       <span>
         <span className="block font-semibold">Take-off and comparison</span>
-        <span className="block text-sm text-ink-soft">Paint, flooring and skirting to buy, each option’s schedule and budget, options side by side.</span>
+        <span className="block text-sm text-ink-soft">
+          Paint, flooring and skirting to buy, each option’s schedule and budget, options side by side.
+        </span>
       </span>
-      <span aria-hidden className="text-xl text-pine">→</span>
+      <span aria-hidden className="text-xl text-pine">
+        →
+      </span>
     </Link>
   );
 }

@@ -30,7 +30,17 @@ export function TakeoffPage({ projectId }: { projectId: string }) {
   return (
     <div>
       <PageHeader
-        eyebrow={<><Link to="/projects" className="hover:text-ink hover:underline">Projects</Link> / <Link to={`/projects/${projectId}`} className="hover:text-ink hover:underline">{project.name}</Link></>}
+        eyebrow={
+          <>
+            <Link to="/projects" className="hover:text-ink hover:underline">
+              Projects
+            </Link>{' '}
+            /{' '}
+            <Link to={`/projects/${projectId}`} className="hover:text-ink hover:underline">
+              {project.name}
+            </Link>
+          </>
+        }
         title="Take-off and comparison"
       >
         What to buy for each room’s counted option, and every option side by side.
@@ -38,15 +48,35 @@ export function TakeoffPage({ projectId }: { projectId: string }) {
 
       <Card title="Counting" className="mb-6">
         <div className="flex flex-wrap items-start gap-4">
-          <NumberSetting className="w-32" label="Coats" value={settings.coats} schema={fields.coats.unwrap()} onChange={(coats) => coats !== null && stored.setSettings({ coats })} />
-          <NumberSetting className="w-44" label="Coverage (m² per litre)" value={settings.coverageM2PerL} schema={fields.coverageM2PerL.unwrap()} onChange={(coverageM2PerL) => coverageM2PerL !== null && stored.setSettings({ coverageM2PerL })} />
-          <NumberSetting className="w-40" label="Flooring waste (%)" value={settings.wastePercent} schema={fields.wastePercent.unwrap()} onChange={(wastePercent) => wastePercent !== null && stored.setSettings({ wastePercent })} />
-          <Button className="mt-7" variant="quiet" onClick={stored.reset}>Back to defaults</Button>
+          <NumberSetting
+            className="w-32"
+            label="Coats"
+            value={settings.coats}
+            schema={fields.coats.unwrap()}
+            onChange={(coats) => coats !== null && stored.setSettings({ coats })}
+          />
+          <NumberSetting
+            className="w-44"
+            label="Coverage (m² per litre)"
+            value={settings.coverageM2PerL}
+            schema={fields.coverageM2PerL.unwrap()}
+            onChange={(coverageM2PerL) => coverageM2PerL !== null && stored.setSettings({ coverageM2PerL })}
+          />
+          <NumberSetting
+            className="w-40"
+            label="Flooring waste (%)"
+            value={settings.wastePercent}
+            schema={fields.wastePercent.unwrap()}
+            onChange={(wastePercent) => wastePercent !== null && stored.setSettings({ wastePercent })}
+          />
+          <Button className="mt-7" variant="quiet" onClick={stored.reset}>
+            Back to defaults
+          </Button>
         </div>
         <p className="mt-3 text-sm text-ink-faint">
-          Defaults are common practice: {DEFAULT_PAINT_COATS} coats, {DEFAULT_COVERAGE_M2_PER_L} m² per litre, {DEFAULT_WASTE_PERCENT} % waste;
-          tins of 0.75, 1, 2.5, 5 and 10 L, with the least paint left over. The tin’s label and your fitter win.
-          These figures are kept in this browser for this project.
+          Defaults are common practice: {DEFAULT_PAINT_COATS} coats, {DEFAULT_COVERAGE_M2_PER_L} m² per litre,{' '}
+          {DEFAULT_WASTE_PERCENT} % waste; tins of 0.75, 1, 2.5, 5 and 10 L, with the least paint left over. The tin’s label and
+          your fitter win. These figures are kept in this browser for this project.
         </p>
       </Card>
 
@@ -62,24 +92,31 @@ export function TakeoffPage({ projectId }: { projectId: string }) {
             <Card
               key={room.id}
               title={room.name}
-              actions={room.counted && (
-                <div className="flex items-end gap-3">
-                  <SelectField
-                    label="Counted option"
-                    className="w-56"
-                    value={room.counted.id}
-                    onChange={(e) => stored.setCounted(room.id, e.target.value)}
-                  >
-                    {room.options.map((o) => <option key={o.id} value={o.id}>{o.label}{o.id === room.chosenOptionId ? ' (chosen)' : ''}</option>)}
-                  </SelectField>
-                  <Link
-                    to={`/projects/${projectId}/rooms/${room.id}/options/${room.counted.id}/schedule`}
-                    className="inline-flex h-10 items-center rounded-lg border border-line-strong bg-white px-4 text-[15px] font-semibold hover:bg-sand"
-                  >
-                    Schedule
-                  </Link>
-                </div>
-              )}
+              actions={
+                room.counted && (
+                  <div className="flex items-end gap-3">
+                    <SelectField
+                      label="Counted option"
+                      className="w-56"
+                      value={room.counted.id}
+                      onChange={(e) => stored.setCounted(room.id, e.target.value)}
+                    >
+                      {room.options.map((o) => (
+                        <option key={o.id} value={o.id}>
+                          {o.label}
+                          {o.id === room.chosenOptionId ? ' (chosen)' : ''}
+                        </option>
+                      ))}
+                    </SelectField>
+                    <Link
+                      to={`/projects/${projectId}/rooms/${room.id}/options/${room.counted.id}/schedule`}
+                      className="inline-flex h-10 items-center rounded-lg border border-line-strong bg-white px-4 text-[15px] font-semibold hover:bg-sand"
+                    >
+                      Schedule
+                    </Link>
+                  </div>
+                )
+              }
             >
               {room.takeoff ? (
                 <RoomTakeoffTables takeoff={room.takeoff} roomName={room.name} onUnitCoverage={stored.setUnitCoverage} />
@@ -90,12 +127,18 @@ export function TakeoffPage({ projectId }: { projectId: string }) {
           ))}
 
           <Card title="Compare options">
-            {compare.isPending ? <Spinner /> : compare.isError ? <Notice tone="error">{errorMessage(compare.error)}</Notice> : (
+            {compare.isPending ? (
+              <Spinner />
+            ) : compare.isError ? (
+              <Notice tone="error">{errorMessage(compare.error)}</Notice>
+            ) : (
               <div className="flex flex-col gap-8">
-                {compare.data.rooms.map((room) => <CompareTable key={room.id} projectId={projectId} room={room} />)}
+                {compare.data.rooms.map((room) => (
+                  <CompareTable key={room.id} projectId={projectId} room={room} />
+                ))}
                 <p className="text-sm text-ink-faint">
-                  Budget is new pieces and finishes; the client’s own pieces cost nothing. Free floor is the floor not under a piece you walk round (rugs and wall-hung pieces leave it free).
-                  Findings come from the fit check.
+                  Budget is new pieces and finishes; the client’s own pieces cost nothing. Free floor is the floor not under a
+                  piece you walk round (rugs and wall-hung pieces leave it free). Findings come from the fit check.
                 </p>
               </div>
             )}

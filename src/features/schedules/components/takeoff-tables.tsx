@@ -22,7 +22,9 @@ export function QuantityTable({ label, head, children }: { label: string; head: 
           <col className="w-[26%]" />
           <col className="w-[24%]" />
         </colgroup>
-        <thead className="border-b border-line"><tr>{head}</tr></thead>
+        <thead className="border-b border-line">
+          <tr>{head}</tr>
+        </thead>
         <tbody className="[&>tr]:border-b [&>tr]:border-line [&>tr:last-child]:border-0">{children}</tbody>
       </table>
     </div>
@@ -30,7 +32,11 @@ export function QuantityTable({ label, head, children }: { label: string; head: 
 }
 
 /** One room's quantities; the m² per box or roll is typed here (kept in the browser, so every role may). */
-export function RoomTakeoffTables({ takeoff, roomName, onUnitCoverage }: {
+export function RoomTakeoffTables({
+  takeoff,
+  roomName,
+  onUnitCoverage,
+}: {
   takeoff: RoomTakeoff;
   roomName: string;
   onUnitCoverage: (finishId: string, m2: number | null) => void;
@@ -47,14 +53,29 @@ export function RoomTakeoffTables({ takeoff, roomName, onUnitCoverage }: {
 
       <section>
         <h3 className="mb-1 font-bold">Paint by colour</h3>
-        {paints.length === 0 ? <p className="text-sm text-ink-soft">No paint in this option.</p> : (
+        {paints.length === 0 ? (
+          <p className="text-sm text-ink-soft">No paint in this option.</p>
+        ) : (
           <QuantityTable
             label={`Paint in ${roomName}`}
-            head={<><th className={th}>Paint</th><th className={th}>Where</th><th className={thNum}>Area</th><th className={thNum}>Litres</th><th className={thNum}>Tins to buy</th></>}
+            head={
+              <>
+                <th className={th}>Paint</th>
+                <th className={th}>Where</th>
+                <th className={thNum}>Area</th>
+                <th className={thNum}>Litres</th>
+                <th className={thNum}>Tins to buy</th>
+              </>
+            }
           >
             {paints.map((p) => (
               <tr key={p.finishId}>
-                <td className={td}><span className="flex items-center gap-2 font-semibold"><PaintChip colourHex={p.finish.colourHex} />{p.finish.name}</span></td>
+                <td className={td}>
+                  <span className="flex items-center gap-2 font-semibold">
+                    <PaintChip colourHex={p.finish.colourHex} />
+                    {p.finish.name}
+                  </span>
+                </td>
                 <td className={`${td} text-ink-soft`}>{surfaceLabel(p.surfaces)}</td>
                 <td className={tdNum}>{formatNumber(p.areaM2)} m²</td>
                 <td className={tdNum}>{formatNumber(p.litres)} L</td>
@@ -67,10 +88,23 @@ export function RoomTakeoffTables({ takeoff, roomName, onUnitCoverage }: {
 
       <section>
         <h3 className="mb-1 font-bold">Flooring and other finishes</h3>
-        {coverings.length === 0 ? <p className="text-sm text-ink-soft">No photo finish in this option.</p> : (
+        {coverings.length === 0 ? (
+          <p className="text-sm text-ink-soft">No photo finish in this option.</p>
+        ) : (
           <QuantityTable
             label={`Flooring and other finishes in ${roomName}`}
-            head={<><th className={th}>Finish</th><th className={th}>Where</th><th className={thNum}>Area</th><th className={thNum}>With waste</th><th className={`${th} w-40`}>Box or roll <span className="normal-case">(m²)</span></th><th className={thNum}>Boxes or rolls</th></>}
+            head={
+              <>
+                <th className={th}>Finish</th>
+                <th className={th}>Where</th>
+                <th className={thNum}>Area</th>
+                <th className={thNum}>With waste</th>
+                <th className={`${th} w-40`}>
+                  Box or roll <span className="normal-case">(m²)</span>
+                </th>
+                <th className={thNum}>Boxes or rolls</th>
+              </>
+            }
           >
             {coverings.map((c) => (
               <tr key={c.finishId}>
@@ -97,8 +131,14 @@ export function RoomTakeoffTables({ takeoff, roomName, onUnitCoverage }: {
 
       {(missing.length > 0 || bare.floorOrderM2 > 0 || bare.wallsM2 > 0) && (
         <ul className="flex flex-col gap-1 text-sm text-ink-soft">
-          {missing.map((m) => <li key={m.finishId}>{surfaceLabel(m.surfaces)}: the finish chosen is no longer in the library ({formatNumber(m.areaM2)} m²).</li>)}
-          {bare.floorOrderM2 > 0 && <li>No floor finish chosen yet: {formatNumber(bare.floorOrderM2)} m² to order with waste.</li>}
+          {missing.map((m) => (
+            <li key={m.finishId}>
+              {surfaceLabel(m.surfaces)}: the finish chosen is no longer in the library ({formatNumber(m.areaM2)} m²).
+            </li>
+          ))}
+          {bare.floorOrderM2 > 0 && (
+            <li>No floor finish chosen yet: {formatNumber(bare.floorOrderM2)} m² to order with waste.</li>
+          )}
           {bare.wallsM2 > 0 && <li>Walls without a finish: {formatNumber(bare.wallsM2)} m² net.</li>}
         </ul>
       )}
@@ -125,11 +165,23 @@ export function ProjectTotals({ totals }: { totals: ProjectTakeoff }) {
       {totals.paints.length > 0 && (
         <QuantityTable
           label="Paint for the project"
-          head={<><th className={th}>Paint</th><th className={th}>Rooms</th><th className={thNum}>Litres</th><th className={thNum}>Tins to buy</th></>}
+          head={
+            <>
+              <th className={th}>Paint</th>
+              <th className={th}>Rooms</th>
+              <th className={thNum}>Litres</th>
+              <th className={thNum}>Tins to buy</th>
+            </>
+          }
         >
           {totals.paints.map((p) => (
             <tr key={p.finish.id}>
-              <td className={td}><span className="flex items-center gap-2 font-semibold"><PaintChip colourHex={p.finish.colourHex} />{p.finish.name}</span></td>
+              <td className={td}>
+                <span className="flex items-center gap-2 font-semibold">
+                  <PaintChip colourHex={p.finish.colourHex} />
+                  {p.finish.name}
+                </span>
+              </td>
               <td className={`${td} text-ink-soft`}>{p.rooms.join(', ')}</td>
               <td className={tdNum}>{formatNumber(p.litres)} L</td>
               <td className={tdNum}>{describeTins(p.tins)}</td>
@@ -140,7 +192,14 @@ export function ProjectTotals({ totals }: { totals: ProjectTakeoff }) {
       {totals.coverings.length > 0 && (
         <QuantityTable
           label="Flooring and other finishes for the project"
-          head={<><th className={th}>Finish</th><th className={th}>Rooms</th><th className={thNum}>To order</th><th className={thNum}>Boxes or rolls</th></>}
+          head={
+            <>
+              <th className={th}>Finish</th>
+              <th className={th}>Rooms</th>
+              <th className={thNum}>To order</th>
+              <th className={thNum}>Boxes or rolls</th>
+            </>
+          }
         >
           {totals.coverings.map((c) => (
             <tr key={c.finish.id}>

@@ -44,7 +44,10 @@ export function useTakeoffSettings(projectId: string) {
     [projectId],
   );
 
-  const setSettings = useCallback((patch: Partial<TakeoffSettings>) => update((s) => ({ ...s, settings: { ...s.settings, ...patch } })), [update]);
+  const setSettings = useCallback(
+    (patch: Partial<TakeoffSettings>) => update((s) => ({ ...s, settings: { ...s.settings, ...patch } })),
+    [update],
+  );
   const setUnitCoverage = useCallback(
     (finishId: string, m2: number | null) =>
       update((s) => {
@@ -55,7 +58,10 @@ export function useTakeoffSettings(projectId: string) {
       }),
     [update],
   );
-  const setCounted = useCallback((roomId: string, optionId: string) => update((s) => ({ ...s, counted: { ...s.counted, [roomId]: optionId } })), [update]);
+  const setCounted = useCallback(
+    (roomId: string, optionId: string) => update((s) => ({ ...s, counted: { ...s.counted, [roomId]: optionId } })),
+    [update],
+  );
   const reset = useCallback(() => update((s) => ({ ...s, settings: EMPTY.settings })), [update]);
 
   return { ...stored, setSettings, setUnitCoverage, setCounted, reset };

@@ -8,8 +8,14 @@ export const studioKeys = {
   invites: () => [...studioKeys.all, 'invites'] as const,
 };
 
-export const membersQuery = queryOptions({ queryKey: studioKeys.members(), queryFn: () => api<{ members: Member[] }>('/api/studio/members') });
-export const invitesQuery = queryOptions({ queryKey: studioKeys.invites(), queryFn: () => api<{ invites: InviteInfo[] }>('/api/studio/invites') });
+export const membersQuery = queryOptions({
+  queryKey: studioKeys.members(),
+  queryFn: () => api<{ members: Member[] }>('/api/studio/members'),
+});
+export const invitesQuery = queryOptions({
+  queryKey: studioKeys.invites(),
+  queryFn: () => api<{ invites: InviteInfo[] }>('/api/studio/invites'),
+});
 
 export const useMembers = () => useQuery(membersQuery);
 export const useInvites = (enabled: boolean) => useQuery({ ...invitesQuery, enabled });
@@ -33,7 +39,8 @@ export function useRevokeInvite() {
 export function useChangeRole() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, role }: { id: string; role: Role }) => api(`/api/studio/members/${id}`, { method: 'PATCH', body: { role } }),
+    mutationFn: ({ id, role }: { id: string; role: Role }) =>
+      api(`/api/studio/members/${id}`, { method: 'PATCH', body: { role } }),
     onSettled: () => qc.invalidateQueries({ queryKey: studioKeys.all }),
   });
 }

@@ -28,33 +28,62 @@ export function StudioPage() {
 
   return (
     <div>
-      <PageHeader title={session.data?.studio.name ?? 'Studio'} actions={isOwner && <Button variant="primary" onClick={() => setInviting(true)}>Invite a member</Button>}>
+      <PageHeader
+        title={session.data?.studio.name ?? 'Studio'}
+        actions={
+          isOwner && (
+            <Button variant="primary" onClick={() => setInviting(true)}>
+              Invite a member
+            </Button>
+          )
+        }
+      >
         Members and their roles.
       </PageHeader>
       {(changeRole.isError || removeMember.isError) && (
-        <div className="mb-4"><Notice tone="error">{errorMessage(changeRole.error ?? removeMember.error)}</Notice></div>
+        <div className="mb-4">
+          <Notice tone="error">{errorMessage(changeRole.error ?? removeMember.error)}</Notice>
+        </div>
       )}
       <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
         <div className="flex flex-col gap-6">
           <Card title="Members">
-            {members.isPending ? <Spinner /> : members.isError ? <Notice tone="error">{errorMessage(members.error)}</Notice> : (
+            {members.isPending ? (
+              <Spinner />
+            ) : members.isError ? (
+              <Notice tone="error">{errorMessage(members.error)}</Notice>
+            ) : (
               <ul className="divide-y divide-line">
                 {members.data.members.map((m) => (
                   <li key={m.id} className="flex flex-wrap items-center justify-between gap-3 py-3">
                     <div>
-                      <div className="font-semibold">{m.name}{m.id === session.data?.member.id && <span className="ml-2 text-sm font-normal text-ink-faint">(you)</span>}</div>
+                      <div className="font-semibold">
+                        {m.name}
+                        {m.id === session.data?.member.id && (
+                          <span className="ml-2 text-sm font-normal text-ink-faint">(you)</span>
+                        )}
+                      </div>
                       <div className="text-sm text-ink-soft">{m.email}</div>
                     </div>
                     {isOwner ? (
                       <div className="flex items-center gap-2">
-                        <label className="sr-only" htmlFor={`role-${m.id}`}>Role of {m.name}</label>
-                        <select id={`role-${m.id}`} className={`${inputClass} h-9 w-auto`} value={m.role} onChange={(e) => changeRole.mutate({ id: m.id, role: e.target.value as Role })}>
+                        <label className="sr-only" htmlFor={`role-${m.id}`}>
+                          Role of {m.name}
+                        </label>
+                        <select
+                          id={`role-${m.id}`}
+                          className={`${inputClass} h-9 w-auto`}
+                          value={m.role}
+                          onChange={(e) => changeRole.mutate({ id: m.id, role: e.target.value as Role })}
+                        >
                           <option value="owner">Owner</option>
                           <option value="designer">Designer</option>
                           <option value="viewer">Viewer</option>
                         </select>
                         {m.id !== session.data?.member.id && (
-                          <Button size="sm" variant="quiet" onClick={() => setRemoving({ id: m.id, name: m.name })}>Remove</Button>
+                          <Button size="sm" variant="quiet" onClick={() => setRemoving({ id: m.id, name: m.name })}>
+                            Remove
+                          </Button>
                         )}
                       </div>
                     ) : (
@@ -67,15 +96,21 @@ export function StudioPage() {
           </Card>
           {isOwner && (
             <Card title="Open invitations">
-              {invites.isPending ? <Spinner /> : invites.data && invites.data.invites.length > 0 ? (
+              {invites.isPending ? (
+                <Spinner />
+              ) : invites.data && invites.data.invites.length > 0 ? (
                 <ul className="divide-y divide-line">
                   {invites.data.invites.map((i) => (
                     <li key={i.id} className="flex items-center justify-between gap-3 py-3">
                       <div>
                         <div className="font-semibold">{i.email}</div>
-                        <div className="text-sm text-ink-soft">{i.role} · sent {formatDate(i.createdAt)} · works until {formatDate(i.expiresAt)}</div>
+                        <div className="text-sm text-ink-soft">
+                          {i.role} · sent {formatDate(i.createdAt)} · works until {formatDate(i.expiresAt)}
+                        </div>
                       </div>
-                      <Button size="sm" variant="quiet" onClick={() => revoke.mutate(i.id)}>Cancel invitation</Button>
+                      <Button size="sm" variant="quiet" onClick={() => revoke.mutate(i.id)}>
+                        Cancel invitation
+                      </Button>
                     </li>
                   ))}
                 </ul>
@@ -88,7 +123,12 @@ export function StudioPage() {
         <Card title="Roles">
           <dl className="flex flex-col gap-4 text-[15px]">
             {(Object.keys(ROLE_HELP) as Role[]).map((r) => (
-              <div key={r}><dt><Badge value={r} /></dt><dd className="mt-1 text-ink-soft">{ROLE_HELP[r]}</dd></div>
+              <div key={r}>
+                <dt>
+                  <Badge value={r} />
+                </dt>
+                <dd className="mt-1 text-ink-soft">{ROLE_HELP[r]}</dd>
+              </div>
             ))}
           </dl>
         </Card>
@@ -101,8 +141,12 @@ export function StudioPage() {
           title={`Remove ${removing.name}?`}
           footer={
             <>
-              <Button variant="quiet" onClick={() => setRemoving(null)}>Keep</Button>
-              <Button variant="danger" onClick={() => removeMember.mutate(removing.id, { onSettled: () => setRemoving(null) })}>Remove member</Button>
+              <Button variant="quiet" onClick={() => setRemoving(null)}>
+                Keep
+              </Button>
+              <Button variant="danger" onClick={() => removeMember.mutate(removing.id, { onSettled: () => setRemoving(null) })}>
+                Remove member
+              </Button>
             </>
           }
         >
@@ -124,7 +168,14 @@ function InviteDialog({ onClose }: { onClose: () => void }) {
   return (
     <Dialog open onClose={onClose} title="Invite a member">
       <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-        <TextField label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldError(invite.error, 'email')} autoFocus />
+        <TextField
+          label="E-mail"
+          type="email"
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={fieldError(invite.error, 'email')}
+          autoFocus
+        />
         <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)} hint={ROLE_HELP[role]}>
           <option value="designer">Designer</option>
           <option value="viewer">Viewer</option>
@@ -132,8 +183,12 @@ function InviteDialog({ onClose }: { onClose: () => void }) {
         </SelectField>
         {invite.isError && !fieldError(invite.error, 'email') && <Notice tone="error">{errorMessage(invite.error)}</Notice>}
         <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" busy={invite.isPending}>Send invitation</Button>
+          <Button variant="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="primary" busy={invite.isPending}>
+            Send invitation
+          </Button>
         </div>
       </form>
     </Dialog>
