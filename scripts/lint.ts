@@ -1,5 +1,5 @@
 // npm run lint: ESLint (rules and import boundaries inside files), dependency-cruiser (boundaries
-// between folders and no import circles) and jscpd (code written twice: reported, not failing, until
+// between folders and no import circles), Prettier (the tree stays formatted) and jscpd (code written twice: reported, not failing, until
 // the repetition the tree still has is gone). Prints one line per check and exits non-zero when a
 // failing check found anything. scripts/test.ts runs the same checks as its `lint` step.
 import { spawnSync } from 'node:child_process';
@@ -81,8 +81,21 @@ function duplicates(): LintCheck {
   return { name: 'duplicates', problems: lines.length, fails: false, detail: lines.join('\n') };
 }
 
+function formatting(): LintCheck {
+  // --list-different prints each file Prettier would change; `npm run format` fixes them.
+  const res = run(bin('prettier'), ['--list-different', '.']);
+  if (res.status !== 0 && res.status !== 1) {
+    return { name: 'format', problems: 1, fails: true, detail: `prettier did not run: ${res.stderr.trim().slice(0, 400)}` };
+  }
+  const lines = res.stdout
+    .split('\n')
+    .filter((l) => l.trim() !== '')
+    .map((l) => `${l} is not formatted (npm run format)`);
+  return { name: 'format', problems: lines.length, fails: true, detail: lines.join('\n') };
+}
+
 export function lintChecks(): LintCheck[] {
-  return [eslint(), imports(), duplicates()];
+  return [eslint(), imports(), duplicates(), formatting()];
 }
 
 export function printChecks(checks: LintCheck[]): void {
