@@ -2,7 +2,8 @@
 import express, { type Express, Router } from 'express';
 import { existsSync } from 'node:fs';
 import { resolve, join } from 'node:path';
-import type { AppDeps } from './context';
+import type { AppDeps, AppServices } from './context';
+import { createServices } from './compose';
 import { errorMiddleware, HttpError } from './http/errors';
 import { mountRoutes, type RouteDef } from './http/routes';
 import { sessionMiddleware } from './services/auth/session';
@@ -18,11 +19,11 @@ import { presentationRoutes } from './features/presentations/presentations.route
 import { clientPresentationRoutes } from './features/presentations/client.routes';
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
-import { createLogger, requestLogger } from './services/logging/logger';
+import { requestLogger } from './services/logging/logger';
 import { apiNoStore, securityHeaders } from './services/security/headers';
 import { originCheck } from './services/security/origin-check';
 
-export type { AppDeps } from './context';
+export type { AppDeps, AppServices } from './context';
 
 const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
@@ -44,10 +45,16 @@ export function allRoutes(): RouteDef[] {
 }
 
 export function createApp(deps: AppDeps): Express {
+  return createAppWithServices(deps).app;
+}
+
+/** The app and the services it was built with (the server closes them on shutdown). */
+export function createAppWithServices(deps: AppDeps): { app: Express; services: AppServices } {
+  const services = createServices(deps);
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(requestLogger(deps.logger ?? createLogger({ level: deps.config.logLevel })));
+  app.use(requestLogger(services.logger));
   app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
   app.use('/api', apiNoStore());
   const json = express.json({ limit: '2mb' });
@@ -57,7 +64,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', sessionMiddleware(deps.db));
 
   const api = Router();
-  mountRoutes(api, deps, allRoutes());
+  mountRoutes(api, services, allRoutes());
   app.use(api);
   app.use('/api', (_req, _res, next) => next(new HttpError(404, 'not_found', 'No such API route.')));
 
@@ -72,5 +79,5 @@ export function createApp(deps: AppDeps): Express {
     });
   }
   app.use(errorMiddleware);
-  return app;
+  return { app, services };
 }

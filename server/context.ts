@@ -1,12 +1,16 @@
-// What every part of the server is handed: the database, mail, configuration and the shared
-// services. createApp (app.ts) is the one place that fills it; nothing below imports the app.
+// What the server is made of. A caller (server/index.ts, a test, a bench) hands createApp the
+// outside world as AppDeps; server/compose.ts builds every service from it exactly once, as
+// AppServices, and createApp hands that one object down to every route. Nothing below imports the app.
 import type { AppConfig } from './config';
 import type { Db } from './db/database';
 import type { Mailer } from './services/mail/mailer';
 import type { FileStorage } from './services/storage/storage';
 import type { Logger } from './services/logging/logger';
 import type { PasswordVerifier } from './services/auth/passwords';
+import type { JobQueue } from './services/images/queue';
+import type { ClientLinkCache } from './features/presentations/client-cache';
 
+/** The outside world a server is started with. */
 export interface AppDeps {
   db: Db;
   mailer: Mailer;
@@ -17,4 +21,19 @@ export interface AppDeps {
   logger?: Logger;
   /** Checks a password at sign-in; scrypt when not given (tests count the calls). */
   verifyPassword?: PasswordVerifier;
+}
+
+/** Every service of one running app, built once by createServices (server/compose.ts). */
+export interface AppServices {
+  db: Db;
+  mailer: Mailer;
+  config: AppConfig;
+  storage: FileStorage;
+  /** The process logger; a request's own (with its id) is `ctx.log` in a route. */
+  logger: Logger;
+  verifyPassword: PasswordVerifier;
+  /** Photo processing, off the request path. */
+  photos: JobQueue;
+  /** Presentation answers kept ready per link on this instance. */
+  links: ClientLinkCache;
 }

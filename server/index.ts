@@ -3,19 +3,19 @@ import { loadConfig } from './config';
 import { createDb } from './db/database';
 import { migrateToLatest } from './db/migrate';
 import { createSmtpMailer } from './services/mail/mailer';
-import { createApp, type AppDeps } from './app';
-import { closeClientLinkCache } from './features/presentations/client-cache';
+import { createAppWithServices, type AppDeps } from './app';
+import { closeServices } from './compose';
 import { createLogger } from './services/logging/logger';
 import { storageFromConfig } from './services/storage/from-config';
 
 export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const config = loadConfig(env);
-  const db = createDb(config.DATABASE_URL);
+  const logger = createLogger({ level: config.logLevel });
+  const db = createDb(config.DATABASE_URL, 10, logger);
   await migrateToLatest(db);
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
-  const logger = createLogger({ level: config.logLevel });
   const deps: AppDeps = { db, mailer, config, logger, storage: storageFromConfig(config) };
-  const app = createApp(deps);
+  const { app, services } = createAppWithServices(deps);
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
@@ -25,7 +25,7 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
     async close() {
       await new Promise<void>((r) => server.close(() => r()));
       server.closeAllConnections();
-      await closeClientLinkCache(deps);
+      await closeServices(services);
       await db.destroy();
       logger.flush();
     },

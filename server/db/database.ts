@@ -1,4 +1,5 @@
 // The one Database interface: every table's row type, as Kysely sees it.
+import type { Logger } from '../services/logging/logger';
 import { Kysely, PostgresDialect, type Generated, type ColumnType } from 'kysely';
 import pg from 'pg';
 
@@ -221,9 +222,11 @@ export interface Database {
 
 export type Db = Kysely<Database>;
 
-export function createDb(connectionString: string, max = 10): Db {
+export function createDb(connectionString: string, max = 10, logger?: Pick<Logger, 'warn'>): Db {
   const pool = new pg.Pool({ connectionString, max });
   // A dropped connection must not take the process down; the next query reconnects.
-  pool.on('error', (err) => console.error('[db] idle client error:', err.message));
+  pool.on('error', (err) =>
+    logger ? logger.warn({ err }, 'idle database connection lost') : console.error('[db] idle client error:', err.message),
+  );
   return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
 }

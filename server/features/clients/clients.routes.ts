@@ -1,6 +1,6 @@
 import { clientBodySchema, clientPatchSchema, listQuerySchema } from '../../../shared/schemas/project';
 import { idParamSchema } from '../../../shared/schemas/common';
-import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
+import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
 import { notFound } from '../../http/errors';
 import { getClient, insertClient, listClients, updateClient } from './clients.repository';
 
@@ -13,47 +13,52 @@ const toClient = (r: { id: string; name: string; email: string | null; phone: st
 });
 
 export const clientRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/clients',
     access: ALL_ROLES,
+    query: listQuerySchema,
     async handler(ctx) {
-      const query = listQuerySchema.parse(ctx.req.query);
-      return { clients: await listClients(ctx.deps.db, requireCaller(ctx).studioId, query) };
+      const query = ctx.query;
+      return { clients: await listClients(ctx.services.db, ctx.caller.studioId, query) };
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/clients',
     access: WRITERS,
+    body: clientBodySchema,
     async handler(ctx) {
-      const body = clientBodySchema.parse(ctx.req.body);
-      const client = await insertClient(ctx.deps.db, requireCaller(ctx).studioId, body);
+      const body = ctx.body;
+      const client = await insertClient(ctx.services.db, ctx.caller.studioId, body);
       ctx.res.status(201);
       return { client: toClient(client) };
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/clients/:id',
     access: ALL_ROLES,
+    params: idParamSchema,
     async handler(ctx) {
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const client = await getClient(ctx.deps.db, requireCaller(ctx).studioId, id);
+      const { id } = ctx.params;
+      const client = await getClient(ctx.services.db, ctx.caller.studioId, id);
       if (!client) throw notFound('That client');
       return { client: toClient(client) };
     },
-  },
-  {
+  }),
+  route({
     method: 'patch',
     path: '/api/clients/:id',
     access: WRITERS,
+    params: idParamSchema,
+    body: clientPatchSchema,
     async handler(ctx) {
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const patch = clientPatchSchema.parse(ctx.req.body);
-      const client = await updateClient(ctx.deps.db, requireCaller(ctx).studioId, id, patch);
+      const { id } = ctx.params;
+      const patch = ctx.body;
+      const client = await updateClient(ctx.services.db, ctx.caller.studioId, id, patch);
       if (!client) throw notFound('That client');
       return { client: toClient(client) };
     },
-  },
+  }),
 ];

@@ -1,21 +1,22 @@
-import { requireCaller, type RouteDef } from '../../http/routes';
+import { route, type RouteDef } from '../../http/routes';
 import { notFound } from '../../http/errors';
 import { canReadFile } from './files.access';
 import { keyFromFileName } from './file-keys';
 import { fileParam, sendDerivedFile } from './files.service';
 
 export const fileRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/files/:name',
     access: 'signed-in',
+    params: fileParam,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { name } = fileParam.parse(ctx.req.params);
+      const { caller } = ctx;
+      const { name } = ctx.params;
       const key = keyFromFileName(name);
       // Someone else's file and no file at all answer the same, so names cannot be probed.
-      if (!key || !(await canReadFile(ctx.deps.db, caller, key))) throw notFound('That file');
+      if (!key || !(await canReadFile(ctx.services.db, caller, key))) throw notFound('That file');
       return sendDerivedFile(ctx, key);
     },
-  },
+  }),
 ];

@@ -3,7 +3,6 @@ import { z } from 'zod';
 import type { Response } from 'express';
 import type { RouteContext } from '../../http/routes';
 import { notFound } from '../../http/errors';
-import { finishServices } from '../finishes/finishes.service';
 import { hashOfKey } from './file-keys';
 
 export const fileParam = z.object({ name: z.string().max(100) });
@@ -16,7 +15,11 @@ const IMMUTABLE = 'private, max-age=31536000, immutable';
  * Answers with the stored derived file `key` (already authorised by the caller), as an immutable
  * private WebP; a matching If-None-Match gets 304. `extra` headers go on both answers.
  */
-export async function sendDerivedFile(ctx: RouteContext, key: string, extra: Record<string, string> = {}): Promise<undefined> {
+export async function sendDerivedFile(
+  ctx: Pick<RouteContext, 'req' | 'res' | 'services'>,
+  key: string,
+  extra: Record<string, string> = {},
+): Promise<undefined> {
   const etag = `"${hashOfKey(key)}"`;
   const cacheHeaders = { ETag: etag, 'Cache-Control': IMMUTABLE, 'X-Content-Type-Options': 'nosniff', ...extra };
   const res: Response = ctx.res;
@@ -24,7 +27,7 @@ export async function sendDerivedFile(ctx: RouteContext, key: string, extra: Rec
     res.status(304).set(cacheHeaders).end();
     return undefined;
   }
-  const bytes = await finishServices(ctx.deps).storage.get(key);
+  const bytes = await ctx.services.storage.get(key);
   if (!bytes) throw notFound('That file');
   res.set(cacheHeaders).type('image/webp').send(bytes);
   return undefined;

@@ -7,7 +7,7 @@ import {
   photoUploadFieldsSchema,
   type EdgeBlend,
 } from '../../../shared/schemas/finish';
-import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
+import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import type { Db } from '../../db/database';
 import { uploadKey } from '../files/file-keys';
@@ -22,7 +22,7 @@ import {
   type FinishRow,
   type NewFinish,
 } from './finishes.repository';
-import { finishServices, removeUnreferenced, resumeStalled, toFinish, toFinishes } from './finishes.service';
+import { removeUnreferenced, resumeStalled, toFinish, toFinishes } from './finishes.service';
 import { readPhotoUpload, type UploadedPhoto } from './finishes.uploads';
 
 /** The size a new photo finish starts with until the designer types its real one (1 m each way). */
@@ -115,35 +115,38 @@ function photoRows(
 }
 
 export const finishRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/finishes',
     access: ALL_ROLES,
+    query: finishListQuerySchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const query = finishListQuerySchema.parse(ctx.req.query);
-      await resumeStalled(ctx.deps, caller.studioId);
-      return { finishes: await toFinishes(ctx.deps.db, await listFinishRows(ctx.deps.db, caller.studioId, query)) };
+      const { caller } = ctx;
+      const query = ctx.query;
+      await resumeStalled(ctx.services, caller.studioId);
+      return { finishes: await toFinishes(ctx.services.db, await listFinishRows(ctx.services.db, caller.studioId, query)) };
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/finishes/:id',
     access: ALL_ROLES,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      return finishResponse(ctx.deps.db, await rowOrThrow(ctx.deps.db, caller.studioId, id));
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      return finishResponse(ctx.services.db, await rowOrThrow(ctx.services.db, caller.studioId, id));
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/finishes/paints',
     access: WRITERS,
+    body: createPaintSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const body = createPaintSchema.parse(ctx.req.body);
-      const [row] = await insertFinishRows(ctx.deps.db, [
+      const { caller } = ctx;
+      const body = ctx.body;
+      const [row] = await insertFinishRows(ctx.services.db, [
         {
           studio_id: caller.studioId,
           kind: 'paint',
@@ -159,21 +162,21 @@ export const finishRoutes: RouteDef[] = [
       ctx.res.status(201);
       return { finish: toFinish(row, []) };
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/finishes/photos',
     access: WRITERS,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
+      const { caller } = ctx;
       const { photos, fields } = await readPhotoUpload(ctx.req, ctx.res);
       const parsed = photoUploadFieldsSchema.parse(fields);
-      const { storage, queue } = finishServices(ctx.deps);
+      const { storage, photos: queue } = ctx.services;
       const keys = photos.map((p) => uploadKey(p.header.type === 'jpeg' ? 'jpg' : p.header.type));
       let rows: FinishRow[];
       try {
         await Promise.all(photos.map((p, i) => storage.put(keys[i], p.buffer)));
-        rows = await ctx.deps.db
+        rows = await ctx.services.db
           .transaction()
           .execute((trx) => insertFinishRows(trx, photoRows(caller.studioId, photos, keys, parsed)));
       } catch (err) {
@@ -185,38 +188,41 @@ export const finishRoutes: RouteDef[] = [
       ctx.res.status(201);
       return { finishes: rows.map((r) => toFinish(r, [])) };
     },
-  },
-  {
+  }),
+  route({
     method: 'patch',
     path: '/api/finishes/:id',
     access: WRITERS,
+    params: idParamSchema,
+    body: finishPatchSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const patch = finishPatchSchema.parse(ctx.req.body);
-      const row = await rowOrThrow(ctx.deps.db, caller.studioId, id);
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const patch = ctx.body;
+      const row = await rowOrThrow(ctx.services.db, caller.studioId, id);
       const { changes, reprocess } = changesFor(row, patch);
-      const saved = await updateFinishRow(ctx.deps.db, caller.studioId, id, changes);
+      const saved = await updateFinishRow(ctx.services.db, caller.studioId, id, changes);
       if (!saved) throw notFound('That finish');
-      if (reprocess) finishServices(ctx.deps).queue.add(id);
-      return finishResponse(ctx.deps.db, saved);
+      if (reprocess) ctx.services.photos.add(id);
+      return finishResponse(ctx.services.db, saved);
     },
-  },
-  {
+  }),
+  route({
     method: 'delete',
     path: '/api/finishes/:id',
     access: WRITERS,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const keys = await ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const keys = await ctx.services.db.transaction().execute(async (trx) => {
         const files = await filesOf(trx, [id]);
         const row = await deleteFinishRow(trx, caller.studioId, id);
         if (!row) throw notFound('That finish');
         return [...files.map((f) => f.key), row.source_key];
       });
-      await removeUnreferenced(ctx.deps.db, finishServices(ctx.deps).storage, keys);
+      await removeUnreferenced(ctx.services.db, ctx.services.storage, keys);
       return undefined;
     },
-  },
+  }),
 ];

@@ -1,10 +1,8 @@
 // Finishes: turning rows into API shapes, the photo processing job, and keeping stored files
 // exactly as many as the finishes use (nothing orphaned, nothing shared deleted).
-import type { AppDeps } from '../../context';
+import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
 import type { FileStorage } from '../../services/storage/storage';
-import { dataDirStorage } from '../../services/storage/local-disk';
-import { createJobQueue, type JobQueue } from '../../services/images/queue';
 import { processPhoto, type ProcessedImage } from '../../services/images/process-photo';
 import { megapixels } from '../../services/images/inspect';
 import { cropSchema, UPLOAD_LIMITS, type Finish, type PhotoFiles } from '../../../shared/schemas/finish';
@@ -22,31 +20,9 @@ import {
 } from './finishes.repository';
 
 /** Photos processed at once: each needs a few hundred MB at the pixel limit, so keep it small. */
-const PHOTO_CONCURRENCY = 1;
+export const PHOTO_CONCURRENCY = 1;
 /** A photo still "processing" this long after it was queued was lost (a restart): queue it again. */
 const STALLED_AFTER_MS = 2 * 60_000;
-
-export interface FinishServices {
-  storage: FileStorage;
-  queue: JobQueue;
-}
-
-const servicesByApp = new WeakMap<AppDeps, FinishServices>();
-
-/** The file store and photo queue of one app (one per createApp, made on first use). */
-export function finishServices(deps: AppDeps): FinishServices {
-  let services = servicesByApp.get(deps);
-  if (!services) {
-    const storage = deps.storage ?? dataDirStorage(deps.config.DATA_DIR);
-    const queue = createJobQueue((id) => runPhotoJob(deps.db, storage, id), {
-      concurrency: PHOTO_CONCURRENCY,
-      onError: (id, err) => console.error(`[finishes] processing ${id} failed unexpectedly:`, err),
-    });
-    services = { storage, queue };
-    servicesByApp.set(deps, services);
-  }
-  return services;
-}
 
 const NO_FILES: PhotoFiles = { swatchUrl: null, textureUrl: null, textureLargeUrl: null, previewUrl: null, photoUrl: null };
 const URL_OF_PURPOSE = {
@@ -107,12 +83,12 @@ export async function removeUnreferenced(db: Db, storage: FileStorage, keys: (st
 }
 
 /** Queues again what a stopped server left half-done, when the page next asks. */
-export async function resumeStalled(deps: AppDeps, studioId: string): Promise<void> {
-  const { queue } = finishServices(deps);
-  const ids = (await stalledIds(deps.db, studioId, new Date(Date.now() - STALLED_AFTER_MS))).filter((id) => !queue.has(id));
+export async function resumeStalled(services: Pick<AppServices, 'db' | 'photos'>, studioId: string): Promise<void> {
+  const { db, photos } = services;
+  const ids = (await stalledIds(db, studioId, new Date(Date.now() - STALLED_AFTER_MS))).filter((id) => !photos.has(id));
   for (const id of ids) {
-    await updateFinishRow(deps.db, studioId, id, { queued_at: new Date() });
-    queue.add(id);
+    await updateFinishRow(db, studioId, id, { queued_at: new Date() });
+    photos.add(id);
   }
 }
 

@@ -1,6 +1,6 @@
 import { idParamSchema } from '../../../shared/schemas/common';
 import { outboxCursor, outboxQuerySchema, type OutboxMessage, type OutboxPage } from '../../../shared/schemas/outbox';
-import { requireCaller, type RouteContext, type RouteDef } from '../../http/routes';
+import { route, type SignedInContext, type RouteDef } from '../../http/routes';
 import { HttpError, orNotFound } from '../../http/errors';
 import { getSentMail, listSentMail } from './outbox.repository';
 import { hasOutbox, visibleKinds } from './outbox.service';
@@ -8,22 +8,23 @@ import { hasOutbox, visibleKinds } from './outbox.service';
 // The Outbox is the studio's own sent-mail folder in the local setup: members read their studio's
 // mail (each role the kinds it may see) and copy or forward a link from it, as they would from a
 // real mail program. Absent (404) when a real mail service is configured.
-function callerKinds(ctx: RouteContext) {
-  const caller = requireCaller(ctx);
-  if (!hasOutbox(ctx.deps.config)) throw new HttpError(404, 'not_found', 'There is no outbox in this setup.');
+function callerKinds(ctx: SignedInContext) {
+  const { caller } = ctx;
+  if (!hasOutbox(ctx.services.config)) throw new HttpError(404, 'not_found', 'There is no outbox in this setup.');
   return { studioId: caller.studioId, kinds: visibleKinds(caller.role) };
 }
 
 export const outboxRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/outbox',
     access: 'signed-in',
+    query: outboxQuerySchema,
     async handler(ctx): Promise<OutboxPage> {
       const { studioId, kinds } = callerKinds(ctx);
-      const { before, limit } = outboxQuerySchema.parse(ctx.req.query);
+      const { before, limit } = ctx.query;
       // One row more than asked says whether another page follows.
-      const rows = await listSentMail(ctx.deps.db, studioId, kinds, limit + 1, before);
+      const rows = await listSentMail(ctx.services.db, studioId, kinds, limit + 1, before);
       const page = rows.slice(0, limit);
       const last = page.at(-1);
       return {
@@ -38,15 +39,16 @@ export const outboxRoutes: RouteDef[] = [
         next: rows.length > limit && last ? outboxCursor(last.created_at, last.id) : null,
       };
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/outbox/:id',
     access: 'signed-in',
+    params: idParamSchema,
     async handler(ctx): Promise<{ message: OutboxMessage }> {
       const { studioId, kinds } = callerKinds(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const r = orNotFound(await getSentMail(ctx.deps.db, studioId, kinds, id), 'That message');
+      const { id } = ctx.params;
+      const r = orNotFound(await getSentMail(ctx.services.db, studioId, kinds, id), 'That message');
       return {
         message: {
           id: r.id,
@@ -60,5 +62,5 @@ export const outboxRoutes: RouteDef[] = [
         },
       };
     },
-  },
+  }),
 ];

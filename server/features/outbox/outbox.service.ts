@@ -5,6 +5,7 @@
 import type { AppConfig } from '../../config';
 import type { Db } from '../../db/database';
 import type { MailMessage, Mailer } from '../../services/mail/mailer';
+import type { Logger } from '../../services/logging/logger';
 import type { Role } from '../../../shared/schemas/studio';
 import type { SentMailKind } from '../../../shared/schemas/outbox';
 import { HttpError } from '../../http/errors';
@@ -28,14 +29,14 @@ export const visibleKinds = (role: Role): readonly SentMailKind[] => KINDS_BY_RO
  */
 export async function sendStudioMail(
   db: Db,
-  deps: { mailer: Mailer; config: AppConfig },
+  deps: { mailer: Mailer; config: AppConfig; log?: Logger },
   mail: MailMessage & { studioId: string; kind: SentMailKind },
   failure = 'The e-mail could not be sent. Try again in a moment.',
 ): Promise<void> {
   const { studioId, kind, ...message } = mail;
   const send = () =>
     deps.mailer.send(message).catch((err: Error) => {
-      console.error(`[mail] ${kind} mail failed:`, err.message);
+      deps.log?.error({ err, mailKind: kind }, 'mail failed');
       throw new HttpError(502, 'mail_failed', failure);
     });
   if (!hasOutbox(deps.config)) return send();

@@ -6,8 +6,8 @@
 // entry locally before they answer. While the listening connection is down nothing is cached,
 // so a withdrawn link can never be served from a stale entry.
 import pg from 'pg';
-import type { AppDeps } from '../../context';
 import type { Db } from '../../db/database';
+import type { Logger } from '../../services/logging/logger';
 import { recordOpens } from './presentations.repository';
 
 export const CHANGE_CHANNEL = 'parlour_changes';
@@ -47,12 +47,17 @@ export class ClientLinkCache {
   /** Bumped by every notice, so an answer built across one is not stored. */
   private generation = 0;
   private flushing: Promise<void> = Promise.resolve();
-  private readonly flushTimer: NodeJS.Timeout;
+  private flushTimer: NodeJS.Timeout | null = null;
 
   constructor(
     private readonly db: Db,
     private readonly databaseUrl: string,
-  ) {
+    private readonly logger?: Logger,
+  ) {}
+
+  /** Starts listening (and the flush timer) on first use: an app that serves no link holds no connection. */
+  private start(): void {
+    if (this.flushTimer || this.closed) return;
     this.flushTimer = setInterval(() => void this.flushOpens(), OPEN_FLUSH_MS);
     this.flushTimer.unref();
     this.connect();
@@ -60,6 +65,7 @@ export class ClientLinkCache {
 
   /** The ready answer for `token`, if one is held and the link has not run out since. */
   get(token: string, now = Date.now()): CachedLink | undefined {
+    this.start();
     const e = this.entries.get(token);
     if (!e) return undefined;
     if (!this.listening || e.expiresAt.getTime() <= now || now - e.storedAt > ENTRY_TTL_MS) {
@@ -71,6 +77,7 @@ export class ClientLinkCache {
 
   /** Builds the answer (which throws for a link that does not work) and keeps it when it is safe to. */
   async load(token: string, build: () => Promise<CachedLink>): Promise<CachedLink> {
+    this.start();
     const before = this.generation;
     const link = await build();
     if (this.listening && this.generation === before) {
@@ -92,6 +99,7 @@ export class ClientLinkCache {
 
   /** Counts one visit; written with the others of the next second. */
   recordOpened(presentationId: string, at = new Date()): void {
+    this.start();
     const o = this.opens.get(presentationId);
     if (o) {
       o.count += 1;
@@ -109,7 +117,8 @@ export class ClientLinkCache {
         for (const [id, o] of batch) {
           await recordOpens(this.db, id, o);
         }
-      } catch {
+      } catch (err) {
+        this.logger?.warn({ err }, 'link opens not written yet; kept for the next try');
         // The database is away: keep the counts for the next try rather than lose them.
         for (const [id, o] of batch) {
           const now = this.opens.get(id);
@@ -122,7 +131,7 @@ export class ClientLinkCache {
 
   async close(): Promise<void> {
     this.closed = true;
-    clearInterval(this.flushTimer);
+    if (this.flushTimer) clearInterval(this.flushTimer);
     await this.flushOpens();
     this.listening = false;
     await this.listener?.end().catch(() => undefined);
@@ -161,36 +170,4 @@ export class ClientLinkCache {
       })
       .catch(lost);
   }
-}
-
-const caches = new WeakMap<AppDeps, ClientLinkCache>();
-
-/** The link cache of one app (one per createApp, made on first use). */
-export function clientLinkCache(deps: AppDeps): ClientLinkCache {
-  let cache = caches.get(deps);
-  if (!cache) {
-    cache = new ClientLinkCache(deps.db, deps.config.DATABASE_URL);
-    caches.set(deps, cache);
-  }
-  return cache;
-}
-
-/** Drops the link's ready answer on this instance now (others hear of it from the database). */
-export function forgetPresentation(deps: AppDeps, presentationId: string): void {
-  caches.get(deps)?.forgetPresentation(presentationId);
-}
-
-/** Drops the ready answers of every link of the studio on this instance now. */
-export function forgetStudio(deps: AppDeps, studioId: string): void {
-  caches.get(deps)?.forgetStudio(studioId);
-}
-
-/** Writes this instance's pending "opened" counts. */
-export async function flushOpens(deps: AppDeps): Promise<void> {
-  await caches.get(deps)?.flushOpens();
-}
-
-/** Stops listening and writes what is pending; for a clean shutdown. */
-export async function closeClientLinkCache(deps: AppDeps): Promise<void> {
-  await caches.get(deps)?.close();
 }

@@ -9,7 +9,7 @@ import {
   type ClientPresentation,
 } from '../../../shared/schemas/presentation';
 import { optionLabel } from '../../../shared/schemas/room-api';
-import type { RouteContext, RouteDef } from '../../http/routes';
+import { route, type RouteContext, type RouteDef } from '../../http/routes';
 import { HttpError } from '../../http/errors';
 import { lockProjectState, touchProject } from '../projects/projects.repository';
 import { canPresentationReadFile } from '../files/files.access';
@@ -27,7 +27,6 @@ import {
   type PresentationRow,
 } from './presentations.repository';
 import { sendStudioMail } from '../outbox/outbox.service';
-import { clientLinkCache, forgetPresentation } from './client-cache';
 import {
   CHOICE_LIMIT,
   RATE_WINDOW_MS,
@@ -65,7 +64,7 @@ async function notifyDesigner(
   optionId: string,
   comment: string,
 ): Promise<void> {
-  const { db, config } = ctx.deps;
+  const { db, config } = ctx.services;
   try {
     const [project, shown, to] = await Promise.all([
       projectForPresentation(db, p.studio_id, p.project_id),
@@ -84,62 +83,70 @@ async function notifyDesigner(
       projectLink: `${config.publicUrl}/projects/${project.id}`,
     };
     for (const address of to)
-      await sendStudioMail(db, ctx.deps, { studioId: p.studio_id, kind: 'choice', ...choiceMail({ to: address, ...mail }) });
+      await sendStudioMail(
+        db,
+        { ...ctx.services, log: ctx.log },
+        { studioId: p.studio_id, kind: 'choice', ...choiceMail({ to: address, ...mail }) },
+      );
   } catch (err) {
     // The choice is saved either way; the project page shows it even when the mail is lost.
-    console.error('[presentations] choice notification failed:', (err as Error).message);
+    ctx.log.error({ err }, 'choice notification failed');
   }
 }
 
 export const clientPresentationRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/p/:token',
     access: 'public',
     async handler(ctx): Promise<undefined> {
       privateAnswer(ctx.res);
       const token = tokenOf(ctx.req);
-      const cache = clientLinkCache(ctx.deps);
+      const cache = ctx.services.links;
       // The hot path of a busy link: a ready answer, no database round trip (see client-cache.ts).
       const link =
         cache.get(token) ??
         (await cache.load(token, async () => {
-          const p = await presentationForToken(ctx.deps.db, ctx.deps.config, token);
-          const answer: { presentation: ClientPresentation } = { presentation: await clientPresentation(ctx.deps.db, p, token) };
+          const p = await presentationForToken(ctx.services.db, ctx.services.config, token);
+          const answer: { presentation: ClientPresentation } = {
+            presentation: await clientPresentation(ctx.services.db, p, token),
+          };
           return { presentationId: p.id, studioId: p.studio_id, expiresAt: p.expires_at, body: JSON.stringify(answer) };
         }));
       if (ctx.caller?.studioId !== link.studioId) cache.recordOpened(link.presentationId);
       ctx.res.type('application/json').send(link.body);
       return undefined;
     },
-  },
-  {
+  }),
+  route({
     // The textures of the finishes the shown options wear, for a visitor without an account. The
     // link is checked on every request (withdrawing stops it at once); the browser's own cache may
     // keep a file it already has, as for the studio's members.
     method: 'get',
     path: '/api/p/:token/files/:name',
     access: 'public',
+    params: fileParam,
     async handler(ctx) {
-      const p = await presentationForToken(ctx.deps.db, ctx.deps.config, tokenOf(ctx.req));
-      const { name } = fileParam.parse(ctx.req.params);
+      const p = await presentationForToken(ctx.services.db, ctx.services.config, tokenOf(ctx.req));
+      const { name } = ctx.params;
       const key = keyFromFileName(name);
-      const scope = { studioId: p.studio_id, finishIds: await presentationFinishIds(ctx.deps.db, p) };
+      const scope = { studioId: p.studio_id, finishIds: await presentationFinishIds(ctx.services.db, p) };
       // Another finish's file and no file at all answer the same, so names cannot be probed.
-      if (!key || !(await canPresentationReadFile(ctx.deps.db, scope, key)))
+      if (!key || !(await canPresentationReadFile(ctx.services.db, scope, key)))
         throw new HttpError(404, 'not_found', 'That file was not found.');
       return sendDerivedFile(ctx, key, { 'Referrer-Policy': 'no-referrer' });
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/p/:token/views',
     access: 'public',
+    body: viewBodySchema,
     async handler(ctx) {
       privateAnswer(ctx.res);
-      const { optionId } = viewBodySchema.parse(ctx.req.body);
-      await ctx.deps.db.transaction().execute(async (trx) => {
-        const p = await presentationForToken(trx, ctx.deps.config, tokenOf(ctx.req), { forUpdate: true });
+      const { optionId } = ctx.body;
+      await ctx.services.db.transaction().execute(async (trx) => {
+        const p = await presentationForToken(trx, ctx.services.config, tokenOf(ctx.req), { forUpdate: true });
         if ((await logRequest(trx, p.id, 'view', new Date(Date.now() - RATE_WINDOW_MS))) > VIEW_LIMIT) throw tooMany(ctx.res);
         const ok = isStudioMember(ctx, p)
           ? await isShownOption(trx, p.id, optionId)
@@ -148,18 +155,19 @@ export const clientPresentationRoutes: RouteDef[] = [
       });
       return undefined;
     },
-  },
-  {
+  }),
+  route({
     method: 'put',
     path: '/api/p/:token/rooms/:roomId/choice',
     access: 'public',
+    body: choiceBodySchema,
     async handler(ctx): Promise<ChoiceAnswer> {
       privateAnswer(ctx.res);
       const params = roomParam.safeParse(ctx.req.params);
-      const body = choiceBodySchema.parse(ctx.req.body);
-      const result = await ctx.deps.db.transaction().execute(async (trx) => {
+      const body = ctx.body;
+      const result = await ctx.services.db.transaction().execute(async (trx) => {
         // Holding the row serialises this link's posts across instances: the count below is exact.
-        const p = await presentationForToken(trx, ctx.deps.config, tokenOf(ctx.req), { forUpdate: true });
+        const p = await presentationForToken(trx, ctx.services.config, tokenOf(ctx.req), { forUpdate: true });
         if (!params.success) throw linkNotFound();
         const { roomId } = params.data;
         if ((await logRequest(trx, p.id, 'choice', new Date(Date.now() - RATE_WINDOW_MS))) > CHOICE_LIMIT) throw tooMany(ctx.res);
@@ -195,10 +203,10 @@ export const clientPresentationRoutes: RouteDef[] = [
         };
       });
       if (result.changed) {
-        forgetPresentation(ctx.deps, result.p.id);
+        ctx.services.links.forgetPresentation(result.p.id);
         await notifyDesigner(ctx, result.p, result.roomId, body.optionId, body.comment);
       }
       return { choice: result.choice, changed: result.changed };
     },
-  },
+  }),
 ];

@@ -9,7 +9,7 @@ import {
   sendPresentationSchema,
   type PresentationSummary,
 } from '../../../shared/schemas/presentation';
-import { ALL_ROLES, WRITERS, requireCaller, type RouteContext, type RouteDef } from '../../http/routes';
+import { ALL_ROLES, WRITERS, route, type SignedInContext, type RouteDef } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import type { Db } from '../../db/database';
 import { newTokenId, toTokenTime } from '../../services/tokens/presentation-token';
@@ -29,7 +29,6 @@ import {
   type PresentationRow,
 } from './presentations.repository';
 import { sendStudioMail } from '../outbox/outbox.service';
-import { flushOpens, forgetPresentation } from './client-cache';
 import { lockProjectState } from '../projects/projects.repository';
 import { DECIDED_REOPEN_FIRST, decidedRefusal } from '../projects/project-states';
 import { invitationMail, presentationLink, presentationState, presentationSummaries } from './presentations.service';
@@ -44,17 +43,17 @@ async function presentationOrThrow(db: Db, studioId: string, id: string) {
   return orNotFound(await getPresentation(db, studioId, id), 'That presentation');
 }
 
-async function summaries(ctx: RouteContext, rows: PresentationRow[]): Promise<PresentationSummary[]> {
-  const caller = requireCaller(ctx);
-  const members = await listMembers(ctx.deps.db, caller.studioId);
-  return presentationSummaries(ctx.deps.db, ctx.deps.config, rows, {
+async function summaries(ctx: SignedInContext, rows: PresentationRow[]): Promise<PresentationSummary[]> {
+  const { caller } = ctx;
+  const members = await listMembers(ctx.services.db, caller.studioId);
+  return presentationSummaries(ctx.services.db, ctx.services.config, rows, {
     // The link opens the client's page and lets its holder choose, so viewers do not get it.
     withLinks: WRITERS.includes(caller.role),
     memberNames: new Map(members.map((m) => [m.id, m.name])),
   });
 }
 
-const one = async (ctx: RouteContext, row: PresentationRow) => ({ presentation: (await summaries(ctx, [row]))[0] });
+const one = async (ctx: SignedInContext, row: PresentationRow) => ({ presentation: (await summaries(ctx, [row]))[0] });
 
 /** Every room must be the project's, every option that room's; names the first field that is not. */
 async function assertShownRoomsBelong(
@@ -88,27 +87,30 @@ const refuseUnlessActive = (p: PresentationRow, doing: string) => {
 };
 
 export const presentationRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/projects/:projectId/presentations',
     access: ALL_ROLES,
+    params: projectIdParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
-      await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
-      await flushOpens(ctx.deps);
-      return { presentations: await summaries(ctx, await listPresentations(ctx.deps.db, caller.studioId, projectId)) };
+      const { caller } = ctx;
+      const { projectId } = ctx.params;
+      await projectOrThrow(ctx.services.db, caller.studioId, projectId);
+      await ctx.services.links.flushOpens();
+      return { presentations: await summaries(ctx, await listPresentations(ctx.services.db, caller.studioId, projectId)) };
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/projects/:projectId/presentations',
     access: WRITERS,
+    params: projectIdParamSchema,
+    body: createPresentationSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
-      const body = createPresentationSchema.parse(ctx.req.body);
-      const row = await ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { projectId } = ctx.params;
+      const body = ctx.body;
+      const row = await ctx.services.db.transaction().execute(async (trx) => {
         const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
         if (project.state === 'archived')
           throw new HttpError(409, 'archived', 'This project is archived. Restore it before presenting it.');
@@ -134,16 +136,18 @@ export const presentationRoutes: RouteDef[] = [
       ctx.res.status(201);
       return one(ctx, row);
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/presentations/:id/send',
     access: WRITERS,
+    params: idParamSchema,
+    body: sendPresentationSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const body = sendPresentationSchema.parse(ctx.req.body ?? {});
-      const { db, config } = ctx.deps;
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const body = ctx.body;
+      const { db, config } = ctx.services;
       const p = await presentationOrThrow(db, caller.studioId, id);
       refuseUnlessActive(p, 'sent');
       const project = await projectOrThrow(db, caller.studioId, p.project_id);
@@ -168,7 +172,7 @@ export const presentationRoutes: RouteDef[] = [
         if (project.state === 'draft') await setProjectState(trx, project.id, 'presented');
         await sendStudioMail(
           trx,
-          ctx.deps,
+          { ...ctx.services, log: ctx.log },
           { studioId: caller.studioId, kind: 'presentation', ...mail },
           'The e-mail could not be sent. Try again in a moment, or copy the link instead.',
         );
@@ -176,30 +180,33 @@ export const presentationRoutes: RouteDef[] = [
       });
       return one(ctx, sent);
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/presentations/:id/withdraw',
     access: WRITERS,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const p = await presentationOrThrow(ctx.deps.db, caller.studioId, id);
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const p = await presentationOrThrow(ctx.services.db, caller.studioId, id);
       // Withdrawing twice keeps the first time: that is when the link stopped working.
-      const saved = p.withdrawn_at ? p : await updatePresentation(ctx.deps.db, p.id, { withdrawn_at: new Date() });
-      forgetPresentation(ctx.deps, p.id);
+      const saved = p.withdrawn_at ? p : await updatePresentation(ctx.services.db, p.id, { withdrawn_at: new Date() });
+      ctx.services.links.forgetPresentation(p.id);
       return one(ctx, saved);
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/presentations/:id/extend',
     access: WRITERS,
+    params: idParamSchema,
+    body: extendPresentationSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const { days } = extendPresentationSchema.parse(ctx.req.body);
-      const p = await presentationOrThrow(ctx.deps.db, caller.studioId, id);
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const { days } = ctx.body;
+      const p = await presentationOrThrow(ctx.services.db, caller.studioId, id);
       if (p.withdrawn_at)
         throw new HttpError(
           409,
@@ -216,20 +223,24 @@ export const presentationRoutes: RouteDef[] = [
       }
       // From today when it has already run out, so extending an expired link opens it again.
       const from = Math.max(Date.now(), p.expires_at.getTime());
-      const saved = await updatePresentation(ctx.deps.db, p.id, { expires_at: new Date(Math.min(from + days * DAY_MS, latest)) });
-      forgetPresentation(ctx.deps, p.id);
+      const saved = await updatePresentation(ctx.services.db, p.id, {
+        expires_at: new Date(Math.min(from + days * DAY_MS, latest)),
+      });
+      ctx.services.links.forgetPresentation(p.id);
       return one(ctx, saved);
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/projects/:projectId/decide',
     access: WRITERS,
+    params: projectIdParamSchema,
+    body: decideProjectSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
-      const { presentationId } = decideProjectSchema.parse(ctx.req.body);
-      const saved = await ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { projectId } = ctx.params;
+      const { presentationId } = ctx.body;
+      const saved = await ctx.services.db.transaction().execute(async (trx) => {
         // The presentation's row before the project's, in the order a client's choice takes them.
         const p = await getPresentation(trx, caller.studioId, presentationId, { forUpdate: true });
         const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
@@ -242,14 +253,17 @@ export const presentationRoutes: RouteDef[] = [
         }
         if (p.withdrawn_at)
           throw new HttpError(409, 'withdrawn', 'This presentation was withdrawn; its choices cannot decide the project.');
-        const [summary] = await presentationSummaries(trx, ctx.deps.config, [p], { withLinks: false, memberNames: new Map() });
+        const [summary] = await presentationSummaries(trx, ctx.services.config, [p], {
+          withLinks: false,
+          memberNames: new Map(),
+        });
         if (!summary.complete)
           throw new HttpError(409, 'incomplete', 'Every room in this presentation needs a choice before the project is decided.');
         await setProjectState(trx, projectId, 'decided');
         return updatePresentation(trx, p.id, { decided_at: new Date() });
       });
-      forgetPresentation(ctx.deps, saved.id);
+      ctx.services.links.forgetPresentation(saved.id);
       return { state: 'decided' as const, ...(await one(ctx, saved)) };
     },
-  },
+  }),
 ];

@@ -1,11 +1,10 @@
 import { createProjectSchema, listQuerySchema, projectPatchSchema } from '../../../shared/schemas/project';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
-import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
+import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { getClient, insertClient } from '../clients/clients.repository';
 import { getProject, insertProject, listProjects, lockProjectState, reopenProject, updateProject } from './projects.repository';
 import { patchStateChange } from './project-states';
-import { forgetStudio } from '../presentations/client-cache';
 import type { Db } from '../../db/database';
 
 /** Rooms of a project, for its page. Filled by the rooms feature through this hook. */
@@ -13,23 +12,25 @@ export type ProjectExtras = (db: Db, studioId: string, projectId: string) => Pro
 
 export function projectRoutes(extras: ProjectExtras[] = []): RouteDef[] {
   return [
-    {
+    route({
       method: 'get',
       path: '/api/projects',
       access: ALL_ROLES,
+      query: listQuerySchema,
       async handler(ctx) {
-        const query = listQuerySchema.parse(ctx.req.query);
-        return { projects: await listProjects(ctx.deps.db, requireCaller(ctx).studioId, query) };
+        const query = ctx.query;
+        return { projects: await listProjects(ctx.services.db, ctx.caller.studioId, query) };
       },
-    },
-    {
+    }),
+    route({
       method: 'post',
       path: '/api/projects',
       access: WRITERS,
+      body: createProjectSchema,
       async handler(ctx) {
-        const caller = requireCaller(ctx);
-        const body = createProjectSchema.parse(ctx.req.body);
-        const id = await ctx.deps.db.transaction().execute(async (trx) => {
+        const { caller } = ctx;
+        const body = ctx.body;
+        const id = await ctx.services.db.transaction().execute(async (trx) => {
           let clientId = body.clientId;
           if (clientId) {
             if (!(await getClient(trx, caller.studioId, clientId))) {
@@ -43,54 +44,58 @@ export function projectRoutes(extras: ProjectExtras[] = []): RouteDef[] {
           ).id;
         });
         ctx.res.status(201);
-        return { project: await getProject(ctx.deps.db, caller.studioId, id) };
+        return { project: await getProject(ctx.services.db, caller.studioId, id) };
       },
-    },
-    {
+    }),
+    route({
       method: 'get',
       path: '/api/projects/:id',
       access: ALL_ROLES,
+      params: idParamSchema,
       async handler(ctx) {
-        const caller = requireCaller(ctx);
-        const { id } = idParamSchema.parse(ctx.req.params);
-        const project = await getProject(ctx.deps.db, caller.studioId, id);
+        const { caller } = ctx;
+        const { id } = ctx.params;
+        const project = await getProject(ctx.services.db, caller.studioId, id);
         if (!project) throw notFound('That project');
-        const client = await getClient(ctx.deps.db, caller.studioId, project.client.id);
+        const client = await getClient(ctx.services.db, caller.studioId, project.client.id);
         let more: Record<string, unknown> = {};
-        for (const extra of extras) more = { ...more, ...(await extra(ctx.deps.db, caller.studioId, id)) };
+        for (const extra of extras) more = { ...more, ...(await extra(ctx.services.db, caller.studioId, id)) };
         return {
           project,
           client: client && { id: client.id, name: client.name, email: client.email, phone: client.phone },
           ...more,
         };
       },
-    },
-    {
+    }),
+    route({
       method: 'patch',
       path: '/api/projects/:id',
       access: WRITERS,
+      params: idParamSchema,
+      body: projectPatchSchema,
       async handler(ctx) {
-        const caller = requireCaller(ctx);
-        const { id } = idParamSchema.parse(ctx.req.params);
-        const { state, ...rest } = projectPatchSchema.parse(ctx.req.body);
-        await ctx.deps.db.transaction().execute(async (trx) => {
+        const { caller } = ctx;
+        const { id } = ctx.params;
+        const { state, ...rest } = ctx.body;
+        await ctx.services.db.transaction().execute(async (trx) => {
           const current = orNotFound(await lockProjectState(trx, caller.studioId, id), 'That project');
           const change = state ? patchStateChange(current.state, current.previous_state, state) : null;
           const changes = change ? { ...rest, state: change.state, previous_state: change.previousState } : rest;
           await updateProject(trx, caller.studioId, id, changes);
         });
-        return { project: await getProject(ctx.deps.db, caller.studioId, id) };
+        return { project: await getProject(ctx.services.db, caller.studioId, id) };
       },
-    },
-    {
+    }),
+    route({
       // Decided → presented, on purpose: the clients' links can change their choices again.
       method: 'post',
       path: '/api/projects/:projectId/reopen',
       access: WRITERS,
+      params: projectIdParamSchema,
       async handler(ctx) {
-        const caller = requireCaller(ctx);
-        const { projectId } = projectIdParamSchema.parse(ctx.req.params);
-        await ctx.deps.db.transaction().execute(async (trx) => {
+        const { caller } = ctx;
+        const { projectId } = ctx.params;
+        await ctx.services.db.transaction().execute(async (trx) => {
           const current = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
           if (current.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it first.');
           if (!(await reopenProject(trx, caller.studioId, projectId, caller.memberId))) {
@@ -98,9 +103,9 @@ export function projectRoutes(extras: ProjectExtras[] = []): RouteDef[] {
           }
         });
         // Every link of the studio shows whether the project is decided: drop what this instance keeps.
-        forgetStudio(ctx.deps, caller.studioId);
-        return { project: await getProject(ctx.deps.db, caller.studioId, projectId) };
+        ctx.services.links.forgetStudio(caller.studioId);
+        return { project: await getProject(ctx.services.db, caller.studioId, projectId) };
       },
-    },
+    }),
   ];
 }

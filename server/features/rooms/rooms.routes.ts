@@ -11,7 +11,7 @@ import {
   saveRoomSchema,
 } from '../../../shared/schemas/room-api';
 import { readPlanFile, writePlanFile } from '../../../shared/schemas/plan-file';
-import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
+import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { getProject, lockProjectState, touchProject } from '../projects/projects.repository';
 import type { Db } from '../../db/database';
@@ -92,28 +92,31 @@ export const projectRoomsExtra = async (db: Db, studioId: string, projectId: str
 });
 
 export const roomRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/projects/:projectId/rooms',
     access: ALL_ROLES,
+    params: projectIdParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
-      await projectOrThrow(ctx.deps.db, caller.studioId, projectId);
-      return { rooms: await roomSummaries(ctx.deps.db, caller.studioId, projectId) };
+      const { caller } = ctx;
+      const { projectId } = ctx.params;
+      await projectOrThrow(ctx.services.db, caller.studioId, projectId);
+      return { rooms: await roomSummaries(ctx.services.db, caller.studioId, projectId) };
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/projects/:projectId/rooms',
     access: WRITERS,
+    params: projectIdParamSchema,
+    body: createRoomSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
-      const body = createRoomSchema.parse(ctx.req.body);
+      const { caller } = ctx;
+      const { projectId } = ctx.params;
+      const body = ctx.body;
       assertDrawableShell(body.shell);
       const result = await createRoomWithOption(
-        ctx.deps.db,
+        ctx.services.db,
         caller.studioId,
         projectId,
         { name: body.name, shell: body.shell },
@@ -122,14 +125,15 @@ export const roomRoutes: RouteDef[] = [
       ctx.res.status(201);
       return result;
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/projects/:projectId/rooms/import',
     access: WRITERS,
+    params: projectIdParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { projectId } = projectIdParamSchema.parse(ctx.req.params);
+      const { caller } = ctx;
+      const { projectId } = ctx.params;
       const read = readPlanFile(ctx.req.body);
       if (!read.ok) {
         const fields = problemsToFields(
@@ -146,7 +150,7 @@ export const roomRoutes: RouteDef[] = [
       } = read.plan;
       const doc = optionDocSchema.parse({ pieces: option.pieces, finishes: option.finishes });
       const result = await createRoomWithOption(
-        ctx.deps.db,
+        ctx.services.db,
         caller.studioId,
         projectId,
         { name: name || 'Imported room', shell },
@@ -155,28 +159,31 @@ export const roomRoutes: RouteDef[] = [
       ctx.res.status(201);
       return result;
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/rooms/:id',
     access: ALL_ROLES,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const room = await roomOrThrow(ctx.deps.db, caller.studioId, id);
-      return { room, options: await listOptions(ctx.deps.db, caller.studioId, id) };
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const room = await roomOrThrow(ctx.services.db, caller.studioId, id);
+      return { room, options: await listOptions(ctx.services.db, caller.studioId, id) };
     },
-  },
-  {
+  }),
+  route({
     method: 'put',
     path: '/api/rooms/:id',
     access: WRITERS,
+    params: idParamSchema,
+    body: saveRoomSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const body = saveRoomSchema.parse(ctx.req.body);
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const body = ctx.body;
       if (body.shell) assertDrawableShell(body.shell);
-      return ctx.deps.db.transaction().execute(async (trx) => {
+      return ctx.services.db.transaction().execute(async (trx) => {
         if (body.shell) {
           const room = await roomOrThrow(trx, caller.studioId, id);
           await lockProjectState(trx, caller.studioId, room.projectId, 'share');
@@ -188,16 +195,17 @@ export const roomRoutes: RouteDef[] = [
         return { room: saved };
       });
     },
-  },
-  {
+  }),
+  route({
     method: 'delete',
     path: '/api/rooms/:id',
     access: WRITERS,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
+      const { caller } = ctx;
+      const { id } = ctx.params;
       await deleteKeepingChoices('room', () =>
-        ctx.deps.db.transaction().execute(async (trx) => {
+        ctx.services.db.transaction().execute(async (trx) => {
           const room = await roomOrThrow(trx, caller.studioId, id);
           // Held until the room is gone, so no presentation can start showing it in between.
           await lockProjectState(trx, caller.studioId, room.projectId);
@@ -208,17 +216,19 @@ export const roomRoutes: RouteDef[] = [
       );
       return undefined;
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/rooms/:id/plan-file',
     access: ALL_ROLES,
+    params: idParamSchema,
+    query: exportQuery,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const { optionId } = exportQuery.parse(ctx.req.query);
-      const room = await roomOrThrow(ctx.deps.db, caller.studioId, id);
-      const options = await listOptions(ctx.deps.db, caller.studioId, id);
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const { optionId } = ctx.query;
+      const room = await roomOrThrow(ctx.services.db, caller.studioId, id);
+      const options = await listOptions(ctx.services.db, caller.studioId, id);
       const option = optionId ? options.find((o) => o.id === optionId) : options[0];
       if (!option) throw notFound('That option');
       const text = writePlanFile({
@@ -235,16 +245,18 @@ export const roomRoutes: RouteDef[] = [
       ctx.res.send(text);
       return undefined;
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/rooms/:id/options',
     access: WRITERS,
+    params: idParamSchema,
+    body: createOptionSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const body = createOptionSchema.parse(ctx.req.body);
-      const option = await ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const body = ctx.body;
+      const option = await ctx.services.db.transaction().execute(async (trx) => {
         const room = await roomOrThrow(trx, caller.studioId, id);
         if ((await countOptionsLocked(trx, id)) >= PROJECT_LIMITS.optionsPerRoom) {
           throw new HttpError(
@@ -270,16 +282,18 @@ export const roomRoutes: RouteDef[] = [
       ctx.res.status(201);
       return { option };
     },
-  },
-  {
+  }),
+  route({
     method: 'put',
     path: '/api/rooms/:id/option-order',
     access: WRITERS,
+    params: idParamSchema,
+    body: reorderOptionsSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const { optionIds } = reorderOptionsSchema.parse(ctx.req.body);
-      return ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const { optionIds } = ctx.body;
+      return ctx.services.db.transaction().execute(async (trx) => {
         await roomOrThrow(trx, caller.studioId, id);
         const current = await listOptions(trx, caller.studioId, id);
         const same = current.length === optionIds.length && current.every((o) => optionIds.includes(o.id));
@@ -291,16 +305,18 @@ export const roomRoutes: RouteDef[] = [
         return { options: await listOptions(trx, caller.studioId, id) };
       });
     },
-  },
-  {
+  }),
+  route({
     method: 'put',
     path: '/api/options/:id',
     access: WRITERS,
+    params: idParamSchema,
+    body: saveOptionSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const body = saveOptionSchema.parse(ctx.req.body);
-      return ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const body = ctx.body;
+      return ctx.services.db.transaction().execute(async (trx) => {
         const current = await optionOrThrow(trx, caller.studioId, id);
         const changes =
           (body.name !== undefined && body.name !== current.name) ||
@@ -316,16 +332,17 @@ export const roomRoutes: RouteDef[] = [
         return { option: saved };
       });
     },
-  },
-  {
+  }),
+  route({
     method: 'delete',
     path: '/api/options/:id',
     access: WRITERS,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
+      const { caller } = ctx;
+      const { id } = ctx.params;
       await deleteKeepingChoices('option', () =>
-        ctx.deps.db.transaction().execute(async (trx) => {
+        ctx.services.db.transaction().execute(async (trx) => {
           const option = await optionOrThrow(trx, caller.studioId, id);
           const room = await roomOrThrow(trx, caller.studioId, option.roomId);
           await lockProjectState(trx, caller.studioId, room.projectId);
@@ -342,5 +359,5 @@ export const roomRoutes: RouteDef[] = [
       );
       return undefined;
     },
-  },
+  }),
 ];

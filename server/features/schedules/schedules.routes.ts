@@ -3,7 +3,7 @@
 import { z } from 'zod';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { takeoffQuerySchema, type TakeoffSettings } from '../../../shared/analysis/schedule';
-import { ALL_ROLES, requireCaller, type RouteDef, type RouteContext } from '../../http/routes';
+import { ALL_ROLES, route, type Caller, type RouteDef, type RouteContext } from '../../http/routes';
 import { fileSlug } from '../rooms/rooms.service';
 import { compareAnswer, projectTakeoffAnswer, scheduleAnswer, scheduleCsv } from './schedules.service';
 
@@ -16,35 +16,30 @@ const countedQuery = z.object({
     .pipe(z.array(z.uuid({ message: 'Each counted option must be an option id.' })).max(200)),
 });
 
-type Caller = ReturnType<typeof requireCaller>;
-
 /** A read-only route for every role: parsed path params and take-off settings in, the answer out. */
 function readRoute<P>(
   path: string,
   params: z.ZodType<P>,
-  answer: (ctx: RouteContext, caller: Caller, params: P, settings: TakeoffSettings) => Promise<unknown>,
+  answer: (ctx: RouteContext<P, TakeoffSettings, undefined, Caller>) => Promise<unknown>,
 ): RouteDef {
-  return {
-    method: 'get',
-    path,
-    access: ALL_ROLES,
-    handler: (ctx) => answer(ctx, requireCaller(ctx), params.parse(ctx.req.params), takeoffQuerySchema.parse(ctx.req.query)),
-  };
+  return route({ method: 'get', path, access: ALL_ROLES, params, query: takeoffQuerySchema, handler: answer });
 }
 
 export const scheduleRoutes: RouteDef[] = [
-  readRoute('/api/projects/:projectId/takeoff', projectIdParamSchema, (ctx, caller, { projectId }, settings) => {
+  readRoute('/api/projects/:projectId/takeoff', projectIdParamSchema, (ctx) => {
+    const { caller, query: settings } = ctx;
+    const { projectId } = ctx.params;
     const { options } = countedQuery.parse({ options: ctx.req.query.options });
-    return projectTakeoffAnswer(ctx.deps.db, caller.studioId, projectId, settings, options);
+    return projectTakeoffAnswer(ctx.services.db, caller.studioId, projectId, settings, options);
   }),
-  readRoute('/api/projects/:projectId/compare', projectIdParamSchema, (ctx, caller, { projectId }, settings) =>
-    compareAnswer(ctx.deps.db, caller.studioId, projectId, settings),
+  readRoute('/api/projects/:projectId/compare', projectIdParamSchema, (ctx) =>
+    compareAnswer(ctx.services.db, ctx.caller.studioId, ctx.params.projectId, ctx.query),
   ),
-  readRoute('/api/options/:id/schedule', idParamSchema, (ctx, caller, { id }, settings) =>
-    scheduleAnswer(ctx.deps.db, caller.studioId, id, settings),
+  readRoute('/api/options/:id/schedule', idParamSchema, (ctx) =>
+    scheduleAnswer(ctx.services.db, ctx.caller.studioId, ctx.params.id, ctx.query),
   ),
-  readRoute('/api/options/:id/schedule.csv', idParamSchema, async (ctx, caller, { id }, settings) => {
-    const answer = await scheduleAnswer(ctx.deps.db, caller.studioId, id, settings);
+  readRoute('/api/options/:id/schedule.csv', idParamSchema, async (ctx) => {
+    const answer = await scheduleAnswer(ctx.services.db, ctx.caller.studioId, ctx.params.id, ctx.query);
     const letter = answer.option.label.replace(/ · .*/, '');
     const name = `${fileSlug(answer.project.name)}-${fileSlug(answer.room.name)}-${fileSlug(letter)}-schedule.csv`;
     ctx.res.setHeader('Content-Type', 'text/csv; charset=utf-8; header=present');

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
 import { acceptInviteSchema } from '../../../shared/schemas/account';
 import { idParamSchema } from '../../../shared/schemas/common';
-import { ALL_ROLES, OWNERS, requireCaller, type RouteDef } from '../../http/routes';
+import { ALL_ROLES, OWNERS, route, type RouteDef } from '../../http/routes';
 import { HttpError, notFound } from '../../http/errors';
 import { escapeHtml } from '../../services/mail/escape-html';
 import { hashToken, newToken } from '../../services/auth/tokens';
@@ -50,21 +50,23 @@ async function openInviteOrThrow(
 }
 
 export const studioRoutes: RouteDef[] = [
-  {
+  route({
     method: 'get',
     path: '/api/studio/members',
     access: ALL_ROLES,
-    handler: async (ctx) => ({ members: await listMembers(ctx.deps.db, requireCaller(ctx).studioId) }),
-  },
-  {
+    handler: async (ctx) => ({ members: await listMembers(ctx.services.db, ctx.caller.studioId) }),
+  }),
+  route({
     method: 'patch',
     path: '/api/studio/members/:id',
     access: OWNERS,
+    params: idParamSchema,
+    body: changeRoleSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      const { role } = changeRoleSchema.parse(ctx.req.body);
-      return ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      const { role } = ctx.body;
+      return ctx.services.db.transaction().execute(async (trx) => {
         const member = await getMember(trx, caller.studioId, id);
         if (!member) throw notFound('That member');
         if (member.role === 'owner' && role !== 'owner' && (await countOwners(trx, caller.studioId)) <= 1) {
@@ -75,15 +77,16 @@ export const studioRoutes: RouteDef[] = [
         return { member: toMember({ ...member, role }) };
       });
     },
-  },
-  {
+  }),
+  route({
     method: 'delete',
     path: '/api/studio/members/:id',
     access: OWNERS,
+    params: idParamSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const { id } = idParamSchema.parse(ctx.req.params);
-      await ctx.deps.db.transaction().execute(async (trx) => {
+      const { caller } = ctx;
+      const { id } = ctx.params;
+      await ctx.services.db.transaction().execute(async (trx) => {
         const member = await getMember(trx, caller.studioId, id);
         if (!member) throw notFound('That member');
         if (member.role === 'owner' && (await countOwners(trx, caller.studioId)) <= 1) {
@@ -94,23 +97,24 @@ export const studioRoutes: RouteDef[] = [
       });
       return undefined;
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/studio/invites',
     access: OWNERS,
     handler: async (ctx) => ({
-      invites: (await listOpenInvites(ctx.deps.db, requireCaller(ctx).studioId)).map((r) => toInviteInfo(r)),
+      invites: (await listOpenInvites(ctx.services.db, ctx.caller.studioId)).map((r) => toInviteInfo(r)),
     }),
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/studio/invites',
     access: OWNERS,
+    body: inviteSchema,
     async handler(ctx) {
-      const caller = requireCaller(ctx);
-      const body = inviteSchema.parse(ctx.req.body);
-      const { db, config } = ctx.deps;
+      const { caller } = ctx;
+      const body = ctx.body;
+      const { db, config } = ctx.services;
       await enforceRateLimit(
         db,
         ctx.res,
@@ -141,7 +145,7 @@ export const studioRoutes: RouteDef[] = [
         });
         await sendStudioMail(
           trx,
-          ctx.deps,
+          { ...ctx.services, log: ctx.log },
           {
             studioId: caller.studioId,
             kind: 'invitation',
@@ -157,36 +161,40 @@ export const studioRoutes: RouteDef[] = [
       ctx.res.status(201);
       return { invite: toInviteInfo(invite) };
     },
-  },
-  {
+  }),
+  route({
     method: 'delete',
     path: '/api/studio/invites/:id',
     access: OWNERS,
+    params: idParamSchema,
     async handler(ctx) {
-      const { id } = idParamSchema.parse(ctx.req.params);
-      if (!(await deleteInvite(ctx.deps.db, requireCaller(ctx).studioId, id))) throw notFound('That invitation');
+      const { id } = ctx.params;
+      if (!(await deleteInvite(ctx.services.db, ctx.caller.studioId, id))) throw notFound('That invitation');
       return undefined;
     },
-  },
-  {
+  }),
+  route({
     method: 'get',
     path: '/api/invites/:token',
     access: 'public',
+    params: tokenParamSchema,
     async handler(ctx) {
-      const { token } = tokenParamSchema.parse(ctx.req.params);
-      const invite = await openInviteOrThrow(ctx.deps.db, token);
+      const { token } = ctx.params;
+      const invite = await openInviteOrThrow(ctx.services.db, token);
       return { invite: toInviteInfo(invite, invite.studio_name) };
     },
-  },
-  {
+  }),
+  route({
     method: 'post',
     path: '/api/invites/:token/accept',
     access: 'public',
+    params: tokenParamSchema,
+    body: acceptInviteSchema,
     async handler(ctx) {
-      const { token } = tokenParamSchema.parse(ctx.req.params);
-      const body = acceptInviteSchema.parse(ctx.req.body);
+      const { token } = ctx.params;
+      const body = ctx.body;
       const passwordHash = await hashPassword(body.password);
-      const member = await ctx.deps.db.transaction().execute(async (trx) => {
+      const member = await ctx.services.db.transaction().execute(async (trx) => {
         // Locked until commit: a second acceptance at the same moment waits, then finds it used.
         const invite = await openInviteOrThrow(trx, token, { forUpdate: true });
         if (await findMemberByEmail(trx, invite.email)) {
@@ -201,9 +209,9 @@ export const studioRoutes: RouteDef[] = [
           passwordHash,
         });
       });
-      await startSession(ctx.deps.db, ctx.res, member.id, ctx.deps.config.SECURE_COOKIES);
+      await startSession(ctx.services.db, ctx.res, member.id, ctx.services.config.SECURE_COOKIES);
       ctx.res.status(201);
       return { member: toMember(member) };
     },
-  },
+  }),
 ];

@@ -1,0 +1,36 @@
+// The composition root: every service of an app is built here, once, from what the caller handed
+// in. Routes receive the result (AppServices) and never build or look up a service themselves.
+import type { AppDeps, AppServices } from './context';
+import { createLogger } from './services/logging/logger';
+import { dataDirStorage } from './services/storage/local-disk';
+import { verifyPassword } from './services/auth/passwords';
+import { createJobQueue } from './services/images/queue';
+import { PHOTO_CONCURRENCY, runPhotoJob } from './features/finishes/finishes.service';
+import { ClientLinkCache } from './features/presentations/client-cache';
+
+export function createServices(deps: AppDeps): AppServices {
+  const logger = deps.logger ?? createLogger({ level: deps.config.logLevel });
+  const storage = deps.storage ?? dataDirStorage(deps.config.DATA_DIR);
+  const photos = createJobQueue((id) => runPhotoJob(deps.db, storage, id), {
+    concurrency: PHOTO_CONCURRENCY,
+    onError: (id, err) => logger.error({ err, finishId: id }, 'photo processing failed unexpectedly'),
+  });
+  // The link cache opens its listening connection on first use, so an app that never serves a
+  // presentation link holds no extra connection.
+  const links = new ClientLinkCache(deps.db, deps.config.DATABASE_URL, logger);
+  return {
+    db: deps.db,
+    mailer: deps.mailer,
+    config: deps.config,
+    storage,
+    logger,
+    verifyPassword: deps.verifyPassword ?? verifyPassword,
+    photos,
+    links,
+  };
+}
+
+/** Stops what the services hold open (the link cache's connection and its pending counts). */
+export async function closeServices(services: AppServices): Promise<void> {
+  await services.links.close();
+}
