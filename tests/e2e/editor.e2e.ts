@@ -77,8 +77,12 @@ describe('the room editor', () => {
     await page.getByRole('button', { name: /Furnish/ }).click();
     await page.getByRole('button', { name: 'Add Three-seat sofa' }).click();
     await piece(page, 'Three-seat sofa').waitFor();
+    // The catalogue stays open after Add, saying what went in; the new piece is selected on the plan.
+    await page.getByText('Added Three-seat sofa.').waitFor();
+    await page.getByRole('button', { name: 'Add Armchair' }).waitFor();
     await page.keyboard.press('r');
     await expect.poll(() => piece(page, 'Three-seat sofa').getAttribute('data-rotation')).toBe('15');
+    await page.getByRole('button', { name: 'Edit Three-seat sofa' }).click();
     await page.getByRole('button', { name: 'Turn 15° clockwise' }).click();
     await expect.poll(() => piece(page, 'Three-seat sofa').getAttribute('data-rotation')).toBe('30');
 
@@ -97,6 +101,8 @@ describe('the room editor', () => {
 
     await page.getByRole('button', { name: '← Catalogue' }).click();
     await page.getByRole('button', { name: 'Add Armchair' }).click();
+    // Clicking the new piece on the plan opens its fields, as any other selection does.
+    await piece(page, 'Armchair').click();
     await page.getByRole('button', { name: 'Move to the holding area' }).click();
     await expect.poll(() => piece(page, 'Armchair').getAttribute('data-placed')).toBe('false');
     await page.getByRole('button', { name: 'Place in the room' }).click();

@@ -48,13 +48,15 @@ describe('where added pieces land', () => {
         .getByRole('button', { name: `Add ${name}`, exact: true })
         .first()
         .click();
-      await page.getByRole('button', { name: '← Catalogue' }).click();
+      await page.getByText(`Added ${name}.`).waitFor();
     }
     // The eighth waits in the holding area first, then is placed in the room; the plan keeps its scale.
     const plan = page.getByTestId('plan');
     const scaleBefore = await plan.getAttribute('viewBox');
     // A piece wider than the holding area widens it.
     await page.getByRole('button', { name: 'Put a Desk in the holding area' }).click();
+    await page.getByText('Desk is in the holding area.').waitFor();
+    await page.getByRole('button', { name: 'Edit Desk' }).click();
     await page.getByText('In the holding area', { exact: true }).waitFor();
     expect(await plan.getAttribute('viewBox')).toBe(scaleBefore);
     await page.getByRole('button', { name: 'Place in the room' }).click();

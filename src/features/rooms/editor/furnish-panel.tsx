@@ -69,8 +69,11 @@ export function FurnishPanel({
   /** Where added and placed pieces should land near: the middle of the plan's view of the room. */
   viewCentre: () => [number, number];
 }) {
+  // Add and Hold select the new piece (the plan shows where it landed) but keep the catalogue
+  // open, so several pieces go in one after another; any other selection opens the piece's fields.
+  const [kept, setKept] = useState<Selection>(null);
   const selected = selection?.kind === 'piece' ? pieces.find((p) => p.id === selection.id) : undefined;
-  if (selected)
+  if (selected && selection !== kept)
     return (
       <PieceProperties
         key={selected.id}
@@ -99,6 +102,8 @@ export function FurnishPanel({
       onSelect={onSelect}
       newId={newId}
       heldCount={pieces.filter((p) => !p.placed).length}
+      added={selected && selection === kept ? selected : undefined}
+      onAdded={setKept}
     />
   );
 }
@@ -114,6 +119,8 @@ function CatalogueList({
   onSelect,
   newId,
   heldCount,
+  added,
+  onAdded,
 }: {
   shell: RoomShell;
   pieces: Piece[];
@@ -125,13 +132,19 @@ function CatalogueList({
   onSelect: (s: Selection) => void;
   newId: (prefix: string) => string;
   heldCount: number;
+  /** The piece just added from this list, still selected. */
+  added: Piece | undefined;
+  onAdded: (s: Selection) => void;
 }) {
   const [filter, setFilter] = useState('');
   const add = (kind: CatalogueId, held: boolean) => {
     const id = newId('piece');
     const piece = pieceFromCatalogue(kind, id, viewCentre());
-    if (run(addPiece(optionId, held ? { ...piece, placed: false } : placedNear(shell, pieces, piece, viewCentre()))))
-      onSelect({ kind: 'piece', id });
+    if (run(addPiece(optionId, held ? { ...piece, placed: false } : placedNear(shell, pieces, piece, viewCentre())))) {
+      const s: Selection = { kind: 'piece', id };
+      onSelect(s);
+      onAdded(s);
+    }
   };
   const shown = CATALOGUE.filter((e) => e.name.toLowerCase().includes(filter.trim().toLowerCase()));
   return (
@@ -140,6 +153,21 @@ function CatalogueList({
         Drag a piece onto the plan, or add it to the middle of the room. The holding area beside the room keeps pieces you are
         still finding a place for{heldCount > 0 ? ` (${heldCount} waiting)` : ''}.
       </p>
+      <div aria-live="polite" className="min-h-0 empty:hidden">
+        {added && (
+          <div className="flex items-center justify-between gap-2 rounded-lg bg-pine/10 px-3 py-2 text-sm">
+            <span className="min-w-0">{added.placed ? `Added ${added.name}.` : `${added.name} is in the holding area.`}</span>
+            <button
+              type="button"
+              className="shrink-0 font-semibold text-pine hover:underline"
+              onClick={() => onSelect({ kind: 'piece', id: added.id })}
+              aria-label={`Edit ${added.name}`}
+            >
+              Edit it
+            </button>
+          </div>
+        )}
+      </div>
       <label>
         <span className="sr-only">Find in the catalogue</span>
         <input
