@@ -34,6 +34,7 @@ import {
   insertRoom,
   listOptions,
   listRooms,
+  RoomPositionsTaken,
   setOptionPositions,
   toRoom,
   updateOptionIfVersion,
@@ -134,7 +135,12 @@ async function createRoomWithOption(
         `A project holds at most ${PROJECT_LIMITS.roomsPerProject} rooms. Delete one before adding another.`,
       );
     }
-    const created = await insertRoom(trx, { studioId, projectId, ...room });
+    const created = await insertRoom(trx, { studioId, projectId, ...room }).catch((err: unknown) => {
+      if (err instanceof RoomPositionsTaken) {
+        throw new HttpError(503, 'busy', 'Many rooms are being added to this project at once. Try again in a moment.');
+      }
+      throw err;
+    });
     const first = await insertOption(trx, { studioId, roomId: created.id, ...option });
     await touchProject(trx, projectId);
     return { room: created, options: [first] };
