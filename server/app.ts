@@ -12,7 +12,7 @@ import { studioRoutes } from './features/studio/studio.routes';
 import { clientRoutes } from './features/clients/clients.routes';
 import { projectRoutes } from './features/projects/projects.routes';
 import { outboxRoutes } from './features/outbox/outbox.routes';
-import { projectRoomsExtra, roomRoutes } from './features/rooms/rooms.routes';
+import { roomRoutes } from './features/rooms/rooms.routes';
 import { finishRoutes } from './features/finishes/finishes.routes';
 import { fileRoutes } from './features/files/files.routes';
 import { presentationRoutes } from './features/presentations/presentations.routes';
@@ -33,7 +33,7 @@ export function allRoutes(): RouteDef[] {
     ...authRoutes,
     ...studioRoutes,
     ...clientRoutes,
-    ...projectRoutes([projectRoomsExtra]),
+    ...projectRoutes,
     ...roomRoutes,
     ...finishRoutes,
     ...fileRoutes,

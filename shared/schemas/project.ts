@@ -72,3 +72,10 @@ export const projectSummarySchema = z.object({
   createdAt: z.string(),
 });
 export type ProjectSummary = z.infer<typeof projectSummarySchema>;
+
+/** GET /api/projects/:id: the project and how to reach its client (its rooms are GET /api/projects/:projectId/rooms). */
+export const projectDetailSchema = z.object({
+  project: projectSummarySchema,
+  client: clientSchema.pick({ id: true, name: true, email: true, phone: true }).nullable(),
+});
+export type ProjectDetail = z.infer<typeof projectDetailSchema>;

@@ -1,6 +1,7 @@
-// What keeps a client's choice standing: a room or option that a presentation still shows is not
-// deleted, nor one a client chose (choices are never deleted as a side effect), and while the
-// project is decided its chosen options and their room's walls do not change.
+// The rooms feature's rules on what keeps a client's choice standing (rooms.service.ts applies
+// them): a room or option that a presentation still shows is not deleted, nor one a client chose
+// (choices are never deleted as a side effect), and while the project is decided its chosen
+// options and their room's walls do not change.
 import type { Db } from '../../db/database';
 import { HttpError } from '../../http/errors';
 import { CHOSEN_OPTION_FROZEN, decidedRefusal } from '../projects/project-states';
@@ -66,14 +67,24 @@ export async function assertShellEditable(db: Db, studioId: string, roomId: stri
 }
 
 /** PostgreSQL's answer when a delete would take a choice with it (migration 0009's foreign keys). */
-export function isChoiceKept(err: unknown): boolean {
+function isChoiceKept(err: unknown): boolean {
   const e = err as { code?: unknown; constraint?: unknown } | null;
   return e?.code === '23503' && (e.constraint === 'choices_room_fk' || e.constraint === 'choices_option_fk');
 }
 
-export const choiceKeptRefusal = (what: 'room' | 'option') =>
+const choiceKeptRefusal = (what: 'room' | 'option') =>
   new HttpError(
     409,
     'in_presentation',
     `A client chose ${what === 'room' ? 'an option of this room' : 'this option'} in a presentation. Their choice is kept, so the ${what} cannot be deleted.`,
   );
+
+/** Runs a delete; the database's refusal to take a client's choice with it becomes a 409. */
+export async function deleteKeepingChoices(what: 'room' | 'option', run: () => Promise<void>): Promise<void> {
+  try {
+    await run();
+  } catch (err) {
+    if (isChoiceKept(err)) throw choiceKeptRefusal(what);
+    throw err;
+  }
+}

@@ -1,6 +1,5 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
-import { HttpError } from '../../http/errors';
 import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionDocSchema, withoutNonWebLinks } from '../../../shared/schemas/option';
 import type { OptionRecord, RoomRecord } from '../../../shared/schemas/room-api';
@@ -118,6 +117,13 @@ export async function getRoom(db: Db, studioId: string, id: string): Promise<Roo
 /** Tries at the next free position before giving up; each retry sees the rooms committed meanwhile. */
 const ROOM_POSITION_ATTEMPTS = 25;
 
+/** Thrown by insertRoom when parallel requests took every position it tried. */
+export class RoomPositionsTaken extends Error {
+  constructor() {
+    super(`No free room position after ${ROOM_POSITION_ATTEMPTS} attempts.`);
+  }
+}
+
 /**
  * Adds the room after the project's last. Positions are unique (migration 0009): when a parallel
  * request took the same one, the insert waits for it, does nothing, and is tried again at the
@@ -147,7 +153,7 @@ export async function insertRoom(
       .executeTakeFirst();
     if (r) return toRoom(r);
   }
-  throw new HttpError(503, 'busy', 'Many rooms are being added to this project at once. Try again in a moment.');
+  throw new RoomPositionsTaken();
 }
 
 /** Saves when `version` is still current; returns undefined when someone saved first. */

@@ -1,5 +1,11 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CreateProjectBody, ListQuery, ProjectPatch, ProjectSummary } from '../../../../shared/schemas/project';
+import type {
+  CreateProjectBody,
+  ListQuery,
+  ProjectDetail,
+  ProjectPatch,
+  ProjectSummary,
+} from '../../../../shared/schemas/project';
 import { api } from '../../../lib/api';
 
 export const projectKeys = {
@@ -9,11 +15,6 @@ export const projectKeys = {
   details: () => [...projectKeys.all, 'detail'] as const,
   detail: (id: string) => [...projectKeys.details(), id] as const,
 };
-
-export interface ProjectDetail {
-  project: ProjectSummary;
-  client: { id: string; name: string; email: string | null; phone: string | null } | null;
-}
 
 export const projectListQuery = (q: Partial<ListQuery>) =>
   queryOptions({
