@@ -174,13 +174,6 @@ export interface ChoicesTable {
   chosen_at: Timestamp;
 }
 
-export interface PresentationRequestsTable {
-  id: Generated<string>;
-  presentation_id: string;
-  kind: 'choice' | 'view';
-  at: Timestamp;
-}
-
 export interface RateLimitCountsTable {
   bucket: string;
   key: string;
@@ -215,7 +208,6 @@ export interface Database {
   presentation_rooms: PresentationRoomsTable;
   presentation_options: PresentationOptionsTable;
   choices: ChoicesTable;
-  presentation_requests: PresentationRequestsTable;
   rate_limit_counts: RateLimitCountsTable;
   sent_mail: SentMailTable;
 }

@@ -6,9 +6,12 @@ import { mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { SignJWT } from 'jose';
+import { sql } from 'kysely';
 import { decodeKey, loadConfig } from '../../server/config';
 import { PRESENTATION_AUDIENCE, PRESENTATION_ISSUER, PRESENTATION_TYP } from '../../server/services/tokens/presentation-token';
 import type { ClientPresentation, PresentationSummary } from '../../shared/schemas/presentation';
+import { CHOICE_RATE, VIEW_RATE } from '../../server/features/presentations/client.service';
+import type { RateRule } from '../../server/services/rate-limit/rate-limit';
 import { TEST_PRESENTATION_KEY, addMember, createTestApp, signUpStudio, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
@@ -104,6 +107,16 @@ const tokenOf = (p: PresentationSummary) => p.link!.split('/p/')[1];
 const openLink = (token: string) => request(t.app).get(`/api/p/${token}`);
 const choose = (token: string, roomId: string, optionId: string, comment = '') =>
   request(t.app).put(`/api/p/${token}/rooms/${roomId}/choice`).send({ optionId, comment });
+/** A link's posts counted under `rule`, over every window still kept. */
+async function linkCount(rule: RateRule, presentationId: string): Promise<number> {
+  const r = await t.db
+    .selectFrom('rate_limit_counts')
+    .select((eb) => eb.fn.sum<string>('count').as('n'))
+    .where('bucket', '=', rule.bucket)
+    .where('key', '=', presentationId)
+    .executeTakeFirstOrThrow();
+  return Number(r.n);
+}
 const b64 = (v: object) => Buffer.from(JSON.stringify(v)).toString('base64url');
 
 async function tokenIdOf(p: PresentationSummary): Promise<string> {
@@ -490,6 +503,31 @@ describe('choices', () => {
     ).toBe(400);
   });
 
+  it('limits “looked at” posts per link, with the same answer', async () => {
+    const flat = await makeFlat(designer);
+    const p = await present(designer, flat);
+    const token = tokenOf(p);
+    const optionId = flat.rooms[0].options[0].id;
+    expect((await request(t.app).post(`/api/p/${token}/views`).send({ optionId })).status).toBe(204);
+    // 299 more in this window, as a long evening of looking would make.
+    await t.db
+      .updateTable('rate_limit_counts')
+      .set({ count: 300 })
+      .where('bucket', '=', VIEW_RATE.bucket)
+      .where('key', '=', p.id)
+      .execute();
+    const refused = await request(t.app).post(`/api/p/${token}/views`).send({ optionId });
+    expect(refused.status).toBe(429);
+    expect(refused.headers['retry-after']).toBe('600');
+    expect(refused.body.error.message).toMatch(/wait a few minutes/);
+    expect(await linkCount(VIEW_RATE, p.id)).toBe(300);
+    const [summary] = (await designer.get(`/api/projects/${flat.projectId}/presentations`)).body.presentations.filter(
+      (x: PresentationSummary) => x.id === p.id,
+    );
+    // The refused look is not recorded either.
+    expect(summary.rooms[0].options.find((o: { optionId: string }) => o.optionId === optionId).viewCount).toBe(1);
+  });
+
   it('is rate-limited per link, counted in the database', async () => {
     const flat = await makeFlat(designer);
     const p = await present(designer, flat);
@@ -503,21 +541,17 @@ describe('choices', () => {
     expect(refused.status).toBe(429);
     expect(refused.headers['retry-after']).toBe('600');
     expect(refused.body.error.message).toMatch(/wait a few minutes/);
-    const counted = await t.db
-      .selectFrom('presentation_requests')
-      .select((eb) => eb.fn.countAll<string>().as('n'))
-      .where('presentation_id', '=', p.id)
-      .where('kind', '=', 'choice')
-      .executeTakeFirstOrThrow();
-    expect(Number(counted.n)).toBe(20);
+    // The refused post is not counted: its transaction rolled back.
+    expect(await linkCount(CHOICE_RATE, p.id)).toBe(20);
     // Another link of the same project has a count of its own.
     const q = await present(designer, flat);
     expect((await choose(tokenOf(q), room.id, room.options[0].id)).status).toBe(200);
     // Once the window has passed, the link may choose again.
     await t.db
-      .updateTable('presentation_requests')
-      .set({ at: new Date(Date.now() - 11 * 60_000) })
-      .where('presentation_id', '=', p.id)
+      .updateTable('rate_limit_counts')
+      .set((eb) => ({ window_start: sql<Date>`${eb.ref('window_start')} - interval '20 minutes'` }))
+      .where('bucket', '=', CHOICE_RATE.bucket)
+      .where('key', '=', p.id)
       .execute();
     expect((await choose(token, room.id, room.options[2].id)).status).toBe(200);
   });

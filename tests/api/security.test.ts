@@ -2,7 +2,7 @@
 // cookie-authenticated writes, and the invitation rate limit counted in PostgreSQL.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { INVITE_RATE } from '../../server/features/studio/studio.routes';
+import { INVITE_RATE } from '../../server/features/studio/studio.service';
 import { hitRateLimit } from '../../server/services/rate-limit/rate-limit';
 import { createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 import { presentedProject } from '../ops/lib/fixtures';

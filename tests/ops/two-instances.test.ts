@@ -13,7 +13,7 @@ import { createDb } from '../../server/db/database';
 import { migrateToLatest } from '../../server/db/migrate';
 import { startServer } from '../../server/index';
 import { startStandInSmtp, type StandInSmtp } from '../../server/services/mail/stand-in-smtp';
-import { INVITE_RATE } from '../../server/features/studio/studio.routes';
+import { INVITE_RATE } from '../../server/features/studio/studio.service';
 import { SIGN_IN_RATE } from '../../server/features/auth/auth.service';
 import { freePort } from '../../scripts/lib/throwaway-cluster';
 import { siblingDatabase, type SiblingDatabase } from './lib/sibling-database';

@@ -1,12 +1,10 @@
+// Signing up, in and out, and who is signed in. Rules are in auth.service.ts; the routes set the cookie.
 import { signInSchema, type SessionInfo } from '../../../shared/schemas/studio';
 import { signUpSchema } from '../../../shared/schemas/account';
 import { route, type RouteDef } from '../../http/routes';
-import { notFound } from '../../http/errors';
 import { clearSessionCookie, startSession } from '../../services/auth/session';
-import { getMember, toMember } from '../studio/members.repository';
-import { enforceRateLimit, waitInWords } from '../../services/rate-limit/rate-limit';
-import { clientAddressKey } from '../../services/rate-limit/client-address';
-import { signIn, signUp, signUpRate } from './auth.service';
+import { toMember } from '../studio/members.repository';
+import { sessionInfo, signIn, signOut, signUp } from './auth.service';
 
 export const authRoutes: RouteDef[] = [
   route({
@@ -15,14 +13,7 @@ export const authRoutes: RouteDef[] = [
     access: 'public',
     body: signUpSchema,
     async handler({ req, res, services, body }) {
-      await enforceRateLimit(
-        services.db,
-        res,
-        signUpRate(services.config),
-        clientAddressKey(req.ip),
-        (s) => `Too many new studios were made from this address. Try again in ${waitInWords(s)}.`,
-      );
-      const member = await signUp(services.db, body);
+      const member = await signUp(services.db, services.config, res, req.ip, body);
       await startSession(services.db, res, member.id, services.config.SECURE_COOKIES);
       res.status(201);
       return { member: toMember(member) };
@@ -44,8 +35,7 @@ export const authRoutes: RouteDef[] = [
     path: '/api/auth/sign-out',
     access: 'signed-in',
     async handler(ctx) {
-      const { caller } = ctx;
-      await ctx.services.db.deleteFrom('sessions').where('id', '=', caller.sessionId).execute();
+      await signOut(ctx.services.db, ctx.caller);
       clearSessionCookie(ctx.res);
       return undefined;
     },
@@ -54,16 +44,6 @@ export const authRoutes: RouteDef[] = [
     method: 'get',
     path: '/api/auth/me',
     access: 'signed-in',
-    async handler(ctx): Promise<SessionInfo> {
-      const { caller } = ctx;
-      const member = await getMember(ctx.services.db, caller.studioId, caller.memberId);
-      const studio = await ctx.services.db
-        .selectFrom('studios')
-        .select(['id', 'name'])
-        .where('id', '=', caller.studioId)
-        .executeTakeFirst();
-      if (!member || !studio) throw notFound('Your account');
-      return { member: toMember(member), studio, outbox: Boolean(ctx.services.config.OUTBOX_DIR) };
-    },
+    handler: (ctx): Promise<SessionInfo> => sessionInfo(ctx.services.db, ctx.services.config, ctx.caller),
   }),
 ];

@@ -3,10 +3,15 @@ import type { SignInBody } from '../../../shared/schemas/studio';
 import type { SignUpBody } from '../../../shared/schemas/account';
 import type { Response } from 'express';
 import type { AppConfig } from '../../config';
-import { HttpError } from '../../http/errors';
 import { clearRateLimit, enforceRateLimit, waitInWords, type RateRule } from '../../services/rate-limit/rate-limit';
 import { dummyPasswordHash, hashPassword, verifyPassword, type PasswordVerifier } from '../../services/auth/passwords';
-import { findMemberByEmail, insertMember } from '../studio/members.repository';
+import type { Caller } from '../../http/routes';
+import type { SessionInfo } from '../../../shared/schemas/studio';
+import { HttpError, notFound } from '../../http/errors';
+import { clientAddressKey } from '../../services/rate-limit/client-address';
+import { findMemberByEmail, getMember, insertMember, toMember } from '../studio/members.repository';
+import { getStudio, insertStudio } from '../studio/studios.repository';
+import { deleteSession } from './auth.repository';
 
 // Five attempts per e-mail within a sliding 15 minutes (common practice; OWASP's authentication
 // guidance recommends throttling, no fixed numbers). Every attempt is counted before its password
@@ -23,7 +28,24 @@ export const signUpRate = (config: Pick<AppConfig, 'SIGN_UP_LIMIT_PER_HOUR'>): R
 /** Checks a password against its stored hash; the app's is scrypt, tests may count the calls. */
 export type { PasswordVerifier } from '../../services/auth/passwords';
 
-export async function signUp(db: Db, body: SignUpBody) {
+/**
+ * Makes a studio and its first owner, within the hourly allowance of new studios per client
+ * address (`ip`; a refusal sets Retry-After on `res`).
+ */
+export async function signUp(
+  db: Db,
+  config: Pick<AppConfig, 'SIGN_UP_LIMIT_PER_HOUR'>,
+  res: Response,
+  ip: string | undefined,
+  body: SignUpBody,
+) {
+  await enforceRateLimit(
+    db,
+    res,
+    signUpRate(config),
+    clientAddressKey(ip),
+    (s) => `Too many new studios were made from this address. Try again in ${waitInWords(s)}.`,
+  );
   const passwordHash = await hashPassword(body.password);
   return db.transaction().execute(async (trx) => {
     if (await findMemberByEmail(trx, body.email)) {
@@ -31,7 +53,7 @@ export async function signUp(db: Db, body: SignUpBody) {
         email: 'This e-mail already has an account.',
       });
     }
-    const studio = await trx.insertInto('studios').values({ name: body.studioName }).returning(['id']).executeTakeFirstOrThrow();
+    const studio = await insertStudio(trx, body.studioName);
     return insertMember(trx, { studioId: studio.id, email: body.email, name: body.name, role: 'owner', passwordHash });
   });
 }
@@ -58,4 +80,17 @@ export async function signIn(
   }
   await clearRateLimit(db, SIGN_IN_RATE, body.email);
   return member;
+}
+
+/** Signs the caller's session out. */
+export async function signOut(db: Db, caller: Caller): Promise<void> {
+  await deleteSession(db, caller.sessionId);
+}
+
+/** Who is signed in, in which studio, and whether this setup has an Outbox. */
+export async function sessionInfo(db: Db, config: Pick<AppConfig, 'OUTBOX_DIR'>, caller: Caller): Promise<SessionInfo> {
+  const member = await getMember(db, caller.studioId, caller.memberId);
+  const studio = await getStudio(db, caller.studioId);
+  if (!member || !studio) throw notFound('Your account');
+  return { member: toMember(member), studio, outbox: Boolean(config.OUTBOX_DIR) };
 }

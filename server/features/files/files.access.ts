@@ -1,21 +1,14 @@
 // Who may load a stored file: signed-in members of a studio that owns a finish using it, and a
 // presentation's visitor for the textures of the finishes its shown options use. The files
-// routes keep one question each to ask.
+// routes keep one question each to ask; the queries are in files.repository.ts.
 import type { Db } from '../../db/database';
 import type { Caller } from '../../http/routes';
+import { isDerivedFileOfStudio, isTextureOfFinishes } from './files.repository';
 
 export async function canReadFile(db: Db, caller: Caller | null, fileKey: string): Promise<boolean> {
   if (!caller) return false;
-  const row = await db
-    .selectFrom('finish_files')
-    .select('finish_id')
-    .where('key', '=', fileKey)
-    .where('studio_id', '=', caller.studioId)
-    // The kept original is private even to the studio: only what processing made is served.
-    .where('purpose', '<>', 'master')
-    .limit(1)
-    .executeTakeFirst();
-  return Boolean(row);
+  // The kept original is private even to the studio: only what processing made is served.
+  return isDerivedFileOfStudio(db, caller.studioId, fileKey);
 }
 
 /** What a link's visitor sees of a studio's files: the textures of these finishes only. */
@@ -30,15 +23,5 @@ export interface PresentationFileScope {
  * cropping view are the designer's working files: the client's 3D view needs textures alone.
  */
 export async function canPresentationReadFile(db: Db, scope: PresentationFileScope, fileKey: string): Promise<boolean> {
-  if (scope.finishIds.length === 0) return false;
-  const row = await db
-    .selectFrom('finish_files')
-    .select('finish_id')
-    .where('key', '=', fileKey)
-    .where('studio_id', '=', scope.studioId)
-    .where('finish_id', 'in', [...scope.finishIds])
-    .where('purpose', 'in', ['texture', 'texture-large'])
-    .limit(1)
-    .executeTakeFirst();
-  return Boolean(row);
+  return isTextureOfFinishes(db, scope.studioId, scope.finishIds, fileKey);
 }

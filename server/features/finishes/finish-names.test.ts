@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { nameFromFileName } from './finishes.routes';
+import { nameFromFileName } from './finishes.service';
 import { isCleanName } from '../../../shared/schemas/common';
 
 describe('nameFromFileName', () => {

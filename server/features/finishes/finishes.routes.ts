@@ -1,118 +1,9 @@
-import { idParamSchema, withoutUncleanCharacters } from '../../../shared/schemas/common';
-import {
-  centredSquareCrop,
-  createPaintSchema,
-  finishListQuerySchema,
-  finishPatchSchema,
-  photoUploadFieldsSchema,
-  type EdgeBlend,
-} from '../../../shared/schemas/finish';
+// The studio's finishes: paints and photo finishes. Rules and transactions are in finishes.service.ts.
+import { idParamSchema } from '../../../shared/schemas/common';
+import { createPaintSchema, finishListQuerySchema, finishPatchSchema } from '../../../shared/schemas/finish';
 import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
-import { HttpError, notFound, orNotFound } from '../../http/errors';
-import type { Db } from '../../db/database';
-import { uploadKey } from '../files/file-keys';
-import {
-  deleteFinishRow,
-  filesOf,
-  getFinishRow,
-  insertFinishRows,
-  listFinishRows,
-  updateFinishRow,
-  type FinishChanges,
-  type FinishRow,
-  type NewFinish,
-} from './finishes.repository';
-import { removeUnreferenced, resumeStalled, toFinish, toFinishes } from './finishes.service';
-import { readPhotoUpload, type UploadedPhoto } from './finishes.uploads';
-
-/** The size a new photo finish starts with until the designer types its real one (1 m each way). */
-const DEFAULT_REPEAT_MM = 1000;
-const DEFAULT_EDGE_BLEND: EdgeBlend = 'narrow';
-
-async function rowOrThrow(db: Db, studioId: string, id: string): Promise<FinishRow> {
-  return orNotFound(await getFinishRow(db, studioId, id), 'That finish');
-}
-
-async function finishResponse(db: Db, row: FinishRow) {
-  return { finish: toFinish(row, await filesOf(db, [row.id])) };
-}
-
-/** A readable finish name from a file name: "oak_boards-02.jpg" → "Oak boards 02". */
-export function nameFromFileName(fileName: string): string {
-  const stem = withoutUncleanCharacters(fileName)
-    .replace(/\.[^.]*$/, '')
-    .replace(/[_-]+/g, ' ')
-    .replace(/\s+/g, ' ')
-    .trim()
-    .slice(0, 120);
-  return stem ? stem[0].toUpperCase() + stem.slice(1) : 'Photo finish';
-}
-
-const PHOTO_ONLY = ['category', 'repeatWidthMm', 'repeatHeightMm', 'crop', 'edgeBlend'] as const;
-const PAINT_ONLY = ['colourHex', 'sheen'] as const;
-
-/** Column changes for a patch, refusing fields that belong to the other kind of finish. */
-function changesFor(
-  row: FinishRow,
-  patch: ReturnType<typeof finishPatchSchema.parse>,
-): { changes: FinishChanges; reprocess: boolean } {
-  const wrong = (row.kind === 'paint' ? PHOTO_ONLY : PAINT_ONLY).filter((k) => patch[k] !== undefined);
-  if (wrong.length > 0) {
-    const message = row.kind === 'paint' ? 'A paint has no photo, size or crop.' : 'A photo finish has no paint colour or sheen.';
-    throw new HttpError(400, 'invalid', message, Object.fromEntries(wrong.map((k) => [k, message])));
-  }
-  const changes: FinishChanges = {
-    name: patch.name,
-    supplier: patch.supplier,
-    code: patch.code,
-    price: patch.price,
-    price_unit: patch.priceUnit,
-    category: patch.category,
-    repeat_width_mm: patch.repeatWidthMm,
-    repeat_height_mm: patch.repeatHeightMm,
-    crop: patch.crop === undefined ? undefined : JSON.stringify(patch.crop),
-    edge_blend: patch.edgeBlend,
-    colour_hex: patch.colourHex,
-    sheen: patch.sheen,
-  };
-  const sameCrop = patch.crop === undefined || JSON.stringify(patch.crop) === JSON.stringify(row.crop);
-  const sameBlend = patch.edgeBlend === undefined || patch.edgeBlend === row.edge_blend;
-  const reprocess = row.kind === 'photo' && !(sameCrop && sameBlend);
-  if (reprocess) {
-    if (!row.source_key)
-      throw new HttpError(409, 'no_original', 'This photo could not be processed, so there is nothing to crop. Upload it again.');
-    Object.assign(changes, {
-      status: 'processing',
-      failure_reason: null,
-      revision: row.revision + 1,
-      queued_at: new Date(),
-    } satisfies FinishChanges);
-  }
-  return { changes, reprocess };
-}
-
-function photoRows(
-  studioId: string,
-  photos: UploadedPhoto[],
-  keys: string[],
-  fields: ReturnType<typeof photoUploadFieldsSchema.parse>,
-): NewFinish[] {
-  return photos.map((p, i) => ({
-    studio_id: studioId,
-    kind: 'photo',
-    name: nameFromFileName(p.fileName),
-    category: fields.category ?? 'other',
-    repeat_width_mm: fields.repeatWidthMm ?? DEFAULT_REPEAT_MM,
-    repeat_height_mm: fields.repeatHeightMm ?? DEFAULT_REPEAT_MM,
-    crop: JSON.stringify(centredSquareCrop(p.header.widthPx, p.header.heightPx)),
-    edge_blend: fields.edgeBlend ?? DEFAULT_EDGE_BLEND,
-    status: 'processing',
-    source_key: keys[i],
-    photo_width_px: p.header.widthPx,
-    photo_height_px: p.header.heightPx,
-    queued_at: new Date(),
-  }));
-}
+import { createPaint, createPhotoFinishes, deleteFinish, getFinish, listFinishes, updateFinish } from './finishes.service';
+import { readPhotoUpload } from './finishes.uploads';
 
 export const finishRoutes: RouteDef[] = [
   route({
@@ -120,23 +11,14 @@ export const finishRoutes: RouteDef[] = [
     path: '/api/finishes',
     access: ALL_ROLES,
     query: finishListQuerySchema,
-    async handler(ctx) {
-      const { caller } = ctx;
-      const query = ctx.query;
-      await resumeStalled(ctx.services, caller.studioId);
-      return { finishes: await toFinishes(ctx.services.db, await listFinishRows(ctx.services.db, caller.studioId, query)) };
-    },
+    handler: async (ctx) => ({ finishes: await listFinishes(ctx.services, ctx.caller.studioId, ctx.query) }),
   }),
   route({
     method: 'get',
     path: '/api/finishes/:id',
     access: ALL_ROLES,
     params: idParamSchema,
-    async handler(ctx) {
-      const { caller } = ctx;
-      const { id } = ctx.params;
-      return finishResponse(ctx.services.db, await rowOrThrow(ctx.services.db, caller.studioId, id));
-    },
+    handler: async (ctx) => ({ finish: await getFinish(ctx.services.db, ctx.caller.studioId, ctx.params.id) }),
   }),
   route({
     method: 'post',
@@ -144,23 +26,9 @@ export const finishRoutes: RouteDef[] = [
     access: WRITERS,
     body: createPaintSchema,
     async handler(ctx) {
-      const { caller } = ctx;
-      const body = ctx.body;
-      const [row] = await insertFinishRows(ctx.services.db, [
-        {
-          studio_id: caller.studioId,
-          kind: 'paint',
-          name: body.name,
-          colour_hex: body.colourHex,
-          sheen: body.sheen,
-          supplier: body.supplier ?? null,
-          code: body.code ?? null,
-          price: body.price ?? null,
-          price_unit: body.priceUnit ?? null,
-        },
-      ]);
+      const finish = await createPaint(ctx.services.db, ctx.caller.studioId, ctx.body);
       ctx.res.status(201);
-      return { finish: toFinish(row, []) };
+      return { finish };
     },
   }),
   route({
@@ -168,25 +36,10 @@ export const finishRoutes: RouteDef[] = [
     path: '/api/finishes/photos',
     access: WRITERS,
     async handler(ctx) {
-      const { caller } = ctx;
       const { photos, fields } = await readPhotoUpload(ctx.req, ctx.res);
-      const parsed = photoUploadFieldsSchema.parse(fields);
-      const { storage, photos: queue } = ctx.services;
-      const keys = photos.map((p) => uploadKey(p.header.type === 'jpeg' ? 'jpg' : p.header.type));
-      let rows: FinishRow[];
-      try {
-        await Promise.all(photos.map((p, i) => storage.put(keys[i], p.buffer)));
-        rows = await ctx.services.db
-          .transaction()
-          .execute((trx) => insertFinishRows(trx, photoRows(caller.studioId, photos, keys, parsed)));
-      } catch (err) {
-        // All or nothing: a failure part-way leaves no upload behind.
-        await Promise.all(keys.map((k) => storage.delete(k).catch(() => undefined)));
-        throw err;
-      }
-      for (const row of rows) queue.add(row.id);
+      const finishes = await createPhotoFinishes(ctx.services, ctx.caller.studioId, photos, fields);
       ctx.res.status(201);
-      return { finishes: rows.map((r) => toFinish(r, [])) };
+      return { finishes };
     },
   }),
   route({
@@ -195,34 +48,13 @@ export const finishRoutes: RouteDef[] = [
     access: WRITERS,
     params: idParamSchema,
     body: finishPatchSchema,
-    async handler(ctx) {
-      const { caller } = ctx;
-      const { id } = ctx.params;
-      const patch = ctx.body;
-      const row = await rowOrThrow(ctx.services.db, caller.studioId, id);
-      const { changes, reprocess } = changesFor(row, patch);
-      const saved = await updateFinishRow(ctx.services.db, caller.studioId, id, changes);
-      if (!saved) throw notFound('That finish');
-      if (reprocess) ctx.services.photos.add(id);
-      return finishResponse(ctx.services.db, saved);
-    },
+    handler: async (ctx) => ({ finish: await updateFinish(ctx.services, ctx.caller.studioId, ctx.params.id, ctx.body) }),
   }),
   route({
     method: 'delete',
     path: '/api/finishes/:id',
     access: WRITERS,
     params: idParamSchema,
-    async handler(ctx) {
-      const { caller } = ctx;
-      const { id } = ctx.params;
-      const keys = await ctx.services.db.transaction().execute(async (trx) => {
-        const files = await filesOf(trx, [id]);
-        const row = await deleteFinishRow(trx, caller.studioId, id);
-        if (!row) throw notFound('That finish');
-        return [...files.map((f) => f.key), row.source_key];
-      });
-      await removeUnreferenced(ctx.services.db, ctx.services.storage, keys);
-      return undefined;
-    },
+    handler: (ctx) => deleteFinish(ctx.services, ctx.caller.studioId, ctx.params.id),
   }),
 ];

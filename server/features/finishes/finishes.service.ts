@@ -1,23 +1,45 @@
 // Finishes: turning rows into API shapes, the photo processing job, and keeping stored files
-// exactly as many as the finishes use (nothing orphaned, nothing shared deleted).
+// exactly as many as the finishes use (nothing orphaned, nothing shared deleted), and the rules and
+// transactions of making, changing and deleting finishes.
+import type { z } from 'zod';
 import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
 import type { FileStorage } from '../../services/storage/storage';
 import { processPhoto, type ProcessedImage } from '../../services/images/process-photo';
 import { megapixels } from '../../services/images/inspect';
-import { cropSchema, UPLOAD_LIMITS, type Finish, type PhotoFiles } from '../../../shared/schemas/finish';
-import { derivedKey, fileUrl, masterKey } from '../files/file-keys';
+import { withoutUncleanCharacters } from '../../../shared/schemas/common';
 import {
+  UPLOAD_LIMITS,
+  centredSquareCrop,
+  cropSchema,
+  photoUploadFieldsSchema,
+  type createPaintSchema,
+  type EdgeBlend,
+  type Finish,
+  type FinishListQuery,
+  type finishPatchSchema,
+  type PhotoFiles,
+} from '../../../shared/schemas/finish';
+import { HttpError, notFound, orNotFound } from '../../http/errors';
+import { derivedKey, fileUrl, masterKey, uploadKey } from '../files/file-keys';
+import {
+  deleteFinishRow,
   filesOf,
   finishJobIfCurrent,
+  getFinishRow,
   getFinishRowById,
+  insertFinishRows,
   keysInUse,
+  listFinishRows,
   replaceFiles,
   stalledIds,
   updateFinishRow,
+  type FinishChanges,
   type FinishFileRow,
   type FinishRow,
+  type NewFinish,
 } from './finishes.repository';
+import type { UploadedPhoto } from './finishes.uploads';
 
 /** Photos processed at once: each needs a few hundred MB at the pixel limit, so keep it small. */
 export const PHOTO_CONCURRENCY = 1;
@@ -197,4 +219,174 @@ export async function runPhotoJob(db: Db, storage: FileStorage, finishId: string
     return;
   }
   await removeUnreferenced(db, storage, [...previous, fromUpload ? sourceKey : null]);
+}
+
+/** The size a new photo finish starts with until the designer types its real one (1 m each way). */
+const DEFAULT_REPEAT_MM = 1000;
+const DEFAULT_EDGE_BLEND: EdgeBlend = 'narrow';
+
+async function rowOrThrow(db: Db, studioId: string, id: string): Promise<FinishRow> {
+  return orNotFound(await getFinishRow(db, studioId, id), 'That finish');
+}
+
+const withFiles = async (db: Db, row: FinishRow): Promise<Finish> => toFinish(row, await filesOf(db, [row.id]));
+
+/** A readable finish name from a file name: "oak_boards-02.jpg" → "Oak boards 02". */
+export function nameFromFileName(fileName: string): string {
+  const stem = withoutUncleanCharacters(fileName)
+    .replace(/\.[^.]*$/, '')
+    .replace(/[_-]+/g, ' ')
+    .replace(/\s+/g, ' ')
+    .trim()
+    .slice(0, 120);
+  return stem ? stem[0].toUpperCase() + stem.slice(1) : 'Photo finish';
+}
+
+const PHOTO_ONLY = ['category', 'repeatWidthMm', 'repeatHeightMm', 'crop', 'edgeBlend'] as const;
+const PAINT_ONLY = ['colourHex', 'sheen'] as const;
+
+/** Column changes for a patch, refusing fields that belong to the other kind of finish. */
+function changesFor(row: FinishRow, patch: z.output<typeof finishPatchSchema>): { changes: FinishChanges; reprocess: boolean } {
+  const wrong = (row.kind === 'paint' ? PHOTO_ONLY : PAINT_ONLY).filter((k) => patch[k] !== undefined);
+  if (wrong.length > 0) {
+    const message = row.kind === 'paint' ? 'A paint has no photo, size or crop.' : 'A photo finish has no paint colour or sheen.';
+    throw new HttpError(400, 'invalid', message, Object.fromEntries(wrong.map((k) => [k, message])));
+  }
+  const changes: FinishChanges = {
+    name: patch.name,
+    supplier: patch.supplier,
+    code: patch.code,
+    price: patch.price,
+    price_unit: patch.priceUnit,
+    category: patch.category,
+    repeat_width_mm: patch.repeatWidthMm,
+    repeat_height_mm: patch.repeatHeightMm,
+    crop: patch.crop === undefined ? undefined : JSON.stringify(patch.crop),
+    edge_blend: patch.edgeBlend,
+    colour_hex: patch.colourHex,
+    sheen: patch.sheen,
+  };
+  const sameCrop = patch.crop === undefined || JSON.stringify(patch.crop) === JSON.stringify(row.crop);
+  const sameBlend = patch.edgeBlend === undefined || patch.edgeBlend === row.edge_blend;
+  const reprocess = row.kind === 'photo' && !(sameCrop && sameBlend);
+  if (reprocess) {
+    if (!row.source_key)
+      throw new HttpError(409, 'no_original', 'This photo could not be processed, so there is nothing to crop. Upload it again.');
+    Object.assign(changes, {
+      status: 'processing',
+      failure_reason: null,
+      revision: row.revision + 1,
+      queued_at: new Date(),
+    } satisfies FinishChanges);
+  }
+  return { changes, reprocess };
+}
+
+function photoRows(
+  studioId: string,
+  photos: UploadedPhoto[],
+  keys: string[],
+  fields: z.output<typeof photoUploadFieldsSchema>,
+): NewFinish[] {
+  return photos.map((p, i) => ({
+    studio_id: studioId,
+    kind: 'photo',
+    name: nameFromFileName(p.fileName),
+    category: fields.category ?? 'other',
+    repeat_width_mm: fields.repeatWidthMm ?? DEFAULT_REPEAT_MM,
+    repeat_height_mm: fields.repeatHeightMm ?? DEFAULT_REPEAT_MM,
+    crop: JSON.stringify(centredSquareCrop(p.header.widthPx, p.header.heightPx)),
+    edge_blend: fields.edgeBlend ?? DEFAULT_EDGE_BLEND,
+    status: 'processing',
+    source_key: keys[i],
+    photo_width_px: p.header.widthPx,
+    photo_height_px: p.header.heightPx,
+    queued_at: new Date(),
+  }));
+}
+
+// What the routes do with finishes, each with its rules and transaction.
+
+/** The studio's finishes matching the query; what a stopped server left half-done is queued again. */
+export async function listFinishes(
+  services: Pick<AppServices, 'db' | 'photos'>,
+  studioId: string,
+  query: FinishListQuery,
+): Promise<Finish[]> {
+  await resumeStalled(services, studioId);
+  return toFinishes(services.db, await listFinishRows(services.db, studioId, query));
+}
+
+export async function getFinish(db: Db, studioId: string, id: string): Promise<Finish> {
+  return withFiles(db, await rowOrThrow(db, studioId, id));
+}
+
+export async function createPaint(db: Db, studioId: string, body: z.output<typeof createPaintSchema>): Promise<Finish> {
+  const [row] = await insertFinishRows(db, [
+    {
+      studio_id: studioId,
+      kind: 'paint',
+      name: body.name,
+      colour_hex: body.colourHex,
+      sheen: body.sheen,
+      supplier: body.supplier ?? null,
+      code: body.code ?? null,
+      price: body.price ?? null,
+      price_unit: body.priceUnit ?? null,
+    },
+  ]);
+  return toFinish(row, []);
+}
+
+/**
+ * Stores the uploaded photos and makes one finish of each, all or nothing, then queues them for
+ * processing. `fields` are the upload's form fields, parsed here.
+ */
+export async function createPhotoFinishes(
+  services: Pick<AppServices, 'db' | 'storage' | 'photos'>,
+  studioId: string,
+  photos: UploadedPhoto[],
+  fields: unknown,
+): Promise<Finish[]> {
+  const parsed = photoUploadFieldsSchema.parse(fields);
+  const { db, storage, photos: queue } = services;
+  const keys = photos.map((p) => uploadKey(p.header.type === 'jpeg' ? 'jpg' : p.header.type));
+  let rows: FinishRow[];
+  try {
+    await Promise.all(photos.map((p, i) => storage.put(keys[i], p.buffer)));
+    rows = await db.transaction().execute((trx) => insertFinishRows(trx, photoRows(studioId, photos, keys, parsed)));
+  } catch (err) {
+    // All or nothing: a failure part-way leaves no upload behind.
+    await Promise.all(keys.map((k) => storage.delete(k).catch(() => undefined)));
+    throw err;
+  }
+  for (const row of rows) queue.add(row.id);
+  return rows.map((r) => toFinish(r, []));
+}
+
+/** Changes a finish; a photo's new crop or edge blend is processed again. */
+export async function updateFinish(
+  services: Pick<AppServices, 'db' | 'photos'>,
+  studioId: string,
+  id: string,
+  patch: z.output<typeof finishPatchSchema>,
+): Promise<Finish> {
+  const { db } = services;
+  const row = await rowOrThrow(db, studioId, id);
+  const { changes, reprocess } = changesFor(row, patch);
+  const saved = await updateFinishRow(db, studioId, id, changes);
+  if (!saved) throw notFound('That finish');
+  if (reprocess) services.photos.add(id);
+  return withFiles(db, saved);
+}
+
+/** Deletes a finish, then the stored files no other finish uses. */
+export async function deleteFinish(services: Pick<AppServices, 'db' | 'storage'>, studioId: string, id: string): Promise<void> {
+  const keys = await services.db.transaction().execute(async (trx) => {
+    const files = await filesOf(trx, [id]);
+    const row = await deleteFinishRow(trx, studioId, id);
+    if (!row) throw notFound('That finish');
+    return [...files.map((f) => f.key), row.source_key];
+  });
+  await removeUnreferenced(services.db, services.storage, keys);
 }

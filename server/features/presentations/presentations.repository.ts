@@ -1,5 +1,4 @@
-// All SQL of presentations: the link's row, what it shows, what the client looked at and chose,
-// and the request log the rate limits count.
+// All SQL of presentations: the link's row, what it shows, and what the client looked at and chose.
 import { sql, type Selectable } from 'kysely';
 import type { Db, PresentationsTable } from '../../db/database';
 
@@ -193,29 +192,6 @@ export async function recordViewed(db: Db, presentationId: string, optionId: str
   return Number(r.numUpdatedRows) > 0;
 }
 
-/**
- * Logs one client request of `kind` and says how many there were in the window, this one included.
- * Call it inside a transaction holding the presentation's row, so instances cannot count past each other.
- */
-export async function logRequest(db: Db, presentationId: string, kind: 'choice' | 'view', since: Date): Promise<number> {
-  // Older entries no longer count towards anything.
-  await db
-    .deleteFrom('presentation_requests')
-    .where('presentation_id', '=', presentationId)
-    .where('kind', '=', kind)
-    .where('at', '<', since)
-    .execute();
-  await db.insertInto('presentation_requests').values({ presentation_id: presentationId, kind }).execute();
-  const r = await db
-    .selectFrom('presentation_requests')
-    .select((eb) => eb.fn.countAll<string>().as('n'))
-    .where('presentation_id', '=', presentationId)
-    .where('kind', '=', kind)
-    .where('at', '>=', since)
-    .executeTakeFirstOrThrow();
-  return Number(r.n);
-}
-
 export async function updatePresentation(
   db: Db,
   id: string,
@@ -239,11 +215,6 @@ export async function finishLabels(db: Db, studioId: string, ids: string[]) {
 export async function finishRows(db: Db, studioId: string, ids: string[]) {
   if (ids.length === 0) return [];
   return db.selectFrom('finishes').selectAll().where('studio_id', '=', studioId).where('id', 'in', ids).execute();
-}
-
-export async function studioName(db: Db, studioId: string): Promise<string> {
-  const r = await db.selectFrom('studios').select('name').where('id', '=', studioId).executeTakeFirstOrThrow();
-  return r.name;
 }
 
 /** The project's name and state, and its client's name and e-mail. */

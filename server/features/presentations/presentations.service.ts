@@ -1,41 +1,62 @@
-// What a presentation shows and to whom: the designer's summary, the client's payload (only the
-// chosen rooms and options, prices only when shown), the link, and the e-mails.
+// What a presentation shows and to whom (the designer's summary, the client's payload with only the
+// chosen rooms and options, prices only when shown, the link and the e-mails), and the designer's
+// actions on it, each with its rules and its transaction.
+import type { Response } from 'express';
+import type { z } from 'zod';
 import type { AppConfig } from '../../config';
+import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
-import { HttpError } from '../../http/errors';
+import type { Logger } from '../../services/logging/logger';
+import { WRITERS, type Caller } from '../../http/routes';
+import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { optionDocSchema, withoutNonWebLinks, type OptionDoc, type Piece } from '../../../shared/schemas/option';
 import { toSceneFinish, type SceneFinish } from '../../../shared/finishes/scene-finish';
 import type { Finish } from '../../../shared/schemas/finish';
 import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionLabel } from '../../../shared/schemas/room-api';
-import type {
-  Choice,
-  ClientPiece,
-  ClientPresentation,
-  ClientRoom,
-  ClientSurfaces,
-  PresentationState,
-  PresentationSummary,
+import {
+  LINK_LIFETIME_DAYS,
+  type createPresentationSchema,
+  type sendPresentationSchema,
+  type Choice,
+  type ClientPiece,
+  type ClientPresentation,
+  type ClientRoom,
+  type ClientSurfaces,
+  type PresentationState,
+  type PresentationSummary,
 } from '../../../shared/schemas/presentation';
 import { toFinishes } from '../finishes/finishes.service';
-import { signPresentationToken, verifyPresentationToken } from '../../services/tokens/presentation-token';
+import {
+  newTokenId,
+  signPresentationToken,
+  toTokenTime,
+  verifyPresentationToken,
+} from '../../services/tokens/presentation-token';
+import { limitPresentationMail } from '../../services/rate-limit/mail-limits';
+import { sendStudioMail } from '../outbox/outbox.service';
+import { listMembers } from '../studio/members.repository';
+import { lockProjectState } from '../projects/projects.repository';
+import { DECIDED_REOPEN_FIRST, decidedRefusal } from '../projects/project-states';
 import { escapeHtml } from '../../services/mail/escape-html';
 import {
   finishLabels,
   finishRows,
   findByTokenId,
+  getPresentation,
+  insertPresentation,
+  insertShownRooms,
+  latestDecision,
   listChoices,
+  listPresentations,
   listShownOptions,
   projectForPresentation,
-  studioName,
+  roomsWithOptions,
+  setProjectState,
+  updatePresentation,
   type PresentationRow,
 } from './presentations.repository';
-
-/** Choice posts per link per window: plenty for a family changing its mind, too few to flood the designer's inbox. */
-export const CHOICE_LIMIT = 20;
-/** "Looked at" posts per link per window: one per option shown, with room for a long evening. */
-export const VIEW_LIMIT = 300;
-export const RATE_WINDOW_MS = 10 * 60_000;
+import { studioName } from '../studio/studios.repository';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -341,4 +362,227 @@ export function choiceMail(v: {
       (v.comment ? `<blockquote>${escapeHtml(v.comment)}</blockquote>` : '') +
       `<p><a href="${escapeHtml(v.projectLink)}">See the choices on the project</a></p>`,
   };
+}
+
+// The designer's side: make a presentation, send it, withdraw or extend it, and confirm the
+// client's choices ("Mark as decided"). Each takes the caller's studio and the parsed input.
+
+const DAY_MS = 86_400_000;
+
+type DesignerServices = Pick<AppServices, 'db' | 'config' | 'links'>;
+
+async function projectOrThrow(db: Db, studioId: string, projectId: string) {
+  return orNotFound(await projectForPresentation(db, studioId, projectId), 'That project');
+}
+
+async function presentationOrThrow(db: Db, studioId: string, id: string) {
+  return orNotFound(await getPresentation(db, studioId, id), 'That presentation');
+}
+
+/** The summaries as this caller sees them, with the names of the members who made them. */
+async function callerSummaries(
+  services: Pick<AppServices, 'db' | 'config'>,
+  caller: Caller,
+  rows: PresentationRow[],
+): Promise<PresentationSummary[]> {
+  const members = await listMembers(services.db, caller.studioId);
+  return presentationSummaries(services.db, services.config, rows, {
+    // The link opens the client's page and lets its holder choose, so viewers do not get it.
+    withLinks: WRITERS.includes(caller.role),
+    memberNames: new Map(members.map((m) => [m.id, m.name])),
+  });
+}
+
+const callerSummary = async (services: Pick<AppServices, 'db' | 'config'>, caller: Caller, row: PresentationRow) =>
+  (await callerSummaries(services, caller, [row]))[0];
+
+/** Every room must be the project's, every option that room's; names the first field that is not. */
+async function assertShownRoomsBelong(
+  db: Db,
+  studioId: string,
+  projectId: string,
+  rooms: { roomId: string; optionIds: string[] }[],
+) {
+  const rows = await roomsWithOptions(
+    db,
+    studioId,
+    projectId,
+    rooms.map((r) => r.roomId),
+  );
+  const fields: Record<string, string> = {};
+  rooms.forEach((room, i) => {
+    const mine = rows.filter((r) => r.room_id === room.roomId);
+    if (mine.length === 0) fields[`rooms[${i}].roomId`] = 'Not a room of this project.';
+    else if (!room.optionIds.every((id) => mine.some((r) => r.option_id === id)))
+      fields[`rooms[${i}].optionIds`] = 'Pick options of this room only.';
+  });
+  const first = Object.values(fields)[0];
+  if (first) throw new HttpError(400, 'invalid', first, fields);
+}
+
+const refuseUnlessActive = (p: PresentationRow, doing: string) => {
+  const state = presentationState(p);
+  if (state === 'withdrawn')
+    throw new HttpError(409, 'withdrawn', `This link was withdrawn, so it cannot be ${doing}. Make a new presentation instead.`);
+  if (state === 'expired') throw new HttpError(409, 'expired', `This link has expired. Extend it before it is ${doing}.`);
+};
+
+/** The project's presentations, newest first, with the visits counted so far. */
+export async function listProjectPresentations(
+  services: DesignerServices,
+  caller: Caller,
+  projectId: string,
+): Promise<PresentationSummary[]> {
+  await projectOrThrow(services.db, caller.studioId, projectId);
+  await services.links.flushOpens();
+  return callerSummaries(services, caller, await listPresentations(services.db, caller.studioId, projectId));
+}
+
+/** Makes a presentation of the project; a draft project is now with the client. */
+export async function createPresentation(
+  services: Pick<AppServices, 'db' | 'config'>,
+  caller: Caller,
+  projectId: string,
+  body: z.output<typeof createPresentationSchema>,
+): Promise<PresentationSummary> {
+  const row = await services.db.transaction().execute(async (trx) => {
+    const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
+    if (project.state === 'archived')
+      throw new HttpError(409, 'archived', 'This project is archived. Restore it before presenting it.');
+    if (project.state === 'decided') throw decidedRefusal(DECIDED_REOPEN_FIRST);
+    await assertShownRoomsBelong(trx, caller.studioId, projectId, body.rooms);
+    const issuedAt = toTokenTime(new Date());
+    const created = await insertPresentation(trx, {
+      studioId: caller.studioId,
+      projectId,
+      createdBy: caller.memberId,
+      tokenId: newTokenId(),
+      message: body.message,
+      showPrices: body.showPrices,
+      issuedAt,
+      tokenExpiresAt: new Date(issuedAt.getTime() + LINK_LIFETIME_DAYS * DAY_MS),
+      expiresAt: new Date(issuedAt.getTime() + body.expiresInDays * DAY_MS),
+    });
+    await insertShownRooms(trx, created.id, body.rooms);
+    // A link made is a link shared (sent or copied): the project is now with the client.
+    if (project.state === 'draft') await setProjectState(trx, projectId, 'presented');
+    return created;
+  });
+  return callerSummary(services, caller, row);
+}
+
+/**
+ * E-mails the link to the client (or `body.to`), within the studio's and the recipient's mail
+ * limits; a refusal over a limit sets Retry-After on `res`.
+ */
+export async function sendPresentation(
+  services: Pick<AppServices, 'db' | 'config' | 'mailer'>,
+  log: Logger,
+  res: Response,
+  caller: Caller,
+  id: string,
+  body: z.output<typeof sendPresentationSchema>,
+): Promise<PresentationSummary> {
+  const { db, config } = services;
+  const p = await presentationOrThrow(db, caller.studioId, id);
+  refuseUnlessActive(p, 'sent');
+  const project = await projectOrThrow(db, caller.studioId, p.project_id);
+  const to = body.to ?? project.client_email;
+  if (!to)
+    throw new HttpError(400, 'invalid', 'The client has no e-mail address. Type one here, or copy the link instead.', {
+      to: 'Enter the client’s e-mail.',
+    });
+  await limitPresentationMail(db, res, caller.studioId, to);
+  const mail = invitationMail({
+    to,
+    studio: await studioName(db, caller.studioId),
+    project: project.name,
+    clientName: project.client_name,
+    message: p.message,
+    link: await presentationLink(config, p),
+    expiresAt: p.expires_at,
+  });
+  // Sent last inside the transaction: a refused mail leaves nothing marked sent.
+  const sent = await db.transaction().execute(async (trx) => {
+    const saved = await updatePresentation(trx, p.id, { sent_at: new Date(), sent_to: to });
+    if (project.state === 'draft') await setProjectState(trx, project.id, 'presented');
+    await sendStudioMail(
+      trx,
+      { ...services, log },
+      { studioId: caller.studioId, kind: 'presentation', ...mail },
+      'The e-mail could not be sent. Try again in a moment, or copy the link instead.',
+    );
+    return saved;
+  });
+  return callerSummary(services, caller, sent);
+}
+
+/** Stops the link at once. Withdrawing twice keeps the first time: that is when the link stopped working. */
+export async function withdrawPresentation(services: DesignerServices, caller: Caller, id: string): Promise<PresentationSummary> {
+  const p = await presentationOrThrow(services.db, caller.studioId, id);
+  const saved = p.withdrawn_at ? p : await updatePresentation(services.db, p.id, { withdrawn_at: new Date() });
+  services.links.forgetPresentation(p.id);
+  return callerSummary(services, caller, saved);
+}
+
+/** Gives the link `days` more, never past the latest its token allows. */
+export async function extendPresentation(
+  services: DesignerServices,
+  caller: Caller,
+  id: string,
+  days: number,
+): Promise<PresentationSummary> {
+  const p = await presentationOrThrow(services.db, caller.studioId, id);
+  if (p.withdrawn_at)
+    throw new HttpError(409, 'withdrawn', 'This link was withdrawn, so it cannot be extended. Make a new presentation instead.');
+  const latest = p.token_expires_at.getTime();
+  if (p.expires_at.getTime() >= latest) {
+    throw new HttpError(
+      409,
+      'at_latest',
+      `A link works for at most ${LINK_LIFETIME_DAYS} days. Make a new presentation to keep going.`,
+    );
+  }
+  // From today when it has already run out, so extending an expired link opens it again.
+  const from = Math.max(Date.now(), p.expires_at.getTime());
+  const saved = await updatePresentation(services.db, p.id, {
+    expires_at: new Date(Math.min(from + days * DAY_MS, latest)),
+  });
+  services.links.forgetPresentation(p.id);
+  return callerSummary(services, caller, saved);
+}
+
+/**
+ * "Mark as decided": the presentation's choices, one in every room, become the project's. Asking
+ * twice for the same decision changes nothing; another needs Reopen first.
+ */
+export async function decideProject(
+  services: DesignerServices,
+  caller: Caller,
+  projectId: string,
+  presentationId: string,
+): Promise<PresentationSummary> {
+  const saved = await services.db.transaction().execute(async (trx) => {
+    // The presentation's row before the project's, in the order a client's choice takes them.
+    const p = await getPresentation(trx, caller.studioId, presentationId, { forUpdate: true });
+    const project = orNotFound(await lockProjectState(trx, caller.studioId, projectId), 'That project');
+    if (!p || p.project_id !== projectId) throw notFound('That presentation');
+    if (project.state === 'archived') throw new HttpError(409, 'archived', 'This project is archived. Restore it first.');
+    if (project.state === 'decided') {
+      if (p.decided_at && p.decided_at.getTime() === (await latestDecision(trx, projectId))?.getTime()) return p;
+      throw decidedRefusal('This project is already decided. Reopen the project first to decide it again.');
+    }
+    if (p.withdrawn_at)
+      throw new HttpError(409, 'withdrawn', 'This presentation was withdrawn; its choices cannot decide the project.');
+    const [summary] = await presentationSummaries(trx, services.config, [p], {
+      withLinks: false,
+      memberNames: new Map(),
+    });
+    if (!summary.complete)
+      throw new HttpError(409, 'incomplete', 'Every room in this presentation needs a choice before the project is decided.');
+    await setProjectState(trx, projectId, 'decided');
+    return updatePresentation(trx, p.id, { decided_at: new Date() });
+  });
+  services.links.forgetPresentation(saved.id);
+  return callerSummary(services, caller, saved);
 }
