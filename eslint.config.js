@@ -43,6 +43,34 @@ export default tseslint.config(
   },
   {
     files: ['server/**/*.ts'],
-    rules: noImportFrom(['**/src/**'], 'The server never imports the client (src/).'),
+    rules: {
+      ...noImportFrom(['**/src/**'], 'The server never imports the client (src/).'),
+      // Logs go through the request's logger (ctx.log) or the app's (services.logger), so every
+      // line is structured and carries its request id. The command-line tools print.
+      'no-console': 'error',
+    },
+  },
+  {
+    files: ['server/cli/**/*.ts', 'server/index.ts', 'server/**/*.test.ts'],
+    rules: { 'no-console': 'off' },
+  },
+  {
+    // SQL lives in repositories: routes and services call them (a service may hand a transaction down).
+    files: ['server/features/**/*.ts'],
+    ignores: ['server/features/**/*.repository.ts', 'server/features/**/*.test.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector:
+            'CallExpression > MemberExpression.callee[property.name=/^(selectFrom|insertInto|updateTable|deleteFrom|replaceInto|mergeInto)$/]',
+          message: "Queries belong in the feature's *.repository.ts.",
+        },
+        {
+          selector: "ImportDeclaration[source.value='kysely'] ImportSpecifier[imported.name='sql']",
+          message: "Raw SQL belongs in the feature's *.repository.ts.",
+        },
+      ],
+    },
   },
 );

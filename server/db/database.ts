@@ -218,7 +218,10 @@ export function createDb(connectionString: string, max = 10, logger?: Pick<Logge
   const pool = new pg.Pool({ connectionString, max });
   // A dropped connection must not take the process down; the next query reconnects.
   pool.on('error', (err) =>
-    logger ? logger.warn({ err }, 'idle database connection lost') : console.error('[db] idle client error:', err.message),
+    logger
+      ? logger.warn({ err }, 'idle database connection lost')
+      : // eslint-disable-next-line no-console -- no logger was given (tests and command-line tools)
+        console.error('[db] idle client error:', err.message),
   );
   return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
 }

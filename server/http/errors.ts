@@ -66,6 +66,7 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   }
   // The request's own logger carries its id, so the line can be found from the answer's header.
   if (req.log) req.log.error({ err }, 'unhandled error');
+  // eslint-disable-next-line no-console -- only an app built without requestLogger gets here
   else console.error('[error]', err);
   res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side.' } });
 };
