@@ -27,6 +27,12 @@ export async function getFinishRow(db: Db, studioId: string, id: string): Promis
 }
 
 /** Unscoped: for the processing job, which runs for whichever studio queued it. */
+/** The studio's finish rows among `ids` (each an id already). */
+export async function getFinishRowsByIds(db: Db, studioId: string, ids: string[]): Promise<FinishRow[]> {
+  if (ids.length === 0) return [];
+  return db.selectFrom('finishes').selectAll().where('studio_id', '=', studioId).where('id', 'in', ids).execute();
+}
+
 export async function getFinishRowById(db: Db, id: string): Promise<FinishRow | undefined> {
   return db.selectFrom('finishes').selectAll().where('id', '=', id).executeTakeFirst();
 }

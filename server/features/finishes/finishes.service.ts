@@ -28,6 +28,7 @@ import {
   finishJobIfCurrent,
   getFinishRow,
   getFinishRowById,
+  getFinishRowsByIds,
   insertFinishRows,
   keysInUse,
   listFinishRows,
@@ -95,6 +96,14 @@ export async function toFinishes(db: Db, rows: FinishRow[]): Promise<Finish[]> {
     rows.filter((r) => r.kind === 'photo').map((r) => r.id),
   );
   return rows.map((r) => toFinish(r, files));
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** The studio's finishes among `ids`; ids that are not finish ids at all (typed by hand in a plan file) are skipped. */
+export async function finishesByIds(db: Db, studioId: string, ids: Iterable<string>): Promise<Finish[]> {
+  const wanted = [...new Set(ids)].filter((id) => UUID.test(id));
+  return toFinishes(db, await getFinishRowsByIds(db, studioId, wanted));
 }
 
 /** Deletes the stored files among `keys` that no finish uses any more. */

@@ -1,18 +1,6 @@
-// SQL the take-off, schedules and comparison need beyond the rooms' own: the finishes an option
-// names, and the client's latest choice per room.
+// SQL the take-off, schedules and comparison need beyond the rooms' and finishes' own: the
+// client's latest choice per room.
 import type { Db } from '../../db/database';
-import { toFinishes } from '../finishes/finishes.service';
-import type { Finish } from '../../../shared/schemas/finish';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
-/** The studio's finishes among `ids`; ids that are not finish ids at all (typed by hand in a plan file) are skipped. */
-export async function finishesByIds(db: Db, studioId: string, ids: Iterable<string>): Promise<Finish[]> {
-  const wanted = [...new Set(ids)].filter((id) => UUID.test(id));
-  if (wanted.length === 0) return [];
-  const rows = await db.selectFrom('finishes').selectAll().where('studio_id', '=', studioId).where('id', 'in', wanted).execute();
-  return toFinishes(db, rows);
-}
 
 /**
  * The option each room's client chose most recently, over the project's presentations that were

@@ -1,10 +1,11 @@
 // Gathers a project's rooms, options, finishes and choices, and hands them to the shared take-off,
 // schedule and comparison functions, so the page, the CSV and the analysis agree.
 import type { Db } from '../../db/database';
-import { notFound, orNotFound } from '../../http/errors';
-import { getProject } from '../projects/projects.repository';
+import { notFound } from '../../http/errors';
 import { getOption, getRoom, listOptions, listRooms, toRoom } from '../rooms/rooms.repository';
-import { finishesByIds, latestChoices } from './schedules.repository';
+import { latestChoices } from './schedules.repository';
+import { finishesByIds } from '../finishes/finishes.service';
+import { projectOrThrow as projectSummaryOrThrow } from '../projects/projects.service';
 import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
@@ -30,7 +31,7 @@ interface RoomWithOptions {
 }
 
 async function projectOrThrow(db: Db, studioId: string, projectId: string) {
-  const found = orNotFound(await getProject(db, studioId, projectId), 'That project');
+  const found = await projectSummaryOrThrow(db, studioId, projectId);
   return { id: found.id, name: found.name };
 }
 
