@@ -8,10 +8,16 @@ export class HttpError extends Error {
     message: string,
     readonly fields?: Record<string, string>,
     readonly extra?: Record<string, unknown>,
+    /** Headers the answer carries (Retry-After on a 429), set by the error middleware. */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
   }
 }
+
+/** 429 with Retry-After: the caller may try again in `retryAfterS` seconds. */
+export const tooManyRequests = (message: string, retryAfterS: number) =>
+  new HttpError(429, 'too_many', message, undefined, undefined, { 'Retry-After': String(retryAfterS) });
 
 export const notFound = (what = 'That item') => new HttpError(404, 'not_found', `${what} was not found.`);
 
@@ -36,6 +42,7 @@ export function zodFields(err: ZodError): Record<string, string> {
 // anything else is logged and answered as a bare 500.
 export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof HttpError) {
+    if (err.headers) res.set(err.headers);
     res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields }, ...err.extra });
     return;
   }

@@ -13,7 +13,7 @@ export const authRoutes: RouteDef[] = [
     access: 'public',
     body: signUpSchema,
     async handler({ req, res, services, body }) {
-      const member = await signUp(services.db, services.config, res, req.ip, body);
+      const member = await signUp(services.db, services.config, req.ip, body);
       await startSession(services.db, res, member.id, services.config.SECURE_COOKIES);
       res.status(201);
       return { member: toMember(member) };
@@ -25,7 +25,7 @@ export const authRoutes: RouteDef[] = [
     access: 'public',
     body: signInSchema,
     async handler({ res, services, body }) {
-      const member = await signIn(services.db, res, body, services.verifyPassword);
+      const member = await signIn(services.db, body, services.verifyPassword);
       await startSession(services.db, res, member.id, services.config.SECURE_COOKIES);
       return { ok: true };
     },

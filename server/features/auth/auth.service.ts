@@ -1,7 +1,6 @@
 import type { Db } from '../../db/database';
 import type { SignInBody } from '../../../shared/schemas/studio';
 import type { SignUpBody } from '../../../shared/schemas/account';
-import type { Response } from 'express';
 import type { AppConfig } from '../../config';
 import { clearRateLimit, enforceRateLimit, waitInWords, type RateRule } from '../../services/rate-limit/rate-limit';
 import { dummyPasswordHash, hashPassword, verifyPassword, type PasswordVerifier } from '../../services/auth/passwords';
@@ -30,18 +29,16 @@ export type { PasswordVerifier } from '../../services/auth/passwords';
 
 /**
  * Makes a studio and its first owner, within the hourly allowance of new studios per client
- * address (`ip`; a refusal sets Retry-After on `res`).
+ * address (`ip`; a refusal is a 429 with Retry-After).
  */
 export async function signUp(
   db: Db,
   config: Pick<AppConfig, 'SIGN_UP_LIMIT_PER_HOUR'>,
-  res: Response,
   ip: string | undefined,
   body: SignUpBody,
 ) {
   await enforceRateLimit(
     db,
-    res,
     signUpRate(config),
     clientAddressKey(ip),
     (s) => `Too many new studios were made from this address. Try again in ${waitInWords(s)}.`,
@@ -58,19 +55,8 @@ export async function signUp(
   });
 }
 
-export async function signIn(
-  db: Db,
-  res: Response,
-  body: SignInBody,
-  verify: PasswordVerifier = verifyPassword,
-): Promise<{ id: string }> {
-  await enforceRateLimit(
-    db,
-    res,
-    SIGN_IN_RATE,
-    body.email,
-    (s) => `Too many attempts to sign in. Try again in ${waitInWords(s)}.`,
-  );
+export async function signIn(db: Db, body: SignInBody, verify: PasswordVerifier = verifyPassword): Promise<{ id: string }> {
+  await enforceRateLimit(db, SIGN_IN_RATE, body.email, (s) => `Too many attempts to sign in. Try again in ${waitInWords(s)}.`);
   const member = await findMemberByEmail(db, body.email);
   const ok = await verify(body.password, member?.password_hash ?? (await dummyPasswordHash()));
   if (!member || !ok) {

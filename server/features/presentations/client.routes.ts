@@ -55,7 +55,7 @@ export const clientPresentationRoutes: RouteDef[] = [
     body: viewBodySchema,
     async handler(ctx) {
       privateAnswer(ctx.res);
-      await recordView(ctx.services, ctx.res, { token: tokenOf(ctx.req), caller: ctx.caller, optionId: ctx.body.optionId });
+      await recordView(ctx.services, { token: tokenOf(ctx.req), caller: ctx.caller, optionId: ctx.body.optionId });
       return undefined;
     },
   }),
@@ -68,7 +68,7 @@ export const clientPresentationRoutes: RouteDef[] = [
       privateAnswer(ctx.res);
       const room = roomParam.safeParse(ctx.req.params);
       const { optionId, comment } = ctx.body;
-      const result = await chooseOption(ctx.services, ctx.res, {
+      const result = await chooseOption(ctx.services, {
         token: tokenOf(ctx.req),
         roomId: room.success ? room.data.roomId : null,
         optionId,

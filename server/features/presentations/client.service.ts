@@ -1,14 +1,13 @@
 // The client's side of a presentation: what a link's holder may do with it (open it, say they
 // looked at an option, choose one per room), each authorised by the link's token alone, and the
 // designer's e-mail when they choose.
-import type { Response } from 'express';
 import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
 import type { Logger } from '../../services/logging/logger';
 import type { Caller } from '../../http/routes';
 import type { Choice, ClientPresentation } from '../../../shared/schemas/presentation';
 import { optionLabel } from '../../../shared/schemas/room-api';
-import { HttpError } from '../../http/errors';
+import { HttpError, tooManyRequests } from '../../http/errors';
 import { hitRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
 import { lockProjectState, touchProject } from '../projects/projects.repository';
 import { canPresentationReadFile } from '../files/files.access';
@@ -24,13 +23,8 @@ import {
   saveChoice,
   type PresentationRow,
 } from './presentations.repository';
-import {
-  choiceMail,
-  clientPresentation,
-  linkNotFound,
-  presentationFinishIds,
-  presentationForToken,
-} from './presentations.service';
+import { choiceMail } from '../../services/mail/templates';
+import { clientPresentation, linkNotFound, presentationFinishIds, presentationForToken } from './presentations.service';
 import type { CachedLink } from './client-cache';
 
 const RATE_WINDOW_MS = 10 * 60_000;
@@ -38,9 +32,6 @@ const RATE_WINDOW_MS = 10 * 60_000;
 export const CHOICE_RATE: RateRule = { bucket: 'presentation-choice', limit: 20, windowMs: RATE_WINDOW_MS };
 /** "Looked at" posts per link per window: one per option shown, with room for a long evening. */
 export const VIEW_RATE: RateRule = { bucket: 'presentation-view', limit: 300, windowMs: RATE_WINDOW_MS };
-
-/** Where a refusal's Retry-After goes. */
-type RetryAfterTarget = Pick<Response, 'setHeader'>;
 
 // The studio's own members opening the link (to check it) are not the client: their visits and
 // looks are not recorded.
@@ -51,10 +42,12 @@ const isStudioMember = (caller: Caller | null, p: PresentationRow) => caller?.st
  * post rolls back with it, so it is not counted. Over the limit it answers 429 with the window as
  * Retry-After.
  */
-async function countLinkPost(trx: Db, res: RetryAfterTarget, rule: RateRule, p: PresentationRow): Promise<void> {
+async function countLinkPost(trx: Db, rule: RateRule, p: PresentationRow): Promise<void> {
   if ((await hitRateLimit(trx, rule, p.id)).allowed) return;
-  res.setHeader('Retry-After', String(Math.ceil(rule.windowMs / 1000)));
-  throw new HttpError(429, 'too_many', 'That was a lot of changes in a short time. Please wait a few minutes, then try again.');
+  throw tooManyRequests(
+    'That was a lot of changes in a short time. Please wait a few minutes, then try again.',
+    Math.ceil(rule.windowMs / 1000),
+  );
 }
 
 /** The link's answer as the link cache keeps it: built once per link, served as it is. */
@@ -84,12 +77,11 @@ export async function linkFileKey(
 /** Records that the client looked at a shown option (the studio's own members are not counted). */
 export async function recordView(
   services: Pick<AppServices, 'db' | 'config'>,
-  res: RetryAfterTarget,
   v: { token: string; caller: Caller | null; optionId: string },
 ): Promise<void> {
   await services.db.transaction().execute(async (trx) => {
     const p = await presentationForToken(trx, services.config, v.token, { forUpdate: true });
-    await countLinkPost(trx, res, VIEW_RATE, p);
+    await countLinkPost(trx, VIEW_RATE, p);
     const ok = isStudioMember(v.caller, p)
       ? await isShownOption(trx, p.id, v.optionId)
       : await recordViewed(trx, p.id, v.optionId, new Date());
@@ -109,7 +101,6 @@ export interface ChoiceResult {
  */
 export async function chooseOption(
   services: Pick<AppServices, 'db' | 'config'>,
-  res: RetryAfterTarget,
   v: { token: string; roomId: string | null; optionId: string; comment: string },
 ): Promise<ChoiceResult> {
   return services.db.transaction().execute(async (trx) => {
@@ -117,7 +108,7 @@ export async function chooseOption(
     const p = await presentationForToken(trx, services.config, v.token, { forUpdate: true });
     const { roomId } = v;
     if (!roomId) throw linkNotFound();
-    await countLinkPost(trx, res, CHOICE_RATE, p);
+    await countLinkPost(trx, CHOICE_RATE, p);
     // Held until the choice is saved, so Mark as decided cannot slip in between.
     const project = await lockProjectState(trx, p.studio_id, p.project_id, 'share');
     if (!project) throw linkNotFound();

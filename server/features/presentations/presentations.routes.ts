@@ -46,7 +46,7 @@ export const presentationRoutes: RouteDef[] = [
     params: idParamSchema,
     body: sendPresentationSchema,
     handler: async (ctx) => ({
-      presentation: await sendPresentation(ctx.services, ctx.log, ctx.res, ctx.caller, ctx.params.id, ctx.body),
+      presentation: await sendPresentation(ctx.services, ctx.log, ctx.caller, ctx.params.id, ctx.body),
     }),
   }),
   route({

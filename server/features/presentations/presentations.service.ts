@@ -1,7 +1,6 @@
 // What a presentation shows and to whom (the designer's summary, the client's payload with only the
 // chosen rooms and options, prices only when shown, the link and the e-mails), and the designer's
 // actions on it, each with its rules and its transaction.
-import type { Response } from 'express';
 import type { z } from 'zod';
 import type { AppConfig } from '../../config';
 import type { AppServices } from '../../context';
@@ -38,7 +37,7 @@ import { sendStudioMail } from '../outbox/outbox.service';
 import { listMembers } from '../studio/members.repository';
 import { lockProjectState } from '../projects/projects.repository';
 import { DECIDED_REOPEN_FIRST, decidedRefusal } from '../projects/project-states';
-import { escapeHtml } from '../../services/mail/escape-html';
+import { presentationMail } from '../../services/mail/templates';
 import {
   finishLabels,
   finishRows,
@@ -56,7 +55,7 @@ import {
   updatePresentation,
   type PresentationRow,
 } from './presentations.repository';
-import { studioName } from '../studio/studios.repository';
+import { studioCreatedAt, studioName } from '../studio/studios.repository';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -315,55 +314,6 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
   };
 }
 
-export const dateText = (d: Date) =>
-  new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(d);
-
-/** The client's e-mail with the link. */
-export function invitationMail(v: {
-  to: string;
-  studio: string;
-  project: string;
-  clientName: string;
-  message: string;
-  link: string;
-  expiresAt: Date;
-}) {
-  const until = dateText(v.expiresAt);
-  // The designer's own message carries their greeting; only without one does the mail greet for them.
-  const message = v.message ? `${v.message}\n\n` : `Hello ${v.clientName},\n\n`;
-  return {
-    to: v.to,
-    subject: `${v.studio}: your options for ${v.project}`,
-    text: `${message}Walk round each option in 3D and choose one per room:\n${v.link}\n\nThe link works until ${until}. No account or password is needed.\n\n${v.studio}`,
-    html:
-      (v.message ? `<p style="white-space:pre-wrap">${escapeHtml(v.message)}</p>` : `<p>Hello ${escapeHtml(v.clientName)},</p>`) +
-      `<p><a href="${escapeHtml(v.link)}">Walk round each option in 3D and choose one per room</a></p>` +
-      `<p>The link works until ${until}. No account or password is needed.</p><p>${escapeHtml(v.studio)}</p>`,
-  };
-}
-
-/** The designer's e-mail when the client chooses. */
-export function choiceMail(v: {
-  to: string;
-  clientName: string;
-  project: string;
-  room: string;
-  option: string;
-  comment: string;
-  projectLink: string;
-}) {
-  const comment = v.comment ? `\n\nTheir comment: “${v.comment}”` : '';
-  return {
-    to: v.to,
-    subject: `${v.clientName} chose ${v.option} for ${v.room} (${v.project})`,
-    text: `${v.clientName} chose ${v.option} for ${v.room} in ${v.project}.${comment}\n\nSee the choices on the project: ${v.projectLink}`,
-    html:
-      `<p>${escapeHtml(v.clientName)} chose <strong>${escapeHtml(v.option)}</strong> for ${escapeHtml(v.room)} in ${escapeHtml(v.project)}.</p>` +
-      (v.comment ? `<blockquote>${escapeHtml(v.comment)}</blockquote>` : '') +
-      `<p><a href="${escapeHtml(v.projectLink)}">See the choices on the project</a></p>`,
-  };
-}
-
 // The designer's side: make a presentation, send it, withdraw or extend it, and confirm the
 // client's choices ("Mark as decided"). Each takes the caller's studio and the parsed input.
 
@@ -473,12 +423,11 @@ export async function createPresentation(
 
 /**
  * E-mails the link to the client (or `body.to`), within the studio's and the recipient's mail
- * limits; a refusal over a limit sets Retry-After on `res`.
+ * limits (a refusal over a limit is a 429 with Retry-After).
  */
 export async function sendPresentation(
   services: Pick<AppServices, 'db' | 'config' | 'mailer'>,
   log: Logger,
-  res: Response,
   caller: Caller,
   id: string,
   body: z.output<typeof sendPresentationSchema>,
@@ -492,8 +441,8 @@ export async function sendPresentation(
     throw new HttpError(400, 'invalid', 'The client has no e-mail address. Type one here, or copy the link instead.', {
       to: 'Enter the client’s e-mail.',
     });
-  await limitPresentationMail(db, res, caller.studioId, to);
-  const mail = invitationMail({
+  await limitPresentationMail(db, { id: caller.studioId, createdAt: await studioCreatedAt(db, caller.studioId) }, to);
+  const mail = presentationMail({
     to,
     studio: await studioName(db, caller.studioId),
     project: project.name,

@@ -5,7 +5,7 @@
 import type { Db } from '../../db/database';
 import { HttpError } from '../../http/errors';
 import { CHOSEN_OPTION_FROZEN, decidedRefusal } from '../projects/project-states';
-import { dateText } from '../presentations/presentations.service';
+import { dateText } from '../../../shared/units/date-text';
 import { decidedChoices, presentationsShowing, type Shown } from './rooms.repository';
 
 type ShowingRow = Awaited<ReturnType<typeof presentationsShowing>>[number];

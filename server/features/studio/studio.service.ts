@@ -1,6 +1,5 @@
 // The studio's members and invitations: the rules (a studio keeps an owner, an invitation is used
 // once, in time, by someone without an account) and the transactions that hold them.
-import type { Response } from 'express';
 import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
 import type { Caller } from '../../http/routes';
@@ -8,7 +7,7 @@ import type { Logger } from '../../services/logging/logger';
 import type { InviteBody, InviteInfo, Member, Role } from '../../../shared/schemas/studio';
 import type { AcceptInviteBody } from '../../../shared/schemas/account';
 import { HttpError, notFound } from '../../http/errors';
-import { escapeHtml } from '../../services/mail/escape-html';
+import { memberInviteMail } from '../../services/mail/templates';
 import { hashToken, newToken } from '../../services/auth/tokens';
 import { hashPassword } from '../../services/auth/passwords';
 import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
@@ -60,20 +59,18 @@ export async function removeMember(db: Db, caller: Caller, id: string): Promise<
 
 /**
  * Invites someone without an account and e-mails them the link, within the studio's hourly and
- * the recipient's daily limits (a refusal sets Retry-After on `res`). An invitation whose mail
+ * the recipient's daily limits (a refusal is a 429 with Retry-After). An invitation whose mail
  * could not be sent is not kept.
  */
 export async function inviteMember(
   services: Pick<AppServices, 'db' | 'config' | 'mailer'>,
   log: Logger,
-  res: Response,
   caller: Caller,
   body: InviteBody,
 ): Promise<InviteInfo> {
   const { db, config } = services;
   await enforceRateLimit(
     db,
-    res,
     INVITE_RATE,
     caller.studioId,
     'That is a lot of invitations in a short time. Please wait a while, then send the rest.',
@@ -83,7 +80,7 @@ export async function inviteMember(
       email: 'Already has an account.',
     });
   }
-  await limitInvitationMail(db, res, body.email);
+  await limitInvitationMail(db, body.email);
   const studio = await studioName(db, caller.studioId);
   const inviter = await getMember(db, caller.studioId, caller.memberId);
   const { token, hash } = newToken();
@@ -104,10 +101,7 @@ export async function inviteMember(
       {
         studioId: caller.studioId,
         kind: 'invitation',
-        to: body.email,
-        subject: `${by} invited you to ${studio} on Parlour`,
-        text: `${by} invited you to join ${studio} on Parlour as ${body.role}.\n\nAccept the invitation: ${link}\n\nThe link works for ${INVITE_DAYS} days.`,
-        html: `<p>${escapeHtml(by)} invited you to join <strong>${escapeHtml(studio)}</strong> on Parlour as ${body.role}.</p><p><a href="${link}">Accept the invitation</a></p><p>The link works for ${INVITE_DAYS} days.</p>`,
+        ...memberInviteMail({ to: body.email, by, studio, role: body.role, link, days: INVITE_DAYS }),
       },
       'The invitation e-mail could not be sent, so no invitation was made. Try again in a moment.',
     );

@@ -1,4 +1,4 @@
-// All SQL of the studios table: making one at sign-up and reading its name.
+// All SQL of the studios table: making one at sign-up and reading its name and age.
 import type { Db } from '../../db/database';
 
 export async function insertStudio(db: Db, name: string): Promise<{ id: string }> {
@@ -12,4 +12,9 @@ export async function getStudio(db: Db, studioId: string): Promise<{ id: string;
 export async function studioName(db: Db, studioId: string): Promise<string> {
   const r = await db.selectFrom('studios').select('name').where('id', '=', studioId).executeTakeFirstOrThrow();
   return r.name;
+}
+
+export async function studioCreatedAt(db: Db, studioId: string): Promise<Date> {
+  const r = await db.selectFrom('studios').select('created_at').where('id', '=', studioId).executeTakeFirstOrThrow();
+  return new Date(r.created_at);
 }

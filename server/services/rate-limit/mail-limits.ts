@@ -2,7 +2,6 @@
 // open, so a studio's own allowance is not enough, and every recipient also has one across all
 // studios together. Figures are common practice for a product whose mail goes to a studio's own
 // clients and colleagues.
-import type { Response } from 'express';
 import type { Db } from '../../db/database';
 import { enforceRateLimits, waitInWords, type RateHit, type RateRule } from './rate-limit';
 
@@ -43,15 +42,14 @@ function recipientHit(to: string, advice = ''): RateHit {
 /** Counts a presentation mail against the studio's day and the recipient's, or answers 429 counting neither. */
 export async function limitPresentationMail(
   db: Db,
-  res: Response,
-  studioId: string,
+  studio: { id: string; createdAt: Date },
   to: string,
   now = new Date(),
 ): Promise<void> {
-  const studio = await db.selectFrom('studios').select('created_at').where('id', '=', studioId).executeTakeFirstOrThrow();
-  const young = now.getTime() - new Date(studio.created_at).getTime() < NEW_STUDIO_AGE_MS;
+  const studioId = studio.id;
+  const young = now.getTime() - studio.createdAt.getTime() < NEW_STUDIO_AGE_MS;
   const limit = young ? NEW_STUDIO_PRESENTATION_MAIL_LIMIT : PRESENTATION_MAIL_RATE.limit;
-  await enforceRateLimits(db, res, [
+  await enforceRateLimits(db, [
     {
       rule: { ...PRESENTATION_MAIL_RATE, limit },
       key: studioId,
@@ -63,6 +61,6 @@ export async function limitPresentationMail(
 }
 
 /** Counts an invitation mail against the recipient's day, or answers 429. */
-export async function limitInvitationMail(db: Db, res: Response, to: string): Promise<void> {
-  await enforceRateLimits(db, res, [recipientHit(to)]);
+export async function limitInvitationMail(db: Db, to: string): Promise<void> {
+  await enforceRateLimits(db, [recipientHit(to)]);
 }

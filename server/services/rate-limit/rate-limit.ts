@@ -3,9 +3,8 @@
 // how much of it still falls inside the sliding window (a "sliding window counter"), which keeps a
 // burst at a window boundary from doubling the limit.
 import { sql } from 'kysely';
-import type { Response } from 'express';
 import type { Db } from '../../db/database';
-import { HttpError } from '../../http/errors';
+import { tooManyRequests } from '../../http/errors';
 
 export interface RateRule {
   /** Names the rule in the table; one per thing limited. */
@@ -83,15 +82,14 @@ export async function clearRateLimit(db: Db, rule: RateRule, key: string): Promi
 /** The refusal's message: fixed, or worded from how long the caller has to wait. */
 export type RateMessage = string | ((retryAfterS: number) => string);
 
-function refuse(res: Response, check: RateCheck, message: RateMessage): never {
-  res.setHeader('Retry-After', String(check.retryAfterS));
-  throw new HttpError(429, 'too_many', typeof message === 'string' ? message : message(check.retryAfterS));
+function refuse(check: RateCheck, message: RateMessage): never {
+  throw tooManyRequests(typeof message === 'string' ? message : message(check.retryAfterS), check.retryAfterS);
 }
 
 /** Counts a hit and, over the limit, answers 429 with Retry-After and `message`. */
-export async function enforceRateLimit(db: Db, res: Response, rule: RateRule, key: string, message: RateMessage): Promise<void> {
+export async function enforceRateLimit(db: Db, rule: RateRule, key: string, message: RateMessage): Promise<void> {
   const check = await hitRateLimit(db, rule, key);
-  if (!check.allowed) refuse(res, check, message);
+  if (!check.allowed) refuse(check, message);
 }
 
 export interface RateHit {
@@ -105,11 +103,11 @@ export interface RateHit {
  * the first that is not answers 429 and none is counted (a mail refused for its recipient does not
  * use up the studio's allowance).
  */
-export async function enforceRateLimits(db: Db, res: Response, hits: RateHit[]): Promise<void> {
+export async function enforceRateLimits(db: Db, hits: RateHit[]): Promise<void> {
   await db.transaction().execute(async (trx) => {
     for (const hit of hits) {
       const check = await hitRateLimit(trx, hit.rule, hit.key);
-      if (!check.allowed) refuse(res, check, hit.message);
+      if (!check.allowed) refuse(check, hit.message);
     }
   });
 }
