@@ -11,7 +11,7 @@ const noImportFrom = (groups, message) => ({
 });
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'node_modules/**', 'data/**', '.test-output/**', 'coverage/**'] },
+  { ignores: ['dist/**', 'node_modules/**', 'data/**', '.test-output/**', '.tsbuild/**', 'coverage/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -263,9 +263,11 @@ describe('takeoffQuerySchema', () => {
       wastePercent: 15,
       unitCoverageM2: { boards: 2.2, paper: 5.3 },
     });
+    expect(takeoffQuery(settings)).toBe('coats=3&coverage=12.5&waste=15&unitM2=boards%3A2.2&unitM2=paper%3A5.3');
+    const written = new URLSearchParams(takeoffQuery(settings));
     const query = Object.fromEntries(
-      [...new Set(takeoffQuery(settings).keys())].map((k) => {
-        const all = takeoffQuery(settings).getAll(k);
+      [...new Set(written.keys())].map((k) => {
+        const all = written.getAll(k);
         return [k, all.length > 1 ? all : all[0]];
       }),
     );

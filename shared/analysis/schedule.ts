@@ -79,7 +79,7 @@ export const takeoffQuerySchema = z
         });
         return z.NEVER;
       }
-      unitCoverageM2[match[1]] = Number(match[2]);
+      unitCoverageM2[match[1]!] = Number(match[2]);
     }
     const settings: TakeoffSettingsInput = { unitCoverageM2 };
     if (q.coats !== undefined) settings.coats = q.coats;
@@ -89,16 +89,19 @@ export const takeoffQuerySchema = z
   })
   .pipe(takeoffSettingsSchema);
 
-/** The query string the take-off and schedule routes read (see takeoffQuerySchema). */
-export function takeoffQuery(settings: TakeoffSettings): URLSearchParams {
-  const query = new URLSearchParams({
-    coats: String(settings.coats),
-    coverage: String(settings.coverageM2PerL),
-    waste: String(settings.wastePercent),
-  });
+/**
+ * The query string the take-off and schedule routes read (see takeoffQuerySchema), without the
+ * leading `?`: coats, coverage and waste, then one `unitM2=finishId:m2` per unit finish in id order.
+ */
+export function takeoffQuery(settings: TakeoffSettings): string {
+  const pairs: [string, string][] = [
+    ['coats', String(settings.coats)],
+    ['coverage', String(settings.coverageM2PerL)],
+    ['waste', String(settings.wastePercent)],
+  ];
   for (const [id, m2] of Object.entries(settings.unitCoverageM2).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
-    query.append('unitM2', `${id}:${m2}`);
-  return query;
+    pairs.push(['unitM2', `${id}:${m2}`]);
+  return pairs.map(([key, value]) => `${key}=${encodeURIComponent(value)}`).join('&');
 }
 
 // ——— Finishes as the take-off needs them ———
@@ -137,7 +140,7 @@ export interface SurfaceSet {
 export function surfaceLabel(s: SurfaceSet): string {
   const parts: string[] = [];
   if (s.floor) parts.push('floor');
-  if (s.walls.length === 1) parts.push(`wall ${s.walls[0] + 1}`);
+  if (s.walls.length === 1) parts.push(`wall ${s.walls[0]! + 1}`);
   if (s.walls.length > 1) parts.push(`walls ${s.walls.map((w) => w + 1).join(', ')}`);
   if (s.ceiling) parts.push('ceiling');
   const text = parts.length <= 1 ? parts.join('') : `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}`;

@@ -103,22 +103,22 @@ export function computeTakeoff(
   let skirtingGapsMm = 0;
   for (const opening of shell.openings) {
     if (opening.wall >= n) continue;
-    openingsMm2[opening.wall] += opening.width * opening.height;
+    openingsMm2[opening.wall]! += opening.width * opening.height;
     // Skirting stops at doors and passages (they reach the floor); it runs on under windows.
     if (opening.type !== 'window') skirtingGapsMm += opening.width;
   }
 
   let netWallMm2 = 0;
   const walls: WallTakeoff[] = shell.outline.map((corner, index) => {
-    const lengthMm = distance(corner, shell.outline[(index + 1) % n]);
+    const lengthMm = distance(corner, shell.outline[(index + 1) % n]!);
     const grossMm2 = lengthMm * heightMm;
-    const netMm2 = grossMm2 - openingsMm2[index];
+    const netMm2 = grossMm2 - openingsMm2[index]!;
     netWallMm2 += netMm2;
     return {
       index,
       length_m: roundQuantity(lengthMm / MM_PER_M),
       grossArea_m2: roundQuantity(grossMm2 / MM2_PER_M2),
-      openingsArea_m2: roundQuantity(openingsMm2[index] / MM2_PER_M2),
+      openingsArea_m2: roundQuantity(openingsMm2[index]! / MM2_PER_M2),
       netArea_m2: roundQuantity(netMm2 / MM2_PER_M2),
     };
   });

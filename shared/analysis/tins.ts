@@ -1,6 +1,7 @@
 // Paint tins to buy for a need in litres: the fewest tins that cover it while leaving less over
 // than the smallest tin (a spare that big would be a tin bought for nothing), then the least left
 // over. Fewer, larger tins is how paint is usually bought; it is also usually cheaper per litre.
+import { itemAt } from '../item-at';
 
 /** Tin sizes paint is commonly sold in, litres (common practice; the maker's range wins). */
 export const COMMON_TIN_SIZES_L: readonly number[] = [0.75, 1, 2.5, 5, 10];
@@ -43,7 +44,7 @@ export function chooseTins(needL: number, sizesL: readonly number[] = COMMON_TIN
   const sizes = sizesMl.map((s) => s / step);
   // The tiny allowance keeps 7.0000000001 L (floating point) from asking for a further tin.
   const need = Math.ceil((needL * ML_PER_L - 1e-6) / step);
-  const limit = need + sizes[0];
+  const limit = need + itemAt(sizes, 0, 'tin size');
 
   // fewest[t]: the fewest tins holding exactly t steps; pick[t]: the size index of one of them.
   const fewest = new Int32Array(limit + 1).fill(-1);
@@ -52,28 +53,32 @@ export function chooseTins(needL: number, sizesL: readonly number[] = COMMON_TIN
   for (let t = 1; t <= limit; t++) {
     // Sizes run largest first and only a strictly better count replaces, so ties keep larger tins.
     for (let k = 0; k < sizes.length; k++) {
-      const rest = t - sizes[k];
-      if (rest < 0 || fewest[rest] < 0) continue;
-      if (fewest[t] < 0 || fewest[rest] + 1 < fewest[t]) {
-        fewest[t] = fewest[rest] + 1;
+      const rest = t - sizes[k]!;
+      if (rest < 0 || fewest[rest]! < 0) continue;
+      if (fewest[t]! < 0 || fewest[rest]! + 1 < fewest[t]!) {
+        fewest[t] = fewest[rest]! + 1;
         pick[t] = k;
       }
     }
   }
   // Totals leaving less over than the smallest tin; if none is reachable, the first one above.
-  const smallest = sizes[sizes.length - 1];
+  const smallest = itemAt(sizes, sizes.length - 1, 'tin size');
   let total = -1;
   for (let t = need; t < need + smallest && t <= limit; t++) {
-    if (fewest[t] >= 0 && (total < 0 || fewest[t] < fewest[total])) total = t;
+    if (fewest[t]! >= 0 && (total < 0 || fewest[t]! < fewest[total]!)) total = t;
   }
   if (total < 0) {
     total = need;
-    while (fewest[total] < 0) total++;
+    while (fewest[total]! < 0) total++;
   }
 
   const counts = new Array<number>(sizes.length).fill(0);
-  for (let t = total; t > 0; t -= sizes[pick[t]]) counts[pick[t]]++;
-  const tins = sizesMl.map((ml, k) => ({ sizeL: ml / ML_PER_L, count: counts[k] })).filter((c) => c.count > 0);
+  for (let t = total; t > 0;) {
+    const k = pick[t]!;
+    counts[k] = counts[k]! + 1;
+    t -= sizes[k]!;
+  }
+  const tins = sizesMl.map((ml, k) => ({ sizeL: ml / ML_PER_L, count: counts[k]! })).filter((c) => c.count > 0);
   const totalMl = total * step;
   return { tins, totalL: totalMl / ML_PER_L, spareL: Math.round(totalMl - needL * ML_PER_L) / ML_PER_L };
 }

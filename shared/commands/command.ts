@@ -83,6 +83,7 @@ export function definedFields<T extends object>(patch: T): Partial<T> {
 /** The first zod issue as "field: message", for a refusal reason. */
 export function firstIssue(error: z.ZodError): string {
   const issue = error.issues[0];
+  if (!issue) return 'is not valid';
   const path = issue.path.map(String).join('.');
   return path === '' ? issue.message : `${path} ${issue.message}`;
 }
@@ -150,7 +151,7 @@ export function apply(doc: EditorDoc, command: Command): CommandResult {
     const problems = newShellProblems(doc.shell, result.doc.shell);
     if (problems.length > 0) {
       const more = problems.length > 1 ? ` (and ${problems.length - 1} more)` : '';
-      return refusal(`${describeProblem(result.doc.shell, problems[0])}${more}`, problems);
+      return refusal(`${describeProblem(result.doc.shell, problems[0]!)}${more}`, problems);
     }
   }
   return { ok: true, doc: result.doc };

@@ -4,6 +4,7 @@ import { add, addScaled, cross, dot, normalise, scale, sub } from '../geometry/v
 import type { Opening, PlanPoint, RoomShell } from '../schemas/room';
 import { checkMm, checkNumber, checkSizeMm, checkWall, done, makeCommand, refuse, type Command, type RunResult } from './command';
 import type { EditorDoc } from './editor-doc';
+import { itemAt } from '../item-at';
 import {
   openingWords,
   refitOpenings,
@@ -99,10 +100,10 @@ export function moveCorner(index: number, x: number, y: number): Command {
 // it, which can lengthen or shorten without any angle changing. Null when no wall is parallel.
 function absorbingWall(outline: readonly PlanPoint[], wall: number): number | null {
   const n = outline.length;
-  const direction = normalise(sub(outline[(wall + 1) % n], outline[wall]));
+  const direction = normalise(sub(itemAt(outline, (wall + 1) % n, 'corner'), itemAt(outline, wall, 'corner')));
   for (let step = 1; step < n; step++) {
     const j = (wall + step) % n;
-    const other = normalise(sub(outline[(j + 1) % n], outline[j]));
+    const other = normalise(sub(itemAt(outline, (j + 1) % n, 'corner'), itemAt(outline, j, 'corner')));
     if (Math.abs(cross(direction, other)) < PARALLEL_SINE_TOLERANCE) return j;
   }
   return null;
@@ -125,8 +126,8 @@ export function setWallLength(wall: number, lengthMm: number): Command {
         const n = outline.length;
         const bad = checkWall(doc.shell, args.wall) ?? checkMm(args.lengthMm, 'the length', MIN_WALL_LENGTH_MM);
         if (bad) return refuse(bad);
-        const start = outline[args.wall];
-        const direction = normalise(sub(outline[(args.wall + 1) % n], start));
+        const start = itemAt(outline, args.wall, 'corner');
+        const direction = normalise(sub(itemAt(outline, (args.wall + 1) % n, 'corner'), start));
         const shift = scale(direction, args.lengthMm - wallLengthMm(outline, args.wall));
         const absorbing = absorbingWall(outline, args.wall);
         const moving = new Set<number>();
@@ -142,8 +143,13 @@ export function setWallLength(wall: number, lengthMm: number): Command {
         }
         const moved = outline.map((p, i): PlanPoint => (moving.has(i) ? add(p, shift) : p));
         if (absorbing !== null) {
-          const oldDirection = normalise(sub(outline[(absorbing + 1) % n], outline[absorbing]));
-          const remainingMm = dot(sub(moved[(absorbing + 1) % n], moved[absorbing]), oldDirection);
+          const oldDirection = normalise(
+            sub(itemAt(outline, (absorbing + 1) % n, 'corner'), itemAt(outline, absorbing, 'corner')),
+          );
+          const remainingMm = dot(
+            sub(itemAt(moved, (absorbing + 1) % n, 'corner'), itemAt(moved, absorbing, 'corner')),
+            oldDirection,
+          );
           if (remainingMm < MIN_WALL_LENGTH_MM) {
             return refuse(
               `wall ${absorbing} (${Math.round(wallLengthMm(outline, absorbing))} mm) is too short to take up the change`,
@@ -172,7 +178,11 @@ export function insertCorner(wall: number, atMm: number): Command {
         if (args.atMm < MIN_WALL_LENGTH_MM || args.atMm > lengthMm - MIN_WALL_LENGTH_MM) {
           return refuse(`the new corner must fall between the ends of wall ${args.wall} (0 to ${Math.round(lengthMm)} mm)`);
         }
-        const corner = addScaled(outline[args.wall], normalise(sub(outline[(args.wall + 1) % n], outline[args.wall])), args.atMm);
+        const corner = addScaled(
+          itemAt(outline, args.wall, 'corner'),
+          normalise(sub(itemAt(outline, (args.wall + 1) % n, 'corner'), itemAt(outline, args.wall, 'corner'))),
+          args.atMm,
+        );
         const nextOutline = [...outline.slice(0, args.wall + 1), corner, ...outline.slice(args.wall + 1)];
         const moved: Opening[] = [];
         for (const opening of openings) {
@@ -205,14 +215,14 @@ export function removeCorner(index: number): Command {
         const previous = (args.index + n - 1) % n;
         const nextOutline = outline.filter((_, i) => i !== args.index);
         const merged = wallAfterRemoval(previous, args.index, n);
-        const mergedStart = nextOutline[merged];
-        const mergedEnd = nextOutline[(merged + 1) % nextOutline.length];
+        const mergedStart = itemAt(nextOutline, merged, 'corner');
+        const mergedEnd = itemAt(nextOutline, (merged + 1) % nextOutline.length, 'corner');
         const moved = openings.map((opening): Opening => {
           const wall = wallAfterRemoval(opening.wall, args.index, n);
           if (opening.wall !== previous && opening.wall !== args.index)
             return wall === opening.wall ? opening : { ...opening, wall };
-          const oldStart = outline[opening.wall];
-          const oldEnd = outline[(opening.wall + 1) % n];
+          const oldStart = itemAt(outline, opening.wall, 'corner');
+          const oldEnd = itemAt(outline, (opening.wall + 1) % n, 'corner');
           const offset = Math.max(CORNER_MARGIN_MM, reprojectOffsetMm(opening, oldStart, oldEnd, mergedStart, mergedEnd));
           return { ...opening, wall, offset };
         });

@@ -52,7 +52,7 @@ export function diffDocs(before: EditorDoc, after: EditorDoc): Patch[] {
 
 function setAt(node: unknown, path: readonly PathKey[], depth: number, slot: Slot): unknown {
   if (depth === path.length) return slot.present ? slot.value : undefined;
-  const key = path[depth];
+  const key = path[depth]!;
   if (Array.isArray(node)) {
     const copy = node.slice();
     copy[key as number] = setAt(node[key as number], path, depth + 1, slot);

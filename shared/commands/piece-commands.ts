@@ -70,20 +70,22 @@ function withOption(doc: EditorDoc, optionId: string, option: OptionDoc): Editor
   return { ...doc, options: { ...doc.options, [optionId]: option } };
 }
 
-function missing(doc: EditorDoc, optionId: string, id: string): string | null {
+/** The option, the piece and its place in the option's list, or why one of them is not there. */
+function locate(doc: EditorDoc, optionId: string, id: string): { option: OptionDoc; index: number; piece: Piece } | string {
   const option = doc.options[optionId];
   if (!option) return `there is no option ${optionId}`;
-  if (!option.pieces.some((p) => p.id === id)) return `there is no piece ${id} in option ${optionId}`;
-  return null;
+  const index = option.pieces.findIndex((p) => p.id === id);
+  const piece = option.pieces[index];
+  if (!piece) return `there is no piece ${id} in option ${optionId}`;
+  return { option, index, piece };
 }
 
 // Replaces one piece of one option; `edit` gives the new piece or a refusal reason.
 function editPiece(doc: EditorDoc, optionId: string, id: string, edit: (piece: Piece) => Piece | string): RunResult {
-  const bad = missing(doc, optionId, id);
-  if (bad) return refuse(bad);
-  const option = doc.options[optionId];
-  const index = option.pieces.findIndex((p) => p.id === id);
-  const next = edit(option.pieces[index]);
+  const found = locate(doc, optionId, id);
+  if (typeof found === 'string') return refuse(found);
+  const { option, index, piece } = found;
+  const next = edit(piece);
   if (typeof next === 'string') return refuse(next);
   const pieces = option.pieces.slice();
   pieces[index] = next;
@@ -193,7 +195,7 @@ export function updatePiece(optionId: string, id: string, patch: PiecePatch): Co
               continue;
             }
             const field = pieceSchema.shape[key as keyof typeof pieceSchema.shape].safeParse(value);
-            if (!field.success) return `${key} ${field.error.issues[0].message}`;
+            if (!field.success) return `${key} ${field.error.issues[0]?.message ?? 'is not valid'}`;
             next[key] = field.data;
           }
           return next as Piece;
@@ -210,16 +212,15 @@ export function duplicatePiece(optionId: string, id: string, newId: string, offs
     {
       label: (doc, args) => `Duplicate ${pieceWords(doc, args.optionId, args.id)}`,
       run: (doc, args) => {
+        const found = locate(doc, args.optionId, args.id);
+        if (typeof found === 'string') return refuse(found);
         const bad =
-          missing(doc, args.optionId, args.id) ??
           (typeof args.newId !== 'string' || args.newId === '' ? 'the copy needs an id' : null) ??
           (findPiece(doc, args.optionId, args.newId) ? `option ${args.optionId} already has a piece ${args.newId}` : null) ??
           checkMm(args.offsetMm[0], 'the offset x') ??
           checkMm(args.offsetMm[1], 'the offset y');
         if (bad) return refuse(bad);
-        const option = doc.options[args.optionId];
-        const index = option.pieces.findIndex((p) => p.id === args.id);
-        const original = option.pieces[index];
+        const { option, index, piece: original } = found;
         const copy: Piece = { ...original, id: args.newId, x: original.x + args.offsetMm[0], y: original.y + args.offsetMm[1] };
         const pieces = [...option.pieces.slice(0, index + 1), copy, ...option.pieces.slice(index + 1)];
         return done(withOption(doc, args.optionId, { ...option, pieces }));
@@ -236,9 +237,9 @@ export function removePiece(optionId: string, id: string): Command {
     {
       label: (doc, args) => `Remove ${pieceWords(doc, args.optionId, args.id)}`,
       run: (doc, args) => {
-        const bad = missing(doc, args.optionId, args.id);
-        if (bad) return refuse(bad);
-        const option = doc.options[args.optionId];
+        const found = locate(doc, args.optionId, args.id);
+        if (typeof found === 'string') return refuse(found);
+        const { option } = found;
         return done(withOption(doc, args.optionId, { ...option, pieces: option.pieces.filter((p) => p.id !== args.id) }));
       },
     },

@@ -35,12 +35,16 @@ export function pieceFootprintMm(piece: PiecePose): [number, number][] {
   const { across, front } = pieceAxes(piece.rotation);
   const hw = piece.width / 2;
   const hd = piece.depth / 2;
-  return [
+  const local: [number, number][] = [
     [-hw, -hd],
     [hw, -hd],
     [hw, hd],
     [-hw, hd],
-  ].map(([u, v]): [number, number] => [piece.x + across[0] * u + front[0] * v, piece.y + across[1] * u + front[1] * v]);
+  ];
+  return local.map(([u, v]): [number, number] => [
+    piece.x + across[0] * u + front[0] * v,
+    piece.y + across[1] * u + front[1] * v,
+  ]);
 }
 
 /** The axis-aligned box round a piece's footprint, plan mm. */

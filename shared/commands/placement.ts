@@ -18,7 +18,7 @@ const MAX_STEPS_PER_AXIS = 400;
 type Outline = RoomShell['outline'];
 
 function edges(poly: readonly Vec2[]): [Vec2, Vec2][] {
-  return poly.map((p, i) => [p, poly[(i + 1) % poly.length]]);
+  return poly.map((p, i) => [p, poly[(i + 1) % poly.length]!]);
 }
 
 /** True when the convex `box` lies wholly inside the outline: every corner inside, no wall crossing it. */

@@ -1,6 +1,6 @@
 // Pure snapping helpers for the plan (mm, x right, y down; angles degrees clockwise seen from above).
 // The editor calls them while a piece is dragged and then applies the commands they suggest.
-import { layoutShellWalls } from '../geometry/walls';
+import { layoutShellWalls, type WallLayout } from '../geometry/walls';
 import { addScaled, dot, sub } from '../geometry/vec';
 import type { Piece } from '../schemas/option';
 import type { PlanPoint, RoomShell } from '../schemas/room';
@@ -64,7 +64,7 @@ export function snapPieceToWalls<P extends PiecePose>(
 ): WallSnap<P> {
   const corners = pieceFootprintMm(piece);
   const walls = layoutShellWalls(shell);
-  let best: { wall: number; gapMm: number; alongMm: number; inward: [number, number] } | null = null;
+  let best: { wall: WallLayout; gapMm: number; alongMm: number; inward: [number, number] } | null = null;
   for (const wall of walls) {
     const inward: [number, number] = [-wall.outward[0], -wall.outward[1]];
     const centre = sub([piece.x, piece.y], wall.start);
@@ -72,12 +72,12 @@ export function snapPieceToWalls<P extends PiecePose>(
     if (dot(centre, inward) <= 0 || alongMm < 0 || alongMm > wall.lengthMm) continue;
     const gapMm = Math.min(...corners.map((c) => dot(sub(c, wall.start), inward)));
     if (Math.abs(gapMm) > toleranceMm) continue;
-    if (best === null || Math.abs(gapMm) < Math.abs(best.gapMm)) best = { wall: wall.index, gapMm, alongMm, inward };
+    if (best === null || Math.abs(gapMm) < Math.abs(best.gapMm)) best = { wall, gapMm, alongMm, inward };
   }
   if (best === null) return { piece, wall: null };
-  const wall = walls[best.wall];
+  const wall = best.wall;
   const [x, y] = addScaled(addScaled(wall.start, wall.direction, best.alongMm), best.inward, piece.depth / 2);
-  return { piece: { ...piece, x, y, rotation: rotationFacingDeg(best.inward) }, wall: best.wall };
+  return { piece: { ...piece, x, y, rotation: rotationFacingDeg(best.inward) }, wall: wall.index };
 }
 
 /** Which other piece an axis snapped to, and the plan line (x or y, mm) the two edges now share. */

@@ -6,6 +6,7 @@
 // slides back towards the start corner until it fits; when it cannot fit at all, the command is
 // refused (the designer removes or narrows the opening first).
 import { CORNER_MARGIN_MM } from '../geometry/tolerances';
+import { itemAt } from '../item-at';
 import { distance, dot, normalise, sub, addScaled, type Vec2 } from '../geometry/vec';
 import type { OptionDoc } from '../schemas/option';
 import type { Opening, PlanPoint, RoomShell } from '../schemas/room';
@@ -23,7 +24,7 @@ function mm(value: number): string {
 
 /** Length in mm of wall `wall` of a plan outline (mm). */
 export function wallLengthMm(outline: readonly Vec2[], wall: number): number {
-  return distance(outline[wall], outline[(wall + 1) % outline.length]);
+  return distance(itemAt(outline, wall, 'corner'), itemAt(outline, (wall + 1) % outline.length, 'corner'));
 }
 
 /**
@@ -88,7 +89,7 @@ export function sourcesAfterRemoval(count: number, removed: number): WallSources
   const previous = (removed + count - 1) % count;
   // The wall ending at the removed corner goes first so the merged wall keeps its settings.
   const order = [previous, ...Array.from({ length: count }, (_, j) => j).filter((j) => j !== previous)];
-  for (const j of order) sources[wallAfterRemoval(j, removed, count)].push(j);
+  for (const j of order) itemAt(sources, wallAfterRemoval(j, removed, count), 'wall').push(j);
   return sources;
 }
 

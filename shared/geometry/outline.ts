@@ -1,6 +1,7 @@
 import { MIN_WALL_LENGTH_MM, PARALLEL_SINE_TOLERANCE, POINT_TOLERANCE_MM } from './tolerances';
 import { windingSign } from './polygon';
 import { addScaled, angleDegOf, cross, directionDeg, distance, normalise, normaliseAngleDeg, sub, type Vec2 } from './vec';
+import { itemAt } from '../item-at';
 
 /** One measured wall of a walk round the room: its length (mm) and the turn to the next wall. */
 export interface WalkStep {
@@ -87,13 +88,17 @@ export function closeOutline(steps: readonly WalkStep[], start: WalkStart = ORIG
   const n = steps.length;
   const corners = walk.corners.map((c): [number, number] => [c[0], c[1]]);
   if (n >= 3) {
-    const from = corners[n - 2];
-    const dA = normalise(sub(corners[n - 1], from));
-    const dB = normalise(sub(walk.endMm, corners[n - 1]));
+    const from = itemAt(corners, n - 2, 'corner');
+    const dA = normalise(sub(itemAt(corners, n - 1, 'corner'), from));
+    const dB = normalise(sub(walk.endMm, itemAt(corners, n - 1, 'corner')));
     const denominator = cross(dA, dB);
-    if (Math.abs(denominator) > PARALLEL_SINE_TOLERANCE && steps[n - 2].lengthMm > 0 && steps[n - 1].lengthMm > 0) {
+    if (
+      Math.abs(denominator) > PARALLEL_SINE_TOLERANCE &&
+      itemAt(steps, n - 2, 'step').lengthMm > 0 &&
+      itemAt(steps, n - 1, 'step').lengthMm > 0
+    ) {
       // Solve from + a·dA + b·dB = corner 0 for the two lengths a and b.
-      const w = sub(corners[0], from);
+      const w = sub(itemAt(corners, 0, 'corner'), from);
       const a = cross(w, dB) / denominator;
       const b = cross(dA, w) / denominator;
       if (a >= MIN_WALL_LENGTH_MM && b >= MIN_WALL_LENGTH_MM) {
@@ -102,8 +107,8 @@ export function closeOutline(steps: readonly WalkStep[], start: WalkStart = ORIG
           corners,
           method: 'last-two-walls',
           changes: [
-            { wall: n - 2, measuredMm: steps[n - 2].lengthMm, closedMm: a },
-            { wall: n - 1, measuredMm: steps[n - 1].lengthMm, closedMm: b },
+            { wall: n - 2, measuredMm: itemAt(steps, n - 2, 'step').lengthMm, closedMm: a },
+            { wall: n - 1, measuredMm: itemAt(steps, n - 1, 'step').lengthMm, closedMm: b },
           ],
         };
       }
@@ -113,14 +118,23 @@ export function closeOutline(steps: readonly WalkStep[], start: WalkStart = ORIG
   return {
     corners,
     method: 'last-wall',
-    changes: last >= 0 ? [{ wall: last, measuredMm: steps[last].lengthMm, closedMm: distance(corners[last], corners[0]) }] : [],
+    changes:
+      last >= 0
+        ? [
+            {
+              wall: last,
+              measuredMm: itemAt(steps, last, 'step').lengthMm,
+              closedMm: distance(itemAt(corners, last, 'corner'), itemAt(corners, 0, 'corner')),
+            },
+          ]
+        : [],
   };
 }
 
 /** Corners (plan mm) from typed corner coordinates; a repeated closing corner is dropped so wall i still runs corner i → i+1. */
 export function outlineFromCorners(points: readonly Vec2[]): [number, number][] {
   const corners = points.map((p): [number, number] => [p[0], p[1]]);
-  if (corners.length > 1 && distance(corners[0], corners[corners.length - 1]) < POINT_TOLERANCE_MM) corners.pop();
+  if (corners.length > 1 && distance(corners[0]!, corners[corners.length - 1]!) < POINT_TOLERANCE_MM) corners.pop();
   return corners;
 }
 
@@ -129,16 +143,16 @@ export function walkFromOutline(corners: readonly Vec2[]): { start: WalkStart; s
   const n = corners.length;
   const steps: WalkStep[] = [];
   for (let i = 0; i < n; i++) {
-    const here = sub(corners[(i + 1) % n], corners[i]);
-    const next = sub(corners[(i + 2) % n], corners[(i + 1) % n]);
+    const here = sub(corners[(i + 1) % n]!, corners[i]!);
+    const next = sub(corners[(i + 2) % n]!, corners[(i + 1) % n]!);
     const turn = normaliseAngleDeg(angleDegOf(next) - angleDegOf(here));
     steps.push({
-      lengthMm: distance(corners[i], corners[(i + 1) % n]),
+      lengthMm: distance(corners[i]!, corners[(i + 1) % n]!),
       turnDeg: Math.abs(turn),
       turn: turn < 0 ? 'left' : 'right',
     });
   }
-  const first = n > 1 ? sub(corners[1], corners[0]) : ([1, 0] as const);
+  const first = n > 1 ? sub(corners[1]!, corners[0]!) : ([1, 0] as const);
   return { start: { x: corners[0]?.[0] ?? 0, y: corners[0]?.[1] ?? 0, headingDeg: angleDegOf(first) }, steps };
 }
 
@@ -147,8 +161,8 @@ export function interiorAnglesDeg(corners: readonly Vec2[]): number[] {
   const n = corners.length;
   const sign = windingSign(corners);
   return corners.map((corner, i) => {
-    const incoming = sub(corner, corners[(i + n - 1) % n]);
-    const outgoing = sub(corners[(i + 1) % n], corner);
+    const incoming = sub(corner, corners[(i + n - 1) % n]!);
+    const outgoing = sub(corners[(i + 1) % n]!, corner);
     const turn = normaliseAngleDeg(angleDegOf(outgoing) - angleDegOf(incoming));
     // Walking clockwise on the plan the room is on the right, so a right turn is a convex corner.
     return 180 - sign * turn;

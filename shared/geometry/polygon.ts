@@ -9,8 +9,8 @@ export function signedAreaMm2(points: readonly Vec2[]): number {
   let twice = 0;
   const n = points.length;
   for (let i = 0; i < n; i++) {
-    const a = points[i];
-    const b = points[(i + 1) % n];
+    const a = points[i]!;
+    const b = points[(i + 1) % n]!;
     twice += a[0] * b[1] - b[0] * a[1];
   }
   return twice / 2;
@@ -24,7 +24,7 @@ export function areaMm2(points: readonly Vec2[]): number {
 /** Closed perimeter in mm of plan points (mm), last corner back to the first. */
 export function perimeterMm(points: readonly Vec2[]): number {
   let total = 0;
-  for (let i = 0; i < points.length; i++) total += distance(points[i], points[(i + 1) % points.length]);
+  for (let i = 0; i < points.length; i++) total += distance(points[i]!, points[(i + 1) % points.length]!);
   return total;
 }
 
@@ -135,20 +135,20 @@ export function findSelfCrossings(points: readonly Vec2[], limit = MAX_REPORTED_
   const crossings: WallCrossing[] = [];
   const xs = new Float64Array(n + 1);
   const ys = new Float64Array(n + 1);
-  for (let i = 0; i <= n; i++) [xs[i], ys[i]] = points[i % n];
+  for (let i = 0; i <= n; i++) [xs[i], ys[i]] = points[i % n]!;
   const scales = new Float64Array(n);
   const lows = new Float64Array(2 * n);
   const highs = new Float64Array(2 * n);
   for (let i = 0; i < n; i++) {
-    scales[i] = Math.max(Math.hypot(xs[i] - xs[i + 1], ys[i] - ys[i + 1]), 1);
-    lows[2 * i] = Math.min(xs[i], xs[i + 1]) - POINT_TOLERANCE_MM;
-    lows[2 * i + 1] = Math.min(ys[i], ys[i + 1]) - POINT_TOLERANCE_MM;
-    highs[2 * i] = Math.max(xs[i], xs[i + 1]) + POINT_TOLERANCE_MM;
-    highs[2 * i + 1] = Math.max(ys[i], ys[i + 1]) + POINT_TOLERANCE_MM;
+    scales[i] = Math.max(Math.hypot(xs[i]! - xs[i + 1]!, ys[i]! - ys[i + 1]!), 1);
+    lows[2 * i] = Math.min(xs[i]!, xs[i + 1]!) - POINT_TOLERANCE_MM;
+    lows[2 * i + 1] = Math.min(ys[i]!, ys[i + 1]!) - POINT_TOLERANCE_MM;
+    highs[2 * i] = Math.max(xs[i]!, xs[i + 1]!) + POINT_TOLERANCE_MM;
+    highs[2 * i + 1] = Math.max(ys[i]!, ys[i + 1]!) + POINT_TOLERANCE_MM;
   }
   for (let i = 0; i < n; i++) {
     // A wall under 1 mm has a wider side tolerance than its box shows: test it against every wall.
-    const shortI = Math.hypot(xs[i] - xs[i + 1], ys[i] - ys[i + 1]) < 1;
+    const shortI = Math.hypot(xs[i]! - xs[i + 1]!, ys[i]! - ys[i + 1]!) < 1;
     for (let j = i + 1; j < n; j++) {
       let touch: boolean;
       if (j === i + 1 || (i === 0 && j === n - 1)) {
@@ -156,22 +156,33 @@ export function findSelfCrossings(points: readonly Vec2[], limit = MAX_REPORTED_
         const shared = j === i + 1 ? i + 1 : i;
         const awayA = j === i + 1 ? i : i + 1;
         const awayB = j === i + 1 ? j + 1 : j;
-        const ux = xs[awayA] - xs[shared];
-        const uy = ys[awayA] - ys[shared];
-        const vx = xs[awayB] - xs[shared];
-        const vy = ys[awayB] - ys[shared];
+        const ux = xs[awayA]! - xs[shared]!;
+        const uy = ys[awayA]! - ys[shared]!;
+        const vx = xs[awayB]! - xs[shared]!;
+        const vy = ys[awayB]! - ys[shared]!;
         touch = Math.abs(ux * vy - uy * vx) / Math.max(Math.hypot(ux, uy), 1) < POINT_TOLERANCE_MM && ux * vx + uy * vy > 0;
       } else if (
         !shortI &&
-        scales[j] > 1 &&
-        (lows[2 * j] > highs[2 * i] + POINT_TOLERANCE_MM ||
-          highs[2 * j] < lows[2 * i] - POINT_TOLERANCE_MM ||
-          lows[2 * j + 1] > highs[2 * i + 1] + POINT_TOLERANCE_MM ||
-          highs[2 * j + 1] < lows[2 * i + 1] - POINT_TOLERANCE_MM)
+        scales[j]! > 1 &&
+        (lows[2 * j]! > highs[2 * i]! + POINT_TOLERANCE_MM ||
+          highs[2 * j]! < lows[2 * i]! - POINT_TOLERANCE_MM ||
+          lows[2 * j + 1]! > highs[2 * i + 1]! + POINT_TOLERANCE_MM ||
+          highs[2 * j + 1]! < lows[2 * i + 1]! - POINT_TOLERANCE_MM)
       ) {
         touch = false;
       } else {
-        touch = wallsTouch(xs[i], ys[i], xs[i + 1], ys[i + 1], scales[i], xs[j], ys[j], xs[j + 1], ys[j + 1], scales[j]);
+        touch = wallsTouch(
+          xs[i]!,
+          ys[i]!,
+          xs[i + 1]!,
+          ys[i + 1]!,
+          scales[i]!,
+          xs[j]!,
+          ys[j]!,
+          xs[j + 1]!,
+          ys[j + 1]!,
+          scales[j]!,
+        );
       }
       if (touch) {
         crossings.push({ wallA: i, wallB: j });
@@ -226,15 +237,15 @@ export function triangulatePolygon(points: readonly Vec2[]): number[] {
   const remaining = Array.from({ length: n }, (_, i) => i);
   const triangles: number[] = [];
   // A point in "positive" orientation for the ear test regardless of the polygon's winding.
-  const at = (i: number): Vec2 => [points[i][0], sign * points[i][1]];
+  const at = (i: number): Vec2 => [points[i]![0], sign * points[i]![1]];
   let guard = 0;
   while (remaining.length > 3 && guard < n * n) {
     guard++;
     let clipped = false;
     for (let k = 0; k < remaining.length; k++) {
-      const ia = remaining[(k + remaining.length - 1) % remaining.length];
-      const ib = remaining[k];
-      const ic = remaining[(k + 1) % remaining.length];
+      const ia = remaining[(k + remaining.length - 1) % remaining.length]!;
+      const ib = remaining[k]!;
+      const ic = remaining[(k + 1) % remaining.length]!;
       const a = at(ia);
       const b = at(ib);
       const c = at(ic);
@@ -262,10 +273,10 @@ export function triangulatePolygon(points: readonly Vec2[]): number[] {
     }
     if (!clipped) break;
   }
-  if (remaining.length === 3) triangles.push(remaining[0], remaining[1], remaining[2]);
+  if (remaining.length === 3) triangles.push(remaining[0]!, remaining[1]!, remaining[2]!);
   else if (remaining.length > 3) {
     // Not simple (validation should have refused it); a fan still gives the viewer something to draw.
-    for (let k = 1; k + 1 < remaining.length; k++) triangles.push(remaining[0], remaining[k], remaining[k + 1]);
+    for (let k = 1; k + 1 < remaining.length; k++) triangles.push(remaining[0]!, remaining[k]!, remaining[k + 1]!);
   }
   return triangles;
 }

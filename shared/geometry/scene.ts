@@ -5,6 +5,7 @@ import { areaMm2, triangulatePolygon } from './polygon';
 import { POINT_TOLERANCE_MM } from './tolerances';
 import { layoutShellWalls, type WallLayout } from './walls';
 import { addScaled, directionDeg, type Vec2 } from './vec';
+import { itemAt } from '../item-at';
 
 // Scene space: metres, y up; plan (x, y) mm sits at scene (x/1000, height/1000, y/1000), so seen
 // from above the scene matches the plan without a mirror. Every mesh is plain typed arrays so the
@@ -97,9 +98,9 @@ class MeshWriter {
   }
 
   private triangle(base: number, a: number, b: number, c: number, points: readonly Vec3[], n: Vec3): void {
-    const pa = points[a];
-    const pb = points[b];
-    const pc = points[c];
+    const pa = points[a]!;
+    const pb = points[b]!;
+    const pc = points[c]!;
     const e1x = pb[0] - pa[0],
       e1y = pb[1] - pa[1],
       e1z = pb[2] - pa[2];
@@ -114,9 +115,9 @@ class MeshWriter {
   /** A flat polygon given as scene points with their uvs and a triangulation of it. */
   polygon(points: readonly Vec3[], uvs: readonly (readonly [number, number])[], triangles: readonly number[], n: Vec3): void {
     const base = this.count;
-    for (let i = 0; i < points.length; i++) this.vertex(points[i], n, uvs[i][0], uvs[i][1]);
+    for (let i = 0; i < points.length; i++) this.vertex(points[i]!, n, uvs[i]![0], uvs[i]![1]);
     for (let k = 0; k + 2 < triangles.length; k += 3)
-      this.triangle(base, triangles[k], triangles[k + 1], triangles[k + 2], points, n);
+      this.triangle(base, triangles[k]!, triangles[k + 1]!, triangles[k + 2]!, points, n);
   }
 
   /** A flat convex quad, corners in order round it. */
@@ -205,12 +206,12 @@ function writeWallFace(
   const base = addScaled(wall.start, wall.outward, faceOffsetMm);
   const at = (u: number, v: number) => planToScene(addScaled(base, wall.direction, u), v);
   for (let i = 0; i + 1 < us.length; i++) {
-    const u0 = us[i];
-    const u1 = us[i + 1];
+    const u0 = us[i]!;
+    const u1 = us[i + 1]!;
     const um = (u0 + u1) / 2;
     for (let j = 0; j + 1 < vs.length; j++) {
-      const v0 = vs[j];
-      const v1 = vs[j + 1];
+      const v0 = vs[j]!;
+      const v1 = vs[j + 1]!;
       const vm = (v0 + v1) / 2;
       if (holes.some((h) => um > h.fromMm && um < h.toMm && vm > h.bottomMm && vm < h.topMm)) continue;
       const tu0 = (u0 - fromMm) * MM_TO_M;
@@ -299,13 +300,9 @@ function writeBox(
   const hy = sizeYMm / 2;
   const topMm = bottomMm + heightMm;
   // Footprint corners in order round the box: (−x,−y) (+x,−y) (+x,+y) (−x,+y).
-  const foot = [
-    [-hx, -hy],
-    [hx, -hy],
-    [hx, hy],
-    [-hx, hy],
-  ].map(([a, b]) => addScaled(addScaled(centre, axisX, a), axisY, b));
-  const sides: [number, number, Vec2, number][] = [
+  const corner = (a: number, b: number) => addScaled(addScaled(centre, axisX, a), axisY, b);
+  const foot: [Vec2, Vec2, Vec2, Vec2] = [corner(-hx, -hy), corner(hx, -hy), corner(hx, hy), corner(-hx, hy)];
+  const sides: [0 | 1 | 2 | 3, 0 | 1 | 2 | 3, Vec2, number][] = [
     [0, 1, [-axisY[0], -axisY[1]], sizeXMm],
     [1, 2, axisX, sizeYMm],
     [2, 3, axisY, sizeXMm],
@@ -445,7 +442,7 @@ export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piec
     const wall = walls[opening.wall];
     if (!wall) continue;
     const placement = placeOpening(wall, opening);
-    placementsByWall[opening.wall].push(placement);
+    itemAt(placementsByWall, opening.wall, 'wall').push(placement);
     if (opening.type === 'door') doorLeaves.push(buildDoorLeaf(wall, opening));
     else if (opening.type === 'window') windows.push(buildWindow(wall, placement));
   }
@@ -463,7 +460,7 @@ export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piec
     pieces.push({ id: piece.id, status: piece.status, mesh: writer.toMesh() });
   }
 
-  const wallData = walls.map((wall) => buildWall(wall, placementsByWall[wall.index], shell.wallHeight));
+  const wallData = walls.map((wall) => buildWall(wall, itemAt(placementsByWall, wall.index, 'wall'), shell.wallHeight));
   const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, pieces, doorLeaves, windows };
   return { ...surfaces, bounds: sceneBounds(surfaces) };
 }
@@ -477,9 +474,9 @@ export function extendBounds(into: Bounds3, mesh: MeshData): Bounds3 {
   const p = mesh.positions;
   for (let i = 0; i < p.length; i += 3) {
     for (let axis = 0; axis < 3; axis++) {
-      const value = p[i + axis];
-      if (value < into.min[axis]) into.min[axis] = value;
-      if (value > into.max[axis]) into.max[axis] = value;
+      const value = p[i + axis]!;
+      if (value < into.min[axis]!) into.min[axis] = value;
+      if (value > into.max[axis]!) into.max[axis] = value;
     }
   }
   return into;

@@ -53,7 +53,7 @@ function outlineProblems(shell: RoomShell, prefix: string): FieldProblem[] {
   const problems: FieldProblem[] = [];
   const n = outline.length;
   for (let i = 0; i < n; i++) {
-    if (distance(outline[i], outline[(i + 1) % n]) < MIN_WALL_LENGTH_MM) {
+    if (distance(outline[i]!, outline[(i + 1) % n]!) < MIN_WALL_LENGTH_MM) {
       problems.push({
         path: join(prefix, `outline[${(i + 1) % n}]`),
         message: `wall ${i} has zero length (corner ${(i + 1) % n} repeats corner ${i})`,
@@ -109,7 +109,7 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
       });
       return;
     }
-    const wallLengthMm = distance(shell.outline[opening.wall], shell.outline[(opening.wall + 1) % n]);
+    const wallLengthMm = distance(shell.outline[opening.wall]!, shell.outline[(opening.wall + 1) % n]!);
     const usableMm = wallLengthMm - 2 * CORNER_MARGIN_MM;
     if (opening.width > usableMm) {
       problems.push({
@@ -182,12 +182,13 @@ function openingProblems(shell: RoomShell, prefix: string): FieldProblem[] {
     // Compare each opening with the one reaching furthest so far, so a wide opening that swallows
     // several small ones is reported against each of them.
     let before = sorted[0];
+    if (!before) continue;
     for (let k = 1; k < sorted.length; k++) {
-      const here = sorted[k];
+      const here = sorted[k]!;
       if (before.to - here.from > OPENING_OVERLAP_TOLERANCE_MM) {
         problems.push({
           path: join(prefix, `openings[${here.index}].offset`),
-          message: `overlaps ${shell.openings[before.index].id} (openings[${before.index}]) on wall ${wall}`,
+          message: `overlaps ${shell.openings[before.index]!.id} (openings[${before.index}]) on wall ${wall}`,
           rule: 'openings-overlap',
           field: 'offset',
           opening: here.index,

@@ -8,6 +8,7 @@ import { boundsMm } from './polygon';
 import { DOOR_LEAF_THICKNESS_MM } from './scene';
 import { layoutShellWalls } from './walls';
 import { addScaled, directionDeg, dot, sub, type Vec2 } from './vec';
+import { itemAt } from '../item-at';
 
 /** How wide a person is taken to be, as a radius (mm): shoulders about half a metre across (common practice, no source). */
 export const BODY_RADIUS_MM = 250;
@@ -243,8 +244,8 @@ export function walkLine(obstacles: WalkObstacles, from: Vec2, to: Vec2, radiusM
 export function insideOutline(outline: readonly Vec2[], p: Vec2): boolean {
   let inside = false;
   for (let i = 0, j = outline.length - 1; i < outline.length; j = i++) {
-    const [xi, yi] = outline[i];
-    const [xj, yj] = outline[j];
+    const [xi, yi] = outline[i]!;
+    const [xj, yj] = outline[j]!;
     if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
   }
   return inside;
@@ -263,12 +264,12 @@ export function floorCentreMm(outline: readonly Vec2[]): [number, number] {
   let cx = 0;
   let cy = 0;
   for (let i = 0, j = outline.length - 1; i < outline.length; j = i++) {
-    const c = outline[j][0] * outline[i][1] - outline[i][0] * outline[j][1];
+    const c = outline[j]![0] * outline[i]![1] - outline[i]![0] * outline[j]![1];
     twiceArea += c;
-    cx += (outline[j][0] + outline[i][0]) * c;
-    cy += (outline[j][1] + outline[i][1]) * c;
+    cx += (outline[j]![0] + outline[i]![0]) * c;
+    cy += (outline[j]![1] + outline[i]![1]) * c;
   }
-  if (twiceArea === 0) return [outline[0][0], outline[0][1]];
+  if (twiceArea === 0) return [...itemAt(outline, 0, 'corner')];
   return [cx / (3 * twiceArea), cy / (3 * twiceArea)];
 }
 

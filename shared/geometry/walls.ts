@@ -88,39 +88,39 @@ function outerCorner(corner: Vec2, dPrev: Vec2, nPrev: Vec2, tPrev: number, dNex
 export function layoutWalls(outline: readonly Vec2[], thicknessesMm: readonly number[]): WallLayout[] {
   const n = outline.length;
   const sign = windingSign(outline);
-  const directions = outline.map((p, i) => normalise(sub(outline[(i + 1) % n], p)));
+  const directions = outline.map((p, i) => normalise(sub(outline[(i + 1) % n]!, p)));
   // For a clockwise (on the plan) outline the room lies to the left in y-up terms, so outward is (dy, −dx).
   const outwards = directions.map((d): [number, number] => [sign * d[1], -sign * d[0]]);
   const corners = outline.map((corner, i) => {
     const prev = (i + n - 1) % n;
     return outerCorner(
       corner,
-      directions[prev],
-      outwards[prev],
-      thicknessesMm[prev],
-      directions[i],
-      outwards[i],
-      thicknessesMm[i],
+      directions[prev]!,
+      outwards[prev]!,
+      thicknessesMm[prev]!,
+      directions[i]!,
+      outwards[i]!,
+      thicknessesMm[i]!,
     );
   });
   return outline.map((start, i) => {
     const next = (i + 1) % n;
-    const end = outline[next];
-    const outerStart = corners[i].startOfNext;
-    const outerEnd = corners[next].endOfPrevious;
+    const end = outline[next]!;
+    const outerStart = corners[i]!.startOfNext;
+    const outerEnd = corners[next]!.endOfPrevious;
     return {
       index: i,
       start: [start[0], start[1]],
       end: [end[0], end[1]],
       lengthMm: distance(start, end),
-      direction: directions[i],
-      outward: outwards[i],
-      thicknessMm: thicknessesMm[i],
+      direction: directions[i]!,
+      outward: outwards[i]!,
+      thicknessMm: thicknessesMm[i]!,
       outerStart,
       outerEnd,
-      outerFromMm: dot(sub(outerStart, start), directions[i]),
-      outerToMm: dot(sub(outerEnd, start), directions[i]),
-      startJoin: corners[i].join,
+      outerFromMm: dot(sub(outerStart, start), directions[i]!),
+      outerToMm: dot(sub(outerEnd, start), directions[i]!),
+      startJoin: corners[i]!.join,
     };
   });
 }

@@ -122,8 +122,8 @@ export function outlineSizeProblem(outline: readonly (readonly [number, number])
   let maxY = -Infinity;
   let twiceArea = 0;
   for (let i = 0; i < outline.length; i++) {
-    const [x, y] = outline[i];
-    const [nx, ny] = outline[(i + 1) % outline.length];
+    const [x, y] = outline[i]!;
+    const [nx, ny] = outline[(i + 1) % outline.length]!;
     minX = Math.min(minX, x);
     minY = Math.min(minY, y);
     maxX = Math.max(maxX, x);

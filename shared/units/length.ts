@@ -21,7 +21,10 @@ export interface ParseLengthOptions {
   allowNegative?: boolean;
 }
 
-const MM_PER_UNIT: Record<string, number> = {
+/** The units a typed length can name; feet-and-inches is written as ft then in. */
+type TypedUnit = Exclude<LengthUnit, 'ftin'> | 'ft';
+
+const MM_PER_UNIT: Record<TypedUnit, number> = {
   mm: 1,
   cm: 10,
   m: 1000,
@@ -30,7 +33,7 @@ const MM_PER_UNIT: Record<string, number> = {
 };
 
 // Every spelling people type, mapped to one unit key; quotes and primes are the imperial marks.
-const UNIT_WORDS: Record<string, string> = {
+const UNIT_WORDS: Record<string, TypedUnit> = {
   mm: 'mm',
   millimetre: 'mm',
   millimetres: 'mm',
@@ -59,7 +62,7 @@ const UNIT_WORDS: Record<string, string> = {
 
 const EXAMPLE_HINT = 'Try 420, 4.2m or 13\' 9".';
 
-type Token = { kind: 'number'; value: number; fraction: boolean } | { kind: 'unit'; unit: string };
+type Token = { kind: 'number'; value: number; fraction: boolean } | { kind: 'unit'; unit: TypedUnit };
 
 function normaliseMarks(text: string): string {
   return text
@@ -97,7 +100,7 @@ function tokenise(text: string): Token[] | null {
     } else if (match[3] !== undefined) {
       tokens.push({ kind: 'number', value: Number(match[3]), fraction: false });
     } else {
-      const unit = UNIT_WORDS[match[4]];
+      const unit = UNIT_WORDS[match[4] ?? ''];
       if (!unit) return null;
       tokens.push({ kind: 'unit', unit });
     }
@@ -107,7 +110,7 @@ function tokenise(text: string): Token[] | null {
 
 interface Term {
   value: number;
-  unit: string | null;
+  unit: TypedUnit | null;
 }
 
 // Folds "9 1/2" into 9.5 and pairs each quantity with the unit after it (if any).
@@ -134,13 +137,14 @@ function toTerms(tokens: Token[]): Term[] | null {
 
 function termsToMm(terms: Term[], bareUnit: LengthUnit): number | null {
   if (terms.length === 1) {
-    const [term] = terms;
+    const term = terms[0]!;
     const unit = term.unit ?? (bareUnit === 'ftin' ? 'ft' : bareUnit);
     return term.value * MM_PER_UNIT[unit];
   }
   // Two quantities are only read as feet then inches: 13' 9", 13ft 9in, or 13' 9 with the inch mark left off.
-  if (terms.length === 2 && terms[0].unit === 'ft' && (terms[1].unit === 'in' || terms[1].unit === null)) {
-    return terms[0].value * MM_PER_FOOT + terms[1].value * MM_PER_INCH;
+  const [feet, inches] = terms;
+  if (terms.length === 2 && feet?.unit === 'ft' && (inches?.unit === 'in' || inches?.unit === null)) {
+    return feet.value * MM_PER_FOOT + inches.value * MM_PER_INCH;
   }
   return null;
 }

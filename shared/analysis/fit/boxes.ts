@@ -3,6 +3,7 @@
 // plan mm (x right, y down).
 import type { Piece } from '../../schemas/option';
 import { addScaled, cross, directionDeg, dot, sub, type Vec2 } from '../../geometry/vec';
+import { itemAt } from '../../item-at';
 
 /** Two footprints or height ranges may share this much (mm) and still only touch: a tape reads to about 1 mm. */
 export const TOUCH_TOLERANCE_MM = 1;
@@ -83,7 +84,7 @@ function projectOnto(points: readonly Vec2[], axis: Vec2): [number, number] {
 function edgeNormals(points: readonly Vec2[]): [number, number][] {
   const normals: [number, number][] = [];
   for (let i = 0; i < points.length; i++) {
-    const e = sub(points[(i + 1) % points.length], points[i]);
+    const e = sub(points[(i + 1) % points.length]!, points[i]!);
     const l = Math.hypot(e[0], e[1]);
     if (l > 0) normals.push([-e[1] / l, e[0] / l]);
   }
@@ -137,8 +138,8 @@ export function segmentCrossesConvex(a: Vec2, b: Vec2, polygon: readonly Vec2[],
 export function pointInPolygon(p: Vec2, polygon: readonly Vec2[]): boolean {
   let inside = false;
   for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
-    const [xi, yi] = polygon[i];
-    const [xj, yj] = polygon[j];
+    const [xi, yi] = polygon[i]!;
+    const [xj, yj] = polygon[j]!;
     if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
   }
   return inside;
@@ -160,11 +161,11 @@ export function distanceToSegmentMm(p: Vec2, a: Vec2, b: Vec2): number {
 
 /** The point of a plan shape (closed polygon, or a segment given as two points; mm) nearest to p. */
 export function closestOnShape(p: Vec2, shape: readonly Vec2[]): [number, number] {
-  let best: [number, number] = [shape[0][0], shape[0][1]];
+  let best: [number, number] = [...itemAt(shape, 0, 'point')];
   let bestMm = Infinity;
   const edges = shape.length === 2 ? 1 : shape.length;
   for (let k = 0; k < edges; k++) {
-    const q = closestOnSegment(p, shape[k], shape[(k + 1) % shape.length]);
+    const q = closestOnSegment(p, shape[k]!, shape[(k + 1) % shape.length]!);
     const d = Math.hypot(p[0] - q[0], p[1] - q[1]);
     if (d < bestMm) {
       bestMm = d;
@@ -195,8 +196,8 @@ export interface ClosestPair {
  */
 export function closestPair(a: readonly Vec2[], b: readonly Vec2[]): ClosestPair {
   const edges = (shape: readonly Vec2[]): [Vec2, Vec2][] =>
-    shape.length === 2 ? [[shape[0], shape[1]]] : shape.map((p, i) => [p, shape[(i + 1) % shape.length]]);
-  let best: ClosestPair = { distanceMm: Infinity, from: [a[0][0], a[0][1]], to: [b[0][0], b[0][1]] };
+    shape.length === 2 ? [[shape[0]!, shape[1]!]] : shape.map((p, i) => [p, shape[(i + 1) % shape.length]!]);
+  let best: ClosestPair = { distanceMm: Infinity, from: [...itemAt(a, 0, 'point')], to: [...itemAt(b, 0, 'point')] };
   for (const [p, q] of edges(a)) {
     for (const [r, s] of edges(b)) {
       if (segmentsCross(p, q, r, s)) {

@@ -24,7 +24,8 @@ export function clearPassMm(opening: Opening): { widthMm: number; heightMm: numb
  * the other. This ignores turning it round corners in a hallway or a stair: a known simplification.
  */
 export function passesThrough(sizesMm: readonly [number, number, number], clear: { widthMm: number; heightMm: number }): boolean {
-  const [a, b] = [...sizesMm].sort((x, y) => x - y);
+  const sorted: [number, number, number] = [...sizesMm];
+  const [a, b] = sorted.sort((x, y) => x - y);
   const across = clear.widthMm - CARRY_ALLOWANCE_MM;
   const up = clear.heightMm - CARRY_ALLOWANCE_MM;
   return (a <= across && b <= up) || (b <= across && a <= up);

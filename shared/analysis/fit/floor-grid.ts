@@ -93,14 +93,14 @@ export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly Pie
     const y = originY + (j + 0.5) * cellMm;
     crossings.length = 0;
     for (let k = 0; k < outline.length; k++) {
-      const a = outline[k];
-      const b = outline[(k + 1) % outline.length];
+      const a = outline[k]!;
+      const b = outline[(k + 1) % outline.length]!;
       if (a[1] > y !== b[1] > y) crossings.push(a[0] + ((y - a[1]) * (b[0] - a[0])) / (b[1] - a[1]));
     }
     crossings.sort((p, q) => p - q);
     for (let k = 0; k + 1 < crossings.length; k += 2) {
-      const from = Math.max(0, Math.ceil((crossings[k] - originX) / cellMm - 0.5));
-      const to = Math.min(nx - 1, Math.floor((crossings[k + 1] - originX) / cellMm - 0.5));
+      const from = Math.max(0, Math.ceil((crossings[k]! - originX) / cellMm - 0.5));
+      const to = Math.min(nx - 1, Math.floor((crossings[k + 1]! - originX) / cellMm - 0.5));
       label.fill(FREE, j * nx + from, j * nx + to + 1);
     }
   }
@@ -151,7 +151,7 @@ export function distanceField(grid: FloorGrid): DistanceField {
     const row = j * nx;
     for (let i = 0; i < nx; i++) {
       if (label[row + i] !== FREE) lastBlocked[i] = j;
-      columnRow[row + i] = lastBlocked[i];
+      columnRow[row + i] = lastBlocked[i]!;
     }
   }
   const nextBlocked = lastBlocked.fill(-1);
@@ -160,8 +160,8 @@ export function distanceField(grid: FloorGrid): DistanceField {
     for (let i = 0; i < nx; i++) {
       const cell = rowStart + i;
       if (label[cell] !== FREE) nextBlocked[i] = j;
-      const next = nextBlocked[i];
-      const above = columnRow[cell];
+      const next = nextBlocked[i]!;
+      const above = columnRow[cell]!;
       const row = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
       columnRow[cell] = row;
       columnSquared[cell] = row < 0 ? Infinity : (row - j) * (row - j);
@@ -176,13 +176,13 @@ export function distanceField(grid: FloorGrid): DistanceField {
     const row = j * nx;
     let k = -1;
     for (let q = 0; q < nx; q++) {
-      const fq = columnSquared[row + q];
+      const fq = columnSquared[row + q]!;
       if (fq === Infinity) continue;
       let s = -Infinity;
       while (k >= 0) {
-        const p = sites[k];
-        s = (fq + q * q - (columnSquared[row + p] + p * p)) / (2 * (q - p));
-        if (s > bounds[k]) break;
+        const p = sites[k]!;
+        s = (fq + q * q - (columnSquared[row + p]! + p * p)) / (2 * (q - p));
+        if (s > bounds[k]!) break;
         k--;
       }
       k++;
@@ -192,10 +192,10 @@ export function distanceField(grid: FloorGrid): DistanceField {
     }
     let at = 0;
     for (let x = 0; x < nx; x++) {
-      while (bounds[at + 1] < x) at++;
-      const q = sites[at];
-      squaredCells[row + x] = (x - q) * (x - q) + columnSquared[row + q];
-      nearest[row + x] = columnRow[row + q] * nx + q;
+      while (bounds[at + 1]! < x) at++;
+      const q = sites[at]!;
+      squaredCells[row + x] = (x - q) * (x - q) + columnSquared[row + q]!;
+      nearest[row + x] = columnRow[row + q]! * nx + q;
     }
   }
   return { squaredCells, nearest };

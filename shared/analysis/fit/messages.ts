@@ -26,11 +26,11 @@ export function roundToCmMm(lengthMm: number): number {
 export function theName(piece: Pick<Piece, 'id' | 'name'>): string {
   const name = piece.name.trim();
   if (name === '') return `the piece “${piece.id}”`;
-  const opensWithAbbreviation = name.length > 1 && /\p{Lu}/u.test(name[1]);
-  return `the ${opensWithAbbreviation ? name : name[0].toLocaleLowerCase() + name.slice(1)}`;
+  const opensWithAbbreviation = name.length > 1 && /\p{Lu}/u.test(name.charAt(1));
+  return `the ${opensWithAbbreviation ? name : name.charAt(0).toLocaleLowerCase() + name.slice(1)}`;
 }
 
 /** A sentence's first letter in capitals ("The wardrobe …"). */
 export function capitalise(text: string): string {
-  return text === '' ? text : text[0].toUpperCase() + text.slice(1);
+  return text === '' ? text : text.charAt(0).toUpperCase() + text.slice(1);
 }

@@ -8,7 +8,7 @@ function cornerOutside(corner: Vec2, outline: readonly Vec2[]): boolean {
   if (pointInPolygon(corner, outline)) return false;
   // A corner on the wall face (flush, or lost in rounding) is inside for the designer.
   for (let i = 0; i < outline.length; i++) {
-    if (distanceToSegmentMm(corner, outline[i], outline[(i + 1) % outline.length]) <= TOUCH_TOLERANCE_MM) return false;
+    if (distanceToSegmentMm(corner, outline[i]!, outline[(i + 1) % outline.length]!) <= TOUCH_TOLERANCE_MM) return false;
   }
   return true;
 }
@@ -25,7 +25,7 @@ export function findOutsideRoom(shell: Pick<RoomShell, 'outline'>, boxes: readon
     // A wall further from the box's centre than its half-diagonal (and a millimetre) cannot run through it.
     const reachMm = Math.hypot(box.halfWidthMm, box.halfDepthMm) + TOUCH_TOLERANCE_MM;
     const crossesWall = outline.some((start, i) => {
-      const end = outline[(i + 1) % outline.length];
+      const end = outline[(i + 1) % outline.length]!;
       return (
         distanceToSegmentMm(box.centre, start, end) <= reachMm &&
         segmentCrossesConvex(start, end, box.corners, TOUCH_TOLERANCE_MM)

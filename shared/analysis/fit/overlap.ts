@@ -12,8 +12,8 @@ export function findOverlaps(boxes: readonly PieceBox[]): Finding[] {
   const findings: Finding[] = [];
   for (let i = 0; i < solid.length; i++) {
     for (let j = i + 1; j < solid.length; j++) {
-      const a = solid[i];
-      const b = solid[j];
+      const a = solid[i]!;
+      const b = solid[j]!;
       const sharedHeightMm = Math.min(a.topMm, b.topMm) - Math.max(a.bottomMm, b.bottomMm);
       if (sharedHeightMm <= TOUCH_TOLERANCE_MM) continue;
       // A cheap distance test first: boxes further apart than their half-diagonals cannot meet.

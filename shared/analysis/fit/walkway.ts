@@ -10,6 +10,7 @@ import type { Finding } from '../takeoff';
 import { blocksWalking, closestOnShape, closestPair, distanceToSegmentMm, pointInPolygon, type PieceBox } from './boxes';
 import { cellAt, cellCentreMm, distanceField, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
+import { itemAt } from '../../item-at';
 
 /** Side of a floor cell (mm): fine enough to tell a 60 cm gap from a 62 cm one, coarse enough to check a room in a few milliseconds. */
 export const WALKWAY_CELL_MM = 25;
@@ -82,7 +83,7 @@ function shortestRunsMm(grid: FloorGrid): Float64Array {
   for (let back = 0; back < cells; back++) {
     if (label[back] === FREE) continue;
     for (let k = 0; k < 4; k++) {
-      const step = steps[k];
+      const step = steps[k]!;
       const first = back + step;
       // Off the grid, or past its edge onto the blocked ring of the next row: no run starts here.
       if (first < 0 || first >= cells || label[first] !== FREE) continue;
@@ -92,8 +93,8 @@ function shortestRunsMm(grid: FloorGrid): Float64Array {
       // The free cells between the two ends, each a step long: their edges are the obstacles' edges.
       // Every direction moves one column a step except straight down, which moves a whole row.
       const count = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
-      const runMm = (count - 1) * cellMm * RUN_STEP_CELLS[k];
-      for (let cell = first; cell !== ahead; cell += step) if (runMm < shortest[cell]) shortest[cell] = runMm;
+      const runMm = (count - 1) * cellMm * RUN_STEP_CELLS[k]!;
+      for (let cell = first; cell !== ahead; cell += step) if (runMm < shortest[cell]!) shortest[cell] = runMm;
     }
   }
   return shortest;
@@ -138,14 +139,14 @@ class Widths {
    * serves every later, lower cap.
    */
   cappedAt(cell: number, keyMm: number): number {
-    const known = this.cappedMm[cell];
+    const known = this.cappedMm[cell]!;
     if (known > 0) return known - 1 < keyMm ? known - 1 : keyMm;
     const cellMm = this.grid.cellMm;
-    const nearSideMm = (Math.sqrt(this.squaredCells[cell]) - 0.5) * cellMm;
+    const nearSideMm = (Math.sqrt(this.squaredCells[cell]!) - 0.5) * cellMm;
     let widthMm: number;
     if (2 * nearSideMm >= this.enoughMm) widthMm = 2 * nearSideMm;
     else {
-      const runMm = this.shortestRunMm[cell];
+      const runMm = this.shortestRunMm[cell]!;
       // A chord across found past the cap, like one past the shortest run, cannot change the answer.
       widthMm =
         runMm <= nearSideMm + cellMm / 2 ? runMm : Math.min(this.across(cell, Math.min(this.enoughMm, runMm, keyMm)), runMm);
@@ -163,18 +164,18 @@ class Widths {
    * across reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
    */
   knownWiderThan(cell: number, widthMm: number): boolean {
-    if (this.cappedMm[cell] - 1 > Math.floor(widthMm)) return true;
-    return (2 * Math.sqrt(this.squaredCells[cell]) - CHORD_SHORTFALL_CELLS) * this.grid.cellMm > widthMm;
+    if (this.cappedMm[cell]! - 1 > Math.floor(widthMm)) return true;
+    return (2 * Math.sqrt(this.squaredCells[cell]!) - CHORD_SHORTFALL_CELLS) * this.grid.cellMm > widthMm;
   }
 
   /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
   lowerBoundMm(cell: number): number {
-    return 2 * (Math.sqrt(this.squaredCells[cell]) - 0.5) * this.grid.cellMm;
+    return 2 * (Math.sqrt(this.squaredCells[cell]!) - 0.5) * this.grid.cellMm;
   }
 
   /** Clear width (mm) at a free cell; Infinity where nothing movable bounds it within reach. */
   at(cell: number): number {
-    const known = this.widthMm[cell];
+    const known = this.widthMm[cell]!;
     if (!Number.isNaN(known)) return known;
     const value = this.value(cell);
     this.widthMm[cell] = value;
@@ -202,7 +203,7 @@ class Widths {
       }
       // Skip ahead through open floor: no blocked centre lies nearer than this cell's distance, and
       // a sample strays at most √½ cell from the centre it rounds to, on either end of the jump.
-      t += Math.max(RAY_STEP_CELLS, Math.floor(Math.sqrt(squared[other]) - RAY_SKIP_MARGIN_CELLS));
+      t += Math.max(RAY_STEP_CELLS, Math.floor(Math.sqrt(squared[other]!) - RAY_SKIP_MARGIN_CELLS));
     }
     return Infinity;
   }
@@ -214,8 +215,8 @@ class Widths {
   /** The chord across from the nearest obstacle: its length (mm) and far end, or Infinity. */
   private across(cell: number, reachMm: number): number {
     const { nx, cellMm } = this.grid;
-    const nearestCell = this.nearest[cell];
-    const d1 = Math.sqrt(this.squaredCells[cell]);
+    const nearestCell = this.nearest[cell]!;
+    const d1 = Math.sqrt(this.squaredCells[cell]!);
     const nearSideMm = (d1 - 0.5) * cellMm;
     const i = cell % nx;
     const j = (cell - i) / nx;
@@ -234,9 +235,9 @@ class Widths {
    * far as it could still be the shorter: a chord found past that is longer than a run anyway.
    */
   private value(cell: number): number {
-    const nearSideMm = (Math.sqrt(this.squaredCells[cell]) - 0.5) * this.grid.cellMm;
+    const nearSideMm = (Math.sqrt(this.squaredCells[cell]!) - 0.5) * this.grid.cellMm;
     if (2 * nearSideMm >= this.enoughMm) return 2 * nearSideMm;
-    const runMm = this.shortestRunMm[cell];
+    const runMm = this.shortestRunMm[cell]!;
     // The far side lies at least half a cell off, so a run that short already wins.
     if (runMm <= nearSideMm + this.grid.cellMm / 2) return runMm;
     return Math.min(this.across(cell, Math.min(this.enoughMm, runMm)), runMm);
@@ -245,25 +246,25 @@ class Widths {
   /** The obstacles at the two ends of a measured cell's chord and where they are (plan mm), or null if it is wide. */
   gap(cell: number): Gap | null {
     const { nx, cellMm, label } = this.grid;
-    const nearSideMm = (Math.sqrt(this.squaredCells[cell]) - 0.5) * cellMm;
+    const nearSideMm = (Math.sqrt(this.squaredCells[cell]!) - 0.5) * cellMm;
     if (!Number.isFinite(this.at(cell)) || 2 * nearSideMm >= this.enoughMm) return null;
     // The chord that gave the width: the one across first, then the runs in their order.
     let widthMm = this.across(cell, this.enoughMm);
     let endA = -1;
     let endB = -1;
     if (widthMm < Infinity) {
-      endA = this.nearest[cell];
+      endA = this.nearest[cell]!;
       endB = this.rayHit;
     }
     for (let k = 0; k < RUN_DIRECTIONS.length; k++) {
-      const [di, dj] = RUN_DIRECTIONS[k];
+      const [di, dj] = RUN_DIRECTIONS[k]!;
       const step = dj * nx + di;
       let back = cell - step;
       while (label[back] === FREE) back -= step;
       let ahead = cell + step;
       while (label[ahead] === FREE) ahead += step;
       const steps = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
-      const runMm = (steps - 1) * cellMm * RUN_STEP_CELLS[k];
+      const runMm = (steps - 1) * cellMm * RUN_STEP_CELLS[k]!;
       if (runMm < widthMm && !this.bothWalls(back, ahead)) {
         widthMm = runMm;
         endA = back;
@@ -272,7 +273,7 @@ class Widths {
     }
     if (endA < 0) return null;
     return {
-      sides: [label[endA], label[endB]],
+      sides: [label[endA]!, label[endB]!],
       ends: [cellCentreMm(this.grid, endA), cellCentreMm(this.grid, endB)],
     };
   }
@@ -306,17 +307,17 @@ class WidestFirst {
     }
     const entry = this.count++;
     this.cells[entry] = cell;
-    this.next[entry] = this.heads[keyMm];
+    this.next[entry] = this.heads[keyMm]!;
     this.heads[keyMm] = entry;
   }
 
   /** Takes the widest waiting cell, or −1 when none waits; its key (mm) is then `keyMm`. */
   pop(): number {
-    while (this.top >= 0 && this.heads[this.top] < 0) this.top--;
+    while (this.top >= 0 && this.heads[this.top]! < 0) this.top--;
     if (this.top < 0) return -1;
-    const entry = this.heads[this.top];
-    this.heads[this.top] = this.next[entry];
-    return this.cells[entry];
+    const entry = this.heads[this.top]!;
+    this.heads[this.top] = this.next[entry]!;
+    return this.cells[entry]!;
   }
 
   /** Key (mm) of the cell last taken. */
@@ -356,18 +357,18 @@ function widestRoutes(
   const queue = new WidestFirst(limitMm);
   for (const { cell, opening } of sources) {
     const key = Math.floor(Math.min(widths.at(cell), limitMm));
-    if (key <= bottleneckMm[cell]) continue;
+    if (key <= bottleneckMm[cell]!) continue;
     bottleneckMm[cell] = key;
     wayIn[cell] = opening;
     queue.push(cell, key);
   }
   for (let cell = queue.pop(); cell >= 0; cell = queue.pop()) {
     const keyMm = queue.keyMm;
-    if (keyMm < bottleneckMm[cell]) continue;
+    if (keyMm < bottleneckMm[cell]!) continue;
     // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
     for (let n = 0; n < 4; n++) {
       const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
-      const known = bottleneckMm[next];
+      const known = bottleneckMm[next]!;
       if (known >= keyMm) continue;
       // Where even the nearest obstacle leaves room for the route so far, the cell cannot narrow it.
       const through = widths.lowerBoundMm(next) >= keyMm ? keyMm : widths.cappedAt(next, keyMm);
@@ -420,11 +421,11 @@ function roundPoint(p: Vec2): [number, number] {
 
 /** The nearest wall (inside-face segment, plan mm) to a point outside the free floor. */
 function nearestWall(outline: readonly Vec2[], p: Vec2): [Vec2, Vec2] {
-  let best: [Vec2, Vec2] = [outline[0], outline[1 % outline.length]];
+  let best: [Vec2, Vec2] = [itemAt(outline, 0, 'corner'), itemAt(outline, 1 % outline.length, 'corner')];
   let bestMm = Infinity;
   for (let k = 0; k < outline.length; k++) {
-    const a = outline[k];
-    const b = outline[(k + 1) % outline.length];
+    const a = outline[k]!;
+    const b = outline[(k + 1) % outline.length]!;
     const d = distanceToSegmentMm(p, a, b);
     if (d < bestMm) {
       bestMm = d;
@@ -435,11 +436,11 @@ function nearestWall(outline: readonly Vec2[], p: Vec2): [Vec2, Vec2] {
 }
 
 function sideShape(side: number, end: Vec2, obstacles: readonly PieceBox[], outline: readonly Vec2[]): readonly Vec2[] {
-  return side === WALL ? nearestWall(outline, end) : obstacles[side].corners;
+  return side === WALL ? nearestWall(outline, end) : itemAt(obstacles, side, 'obstacle').corners;
 }
 
 function sideName(side: number, obstacles: readonly PieceBox[]): string {
-  return side === WALL ? 'the wall' : theName(obstacles[side].piece);
+  return side === WALL ? 'the wall' : theName(itemAt(obstacles, side, 'obstacle').piece);
 }
 
 /**
@@ -459,7 +460,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   const walls = layoutShellWalls(shell);
   const sources: { cell: number; opening: number }[] = [];
   ways.forEach((way, opening) => {
-    const wall = walls[way.wall];
+    const wall = itemAt(walls, way.wall, 'wall');
     const placement = placeOpening(wall, way);
     const inward: Vec2 = [-wall.outward[0], -wall.outward[1]];
     for (let s = 0; s <= way.width; s += grid.cellMm / 2) {
@@ -479,8 +480,9 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     let bestCell = -1;
     let bottleneckMm = -1;
     for (const cell of front) {
-      if (routes.bottleneckMm[cell] > bottleneckMm) {
-        bottleneckMm = routes.bottleneckMm[cell];
+      const reached = routes.bottleneckMm[cell]!;
+      if (reached > bottleneckMm) {
+        bottleneckMm = reached;
         bestCell = cell;
       }
     }
@@ -506,10 +508,10 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
         narrowest = cell;
         narrowestMm = widths.at(cell);
       }
-      if (routes.parent[cell] < 0) break;
-      cell = routes.parent[cell];
+      if (routes.parent[cell]! < 0) break;
+      cell = routes.parent[cell]!;
     }
-    const opening = ways[routes.wayIn[cell]];
+    const opening = itemAt(ways, routes.wayIn[cell]!, 'way in');
     const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.
     if ((finding.measured_mm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
@@ -540,9 +542,10 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
         between = [gap.ends[0], gap.ends[1]];
       }
       // Pieces before walls, and pieces in the designer's order.
-      const sides = [sideA, sideB].sort((a, b) => (a === WALL ? 1 : b === WALL ? -1 : a - b));
+      const sides: [number, number] = [sideA, sideB];
+      sides.sort((a, b) => (a === WALL ? 1 : b === WALL ? -1 : a - b));
       words = ` between ${sideName(sides[0], obstacles)} and ${sideName(sides[1], obstacles)}`;
-      for (const side of sides) if (side !== WALL && side !== index) involved.push(obstacles[side].piece.id);
+      for (const side of sides) if (side !== WALL && side !== index) involved.push(itemAt(obstacles, side, 'obstacle').piece.id);
       if (sideA !== index && sideB !== index) words += ` to reach ${theName(piece)}`;
     } else {
       words = ` on the way to ${theName(piece)}`;

@@ -51,7 +51,7 @@ class Writer {
   /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal`. */
   quad(p: readonly V3[], n: readonly V3[], uv: readonly [number, number][], faceNormal: V3): void {
     const base = this.count;
-    for (let i = 0; i < p.length; i++) this.vertex(p[i], n[i], uv[i][0], uv[i][1]);
+    for (let i = 0; i < p.length; i++) this.vertex(p[i]!, n[i]!, uv[i]![0], uv[i]![1]);
     this.fan(base, p.length, faceNormal);
   }
 
@@ -77,18 +77,18 @@ class Writer {
   /** Triangles of a fan over the `n` vertices written from `base`, facing the normal f. */
   fan(base: number, n: number, f: V3): void {
     const P = this.positions;
-    const ax = P[base * 3],
-      ay = P[base * 3 + 1],
-      az = P[base * 3 + 2];
+    const ax = P[base * 3]!,
+      ay = P[base * 3 + 1]!,
+      az = P[base * 3 + 2]!;
     for (let k = 1; k + 1 < n; k++) {
       const b = base + k;
       const c = b + 1;
-      const e1x = P[b * 3] - ax,
-        e1y = P[b * 3 + 1] - ay,
-        e1z = P[b * 3 + 2] - az;
-      const e2x = P[c * 3] - ax,
-        e2y = P[c * 3 + 1] - ay,
-        e2z = P[c * 3 + 2] - az;
+      const e1x = P[b * 3]! - ax,
+        e1y = P[b * 3 + 1]! - ay,
+        e1z = P[b * 3 + 2]! - az;
+      const e2x = P[c * 3]! - ax,
+        e2y = P[c * 3 + 1]! - ay,
+        e2z = P[c * 3 + 2]! - az;
       const facing = (e1y * e2z - e1z * e2y) * f[0] + (e1z * e2x - e1x * e2z) * f[1] + (e1x * e2y - e1y * e2x) * f[2];
       if (facing >= 0) this.indices.push(base, c, b);
       else this.indices.push(base, b, c);
@@ -228,27 +228,27 @@ function writeExtrusion(
   centre: [number, number] = [0, 0],
 ): void {
   const n = points.length;
-  const bx = (i: number) => centre[0] + (points[i][0] - centre[0]) * bottomScale;
-  const by = (i: number) => centre[1] + (points[i][1] - centre[1]) * bottomScale;
+  const bx = (i: number) => centre[0] + (points[i]![0] - centre[0]) * bottomScale;
+  const by = (i: number) => centre[1] + (points[i]![1] - centre[1]) * bottomScale;
   const face: V3 = [0, 0, 0];
   let u = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    const step = Math.hypot(points[j][0] - points[i][0], points[j][1] - points[i][1]);
-    const [nix, niy] = normals[i];
-    const [njx, njy] = normals[j];
+    const step = Math.hypot(points[j]![0] - points[i]![0], points[j]![1] - points[i]![1]);
+    const [nix, niy] = normals[i]!;
+    const [njx, njy] = normals[j]!;
     const base = w.count;
     w.raw(bx(i), by(i), z0, nix, niy, 0, u * MM, z0 * MM);
     w.raw(bx(j), by(j), z0, njx, njy, 0, (u + step) * MM, z0 * MM);
-    w.raw(points[j][0], points[j][1], z1, njx, njy, 0, (u + step) * MM, z1 * MM);
-    w.raw(points[i][0], points[i][1], z1, nix, niy, 0, u * MM, z1 * MM);
+    w.raw(points[j]![0], points[j]![1], z1, njx, njy, 0, (u + step) * MM, z1 * MM);
+    w.raw(points[i]![0], points[i]![1], z1, nix, niy, 0, u * MM, z1 * MM);
     face[0] = (nix + njx) / 2;
     face[1] = (niy + njy) / 2;
     w.fan(base, 4, face);
     u += step;
   }
   let base = w.count;
-  for (let i = 0; i < n; i++) w.raw(points[i][0], points[i][1], z1, 0, 0, 1, points[i][0] * MM, points[i][1] * MM);
+  for (let i = 0; i < n; i++) w.raw(points[i]![0], points[i]![1], z1, 0, 0, 1, points[i]![0] * MM, points[i]![1] * MM);
   w.fan(base, n, [0, 0, 1]);
   base = w.count;
   for (let i = 0; i < n; i++) w.raw(bx(i), by(i), z0, 0, 0, -1, bx(i) * MM, by(i) * MM);
@@ -307,12 +307,12 @@ function placeMesh(mesh: MeshData, f: Frame): MeshData {
   const [a0, a1] = f.ax;
   const [b0, b1] = f.ay;
   for (let i = 0; i < n; i += 3) {
-    positions[i] = (f.cx + p[i] * a0 + p[i + 1] * b0) * MM;
-    positions[i + 1] = (f.elevation + p[i + 2]) * MM;
-    positions[i + 2] = (f.cy + p[i] * a1 + p[i + 1] * b1) * MM;
-    normals[i] = q[i] * a0 + q[i + 1] * b0;
-    normals[i + 1] = q[i + 2];
-    normals[i + 2] = q[i] * a1 + q[i + 1] * b1;
+    positions[i] = (f.cx + p[i]! * a0 + p[i + 1]! * b0) * MM;
+    positions[i + 1] = (f.elevation + p[i + 2]!) * MM;
+    positions[i + 2] = (f.cy + p[i]! * a1 + p[i + 1]! * b1) * MM;
+    normals[i] = q[i]! * a0 + q[i + 1]! * b0;
+    normals[i + 1] = q[i + 2]!;
+    normals[i + 2] = q[i]! * a1 + q[i + 1]! * b1;
   }
   // uvs and triangles do not change with where the piece stands: shared, never written to.
   return { positions, normals, uvs: mesh.uvs, indices: mesh.indices };

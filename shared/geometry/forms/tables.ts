@@ -2,6 +2,7 @@
 // and bedside tables, and desks.
 import type { PieceSettings } from '../../schemas/piece-kind';
 import { DINING_TABLE_HEIGHT, fitDefault } from './ergonomics';
+import { itemAt } from '../../item-at';
 import {
   HANDLE_PROUD_MM,
   boxPart,
@@ -98,8 +99,9 @@ export function coffeeTableForm(box: FormBox, settings: PieceSettings): Part[] {
   const parts = table(w, d, h, settings.top === 'round');
   if (settings.top === 'round') return parts;
   const legs = parts.filter((p) => p.shape === 'leg');
-  const lx = Math.max(...legs.map((l) => l.x)) + legs[0].w / 2;
-  const ly = Math.max(...legs.map((l) => l.y)) + legs[0].w / 2;
+  const legWidth = itemAt(legs, 0, 'leg').w;
+  const lx = Math.max(...legs.map((l) => l.x)) + legWidth / 2;
+  const ly = Math.max(...legs.map((l) => l.y)) + legWidth / 2;
   const shelfZ = h * 0.22;
   parts.push(panelPart(-lx, lx, -ly, ly, shelfZ, shelfZ + clamp(h * 0.04, 10, 20), { slot: 'main' }));
   return parts;

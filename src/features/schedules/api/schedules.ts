@@ -21,8 +21,8 @@ export const scheduleKeys = {
 /** The query string of the settings, plus the counted options when given. */
 export function settingsQuery(settings: TakeoffSettings, countedOptionIds: readonly string[] = []): string {
   const query = takeoffQuery(settings);
-  if (countedOptionIds.length > 0) query.set('options', [...countedOptionIds].sort().join(','));
-  return query.toString();
+  if (countedOptionIds.length === 0) return query;
+  return `${query}&options=${encodeURIComponent([...countedOptionIds].sort().join(','))}`;
 }
 
 export const projectTakeoffQuery = (projectId: string, query: string) =>
