@@ -6,6 +6,11 @@ import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
+/**
+ * @param {string[]} groups
+ * @param {string} message
+ * @returns {import('eslint').Linter.RulesRecord}
+ */
 const noImportFrom = (groups, message) => ({
   'no-restricted-imports': ['error', { patterns: [{ group: groups, message }] }],
 });

@@ -6,6 +6,7 @@ import { spawnSync } from 'node:child_process';
 import { clusterUrl, ensureDatabase, startCluster, stopCluster, type ClusterOptions } from './lib/postgres';
 import { buildClientIfStale } from './lib/build-client';
 import { lintChecks, printChecks } from './lint';
+import { printTypecheck, typecheck } from './typecheck';
 
 const root = resolve(import.meta.dirname, '..');
 const out = join(root, '.test-output');
@@ -18,6 +19,7 @@ interface Tally {
 }
 const total: Tally = { passed: 0, failed: 0, skipped: 0 };
 let lintSummary = '';
+let typecheckSummary = '';
 
 function step(name: string): boolean {
   return only.length === 0 || only.includes(name);
@@ -85,13 +87,13 @@ async function main(): Promise<number> {
     }
     if (step('typecheck')) {
       console.log('\n[test] typecheck');
-      const tsc = spawnSync(
-        process.execPath,
-        [join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json'],
-        { cwd: root, stdio: 'inherit' },
-      );
-      if (tsc.status === 0) total.passed += 1;
-      else total.failed += 1;
+      const results = typecheck();
+      printTypecheck(results);
+      for (const r of results) {
+        if (r.passed) total.passed += 1;
+        else total.failed += 1;
+      }
+      typecheckSummary = results.map((r) => `${r.name} ${r.passed ? 'passed' : 'failed'}`).join(', ');
     }
     const projects = ['unit', 'api', 'ops'].filter((p) => only.includes(p));
     if (only.length === 0) {
@@ -110,6 +112,7 @@ async function main(): Promise<number> {
     if (started) stopCluster(cluster);
   }
   if (lintSummary) console.log(`\n[test] lint problems: ${lintSummary}`);
+  if (typecheckSummary) console.log(`[test] typecheck: ${typecheckSummary}`);
   const skipped = total.skipped ? `, ${total.skipped} skipped` : '';
   console.log(`\n${total.passed} passed, ${total.failed} failed${skipped}`);
   return total.failed > 0 || total.passed === 0 ? 1 : 0;

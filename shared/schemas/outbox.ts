@@ -15,8 +15,9 @@ export const outboxQuerySchema = z.object({
     .string()
     .regex(CURSOR, 'Not a page of this outbox.')
     .transform((v) => {
+      // The regex above has matched, so both groups are there.
       const [, ms, id] = CURSOR.exec(v)!;
-      return { at: new Date(Number(ms)), id };
+      return { at: new Date(Number(ms)), id: id! };
     })
     .optional(),
   limit: z.coerce
