@@ -1,9 +1,10 @@
 // npm run lint: ESLint (rules and import boundaries inside files), dependency-cruiser (boundaries
-// between folders and no import circles), Prettier (the tree stays formatted) and jscpd (code written twice: reported, not failing, until
+// between folders and no import circles), Prettier (the tree stays formatted), the Layout of
+// DEVELOPERS.md (it names every folder) and jscpd (code written twice: reported, not failing, until
 // the repetition the tree still has is gone). Prints one line per check and exits non-zero when a
 // failing check found anything. scripts/test.ts runs the same checks as its `lint` step.
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 
 const root = resolve(import.meta.dirname, '..');
@@ -94,8 +95,40 @@ function formatting(): LintCheck {
   return { name: 'format', problems: lines.length, fails: true, detail: lines.join('\n') };
 }
 
+/** Top folders whose every subfolder DEVELOPERS.md's Layout must name. */
+const LAID_OUT = ['shared', 'server', 'src', 'tests', 'scripts'];
+
+function layout(): LintCheck {
+  // A newcomer finds a feature from the folder names and DEVELOPERS.md's Layout: the two must agree.
+  const text = readFileSync(join(root, 'DEVELOPERS.md'), 'utf8');
+  const block = /## Layout\n```\n([\s\S]*?)```/.exec(text)?.[1];
+  if (!block) return { name: 'layout', problems: 1, fails: true, detail: 'DEVELOPERS.md has no Layout block' };
+  const lines = block.split('\n');
+  const missing: string[] = [];
+  for (const top of LAID_OUT) {
+    // The top folder's lines: from `top/` to the next line that starts at the margin.
+    const start = lines.findIndex((l) => l.startsWith(`${top}/`));
+    if (start < 0) {
+      missing.push(`${top}/`);
+      continue;
+    }
+    const end = lines.findIndex((l, i) => i > start && /^\S/.test(l));
+    const section = lines.slice(start + 1, end < 0 ? undefined : end);
+    for (const sub of readdirSync(join(root, top), { withFileTypes: true })) {
+      if (!sub.isDirectory()) continue;
+      if (!section.some((l) => new RegExp(`^\\s+(\\S+/)?${sub.name}/`).test(l))) missing.push(`${top}/${sub.name}/`);
+    }
+  }
+  return {
+    name: 'layout',
+    problems: missing.length,
+    fails: true,
+    detail: missing.map((m) => `${m} is not in DEVELOPERS.md's Layout`).join('\n'),
+  };
+}
+
 export function lintChecks(): LintCheck[] {
-  return [eslint(), imports(), duplicates(), formatting()];
+  return [eslint(), imports(), duplicates(), formatting(), layout()];
 }
 
 export function printChecks(checks: LintCheck[]): void {
