@@ -1,7 +1,7 @@
 // Parts (piece frame mm) as triangles in scene metres, one mesh per material slot, so a room's
 // forms can be merged per material into a few draw calls. UVs are metres along each face, so a
 // photo finish keeps its real repeat size on every part.
-import { meshFromArrays, type MeshData } from '../scene';
+import type { MeshData } from '../scene';
 import { directionDeg } from '../vec';
 import type { MaterialSlot, Part } from './parts';
 
@@ -42,11 +42,21 @@ type V3 = [number, number, number];
 // up) through a mirror whatever the turn, so triangles are wound clockwise here to face outwards
 // once placed.
 class Writer {
-  positions: number[] = [];
-  normals: number[] = [];
-  uvs: number[] = [];
-  indices: number[] = [];
+  // Scratch buffers, grown by doubling and reused for every form (one writer per material slot):
+  // a room's first build writes tens of thousands of numbers, and plain arrays made that mostly
+  // garbage collection. Positions are kept in doubles so the facing test in fan() sees exactly
+  // the values it always did; toMesh() copies out what was written.
+  positions = new Float64Array(3 * 512);
+  normals = new Float32Array(3 * 512);
+  uvs = new Float32Array(2 * 512);
+  indices = new Uint32Array(3 * 512);
   count = 0;
+  indexCount = 0;
+
+  reset(): void {
+    this.count = 0;
+    this.indexCount = 0;
+  }
 
   /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal`. */
   quad(p: readonly V3[], n: readonly V3[], uv: readonly [number, number][], faceNormal: V3): void {
@@ -68,10 +78,45 @@ class Writer {
 
   /** One vertex from plain numbers: the extrusions write thousands, so no arrays are made for them. */
   raw(x: number, y: number, z: number, nx: number, ny: number, nz: number, u: number, v: number): void {
-    this.positions.push(x, y, z);
-    this.normals.push(nx, ny, nz);
-    this.uvs.push(u, v);
-    this.count++;
+    const i = this.count;
+    if ((i + 1) * 3 > this.positions.length) this.growVertices();
+    const P = this.positions,
+      N = this.normals,
+      T = this.uvs;
+    P[i * 3] = x;
+    P[i * 3 + 1] = y;
+    P[i * 3 + 2] = z;
+    N[i * 3] = nx;
+    N[i * 3 + 1] = ny;
+    N[i * 3 + 2] = nz;
+    T[i * 2] = u;
+    T[i * 2 + 1] = v;
+    this.count = i + 1;
+  }
+
+  private growVertices(): void {
+    const grow = <T extends Float64Array | Float32Array>(a: T, make: (n: number) => T): T => {
+      const b = make(a.length * 2);
+      b.set(a);
+      return b;
+    };
+    this.positions = grow(this.positions, (n) => new Float64Array(n));
+    this.normals = grow(this.normals, (n) => new Float32Array(n));
+    this.uvs = grow(this.uvs, (n) => new Float32Array(n));
+  }
+
+  private triangle(a: number, b: number, c: number): void {
+    const k = this.indexCount;
+    if (k + 3 > this.indices.length) {
+      const more = new Uint32Array(this.indices.length * 2);
+      more.set(this.indices);
+      this.indices = more;
+    }
+    const I = this.indices;
+    I[k] = a;
+    I[k + 1] = b;
+    I[k + 2] = c;
+    this.indexCount = k + 3;
   }
 
   /** Triangles of a fan over the `n` vertices written from `base`, facing the normal f. */
@@ -90,15 +135,25 @@ class Writer {
         e2y = P[c * 3 + 1]! - ay,
         e2z = P[c * 3 + 2]! - az;
       const facing = (e1y * e2z - e1z * e2y) * f[0] + (e1z * e2x - e1x * e2z) * f[1] + (e1x * e2y - e1y * e2x) * f[2];
-      if (facing >= 0) this.indices.push(base, c, b);
-      else this.indices.push(base, b, c);
+      if (facing >= 0) this.triangle(base, c, b);
+      else this.triangle(base, b, c);
     }
   }
 
+  /** What was written, as a mesh of its own (the scratch buffers are reused). */
   toMesh(): MeshData {
-    return meshFromArrays(this.positions, this.normals, this.uvs, this.indices);
+    const n = this.count;
+    return {
+      positions: new Float32Array(this.positions.subarray(0, n * 3)),
+      normals: this.normals.slice(0, n * 3),
+      uvs: this.uvs.slice(0, n * 2),
+      indices: this.indices.slice(0, this.indexCount),
+    };
   }
 }
+
+/** One writer per material slot, reused by every form built on this thread. */
+const WRITERS: Record<MaterialSlot, Writer> = { main: new Writer(), accent: new Writer(), own: new Writer() };
 
 interface Frame {
   cx: number;
@@ -287,7 +342,10 @@ function writePart(w: Writer, part: Part): void {
 
 /** A piece's parts in its own frame (mm, z up), one mesh per material slot; placeForm puts them in the room. */
 export function localFormMeshes(parts: readonly Part[]): FormMeshes {
-  const writers: Record<MaterialSlot, Writer> = { main: new Writer(), accent: new Writer(), own: new Writer() };
+  const writers = WRITERS;
+  writers.main.reset();
+  writers.accent.reset();
+  writers.own.reset();
   const ownColours: ColourRun[] = [];
   for (const part of parts) {
     const writer = writers[part.slot];
