@@ -1,6 +1,8 @@
 import * as THREE from 'three';
 
-// Flat colours for now; later finishes swap in photo textures, whose uvs are already in metres.
+// The scene's own materials: the default colours of walls, floor, ceiling and pieces before a finish
+// is chosen, the selection tint and the faded near walls. Finishes (paint colours and photo textures
+// at their real repeat size) are made in finish-materials.ts.
 
 /** Parlour's accent, used to mark the selected piece. */
 export const SELECTION_COLOUR = '#2f6b5c';
