@@ -163,6 +163,8 @@ export interface PresentationOptionsTable {
   view_count: Generated<number>;
   first_viewed_at: Date | null;
   last_viewed_at: Date | null;
+  /** The option's version when the link was made (migration 0012). */
+  sent_version: number | null;
 }
 
 export interface ChoicesTable {

@@ -111,6 +111,8 @@ export const presentationSummarySchema = z.object({
           label: z.string(),
           viewCount: z.number().int(),
           lastViewedAt: z.string().nullable(),
+          /** The option was saved since the link was made: the client's page marks it as changed. */
+          changedSinceSent: z.boolean(),
         }),
       ),
       choice: choiceSchema.nullable(),
@@ -157,6 +159,10 @@ export const clientOptionSchema = z.object({
   note: z.string(),
   pieces: z.array(clientPieceSchema),
   surfaces: clientSurfacesSchema,
+  /** The option's version now; the client's page remembers the one it last showed. */
+  version: z.number().int(),
+  /** Its version when the link was made (null for a link older than this record). */
+  sentVersion: z.number().int().nullable(),
 });
 export type ClientOption = z.infer<typeof clientOptionSchema>;
 

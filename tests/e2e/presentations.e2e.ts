@@ -268,6 +268,7 @@ describe('presentations', () => {
     // Mark as decided: the project is decided, and the client's page says so.
     await designer.page.goto(`/projects/${projectId}`);
     await designer.page.getByRole('button', { name: 'Mark as decided' }).click();
+    await designer.page.getByRole('dialog').getByRole('button', { name: 'Mark as decided' }).click();
     await designer.page.getByText('The project is decided').waitFor();
     expect(await designer.page.getByText('decided', { exact: true }).first().isVisible()).toBe(true);
 

@@ -125,6 +125,7 @@ export async function presentationSummaries(
             label: optionLabel(i, o.option_name),
             viewCount: o.view_count,
             lastViewedAt: o.last_viewed_at?.toISOString() ?? null,
+            changedSinceSent: o.sent_version !== null && o.sent_version !== o.option_version,
           })),
           choice: choice ? toChoice(choice) : null,
         };
@@ -279,6 +280,8 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
         note: o.note,
         pieces: placed(o.option_id).map((piece) => toClientPiece(piece, p.show_prices, finishes)),
         surfaces: clientSurfaces(docs.get(o.option_id)!, sceneFinishes, token),
+        version: o.option_version,
+        sentVersion: o.sent_version,
       })),
       choice: choice ? toChoice(choice) : null,
     };

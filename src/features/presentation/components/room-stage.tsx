@@ -5,6 +5,7 @@ import type { TextureProgress, ViewCommands, ViewMode } from '../../../scene/wal
 import { Button } from '../../../components/ui/button';
 import { markLookedAt } from '../api/presentation';
 import { ChooseDialog } from './choose-dialog';
+import { changedSinceSeen, rememberSeen } from './seen-versions';
 import { PieceCard } from './piece-card';
 import { EYE_HEIGHT, KeyHelp, LoadingBar, OverviewButtons, ViewModeBar, WalkButtons } from './view-controls';
 import { momentText, pieceName, SAFETY_LINE } from './wording';
@@ -81,10 +82,11 @@ export function RoomStage({
   // Each option counts once per visit as "looked at", however often the client flips back to it.
   const lookedAt = useRef(new Set<string>());
   useEffect(() => {
+    rememberSeen(option);
     if (lookedAt.current.has(option.id)) return;
     lookedAt.current.add(option.id);
     markLookedAt(token, option.id);
-  }, [token, option.id]);
+  }, [token, option]);
 
   const options = room.options;
   const others = options.filter((o) => o.id !== option.id);
@@ -235,7 +237,12 @@ export function RoomStage({
                 <kbd className="flex size-7 shrink-0 items-center justify-center rounded-md border border-line-strong bg-white font-sans text-sm font-semibold">
                   {i + 1}
                 </kbd>
-                <span className="min-w-0 flex-1 font-semibold">{o.label}</span>
+                <span className="min-w-0 flex-1">
+                  <span className="block font-semibold">{o.label}</span>
+                  {changedSinceSeen(o) && (
+                    <span className="block text-sm font-medium text-ochre">Changed since you last saw it</span>
+                  )}
+                </span>
                 {chosen?.id === o.id && (
                   <span className="shrink-0 rounded-full bg-pine px-2 py-0.5 text-xs font-semibold text-white">Your choice</span>
                 )}

@@ -1,5 +1,6 @@
 import type { ClientPresentation, ClientRoom } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';
+import { changedSinceSeen } from './seen-versions';
 import { dayText } from './wording';
 
 const chosenLabel = (room: ClientRoom) => room.options.find((o) => o.id === room.choice?.optionId)?.label;
@@ -73,6 +74,15 @@ export function WelcomeCard({
                     'not chosen yet'
                   )}
                 </div>
+                {room.options.some(changedSinceSeen) && (
+                  <div className="text-sm font-medium text-ochre">
+                    Changed since you last saw it:{' '}
+                    {room.options
+                      .filter(changedSinceSeen)
+                      .map((o) => o.label)
+                      .join(', ')}
+                  </div>
+                )}
               </div>
               <Button size="sm" onClick={() => onOpenRoom(room.id)}>
                 Look at this room

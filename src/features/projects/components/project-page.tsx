@@ -5,9 +5,9 @@ import { Dialog } from '../../../components/ui/dialog';
 import { TextField } from '../../../components/ui/field';
 import { Badge, Card, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage, fieldError } from '../../../lib/api';
-import { formatRelative } from '../../../lib/format';
+import { formatDateTime, formatRelative } from '../../../lib/format';
 import { useCanEdit } from '../../../lib/session';
-import { useProject, useUpdateProject } from '../api/projects';
+import { useProject, useReopenProject, useUpdateProject } from '../api/projects';
 
 /** One project: its client, its rooms and its presentations (the latter two passed in by the route). */
 export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: ReactNode; presentations?: ReactNode }) {
@@ -15,6 +15,7 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
   const update = useUpdateProject(id);
   const canEdit = useCanEdit();
   const [renaming, setRenaming] = useState(false);
+  const [reopening, setReopening] = useState(false);
 
   if (project.isPending) return <Spinner label="Loading project…" />;
   if (project.isError) {
@@ -47,6 +48,7 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
           canEdit && (
             <>
               <Button onClick={() => setRenaming(true)}>Rename</Button>
+              {p.state === 'decided' && <Button onClick={() => setReopening(true)}>Reopen</Button>}
               <Button
                 variant={archived ? 'secondary' : 'quiet'}
                 busy={update.isPending}
@@ -59,6 +61,11 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
         }
       >
         {[p.address, `changed ${formatRelative(p.updatedAt)}`].filter(Boolean).join(' · ')}
+        {p.reopenedAt && (
+          <span className="block" data-testid="reopened">
+            Reopened {p.reopenedBy ? `by ${p.reopenedBy} ` : ''}on {formatDateTime(p.reopenedAt)}
+          </span>
+        )}
       </PageHeader>
       {update.isError && (
         <div className="mb-4">
@@ -104,6 +111,7 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
         </Card>
       </div>
       {renaming && <RenameDialog current={p.name} onClose={() => setRenaming(false)} projectId={id} />}
+      {reopening && <ReopenDialog onClose={() => setReopening(false)} projectId={id} />}
     </div>
   );
 }
@@ -134,6 +142,37 @@ function RenameDialog({ current, onClose, projectId }: { current: string; onClos
           </Button>
         </div>
       </form>
+    </Dialog>
+  );
+}
+
+/** Decided → presented, on purpose: said plainly before it happens. */
+function ReopenDialog({ onClose, projectId }: { onClose: () => void; projectId: string }) {
+  const reopen = useReopenProject(projectId);
+  return (
+    <Dialog
+      open
+      onClose={onClose}
+      title="Reopen this project?"
+      footer={
+        <>
+          <Button variant="quiet" onClick={onClose}>
+            Keep it decided
+          </Button>
+          <Button variant="primary" busy={reopen.isPending} onClick={() => reopen.mutate(undefined, { onSuccess: onClose })}>
+            Reopen
+          </Button>
+        </>
+      }
+    >
+      <div className="flex flex-col gap-3 text-[15px]">
+        <p>The chosen options can be changed again, and so can the walls and openings of their rooms.</p>
+        <p>
+          The client’s links open for choosing again, and you can make new presentations. Parlour notes that you reopened it, and
+          when.
+        </p>
+        {reopen.isError && <Notice tone="error">{errorMessage(reopen.error)}</Notice>}
+      </div>
     </Dialog>
   );
 }
