@@ -10,7 +10,7 @@ import * as m0007 from './0007_record_sent_mail';
 import * as m0008 from './0008_drop_sign_in_failures';
 import * as m0009 from './0009_project_states_and_kept_choices';
 import * as m0010 from './0010_piece_kinds';
-import * as m0012 from './0012_presented_option_versions';
+import * as m0012 from './0012_option_versions_and_paint_litres';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
@@ -23,5 +23,5 @@ export const migrations: Record<string, Migration> = {
   '0008_drop_sign_in_failures': m0008,
   '0009_project_states_and_kept_choices': m0009,
   '0010_piece_kinds': m0010,
-  '0012_presented_option_versions': m0012,
+  '0012_option_versions_and_paint_litres': m0012,
 };

@@ -98,7 +98,7 @@ export interface FinishesTable {
   supplier: string | null;
   code: string | null;
   price: ColumnType<string | null, number | null | undefined, number | null>; // numeric arrives as text
-  price_unit: 'm2' | 'unit' | null;
+  price_unit: 'm2' | 'unit' | 'litre' | null;
   colour_hex: string | null;
   sheen: 'matt' | 'eggshell' | 'satin' | 'gloss' | null;
   category: 'floor' | 'wall' | 'tile' | 'wood' | 'stone' | 'fabric' | 'wallpaper' | 'other' | null;

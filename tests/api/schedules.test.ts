@@ -89,7 +89,7 @@ beforeAll(async () => {
   paintId = (
     await owner
       .post('/api/finishes/paints')
-      .send({ name: 'Oat', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'unit', supplier: 'Paint mill', code: 'OAT-1' })
+      .send({ name: 'Oat', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'litre', supplier: 'Paint mill', code: 'OAT-1' })
   ).body.finish.id;
   // A photo finish row as processing leaves it; the schedule needs only its name, category and price.
   const { studio_id } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paintId).executeTakeFirstOrThrow();

@@ -158,3 +158,32 @@ describe('typed fields on the client and project pages', () => {
     await context.close();
   });
 });
+
+describe('a paint’s price', () => {
+  it('is typed in the Add paint dialog, per litre or per m² of wall, and reads so in the library', async () => {
+    const { context, page } = await newPage(browser);
+    await signUpThroughForm(page, 'Tinworks Studio');
+    await page.goto('/finishes');
+    await page.getByRole('button', { name: 'Add paint' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Name').fill('Harbour blue');
+    await dialog.getByLabel('Hex').fill('#3b5a6f');
+    expect(await dialog.getByLabel('Per').locator('option').allInnerTexts()).toEqual(['litre', 'm²']);
+    await dialog.getByLabel('Price').click();
+    await page.keyboard.type('16,5');
+    await page.keyboard.press('Enter');
+    await page.getByRole('link', { name: /Harbour blue/ }).waitFor();
+    await page.getByText('16.50 / L').waitFor();
+    await page.screenshot({ path: join(shots, 'library-paint-price.png') });
+
+    await page.getByRole('link', { name: /Harbour blue/ }).click();
+    await page.getByRole('heading', { name: 'Details' }).waitFor();
+    expect(await page.getByLabel('Per').inputValue()).toBe('litre');
+    const saved = patched(page);
+    await page.getByLabel('Per').selectOption({ label: 'm²' });
+    expect((await saved).status()).toBe(200);
+    await page.goto('/finishes');
+    await page.getByText('16.50 / m²').waitFor();
+    await context.close();
+  });
+});

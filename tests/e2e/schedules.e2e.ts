@@ -55,7 +55,7 @@ describe('take-off, schedules and comparison', () => {
           supplier: 'Sample paint mill',
           code: 'MO-01',
           price: 14.5,
-          priceUnit: 'unit',
+          priceUnit: 'litre',
         })
       ).finish;
       const harbour = (
@@ -64,7 +64,7 @@ describe('take-off, schedules and comparison', () => {
           colourHex: '#2f4858',
           sheen: 'satin',
           price: 16,
-          priceUnit: 'unit',
+          priceUnit: 'litre',
         })
       ).finish;
       const form = new FormData();

@@ -5,6 +5,7 @@ import {
   finishListQuerySchema,
   finishPatchSchema,
   photoUploadFieldsSchema,
+  PRICE_UNITS,
   type EdgeBlend,
 } from '../../../shared/schemas/finish';
 import { ALL_ROLES, WRITERS, requireCaller, type RouteDef } from '../../http/routes';
@@ -60,6 +61,11 @@ function changesFor(
   if (wrong.length > 0) {
     const message = row.kind === 'paint' ? 'A paint has no photo, size or crop.' : 'A photo finish has no paint colour or sheen.';
     throw new HttpError(400, 'invalid', message, Object.fromEntries(wrong.map((k) => [k, message])));
+  }
+  if (patch.priceUnit && !(PRICE_UNITS[row.kind] as readonly string[]).includes(patch.priceUnit)) {
+    const message =
+      row.kind === 'paint' ? 'A paint is priced per litre or per m² of wall.' : 'A photo finish is priced per m² or per unit.';
+    throw new HttpError(400, 'invalid', message, { priceUnit: message });
   }
   const changes: FinishChanges = {
     name: patch.name,

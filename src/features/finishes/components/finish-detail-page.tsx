@@ -4,6 +4,7 @@ import {
   EDGE_BLENDS,
   FINISH_CATEGORIES,
   MIN_CROP_FRACTION,
+  PRICE_UNITS,
   type Crop,
   type EdgeBlend,
   type FinishCategory,
@@ -23,7 +24,7 @@ import { commitAnswer, errorMessage, fieldError } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
 import { useDeleteFinish, useFinish, useUpdateFinish, type Finish } from '../api/finishes';
 import { CropBox } from './crop-box';
-import { CATEGORY_LABELS, EDGE_BLEND_LABELS, finishSummary, formatRepeat } from './finish-labels';
+import { CATEGORY_LABELS, EDGE_BLEND_LABELS, finishSummary, formatRepeat, PRICE_UNIT_CHOICES } from './finish-labels';
 import { PaintFields } from './paint-fields';
 import { Swatch } from './swatch';
 
@@ -329,7 +330,8 @@ function CommonFields({
   save: SaveField;
   disabled: boolean;
 }): Record<'name' | 'supplier' | 'code' | 'price', ReactNode> {
-  const unit = finish.priceUnit ?? 'm2';
+  const units = PRICE_UNITS[finish.kind];
+  const unit = finish.priceUnit && (units as readonly PriceUnit[]).includes(finish.priceUnit) ? finish.priceUnit : units[0];
   return {
     name: (
       <CommitTextField
@@ -378,8 +380,11 @@ function CommonFields({
           onChange={(e) => void save({ price: finish.price, priceUnit: e.target.value as PriceUnit }, 'priceUnit')}
           disabled={disabled || finish.price === null}
         >
-          <option value="m2">m²</option>
-          <option value="unit">unit</option>
+          {units.map((u) => (
+            <option key={u} value={u}>
+              {PRICE_UNIT_CHOICES[u]}
+            </option>
+          ))}
         </SelectField>
       </div>
     ),

@@ -21,7 +21,9 @@ export const EDGE_BLEND_LABELS: Record<EdgeBlend, string> = {
 };
 
 /** Short, so a price fits beside a supplier on a library card. */
-export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: '/ m²', unit: '/ unit' };
+export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: '/ m²', unit: '/ unit', litre: '/ L' };
+/** The "Per" choices, in words that fit the field. */
+export const PRICE_UNIT_CHOICES: Record<PriceUnit, string> = { litre: 'litre', m2: 'm²', unit: 'unit' };
 
 /** "60 × 120 cm": the real size a photo finish's crop covers. */
 export function formatRepeat(widthMm: number, heightMm: number): string {
