@@ -6,6 +6,8 @@ import { sql, type Kysely } from 'kysely';
 //    versions (nothing reads as changed).
 // 2. A paint is priced per litre or per m² of wall; "per unit" was only ever read as per litre, so
 //    stored paint prices per unit become per-litre prices. Photo finishes keep m² or unit.
+// 3. A studio has a currency (ISO 4217) and a locale (BCP 47) for its prices; studios made before
+//    this get the demo's.
 
 export async function up(db: Kysely<unknown>): Promise<void> {
   await db.schema.alterTable('presentation_options').addColumn('sent_version', 'integer').execute();
@@ -16,9 +18,16 @@ export async function up(db: Kysely<unknown>): Promise<void> {
   await sql`alter table finishes add constraint finishes_price_unit_check check (
     (kind = 'paint' and price_unit in ('litre', 'm2')) or (kind = 'photo' and price_unit in ('m2', 'unit')) or price_unit is null
   )`.execute(db);
+
+  await db.schema
+    .alterTable('studios')
+    .addColumn('currency', 'text', (c) => c.notNull().defaultTo('GBP'))
+    .addColumn('locale', 'text', (c) => c.notNull().defaultTo('en-GB'))
+    .execute();
 }
 
 export async function down(db: Kysely<unknown>): Promise<void> {
+  await db.schema.alterTable('studios').dropColumn('currency').dropColumn('locale').execute();
   await sql`alter table finishes drop constraint finishes_price_unit_check`.execute(db);
   await sql`update finishes set price_unit = 'unit' where price_unit = 'litre'`.execute(db);
   await sql`alter table finishes add constraint finishes_price_unit_check check (price_unit in ('m2', 'unit'))`.execute(db);

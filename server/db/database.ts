@@ -8,6 +8,9 @@ export interface StudiosTable {
   id: Generated<string>;
   name: string;
   created_at: Timestamp;
+  /** ISO 4217 and BCP 47, for every price (migration 0012). */
+  currency: Generated<string>;
+  locale: Generated<string>;
 }
 
 export interface MembersTable {

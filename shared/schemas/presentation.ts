@@ -183,6 +183,9 @@ export const clientPresentationSchema = z.object({
   expiresAt: z.string(),
   /** The designer has confirmed the choices: they can no longer be changed here. */
   decided: z.boolean(),
+  /** The studio's currency (ISO 4217) and locale (BCP 47) for the prices shown. */
+  currency: z.string(),
+  locale: z.string(),
   rooms: z.array(clientRoomSchema),
 });
 export type ClientPresentation = z.infer<typeof clientPresentationSchema>;

@@ -215,7 +215,7 @@ describe('presentations', () => {
     await client.page.getByRole('button', { name: 'Loveseat' }).click();
     await client.page.getByRole('heading', { name: 'Loveseat' }).waitFor();
     expect(await client.page.getByText('150 × 88 × 82 cm').isVisible()).toBe(true);
-    expect(await client.page.getByText('990', { exact: true }).isVisible()).toBe(true);
+    expect(await client.page.getByText('£990.00', { exact: true }).isVisible()).toBe(true);
     await client.page.waitForTimeout(300);
     await client.page.screenshot({ path: join(shots, 'client-room.png') });
 

@@ -59,7 +59,7 @@ export const authRoutes: RouteDef[] = [
       const member = await getMember(ctx.deps.db, caller.studioId, caller.memberId);
       const studio = await ctx.deps.db
         .selectFrom('studios')
-        .select(['id', 'name'])
+        .select(['id', 'name', 'currency', 'locale'])
         .where('id', '=', caller.studioId)
         .executeTakeFirst();
       if (!member || !studio) throw notFound('Your account');

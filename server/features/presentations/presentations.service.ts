@@ -18,6 +18,7 @@ import type {
   PresentationSummary,
 } from '../../../shared/schemas/presentation';
 import { toFinishes } from '../finishes/finishes.service';
+import { studioMoney } from '../studio/studio.repository';
 import { signPresentationToken, verifyPresentationToken } from '../../services/tokens/presentation-token';
 import { escapeHtml } from '../../services/mail/escape-html';
 import {
@@ -244,8 +245,9 @@ export function clientSurfaces(doc: OptionDoc, finishes: ReadonlyMap<string, Fin
 
 /** Everything the client's page shows, and nothing else; `token` is the link's, for its file URLs. */
 export async function clientPresentation(db: Db, p: PresentationRow, token: string): Promise<ClientPresentation> {
-  const [studio, project, shown, choices] = await Promise.all([
+  const [studio, money, project, shown, choices] = await Promise.all([
     studioName(db, p.studio_id),
+    studioMoney(db, p.studio_id),
     projectForPresentation(db, p.studio_id, p.project_id),
     listShownOptions(db, [p.id]),
     listChoices(db, [p.id]),
@@ -293,6 +295,8 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
     showPrices: p.show_prices,
     expiresAt: p.expires_at.toISOString(),
     decided: project.state === 'decided',
+    currency: money.currency,
+    locale: money.locale,
     rooms,
   };
 }

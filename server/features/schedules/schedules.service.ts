@@ -4,6 +4,8 @@ import type { Db } from '../../db/database';
 import { notFound, orNotFound } from '../../http/errors';
 import { getProject } from '../projects/projects.repository';
 import { getOption, getRoom, listOptions, listRooms, toRoom } from '../rooms/rooms.repository';
+import { studioMoney } from '../studio/studio.repository';
+import { DEFAULT_MONEY } from '../../../shared/units/money';
 import { finishesByIds, latestChoices } from './schedules.repository';
 import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
@@ -132,6 +134,7 @@ export async function scheduleAnswer(
   );
   return {
     project,
+    money: await studioMoney(db, studioId),
     room: { id: room.id, name: room.name },
     option: { id: option.id, label: optionLabel(position, option.name), note: option.note },
     settings,
@@ -170,10 +173,11 @@ export async function compareAnswer(
     }
     answered.push({ id: room.id, name: room.name, chosenOptionId, options: compared });
   }
-  return { project, settings, rooms: answered };
+  return { project, money: await studioMoney(db, studioId), settings, rooms: answered };
 }
 
-export const CSV_HEADER = [
+/** The columns, the money ones naming the studio's currency ("Total (GBP)"). */
+export const csvHeader = (currency: string) => [
   'Section',
   'Name',
   'Status',
@@ -181,9 +185,9 @@ export const CSV_HEADER = [
   'Quantity',
   'Unit',
   'Made up of',
-  'Unit price',
+  `Unit price (${currency})`,
   'Price per',
-  'Total',
+  `Total (${currency})`,
   'Supplier',
   'Code',
   'Link',
@@ -191,10 +195,10 @@ export const CSV_HEADER = [
 
 const money = (v: number | null) => (v === null ? null : v.toFixed(2));
 
-/** The schedule as CSV: one record per line, then the totals; money with two decimals, no currency. */
+/** The schedule as CSV: one record per line, then the totals; money with two decimals, its currency in the header. */
 export function scheduleCsv(answer: ScheduleAnswer): string {
   const { lines, totals } = answer.schedule;
-  const records: CsvCell[][] = [CSV_HEADER];
+  const records: CsvCell[][] = [csvHeader((answer.money ?? DEFAULT_MONEY).currency)];
   for (const l of lines) {
     records.push([
       l.section === 'piece' ? 'Piece' : 'Finish',

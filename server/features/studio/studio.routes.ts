@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { changeRoleSchema, inviteSchema, studioSettingsSchema } from '../../../shared/schemas/studio';
 import { acceptInviteSchema } from '../../../shared/schemas/account';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, OWNERS, requireCaller, type RouteDef } from '../../http/routes';
@@ -11,6 +11,7 @@ import { startSession } from '../../services/auth/session';
 import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
 import { limitInvitationMail } from '../../services/rate-limit/mail-limits';
 import { sendStudioMail } from '../outbox/outbox.service';
+import { updateStudioMoney } from './studio.repository';
 import {
   countOwners,
   deleteMember,
@@ -50,6 +51,15 @@ async function openInviteOrThrow(
 }
 
 export const studioRoutes: RouteDef[] = [
+  {
+    // The studio's currency and locale for every price.
+    method: 'patch',
+    path: '/api/studio/settings',
+    access: OWNERS,
+    handler: async (ctx) => ({
+      settings: await updateStudioMoney(ctx.deps.db, requireCaller(ctx).studioId, studioSettingsSchema.parse(ctx.req.body)),
+    }),
+  },
   {
     method: 'get',
     path: '/api/studio/members',

@@ -1,3 +1,4 @@
+import { formatMoney, type MoneySettings } from '../../../../shared/units/money';
 import type { EdgeBlend, Finish, FinishCategory, PriceUnit, Sheen } from '../../../../shared/schemas/finish';
 import { formatLength } from '../../../../shared/units/length';
 
@@ -30,11 +31,10 @@ export function formatRepeat(widthMm: number, heightMm: number): string {
   return `${formatLength(widthMm, 'cm').replace(/ cm$/, '')} × ${formatLength(heightMm, 'cm')}`;
 }
 
-const priceFormat = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
-
-export function formatPrice(f: Pick<Finish, 'price' | 'priceUnit'>): string | null {
+/** "£14.50 / L": the price in the studio's currency and locale, with what it is per. */
+export function formatPrice(f: Pick<Finish, 'price' | 'priceUnit'>, money: MoneySettings): string | null {
   if (f.price === null) return null;
-  return `${priceFormat.format(f.price)}${f.priceUnit ? ` ${PRICE_UNIT_LABELS[f.priceUnit]}` : ''}`;
+  return `${formatMoney(f.price, money)}${f.priceUnit ? ` ${PRICE_UNIT_LABELS[f.priceUnit]}` : ''}`;
 }
 
 /** The short line under a finish's name in the library. */

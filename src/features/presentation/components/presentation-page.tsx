@@ -120,6 +120,7 @@ function PresentationView({ token, presentation }: { token: string; presentation
             room={room}
             studioName={studioName}
             showPrices={presentation.showPrices}
+            money={presentation}
             decided={decided}
             nextRoom={nextRoom}
             onGoTo={setStep}

@@ -1,5 +1,6 @@
 import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ClientRoom } from '../../../../shared/schemas/presentation';
+import type { MoneySettings } from '../../../../shared/units/money';
 import { CameraLink } from '../../../scene/camera-link';
 import type { TextureProgress, ViewCommands, ViewMode } from '../../../scene/walkthrough-view';
 import { Button } from '../../../components/ui/button';
@@ -45,6 +46,7 @@ export function RoomStage({
   room,
   studioName,
   showPrices,
+  money,
   decided,
   nextRoom,
   onGoTo,
@@ -53,6 +55,7 @@ export function RoomStage({
   room: ClientRoom;
   studioName: string;
   showPrices: boolean;
+  money: MoneySettings;
   decided: boolean;
   nextRoom: ClientRoom | null;
   onGoTo: (roomId: string | 'welcome') => void;
@@ -258,7 +261,7 @@ export function RoomStage({
           </h2>
           {piece ? (
             <div className="mt-3">
-              <PieceCard piece={piece} showPrices={showPrices} onClose={() => setPieceId(null)} />
+              <PieceCard piece={piece} showPrices={showPrices} money={money} onClose={() => setPieceId(null)} />
             </div>
           ) : (
             <p className="mt-1 text-sm text-ink-soft">Tap a piece in the picture, or a name below, to see its size and finish.</p>

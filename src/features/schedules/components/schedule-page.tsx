@@ -6,7 +6,8 @@ import { Button } from '../../../components/ui/button';
 import { Badge, PageHeader, Spinner } from '../../../components/ui/layout';
 import { scheduleCsvUrl, settingsQuery, useSchedule } from '../api/schedules';
 import { useTakeoffSettings } from '../hooks/use-takeoff-settings';
-import { formatMoney, formatQuantity } from './format';
+import { formatQuantity, useFormatMoney } from './format';
+import { useMoney } from '../../../lib/session';
 import { PaintChip } from './paint-chip';
 import { LoadError } from './load-error';
 
@@ -16,6 +17,8 @@ const td = 'py-2.5 pr-3 align-top';
 const tdNum = `${td} text-right tabular-nums whitespace-nowrap`;
 
 export function SchedulePage({ projectId, optionId }: { projectId: string; optionId: string }) {
+  const formatMoney = useFormatMoney();
+  const money = useMoney();
   const { settings } = useTakeoffSettings(projectId);
   const query = settingsQuery(settings);
   const schedule = useSchedule(optionId, query);
@@ -104,7 +107,7 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
           )}
           <p>
             Quantities are measured on the inside faces with common-practice allowances; check on site before ordering. Prices are
-            as entered, without currency.
+            in the studio’s currency, {money.currency}.
           </p>
         </div>
       </div>
@@ -113,6 +116,7 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
 }
 
 function Total({ label, value }: { label: string; value: number }) {
+  const formatMoney = useFormatMoney();
   return (
     <div className="flex justify-between py-1">
       <dt className="text-ink-soft">{label}</dt>
@@ -160,6 +164,7 @@ function LineTable({ title, lines, empty }: { title: string; lines: ScheduleLine
 }
 
 function Line({ line: l }: { line: ScheduleLine }) {
+  const formatMoney = useFormatMoney();
   return (
     <tr>
       <td className={td}>
