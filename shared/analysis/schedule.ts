@@ -716,6 +716,8 @@ export interface ScheduleAnswer {
   project: { id: string; name: string };
   /** The studio's currency and locale for the prices. */
   money?: MoneySettings;
+  /** Whom the project is for, for the printed schedule's header. */
+  client?: { name: string };
   room: { id: string; name: string };
   option: OptionRef & { note: string };
   settings: TakeoffSettings;

@@ -33,7 +33,7 @@ interface RoomWithOptions {
 
 async function projectOrThrow(db: Db, studioId: string, projectId: string) {
   const found = orNotFound(await getProject(db, studioId, projectId), 'That project');
-  return { id: found.id, name: found.name };
+  return { id: found.id, name: found.name, clientName: found.client.name };
 }
 
 async function roomsOf(db: Db, studioId: string, projectId: string): Promise<RoomWithOptions[]> {
@@ -109,7 +109,7 @@ export async function projectTakeoffAnswer(
     answered.flatMap((r) => (r.takeoff ? [{ name: r.name, takeoff: r.takeoff }] : [])),
     settings,
   );
-  return { project, settings, rooms: answered, totals };
+  return { project: { id: project.id, name: project.name }, settings, rooms: answered, totals };
 }
 
 /** One option's schedule in its room and project. */
@@ -133,7 +133,8 @@ export async function scheduleAnswer(
     siblings.findIndex((o) => o.id === option.id),
   );
   return {
-    project,
+    project: { id: project.id, name: project.name },
+    client: { name: project.clientName },
     money: await studioMoney(db, studioId),
     room: { id: room.id, name: room.name },
     option: { id: option.id, label: optionLabel(position, option.name), note: option.note },
@@ -173,7 +174,7 @@ export async function compareAnswer(
     }
     answered.push({ id: room.id, name: room.name, chosenOptionId, options: compared });
   }
-  return { project, money: await studioMoney(db, studioId), settings, rooms: answered };
+  return { project: { id: project.id, name: project.name }, money: await studioMoney(db, studioId), settings, rooms: answered };
 }
 
 /** The columns, the money ones naming the studio's currency ("Total (GBP)"). */

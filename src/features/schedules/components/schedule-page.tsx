@@ -1,3 +1,4 @@
+import { Fragment } from 'react';
 // One option's schedule: every piece and finish with quantities, prices and totals; a CSV download
 // and a print view (the app's top bar and these buttons are left off paper).
 import { Link } from 'react-router';
@@ -7,7 +8,7 @@ import { Badge, PageHeader, Spinner } from '../../../components/ui/layout';
 import { scheduleCsvUrl, settingsQuery, useSchedule } from '../api/schedules';
 import { useTakeoffSettings } from '../hooks/use-takeoff-settings';
 import { formatQuantity, useFormatMoney } from './format';
-import { useMoney } from '../../../lib/session';
+import { useMoney, useSession } from '../../../lib/session';
 import { PaintChip } from './paint-chip';
 import { LoadError } from './load-error';
 
@@ -19,18 +20,26 @@ const tdNum = `${td} text-right tabular-nums whitespace-nowrap`;
 export function SchedulePage({ projectId, optionId }: { projectId: string; optionId: string }) {
   const formatMoney = useFormatMoney();
   const money = useMoney();
+  const studioName = useSession().data?.studio.name ?? '';
+  const printedOn = new Intl.DateTimeFormat(money.locale, { day: 'numeric', month: 'long', year: 'numeric' }).format(new Date());
   const { settings } = useTakeoffSettings(projectId);
   const query = settingsQuery(settings);
   const schedule = useSchedule(optionId, query);
 
   if (schedule.isPending) return <Spinner label="Loading the schedule…" />;
   if (schedule.isError) return <LoadError error={schedule.error} projectId={projectId} />;
-  const { project, room, option, schedule: s } = schedule.data;
+  const { project, room, option, schedule: s, client } = schedule.data;
   const pieces = s.lines.filter((l) => l.section === 'piece');
   const finishes = s.lines.filter((l) => l.section === 'finish');
 
   return (
     <article>
+      {/* On paper the schedule says whose it is and when it was printed. */}
+      <header className="mb-4 hidden border-b border-ink pb-3 text-sm print:block" data-testid="print-header">
+        <p className="text-base font-bold">{studioName}</p>
+        <p>{[client && `For ${client.name}`, project.name, room.name, option.label].filter(Boolean).join(' · ')}</p>
+        <p>Printed {printedOn}</p>
+      </header>
       <PageHeader
         eyebrow={
           <>
@@ -209,9 +218,14 @@ function Line({ line: l }: { line: ScheduleLine }) {
             href={l.supplierUrl}
             target="_blank"
             rel="noreferrer noopener"
-            className="break-all text-pine hover:underline print:text-ink"
+            className="break-words text-pine hover:underline print:text-ink"
           >
-            {linkText(l.supplierUrl)}
+            {linkParts(l.supplierUrl).map((part, i) => (
+              <Fragment key={i}>
+                {i > 0 && <wbr />}
+                {part}
+              </Fragment>
+            ))}
           </a>
         )}
         {!l.supplier && !l.supplierUrl && <span className="text-ink-faint">—</span>}
@@ -223,4 +237,9 @@ function Line({ line: l }: { line: ScheduleLine }) {
 /** The address without its scheme, short enough for a column and still readable on paper. */
 function linkText(url: string): string {
   return url.replace(/^https?:\/\//, '').replace(/\/$/, '');
+}
+
+/** The address in pieces that may end a line: after a slash, dot, hyphen or query mark, never inside a word. */
+export function linkParts(url: string): string[] {
+  return linkText(url).split(/(?<=[/.?&=_-])/);
 }
