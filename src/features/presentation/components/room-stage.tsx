@@ -9,7 +9,7 @@ import { ChooseDialog } from './choose-dialog';
 import { changedSinceSeen, rememberSeen } from './seen-versions';
 import { PieceCard } from './piece-card';
 import { EYE_HEIGHT, KeyHelp, LoadingBar, OverviewButtons, ViewModeBar, WalkButtons } from './view-controls';
-import { momentText, pieceName, SAFETY_LINE } from './wording';
+import { momentText, PAGE_FRAME, pieceName, SAFETY_LINE } from './wording';
 
 // three.js is most of the page's weight: it loads after the page itself has appeared.
 const WalkthroughView = lazy(() => import('../../../scene/walkthrough-view'));
@@ -127,7 +127,7 @@ export function RoomStage({
   );
   const viewProps = { shell: room.shell, options: viewOptions, mode, eyeHeightMm, reducedMotion, link, pieceBuild } as const;
   return (
-    <div className="mx-auto flex max-w-[100rem] flex-col gap-4 px-4 py-4 sm:px-6 lg:h-[calc(100dvh-4.25rem)] lg:flex-row">
+    <div className={`${PAGE_FRAME} flex flex-col gap-4 py-4 lg:h-[calc(100dvh-4.25rem)] lg:flex-row`} data-testid="room-frame">
       <section aria-labelledby="room-title" className="flex min-h-0 min-w-0 flex-1 flex-col gap-2">
         <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-2">
           <div className="flex min-w-0 items-baseline gap-3">

@@ -37,11 +37,21 @@ export function WelcomeCard({
           Your options for {projectName}
         </h1>
         {message && (
-          <blockquote className="mt-6 rounded-xl bg-paper px-5 py-4 text-[17px] leading-relaxed whitespace-pre-wrap">
+          <blockquote className="mt-6 max-h-60 overflow-y-auto rounded-xl bg-paper px-5 py-4 text-[17px] leading-relaxed whitespace-pre-wrap">
             {message}
           </blockquote>
         )}
 
+        <div className="mt-6 flex flex-wrap items-center justify-between gap-4">
+          <Button variant="primary" onClick={() => onOpenRoom(next.id)}>
+            {decided || rooms.every((r) => r.choice)
+              ? 'See your choices'
+              : rooms.some((r) => r.choice)
+                ? `Carry on: ${next.name}`
+                : 'Start looking'}
+          </Button>
+          <p className="text-sm text-ink-faint">This link works until {dayText(expiresAt)}.</p>
+        </div>
         <h2 className="mt-8 text-lg font-bold">How this works</h2>
         <ol className="mt-3 grid gap-3 sm:grid-cols-3">
           {steps.map((s, i) => (
@@ -90,17 +100,6 @@ export function WelcomeCard({
             </li>
           ))}
         </ul>
-
-        <div className="mt-8 flex flex-wrap items-center justify-between gap-4">
-          <Button variant="primary" onClick={() => onOpenRoom(next.id)}>
-            {decided || rooms.every((r) => r.choice)
-              ? 'See your choices'
-              : rooms.some((r) => r.choice)
-                ? `Carry on: ${next.name}`
-                : 'Start looking'}
-          </Button>
-          <p className="text-sm text-ink-faint">This link works until {dayText(expiresAt)}.</p>
-        </div>
       </div>
     </section>
   );

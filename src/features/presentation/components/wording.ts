@@ -24,3 +24,6 @@ export const dayText = (iso: string) => dayFormat.format(new Date(iso));
 export const momentText = (iso: string) => momentFormat.format(new Date(iso));
 
 export const pieceName = (piece: Pick<ClientPiece, 'name'>) => piece.name.trim() || 'Unnamed piece';
+
+/** The page's width and side margins, shared by the header and the room so their edges line up. */
+export const PAGE_FRAME = 'mx-auto w-full max-w-[100rem] px-4 sm:px-6';
