@@ -78,14 +78,14 @@ const PHOTOS: DemoPhoto[] = [
   },
 ];
 
-// Invented paints, priced per litre (a paint's per-unit price is per litre in the schedule).
+// Invented paints, priced per litre.
 const PAINTS = [
   {
     name: 'Morning oat',
     colour_hex: '#e6dcc8',
     sheen: 'matt',
     price: 14.5,
-    price_unit: 'unit',
+    price_unit: 'litre',
     supplier: 'Sample paint mill',
     code: 'MO-01',
   },
@@ -94,7 +94,7 @@ const PAINTS = [
     colour_hex: '#a3ad94',
     sheen: 'eggshell',
     price: 16,
-    price_unit: 'unit',
+    price_unit: 'litre',
     supplier: 'Sample paint mill',
     code: 'SH-07',
   },
@@ -103,7 +103,7 @@ const PAINTS = [
     colour_hex: '#2f4858',
     sheen: 'satin',
     price: 18.5,
-    price_unit: 'unit',
+    price_unit: 'litre',
     supplier: 'Sample paint mill',
     code: 'DH-12',
   },

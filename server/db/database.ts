@@ -9,6 +9,9 @@ export interface StudiosTable {
   id: Generated<string>;
   name: string;
   created_at: Timestamp;
+  /** ISO 4217 and BCP 47, for every price (migration 0012). */
+  currency: Generated<string>;
+  locale: Generated<string>;
 }
 
 export interface MembersTable {
@@ -99,7 +102,7 @@ export interface FinishesTable {
   supplier: string | null;
   code: string | null;
   price: ColumnType<string | null, number | null | undefined, number | null>; // numeric arrives as text
-  price_unit: 'm2' | 'unit' | null;
+  price_unit: 'm2' | 'unit' | 'litre' | null;
   colour_hex: string | null;
   sheen: 'matt' | 'eggshell' | 'satin' | 'gloss' | null;
   category: 'floor' | 'wall' | 'tile' | 'wood' | 'stone' | 'fabric' | 'wallpaper' | 'other' | null;
@@ -164,6 +167,8 @@ export interface PresentationOptionsTable {
   view_count: Generated<number>;
   first_viewed_at: Date | null;
   last_viewed_at: Date | null;
+  /** The option's version when the link was made (migration 0012). */
+  sent_version: number | null;
 }
 
 export interface ChoicesTable {

@@ -32,7 +32,7 @@ const shell = roomShellSchema.parse({
   openings: [{ id: 'd1', type: 'door', wall: 0, offset: 500, width: 1000, height: 2000, hinge: 'start', swing: 'in' }],
 });
 const base = { supplier: null, code: null, price: null, priceUnit: null };
-const oat: PaintInfo = { ...base, id: 'oat', name: 'Oat', kind: 'paint', colourHex: '#e6dcc8', price: 20, priceUnit: 'unit' };
+const oat: PaintInfo = { ...base, id: 'oat', name: 'Oat', kind: 'paint', colourHex: '#e6dcc8', price: 20, priceUnit: 'litre' };
 const harbour: PaintInfo = { ...base, id: 'harbour', name: 'Harbour', kind: 'paint', colourHex: '#2f4858' };
 const boards: PhotoInfo = {
   ...base,

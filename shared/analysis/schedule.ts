@@ -12,6 +12,7 @@ import { blocksWalking, placedBoxes } from './fit/boxes';
 import { FREE, WALL, rasteriseFloor } from './fit/floor-grid';
 import { DEFAULT_COVERAGE_M2_PER_L, DEFAULT_PAINT_COATS, DEFAULT_WASTE_PERCENT, computeTakeoff, roundQuantity } from './takeoff';
 import { chooseTins, describeTins, type TinPlan } from './tins';
+import type { MoneySettings } from '../units/money';
 
 // ——— Settings the designer can change on the take-off page ———
 
@@ -716,6 +717,10 @@ export interface ProjectTakeoffAnswer {
 
 export interface ScheduleAnswer {
   project: { id: string; name: string };
+  /** The studio's currency and locale for the prices. */
+  money?: MoneySettings;
+  /** Whom the project is for, for the printed schedule's header. */
+  client?: { name: string };
   room: { id: string; name: string };
   option: OptionRef & { note: string };
   settings: TakeoffSettings;
@@ -724,6 +729,7 @@ export interface ScheduleAnswer {
 
 export interface CompareAnswer {
   project: { id: string; name: string };
+  money?: MoneySettings;
   settings: TakeoffSettings;
   rooms: {
     id: string;

@@ -13,8 +13,17 @@ export type Sheen = z.infer<typeof sheenSchema>;
 export const photoStatusSchema = z.enum(['processing', 'ready', 'failed']);
 export type PhotoStatus = z.infer<typeof photoStatusSchema>;
 
-export const priceUnitSchema = z.enum(['m2', 'unit'], { message: 'Price is per m² or per unit.' });
+export const priceUnitSchema = z.enum(['m2', 'unit', 'litre'], { message: 'Price is per m², per unit or per litre.' });
 export type PriceUnit = z.infer<typeof priceUnitSchema>;
+/**
+ * What each kind of finish is priced by: a paint per litre (the schedule prices the tins bought)
+ * or per m² of wall (a painter's rate, all coats); a photo finish per m² or per box, roll or tile.
+ */
+export const PRICE_UNITS = { paint: ['litre', 'm2'], photo: ['m2', 'unit'] } as const satisfies Record<
+  'paint' | 'photo',
+  readonly PriceUnit[]
+>;
+export const paintPriceUnitSchema = z.enum(PRICE_UNITS.paint, { message: 'A paint is priced per litre or per m² of wall.' });
 
 /**
  * How wide a band along each edge is blended with its mirror image so copies join without a seam,
@@ -84,7 +93,7 @@ export const createPaintSchema = z.object({
   supplier: optionalText(120),
   code: optionalText(60),
   price: priceSchema,
-  priceUnit: priceUnitSchema.nullable().optional(),
+  priceUnit: paintPriceUnitSchema.nullable().optional(),
 });
 export type CreatePaintBody = z.input<typeof createPaintSchema>;
 

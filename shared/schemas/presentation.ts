@@ -111,6 +111,8 @@ export const presentationSummarySchema = z.object({
           label: z.string(),
           viewCount: z.number().int(),
           lastViewedAt: z.string().nullable(),
+          /** The option was saved since the link was made: the client's page marks it as changed. */
+          changedSinceSent: z.boolean(),
         }),
       ),
       choice: choiceSchema.nullable(),
@@ -157,6 +159,10 @@ export const clientOptionSchema = z.object({
   note: z.string(),
   pieces: z.array(clientPieceSchema),
   surfaces: clientSurfacesSchema,
+  /** The option's version now; the client's page remembers the one it last showed. */
+  version: z.number().int(),
+  /** Its version when the link was made (null for a link older than this record). */
+  sentVersion: z.number().int().nullable(),
 });
 export type ClientOption = z.infer<typeof clientOptionSchema>;
 
@@ -177,6 +183,9 @@ export const clientPresentationSchema = z.object({
   expiresAt: z.string(),
   /** The designer has confirmed the choices: they can no longer be changed here. */
   decided: z.boolean(),
+  /** The studio's currency (ISO 4217) and locale (BCP 47) for the prices shown. */
+  currency: z.string(),
+  locale: z.string(),
   rooms: z.array(clientRoomSchema),
 });
 export type ClientPresentation = z.infer<typeof clientPresentationSchema>;

@@ -50,6 +50,11 @@ export interface OptionRecord {
   doc: OptionDoc;
   version: number;
   updatedAt: string;
+  /**
+   * In a room's list of options: the client chose it and the project is decided, so it stays as
+   * it is (and so do the room's walls and openings) until the project is reopened.
+   */
+  decided?: boolean;
 }
 
 export interface RoomSummary {

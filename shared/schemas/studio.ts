@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { PASSWORD_MAX_LENGTH } from './password-rule';
 import { nameText } from './common';
+import { canonicalLocale, isCurrency } from '../units/money';
 
 export const roleSchema = z.enum(['owner', 'designer', 'viewer']);
 export type Role = z.infer<typeof roleSchema>;
@@ -33,9 +34,25 @@ export const memberSchema = z.object({
 });
 export type Member = z.infer<typeof memberSchema>;
 
+export const currencySchema = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .refine(isCurrency, 'Enter a currency code such as GBP, EUR or USD.');
+export const localeSchema = z
+  .string()
+  .trim()
+  .max(35)
+  .refine((v) => canonicalLocale(v) !== null, 'Enter a locale such as en-GB, de-DE or fr-CA.')
+  .transform((v) => canonicalLocale(v)!);
+
+/** The studio's settings for prices: its currency and how its prices are written. */
+export const studioSettingsSchema = z.object({ currency: currencySchema, locale: localeSchema }).partial();
+export type StudioSettingsBody = z.input<typeof studioSettingsSchema>;
+
 export const sessionInfoSchema = z.object({
   member: memberSchema,
-  studio: z.object({ id: z.string(), name: z.string() }),
+  studio: z.object({ id: z.string(), name: z.string(), currency: z.string(), locale: z.string() }),
   outbox: z.boolean(),
 });
 export type SessionInfo = z.infer<typeof sessionInfoSchema>;

@@ -49,3 +49,16 @@ export function fieldError(err: unknown, field: string): string | undefined {
 export function errorMessage(err: unknown): string {
   return err instanceof Error ? err.message : 'Something went wrong.';
 }
+
+/**
+ * Waits for a save and answers as a committed field expects: null when it was saved, otherwise
+ * the reason, the field's own message first.
+ */
+export async function commitAnswer(save: Promise<unknown>, field: string): Promise<string | null> {
+  try {
+    await save;
+    return null;
+  } catch (err) {
+    return fieldError(err, field) ?? errorMessage(err);
+  }
+}

@@ -1,4 +1,5 @@
 // The signed-in member, read by every feature (roles decide what is editable).
+import { DEFAULT_MONEY, formatMoney, type MoneySettings } from '../../shared/units/money';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { SessionInfo } from '../../shared/schemas/studio';
 import { api, ApiError } from './api';
@@ -23,6 +24,18 @@ export const sessionQuery = queryOptions({
 });
 
 export const useSession = () => useQuery(sessionQuery);
+
+/** The studio's currency and locale for every price on the screen (the demo's until the session is known). */
+export function useMoney(): MoneySettings {
+  const studio = useSession().data?.studio;
+  return studio ? { currency: studio.currency, locale: studio.locale } : DEFAULT_MONEY;
+}
+
+/** Formats a price in the studio's currency and locale. */
+export function useFormatMoney(): (value: number) => string {
+  const money = useMoney();
+  return (value) => formatMoney(value, money);
+}
 
 /** True for owners and designers; viewers see everything read-only. */
 export function useCanEdit(): boolean {

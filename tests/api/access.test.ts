@@ -33,6 +33,7 @@ interface Case {
 const CASES: Record<string, Case> = {
   'post /api/auth/sign-out': { ownSession: true },
   'get /api/auth/me': {},
+  'patch /api/studio/settings': { body: () => ({ locale: 'en-GB' }) },
   'get /api/studio/members': {},
   'patch /api/studio/members/:id': { params: (f) => ({ id: f.memberId }), body: () => ({ role: 'viewer' }) },
   'delete /api/studio/members/:id': { params: (f) => ({ id: f.memberId }) },

@@ -101,11 +101,27 @@ describe('paints', () => {
     const id = res.body.finish.id;
     const patched = await owner
       .patch(`/api/finishes/${id}`)
-      .send({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'unit' });
-    expect(patched.body.finish).toMatchObject({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'unit' });
+      .send({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'litre' });
+    expect(patched.body.finish).toMatchObject({ sheen: 'satin', supplier: 'Invented Paint Co', price: 42.5, priceUnit: 'litre' });
     const wrong = await owner.patch(`/api/finishes/${id}`).send({ repeatWidthMm: 600 });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.fields.repeatWidthMm).toMatch(/paint has no/);
+  });
+
+  it('prices a paint per litre or per m² of wall, never per unit', async () => {
+    const made = await owner
+      .post('/api/finishes/paints')
+      .send({ name: 'Quarry grey', colourHex: '#8c8a84', price: 21.5, priceUnit: 'litre' });
+    expect(made.status).toBe(201);
+    expect(made.body.finish).toMatchObject({ price: 21.5, priceUnit: 'litre' });
+    const perUnit = await owner.post('/api/finishes/paints').send({ name: 'Per tin', colourHex: '#8c8a84', priceUnit: 'unit' });
+    expect(perUnit.status).toBe(400);
+    expect(perUnit.body.error.fields.priceUnit).toBe('A paint is priced per litre or per m² of wall.');
+    const patched = await owner.patch(`/api/finishes/${made.body.finish.id}`).send({ priceUnit: 'unit' });
+    expect(patched.status).toBe(400);
+    expect(patched.body.error.fields.priceUnit).toMatch(/per litre or per m²/);
+    const perM2 = await owner.patch(`/api/finishes/${made.body.finish.id}`).send({ price: 9, priceUnit: 'm2' });
+    expect(perM2.body.finish).toMatchObject({ price: 9, priceUnit: 'm2' });
   });
 
   it('names the field of a bad colour, and a viewer cannot add one', async () => {

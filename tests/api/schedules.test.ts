@@ -2,7 +2,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { addMember, createTestApp, signUpStudio, type TestApp } from '../setup/app';
-import { CSV_HEADER } from '../../server/features/schedules/schedules.service';
+import { csvHeader } from '../../server/features/schedules/schedules.service';
+
+const CSV_HEADER = csvHeader('GBP');
 
 type Agent = ReturnType<typeof request.agent>;
 
@@ -89,7 +91,7 @@ beforeAll(async () => {
   paintId = (
     await owner
       .post('/api/finishes/paints')
-      .send({ name: 'Oat', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'unit', supplier: 'Paint mill', code: 'OAT-1' })
+      .send({ name: 'Oat', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'litre', supplier: 'Paint mill', code: 'OAT-1' })
   ).body.finish.id;
   // A photo finish row as processing leaves it; the schedule needs only its name, category and price.
   const { studio_id } = await t.db.selectFrom('finishes').select('studio_id').where('id', '=', paintId).executeTakeFirstOrThrow();
@@ -219,8 +221,8 @@ describe('GET /api/options/:id/schedule.csv', () => {
     expect(row('Sofa, "Linen"')).toEqual(
       expect.arrayContaining(['Piece', 'new', '200 × 80 × 80 cm', '1', 'pcs', '1450.00', 'https://example.com/sofa']),
     );
-    expect(row('Side chair')[col('Total')]).toBe('379.98');
-    expect(row('Armchair')[col('Total')]).toBe('0.00');
+    expect(row('Side chair')[col('Total (GBP)')]).toBe('379.98');
+    expect(row('Armchair')[col('Total (GBP)')]).toBe('0.00');
     // A code that looks like a formula is kept as text.
     expect(row('Oak boards')[col('Code')]).toBe("'=OAK");
     expect(row('Oat')).toEqual([
@@ -238,7 +240,7 @@ describe('GET /api/options/:id/schedule.csv', () => {
       'OAT-1',
       '',
     ]);
-    expect(records.slice(-3).map((r) => [r[col('Name')], r[col('Total')]])).toEqual([
+    expect(records.slice(-3).map((r) => [r[col('Name')], r[col('Total (GBP)')]])).toEqual([
       ['New pieces', '1829.98'],
       ['Finishes', '992.50'],
       ['Budget', '2822.48'],

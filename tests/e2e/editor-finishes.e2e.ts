@@ -98,6 +98,15 @@ describe('finishes in the room editor', () => {
       ids.roomId,
     );
     expect(saved).toEqual({ floor: photoId, ceiling: null, walls: null, wallOverrides: { '2': ids.paintId } });
+
+    // After a reload, the feature wall is listed up front, before any wall is clicked; one click picks it.
+    await page.reload();
+    await page.getByRole('heading', { name: 'Finishes', exact: true }).waitFor();
+    const featureWalls = page.getByRole('region', { name: 'Feature walls' });
+    await featureWalls.getByRole('button', { name: /Wall 3.*Chalk blue/ }).click();
+    await page.getByRole('radio', { name: /Wall 3 \(feature wall\)/, checked: true }).waitFor();
+    expect(await featureWalls.getByRole('button').count()).toBe(1);
+    await page.screenshot({ path: join(SHOTS, 'editor-feature-walls.png') });
     await context.close();
   });
 });

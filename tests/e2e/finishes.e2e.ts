@@ -21,11 +21,20 @@ async function setSize(page: Page, rowName: string, category: string, widthCm: s
     .getByRole('link', { name: 'Set size and crop' })
     .click();
   await page.getByRole('heading', { name: 'Crop' }).waitFor();
+  // Each detail saves on its own: the category when picked, a size on Enter or on leaving the field.
+  const patched = () => page.waitForResponse((r) => r.request().method() === 'PATCH' && r.url().includes('/api/finishes/'));
+  let saved = patched();
   await page.getByLabel('Category').selectOption({ label: category });
+  expect((await saved).status()).toBe(200);
+  saved = patched();
   await page.getByLabel('Real width').fill(widthCm);
+  await page.getByLabel('Real width').press('Enter');
+  expect((await saved).status()).toBe(200);
+  saved = patched();
   await page.getByLabel('Real height').fill(heightCm);
-  await page.getByRole('button', { name: 'Save' }).click();
-  await page.getByText('Saved', { exact: true }).waitFor();
+  await page.getByRole('heading', { name: 'Details' }).click();
+  expect((await saved).status()).toBe(200);
+  await page.getByText('All changes saved').waitFor();
 }
 
 describe('the finish library', () => {
@@ -111,7 +120,6 @@ describe('the finish library', () => {
     expect(await viewer.page.getByRole('button', { name: 'Add paint' }).count()).toBe(0);
     await viewer.page.getByRole('link', { name: 'Oak boards' }).click();
     await viewer.page.getByRole('heading', { name: 'Repeat preview' }).waitFor();
-    expect(await viewer.page.getByRole('button', { name: 'Save' }).count()).toBe(0);
     expect(await viewer.page.getByRole('button', { name: 'Delete' }).count()).toBe(0);
     expect(await viewer.page.getByLabel('Name').isDisabled()).toBe(true);
     await viewer.context.close();

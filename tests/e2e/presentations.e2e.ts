@@ -215,7 +215,7 @@ describe('presentations', () => {
     await client.page.getByRole('button', { name: 'Loveseat' }).click();
     await client.page.getByRole('heading', { name: 'Loveseat' }).waitFor();
     expect(await client.page.getByText('150 × 88 × 82 cm').isVisible()).toBe(true);
-    expect(await client.page.getByText('990', { exact: true }).isVisible()).toBe(true);
+    expect(await client.page.getByText('£990.00', { exact: true }).isVisible()).toBe(true);
     await client.page.waitForTimeout(300);
     await client.page.screenshot({ path: join(shots, 'client-room.png') });
 
@@ -268,6 +268,7 @@ describe('presentations', () => {
     // Mark as decided: the project is decided, and the client's page says so.
     await designer.page.goto(`/projects/${projectId}`);
     await designer.page.getByRole('button', { name: 'Mark as decided' }).click();
+    await designer.page.getByRole('dialog').getByRole('button', { name: 'Mark as decided' }).click();
     await designer.page.getByText('The project is decided').waitFor();
     expect(await designer.page.getByText('decided', { exact: true }).first().isVisible()).toBe(true);
 

@@ -55,7 +55,7 @@ describe('take-off, schedules and comparison', () => {
           supplier: 'Sample paint mill',
           code: 'MO-01',
           price: 14.5,
-          priceUnit: 'unit',
+          priceUnit: 'litre',
         })
       ).finish;
       const harbour = (
@@ -64,7 +64,7 @@ describe('take-off, schedules and comparison', () => {
           colourHex: '#2f4858',
           sheen: 'satin',
           price: 16,
-          priceUnit: 'unit',
+          priceUnit: 'litre',
         })
       ).finish;
       const form = new FormData();
@@ -284,7 +284,7 @@ describe('take-off, schedules and comparison', () => {
     await download.saveAs(csvPath);
     const csv = readFileSync(csvPath, 'utf8');
     expect(csv).toContain('10 × 2.2 m² for 22 m² with 10 % waste');
-    expect(csv.trimEnd().split('\r\n').at(-1)).toBe(`Total,Budget,,,,,,,,${budget!.replaceAll(',', '')},,,`);
+    expect(csv.trimEnd().split('\r\n').at(-1)).toBe(`Total,Budget,,,,,,,,${budget!.replace(/[^\d.]/g, '')},,,`);
 
     // The print view: no top bar, no buttons, the whole table on paper.
     await page.emulateMedia({ media: 'print' });

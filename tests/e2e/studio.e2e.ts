@@ -73,7 +73,7 @@ describe('a studio from sign-up to its first project', () => {
     expect(await viewer.page.getByRole('button', { name: 'New project' }).count()).toBe(0);
     await viewer.page.goto(projectUrl);
     await viewer.page.getByRole('heading', { name: /Quay Street house/ }).waitFor();
-    expect(await viewer.page.getByRole('button', { name: 'Rename' }).count()).toBe(0);
+    expect(await viewer.page.getByRole('button', { name: 'Edit details' }).count()).toBe(0);
     expect(await viewer.page.getByRole('button', { name: 'Archive' }).count()).toBe(0);
     // Even a hand-made request is refused.
     const status = await viewer.page.evaluate(async (url) => {

@@ -132,7 +132,7 @@ describe('schedule totals against a hand-worked example', () => {
         code: 'OAK-1',
       },
     ],
-    ['oat', { ...none, id: 'oat', name: 'Oat', kind: 'paint', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'unit' }],
+    ['oat', { ...none, id: 'oat', name: 'Oat', kind: 'paint', colourHex: '#e6dcc8', price: 12.5, priceUnit: 'litre' }],
   ]);
   const at = { y: 2000, depth: 800, height: 800 };
   const doc = optionDocSchema.parse({

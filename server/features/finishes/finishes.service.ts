@@ -9,6 +9,7 @@ import { processPhoto, type ProcessedImage } from '../../services/images/process
 import { megapixels } from '../../services/images/inspect';
 import { withoutUncleanCharacters } from '../../../shared/schemas/common';
 import {
+  PRICE_UNITS,
   UPLOAD_LIMITS,
   centredSquareCrop,
   cropSchema,
@@ -260,6 +261,11 @@ function changesFor(row: FinishRow, patch: z.output<typeof finishPatchSchema>): 
   if (wrong.length > 0) {
     const message = row.kind === 'paint' ? 'A paint has no photo, size or crop.' : 'A photo finish has no paint colour or sheen.';
     throw new HttpError(400, 'invalid', message, Object.fromEntries(wrong.map((k) => [k, message])));
+  }
+  if (patch.priceUnit && !(PRICE_UNITS[row.kind] as readonly string[]).includes(patch.priceUnit)) {
+    const message =
+      row.kind === 'paint' ? 'A paint is priced per litre or per m² of wall.' : 'A photo finish is priced per m² or per unit.';
+    throw new HttpError(400, 'invalid', message, { priceUnit: message });
   }
   const changes: FinishChanges = {
     name: patch.name,

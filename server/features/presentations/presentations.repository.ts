@@ -35,7 +35,7 @@ export async function insertPresentation(
     .executeTakeFirstOrThrow();
 }
 
-/** The rooms and options a presentation shows, each list in the order given. */
+/** The rooms and options a presentation shows, each list in the order given, with each option's version now. */
 export async function insertShownRooms(
   db: Db,
   presentationId: string,
@@ -54,6 +54,7 @@ export async function insertShownRooms(
           room_id: r.roomId,
           option_id: optionId,
           position,
+          sent_version: sql<number>`(select version from options where id = ${optionId})`,
         })),
       ),
     )
@@ -114,6 +115,8 @@ export async function listShownOptions(db: Db, presentationIds: string[]) {
       'options.name as option_name',
       'options.note',
       'options.doc',
+      'options.version as option_version',
+      'po.sent_version',
     ])
     .where('po.presentation_id', 'in', presentationIds)
     .orderBy('pr.position')

@@ -38,6 +38,7 @@ import { listMembers } from '../studio/members.repository';
 import { lockProjectState } from '../projects/projects.repository';
 import { DECIDED_REOPEN_FIRST, decidedRefusal } from '../projects/project-states';
 import { presentationMail } from '../../services/mail/templates';
+import { studioMoney } from '../studio/studios.repository';
 import {
   finishLabels,
   finishRows,
@@ -145,6 +146,7 @@ export async function presentationSummaries(
             label: optionLabel(i, o.option_name),
             viewCount: o.view_count,
             lastViewedAt: o.last_viewed_at?.toISOString() ?? null,
+            changedSinceSent: o.sent_version !== null && o.sent_version !== o.option_version,
           })),
           choice: choice ? toChoice(choice) : null,
         };
@@ -263,8 +265,9 @@ export function clientSurfaces(doc: OptionDoc, finishes: ReadonlyMap<string, Fin
 
 /** Everything the client's page shows, and nothing else; `token` is the link's, for its file URLs. */
 export async function clientPresentation(db: Db, p: PresentationRow, token: string): Promise<ClientPresentation> {
-  const [studio, project, shown, choices] = await Promise.all([
+  const [studio, money, project, shown, choices] = await Promise.all([
     studioName(db, p.studio_id),
+    studioMoney(db, p.studio_id),
     projectForPresentation(db, p.studio_id, p.project_id),
     listShownOptions(db, [p.id]),
     listChoices(db, [p.id]),
@@ -299,6 +302,8 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
         note: o.note,
         pieces: placed(o.option_id).map((piece) => toClientPiece(piece, p.show_prices, finishes)),
         surfaces: clientSurfaces(docs.get(o.option_id)!, sceneFinishes, token),
+        version: o.option_version,
+        sentVersion: o.sent_version,
       })),
       choice: choice ? toChoice(choice) : null,
     };
@@ -310,6 +315,8 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
     showPrices: p.show_prices,
     expiresAt: p.expires_at.toISOString(),
     decided: project.state === 'decided',
+    currency: money.currency,
+    locale: money.locale,
     rooms,
   };
 }

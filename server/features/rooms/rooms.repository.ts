@@ -185,7 +185,9 @@ export async function deleteRoom(db: Db, studioId: string, id: string): Promise<
   return Number(r.numDeletedRows) > 0;
 }
 
+/** The room's options in order, each saying whether the decided project stands on it. */
 export async function listOptions(db: Db, studioId: string, roomId: string): Promise<OptionRecord[]> {
+  const decided = new Set(await decidedChoices(db, studioId, { roomId }));
   const rows = await db
     .selectFrom('options')
     .select([...OPTION_COLUMNS])
@@ -194,7 +196,7 @@ export async function listOptions(db: Db, studioId: string, roomId: string): Pro
     .orderBy('position')
     .orderBy('created_at')
     .execute();
-  return rows.map(toOption);
+  return rows.map((r) => ({ ...toOption(r), decided: decided.has(r.id) }));
 }
 
 export async function getOption(db: Db, studioId: string, id: string): Promise<OptionRecord | undefined> {

@@ -6,6 +6,8 @@ import { getOption, getRoom, listOptions, listRooms, toRoom } from '../rooms/roo
 import { latestChoices } from './schedules.repository';
 import { finishesByIds } from '../finishes/finishes.service';
 import { projectOrThrow as projectSummaryOrThrow } from '../projects/projects.service';
+import { studioMoney } from '../studio/studios.repository';
+import { DEFAULT_MONEY } from '../../../shared/units/money';
 import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
@@ -32,7 +34,7 @@ interface RoomWithOptions {
 
 async function projectOrThrow(db: Db, studioId: string, projectId: string) {
   const found = await projectSummaryOrThrow(db, studioId, projectId);
-  return { id: found.id, name: found.name };
+  return { id: found.id, name: found.name, clientName: found.client.name };
 }
 
 async function roomsOf(db: Db, studioId: string, projectId: string): Promise<RoomWithOptions[]> {
@@ -108,7 +110,7 @@ export async function projectTakeoffAnswer(
     answered.flatMap((r) => (r.takeoff ? [{ name: r.name, takeoff: r.takeoff }] : [])),
     settings,
   );
-  return { project, settings, rooms: answered, totals };
+  return { project: { id: project.id, name: project.name }, settings, rooms: answered, totals };
 }
 
 /** One option's schedule in its room and project. */
@@ -132,7 +134,9 @@ export async function scheduleAnswer(
     siblings.findIndex((o) => o.id === option.id),
   );
   return {
-    project,
+    project: { id: project.id, name: project.name },
+    client: { name: project.clientName },
+    money: await studioMoney(db, studioId),
     room: { id: room.id, name: room.name },
     option: { id: option.id, label: optionLabel(position, option.name), note: option.note },
     settings,
@@ -171,10 +175,11 @@ export async function compareAnswer(
     }
     answered.push({ id: room.id, name: room.name, chosenOptionId, options: compared });
   }
-  return { project, settings, rooms: answered };
+  return { project: { id: project.id, name: project.name }, money: await studioMoney(db, studioId), settings, rooms: answered };
 }
 
-export const CSV_HEADER = [
+/** The columns, the money ones naming the studio's currency ("Total (GBP)"). */
+export const csvHeader = (currency: string) => [
   'Section',
   'Name',
   'Status',
@@ -182,9 +187,9 @@ export const CSV_HEADER = [
   'Quantity',
   'Unit',
   'Made up of',
-  'Unit price',
+  `Unit price (${currency})`,
   'Price per',
-  'Total',
+  `Total (${currency})`,
   'Supplier',
   'Code',
   'Link',
@@ -192,10 +197,10 @@ export const CSV_HEADER = [
 
 const money = (v: number | null) => (v === null ? null : v.toFixed(2));
 
-/** The schedule as CSV: one record per line, then the totals; money with two decimals, no currency. */
+/** The schedule as CSV: one record per line, then the totals; money with two decimals, its currency in the header. */
 export function scheduleCsv(answer: ScheduleAnswer): string {
   const { lines, totals } = answer.schedule;
-  const records: CsvCell[][] = [CSV_HEADER];
+  const records: CsvCell[][] = [csvHeader((answer.money ?? DEFAULT_MONEY).currency)];
   for (const l of lines) {
     records.push([
       l.section === 'piece' ? 'Piece' : 'Finish',

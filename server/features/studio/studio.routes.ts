@@ -1,6 +1,6 @@
 // The studio's members and invitations. Rules and transactions are in studio.service.ts.
 import { z } from 'zod';
-import { changeRoleSchema, inviteSchema } from '../../../shared/schemas/studio';
+import { changeRoleSchema, inviteSchema, studioSettingsSchema } from '../../../shared/schemas/studio';
 import { acceptInviteSchema } from '../../../shared/schemas/account';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, OWNERS, route, type RouteDef } from '../../http/routes';
@@ -9,10 +9,19 @@ import { startSession } from '../../services/auth/session';
 import { listMembers, toMember } from './members.repository';
 import { deleteInvite, listOpenInvites, toInviteInfo } from './invites.repository';
 import { acceptInvite, changeMemberRole, inviteMember, openInvite, removeMember } from './studio.service';
+import { updateStudioMoney } from './studios.repository';
 
 const tokenParamSchema = z.object({ token: z.string().min(20).max(200) });
 
 export const studioRoutes: RouteDef[] = [
+  route({
+    // The studio's currency and locale for every price.
+    method: 'patch',
+    path: '/api/studio/settings',
+    access: OWNERS,
+    body: studioSettingsSchema,
+    handler: async (ctx) => ({ settings: await updateStudioMoney(ctx.services.db, ctx.caller.studioId, ctx.body) }),
+  }),
   route({
     method: 'get',
     path: '/api/studio/members',

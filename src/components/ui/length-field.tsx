@@ -10,7 +10,7 @@ interface LengthFieldProps {
   label: string;
   valueMm: number | null;
   /** 'blur' mode: return the reason when the value is refused; it shows under the field. */
-  onChange: (mm: number | null) => CommitAnswer | boolean;
+  onChange: (mm: number | null) => CommitAnswer | boolean | Promise<CommitAnswer>;
   unit?: LengthUnit;
   /** 'change' reports every valid keystroke (forms); 'blur' commits on Enter, on leaving the field and before it goes away (live documents). */
   commit?: 'change' | 'blur';
@@ -51,6 +51,7 @@ function CommittedLengthField({
     equal: (a, b) => a !== null && b !== null && Math.abs(a - b) < SAME_LENGTH_MM,
     onCommit: (mm) => {
       const answer = onChange(mm);
+      if (answer instanceof Promise) return answer;
       return typeof answer === 'string' ? answer : null;
     },
     error,

@@ -2,14 +2,16 @@ import { useDeferredValue, useState, type FormEvent } from 'react';
 import type { ListQuery } from '../../../../shared/schemas/project';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
+import { CommitTextField } from '../../../components/ui/commit-field';
 import { TextField } from '../../../components/ui/field';
+import { textParser } from '../../../components/ui/use-commit-text';
 import { ListToolbar, SORT_OPTIONS, ToolbarSelect } from '../../../components/ui/list-toolbar';
 import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
-import { errorMessage, fieldError } from '../../../lib/api';
+import { commitAnswer, errorMessage, fieldError } from '../../../lib/api';
 import { formatRelative } from '../../../lib/format';
 import { useCanEdit } from '../../../lib/session';
 import { useClients, useCreateClient, useUpdateClient } from '../api/clients';
-import type { Client } from '../../../../shared/schemas/project';
+import type { Client, ClientBody } from '../../../../shared/schemas/project';
 
 export function ClientsPage() {
   const [q, setQ] = useState('');
@@ -85,7 +87,8 @@ export function ClientsPage() {
           </table>
         </div>
       )}
-      {editing && <ClientDialog client={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+      {editing === 'new' && <ClientDialog client={null} onClose={() => setEditing(null)} />}
+      {editing && editing !== 'new' && <EditClientDialog client={editing} onClose={() => setEditing(null)} />}
     </div>
   );
 }
@@ -132,6 +135,63 @@ function ClientDialog({ client, onClose }: { client: Client | null; onClose: () 
           </Button>
         </div>
       </form>
+    </Dialog>
+  );
+}
+
+const same = (v: string) => v;
+
+/** An existing client: each field saves on Enter or on moving on, Escape puts back the saved value. */
+function EditClientDialog({ client, onClose }: { client: Client; onClose: () => void }) {
+  const update = useUpdateClient(client.id);
+  const [saved, setSaved] = useState(client);
+  const save = (patch: Partial<ClientBody>, field: keyof ClientBody) =>
+    commitAnswer(
+      update.mutateAsync(patch).then(({ client: c }) => setSaved((s) => ({ ...s, ...c }))),
+      field,
+    );
+  return (
+    <Dialog
+      open
+      onClose={onClose}
+      title="Edit client"
+      footer={
+        <Button variant="primary" onClick={onClose}>
+          Done
+        </Button>
+      }
+    >
+      <div className="flex flex-col gap-4">
+        <CommitTextField
+          label="Name"
+          value={saved.name}
+          format={same}
+          parse={textParser('Enter the client’s name.')}
+          onCommit={(name) => save({ name }, 'name')}
+        />
+        <CommitTextField
+          label="E-mail"
+          type="email"
+          value={saved.email ?? ''}
+          format={same}
+          parse={textParser(null)}
+          onCommit={(email) => save({ email }, 'email')}
+        />
+        <CommitTextField
+          label="Phone"
+          value={saved.phone ?? ''}
+          format={same}
+          parse={textParser(null)}
+          onCommit={(phone) => save({ phone }, 'phone')}
+        />
+        <p className="text-sm text-ink-faint" role="status">
+          {update.isPending
+            ? 'Saving…'
+            : update.isSuccess
+              ? 'All changes saved'
+              : 'Each field saves when you press Enter or move on.'}
+        </p>
+      </div>
     </Dialog>
   );
 }

@@ -1,9 +1,10 @@
-import { useEffect, useState, type FormEvent, type ReactNode } from 'react';
+import { useCallback, useEffect, useState, type ReactNode } from 'react';
 import { Link, useNavigate } from 'react-router';
 import {
   EDGE_BLENDS,
   FINISH_CATEGORIES,
   MIN_CROP_FRACTION,
+  PRICE_UNITS,
   type Crop,
   type EdgeBlend,
   type FinishCategory,
@@ -11,18 +12,19 @@ import {
   type PaintFinish,
   type PhotoFinish,
   type PriceUnit,
-  type Sheen,
 } from '../../../../shared/schemas/finish';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
-import { SelectField, TextField } from '../../../components/ui/field';
+import { CommitTextField } from '../../../components/ui/commit-field';
+import { SelectField } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { Card, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
-import { ApiError, errorMessage, fieldError } from '../../../lib/api';
+import { numberParser, textParser, type CommitAnswer } from '../../../components/ui/use-commit-text';
+import { commitAnswer, errorMessage, fieldError } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
 import { useDeleteFinish, useFinish, useUpdateFinish, type Finish } from '../api/finishes';
 import { CropBox } from './crop-box';
-import { CATEGORY_LABELS, EDGE_BLEND_LABELS, finishSummary, formatRepeat } from './finish-labels';
+import { CATEGORY_LABELS, EDGE_BLEND_LABELS, finishSummary, formatRepeat, PRICE_UNIT_CHOICES } from './finish-labels';
 import { PaintFields } from './paint-fields';
 import { Swatch } from './swatch';
 
@@ -285,150 +287,128 @@ function PercentField({
   max: number;
   onChange: (v: number) => void;
 }) {
-  const shown = (value * 100).toFixed(1);
-  const [text, setText] = useState(shown);
-  useEffect(() => setText(shown), [shown]);
-  const commit = () => {
-    const n = Number(text.replace(',', '.'));
-    if (Number.isFinite(n)) onChange(Math.min(max, Math.max(min, n / 100)));
-    else setText(shown);
-  };
   return (
-    <TextField
+    <CommitTextField<number>
       label={label}
-      value={text}
-      inputMode="decimal"
-      onChange={(e) => setText(e.target.value)}
-      onBlur={commit}
-      onKeyDown={(e) => {
-        if (e.key === 'Enter') {
-          e.preventDefault();
-          commit();
-        }
+      value={value}
+      format={(v) => (v * 100).toFixed(1)}
+      parse={(text) => {
+        const n = Number(text.trim().replace(',', '.'));
+        if (text.trim() === '' || !Number.isFinite(n)) return { ok: false, message: 'Enter a percentage.' };
+        return { ok: true, value: Math.min(max, Math.max(min, n / 100)) };
       }}
+      equal={(a, b) => Math.abs(a - b) < 0.0005}
+      onCommit={onChange}
+      inputMode="decimal"
     />
   );
 }
 
-/** Fields common to both kinds, and the text → number rules for a price. */
-function useCommonFields(finish: Finish) {
-  const [name, setName] = useState(finish.name);
-  const [supplier, setSupplier] = useState(finish.supplier ?? '');
-  const [code, setCode] = useState(finish.code ?? '');
-  const [price, setPrice] = useState(finish.price === null ? '' : String(finish.price));
-  const [priceUnit, setPriceUnit] = useState<PriceUnit>(finish.priceUnit ?? 'm2');
-  const priceNumber = price.trim() === '' ? null : Number(price.replace(',', '.'));
-  const body = {
-    name,
-    supplier,
-    code,
-    price: priceNumber,
-    priceUnit: priceNumber === null ? null : priceUnit,
-  } satisfies FinishPatch;
-  const fields = (err: unknown, disabled: boolean): Record<'supplier' | 'code' | 'price', ReactNode> => ({
+/**
+ * Each field of a finish saves on its own, the way the room editor's do: on Enter, on leaving the
+ * field and before it goes away; Escape puts back the saved value. A refusal stays beside the field.
+ */
+function useSaveField(finishId: string) {
+  const update = useUpdateFinish(finishId);
+  const save = useCallback(
+    (patch: FinishPatch, field: string): Promise<CommitAnswer> => commitAnswer(update.mutateAsync(patch), field),
+    [update.mutateAsync], // eslint-disable-line react-hooks/exhaustive-deps
+  );
+  return { save, saving: update.isPending, saved: update.isSuccess };
+}
+
+type SaveField = ReturnType<typeof useSaveField>['save'];
+
+const same = (v: string) => v;
+
+function CommonFields({
+  finish,
+  save,
+  disabled,
+}: {
+  finish: Finish;
+  save: SaveField;
+  disabled: boolean;
+}): Record<'name' | 'supplier' | 'code' | 'price', ReactNode> {
+  const units = PRICE_UNITS[finish.kind];
+  const unit = finish.priceUnit && (units as readonly PriceUnit[]).includes(finish.priceUnit) ? finish.priceUnit : units[0];
+  return {
+    name: (
+      <CommitTextField
+        label="Name"
+        value={finish.name}
+        format={same}
+        parse={textParser('Enter a name.')}
+        onCommit={(name) => save({ name }, 'name')}
+        disabled={disabled}
+      />
+    ),
     supplier: (
-      <TextField
+      <CommitTextField
         label="Supplier"
-        value={supplier}
-        onChange={(e) => setSupplier(e.target.value)}
-        error={fieldError(err, 'supplier')}
+        value={finish.supplier ?? ''}
+        format={same}
+        parse={textParser(null)}
+        onCommit={(supplier) => save({ supplier }, 'supplier')}
         disabled={disabled}
       />
     ),
     code: (
-      <TextField
+      <CommitTextField
         label="Code"
-        value={code}
-        onChange={(e) => setCode(e.target.value)}
-        error={fieldError(err, 'code')}
+        value={finish.code ?? ''}
+        format={same}
+        parse={textParser(null)}
+        onCommit={(code) => save({ code }, 'code')}
         disabled={disabled}
       />
     ),
     price: (
       <div className="grid grid-cols-[minmax(0,1fr)_auto] gap-3">
-        <TextField
+        <CommitTextField<number | null>
           label="Price"
-          value={price}
+          value={finish.price}
+          format={(v) => (v === null ? '' : String(v))}
+          parse={numberParser({ min: 0, optional: true, what: 'a price' })}
+          onCommit={(price) => save({ price, priceUnit: price === null ? null : unit }, 'price')}
           inputMode="decimal"
-          onChange={(e) => setPrice(e.target.value)}
-          error={
-            fieldError(err, 'price') ?? (priceNumber !== null && !Number.isFinite(priceNumber) ? 'Enter a number.' : undefined)
-          }
           disabled={disabled}
         />
         <SelectField
           label="Per"
-          value={priceUnit}
-          onChange={(e) => setPriceUnit(e.target.value as PriceUnit)}
-          disabled={disabled}
+          value={unit}
+          onChange={(e) => void save({ price: finish.price, priceUnit: e.target.value as PriceUnit }, 'priceUnit')}
+          disabled={disabled || finish.price === null}
         >
-          <option value="m2">m²</option>
-          <option value="unit">unit</option>
+          {units.map((u) => (
+            <option key={u} value={u}>
+              {PRICE_UNIT_CHOICES[u]}
+            </option>
+          ))}
         </SelectField>
       </div>
     ),
-  });
-  return { name, setName, body, fields, priceValid: priceNumber === null || Number.isFinite(priceNumber) };
+  };
 }
 
-function SaveRow({
-  mutation,
-  canEdit,
-  saved,
-}: {
-  mutation: { isPending: boolean; error: unknown };
-  canEdit: boolean;
-  saved: boolean;
-}) {
-  const err = mutation.error;
+function SavedNote({ saving, saved }: { saving: boolean; saved: boolean }) {
   return (
-    <>
-      {err !== null && !(err instanceof ApiError && Object.keys(err.fields).length > 0) && (
-        <Notice tone="error">{errorMessage(err)}</Notice>
-      )}
-      {canEdit && (
-        <div className="flex items-center justify-end gap-3">
-          {saved && (
-            <span className="text-sm font-semibold text-pine-dark" role="status">
-              Saved
-            </span>
-          )}
-          <Button type="submit" variant="primary" busy={mutation.isPending}>
-            Save
-          </Button>
-        </div>
-      )}
-    </>
+    <p className="text-sm text-ink-faint" role="status" data-testid="finish-save-state">
+      {saving ? 'Saving…' : saved ? 'All changes saved' : 'Each field saves when you press Enter or move on.'}
+    </p>
   );
 }
 
 function PhotoDetailsForm({ finish, canEdit }: { finish: PhotoFinish; canEdit: boolean }) {
-  const update = useUpdateFinish(finish.id);
-  const common = useCommonFields(finish);
-  const [category, setCategory] = useState<FinishCategory>(finish.category);
-  const [widthMm, setWidthMm] = useState<number | null>(finish.repeatWidthMm);
-  const [heightMm, setHeightMm] = useState<number | null>(finish.repeatHeightMm);
-  const err = update.error;
-  const fields = common.fields(err, !canEdit);
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    if (widthMm === null || heightMm === null || !common.priceValid) return;
-    update.mutate({ ...common.body, category, repeatWidthMm: widthMm, repeatHeightMm: heightMm });
-  };
+  const { save, saving, saved } = useSaveField(finish.id);
+  const fields = CommonFields({ finish, save, disabled: !canEdit });
   return (
-    <form onSubmit={submit} className="grid gap-x-5 gap-y-4 sm:grid-cols-2 lg:grid-cols-4" noValidate>
-      <TextField
-        label="Name"
-        value={common.name}
-        onChange={(e) => common.setName(e.target.value)}
-        error={fieldError(err, 'name')}
-        disabled={!canEdit}
-        className="sm:col-span-2"
-      />
+    <div className="grid gap-x-5 gap-y-4 sm:grid-cols-2 lg:grid-cols-4">
+      <div className="sm:col-span-2">{fields.name}</div>
       <SelectField
         label="Category"
-        value={category}
-        onChange={(e) => setCategory(e.target.value as FinishCategory)}
+        value={finish.category}
+        onChange={(e) => void save({ category: e.target.value as FinishCategory }, 'category')}
         disabled={!canEdit}
       >
         {FINISH_CATEGORIES.map((c) => (
@@ -443,72 +423,57 @@ function PhotoDetailsForm({ finish, canEdit }: { finish: PhotoFinish; canEdit: b
         <div className="grid grid-cols-2 gap-3">
           <LengthField
             label="Real width"
-            valueMm={widthMm}
-            onChange={setWidthMm}
-            error={fieldError(err, 'repeatWidthMm') ?? (widthMm === null ? 'Enter a size.' : undefined)}
+            commit="blur"
+            valueMm={finish.repeatWidthMm}
+            onChange={(mm) => (mm === null ? 'Enter a size.' : save({ repeatWidthMm: mm }, 'repeatWidthMm'))}
           />
           <LengthField
             label="Real height"
-            valueMm={heightMm}
-            onChange={setHeightMm}
-            error={fieldError(err, 'repeatHeightMm') ?? (heightMm === null ? 'Enter a size.' : undefined)}
+            commit="blur"
+            valueMm={finish.repeatHeightMm}
+            onChange={(mm) => (mm === null ? 'Enter a size.' : save({ repeatHeightMm: mm }, 'repeatHeightMm'))}
           />
         </div>
         <p className="text-sm text-ink-faint">The real size the crop covers: one 60 × 60 cm tile, four 18 cm boards across…</p>
       </fieldset>
       {fields.code}
       {fields.price}
-      <div className="flex flex-col gap-3 sm:col-span-2 lg:col-span-4">
-        <SaveRow mutation={update} canEdit={canEdit} saved={update.isSuccess} />
-      </div>
-    </form>
+      <div className="sm:col-span-2 lg:col-span-4">{canEdit && <SavedNote saving={saving} saved={saved} />}</div>
+    </div>
   );
 }
 
 function PaintDetail({ finish, canEdit }: { finish: PaintFinish; canEdit: boolean }) {
-  const update = useUpdateFinish(finish.id);
-  const common = useCommonFields(finish);
-  const [colourHex, setColourHex] = useState(finish.colourHex);
-  const [sheen, setSheen] = useState<Sheen>(finish.sheen);
-  const err = update.error;
-  const fields = common.fields(err, !canEdit);
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    if (!common.priceValid) return;
-    update.mutate({ ...common.body, colourHex, sheen });
-  };
+  const { save, saving, saved } = useSaveField(finish.id);
+  const fields = CommonFields({ finish, save, disabled: !canEdit });
+  const [shownHex, setShownHex] = useState(finish.colourHex);
+  useEffect(() => setShownHex(finish.colourHex), [finish.colourHex]);
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <Card title="Colour" className="self-start">
         <div
           className="aspect-[16/9] w-full rounded-xl border border-line"
-          style={{ backgroundColor: /^#[0-9a-fA-F]{6}$/.test(colourHex) ? colourHex : finish.colourHex }}
+          style={{ backgroundColor: shownHex }}
           role="img"
-          aria-label={`Colour ${colourHex}`}
+          aria-label={`Colour ${shownHex}`}
         />
       </Card>
       <Card title="Details" className="self-start">
-        <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-          <TextField
-            label="Name"
-            value={common.name}
-            onChange={(e) => common.setName(e.target.value)}
-            error={fieldError(err, 'name')}
-            disabled={!canEdit}
-          />
+        <div className="flex flex-col gap-4">
+          {fields.name}
           <PaintFields
-            colourHex={colourHex}
-            sheen={sheen}
-            onColour={setColourHex}
-            onSheen={setSheen}
-            colourError={fieldError(err, 'colourHex')}
+            colourHex={finish.colourHex}
+            sheen={finish.sheen}
+            onColour={setShownHex}
+            commitColour={(colourHex) => save({ colourHex }, 'colourHex')}
+            onSheen={(sheen) => void save({ sheen }, 'sheen')}
             disabled={!canEdit}
           />
           {fields.supplier}
           {fields.code}
           {fields.price}
-          <SaveRow mutation={update} canEdit={canEdit} saved={update.isSuccess} />
-        </form>
+          {canEdit && <SavedNote saving={saving} saved={saved} />}
+        </div>
       </Card>
     </div>
   );

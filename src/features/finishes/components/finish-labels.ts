@@ -1,3 +1,4 @@
+import { formatMoney, type MoneySettings } from '../../../../shared/units/money';
 import type { EdgeBlend, Finish, FinishCategory, PriceUnit, Sheen } from '../../../../shared/schemas/finish';
 import { formatLength } from '../../../../shared/units/length';
 
@@ -21,18 +22,19 @@ export const EDGE_BLEND_LABELS: Record<EdgeBlend, string> = {
 };
 
 /** Short, so a price fits beside a supplier on a library card. */
-export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: '/ m²', unit: '/ unit' };
+export const PRICE_UNIT_LABELS: Record<PriceUnit, string> = { m2: '/ m²', unit: '/ unit', litre: '/ L' };
+/** The "Per" choices, in words that fit the field. */
+export const PRICE_UNIT_CHOICES: Record<PriceUnit, string> = { litre: 'litre', m2: 'm²', unit: 'unit' };
 
 /** "60 × 120 cm": the real size a photo finish's crop covers. */
 export function formatRepeat(widthMm: number, heightMm: number): string {
   return `${formatLength(widthMm, 'cm').replace(/ cm$/, '')} × ${formatLength(heightMm, 'cm')}`;
 }
 
-const priceFormat = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
-
-export function formatPrice(f: Pick<Finish, 'price' | 'priceUnit'>): string | null {
+/** "£14.50 / L": the price in the studio's currency and locale, with what it is per. */
+export function formatPrice(f: Pick<Finish, 'price' | 'priceUnit'>, money: MoneySettings): string | null {
   if (f.price === null) return null;
-  return `${priceFormat.format(f.price)}${f.priceUnit ? ` ${PRICE_UNIT_LABELS[f.priceUnit]}` : ''}`;
+  return `${formatMoney(f.price, money)}${f.priceUnit ? ` ${PRICE_UNIT_LABELS[f.priceUnit]}` : ''}`;
 }
 
 /** The short line under a finish's name in the library. */

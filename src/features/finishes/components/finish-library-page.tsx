@@ -8,6 +8,7 @@ import { useCanEdit } from '../../../lib/session';
 import { useFinishes, type Finish } from '../api/finishes';
 import { AddPaintDialog } from './add-paint-dialog';
 import { CATEGORY_LABELS, finishSummary, formatPrice } from './finish-labels';
+import { useMoney } from '../../../lib/session';
 import { PhotoUpload } from './photo-upload';
 import { Swatch } from './swatch';
 import { ListToolbar, ToolbarSelect } from '../../../components/ui/list-toolbar';
@@ -85,7 +86,8 @@ export function FinishLibraryPage() {
 }
 
 function FinishCard({ finish }: { finish: Finish }) {
-  const price = formatPrice(finish);
+  const money = useMoney();
+  const price = formatPrice(finish, money);
   return (
     <Link
       to={`/finishes/${finish.id}`}

@@ -1,10 +1,21 @@
 import { useEffect } from 'react';
 import type { ClientPiece } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';
+import type { MoneySettings } from '../../../../shared/units/money';
 import { elevationText, pieceName, pieceSizeText, priceText } from './wording';
 
 /** What a tapped piece is: its name, size, finish and, when the designer shows prices, its price. */
-export function PieceCard({ piece, showPrices, onClose }: { piece: ClientPiece; showPrices: boolean; onClose: () => void }) {
+export function PieceCard({
+  piece,
+  showPrices,
+  money,
+  onClose,
+}: {
+  piece: ClientPiece;
+  showPrices: boolean;
+  money: MoneySettings;
+  onClose: () => void;
+}) {
   // Escape closes the details, unless a dialog is open (it takes Escape for itself).
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
@@ -41,7 +52,7 @@ export function PieceCard({ piece, showPrices, onClose }: { piece: ClientPiece; 
       ),
     });
   }
-  if (showPrices && piece.price != null) rows.push({ term: 'Price', value: priceText(piece.price) });
+  if (showPrices && piece.price != null) rows.push({ term: 'Price', value: priceText(piece.price, money) });
   return (
     <div aria-live="polite" className="rounded-xl bg-paper p-4">
       <div className="flex items-start justify-between gap-3">

@@ -5,7 +5,7 @@ import { usePresentation } from '../api/presentation';
 import { RefusedPage } from './refused-page';
 import { RoomStage } from './room-stage';
 import { WelcomeCard } from './welcome-card';
-import { SAFETY_LINE } from './wording';
+import { PAGE_FRAME, SAFETY_LINE } from './wording';
 
 /** The client's page behind the link: welcome, then one room at a time. */
 export function PresentationPage({ token }: { token: string }) {
@@ -66,7 +66,7 @@ function PresentationView({ token, presentation }: { token: string; presentation
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-line bg-paper/95">
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-6 py-3">
+        <div className={`${PAGE_FRAME} flex flex-wrap items-center gap-x-6 gap-y-2 py-3`} data-testid="page-header-frame">
           <div className="min-w-0">
             <div className="text-sm font-semibold text-pine">{studioName}</div>
             <div className="truncate font-bold">{projectName}</div>
@@ -120,6 +120,7 @@ function PresentationView({ token, presentation }: { token: string; presentation
             room={room}
             studioName={studioName}
             showPrices={presentation.showPrices}
+            money={presentation}
             decided={decided}
             nextRoom={nextRoom}
             onGoTo={setStep}

@@ -1,13 +1,15 @@
 import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ClientRoom } from '../../../../shared/schemas/presentation';
+import type { MoneySettings } from '../../../../shared/units/money';
 import { CameraLink } from '../../../scene/camera-link';
 import type { TextureProgress, ViewCommands, ViewMode } from '../../../scene/walkthrough-view';
 import { Button } from '../../../components/ui/button';
 import { markLookedAt } from '../api/presentation';
 import { ChooseDialog } from './choose-dialog';
+import { changedSinceSeen, rememberSeen } from './seen-versions';
 import { PieceCard } from './piece-card';
 import { EYE_HEIGHT, KeyHelp, LoadingBar, OverviewButtons, ViewModeBar, WalkButtons } from './view-controls';
-import { momentText, pieceName, SAFETY_LINE } from './wording';
+import { momentText, PAGE_FRAME, pieceName, SAFETY_LINE } from './wording';
 
 // three.js is most of the page's weight: it loads after the page itself has appeared.
 const WalkthroughView = lazy(() => import('../../../scene/walkthrough-view'));
@@ -44,6 +46,7 @@ export function RoomStage({
   room,
   studioName,
   showPrices,
+  money,
   decided,
   nextRoom,
   onGoTo,
@@ -52,6 +55,7 @@ export function RoomStage({
   room: ClientRoom;
   studioName: string;
   showPrices: boolean;
+  money: MoneySettings;
   decided: boolean;
   nextRoom: ClientRoom | null;
   onGoTo: (roomId: string | 'welcome') => void;
@@ -81,10 +85,11 @@ export function RoomStage({
   // Each option counts once per visit as "looked at", however often the client flips back to it.
   const lookedAt = useRef(new Set<string>());
   useEffect(() => {
+    rememberSeen(option);
     if (lookedAt.current.has(option.id)) return;
     lookedAt.current.add(option.id);
     markLookedAt(token, option.id);
-  }, [token, option.id]);
+  }, [token, option]);
 
   const options = room.options;
   const others = options.filter((o) => o.id !== option.id);
@@ -122,7 +127,7 @@ export function RoomStage({
   );
   const viewProps = { shell: room.shell, options: viewOptions, mode, eyeHeightMm, reducedMotion, link, pieceBuild } as const;
   return (
-    <div className="mx-auto flex max-w-[100rem] flex-col gap-4 px-4 py-4 sm:px-6 lg:h-[calc(100dvh-4.25rem)] lg:flex-row">
+    <div className={`${PAGE_FRAME} flex flex-col gap-4 py-4 lg:h-[calc(100dvh-4.25rem)] lg:flex-row`} data-testid="room-frame">
       <section aria-labelledby="room-title" className="flex min-h-0 min-w-0 flex-1 flex-col gap-2">
         <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-2">
           <div className="flex min-w-0 items-baseline gap-3">
@@ -235,7 +240,12 @@ export function RoomStage({
                 <kbd className="flex size-7 shrink-0 items-center justify-center rounded-md border border-line-strong bg-white font-sans text-sm font-semibold">
                   {i + 1}
                 </kbd>
-                <span className="min-w-0 flex-1 font-semibold">{o.label}</span>
+                <span className="min-w-0 flex-1">
+                  <span className="block font-semibold">{o.label}</span>
+                  {changedSinceSeen(o) && (
+                    <span className="block text-sm font-medium text-ochre">Changed since you last saw it</span>
+                  )}
+                </span>
                 {chosen?.id === o.id && (
                   <span className="shrink-0 rounded-full bg-pine px-2 py-0.5 text-xs font-semibold text-white">Your choice</span>
                 )}
@@ -251,7 +261,7 @@ export function RoomStage({
           </h2>
           {piece ? (
             <div className="mt-3">
-              <PieceCard piece={piece} showPrices={showPrices} onClose={() => setPieceId(null)} />
+              <PieceCard piece={piece} showPrices={showPrices} money={money} onClose={() => setPieceId(null)} />
             </div>
           ) : (
             <p className="mt-1 text-sm text-ink-soft">Tap a piece in the picture, or a name below, to see its size and finish.</p>

@@ -1,5 +1,6 @@
 import type { ClientPresentation, ClientRoom } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';
+import { changedSinceSeen } from './seen-versions';
 import { dayText } from './wording';
 
 const chosenLabel = (room: ClientRoom) => room.options.find((o) => o.id === room.choice?.optionId)?.label;
@@ -36,11 +37,21 @@ export function WelcomeCard({
           Your options for {projectName}
         </h1>
         {message && (
-          <blockquote className="mt-6 rounded-xl bg-paper px-5 py-4 text-[17px] leading-relaxed whitespace-pre-wrap">
+          <blockquote className="mt-6 max-h-60 overflow-y-auto rounded-xl bg-paper px-5 py-4 text-[17px] leading-relaxed whitespace-pre-wrap">
             {message}
           </blockquote>
         )}
 
+        <div className="mt-6 flex flex-wrap items-center justify-between gap-4">
+          <Button variant="primary" onClick={() => onOpenRoom(next.id)}>
+            {decided || rooms.every((r) => r.choice)
+              ? 'See your choices'
+              : rooms.some((r) => r.choice)
+                ? `Carry on: ${next.name}`
+                : 'Start looking'}
+          </Button>
+          <p className="text-sm text-ink-faint">This link works until {dayText(expiresAt)}.</p>
+        </div>
         <h2 className="mt-8 text-lg font-bold">How this works</h2>
         <ol className="mt-3 grid gap-3 sm:grid-cols-3">
           {steps.map((s, i) => (
@@ -73,6 +84,15 @@ export function WelcomeCard({
                     'not chosen yet'
                   )}
                 </div>
+                {room.options.some(changedSinceSeen) && (
+                  <div className="text-sm font-medium text-ochre">
+                    Changed since you last saw it:{' '}
+                    {room.options
+                      .filter(changedSinceSeen)
+                      .map((o) => o.label)
+                      .join(', ')}
+                  </div>
+                )}
               </div>
               <Button size="sm" onClick={() => onOpenRoom(room.id)}>
                 Look at this room
@@ -80,17 +100,6 @@ export function WelcomeCard({
             </li>
           ))}
         </ul>
-
-        <div className="mt-8 flex flex-wrap items-center justify-between gap-4">
-          <Button variant="primary" onClick={() => onOpenRoom(next.id)}>
-            {decided || rooms.every((r) => r.choice)
-              ? 'See your choices'
-              : rooms.some((r) => r.choice)
-                ? `Carry on: ${next.name}`
-                : 'Start looking'}
-          </Button>
-          <p className="text-sm text-ink-faint">This link works until {dayText(expiresAt)}.</p>
-        </div>
       </div>
     </section>
   );

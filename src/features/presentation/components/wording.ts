@@ -1,4 +1,5 @@
 // Plain words and numbers for the client: sizes in centimetres, dates written out, prices as numbers.
+import { formatMoney, type MoneySettings } from '../../../../shared/units/money';
 import type { ClientPiece } from '../../../../shared/schemas/presentation';
 
 /** Shown under every 3D view: what the picture is, and what it is not. */
@@ -14,8 +15,8 @@ export function pieceSizeText(piece: Pick<ClientPiece, 'width' | 'depth' | 'heig
 
 export const elevationText = (mm: number) => `${cm(mm)} cm above the floor`;
 
-const priceFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
-export const priceText = (price: number) => priceFormat.format(price);
+/** A price in the studio's currency, written the way its locale writes it. */
+export const priceText = (price: number, money: MoneySettings) => formatMoney(price, money);
 
 const dayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
 const momentFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', hour: '2-digit', minute: '2-digit' });
@@ -23,3 +24,6 @@ export const dayText = (iso: string) => dayFormat.format(new Date(iso));
 export const momentText = (iso: string) => momentFormat.format(new Date(iso));
 
 export const pieceName = (piece: Pick<ClientPiece, 'name'>) => piece.name.trim() || 'Unnamed piece';
+
+/** The page's width and side margins, shared by the header and the room so their edges line up. */
+export const PAGE_FRAME = 'mx-auto w-full max-w-[100rem] px-4 sm:px-6';

@@ -20,6 +20,8 @@ export const presentationKeys = {
 export const presentationListQuery = (projectId: string) =>
   queryOptions({
     queryKey: presentationKeys.list(projectId),
+    // What the client opened and chose, and which shown options changed since, move outside this page: read afresh.
+    staleTime: 0,
     queryFn: () =>
       api<{ presentations: PresentationSummary[] }>(`/api/projects/${projectId}/presentations`).then((r) => r.presentations),
   });

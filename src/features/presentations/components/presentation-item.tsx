@@ -24,9 +24,8 @@ export function PresentationItem({
   clientEmail: string | null;
   canEdit: boolean;
 }) {
-  const [dialog, setDialog] = useState<'send' | 'extend' | 'withdraw' | null>(null);
+  const [dialog, setDialog] = useState<'send' | 'extend' | 'withdraw' | 'decide' | null>(null);
   const [copied, setCopied] = useState<'yes' | 'no' | null>(null);
-  const decide = useDecideProject(projectId);
   const chosen = p.rooms.filter((r) => r.choice).length;
 
   const copy = async () => {
@@ -90,7 +89,10 @@ export function PresentationItem({
                   <ul>
                     {r.options.map((o) => (
                       <li key={o.optionId} className="flex justify-between gap-2">
-                        <span className="min-w-0">{o.label}</span>
+                        <span className="min-w-0">
+                          {o.label}
+                          {o.changedSinceSent && <span className="block text-ochre">changed since the link was made</span>}
+                        </span>
                         <span className="shrink-0 text-ink-faint">{o.viewCount > 0 ? `${o.viewCount}×` : '—'}</span>
                       </li>
                     ))}
@@ -132,7 +134,7 @@ export function PresentationItem({
             Withdraw
           </Button>
           {p.complete && projectState !== 'decided' && projectState !== 'archived' && (
-            <Button size="sm" variant="primary" className="ml-auto" busy={decide.isPending} onClick={() => decide.mutate(p.id)}>
+            <Button size="sm" variant="primary" className="ml-auto" onClick={() => setDialog('decide')}>
               Mark as decided
             </Button>
           )}
@@ -148,15 +150,11 @@ export function PresentationItem({
           <TextField label="Link (select and copy it)" readOnly value={p.link} onFocus={(e) => e.target.select()} />
         </div>
       )}
-      {decide.isError && (
-        <div className="mt-2">
-          <Notice tone="error">{errorMessage(decide.error)}</Notice>
-        </div>
-      )}
 
       {dialog === 'send' && <SendDialog p={p} projectId={projectId} clientEmail={clientEmail} onClose={() => setDialog(null)} />}
       {dialog === 'extend' && <ExtendDialog p={p} projectId={projectId} onClose={() => setDialog(null)} />}
       {dialog === 'withdraw' && <WithdrawDialog p={p} projectId={projectId} onClose={() => setDialog(null)} />}
+      {dialog === 'decide' && <DecideDialog p={p} projectId={projectId} onClose={() => setDialog(null)} />}
     </li>
   );
 }
@@ -263,6 +261,47 @@ function WithdrawDialog({ p, projectId, onClose }: { p: PresentationSummary; pro
         <Button variant="danger" busy={withdraw.isPending} onClick={() => withdraw.mutate(p.id, { onSuccess: onClose })}>
           Withdraw
         </Button>
+      </div>
+    </Dialog>
+  );
+}
+
+/** Mark as decided names what it freezes before it does: each room with the option its client chose. */
+function DecideDialog({ p, projectId, onClose }: { p: PresentationSummary; projectId: string; onClose: () => void }) {
+  const decide = useDecideProject(projectId);
+  return (
+    <Dialog
+      open
+      onClose={onClose}
+      title="Mark the project as decided?"
+      footer={
+        <>
+          <Button variant="quiet" onClick={onClose}>
+            Not yet
+          </Button>
+          <Button variant="primary" busy={decide.isPending} onClick={() => decide.mutate(p.id, { onSuccess: onClose })}>
+            Mark as decided
+          </Button>
+        </>
+      }
+    >
+      <div className="flex flex-col gap-3 text-[15px]">
+        <p>These options become read-only, with the walls and openings of their rooms:</p>
+        <ul className="flex flex-col gap-1 rounded-lg bg-sand px-4 py-3" aria-label="Options to be frozen">
+          {p.rooms.map((r) => {
+            const choice = r.choice && r.options.find((o) => o.optionId === r.choice!.optionId);
+            return (
+              <li key={r.roomId}>
+                <span className="font-semibold">{r.name}</span>: {choice ? choice.label : 'no choice'}
+              </li>
+            );
+          })}
+        </ul>
+        <p className="text-ink-soft">
+          The client can no longer change their choices from the link, and no new presentation can be made. To change a chosen
+          option, duplicate it, or reopen the project.
+        </p>
+        {decide.isError && <Notice tone="error">{errorMessage(decide.error)}</Notice>}
       </div>
     </Dialog>
   );

@@ -20,6 +20,8 @@ export function PresentationsPanel({
 }) {
   const list = usePresentations(projectId);
   const canEdit = useCanEdit() && projectState !== 'archived';
+  // A decided project takes no new presentation until it is reopened (the server says so too).
+  const canPresent = canEdit && projectState !== 'decided';
   const create = useCreatePresentation(projectId);
   const send = useSendPresentation(projectId);
   const [making, setMaking] = useState(false);
@@ -49,7 +51,7 @@ export function PresentationsPanel({
     <div>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
         <p className="text-sm text-ink-soft">A link for your client to walk round the options in 3D and choose one per room.</p>
-        {canEdit && (
+        {canPresent && (
           <Button
             size="sm"
             variant="primary"
@@ -65,7 +67,8 @@ export function PresentationsPanel({
       {projectState === 'decided' && (
         <div className="mb-4">
           <Notice tone="ok">
-            The project is decided: the client’s choices are confirmed and can no longer be changed from the link.
+            The project is decided: the client’s choices are confirmed and can no longer be changed from the link. Their options
+            open read-only in the room editor. Reopen the project to change them or to make a new presentation.
           </Notice>
         </div>
       )}

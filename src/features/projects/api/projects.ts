@@ -54,3 +54,16 @@ export function useUpdateProject(id: string) {
     onSuccess: () => qc.invalidateQueries({ queryKey: projectKeys.all }),
   });
 }
+
+/** Decided → presented, on purpose; the links, their choices and the rooms' frozen options change with it. */
+export function useReopenProject(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<{ project: ProjectSummary }>(`/api/projects/${id}/reopen`, { method: 'POST' }),
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: projectKeys.all });
+      void qc.invalidateQueries({ queryKey: ['presentations'] });
+      void qc.invalidateQueries({ queryKey: ['rooms'] });
+    },
+  });
+}

@@ -1,13 +1,14 @@
-import { useState, type FormEvent, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
-import { TextField } from '../../../components/ui/field';
+import { CommitTextField } from '../../../components/ui/commit-field';
+import { textParser } from '../../../components/ui/use-commit-text';
 import { Badge, Card, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
-import { errorMessage, fieldError } from '../../../lib/api';
-import { formatRelative } from '../../../lib/format';
+import { commitAnswer, errorMessage } from '../../../lib/api';
+import { formatDateTime, formatRelative } from '../../../lib/format';
 import { useCanEdit } from '../../../lib/session';
-import { useProject, useUpdateProject } from '../api/projects';
+import { useProject, useReopenProject, useUpdateProject } from '../api/projects';
 
 /** One project: its client, its rooms and its presentations (the latter two passed in by the route). */
 export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: ReactNode; presentations?: ReactNode }) {
@@ -15,6 +16,7 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
   const update = useUpdateProject(id);
   const canEdit = useCanEdit();
   const [renaming, setRenaming] = useState(false);
+  const [reopening, setReopening] = useState(false);
 
   if (project.isPending) return <Spinner label="Loading project…" />;
   if (project.isError) {
@@ -46,7 +48,8 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
         actions={
           canEdit && (
             <>
-              <Button onClick={() => setRenaming(true)}>Rename</Button>
+              <Button onClick={() => setRenaming(true)}>Edit details</Button>
+              {p.state === 'decided' && <Button onClick={() => setReopening(true)}>Reopen</Button>}
               <Button
                 variant={archived ? 'secondary' : 'quiet'}
                 busy={update.isPending}
@@ -59,6 +62,11 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
         }
       >
         {[p.address, `changed ${formatRelative(p.updatedAt)}`].filter(Boolean).join(' · ')}
+        {p.reopenedAt && (
+          <span className="block" data-testid="reopened">
+            Reopened {p.reopenedBy ? `by ${p.reopenedBy} ` : ''}on {formatDateTime(p.reopenedAt)}
+          </span>
+        )}
       </PageHeader>
       {update.isError && (
         <div className="mb-4">
@@ -103,37 +111,92 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
           )}
         </Card>
       </div>
-      {renaming && <RenameDialog current={p.name} onClose={() => setRenaming(false)} projectId={id} />}
+      {renaming && <DetailsDialog name={p.name} address={p.address} onClose={() => setRenaming(false)} projectId={id} />}
+      {reopening && <ReopenDialog onClose={() => setReopening(false)} projectId={id} />}
     </div>
   );
 }
 
-function RenameDialog({ current, onClose, projectId }: { current: string; onClose: () => void; projectId: string }) {
+const same = (v: string) => v;
+
+/** The project's name and address: each saves on Enter or on moving on, Escape puts back the saved value. */
+function DetailsDialog({
+  name,
+  address,
+  onClose,
+  projectId,
+}: {
+  name: string;
+  address: string | null;
+  onClose: () => void;
+  projectId: string;
+}) {
   const update = useUpdateProject(projectId);
-  const [name, setName] = useState(current);
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    update.mutate({ name }, { onSuccess: onClose });
-  };
   return (
-    <Dialog open onClose={onClose} title="Rename project">
-      <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-        <TextField
+    <Dialog
+      open
+      onClose={onClose}
+      title="Project details"
+      footer={
+        <Button variant="primary" onClick={onClose}>
+          Done
+        </Button>
+      }
+    >
+      <div className="flex flex-col gap-4">
+        <CommitTextField
           label="Project name"
           value={name}
-          onChange={(e) => setName(e.target.value)}
-          error={fieldError(update.error, 'name')}
-          autoFocus
+          format={same}
+          parse={textParser('Enter a project name.')}
+          onCommit={(v) => commitAnswer(update.mutateAsync({ name: v }), 'name')}
         />
-        <div className="flex justify-end gap-2">
+        <CommitTextField
+          label="Address"
+          value={address ?? ''}
+          format={same}
+          parse={textParser(null)}
+          onCommit={(v) => commitAnswer(update.mutateAsync({ address: v }), 'address')}
+        />
+        <p className="text-sm text-ink-faint" role="status">
+          {update.isPending
+            ? 'Saving…'
+            : update.isSuccess
+              ? 'All changes saved'
+              : 'Each field saves when you press Enter or move on.'}
+        </p>
+      </div>
+    </Dialog>
+  );
+}
+
+/** Decided → presented, on purpose: said plainly before it happens. */
+function ReopenDialog({ onClose, projectId }: { onClose: () => void; projectId: string }) {
+  const reopen = useReopenProject(projectId);
+  return (
+    <Dialog
+      open
+      onClose={onClose}
+      title="Reopen this project?"
+      footer={
+        <>
           <Button variant="quiet" onClick={onClose}>
-            Cancel
+            Keep it decided
           </Button>
-          <Button type="submit" variant="primary" busy={update.isPending}>
-            Save
+          <Button variant="primary" busy={reopen.isPending} onClick={() => reopen.mutate(undefined, { onSuccess: onClose })}>
+            Reopen
           </Button>
-        </div>
-      </form>
+        </>
+      }
+    >
+      <div className="flex flex-col gap-3 text-[15px]">
+        <p>The chosen options can be changed again, and so can the walls and openings of their rooms.</p>
+        <p>
+          The client’s links open for choosing again, and you can make new presentations. Parlour notes that you reopened it, and
+          when.
+        </p>
+        {reopen.isError && <Notice tone="error">{errorMessage(reopen.error)}</Notice>}
+      </div>
     </Dialog>
   );
 }

@@ -42,7 +42,8 @@ import { OutlinePanel } from './outline-panel';
 import { PlanView } from './plan-view';
 import { roomCentre, type Selection } from './plan-geometry';
 import { EDITOR_STEPS, type EditorStep } from './steps';
-import { useRoomEditor, type SaveState } from './use-room-editor';
+import { useRoomEditor, type Frozen, type SaveState } from './use-room-editor';
+import { optionLabel } from '../../../../shared/schemas/room-api';
 import { refusalText } from './refusal-text';
 
 const RoomView = lazy(() => import('../../../scene/room-view'));
@@ -125,7 +126,14 @@ function Editor({
   readOnly: boolean;
   finishes: Finish[];
 }) {
-  const editor = useRoomEditor(detail, readOnly);
+  // What the decided project stands on, from the room's live answer (Mark as decided and Reopen change it).
+  const frozenKey = detail.options
+    .filter((o) => o.decided)
+    .map((o) => o.id)
+    .join(',');
+  const frozen = useMemo<Frozen>(() => ({ optionIds: new Set(frozenKey ? frozenKey.split(',') : []) }), [frozenKey]);
+  const editor = useRoomEditor(detail, readOnly, frozen);
+  const [duplicating, setDuplicating] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
   const [place] = useState(() => readPlace(detail.room.id));
   const [step, setStep] = useState<EditorStep>(place?.step ?? (readOnly ? 'furnish' : 'outline'));
   const [optionId, setOptionId] = useState(
@@ -148,6 +156,22 @@ function Editor({
   const option = editor.doc.options[optionId] ?? Object.values(editor.doc.options)[0];
   const activeOptionId = editor.doc.options[optionId] ? optionId : Object.keys(editor.doc.options)[0];
   const pieces = option?.pieces ?? NO_PIECES;
+  const shellFrozen = frozen.optionIds.size > 0;
+  const optionFrozen = frozen.optionIds.has(activeOptionId);
+  const shellReadOnly = readOnly || shellFrozen;
+  const optionReadOnly = readOnly || optionFrozen;
+  const chosenLabels = editor.options.filter((o) => frozen.optionIds.has(o.id)).map((o) => optionLabel(o.position, o.name));
+  const duplicateToChange = async () => {
+    setDuplicating({ busy: true, error: null });
+    try {
+      const id = await editor.addOption(activeOptionId);
+      setOptionId(id);
+      setSelection(null);
+      setDuplicating({ busy: false, error: null });
+    } catch (err) {
+      setDuplicating({ busy: false, error: errorMessage(err) });
+    }
+  };
   const fit = useFitCheck(editor.doc.shell, pieces, walkwayMm);
   const findings = fit?.findings ?? [];
   const finding = chosenFinding !== null ? findings[chosenFinding] : undefined;
@@ -287,7 +311,7 @@ function Editor({
             run={editor.run}
             commit={commitField}
             unit={unit}
-            readOnly={readOnly}
+            readOnly={shellReadOnly}
             selection={selection}
             onSelect={setSelection}
             onPreview={setPreview}
@@ -301,7 +325,7 @@ function Editor({
             run={editor.run}
             commit={commitField}
             unit={unit}
-            readOnly={readOnly}
+            readOnly={shellReadOnly}
             selection={selection}
             onSelect={setSelection}
             newId={newId}
@@ -316,7 +340,7 @@ function Editor({
             run={editor.run}
             commit={commitField}
             unit={unit}
-            readOnly={readOnly}
+            readOnly={optionReadOnly}
             selection={selection}
             onSelect={setSelection}
             newId={newId}
@@ -330,7 +354,7 @@ function Editor({
             optionId={activeOptionId}
             finishes={finishes}
             run={editor.run}
-            readOnly={readOnly}
+            readOnly={optionReadOnly}
             selection={selection}
             onSelect={select}
             surface={finishTarget}
@@ -357,7 +381,8 @@ function Editor({
     editor.run,
     commitField,
     unit,
-    readOnly,
+    shellReadOnly,
+    optionReadOnly,
     selection,
     option,
     activeOptionId,
@@ -411,6 +436,7 @@ function Editor({
             setSelection(null);
           }}
           readOnly={readOnly}
+          frozen={frozen}
         />
         <div className="ml-auto flex items-center gap-2">
           <span
@@ -419,7 +445,11 @@ function Editor({
             data-state={editor.saveState}
             className={`text-xs font-medium whitespace-nowrap ${editor.saveState === 'saved' ? 'text-ink-faint' : editor.saveState === 'conflict' || editor.saveState === 'retrying' ? 'text-clay' : 'text-ochre'}`}
           >
-            {readOnly ? 'Read only' : SAVE_TEXT[editor.saveState]}
+            {readOnly
+              ? 'Read only'
+              : optionFrozen && editor.saveState === 'saved'
+                ? 'Chosen option · read only'
+                : SAVE_TEXT[editor.saveState]}
           </span>
           {!readOnly && (
             <>
@@ -480,6 +510,31 @@ function Editor({
 
       {/* Banners */}
       <div className="flex flex-col gap-2 px-4 empty:hidden [&:not(:empty)]:py-2">
+        {shellFrozen && (
+          <Notice tone="info">
+            <div className="flex flex-wrap items-center gap-x-4 gap-y-2" data-testid="decided-banner">
+              <p className="min-w-0 flex-1">
+                {optionFrozen ? (
+                  <>
+                    <strong>The project is decided.</strong> The client chose this option, so it is read-only, and so are the
+                    room’s walls and openings. To change it, duplicate it, or reopen the project on its page.
+                  </>
+                ) : (
+                  <>
+                    <strong>The project is decided.</strong> The client chose {chosenLabels.join(' and ')} here, so the room’s
+                    walls and openings are read-only. This option can still change.
+                  </>
+                )}
+              </p>
+              {optionFrozen && !readOnly && (
+                <Button size="sm" variant="primary" busy={duplicating.busy} onClick={() => void duplicateToChange()}>
+                  Duplicate to change
+                </Button>
+              )}
+            </div>
+            {duplicating.error && <p className="mt-2 text-clay">{duplicating.error}</p>}
+          </Notice>
+        )}
         {editor.conflict && (
           <Notice tone="warn">
             <p>
@@ -615,7 +670,7 @@ function Editor({
                   onSelect={select}
                   run={editor.run}
                   finishGesture={editor.finishGesture}
-                  readOnly={readOnly}
+                  readOnly={step === 'outline' || step === 'openings' ? shellReadOnly : optionReadOnly}
                   unit={unit}
                   newId={newId}
                   drawing={drawing}

@@ -68,6 +68,11 @@ export function FinishesPanel({
     { id: 'ceiling', label: 'Ceiling' },
     { id: 'piece', label: piece ? piece.name : 'A piece (click it)', disabled: !piece },
   ];
+  // Feature walls are listed from the start, not only once their wall is clicked.
+  const featureWalls = Object.entries(doc.finishes.wallOverrides)
+    .map(([index, id]) => ({ index: Number(index), finish: byId.get(id) }))
+    .filter((w) => Number.isInteger(w.index))
+    .sort((a, b) => a.index - b.index);
   const shown = finishes.filter(
     (f) => f.name.toLowerCase().includes(q.trim().toLowerCase()) && (f.kind === 'paint' || f.status !== 'failed'),
   );
@@ -105,6 +110,34 @@ export function FinishesPanel({
           );
         })}
       </div>
+
+      <section aria-labelledby="feature-walls-title">
+        <h3 id="feature-walls-title" className="mb-1.5 text-xs font-bold tracking-wide text-ink-faint uppercase">
+          Feature walls
+        </h3>
+        {featureWalls.length === 0 ? (
+          <p className="text-sm text-ink-soft">None: every wall wears the finish of all walls.</p>
+        ) : (
+          <ul className="flex flex-col gap-1">
+            {featureWalls.map((w) => (
+              <li key={w.index}>
+                <button
+                  type="button"
+                  aria-pressed={surface === 'wall' && wall === w.index}
+                  onClick={() => onSelect({ kind: 'wall', index: w.index })}
+                  className="flex w-full items-center gap-2 rounded-lg border border-line bg-white px-3 py-1.5 text-left text-sm hover:border-pine aria-pressed:border-pine aria-pressed:bg-pine-wash/60"
+                >
+                  <span className="flex-1 font-semibold">Wall {w.index + 1}</span>
+                  {w.finish && <Swatch finish={w.finish} size="sm" />}
+                  <span className="max-w-28 truncate text-xs text-ink-soft">
+                    {w.finish?.name ?? 'a finish no longer in the library'}
+                  </span>
+                </button>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
 
       {surface === 'piece' && piece && (
         <div role="radiogroup" aria-label="Which finish of the piece" className="flex gap-2">

@@ -150,7 +150,7 @@ function CatalogueList({
   return (
     <div className="flex flex-col gap-4">
       <p className="text-sm text-ink-soft">
-        Drag a piece onto the plan, or add it to the middle of the room. The holding area beside the room keeps pieces you are
+        Drag a piece onto the plan, or add it to the middle of the room. The holding area next to the room keeps pieces you are
         still finding a place for{heldCount > 0 ? ` (${heldCount} waiting)` : ''}.
       </p>
       <div aria-live="polite" className="min-h-0 empty:hidden">

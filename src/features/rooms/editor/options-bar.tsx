@@ -5,7 +5,7 @@ import { Dialog } from '../../../components/ui/dialog';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
-import type { RoomEditor } from './use-room-editor';
+import type { Frozen, RoomEditor } from './use-room-editor';
 
 /** Option tabs across the top: switch, add, duplicate, rename, reorder and delete options. */
 export function OptionsBar({
@@ -13,16 +13,20 @@ export function OptionsBar({
   optionId,
   onChoose,
   readOnly,
+  frozen,
 }: {
   editor: RoomEditor;
   optionId: string;
   onChoose: (id: string) => void;
   readOnly: boolean;
+  /** Options the decided project stands on: marked, and neither renamed nor deleted. */
+  frozen: Frozen;
 }) {
   const [dialog, setDialog] = useState<'rename' | 'delete' | null>(null);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const current = editor.options.find((o) => o.id === optionId);
+  const currentFrozen = frozen.optionIds.has(optionId);
   const menu = useRef<HTMLDetailsElement>(null);
 
   const act = async (f: () => Promise<unknown>) => {
@@ -46,9 +50,15 @@ export function OptionsBar({
             role="tab"
             aria-selected={o.id === optionId}
             onClick={() => onChoose(o.id)}
-            className="max-w-64 truncate rounded-lg px-3 py-1.5 text-sm font-semibold text-ink-soft hover:bg-sand aria-selected:bg-pine aria-selected:text-white"
+            className={`${frozen.optionIds.has(o.id) ? 'max-w-80' : 'max-w-64'} truncate rounded-lg px-3 py-1.5 text-sm font-semibold text-ink-soft hover:bg-sand aria-selected:bg-pine aria-selected:text-white`}
           >
             {optionLabel(o.position, o.name)}
+            {frozen.optionIds.has(o.id) && (
+              <>
+                {' '}
+                <span className="text-xs font-medium opacity-80">· chosen</span>
+              </>
+            )}
           </button>
         ))}
       </div>
@@ -66,7 +76,9 @@ export function OptionsBar({
               onClick={() => menu.current?.removeAttribute('open')}
             >
               <MenuItem onClick={() => act(async () => onChoose(await editor.addOption(optionId)))}>Duplicate option</MenuItem>
-              <MenuItem onClick={() => setDialog('rename')}>Rename option</MenuItem>
+              <MenuItem disabled={currentFrozen} onClick={() => setDialog('rename')}>
+                Rename option
+              </MenuItem>
               <MenuItem disabled={current.position === 0} onClick={() => act(() => editor.moveOption(optionId, -1))}>
                 Move left
               </MenuItem>
@@ -76,7 +88,7 @@ export function OptionsBar({
               >
                 Move right
               </MenuItem>
-              <MenuItem disabled={editor.options.length <= 1} onClick={() => setDialog('delete')} danger>
+              <MenuItem disabled={editor.options.length <= 1 || currentFrozen} onClick={() => setDialog('delete')} danger>
                 Delete option
               </MenuItem>
             </div>

@@ -20,43 +20,99 @@ export const DIMENSION_OFFSET_MM = 350;
 
 export type Selection = { kind: 'piece'; id: string } | { kind: 'opening'; id: string } | { kind: 'wall'; index: number } | null;
 
+/** Room left round the drawing on screen, for the dimension labels and handles (px, common practice). */
+export const PLAN_MARGIN_PX = 44;
+
+export interface ViewBox {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+
+/**
+ * The view box that shows `content` (plan mm) as large as the panel allows: the panel's own
+ * proportions, the content centred, a margin of `marginPx` screen pixels all round.
+ */
+export function fitViewBox(content: ViewBox, panel: { w: number; h: number }, marginPx = PLAN_MARGIN_PX): ViewBox {
+  const innerW = Math.max(panel.w - 2 * marginPx, panel.w / 2, 1);
+  const innerH = Math.max(panel.h - 2 * marginPx, panel.h / 2, 1);
+  const mmPerPx = Math.max(content.w / innerW, content.h / innerH);
+  const w = panel.w * mmPerPx;
+  const h = panel.h * mmPerPx;
+  return { x: content.x + content.w / 2 - w / 2, y: content.y + content.h / 2 - h / 2, w, h };
+}
+
 export interface PlanLayout {
   walls: WallLayout[];
   outer: [number, number][];
   roomBounds: Bounds2;
   openings: ReturnType<typeof placeShellOpenings>;
-  holding: { x: number; y: number; width: number; height: number; slots: Record<string, [number, number]> };
-  viewBox: { x: number; y: number; w: number; h: number };
+  holding: { x: number; y: number; width: number; height: number; slots: Record<string, [number, number]>; side: HoldingSide };
+  viewBox: ViewBox;
+  /** What the plan must show: the room and the holding area with their dimension lines (for fitViewBox). */
+  content: ViewBox;
 }
 
+/** Where the holding area sits: beside the room in a wide panel, below it in a tall one. */
+export type HoldingSide = 'right' | 'below';
+/** Below the room the gap also holds the bottom dimension line and the area's label. */
+const HOLDING_GAP_BELOW_MM = 1300;
+
 /** Walls, openings, the holding area's slots and the view box for a shell and its option's pieces. */
-export function planLayout(shell: RoomShell, pieces: readonly Piece[]): PlanLayout {
+export function planLayout(shell: RoomShell, pieces: readonly Piece[], side: HoldingSide = 'right'): PlanLayout {
   const walls = layoutShellWalls(shell);
   const outer = outerRingMm(walls);
   const roomBounds = boundsMm(outer);
   const held = pieces.filter((p) => !p.placed);
-  const holdingWidth = Math.max(1600, ...held.map((p) => Math.max(p.width, p.depth) + 2 * HOLDING_SPACING_MM));
-  const x = roomBounds.maxX + HOLDING_GAP_MM;
   const slots: Record<string, [number, number]> = {};
-  let y = roomBounds.minY + HOLDING_SPACING_MM;
-  for (const p of held) {
-    slots[p.id] = [x + holdingWidth / 2, y + p.depth / 2];
-    y += p.depth + HOLDING_SPACING_MM;
+  let x: number;
+  let top: number;
+  let holdingWidth: number;
+  let holdingHeight: number;
+  if (side === 'below') {
+    x = roomBounds.minX;
+    top = roomBounds.maxY + HOLDING_GAP_BELOW_MM;
+    holdingHeight = Math.max(1600, ...held.map((p) => Math.max(p.width, p.depth) + 2 * HOLDING_SPACING_MM));
+    let along = x + HOLDING_SPACING_MM;
+    for (const p of held) {
+      slots[p.id] = [along + p.width / 2, top + holdingHeight / 2];
+      along += p.width + HOLDING_SPACING_MM;
+    }
+    holdingWidth = Math.max(roomBounds.maxX - roomBounds.minX, along - x);
+  } else {
+    holdingWidth = Math.max(1600, ...held.map((p) => Math.max(p.width, p.depth) + 2 * HOLDING_SPACING_MM));
+    x = roomBounds.maxX + HOLDING_GAP_MM;
+    top = roomBounds.minY;
+    let y = roomBounds.minY + HOLDING_SPACING_MM;
+    for (const p of held) {
+      slots[p.id] = [x + holdingWidth / 2, y + p.depth / 2];
+      y += p.depth + HOLDING_SPACING_MM;
+    }
+    holdingHeight = Math.max(roomBounds.maxY - roomBounds.minY, y - roomBounds.minY);
   }
-  const holdingHeight = Math.max(roomBounds.maxY - roomBounds.minY, y - roomBounds.minY);
+  const right = Math.max(roomBounds.maxX, x + holdingWidth);
+  const bottom = Math.max(roomBounds.maxY, top + holdingHeight);
   const viewBox = {
     x: roomBounds.minX - PLAN_MARGIN_MM,
     y: roomBounds.minY - PLAN_MARGIN_MM,
-    w: x + holdingWidth - roomBounds.minX + 2 * PLAN_MARGIN_MM,
-    h: holdingHeight + 2 * PLAN_MARGIN_MM,
+    w: right - roomBounds.minX + 2 * PLAN_MARGIN_MM,
+    h: bottom - roomBounds.minY + 2 * PLAN_MARGIN_MM,
+  };
+  const content = {
+    x: roomBounds.minX - DIMENSION_OFFSET_MM,
+    y: roomBounds.minY - DIMENSION_OFFSET_MM,
+    w: right - roomBounds.minX + 2 * DIMENSION_OFFSET_MM,
+    h: bottom - roomBounds.minY + 2 * DIMENSION_OFFSET_MM,
   };
   return {
     walls,
     outer,
     roomBounds,
     openings: placeShellOpenings(shell),
-    holding: { x, y: roomBounds.minY, width: holdingWidth, height: holdingHeight, slots },
+    holding: { x, y: top, width: holdingWidth, height: holdingHeight, slots, side },
     viewBox,
+    content,
   };
 }
 
@@ -73,6 +129,8 @@ export function pieceRing(piece: Pick<Piece, 'x' | 'y' | 'width' | 'depth' | 'ro
 /** Whether a plan point is inside the holding area. */
 export function inHolding(layout: PlanLayout, point: readonly [number, number]): boolean {
   const h = layout.holding;
+  if (h.side === 'below')
+    return point[1] >= h.y - HOLDING_GAP_MM / 2 && point[0] >= h.x - PLAN_MARGIN_MM && point[0] <= h.x + h.width + PLAN_MARGIN_MM;
   return point[0] >= h.x - HOLDING_GAP_MM / 2 && point[1] >= h.y - PLAN_MARGIN_MM && point[1] <= h.y + h.height + PLAN_MARGIN_MM;
 }
 

@@ -21,7 +21,16 @@ import {
 import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { distance } from '../../../../shared/geometry/vec';
-import { DIMENSION_OFFSET_MM, inHolding, pieceRing, placedNear, planLayout, ringPath, type Selection } from './plan-geometry';
+import {
+  DIMENSION_OFFSET_MM,
+  fitViewBox,
+  inHolding,
+  pieceRing,
+  placedNear,
+  planLayout,
+  ringPath,
+  type Selection,
+} from './plan-geometry';
 import type { EditorStep } from './steps';
 import { PieceLabel, PieceTopView } from './plan-piece-forms';
 
@@ -74,28 +83,42 @@ const nextGesture = (what: string) => `${what}-${++gestureCounter}`;
 
 export function PlanView(props: Props) {
   const { shell, optionId, pieces, step, selection, onSelect, run, finishGesture, readOnly, unit, newId } = props;
-  const layout = useMemo(() => planLayout(shell, pieces), [shell, pieces]);
   const svgRef = useRef<SVGSVGElement>(null);
+  const [box, setBox] = useState<{ w: number; h: number } | null>(null);
+  // A tall, narrow panel (side by side with the 3D at 1280) keeps the holding area below the room,
+  // so the room gets the panel's width.
+  const side = box && box.h > box.w * 1.15 ? 'below' : 'right';
+  const layout = useMemo(() => planLayout(shell, pieces, side), [shell, pieces, side]);
   const [view, setView] = useState(layout.viewBox);
   const [drag, setDrag] = useState<Drag | null>(null);
   const [draft, setDraft] = useState<[number, number][]>([]);
   const [pointer, setPointer] = useState<[number, number] | null>(null);
   const fitted = useRef(false);
 
-  // Fit the view to the room when it first appears and when the outline grows past the view. Only
-  // the room counts: pieces joining the holding area never change the plan's scale.
+  // Fit the view to the room, as large as the panel allows, when it first appears, when the panel
+  // changes size and when the outline grows past the view. Only the room counts afterwards: pieces
+  // joining the holding area never change the plan's scale.
+  const boxW = box?.w ?? 0;
+  const boxH = box?.h ?? 0;
+  // A new panel size (plan alone, side by side, a wider window) is a fresh fit, unless the
+  // designer has panned or zoomed the plan themselves.
+  const moved = useRef(false);
   useEffect(() => {
-    const vb = layout.viewBox;
+    if (!moved.current) fitted.current = false;
+  }, [boxW, boxH]);
+  useEffect(() => {
+    if (boxW === 0 || boxH === 0) return;
+    const fit = fitViewBox(layout.content, { w: boxW, h: boxH });
     const rb = layout.roomBounds;
     setView((v) => {
       if (!fitted.current) {
         fitted.current = true;
-        return vb;
+        return fit;
       }
       const outside = rb.minX < v.x || rb.minY < v.y || rb.maxX > v.x + v.w || rb.maxY > v.y + v.h;
-      return outside ? vb : v;
+      return outside ? fit : v;
     });
-  }, [layout.viewBox, layout.roomBounds]);
+  }, [layout.content, layout.roomBounds, boxW, boxH]);
 
   useEffect(() => {
     if (!props.drawing) setDraft([]);
@@ -111,7 +134,6 @@ export function PlanView(props: Props) {
 
   // Text and lines keep their size on screen whatever the zoom: sizes are in screen pixels times
   // plan mm per pixel (the view box is fitted with "meet", so the tighter axis sets the scale).
-  const [box, setBox] = useState({ w: 800, h: 600 });
   useEffect(() => {
     const svg = svgRef.current;
     if (!svg) return;
@@ -121,7 +143,7 @@ export function PlanView(props: Props) {
     observer.observe(svg);
     return () => observer.disconnect();
   }, []);
-  const mmPerPx = Math.max(view.w / box.w, view.h / box.h);
+  const mmPerPx = Math.max(view.w / (box?.w || 800), view.h / (box?.h || 600));
   if (props.viewCentre) {
     // The visible part of the room's box, so a view panned half off the room still adds into it.
     const rb = layout.roomBounds;
@@ -164,6 +186,7 @@ export function PlanView(props: Props) {
       const now = at;
       const dx = now[0] - drag.start[0];
       const dy = now[1] - drag.start[1];
+      moved.current = true;
       setView((v) => ({ ...v, x: v.x - dx, y: v.y - dy }));
       return;
     }
@@ -270,6 +293,7 @@ export function PlanView(props: Props) {
   const onWheel = (e: React.WheelEvent) => {
     const at = toPlan(e.clientX, e.clientY);
     const factor = Math.exp(e.deltaY * 0.0015);
+    moved.current = true;
     setView((v) => {
       const w = Math.min(Math.max(v.w * factor, 1500), 60000);
       const k = w / v.w;

@@ -113,8 +113,32 @@ function changedParts(doc: EditorDoc, base: Baseline) {
   };
 }
 
-export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
+/**
+ * What a decided project keeps as it is: the options the client chose and, with them, the room's
+ * walls and openings (the server refuses both too).
+ */
+export interface Frozen {
+  optionIds: ReadonlySet<string>;
+}
+
+export const FROZEN_OPTION_TEXT = 'The client chose this option and the project is decided: duplicate it to change it.';
+export const FROZEN_SHELL_TEXT =
+  'An option of this room was chosen and the project is decided, so its walls and openings stay as they are.';
+
+/** The reason a change from `before` to `after` may not be made, if it touches what is frozen. */
+export function frozenRefusal(before: EditorDoc, after: EditorDoc, frozen: Frozen): string | null {
+  if (frozen.optionIds.size === 0) return null;
+  if (before.shell !== after.shell) return FROZEN_SHELL_TEXT;
+  for (const id of frozen.optionIds) if (before.options[id] !== after.options[id]) return FROZEN_OPTION_TEXT;
+  return null;
+}
+
+const NOTHING_FROZEN: Frozen = { optionIds: new Set() };
+
+export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Frozen = NOTHING_FROZEN) {
   const roomId = detail.room.id;
+  const frozenRef = useRef(frozen);
+  frozenRef.current = frozen;
   const qc = useQueryClient();
   const baseline = useRef<Baseline>(baselineOf(detail.room, detail.options));
   const [initial] = useState(() => startingPoint(baseline.current, readOnly ? null : readDraft(roomId)));
@@ -196,7 +220,11 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
       const after = changedParts(historyRef.current.doc, baseline.current);
       setSaveState(after.shell || after.options.length > 0 ? 'unsaved' : 'saved');
     } catch (err) {
-      if (err instanceof ApiError && err.status === 409) {
+      if (err instanceof ApiError && err.status === 409 && err.code === 'decided') {
+        // Changes made before the project was decided (a draft, another tab) cannot be saved onto a chosen option.
+        setMessage(err.message);
+        setSaveState('unsaved');
+      } else if (err instanceof ApiError && err.status === 409) {
         const theirs = (err.body as { current: RoomRecord | OptionRecord }).current;
         setConflict('shell' in theirs ? { part: 'room', theirs } : { part: 'option', optionId: theirs.id, theirs });
         setSaveState('conflict');
@@ -226,6 +254,9 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
     return () => clearTimeout(timer);
   }, [doc, dirty, readOnly, conflict]); // eslint-disable-line react-hooks/exhaustive-deps
 
+  // Leaving the editor inside the autosave's quiet time (back to the project, say) saves what is pending.
+  useEffect(() => () => void saveRef.current(), []);
+
   // Warn before leaving with unsaved changes.
   useEffect(() => {
     if (!dirty) return;
@@ -244,6 +275,11 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
         setRefusal({ message: result.message, problems: result.problems ?? [] });
         return false;
       }
+      const frozenText = frozenRefusal(historyRef.current.doc, result.history.doc, frozenRef.current);
+      if (frozenText) {
+        setRefusal({ message: frozenText, problems: [] });
+        return false;
+      }
       setRefusal(null);
       historyRef.current = result.history;
       setHistory(result.history);
@@ -258,6 +294,8 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
       if (readOnly) return null;
       const result = applyToHistory(historyRef.current, command, options);
       if (!result.ok) return { message: result.message, problems: result.problems ?? [] };
+      const frozenText = frozenRefusal(historyRef.current.doc, result.history.doc, frozenRef.current);
+      if (frozenText) return { message: frozenText, problems: [] };
       setRefusal(null);
       historyRef.current = result.history;
       setHistory(result.history);
@@ -267,8 +305,23 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
   );
 
   const finishGesture = useCallback(() => setHistory((h) => endGesture(h)), []);
-  const doUndo = useCallback(() => !readOnly && setHistory((h) => undo(h)), [readOnly]);
-  const doRedo = useCallback(() => !readOnly && setHistory((h) => redo(h)), [readOnly]);
+  // An undo or redo that would change what the decided project stands on is refused like any edit.
+  const step = useCallback(
+    (move: (h: History) => History) => {
+      if (readOnly) return;
+      const next = move(historyRef.current);
+      const frozenText = frozenRefusal(historyRef.current.doc, next.doc, frozenRef.current);
+      if (frozenText) {
+        setRefusal({ message: frozenText, problems: [] });
+        return;
+      }
+      historyRef.current = next;
+      setHistory(next);
+    },
+    [readOnly],
+  );
+  const doUndo = useCallback(() => step(undo), [step]);
+  const doRedo = useCallback(() => step(redo), [step]);
 
   /** Their version replaces ours for the conflicting part; our other unsaved parts stay. */
   const loadTheirs = useCallback(() => {
@@ -363,9 +416,11 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean) {
 
   const refetchOptions = useCallback(async () => {
     const fresh = await api<RoomDetail>(`/api/rooms/${roomId}`);
+    // The room's query follows, so what the decided project stands on stays current.
+    qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, options: fresh.options } : d));
     afterOptionsChange(fresh.options);
     return fresh.options;
-  }, [afterOptionsChange, roomId]);
+  }, [afterOptionsChange, qc, roomId]);
 
   const renameRoom = useCallback(
     async (name: string) => {

@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import type { CompareAnswer } from '../../../../shared/analysis/schedule';
 import { Badge } from '../../../components/ui/layout';
-import { formatMoney, formatNumber } from './format';
+import { formatNumber, useFormatMoney } from './format';
 
 type CompareRoom = CompareAnswer['rooms'][number];
 
@@ -10,6 +10,7 @@ const cell = 'py-2 px-3 text-right tabular-nums';
 
 /** One room's options side by side: one column per option, one row per figure. */
 export function CompareTable({ projectId, room }: { projectId: string; room: CompareRoom }) {
+  const formatMoney = useFormatMoney();
   const anyChoice = room.chosenOptionId !== null;
   return (
     <div className="overflow-x-auto">

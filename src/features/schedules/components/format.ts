@@ -1,10 +1,9 @@
 import { QUANTITY_UNIT_LABELS, type QuantityUnit } from '../../../../shared/analysis/schedule';
 
-const moneyFormat = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 const quantityFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 
-/** Prices carry no currency: the studio works in its own. */
-export const formatMoney = (value: number) => moneyFormat.format(value);
+/** Prices are written in the studio's currency and locale (its settings, through the session). */
+export { useFormatMoney } from '../../../lib/session';
 export const formatNumber = (value: number) => quantityFormat.format(value);
 
 export function formatQuantity(value: number, unit: QuantityUnit): string {

@@ -1,3 +1,4 @@
+import { Fragment } from 'react';
 // One option's schedule: every piece and finish with quantities, prices and totals; a CSV download
 // and a print view (the app's top bar and these buttons are left off paper).
 import { Link } from 'react-router';
@@ -6,7 +7,8 @@ import { Button } from '../../../components/ui/button';
 import { Badge, PageHeader, Spinner } from '../../../components/ui/layout';
 import { scheduleCsvUrl, settingsQuery, useSchedule } from '../api/schedules';
 import { useTakeoffSettings } from '../hooks/use-takeoff-settings';
-import { formatMoney, formatQuantity } from './format';
+import { formatQuantity, useFormatMoney } from './format';
+import { useMoney, useSession } from '../../../lib/session';
 import { PaintChip } from './paint-chip';
 import { LoadError } from './load-error';
 
@@ -16,18 +18,28 @@ const td = 'py-2.5 pr-3 align-top';
 const tdNum = `${td} text-right tabular-nums whitespace-nowrap`;
 
 export function SchedulePage({ projectId, optionId }: { projectId: string; optionId: string }) {
+  const formatMoney = useFormatMoney();
+  const money = useMoney();
+  const studioName = useSession().data?.studio.name ?? '';
+  const printedOn = new Intl.DateTimeFormat(money.locale, { day: 'numeric', month: 'long', year: 'numeric' }).format(new Date());
   const { settings } = useTakeoffSettings(projectId);
   const query = settingsQuery(settings);
   const schedule = useSchedule(optionId, query);
 
   if (schedule.isPending) return <Spinner label="Loading the schedule…" />;
   if (schedule.isError) return <LoadError error={schedule.error} projectId={projectId} />;
-  const { project, room, option, schedule: s } = schedule.data;
+  const { project, room, option, schedule: s, client } = schedule.data;
   const pieces = s.lines.filter((l) => l.section === 'piece');
   const finishes = s.lines.filter((l) => l.section === 'finish');
 
   return (
     <article>
+      {/* On paper the schedule says whose it is and when it was printed. */}
+      <header className="mb-4 hidden border-b border-ink pb-3 text-sm print:block" data-testid="print-header">
+        <p className="text-base font-bold">{studioName}</p>
+        <p>{[client && `For ${client.name}`, project.name, room.name, option.label].filter(Boolean).join(' · ')}</p>
+        <p>Printed {printedOn}</p>
+      </header>
       <PageHeader
         eyebrow={
           <>
@@ -104,7 +116,7 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
           )}
           <p>
             Quantities are measured on the inside faces with common-practice allowances; check on site before ordering. Prices are
-            as entered, without currency.
+            in the studio’s currency, {money.currency}.
           </p>
         </div>
       </div>
@@ -113,6 +125,7 @@ export function SchedulePage({ projectId, optionId }: { projectId: string; optio
 }
 
 function Total({ label, value }: { label: string; value: number }) {
+  const formatMoney = useFormatMoney();
   return (
     <div className="flex justify-between py-1">
       <dt className="text-ink-soft">{label}</dt>
@@ -160,6 +173,7 @@ function LineTable({ title, lines, empty }: { title: string; lines: ScheduleLine
 }
 
 function Line({ line: l }: { line: ScheduleLine }) {
+  const formatMoney = useFormatMoney();
   return (
     <tr>
       <td className={td}>
@@ -204,9 +218,14 @@ function Line({ line: l }: { line: ScheduleLine }) {
             href={l.supplierUrl}
             target="_blank"
             rel="noreferrer noopener"
-            className="break-all text-pine hover:underline print:text-ink"
+            className="break-words text-pine hover:underline print:text-ink"
           >
-            {linkText(l.supplierUrl)}
+            {linkParts(l.supplierUrl).map((part, i) => (
+              <Fragment key={i}>
+                {i > 0 && <wbr />}
+                {part}
+              </Fragment>
+            ))}
           </a>
         )}
         {!l.supplier && !l.supplierUrl && <span className="text-ink-faint">—</span>}
@@ -218,4 +237,9 @@ function Line({ line: l }: { line: ScheduleLine }) {
 /** The address without its scheme, short enough for a column and still readable on paper. */
 function linkText(url: string): string {
   return url.replace(/^https?:\/\//, '').replace(/\/$/, '');
+}
+
+/** The address in pieces that may end a line: after a slash, dot, hyphen or query mark, never inside a word. */
+export function linkParts(url: string): string[] {
+  return linkText(url).split(/(?<=[/.?&=_-])/);
 }

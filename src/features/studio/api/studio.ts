@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { InviteBody, InviteInfo, Member, Role } from '../../../../shared/schemas/studio';
+import type { InviteBody, InviteInfo, Member, Role, StudioSettingsBody } from '../../../../shared/schemas/studio';
 import { api } from '../../../lib/api';
+import { sessionKeys } from '../../../lib/session';
 
 export const studioKeys = {
   all: ['studio'] as const,
@@ -50,5 +51,15 @@ export function useRemoveMember() {
   return useMutation({
     mutationFn: (id: string) => api(`/api/studio/members/${id}`, { method: 'DELETE' }),
     onSettled: () => qc.invalidateQueries({ queryKey: studioKeys.all }),
+  });
+}
+
+/** The studio's currency and locale; every screen reads them from the session, so it is read again. */
+export function useUpdateStudioSettings() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: StudioSettingsBody) =>
+      api<{ settings: { currency: string; locale: string } }>('/api/studio/settings', { method: 'PATCH', body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: sessionKeys.all }),
   });
 }

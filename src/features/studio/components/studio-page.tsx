@@ -6,8 +6,20 @@ import { inputClass, SelectField, TextField } from '../../../components/ui/field
 import { Badge, Card, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage, fieldError } from '../../../lib/api';
 import { formatDate } from '../../../lib/format';
-import { useSession } from '../../../lib/session';
-import { useChangeRole, useInvite, useInvites, useMembers, useRemoveMember, useRevokeInvite } from '../api/studio';
+import { commitAnswer } from '../../../lib/api';
+import { useMoney, useSession } from '../../../lib/session';
+import { formatMoney } from '../../../../shared/units/money';
+import { CommitTextField } from '../../../components/ui/commit-field';
+import { textParser } from '../../../components/ui/use-commit-text';
+import {
+  useChangeRole,
+  useInvite,
+  useInvites,
+  useMembers,
+  useRemoveMember,
+  useRevokeInvite,
+  useUpdateStudioSettings,
+} from '../api/studio';
 
 const ROLE_HELP: Record<Role, string> = {
   owner: 'Runs the studio: members, roles and every project.',
@@ -120,18 +132,21 @@ export function StudioPage() {
             </Card>
           )}
         </div>
-        <Card title="Roles">
-          <dl className="flex flex-col gap-4 text-[15px]">
-            {(Object.keys(ROLE_HELP) as Role[]).map((r) => (
-              <div key={r}>
-                <dt>
-                  <Badge value={r} />
-                </dt>
-                <dd className="mt-1 text-ink-soft">{ROLE_HELP[r]}</dd>
-              </div>
-            ))}
-          </dl>
-        </Card>
+        <div className="flex flex-col gap-6 self-start">
+          <PricesCard isOwner={isOwner} />
+          <Card title="Roles">
+            <dl className="flex flex-col gap-4 text-[15px]">
+              {(Object.keys(ROLE_HELP) as Role[]).map((r) => (
+                <div key={r}>
+                  <dt>
+                    <Badge value={r} />
+                  </dt>
+                  <dd className="mt-1 text-ink-soft">{ROLE_HELP[r]}</dd>
+                </div>
+              ))}
+            </dl>
+          </Card>
+        </div>
       </div>
       {inviting && <InviteDialog onClose={() => setInviting(false)} />}
       {removing && (
@@ -192,5 +207,42 @@ function InviteDialog({ onClose }: { onClose: () => void }) {
         </div>
       </form>
     </Dialog>
+  );
+}
+
+const same = (v: string) => v;
+
+/** The studio's currency and locale: every price on every screen, the CSV and the client's page use them. */
+function PricesCard({ isOwner }: { isOwner: boolean }) {
+  const money = useMoney();
+  const update = useUpdateStudioSettings();
+  return (
+    <Card title="Prices">
+      <div className="flex flex-col gap-4">
+        <div className="grid grid-cols-2 gap-3">
+          <CommitTextField
+            label="Currency"
+            value={money.currency}
+            format={same}
+            parse={textParser('Enter a currency code.')}
+            onCommit={(currency) => commitAnswer(update.mutateAsync({ currency }), 'currency')}
+            hint="e.g. GBP, EUR, USD"
+            disabled={!isOwner}
+          />
+          <CommitTextField
+            label="Locale"
+            value={money.locale}
+            format={same}
+            parse={textParser('Enter a locale.')}
+            onCommit={(locale) => commitAnswer(update.mutateAsync({ locale }), 'locale')}
+            hint="e.g. en-GB, fr-FR"
+            disabled={!isOwner}
+          />
+        </div>
+        <p className="text-sm text-ink-soft" data-testid="price-example">
+          A price reads {formatMoney(1280, money)}.
+        </p>
+      </div>
+    </Card>
   );
 }
