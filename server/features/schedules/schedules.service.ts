@@ -9,20 +9,12 @@ import { projectOrThrow as projectSummaryOrThrow } from '../projects/projects.se
 import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
-import {
-  QUANTITY_UNIT_LABELS,
-  buildSchedule,
-  compareOption,
-  projectTakeoff,
-  roomTakeoff,
-  sizeText,
-  type CompareAnswer,
-  type FinishInfo,
-  type FinishLookup,
-  type ProjectTakeoffAnswer,
-  type ScheduleAnswer,
-  type TakeoffSettings,
-} from '../../../shared/analysis/schedule';
+import { QUANTITY_UNIT_LABELS, buildSchedule } from '../../../shared/analysis/schedule-lines';
+import { compareOption } from '../../../shared/analysis/compare';
+import { projectTakeoff, roomTakeoff, type FinishInfo, type FinishLookup } from '../../../shared/analysis/finish-takeoff';
+import { pieceSizeText } from '../../../shared/units/piece-size';
+import { type CompareAnswer, type ProjectTakeoffAnswer, type ScheduleAnswer } from '../../../shared/schemas/schedule-api';
+import { type TakeoffSettings } from '../../../shared/analysis/takeoff-settings';
 import { toCsv, type CsvCell } from './csv';
 
 interface RoomWithOptions {
@@ -201,7 +193,7 @@ export function scheduleCsv(answer: ScheduleAnswer): string {
       l.section === 'piece' ? 'Piece' : 'Finish',
       l.name,
       l.status,
-      l.sizeMm ? [sizeText(l.sizeMm), l.detail].filter(Boolean).join(' · ') : l.detail,
+      l.sizeMm ? [pieceSizeText(l.sizeMm), l.detail].filter(Boolean).join(' · ') : l.detail,
       l.quantity,
       QUANTITY_UNIT_LABELS[l.quantityUnit],
       l.quantityNote,
