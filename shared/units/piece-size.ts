@@ -3,11 +3,11 @@
 const MM_PER_CM = 10;
 
 /** Millimetres as centimetres to one decimal place, without trailing zeros: 855 → "85.5", 900 → "90". */
-export function cmText(mm: number): string {
+export function decimalCmText(mm: number): string {
   return String(Math.round(mm) / MM_PER_CM);
 }
 
 /** "200 × 90 × 80 cm": a piece's width × depth × height. */
 export function pieceSizeText(size: { width: number; depth: number; height: number }): string {
-  return `${cmText(size.width)} × ${cmText(size.depth)} × ${cmText(size.height)} cm`;
+  return `${decimalCmText(size.width)} × ${decimalCmText(size.depth)} × ${decimalCmText(size.height)} cm`;
 }

@@ -8,6 +8,7 @@ import { finishesByIds } from '../finishes/finishes.service';
 import { projectOrThrow as projectSummaryOrThrow } from '../projects/projects.service';
 import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
+import { optionFinishIds } from '../../../shared/finishes/option-surfaces';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
 import { QUANTITY_UNIT_LABELS, buildSchedule } from '../../../shared/analysis/schedule-lines';
 import { compareOption } from '../../../shared/analysis/compare';
@@ -32,22 +33,6 @@ async function roomsOf(db: Db, studioId: string, projectId: string): Promise<Roo
   return Promise.all(rooms.map(async (room) => ({ room, options: await listOptions(db, studioId, room.id) })));
 }
 
-function finishIdsOf(docs: readonly OptionDoc[]): Set<string> {
-  const ids = new Set<string>();
-  for (const { finishes, pieces } of docs) {
-    for (const id of [
-      finishes.floor,
-      finishes.ceiling,
-      finishes.walls,
-      ...Object.values(finishes.wallOverrides),
-      ...pieces.flatMap((p) => [p.finishId, p.accentFinishId]),
-    ]) {
-      if (id) ids.add(id);
-    }
-  }
-  return ids;
-}
-
 export function toFinishInfo(f: Finish): FinishInfo {
   const base = { id: f.id, name: f.name, supplier: f.supplier, code: f.code, price: f.price, priceUnit: f.priceUnit };
   return f.kind === 'paint'
@@ -56,7 +41,7 @@ export function toFinishInfo(f: Finish): FinishInfo {
 }
 
 async function lookupFor(db: Db, studioId: string, docs: readonly OptionDoc[]): Promise<FinishLookup> {
-  const finishes = await finishesByIds(db, studioId, finishIdsOf(docs));
+  const finishes = await finishesByIds(db, studioId, docs.flatMap(optionFinishIds));
   return new Map(finishes.map((f) => [f.id, toFinishInfo(f)]));
 }
 
