@@ -49,6 +49,18 @@ const refOf = (o: OptionRecord) => ({ id: o.id, label: optionLabel(o.position, o
 // Options are listed by position; the label letter follows the list order, as on the room page.
 const withPositions = (options: OptionRecord[]) => options.map((o, position) => ({ ...o, position }));
 
+/** A project with its rooms and their options, the client's latest choice per room, and every finish the options use. */
+async function projectRooms(db: Db, studioId: string, projectId: string) {
+  const project = await projectOrThrow(db, studioId, projectId);
+  const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
+  const finishes = await lookupFor(
+    db,
+    studioId,
+    rooms.flatMap((r) => r.options.map((o) => o.doc)),
+  );
+  return { project, rooms, choices, finishes };
+}
+
 /**
  * The project's take-off: each room counted with one option (the one asked for, else the client's
  * choice, else the first), and the totals over the rooms.
@@ -60,13 +72,7 @@ export async function projectTakeoffAnswer(
   settings: TakeoffSettings,
   countedIds: readonly string[],
 ): Promise<ProjectTakeoffAnswer> {
-  const project = await projectOrThrow(db, studioId, projectId);
-  const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
-  const finishes = await lookupFor(
-    db,
-    studioId,
-    rooms.flatMap((r) => r.options.map((o) => o.doc)),
-  );
+  const { project, rooms, choices, finishes } = await projectRooms(db, studioId, projectId);
   const asked = new Set(countedIds);
   const answered = rooms.map(({ room, options }) => {
     const listed = withPositions(options);
@@ -131,13 +137,7 @@ export async function compareAnswer(
   projectId: string,
   settings: TakeoffSettings,
 ): Promise<CompareAnswer> {
-  const project = await projectOrThrow(db, studioId, projectId);
-  const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
-  const finishes = await lookupFor(
-    db,
-    studioId,
-    rooms.flatMap((r) => r.options.map((o) => o.doc)),
-  );
+  const { project, rooms, choices, finishes } = await projectRooms(db, studioId, projectId);
   const answered: CompareAnswer['rooms'] = [];
   for (const { room, options } of rooms) {
     const chosenOptionId = choices.get(room.id) ?? null;
