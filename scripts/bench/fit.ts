@@ -9,7 +9,7 @@ import { findOutsideRoom } from '../../shared/analysis/fit/outside-room';
 import { findOverlaps } from '../../shared/analysis/fit/overlap';
 import { findWalkwayProblems } from '../../shared/analysis/fit/walkway';
 import { findBlockedWindows } from '../../shared/analysis/fit/window';
-import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/takeoff';
+import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/fit/clearances';
 import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
 import { checkFit as referenceCheckFit } from './reference-fit/index';

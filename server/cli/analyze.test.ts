@@ -301,6 +301,10 @@ describe('analyze command: refusals', () => {
     [['--coats', '0'], /--coats: expected a whole number of coats/],
     [['--coats', '1.5'], /--coats: expected a whole number/],
     [['--coverage', 'lots'], /--coverage: expected square metres per litre/],
+    // The take-off page's bounds, from the one settings schema.
+    [['--coats', '11'], /--coats: expected a whole number of coats, 1 to 10/],
+    [['--coverage', '0.5'], /--coverage: expected square metres per litre, 1 to 40/],
+    [['--waste', '101'], /--waste: expected a percentage from 0 to 100/],
     [['--waste'], /--waste: expected a percentage.*got nothing/],
     [['--walkway', '-900'], /--walkway: expected a width in mm/],
     [['--colour', 'blue'], /--colour: unknown option/],

@@ -1,30 +1,57 @@
 // The analysis command: reads a plan file and prints its take-off as one JSON object.
 // Usage: npm run --silent analyze -- FILE [--coats N] [--coverage M2_PER_L] [--waste PERCENT] [--walkway MM]
 import { readFile } from 'node:fs/promises';
+import { analysisOutput } from '../../shared/analysis/analysis-output';
 import { checkFit } from '../../shared/analysis/fit/index';
-import { computeTakeoff, type TakeoffOptions } from '../../shared/analysis/takeoff';
+import { computeTakeoff } from '../../shared/analysis/takeoff';
+import {
+  MAX_COATS,
+  MAX_COVERAGE_M2_PER_L,
+  MAX_WASTE_PERCENT,
+  MIN_COVERAGE_M2_PER_L,
+  takeoffSettingsSchema,
+} from '../../shared/analysis/takeoff-settings';
 import { readPlanFile } from '../../shared/schemas/plan-file';
 
 const USAGE = 'usage: analyze FILE [--coats N] [--coverage M2_PER_L] [--waste PERCENT] [--walkway MM]';
 
+interface AnalyzeOptions {
+  coats?: number;
+  coverageM2PerL?: number;
+  wastePercent?: number;
+  walkwayMm?: number;
+}
+
 interface FlagRule {
-  key: keyof TakeoffOptions;
+  key: keyof AnalyzeOptions;
   accepts: (value: number) => boolean;
   expected: string;
 }
 
+// Coats, coverage and waste are accepted as the take-off page accepts them: one settings schema.
+const settingsField = (key: 'coats' | 'coverageM2PerL' | 'wastePercent') => (value: number) =>
+  takeoffSettingsSchema.shape[key].safeParse(value).success;
+
 const FLAGS: Record<string, FlagRule> = {
-  '--coats': { key: 'coats', accepts: (v) => Number.isInteger(v) && v >= 1, expected: 'a whole number of coats, 1 or more' },
-  '--coverage': { key: 'coverage_m2_per_l', accepts: (v) => v > 0, expected: 'square metres per litre, more than 0' },
-  '--waste': { key: 'wastePercent', accepts: (v) => v >= 0 && v < 100, expected: 'a percentage from 0 to under 100' },
+  '--coats': { key: 'coats', accepts: settingsField('coats'), expected: `a whole number of coats, 1 to ${MAX_COATS}` },
+  '--coverage': {
+    key: 'coverageM2PerL',
+    accepts: settingsField('coverageM2PerL'),
+    expected: `square metres per litre, ${MIN_COVERAGE_M2_PER_L} to ${MAX_COVERAGE_M2_PER_L}`,
+  },
+  '--waste': {
+    key: 'wastePercent',
+    accepts: settingsField('wastePercent'),
+    expected: `a percentage from 0 to ${MAX_WASTE_PERCENT}`,
+  },
   '--walkway': { key: 'walkwayMm', accepts: (v) => v > 0, expected: 'a width in mm, more than 0' },
 };
 
-type ParsedArgs = { ok: true; file: string; options: Partial<TakeoffOptions> } | { ok: false; message: string };
+type ParsedArgs = { ok: true; file: string; options: AnalyzeOptions } | { ok: false; message: string };
 
 /** Command-line words to a file path and take-off options (coverage m²/L, waste %, walkway mm). */
 function parseAnalyzeArgs(args: readonly string[]): ParsedArgs {
-  const options: Partial<TakeoffOptions> = {};
+  const options: AnalyzeOptions = {};
   let file: string | null = null;
   for (let i = 0; i < args.length; i++) {
     const word = args[i];
@@ -72,8 +99,9 @@ async function main(): Promise<number> {
     return 1;
   }
   const { room, option } = result.plan;
-  const findings = checkFit(room, option.pieces, { walkwayMm: args.options.walkwayMm });
-  process.stdout.write(`${JSON.stringify(computeTakeoff(room, args.options, findings))}\n`);
+  const { walkwayMm, ...settings } = args.options;
+  const findings = checkFit(room, option.pieces, { walkwayMm });
+  process.stdout.write(`${JSON.stringify(analysisOutput(computeTakeoff(room, settings), findings))}\n`);
   return 0;
 }
 

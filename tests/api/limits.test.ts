@@ -9,7 +9,7 @@ import { sql } from 'kysely';
 import { addMember, createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 import { combOutline, starOutline } from '../../shared/geometry/test-outlines';
 import { compareAnswer } from '../../server/features/schedules/schedules.service';
-import { takeoffSettingsSchema } from '../../shared/analysis/schedule';
+import { takeoffSettingsSchema } from '../../shared/analysis/takeoff-settings';
 
 type Agent = ReturnType<typeof request.agent>;
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { clientSurfaces, finishIdsOf, toClientPiece } from '../../server/features/presentations/presentations.service';
+import { clientSurfaces, toClientPiece } from '../../server/features/presentations/presentations.service';
+import { optionFinishIds } from '../../shared/finishes/option-surfaces';
 import type { Finish } from '../../shared/schemas/finish';
 import { optionDocSchema } from '../../shared/schemas/option';
 
@@ -40,7 +41,7 @@ describe('accent finishes on the client’s link', () => {
   });
 
   it('counts a placed piece’s accent finish among the finishes whose files the link may serve; a held piece’s not', () => {
-    expect(finishIdsOf(doc).sort()).toEqual([MAIN, ACCENT].sort());
+    expect(optionFinishIds(doc).sort()).toEqual([MAIN, ACCENT].sort());
   });
 
   it('gives the 3D view the accent as a scene finish by piece id, and the client piece its kind and accent colour but no finish id', () => {

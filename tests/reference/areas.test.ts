@@ -23,8 +23,8 @@ describe('floor areas against published and derived values', () => {
     expect(areaMm2(outline) / 1e6).toBeCloseTo(5 * 2.5 + 3 * 1.5, 9);
     expect(perimeterMm(outline) / 1000).toBeCloseTo(18.0, 9);
     const takeoff = computeTakeoff(roomShellSchema.parse({ outline }));
-    expect(takeoff.floorArea_m2).toBe(17);
-    expect(takeoff.perimeter_m).toBe(18);
+    expect(takeoff.floorAreaM2).toBe(17);
+    expect(takeoff.perimeterM).toBe(18);
   });
 
   it('L-shape (0,0)(15,0)(15,8)(10,8)(10,12)(0,12) ft is 160 ft² = 14.8644864 m²', () => {
@@ -40,7 +40,7 @@ describe('floor areas against published and derived values', () => {
     expect(15 * 8 + 10 * 4).toBe(160);
     expect(areaMm2(outline) / 1e6).toBeCloseTo(160 * 0.09290304, 9);
     expect(areaMm2(outline) / 1e6).toBeCloseTo(14.8644864, 9);
-    expect(computeTakeoff(roomShellSchema.parse({ outline })).floorArea_m2).toBe(14.864);
+    expect(computeTakeoff(roomShellSchema.parse({ outline })).floorAreaM2).toBe(14.864);
   });
 
   it('survey traverse A B C D encloses 102,935.72 ft²', () => {

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { checkFit } from '../../shared/analysis/fit/index';
 import { clearPassMm, passesThrough } from '../../shared/analysis/fit/door-fit';
 import { gapLayout, plan } from '../../shared/analysis/fit/test-plans';
-import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/takeoff';
+import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/fit/clearances';
 import type { Opening } from '../../shared/schemas/room';
 import { MM_PER_INCH } from '../../shared/units/length';
 

@@ -29,15 +29,15 @@ describe('paint against the published worked example', () => {
 
   it('gives 400 ft² gross and 328 ft² net', () => {
     const takeoff = computeTakeoff(shell);
-    const grossM2 = takeoff.walls.reduce((sum, wall) => sum + wall.grossArea_m2, 0);
+    const grossM2 = takeoff.walls.reduce((sum, wall) => sum + wall.grossAreaM2, 0);
     expect(grossM2 / FT2_IN_M2).toBeCloseTo(400, 1);
-    expect(takeoff.netWallArea_m2 / FT2_IN_M2).toBeCloseTo(328, 1);
+    expect(takeoff.netWallAreaM2 / FT2_IN_M2).toBeCloseTo(328, 1);
   });
 
   it('gives 0.82 US gal per coat at 400 ft²/gal', () => {
     const coverageM2PerL = (400 * FT2_IN_M2) / US_GALLON_L; // 400 ft²/gal = 9.817 m²/L (REFERENCES.md, derived)
     expect(coverageM2PerL).toBeCloseTo(9.817, 3);
-    const takeoff = computeTakeoff(shell, { coats: 1, coverage_m2_per_l: coverageM2PerL });
+    const takeoff = computeTakeoff(shell, { coats: 1, coverageM2PerL });
     expect(takeoff.paint.litres / US_GALLON_L).toBeCloseTo(0.82, 3);
   });
 });

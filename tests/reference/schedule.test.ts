@@ -2,7 +2,9 @@
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../../shared/schemas/room';
 import { optionDocSchema } from '../../shared/schemas/option';
-import { buildSchedule, roomTakeoff, takeoffSettingsSchema, type FinishInfo } from '../../shared/analysis/schedule';
+import { buildSchedule } from '../../shared/analysis/schedule-lines';
+import { roomTakeoff, type FinishInfo } from '../../shared/analysis/finish-takeoff';
+import { takeoffSettingsSchema } from '../../shared/analysis/takeoff-settings';
 import { COMMON_TIN_SIZES_L, chooseTins } from '../../shared/analysis/tins';
 import { MM_PER_FOOT } from '../../shared/units/length';
 

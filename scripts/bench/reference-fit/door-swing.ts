@@ -4,7 +4,7 @@ import { doorSwing, type DoorSwing } from '../../../shared/geometry/openings';
 import { layoutShellWalls } from '../../../shared/geometry/walls';
 import { addScaled, directionDeg } from '../../../shared/geometry/vec';
 import type { RoomShell } from '../../../shared/schemas/room';
-import type { Finding } from '../../../shared/analysis/takeoff';
+import type { Finding } from '../../../shared/analysis/fit/finding';
 import { convexOverlap, isRug, type PieceBox } from '../../../shared/analysis/fit/boxes';
 import { capitalise, theName } from '../../../shared/analysis/fit/messages';
 

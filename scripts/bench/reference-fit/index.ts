@@ -3,7 +3,8 @@
 // The fit check: every finding about a layout, from the room shell and the option's pieces (plan mm).
 import type { Piece } from '../../../shared/schemas/option';
 import type { RoomShell } from '../../../shared/schemas/room';
-import { DEFAULT_WALKWAY_MM, findingKindSchema, type Finding } from '../../../shared/analysis/takeoff';
+import { findingKindSchema, type Finding } from '../../../shared/analysis/fit/finding';
+import { DEFAULT_WALKWAY_MM } from '../../../shared/analysis/fit/clearances';
 import { placedBoxes } from '../../../shared/analysis/fit/boxes';
 import { findDoorSwings } from './door-swing';
 import { findTooBigForDoor } from '../../../shared/analysis/fit/door-fit';

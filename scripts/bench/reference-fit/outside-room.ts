@@ -1,7 +1,7 @@
 // The fit check as it stood before the speed work, frozen: the bench times it beside today's and
 // tests/reference/fit-reference.test.ts checks both give the same findings. Do not edit.
 import type { RoomShell } from '../../../shared/schemas/room';
-import type { Finding } from '../../../shared/analysis/takeoff';
+import type { Finding } from '../../../shared/analysis/fit/finding';
 import {
   distanceToSegmentMm,
   pointInPolygon,

@@ -8,7 +8,7 @@ import { layoutShellWalls } from '../../../shared/geometry/walls';
 import { addScaled, type Vec2 } from '../../../shared/geometry/vec';
 import type { Piece } from '../../../shared/schemas/option';
 import type { RoomShell } from '../../../shared/schemas/room';
-import type { Finding } from '../../../shared/analysis/takeoff';
+import type { Finding } from '../../../shared/analysis/fit/finding';
 import {
   blocksWalking,
   closestOnShape,
@@ -434,7 +434,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     const opening = ways[routes.wayIn[cell]];
     const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.
-    if ((finding.measured_mm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
+    if ((finding.measuredMm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
   });
   return findings;
 
@@ -475,8 +475,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       pieces: [piece.id, ...new Set(involved)],
       openings: [],
       message: capitalise(`only ${cmText(measuredMm)} to pass${words}`),
-      measured_mm: measuredMm,
-      required_mm: roundToCmMm(requiredMm),
+      measuredMm,
+      requiredMm: roundToCmMm(requiredMm),
       at: roundPoint(at),
       ...(between ? { between: [roundPoint(between[0]), roundPoint(between[1])] } : {}),
     };

@@ -9,7 +9,7 @@ import type { Logger } from '../../services/logging/logger';
 import { WRITERS, type Caller } from '../../http/routes';
 import { HttpError, notFound, orNotFound } from '../../http/errors';
 import { optionDocSchema, withoutNonWebLinks, type OptionDoc, type Piece } from '../../../shared/schemas/option';
-import { toSceneFinish, type SceneFinish } from '../../../shared/finishes/scene-finish';
+import { optionFinishIds, optionSurfaces } from '../../../shared/finishes/option-surfaces';
 import type { Finish } from '../../../shared/schemas/finish';
 import { roomShellSchema } from '../../../shared/schemas/room';
 import { optionLabel } from '../../../shared/schemas/room-api';
@@ -207,23 +207,13 @@ export function toClientPiece(
   return out;
 }
 
-/** Every finish id an option shows: its floor, ceiling, walls, feature walls and placed pieces. */
-export function finishIdsOf(doc: OptionDoc): string[] {
-  const { floor, ceiling, walls, wallOverrides } = doc.finishes;
-  const ids = [
-    floor,
-    ceiling,
-    walls,
-    ...Object.values(wallOverrides),
-    ...doc.pieces.filter((p) => p.placed).flatMap((p) => [p.finishId, p.accentFinishId]),
-  ];
-  return [...new Set(ids.filter((id): id is string => Boolean(id && UUID.test(id))))];
-}
+/** The finish ids of an option the link may load: its own, when they can be library ids at all. */
+const linkFinishIds = (doc: OptionDoc) => optionFinishIds(doc).filter((id) => UUID.test(id));
 
 /** The finish ids the shown options of a presentation use: the finishes whose files its link may load. */
 export async function presentationFinishIds(db: Db, p: PresentationRow): Promise<string[]> {
   const shown = await listShownOptions(db, [p.id]);
-  return [...new Set(shown.flatMap((s) => finishIdsOf(optionDocSchema.parse(withoutNonWebLinks(s.doc)))))];
+  return [...new Set(shown.flatMap((s) => linkFinishIds(optionDocSchema.parse(withoutNonWebLinks(s.doc)))))];
 }
 
 /** `/api/files/<name>` as the link's own route, so the client loads textures without an account. */
@@ -231,36 +221,9 @@ export function linkFileUrl(token: string, url: string): string {
   return url.replace(/^\/api\/files\//, `/api/p/${encodeURIComponent(token)}/files/`);
 }
 
-/** What one option's surfaces and pieces wear in 3D, with textures behind the link's file route. */
+/** What one option's surfaces and placed pieces wear in 3D, large textures behind the link's file route. */
 export function clientSurfaces(doc: OptionDoc, finishes: ReadonlyMap<string, Finish>, token: string): ClientSurfaces {
-  const scene = (id: string | null | undefined): SceneFinish | null => {
-    const finish = id ? finishes.get(id) : undefined;
-    if (!finish) return null;
-    const s = toSceneFinish(finish, { size: 'large' });
-    return s.kind === 'photo' ? { ...s, textureUrl: linkFileUrl(token, s.textureUrl) } : s;
-  };
-  const wallOverrides: Record<string, SceneFinish> = {};
-  for (const [wall, id] of Object.entries(doc.finishes.wallOverrides)) {
-    const f = scene(id);
-    if (f) wallOverrides[wall] = f;
-  }
-  const pieces: Record<string, SceneFinish> = {};
-  const pieceAccents: Record<string, SceneFinish> = {};
-  for (const piece of doc.pieces) {
-    if (!piece.placed) continue;
-    const main = scene(piece.finishId);
-    if (main) pieces[piece.id] = main;
-    const accent = scene(piece.accentFinishId);
-    if (accent) pieceAccents[piece.id] = accent;
-  }
-  return {
-    floor: scene(doc.finishes.floor),
-    ceiling: scene(doc.finishes.ceiling),
-    walls: scene(doc.finishes.walls),
-    wallOverrides,
-    pieces,
-    pieceAccents,
-  };
+  return optionSurfaces(doc, finishes, { size: 'large', textureUrl: (url) => linkFileUrl(token, url) });
 }
 
 /** Everything the client's page shows, and nothing else; `token` is the link's, for its file URLs. */
@@ -284,7 +247,7 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
         .filter((id): id is string => Boolean(id && UUID.test(id))),
     ),
   ];
-  const surfaceIds = [...new Set(shown.flatMap((s) => finishIdsOf(docs.get(s.option_id)!)))];
+  const surfaceIds = [...new Set(shown.flatMap((s) => linkFinishIds(docs.get(s.option_id)!)))];
   const [labels, rows] = await Promise.all([finishLabels(db, p.studio_id, finishIds), finishRows(db, p.studio_id, surfaceIds)]);
   const finishes = new Map(labels.map((f) => [f.id, { name: f.name, colourHex: f.colour_hex }]));
   const sceneFinishes = new Map((await toFinishes(db, rows)).map((f) => [f.id, f]));

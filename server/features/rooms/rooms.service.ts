@@ -106,7 +106,7 @@ export async function roomSummaries(db: Db, studioId: string, projectId: string)
       name: room.name,
       position: room.position,
       optionCount: Number(r.option_count),
-      floorAreaM2: computeTakeoff(room.shell).floorArea_m2,
+      floorAreaM2: computeTakeoff(room.shell).floorAreaM2,
       updatedAt: latest(room.updatedAt, r.options_updated_at),
     };
   });

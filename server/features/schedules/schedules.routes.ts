@@ -2,7 +2,7 @@
 // reads them, scoped to the caller's studio.
 import { z } from 'zod';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
-import { takeoffQuerySchema, type TakeoffSettings } from '../../../shared/analysis/schedule';
+import { takeoffQuerySchema, type TakeoffSettings } from '../../../shared/analysis/takeoff-settings';
 import { ALL_ROLES, route, type Caller, type RouteDef, type RouteContext } from '../../http/routes';
 import { fileSlug } from '../rooms/rooms.service';
 import { compareAnswer, projectTakeoffAnswer, scheduleAnswer, scheduleCsv } from './schedules.service';

@@ -10,21 +10,14 @@ import { studioMoney } from '../studio/studios.repository';
 import { DEFAULT_MONEY } from '../../../shared/units/money';
 import type { Finish } from '../../../shared/schemas/finish';
 import { isWebLink, type OptionDoc } from '../../../shared/schemas/option';
+import { optionFinishIds } from '../../../shared/finishes/option-surfaces';
 import { optionLabel, type OptionRecord, type RoomRecord } from '../../../shared/schemas/room-api';
-import {
-  QUANTITY_UNIT_LABELS,
-  buildSchedule,
-  compareOption,
-  projectTakeoff,
-  roomTakeoff,
-  sizeText,
-  type CompareAnswer,
-  type FinishInfo,
-  type FinishLookup,
-  type ProjectTakeoffAnswer,
-  type ScheduleAnswer,
-  type TakeoffSettings,
-} from '../../../shared/analysis/schedule';
+import { QUANTITY_UNIT_LABELS, buildSchedule } from '../../../shared/analysis/schedule-lines';
+import { compareOption } from '../../../shared/analysis/compare';
+import { projectTakeoff, roomTakeoff, type FinishInfo, type FinishLookup } from '../../../shared/analysis/finish-takeoff';
+import { pieceSizeText } from '../../../shared/units/piece-size';
+import { type CompareAnswer, type ProjectTakeoffAnswer, type ScheduleAnswer } from '../../../shared/schemas/schedule-api';
+import { type TakeoffSettings } from '../../../shared/analysis/takeoff-settings';
 import { toCsv, type CsvCell } from './csv';
 
 interface RoomWithOptions {
@@ -42,22 +35,6 @@ async function roomsOf(db: Db, studioId: string, projectId: string): Promise<Roo
   return Promise.all(rooms.map(async (room) => ({ room, options: await listOptions(db, studioId, room.id) })));
 }
 
-function finishIdsOf(docs: readonly OptionDoc[]): Set<string> {
-  const ids = new Set<string>();
-  for (const { finishes, pieces } of docs) {
-    for (const id of [
-      finishes.floor,
-      finishes.ceiling,
-      finishes.walls,
-      ...Object.values(finishes.wallOverrides),
-      ...pieces.flatMap((p) => [p.finishId, p.accentFinishId]),
-    ]) {
-      if (id) ids.add(id);
-    }
-  }
-  return ids;
-}
-
 export function toFinishInfo(f: Finish): FinishInfo {
   const base = { id: f.id, name: f.name, supplier: f.supplier, code: f.code, price: f.price, priceUnit: f.priceUnit };
   return f.kind === 'paint'
@@ -66,13 +43,25 @@ export function toFinishInfo(f: Finish): FinishInfo {
 }
 
 async function lookupFor(db: Db, studioId: string, docs: readonly OptionDoc[]): Promise<FinishLookup> {
-  const finishes = await finishesByIds(db, studioId, finishIdsOf(docs));
+  const finishes = await finishesByIds(db, studioId, docs.flatMap(optionFinishIds));
   return new Map(finishes.map((f) => [f.id, toFinishInfo(f)]));
 }
 
 const refOf = (o: OptionRecord) => ({ id: o.id, label: optionLabel(o.position, o.name) });
 // Options are listed by position; the label letter follows the list order, as on the room page.
 const withPositions = (options: OptionRecord[]) => options.map((o, position) => ({ ...o, position }));
+
+/** A project with its rooms and their options, the client's latest choice per room, and every finish the options use. */
+async function projectRooms(db: Db, studioId: string, projectId: string) {
+  const project = await projectOrThrow(db, studioId, projectId);
+  const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
+  const finishes = await lookupFor(
+    db,
+    studioId,
+    rooms.flatMap((r) => r.options.map((o) => o.doc)),
+  );
+  return { project, rooms, choices, finishes };
+}
 
 /**
  * The project's take-off: each room counted with one option (the one asked for, else the client's
@@ -85,13 +74,7 @@ export async function projectTakeoffAnswer(
   settings: TakeoffSettings,
   countedIds: readonly string[],
 ): Promise<ProjectTakeoffAnswer> {
-  const project = await projectOrThrow(db, studioId, projectId);
-  const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
-  const finishes = await lookupFor(
-    db,
-    studioId,
-    rooms.flatMap((r) => r.options.map((o) => o.doc)),
-  );
+  const { project, rooms, choices, finishes } = await projectRooms(db, studioId, projectId);
   const asked = new Set(countedIds);
   const answered = rooms.map(({ room, options }) => {
     const listed = withPositions(options);
@@ -158,13 +141,7 @@ export async function compareAnswer(
   projectId: string,
   settings: TakeoffSettings,
 ): Promise<CompareAnswer> {
-  const project = await projectOrThrow(db, studioId, projectId);
-  const [rooms, choices] = await Promise.all([roomsOf(db, studioId, projectId), latestChoices(db, studioId, projectId)]);
-  const finishes = await lookupFor(
-    db,
-    studioId,
-    rooms.flatMap((r) => r.options.map((o) => o.doc)),
-  );
+  const { project, rooms, choices, finishes } = await projectRooms(db, studioId, projectId);
   const answered: CompareAnswer['rooms'] = [];
   for (const { room, options } of rooms) {
     const chosenOptionId = choices.get(room.id) ?? null;
@@ -206,7 +183,7 @@ export function scheduleCsv(answer: ScheduleAnswer): string {
       l.section === 'piece' ? 'Piece' : 'Finish',
       l.name,
       l.status,
-      l.sizeMm ? [sizeText(l.sizeMm), l.detail].filter(Boolean).join(' · ') : l.detail,
+      l.sizeMm ? [pieceSizeText(l.sizeMm), l.detail].filter(Boolean).join(' · ') : l.detail,
       l.quantity,
       QUANTITY_UNIT_LABELS[l.quantityUnit],
       l.quantityNote,

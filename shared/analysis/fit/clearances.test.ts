@@ -29,6 +29,6 @@ describe('reach widths by piece', () => {
     expect(find(620, 'Chest')).toHaveLength(1);
     const [narrow] = find(500, 'Day bed');
     expect(narrow.kind).toBe('narrow-walkway');
-    expect(narrow.required_mm).toBe(560);
+    expect(narrow.requiredMm).toBe(560);
   });
 });

@@ -1,5 +1,5 @@
 import type { Opening, RoomShell } from '../../schemas/room';
-import type { Finding } from '../takeoff';
+import type { Finding } from './finding';
 import { isRug, type PieceBox } from './boxes';
 import { capitalise, theName, wholeCm } from './messages';
 

@@ -2,7 +2,7 @@ import { doorSwing, type DoorSwing } from '../../geometry/openings';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, directionDeg } from '../../geometry/vec';
 import type { RoomShell } from '../../schemas/room';
-import type { Finding } from '../takeoff';
+import type { Finding } from './finding';
 import { convexOverlap, isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { findingSchema } from '../takeoff';
+import { findingSchema } from './finding';
 import { checkFit } from './index';
 import { cleanLayout, gapLayout, pieceInput, plan } from './test-plans';
 
@@ -52,6 +52,6 @@ describe('checkFit', () => {
   it('uses 900 mm as the walkway width unless told otherwise', () => {
     expect(fit(gapLayout(850)).map((f) => f.kind)).toEqual(['narrow-walkway']);
     expect(fit(gapLayout(850), 800)).toEqual([]);
-    expect(fit(gapLayout(850))[0].required_mm).toBe(900);
+    expect(fit(gapLayout(850))[0].requiredMm).toBe(900);
   });
 });

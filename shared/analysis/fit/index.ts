@@ -1,7 +1,8 @@
 // The fit check: every finding about a layout, from the room shell and the option's pieces (plan mm).
 import type { Piece } from '../../schemas/option';
 import type { RoomShell } from '../../schemas/room';
-import { DEFAULT_WALKWAY_MM, findingKindSchema, type Finding } from '../takeoff';
+import { findingKindSchema, type Finding } from './finding';
+import { DEFAULT_WALKWAY_MM } from './clearances';
 import { placedBoxes } from './boxes';
 import { findDoorSwings } from './door-swing';
 import { findTooBigForDoor } from './door-fit';

@@ -1,5 +1,5 @@
 import type { RoomShell } from '../../schemas/room';
-import type { Finding } from '../takeoff';
+import type { Finding } from './finding';
 import { distanceToSegmentMm, pointInPolygon, segmentCrossesConvex, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 import type { Vec2 } from '../../geometry/vec';

@@ -1,4 +1,4 @@
-import type { Finding } from '../takeoff';
+import type { Finding } from './finding';
 import { convexOverlap, isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 

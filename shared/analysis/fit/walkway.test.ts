@@ -19,8 +19,8 @@ describe('narrow-walkway', () => {
     expect(gap.kind).toBe('narrow-walkway');
     expect(gap.pieces).toEqual(['chest', 'bed']);
     expect(gap.openings).toEqual(['d1']);
-    expect(Math.abs((gap.measured_mm ?? 0) - 620)).toBeLessThanOrEqual(WALKWAY_CELL_MM);
-    expect(gap.required_mm).toBe(900);
+    expect(Math.abs((gap.measuredMm ?? 0) - 620)).toBeLessThanOrEqual(WALKWAY_CELL_MM);
+    expect(gap.requiredMm).toBe(900);
     expect(gap.message).toBe('Only 62 cm to pass between the bed and the chest');
     // The narrow spot is in the gap (x 2000–2620, y 1750–2250) and is drawn across it.
     const [x, y] = gap.at ?? [NaN, NaN];
@@ -39,7 +39,7 @@ describe('narrow-walkway', () => {
   it('tracks the gap as it changes, within one cell', () => {
     for (const gapMm of [480, 555, 700, 830]) {
       const [gap] = walkway(gapLayout(gapMm));
-      expect(Math.abs((gap.measured_mm ?? 0) - gapMm)).toBeLessThanOrEqual(WALKWAY_CELL_MM);
+      expect(Math.abs((gap.measuredMm ?? 0) - gapMm)).toBeLessThanOrEqual(WALKWAY_CELL_MM);
     }
   });
 
@@ -61,7 +61,7 @@ describe('narrow-walkway', () => {
     expect(findings).toHaveLength(1);
     expect(findings[0].kind).toBe('narrow-walkway');
     expect(findings[0].message).toBe('Only 10 cm to pass between the bookcase and the wall');
-    expect(Math.abs((findings[0].measured_mm ?? 0) - 100)).toBeLessThanOrEqual(WALKWAY_CELL_MM);
+    expect(Math.abs((findings[0].measuredMm ?? 0) - 100)).toBeLessThanOrEqual(WALKWAY_CELL_MM);
   });
 
   it('names the piece to reach when the gap is between two others', () => {

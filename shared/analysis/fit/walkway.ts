@@ -6,7 +6,7 @@ import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
 import type { RoomShell } from '../../schemas/room';
-import type { Finding } from '../takeoff';
+import type { Finding } from './finding';
 import { blocksWalking, closestOnShape, closestPair, distanceToSegmentMm, pointInPolygon, type PieceBox } from './boxes';
 import { cellAt, cellCentreMm, distanceField, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
@@ -514,7 +514,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     const opening = itemAt(ways, routes.wayIn[cell]!, 'way in');
     const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.
-    if ((finding.measured_mm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
+    if ((finding.measuredMm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
   });
   return findings;
 
@@ -556,8 +556,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       pieces: [piece.id, ...new Set(involved)],
       openings: [],
       message: capitalise(`only ${cmText(measuredMm)} to pass${words}`),
-      measured_mm: measuredMm,
-      required_mm: roundToCmMm(requiredMm),
+      measuredMm,
+      requiredMm: roundToCmMm(requiredMm),
       at: roundPoint(at),
       ...(between ? { between: [roundPoint(between[0]), roundPoint(between[1])] } : {}),
     };

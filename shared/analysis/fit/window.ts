@@ -2,7 +2,7 @@ import { placeOpening } from '../../geometry/openings';
 import { layoutShellWalls } from '../../geometry/walls';
 import { dot, sub } from '../../geometry/vec';
 import type { RoomShell } from '../../schemas/room';
-import type { Finding } from '../takeoff';
+import type { Finding } from './finding';
 import { isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, cmText, theName } from './messages';
 

@@ -1,19 +1,15 @@
 // Plain words and numbers for the client: sizes in centimetres, dates written out, prices as numbers.
 import { formatMoney, type MoneySettings } from '../../../../shared/units/money';
 import type { ClientPiece } from '../../../../shared/schemas/presentation';
+import { decimalCmText } from '../../../../shared/units/piece-size';
+
+export { pieceSizeText } from '../../../../shared/units/piece-size';
 
 /** Shown under every 3D view: what the picture is, and what it is not. */
 export const SAFETY_LINE =
   'The 3D view is a picture to help you choose, not a construction drawing. Every measurement is checked on site before anything is ordered or built.';
 
-const cm = (mm: number) => String(Number((mm / 10).toFixed(1)));
-
-/** "210 × 90 × 85 cm": width, depth, height as the piece faces you. */
-export function pieceSizeText(piece: Pick<ClientPiece, 'width' | 'depth' | 'height'>): string {
-  return `${cm(piece.width)} × ${cm(piece.depth)} × ${cm(piece.height)} cm`;
-}
-
-export const elevationText = (mm: number) => `${cm(mm)} cm above the floor`;
+export const elevationText = (mm: number) => `${decimalCmText(mm)} cm above the floor`;
 
 /** A price in the studio's currency, written the way its locale writes it. */
 export const priceText = (price: number, money: MoneySettings) => formatMoney(price, money);

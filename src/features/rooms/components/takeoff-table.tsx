@@ -8,13 +8,13 @@ const n = (v: number, digits = 2) => v.toLocaleString('en-GB', { minimumFraction
 export function TakeoffTable({ shell }: { shell: RoomShell }) {
   const t = useMemo(() => computeTakeoff(shell), [shell]);
   const rows: [string, string][] = [
-    ['Floor area', `${n(t.floorArea_m2)} m²`],
-    ['Perimeter', `${n(t.perimeter_m)} m`],
-    ['Volume', `${n(t.volume_m3, 1)} m³`],
-    ['Net wall area', `${n(t.netWallArea_m2)} m²`],
-    [`Paint (${t.paint.coats} coats at ${t.paint.coverage_m2_per_l} m²/L)`, `${n(t.paint.litres, 1)} L`],
-    [`Flooring (+${t.flooring.wastePercent} % waste)`, `${n(t.flooring.orderArea_m2)} m²`],
-    ['Skirting', `${n(t.skirting_m)} m`],
+    ['Floor area', `${n(t.floorAreaM2)} m²`],
+    ['Perimeter', `${n(t.perimeterM)} m`],
+    ['Volume', `${n(t.volumeM3, 1)} m³`],
+    ['Net wall area', `${n(t.netWallAreaM2)} m²`],
+    [`Paint (${t.paint.coats} coats at ${t.paint.coverageM2PerL} m²/L)`, `${n(t.paint.litres, 1)} L`],
+    [`Flooring (+${t.flooring.wastePercent} % waste)`, `${n(t.flooring.orderAreaM2)} m²`],
+    ['Skirting', `${n(t.skirtingM)} m`],
   ];
   return (
     <div>
@@ -44,8 +44,8 @@ export function TakeoffTable({ shell }: { shell: RoomShell }) {
             {t.walls.map((w) => (
               <tr key={w.index}>
                 <td>{w.index + 1}</td>
-                <td className="text-right">{n(w.length_m)} m</td>
-                <td className="text-right">{n(w.netArea_m2)} m²</td>
+                <td className="text-right">{n(w.lengthM)} m</td>
+                <td className="text-right">{n(w.netAreaM2)} m²</td>
               </tr>
             ))}
           </tbody>

@@ -1,4 +1,4 @@
-import type { Finding } from '../../../../shared/analysis/takeoff';
+import type { Finding } from '../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
@@ -92,9 +92,9 @@ export function CheckPanel({
               >
                 <span className="block text-xs font-bold tracking-wide text-clay uppercase">{KIND_TITLE[f.kind]}</span>
                 <span className="block text-sm text-ink">{f.message}</span>
-                {f.measured_mm !== undefined && f.required_mm !== undefined && (
+                {f.measuredMm !== undefined && f.requiredMm !== undefined && (
                   <span className="block text-xs text-ink-faint">
-                    {formatLength(f.measured_mm, unit)} where {formatLength(f.required_mm, unit)} is usual
+                    {formatLength(f.measuredMm, unit)} where {formatLength(f.requiredMm, unit)} is usual
                   </span>
                 )}
               </button>

@@ -28,7 +28,7 @@ import { Notice, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
 import { useRoom, type RoomDetail } from '../api/rooms';
-import { DEFAULT_WALKWAY_MM } from '../../../../shared/analysis/takeoff';
+import { DEFAULT_WALKWAY_MM } from '../../../../shared/analysis/fit/clearances';
 import { formatLength } from '../../../../shared/units/length';
 import { CheckPanel } from './check-panel';
 import { useFitCheck } from './use-fit-check';
@@ -180,8 +180,8 @@ function Editor({
       ? {
           pieceIds: finding.pieces,
           gap:
-            finding.between && finding.measured_mm !== undefined
-              ? { a: finding.between[0], b: finding.between[1], label: formatLength(finding.measured_mm, unit) }
+            finding.between && finding.measuredMm !== undefined
+              ? { a: finding.between[0], b: finding.between[1], label: formatLength(finding.measuredMm, unit) }
               : undefined,
         }
       : null;

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import type { Finding } from '../../../../shared/analysis/takeoff';
+import type { Finding } from '../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import type { FitRequest } from './fit-worker';

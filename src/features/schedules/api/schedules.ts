@@ -1,11 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import {
-  takeoffQuery,
-  type CompareAnswer,
-  type ProjectTakeoffAnswer,
-  type ScheduleAnswer,
-  type TakeoffSettings,
-} from '../../../../shared/analysis/schedule';
+import { takeoffQuery, type TakeoffSettings } from '../../../../shared/analysis/takeoff-settings';
+import { type CompareAnswer, type ProjectTakeoffAnswer, type ScheduleAnswer } from '../../../../shared/schemas/schedule-api';
 import { api } from '../../../lib/api';
 
 export const scheduleKeys = {

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import type { CompareAnswer } from '../../../../shared/analysis/schedule';
+import type { CompareAnswer } from '../../../../shared/schemas/schedule-api';
 import { Badge } from '../../../components/ui/layout';
 import { formatNumber, useFormatMoney } from './format';
 

@@ -1,4 +1,4 @@
-import { QUANTITY_UNIT_LABELS, type QuantityUnit } from '../../../../shared/analysis/schedule';
+import { QUANTITY_UNIT_LABELS, type QuantityUnit } from '../../../../shared/analysis/schedule-lines';
 
 const quantityFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 

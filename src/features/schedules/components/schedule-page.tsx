@@ -2,7 +2,8 @@ import { Fragment } from 'react';
 // One option's schedule: every piece and finish with quantities, prices and totals; a CSV download
 // and a print view (the app's top bar and these buttons are left off paper).
 import { Link } from 'react-router';
-import { QUANTITY_UNIT_LABELS, sizeText, type ScheduleLine } from '../../../../shared/analysis/schedule';
+import { QUANTITY_UNIT_LABELS, type ScheduleLine } from '../../../../shared/analysis/schedule-lines';
+import { pieceSizeText } from '../../../../shared/units/piece-size';
 import { Button } from '../../../components/ui/button';
 import { Badge, PageHeader, Spinner } from '../../../components/ui/layout';
 import { scheduleCsvUrl, settingsQuery, useSchedule } from '../api/schedules';
@@ -185,7 +186,7 @@ function Line({ line: l }: { line: ScheduleLine }) {
         {l.code && <span className="block text-[0.9em] text-ink-faint">{l.code}</span>}
       </td>
       <td className={`${td} text-ink-soft`}>
-        {l.sizeMm ? sizeText(l.sizeMm) : l.detail}
+        {l.sizeMm ? pieceSizeText(l.sizeMm) : l.detail}
         {l.sizeMm && l.detail && <span className="block text-[0.9em]">{l.detail}</span>}
       </td>
       <td className={tdNum}>

@@ -1,8 +1,12 @@
 // The project's take-off (per room, with the option counted in each, and the project's totals)
 // and the comparison of every room's options, on one page.
 import { Link } from 'react-router';
-import { takeoffSettingsSchema } from '../../../../shared/analysis/schedule';
-import { DEFAULT_COVERAGE_M2_PER_L, DEFAULT_PAINT_COATS, DEFAULT_WASTE_PERCENT } from '../../../../shared/analysis/takeoff';
+import {
+  DEFAULT_COVERAGE_M2_PER_L,
+  DEFAULT_PAINT_COATS,
+  DEFAULT_WASTE_PERCENT,
+  takeoffSettingsSchema,
+} from '../../../../shared/analysis/takeoff-settings';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';

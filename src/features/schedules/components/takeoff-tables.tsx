@@ -1,7 +1,8 @@
 // The take-off of one room and the project's totals, as tables of quantities per finish.
 import type { ReactNode } from 'react';
 import { describeTins } from '../../../../shared/analysis/tins';
-import { surfaceLabel, takeoffSettingsSchema, type ProjectTakeoff, type RoomTakeoff } from '../../../../shared/analysis/schedule';
+import { surfaceLabel, type ProjectTakeoff, type RoomTakeoff } from '../../../../shared/analysis/finish-takeoff';
+import { takeoffSettingsSchema } from '../../../../shared/analysis/takeoff-settings';
 import { formatNumber } from './format';
 import { NumberSetting } from './number-setting';
 import { PaintChip } from './paint-chip';

@@ -2,7 +2,7 @@
 // counted per room), kept in this browser: they are the designer's working figures, not the project's.
 import { useCallback, useEffect, useState } from 'react';
 import { z } from 'zod';
-import { takeoffSettingsSchema, type TakeoffSettings } from '../../../../shared/analysis/schedule';
+import { takeoffSettingsSchema, type TakeoffSettings } from '../../../../shared/analysis/takeoff-settings';
 
 const STORAGE_PREFIX = 'parlour.takeoff.';
 
