@@ -1,5 +1,6 @@
 import type { Finding } from '../takeoff';
-import { convexOverlap, isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
+import { isWalkedOver } from '../../geometry/piece';
+import { convexOverlap, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 
 /**
@@ -8,7 +9,7 @@ import { capitalise, theName } from './messages';
  * a sideboard) are fine.
  */
 export function findOverlaps(boxes: readonly PieceBox[]): Finding[] {
-  const solid = boxes.filter((box) => !isRug(box.piece));
+  const solid = boxes.filter((box) => !isWalkedOver(box.piece));
   const findings: Finding[] = [];
   for (let i = 0; i < solid.length; i++) {
     for (let j = i + 1; j < solid.length; j++) {
