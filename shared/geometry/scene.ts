@@ -69,16 +69,25 @@ export interface WindowSceneData {
 }
 
 /** Everything the 3D view draws for one room and one option, scene metres, keyed by wall index or document id. */
-export interface RoomSceneData {
+/** The room itself, without its pieces: what stays put while an option changes. */
+export interface ShellSceneData {
   floor: MeshData;
   /** Faces down, seen from inside the room. */
   ceiling: MeshData;
   walls: WallSceneData[];
-  pieces: PieceSceneData[];
   doorLeaves: DoorLeafSceneData[];
   windows: WindowSceneData[];
+  /** Of the shell alone. */
   bounds: Bounds3;
 }
+
+/** A room and an option's placed pieces; bounds hold both. */
+export interface RoomSceneData extends ShellSceneData {
+  pieces: PieceSceneData[];
+}
+
+/** The meshes sceneMeshes and sceneBounds read: a shell, with or without pieces. */
+export type SceneSurfaces = Omit<ShellSceneData, 'bounds'> & { pieces?: readonly PieceSceneData[] };
 
 type Vec3 = readonly [number, number, number];
 
@@ -427,8 +436,8 @@ function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowScene
   return { openingId: placement.id, frame: frame.toMesh(), glass: glass.toMesh() };
 }
 
-/** Everything to draw for a room shell (plan mm) and an option's placed pieces, in scene metres. */
-export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piece[] }): RoomSceneData {
+/** The room shell (plan mm) as scene meshes (metres): floor, ceiling, walls, door leaves and windows. */
+export function buildShellScene(shell: RoomShell): ShellSceneData {
   const walls = layoutShellWalls(shell);
   const placementsByWall: OpeningPlacement[][] = walls.map(() => []);
   const doorLeaves: DoorLeafSceneData[] = [];
@@ -447,17 +456,28 @@ export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piec
   const ceiling = new MeshWriter();
   writeCap(ceiling, shell.outline, shell.wallHeight, DOWN);
 
-  const pieces: PieceSceneData[] = [];
-  for (const piece of option.pieces) {
+  const wallData = walls.map((wall) => buildWall(wall, itemAt(placementsByWall, wall.index, 'wall'), shell.wallHeight));
+  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, doorLeaves, windows };
+  return { ...surfaces, bounds: sceneBounds(surfaces) };
+}
+
+/** An option's placed pieces as boxes on their footprints (geometry/piece), scene metres. */
+export function buildPiecesScene(pieces: readonly Piece[]): PieceSceneData[] {
+  const built: PieceSceneData[] = [];
+  for (const piece of pieces) {
     if (!piece.placed) continue;
     const writer = new MeshWriter();
     writeBox(writer, piecePlanBox(piece), piece.elevation, piece.height);
-    pieces.push({ id: piece.id, status: piece.status, mesh: writer.toMesh() });
+    built.push({ id: piece.id, status: piece.status, mesh: writer.toMesh() });
   }
+  return built;
+}
 
-  const wallData = walls.map((wall) => buildWall(wall, itemAt(placementsByWall, wall.index, 'wall'), shell.wallHeight));
-  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, pieces, doorLeaves, windows };
-  return { ...surfaces, bounds: sceneBounds(surfaces) };
+/** Everything to draw for a room shell (plan mm) and an option's placed pieces, in scene metres. */
+export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piece[] }): RoomSceneData {
+  const room = buildShellScene(shell);
+  const pieces = buildPiecesScene(option.pieces);
+  return { ...room, pieces, bounds: sceneBounds({ ...room, pieces }) };
 }
 
 function emptyBounds(): Bounds3 {
@@ -483,19 +503,19 @@ export function meshBounds(mesh: MeshData): Bounds3 {
 }
 
 /** Every mesh of a room scene, for bounds, counts and disposal. */
-export function sceneMeshes(scene: Omit<RoomSceneData, 'bounds'>): MeshData[] {
+export function sceneMeshes(scene: SceneSurfaces): MeshData[] {
   return [
     scene.floor,
     scene.ceiling,
     ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals]),
-    ...scene.pieces.map((p) => p.mesh),
+    ...(scene.pieces ?? []).map((p) => p.mesh),
     ...scene.doorLeaves.map((d) => d.mesh),
     ...scene.windows.flatMap((w) => [w.frame, w.glass]),
   ];
 }
 
 /** Axis-aligned bounds (scene metres) of everything in a room scene: walls, pieces, leaves. */
-export function sceneBounds(scene: Omit<RoomSceneData, 'bounds'>): Bounds3 {
+export function sceneBounds(scene: SceneSurfaces): Bounds3 {
   const bounds = emptyBounds();
   for (const mesh of sceneMeshes(scene)) extendBounds(bounds, mesh);
   return bounds;
