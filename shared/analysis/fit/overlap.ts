@@ -4,8 +4,8 @@ import { convexOverlap, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 
 /**
- * `overlap`: pairs of placed boxes (plan mm) that share floor area and height. Rugs never count: a
- * rug lies under furniture (common practice). Pieces stacked apart in height (a wall cabinet above
+ * `overlap`: pairs of placed boxes (plan mm) that share floor area and height. Rugs (walked over,
+ * geometry/piece) never count: a rug lies under furniture (common practice). Pieces stacked apart in height (a wall cabinet above
  * a sideboard) are fine.
  */
 export function findOverlaps(boxes: readonly PieceBox[]): Finding[] {
