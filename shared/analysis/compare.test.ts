@@ -11,7 +11,7 @@ describe('freeFloorShare and compareOption', () => {
       pieces: [
         piece({ id: 'bed', x: 1000, y: 1000, width: 2000, depth: 2000, height: 500 }),
         piece({ id: 'rug', x: 3000, y: 1500, width: 1000, depth: 1000, height: 10 }),
-        piece({ id: 'shelf', x: 3000, y: 300, width: 1000, depth: 300, height: 300, elevation: 1500 }),
+        piece({ id: 'shelf', x: 3000, y: 300, width: 1000, depth: 300, height: 300, elevation: 2100 }),
         piece({ id: 'stored', x: 3000, y: 2500, width: 500, depth: 500, placed: false }),
       ],
     }).pieces;

@@ -56,7 +56,7 @@ export {
   pieceFootprintMm,
   type PiecePose,
   type PlanBounds,
-} from './piece-geometry';
+} from '../geometry/piece';
 export { findPlacement, boxInsideOutline, boxesOverlap, PLACEMENT_STEP_MM, type PlacementRequest } from './placement';
 export {
   nudge,

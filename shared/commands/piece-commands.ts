@@ -13,7 +13,7 @@ import {
   type RunResult,
 } from './command';
 import type { EditorDoc } from './editor-doc';
-import { normaliseRotationDeg } from './piece-geometry';
+import { normaliseRotationDeg } from '../geometry/piece';
 
 /** How far (plan mm, right and down) a duplicate lands from its original by default, so both stay visible (common practice). */
 export const DUPLICATE_OFFSET_MM: PlanPoint = [200, 200];

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Piece } from '../schemas/option';
 import { boxesOverlap, boxInsideOutline, findPlacement } from './placement';
-import { pieceFootprintMm } from './piece-geometry';
+import { pieceFootprintMm } from '../geometry/piece';
 
 const rect: [number, number][] = [
   [0, 0],

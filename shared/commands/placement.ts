@@ -4,9 +4,8 @@
 import type { Piece } from '../schemas/option';
 import type { RoomShell } from '../schemas/room';
 import type { Vec2 } from '../geometry/vec';
-import { segmentsTouch } from '../geometry/polygon';
-import { insideOutline as inside } from '../geometry/walk';
-import { pieceFootprintMm, type PiecePose } from './piece-geometry';
+import { pointInPolygon, segmentsTouch } from '../geometry/polygon';
+import { pieceFootprintMm, type PiecePose } from '../geometry/piece';
 
 /** The spacing of the spots tried (mm): fine enough to find gaps a piece fits in, coarse enough to stay instant. */
 export const PLACEMENT_STEP_MM = 50;
@@ -23,7 +22,7 @@ function edges(poly: readonly Vec2[]): [Vec2, Vec2][] {
 
 /** True when the convex `box` lies wholly inside the outline: every corner inside, no wall crossing it. */
 export function boxInsideOutline(outline: Outline, box: readonly Vec2[]): boolean {
-  if (!box.every((c) => inside(outline, c))) return false;
+  if (!box.every((c) => pointInPolygon(c, outline))) return false;
   const walls = edges(outline);
   return edges(box).every(([a, b]) => walls.every(([c, d]) => !segmentsTouch(a, b, c, d)));
 }
@@ -123,6 +122,6 @@ export function findPlacement(
     insideOnly ??= [s.x, s.y];
   }
   if (insideOnly) return insideOnly;
-  const point = spots.find((s) => inside(outline, [s.x, s.y]));
+  const point = spots.find((s) => pointInPolygon([s.x, s.y], outline));
   return point ? [point.x, point.y] : [nx, ny];
 }

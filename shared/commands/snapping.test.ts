@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import type { Piece } from '../schemas/option';
-import { pieceBoundsMm, pieceFootprintMm } from './piece-geometry';
+import { pieceBoundsMm, pieceFootprintMm } from '../geometry/piece';
 import {
   nudge,
   snapAngle,

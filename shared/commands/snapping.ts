@@ -4,7 +4,7 @@ import { layoutShellWalls, type WallLayout } from '../geometry/walls';
 import { addScaled, dot, sub } from '../geometry/vec';
 import type { Piece } from '../schemas/option';
 import type { PlanPoint, RoomShell } from '../schemas/room';
-import { normaliseRotationDeg, pieceBoundsMm, pieceFootprintMm, type PiecePose } from './piece-geometry';
+import { normaliseRotationDeg, pieceBoundsMm, pieceFootprintMm, type PiecePose } from '../geometry/piece';
 
 /** Plan grid spacing in mm: 10 cm is fine enough to lay out furniture and coarse enough to hit (common practice). */
 export const DEFAULT_GRID_MM = 100;

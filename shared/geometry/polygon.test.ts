@@ -5,6 +5,7 @@ import {
   boundsMm,
   findSelfCrossings,
   perimeterMm,
+  pointInPolygon,
   segmentsTouch,
   signedAreaMm2,
   triangulatePolygon,
@@ -211,5 +212,40 @@ describe('triangulatePolygon', () => {
       [0, 3000],
     ];
     expect(triangleArea(u, triangulatePolygon(u))).toBeCloseTo(areaMm2(u), 3);
+  });
+});
+
+describe('pointInPolygon', () => {
+  const l: Vec2[] = [
+    [0, 0],
+    [6000, 0],
+    [6000, 3000],
+    [3000, 3000],
+    [3000, 5000],
+    [0, 5000],
+  ];
+
+  it('tells inside from outside of an L-shaped outline, drawn either way round', () => {
+    for (const outline of [l, [...l].reverse()]) {
+      expect(pointInPolygon([1000, 4000], outline)).toBe(true);
+      expect(pointInPolygon([5000, 4000], outline)).toBe(false);
+      expect(pointInPolygon([5000, 1000], outline)).toBe(true);
+      expect(pointInPolygon([-1, 2500], outline)).toBe(false);
+      expect(pointInPolygon([3001, 3001], outline)).toBe(false);
+      expect(pointInPolygon([2999, 4999], outline)).toBe(true);
+    }
+  });
+
+  it('finds nothing inside fewer than three corners', () => {
+    expect(pointInPolygon([0, 0], [])).toBe(false);
+    expect(
+      pointInPolygon(
+        [500, 0],
+        [
+          [0, 0],
+          [1000, 0],
+        ],
+      ),
+    ).toBe(false);
   });
 });

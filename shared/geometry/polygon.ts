@@ -35,6 +35,24 @@ export function windingOnPlan(points: readonly Vec2[]): Winding {
   return signedAreaMm2(points) >= 0 ? 'clockwise' : 'counter-clockwise';
 }
 
+/**
+ * Whether plan point p (mm) lies inside a polygon: even–odd rule, either winding, holes by
+ * self-overlap; a point exactly on an edge may fall either way. No allocation: safe in hot loops.
+ */
+export function pointInPolygon(p: Vec2, polygon: readonly Vec2[]): boolean {
+  const px = p[0];
+  const py = p[1];
+  let inside = false;
+  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
+    const a = polygon[i]!;
+    const b = polygon[j]!;
+    const yi = a[1];
+    const yj = b[1];
+    if (yi > py !== yj > py && px < ((b[0] - a[0]) * (py - yi)) / (yj - yi) + a[0]) inside = !inside;
+  }
+  return inside;
+}
+
 /** +1 when the outline runs clockwise on the plan, −1 otherwise; multiplies normals so either winding works. */
 export function windingSign(points: readonly Vec2[]): 1 | -1 {
   return signedAreaMm2(points) >= 0 ? 1 : -1;

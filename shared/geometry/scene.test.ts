@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { typicalRoom } from '../../scripts/bench/typical-room';
 import { optionDocSchema, type OptionDocInput } from '../schemas/option';
 import { roomShellSchema, type RoomShellInput } from '../schemas/room';
-import { buildRoomScene, meshBounds, sceneMeshes, type MeshData } from './scene';
+import { buildPiecesScene, buildRoomScene, buildShellScene, meshBounds, sceneMeshes, type MeshData } from './scene';
 import { designExampleRoom as example } from '../../tests/reference/rooms';
 
 function scene(shell: RoomShellInput = example, option: OptionDocInput = {}) {
@@ -243,4 +243,47 @@ describe('buildRoomScene', () => {
     expect(scene.pieces).toHaveLength(40);
     expect(scene.doorLeaves.length + scene.windows.length).toBe(shell.openings.filter((o) => o.type !== 'passage').length);
   });
+
+  it('is the shell builder and the pieces builder together: each can be built alone, once', () => {
+    const { shell, option } = typicalRoom();
+    const whole = buildRoomScene(shell, option);
+    const room = buildShellScene(shell);
+    const pieces = buildPiecesScene(option.pieces);
+    expect(pieces).toEqual(whole.pieces);
+    expect(room.walls).toEqual(whole.walls);
+    expect([room.floor, room.ceiling, room.doorLeaves, room.windows]).toEqual([
+      whole.floor,
+      whole.ceiling,
+      whole.doorLeaves,
+      whole.windows,
+    ]);
+    // The shell's bounds are its own; the room's take in the pieces as well.
+    expect(room.bounds).toEqual(meshBoundsOf(sceneMeshes(room)));
+    expect(whole.bounds).toEqual(meshBoundsOf(sceneMeshes(whole)));
+  });
+
+  it('builds only placed pieces, each as a closed box on its footprint', () => {
+    const [chest, more] = buildPiecesScene(
+      optionDocSchema.parse({
+        pieces: [
+          { id: 'waiting', name: 'Waiting', x: 0, y: 0, width: 500, depth: 500, height: 500, status: 'new', placed: false },
+          { id: 'chest', name: 'Chest', x: 1000, y: 2000, width: 800, depth: 400, height: 900, status: 'new', rotation: 90 },
+        ],
+      }).pieces,
+    );
+    expect(more).toBeUndefined();
+    expect(chest?.id).toBe('chest');
+    const b = meshBounds(chest!.mesh);
+    // Turned 90°: 400 mm across x, 800 mm along z (plan y), 0.9 m tall.
+    expect(b.min.map((v) => Number(v.toFixed(4)))).toEqual([0.8, 0, 1.6]);
+    expect(b.max.map((v) => Number(v.toFixed(4)))).toEqual([1.2, 0.9, 2.4]);
+  });
 });
+
+function meshBoundsOf(meshes: readonly MeshData[]) {
+  const all = meshes.map(meshBounds);
+  return {
+    min: [0, 1, 2].map((k) => Math.min(...all.map((b) => b.min[k]!))),
+    max: [0, 1, 2].map((k) => Math.max(...all.map((b) => b.max[k]!))),
+  };
+}

@@ -1,6 +1,7 @@
 import type { Piece } from '../schemas/option';
 import type { Opening, RoomShell } from '../schemas/room';
 import { placeOpening, doorSwing, type OpeningPlacement } from './openings';
+import { boxCornersMm, piecePlanBox, planBoxAt, type PiecePlanBox } from './piece';
 import { areaMm2, triangulatePolygon } from './polygon';
 import { POINT_TOLERANCE_MM } from './tolerances';
 import { layoutShellWalls, type WallLayout } from './walls';
@@ -68,16 +69,25 @@ export interface WindowSceneData {
 }
 
 /** Everything the 3D view draws for one room and one option, scene metres, keyed by wall index or document id. */
-export interface RoomSceneData {
+/** The room itself, without its pieces: what stays put while an option changes. */
+export interface ShellSceneData {
   floor: MeshData;
   /** Faces down, seen from inside the room. */
   ceiling: MeshData;
   walls: WallSceneData[];
-  pieces: PieceSceneData[];
   doorLeaves: DoorLeafSceneData[];
   windows: WindowSceneData[];
+  /** Of the shell alone. */
   bounds: Bounds3;
 }
+
+/** A room and an option's placed pieces; bounds hold both. */
+export interface RoomSceneData extends ShellSceneData {
+  pieces: PieceSceneData[];
+}
+
+/** The meshes sceneMeshes and sceneBounds read: a shell, with or without pieces. */
+export type SceneSurfaces = Omit<ShellSceneData, 'bounds'> & { pieces?: readonly PieceSceneData[] };
 
 type Vec3 = readonly [number, number, number];
 
@@ -284,24 +294,16 @@ function writeReveals(writer: MeshWriter, wall: WallLayout, placement: OpeningPl
   }
 }
 
-// A box whose own x runs along plan unit vector axisX; own y is axisX turned 90° clockwise on the
-// plan. Sizes and heights in mm; uvs in metres along each face.
-function writeBox(
-  writer: MeshWriter,
-  centre: Vec2,
-  axisX: Vec2,
-  sizeXMm: number,
-  sizeYMm: number,
-  bottomMm: number,
-  heightMm: number,
-): void {
-  const axisY: Vec2 = [-axisX[1], axisX[0]];
-  const hx = sizeXMm / 2;
-  const hy = sizeYMm / 2;
+// A box standing on its footprint (geometry/piece) from bottomMm up by heightMm; its own y is its
+// own x turned 90° clockwise on the plan. Heights in mm; uvs in metres along each face.
+function writeBox(writer: MeshWriter, box: PiecePlanBox, bottomMm: number, heightMm: number): void {
+  const { axisX, axisY } = box;
+  const sizeXMm = box.halfWidthMm * 2;
+  const sizeYMm = box.halfDepthMm * 2;
   const topMm = bottomMm + heightMm;
   // Footprint corners in order round the box: (−x,−y) (+x,−y) (+x,+y) (−x,+y).
-  const corner = (a: number, b: number) => addScaled(addScaled(centre, axisX, a), axisY, b);
-  const foot: [Vec2, Vec2, Vec2, Vec2] = [corner(-hx, -hy), corner(hx, -hy), corner(hx, hy), corner(-hx, hy)];
+  const [f0, f1, f2, f3] = boxCornersMm(box);
+  const foot: [Vec2, Vec2, Vec2, Vec2] = [f0!, f1!, f2!, f3!];
   const sides: [0 | 1 | 2 | 3, 0 | 1 | 2 | 3, Vec2, number][] = [
     [0, 1, [-axisY[0], -axisY[1]], sizeXMm],
     [1, 2, axisX, sizeYMm],
@@ -402,7 +404,7 @@ function buildDoorLeaf(wall: WallLayout, opening: Extract<Opening, { type: 'door
   const closed = directionDeg(swing.closedAngleDeg);
   const centre = addScaled(addScaled(swing.hingeMm, open, opening.width / 2), closed, DOOR_LEAF_THICKNESS_MM / 2);
   const writer = new MeshWriter();
-  writeBox(writer, centre, open, opening.width, DOOR_LEAF_THICKNESS_MM, 0, opening.height);
+  writeBox(writer, planBoxAt(centre, open, opening.width, DOOR_LEAF_THICKNESS_MM), 0, opening.height);
   return { openingId: opening.id, mesh: writer.toMesh() };
 }
 
@@ -415,25 +417,27 @@ function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowScene
   const innerFrom = placement.fromMm + f;
   const innerTo = placement.toMm - f;
   const fullHeight = placement.headMm - placement.sillMm;
-  writeBox(frame, at(placement.fromMm + f / 2), wall.direction, f, depthMm, placement.sillMm, fullHeight);
-  writeBox(frame, at(placement.toMm - f / 2), wall.direction, f, depthMm, placement.sillMm, fullHeight);
-  writeBox(frame, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm, placement.sillMm, f);
-  writeBox(frame, at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm, placement.headMm - f, f);
+  writeBox(frame, planBoxAt(at(placement.fromMm + f / 2), wall.direction, f, depthMm), placement.sillMm, fullHeight);
+  writeBox(frame, planBoxAt(at(placement.toMm - f / 2), wall.direction, f, depthMm), placement.sillMm, fullHeight);
+  writeBox(frame, planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm), placement.sillMm, f);
+  writeBox(
+    frame,
+    planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm),
+    placement.headMm - f,
+    f,
+  );
   const glass = new MeshWriter();
   writeBox(
     glass,
-    at((innerFrom + innerTo) / 2),
-    wall.direction,
-    innerTo - innerFrom,
-    GLASS_THICKNESS_MM,
+    planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, GLASS_THICKNESS_MM),
     placement.sillMm + f,
     fullHeight - 2 * f,
   );
   return { openingId: placement.id, frame: frame.toMesh(), glass: glass.toMesh() };
 }
 
-/** Everything to draw for a room shell (plan mm) and an option's placed pieces, in scene metres. */
-export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piece[] }): RoomSceneData {
+/** The room shell (plan mm) as scene meshes (metres): floor, ceiling, walls, door leaves and windows. */
+export function buildShellScene(shell: RoomShell): ShellSceneData {
   const walls = layoutShellWalls(shell);
   const placementsByWall: OpeningPlacement[][] = walls.map(() => []);
   const doorLeaves: DoorLeafSceneData[] = [];
@@ -452,17 +456,28 @@ export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piec
   const ceiling = new MeshWriter();
   writeCap(ceiling, shell.outline, shell.wallHeight, DOWN);
 
-  const pieces: PieceSceneData[] = [];
-  for (const piece of option.pieces) {
+  const wallData = walls.map((wall) => buildWall(wall, itemAt(placementsByWall, wall.index, 'wall'), shell.wallHeight));
+  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, doorLeaves, windows };
+  return { ...surfaces, bounds: sceneBounds(surfaces) };
+}
+
+/** An option's placed pieces as boxes on their footprints (geometry/piece), scene metres. */
+export function buildPiecesScene(pieces: readonly Piece[]): PieceSceneData[] {
+  const built: PieceSceneData[] = [];
+  for (const piece of pieces) {
     if (!piece.placed) continue;
     const writer = new MeshWriter();
-    writeBox(writer, [piece.x, piece.y], directionDeg(piece.rotation), piece.width, piece.depth, piece.elevation, piece.height);
-    pieces.push({ id: piece.id, status: piece.status, mesh: writer.toMesh() });
+    writeBox(writer, piecePlanBox(piece), piece.elevation, piece.height);
+    built.push({ id: piece.id, status: piece.status, mesh: writer.toMesh() });
   }
+  return built;
+}
 
-  const wallData = walls.map((wall) => buildWall(wall, itemAt(placementsByWall, wall.index, 'wall'), shell.wallHeight));
-  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, pieces, doorLeaves, windows };
-  return { ...surfaces, bounds: sceneBounds(surfaces) };
+/** Everything to draw for a room shell (plan mm) and an option's placed pieces, in scene metres. */
+export function buildRoomScene(shell: RoomShell, option: { pieces: readonly Piece[] }): RoomSceneData {
+  const room = buildShellScene(shell);
+  const pieces = buildPiecesScene(option.pieces);
+  return { ...room, pieces, bounds: sceneBounds({ ...room, pieces }) };
 }
 
 function emptyBounds(): Bounds3 {
@@ -488,19 +503,19 @@ export function meshBounds(mesh: MeshData): Bounds3 {
 }
 
 /** Every mesh of a room scene, for bounds, counts and disposal. */
-export function sceneMeshes(scene: Omit<RoomSceneData, 'bounds'>): MeshData[] {
+export function sceneMeshes(scene: SceneSurfaces): MeshData[] {
   return [
     scene.floor,
     scene.ceiling,
     ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals]),
-    ...scene.pieces.map((p) => p.mesh),
+    ...(scene.pieces ?? []).map((p) => p.mesh),
     ...scene.doorLeaves.map((d) => d.mesh),
     ...scene.windows.flatMap((w) => [w.frame, w.glass]),
   ];
 }
 
 /** Axis-aligned bounds (scene metres) of everything in a room scene: walls, pieces, leaves. */
-export function sceneBounds(scene: Omit<RoomSceneData, 'bounds'>): Bounds3 {
+export function sceneBounds(scene: SceneSurfaces): Bounds3 {
   const bounds = emptyBounds();
   for (const mesh of sceneMeshes(scene)) extendBounds(bounds, mesh);
   return bounds;

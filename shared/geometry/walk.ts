@@ -4,7 +4,8 @@
 import type { Piece } from '../schemas/option';
 import type { RoomShell } from '../schemas/room';
 import { doorSwing, placeOpening } from './openings';
-import { boundsMm } from './polygon';
+import { blocksWalking, piecePlanBox } from './piece';
+import { boundsMm, pointInPolygon } from './polygon';
 import { DOOR_LEAF_THICKNESS_MM } from './scene';
 import { layoutShellWalls } from './walls';
 import { addScaled, directionDeg, dot, sub, type Vec2 } from './vec';
@@ -17,8 +18,6 @@ export const BODY_RADIUS_MM = 250;
  * doorway and look back into the room, not so far as to walk off into nothing.
  */
 export const THRESHOLD_DEPTH_MM = 600;
-/** A piece whose underside is at least this high (mm) is walked under: a high shelf, not a cupboard. */
-export const HEAD_CLEARANCE_MM = 2000;
 /** Movement is checked in steps no longer than this share of the body radius, so nothing thin is walked through. */
 const SUBSTEP_SHARE = 0.25;
 /** Pushing out of several obstacles at once settles within a few rounds. */
@@ -57,7 +56,8 @@ export interface WalkObstacles {
 /**
  * What stops a person walking in a room (plan mm): each wall's inside face less its doors and
  * passages; round each of those a small threshold (the reveals carried on past the outer face and
- * closed there); open door leaves; and every placed piece lower than the head clearance.
+ * closed there); open door leaves; and every placed piece a person has to go round (not a rug, not
+ * hung above head height: blocksWalking in geometry/piece).
  */
 export function walkObstacles(shell: RoomShell, pieces: readonly Piece[]): WalkObstacles {
   const walls = layoutShellWalls(shell);
@@ -96,14 +96,9 @@ export function walkObstacles(shell: RoomShell, pieces: readonly Piece[]): WalkO
     });
   }
   for (const piece of pieces) {
-    if (!piece.placed || piece.elevation >= HEAD_CLEARANCE_MM) continue;
-    boxes.push({
-      id: piece.id,
-      centre: [piece.x, piece.y],
-      axisX: directionDeg(piece.rotation),
-      halfXMm: piece.width / 2,
-      halfYMm: piece.depth / 2,
-    });
+    if (!piece.placed || !blocksWalking(piece)) continue;
+    const box = piecePlanBox(piece);
+    boxes.push({ id: piece.id, centre: box.centre, axisX: box.axisX, halfXMm: box.halfWidthMm, halfYMm: box.halfDepthMm });
   }
   return { segments, boxes, outline: shell.outline };
 }
@@ -240,17 +235,6 @@ export function walkLine(obstacles: WalkObstacles, from: Vec2, to: Vec2, radiusM
   return reached;
 }
 
-/** True when plan point `p` lies inside the outline (even–odd rule; either winding). */
-export function insideOutline(outline: readonly Vec2[], p: Vec2): boolean {
-  let inside = false;
-  for (let i = 0, j = outline.length - 1; i < outline.length; j = i++) {
-    const [xi, yi] = outline[i]!;
-    const [xj, yj] = outline[j]!;
-    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
-}
-
 export interface WalkStart {
   /** Where the person stands, plan mm. */
   position: [number, number];
@@ -282,7 +266,7 @@ const headingDegOf = (v: Vec2) => (Math.atan2(v[1], v[0]) * 180) / Math.PI;
  */
 export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm = BODY_RADIUS_MM): WalkStart {
   const centre = floorCentreMm(shell.outline);
-  const centreInside = insideOutline(shell.outline, centre);
+  const centreInside = pointInPolygon(centre, shell.outline);
   const walls = layoutShellWalls(shell);
   const entries = [...shell.openings.filter((o) => o.type === 'door'), ...shell.openings.filter((o) => o.type === 'passage')];
   for (const entry of entries) {
@@ -293,7 +277,7 @@ export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm =
     const inward: Vec2 = [-wall.outward[0], -wall.outward[1]];
     for (let extra = 0; extra <= 4; extra++) {
       const p = addScaled(middle, inward, radiusMm + START_STEP_MM * (1 + extra / 2));
-      if (insideOutline(shell.outline, p) && clearanceMm(obstacles, p) >= radiusMm) {
+      if (pointInPolygon(p, shell.outline) && clearanceMm(obstacles, p) >= radiusMm) {
         const look = sub(centre, p);
         const facesIn = dot(look, inward) > 0 && Math.hypot(look[0], look[1]) > START_STEP_MM;
         return { position: p, headingDeg: headingDegOf(centreInside && facesIn ? look : inward) };
@@ -304,7 +288,7 @@ export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm =
   let best: { p: [number, number]; clear: number } = { p: [centre[0], centre[1]], clear: -Infinity };
   for (let x = b.minX + START_GRID_MM / 2; x < b.maxX; x += START_GRID_MM) {
     for (let y = b.minY + START_GRID_MM / 2; y < b.maxY; y += START_GRID_MM) {
-      if (!insideOutline(shell.outline, [x, y])) continue;
+      if (!pointInPolygon([x, y], shell.outline)) continue;
       const clear = clearanceMm(obstacles, [x, y]);
       if (clear > best.clear) best = { p: [x, y], clear };
     }

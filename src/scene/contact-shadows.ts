@@ -4,6 +4,7 @@
 // never moves, so this costs one draw call and no shadow map lookups on every pixel — which is
 // what makes the walk-through smooth on software rendering. Scene metres, y up; pure.
 import type { MeshData } from '../../shared/geometry/scene';
+import { pieceFootprintMm } from '../../shared/geometry/piece';
 import type { Piece } from '../../shared/schemas/option';
 
 /** The patch sits this far (m) above the floor, under anything standing on it. */
@@ -47,34 +48,21 @@ export function contactShadows(pieces: readonly Piece[], awayFromLight: readonly
     const offset = Math.min(MAX_OFFSET_M, OFFSET_PER_HEIGHT * (heightM + elevationM));
     const share = 1 - (1 - MIN_DARKNESS_SHARE) * Math.min(1, elevationM / FADE_ELEVATION_M);
     const alpha = SHADOW_DARKNESS * share;
-    const r = (piece.rotation * Math.PI) / 180;
-    // The piece's own axes on the plan (x right, y down), as the scene builds its box.
-    const ax: [number, number] = [Math.cos(r), Math.sin(r)];
-    const ay: [number, number] = [-ax[1], ax[0]];
-    const cx = piece.x / 1000 + lx * offset;
-    const cz = piece.y / 1000 + lz * offset;
-    const hx = piece.width / 2000;
-    const hy = piece.depth / 2000;
-    // Inner corners (the footprint) then outer corners (pushed out along both axes), in order round.
-    const signs = [
-      [-1, -1],
-      [1, -1],
-      [1, 1],
-      [-1, 1],
-    ];
+    // The footprint (shifted away from the light) then the same box grown by the spread, plan mm.
+    const shifted = { ...piece, x: piece.x + lx * offset * 1000, y: piece.y + lz * offset * 1000 };
+    const inner = pieceFootprintMm(shifted);
+    const outer = pieceFootprintMm({ ...shifted, width: piece.width + 2000 * spread, depth: piece.depth + 2000 * spread });
     const base = n * 8;
-    signs.forEach(([sx, sy], k) => {
-      for (const [ring, grow] of [
-        [0, 0],
-        [1, spread],
-      ] as const) {
-        const u = sx * (hx + grow);
-        const v = sy * (hy + grow);
+    for (const [ring, corners] of [
+      [0, inner],
+      [1, outer],
+    ] as const) {
+      corners.forEach(([x, y], k) => {
         const i = base + ring * 4 + k;
-        positions.set([cx + ax[0] * u + ay[0] * v, SHADOW_LIFT_M, cz + ax[1] * u + ay[1] * v], i * 3);
+        positions.set([x / 1000, SHADOW_LIFT_M, y / 1000], i * 3);
         colours.set([0, 0, 0, ring === 0 ? alpha : 0], i * 4);
-      }
-    });
+      });
+    }
     // Facing up: the inner quad, then a band of two triangles along each side.
     const tri: number[] = [base, base + 2, base + 1, base, base + 3, base + 2];
     for (let k = 0; k < 4; k++) {

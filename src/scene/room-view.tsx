@@ -1,7 +1,7 @@
 import { Canvas, useThree } from '@react-three/fiber';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import * as THREE from 'three';
-import { buildRoomScene, type PieceSceneData } from '../../shared/geometry/scene';
+import { buildPiecesScene, buildShellScene, type PieceSceneData } from '../../shared/geometry/scene';
 import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
 import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from './materials';
@@ -145,11 +145,8 @@ function RoomScene({
   const surfaces = useMemo(() => surfaceMaterials(finishes, finishMaterials), [finishes, finishMaterials]);
   const windows = useMemo(() => tryBuild('windows', () => windowLightRects(shell)) ?? [], [shell]);
 
-  const parts = useMemo(() => tryBuild('room', () => shellParts(buildRoomScene(shell, { pieces: [] }), shell)), [shell]);
-  const pieceScene = useMemo<readonly PieceSceneData[]>(
-    () => tryBuild('pieces', () => buildRoomScene(shell, { pieces }).pieces) ?? [],
-    [shell, pieces],
-  );
+  const parts = useMemo(() => tryBuild('room', () => shellParts(buildShellScene(shell), shell)), [shell]);
+  const pieceScene = useMemo<readonly PieceSceneData[]>(() => tryBuild('pieces', () => buildPiecesScene(pieces)) ?? [], [pieces]);
   const forms = useMemo(() => tryBuild('forms', () => buildPieceForms(pieces)), [pieces]);
 
   const { walls, ceiling, updateView } = useWallFade(parts, fadeNearWalls, materials, host, invalidate, surfaces);

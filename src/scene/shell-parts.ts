@@ -1,5 +1,5 @@
 import type * as THREE from 'three';
-import type { Bounds3, MeshData, RoomSceneData } from '../../shared/geometry/scene';
+import type { Bounds3, MeshData, ShellSceneData } from '../../shared/geometry/scene';
 import type { RoomShell } from '../../shared/schemas/room';
 import { isEmptyMesh, mergeMeshData, meshDataToGeometry } from './build-geometry';
 
@@ -26,7 +26,7 @@ export interface ShellParts {
 }
 
 /** Groups a room scene's surfaces (scene metres) into the meshes the view draws. */
-export function shellParts(scene: RoomSceneData, shell: RoomShell): ShellParts {
+export function shellParts(scene: ShellSceneData, shell: RoomShell): ShellParts {
   const wallOfOpening = new Map(shell.openings.map((opening) => [opening.id, opening.wall]));
   const walls = scene.walls.map((wall) => {
     const windows = scene.windows.filter((w) => wallOfOpening.get(w.openingId) === wall.index);

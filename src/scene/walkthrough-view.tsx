@@ -1,7 +1,7 @@
 import { Canvas, useThree } from '@react-three/fiber';
 import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import * as THREE from 'three';
-import { buildRoomScene, type PieceSceneData } from '../../shared/geometry/scene';
+import { buildPiecesScene, buildShellScene, type PieceSceneData } from '../../shared/geometry/scene';
 import { walkObstacles, type WalkObstacles } from '../../shared/geometry/walk';
 import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
@@ -240,7 +240,7 @@ function WalkthroughScene(props: SceneProps) {
   );
   useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
 
-  const parts = useMemo(() => tryBuild('room', () => shellParts(buildRoomScene(shell, { pieces: [] }), shell)), [shell]);
+  const parts = useMemo(() => tryBuild('room', () => shellParts(buildShellScene(shell), shell)), [shell]);
   const windows = useMemo(() => tryBuild('windows', () => windowLightRects(shell)) ?? [], [shell]);
   // Every option is built once, up front: switching only changes which group is visible.
   const built = useMemo<BuiltOption[]>(
@@ -251,7 +251,7 @@ function WalkthroughScene(props: SceneProps) {
           id: o.id,
           pieces,
           finishes: o.finishes,
-          pieceScene: tryBuild('pieces', () => buildRoomScene(shell, { pieces }).pieces) ?? [],
+          pieceScene: tryBuild('pieces', () => buildPiecesScene(pieces)) ?? [],
           forms: pieceBuild === 'forms' ? tryBuild('forms', () => buildPieceForms(pieces)) : null,
           obstacles: tryBuild('walk', () => walkObstacles(shell, pieces)) ?? { segments: [], boxes: [], outline: shell.outline },
         };

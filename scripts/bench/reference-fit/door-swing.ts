@@ -5,7 +5,8 @@ import { layoutShellWalls } from '../../../shared/geometry/walls';
 import { addScaled, directionDeg } from '../../../shared/geometry/vec';
 import type { RoomShell } from '../../../shared/schemas/room';
 import type { Finding } from '../../../shared/analysis/fit/finding';
-import { convexOverlap, isRug, type PieceBox } from '../../../shared/analysis/fit/boxes';
+import { convexOverlap, type PieceBox } from '../../../shared/analysis/fit/boxes';
+import { isWalkedOver } from '../../../shared/geometry/piece';
 import { capitalise, theName } from '../../../shared/analysis/fit/messages';
 
 /** Straight pieces standing in for the leaf's arc; at 32 the chord falls short of the arc by under 0.12 % of the leaf (1 mm on an 820 mm leaf). */
@@ -35,7 +36,7 @@ export function findDoorSwings(shell: RoomShell, boxes: readonly PieceBox[]): Fi
     if (!wall) continue;
     const sector = swingSector(doorSwing(wall, opening));
     for (const box of boxes) {
-      if (isRug(box.piece) || box.bottomMm >= opening.height) continue;
+      if (isWalkedOver(box.piece) || box.bottomMm >= opening.height) continue;
       if (!convexOverlap(box.corners, sector)) continue;
       findings.push({
         kind: 'door-swing',

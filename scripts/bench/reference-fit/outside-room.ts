@@ -2,13 +2,8 @@
 // tests/reference/fit-reference.test.ts checks both give the same findings. Do not edit.
 import type { RoomShell } from '../../../shared/schemas/room';
 import type { Finding } from '../../../shared/analysis/fit/finding';
-import {
-  distanceToSegmentMm,
-  pointInPolygon,
-  segmentCrossesConvex,
-  TOUCH_TOLERANCE_MM,
-  type PieceBox,
-} from '../../../shared/analysis/fit/boxes';
+import { distanceToSegmentMm, segmentCrossesConvex, TOUCH_TOLERANCE_MM, type PieceBox } from '../../../shared/analysis/fit/boxes';
+import { pointInPolygon } from '../../../shared/geometry/polygon';
 import { capitalise, theName } from '../../../shared/analysis/fit/messages';
 import type { Vec2 } from '../../../shared/geometry/vec';
 

@@ -9,14 +9,9 @@ import { addScaled, type Vec2 } from '../../../shared/geometry/vec';
 import type { Piece } from '../../../shared/schemas/option';
 import type { RoomShell } from '../../../shared/schemas/room';
 import type { Finding } from '../../../shared/analysis/fit/finding';
-import {
-  blocksWalking,
-  closestOnShape,
-  closestPair,
-  distanceToSegmentMm,
-  pointInPolygon,
-  type PieceBox,
-} from '../../../shared/analysis/fit/boxes';
+import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from '../../../shared/analysis/fit/boxes';
+import { blocksWalking } from '../../../shared/geometry/piece';
+import { pointInPolygon } from '../../../shared/geometry/polygon';
 import { cellAt, cellCentreMm, distanceField, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
 import { capitalise, cmText, roundToCmMm, theName } from '../../../shared/analysis/fit/messages';
 

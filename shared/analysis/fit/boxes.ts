@@ -1,17 +1,16 @@
 // Plan geometry shared by the fit checks: a piece's footprint as a rotated rectangle, convex
-// overlap by separating axes, point-in-outline and closest points between convex shapes. All in
+// overlap by separating axes and closest points between convex shapes. All in
 // plan mm (x right, y down).
 import type { Piece } from '../../schemas/option';
-import { addScaled, cross, directionDeg, dot, sub, type Vec2 } from '../../geometry/vec';
+import { blocksWalking, boxCornersMm, piecePlanBox } from '../../geometry/piece';
+import { addScaled, cross, dot, sub, type Vec2 } from '../../geometry/vec';
 import { itemAt } from '../../item-at';
+
+// The walking rule lives in geometry/piece; kept readable from here for the schedule's walkway figure.
+export { blocksWalking };
 
 /** Two footprints or height ranges may share this much (mm) and still only touch: a tape reads to about 1 mm. */
 export const TOUCH_TOLERANCE_MM = 1;
-/** A piece at most this tall (mm) is a rug: it lies under furniture and is walked over (common practice). */
-export const RUG_MAX_HEIGHT_MM = 20;
-/** A piece whose underside is at least this high (mm) is walked under, not round: wall cabinets and shelves (common practice; a usual wall cabinet sits at 1400–1500 mm). */
-export const WALK_UNDER_ELEVATION_MM = 1200;
-
 /** A placed piece's footprint in plan mm with its height range (mm above the floor). */
 export interface PieceBox {
   piece: Piece;
@@ -27,42 +26,16 @@ export interface PieceBox {
   topMm: number;
 }
 
-/** A piece's box on the plan (mm): rotation turns its own axes clockwise seen from above. */
+/** A piece's box on the plan (mm) with its height range, from the one footprint in geometry/piece. */
 export function pieceBox(piece: Piece): PieceBox {
-  const axisX = directionDeg(piece.rotation);
-  const axisY: [number, number] = [-axisX[1], axisX[0]];
-  const hx = piece.width / 2;
-  const hy = piece.depth / 2;
-  const centre: [number, number] = [piece.x, piece.y];
-  const corners = (
-    [
-      [-hx, -hy],
-      [hx, -hy],
-      [hx, hy],
-      [-hx, hy],
-    ] as const
-  ).map(([a, b]) => addScaled(addScaled(centre, axisX, a), axisY, b));
+  const box = piecePlanBox(piece);
   return {
     piece,
-    centre,
-    axisX,
-    axisY,
-    halfWidthMm: hx,
-    halfDepthMm: hy,
-    corners,
+    ...box,
+    corners: boxCornersMm(box),
     bottomMm: piece.elevation,
     topMm: piece.elevation + piece.height,
   };
-}
-
-/** Whether a piece is a rug by its height (RUG_MAX_HEIGHT_MM). */
-export function isRug(piece: Piece): boolean {
-  return piece.height <= RUG_MAX_HEIGHT_MM;
-}
-
-/** Whether a person walking the floor has to go round the piece (not a rug, not mounted overhead). */
-export function blocksWalking(piece: Piece): boolean {
-  return !isRug(piece) && piece.elevation < WALK_UNDER_ELEVATION_MM;
 }
 
 /** Boxes of the placed pieces only; pieces in the holding area take no part in the fit check. */
@@ -132,17 +105,6 @@ export function segmentCrossesConvex(a: Vec2, b: Vec2, polygon: readonly Vec2[],
     if (Math.min(maxP, maxS) - Math.max(minP, minS) <= toleranceMm) return false;
   }
   return true;
-}
-
-/** Even-odd point-in-polygon on the plan (mm); points on an edge may fall either way. */
-export function pointInPolygon(p: Vec2, polygon: readonly Vec2[]): boolean {
-  let inside = false;
-  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
-    const [xi, yi] = polygon[i]!;
-    const [xj, yj] = polygon[j]!;
-    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
 }
 
 /** The point of segment ab nearest to p (plan mm). */

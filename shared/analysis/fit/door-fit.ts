@@ -1,6 +1,7 @@
 import type { Opening, RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
-import { isRug, type PieceBox } from './boxes';
+import { isWalkedOver } from '../../geometry/piece';
+import type { PieceBox } from './boxes';
 import { capitalise, theName, wholeCm } from './messages';
 
 /** Room (mm) to spare on each measure when carrying a piece through: hands and a blanket round it (common practice). */
@@ -41,7 +42,7 @@ export function findTooBigForDoor(shell: RoomShell, boxes: readonly PieceBox[]):
   const findings: Finding[] = [];
   for (const box of boxes) {
     const { piece } = box;
-    if (isRug(piece)) continue;
+    if (isWalkedOver(piece)) continue;
     const sizes: [number, number, number] = [piece.width, piece.depth, piece.height];
     if (ways.some((way) => passesThrough(sizes, clearPassMm(way)))) continue;
     const listed = [...sizes].sort((x, y) => x - y).map(wholeCm);

@@ -3,7 +3,8 @@ import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, directionDeg } from '../../geometry/vec';
 import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
-import { convexOverlap, isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
+import { isWalkedOver } from '../../geometry/piece';
+import { convexOverlap, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 
 /** Straight pieces standing in for the leaf's arc; at 32 the chord falls short of the arc by under 0.12 % of the leaf (1 mm on an 820 mm leaf). */
@@ -34,7 +35,7 @@ export function findDoorSwings(shell: RoomShell, boxes: readonly PieceBox[]): Fi
     const swing = doorSwing(wall, opening);
     const sector = swingSector(swing);
     for (const box of boxes) {
-      if (isRug(box.piece) || box.bottomMm >= opening.height) continue;
+      if (isWalkedOver(box.piece) || box.bottomMm >= opening.height) continue;
       // The sector lies within a leaf's length of the hinge and the box within its half-diagonal of
       // its centre: further apart than both (and a millimetre), they cannot meet.
       const apartMm = Math.hypot(box.centre[0] - swing.hingeMm[0], box.centre[1] - swing.hingeMm[1]);

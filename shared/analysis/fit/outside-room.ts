@@ -1,6 +1,7 @@
 import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
-import { distanceToSegmentMm, pointInPolygon, segmentCrossesConvex, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
+import { pointInPolygon } from '../../geometry/polygon';
+import { distanceToSegmentMm, segmentCrossesConvex, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 import type { Vec2 } from '../../geometry/vec';
 

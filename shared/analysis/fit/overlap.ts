@@ -1,14 +1,15 @@
 import type { Finding } from './finding';
-import { convexOverlap, isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
+import { isWalkedOver } from '../../geometry/piece';
+import { convexOverlap, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, theName } from './messages';
 
 /**
- * `overlap`: pairs of placed boxes (plan mm) that share floor area and height. Rugs never count: a
- * rug lies under furniture (common practice). Pieces stacked apart in height (a wall cabinet above
+ * `overlap`: pairs of placed boxes (plan mm) that share floor area and height. Rugs (walked over,
+ * geometry/piece) never count: a rug lies under furniture (common practice). Pieces stacked apart in height (a wall cabinet above
  * a sideboard) are fine.
  */
 export function findOverlaps(boxes: readonly PieceBox[]): Finding[] {
-  const solid = boxes.filter((box) => !isRug(box.piece));
+  const solid = boxes.filter((box) => !isWalkedOver(box.piece));
   const findings: Finding[] = [];
   for (let i = 0; i < solid.length; i++) {
     for (let j = i + 1; j < solid.length; j++) {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { HEAD_CLEARANCE_MM } from '../../geometry/piece';
 import { placedBoxes } from './boxes';
 import { checkFit } from './index';
 import { cleanLayout, gapLayout, pieceInput, plan, walledInLayout } from './test-plans';
@@ -122,14 +123,34 @@ describe('walkway rules', () => {
     expect(walkway(layout)).toEqual([]);
   });
 
-  it('lets a route pass under a cabinet mounted high and over a rug', () => {
+  it('lets a route pass over a rug and under a shelf above head height, not under a cabinet at 1400 mm', () => {
     const layout = gapLayout();
-    // Filling the gap with a rug or a cabinet at 1400 mm leaves the route as it was.
+    // Filling the gap with a rug or a shelf hung at the head clearance leaves the route as it was.
     layout.pieces.push(pieceInput({ id: 'rug', name: 'Rug', x: 2310, y: 2000, width: 620, depth: 500, height: 15 }));
     layout.pieces.push(
-      pieceInput({ id: 'cabinet', name: 'Cabinet', x: 2310, y: 2000, width: 620, depth: 500, height: 600, elevation: 1400 }),
+      pieceInput({
+        id: 'shelf',
+        name: 'Shelf',
+        x: 2310,
+        y: 2000,
+        width: 620,
+        depth: 500,
+        height: 300,
+        elevation: HEAD_CLEARANCE_MM,
+      }),
     );
     expect(walkway(layout).map((f) => f.pieces[0])).toEqual(['chest']);
+    // A cabinet hung at 1400 mm is at head and shoulder height: the gap is shut as by a stool.
+    const hung = gapLayout();
+    hung.pieces.push(
+      pieceInput({ id: 'cabinet', name: 'Cabinet', x: 2310, y: 2000, width: 620, depth: 500, height: 600, elevation: 1400 }),
+    );
+    expect(
+      walkway(hung)
+        .filter((f) => f.kind === 'unreachable')
+        .map((f) => f.pieces[0])
+        .sort(),
+    ).toEqual(['cabinet', 'chest']);
     // A floor-standing stool in the gap shuts it: the chest's front and the stool's own (facing the
     // bottom half) are cut off.
     layout.pieces.push(pieceInput({ id: 'stool', name: 'Stool', x: 2310, y: 2000, width: 620, depth: 500, height: 450 }));

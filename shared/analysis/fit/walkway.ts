@@ -7,7 +7,9 @@ import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
 import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
-import { blocksWalking, closestOnShape, closestPair, distanceToSegmentMm, pointInPolygon, type PieceBox } from './boxes';
+import { blocksWalking } from '../../geometry/piece';
+import { pointInPolygon } from '../../geometry/polygon';
+import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from './boxes';
 import { cellAt, cellCentreMm, distanceField, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
 import { itemAt } from '../../item-at';
@@ -446,8 +448,8 @@ function sideName(side: number, obstacles: readonly PieceBox[]): string {
 /**
  * `narrow-walkway` and `unreachable` for placed pieces (plan mm), with `walkwayMm` the clear width a
  * route needs. Routes start just inside every door and passage; a room with neither has no way in to
- * judge from, so it gets no walkway findings. Rugs and pieces mounted overhead neither block a route
- * nor need one (they are reached over whatever stands below).
+ * judge from, so it gets no walkway findings. Pieces walked over (rugs) or under (hung at or above
+ * the head clearance) neither block a route nor need one (geometry/piece: blocksWalking).
  */
 export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[], walkwayMm: number): Finding[] {
   const ways = shell.openings.filter((o) => o.type !== 'window' && o.wall < shell.outline.length);

@@ -3,7 +3,8 @@ import { layoutShellWalls } from '../../geometry/walls';
 import { dot, sub } from '../../geometry/vec';
 import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
-import { isRug, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
+import { isWalkedOver } from '../../geometry/piece';
+import { TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import { capitalise, cmText, theName } from './messages';
 
 /** A piece this close (mm) to a window's wall stands against it: a sofa pushed back, a desk under the window (common practice). */
@@ -22,7 +23,7 @@ export function findBlockedWindows(shell: RoomShell, boxes: readonly PieceBox[])
     if (!wall) continue;
     const window = placeOpening(wall, opening);
     for (const box of boxes) {
-      if (isRug(box.piece)) continue;
+      if (isWalkedOver(box.piece)) continue;
       if (box.topMm <= window.sillMm + TOUCH_TOLERANCE_MM || box.bottomMm >= window.headMm - TOUCH_TOLERANCE_MM) continue;
       let nearestMm = Infinity;
       let farthestMm = -Infinity;

@@ -3,10 +3,7 @@ import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../shared/geometry/walls';
 import { placeShellOpenings } from '../../../../shared/geometry/openings';
-import { boundsMm, type Bounds2 } from '../../../../shared/geometry/polygon';
-import { insideOutline } from '../../../../shared/geometry/walk';
-
-export { insideOutline };
+import { boundsMm, pointInPolygon, type Bounds2 } from '../../../../shared/geometry/polygon';
 import { boxesOverlap, boxInsideOutline, findPlacement, pieceFootprintMm, snapPieceToWalls } from '../../../../shared/commands';
 
 /** Space round the room on the plan, for dimension lines and handles. */
@@ -160,7 +157,7 @@ export function placedNear<P extends Piece>(
 export function roomCentre(shell: RoomShell): [number, number] {
   const b = boundsMm(shell.outline);
   const centre: [number, number] = [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2];
-  if (insideOutline(shell.outline, centre)) return centre;
+  if (pointInPolygon(centre, shell.outline)) return centre;
   // An L or U whose box centre falls outside: use the first corner's inside neighbourhood instead.
   const [x0, y0] = shell.outline[0];
   const [x1, y1] = shell.outline[1];

@@ -20,6 +20,7 @@ import {
 } from '../../../../shared/commands';
 import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
+import { isWalkedOver, isWalkedUnder } from '../../../../shared/geometry/piece';
 import { distance } from '../../../../shared/geometry/vec';
 import {
   DIMENSION_OFFSET_MM,
@@ -549,7 +550,8 @@ export function PlanView(props: Props) {
         const ring = pieceRing(pose);
         const flaggedPiece = flagged.has(p.id);
         const front = mid(ring[2], ring[3], 0.5);
-        const rug = p.height <= 20;
+        // Walked over (rugs) reads as floor; walked under (above head height) is drawn faded.
+        const rug = isWalkedOver(p);
         const fill = rug ? '#f1e7d6' : (p.colour ?? (p.status === 'existing' ? '#ece4d6' : '#ffffff'));
         const outline = {
           stroke: flaggedPiece ? '#a4472f' : selected ? '#2f6b5c' : '#5c534a',
@@ -566,7 +568,7 @@ export function PlanView(props: Props) {
             data-rotation={Math.round(p.rotation)}
             className={movable ? 'cursor-move' : 'cursor-pointer'}
             onPointerDown={(e) => onPointerDownPiece(e, p)}
-            opacity={p.elevation >= 1200 ? 0.75 : 1}
+            opacity={isWalkedUnder(p) ? 0.75 : 1}
           >
             <path d={ringPath(ring)} fill={fill} fillOpacity={rug ? 0.8 : 0.95} {...outline} />
             <PieceTopView piece={pose} fill={fill} stroke={stroke * 0.7} />
