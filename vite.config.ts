@@ -15,7 +15,7 @@ export default defineConfig({
     rollupOptions: {
       input: {
         app: 'index.html',
-        presentation: 'src/features/presentation/presentation.html',
+        clientPage: 'src/features/client-page/presentation.html',
       },
     },
   },

@@ -7,10 +7,10 @@ import { resolve, relative } from 'node:path';
 import { build } from 'vite';
 
 const root = resolve(import.meta.dirname, '..');
-export const PRESENTATION_ENTRY = 'src/features/presentation/presentation.html';
+export const PRESENTATION_ENTRY = 'src/features/client-page/presentation.html';
 
 /** Modules only the designer's app may carry: every feature but the client page, the app shell, the session. */
-export const DESIGNER_MODULE = /^src\/(?:app\/|lib\/session|features\/(?!presentation\/))/;
+export const DESIGNER_MODULE = /^src\/(?:app\/|lib\/session|features\/(?!client-page\/))/;
 
 interface Chunk {
   fileName: string;

@@ -18,7 +18,7 @@ export const router = createBrowserRouter([
   { path: '/sign-up', element: <SignUpPage /> },
   { path: '/invite/:token', element: <AcceptInvitePage /> },
   // Built pages serve /p/* from the presentation entry; this lazy route covers the dev server.
-  { path: '/p/:token', lazy: () => import('../features/presentation/presentation-route') },
+  { path: '/p/:token', lazy: () => import('../features/client-page/presentation-route') },
   {
     element: <DesignerLayout />,
     children: [

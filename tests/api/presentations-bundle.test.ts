@@ -13,7 +13,7 @@ beforeAll(async () => {
 
 describe('the client page bundle', () => {
   it('carries the presentation page and the 3D view', () => {
-    expect(report.initialModules).toContain('src/features/presentation/components/presentation-page.tsx');
+    expect(report.initialModules).toContain('src/features/client-page/components/presentation-page.tsx');
     expect(report.lazyModules).toContain('src/scene/walkthrough-view.tsx');
   });
 
@@ -34,6 +34,6 @@ describe('the client page bundle', () => {
     expect(DESIGNER_MODULE.test('src/features/projects/components/project-page.tsx')).toBe(true);
     expect(DESIGNER_MODULE.test('src/app/router.tsx')).toBe(true);
     expect(DESIGNER_MODULE.test('src/lib/session.ts')).toBe(true);
-    expect(DESIGNER_MODULE.test('src/features/presentation/main.tsx')).toBe(false);
+    expect(DESIGNER_MODULE.test('src/features/client-page/main.tsx')).toBe(false);
   });
 });

@@ -33,7 +33,7 @@ function presentationFiles(): { allowed: Set<string>; appEntry: string } {
     allowed.add(chunk.file);
     for (const k of [...(chunk.imports ?? []), ...(chunk.dynamicImports ?? [])]) walk(k);
   };
-  walk('src/features/presentation/presentation.html');
+  walk('src/features/client-page/presentation.html');
   return { allowed, appEntry: manifest['index.html'].file };
 }
 

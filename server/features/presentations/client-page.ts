@@ -4,7 +4,7 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 
 /** Where Vite writes the presentation entry inside the client build. */
-export const PRESENTATION_HTML = 'src/features/presentation/presentation.html';
+export const PRESENTATION_HTML = 'src/features/client-page/presentation.html';
 
 export function mountPresentationPage(app: Express, dist: string): void {
   const file = join(dist, PRESENTATION_HTML);
