@@ -14,7 +14,7 @@ beforeAll(async () => {
 describe('the client page bundle', () => {
   it('carries the presentation page and the 3D view', () => {
     expect(report.initialModules).toContain('src/features/client-page/components/presentation-page.tsx');
-    expect(report.lazyModules).toContain('src/scene/walkthrough-view.tsx');
+    expect(report.lazyModules).toContain('src/features/client-page/walkthrough/walkthrough-view.tsx');
   });
 
   it('contains no designer module, before or after the 3D view loads', () => {

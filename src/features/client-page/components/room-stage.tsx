@@ -1,8 +1,8 @@
 import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ClientRoom } from '../../../../shared/schemas/presentation';
 import type { MoneySettings } from '../../../../shared/units/money';
-import { CameraLink } from '../../../scene/camera-link';
-import type { TextureProgress, ViewCommands, ViewMode } from '../../../scene/walkthrough-view';
+import { CameraLink } from '../walkthrough/camera-link';
+import type { TextureProgress, ViewCommands, ViewMode } from '../walkthrough/walkthrough-view';
 import { Button } from '../../../components/ui/button';
 import { markLookedAt } from '../api/presentation';
 import { ChooseDialog } from './choose-dialog';
@@ -12,7 +12,7 @@ import { EYE_HEIGHT, KeyHelp, LoadingBar, OverviewButtons, ViewModeBar, WalkButt
 import { momentText, PAGE_FRAME, pieceName, SAFETY_LINE } from './wording';
 
 // three.js is most of the page's weight: it loads after the page itself has appeared.
-const WalkthroughView = lazy(() => import('../../../scene/walkthrough-view'));
+const WalkthroughView = lazy(() => import('../walkthrough/walkthrough-view'));
 
 /** Typing in a field must not switch options. */
 const isTyping = (target: EventTarget | null) =>

@@ -2,7 +2,7 @@
 // who cannot drag or does not know the keys. Plain buttons with plain names; nothing here moves
 // the camera itself, it asks the view.
 import { useEffect, useRef, type ReactNode } from 'react';
-import type { TextureProgress, ViewCommands, ViewMode, WalkMove } from '../../../scene/walkthrough-view';
+import type { TextureProgress, ViewCommands, ViewMode, WalkMove } from '../walkthrough/walkthrough-view';
 
 /** Eye height limits for Walk (mm): a child or a seated person up to a tall adult. */
 export const EYE_HEIGHT = { minMm: 1000, maxMm: 2000, stepMm: 50, defaultMm: 1600 } as const;

@@ -5,11 +5,11 @@ import { OrbitControls } from '@react-three/drei';
 import { useFrame, useThree } from '@react-three/fiber';
 import { useEffect, useEffectEvent, useLayoutEffect, useRef, type ComponentRef } from 'react';
 import * as THREE from 'three';
-import type { Bounds3 } from '../../shared/geometry/scene';
-import { moveBody, walkLine, walkStart, type WalkObstacles } from '../../shared/geometry/walk';
-import type { RoomShell } from '../../shared/schemas/room';
+import type { Bounds3 } from '../../../../shared/geometry/scene';
+import { moveBody, walkLine, walkStart, type WalkObstacles } from '../../../../shared/geometry/walk';
+import type { RoomShell } from '../../../../shared/schemas/room';
 import type { CameraLink, ViewPose } from './camera-link';
-import { overviewFrame, type OverviewFrame } from './framing';
+import { overviewFrame, type OverviewFrame } from '../../../scene/framing';
 import {
   MAX_PITCH_DEG,
   easeInOut,

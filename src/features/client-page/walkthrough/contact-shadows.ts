@@ -3,9 +3,9 @@
 // wider for taller pieces and pushed away from the windows the daylight comes through. The room
 // never moves, so this costs one draw call and no shadow map lookups on every pixel — which is
 // what makes the walk-through smooth on software rendering. Scene metres, y up; pure.
-import type { MeshData } from '../../shared/geometry/scene';
-import { pieceFootprintMm } from '../../shared/geometry/piece';
-import type { Piece } from '../../shared/schemas/option';
+import type { MeshData } from '../../../../shared/geometry/scene';
+import { pieceFootprintMm } from '../../../../shared/geometry/piece';
+import type { Piece } from '../../../../shared/schemas/option';
 
 /** The patch sits this far (m) above the floor, under anything standing on it. */
 export const SHADOW_LIFT_M = 0.002;

@@ -1,28 +1,28 @@
 import { Canvas, useThree } from '@react-three/fiber';
 import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import * as THREE from 'three';
-import { buildPiecesScene, buildShellScene, type PieceSceneData } from '../../shared/geometry/scene';
-import { walkObstacles, type WalkObstacles } from '../../shared/geometry/walk';
-import type { Piece } from '../../shared/schemas/option';
-import type { RoomShell } from '../../shared/schemas/room';
+import { buildPiecesScene, buildShellScene, type PieceSceneData } from '../../../../shared/geometry/scene';
+import { walkObstacles, type WalkObstacles } from '../../../../shared/geometry/walk';
+import type { Piece } from '../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../shared/schemas/room';
 import type { CameraLink, ViewMode, ViewPose } from './camera-link';
-import { FinishMaterials, type SurfaceFinishes, type TextureProgress } from './finish-materials';
-import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from './materials';
-import { RenderAndReport } from './render-report';
-import { RoomPieces, type PieceBuild } from './room-pieces';
-import { buildPieceForms, type PieceFormData } from '../../shared/geometry/forms/piece-forms';
-import { RoomShellMeshes } from './room-shell';
-import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
-import { SceneLights } from './scene-lights';
-import { shellParts } from './shell-parts';
-import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from './view-helpers';
+import { FinishMaterials, type SurfaceFinishes, type TextureProgress } from '../../../scene/finish-materials';
+import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from '../../../scene/materials';
+import { RenderAndReport } from '../../../scene/render-report';
+import { RoomPieces, type PieceBuild } from '../../../scene/room-pieces';
+import { buildPieceForms, type PieceFormData } from '../../../../shared/geometry/forms/piece-forms';
+import { RoomShellMeshes } from '../../../scene/room-shell';
+import { browserHasWebGL, SceneErrorBoundary } from '../../../scene/scene-error-boundary';
+import { SceneLights } from '../../../scene/scene-lights';
+import { shellParts } from '../../../scene/shell-parts';
+import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from '../../../scene/view-helpers';
 import { HeldMoves, WalkRig, OverviewRig, type RigHandle, type WalkMove } from './walkthrough-rigs';
-import { windowLightRects } from './window-lights';
+import { windowLightRects } from '../../../scene/window-lights';
 import { contactShadows, daylightDirection, noShadows } from './contact-shadows';
 
 export type { WalkMove } from './walkthrough-rigs';
 export type { ViewMode } from './camera-link';
-export type { TextureProgress } from './finish-materials';
+export type { TextureProgress } from '../../../scene/finish-materials';
 
 /** One option of the room: its pieces and what its surfaces wear. */
 export interface WalkthroughOption {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Piece } from '../../shared/schemas/option';
+import type { Piece } from '../../../../shared/schemas/option';
 import { SHADOW_DARKNESS, SHADOW_LIFT_M, contactShadows, daylightDirection } from './contact-shadows';
 
 const piece = (extra: Partial<Piece> = {}): Piece => ({
