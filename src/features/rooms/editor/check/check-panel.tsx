@@ -1,11 +1,11 @@
-import type { Finding } from '../../../../shared/analysis/fit/finding';
-import type { Piece } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
-import { formatLength, type LengthUnit } from '../../../../shared/units/length';
-import { LengthField } from '../../../components/ui/length-field';
-import { Notice, Spinner } from '../../../components/ui/layout';
-import { TakeoffTable } from '../components/takeoff-table';
-import { TALL_PIECE_MM } from './furnish-panel';
+import type { Finding } from '../../../../../shared/analysis/fit/finding';
+import type { Piece } from '../../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../../shared/schemas/room';
+import { formatLength, type LengthUnit } from '../../../../../shared/units/length';
+import { LengthField } from '../../../../components/ui/length-field';
+import { Notice, Spinner } from '../../../../components/ui/layout';
+import { TakeoffTable } from '../../components/takeoff-table';
+import { TALL_PIECE_MM } from '../furnish-panel';
 import type { FitResult } from './use-fit-check';
 
 const KIND_TITLE: Record<Finding['kind'], string> = {

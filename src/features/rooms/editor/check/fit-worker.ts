@@ -1,8 +1,8 @@
 // Runs the fit check off the main thread, so dragging stays smooth in a full room.
-import '../../../lib/zod-no-eval';
-import { checkFit } from '../../../../shared/analysis/fit';
-import type { Piece } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
+import '../../../../lib/zod-no-eval';
+import { checkFit } from '../../../../../shared/analysis/fit';
+import type { Piece } from '../../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../../shared/schemas/room';
 
 export interface FitRequest {
   seq: number;

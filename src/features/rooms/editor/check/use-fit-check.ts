@@ -1,7 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
-import type { Finding } from '../../../../shared/analysis/fit/finding';
-import type { Piece } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
+import type { Finding } from '../../../../../shared/analysis/fit/finding';
+import type { Piece } from '../../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../../shared/schemas/room';
 import type { FitRequest } from './fit-worker';
 
 export interface FitResult {
