@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { movePiece, setWallHeight } from '../../../../shared/commands';
 import type { OptionRecord, RoomRecord } from '../../../../shared/schemas/room-api';
 import { applied, sampleDoc } from '../../../../tests/fixtures/commands';
@@ -15,6 +15,7 @@ import {
   loadTheirs,
   parseDraft,
   retryDelayMs,
+  retryTimer,
   startingPoint,
   withOptions,
   type Baseline,
@@ -171,5 +172,32 @@ describe('a decided project', () => {
 describe('retries of a failed save', () => {
   it('wait 2, 5, then 15 seconds, the last one repeating', () => {
     expect([0, 1, 2, 3, 10].map(retryDelayMs)).toEqual([2000, 5000, 15000, 15000, 15000]);
+  });
+});
+
+describe('the save-retry timer', () => {
+  afterEach(() => vi.useRealTimers());
+
+  it('saves once after the wait for its attempt, one retry waiting at a time', () => {
+    vi.useFakeTimers();
+    let saves = 0;
+    const timer = retryTimer(() => (saves += 1));
+    timer.schedule(1);
+    timer.schedule(1);
+    vi.advanceTimersByTime(4999);
+    expect([saves, timer.waiting]).toEqual([0, true]);
+    vi.advanceTimersByTime(1);
+    expect([saves, timer.waiting]).toEqual([1, false]);
+  });
+
+  it('is cleared when the editor goes, and starts no retry after', () => {
+    vi.useFakeTimers();
+    let saves = 0;
+    const timer = retryTimer(() => (saves += 1));
+    timer.schedule(0);
+    timer.dispose();
+    timer.schedule(0);
+    vi.advanceTimersByTime(60_000);
+    expect([saves, timer.waiting]).toEqual([0, false]);
   });
 });

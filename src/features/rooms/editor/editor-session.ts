@@ -17,6 +17,42 @@ export function retryDelayMs(attempt: number): number {
   return RETRY_DELAYS_MS[Math.min(Math.max(0, attempt), RETRY_DELAYS_MS.length - 1)];
 }
 
+/**
+ * The timer of the next save retry: one waiting at a time, and none once disposed (the editor
+ * unmounted; its local draft stays behind as the safety net).
+ */
+export interface RetryTimer {
+  /** Waits for the retry after `attempt` earlier failures, then saves (a waiting retry is replaced). */
+  schedule(attempt: number): void;
+  /** Clears a waiting retry and refuses new ones. */
+  dispose(): void;
+  /** Whether a retry is waiting. */
+  readonly waiting: boolean;
+}
+
+export function retryTimer(save: () => void): RetryTimer {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  let disposed = false;
+  return {
+    schedule(attempt) {
+      if (disposed) return;
+      clearTimeout(timer);
+      timer = setTimeout(() => {
+        timer = undefined;
+        save();
+      }, retryDelayMs(attempt));
+    },
+    dispose() {
+      disposed = true;
+      clearTimeout(timer);
+      timer = undefined;
+    },
+    get waiting() {
+      return timer !== undefined;
+    },
+  };
+}
+
 export type SaveState = 'saved' | 'unsaved' | 'saving' | 'retrying' | 'conflict';
 
 /** Someone else saved first: their room (walls and openings) or their option, as the server has it now. */

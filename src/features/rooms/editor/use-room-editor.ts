@@ -36,7 +36,7 @@ import {
   loadTheirs as loadTheirsOver,
   NOTHING_FROZEN,
   parseDraft,
-  retryDelayMs,
+  retryTimer,
   startingPoint,
   withDraft,
   withOptions,
@@ -44,6 +44,7 @@ import {
   type Conflict,
   type Draft,
   type Frozen,
+  type RetryTimer,
   type SaveState,
 } from './editor-session';
 
@@ -82,8 +83,7 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   const [refusal, setRefusal] = useState<HistoryFailure | null>(null);
   const attempt = useRef(0);
   const saving = useRef(false);
-  const mounted = useRef(true);
-  const retryTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const retry = useRef<RetryTimer | null>(null);
   const historyRef = useRef(history);
   historyRef.current = history;
 
@@ -158,16 +158,9 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
       } else {
         setMessage(err instanceof Error ? err.message : 'The save failed.');
         setSaveState('retrying');
-        const delay = retryDelayMs(attempt.current);
+        // Once the editor is gone its retries stop (the draft stays behind as the safety net).
+        retry.current?.schedule(attempt.current);
         attempt.current += 1;
-        // Once the editor is gone the draft stays behind as the safety net; no retries run on.
-        if (mounted.current) {
-          clearTimeout(retryTimer.current);
-          retryTimer.current = setTimeout(() => {
-            retryTimer.current = undefined;
-            void saveRef.current();
-          }, delay);
-        }
       }
     } finally {
       saving.current = false;
@@ -187,11 +180,10 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   // Leaving the editor inside the autosave's quiet time (back to the project, say) saves what is
   // pending, once: a waiting retry is cleared and no new one starts.
   useEffect(() => {
-    mounted.current = true;
+    const timer = retryTimer(() => void saveRef.current());
+    retry.current = timer;
     return () => {
-      mounted.current = false;
-      clearTimeout(retryTimer.current);
-      retryTimer.current = undefined;
+      timer.dispose();
       void saveRef.current();
     };
   }, []);
