@@ -10,7 +10,6 @@ import {
   redoLabel,
   undo,
   undoLabel,
-  EditorHistory,
   DEFAULT_HISTORY_LIMIT,
   type History,
 } from './history';
@@ -164,24 +163,5 @@ describe('gestures', () => {
     history = run(history, movePiece('opt-a', 'sofa', 2100, 3100), 'drag');
     expect(canUndo(history)).toBe(false);
     expect(history.doc).toStrictEqual(sampleDoc());
-  });
-});
-
-describe('EditorHistory', () => {
-  it('wraps the same behaviour in a holder', () => {
-    const holder = new EditorHistory(sampleDoc(), { limit: 10 });
-    expect(holder.apply(movePiece('opt-a', 'sofa', 0, 0), { gesture: 'g' })).toEqual({ ok: true });
-    expect(holder.apply(movePiece('opt-a', 'sofa', 10, 0), { gesture: 'g' })).toEqual({ ok: true });
-    expect(holder.apply(movePiece('opt-a', 'nothing', 0, 0))).toEqual({
-      ok: false,
-      message: "Can't move piece: there is no piece nothing in option opt-a.",
-    });
-    expect([holder.canUndo, holder.undoLabel, holder.state.undoSteps.length]).toEqual([true, 'Move Sofa', 1]);
-    holder.undo();
-    expect(holder.doc).toStrictEqual(sampleDoc());
-    expect([holder.canRedo, holder.redoLabel]).toEqual([true, 'Move Sofa']);
-    holder.redo();
-    holder.endGesture();
-    expect(holder.doc.options['opt-a'].pieces[0].x).toBe(10);
   });
 });

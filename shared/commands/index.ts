@@ -39,7 +39,6 @@ export {
   redoLabel,
   undo,
   undoLabel,
-  EditorHistory,
   DEFAULT_HISTORY_LIMIT,
   type ApplyOptions,
   type History,

@@ -9,17 +9,7 @@ import {
   type KeyboardEvent as ReactKeyboardEvent,
 } from 'react';
 import { Link } from 'react-router';
-import {
-  holdPiece,
-  movePiece,
-  type Command,
-  NUDGE_LARGE_STEP_MM,
-  NUDGE_STEP_MM,
-  removeOpening,
-  removePiece,
-  rotatePiece,
-  updateOpening,
-} from '../../../../shared/commands';
+import type { Command } from '../../../../shared/commands';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
@@ -45,6 +35,7 @@ import { EDITOR_STEPS, type EditorStep } from './steps';
 import { useRoomEditor, type Frozen, type SaveState } from './use-room-editor';
 import { optionLabel } from '../../../../shared/schemas/room-api';
 import { refusalText } from './refusal-text';
+import { EDITOR_KEYS, keyFor, type KeyContext } from './editor-keys';
 
 const RoomView = lazy(() => import('../../../scene/room-view'));
 
@@ -210,72 +201,26 @@ function Editor({
   // A reload reopens the step and option the designer was on (and the walkway they checked with).
   useEffect(() => writePlace(detail.room.id, { step, optionId, walkwayMm }), [detail.room.id, step, optionId, walkwayMm]);
 
-  // Keys for the whole editor, unless the designer is typing in a field.
+  // Keys for the whole editor, unless the designer is typing in a field: the first entry of the
+  // keymap that takes the press and applies now runs.
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
       const target = e.target as HTMLElement;
       if (target.closest('input, textarea, select, [contenteditable=true], dialog[open]')) return;
-      const mod = e.ctrlKey || e.metaKey;
-      if (mod && e.key.toLowerCase() === 'z') {
-        e.preventDefault();
-        if (e.shiftKey) editor.redo();
-        else editor.undo();
-        return;
-      }
-      if (mod && e.key.toLowerCase() === 'y') {
-        e.preventDefault();
-        editor.redo();
-        return;
-      }
-      if (e.key === '?') {
-        setHelp(true);
-        return;
-      }
-      if (e.key === 'Escape') {
-        setSelection(null);
-        setDrawing(false);
-        return;
-      }
-      if (readOnly || !selection) return;
-      const step = e.shiftKey ? NUDGE_LARGE_STEP_MM : NUDGE_STEP_MM;
-      const arrows: Record<string, [number, number]> = {
-        ArrowLeft: [-step, 0],
-        ArrowRight: [step, 0],
-        ArrowUp: [0, -step],
-        ArrowDown: [0, step],
+      const context: KeyContext = {
+        editor,
+        readOnly,
+        optionId: activeOptionId,
+        piece: selection?.kind === 'piece' ? pieces.find((p) => p.id === selection.id) : undefined,
+        opening: selection?.kind === 'opening' ? editor.doc.shell.openings.find((o) => o.id === selection.id) : undefined,
+        clearSelection: () => setSelection(null),
+        stopDrawing: () => setDrawing(false),
+        showKeys: () => setHelp(true),
       };
-      if (selection.kind === 'piece') {
-        const piece = pieces.find((p) => p.id === selection.id);
-        if (!piece) return;
-        if (arrows[e.key] && piece.placed) {
-          e.preventDefault();
-          editor.run(movePiece(activeOptionId, piece.id, piece.x + arrows[e.key][0], piece.y + arrows[e.key][1]), {
-            gesture: `nudge-${piece.id}`,
-          });
-        } else if (e.key === 'Delete' || e.key === 'Backspace') {
-          e.preventDefault();
-          if (editor.run(removePiece(activeOptionId, piece.id))) setSelection(null);
-        } else if (e.key.toLowerCase() === 'r') {
-          e.preventDefault();
-          editor.run(rotatePiece(activeOptionId, piece.id, piece.rotation + (e.shiftKey ? -15 : 15)));
-        } else if (e.key.toLowerCase() === 'h') {
-          e.preventDefault();
-          editor.run(holdPiece(activeOptionId, piece.id));
-        }
-      } else if (selection.kind === 'opening') {
-        const opening = editor.doc.shell.openings.find((o) => o.id === selection.id);
-        if (!opening) return;
-        if (e.key === 'ArrowLeft' || e.key === 'ArrowRight') {
-          e.preventDefault();
-          editor.run(
-            updateOpening(opening.id, { offset: Math.max(0, opening.offset + (e.key === 'ArrowLeft' ? -step : step)) }),
-            { gesture: `nudge-${opening.id}` },
-          );
-        } else if (e.key === 'Delete' || e.key === 'Backspace') {
-          e.preventDefault();
-          if (editor.run(removeOpening(opening.id))) setSelection(null);
-        }
-      }
+      const entry = keyFor(e, context);
+      if (!entry?.run) return;
+      if (!entry.keepDefault) e.preventDefault();
+      entry.run(context, e);
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
@@ -736,20 +681,6 @@ function Editor({
   );
 }
 
-const KEYS: [string, string][] = [
-  ['Ctrl Z  /  ⌘ Z', 'Undo'],
-  ['Ctrl Shift Z  /  ⌘ Shift Z', 'Redo'],
-  ['Arrow keys', 'Nudge the selection 1 cm (with Shift, 10 cm)'],
-  ['R  /  Shift R', 'Turn the selected piece 15° clockwise / anticlockwise'],
-  ['H', 'Move the selected piece to the holding area'],
-  ['Delete', 'Remove the selection'],
-  ['Esc', 'Clear the selection, stop drawing'],
-  ['Tab (on the plan)', 'Go through the pieces one by one'],
-  ['Alt while dragging', 'Do not snap to walls or pieces'],
-  ['Shift while turning', 'Turn freely instead of 15° steps'],
-  ['?', 'Show these keys'],
-];
-
 function KeysHelp({ onClose }: { onClose: () => void }) {
   return (
     <Dialog
@@ -764,12 +695,12 @@ function KeysHelp({ onClose }: { onClose: () => void }) {
     >
       <table className="w-full text-sm">
         <tbody>
-          {KEYS.map(([k, v]) => (
-            <tr key={k} className="border-b border-line last:border-0">
+          {EDITOR_KEYS.map(({ keys, label }) => (
+            <tr key={keys} className="border-b border-line last:border-0">
               <th scope="row" className="py-2 pr-4 text-left font-semibold whitespace-nowrap">
-                <kbd className="rounded bg-sand px-1.5 py-0.5 font-sans">{k}</kbd>
+                <kbd className="rounded bg-sand px-1.5 py-0.5 font-sans">{keys}</kbd>
               </th>
-              <td className="py-2 text-ink-soft">{v}</td>
+              <td className="py-2 text-ink-soft">{label}</td>
             </tr>
           ))}
         </tbody>

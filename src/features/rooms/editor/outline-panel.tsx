@@ -8,7 +8,7 @@ import {
   setWallThickness,
   type Command,
 } from '../../../../shared/commands';
-import { outlineFromWalk, walkFromOutline, type WalkStep } from '../../../../shared/geometry/outline';
+import { outlineFromWalk, type WalkStep } from '../../../../shared/geometry/outline';
 import { layoutShellWalls } from '../../../../shared/geometry/walls';
 import { formatLength, parseLength, type LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
@@ -376,13 +376,4 @@ export function MeasureWalls({
       </div>
     </div>
   );
-}
-
-/** The measured walls of an existing outline, for starting a fresh measurement from it. */
-export function measuredWallsOf(outline: RoomShell['outline']): MeasuredWall[] {
-  return walkFromOutline(outline).steps.map((s) => ({
-    lengthMm: s.lengthMm,
-    turn: s.turn ?? 'right',
-    cornerDeg: 180 - (s.turnDeg ?? 90),
-  }));
 }

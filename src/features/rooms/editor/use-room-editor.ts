@@ -1,139 +1,69 @@
 // The room editor's state: the undo history over one room's shell and its options' documents,
 // autosave with the version check, conflict handling, and a local draft that survives a reload.
+// The rules themselves (baseline, draft, conflicts, what is frozen) are in editor-session.ts.
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
-import type { OptionDoc } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
 import type { OptionRecord, RoomRecord } from '../../../../shared/schemas/room-api';
 import {
   applyToHistory,
   canRedo,
   canUndo,
-  createEditorDoc,
   createHistory,
   endGesture,
-  mergeOptionDoc,
-  mergeShell,
   redo,
   redoLabel,
   undo,
   undoLabel,
   type ApplyOptions,
   type Command,
-  type EditorDoc,
   type History,
 } from '../../../../shared/commands';
 import type { FieldProblem } from '../../../../shared/geometry/validate';
+import { api, ApiError } from '../../../lib/api';
+import { roomKeys, type RoomDetail } from '../api/rooms';
+import {
+  afterOptionSaved,
+  afterRoomSaved,
+  AUTOSAVE_DELAY_MS,
+  baselineOf,
+  changedParts,
+  conflictOf,
+  draftKey,
+  draftOf,
+  frozenRefusal,
+  hasChanges,
+  keepMine as keepMineOver,
+  loadTheirs as loadTheirsOver,
+  NOTHING_FROZEN,
+  parseDraft,
+  retryTimer,
+  startingPoint,
+  withDraft,
+  withOptions,
+  type Baseline,
+  type Conflict,
+  type Draft,
+  type Frozen,
+  type RetryTimer,
+  type SaveState,
+} from './editor-session';
+
+export type { Conflict, Frozen, SaveState } from './editor-session';
 
 /** Why a field's change was refused: the sentence, and the rules it would break. */
 export interface HistoryFailure {
   message: string;
   problems: FieldProblem[];
 }
-import { api, ApiError } from '../../../lib/api';
-import { roomKeys, type RoomDetail } from '../api/rooms';
-
-/** Quiet time after the last change before saving (a drag saves once, at its end). */
-const AUTOSAVE_DELAY_MS = 800;
-/** Waits between retries of a failed save (network or server trouble), the last one repeating. */
-const RETRY_DELAYS_MS = [2000, 5000, 15000];
-
-export type SaveState = 'saved' | 'unsaved' | 'saving' | 'retrying' | 'conflict';
-
-export interface Conflict {
-  part: 'room' | 'option';
-  optionId?: string;
-  theirs: RoomRecord | OptionRecord;
-}
-
-interface Baseline {
-  shell: RoomShell;
-  roomVersion: number;
-  options: Record<string, OptionDoc>;
-  optionVersions: Record<string, number>;
-}
-
-interface Draft {
-  doc: EditorDoc;
-  roomVersion: number;
-  optionVersions: Record<string, number>;
-}
-
-const draftKey = (roomId: string) => `parlour:room-draft:${roomId}`;
 
 function readDraft(roomId: string): Draft | null {
   try {
-    const text = localStorage.getItem(draftKey(roomId));
-    if (!text) return null;
-    const raw = JSON.parse(text) as Draft;
-    return { ...raw, doc: createEditorDoc(raw.doc.shell, raw.doc.options) };
+    return parseDraft(localStorage.getItem(draftKey(roomId)));
   } catch {
+    // Blocked storage: no draft to offer.
     return null;
   }
 }
-
-function baselineOf(room: RoomRecord, options: OptionRecord[]): Baseline {
-  return {
-    shell: room.shell,
-    roomVersion: room.version,
-    options: Object.fromEntries(options.map((o) => [o.id, o.doc])),
-    optionVersions: Object.fromEntries(options.map((o) => [o.id, o.version])),
-  };
-}
-
-const docOf = (b: Baseline): EditorDoc => ({ shell: b.shell, options: b.options });
-
-/** The draft's document over the server's, keeping only options that still exist. */
-function withDraft(base: Baseline, draft: Draft): EditorDoc {
-  const options = {
-    ...base.options,
-    ...Object.fromEntries(Object.entries(draft.doc.options).filter(([id]) => id in base.options)),
-  };
-  return { shell: draft.doc.shell, options };
-}
-
-/** Where the editor starts: the server's document, or a draft left by an earlier visit. */
-function startingPoint(base: Baseline, draft: Draft | null) {
-  if (!draft) return { history: createHistory(docOf(base)), restored: null, staleDraft: null };
-  const sameVersions =
-    draft.roomVersion === base.roomVersion &&
-    Object.keys(draft.optionVersions).every(
-      (id) => !(id in base.optionVersions) || base.optionVersions[id] === draft.optionVersions[id],
-    );
-  // Nothing changed on the server since the draft was written: carry on from it.
-  if (sameVersions) return { history: createHistory(withDraft(base, draft)), restored: 'restored' as const, staleDraft: null };
-  return { history: createHistory(docOf(base)), restored: 'stale' as const, staleDraft: draft };
-}
-
-/** What differs between the document and what the server last confirmed (reference checks: commands share structure). */
-function changedParts(doc: EditorDoc, base: Baseline) {
-  return {
-    shell: doc.shell !== base.shell,
-    options: Object.keys(doc.options).filter((id) => doc.options[id] !== base.options[id]),
-  };
-}
-
-/**
- * What a decided project keeps as it is: the options the client chose and, with them, the room's
- * walls and openings (the server refuses both too).
- */
-export interface Frozen {
-  optionIds: ReadonlySet<string>;
-}
-
-export const FROZEN_OPTION_TEXT = 'The client chose this option and the project is decided: duplicate it to change it.';
-export const FROZEN_SHELL_TEXT =
-  'An option of this room was chosen and the project is decided, so its walls and openings stay as they are.';
-
-/** The reason a change from `before` to `after` may not be made, if it touches what is frozen. */
-export function frozenRefusal(before: EditorDoc, after: EditorDoc, frozen: Frozen): string | null {
-  if (frozen.optionIds.size === 0) return null;
-  if (before.shell !== after.shell) return FROZEN_SHELL_TEXT;
-  for (const id of frozen.optionIds) if (before.options[id] !== after.options[id]) return FROZEN_OPTION_TEXT;
-  return null;
-}
-
-const NOTHING_FROZEN: Frozen = { optionIds: new Set() };
 
 export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Frozen = NOTHING_FROZEN) {
   const roomId = detail.room.id;
@@ -153,13 +83,13 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   const [refusal, setRefusal] = useState<HistoryFailure | null>(null);
   const attempt = useRef(0);
   const saving = useRef(false);
+  const retry = useRef<RetryTimer | null>(null);
   const historyRef = useRef(history);
   historyRef.current = history;
 
   const doc = history.doc;
   const dirty = useMemo(() => {
-    const c = changedParts(doc, baseline.current);
-    return c.shell || c.options.length > 0;
+    return hasChanges(doc, baseline.current);
     // baseline changes only together with a history update or a save, both of which re-render.
   }, [doc, saveState]); // eslint-disable-line react-hooks/exhaustive-deps
 
@@ -167,10 +97,8 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   useEffect(() => {
     if (readOnly) return;
     if (dirty) {
-      const b = baseline.current;
-      const draft: Draft = { doc, roomVersion: b.roomVersion, optionVersions: b.optionVersions };
       try {
-        localStorage.setItem(draftKey(roomId), JSON.stringify(draft));
+        localStorage.setItem(draftKey(roomId), JSON.stringify(draftOf(doc, baseline.current)));
       } catch {
         // A full or blocked storage only costs the reload safety net.
       }
@@ -196,7 +124,7 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
           method: 'PUT',
           body: { version: base.roomVersion, shell: current.shell },
         });
-        baseline.current = { ...baseline.current, shell: current.shell, roomVersion: room.version };
+        baseline.current = afterRoomSaved(baseline.current, current.shell, room.version);
         qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, room } : d));
       }
       for (const optionId of parts.options) {
@@ -206,19 +134,14 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
           method: 'PUT',
           body: { version, doc: optionDoc },
         });
-        baseline.current = {
-          ...baseline.current,
-          options: { ...baseline.current.options, [optionId]: optionDoc },
-          optionVersions: { ...baseline.current.optionVersions, [optionId]: option.version },
-        };
+        baseline.current = afterOptionSaved(baseline.current, optionId, optionDoc, option.version);
         qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) =>
           d ? { ...d, options: d.options.map((o) => (o.id === optionId ? option : o)) } : d,
         );
       }
       attempt.current = 0;
       setMessage(null);
-      const after = changedParts(historyRef.current.doc, baseline.current);
-      setSaveState(after.shell || after.options.length > 0 ? 'unsaved' : 'saved');
+      setSaveState(hasChanges(historyRef.current.doc, baseline.current) ? 'unsaved' : 'saved');
     } catch (err) {
       if (err instanceof ApiError && err.status === 409 && err.code === 'decided') {
         // Changes made before the project was decided (a draft, another tab) cannot be saved onto a chosen option.
@@ -226,7 +149,7 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
         setSaveState('unsaved');
       } else if (err instanceof ApiError && err.status === 409) {
         const theirs = (err.body as { current: RoomRecord | OptionRecord }).current;
-        setConflict('shell' in theirs ? { part: 'room', theirs } : { part: 'option', optionId: theirs.id, theirs });
+        setConflict(conflictOf(theirs));
         setSaveState('conflict');
       } else if (err instanceof ApiError && err.status >= 400 && err.status < 500) {
         // The server refused the document itself; retrying would not help. Keep it unsaved and say why.
@@ -235,9 +158,9 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
       } else {
         setMessage(err instanceof Error ? err.message : 'The save failed.');
         setSaveState('retrying');
-        const delay = RETRY_DELAYS_MS[Math.min(attempt.current, RETRY_DELAYS_MS.length - 1)];
+        // Once the editor is gone its retries stop (the draft stays behind as the safety net).
+        retry.current?.schedule(attempt.current);
         attempt.current += 1;
-        setTimeout(() => void saveRef.current(), delay);
       }
     } finally {
       saving.current = false;
@@ -254,8 +177,16 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
     return () => clearTimeout(timer);
   }, [doc, dirty, readOnly, conflict]); // eslint-disable-line react-hooks/exhaustive-deps
 
-  // Leaving the editor inside the autosave's quiet time (back to the project, say) saves what is pending.
-  useEffect(() => () => void saveRef.current(), []);
+  // Leaving the editor inside the autosave's quiet time (back to the project, say) saves what is
+  // pending, once: a waiting retry is cleared and no new one starts.
+  useEffect(() => {
+    const timer = retryTimer(() => void saveRef.current());
+    retry.current = timer;
+    return () => {
+      timer.dispose();
+      void saveRef.current();
+    };
+  }, []);
 
   // Warn before leaving with unsaved changes.
   useEffect(() => {
@@ -326,24 +257,14 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   /** Their version replaces ours for the conflicting part; our other unsaved parts stay. */
   const loadTheirs = useCallback(() => {
     if (!conflict) return;
-    const h = historyRef.current;
-    let next: EditorDoc;
+    const { baseline: next, doc: nextDoc } = loadTheirsOver(baseline.current, historyRef.current.doc, conflict);
+    baseline.current = next;
     if (conflict.part === 'room') {
-      const theirs = conflict.theirs as RoomRecord;
-      baseline.current = { ...baseline.current, shell: theirs.shell, roomVersion: theirs.version };
-      next = { ...h.doc, shell: theirs.shell };
+      const { theirs } = conflict;
       qc.setQueryData<RoomDetail>(roomKeys.detail(roomId), (d) => (d ? { ...d, room: theirs } : d));
-    } else {
-      const theirs = conflict.theirs as OptionRecord;
-      baseline.current = {
-        ...baseline.current,
-        options: { ...baseline.current.options, [theirs.id]: theirs.doc },
-        optionVersions: { ...baseline.current.optionVersions, [theirs.id]: theirs.version },
-      };
-      next = { ...h.doc, options: { ...h.doc.options, [theirs.id]: theirs.doc } };
     }
     // Undo steps were recorded against our version of that part; start a fresh history from theirs.
-    setHistory(createHistory(next));
+    setHistory(createHistory(nextDoc));
     setConflict(null);
     setSaveState('unsaved');
   }, [conflict, qc, roomId]);
@@ -351,24 +272,9 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   /** Both are kept: this tab's changes go on top of theirs (three-way merge), then saved with their version. */
   const keepMine = useCallback(() => {
     if (!conflict) return;
-    const h = historyRef.current;
-    let next: EditorDoc;
-    if (conflict.part === 'room') {
-      const theirs = conflict.theirs as RoomRecord;
-      const shell = mergeShell(baseline.current.shell, h.doc.shell, theirs.shell);
-      baseline.current = { ...baseline.current, roomVersion: theirs.version, shell: theirs.shell };
-      next = { ...h.doc, shell };
-    } else {
-      const theirs = conflict.theirs as OptionRecord;
-      const merged = mergeOptionDoc(baseline.current.options[theirs.id], h.doc.options[theirs.id], theirs.doc);
-      baseline.current = {
-        ...baseline.current,
-        options: { ...baseline.current.options, [theirs.id]: theirs.doc },
-        optionVersions: { ...baseline.current.optionVersions, [theirs.id]: theirs.version },
-      };
-      next = { ...h.doc, options: { ...h.doc.options, [theirs.id]: merged } };
-    }
-    setHistory(createHistory(next));
+    const { baseline: next, doc: nextDoc } = keepMineOver(baseline.current, historyRef.current.doc, conflict);
+    baseline.current = next;
+    setHistory(createHistory(nextDoc));
     setConflict(null);
     setSaveState('unsaved');
   }, [conflict]);
@@ -391,17 +297,10 @@ export function useRoomEditor(detail: RoomDetail, readOnly: boolean, frozen: Fro
   /** Options added, duplicated or deleted through the API: fold them into the document without an undo step. */
   const syncOptions = useCallback((options: OptionRecord[]) => {
     const h = historyRef.current;
-    const nextOptions: Record<string, OptionDoc> = {};
-    for (const o of options) nextOptions[o.id] = h.doc.options[o.id] ?? o.doc;
-    const removed = Object.keys(h.doc.options).some((id) => !(id in nextOptions));
-    baseline.current = {
-      ...baseline.current,
-      options: Object.fromEntries(options.map((o) => [o.id, baseline.current.options[o.id] ?? o.doc])),
-      optionVersions: Object.fromEntries(options.map((o) => [o.id, baseline.current.optionVersions[o.id] ?? o.version])),
-    };
-    const next = { ...h.doc, options: nextOptions };
+    const { baseline: next, doc: nextDoc, removed } = withOptions(baseline.current, h.doc, options);
+    baseline.current = next;
     // Undo steps may refer to a deleted option; a fresh history is the honest answer then.
-    setHistory(removed ? createHistory(next) : { ...h, doc: next });
+    setHistory(removed ? createHistory(nextDoc) : { ...h, doc: nextDoc });
   }, []);
 
   // ——— things saved straight away, outside the undo history ———
