@@ -14,6 +14,7 @@ import type { Piece } from '../../../../shared/schemas/option';
 import type { LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { Notice, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
@@ -711,40 +712,17 @@ function KeysHelp({ onClose }: { onClose: () => void }) {
 
 function RenameRoom({ name, onClose, onSave }: { name: string; onClose: () => void; onSave: (name: string) => Promise<void> }) {
   const [value, setValue] = useState(name);
-  const [error, setError] = useState<string | null>(null);
   return (
-    <Dialog open onClose={onClose} title="Rename room">
-      <form
-        className="flex flex-col gap-4"
-        onSubmit={async (e) => {
-          e.preventDefault();
-          try {
-            await onSave(value.trim());
-            onClose();
-          } catch (err) {
-            setError(errorMessage(err));
-          }
-        }}
-      >
-        <label className="flex flex-col gap-1.5 text-sm font-semibold">
-          Room name
-          <input
-            className="h-10 rounded-lg border border-line-strong bg-white px-3 text-[15px] font-normal"
-            value={value}
-            onChange={(e) => setValue(e.target.value)}
-            autoFocus
-          />
-        </label>
-        {error && <Notice tone="error">{error}</Notice>}
-        <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>
-            Cancel
-          </Button>
-          <Button type="submit" variant="primary">
-            Save
-          </Button>
-        </div>
-      </form>
-    </Dialog>
+    <FormDialog title="Rename room" onClose={onClose} onSave={() => onSave(value.trim())}>
+      <label className="flex flex-col gap-1.5 text-sm font-semibold">
+        Room name
+        <input
+          className="h-10 rounded-lg border border-line-strong bg-white px-3 text-[15px] font-normal"
+          value={value}
+          onChange={(e) => setValue(e.target.value)}
+          autoFocus
+        />
+      </label>
+    </FormDialog>
   );
 }

@@ -1,7 +1,8 @@
-import { useRef, useState, type FormEvent, type ReactNode } from 'react';
+import { useRef, useState, type ReactNode } from 'react';
 import { optionLabel, type OptionRecord } from '../../../../shared/schemas/room-api';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
@@ -162,43 +163,26 @@ function MenuItem({
 function RenameOption({ option, editor, onClose }: { option: OptionRecord; editor: RoomEditor; onClose: () => void }) {
   const [name, setName] = useState(option.name);
   const [note, setNote] = useState(option.note);
-  const [error, setError] = useState<string | null>(null);
-  const submit = async (e: FormEvent) => {
-    e.preventDefault();
-    try {
-      await editor.saveOptionMeta(option.id, { name: name.trim(), note });
-      onClose();
-    } catch (err) {
-      setError(errorMessage(err));
-    }
-  };
   return (
-    <Dialog open onClose={onClose} title="Name this option">
-      <form onSubmit={submit} className="flex flex-col gap-4">
-        <TextField
-          label="Name"
-          value={name}
-          onChange={(e) => setName(e.target.value)}
-          placeholder="e.g. Calm and light"
-          hint="The client sees it beside the option’s letter."
-          autoFocus
-        />
-        <TextAreaField
-          label="Note for the client"
-          value={note}
-          onChange={(e) => setNote(e.target.value)}
-          hint="A line or two on what this option is about."
-        />
-        {error && <Notice tone="error">{error}</Notice>}
-        <div className="flex justify-end gap-2">
-          <Button variant="quiet" onClick={onClose}>
-            Cancel
-          </Button>
-          <Button type="submit" variant="primary">
-            Save
-          </Button>
-        </div>
-      </form>
-    </Dialog>
+    <FormDialog
+      title="Name this option"
+      onClose={onClose}
+      onSave={() => editor.saveOptionMeta(option.id, { name: name.trim(), note })}
+    >
+      <TextField
+        label="Name"
+        value={name}
+        onChange={(e) => setName(e.target.value)}
+        placeholder="e.g. Calm and light"
+        hint="The client sees it beside the option’s letter."
+        autoFocus
+      />
+      <TextAreaField
+        label="Note for the client"
+        value={note}
+        onChange={(e) => setNote(e.target.value)}
+        hint="A line or two on what this option is about."
+      />
+    </FormDialog>
   );
 }
