@@ -1,5 +1,9 @@
 import { z } from 'zod';
 
+/** Any UUID written as text (ids typed by hand in a plan file may be something else). */
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+export const isUuid = (text: string): boolean => UUID.test(text);
+
 export const idParamSchema = z.object({ id: z.uuid({ message: 'Not a valid id.' }) });
 export const projectIdParamSchema = z.object({ projectId: z.uuid({ message: 'Not a valid id.' }) });
 

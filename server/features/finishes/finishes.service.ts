@@ -1,6 +1,7 @@
 // Finishes: turning rows into API shapes, the photo processing job, and keeping stored files
 // exactly as many as the finishes use (nothing orphaned, nothing shared deleted), and the rules and
 // transactions of making, changing and deleting finishes.
+import { isUuid } from '../../../shared/schemas/common';
 import type { z } from 'zod';
 import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
@@ -99,11 +100,9 @@ export async function toFinishes(db: Db, rows: FinishRow[]): Promise<Finish[]> {
   return rows.map((r) => toFinish(r, files));
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /** The studio's finishes among `ids`; ids that are not finish ids at all (typed by hand in a plan file) are skipped. */
 export async function finishesByIds(db: Db, studioId: string, ids: Iterable<string>): Promise<Finish[]> {
-  const wanted = [...new Set(ids)].filter((id) => UUID.test(id));
+  const wanted = [...new Set(ids)].filter((id) => isUuid(id));
   return toFinishes(db, await getFinishRowsByIds(db, studioId, wanted));
 }
 

@@ -1,6 +1,7 @@
 // What a presentation shows and to whom (the designer's summary, the client's payload with only the
 // chosen rooms and options, prices only when shown, the link and the e-mails), and the designer's
 // actions on it, each with its rules and its transaction.
+import { isUuid } from '../../../shared/schemas/common';
 import type { z } from 'zod';
 import type { AppConfig } from '../../config';
 import type { AppServices } from '../../context';
@@ -57,8 +58,6 @@ import {
   type PresentationRow,
 } from './presentations.repository';
 import { studioCreatedAt, studioName } from '../studio/studios.repository';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export function presentationState(p: Pick<PresentationRow, 'withdrawn_at' | 'expires_at'>, now = new Date()): PresentationState {
   if (p.withdrawn_at) return 'withdrawn';
@@ -208,7 +207,7 @@ export function toClientPiece(
 }
 
 /** The finish ids of an option the link may load: its own, when they can be library ids at all. */
-const linkFinishIds = (doc: OptionDoc) => optionFinishIds(doc).filter((id) => UUID.test(id));
+const linkFinishIds = (doc: OptionDoc) => optionFinishIds(doc).filter((id) => isUuid(id));
 
 /** The finish ids the shown options of a presentation use: the finishes whose files its link may load. */
 export async function presentationFinishIds(db: Db, p: PresentationRow): Promise<string[]> {
@@ -244,7 +243,7 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
     ...new Set(
       shown
         .flatMap((s) => placed(s.option_id).map((piece) => piece.finishId))
-        .filter((id): id is string => Boolean(id && UUID.test(id))),
+        .filter((id): id is string => Boolean(id && isUuid(id))),
     ),
   ];
   const surfaceIds = [...new Set(shown.flatMap((s) => linkFinishIds(docs.get(s.option_id)!)))];

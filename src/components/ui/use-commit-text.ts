@@ -113,6 +113,9 @@ export function useCommitText<T>({
 }
 
 /** Text kept as typed (trimmed), refused when empty if `required`. */
+/** The text as it is: the `format` of a plain text field. */
+export const asIs = (v: string): string => v;
+
 export function textParser(required: string | null): (text: string) => Parsed<string> {
   return (text) => {
     const t = text.trim();

@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { CommitTextField } from '../../../components/ui/commit-field';
 import { TextField } from '../../../components/ui/field';
-import { textParser } from '../../../components/ui/use-commit-text';
+import { textParser, asIs } from '../../../components/ui/use-commit-text';
 import { ListToolbar, SORT_OPTIONS, ToolbarSelect } from '../../../components/ui/list-toolbar';
 import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { commitAnswer, errorMessage, fieldError } from '../../../lib/api';
@@ -139,8 +139,6 @@ function ClientDialog({ client, onClose }: { client: Client | null; onClose: () 
   );
 }
 
-const same = (v: string) => v;
-
 /** An existing client: each field saves on Enter or on moving on, Escape puts back the saved value. */
 function EditClientDialog({ client, onClose }: { client: Client; onClose: () => void }) {
   const update = useUpdateClient(client.id);
@@ -165,7 +163,7 @@ function EditClientDialog({ client, onClose }: { client: Client; onClose: () => 
         <CommitTextField
           label="Name"
           value={saved.name}
-          format={same}
+          format={asIs}
           parse={textParser('Enter the client’s name.')}
           onCommit={(name) => save({ name }, 'name')}
         />
@@ -173,14 +171,14 @@ function EditClientDialog({ client, onClose }: { client: Client; onClose: () => 
           label="E-mail"
           type="email"
           value={saved.email ?? ''}
-          format={same}
+          format={asIs}
           parse={textParser(null)}
           onCommit={(email) => save({ email }, 'email')}
         />
         <CommitTextField
           label="Phone"
           value={saved.phone ?? ''}
-          format={same}
+          format={asIs}
           parse={textParser(null)}
           onCommit={(phone) => save({ phone }, 'phone')}
         />

@@ -19,7 +19,7 @@ import { CommitTextField } from '../../../components/ui/commit-field';
 import { SelectField } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { Card, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
-import { numberParser, textParser, type CommitAnswer } from '../../../components/ui/use-commit-text';
+import { numberParser, textParser, type CommitAnswer, asIs } from '../../../components/ui/use-commit-text';
 import { commitAnswer, errorMessage, fieldError } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
 import { useDeleteFinish, useFinish, useUpdateFinish, type Finish } from '../api/finishes';
@@ -319,8 +319,6 @@ function useSaveField(finishId: string) {
 
 type SaveField = ReturnType<typeof useSaveField>['save'];
 
-const same = (v: string) => v;
-
 function CommonFields({
   finish,
   save,
@@ -337,7 +335,7 @@ function CommonFields({
       <CommitTextField
         label="Name"
         value={finish.name}
-        format={same}
+        format={asIs}
         parse={textParser('Enter a name.')}
         onCommit={(name) => save({ name }, 'name')}
         disabled={disabled}
@@ -347,7 +345,7 @@ function CommonFields({
       <CommitTextField
         label="Supplier"
         value={finish.supplier ?? ''}
-        format={same}
+        format={asIs}
         parse={textParser(null)}
         onCommit={(supplier) => save({ supplier }, 'supplier')}
         disabled={disabled}
@@ -357,7 +355,7 @@ function CommonFields({
       <CommitTextField
         label="Code"
         value={finish.code ?? ''}
-        format={same}
+        format={asIs}
         parse={textParser(null)}
         onCommit={(code) => save({ code }, 'code')}
         disabled={disabled}

@@ -3,7 +3,7 @@ import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { CommitTextField } from '../../../components/ui/commit-field';
-import { textParser } from '../../../components/ui/use-commit-text';
+import { textParser, asIs } from '../../../components/ui/use-commit-text';
 import { Badge, Card, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { commitAnswer, errorMessage } from '../../../lib/api';
 import { formatDateTime, formatRelative } from '../../../lib/format';
@@ -117,8 +117,6 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
   );
 }
 
-const same = (v: string) => v;
-
 /** The project's name and address: each saves on Enter or on moving on, Escape puts back the saved value. */
 function DetailsDialog({
   name,
@@ -147,14 +145,14 @@ function DetailsDialog({
         <CommitTextField
           label="Project name"
           value={name}
-          format={same}
+          format={asIs}
           parse={textParser('Enter a project name.')}
           onCommit={(v) => commitAnswer(update.mutateAsync({ name: v }), 'name')}
         />
         <CommitTextField
           label="Address"
           value={address ?? ''}
-          format={same}
+          format={asIs}
           parse={textParser(null)}
           onCommit={(v) => commitAnswer(update.mutateAsync({ address: v }), 'address')}
         />

@@ -10,7 +10,7 @@ import { commitAnswer } from '../../../lib/api';
 import { useMoney, useSession } from '../../../lib/session';
 import { formatMoney } from '../../../../shared/units/money';
 import { CommitTextField } from '../../../components/ui/commit-field';
-import { textParser } from '../../../components/ui/use-commit-text';
+import { textParser, asIs } from '../../../components/ui/use-commit-text';
 import {
   useChangeRole,
   useInvite,
@@ -210,8 +210,6 @@ function InviteDialog({ onClose }: { onClose: () => void }) {
   );
 }
 
-const same = (v: string) => v;
-
 /** The studio's currency and locale: every price on every screen, the CSV and the client's page use them. */
 function PricesCard({ isOwner }: { isOwner: boolean }) {
   const money = useMoney();
@@ -223,7 +221,7 @@ function PricesCard({ isOwner }: { isOwner: boolean }) {
           <CommitTextField
             label="Currency"
             value={money.currency}
-            format={same}
+            format={asIs}
             parse={textParser('Enter a currency code.')}
             onCommit={(currency) => commitAnswer(update.mutateAsync({ currency }), 'currency')}
             hint="e.g. GBP, EUR, USD"
@@ -232,7 +230,7 @@ function PricesCard({ isOwner }: { isOwner: boolean }) {
           <CommitTextField
             label="Locale"
             value={money.locale}
-            format={same}
+            format={asIs}
             parse={textParser('Enter a locale.')}
             onCommit={(locale) => commitAnswer(update.mutateAsync({ locale }), 'locale')}
             hint="e.g. en-GB, fr-FR"
