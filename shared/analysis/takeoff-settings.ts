@@ -3,11 +3,11 @@
 // query-string codec the take-off, schedule and compare routes read.
 import { z } from 'zod';
 
-/** Coats of paint on walls: two is the usual finish over a sound surface (common practice; REFERENCES.md, paint-estimating guides). */
+/** Coats of paint on walls: two is the usual finish over a sound surface (common practice; docs/references.md, paint-estimating guides). */
 export const DEFAULT_PAINT_COATS = 2;
-/** Square metres one litre covers per coat: many European labels give 10–13 m²/L, 350–400 ft²/gal is 8.6–9.8 m²/L (common practice; REFERENCES.md, paint makers' guidance — the label wins). */
+/** Square metres one litre covers per coat: many European labels give 10–13 m²/L, 350–400 ft²/gal is 8.6–9.8 m²/L (common practice; docs/references.md, paint makers' guidance — the label wins). */
 export const DEFAULT_COVERAGE_M2_PER_L = 10;
-/** Flooring ordered over the floor area for cuts: 5–10 % straight lay, 10 % the usual default (common practice; REFERENCES.md, flooring installers' guides). */
+/** Flooring ordered over the floor area for cuts: 5–10 % straight lay, 10 % the usual default (common practice; docs/references.md, flooring installers' guides). */
 export const DEFAULT_WASTE_PERCENT = 10;
 
 /** Coats beyond this are a typing slip, not a paint job. */

@@ -35,7 +35,7 @@ describe('rooms', () => {
       expect.objectContaining({ position: 0, doc: { pieces: [], finishes: expect.any(Object) } }),
     ]);
     const list = await agent.get(`/api/projects/${projectId}/rooms`);
-    // 4.2 m × 3.6 m = 15.12 m² (DESIGN.md example).
+    // 4.2 m × 3.6 m = 15.12 m² (the README's plan-file example).
     expect(list.body.rooms).toEqual([expect.objectContaining({ name: 'Living room', optionCount: 1, floorAreaM2: 15.12 })]);
     // The project's own answer counts its rooms; the list above is the one place that lists them.
     const page = await agent.get(`/api/projects/${projectId}`);
@@ -158,7 +158,7 @@ describe('rooms', () => {
     expect(after.body.options).toEqual([expect.objectContaining({ name: 'Calm', position: 0 })]);
   });
 
-  it('imports the DESIGN.md plan file and exports it back unchanged', async () => {
+  it('imports the README's example plan file and exports it back unchanged', async () => {
     const { agent } = await signUpStudio(t.app);
     const projectId = await projectOf(agent);
     const res = await agent.post(`/api/projects/${projectId}/rooms/import`).send(designExample);

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
+import { typicalFurnishedRoom } from '../../scripts/bench/typical-room';
 import { launchBrowser } from './lib/browser';
 import { newPage, signUpThroughForm } from './lib/session';
 import {
@@ -291,53 +292,18 @@ async function testRoomPresentation(page: Page): Promise<string> {
   return present(page, project.id, [{ roomId: made.room.id, optionIds: [made.options[0].id, second.option.id] }]);
 }
 
-/** A typical room: 8 walls, 6 openings (3 windows, 2 doors, a passage), 40 pieces, a photo floor and a papered wall. */
+/**
+ * The typical room the benches time (scripts/bench/typical-room.ts: 8 walls, 6 openings, 40 pieces of
+ * 16 kinds), here with six photo finishes worn as main and accent finishes across its pieces, a photo
+ * floor and a papered wall.
+ */
 async function typicalRoomPresentation(page: Page, f: Record<string, string>): Promise<string> {
   const { project } = await call<{ project: { id: string } }>(page, '/api/projects', 'POST', {
     name: 'Typical room',
     newClient: { name: 'T' },
   });
-  const shell = {
-    outline: [
-      [0, 0],
-      [6000, 0],
-      [6000, 4000],
-      [4500, 4000],
-      [4500, 5500],
-      [1500, 5500],
-      [1500, 4500],
-      [0, 4500],
-    ],
-    openings: [
-      { id: 'w1', type: 'window', wall: 0, offset: 800, width: 1500, height: 1300, sill: 850 },
-      { id: 'w2', type: 'window', wall: 0, offset: 3500, width: 1500, height: 1300, sill: 850 },
-      { id: 'w3', type: 'window', wall: 1, offset: 1000, width: 1800, height: 1300, sill: 850 },
-      { id: 'd1', type: 'door', wall: 4, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' },
-      { id: 'd2', type: 'door', wall: 7, offset: 1200, width: 820, height: 2040, hinge: 'end', swing: 'out' },
-      { id: 'p1', type: 'passage', wall: 2, offset: 300, width: 900, height: 2100 },
-    ],
-  };
+  const { shell, option } = typicalFurnishedRoom();
   const made = await call<Made>(page, `/api/projects/${project.id}/rooms`, 'POST', { name: 'Big room', shell });
-  const pieces = [];
-  // 40 pieces of 16 kinds, six photo finishes worn as main and accent finishes across them.
-  const kinds = [
-    'sofa',
-    'armchair',
-    'dining-chair',
-    'coffee-table',
-    'dining-table',
-    'bed',
-    'wardrobe',
-    'chest-of-drawers',
-    'bookcase',
-    'sideboard',
-    'floor-lamp',
-    'plant',
-    'rug',
-    'desk',
-    'kitchen-base-unit',
-    'wall-cabinet',
-  ];
   const photos = [
     'Washed linen',
     'Oak boards, natural oil',
@@ -346,19 +312,11 @@ async function typicalRoomPresentation(page: Page, f: Record<string, string>): P
     'Wide oak veneer',
     'Coarse linen',
   ].map((n) => f[n]);
-  for (let i = 0; i < 40; i++) {
-    const kind = kinds[i % kinds.length];
-    const look = {
-      kind,
-      elevation: kind === 'wall-cabinet' ? 1200 : 0,
-      finishId: i % 2 === 0 ? photos[i % 6] : undefined,
-      accentFinishId: i % 3 === 0 ? photos[(i + 1) % 6] : undefined,
-      accentColour: '#5b4636',
-    };
-    pieces.push(
-      box(`p${i}`, 700 + (i % 8) * 600, 700 + Math.floor(i / 8) * 650, 400, 350, kind === 'rug' ? 10 : 450 + (i % 5) * 100, look),
-    );
-  }
+  const pieces = option.pieces.map((p, i) => ({
+    ...p,
+    finishId: i % 2 === 0 ? photos[i % 6] : undefined,
+    accentFinishId: i % 3 === 0 ? photos[(i + 1) % 6] : undefined,
+  }));
   const doc = {
     pieces,
     finishes: { floor: f['Oak boards, natural oil'], walls: f['Morning oat'], wallOverrides: { '3': f['Sprig wallpaper'] } },

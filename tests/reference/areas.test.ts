@@ -11,7 +11,7 @@ const feet = (points: P[]): P[] => points.map(([x, y]) => [x * MM_PER_FOOT, y * 
 
 describe('floor areas against published and derived values', () => {
   it('L-shape (0,0)(5,0)(5,2.5)(3,2.5)(3,4)(0,4) m is 17.0 m² with perimeter 18.0 m', () => {
-    // derived (REFERENCES.md, Flooring): 5 × 2.5 + 3 × 1.5 = 17.0 m²; 5 + 2.5 + 2 + 1.5 + 3 + 4 = 18.0 m
+    // derived (docs/references.md, Flooring): 5 × 2.5 + 3 × 1.5 = 17.0 m²; 5 + 2.5 + 2 + 1.5 + 3 + 4 = 18.0 m
     const outline = metres([
       [0, 0],
       [5, 0],

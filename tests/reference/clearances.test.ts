@@ -1,4 +1,4 @@
-// Published clearances and what the fit check does with them (sources and status: REFERENCES.md).
+// Published clearances and what the fit check does with them (sources and status: docs/references.md).
 import { describe, expect, it } from 'vitest';
 import { checkFit } from '../../shared/analysis/fit/index';
 import { clearPassMm, passesThrough } from '../../shared/analysis/fit/door-fit';
@@ -22,7 +22,7 @@ function walkwayKinds(gapMm: number, walkwayMm?: number): string[] {
 
 describe('walkway width', () => {
   it('defaults to 900 mm, the common-practice figure, 14.4 mm under the 36 in of IRC R311.6 and ADA §403.5.1', () => {
-    expect(DEFAULT_WALKWAY_MM).toBe(900); // common practice; REFERENCES.md
+    expect(DEFAULT_WALKWAY_MM).toBe(900); // common practice; docs/references.md
     expect(IRC_HALLWAY_MM).toBeCloseTo(914.4, 9);
     expect(ADA_ROUTE_MM).toBeCloseTo(914.4, 9);
     expect(IRC_HALLWAY_MM - DEFAULT_WALKWAY_MM).toBeCloseTo(14.4, 9);

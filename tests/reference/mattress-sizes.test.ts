@@ -7,11 +7,11 @@ import {
 } from '../../shared/catalogue/catalogue';
 import { MM_PER_INCH } from '../../shared/units/length';
 
-// There is no mandatory mattress standard, so REFERENCES.md asks for ±2 cm (metric) and ±1 in (US).
+// There is no mandatory mattress standard, so docs/references.md asks for ±2 cm (metric) and ±1 in (US).
 const METRIC_TOLERANCE_MM = 20;
 const INCH_TOLERANCE_MM = 25.4;
 
-// [kind, width cm, length cm], each with its source as REFERENCES.md gives it.
+// [kind, width cm, length cm], each with its source as docs/references.md gives it.
 const metric: [CatalogueId, number, number][] = [
   ['bed-uk-single', 90, 190], // National Bed Federation sizes (summary)
   ['bed-uk-small-double', 120, 190], // National Bed Federation sizes (summary)
@@ -40,7 +40,7 @@ function mattressOf(kind: CatalogueId) {
   return mattress;
 }
 
-describe('mattress sizes against REFERENCES.md', () => {
+describe('mattress sizes against docs/references.md', () => {
   it.each(metric)('%s mattress is %i × %i cm within ±2 cm', (kind, widthCm, lengthCm) => {
     const mattress = mattressOf(kind);
     expect(Math.abs(mattress.widthMm - widthCm * 10)).toBeLessThanOrEqual(METRIC_TOLERANCE_MM);
@@ -62,7 +62,7 @@ describe('mattress sizes against REFERENCES.md', () => {
   });
 
   it('keeps the UK double at 135 cm, not the 137.16 cm of its old 4 ft 6 in name', () => {
-    // derived in REFERENCES.md: 4 ft 6 in = 54 in = 137.16 cm; the NBF metric double is 135 cm
+    // derived in docs/references.md: 4 ft 6 in = 54 in = 137.16 cm; the NBF metric double is 135 cm
     expect(54 * MM_PER_INCH).toBeCloseTo(1371.6, 9);
     expect(mattressOf('bed-uk-double').widthMm).toBe(1350);
   });

@@ -35,7 +35,7 @@ describe('paint against the published worked example', () => {
   });
 
   it('gives 0.82 US gal per coat at 400 ft²/gal', () => {
-    const coverageM2PerL = (400 * FT2_IN_M2) / US_GALLON_L; // 400 ft²/gal = 9.817 m²/L (REFERENCES.md, derived)
+    const coverageM2PerL = (400 * FT2_IN_M2) / US_GALLON_L; // 400 ft²/gal = 9.817 m²/L (docs/references.md, derived)
     expect(coverageM2PerL).toBeCloseTo(9.817, 3);
     const takeoff = computeTakeoff(shell, { coats: 1, coverageM2PerL });
     expect(takeoff.paint.litres / US_GALLON_L).toBeCloseTo(0.82, 3);

@@ -1,6 +1,6 @@
 import type { RoomShellInput } from '../../shared/schemas/room';
 
-/** The room of the DESIGN.md plan file example (plan mm); its take-off numbers are fixed by the design. */
+/** The room of the README's plan-file example (plan mm); its take-off numbers are printed in the README. */
 export const designExampleRoom: RoomShellInput = {
   wallHeight: 2600,
   wallThickness: 100,
@@ -17,7 +17,7 @@ export const designExampleRoom: RoomShellInput = {
   ],
 };
 
-/** The take-off DESIGN.md prints for that room (default options), field for field. */
+/** The take-off the README prints for that room (default options), field for field. */
 export const designExampleTakeoff = {
   floorArea_m2: 15.12,
   perimeter_m: 15.6,
@@ -30,5 +30,5 @@ export const designExampleTakeoff = {
   findings: [],
 };
 
-/** Wall 0 of that take-off as DESIGN.md prints it. */
+/** Wall 0 of that take-off as the README prints it. */
 export const designExampleWall0 = { index: 0, length_m: 4.2, grossArea_m2: 10.92, openingsArea_m2: 1.673, netArea_m2: 9.247 };

@@ -35,7 +35,7 @@ describe('paint per colour against the published worked example', () => {
   const paint: FinishInfo = { ...none, id: 'paint', name: 'Wall paint', kind: 'paint', colourHex: '#ffffff' };
 
   it('gives 328 ft² and 0.82 US gal per coat at 400 ft²/gal for the colour on every wall', () => {
-    const coverageM2PerL = (400 * FT2_IN_M2) / US_GALLON_L; // 400 ft²/gal = 9.817 m²/L (REFERENCES.md, derived)
+    const coverageM2PerL = (400 * FT2_IN_M2) / US_GALLON_L; // 400 ft²/gal = 9.817 m²/L (docs/references.md, derived)
     expect(coverageM2PerL).toBeCloseTo(9.817, 3);
     const settings = takeoffSettingsSchema.parse({ coats: 1, coverageM2PerL });
     const [need] = roomTakeoff(
@@ -68,7 +68,7 @@ describe('paint per colour against the published worked example', () => {
 });
 
 describe('flooring against the published retailer example', () => {
-  // Published retailer worked example (summary, REFERENCES.md): 10 × 12 ft = 120 ft², +10 % = 132 ft²,
+  // Published retailer worked example (summary, docs/references.md): 10 × 12 ft = 120 ft², +10 % = 132 ft²,
   // boxes of 24 ft² → 6 boxes (full boxes only).
   it('orders 132 ft² in 6 boxes of 24 ft²', () => {
     const shell = roomShellSchema.parse({

@@ -34,7 +34,7 @@ function compareFindings(a: Finding, b: Finding): number {
 
 /**
  * Findings for a validated room shell and an option's pieces (plan mm): only placed pieces count.
- * Ordered by kind (as DESIGN.md lists them), then piece ids, then opening ids, so the same layout
+ * Ordered by kind (as the README's finding kinds list them), then piece ids, then opening ids, so the same layout
  * always reads the same.
  */
 export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: FitCheckOptions = {}): Finding[] {

@@ -3,7 +3,7 @@
 import type { Piece } from '../../schemas/option';
 import { MM_PER_INCH } from '../../units/length';
 
-/** Clear width of a main walkway, mm: ≈ 900 mm, matching IRC R311.6 hallway 36 in and ADA §403.5.1 (common practice; REFERENCES.md). */
+/** Clear width of a main walkway, mm: ≈ 900 mm, matching IRC R311.6 hallway 36 in and ADA §403.5.1 (common practice; docs/references.md). */
 export const DEFAULT_WALKWAY_MM = 900;
 
 /** Beside a bed on the side people walk: at least 22 in (HUD Manual of Acceptable Practices vol. 4, 1973; summary). */

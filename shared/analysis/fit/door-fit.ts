@@ -13,7 +13,7 @@ export const CARRY_ALLOWANCE_MM = 10;
  */
 export const DOOR_LEAF_CLEAR_LOSS_MM = 2 * 25.4;
 
-/** Clear width and height (mm) a piece can be carried through; a door's width is its leaf's (DESIGN.md). */
+/** Clear width and height (mm) a piece can be carried through; a door's width is its leaf's (the plan file's rule, README). */
 export function clearPassMm(opening: Opening): { widthMm: number; heightMm: number } {
   const loss = opening.type === 'door' ? DOOR_LEAF_CLEAR_LOSS_MM : 0;
   return { widthMm: opening.width - loss, heightMm: opening.height };
