@@ -63,6 +63,15 @@ describe('findPlacement', () => {
     expect(Math.abs(at[1] - 1500)).toBeLessThanOrEqual(900);
   });
 
+  it('lands on a rug (walked over, so free floor) but still moves off a table', () => {
+    const rug = { ...piece('rug', 2000, 1500, 2000, 1400), height: 10, kind: 'rug' } as Piece;
+    const onRug = findPlacement({ outline: rect }, [rug], { width: 1000, depth: 600, rotation: 0, near: [2000, 1500] });
+    expect(onRug).toEqual([2000, 1500]);
+    const table = piece('table', 2000, 1500, 1000, 600);
+    const beside = findPlacement({ outline: rect }, [rug, table], { width: 1000, depth: 600, rotation: 0, near: [2000, 1500] });
+    expect(boxesOverlap(pieceFootprintMm(piece('x', beside[0], beside[1], 1000, 600)), pieceFootprintMm(table))).toBe(false);
+  });
+
   it('eight pieces added one after another in the L all stand on free floor, none over a wall or another', () => {
     const placed: Piece[] = [];
     const sizes: [number, number][] = [

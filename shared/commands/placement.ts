@@ -1,11 +1,12 @@
 // Where a new or placed piece lands: on free floor inside the outline, as near as it can be to the
 // point asked for (the middle of the view, or where it was dropped), never across a wall and never
-// on another placed piece while there is room for it.
+// on another placed piece while there is room for it. Rugs (pieces walked over) leave the floor free:
+// a table or a sofa lands on one.
 import type { Piece } from '../schemas/option';
 import type { RoomShell } from '../schemas/room';
 import type { Vec2 } from '../geometry/vec';
 import { pointInPolygon, segmentsTouch } from '../geometry/polygon';
-import { pieceFootprintMm, type PiecePose } from '../geometry/piece';
+import { isWalkedOver, pieceFootprintMm, type PiecePose } from '../geometry/piece';
 
 /** The spacing of the spots tried (mm): fine enough to find gaps a piece fits in, coarse enough to stay instant. */
 export const PLACEMENT_STEP_MM = 50;
@@ -81,7 +82,7 @@ export function findPlacement(
   request: PlacementRequest,
 ): [number, number] {
   const { outline } = shell;
-  const others = pieces.filter((p) => p.placed && p.id !== request.id).map((p) => pieceFootprintMm(p));
+  const others = pieces.filter((p) => p.placed && p.id !== request.id && !isWalkedOver(p)).map((p) => pieceFootprintMm(p));
   const xs = outline.map((p) => p[0]);
   const ys = outline.map((p) => p[1]);
   const minX = Math.min(...xs);
