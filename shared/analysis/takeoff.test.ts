@@ -6,7 +6,7 @@ import { findingSchema } from './fit/finding';
 import { designExampleRoom as example, designExampleTakeoff, designExampleWall0 } from '../../tests/reference/rooms';
 
 describe('computeTakeoff', () => {
-  it('gives exactly the numbers of the README's plan-file example', () => {
+  it("gives exactly the numbers of the README's plan-file example", () => {
     const takeoff = computeTakeoff(roomShellSchema.parse(example));
     const printed = analysisOutput(takeoff, []);
     expect(printed).toMatchObject(designExampleTakeoff);

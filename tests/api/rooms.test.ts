@@ -158,7 +158,7 @@ describe('rooms', () => {
     expect(after.body.options).toEqual([expect.objectContaining({ name: 'Calm', position: 0 })]);
   });
 
-  it('imports the README's example plan file and exports it back unchanged', async () => {
+  it("imports the README's example plan file and exports it back unchanged", async () => {
     const { agent } = await signUpStudio(t.app);
     const projectId = await projectOf(agent);
     const res = await agent.post(`/api/projects/${projectId}/rooms/import`).send(designExample);

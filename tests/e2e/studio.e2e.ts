@@ -55,7 +55,7 @@ describe('a studio from sign-up to its first project', () => {
     const dialog = page.getByRole('dialog');
     await dialog.getByLabel('Project name').fill('Quay Street house');
     await dialog.getByLabel('Address').fill('9 Quay Street');
-    await dialog.getByLabel('Client').selectOption({ label: 'Rowan and Sam Pike' });
+    await dialog.getByLabel('Client', { exact: true }).selectOption({ label: 'Rowan and Sam Pike' });
     await page.getByRole('button', { name: 'Create project' }).click();
     await page.getByRole('heading', { name: /Quay Street house/ }).waitFor();
     expect(await page.getByText('pikes@example.com').isVisible()).toBe(true);
