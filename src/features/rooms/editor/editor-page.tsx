@@ -34,6 +34,7 @@ import { PlanView } from './plan-view';
 import { roomCentre, type Selection } from './plan-geometry';
 import { EDITOR_STEPS, type EditorStep } from './steps';
 import { useRoomEditor, type Frozen, type SaveState } from './use-room-editor';
+import { SPLIT_KEY_STEP, SPLIT_MAX, SPLIT_MIN, useEditorView } from './use-editor-view';
 import { optionLabel } from '../../../../shared/schemas/room-api';
 import { refusalText } from './refusal-text';
 import { EDITOR_KEYS, keyFor, type KeyContext } from './editor-keys';
@@ -68,11 +69,6 @@ function writePlace(roomId: string, place: EditorPlace) {
     // Blocked storage only costs reopening on the same step.
   }
 }
-
-const UNIT_KEY = 'parlour:length-unit';
-type Layout = 'both' | 'plan' | '3d';
-/** Below this window width the plan and the 3D preview share the screen by turns. */
-const WIDE_ENOUGH_FOR_BOTH_PX = 1180;
 
 export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: string; roomId: string; finishes?: Finish[] }) {
   const room = useRoom(roomId);
@@ -132,10 +128,7 @@ function Editor({
     place?.optionId && detail.options.some((o) => o.id === place.optionId) ? place.optionId : (detail.options[0]?.id ?? ''),
   );
   const [selection, setSelection] = useState<Selection>(null);
-  // Side by side needs room; on a tablet the plan starts alone and the 3D is one tap away.
-  const [layout, setLayout] = useState<Layout>(() => (window.innerWidth >= WIDE_ENOUGH_FOR_BOTH_PX ? 'both' : 'plan'));
-  const [split, setSplit] = useState(0.55);
-  const [unit, setUnit] = useState<LengthUnit>(() => (localStorage.getItem(UNIT_KEY) as LengthUnit | null) ?? 'cm');
+  const { layout, setLayout, split, setSplit, nudgeSplit, unit, setUnit } = useEditorView();
   const [drawing, setDrawing] = useState(false);
   const [preview, setPreview] = useState<[number, number][] | null>(null);
   const [help, setHelp] = useState(false);
@@ -198,7 +191,6 @@ function Editor({
     [editor.attempt, unit], // eslint-disable-line react-hooks/exhaustive-deps
   );
 
-  useEffect(() => localStorage.setItem(UNIT_KEY, unit), [unit]);
   // A reload reopens the step and option the designer was on (and the walkway they checked with).
   useEffect(() => writePlace(detail.room.id, { step, optionId, walkwayMm }), [detail.room.id, step, optionId, walkwayMm]);
 
@@ -348,7 +340,7 @@ function Editor({
     if (!host) return;
     (e.target as Element).setPointerCapture(e.pointerId);
     const rect = host.getBoundingClientRect();
-    const move = (ev: PointerEvent) => setSplit(Math.min(0.8, Math.max(0.2, (ev.clientX - rect.left) / rect.width)));
+    const move = (ev: PointerEvent) => setSplit((ev.clientX - rect.left) / rect.width);
     const up = () => {
       window.removeEventListener('pointermove', move);
       window.removeEventListener('pointerup', up);
@@ -634,13 +626,13 @@ function Editor({
                 aria-orientation="vertical"
                 aria-label="Move the divider between plan and 3D"
                 aria-valuenow={Math.round(split * 100)}
-                aria-valuemin={20}
-                aria-valuemax={80}
+                aria-valuemin={SPLIT_MIN * 100}
+                aria-valuemax={SPLIT_MAX * 100}
                 tabIndex={0}
                 onPointerDown={startSplitDrag}
                 onKeyDown={(e) => {
-                  if (e.key === 'ArrowLeft') setSplit((s) => Math.max(0.2, s - 0.05));
-                  if (e.key === 'ArrowRight') setSplit((s) => Math.min(0.8, s + 0.05));
+                  if (e.key === 'ArrowLeft') nudgeSplit(-SPLIT_KEY_STEP);
+                  if (e.key === 'ArrowRight') nudgeSplit(SPLIT_KEY_STEP);
                 }}
                 className="w-1.5 shrink-0 cursor-col-resize bg-line hover:bg-pine"
               />
