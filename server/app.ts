@@ -29,7 +29,10 @@ const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
+  // The client's link routes first: a busy link's requests then match at once instead of being
+  // tried against every route of the studio's own (no other path can match theirs).
   return [
+    ...clientPresentationRoutes,
     ...authRoutes,
     ...studioRoutes,
     ...clientRoutes,
@@ -38,7 +41,6 @@ export function allRoutes(): RouteDef[] {
     ...finishRoutes,
     ...fileRoutes,
     ...presentationRoutes,
-    ...clientPresentationRoutes,
     ...scheduleRoutes,
     ...outboxRoutes,
   ];

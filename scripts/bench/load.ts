@@ -8,7 +8,7 @@ import autocannon, { type Result } from 'autocannon';
 import request from 'supertest';
 import { join } from 'node:path';
 import { loadavg } from 'node:os';
-import { statSync, writeFileSync } from 'node:fs';
+import { readFileSync, statSync, writeFileSync } from 'node:fs';
 import { createDb } from '../../server/db/database';
 import { migrateToLatest } from '../../server/db/migrate';
 import { SESSION_COOKIE } from '../../server/services/auth/session';
@@ -43,9 +43,22 @@ interface Figures {
   non2xx: number;
   /** The one-minute load average as the run ended. */
   load: number;
+  /** Processor time the server process spent per answered request (user + system). */
+  cpuUsPerRequest: number;
 }
 
-function figures(name: string, s: number, r: Result): Figures {
+/** Processor time of a process so far, in microseconds (Linux: /proc; 0 elsewhere). */
+function cpuUs(pid: number | undefined): number {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+    // utime and stime, fields 14 and 15 of stat(5), in clock ticks of 1/100 s.
+    return (Number(fields[11]) + Number(fields[12])) * 10_000;
+  } catch {
+    return 0;
+  }
+}
+
+function figures(name: string, s: number, r: Result, cpu = 0): Figures {
   return {
     name,
     seconds: s,
@@ -56,11 +69,19 @@ function figures(name: string, s: number, r: Result): Figures {
     errors: r.errors + r.timeouts,
     non2xx: r.non2xx,
     load: loadavg()[0],
+    cpuUsPerRequest: r.requests.total ? Math.round(cpu / r.requests.total) : 0,
   };
 }
 
 const run = (url: string, s: number, headers: Record<string, string> = {}) =>
   autocannon({ url, connections: CONNECTIONS, duration: s, headers, pipelining: 1 });
+
+/** One run against `server`, with the processor time its process spent meanwhile. */
+async function measured(name: string, server: ServerProcess, url: string, s: number): Promise<Figures> {
+  const before = cpuUs(server.child.pid);
+  const r = await run(url, s);
+  return figures(name, s, r, cpuUs(server.child.pid) - before);
+}
 
 const median = (xs: number[]) => {
   const sorted = [...xs].sort((a, b) => a - b);
@@ -70,7 +91,7 @@ const median = (xs: number[]) => {
 const range = (xs: number[], digits = 0) => `${Math.min(...xs).toFixed(digits)}–${Math.max(...xs).toFixed(digits)}`;
 
 const line = (f: Figures) =>
-  `${f.name}: ${f.requestsPerSecond} req/s, p50 ${f.p50Ms} ms, p99 ${f.p99Ms} ms, ${f.total} requests in ${f.seconds} s, ${f.errors} errors, ${f.non2xx} non-2xx, load ${f.load.toFixed(2)}`;
+  `${f.name}: ${f.requestsPerSecond} req/s, p50 ${f.p50Ms} ms, p99 ${f.p99Ms} ms, ${f.total} requests in ${f.seconds} s, ${f.errors} errors, ${f.non2xx} non-2xx, load ${f.load.toFixed(2)}${f.cpuUsPerRequest ? `, ${f.cpuUsPerRequest} µs processor time per request` : ''}`;
 
 async function main(): Promise<number> {
   const cluster = await throwawayCluster({ fsync: true, prefix: 'parlour-bench-' });
@@ -136,9 +157,9 @@ async function main(): Promise<number> {
     await run(targets.bare, WARM_UP_SECONDS);
     const rounds: { app: Figures; bare: Figures }[] = [];
     for (let i = 1; i <= ROUNDS; i += 1) {
-      const app = figures(`round ${i} app  `, seconds, await run(targets.app, seconds));
+      const app = await measured(`round ${i} app  `, server, targets.app, seconds);
       console.log(line(app));
-      const b = figures(`round ${i} bare `, seconds, await run(targets.bare, seconds));
+      const b = await measured(`round ${i} bare `, bare, targets.bare, seconds);
       console.log(line(b));
       rounds.push({ app, bare: b });
     }
@@ -167,6 +188,11 @@ async function main(): Promise<number> {
     console.log(
       `ratio app / bare: ${ratio.toFixed(2)} (medians; per round ${range(perRound, 2)}), load average ${range(loads, 1)}`,
     );
+    const cpu = (fs: Figures[]) => median(fs.map((f) => f.cpuUsPerRequest));
+    if (cpu(bares) > 0)
+      console.log(
+        `processor time per request (medians): app ${cpu(apps)} µs, bare ${cpu(bares)} µs (${(cpu(bares) / cpu(apps)).toFixed(2)} bare / app; less swayed by the machine's other work than req/s)`,
+      );
     console.log(line(list));
     console.log(`server log: ${Math.round(statSync(logFile).size / 1024)} KB of JSON lines`);
     const failed = [...apps, ...bares, list].some((f) => f.errors > 0 || f.non2xx > 0);

@@ -2,9 +2,8 @@
 // request's lines carrying its id. Secrets never reach a line: headers are left out entirely,
 // token-bearing paths are masked, and fields that could hold a password or token are censored.
 import { randomUUID } from 'node:crypto';
-import type { IncomingMessage, ServerResponse } from 'node:http';
+import type { IncomingMessage } from 'node:http';
 import { pino, type DestinationStream, type Level, type Logger } from 'pino';
-import { pinoHttp } from 'pino-http';
 import type { RequestHandler } from 'express';
 
 export type { Logger } from 'pino';
@@ -70,44 +69,58 @@ export function createLogger(opts: LoggerOptions): Logger {
   );
 }
 
-interface SerializedReq {
-  id: unknown;
-  method: string;
-  url: string;
-  remoteAddress?: string;
+declare module 'http' {
+  interface IncomingMessage {
+    /** The request's id (see requestLogger). */
+    id: string;
+    /** The request's logger: every line carries its id. Made on first use. */
+    log: Logger;
+  }
 }
-interface SerializedRes {
-  statusCode: number;
+
+/** What a closing line says about the request; nothing else of it is logged. */
+function requestFields(req: IncomingMessage) {
+  return { id: req.id, method: req.method, url: redactText(req.url ?? ''), remoteAddress: req.socket?.remoteAddress };
 }
 
 /**
- * Logs each request once it is answered, under a request id: the caller's `x-request-id` when it
- * is plain, else a fresh UUID, echoed in the response either way.
+ * Logs each request once it is answered (or its connection closes first), under a request id:
+ * the caller's `x-request-id` when it is plain, else a fresh UUID, echoed in the response either
+ * way. The line is `{ reqId, req: { id, method, url, remoteAddress }, res: { statusCode },
+ * responseTime, msg: 'request completed' }`, at warn for 4xx and error (with `err`, "request
+ * errored") for 5xx. The request's own logger (`req.log`, with `reqId`) is only made when a
+ * handler logs. A closing line without an error holds only the fields built here, the URL already
+ * masked, so it skips the redaction walk every other line takes (about ten times the cost of the
+ * line itself, measured on a busy link).
  */
 export function requestLogger(logger: Logger): RequestHandler {
-  const middleware = pinoHttp<IncomingMessage, ServerResponse>({
-    logger,
-    // Lines logged while handling a request carry just its id; the closing line adds the request.
-    quietReqLogger: true,
-    genReqId(req, res) {
-      const incoming = req.headers[REQUEST_ID_HEADER];
-      const id = typeof incoming === 'string' && INCOMING_ID.test(incoming) ? incoming : randomUUID();
-      res.setHeader(REQUEST_ID_HEADER, id);
-      return id;
-    },
-    customLogLevel(_req, res, err) {
-      if (err || res.statusCode >= 500) return 'error';
-      return res.statusCode >= 400 ? 'warn' : 'info';
-    },
-    serializers: {
-      req: (req: SerializedReq) => ({
-        id: req.id,
-        method: req.method,
-        url: redactText(req.url),
-        remoteAddress: req.remoteAddress,
-      }),
-      res: (res: SerializedRes) => ({ statusCode: res.statusCode }),
-    },
-  });
-  return (req, res, next) => middleware(req, res, next);
+  const closing = logger.child({}, { redact: { paths: [] } });
+  return (req, res, next) => {
+    const started = Date.now();
+    const incoming = req.headers[REQUEST_ID_HEADER];
+    const id = typeof incoming === 'string' && INCOMING_ID.test(incoming) ? incoming : randomUUID();
+    res.setHeader(REQUEST_ID_HEADER, id);
+    req.id = id;
+    let own: Logger | undefined;
+    Object.defineProperty(req, 'log', {
+      configurable: true,
+      enumerable: false,
+      get: () => (own ??= logger.child({ reqId: id })),
+      set: (l: Logger) => (own = l),
+    });
+    const done = (err?: Error) => {
+      res.removeListener('close', done);
+      res.removeListener('finish', done);
+      const status = res.statusCode;
+      const failed = err ?? (status >= 500 ? new Error(`failed with status code ${status}`) : undefined);
+      const level: Level = failed ? 'error' : status >= 400 ? 'warn' : 'info';
+      if (!logger.isLevelEnabled(level)) return;
+      const line = { reqId: id, req: requestFields(req), res: { statusCode: status }, responseTime: Date.now() - started };
+      if (failed) logger[level]({ ...line, err: failed }, 'request errored');
+      else closing[level](line, 'request completed');
+    };
+    res.on('close', done);
+    res.on('finish', done);
+    next();
+  };
 }
