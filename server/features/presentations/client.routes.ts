@@ -9,6 +9,8 @@ import { fileParam, sendDerivedFile } from '../files/files.service';
 import { chooseOption, linkFileKey, loadClientLink, notifyDesigner, recordView } from './client.service';
 
 const roomParam = z.object({ roomId: z.uuid() });
+/** The content type Express gives a JSON text. */
+const JSON_TYPE = 'application/json; charset=utf-8';
 
 // The token travels in the path; keep it out of Referer headers and caches.
 function privateAnswer(res: Response): void {
@@ -30,7 +32,10 @@ export const clientPresentationRoutes: RouteDef[] = [
       // The hot path of a busy link: a ready answer, no database round trip (see client-cache.ts).
       const link = cache.get(token) ?? (await cache.load(token, () => loadClientLink(ctx.services, token)));
       if (ctx.caller?.studioId !== link.studioId) cache.recordOpened(link.presentationId);
-      ctx.res.type('application/json').send(link.body);
+      // The bytes and their ETag are kept with the answer: sent as they are, nothing recomputed.
+      ctx.res.setHeader('Content-Type', JSON_TYPE);
+      ctx.res.setHeader('ETag', link.etag);
+      ctx.res.send(link.bytes);
       return undefined;
     },
   }),

@@ -2,7 +2,7 @@
 // request's lines carrying its id. Secrets never reach a line: headers are left out entirely,
 // token-bearing paths are masked, and fields that could hold a password or token are censored.
 import { randomUUID } from 'node:crypto';
-import type { IncomingMessage } from 'node:http';
+import type { IncomingMessage, ServerResponse } from 'node:http';
 import { pino, type DestinationStream, type Level, type Logger } from 'pino';
 import type { RequestHandler } from 'express';
 
@@ -96,31 +96,73 @@ function requestFields(req: IncomingMessage) {
 export function requestLogger(logger: Logger): RequestHandler {
   const closing = logger.child({}, { redact: { paths: [] } });
   return (req, res, next) => {
-    const started = Date.now();
     const incoming = req.headers[REQUEST_ID_HEADER];
     const id = typeof incoming === 'string' && INCOMING_ID.test(incoming) ? incoming : randomUUID();
     res.setHeader(REQUEST_ID_HEADER, id);
     req.id = id;
-    let own: Logger | undefined;
-    Object.defineProperty(req, 'log', {
-      configurable: true,
-      enumerable: false,
-      get: () => (own ??= logger.child({ reqId: id })),
-      set: (l: Logger) => (own = l),
-    });
-    const done = (err?: Error) => {
-      res.removeListener('close', done);
-      res.removeListener('finish', done);
-      const status = res.statusCode;
-      const failed = err ?? (status >= 500 ? new Error(`failed with status code ${status}`) : undefined);
-      const level: Level = failed ? 'error' : status >= 400 ? 'warn' : 'info';
-      if (!logger.isLevelEnabled(level)) return;
-      const line = { reqId: id, req: requestFields(req), res: { statusCode: status }, responseTime: Date.now() - started };
-      if (failed) logger[level]({ ...line, err: failed }, 'request errored');
-      else closing[level](line, 'request completed');
-    };
-    res.on('close', done);
-    res.on('finish', done);
+    lazyLogOn(Object.getPrototypeOf(req) as object);
+    const state: RequestLogState = { logger, closing, req, started: Date.now(), logged: false, own: undefined };
+    (req as unknown as Logged)[STATE] = state;
+    (res as unknown as Logged)[STATE] = state;
+    // One shared listener for both events (no closures per request); whichever comes first logs.
+    res.on('finish', answered);
+    res.on('close', answered);
     next();
   };
+}
+
+const STATE = Symbol('request log');
+interface RequestLogState {
+  logger: Logger;
+  closing: Logger;
+  req: IncomingMessage;
+  started: number;
+  logged: boolean;
+  /** The request's own logger, once a handler asked for it. */
+  own: Logger | undefined;
+}
+interface Logged {
+  [STATE]?: RequestLogState;
+}
+
+function answered(this: ServerResponse, err?: Error): void {
+  const state = (this as unknown as Logged)[STATE];
+  if (!state || state.logged) return;
+  state.logged = true;
+  const status = this.statusCode;
+  const failed = err ?? (status >= 500 ? new Error(`failed with status code ${status}`) : undefined);
+  const level: Level = failed ? 'error' : status >= 400 ? 'warn' : 'info';
+  if (!state.logger.isLevelEnabled(level)) return;
+  const line = {
+    reqId: state.req.id,
+    req: requestFields(state.req),
+    res: { statusCode: status },
+    responseTime: Date.now() - state.started,
+  };
+  if (failed) state.logger[level]({ ...line, err: failed }, 'request errored');
+  else state.closing[level](line, 'request completed');
+}
+
+const withLazyLog = new WeakSet<object>();
+/**
+ * Gives requests of this prototype (each Express app has its own) a `log` made on first read from
+ * the request's own state, so a request whose handler never logs never builds a child logger.
+ */
+function lazyLogOn(proto: object): void {
+  if (withLazyLog.has(proto)) return;
+  withLazyLog.add(proto);
+  Object.defineProperty(proto, 'log', {
+    configurable: true,
+    enumerable: false,
+    get(this: Logged) {
+      const state = this[STATE];
+      if (!state) return undefined;
+      return (state.own ??= state.logger.child({ reqId: state.req.id }));
+    },
+    set(this: Logged, l: Logger) {
+      const state = this[STATE];
+      if (state) state.own = l;
+      else Object.defineProperty(this, 'log', { value: l, writable: true, configurable: true });
+    },
+  });
 }
