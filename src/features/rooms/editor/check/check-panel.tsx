@@ -1,3 +1,4 @@
+import { MAX_WALKWAY_MM, MIN_WALKWAY_MM } from '../../../../../shared/analysis/fit/clearances';
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../../shared/schemas/room';
@@ -17,10 +18,6 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   unreachable: 'Cannot be reached',
   'too-big-for-door': 'Too big for the doors',
 };
-
-/** The walkway widths the check accepts: narrower is not a route, wider is not a walkway. */
-const MIN_WALKWAY_MM = 300;
-const MAX_WALKWAY_MM = 2000;
 
 export function CheckPanel({
   shell,
