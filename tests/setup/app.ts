@@ -2,7 +2,9 @@
 import { inject } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
-import { createApp, type AppDeps } from '../../server/app';
+import { sql } from 'kysely';
+import { createAppWithServices, type AppDeps } from '../../server/app';
+import { closeServices } from '../../server/compose';
 import { loadConfig } from '../../server/config';
 import { createDb, type Db } from '../../server/db/database';
 import type { MailMessage, Mailer } from '../../server/services/mail/mailer';
@@ -47,8 +49,28 @@ export function createTestApp(options: TestAppOptions = {}): TestApp {
     SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
     ...options.env,
   });
-  const app = createApp({ db, mailer, config, verifyPassword: options.verifyPassword });
-  return { app, db, mail, close: () => db.destroy() };
+  const { app, close } = startTestApp({ db, mailer, config, verifyPassword: options.verifyPassword });
+  return { app, db, mail, close };
+}
+
+let apps = 0;
+/**
+ * The app for `deps` with a job queue of its own (a schema of its own in the shared test database),
+ * so a job is worked by the app that sent it, with its mailer and storage. `close` stops the app's
+ * services, drops the queue's schema and closes `deps.db`.
+ */
+export function startTestApp(deps: AppDeps): { app: Express; close: () => Promise<void> } {
+  apps += 1;
+  const jobsSchema = `pgboss_test_${process.pid}_${apps}`;
+  const { app, services } = createAppWithServices({ ...deps, jobsSchema });
+  return {
+    app,
+    async close() {
+      await closeServices(services);
+      await sql`DROP SCHEMA IF EXISTS ${sql.id(jobsSchema)} CASCADE`.execute(deps.db);
+      await deps.db.destroy();
+    },
+  };
 }
 
 let counter = 0;
