@@ -6,6 +6,7 @@ import { dataDirStorage } from './services/storage/local-disk';
 import { verifyPassword } from './services/auth/passwords';
 import { createJobQueue } from './services/jobs/job-queue';
 import { photoJobKinds } from './features/finishes/finishes.jobs';
+import { mailJobKinds } from './features/outbox/mail-queue';
 import { ClientLinkCache } from './features/presentations/client-cache';
 
 export function createServices(deps: AppDeps): AppServices {
@@ -18,7 +19,10 @@ export function createServices(deps: AppDeps): AppServices {
     logger,
     schema: deps.jobsSchema,
     work: deps.config.WORKERS > 0,
-    kinds: [...photoJobKinds({ db: deps.db, storage, logger }, Math.max(1, deps.config.WORKERS))],
+    kinds: [
+      ...photoJobKinds({ db: deps.db, storage, logger }, Math.max(1, deps.config.WORKERS)),
+      ...mailJobKinds({ db: deps.db, mailer: deps.mailer, config: deps.config, logger }),
+    ],
   });
   // The link cache opens its listening connection on first use, so an app that never serves a
   // presentation link holds no extra connection.

@@ -34,7 +34,7 @@ export interface AppServices {
   /** The process logger; a request's own (with its id) is `ctx.log` in a route. */
   logger: Logger;
   verifyPassword: PasswordVerifier;
-  /** Work off the request path (photo processing), in PostgreSQL: see server/services/jobs. */
+  /** Work off the request path (photo processing, mail nobody waits for), in PostgreSQL: see server/services/jobs. */
   jobs: JobQueue;
   /** Presentation answers kept ready per link on this instance. */
   links: ClientLinkCache;

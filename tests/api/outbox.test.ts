@@ -38,6 +38,8 @@ async function presentAndChoose(agent: Agent, to: string) {
   expect((await agent.post(`/api/presentations/${made.body.presentation.id}/send`).send({})).status).toBe(200);
   const token = new URL(made.body.presentation.link as string).pathname.split('/').pop()!;
   expect((await request(t.app).put(`/api/p/${token}/rooms/${room.body.room.id}/choice`).send({ optionId })).status).toBe(200);
+  // The designer's notice goes through the job queue.
+  await t.settled();
   return made.body.presentation.link as string;
 }
 

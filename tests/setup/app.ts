@@ -16,6 +16,8 @@ export interface TestApp {
   app: Express;
   db: Db;
   mail: MailMessage[];
+  /** Resolves once the app's job queue has nothing to run now and nothing running (a retry waiting its turn is not run). */
+  settled(): Promise<void>;
   close(): Promise<void>;
 }
 
@@ -49,22 +51,35 @@ export function createTestApp(options: TestAppOptions = {}): TestApp {
     SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
     ...options.env,
   });
-  const { app, close } = startTestApp({ db, mailer, config, verifyPassword: options.verifyPassword });
-  return { app, db, mail, close };
+  const { app, settled, close } = startTestApp({ db, mailer, config, verifyPassword: options.verifyPassword });
+  return { app, db, mail, settled, close };
 }
 
 let apps = 0;
+const SETTLE_LIMIT_MS = 15_000;
 /**
  * The app for `deps` with a job queue of its own (a schema of its own in the shared test database),
  * so a job is worked by the app that sent it, with its mailer and storage. `close` stops the app's
  * services, drops the queue's schema and closes `deps.db`.
  */
-export function startTestApp(deps: AppDeps): { app: Express; close: () => Promise<void> } {
+export function startTestApp(deps: AppDeps): Pick<TestApp, 'app' | 'settled' | 'close'> {
   apps += 1;
   const jobsSchema = `pgboss_test_${process.pid}_${apps}`;
   const { app, services } = createAppWithServices({ ...deps, jobsSchema });
   return {
     app,
+    async settled() {
+      const until = Date.now() + SETTLE_LIMIT_MS;
+      await services.jobs.start();
+      for (;;) {
+        const { rows } = await sql<{ n: number }>`
+          SELECT count(*)::int AS n FROM ${sql.id(jobsSchema, 'job')}
+          WHERE state = 'active' OR (state IN ('created', 'retry') AND start_after <= now())`.execute(deps.db);
+        if (rows[0].n === 0) return;
+        if (Date.now() > until) throw new Error(`the job queue still has ${rows[0].n} jobs to run`);
+        await new Promise((r) => setTimeout(r, 20));
+      }
+    },
     async close() {
       await closeServices(services);
       await sql`DROP SCHEMA IF EXISTS ${sql.id(jobsSchema)} CASCADE`.execute(deps.db);
