@@ -1,5 +1,5 @@
-// The room editor's Check step: the walkway width setting, the fit check findings (pick one to see
-// it on the plan), reminders for tall pieces, and the room's take-off.
+// The room editor's Check step: the walkway width setting, the fit check findings (pick one to highlight
+// its pieces), reminders for tall pieces, and the room's take-off.
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../../shared/schemas/room';
