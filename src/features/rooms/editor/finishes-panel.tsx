@@ -1,3 +1,5 @@
+// The room editor's Finishes step: pick a surface (floor, ceiling, walls, feature walls or a
+// piece's main or accent finish) and give it a finish from the library.
 import { useState } from 'react';
 import { Link } from 'react-router';
 import type { Finish } from '../../../../shared/schemas/finish';

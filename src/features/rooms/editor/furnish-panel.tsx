@@ -1,3 +1,5 @@
+// The room editor's Furnish step: the catalogue to add pieces from, the holding area, and the
+// selected piece's fields (name, size, turn, height above the floor, finishes, price, supplier).
 import { useState } from 'react';
 import { isWebLink, type Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';

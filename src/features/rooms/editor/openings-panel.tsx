@@ -1,3 +1,5 @@
+// The room editor's Openings step: add a door, window or passage to a wall, and edit the selected
+// opening's size, place along the wall and sill.
 import { useState } from 'react';
 import type { Opening, RoomShell } from '../../../../shared/schemas/room';
 import { addOpening, flipHinge, flipSwing, removeOpening, updateOpening, type Command } from '../../../../shared/commands';

@@ -1,3 +1,5 @@
+// The room editor's Outline step: ceiling height, wall thickness and each wall's length, plus
+// measuring walls in turn ("420 l 135") to make a new outline.
 import { useMemo, useState, type KeyboardEvent } from 'react';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import {
