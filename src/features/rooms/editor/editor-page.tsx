@@ -1,3 +1,6 @@
+// The room editor's page: the step bar (outline, openings, furnish, finishes, check), the plan and the
+// 3D preview side by side or by turns, the options bar, the keys and what saving says. The editing
+// itself lives in use-room-editor.ts; each step's panel in its own file.
 import {
   lazy,
   Suspense,
