@@ -16,11 +16,13 @@ import { browserHasWebGL, SceneErrorBoundary } from '../../../scene/scene-error-
 import { SceneLights } from '../../../scene/scene-lights';
 import { shellParts } from '../../../scene/shell-parts';
 import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from '../../../scene/view-helpers';
-import { HeldMoves, WalkRig, OverviewRig, type RigHandle, type WalkMove } from './walkthrough-rigs';
+import { HeldMoves, type RigHandle, type WalkMove } from './rig-shared';
+import { OverviewRig } from './overview-rig';
+import { WalkRig } from './walk-rig';
 import { windowLightRects } from '../../../scene/window-lights';
 import { contactShadows, daylightDirection, noShadows } from './contact-shadows';
 
-export type { WalkMove } from './walkthrough-rigs';
+export type { WalkMove } from './rig-shared';
 export type { ViewMode } from './camera-link';
 export type { TextureProgress } from '../../../scene/finish-materials';
 
