@@ -10,7 +10,7 @@ import {
   type PieceSettings,
 } from '../../../../shared/schemas/piece-kind';
 import { inputClass } from '../../../components/ui/field';
-import { PartShape, topViewParts } from './plan-piece-forms';
+import { PartShape, topViewParts } from './plan/plan-piece-forms';
 
 /** The box a kind is drawn in when no piece gives one: its first catalogue entry's. */
 export function kindBox(kind: PieceKind): { width: number; depth: number; height: number } {

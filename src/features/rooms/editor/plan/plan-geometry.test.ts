@@ -1,3 +1,4 @@
+// The plan's view box fitted to a panel: content as large as it allows, centred, in the panel's proportions.
 import { describe, expect, it } from 'vitest';
 import { fitViewBox } from './plan-geometry';
 

@@ -1,3 +1,4 @@
+// Piece labels on the plan: WCAG contrast of the label colour with the piece's fill, and the label inside or beside the piece.
 import { describe, expect, it } from 'vitest';
 import { LABEL_DARK, LABEL_LIGHT, contrastRatio, labelColourOn, labelLayout, labelWidth, relativeLuminance } from './piece-look';
 

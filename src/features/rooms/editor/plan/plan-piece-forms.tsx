@@ -2,8 +2,8 @@
 // arms, a bed's pillows, a wardrobe's doors) in thin calm lines, and its label. The box outline
 // underneath stays what is dragged and checked; this layer takes no pointer events.
 import { memo, useMemo } from 'react';
-import { formParts, type Part } from '../../../../shared/geometry/forms';
-import type { Piece } from '../../../../shared/schemas/option';
+import { formParts, type Part } from '../../../../../shared/geometry/forms';
+import type { Piece } from '../../../../../shared/schemas/option';
 import { labelColourOn, labelLayout, LABEL_DARK } from './piece-look';
 
 /** Line colour of the parts' outlines: a little softer than the box outline. */

@@ -1,8 +1,8 @@
 // The plan, seen from above and true to size: SVG in plan millimetres (x right, y down).
 // Pointer gestures turn into named commands; one gesture is one undo step.
 import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
-import type { Piece } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
+import type { Piece } from '../../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../../shared/schemas/room';
 import {
   holdPiece,
   moveCorner,
@@ -17,11 +17,11 @@ import {
   updateOpening,
   addPiece,
   type Command,
-} from '../../../../shared/commands';
-import { pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
-import { formatLength, type LengthUnit } from '../../../../shared/units/length';
-import { isWalkedOver, isWalkedUnder } from '../../../../shared/geometry/piece';
-import { distance } from '../../../../shared/geometry/vec';
+} from '../../../../../shared/commands';
+import { pieceFromCatalogue, type CatalogueId } from '../../../../../shared/catalogue/catalogue';
+import { formatLength, type LengthUnit } from '../../../../../shared/units/length';
+import { isWalkedOver, isWalkedUnder } from '../../../../../shared/geometry/piece';
+import { distance } from '../../../../../shared/geometry/vec';
 import {
   DIMENSION_OFFSET_MM,
   fitViewBox,
@@ -32,7 +32,7 @@ import {
   ringPath,
   type Selection,
 } from './plan-geometry';
-import type { EditorStep } from './steps';
+import type { EditorStep } from '../steps';
 import { PieceLabel, PieceTopView } from './plan-piece-forms';
 
 /** Corners snap to this grid while dragged or clicked (plan mm). */

@@ -1,10 +1,10 @@
 // Pure helpers for the plan view: what to draw where, in plan mm (x right, y down, as in SVG).
-import type { Piece } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
-import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../shared/geometry/walls';
-import { placeShellOpenings } from '../../../../shared/geometry/openings';
-import { boundsMm, pointInPolygon, type Bounds2 } from '../../../../shared/geometry/polygon';
-import { boxesOverlap, boxInsideOutline, findPlacement, pieceFootprintMm, snapPieceToWalls } from '../../../../shared/commands';
+import type { Piece } from '../../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../../shared/schemas/room';
+import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../../shared/geometry/walls';
+import { placeShellOpenings } from '../../../../../shared/geometry/openings';
+import { boundsMm, pointInPolygon, type Bounds2 } from '../../../../../shared/geometry/polygon';
+import { boxesOverlap, boxInsideOutline, findPlacement, pieceFootprintMm, snapPieceToWalls } from '../../../../../shared/commands';
 
 /** Space round the room on the plan, for dimension lines and handles. */
 export const PLAN_MARGIN_MM = 900;

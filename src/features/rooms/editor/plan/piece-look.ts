@@ -1,6 +1,6 @@
 // How a piece reads on the plan: its label's size and place (inside when it fits, else beside),
 // and a label colour that stands out from the piece's fill.
-import type { Piece } from '../../../../shared/schemas/option';
+import type { Piece } from '../../../../../shared/schemas/option';
 
 export const LABEL_DARK = '#2a2521';
 export const LABEL_LIGHT = '#fbf9f5';
