@@ -1,23 +1,55 @@
-// The plan's view box fitted to a panel: content as large as it allows, centred, in the panel's proportions.
+// What the plan draws where: a closed ring's path, a piece's box from the one piece rule, and where
+// the holding area sits beside or below the room.
 import { describe, expect, it } from 'vitest';
-import { fitViewBox } from './plan-geometry';
+import { pieceFootprintMm } from '../../../../../shared/geometry/piece';
+import { pieceSchema } from '../../../../../shared/schemas/option';
+import { roomShellSchema } from '../../../../../shared/schemas/room';
+import { inHolding, pieceRing, planLayout, ringPath } from './plan-geometry';
 
-describe('fitViewBox', () => {
-  it('shows the content as large as the panel allows, centred, in the panel’s proportions', () => {
-    // 8 m × 4 m of plan in a 440 × 620 px panel with 40 px margins: the width sets the scale,
-    // 8000 mm over 360 px.
-    const v = fitViewBox({ x: 0, y: 0, w: 8000, h: 4000 }, { w: 440, h: 620 }, 40);
-    const mmPerPx = 8000 / 360;
-    expect(v.w).toBeCloseTo(440 * mmPerPx, 6);
-    expect(v.h).toBeCloseTo(620 * mmPerPx, 6);
-    expect(v.x + v.w / 2).toBeCloseTo(4000, 6);
-    expect(v.y + v.h / 2).toBeCloseTo(2000, 6);
-    // The margin on the tighter side is exactly 40 px.
-    expect((0 - v.x) / mmPerPx).toBeCloseTo(40, 6);
+const shell = roomShellSchema.parse({
+  outline: [
+    [0, 0],
+    [4000, 0],
+    [4000, 3000],
+    [0, 3000],
+  ],
+});
+const held = pieceSchema.parse({
+  id: 'chair',
+  name: 'Chair',
+  x: 0,
+  y: 0,
+  width: 600,
+  depth: 500,
+  height: 800,
+  status: 'new',
+  placed: false,
+});
+
+describe('plan geometry', () => {
+  it('writes a closed ring as one SVG path', () => {
+    expect(
+      ringPath([
+        [0, 0],
+        [10, 0],
+        [10, 5],
+      ]),
+    ).toBe('M0 0 L10 0 L10 5 Z');
   });
-  it('lets the height set the scale in a wide, low panel', () => {
-    const v = fitViewBox({ x: 100, y: 100, w: 4000, h: 4000 }, { w: 1000, h: 300 }, 50);
-    expect(v.h / 300).toBeCloseTo(4000 / 200, 6);
-    expect(v.w / 1000).toBeCloseTo(4000 / 200, 6);
+
+  it('draws a piece’s box where the one piece rule puts its footprint', () => {
+    const piece = { x: 500, y: 400, width: 1000, depth: 600, rotation: 30 };
+    expect(pieceRing(piece)).toEqual(pieceFootprintMm(piece));
+  });
+
+  it('keeps the holding area beside the room in a wide panel and below it in a tall one', () => {
+    const right = planLayout(shell, [held], 'right');
+    expect(right.holding.x).toBeGreaterThan(right.roomBounds.maxX);
+    expect(inHolding(right, right.holding.slots.chair)).toBe(true);
+    expect(inHolding(right, [2000, 1500])).toBe(false);
+    const below = planLayout(shell, [held], 'below');
+    expect(below.holding.y).toBeGreaterThan(below.roomBounds.maxY);
+    expect(inHolding(below, below.holding.slots.chair)).toBe(true);
+    expect(inHolding(below, [2000, 1500])).toBe(false);
   });
 });
