@@ -4,16 +4,10 @@ import { describe, expect, it } from 'vitest';
 import { pieceFootprintMm } from '../../../../../shared/geometry/piece';
 import { pieceSchema } from '../../../../../shared/schemas/option';
 import { roomShellSchema } from '../../../../../shared/schemas/room';
+import { rectangleShell } from '../../../../../tests/fixtures/commands';
 import { inHolding, pieceRing, planLayout, ringPath } from './plan-geometry';
 
-const shell = roomShellSchema.parse({
-  outline: [
-    [0, 0],
-    [4000, 0],
-    [4000, 3000],
-    [0, 3000],
-  ],
-});
+const shell = roomShellSchema.parse(rectangleShell);
 const held = pieceSchema.parse({
   id: 'chair',
   name: 'Chair',
@@ -46,10 +40,10 @@ describe('plan geometry', () => {
     const right = planLayout(shell, [held], 'right');
     expect(right.holding.x).toBeGreaterThan(right.roomBounds.maxX);
     expect(inHolding(right, right.holding.slots.chair)).toBe(true);
-    expect(inHolding(right, [2000, 1500])).toBe(false);
+    expect(inHolding(right, [2100, 1800])).toBe(false);
     const below = planLayout(shell, [held], 'below');
     expect(below.holding.y).toBeGreaterThan(below.roomBounds.maxY);
     expect(inHolding(below, below.holding.slots.chair)).toBe(true);
-    expect(inHolding(below, [2000, 1500])).toBe(false);
+    expect(inHolding(below, [2100, 1800])).toBe(false);
   });
 });

@@ -83,6 +83,8 @@ export function PlanView(props: Props) {
   });
   const drag = g.drag;
   const ghost = drag?.kind === 'piece' && drag.ghost ? { id: drag.id, at: drag.ghost } : undefined;
+  // What every drawing of the room itself takes: the layout, the selection and the line width.
+  const drawn = { layout, selection, stroke };
   const flagged = new Set([...(props.flaggedPieceIds ?? []), ...(props.highlight?.pieceIds ?? [])]);
 
   return (
@@ -107,38 +109,25 @@ export function PlanView(props: Props) {
       )}
       <WallsLayer
         shell={shell}
-        layout={layout}
-        selection={selection}
+        {...drawn}
         pickable={wallsPickable(step)}
-        stroke={stroke}
         onFloorPointerDown={g.onBackgroundPointerDown}
         onWallPointerDown={g.onWallPointerDown}
       />
       <OpeningsLayer
         shell={shell}
-        layout={layout}
-        selection={selection}
+        {...drawn}
         draggable={step === 'openings' && editable}
-        stroke={stroke}
         onOpeningPointerDown={g.onOpeningPointerDown}
       />
-      <DimensionsLayer
-        layout={layout}
-        selection={selection}
-        unit={unit}
-        stroke={stroke}
-        text={text}
-        onWallLengthPointerDown={g.onWallLengthPointerDown}
-      />
+      <DimensionsLayer {...drawn} unit={unit} text={text} onWallLengthPointerDown={g.onWallLengthPointerDown} />
       <PiecesLayer
+        {...drawn}
         pieces={pieces}
-        layout={layout}
-        selection={selection}
         flagged={flagged}
         ghost={ghost}
         movable={movable}
         turnable={editable && step === 'furnish'}
-        stroke={stroke}
         text={text}
         onPiecePointerDown={g.onPiecePointerDown}
         onTurnPointerDown={g.onTurnPointerDown}

@@ -1,8 +1,30 @@
 // The plan's background: a fine grid with a bolder line every metre, reaching past the view on all
 // sides; pressing it pans the plan (or places a corner while drawing an outline).
-import type { PointerEvent } from 'react';
+import type { PointerEvent, ReactNode } from 'react';
 import { planColour, planGrid, planStroke } from '../plan-style';
 import type { ViewBox } from '../plan-viewport';
+
+/** One square of a grid, its top and left edges drawn; `children` go beneath the lines. */
+function GridPattern({
+  id,
+  size,
+  colour,
+  width,
+  children,
+}: {
+  id: string;
+  size: number;
+  colour: string;
+  width: number;
+  children?: ReactNode;
+}) {
+  return (
+    <pattern id={id} width={String(size)} height={String(size)} patternUnits="userSpaceOnUse">
+      {children}
+      <path d={`M${size} 0H0V${size}`} fill="none" stroke={colour} strokeWidth={width} />
+    </pattern>
+  );
+}
 
 export function GridLayer({
   view,
@@ -13,28 +35,18 @@ export function GridLayer({
   stroke: number;
   onPointerDown: (e: PointerEvent) => void;
 }) {
-  const minor = planGrid.minorMm;
-  const major = planGrid.majorMm;
   return (
     <>
       <defs>
-        <pattern id="plan-grid" width={String(minor)} height={String(minor)} patternUnits="userSpaceOnUse">
-          <path
-            d={`M${minor} 0H0V${minor}`}
-            fill="none"
-            stroke={planColour.gridMinor}
-            strokeWidth={planStroke.gridMinor * stroke}
-          />
-        </pattern>
-        <pattern id="plan-grid-major" width={String(major)} height={String(major)} patternUnits="userSpaceOnUse">
-          <rect width={String(major)} height={String(major)} fill="url(#plan-grid)" />
-          <path
-            d={`M${major} 0H0V${major}`}
-            fill="none"
-            stroke={planColour.gridMajor}
-            strokeWidth={planStroke.gridMajor * stroke}
-          />
-        </pattern>
+        <GridPattern id="plan-grid" size={planGrid.minorMm} colour={planColour.gridMinor} width={planStroke.gridMinor * stroke} />
+        <GridPattern
+          id="plan-grid-major"
+          size={planGrid.majorMm}
+          colour={planColour.gridMajor}
+          width={planStroke.gridMajor * stroke}
+        >
+          <rect width={String(planGrid.majorMm)} height={String(planGrid.majorMm)} fill="url(#plan-grid)" />
+        </GridPattern>
       </defs>
       <rect
         x={view.x - view.w}
