@@ -6,7 +6,7 @@ import type { Finish } from '../../../../shared/schemas/finish';
 import type { OptionDoc, Piece } from '../../../../shared/schemas/option';
 import { assignFinish, updatePiece, type Command, type FinishSurface } from '../../../../shared/commands';
 import { inputClass } from '../../../components/ui/field';
-import type { Selection } from './plan-geometry';
+import type { Selection } from './plan/plan-geometry';
 
 type Target = 'floor' | 'ceiling' | 'walls' | 'wall' | 'piece';
 

@@ -22,7 +22,7 @@ import { CommitTextField } from '../../../components/ui/commit-field';
 import { numberParser, textParser, useCommitText, type Parsed } from '../../../components/ui/use-commit-text';
 import type { FieldRun } from './outline-panel';
 import { LengthField } from '../../../components/ui/length-field';
-import { placedNear, type Selection } from './plan-geometry';
+import { placedNear, type Selection } from './plan/plan-geometry';
 import { KindDrawing, KindPicker } from './kind-drawing';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {

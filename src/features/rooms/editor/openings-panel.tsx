@@ -9,7 +9,7 @@ import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
-import type { Selection } from './plan-geometry';
+import type { Selection } from './plan/plan-geometry';
 import type { FieldRun } from './outline-panel';
 
 const TYPE_WORD: Record<Opening['type'], string> = { door: 'Door', window: 'Window', passage: 'Passage' };

@@ -18,7 +18,7 @@ import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { Notice } from '../../../components/ui/layout';
 import { useCommitText } from '../../../components/ui/use-commit-text';
-import type { Selection } from './plan-geometry';
+import type { Selection } from './plan/plan-geometry';
 
 /** A gap smaller than this between the last corner and the first counts as closed (plan mm). */
 export const CLOSED_GAP_MM = 1;
