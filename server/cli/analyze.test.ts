@@ -1,3 +1,5 @@
+// Tests the analyze command run as a child process: take-off numbers against the README's design
+// example and hand-worked rooms, its flags, its refusals and exit codes, and its fit check findings.
 import { execFile } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';

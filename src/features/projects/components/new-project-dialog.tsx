@@ -1,3 +1,4 @@
+// The new project dialog: name and address, and an existing client or a new one; opens the project once made.
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/button';

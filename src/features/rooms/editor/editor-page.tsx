@@ -1,3 +1,6 @@
+// The room editor's page: the step bar (outline, openings, furnish, finishes, check), the plan and the
+// 3D preview side by side or by turns, the options bar, the keys and what saving says. The editing
+// itself lives in use-room-editor.ts; each step's panel in its own file.
 import {
   lazy,
   Suspense,
@@ -29,8 +32,8 @@ import { FurnishPanel } from './furnish-panel';
 import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
 import { OutlinePanel } from './outline-panel';
-import { PlanView } from './plan-view';
-import { roomCentre, type Selection } from './plan-geometry';
+import { PlanView } from './plan/plan-view';
+import { roomCentre, type Selection } from './plan/plan-geometry';
 import { EDITOR_STEPS, type EditorStep } from './steps';
 import { useRoomEditor, type Frozen, type SaveState } from './use-room-editor';
 import { SPLIT_KEY_STEP, SPLIT_MAX, SPLIT_MIN, useEditorView } from './use-editor-view';

@@ -1,3 +1,5 @@
+// The room editor's Check step: the walkway width setting, the fit check findings (pick one to highlight
+// its pieces), reminders for tall pieces, and the room's take-off.
 import { MAX_WALKWAY_MM, MIN_WALKWAY_MM } from '../../../../../shared/analysis/fit/clearances';
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../../shared/schemas/option';
