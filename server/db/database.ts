@@ -202,6 +202,8 @@ export interface QueuedMailTable {
   id: Generated<string>;
   studio_id: string;
   project_id: string | null;
+  /** The invitation this mail carries, if it is one (deleted with it). */
+  invite_id: string | null;
   kind: 'invitation' | 'presentation' | 'choice';
   recipient: string;
   subject: string;

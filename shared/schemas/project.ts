@@ -3,7 +3,7 @@
 import { z } from 'zod';
 import { emailSchema } from './studio';
 import { nameText, optionalText, sortSchema } from './common';
-import { sentMailKindSchema } from './outbox';
+import { queuedMailStateSchema, sentMailKindSchema } from './outbox';
 
 export const projectStateSchema = z.enum(['draft', 'presented', 'decided', 'archived']);
 export type ProjectState = z.infer<typeof projectStateSchema>;
@@ -75,10 +75,6 @@ export const projectSummarySchema = z.object({
   createdAt: z.string(),
 });
 export type ProjectSummary = z.infer<typeof projectSummarySchema>;
-
-/** Queued mail's progress: not tried yet, gone, being tried again, given up on. */
-export const queuedMailStateSchema = z.enum(['sending', 'sent', 'failing', 'failed']);
-export type QueuedMailState = z.infer<typeof queuedMailStateSchema>;
 
 /** A message about the project that nobody waited for (a client's choice told to the designer) and how it is going. */
 export const projectMailSchema = z.object({

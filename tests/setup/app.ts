@@ -88,6 +88,21 @@ export function startTestApp(deps: AppDeps): Pick<TestApp, 'app' | 'settled' | '
   };
 }
 
+/** The newest mail to `email` once the job queue has sent what it holds (invitations go through it). */
+export async function mailTo(t: Pick<TestApp, 'mail' | 'settled'>, email: string): Promise<MailMessage> {
+  await t.settled();
+  const mail = t.mail.findLast((m) => m.to === email);
+  if (!mail) throw new Error(`no mail to ${email}`);
+  return mail;
+}
+
+/** The token in the newest invitation mailed to `email`. */
+export async function inviteToken(t: Pick<TestApp, 'mail' | 'settled'>, email: string): Promise<string> {
+  const token = (await mailTo(t, email)).text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
+  if (!token) throw new Error('no invite link in the mail');
+  return token;
+}
+
 let counter = 0;
 /** A unique e-mail per call, so test files never collide in the shared test database. */
 export function uniqueEmail(tag: string): string {
@@ -111,9 +126,7 @@ export async function addMember(t: TestApp, owner: request.Agent, role: 'owner' 
   const email = uniqueEmail(role);
   const res = await owner.post('/api/studio/invites').send({ email, role });
   if (res.status !== 201) throw new Error(`invite failed: ${res.status} ${JSON.stringify(res.body)}`);
-  const mail = t.mail.findLast((m) => m.to === email);
-  const token = mail?.text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
-  if (!token) throw new Error('no invite link in the mail');
+  const token = await inviteToken(t, email);
   const agent = request.agent(t.app);
   const accepted = await agent
     .post(`/api/invites/${token}/accept`)

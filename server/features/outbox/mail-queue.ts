@@ -1,4 +1,4 @@
-// Mail nobody waits for (a client's choice told to the designer) goes through the job queue: the
+// Mail nobody waits for (a client's choice told to the designer, an invitation) goes through the job queue: the
 // message is kept in queued_mail and a job sends it, retrying with backoff while the mail server is
 // away. The project page reads each message's state (sending, sent, failing, failed).
 import type { AppConfig } from '../../config';
@@ -45,12 +45,13 @@ interface MailJobData {
 export async function queueStudioMail(
   db: Db,
   jobs: JobQueue,
-  mail: MailMessage & { studioId: string; projectId: string | null; kind: SentMailKind },
+  mail: MailMessage & { studioId: string; projectId: string | null; inviteId?: string; kind: SentMailKind },
 ): Promise<void> {
   const run = async (trx: Db) => {
     const mailId = await insertQueuedMail(trx, {
       studioId: mail.studioId,
       projectId: mail.projectId,
+      inviteId: mail.inviteId ?? null,
       kind: mail.kind,
       to: mail.to,
       subject: mail.subject,

@@ -2,7 +2,7 @@
 // at a time, newest first) and reads that studio's sent mail.
 import type { Db } from '../../db/database';
 import type { SentMailKind } from '../../../shared/schemas/outbox';
-import type { QueuedMailState } from '../../../shared/schemas/project';
+import type { QueuedMailState } from '../../../shared/schemas/outbox';
 
 export async function insertSentMail(
   db: Db,
@@ -63,6 +63,7 @@ export async function insertQueuedMail(
   v: {
     studioId: string;
     projectId: string | null;
+    inviteId?: string | null;
     kind: SentMailKind;
     to: string;
     subject: string;
@@ -75,6 +76,7 @@ export async function insertQueuedMail(
     .values({
       studio_id: v.studioId,
       project_id: v.projectId,
+      invite_id: v.inviteId ?? null,
       kind: v.kind,
       recipient: v.to,
       subject: v.subject,

@@ -130,29 +130,34 @@ export function createJobQueue(opts: {
       for (const k of ordered) {
         const ids: string[] = [];
         for (let i = 0; i < k.policy.concurrency; i += 1) {
-          ids.push(
-            await b.work<unknown>(
-              k.name,
-              { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: POLL_SECONDS },
-              async ([job]) => {
-                try {
-                  await k.handler(job.data as never, {
-                    id: job.id,
-                    retryCount: job.retryCount,
-                    retryLimit: job.retryLimit,
-                    output: job.output,
-                  });
-                } catch (err) {
-                  const last = job.retryCount >= job.retryLimit;
-                  logger.warn(
-                    { err, job: k.name, jobId: job.id, retryCount: job.retryCount },
-                    last ? 'job failed for good' : 'job failed, will retry',
-                  );
-                  throw err;
-                }
-              },
-            ),
+          // pg-boss waits a polling interval after every batch, even a full one: a worker that has
+          // just done a job tells itself to look again at once, so a queue of work drains
+          // back to back (one job per interval otherwise) and the interval only applies when idle.
+          let self = '';
+          self = await b.work<unknown>(
+            k.name,
+            { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: POLL_SECONDS },
+            async ([job]) => {
+              try {
+                await k.handler(job.data as never, {
+                  id: job.id,
+                  retryCount: job.retryCount,
+                  retryLimit: job.retryLimit,
+                  output: job.output,
+                });
+              } catch (err) {
+                const last = job.retryCount >= job.retryLimit;
+                logger.warn(
+                  { err, job: k.name, jobId: job.id, retryCount: job.retryCount },
+                  last ? 'job failed for good' : 'job failed, will retry',
+                );
+                throw err;
+              } finally {
+                if (self) b.notifyWorker(self);
+              }
+            },
           );
+          ids.push(self);
         }
         workerIds.set(k.name, ids);
       }

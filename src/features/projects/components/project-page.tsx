@@ -9,6 +9,7 @@ import { textParser, asIs } from '../../../components/ui/use-commit-text';
 import { Badge, Card, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { commitAnswer, errorMessage } from '../../../lib/api';
 import { formatDateTime, formatRelative } from '../../../lib/format';
+import { MAIL_STATE_TEXT } from '../../../lib/queued-mail';
 import { useCanEdit } from '../../../lib/session';
 import { useProject, useReopenProject, useUpdateProject } from '../api/projects';
 import type { ProjectMail } from '../../../../shared/schemas/project';
@@ -123,13 +124,6 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
   );
 }
 
-const MAIL_STATE: Record<ProjectMail['state'], string> = {
-  sending: 'Sending…',
-  sent: 'Sent',
-  failing: 'Not sent yet: trying again',
-  failed: 'Could not be sent',
-};
-
 /** The project's mail nobody waits for (a client's choice told to the designer), each as sent or failing. */
 function MailCard({ mail }: { mail: ProjectMail[] }) {
   return (
@@ -139,7 +133,7 @@ function MailCard({ mail }: { mail: ProjectMail[] }) {
           <li key={m.id}>
             <span className="block font-semibold">{m.subject}</span>
             <span className="block text-sm text-ink-soft">
-              To {m.to} · {MAIL_STATE[m.state]}
+              To {m.to} · {MAIL_STATE_TEXT[m.state]}
               {m.state === 'sent' && m.sentAt ? ` ${formatRelative(m.sentAt)}` : ''}
               {m.attempts > 0 && m.state !== 'sent' ? ` (${m.attempts} ${m.attempts === 1 ? 'try' : 'tries'} failed)` : ''}
             </span>
