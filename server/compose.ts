@@ -19,8 +19,9 @@ export function createServices(deps: AppDeps): AppServices {
     logger,
     schema: deps.jobsSchema,
     work: deps.config.WORKERS > 0,
+    maintenanceSeconds: deps.config.JOB_MAINTENANCE_SECONDS,
     kinds: [
-      ...photoJobKinds({ db: deps.db, storage, logger }, Math.max(1, deps.config.WORKERS)),
+      ...photoJobKinds({ db: deps.db, storage, logger }, Math.max(1, deps.config.WORKERS), deps.config.PHOTO_JOB_TIMEOUT_SECONDS),
       ...mailJobKinds({ db: deps.db, mailer: deps.mailer, config: deps.config, logger }),
     ],
   });

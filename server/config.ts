@@ -52,6 +52,10 @@ const envSchema = z
     // pixel limit, hence at most 2); it also sends queued mail unless 0. 0 on an app instance leaves
     // all of it to worker processes (npm run worker).
     WORKERS: z.coerce.number().int().min(0).max(2).default(1),
+    // A photo job running longer than this has failed (its worker died or hung) and is tried again.
+    PHOTO_JOB_TIMEOUT_SECONDS: z.coerce.number().int().min(10).max(3600).default(180),
+    // How often the job queue looks for jobs that ran out of time (and tidies finished ones).
+    JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).max(600).default(30),
   })
   .refine((c) => c.STORAGE !== 's3' || c.S3_BUCKET, { path: ['S3_BUCKET'], message: 'is required when STORAGE=s3' });
 

@@ -13,8 +13,8 @@ export const PHOTO_GAVE_UP_JOB = 'photo-gave-up';
 /**
  * Photo jobs: a photo that could not be decoded fails at once (processing it again would fail the
  * same way); anything else (storage or database away, the process killed) is retried 3 times,
- * after 10–20 s, 20–40 s and 40–80 s. A run taking over 3 minutes has failed (a 12 MP photo takes
- * a few seconds; the pixel limit's largest well under a minute).
+ * after 10–20 s, 20–40 s and 40–80 s. A run taking over 3 minutes (PHOTO_JOB_TIMEOUT_SECONDS) has
+ * failed (a 12 MP photo takes a few seconds; the pixel limit's largest well under a minute).
  */
 export const PHOTO_JOB_POLICY = { retryLimit: 3, retryDelaySeconds: 10, timeoutSeconds: 180 } as const;
 
@@ -22,10 +22,14 @@ const errorMessage = (output: unknown): string =>
   output && typeof output === 'object' && 'message' in output ? String(output.message) : 'the job failed';
 
 /** The finishes' job kinds; `concurrency` photos are processed at once by a working process. */
-export function photoJobKinds(deps: { db: Db; storage: FileStorage; logger: Logger }, concurrency: number): JobKind<never>[] {
+export function photoJobKinds(
+  deps: { db: Db; storage: FileStorage; logger: Logger },
+  concurrency: number,
+  timeoutSeconds: number = PHOTO_JOB_POLICY.timeoutSeconds,
+): JobKind<never>[] {
   const process: JobKind<PhotoJobData> = {
     name: PHOTO_JOB,
-    policy: { ...PHOTO_JOB_POLICY, concurrency, deadLetter: PHOTO_GAVE_UP_JOB },
+    policy: { ...PHOTO_JOB_POLICY, timeoutSeconds, concurrency, deadLetter: PHOTO_GAVE_UP_JOB },
     handler: (data) => runPhotoJob(deps.db, deps.storage, data.finishId, data.revision),
   };
   const gaveUp: JobKind<PhotoJobData> = {

@@ -86,6 +86,8 @@ export function createJobQueue(opts: {
   /** False on an app instance that leaves the work to worker processes: it only sends. */
   work: boolean;
   schema?: string;
+  /** How often pg-boss looks for jobs that ran out of time; MAINTENANCE_SECONDS unless set. */
+  maintenanceSeconds?: number;
 }): JobQueue {
   const { logger } = opts;
   const schema = opts.schema ?? JOBS_SCHEMA;
@@ -103,7 +105,7 @@ export function createJobQueue(opts: {
       application_name: 'parlour-jobs',
       schedule: false,
       supervise: true,
-      maintenanceIntervalSeconds: MAINTENANCE_SECONDS,
+      maintenanceIntervalSeconds: opts.maintenanceSeconds ?? MAINTENANCE_SECONDS,
       archiveCompletedAfterSeconds: KEEP_DONE_SECONDS,
       deleteAfterDays: KEEP_DELETED_DAYS,
     });
