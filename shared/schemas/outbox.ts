@@ -6,6 +6,10 @@ import { z } from 'zod';
 export const sentMailKindSchema = z.enum(['invitation', 'presentation', 'choice']);
 export type SentMailKind = z.infer<typeof sentMailKindSchema>;
 
+/** Queued mail's progress: not tried yet, gone, being tried again, given up on. */
+export const queuedMailStateSchema = z.enum(['sending', 'sent', 'failing', 'failed']);
+export type QueuedMailState = z.infer<typeof queuedMailStateSchema>;
+
 export const OUTBOX_PAGE_SIZE = 20;
 export const OUTBOX_MAX_PAGE_SIZE = 50;
 
