@@ -4,16 +4,26 @@ import type { AppDeps, AppServices } from './context';
 import { createLogger } from './services/logging/logger';
 import { dataDirStorage } from './services/storage/local-disk';
 import { verifyPassword } from './services/auth/passwords';
-import { createJobQueue } from './services/images/queue';
-import { PHOTO_CONCURRENCY, runPhotoJob } from './features/finishes/finishes.service';
+import { createJobQueue } from './services/jobs/job-queue';
+import { photoJobKinds } from './features/finishes/finishes.jobs';
+import { mailJobKinds } from './features/outbox/mail-queue';
 import { ClientLinkCache } from './features/presentations/client-cache';
 
 export function createServices(deps: AppDeps): AppServices {
   const logger = deps.logger ?? createLogger({ level: deps.config.logLevel });
   const storage = deps.storage ?? dataDirStorage(deps.config.DATA_DIR);
-  const photos = createJobQueue((id) => runPhotoJob(deps.db, storage, id), {
-    concurrency: PHOTO_CONCURRENCY,
-    onError: (id, err) => logger.error({ err, finishId: id }, 'photo processing failed unexpectedly'),
+  // The queue connects on first use (or when the server starts it), so an app that never sends a
+  // job holds no extra connection.
+  const jobs = createJobQueue({
+    connectionString: deps.config.DATABASE_URL,
+    logger,
+    schema: deps.jobsSchema,
+    work: deps.config.WORKERS > 0,
+    maintenanceSeconds: deps.config.JOB_MAINTENANCE_SECONDS,
+    kinds: [
+      ...photoJobKinds({ db: deps.db, storage, logger }, Math.max(1, deps.config.WORKERS), deps.config.PHOTO_JOB_TIMEOUT_SECONDS),
+      ...mailJobKinds({ db: deps.db, mailer: deps.mailer, config: deps.config, logger }),
+    ],
   });
   // The link cache opens its listening connection on first use, so an app that never serves a
   // presentation link holds no extra connection.
@@ -25,12 +35,13 @@ export function createServices(deps: AppDeps): AppServices {
     storage,
     logger,
     verifyPassword: deps.verifyPassword ?? verifyPassword,
-    photos,
+    jobs,
     links,
   };
 }
 
-/** Stops what the services hold open (the link cache's connection and its pending counts). */
+/** Stops what the services hold open (the job queue, the link cache's connection and its pending counts). */
 export async function closeServices(services: AppServices): Promise<void> {
+  await services.jobs.stop();
   await services.links.close();
 }

@@ -48,6 +48,14 @@ const envSchema = z
     // New studios per hour from one client address (IPv6 counted per /64): sign-up is open, so this
     // is what keeps per-studio limits from being beaten by signing up again. Tests raise it.
     SIGN_UP_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(5),
+    // Photos this process processes at once from the job queue (each needs a few hundred MB at the
+    // pixel limit, hence at most 2); it also sends queued mail unless 0. 0 on an app instance leaves
+    // all of it to worker processes (npm run worker).
+    WORKERS: z.coerce.number().int().min(0).max(2).default(1),
+    // A photo job running longer than this has failed (its worker died or hung) and is tried again.
+    PHOTO_JOB_TIMEOUT_SECONDS: z.coerce.number().int().min(10).max(3600).default(180),
+    // How often the job queue looks for jobs that ran out of time (and tidies finished ones).
+    JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).max(600).default(30),
   })
   .refine((c) => c.STORAGE !== 's3' || c.S3_BUCKET, { path: ['S3_BUCKET'], message: 'is required when STORAGE=s3' });
 

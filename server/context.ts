@@ -7,7 +7,7 @@ import type { Mailer } from './services/mail/mailer';
 import type { FileStorage } from './services/storage/storage';
 import type { Logger } from './services/logging/logger';
 import type { PasswordVerifier } from './services/auth/passwords';
-import type { JobQueue } from './services/images/queue';
+import type { JobQueue } from './services/jobs/job-queue';
 import type { ClientLinkCache } from './features/presentations/client-cache';
 
 /** The outside world a server is started with. */
@@ -21,6 +21,8 @@ export interface AppDeps {
   logger?: Logger;
   /** Checks a password at sign-in; scrypt when not given (tests count the calls). */
   verifyPassword?: PasswordVerifier;
+  /** The job queue's schema; `pgboss` when not given (each test app has its own). */
+  jobsSchema?: string;
 }
 
 /** Every service of one running app, built once by createServices (server/compose.ts). */
@@ -32,8 +34,8 @@ export interface AppServices {
   /** The process logger; a request's own (with its id) is `ctx.log` in a route. */
   logger: Logger;
   verifyPassword: PasswordVerifier;
-  /** Photo processing, off the request path. */
-  photos: JobQueue;
+  /** Work off the request path (photo processing, mail nobody waits for), in PostgreSQL: see server/services/jobs. */
+  jobs: JobQueue;
   /** Presentation answers kept ready per link on this instance. */
   links: ClientLinkCache;
 }

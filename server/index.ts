@@ -16,6 +16,8 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
   const deps: AppDeps = { db, mailer, config, logger, storage: storageFromConfig(config) };
   const { app, services } = createAppWithServices(deps);
+  // Started now rather than on the first job: what an earlier run left queued is picked up at once.
+  await services.jobs.start();
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });

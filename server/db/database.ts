@@ -198,6 +198,25 @@ export interface SentMailTable {
   created_at: Timestamp; // milliseconds only: the Outbox pages by it
 }
 
+export interface QueuedMailTable {
+  id: Generated<string>;
+  studio_id: string;
+  project_id: string | null;
+  /** The invitation this mail carries, if it is one (deleted with it). */
+  invite_id: string | null;
+  kind: 'invitation' | 'presentation' | 'choice';
+  recipient: string;
+  subject: string;
+  /** The message, until it is sent. */
+  text_body: string | null;
+  html_body: string | null;
+  state: Generated<'sending' | 'sent' | 'failing' | 'failed'>;
+  attempts: Generated<number>;
+  last_error: string | null;
+  created_at: Timestamp;
+  sent_at: Date | null;
+}
+
 export interface Database {
   rooms: RoomsTable;
   options: OptionsTable;
@@ -215,6 +234,7 @@ export interface Database {
   choices: ChoicesTable;
   rate_limit_counts: RateLimitCountsTable;
   sent_mail: SentMailTable;
+  queued_mail: QueuedMailTable;
 }
 
 export type Db = Kysely<Database>;

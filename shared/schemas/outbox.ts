@@ -1,8 +1,14 @@
+// The outbox's shared shapes: what a sent e-mail was for, the page query with its cursor, and the
+// summaries, messages and pages the outbox API returns.
 import { z } from 'zod';
 
 /** What a sent e-mail was for: an invitation to the studio, a presentation link, a choice notification. */
 export const sentMailKindSchema = z.enum(['invitation', 'presentation', 'choice']);
 export type SentMailKind = z.infer<typeof sentMailKindSchema>;
+
+/** Queued mail's progress: not tried yet, gone, being tried again, given up on. */
+export const queuedMailStateSchema = z.enum(['sending', 'sent', 'failing', 'failed']);
+export type QueuedMailState = z.infer<typeof queuedMailStateSchema>;
 
 export const OUTBOX_PAGE_SIZE = 20;
 export const OUTBOX_MAX_PAGE_SIZE = 50;

@@ -1,6 +1,9 @@
+// The project schemas: project states, client bodies and records, creating and changing a project,
+// the project list query, and the summary and detail the projects API returns.
 import { z } from 'zod';
 import { emailSchema } from './studio';
 import { nameText, optionalText, sortSchema } from './common';
+import { queuedMailStateSchema, sentMailKindSchema } from './outbox';
 
 export const projectStateSchema = z.enum(['draft', 'presented', 'decided', 'archived']);
 export type ProjectState = z.infer<typeof projectStateSchema>;
@@ -73,9 +76,25 @@ export const projectSummarySchema = z.object({
 });
 export type ProjectSummary = z.infer<typeof projectSummarySchema>;
 
+/** A message about the project that nobody waited for (a client's choice told to the designer) and how it is going. */
+export const projectMailSchema = z.object({
+  id: z.string(),
+  kind: sentMailKindSchema,
+  to: z.string(),
+  subject: z.string(),
+  state: queuedMailStateSchema,
+  /** Tries that failed so far. */
+  attempts: z.number().int(),
+  queuedAt: z.string(),
+  sentAt: z.string().nullable(),
+});
+export type ProjectMail = z.infer<typeof projectMailSchema>;
+
 /** GET /api/projects/:id: the project and how to reach its client (its rooms are GET /api/projects/:projectId/rooms). */
 export const projectDetailSchema = z.object({
   project: projectSummarySchema,
   client: clientSchema.pick({ id: true, name: true, email: true, phone: true }).nullable(),
+  /** The project's queued mail, newest first (the last 20). */
+  mail: z.array(projectMailSchema),
 });
 export type ProjectDetail = z.infer<typeof projectDetailSchema>;

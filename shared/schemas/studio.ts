@@ -1,6 +1,9 @@
+// The studio schemas: member roles, e-mail, sign-in and invitation bodies, members, the studio's
+// currency and locale for prices, and the session and invitation info the API returns.
 import { z } from 'zod';
 import { PASSWORD_MAX_LENGTH } from './password-rule';
 import { nameText } from './common';
+import { queuedMailStateSchema } from './outbox';
 import { canonicalLocale, isCurrency } from '../units/money';
 
 export const roleSchema = z.enum(['owner', 'designer', 'viewer']);
@@ -65,6 +68,8 @@ export const inviteInfoSchema = z.object({
   createdAt: z.string(),
   expiresAt: z.string(),
   acceptedAt: z.string().nullable(),
+  /** How the invitation's mail is going (sending, sent, failing, failed): in the studio's own lists. */
+  mailState: queuedMailStateSchema.optional(),
 });
 export type InviteInfo = z.infer<typeof inviteInfoSchema>;
 

@@ -1,7 +1,9 @@
+// API tests for sign-up, sign-in and sign-out, members and roles, choosing a password, sign-in
+// throttling under parallel attempts and the sign-up limit per client address.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import { hashPassword, verifyPassword } from '../../server/services/auth/passwords';
-import { addMember, createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
+import { addMember, createTestApp, inviteToken, mailTo, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 
 /** `parlour_session=…` from an answer's Set-Cookie, as a browser would send it back. */
 function sessionCookie(res: request.Response): string {
@@ -128,7 +130,7 @@ describe('members and roles', () => {
   it('invites a member by e-mail; the link signs them in with the invited role', async () => {
     const { agent: owner } = await signUpStudio(t.app, 'Invite Studio');
     const { agent: designer, email } = await addMember(t, owner, 'designer');
-    const mail = t.mail.findLast((m) => m.to === email)!;
+    const mail = await mailTo(t, email);
     expect(mail.subject).toMatch(/Invite Studio/);
     expect(mail.text).toMatch(/^.*http:\/\/parlour\.test\/invite\//m);
     const me = await designer.get('/api/auth/me');
@@ -141,7 +143,7 @@ describe('members and roles', () => {
     const { agent: owner } = await signUpStudio(t.app);
     const email = uniqueEmail('once');
     await owner.post('/api/studio/invites').send({ email, role: 'viewer' });
-    const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
+    const token = await inviteToken(t, email);
     expect((await request(t.app).get(`/api/invites/${token}`)).body.invite.role).toBe('viewer');
     expect(
       (await request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'V', password: 'correct-horse-battery' })).status,
@@ -206,7 +208,7 @@ describe('choosing a password', () => {
     const { agent: owner } = await signUpStudio(t.app);
     const email = uniqueEmail('joiner');
     await owner.post('/api/studio/invites').send({ email, role: 'designer' });
-    const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
+    const token = await inviteToken(t, email);
     const accept = (password: string) => request(t.app).post(`/api/invites/${token}/accept`).send({ name: 'Jo', password });
     expect((await accept('short-pass')).body.error.fields.password).toMatch(/at least 12 characters/);
     expect((await accept('qwerty123456')).body.error.fields.password).toMatch(/most common passwords/);

@@ -6,14 +6,14 @@ import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import { inject } from 'vitest';
-import { createApp, type AppDeps } from '../../server/app';
+import type { AppDeps } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { createDb } from '../../server/db/database';
 import type { MailMessage } from '../../server/services/mail/mailer';
 import { checkerboard, photoLike, rawToJpeg, rawToPng, rawToSharp, zeroPng } from '../../server/services/images/generate';
 import { textureFraction, textureRepeat } from '../../shared/geometry/texture-repeat';
 import type { Finish, PhotoFinish } from '../../shared/schemas/finish';
-import { TEST_SIGN_UP_LIMIT, addMember, signUpStudio, type TestApp } from '../setup/app';
+import { TEST_SIGN_UP_LIMIT, addMember, signUpStudio, startTestApp, type TestApp } from '../setup/app';
 import { seedDemoFinishes } from '../../server/cli/seed-finishes';
 import { dataDirStorage } from '../../server/services/storage/local-disk';
 import { toSceneFinish } from '../../shared/finishes/scene-finish';
@@ -39,7 +39,7 @@ beforeAll(async () => {
     SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
   });
   const deps: AppDeps = { db, mailer: { send: async (m) => void mail.push(m) }, config };
-  t = { app: createApp(deps), db, mail, close: () => db.destroy() };
+  t = { ...startTestApp(deps), db, mail };
   owner = (await signUpStudio(t.app, 'Finish Studio')).agent;
   viewer = (await addMember(t, owner, 'viewer')).agent;
   stranger = (await signUpStudio(t.app, 'Other Studio')).agent;

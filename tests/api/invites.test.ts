@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import request from 'supertest';
 import { sql } from 'kysely';
 import { createDb } from '../../server/db/database';
-import { createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
+import { createTestApp, inviteToken, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 
 let t: TestApp;
 beforeAll(() => {
@@ -17,7 +17,7 @@ async function invite(role: 'designer' | 'viewer' = 'designer') {
   const { agent } = await signUpStudio(t.app, 'Single Use Studio');
   const email = uniqueEmail('invited');
   expect((await agent.post('/api/studio/invites').send({ email, role })).status).toBe(201);
-  const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
+  const token = await inviteToken(t, email);
   return { owner: agent, email, token };
 }
 

@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import request from 'supertest';
 import { sql } from 'kysely';
-import { addMember, createTestApp, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
+import { addMember, createTestApp, inviteToken, signUpStudio, uniqueEmail, type TestApp } from '../setup/app';
 import { combOutline, starOutline } from '../../shared/geometry/test-outlines';
 import { compareAnswer } from '../../server/features/schedules/schedules.service';
 import { takeoffSettingsSchema } from '../../shared/analysis/takeoff-settings';
@@ -377,7 +377,7 @@ describe('names and versions (control characters, text-direction marks, 32-bit v
     const studio = await signUpStudio(t.app, 'Invite Studio');
     const email = uniqueEmail('invitee');
     await studio.agent.post('/api/studio/invites').send({ email, role: 'designer' }).expect(201);
-    const token = t.mail.findLast((m) => m.to === email)!.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1];
+    const token = await inviteToken(t, email);
     const res = await request(t.app)
       .post(`/api/invites/${token}/accept`)
       .send({ name: `Theo${RLO}`, password: 'correct-horse-battery' });

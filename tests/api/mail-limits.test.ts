@@ -96,6 +96,7 @@ describe('mails to one address from every studio together', () => {
     expect((await send(a, address)).status).toBe(200);
     expect((await invite(b.agent, address.toUpperCase())).status).toBe(201);
     expect((await send(c, `${local}+offer@${domain}`)).status).toBe(200);
+    await t.settled();
     expect(t.mail.filter((m) => recipientKey(m.to) === address)).toHaveLength(3);
 
     const before = await counted(PRESENTATION_MAIL_RATE.bucket, a.studioId);
@@ -109,6 +110,7 @@ describe('mails to one address from every studio together', () => {
     expect(await counted(PRESENTATION_MAIL_RATE.bucket, a.studioId)).toBe(before);
     const invited = await invite(c.agent, address);
     expectTooMany(invited, /has already been sent 3 e-mails from Parlour today\. Try again in [^,]+\.$/);
+    await t.settled();
     expect(t.mail.filter((m) => recipientKey(m.to) === address)).toHaveLength(3);
     // Nothing half-made: the refused invitation is not in the studio's list.
     const open = await c.agent.get('/api/studio/invites');

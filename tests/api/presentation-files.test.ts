@@ -7,7 +7,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { inject } from 'vitest';
-import { createApp, type AppDeps } from '../../server/app';
+import type { AppDeps } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { createDb } from '../../server/db/database';
 import { seedDemoFinishes } from '../../server/cli/seed-finishes';
@@ -15,7 +15,7 @@ import { dataDirStorage } from '../../server/services/storage/local-disk';
 import { photoLike, rawToJpeg } from '../../server/services/images/generate';
 import type { Finish, PhotoFinish } from '../../shared/schemas/finish';
 import type { ClientPresentation, PresentationSummary } from '../../shared/schemas/presentation';
-import { TEST_PRESENTATION_KEY, TEST_SIGN_UP_LIMIT, signUpStudio, type TestApp } from '../setup/app';
+import { TEST_PRESENTATION_KEY, TEST_SIGN_UP_LIMIT, signUpStudio, startTestApp, type TestApp } from '../setup/app';
 
 type Agent = ReturnType<typeof request.agent>;
 const SQUARE = {
@@ -61,7 +61,7 @@ beforeAll(async () => {
     SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
   });
   const deps: AppDeps = { db, mailer: { send: async () => undefined }, config };
-  t = { app: createApp(deps), db, mail: [], close: () => db.destroy() };
+  t = { ...startTestApp(deps), db, mail: [] };
 
   const mine = await studioWithDemoFinishes('Ashgrove Interiors');
   owner = mine.agent;

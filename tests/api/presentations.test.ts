@@ -462,6 +462,7 @@ describe('choices', () => {
     const first = await choose(token, room.id, room.options[0].id, 'Love the linen.');
     expect(first.status).toBe(200);
     expect(first.body).toMatchObject({ changed: true, choice: { optionId: room.options[0].id, comment: 'Love the linen.' } });
+    await t.settled();
     const notice = t.mail.slice(before);
     expect(notice.map((m) => m.to)).toEqual([designerEmail]);
     expect(notice[0].subject).toBe('Ada and Rui Penhale chose Option B for Sitting room (Larkspur flat)');
@@ -471,12 +472,14 @@ describe('choices', () => {
 
     const again = await choose(token, room.id, room.options[0].id, 'Love the linen.');
     expect(again.body).toEqual({ changed: false, choice: first.body.choice });
+    await t.settled();
     expect(t.mail.length).toBe(before + 1);
 
     await new Promise((r) => setTimeout(r, 5));
     const changed = await choose(token, room.id, room.options[2].id, 'Actually the walnut.');
     expect(changed.body.changed).toBe(true);
     expect(new Date(changed.body.choice.chosenAt).getTime()).toBeGreaterThan(new Date(first.body.choice.chosenAt).getTime());
+    await t.settled();
     expect(t.mail.length).toBe(before + 2);
 
     const summary = (await viewer.get(`/api/projects/${flat.projectId}/presentations`)).body
@@ -588,6 +591,7 @@ describe('choices', () => {
     await owner.delete(`/api/studio/members/${leaving.member.id}`);
     const before = t.mail.length;
     await choose(tokenOf(p), flat.rooms[0].id, flat.rooms[0].options[2].id);
+    await t.settled();
     const to = t.mail.slice(before).map((m) => m.to);
     expect(to).toHaveLength(1);
     expect(to[0]).toMatch(/^owner-/);

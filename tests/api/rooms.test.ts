@@ -1,3 +1,6 @@
+// API tests for rooms and options: create and list, saves with versions and conflicts, refused
+// shells, options added, duplicated, reordered, saved and deleted, and the README's example plan
+// file imported and exported.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -39,7 +42,7 @@ describe('rooms', () => {
     expect(list.body.rooms).toEqual([expect.objectContaining({ name: 'Living room', optionCount: 1, floorAreaM2: 15.12 })]);
     // The project's own answer counts its rooms; the list above is the one place that lists them.
     const page = await agent.get(`/api/projects/${projectId}`);
-    expect(Object.keys(page.body).sort()).toEqual(['client', 'project']);
+    expect(Object.keys(page.body).sort()).toEqual(['client', 'mail', 'project']);
     expect(page.body.project.roomCount).toBe(1);
   });
 

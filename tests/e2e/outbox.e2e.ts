@@ -32,6 +32,17 @@ describe('the Outbox', () => {
         if (res.status !== 201) throw new Error(`invite: ${res.status}`);
       }
     }, invited);
+    // Invitations' mail goes through the job queue: wait until every one has gone.
+    await expect
+      .poll(
+        () =>
+          owner.page.evaluate(async () => {
+            const { invites } = (await (await fetch('/api/studio/invites')).json()) as { invites: { mailState?: string }[] };
+            return invites.filter((i) => i.mailState !== 'sent').length;
+          }),
+        { timeout: 30_000 },
+      )
+      .toBe(0);
 
     // From the top bar, as from any page of the studio.
     await owner.page.goto('/projects');

@@ -251,6 +251,11 @@ describe('presentations', () => {
     expect(await item.getByText('“The hearth one, please. Could the loveseat be green?”').isVisible()).toBe(true);
     expect(await item.getByText(/Opened 1 time/).isVisible()).toBe(true);
     expect(await item.getByText(`Sent to ${clientEmail}`, { exact: false }).isVisible()).toBe(true);
+    // The designer's notice went through the job queue; the Mail card says once it has gone.
+    const projectMail = designer.page.getByTestId('project-mail');
+    await projectMail.getByText(`To ${designerEmail}`, { exact: false }).first().waitFor();
+    await expect.poll(() => projectMail.getByText('Sending…', { exact: false }).count(), { timeout: 15_000 }).toBe(0);
+    expect(await projectMail.getByText(`To ${designerEmail} · Sent`, { exact: false }).count()).toBe(2);
     await designer.page.screenshot({ path: join(shots, 'designer-choices.png'), fullPage: true });
 
     await designer.page.goto('/outbox');

@@ -1,6 +1,6 @@
 // npm run backup and npm run restore round-trip the demo studio: seeded into a throwaway database,
 // backed up, restored into another empty database and data folder; every table's row count, every
-// file's bytes and the presentation key come back, and the restored copy signs in.
+// file's bytes, the presentation key and the job queue's waiting work come back, and the restored copy signs in.
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
@@ -15,6 +15,8 @@ import { seedDemo, DEMO_SIGN_IN } from '../../server/cli/seed';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { tableCounts } from '../../scripts/lib/data-target';
+import { createJobQueue, JOBS_SCHEMA } from '../../server/services/jobs/job-queue';
+import { createLogger } from '../../server/services/logging/logger';
 import { siblingDatabase, type SiblingDatabase } from './lib/sibling-database';
 
 const root = resolve(import.meta.dirname, '../..');
@@ -73,6 +75,22 @@ beforeAll(async () => {
     else process.env.DATA_DIR = dataDir;
     await db.destroy();
   }
+  // Work waiting on the job queue at the time of the backup (as a photo or a mail would leave it):
+  // the queue's schema is backed up with the app's tables, so a restored copy finishes that work.
+  const jobs = createJobQueue({
+    connectionString: source.url,
+    logger: createLogger({ level: 'warn' }),
+    kinds: [
+      {
+        name: 'mail',
+        policy: { retryLimit: 1, retryDelaySeconds: 1, timeoutSeconds: 60, concurrency: 1 },
+        handler: async () => {},
+      },
+    ],
+    work: false,
+  });
+  await jobs.send('mail', { mailId: 'waiting-at-backup-time' });
+  await jobs.stop();
   // A start writes the link key beside the files; the backup must carry it.
   loadConfig({ DATABASE_URL: source.url, DATA_DIR: sourceDir });
 }, 120_000);
@@ -106,6 +124,17 @@ describe('backup and restore', () => {
       readFileSync(join(sourceDir, 'presentation-key'), 'utf8'),
     );
     expect(statSync(join(restoredDir, 'presentation-key')).mode & 0o777).toBe(0o600);
+    // The job queue's schema came back with its waiting job.
+    const client = new pg.Client({ connectionString: target.url });
+    await client.connect();
+    try {
+      const waiting = await client.query(
+        `select name, data->>'mailId' as mail_id, state from ${JOBS_SCHEMA}.job where name = 'mail'`,
+      );
+      expect(waiting.rows).toEqual([{ name: 'mail', mail_id: 'waiting-at-backup-time', state: 'created' }]);
+    } finally {
+      await client.end();
+    }
   });
 
   it('gives a restored copy that signs in and serves the demo’s files', async () => {

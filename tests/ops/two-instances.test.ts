@@ -1,7 +1,9 @@
 // Growing past one machine: two app instances on different ports against one database and one
 // S3-compatible store (s3rver on loopback). A session started on one continues on the other, a
 // photo uploaded through one is served by the other from the bucket, a client link works on
-// either and a withdrawal on one stops it on the other, and rate limits count across both.
+// either and a withdrawal on one stops it on the other, and rate limits count across both. Both
+// leave photo processing to a worker: a photo uploaded through an instance killed straight after
+// is processed all the same.
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
@@ -12,6 +14,8 @@ import sharp from 'sharp';
 import { createDb } from '../../server/db/database';
 import { migrateToLatest } from '../../server/db/migrate';
 import { startServer } from '../../server/index';
+import { startWorker } from '../../server/cli/worker';
+import { startServerProcess } from '../../scripts/lib/server-process';
 import { startStandInSmtp, type StandInSmtp } from '../../server/services/mail/stand-in-smtp';
 import { INVITE_RATE } from '../../server/features/studio/studio.service';
 import { SIGN_IN_RATE } from '../../server/features/auth/auth.service';
@@ -24,6 +28,9 @@ const NOTICE_WAIT_MS = 2000;
 const PROCESSING_WAIT_MS = 30_000;
 
 type Instance = Awaited<ReturnType<typeof startServer>>;
+let worker: Awaited<ReturnType<typeof startWorker>>;
+/** An instance's environment (set once the stores are up). */
+let env: (name: string, port: number) => Record<string, string>;
 const scratch = mkdtempSync(join(tmpdir(), 'parlour-two-'));
 let database: SiblingDatabase;
 let s3: S3rver;
@@ -61,7 +68,7 @@ interface ProcessedFinish {
   files: { swatchUrl: string | null };
 }
 
-/** Polls instance B until the photo uploaded through A has been processed (by A's queue). */
+/** Polls instance B until the photo uploaded through another instance has been processed (by the worker). */
 async function processedOnB(id: string): Promise<ProcessedFinish> {
   const until = Date.now() + PROCESSING_WAIT_MS;
   for (;;) {
@@ -85,7 +92,7 @@ beforeAll(async () => {
   });
   const { port: s3Port } = await s3.run();
   smtp = await startStandInSmtp({ port: 0, dir: join(scratch, 'outbox') });
-  const env = (name: string, port: number) => ({
+  env = (name: string, port: number) => ({
     DATABASE_URL: database.url,
     HOST: '127.0.0.1',
     PORT: String(port),
@@ -103,13 +110,16 @@ beforeAll(async () => {
     S3_SECRET_ACCESS_KEY: 'S3RVER',
     S3_FORCE_PATH_STYLE: 'true',
   });
-  a = await startServer(env('a', await freePort()));
-  b = await startServer(env('b', await freePort()));
+  // Both instances leave the job queue to a worker process of its own (here in the test's process).
+  a = await startServer({ ...env('a', await freePort()), WORKERS: '0' });
+  b = await startServer({ ...env('b', await freePort()), WORKERS: '0' });
+  worker = await startWorker(env('worker', 0));
 }, 60_000);
 
 afterAll(async () => {
   await a?.close();
   await b?.close();
+  await worker?.close();
   await smtp?.close();
   await s3?.close();
   await database?.drop();
@@ -160,6 +170,28 @@ describe('two instances, one database, one store', () => {
     expect(readdirSync(join(scratch, 's3'), { recursive: true }).some((f) => String(f).includes('derived'))).toBe(true);
     expect(existsSync(join(scratch, 'a', 'files'))).toBe(false);
     expect(existsSync(join(scratch, 'b', 'files'))).toBe(false);
+  });
+
+  it('processes on the worker a photo uploaded through an instance that was killed straight after', async () => {
+    const port = await freePort();
+    const killed = await startServerProcess({
+      port,
+      env: { ...env('killed', port), WORKERS: '0', LOG_LEVEL: 'warn' },
+      logFile: join(scratch, 'killed.log'),
+    });
+    const photo = await sharp({ create: { width: 800, height: 600, channels: 3, background: { r: 90, g: 120, b: 150 } } })
+      .jpeg()
+      .toBuffer();
+    const form = new FormData();
+    form.append('photos', new Blob([photo], { type: 'image/jpeg' }), 'slate.jpg');
+    const res = await fetch(`${killed.url}/api/finishes/photos`, { method: 'POST', headers: { cookie }, body: form });
+    expect(res.status).toBe(201);
+    const id = ((await res.json()) as { finishes: { id: string }[] }).finishes[0].id;
+    killed.child.kill('SIGKILL');
+    await killed.exited;
+    const finish = await processedOnB(id);
+    expect(finish.status).toBe('ready');
+    expect((await call(b, 'GET', finish.files.swatchUrl!)).status).toBe(200);
   });
 
   it('opens a client link on either, and a withdrawal on one stops it on the other', async () => {

@@ -2,7 +2,9 @@
 import { inject } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
-import { createApp, type AppDeps } from '../../server/app';
+import { sql } from 'kysely';
+import { createAppWithServices, type AppDeps } from '../../server/app';
+import { closeServices } from '../../server/compose';
 import { loadConfig } from '../../server/config';
 import { createDb, type Db } from '../../server/db/database';
 import type { MailMessage, Mailer } from '../../server/services/mail/mailer';
@@ -14,6 +16,8 @@ export interface TestApp {
   app: Express;
   db: Db;
   mail: MailMessage[];
+  /** Resolves once the app's job queue has nothing to run now and nothing running (a retry waiting its turn is not run). */
+  settled(): Promise<void>;
   close(): Promise<void>;
 }
 
@@ -47,8 +51,56 @@ export function createTestApp(options: TestAppOptions = {}): TestApp {
     SIGN_UP_LIMIT_PER_HOUR: TEST_SIGN_UP_LIMIT,
     ...options.env,
   });
-  const app = createApp({ db, mailer, config, verifyPassword: options.verifyPassword });
-  return { app, db, mail, close: () => db.destroy() };
+  const { app, settled, close } = startTestApp({ db, mailer, config, verifyPassword: options.verifyPassword });
+  return { app, db, mail, settled, close };
+}
+
+let apps = 0;
+const SETTLE_LIMIT_MS = 15_000;
+/**
+ * The app for `deps` with a job queue of its own (a schema of its own in the shared test database),
+ * so a job is worked by the app that sent it, with its mailer and storage. `close` stops the app's
+ * services, drops the queue's schema and closes `deps.db`.
+ */
+export function startTestApp(deps: AppDeps): Pick<TestApp, 'app' | 'settled' | 'close'> {
+  apps += 1;
+  const jobsSchema = `pgboss_test_${process.pid}_${apps}`;
+  const { app, services } = createAppWithServices({ ...deps, jobsSchema });
+  return {
+    app,
+    async settled() {
+      const until = Date.now() + SETTLE_LIMIT_MS;
+      await services.jobs.start();
+      for (;;) {
+        const { rows } = await sql<{ n: number }>`
+          SELECT count(*)::int AS n FROM ${sql.id(jobsSchema, 'job')}
+          WHERE state = 'active' OR (state IN ('created', 'retry') AND start_after <= now())`.execute(deps.db);
+        if (rows[0].n === 0) return;
+        if (Date.now() > until) throw new Error(`the job queue still has ${rows[0].n} jobs to run`);
+        await new Promise((r) => setTimeout(r, 20));
+      }
+    },
+    async close() {
+      await closeServices(services);
+      await sql`DROP SCHEMA IF EXISTS ${sql.id(jobsSchema)} CASCADE`.execute(deps.db);
+      await deps.db.destroy();
+    },
+  };
+}
+
+/** The newest mail to `email` once the job queue has sent what it holds (invitations go through it). */
+export async function mailTo(t: Pick<TestApp, 'mail' | 'settled'>, email: string): Promise<MailMessage> {
+  await t.settled();
+  const mail = t.mail.findLast((m) => m.to === email);
+  if (!mail) throw new Error(`no mail to ${email}`);
+  return mail;
+}
+
+/** The token in the newest invitation mailed to `email`. */
+export async function inviteToken(t: Pick<TestApp, 'mail' | 'settled'>, email: string): Promise<string> {
+  const token = (await mailTo(t, email)).text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
+  if (!token) throw new Error('no invite link in the mail');
+  return token;
 }
 
 let counter = 0;
@@ -74,9 +126,7 @@ export async function addMember(t: TestApp, owner: request.Agent, role: 'owner' 
   const email = uniqueEmail(role);
   const res = await owner.post('/api/studio/invites').send({ email, role });
   if (res.status !== 201) throw new Error(`invite failed: ${res.status} ${JSON.stringify(res.body)}`);
-  const mail = t.mail.findLast((m) => m.to === email);
-  const token = mail?.text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
-  if (!token) throw new Error('no invite link in the mail');
+  const token = await inviteToken(t, email);
   const agent = request.agent(t.app);
   const accepted = await agent
     .post(`/api/invites/${token}/accept`)

@@ -92,15 +92,3 @@ export async function keysInUse(db: Db, keys: string[]): Promise<Set<string>> {
   ]);
   return new Set([...files.map((f) => f.key), ...sources.map((s) => s.source_key as string)]);
 }
-
-/** Photo finishes left in processing before `before` (a server stopped mid-way). */
-export async function stalledIds(db: Db, studioId: string, before: Date): Promise<string[]> {
-  const rows = await db
-    .selectFrom('finishes')
-    .select('id')
-    .where('studio_id', '=', studioId)
-    .where('status', '=', 'processing')
-    .where('queued_at', '<', before)
-    .execute();
-  return rows.map((r) => r.id);
-}

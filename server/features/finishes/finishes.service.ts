@@ -35,7 +35,6 @@ import {
   keysInUse,
   listFinishRows,
   replaceFiles,
-  stalledIds,
   updateFinishRow,
   type FinishChanges,
   type FinishFileRow,
@@ -44,10 +43,14 @@ import {
 } from './finishes.repository';
 import type { UploadedPhoto } from './finishes.uploads';
 
-/** Photos processed at once: each needs a few hundred MB at the pixel limit, so keep it small. */
-export const PHOTO_CONCURRENCY = 1;
-/** A photo still "processing" this long after it was queued was lost (a restart): queue it again. */
-const STALLED_AFTER_MS = 2 * 60_000;
+/** The job queue's name for processing a photo finish (its kinds are in finishes.jobs.ts). */
+export const PHOTO_JOB = 'photo';
+
+/** What a photo job carries: the finish and the revision (crop and edge blend) it processes. */
+export interface PhotoJobData {
+  finishId: string;
+  revision: number;
+}
 
 const NO_FILES: PhotoFiles = { swatchUrl: null, textureUrl: null, textureLargeUrl: null, previewUrl: null, photoUrl: null };
 const URL_OF_PURPOSE = {
@@ -113,16 +116,6 @@ export async function removeUnreferenced(db: Db, storage: FileStorage, keys: (st
   await Promise.all(candidates.filter((k) => !inUse.has(k)).map((k) => storage.delete(k)));
 }
 
-/** Queues again what a stopped server left half-done, when the page next asks. */
-export async function resumeStalled(services: Pick<AppServices, 'db' | 'photos'>, studioId: string): Promise<void> {
-  const { db, photos } = services;
-  const ids = (await stalledIds(db, studioId, new Date(Date.now() - STALLED_AFTER_MS))).filter((id) => !photos.has(id));
-  for (const id of ids) {
-    await updateFinishRow(db, studioId, id, { queued_at: new Date() });
-    photos.add(id);
-  }
-}
-
 /** The sentence a designer sees for a photo that could not be processed. */
 export function failureReason(err: unknown): string {
   const message = err instanceof Error ? err.message : String(err);
@@ -146,11 +139,13 @@ type StoredImage = ProcessedImage & { purpose: FinishFileRow['purpose']; key: st
 /**
  * The processing job: reads the finish's original, makes its images, stores them and marks the
  * finish ready, unless the crop changed (or the finish went) while it ran; then it discards its
- * work and the newer job does it again.
+ * work and the newer job does it again. With `revision`, a job for an older revision does nothing:
+ * the newer one's job is queued too.
  */
-export async function runPhotoJob(db: Db, storage: FileStorage, finishId: string): Promise<void> {
+export async function runPhotoJob(db: Db, storage: FileStorage, finishId: string, revision?: number): Promise<void> {
   const row = await getFinishRowById(db, finishId);
   if (!row || row.kind !== 'photo' || row.status !== 'processing' || !row.source_key) return;
+  if (revision !== undefined && row.revision !== revision) return;
   const sourceKey = row.source_key;
   const fromUpload = sourceKey.startsWith('uploads/');
   const source = await storage.get(sourceKey);
@@ -321,13 +316,12 @@ function photoRows(
 
 // What the routes do with finishes, each with its rules and transaction.
 
-/** The studio's finishes matching the query; what a stopped server left half-done is queued again. */
+/** The studio's finishes matching the query. */
 export async function listFinishes(
-  services: Pick<AppServices, 'db' | 'photos'>,
+  services: Pick<AppServices, 'db'>,
   studioId: string,
   query: FinishListQuery,
 ): Promise<Finish[]> {
-  await resumeStalled(services, studioId);
   return toFinishes(services.db, await listFinishRows(services.db, studioId, query));
 }
 
@@ -353,44 +347,55 @@ export async function createPaint(db: Db, studioId: string, body: z.output<typeo
 }
 
 /**
- * Stores the uploaded photos and makes one finish of each, all or nothing, then queues them for
- * processing. `fields` are the upload's form fields, parsed here.
+ * Stores the uploaded photos and makes one finish of each with its processing job, all or nothing
+ * (a finish is never left processing without a job). `fields` are the upload's form fields, parsed here.
  */
 export async function createPhotoFinishes(
-  services: Pick<AppServices, 'db' | 'storage' | 'photos'>,
+  services: Pick<AppServices, 'db' | 'storage' | 'jobs'>,
   studioId: string,
   photos: UploadedPhoto[],
   fields: unknown,
 ): Promise<Finish[]> {
   const parsed = photoUploadFieldsSchema.parse(fields);
-  const { db, storage, photos: queue } = services;
+  const { db, storage, jobs } = services;
   const keys = photos.map((p) => uploadKey(p.header.type === 'jpeg' ? 'jpg' : p.header.type));
   let rows: FinishRow[];
   try {
     await Promise.all(photos.map((p, i) => storage.put(keys[i], p.buffer)));
-    rows = await db.transaction().execute((trx) => insertFinishRows(trx, photoRows(studioId, photos, keys, parsed)));
+    rows = await db.transaction().execute(async (trx) => {
+      const made = await insertFinishRows(trx, photoRows(studioId, photos, keys, parsed));
+      for (const row of made)
+        await jobs.send(PHOTO_JOB, { finishId: row.id, revision: row.revision } satisfies PhotoJobData, { db: trx });
+      return made;
+    });
   } catch (err) {
     // All or nothing: a failure part-way leaves no upload behind.
     await Promise.all(keys.map((k) => storage.delete(k).catch(() => undefined)));
     throw err;
   }
-  for (const row of rows) queue.add(row.id);
+  jobs.wake(PHOTO_JOB);
   return rows.map((r) => toFinish(r, []));
 }
 
 /** Changes a finish; a photo's new crop or edge blend is processed again. */
 export async function updateFinish(
-  services: Pick<AppServices, 'db' | 'photos'>,
+  services: Pick<AppServices, 'db' | 'jobs'>,
   studioId: string,
   id: string,
   patch: z.output<typeof finishPatchSchema>,
 ): Promise<Finish> {
-  const { db } = services;
+  const { db, jobs } = services;
   const row = await rowOrThrow(db, studioId, id);
   const { changes, reprocess } = changesFor(row, patch);
-  const saved = await updateFinishRow(db, studioId, id, changes);
+  // The new revision and its job commit together.
+  const saved = await db.transaction().execute(async (trx) => {
+    const updated = await updateFinishRow(trx, studioId, id, changes);
+    if (updated && reprocess)
+      await jobs.send(PHOTO_JOB, { finishId: id, revision: updated.revision } satisfies PhotoJobData, { db: trx });
+    return updated;
+  });
   if (!saved) throw notFound('That finish');
-  if (reprocess) services.photos.add(id);
+  if (reprocess) jobs.wake(PHOTO_JOB);
   return withFiles(db, saved);
 }
 

@@ -12,7 +12,7 @@ import { hitRateLimit, type RateRule } from '../../services/rate-limit/rate-limi
 import { lockProjectState, touchProject } from '../projects/projects.repository';
 import { canPresentationReadFile } from '../files/files.access';
 import { keyFromFileName } from '../files/file-keys';
-import { sendStudioMail } from '../outbox/outbox.service';
+import { queueStudioMail } from '../outbox/mail-queue';
 import {
   getChoice,
   isShownOption,
@@ -141,11 +141,12 @@ export async function chooseOption(
 }
 
 /**
- * Tells the designer (the presentation's creator, else the studio's owners) what the client chose.
- * Never fails: the choice is saved either way, and the project page shows it even when the mail is lost.
+ * Tells the designer (the presentation's creator, else the studio's owners) what the client chose,
+ * through the job queue: the mail is retried while the mail server is away, and the project page
+ * shows whether it has gone. Never fails: the choice is saved either way.
  */
 export async function notifyDesigner(
-  services: Pick<AppServices, 'db' | 'config' | 'mailer'>,
+  services: Pick<AppServices, 'db' | 'config' | 'jobs'>,
   log: Logger,
   p: PresentationRow,
   choice: { roomId: string; optionId: string; comment: string },
@@ -169,12 +170,13 @@ export async function notifyDesigner(
       projectLink: `${config.publicUrl}/projects/${project.id}`,
     };
     for (const address of to)
-      await sendStudioMail(
-        db,
-        { ...services, log },
-        { studioId: p.studio_id, kind: 'choice', ...choiceMail({ to: address, ...mail }) },
-      );
+      await queueStudioMail(db, services.jobs, {
+        studioId: p.studio_id,
+        projectId: project.id,
+        kind: 'choice',
+        ...choiceMail({ to: address, ...mail }),
+      });
   } catch (err) {
-    log.error({ err }, 'choice notification failed');
+    log.error({ err }, 'choice notification could not be queued');
   }
 }

@@ -8,6 +8,7 @@ import { HttpError, orNotFound } from '../../http/errors';
 import { getClient, insertClient } from '../clients/clients.repository';
 import { getProject, insertProject, listProjects, lockProjectState, reopenProject, updateProject } from './projects.repository';
 import { patchStateChange } from './project-states';
+import { projectMail } from '../outbox/mail-queue';
 
 /** The caller a change is made for: which studio, and which member (recorded on a reopen). */
 export interface Acting {
@@ -49,6 +50,7 @@ export async function projectDetail(db: Db, studioId: string, id: string): Promi
   return {
     project,
     client: client ? { id: client.id, name: client.name, email: client.email, phone: client.phone } : null,
+    mail: await projectMail(db, studioId, id),
   };
 }
 

@@ -1,7 +1,20 @@
+// Database reads and writes for a studio's invitations: add one, list the open ones, find one by
+// its token's hash, delete one and mark one accepted.
 import type { Db } from '../../db/database';
+import { sql } from 'kysely';
 import type { InviteInfo, Role } from '../../../shared/schemas/studio';
+import type { QueuedMailState } from '../../../shared/schemas/outbox';
 
-type InviteRow = { id: string; email: string; role: Role; created_at: Date; expires_at: Date; accepted_at: Date | null };
+type InviteRow = {
+  id: string;
+  email: string;
+  role: Role;
+  created_at: Date;
+  expires_at: Date;
+  accepted_at: Date | null;
+  /** How its mail is going (the designer's lists only). */
+  mail_state?: QueuedMailState | null;
+};
 
 export const toInviteInfo = (r: InviteRow, studioName?: string): InviteInfo => ({
   id: r.id,
@@ -11,6 +24,7 @@ export const toInviteInfo = (r: InviteRow, studioName?: string): InviteInfo => (
   createdAt: r.created_at.toISOString(),
   expiresAt: r.expires_at.toISOString(),
   acceptedAt: r.accepted_at ? r.accepted_at.toISOString() : null,
+  ...(r.mail_state ? { mailState: r.mail_state } : {}),
 });
 
 const INVITE_COLUMNS = [
@@ -44,6 +58,11 @@ export async function listOpenInvites(db: Db, studioId: string) {
   return db
     .selectFrom('invites')
     .select(INVITE_COLUMNS)
+    .select(
+      sql<QueuedMailState | null>`(select q.state from queued_mail q where q.invite_id = invites.id order by q.created_at desc limit 1)`.as(
+        'mail_state',
+      ),
+    )
     .where('studio_id', '=', studioId)
     .where('accepted_at', 'is', null)
     .where('expires_at', '>', new Date())

@@ -57,7 +57,7 @@ export const studioRoutes: RouteDef[] = [
     access: OWNERS,
     body: inviteSchema,
     async handler(ctx) {
-      const invite = await inviteMember(ctx.services, ctx.log, ctx.caller, ctx.body);
+      const invite = await inviteMember(ctx.services, ctx.caller, ctx.body);
       ctx.res.status(201);
       return { invite };
     },

@@ -3,7 +3,6 @@
 import type { AppServices } from '../../context';
 import type { Db } from '../../db/database';
 import type { Caller } from '../../http/routes';
-import type { Logger } from '../../services/logging/logger';
 import type { InviteBody, InviteInfo, Member, Role } from '../../../shared/schemas/studio';
 import type { AcceptInviteBody } from '../../../shared/schemas/account';
 import { HttpError, notFound } from '../../http/errors';
@@ -12,7 +11,7 @@ import { hashToken, newToken } from '../../services/auth/tokens';
 import { hashPassword } from '../../services/auth/passwords';
 import { enforceRateLimit, type RateRule } from '../../services/rate-limit/rate-limit';
 import { limitInvitationMail } from '../../services/rate-limit/mail-limits';
-import { sendStudioMail } from '../outbox/outbox.service';
+import { MAIL_JOB, queueStudioMail } from '../outbox/mail-queue';
 import {
   countOwners,
   deleteMember,
@@ -59,12 +58,12 @@ export async function removeMember(db: Db, caller: Caller, id: string): Promise<
 
 /**
  * Invites someone without an account and e-mails them the link, within the studio's hourly and
- * the recipient's daily limits (a refusal is a 429 with Retry-After). An invitation whose mail
- * could not be sent is not kept.
+ * the recipient's daily limits (a refusal is a 429 with Retry-After). The mail goes through the job
+ * queue with the invitation (both commit together), retried while the mail server is away; the
+ * open invitations list says whether it has gone.
  */
 export async function inviteMember(
-  services: Pick<AppServices, 'db' | 'config' | 'mailer'>,
-  log: Logger,
+  services: Pick<AppServices, 'db' | 'config' | 'jobs'>,
   caller: Caller,
   body: InviteBody,
 ): Promise<InviteInfo> {
@@ -95,19 +94,17 @@ export async function inviteMember(
       invitedBy: caller.memberId,
       expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
     });
-    await sendStudioMail(
-      trx,
-      { ...services, log },
-      {
-        studioId: caller.studioId,
-        kind: 'invitation',
-        ...memberInviteMail({ to: body.email, by, studio, role: body.role, link, days: INVITE_DAYS }),
-      },
-      'The invitation e-mail could not be sent, so no invitation was made. Try again in a moment.',
-    );
+    await queueStudioMail(trx, services.jobs, {
+      studioId: caller.studioId,
+      projectId: null,
+      inviteId: made.id,
+      kind: 'invitation',
+      ...memberInviteMail({ to: body.email, by, studio, role: body.role, link, days: INVITE_DAYS }),
+    });
     return made;
   });
-  return toInviteInfo(invite);
+  services.jobs.wake(MAIL_JOB);
+  return toInviteInfo({ ...invite, mail_state: 'sending' });
 }
 
 /** The invitation behind a link, refused unless it is still open; `forUpdate` holds it until commit. */

@@ -1,3 +1,5 @@
+// Helpers for the browser tests: unique e-mails, a fresh page, sign-up and sign-in through the
+// forms, copying a link from the Outbox, and inviting a member who accepts.
 import { inject } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 
@@ -68,7 +70,8 @@ export async function inviteAndAccept(browser: Browser, ownerPage: Page, role: '
   await ownerPage.getByRole('dialog').getByLabel('E-mail').fill(email);
   await ownerPage.getByRole('dialog').getByLabel('Role').selectOption(role);
   await ownerPage.getByRole('button', { name: 'Send invitation' }).click();
-  await ownerPage.getByText(email).waitFor();
+  // The invitation's mail goes through the job queue; the list says once it has gone.
+  await ownerPage.getByRole('listitem').filter({ hasText: email }).getByText('E-mail: Sent').waitFor();
   const link = await copyLinkFromOutbox(ownerPage, email, /\/invite\//);
 
   const { context, page } = await newPage(browser);

@@ -1,3 +1,5 @@
+// Query and mutation hooks for projects: the list, one project, create, update, and Reopen for a
+// decided project.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
   CreateProjectBody,
@@ -7,6 +9,7 @@ import type {
   ProjectSummary,
 } from '../../../../shared/schemas/project';
 import { api } from '../../../lib/api';
+import { mailPollInterval } from '../../../lib/queued-mail';
 
 export const projectKeys = {
   all: ['projects'] as const,
@@ -30,7 +33,12 @@ export const projectListQuery = (q: Partial<ListQuery>) =>
   });
 
 export const projectQuery = (id: string) =>
-  queryOptions({ queryKey: projectKeys.detail(id), queryFn: () => api<ProjectDetail>(`/api/projects/${id}`) });
+  queryOptions({
+    queryKey: projectKeys.detail(id),
+    queryFn: () => api<ProjectDetail>(`/api/projects/${id}`),
+    // Asks again while the project's mail has not gone, so its Mail card shows when it is sent.
+    refetchInterval: (q) => mailPollInterval(q.state.data?.mail.map((m) => m.state) ?? []),
+  });
 
 export const useProjects = (q: Partial<ListQuery>) => useQuery(projectListQuery(q));
 export const useProject = (id: string) => useQuery(projectQuery(id));

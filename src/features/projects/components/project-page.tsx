@@ -1,3 +1,5 @@
+// One project's page: its client, name and address (saving field by field), state and Reopen, with
+// the rooms and presentations sections passed in by the route.
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
@@ -7,8 +9,10 @@ import { textParser, asIs } from '../../../components/ui/use-commit-text';
 import { Badge, Card, EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { commitAnswer, errorMessage } from '../../../lib/api';
 import { formatDateTime, formatRelative } from '../../../lib/format';
+import { MAIL_STATE_TEXT } from '../../../lib/queued-mail';
 import { useCanEdit } from '../../../lib/session';
 import { useProject, useReopenProject, useUpdateProject } from '../api/projects';
+import type { ProjectMail } from '../../../../shared/schemas/project';
 
 /** One project: its client, its rooms and its presentations (the latter two passed in by the route). */
 export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: ReactNode; presentations?: ReactNode }) {
@@ -90,30 +94,53 @@ export function ProjectPage({ id, rooms, presentations }: { id: string; rooms?: 
             )}
           </Card>
         </div>
-        <Card title="Client" className="self-start">
-          {client ? (
-            <dl className="flex flex-col gap-3 text-[15px]">
-              <div>
-                <dt className="text-sm text-ink-faint">Name</dt>
-                <dd className="font-semibold">{client.name}</dd>
-              </div>
-              <div>
-                <dt className="text-sm text-ink-faint">E-mail</dt>
-                <dd>{client.email ?? '—'}</dd>
-              </div>
-              <div>
-                <dt className="text-sm text-ink-faint">Phone</dt>
-                <dd>{client.phone ?? '—'}</dd>
-              </div>
-            </dl>
-          ) : (
-            <p className="text-ink-soft">No client.</p>
-          )}
-        </Card>
+        <div className="flex flex-col gap-6 self-start">
+          <Card title="Client">
+            {client ? (
+              <dl className="flex flex-col gap-3 text-[15px]">
+                <div>
+                  <dt className="text-sm text-ink-faint">Name</dt>
+                  <dd className="font-semibold">{client.name}</dd>
+                </div>
+                <div>
+                  <dt className="text-sm text-ink-faint">E-mail</dt>
+                  <dd>{client.email ?? '—'}</dd>
+                </div>
+                <div>
+                  <dt className="text-sm text-ink-faint">Phone</dt>
+                  <dd>{client.phone ?? '—'}</dd>
+                </div>
+              </dl>
+            ) : (
+              <p className="text-ink-soft">No client.</p>
+            )}
+          </Card>
+          {project.data.mail.length > 0 && <MailCard mail={project.data.mail} />}
+        </div>
       </div>
       {renaming && <DetailsDialog name={p.name} address={p.address} onClose={() => setRenaming(false)} projectId={id} />}
       {reopening && <ReopenDialog onClose={() => setReopening(false)} projectId={id} />}
     </div>
+  );
+}
+
+/** The project's mail nobody waits for (a client's choice told to the designer), each as sent or failing. */
+function MailCard({ mail }: { mail: ProjectMail[] }) {
+  return (
+    <Card title="Mail">
+      <ul className="flex flex-col gap-3 text-[15px]" data-testid="project-mail">
+        {mail.map((m) => (
+          <li key={m.id}>
+            <span className="block font-semibold">{m.subject}</span>
+            <span className="block text-sm text-ink-soft">
+              To {m.to} · {MAIL_STATE_TEXT[m.state]}
+              {m.state === 'sent' && m.sentAt ? ` ${formatRelative(m.sentAt)}` : ''}
+              {m.attempts > 0 && m.state !== 'sent' ? ` (${m.attempts} ${m.attempts === 1 ? 'try' : 'tries'} failed)` : ''}
+            </span>
+          </li>
+        ))}
+      </ul>
+    </Card>
   );
 }
 

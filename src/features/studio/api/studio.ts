@@ -1,7 +1,10 @@
+// Query and mutation hooks for the Studio page: members and invitations, inviting, revoking,
+// changing roles, removing members, and the studio's currency and locale.
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { InviteBody, InviteInfo, Member, Role, StudioSettingsBody } from '../../../../shared/schemas/studio';
 import { api } from '../../../lib/api';
 import { sessionKeys } from '../../../lib/session';
+import { mailPollInterval } from '../../../lib/queued-mail';
 
 export const studioKeys = {
   all: ['studio'] as const,
@@ -16,6 +19,8 @@ export const membersQuery = queryOptions({
 export const invitesQuery = queryOptions({
   queryKey: studioKeys.invites(),
   queryFn: () => api<{ invites: InviteInfo[] }>('/api/studio/invites'),
+  // Asks again while an invitation's mail has not gone, so the list shows when it is sent.
+  refetchInterval: (q) => mailPollInterval(q.state.data?.invites.map((i) => i.mailState) ?? []),
 });
 
 export const useMembers = () => useQuery(membersQuery);

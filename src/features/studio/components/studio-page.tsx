@@ -1,3 +1,5 @@
+// The Studio page: members and their roles, open invitations, the Invite a member dialog, and the
+// studio's price settings (currency and locale).
 import { useState, type FormEvent } from 'react';
 import type { Role } from '../../../../shared/schemas/studio';
 import { Button } from '../../../components/ui/button';
@@ -6,6 +8,7 @@ import { inputClass, SelectField, TextField } from '../../../components/ui/field
 import { Badge, Card, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage, fieldError } from '../../../lib/api';
 import { formatDate } from '../../../lib/format';
+import { MAIL_STATE_TEXT } from '../../../lib/queued-mail';
 import { commitAnswer } from '../../../lib/api';
 import { useMoney, useSession } from '../../../lib/session';
 import { formatMoney } from '../../../../shared/units/money';
@@ -117,8 +120,16 @@ export function StudioPage() {
                       <div>
                         <div className="font-semibold">{i.email}</div>
                         <div className="text-sm text-ink-soft">
-                          {i.role} · sent {formatDate(i.createdAt)} · works until {formatDate(i.expiresAt)}
+                          {i.role} · made {formatDate(i.createdAt)} · works until {formatDate(i.expiresAt)}
                         </div>
+                        {i.mailState && (
+                          <div
+                            className={`text-sm ${i.mailState === 'failing' || i.mailState === 'failed' ? 'text-clay' : 'text-ink-soft'}`}
+                            data-testid="invite-mail"
+                          >
+                            E-mail: {MAIL_STATE_TEXT[i.mailState]}
+                          </div>
+                        )}
                       </div>
                       <Button size="sm" variant="quiet" onClick={() => revoke.mutate(i.id)}>
                         Cancel invitation
