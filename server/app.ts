@@ -16,11 +16,11 @@ import { roomRoutes } from './features/rooms/rooms.routes';
 import { finishRoutes } from './features/finishes/finishes.routes';
 import { fileRoutes } from './features/files/files.routes';
 import { presentationRoutes } from './features/presentations/presentations.routes';
-import { clientPresentationRoutes } from './features/presentations/client.routes';
+import { clientPresentationRoutes, readyLinkFastPath } from './features/presentations/client.routes';
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
-import { requestLogger } from './services/logging/logger';
-import { apiNoStore, securityHeaders } from './services/security/headers';
+import { requestLogBeginner, requestLogger } from './services/logging/logger';
+import { apiNoStore, securityHeaderList, securityHeaders } from './services/security/headers';
 import { originCheck } from './services/security/origin-check';
 
 export type { AppDeps, AppServices } from './context';
@@ -56,6 +56,14 @@ export function createAppWithServices(deps: AppDeps): { app: Express; services: 
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // A client link's ready answer first, with its own headers and log line (see readyLinkFastPath).
+  app.get(
+    '/api/p/:token',
+    readyLinkFastPath(services.links, {
+      beginLog: requestLogBeginner(services.logger),
+      security: securityHeaderList({ secure: deps.config.SECURE_COOKIES }),
+    }),
+  );
   app.use(requestLogger(services.logger));
   app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
   app.use('/api', apiNoStore());

@@ -107,12 +107,14 @@ async function main(): Promise<number> {
     server = await startServerProcess({
       port,
       logFile,
+      // LOAD_CPU_PROF=dir: the app writes a processor profile there when it stops (node --cpu-prof).
+      nodeArgs: process.env.LOAD_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.LOAD_CPU_PROF}`] : [],
       env: {
         DATABASE_URL: databaseUrl,
         DATA_DIR: join(cluster.dir, 'data'),
         PRESENTATION_KEY: KEY,
         NODE_ENV: 'production',
-        LOG_LEVEL: 'info',
+        LOG_LEVEL: process.env.LOAD_LOG_LEVEL ?? 'info',
         CLIENT_DIST: '/nonexistent',
       },
     });

@@ -27,15 +27,21 @@ export async function startServerProcess(opts: {
   logFile: string;
   entry?: string;
   args?: string[];
+  /** Node's own flags (e.g. --cpu-prof), before the loader. */
+  nodeArgs?: string[];
 }): Promise<ServerProcess> {
   const fd = openSync(opts.logFile, 'a');
   // tsx as a loader in this one process (not its CLI, which runs the server in a grandchild): a
   // signal sent to the child reaches the server itself.
-  const child = spawn(process.execPath, ['--import', 'tsx', join(root, opts.entry ?? 'server/index.ts'), ...(opts.args ?? [])], {
-    cwd: root,
-    env: { PATH: process.env.PATH ?? '', HOST: '127.0.0.1', PORT: String(opts.port), ...opts.env },
-    stdio: ['ignore', fd, fd],
-  });
+  const child = spawn(
+    process.execPath,
+    [...(opts.nodeArgs ?? []), '--import', 'tsx', join(root, opts.entry ?? 'server/index.ts'), ...(opts.args ?? [])],
+    {
+      cwd: root,
+      env: { PATH: process.env.PATH ?? '', HOST: '127.0.0.1', PORT: String(opts.port), ...opts.env },
+      stdio: ['ignore', fd, fd],
+    },
+  );
   closeSync(fd);
   const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((res) =>
     child.once('exit', (code, signal) => res({ code, signal })),

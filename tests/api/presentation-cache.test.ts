@@ -113,6 +113,28 @@ describe('the client link cache', () => {
     expect(again.headers['x-powered-by']).toBeUndefined();
   });
 
+  it('answers a ready link ahead of the middleware with exactly the headers the full route gives', async () => {
+    const q = await presentedProject(owner, 'Same headers flat');
+    // The first open builds the answer through the whole stack; the second is the ready one.
+    const full = await open(q.token);
+    const ready = await open(q.token);
+    // A conditional request always takes the full route: it answers 200 here (another ETag) the full way.
+    const conditional = await request(t.app).get(`/api/p/${q.token}`).set('If-None-Match', 'W/"not-this-one"');
+    const comparable = (h: Record<string, string>) => {
+      const { date: _date, 'x-request-id': _id, ...rest } = h;
+      return rest;
+    };
+    expect(comparable(ready.headers)).toEqual(comparable(full.headers));
+    expect(comparable(ready.headers)).toEqual(comparable(conditional.headers));
+    expect(ready.headers['x-request-id']).not.toBe(full.headers['x-request-id']);
+    // A caller's plain request id is echoed on the ready answer too.
+    const traced = await request(t.app).get(`/api/p/${q.token}`).set('x-request-id', 'lb-1234.abc');
+    expect(traced.headers['x-request-id']).toBe('lb-1234.abc');
+    // The browser's revalidation gets its 304 from the full route.
+    const revalidated = await request(t.app).get(`/api/p/${q.token}`).set('If-None-Match', ready.headers.etag);
+    expect(revalidated.status).toBe(304);
+  });
+
   it('gives an edited answer new bytes and a new ETag once the change is noticed', async () => {
     const q = await presentedProject(owner, 'Renamed flat');
     const before = await open(q.token);

@@ -28,6 +28,19 @@ export const CONTENT_SECURITY_POLICY: Record<string, string[]> = {
  * it. Over plain http (local use) both would break the page, so they are left out.
  */
 export function securityHeaders(opts: { secure: boolean }): RequestHandler {
+  const { set, removed } = securityHeaderList(opts);
+  return (_req, res, next) => {
+    for (const name of removed) res.removeHeader(name);
+    for (const [name, value] of set) res.setHeader(name, value);
+    next();
+  };
+}
+
+/**
+ * The headers securityHeaders sets on every answer (and those it removes), worked out once: for a
+ * route answered before it (the client link's ready answer), which writes them in one go.
+ */
+export function securityHeaderList(opts: { secure: boolean }): { set: [string, string | string[]][]; removed: string[] } {
   const helmetHeaders = helmet({
     contentSecurityPolicy: {
       useDefaults: false,
@@ -41,12 +54,7 @@ export function securityHeaders(opts: { secure: boolean }): RequestHandler {
   }) as RequestHandler;
   // With this configuration helmet's headers are the same for every request (no nonce, nothing
   // read from the request), so they are worked out once and set in one pass per answer.
-  const { set, removed } = headersOf(helmetHeaders);
-  return (_req, res, next) => {
-    for (const name of removed) res.removeHeader(name);
-    for (const [name, value] of set) res.setHeader(name, value);
-    next();
-  };
+  return headersOf(helmetHeaders);
 }
 
 /** What a header-only middleware sets and removes, read by running it once against a stand-in answer. */
