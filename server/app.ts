@@ -16,11 +16,11 @@ import { roomRoutes } from './features/rooms/rooms.routes';
 import { finishRoutes } from './features/finishes/finishes.routes';
 import { fileRoutes } from './features/files/files.routes';
 import { presentationRoutes } from './features/presentations/presentations.routes';
-import { clientPresentationRoutes } from './features/presentations/client.routes';
+import { clientPresentationRoutes, readyLinkFastPath } from './features/presentations/client.routes';
 import { mountPresentationPage } from './features/presentations/client-page';
 import { scheduleRoutes } from './features/schedules/schedules.routes';
-import { requestLogger } from './services/logging/logger';
-import { apiNoStore, securityHeaders } from './services/security/headers';
+import { requestLogBeginner, requestLogger } from './services/logging/logger';
+import { apiNoStore, securityHeaderList, securityHeaders } from './services/security/headers';
 import { originCheck } from './services/security/origin-check';
 
 export type { AppDeps, AppServices } from './context';
@@ -29,7 +29,10 @@ const BODY_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
 /** Every API route with its access rule: the app mounts exactly this table. */
 export function allRoutes(): RouteDef[] {
+  // The client's link routes first: a busy link's requests then match at once instead of being
+  // tried against every route of the studio's own (no other path can match theirs).
   return [
+    ...clientPresentationRoutes,
     ...authRoutes,
     ...studioRoutes,
     ...clientRoutes,
@@ -38,7 +41,6 @@ export function allRoutes(): RouteDef[] {
     ...finishRoutes,
     ...fileRoutes,
     ...presentationRoutes,
-    ...clientPresentationRoutes,
     ...scheduleRoutes,
     ...outboxRoutes,
   ];
@@ -54,6 +56,14 @@ export function createAppWithServices(deps: AppDeps): { app: Express; services: 
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // A client link's ready answer first, with its own headers and log line (see readyLinkFastPath).
+  app.get(
+    '/api/p/:token',
+    readyLinkFastPath(services.links, {
+      beginLog: requestLogBeginner(services.logger),
+      security: securityHeaderList({ secure: deps.config.SECURE_COOKIES }),
+    }),
+  );
   app.use(requestLogger(services.logger));
   app.use(securityHeaders({ secure: deps.config.SECURE_COOKIES }));
   app.use('/api', apiNoStore());

@@ -17,20 +17,31 @@ export interface ServerProcess {
   stop(): Promise<void>;
 }
 
-/** Starts the app on `port` with `env` on top of a minimal environment; stdout and stderr go to `logFile`. */
+/**
+ * Starts the app on `port` with `env` on top of a minimal environment; stdout and stderr go to
+ * `logFile`. `entry` (relative to the repository, with `args`) starts another server instead.
+ */
 export async function startServerProcess(opts: {
   port: number;
   env: Record<string, string>;
   logFile: string;
+  entry?: string;
+  args?: string[];
+  /** Node's own flags (e.g. --cpu-prof), before the loader. */
+  nodeArgs?: string[];
 }): Promise<ServerProcess> {
   const fd = openSync(opts.logFile, 'a');
   // tsx as a loader in this one process (not its CLI, which runs the server in a grandchild): a
   // signal sent to the child reaches the server itself.
-  const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'server/index.ts')], {
-    cwd: root,
-    env: { PATH: process.env.PATH ?? '', HOST: '127.0.0.1', PORT: String(opts.port), ...opts.env },
-    stdio: ['ignore', fd, fd],
-  });
+  const child = spawn(
+    process.execPath,
+    [...(opts.nodeArgs ?? []), '--import', 'tsx', join(root, opts.entry ?? 'server/index.ts'), ...(opts.args ?? [])],
+    {
+      cwd: root,
+      env: { PATH: process.env.PATH ?? '', HOST: '127.0.0.1', PORT: String(opts.port), ...opts.env },
+      stdio: ['ignore', fd, fd],
+    },
+  );
   closeSync(fd);
   const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((res) =>
     child.once('exit', (code, signal) => res({ code, signal })),

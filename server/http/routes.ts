@@ -86,7 +86,10 @@ export function mountRoutes(router: Router, services: AppServices, defs: RouteDe
         res,
         services,
         caller,
-        log: req.log ?? services.logger,
+        // Made on first use: most answers never log a line of their own.
+        get log() {
+          return req.log ?? services.logger;
+        },
         params: def.params ? def.params.parse(req.params) : undefined,
         query: def.query ? def.query.parse(req.query) : undefined,
         body: def.body ? def.body.parse(req.body ?? {}) : undefined,

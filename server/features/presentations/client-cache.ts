@@ -6,6 +6,7 @@
 // entry locally before they answer. While the listening connection is down nothing is cached,
 // so a withdrawn link can never be served from a stale entry.
 import pg from 'pg';
+import { createHash } from 'node:crypto';
 import type { Db } from '../../db/database';
 import type { Logger } from '../../services/logging/logger';
 import { recordOpens } from './presentations.repository';
@@ -28,8 +29,22 @@ export interface CachedLink {
   body: string;
 }
 
-interface Entry extends CachedLink {
+/** A link's answer as it goes out: its bytes and their ETag, worked out once, not per request. */
+export interface ReadyLink extends CachedLink {
+  bytes: Buffer;
+  /** The weak ETag Express would compute for these bytes on every answer. */
+  etag: string;
+}
+
+interface Entry extends ReadyLink {
   storedAt: number;
+}
+
+/** The bytes and ETag of an answer; the ETag is spelled as Express spells its weak ones. */
+export function readyLink(link: CachedLink): ReadyLink {
+  const bytes = Buffer.from(link.body, 'utf8');
+  const hash = createHash('sha1').update(bytes).digest('base64').substring(0, 27);
+  return { ...link, bytes, etag: `W/"${bytes.length.toString(16)}-${hash}"` };
 }
 interface Opens {
   count: number;
@@ -64,7 +79,7 @@ export class ClientLinkCache {
   }
 
   /** The ready answer for `token`, if one is held and the link has not run out since. */
-  get(token: string, now = Date.now()): CachedLink | undefined {
+  get(token: string, now = Date.now()): ReadyLink | undefined {
     this.start();
     const e = this.entries.get(token);
     if (!e) return undefined;
@@ -76,10 +91,10 @@ export class ClientLinkCache {
   }
 
   /** Builds the answer (which throws for a link that does not work) and keeps it when it is safe to. */
-  async load(token: string, build: () => Promise<CachedLink>): Promise<CachedLink> {
+  async load(token: string, build: () => Promise<CachedLink>): Promise<ReadyLink> {
     this.start();
     const before = this.generation;
-    const link = await build();
+    const link = readyLink(await build());
     if (this.listening && this.generation === before) {
       if (this.entries.size >= MAX_ENTRIES) this.entries.delete(this.entries.keys().next().value!);
       this.entries.set(token, { ...link, storedAt: Date.now() });

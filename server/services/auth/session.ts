@@ -39,17 +39,23 @@ export function clearSessionCookie(res: Response): void {
 
 /** Puts the caller (or nothing) on res.locals.caller; a bad or stale cookie is just "signed out". */
 export function sessionMiddleware(db: Db): RequestHandler {
-  return async (req, res, next) => {
+  // Without a cookie (every client link's visitor) the request passes on at once, with no promise.
+  return (req, res, next) => {
     const token = readCookie(req, SESSION_COOKIE);
     if (!token || token.length > 200) return next();
-    const row = await db
-      .selectFrom('sessions')
-      .innerJoin('members', 'members.id', 'sessions.member_id')
-      .select(['sessions.id as sessionId', 'members.id as memberId', 'members.studio_id as studioId', 'members.role'])
-      .where('sessions.id', '=', hashToken(token))
-      .where('sessions.expires_at', '>', new Date())
-      .executeTakeFirst();
-    if (row) res.locals.caller = row satisfies Caller;
-    next();
+    return signIn(db, token, res, next);
   };
+}
+
+/** Looks the cookie's session up and puts its member on res.locals.caller when it is live. */
+async function signIn(db: Db, token: string, res: Response, next: () => void): Promise<void> {
+  const row = await db
+    .selectFrom('sessions')
+    .innerJoin('members', 'members.id', 'sessions.member_id')
+    .select(['sessions.id as sessionId', 'members.id as memberId', 'members.studio_id as studioId', 'members.role'])
+    .where('sessions.id', '=', hashToken(token))
+    .where('sessions.expires_at', '>', new Date())
+    .executeTakeFirst();
+  if (row) res.locals.caller = row satisfies Caller;
+  next();
 }

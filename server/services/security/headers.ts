@@ -28,7 +28,20 @@ export const CONTENT_SECURITY_POLICY: Record<string, string[]> = {
  * it. Over plain http (local use) both would break the page, so they are left out.
  */
 export function securityHeaders(opts: { secure: boolean }): RequestHandler {
-  return helmet({
+  const { set, removed } = securityHeaderList(opts);
+  return (_req, res, next) => {
+    for (const name of removed) res.removeHeader(name);
+    for (const [name, value] of set) res.setHeader(name, value);
+    next();
+  };
+}
+
+/**
+ * The headers securityHeaders sets on every answer (and those it removes), worked out once: for a
+ * route answered before it (the client link's ready answer), which writes them in one go.
+ */
+export function securityHeaderList(opts: { secure: boolean }): { set: [string, string | string[]][]; removed: string[] } {
+  const helmetHeaders = helmet({
     contentSecurityPolicy: {
       useDefaults: false,
       directives: { ...CONTENT_SECURITY_POLICY, ...(opts.secure ? { 'upgrade-insecure-requests': [] } : {}) },
@@ -39,6 +52,31 @@ export function securityHeaders(opts: { secure: boolean }): RequestHandler {
     // answers tighten this to no-referrer themselves, since their address holds the token.
     referrerPolicy: { policy: 'same-origin' },
   }) as RequestHandler;
+  // With this configuration helmet's headers are the same for every request (no nonce, nothing
+  // read from the request), so they are worked out once and set in one pass per answer.
+  return headersOf(helmetHeaders);
+}
+
+/** What a header-only middleware sets and removes, read by running it once against a stand-in answer. */
+function headersOf(middleware: RequestHandler): { set: [string, string | string[]][]; removed: string[] } {
+  const set = new Map<string, [string, string | string[]]>();
+  const removed: string[] = [];
+  const res = {
+    setHeader(name: string, value: string | string[]) {
+      set.set(name.toLowerCase(), [name, value]);
+    },
+    removeHeader(name: string) {
+      set.delete(name.toLowerCase());
+      removed.push(name);
+    },
+  };
+  let passed = false;
+  void middleware({} as never, res as never, (err?: unknown) => {
+    if (err) throw err;
+    passed = true;
+  });
+  if (!passed) throw new Error('the security headers middleware did not pass the request on at once');
+  return { set: [...set.values()], removed };
 }
 
 /**
