@@ -1,3 +1,5 @@
+// Migration 0001: creates the first tables: studios, members, sessions, invites, sign-in failures,
+// clients and projects.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: studios, members, sessions, invites, sign-in failures, clients, projects.

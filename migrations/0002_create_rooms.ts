@@ -1,3 +1,5 @@
+// Migration 0002: creates rooms (the shell as jsonb) and their options (pieces and finishes as
+// jsonb), each with a version for optimistic concurrency.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: rooms (the shell as jsonb) and options (pieces and finishes as jsonb),

@@ -1,3 +1,5 @@
+// Migration 0003: creates the studio's finishes (photo finishes and paints in one table) and the
+// stored files each photo finish owns.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: the studio's finishes (photo finishes and paints in one table, told apart by

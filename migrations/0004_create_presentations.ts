@@ -1,3 +1,5 @@
+// Migration 0004: creates presentations, the rooms and options each shows, what the client looked
+// at and chose, and the log of client requests counted for rate limits.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: presentations (a link for a client, known by its token's random id), the

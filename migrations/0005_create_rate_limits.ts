@@ -1,3 +1,5 @@
+// Migration 0005: creates rate_limit_counts, the per-rule request counters kept in the database
+// so every app instance counts the same requests.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: counters for rate limits, one row per rule, key and fixed window, in the

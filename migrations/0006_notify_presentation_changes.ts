@@ -1,3 +1,5 @@
+// Migration 0006: adds triggers that NOTIFY the app instances when a write may change what a
+// client's link shows, so each can drop what it cached for that studio.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: every write that can change what a client's link shows tells the app

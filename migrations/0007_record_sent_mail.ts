@@ -1,3 +1,5 @@
+// Migration 0007: creates sent_mail, one row per message Parlour sent with its studio, so the
+// local Outbox shows each studio only its own mail.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: the mail Parlour sent, one row per message with the studio it was sent for,

@@ -1,3 +1,4 @@
+// Migration 0008: drops sign_in_failures, as sign-in attempts are now counted in rate_limit_counts.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: sign-in attempts are counted in rate_limit_counts (bucket 'sign-in'), so the

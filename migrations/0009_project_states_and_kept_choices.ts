@@ -1,3 +1,5 @@
+// Migration 0009: projects keep their state before archiving and who reopened them, a project's
+// rooms get unique positions, and the database refuses deleting a room or option a choice points at.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed:

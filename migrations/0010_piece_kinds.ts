@@ -1,3 +1,5 @@
+// Migration 0010: gives every piece in the stored options a kind from the fixed list, read from its
+// old kind or its name (plain-block when nothing matches).
 import { sql, type Kysely, type RawBuilder } from 'kysely';
 
 // Frozen once landed: pieces (in each option's jsonb document) get a kind from the fixed list.

@@ -1,3 +1,5 @@
+// Migration 0011: drops presentation_requests, as a link's choice and view posts are now counted
+// in rate_limit_counts.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed: a link's choice and "looked at" posts are counted in rate_limit_counts

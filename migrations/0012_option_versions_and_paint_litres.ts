@@ -1,3 +1,5 @@
+// Migration 0012: shown options keep the version they had when the link was made, paint prices per
+// unit become per litre, and studios get a currency and a locale.
 import { sql, type Kysely } from 'kysely';
 
 // Frozen once landed.

@@ -1,6 +1,7 @@
 // npm run lint: ESLint (rules and import boundaries inside files), dependency-cruiser (boundaries
 // between folders and no import circles), Prettier (the tree stays formatted), the Layout of
-// DEVELOPERS.md (it names every folder) and jscpd (code written twice). Prints one line per check and exits non-zero when a
+// DEVELOPERS.md (it names every folder), jscpd (code written twice) and headers (every source file
+// opens with a comment saying what it is for). Prints one line per check and exits non-zero when a
 // failing check found anything. scripts/test.ts runs the same checks as its `lint` step.
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync } from 'node:fs';
@@ -126,8 +127,33 @@ function layout(): LintCheck {
   };
 }
 
+/** Folders whose TypeScript files must open with a comment saying what the file is for. */
+const HEADED = ['shared', 'server', 'src', 'tests', 'scripts', 'migrations'];
+
+/** True when the file's first non-blank line is a comment (a `#!` line may come before it). */
+export function opensWithComment(text: string): boolean {
+  const lines = text.split('\n').filter((l) => l.trim() !== '');
+  const first = lines[0]?.startsWith('#!') ? lines[1] : lines[0];
+  return first !== undefined && /^\s*(\/\/|\/\*)/.test(first);
+}
+
+function headers(): LintCheck {
+  // A newcomer opening any file reads first what it is for.
+  const res = run('git', ['ls-files', '--cached', '--others', '--exclude-standard', '--', ...HEADED]);
+  const files = res.stdout
+    .split('\n')
+    .filter((f) => /\.(ts|tsx|mts)$/.test(f) && !f.endsWith('.d.ts') && existsSync(join(root, f)));
+  const bare = files.filter((f) => !opensWithComment(readFileSync(join(root, f), 'utf8')));
+  return {
+    name: 'headers',
+    problems: bare.length,
+    fails: true,
+    detail: bare.map((f) => `${f} does not open with a comment saying what it is for`).join('\n'),
+  };
+}
+
 export function lintChecks(): LintCheck[] {
-  return [eslint(), imports(), duplicates(), formatting(), layout()];
+  return [eslint(), imports(), duplicates(), formatting(), layout(), headers()];
 }
 
 export function printChecks(checks: LintCheck[]): void {

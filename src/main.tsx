@@ -1,3 +1,4 @@
+// The designer app's entry: mounts the router inside the shared providers.
 import './lib/zod-no-eval';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';

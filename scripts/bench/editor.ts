@@ -3,7 +3,7 @@
 import { applyToHistory, createHistory, movePiece } from '../../shared/commands';
 import { buildRoomScene } from '../../shared/geometry/scene';
 import { optionDocSchema } from '../../shared/schemas/option';
-import { planLayout } from '../../src/features/rooms/editor/plan-geometry';
+import { planLayout } from '../../src/features/rooms/editor/plan/plan-geometry';
 import { typicalRoom } from './typical-room';
 
 const PIECES = 60;

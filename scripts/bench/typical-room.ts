@@ -1,3 +1,5 @@
+// The invented rooms the benches time: a typical room (8 walls, 6 openings, 40 pieces), a large
+// room of 200 pieces, and the typical room furnished with pieces of assorted kinds.
 import { optionDocSchema, type OptionDoc, type Piece } from '../../shared/schemas/option';
 import { roomShellSchema, type RoomShell } from '../../shared/schemas/room';
 

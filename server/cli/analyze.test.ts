@@ -1,3 +1,5 @@
+// Tests the analyze command run as a child process: take-off numbers against the README's design
+// example and hand-worked rooms, its flags, its refusals and exit codes, and its fit check findings.
 import { execFile } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -307,6 +309,9 @@ describe('analyze command: refusals', () => {
     [['--waste', '101'], /--waste: expected a percentage from 0 to 100/],
     [['--waste'], /--waste: expected a percentage.*got nothing/],
     [['--walkway', '-900'], /--walkway: expected a width in mm/],
+    // The editor's walkway range, from the one definition beside the default walkway.
+    [['--walkway', '250'], /--walkway: expected a width in mm, 300 to 2000/],
+    [['--walkway', '2500'], /--walkway: expected a width in mm, 300 to 2000/],
     [['--colour', 'blue'], /--colour: unknown option/],
   ])('exits 1 on the bad flag %j', async (flags, message) => {
     const run = await analyze([join(root, 'assets/plans/living-room.json'), ...flags]);

@@ -2,6 +2,7 @@
 // Usage: npm run --silent analyze -- FILE [--coats N] [--coverage M2_PER_L] [--waste PERCENT] [--walkway MM]
 import { readFile } from 'node:fs/promises';
 import { analysisOutput } from '../../shared/analysis/analysis-output';
+import { MAX_WALKWAY_MM, MIN_WALKWAY_MM } from '../../shared/analysis/fit/clearances';
 import { checkFit } from '../../shared/analysis/fit/index';
 import { computeTakeoff } from '../../shared/analysis/takeoff';
 import {
@@ -44,7 +45,12 @@ const FLAGS: Record<string, FlagRule> = {
     accepts: settingsField('wastePercent'),
     expected: `a percentage from 0 to ${MAX_WASTE_PERCENT}`,
   },
-  '--walkway': { key: 'walkwayMm', accepts: (v) => v > 0, expected: 'a width in mm, more than 0' },
+  // The editor's Check step accepts the same widths (one range, beside the default walkway).
+  '--walkway': {
+    key: 'walkwayMm',
+    accepts: (v) => v >= MIN_WALKWAY_MM && v <= MAX_WALKWAY_MM,
+    expected: `a width in mm, ${MIN_WALKWAY_MM} to ${MAX_WALKWAY_MM}`,
+  },
 };
 
 type ParsedArgs = { ok: true; file: string; options: AnalyzeOptions } | { ok: false; message: string };

@@ -1,3 +1,4 @@
+// Runs the migrations in migrations/index.ts to bring the database to the newest one.
 import { Migrator, type MigrationProvider } from 'kysely';
 import type { Db } from './database';
 import { migrations } from '../../migrations';

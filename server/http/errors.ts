@@ -1,3 +1,5 @@
+// The API's errors: HttpError and its helpers (404, 429), and the one error middleware that turns
+// them, zod issues, bad bodies and a lost database into JSON answers.
 import type { ErrorRequestHandler } from 'express';
 import { ZodError } from 'zod';
 

@@ -1,3 +1,5 @@
+// Tests for the option comparison: free floor share (pieces one walks round, not rugs or wall
+// shelves), the grid cap on very large rooms, and budget, new pieces and findings side by side.
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import { optionDocSchema } from '../schemas/option';

@@ -1,3 +1,5 @@
+// Tests for the finish take-off: which finish each surface of a room gets, coats, coverage and whole
+// boxes, surfaces with no finish, surface labels, and colours added up across a project's rooms.
 import { describe, expect, it } from 'vitest';
 import { projectTakeoff, roomTakeoff, surfaceLabel } from './finish-takeoff';
 import { shell, library, defaults } from './test-rooms';

@@ -1,3 +1,5 @@
+// Tests for an option's schedule lines: identical pieces grouped, existing pieces at no cost, held
+// pieces left out, paint priced by its tins, boards by full boxes, per-unit finishes.
 import { describe, expect, it } from 'vitest';
 import { optionDocSchema } from '../schemas/option';
 import { buildSchedule } from './schedule-lines';

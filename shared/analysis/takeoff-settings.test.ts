@@ -1,3 +1,5 @@
+// Tests for the take-off settings query: written by the client and read back by its schema to the
+// same settings, defaults when empty, and refusals with a message.
 import { describe, expect, it } from 'vitest';
 import { takeoffQuery, takeoffQuerySchema, takeoffSettingsSchema } from './takeoff-settings';
 import { defaults } from './test-rooms';

@@ -1,3 +1,5 @@
+// Tests for the room take-off against the README's plan-file example (tests/reference/rooms), coats,
+// coverage and waste, skirting by opening, an L-shaped room, and the printed analysis output.
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import { computeTakeoff, roundQuantity } from './takeoff';

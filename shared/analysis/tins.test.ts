@@ -1,3 +1,5 @@
+// Tests for choosing paint tins: the common sizes, the fewest tins with the least left over (each
+// expected plan worked by hand), other tin ranges, and bad requests refused.
 import { describe, expect, it } from 'vitest';
 import { COMMON_TIN_SIZES_L, chooseTins, describeTins } from './tins';
 

@@ -1,3 +1,5 @@
+// Tests for the catalogue: one sized, grouped and sourced entry per id, the starting pieces for a
+// living room, bedroom or dining room, beds built round their mattress, and pieceFromCatalogue.
 import { describe, expect, it } from 'vitest';
 import { pieceSchema } from '../schemas/option';
 import {

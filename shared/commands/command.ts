@@ -1,3 +1,5 @@
+// The room editor's command model: command names, the Command and CommandSpec shapes, the small
+// helpers commands use to check their arguments, and apply, which runs one and validates the result.
 import type { z } from 'zod';
 import type { FieldProblem } from '../geometry/validate';
 import { validateRoomShell } from '../geometry/validate';

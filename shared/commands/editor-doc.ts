@@ -1,3 +1,5 @@
+// The editor document: one room's shell shared by all its options plus each option's pieces and
+// finishes, and createEditorDoc to build one from stored room and option documents.
 import { optionDocSchema, type OptionDoc, type OptionDocInput } from '../schemas/option';
 import { roomShellSchema, type RoomShell, type RoomShellInput } from '../schemas/room';
 

@@ -1,3 +1,5 @@
+// Tests for assignFinish: finishes on the floor, the ceiling and every wall of one option, feature
+// walls set and cleared, and refusals for an unknown option, a missing wall or an empty finish id.
 import { describe, expect, it } from 'vitest';
 import { assignFinish } from './finish-commands';
 import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';

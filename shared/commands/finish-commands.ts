@@ -1,3 +1,5 @@
+// The finish command: assignFinish puts a finish from the finish library on an option's floor,
+// ceiling, walls or one feature wall, or takes it off.
 import type { FinishAssignments } from '../schemas/option';
 import { checkWall, done, makeCommand, refuse, type Command } from './command';
 

@@ -1,3 +1,5 @@
+// Tests for the undo history: undo and redo through every kind of command, menu labels, the step
+// limit, and gestures (a drag, or a move and a turn) folded into one step.
 import { describe, expect, it } from 'vitest';
 import { assignFinish } from './finish-commands';
 import {

@@ -1,3 +1,5 @@
+// Tests for merging two people's edits of one room: mergeShell (ceiling height, openings, outline,
+// falling back to mine when the result cannot be drawn) and mergeOptionDoc (pieces, finishes).
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import { optionDocSchema } from '../schemas/option';

@@ -1,3 +1,5 @@
+// Tests for the opening commands: adding, moving and changing doors, windows and passages, flipping
+// a door's hinge and swing, removing one, and the refusals of each.
 import { describe, expect, it } from 'vitest';
 import { addOpening, flipHinge, flipSwing, removeOpening, updateOpening } from './opening-commands';
 import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';

@@ -1,3 +1,5 @@
+// The opening commands of the room editor: add, update (move along a wall, resize, sill, hinge,
+// swing), flip a door's hinge or swing, and remove a door, window or passage.
 import { openingSchema, type Door, type Opening, type Window } from '../schemas/room';
 import { checkWall, definedFields, done, firstIssue, makeCommand, refuse, type Command, type RunResult } from './command';
 import type { EditorDoc } from './editor-doc';

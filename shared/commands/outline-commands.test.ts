@@ -1,3 +1,5 @@
+// Tests for the outline commands: setOutline, moveCorner, setWallLength (angles kept), insertCorner,
+// removeCorner, wall height and thickness, with openings, overrides and finishes following their walls.
 import { describe, expect, it } from 'vitest';
 import {
   closeOutlineGap,

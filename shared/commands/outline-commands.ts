@@ -1,3 +1,5 @@
+// The outline commands of the room editor: set the outline, move, insert and remove corners,
+// re-measure a wall, set wall height and thickness, and close a measured walk that misses its start.
 import { closeOutline, outlineFromCorners, type WalkStart, type WalkStep } from '../geometry/outline';
 import { CORNER_MARGIN_MM, MIN_WALL_LENGTH_MM, PARALLEL_SINE_TOLERANCE } from '../geometry/tolerances';
 import { add, addScaled, cross, dot, normalise, scale, sub } from '../geometry/vec';

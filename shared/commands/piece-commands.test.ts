@@ -1,3 +1,5 @@
+// Tests for the piece commands: add, move, turn, resize, update, duplicate and remove a piece, place
+// it from the holding area and send it back, and the refusals of each.
 import { describe, expect, it } from 'vitest';
 import {
   addPiece,

@@ -1,3 +1,5 @@
+// The piece commands of the room editor: add, move, turn, resize, update, duplicate and remove a
+// piece in one option, and place it from or send it to the holding area.
 import { pieceSchema, type OptionDoc, type Piece, type PieceInput } from '../schemas/option';
 import type { PlanPoint } from '../schemas/room';
 import {

@@ -1,3 +1,5 @@
+// Tests for changing a piece's kind, its kind settings and its accent colour and finish through
+// updatePiece.
 import { describe, expect, it } from 'vitest';
 import { updatePiece } from './piece-commands';
 import { applied, refusal, sampleDoc } from '../../tests/fixtures/commands';

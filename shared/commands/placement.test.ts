@@ -1,3 +1,5 @@
+// Tests for findPlacement, where a new piece lands: the asked-for spot when free, the nearest free
+// floor otherwise (rugs count as free), inside an L-shaped room, and turned pieces by their footprint.
 import { describe, expect, it } from 'vitest';
 import type { Piece } from '../schemas/option';
 import { boxesOverlap, boxInsideOutline, findPlacement } from './placement';

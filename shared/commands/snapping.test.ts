@@ -1,3 +1,5 @@
+// Tests for snapping: piece footprints under rotation, snapping to the grid and to an angle step,
+// to walls (flush, facing into the room, in an L) and to neighbouring pieces, and nudging.
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import type { Piece } from '../schemas/option';

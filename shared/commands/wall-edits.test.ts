@@ -1,3 +1,5 @@
+// Tests for renumbering walls when one splits or two merge: settings copied to both halves, later
+// walls moved up, and openings kept in place when corner 0 is removed.
 import { describe, expect, it } from 'vitest';
 import { removeCorner } from './outline-commands';
 import { applied, sampleDoc } from '../../tests/fixtures/commands';

@@ -1,3 +1,5 @@
+// Tests for an option's surfaces: the finish ids it uses, listed once, and the finish each surface,
+// feature wall and placed piece wears, with missing finishes and held pieces wearing nothing.
 import { describe, expect, it } from 'vitest';
 import type { Finish, PaintFinish, PhotoFinish } from '../schemas/finish';
 import { optionDocSchema } from '../schemas/option';

@@ -1,3 +1,5 @@
+// Tests for toSceneFinish: a paint's colour and roughness by sheen, a ready photo finish's texture
+// and real repeat size, and a photo still processing drawn as a plain colour.
 import { describe, expect, it } from 'vitest';
 import type { PaintFinish, PhotoFinish } from '../schemas/finish';
 import { PAINT_ROUGHNESS, PENDING_COLOUR_HEX, PHOTO_ROUGHNESS, toSceneFinish } from './scene-finish';

@@ -1,3 +1,5 @@
+// Tests for placing openings on their walls: edges on the inside and outside faces, window sills, door
+// swings by hinge and direction, and every opening of a shell with per-wall thickness.
 import { describe, expect, it } from 'vitest';
 import type { Door } from '../schemas/room';
 import { doorSwing, placeOpening, placeShellOpenings } from './openings';

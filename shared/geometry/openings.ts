@@ -1,3 +1,5 @@
+// Openings placed on their walls in plan mm: where a door, window or passage's edges fall on the
+// inside and outside faces, sill heights, and the arc a door leaf sweeps.
 import type { Door, Opening, RoomShell } from '../schemas/room';
 import { layoutShellWalls, type WallLayout } from './walls';
 import { addScaled, angleDegOf, type Vec2 } from './vec';

@@ -1,3 +1,5 @@
+// Tests for outlines from measured walks: rectangles, L shapes and splayed corners, how far a walk
+// misses, closing it with the angles kept, typed corners, retraced walks and interior angles.
 import { describe, expect, it } from 'vitest';
 import { closeOutline, interiorAnglesDeg, outlineFromCorners, outlineFromWalk, walkFromOutline, type WalkStep } from './outline';
 import { areaMm2, findSelfCrossings } from './polygon';

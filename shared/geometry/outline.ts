@@ -1,3 +1,5 @@
+// Room outlines from a measured walk round the room (wall lengths and turns) or from typed corners:
+// how far a walk misses, closing it, the walk that retraces an outline, and interior angles.
 import { MIN_WALL_LENGTH_MM, PARALLEL_SINE_TOLERANCE, POINT_TOLERANCE_MM } from './tolerances';
 import { windingSign } from './polygon';
 import { addScaled, angleDegOf, cross, directionDeg, distance, normalise, normaliseAngleDeg, sub, type Vec2 } from './vec';

@@ -1,3 +1,5 @@
+// Tests for a piece's plan geometry: footprint corners and bounds under rotation, rotation folding,
+// and which pieces are walked over (rugs, flat things), walked under (above head clearance) or round.
 import { describe, expect, it } from 'vitest';
 import { pieceFromCatalogue, type CatalogueId } from '../catalogue/catalogue';
 import type { Piece } from '../schemas/option';

@@ -1,3 +1,5 @@
+// Tests for polygon helpers: area, perimeter, winding and bounds, self-crossing walls (against
+// segmentsTouch on random outlines), ear-clipping triangulation, and point in polygon.
 import { describe, expect, it } from 'vitest';
 import {
   MAX_REPORTED_CROSSINGS,

@@ -1,3 +1,5 @@
+// Plan polygon helpers in mm: area, perimeter, winding, point in polygon, segment touching, the
+// self-crossing walls of an outline, bounds and ear-clipping triangulation.
 import { POINT_TOLERANCE_MM } from './tolerances';
 import { cross, distance, sub, type Vec2 } from './vec';
 

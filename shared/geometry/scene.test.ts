@@ -1,3 +1,5 @@
+// Tests for the 3D scene built from a room (the README's plan-file example and the benchmark room):
+// faces and normals, floor, ceiling, walls, reveals, door leaves, windows and placed pieces.
 import { describe, expect, it } from 'vitest';
 import { typicalRoom } from '../../scripts/bench/typical-room';
 import { optionDocSchema, type OptionDocInput } from '../schemas/option';

@@ -1,3 +1,5 @@
+// The 3D scene meshes for one room and option in scene metres: floor, ceiling, each wall's faces with
+// openings cut out, reveals, door leaves, window frames and panes, and placed pieces as boxes.
 import type { Piece } from '../schemas/option';
 import type { Opening, RoomShell } from '../schemas/room';
 import { placeOpening, doorSwing, type OpeningPlacement } from './openings';

@@ -1,3 +1,5 @@
+// Tests for texture repeats: how often a photo finish repeats per metre from its real size (tiles,
+// boards), a whole repeat on exactly its real width, and a size of zero refused.
 import { describe, expect, it } from 'vitest';
 import { textureFraction, textureRepeat } from './texture-repeat';
 

@@ -1,3 +1,5 @@
+// Tests for validateRoomShell: too few corners, zero-length and self-crossing walls, openings too
+// long, past a wall end, overlapping or too tall, missing walls, and each problem's facts as values.
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema, type RoomShellInput } from '../schemas/room';
 import { validateRoomShell } from './validate';

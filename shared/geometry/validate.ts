@@ -1,3 +1,5 @@
+// The geometric rules a room shell must keep beyond its schema (corners, wall lengths, crossings,
+// openings that fit their walls), each problem reported with its field path, message and facts.
 import type { RoomShell } from '../schemas/room';
 import { findSelfCrossings } from './polygon';
 import { CORNER_MARGIN_MM, MIN_WALL_LENGTH_MM, OPENING_OVERLAP_TOLERANCE_MM } from './tolerances';

@@ -1,3 +1,5 @@
+// Tests for walking through a room in the 3D view: a body stopped by walls, windows, open door
+// leaves and pieces, let through doors and passages and over rugs, and where a walk starts.
 import { describe, expect, it } from 'vitest';
 import { pieceFromCatalogue } from '../catalogue/catalogue';
 import type { Piece } from '../schemas/option';

@@ -1,3 +1,5 @@
+// Tests for laying out walls round an outline: outward growth in either winding, mitres at square,
+// re-entrant and 45° corners, steps between thicknesses, sharp corners cut square, per-wall overrides.
 import { describe, expect, it } from 'vitest';
 import { areaMm2 } from './polygon';
 import { layoutShellWalls, layoutWalls, outerRingMm, wallThicknessMm } from './walls';

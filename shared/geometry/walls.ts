@@ -1,3 +1,5 @@
+// Walls laid out round a room outline in plan mm: each wall's inside and outside faces, grown outward
+// by its thickness and mitred (or cut square) at the corners, and the outside ring of the walls.
 import { DEFAULT_WALL_THICKNESS_MM, type RoomShell } from '../schemas/room';
 import { windingSign } from './polygon';
 import { MITRE_LIMIT_THICKNESSES, PARALLEL_SINE_TOLERANCE, POINT_TOLERANCE_MM } from './tolerances';

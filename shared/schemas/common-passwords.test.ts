@@ -1,3 +1,5 @@
+// Tests for the common-password check against the whole list in @zxcvbn-ts/language-common (any
+// case, trimmed), and the first broken rule of a new password given in words.
 import { describe, expect, it } from 'vitest';
 import { dictionary } from '@zxcvbn-ts/language-common';
 import { isCommonPassword } from './common-passwords';

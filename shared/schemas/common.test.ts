@@ -1,3 +1,5 @@
+// Tests for the shared text schemas: control and text-direction characters refused in names, tab and
+// line breaks allowed in notes only, trimming and length limits, and record versions.
 import { describe, expect, it } from 'vitest';
 import { isCleanName, isCleanNote, nameText, noteText, versionSchema, withoutUncleanCharacters } from './common';
 

@@ -1,3 +1,5 @@
+// Schemas and helpers every other schema shares: id parameters, the error body, sorting, names and
+// notes free of control characters and text-direction marks, document ids and record versions.
 import { z } from 'zod';
 
 /** Any UUID written as text (ids typed by hand in a plan file may be something else). */

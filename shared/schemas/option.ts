@@ -1,3 +1,5 @@
+// The option schemas: limits on an option and its pieces, its name and note, supplier links (web
+// links only), the piece, the finish assignments of its surfaces, and the stored option document.
 import { z } from 'zod';
 import { docIdText, nameText, noteText } from './common';
 import { ROOM_LIMITS, boundedMm } from './room';

@@ -1,3 +1,5 @@
+// The outbox's shared shapes: what a sent e-mail was for, the page query with its cursor, and the
+// summaries, messages and pages the outbox API returns.
 import { z } from 'zod';
 
 /** What a sent e-mail was for: an invitation to the studio, a presentation link, a choice notification. */

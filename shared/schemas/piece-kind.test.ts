@@ -1,3 +1,5 @@
+// Tests for piece kinds: a kind read from a stored value or from words in a name, the settings and
+// accent fields each kind accepts, and version 1 plan files with older free-text kinds.
 import { describe, expect, it } from 'vitest';
 import { optionDocSchema } from './option';
 import { kindFromWords, pieceKindSchema } from './piece-kind';

@@ -1,3 +1,5 @@
+// Tests for plan files, starting from the example in assets/plans/living-room.json: reading with
+// defaults, errors naming their field, the same caps and bounds as the API, and writing back.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { readPlanFile, writePlanFile } from './plan-file';

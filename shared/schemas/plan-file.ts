@@ -1,3 +1,5 @@
+// The plan file: one room with one option as a single JSON file (import, export, the analysis
+// command), its schema, readPlanFile with errors naming their field, and writePlanFile.
 import { z } from 'zod';
 import { validateRoomShell, type FieldProblem } from '../geometry/validate';
 import { finishAssignmentsSchema, optionNameSchema, optionNoteSchema, piecesSchema } from './option';

@@ -1,3 +1,5 @@
+// The project schemas: project states, client bodies and records, creating and changing a project,
+// the project list query, and the summary and detail the projects API returns.
 import { z } from 'zod';
 import { emailSchema } from './studio';
 import { nameText, optionalText, sortSchema } from './common';

@@ -1,3 +1,5 @@
+// The room schemas: default wall height and thickness, the bounds no real room reaches, plan points,
+// doors, windows and passages, the room shell shared by its options, and the outline size check.
 import { z } from 'zod';
 import { docIdText, nameText } from './common';
 

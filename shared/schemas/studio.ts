@@ -1,3 +1,5 @@
+// The studio schemas: member roles, e-mail, sign-in and invitation bodies, members, the studio's
+// currency and locale for prices, and the session and invitation info the API returns.
 import { z } from 'zod';
 import { PASSWORD_MAX_LENGTH } from './password-rule';
 import { nameText } from './common';

@@ -1,3 +1,5 @@
+// Tests for lengths typed and shown in the person's unit: parseLength over the spellings people type
+// and its refusals, formatLength in cm, m, mm and feet and inches, and round trips between them.
 import { describe, expect, it } from 'vitest';
 import { formatLength, parseLength, type LengthUnit } from './length';
 

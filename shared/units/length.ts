@@ -1,3 +1,5 @@
+// Lengths for people: the units they see and type (mm, cm, m, in, ft and in), parseLength from typed
+// text to millimetres, and formatLength from millimetres back to text.
 import { z } from 'zod';
 
 /** The unit a person sees and types lengths in; a bare number means this unit ('ftin' takes a bare number as feet). */

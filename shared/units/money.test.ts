@@ -1,3 +1,5 @@
+// Tests for money: prices formatted in the studio's currency and locale (checked against the CLDR
+// conventions for en-GB and de-DE), and which currencies and locales are known.
 import { describe, expect, it } from 'vitest';
 import { canonicalLocale, formatMoney, isCurrency } from './money';
 

@@ -1,3 +1,5 @@
+// Tests for pieceSizeText: a piece's width × depth × height in centimetres, with one decimal place
+// only where needed, rounded to the millimetre.
 import { describe, expect, it } from 'vitest';
 import { decimalCmText, pieceSizeText } from './piece-size';
 

@@ -1,3 +1,5 @@
+// The designer's frame around every studio page: the top bar with Projects, Clients, Finish
+// library, Studio (and Outbox when present), the member's name and Sign out; plus the not-found page.
 import { Link, NavLink, Navigate, Outlet, useLocation, useNavigate } from 'react-router';
 import { Button } from '../components/ui/button';
 import { Notice, Spinner } from '../components/ui/layout';

@@ -1,3 +1,4 @@
+// The app's shared React Query client (short stale time, no retry on 4xx answers) and its provider.
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { ApiError } from '../lib/api';

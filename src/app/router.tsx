@@ -1,3 +1,5 @@
+// The designer app's routes: sign-in, sign-up, invites, the client presentation link in dev, and the
+// studio pages inside the designer frame (the room editor in its wide form).
 import { createBrowserRouter, Navigate } from 'react-router';
 import { DesignerLayout, NotFoundPage } from './layout';
 import { ProjectsRoute } from './routes/projects-route';

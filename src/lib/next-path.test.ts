@@ -1,3 +1,4 @@
+// Tests for the sign-in redirect: only a same-site path is kept, anything else goes to the projects list.
 import { describe, expect, it } from 'vitest';
 import { safeNextPath } from './next-path';
 

@@ -1,3 +1,5 @@
+// Tests for turning scene mesh data into three.js geometry: every vertex and triangle kept, true
+// sizes in metres, merged meshes, and tracing a triangle back to its piece.
 import * as THREE from 'three';
 import { describe, expect, it } from 'vitest';
 import { buildRoomScene, meshBounds, type MeshData } from '../../shared/geometry/scene';

@@ -1,8 +1,7 @@
-import * as THREE from 'three';
-import type { MeshData } from '../../shared/geometry/scene';
-
 // Scene data arrives as plain typed arrays (scene metres); this is the one place they become
 // three.js objects, so counts and bounds stay exactly what shared/geometry computed.
+import * as THREE from 'three';
+import type { MeshData } from '../../shared/geometry/scene';
 
 /** A BufferGeometry (scene metres) holding exactly the vertices, normals, uvs and triangles of `mesh`. */
 export function meshDataToGeometry(mesh: MeshData): THREE.BufferGeometry {

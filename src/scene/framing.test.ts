@@ -1,3 +1,5 @@
+// Tests for the Overview camera's starting frame: every corner of a room in the picture, filling
+// it, and looking at the room's middle.
 import * as THREE from 'three';
 import { describe, expect, it } from 'vitest';
 import { buildRoomScene, type Bounds3 } from '../../shared/geometry/scene';

@@ -1,7 +1,6 @@
-import type { Bounds3 } from '../../shared/geometry/scene';
-
 // Where the Overview camera starts: above and beside the room, looking at its centre, far enough
 // back that the whole room fits the view. Scene metres, y up.
+import type { Bounds3 } from '../../shared/geometry/scene';
 
 /** The Overview looks from the front-right of the plan (its bottom edge, +z), turned this far towards +x. */
 export const OVERVIEW_AZIMUTH_DEG = 28;

@@ -1,8 +1,7 @@
-import * as THREE from 'three';
-
 // The scene's own materials: the default colours of walls, floor, ceiling and pieces before a finish
 // is chosen, the selection tint and the faded near walls. Finishes (paint colours and photo textures
 // at their real repeat size) are made in finish-materials.ts.
+import * as THREE from 'three';
 
 /** Parlour's accent, used to mark the selected piece. */
 export const SELECTION_COLOUR = '#2f6b5c';

@@ -1,3 +1,5 @@
+// Tests for the colours of piece boxes: a piece's own colour or the neutral for existing or new,
+// and the tint of the selected piece.
 import * as THREE from 'three';
 import { describe, expect, it } from 'vitest';
 import { buildRoomScene } from '../../shared/geometry/scene';

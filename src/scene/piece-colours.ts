@@ -1,3 +1,5 @@
+// The colours of piece boxes in 3D: a piece's own colour or the neutral for its status, written per
+// vertex with the selected piece tinted.
 import * as THREE from 'three';
 import type { Piece } from '../../shared/schemas/option';
 import type { MergedRanges } from './build-geometry';

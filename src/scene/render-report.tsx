@@ -1,3 +1,5 @@
+// Draws each frame of a 3D view itself and publishes the renderer's figures (draw calls, triangles,
+// live geometries and textures, frames) on the view's host element for browser tests.
 import { useFrame } from '@react-three/fiber';
 import { useRef } from 'react';
 

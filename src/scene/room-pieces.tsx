@@ -1,3 +1,5 @@
+// The room's pieces in 3D: drawn as their forms or as plain boxes, merged into a few meshes coloured
+// per vertex, with clicks traced back to a piece and the selected piece's box outlined.
 import type { ThreeEvent } from '@react-three/fiber';
 import { useThree } from '@react-three/fiber';
 import { useEffect, useLayoutEffect, useMemo } from 'react';

@@ -1,3 +1,5 @@
+// The room's shell in 3D: floor, ceiling, walls, door leaves and windows with their finishes, and
+// clicks on a surface (not drags) reported to the caller.
 import { useEffect, useMemo } from 'react';
 import type { ThreeEvent } from '@react-three/fiber';
 import type * as THREE from 'three';

@@ -1,21 +1,19 @@
-import { Canvas, useThree } from '@react-three/fiber';
-import { useEffect, useMemo, useRef, useState } from 'react';
-import * as THREE from 'three';
-import { buildPiecesScene, buildShellScene, type PieceSceneData } from '../../shared/geometry/scene';
+// The editor's 3D preview of a room: the shell, the placed pieces and their finishes, with the
+// Overview's orbit controls, clickable pieces and surfaces, and the near walls faded.
+import { useMemo, useRef } from 'react';
+import { buildPiecesScene, type PieceSceneData } from '../../shared/geometry/scene';
 import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
-import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from './materials';
 import { OverviewControls } from './overview-controls';
 import { RoomPieces } from './room-pieces';
 import { buildPieceForms } from '../../shared/geometry/forms/piece-forms';
 import { RoomShellMeshes, type SurfaceHit } from './room-shell';
-import { browserHasWebGL, SceneErrorBoundary } from './scene-error-boundary';
+import { SceneCanvas } from './scene-canvas';
 import { SceneLights } from './scene-lights';
-import { shellParts } from './shell-parts';
 import { RenderAndReport } from './render-report';
-import { FinishMaterials, type SurfaceFinishes } from './finish-materials';
+import type { SurfaceFinishes } from './finish-materials';
+import { useSceneResources } from './use-scene-resources';
 import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from './view-helpers';
-import { windowLightRects } from './window-lights';
 
 export type { SurfaceHit } from './room-shell';
 export type { SurfaceFinishes } from './finish-materials';
@@ -39,7 +37,6 @@ export interface RoomViewProps {
   onSurfaceClick?: (surface: SurfaceHit) => void;
 }
 
-const FIELD_OF_VIEW_DEG = 40;
 const WEBGL_MESSAGE = '3D preview needs WebGL.';
 
 /**
@@ -60,51 +57,25 @@ export default function RoomView({
   onSurfaceClick,
 }: RoomViewProps) {
   const host = useRef<HTMLDivElement>(null);
-  const [webgl] = useState(browserHasWebGL);
-  const fallback = <WebGLMessage />;
   return (
-    <div ref={host} role="region" aria-label={label} data-testid="room-view" className={className ?? 'relative h-full w-full'}>
-      {webgl ? (
-        <SceneErrorBoundary fallback={fallback}>
-          <Canvas
-            frameloop="demand"
-            shadows="percentage"
-            dpr={[1, 2]}
-            // Neutral tone mapping keeps a lit paint close to its swatch; the output is sRGB.
-            gl={{
-              preserveDrawingBuffer: true,
-              antialias: true,
-              toneMapping: THREE.NeutralToneMapping,
-              outputColorSpace: THREE.SRGBColorSpace,
-            }}
-            camera={{ fov: FIELD_OF_VIEW_DEG, near: 0.05, far: 200, position: [0, 8, 8] }}
-            fallback={fallback}
-          >
-            <color attach="background" args={[SCENE_BACKGROUND]} />
-            <RoomScene
-              shell={shell}
-              pieces={pieces}
-              selectedPieceId={selectedPieceId}
-              onPieceClick={onPieceClick}
-              fadeNearWalls={fadeNearWalls}
-              host={host}
-              finishes={finishes}
-              onSurfaceClick={onSurfaceClick}
-            />
-          </Canvas>
-        </SceneErrorBoundary>
-      ) : (
-        fallback
-      )}
-    </div>
-  );
-}
-
-function WebGLMessage() {
-  return (
-    <div className="flex h-full w-full items-center justify-center bg-sand p-4 text-sm text-ink-soft">
-      <p>{WEBGL_MESSAGE}</p>
-    </div>
+    <SceneCanvas
+      host={host}
+      label={label}
+      webglMessage={WEBGL_MESSAGE}
+      shadowMaps
+      className={className ?? 'relative h-full w-full'}
+    >
+      <RoomScene
+        shell={shell}
+        pieces={pieces}
+        selectedPieceId={selectedPieceId}
+        onPieceClick={onPieceClick}
+        fadeNearWalls={fadeNearWalls}
+        host={host}
+        finishes={finishes}
+        onSurfaceClick={onSurfaceClick}
+      />
+    </SceneCanvas>
   );
 }
 
@@ -131,21 +102,11 @@ function RoomScene({
 }: RoomSceneProps) {
   const shell = useStableValue(shellProp);
   const finishes = useStableValue(finishesProp ?? {});
-  const invalidate = useThree((state) => state.invalidate);
   const pieces = useStableValue(dressedPieces(piecesProp, finishes));
 
-  const materials = useMemo(createSceneMaterials, []);
-  useEffect(() => () => disposeSceneMaterials(materials), [materials]);
-  const gl = useThree((state) => state.gl);
-  const finishMaterials = useMemo(
-    () => new FinishMaterials(() => invalidate(), Math.min(8, gl.capabilities.getMaxAnisotropy())),
-    [invalidate, gl],
-  );
-  useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
+  const { invalidate, materials, finishMaterials, parts, windows } = useSceneResources(shell);
   const surfaces = useMemo(() => surfaceMaterials(finishes, finishMaterials), [finishes, finishMaterials]);
-  const windows = useMemo(() => tryBuild('windows', () => windowLightRects(shell)) ?? [], [shell]);
 
-  const parts = useMemo(() => tryBuild('room', () => shellParts(buildShellScene(shell), shell)), [shell]);
   const pieceScene = useMemo<readonly PieceSceneData[]>(() => tryBuild('pieces', () => buildPiecesScene(pieces)) ?? [], [pieces]);
   const forms = useMemo(() => tryBuild('forms', () => buildPieceForms(pieces)), [pieces]);
 

@@ -1,3 +1,5 @@
+// Keeps a 3D view's failure inside the view: an error boundary with a plain message in its place,
+// and a check that the browser can make a WebGL context at all.
 import { Component, type ReactNode } from 'react';
 
 interface Props {

@@ -1,11 +1,10 @@
+// Soft daylight without an environment map (nothing is fetched): sky and floor bounce from a
+// hemisphere, one sun for the shadows under the pieces, a weak warm fill so the sides the sun
+// misses do not go grey, and a wide soft beam of daylight from every window into the room.
 import { useLayoutEffect, useMemo, useRef } from 'react';
 import * as THREE from 'three';
 import type { Bounds3 } from '../../shared/geometry/scene';
 import type { WindowLightRect } from './window-lights';
-
-// Soft daylight without an environment map (nothing is fetched): sky and floor bounce from a
-// hemisphere, one sun for the shadows under the pieces, a weak warm fill so the sides the sun
-// misses do not go grey, and a wide soft beam of daylight from every window into the room.
 
 /**
  * Towards the sun from the room centre: about 50° up and from the front-left of the plan, so the

@@ -1,3 +1,5 @@
+// Tests for grouping the room shell into meshes: each window with its wall, and every triangle of
+// each wall's outside face, top and reveals kept in the wall body.
 import { describe, expect, it } from 'vitest';
 import { buildRoomScene } from '../../shared/geometry/scene';
 import { shellParts } from './shell-parts';

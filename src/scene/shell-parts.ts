@@ -1,11 +1,10 @@
+// How the room's static surfaces are grouped into draw calls: per wall, the inside face alone (it
+// will take the wall's own finish), everything else of that wall in one mesh, and the wall's window
+// frames and glass, so one wall can fade as a whole. Door leaves share one mesh. Scene metres.
 import type * as THREE from 'three';
 import type { Bounds3, MeshData, ShellSceneData } from '../../shared/geometry/scene';
 import type { RoomShell } from '../../shared/schemas/room';
 import { isEmptyMesh, mergeMeshData, meshDataToGeometry } from './build-geometry';
-
-// How the room's static surfaces are grouped into draw calls: per wall, the inside face alone (it
-// will take the wall's own finish), everything else of that wall in one mesh, and the wall's window
-// frames and glass, so one wall can fade as a whole. Door leaves share one mesh. Scene metres.
 
 export interface WallParts {
   index: number;

@@ -1,8 +1,7 @@
+// Rooms shared by this folder's tests: the design's example room and an L-shaped one, in plan mm.
 import { roomShellSchema, type RoomShell } from '../../shared/schemas/room';
 import { pieceSchema, type Piece } from '../../shared/schemas/option';
 import { designExampleRoom } from '../../tests/reference/rooms';
-
-// Rooms shared by this folder's tests: the design's example room and an L-shaped one, in plan mm.
 
 /** The design's example room: 4200 × 3600 mm, door on wall 0, window on wall 2, passage on wall 3. */
 export const exampleShell: RoomShell = roomShellSchema.parse(designExampleRoom);

@@ -1,3 +1,5 @@
+// Tests for which walls are faded in the Overview: the walls nearest the eye in a rectangular and an
+// L-shaped room, and none when looking straight down.
 import { describe, expect, it } from 'vitest';
 import { buildRoomScene } from '../../shared/geometry/scene';
 import { wallsFacingEye } from './wall-facing';

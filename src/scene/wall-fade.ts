@@ -1,3 +1,5 @@
+// Fading walls in the Overview: tags on wall meshes, and swapping faded walls (and their glass) to
+// see-through materials.
 import * as THREE from 'three';
 import type { SceneMaterials } from './materials';
 

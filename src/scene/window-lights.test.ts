@@ -1,3 +1,4 @@
+// Tests for the window lights: one light in each window's inside face, its size, shining into the room.
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../../shared/schemas/room';
 import { WINDOW_LIGHT_INSET_M, windowLightRects } from './window-lights';

@@ -1,3 +1,5 @@
+// API tests for sign-up, sign-in and sign-out, members and roles, choosing a password, sign-in
+// throttling under parallel attempts and the sign-up limit per client address.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import { hashPassword, verifyPassword } from '../../server/services/auth/passwords';

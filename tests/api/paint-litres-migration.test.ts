@@ -1,3 +1,5 @@
+// Tests migration 0012 on stored data: a paint price per unit becomes one per litre, and per unit
+// on a paint is refused afterwards.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql, type Kysely } from 'kysely';
 import { down, up } from '../../migrations/0012_option_versions_and_paint_litres';

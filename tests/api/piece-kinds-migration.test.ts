@@ -1,3 +1,5 @@
+// Tests migration 0010 on stored options: catalogue ids, older demo values and names map to kinds,
+// known kinds stay, and the rest become plain-block.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql, type Kysely } from 'kysely';
 import { up } from '../../migrations/0010_piece_kinds';

@@ -1,3 +1,5 @@
+// Tests a piece's accent finish on the client's link: which finishes' files the link may serve,
+// and what the 3D view and the client piece are given.
 import { describe, expect, it } from 'vitest';
 import { clientSurfaces, toClientPiece } from '../../server/features/presentations/presentations.service';
 import { optionFinishIds } from '../../shared/finishes/option-surfaces';

@@ -1,3 +1,4 @@
+// Tests migration 0011: presentation_requests is dropped, and down() makes it again as 0004 did.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql, type Kysely } from 'kysely';
 import { down, up } from '../../migrations/0011_drop_presentation_requests';

@@ -1,3 +1,5 @@
+// API tests for clients and projects: creating a project with a new client in one transaction,
+// another studio's client refused, search, sort, rename, archive and bad input.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, signUpStudio, type TestApp } from '../setup/app';
 

@@ -1,3 +1,6 @@
+// API tests for rooms and options: create and list, saves with versions and conflicts, refused
+// shells, options added, duplicated, reordered, saved and deleted, and the README's example plan
+// file imported and exported.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';

@@ -1,3 +1,5 @@
+// Tests the demo seed: it seeds the demo studio once, and the demo owner sees the two-room flat
+// with two options per room.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp, type TestApp } from '../setup/app';

@@ -1,3 +1,5 @@
+// Browser test of the room editor's Check step: the fit check says in plain words what does not
+// fit, and updates live as a piece moves.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from './lib/browser';

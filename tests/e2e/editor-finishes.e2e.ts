@@ -1,3 +1,5 @@
+// Browser test of finishes in the room editor: a wood photo finish on the floor and a paint on one
+// wall of one option, with the texture loaded in the 3D preview.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';

@@ -1,3 +1,5 @@
+// Browser test of the room editor: an L-shaped room drawn by typed measurements, openings and
+// pieces, options kept apart, undo and save, and a local draft kept across a reload.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from './lib/browser';

@@ -1,3 +1,5 @@
+// Browser test of the finish library: uploading a wood and a tile photo, setting their real sizes,
+// adding a paint, and a viewer who can only read.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';

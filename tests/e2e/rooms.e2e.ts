@@ -1,3 +1,5 @@
+// Browser test of rooms on a project: adding one from typed sizes, importing a plan file, the 3D
+// view and take-off, and two tabs saving the same room (the conflict loses neither change).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';

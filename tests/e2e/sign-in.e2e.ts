@@ -1,3 +1,5 @@
+// Browser test of the first sign-in, from the app's address and from a deep link: it works on the
+// first try and lands where it was going.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from './lib/browser';

@@ -1,3 +1,5 @@
+// Browser test of a studio from sign-up to its first project: sign-up and sign-in, form errors,
+// a client and a project a viewer cannot change, and a designer invited through the Outbox.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from './lib/browser';

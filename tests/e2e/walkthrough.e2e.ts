@@ -28,6 +28,8 @@ const MAX_TEXTURE_BYTES = 64 * 1024 * 1024;
 /** Triangles of a typical room: 40 forms of at most 2,000, the shell, the frames (the budget). */
 const MAX_TRIANGLES = 150_000;
 const BODY_RADIUS_M = 0.25;
+/** Software WebGL on a busy machine can take seconds per frame: wait for one that long (a wait, not a speed target). */
+const FRAME_WAIT = { timeout: 15_000 };
 const SWITCHES = 50;
 
 let browser: Browser;
@@ -526,14 +528,14 @@ describe('the walk-through', () => {
     const camera = await settledCamera(page, view);
     const trianglesA = await num(view, 'triangles');
     await page.keyboard.press('2');
-    await expect.poll(() => view.getAttribute('data-option')).not.toBe(null);
-    await expect.poll(() => num(view, 'triangles')).toBeGreaterThan(trianglesA);
+    await expect.poll(() => view.getAttribute('data-option'), FRAME_WAIT).not.toBe(null);
+    await expect.poll(() => num(view, 'triangles'), FRAME_WAIT).toBeGreaterThan(trianglesA);
     expect(await cameraOf(view)).toEqual(camera);
     await page
       .getByRole('group', { name: 'Options' })
       .getByRole('button', { name: /Option A/ })
       .click();
-    await expect.poll(() => num(view, 'triangles')).toBe(trianglesA);
+    await expect.poll(() => num(view, 'triangles'), FRAME_WAIT).toBe(trianglesA);
     expect(await cameraOf(view)).toEqual(camera);
 
     // A first round loads everything; after it, switching back and forth adds nothing on the GPU.
@@ -541,7 +543,7 @@ describe('the walk-through', () => {
     const switchTo = async (key: string) => {
       const f = await frames();
       await page.keyboard.press(key);
-      await expect.poll(frames).toBeGreaterThan(f);
+      await expect.poll(frames, FRAME_WAIT).toBeGreaterThan(f);
     };
     await switchTo('2');
     await switchTo('1');

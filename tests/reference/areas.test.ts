@@ -1,3 +1,5 @@
+// Floor areas and perimeters against published and derived values (docs/references.md) and
+// against an independent library, 2d-polygon-area.
 import polygonArea from '2d-polygon-area';
 import { describe, expect, it } from 'vitest';
 import { computeTakeoff } from '../../shared/analysis/takeoff';

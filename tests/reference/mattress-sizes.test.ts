@@ -1,3 +1,5 @@
+// The catalogue's bed sizes against the metric and US mattress sizes in docs/references.md, and
+// the frame allowance on each bed box.
 import { describe, expect, it } from 'vitest';
 import {
   BED_FRAME_LENGTH_ALLOWANCE_MM,

@@ -1,3 +1,5 @@
+// Wall areas and paint per coat against a published worked example (a 10 × 15 ft room with two
+// doors and two windows).
 import { describe, expect, it } from 'vitest';
 import { computeTakeoff } from '../../shared/analysis/takeoff';
 import { roomShellSchema } from '../../shared/schemas/room';

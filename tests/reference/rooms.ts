@@ -1,3 +1,5 @@
+// The README's plan-file example room and the take-off numbers the README prints for it, shared
+// by the tests that check against them.
 import type { RoomShellInput } from '../../shared/schemas/room';
 
 /** The room of the README's plan-file example (plan mm); its take-off numbers are printed in the README. */

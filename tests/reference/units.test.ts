@@ -1,3 +1,5 @@
+// Length and area units against their definitions (1 in = 25.4 mm, 1 ft = 0.3048 m), and how
+// lengths are written for a designer.
 import { describe, expect, it } from 'vitest';
 import { areaMm2 } from '../../shared/geometry/polygon';
 import { MM_PER_FOOT, MM_PER_INCH, formatLength, parseLength } from '../../shared/units/length';

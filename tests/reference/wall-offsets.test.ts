@@ -1,3 +1,5 @@
+// The walls' outer ring (the outline grown outward by the wall thickness) against offsetting by
+// an outside library, clipper-lib.
 import ClipperLib from 'clipper-lib';
 import { describe, expect, it } from 'vitest';
 import { areaMm2 } from '../../shared/geometry/polygon';

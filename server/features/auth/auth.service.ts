@@ -1,3 +1,5 @@
+// Sign-up, sign-in, sign-out and the session's details: makes a studio and its first owner, checks
+// passwords, and applies the sign-in and sign-up rate limits.
 import type { Db } from '../../db/database';
 import type { SignInBody } from '../../../shared/schemas/studio';
 import type { SignUpBody } from '../../../shared/schemas/account';

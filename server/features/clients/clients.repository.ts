@@ -1,3 +1,5 @@
+// Database reads and writes for a studio's clients: search and sort the list with each client's
+// project count, fetch, add and update one.
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { Client, ClientBody, ListQuery } from '../../../shared/schemas/project';

@@ -1,3 +1,4 @@
+// The clients API: list and search a studio's clients, add one, read one and change one.
 import { clientBodySchema, clientPatchSchema, listQuerySchema } from '../../../shared/schemas/project';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';

@@ -1,3 +1,5 @@
+// The stored files route (GET /api/files/:name): serves a derived image only to signed-in members
+// allowed to read it, and answers 404 alike for someone else's file and a missing one.
 import { route, type RouteDef } from '../../http/routes';
 import { notFound } from '../../http/errors';
 import { canReadFile } from './files.access';

@@ -1,3 +1,5 @@
+// Tests the finish name read from an uploaded photo's file name, control and text-direction
+// characters left out.
 import { describe, expect, it } from 'vitest';
 import { nameFromFileName } from './finishes.service';
 import { isCleanName } from '../../../shared/schemas/common';

@@ -1,3 +1,5 @@
+// Database reads and writes for the Outbox: records each mail sent for a studio, and lists (a page
+// at a time, newest first) and reads that studio's sent mail.
 import type { Db } from '../../db/database';
 import type { SentMailKind } from '../../../shared/schemas/outbox';
 

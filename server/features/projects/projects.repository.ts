@@ -1,3 +1,5 @@
+// Database reads and writes for projects: list and search a studio's projects with their client,
+// fetch, add and update one, lock its state, mark it changed, and reopen a decided one.
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { ListQuery, ProjectPatch, ProjectSummary, ProjectState } from '../../../shared/schemas/project';

@@ -1,3 +1,4 @@
+// The projects API: list, create, read and change a studio's projects, and reopen a decided one.
 import { createProjectSchema, listQuerySchema, projectPatchSchema } from '../../../shared/schemas/project';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';

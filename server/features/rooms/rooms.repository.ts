@@ -1,3 +1,5 @@
+// Database reads and writes for rooms and their options: list, fetch, add, save by version, reorder
+// and delete, plus the presentations and choices that show a room or option.
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import { roomShellSchema } from '../../../shared/schemas/room';

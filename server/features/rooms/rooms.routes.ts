@@ -1,3 +1,5 @@
+// The rooms and options API: a project's rooms, creating and importing a room, opening, saving,
+// deleting and exporting one as a plan file, and adding, ordering, saving and deleting its options.
 import { z } from 'zod';
 import { idParamSchema, projectIdParamSchema } from '../../../shared/schemas/common';
 import {

@@ -1,3 +1,5 @@
+// Tests the CSV writer (quoting, CRLF, short records, formulas defused) and that a schedule's CSV
+// writes web links only.
 import { describe, expect, it } from 'vitest';
 import { toCsv } from './csv';
 

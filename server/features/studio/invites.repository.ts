@@ -1,3 +1,5 @@
+// Database reads and writes for a studio's invitations: add one, list the open ones, find one by
+// its token's hash, delete one and mark one accepted.
 import type { Db } from '../../db/database';
 import type { InviteInfo, Role } from '../../../shared/schemas/studio';
 

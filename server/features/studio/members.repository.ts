@@ -1,3 +1,5 @@
+// Database reads and writes for a studio's members: find one by e-mail, list, fetch, count the
+// owners, add one, change a role, remove one and end their sessions.
 import type { Db } from '../../db/database';
 import type { Member, Role } from '../../../shared/schemas/studio';
 

@@ -1,3 +1,4 @@
+// Random tokens for cookies and e-mailed links, and the hash that is stored in their place.
 import { createHash, randomBytes } from 'node:crypto';
 
 /** A random 256-bit token for a cookie or an e-mailed link; only its hash is stored. */

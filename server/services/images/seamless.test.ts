@@ -1,3 +1,4 @@
+// Tests the mirrored edge blend that makes a photo finish repeat without a visible seam.
 import { describe, expect, it } from 'vitest';
 import { blendEdgesMirrored } from './seamless';
 import { photoLike } from './generate';

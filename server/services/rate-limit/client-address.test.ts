@@ -1,3 +1,5 @@
+// Tests the client address key rate limits count by: IPv4 on its own (IPv4-mapped too), IPv6 by
+// its /64, anything else as it is.
 import { describe, expect, it } from 'vitest';
 import { clientAddressKey } from './client-address';
 

@@ -1,3 +1,5 @@
+// Tests for the reach widths the fit check asks beside each kind of piece, against the published
+// clearance figures (exactly converted from inches), and their use in the walkway check.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { BED_SIDE_MM, BEHIND_DINER_MM, COFFEE_TABLE_REACH_MM, reachWidthMm } from './clearances';

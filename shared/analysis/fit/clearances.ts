@@ -5,6 +5,9 @@ import { MM_PER_INCH } from '../../units/length';
 
 /** Clear width of a main walkway, mm: ≈ 900 mm, matching IRC R311.6 hallway 36 in and ADA §403.5.1 (common practice; docs/references.md). */
 export const DEFAULT_WALKWAY_MM = 900;
+/** The walkway widths the check accepts, mm: narrower is not a route, wider is not a walkway (Parlour's own bounds). */
+export const MIN_WALKWAY_MM = 300;
+export const MAX_WALKWAY_MM = 2000;
 
 /** Beside a bed on the side people walk: at least 22 in (HUD Manual of Acceptable Practices vol. 4, 1973; summary). */
 export const BED_SIDE_MM = 22 * MM_PER_INCH;

@@ -1,3 +1,5 @@
+// Tests for the `too-big-for-door` finding: pieces carried on their side or on end through doors and
+// passages, the carry allowance, and the clear width a door's leaf takes off.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { CARRY_ALLOWANCE_MM, clearPassMm, DOOR_LEAF_CLEAR_LOSS_MM, findTooBigForDoor, passesThrough } from './door-fit';

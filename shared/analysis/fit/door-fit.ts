@@ -1,3 +1,5 @@
+// Fit check rule `too-big-for-door`: whether each placed piece can be carried through one of the
+// room's doors or passages, with the carry allowance and the clear width a door's leaf loses.
 import type { Opening, RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
 import { isWalkedOver } from '../../geometry/piece';

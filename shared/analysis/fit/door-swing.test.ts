@@ -1,3 +1,5 @@
+// Tests for the `door-swing` finding: pieces in the quarter disc a door's leaf sweeps into the room,
+// following the arc and its side, and what is left out (doors opening out, shelves above, rugs).
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { findDoorSwings } from './door-swing';

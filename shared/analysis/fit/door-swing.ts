@@ -1,3 +1,5 @@
+// Fit check rule `door-swing`: placed pieces standing in the quarter disc a door's leaf sweeps into
+// the room, with the arc drawn as a convex polygon of short straight pieces.
 import { doorSwing, type DoorSwing } from '../../geometry/openings';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, directionDeg } from '../../geometry/vec';

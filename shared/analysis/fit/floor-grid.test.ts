@@ -1,3 +1,5 @@
+// Tests for the floor grid the walkway check runs on: rasterising an outline and its obstacles, the
+// exact distance field (against a brute-force search), and the cap on grid cells for outsized rooms.
 import { describe, expect, it } from 'vitest';
 import { pieceBox } from './boxes';
 import { cellAt, cellCentreMm, distanceField, FREE, gridCellMm, MAX_GRID_CELLS, rasteriseFloor, WALL } from './floor-grid';

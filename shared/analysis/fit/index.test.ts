@@ -1,3 +1,5 @@
+// Tests for checkFit as a whole: nothing on a clean layout, every finding kind on a crowded one in a
+// steady order, each a valid finding, and the default walkway width.
 import { describe, expect, it } from 'vitest';
 import { findingSchema } from './finding';
 import { checkFit } from './index';

@@ -1,3 +1,5 @@
+// Tests for the `outside-room` finding: pieces flush with a wall, through a wall, poked by the inside
+// corner of an L, and wholly outside the room.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { findOutsideRoom } from './outside-room';

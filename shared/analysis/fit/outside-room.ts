@@ -1,3 +1,5 @@
+// Fit check rule `outside-room`: placed pieces with a corner outside the room's outline or a wall
+// running through them; a piece flush with a wall counts as inside.
 import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
 import { pointInPolygon } from '../../geometry/polygon';

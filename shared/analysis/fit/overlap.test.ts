@@ -1,3 +1,5 @@
+// Tests for the `overlap` finding: pieces pushed into one another, touching edge to edge, stacked in
+// height, turned boxes, rugs, and pieces in the holding area.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { findOverlaps } from './overlap';

@@ -1,3 +1,5 @@
+// Fit check rule `overlap`: pairs of placed pieces that share floor area and height; rugs never count
+// and pieces stacked apart in height are fine.
 import type { Finding } from './finding';
 import { isWalkedOver } from '../../geometry/piece';
 import { convexOverlap, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';

@@ -1,3 +1,5 @@
+// Tests for the `narrow-walkway` and `unreachable` findings: gaps on the way to each piece's front,
+// shut-in pieces, routes over rugs and under high shelves, and rooms with no way in.
 import { describe, expect, it } from 'vitest';
 import { HEAD_CLEARANCE_MM } from '../../geometry/piece';
 import { placedBoxes } from './boxes';

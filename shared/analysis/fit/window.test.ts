@@ -1,3 +1,5 @@
+// Tests for the `window-blocked` finding: pieces against a window's wall rising above its sill, and
+// the ones that are fine (lower, pulled off the wall, beside the window, above it).
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { findBlockedWindows } from './window';

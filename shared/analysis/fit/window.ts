@@ -1,3 +1,5 @@
+// Fit check rule `window-blocked`: placed pieces against a window's wall, under its span, rising
+// above its sill and starting below its head.
 import { placeOpening } from '../../geometry/openings';
 import { layoutShellWalls } from '../../geometry/walls';
 import { dot, sub } from '../../geometry/vec';

@@ -1,3 +1,5 @@
+// Tests for piece forms: every kind stays inside its box over catalogue and random sizes, rests or
+// hangs, faces +y and keeps its triangle budget; ergonomic defaults lie within their published ranges.
 import { describe, expect, it } from 'vitest';
 import { CATALOGUE } from '../../catalogue/catalogue';
 import { KIND_SETTINGS, PIECE_KINDS, type PieceKind, type PieceSettings } from '../../schemas/piece-kind';

@@ -1,3 +1,4 @@
+// Route for one project: its page with the room list, the schedules link and the presentations panel.
 import { useParams } from 'react-router';
 import { ProjectPage } from '../../features/projects/components/project-page';
 import { useProject } from '../../features/projects/api/projects';

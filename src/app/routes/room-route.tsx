@@ -1,3 +1,4 @@
+// Route for the room editor: reads the project and room ids from the URL and passes in the studio's finishes.
 import { useParams } from 'react-router';
 import { EditorPage } from '../../features/rooms/editor/editor-page';
 import { useFinishes } from '../../features/finishes/api/finishes';

@@ -1,3 +1,4 @@
+// Routes for a project's take-off page and an option's schedule page, keyed by their ids from the URL.
 import { useParams } from 'react-router';
 import { TakeoffPage } from '../../features/schedules/components/takeoff-page';
 import { SchedulePage } from '../../features/schedules/components/schedule-page';

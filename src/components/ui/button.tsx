@@ -1,3 +1,4 @@
+// The shared button: primary, secondary, quiet and danger looks, two sizes, and a busy spinner.
 import { forwardRef, type ButtonHTMLAttributes } from 'react';
 
 type Variant = 'primary' | 'secondary' | 'quiet' | 'danger';

@@ -1,3 +1,4 @@
+// Text and text-area fields that save on commit (Enter, leaving the field) and revert on Escape.
 import type { ReactNode } from 'react';
 import { TextAreaField, TextField } from './field';
 import { useCommitText, type CommitTextOptions } from './use-commit-text';

@@ -1,3 +1,4 @@
+// The shared modal dialog, built on the browser's <dialog> element, with a title and an optional footer.
 import { useEffect, useRef, type ReactNode } from 'react';
 
 /** A modal built on <dialog>: focus is trapped by the browser, Escape closes it. */

@@ -1,3 +1,4 @@
+// Labelled form fields (text, select, text area) with a hint or error line under each, and the shared input style.
 import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldShellProps {

@@ -1,3 +1,4 @@
+// A dialog holding one small form with Cancel and Save; a refused save shows its reason and keeps the input.
 import { useState, type FormEvent, type ReactNode } from 'react';
 import { errorMessage } from '../../lib/api';
 import { Button } from './button';

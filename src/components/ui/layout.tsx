@@ -1,3 +1,5 @@
+// Page building blocks shared across the app: page header, card, empty state, notice, spinner,
+// and the badge that colours a project, presentation, role or piece state.
 import type { ReactNode } from 'react';
 
 export function PageHeader({

@@ -1,3 +1,5 @@
+// The length input: accepts lengths as people write them (cm, m, feet and inches) and reports
+// millimetres, either on every valid keystroke (forms) or on commit (live documents).
 import { useEffect, useRef, useState } from 'react';
 import { formatLength, parseLength, type LengthUnit } from '../../../shared/units/length';
 import { TextField } from './field';

@@ -1,3 +1,4 @@
+// The toolbar above a list page: a search box, labelled select choosers, and the shared sort options.
 import type { ReactNode } from 'react';
 import { inputClass } from './field';
 

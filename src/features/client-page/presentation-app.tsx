@@ -1,3 +1,4 @@
+// The client's presentation page wrapped in its own query cache, for its own entry and inside the app.
 import { QueryClientProvider } from '@tanstack/react-query';
 import { useState } from 'react';
 import { createPresentationQueryClient } from './api/presentation';

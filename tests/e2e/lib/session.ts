@@ -1,3 +1,5 @@
+// Helpers for the browser tests: unique e-mails, a fresh page, sign-up and sign-in through the
+// forms, copying a link from the Outbox, and inviting a member who accepts.
 import { inject } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 

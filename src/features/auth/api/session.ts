@@ -1,3 +1,4 @@
+// Sign-in, sign-up, sign-out and invitation hooks; each refreshes the cached session before the next page reads it.
 import { queryOptions, useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { InviteInfo, SignInBody } from '../../../../shared/schemas/studio';
 import type { AcceptInviteBody, SignUpBody } from '../../../../shared/schemas/account';

@@ -1,3 +1,4 @@
+// The invitation page: shows the studio and role a member was invited to, and joins with a name and password.
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import { useQuery } from '@tanstack/react-query';

@@ -1,3 +1,4 @@
+// The two-column frame shared by the sign-in, sign-up and invitation pages.
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 

@@ -1,3 +1,4 @@
+// The sign-in page: e-mail and password, then on to the page the visitor asked for (or Projects).
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,4 @@
+// The sign-up page: creates a studio with its first member as owner, then opens Projects.
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/button';

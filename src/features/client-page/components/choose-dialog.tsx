@@ -1,3 +1,5 @@
+// The client's "Choose this option" dialog: confirm with an optional comment, then a thank-you
+// leading to the next room still to choose.
 import { useState, type FormEvent } from 'react';
 import { MAX_COMMENT_LENGTH, type ClientOption, type ClientRoom } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';

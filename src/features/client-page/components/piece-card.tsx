@@ -1,3 +1,4 @@
+// The card for a piece the client tapped in the walk-through: name, size, finish and, when shown, price.
 import { useEffect } from 'react';
 import type { ClientPiece } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,4 @@
+// The client's presentation page behind the link: the welcome, then one room at a time.
 import { useCallback, useEffect, useState } from 'react';
 import type { ClientPresentation } from '../../../../shared/schemas/presentation';
 import { Notice, Spinner } from '../../../components/ui/layout';

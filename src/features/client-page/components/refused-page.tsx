@@ -1,3 +1,5 @@
+// The page for a presentation link that does not work: a plain sentence and a retry, nothing of the
+// presentation itself.
 import { ApiError } from '../../../lib/api';
 import { Button } from '../../../components/ui/button';
 

@@ -1,3 +1,5 @@
+// One room of a presentation: the 3D walk-through (Overview or Walk, one option or two side by
+// side), the option switcher, the pieces and the client's choice.
 import { lazy, Suspense, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ClientRoom } from '../../../../shared/schemas/presentation';
 import type { MoneySettings } from '../../../../shared/units/money';

@@ -1,3 +1,4 @@
+// The presentation's welcome card: who it is from, the designer's message, and what to do next.
 import type { ClientPresentation, ClientRoom } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';
 import { changedSinceSeen } from './seen-versions';

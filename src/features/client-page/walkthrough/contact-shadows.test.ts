@@ -1,3 +1,5 @@
+// Tests for the soft shadows under pieces in the walk-through: their footprint, reach, fade and
+// the daylight direction taken from the windows.
 import { describe, expect, it } from 'vitest';
 import type { Piece } from '../../../../shared/schemas/option';
 import { SHADOW_DARKNESS, SHADOW_LIFT_M, contactShadows, daylightDirection } from './contact-shadows';

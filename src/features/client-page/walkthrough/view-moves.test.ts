@@ -1,3 +1,5 @@
+// Tests for the walk-through's camera moves: Overview turning, zoom, top view and tweens, Walk poses
+// at eye height, and the camera link that keeps side-by-side views in step.
 import { describe, expect, it } from 'vitest';
 import { CameraLink, type ViewPose } from './camera-link';
 import {

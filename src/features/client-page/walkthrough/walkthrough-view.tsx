@@ -1,26 +1,27 @@
-import { Canvas, useThree } from '@react-three/fiber';
-import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+// The client's walk-through of one room in 3D: the Overview and Walk, every option built once and
+// switched instantly, keys and on-screen buttons, and soft floor shadows baked per option.
+import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, type KeyboardEvent } from 'react';
 import * as THREE from 'three';
-import { buildPiecesScene, buildShellScene, type PieceSceneData } from '../../../../shared/geometry/scene';
+import { buildPiecesScene, type PieceSceneData } from '../../../../shared/geometry/scene';
 import { walkObstacles, type WalkObstacles } from '../../../../shared/geometry/walk';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import type { CameraLink, ViewMode, ViewPose } from './camera-link';
-import { FinishMaterials, type SurfaceFinishes, type TextureProgress } from '../../../scene/finish-materials';
-import { createSceneMaterials, disposeSceneMaterials, SCENE_BACKGROUND } from '../../../scene/materials';
+import type { SurfaceFinishes, TextureProgress } from '../../../scene/finish-materials';
 import { RenderAndReport } from '../../../scene/render-report';
 import { RoomPieces, type PieceBuild } from '../../../scene/room-pieces';
 import { buildPieceForms, type PieceFormData } from '../../../../shared/geometry/forms/piece-forms';
 import { RoomShellMeshes } from '../../../scene/room-shell';
-import { browserHasWebGL, SceneErrorBoundary } from '../../../scene/scene-error-boundary';
+import { SceneCanvas } from '../../../scene/scene-canvas';
 import { SceneLights } from '../../../scene/scene-lights';
-import { shellParts } from '../../../scene/shell-parts';
 import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from '../../../scene/view-helpers';
-import { HeldMoves, WalkRig, OverviewRig, type RigHandle, type WalkMove } from './walkthrough-rigs';
-import { windowLightRects } from '../../../scene/window-lights';
+import { HeldMoves, type RigHandle, type WalkMove } from './rig-shared';
+import { OverviewRig } from './overview-rig';
+import { WalkRig } from './walk-rig';
+import { useSceneResources } from '../../../scene/use-scene-resources';
 import { contactShadows, daylightDirection, noShadows } from './contact-shadows';
 
-export type { WalkMove } from './walkthrough-rigs';
+export type { WalkMove } from './rig-shared';
 export type { ViewMode } from './camera-link';
 export type { TextureProgress } from '../../../scene/finish-materials';
 
@@ -96,7 +97,6 @@ const KEY_MOVES: Record<string, WalkMove> = {
 export default function WalkthroughView(props: WalkthroughViewProps) {
   const { label, className, mode, commandsRef } = props;
   const host = useRef<HTMLDivElement>(null);
-  const [webgl] = useState(browserHasWebGL);
   const held = useRef(new HeldMoves());
   const rig = useRef<RigHandle | null>(null);
   // Set at once when a move starts, cleared by the frame that ends it: tests wait on it.
@@ -137,18 +137,14 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
     [markMoving],
   );
 
-  const fallback = (
-    <div className="flex h-full w-full items-center justify-center bg-sand p-4 text-sm text-ink-soft">
-      <p>{WEBGL_MESSAGE}</p>
-    </div>
-  );
   return (
-    <div
-      ref={host}
-      role="region"
-      aria-label={label}
+    <SceneCanvas
+      host={host}
+      label={label}
+      webglMessage={WEBGL_MESSAGE}
+      // No shadow maps: the soft shadows under the pieces are baked into the floor per option.
+      shadowMaps={false}
       aria-roledescription="3D view"
-      data-testid="room-view"
       data-mode={mode}
       data-option={props.optionId}
       tabIndex={0}
@@ -159,30 +155,8 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
         className ?? 'relative h-full w-full outline-none focus-visible:ring-2 focus-visible:ring-pine focus-visible:ring-inset'
       }
     >
-      {webgl ? (
-        <SceneErrorBoundary fallback={fallback}>
-          <Canvas
-            frameloop="demand"
-            // No shadow maps: the soft shadows under the pieces are baked into the floor per option.
-            dpr={[1, 2]}
-            // Neutral tone mapping keeps a lit paint close to its swatch; the output is sRGB.
-            gl={{
-              preserveDrawingBuffer: true,
-              antialias: true,
-              toneMapping: THREE.NeutralToneMapping,
-              outputColorSpace: THREE.SRGBColorSpace,
-            }}
-            camera={{ fov: 40, near: 0.05, far: 200, position: [0, 8, 8] }}
-            fallback={fallback}
-          >
-            <color attach="background" args={[SCENE_BACKGROUND]} />
-            <WalkthroughScene {...props} host={host} held={held} rig={rig} onMoveStart={markMoving} />
-          </Canvas>
-        </SceneErrorBoundary>
-      ) : (
-        fallback
-      )}
-    </div>
+      <WalkthroughScene {...props} host={host} held={held} rig={rig} onMoveStart={markMoving} />
+    </SceneCanvas>
   );
 }
 
@@ -221,27 +195,8 @@ function WalkthroughScene(props: SceneProps) {
   } = props;
   const shell = useStableValue(props.shell);
   const options = useStableValue(props.options);
-  const invalidate = useThree((state) => state.invalidate);
-  const gl = useThree((state) => state.gl);
+  const { invalidate, materials, finishMaterials, parts, windows } = useSceneResources(shell, onTextureProgress);
 
-  const materials = useMemo(createSceneMaterials, []);
-  useEffect(() => () => disposeSceneMaterials(materials), [materials]);
-  const progressRef = useRef(onTextureProgress);
-  progressRef.current = onTextureProgress;
-  const finishMaterials = useMemo(
-    // Progress is reported after the current render: materials are asked for while rendering.
-    () =>
-      new FinishMaterials(
-        () => invalidate(),
-        Math.min(8, gl.capabilities.getMaxAnisotropy()),
-        (p) => queueMicrotask(() => progressRef.current?.(p)),
-      ),
-    [invalidate, gl],
-  );
-  useEffect(() => () => finishMaterials.dispose(), [finishMaterials]);
-
-  const parts = useMemo(() => tryBuild('room', () => shellParts(buildShellScene(shell), shell)), [shell]);
-  const windows = useMemo(() => tryBuild('windows', () => windowLightRects(shell)) ?? [], [shell]);
   // Every option is built once, up front: switching only changes which group is visible.
   const built = useMemo<BuiltOption[]>(
     () =>

@@ -1,3 +1,4 @@
+// Query and mutation hooks for the studio's clients: the list (search and sort), add and edit.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Client, ClientBody, ListQuery } from '../../../../shared/schemas/project';
 import { api } from '../../../lib/api';

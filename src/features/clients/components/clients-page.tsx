@@ -1,3 +1,5 @@
+// The Clients page: a searchable, sortable table of clients with their projects count, the Add
+// client dialog, and an edit dialog whose fields save one by one.
 import { useDeferredValue, useState, type FormEvent } from 'react';
 import type { ListQuery } from '../../../../shared/schemas/project';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,4 @@
+// The Add paint dialog of the finish library: name, colour and sheen, supplier, code and price.
 import { useState, type FormEvent } from 'react';
 import { PRICE_UNITS, type Sheen } from '../../../../shared/schemas/finish';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,5 @@
+// The crop box drawn over a photo finish's photo: drag to move it, drag a corner to resize it, or
+// use the arrow keys; plus the pure drag maths.
 import { useRef, type KeyboardEvent, type PointerEvent } from 'react';
 import { MIN_CROP_FRACTION, type Crop } from '../../../../shared/schemas/finish';
 

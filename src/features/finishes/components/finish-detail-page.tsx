@@ -1,3 +1,5 @@
+// One finish's page in the finish library: its fields (each saving on its own), and for a photo
+// finish its crop, real repeat size and the 3 × 3 repeat preview.
 import { useCallback, useEffect, useState, type ReactNode } from 'react';
 import { Link, useNavigate } from 'react-router';
 import {

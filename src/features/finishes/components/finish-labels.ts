@@ -1,3 +1,5 @@
+// Words and short formats for finishes: category, sheen, edge blend and price unit labels, the
+// repeat size, the price line and the library summary line.
 import { formatMoney, type MoneySettings } from '../../../../shared/units/money';
 import type { EdgeBlend, Finish, FinishCategory, PriceUnit, Sheen } from '../../../../shared/schemas/finish';
 import { formatLength } from '../../../../shared/units/length';

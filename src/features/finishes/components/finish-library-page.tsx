@@ -1,3 +1,5 @@
+// The finish library page: the studio's finishes as cards, with search, category filter, photo
+// upload and Add paint.
 import { useDeferredValue, useState } from 'react';
 import { Link } from 'react-router';
 import { FINISH_CATEGORIES, type FinishListQuery } from '../../../../shared/schemas/finish';

@@ -1,3 +1,4 @@
+// The fields of a paint finish: colour (picker and hex kept in step) and sheen.
 import { SHEENS, type Sheen } from '../../../../shared/schemas/finish';
 import { CommitTextField } from '../../../components/ui/commit-field';
 import { inputClass, SelectField, TextField } from '../../../components/ui/field';

@@ -1,3 +1,5 @@
+// Uploading photos of samples to the finish library: drop or pick files, a few sent at once, each
+// with its own row of progress and status.
 import { useRef, useState, useSyncExternalStore, type DragEvent } from 'react';
 import { Link } from 'react-router';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';

@@ -1,3 +1,5 @@
+// The swatch of a finish: its processed picture, its paint colour, or a note while it is being
+// processed or could not be.
 import type { Finish } from '../../../../shared/schemas/finish';
 
 /** The small square picture of a finish: the processed swatch, the paint colour, or where it stands. */

@@ -1,3 +1,4 @@
+// Query hooks for the Outbox: the studio's sent mail page by page, and one message.
 import { infiniteQueryOptions, queryOptions, useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import type { OutboxMessage, OutboxPage } from '../../../../shared/schemas/outbox';
 import { api } from '../../../lib/api';

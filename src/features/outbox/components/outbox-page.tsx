@@ -1,3 +1,4 @@
+// The Outbox page (local setup only): the e-mails the app sent, and one message opened.
 import { useState } from 'react';
 import { Link, useParams } from 'react-router';
 import type { SentMailKind } from '../../../../shared/schemas/outbox';

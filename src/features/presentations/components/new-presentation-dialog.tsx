@@ -1,3 +1,5 @@
+// The new presentation dialog: pick rooms and options and their order, write a message, choose
+// whether prices show and when the link expires.
 import { useState, type FormEvent } from 'react';
 import { DEFAULT_EXPIRY_DAYS, MAX_OPTIONS_PER_ROOM, type CreatePresentationBody } from '../../../../shared/schemas/presentation';
 import { optionLabel } from '../../../../shared/schemas/room-api';

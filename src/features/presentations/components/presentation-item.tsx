@@ -1,3 +1,5 @@
+// One presentation in a project's list: its state, opens, what was looked at and chosen, and the
+// Send by e-mail, Copy link, Extend, Withdraw and Mark as decided actions with their dialogs.
 import { useState, type FormEvent } from 'react';
 import type { PresentationSummary } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';

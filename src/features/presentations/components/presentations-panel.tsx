@@ -1,3 +1,4 @@
+// The project page's presentations panel: make one, send it, follow each, and confirm the client's choices.
 import { useState } from 'react';
 import type { CreatePresentationBody } from '../../../../shared/schemas/presentation';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,5 @@
+// Query and mutation hooks for projects: the list, one project, create, update, and Reopen for a
+// decided project.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
   CreateProjectBody,

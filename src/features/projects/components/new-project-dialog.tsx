@@ -1,3 +1,4 @@
+// The new project dialog: name and address, and an existing client or a new one; opens the project once made.
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/button';
@@ -22,7 +23,9 @@ export function NewProjectDialog({
   const navigate = useNavigate();
   const [name, setName] = useState('');
   const [address, setAddress] = useState('');
-  const [clientId, setClientId] = useState<string>(clients[0]?.id ?? NEW_CLIENT);
+  // Until the designer picks, the first client is meant (also when the list arrives after the dialog opened).
+  const [chosenClient, setClientId] = useState<string | null>(null);
+  const clientId = chosenClient ?? clients[0]?.id ?? NEW_CLIENT;
   const [clientName, setClientName] = useState('');
   const [clientEmail, setClientEmail] = useState('');
   const isNew = clientId === NEW_CLIENT || clients.length === 0;

@@ -1,3 +1,5 @@
+// One project's page: its client, name and address (saving field by field), state and Reopen, with
+// the rooms and presentations sections passed in by the route.
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';

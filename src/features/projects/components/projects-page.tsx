@@ -1,3 +1,5 @@
+// The Projects page: the studio's projects with search, sort and a Show filter (current, archived or
+// all), and the new project dialog.
 import { useDeferredValue, useState } from 'react';
 import { Link } from 'react-router';
 import type { ListQuery } from '../../../../shared/schemas/project';

@@ -1,3 +1,5 @@
+// Query and mutation hooks for rooms and their options: list, load, create, import a plan file,
+// save, delete, and add, save, delete and reorder options.
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
   CreateOptionBody,

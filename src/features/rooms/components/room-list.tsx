@@ -1,3 +1,5 @@
+// The project page's room list: one entry per room, the Add a room dialog (by measured walls),
+// plan file import, and the ask-first room delete.
 import { useRef, useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,5 @@
+// The take-off table for one room's shell: floor area, perimeter, volume, net wall area, paint,
+// flooring and skirting, then the walls one by one.
 import { useMemo } from 'react';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { computeTakeoff } from '../../../../shared/analysis/takeoff';

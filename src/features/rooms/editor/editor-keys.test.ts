@@ -1,3 +1,5 @@
+// Tests for the room editor's keys: the keys help, undo and redo, Esc, nudging pieces and
+// openings, turning, holding and removing the selection.
 import { describe, expect, it } from 'vitest';
 import type { Command } from '../../../../shared/commands';
 import type { Opening } from '../../../../shared/schemas/room';

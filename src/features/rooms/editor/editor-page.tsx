@@ -1,3 +1,6 @@
+// The room editor's page: the step bar (outline, openings, furnish, finishes, check), the plan and the
+// 3D preview side by side or by turns, the options bar, the keys and what saving says. The editing
+// itself lives in use-room-editor.ts; each step's panel in its own file.
 import {
   lazy,
   Suspense,
@@ -19,7 +22,6 @@ import { Notice, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
 import { useRoom, type RoomDetail } from '../api/rooms';
-import { DEFAULT_WALKWAY_MM } from '../../../../shared/analysis/fit/clearances';
 import { formatLength } from '../../../../shared/units/length';
 import { CheckPanel } from './check/check-panel';
 import { useFitCheck } from './check/use-fit-check';
@@ -30,45 +32,17 @@ import { FurnishPanel } from './furnish-panel';
 import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
 import { OutlinePanel } from './outline-panel';
-import { PlanView } from './plan-view';
-import { roomCentre, type Selection } from './plan-geometry';
+import { PlanView } from './plan/plan-view';
+import { roomCentre, type Selection } from './plan/plan-geometry';
 import { EDITOR_STEPS, type EditorStep } from './steps';
 import { useRoomEditor, type Frozen, type SaveState } from './use-room-editor';
 import { SPLIT_KEY_STEP, SPLIT_MAX, SPLIT_MIN, useEditorView } from './use-editor-view';
+import { useEditorPlace } from './use-editor-place';
 import { optionLabel } from '../../../../shared/schemas/room-api';
 import { refusalText } from './refusal-text';
 import { EDITOR_KEYS, keyFor, type KeyContext } from './editor-keys';
 
 const RoomView = lazy(() => import('../../../scene/room-view'));
-
-interface EditorPlace {
-  step: EditorStep;
-  optionId: string;
-  walkwayMm: number;
-}
-const placeKey = (roomId: string) => `parlour:editor-place:${roomId}`;
-
-function readPlace(roomId: string): Partial<EditorPlace> | null {
-  try {
-    const raw = JSON.parse(localStorage.getItem(placeKey(roomId)) ?? 'null') as Partial<EditorPlace> | null;
-    if (!raw || typeof raw !== 'object') return null;
-    return {
-      step: EDITOR_STEPS.some((s) => s.id === raw.step) ? raw.step : undefined,
-      optionId: typeof raw.optionId === 'string' ? raw.optionId : undefined,
-      walkwayMm: typeof raw.walkwayMm === 'number' && raw.walkwayMm >= 300 && raw.walkwayMm <= 2000 ? raw.walkwayMm : undefined,
-    };
-  } catch {
-    return null;
-  }
-}
-
-function writePlace(roomId: string, place: EditorPlace) {
-  try {
-    localStorage.setItem(placeKey(roomId), JSON.stringify(place));
-  } catch {
-    // Blocked storage only costs reopening on the same step.
-  }
-}
 
 export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: string; roomId: string; finishes?: Finish[] }) {
   const room = useRoom(roomId);
@@ -122,10 +96,10 @@ function Editor({
   const frozen = useMemo<Frozen>(() => ({ optionIds: new Set(frozenKey ? frozenKey.split(',') : []) }), [frozenKey]);
   const editor = useRoomEditor(detail, readOnly, frozen);
   const [duplicating, setDuplicating] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
-  const [place] = useState(() => readPlace(detail.room.id));
-  const [step, setStep] = useState<EditorStep>(place?.step ?? (readOnly ? 'furnish' : 'outline'));
-  const [optionId, setOptionId] = useState(
-    place?.optionId && detail.options.some((o) => o.id === place.optionId) ? place.optionId : (detail.options[0]?.id ?? ''),
+  const { step, setStep, optionId, setOptionId, walkwayMm, setWalkwayMm } = useEditorPlace(
+    detail.room.id,
+    detail.options.map((o) => o.id),
+    readOnly,
   );
   const [selection, setSelection] = useState<Selection>(null);
   const { layout, setLayout, split, setSplit, nudgeSplit, unit, setUnit } = useEditorView();
@@ -134,7 +108,6 @@ function Editor({
   const [help, setHelp] = useState(false);
   const [renaming, setRenaming] = useState(false);
   const splitHost = useRef<HTMLDivElement>(null);
-  const [walkwayMm, setWalkwayMm] = useState(place?.walkwayMm ?? DEFAULT_WALKWAY_MM);
   const [chosenFinding, setChosenFinding] = useState<number | null>(null);
   const [finishTarget, setFinishTarget] = useState<'floor' | 'ceiling' | 'walls' | 'wall' | 'piece'>('floor');
 
@@ -190,9 +163,6 @@ function Editor({
     },
     [editor.attempt, unit], // eslint-disable-line react-hooks/exhaustive-deps
   );
-
-  // A reload reopens the step and option the designer was on (and the walkway they checked with).
-  useEffect(() => writePlace(detail.room.id, { step, optionId, walkwayMm }), [detail.room.id, step, optionId, walkwayMm]);
 
   // Keys for the whole editor, unless the designer is typing in a field: the first entry of the
   // keymap that takes the press and applies now runs.
@@ -329,6 +299,7 @@ function Editor({
     viewCentre,
     fit,
     walkwayMm,
+    setWalkwayMm,
     chosenFinding,
     finishes,
     finishTarget,

@@ -1,3 +1,5 @@
+// Tests for the room editor's session: the local draft, what is unsaved, save conflicts, options
+// changed elsewhere, a decided project's limits, and the save-retry waits and timer.
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { movePiece, setWallHeight } from '../../../../shared/commands';
 import type { OptionRecord, RoomRecord } from '../../../../shared/schemas/room-api';

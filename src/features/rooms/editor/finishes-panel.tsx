@@ -1,10 +1,12 @@
+// The room editor's Finishes step: pick a surface (floor, ceiling, walls, feature walls or a
+// piece's main or accent finish) and give it a finish from the library.
 import { useState } from 'react';
 import { Link } from 'react-router';
 import type { Finish } from '../../../../shared/schemas/finish';
 import type { OptionDoc, Piece } from '../../../../shared/schemas/option';
 import { assignFinish, updatePiece, type Command, type FinishSurface } from '../../../../shared/commands';
 import { inputClass } from '../../../components/ui/field';
-import type { Selection } from './plan-geometry';
+import type { Selection } from './plan/plan-geometry';
 
 type Target = 'floor' | 'ceiling' | 'walls' | 'wall' | 'piece';
 

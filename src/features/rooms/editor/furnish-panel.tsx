@@ -1,3 +1,5 @@
+// The room editor's Furnish step: the catalogue to add pieces from, the holding area, and the
+// selected piece's fields (name, size, turn, height above the floor, finishes, price, supplier).
 import { useState } from 'react';
 import { isWebLink, type Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
@@ -20,7 +22,7 @@ import { CommitTextField } from '../../../components/ui/commit-field';
 import { numberParser, textParser, useCommitText, type Parsed } from '../../../components/ui/use-commit-text';
 import type { FieldRun } from './outline-panel';
 import { LengthField } from '../../../components/ui/length-field';
-import { placedNear, type Selection } from './plan-geometry';
+import { placedNear, type Selection } from './plan/plan-geometry';
 import { KindDrawing, KindPicker } from './kind-drawing';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {

@@ -10,7 +10,8 @@ import {
   type PieceSettings,
 } from '../../../../shared/schemas/piece-kind';
 import { inputClass } from '../../../components/ui/field';
-import { PartShape, topViewParts } from './plan-piece-forms';
+import { PartShape, topViewParts } from './plan/plan-piece-forms';
+import { planColour } from './plan/plan-style';
 
 /** The box a kind is drawn in when no piece gives one: its first catalogue entry's. */
 export function kindBox(kind: PieceKind): { width: number; depth: number; height: number } {
@@ -45,15 +46,21 @@ export const KindDrawing = memo(function KindDrawing({
         y={-b.depth / 2}
         width={b.width}
         height={b.depth}
-        fill="#ffffff"
-        stroke="#5c534a"
+        fill={planColour.newPieceFill}
+        stroke={planColour.pieceStroke}
         strokeWidth={side / 70}
       />
       {parts.map((part, i) => (
         <PartShape
           key={i}
           part={part}
-          fill={part.slot === 'own' ? (part.colour ?? '#ffffff') : part.slot === 'accent' ? '#b8ab9b' : '#ece4d6'}
+          fill={
+            part.slot === 'own'
+              ? (part.colour ?? planColour.newPieceFill)
+              : part.slot === 'accent'
+                ? planColour.accentPartFill
+                : planColour.existingPieceFill
+          }
           stroke={side / 110}
         />
       ))}

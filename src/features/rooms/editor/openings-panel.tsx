@@ -1,3 +1,5 @@
+// The room editor's Openings step: add a door, window or passage to a wall, and edit the selected
+// opening's size, place along the wall and sill.
 import { useState } from 'react';
 import type { Opening, RoomShell } from '../../../../shared/schemas/room';
 import { addOpening, flipHinge, flipSwing, removeOpening, updateOpening, type Command } from '../../../../shared/commands';
@@ -7,7 +9,7 @@ import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
-import type { Selection } from './plan-geometry';
+import type { Selection } from './plan/plan-geometry';
 import type { FieldRun } from './outline-panel';
 
 const TYPE_WORD: Record<Opening['type'], string> = { door: 'Door', window: 'Window', passage: 'Passage' };

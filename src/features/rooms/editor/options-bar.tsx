@@ -1,3 +1,4 @@
+// The room editor's option tabs: switch, add, duplicate, rename, reorder and delete options.
 import { useRef, useState, type ReactNode } from 'react';
 import { optionLabel, type OptionRecord } from '../../../../shared/schemas/room-api';
 import { Button } from '../../../components/ui/button';

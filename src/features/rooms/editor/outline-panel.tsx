@@ -1,3 +1,5 @@
+// The room editor's Outline step: ceiling height, wall thickness and each wall's length, plus
+// measuring walls in turn ("420 l 135") to make a new outline.
 import { useMemo, useState, type KeyboardEvent } from 'react';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import {
@@ -16,7 +18,7 @@ import { inputClass } from '../../../components/ui/field';
 import { LengthField } from '../../../components/ui/length-field';
 import { Notice } from '../../../components/ui/layout';
 import { useCommitText } from '../../../components/ui/use-commit-text';
-import type { Selection } from './plan-geometry';
+import type { Selection } from './plan/plan-geometry';
 
 /** A gap smaller than this between the last corner and the first counts as closed (plan mm). */
 export const CLOSED_GAP_MM = 1;

@@ -1,3 +1,5 @@
+// Query hooks for the take-off and schedule pages: the project take-off, the options comparison and
+// one option's schedule, keyed by their settings, and the schedule's CSV address.
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { takeoffQuery, type TakeoffSettings } from '../../../../shared/analysis/takeoff-settings';
 import { type CompareAnswer, type ProjectTakeoffAnswer, type ScheduleAnswer } from '../../../../shared/schemas/schedule-api';

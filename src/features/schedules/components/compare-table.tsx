@@ -1,3 +1,4 @@
+// The comparison table for one room: its options side by side, one column per option, one row per figure.
 import { Link } from 'react-router';
 import type { CompareAnswer } from '../../../../shared/schemas/schedule-api';
 import { Badge } from '../../../components/ui/layout';

@@ -1,3 +1,4 @@
+// Number, quantity and money formatting shared by the take-off and schedule pages.
 import { QUANTITY_UNIT_LABELS, type QuantityUnit } from '../../../../shared/analysis/schedule-lines';
 
 const quantityFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });

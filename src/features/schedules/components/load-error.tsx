@@ -1,3 +1,4 @@
+// What the take-off and schedule pages show when their figures could not be loaded.
 import { Link } from 'react-router';
 import { Notice } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';

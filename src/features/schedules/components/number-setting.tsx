@@ -1,3 +1,4 @@
+// A number field for a take-off setting: keeps the text as typed and passes the value on only when valid.
 import { useEffect, useState } from 'react';
 import type { z } from 'zod';
 import { TextField } from '../../../components/ui/field';

@@ -1,6 +1,6 @@
-import { Fragment } from 'react';
 // One option's schedule: every piece and finish with quantities, prices and totals; a CSV download
 // and a print view (the app's top bar and these buttons are left off paper).
+import { Fragment } from 'react';
 import { Link } from 'react-router';
 import { QUANTITY_UNIT_LABELS, type ScheduleLine } from '../../../../shared/analysis/schedule-lines';
 import { pieceSizeText } from '../../../../shared/units/piece-size';

@@ -1,3 +1,4 @@
+// The project page's link to its take-off, schedules and options comparison.
 import { Link } from 'react-router';
 
 /** The way from a project to its take-off, schedules and comparison. */

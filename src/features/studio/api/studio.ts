@@ -1,3 +1,5 @@
+// Query and mutation hooks for the Studio page: members and invitations, inviting, revoking,
+// changing roles, removing members, and the studio's currency and locale.
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { InviteBody, InviteInfo, Member, Role, StudioSettingsBody } from '../../../../shared/schemas/studio';
 import { api } from '../../../lib/api';

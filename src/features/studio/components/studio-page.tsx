@@ -1,3 +1,5 @@
+// The Studio page: members and their roles, open invitations, the Invite a member dialog, and the
+// studio's price settings (currency and locale).
 import { useState, type FormEvent } from 'react';
 import type { Role } from '../../../../shared/schemas/studio';
 import { Button } from '../../../components/ui/button';

@@ -1,3 +1,6 @@
+// The room editor's Check step: the walkway width setting, the fit check findings (pick one to highlight
+// its pieces), reminders for tall pieces, and the room's take-off.
+import { MAX_WALKWAY_MM, MIN_WALKWAY_MM } from '../../../../../shared/analysis/fit/clearances';
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../../shared/schemas/room';
@@ -17,10 +20,6 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   unreachable: 'Cannot be reached',
   'too-big-for-door': 'Too big for the doors',
 };
-
-/** The walkway widths the check accepts: narrower is not a route, wider is not a walkway. */
-const MIN_WALKWAY_MM = 300;
-const MAX_WALKWAY_MM = 2000;
 
 export function CheckPanel({
   shell,

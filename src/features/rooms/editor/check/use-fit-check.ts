@@ -1,3 +1,4 @@
+// Runs the fit check for a layout in a worker and keeps only the newest layout's findings.
 import { useEffect, useRef, useState } from 'react';
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../../shared/schemas/option';

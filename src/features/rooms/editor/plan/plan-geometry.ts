@@ -1,10 +1,12 @@
 // Pure helpers for the plan view: what to draw where, in plan mm (x right, y down, as in SVG).
-import type { Piece } from '../../../../shared/schemas/option';
-import type { RoomShell } from '../../../../shared/schemas/room';
-import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../shared/geometry/walls';
-import { placeShellOpenings } from '../../../../shared/geometry/openings';
-import { boundsMm, pointInPolygon, type Bounds2 } from '../../../../shared/geometry/polygon';
-import { boxesOverlap, boxInsideOutline, findPlacement, pieceFootprintMm, snapPieceToWalls } from '../../../../shared/commands';
+import type { Piece } from '../../../../../shared/schemas/option';
+import type { RoomShell } from '../../../../../shared/schemas/room';
+import { layoutShellWalls, outerRingMm, type WallLayout } from '../../../../../shared/geometry/walls';
+import { placeShellOpenings } from '../../../../../shared/geometry/openings';
+import { boundsMm, pointInPolygon, type Bounds2 } from '../../../../../shared/geometry/polygon';
+import { boxesOverlap, boxInsideOutline, findPlacement, snapPieceToWalls } from '../../../../../shared/commands';
+import { pieceFootprintMm } from '../../../../../shared/geometry/piece';
+import type { ViewBox } from './plan-viewport';
 
 /** Space round the room on the plan, for dimension lines and handles. */
 export const PLAN_MARGIN_MM = 900;
@@ -17,27 +19,10 @@ export const DIMENSION_OFFSET_MM = 350;
 
 export type Selection = { kind: 'piece'; id: string } | { kind: 'opening'; id: string } | { kind: 'wall'; index: number } | null;
 
-/** Room left round the drawing on screen, for the dimension labels and handles (px, common practice). */
-export const PLAN_MARGIN_PX = 44;
-
-export interface ViewBox {
-  x: number;
-  y: number;
-  w: number;
-  h: number;
-}
-
-/**
- * The view box that shows `content` (plan mm) as large as the panel allows: the panel's own
- * proportions, the content centred, a margin of `marginPx` screen pixels all round.
- */
-export function fitViewBox(content: ViewBox, panel: { w: number; h: number }, marginPx = PLAN_MARGIN_PX): ViewBox {
-  const innerW = Math.max(panel.w - 2 * marginPx, panel.w / 2, 1);
-  const innerH = Math.max(panel.h - 2 * marginPx, panel.h / 2, 1);
-  const mmPerPx = Math.max(content.w / innerW, content.h / innerH);
-  const w = panel.w * mmPerPx;
-  const h = panel.h * mmPerPx;
-  return { x: content.x + content.w / 2 - w / 2, y: content.y + content.h / 2 - h / 2, w, h };
+/** What the plan marks for a fit check finding: the pieces it names and, for a narrow walkway, the gap. */
+export interface Highlight {
+  pieceIds: string[];
+  gap?: { a: [number, number]; b: [number, number]; label: string };
 }
 
 export interface PlanLayout {
@@ -163,4 +148,9 @@ export function roomCentre(shell: RoomShell): [number, number] {
   const [x1, y1] = shell.outline[1];
   const [x2, y2] = shell.outline[shell.outline.length - 1];
   return [(x0 + x1 + x2) / 3, (y0 + y1 + y2) / 3];
+}
+
+/** The point a share `t` of the way from a to b. */
+export function mid(a: readonly [number, number], b: readonly [number, number], t: number): [number, number] {
+  return [a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t];
 }

@@ -1,3 +1,5 @@
+// Tests for piece labels on the plan: contrast measured the way WCAG 2.x defines it, dark or light
+// text by the piece's colour, and where the label sits.
 import { describe, expect, it } from 'vitest';
 import { LABEL_DARK, LABEL_LIGHT, contrastRatio, labelColourOn, labelLayout, labelWidth, relativeLuminance } from './piece-look';
 

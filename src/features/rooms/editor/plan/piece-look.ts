@@ -1,15 +1,17 @@
 // How a piece reads on the plan: its label's size and place (inside when it fits, else beside),
 // and a label colour that stands out from the piece's fill.
-import type { Piece } from '../../../../shared/schemas/option';
+import { pieceBoundsMm } from '../../../../../shared/geometry/piece';
+import type { Piece } from '../../../../../shared/schemas/option';
+import { planColour } from './plan-style';
 
-export const LABEL_DARK = '#2a2521';
-export const LABEL_LIGHT = '#fbf9f5';
+export const LABEL_DARK = planColour.labelDark;
+export const LABEL_LIGHT = planColour.labelLight;
 /** About 0.55 em per character in Manrope (measured by eye on the plan; common practice for a proportional face). */
 const EM_PER_CHARACTER = 0.55;
 /** A label smaller than this share of the plan's text size is too small to read: it goes beside the piece instead. */
 const SMALLEST_LABEL = 0.55;
 
-/** Relative luminance of an sRGB colour like '#a0b1c2' (WCAG 2.x definition). */
+/** Relative luminance of an sRGB colour given as '#rrggbb' (WCAG 2.x definition). */
 export function relativeLuminance(hex: string): number {
   const channel = (i: number) => {
     const c = parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16) / 255;
@@ -53,8 +55,7 @@ export function labelLayout(piece: Pick<Piece, 'x' | 'y' | 'width' | 'depth' | '
   const size = Math.min(text * 0.95, fit, short * 0.6);
   if (size >= text * SMALLEST_LABEL) return { size, angle, inside: true, at: [piece.x, piece.y] };
   // Beside: unturned, just below the piece's turned box on the plan.
-  const r = (piece.rotation * Math.PI) / 180;
-  const halfHeight = (Math.abs(Math.sin(r)) * piece.width + Math.abs(Math.cos(r)) * piece.depth) / 2;
+  const halfHeight = pieceBoundsMm(piece).maxY - piece.y;
   const besideSize = text * SMALLEST_LABEL * 1.2;
   return { size: besideSize, angle: 0, inside: false, at: [piece.x, piece.y + halfHeight + besideSize * 0.9] };
 }

@@ -2,12 +2,12 @@
 // arms, a bed's pillows, a wardrobe's doors) in thin calm lines, and its label. The box outline
 // underneath stays what is dragged and checked; this layer takes no pointer events.
 import { memo, useMemo } from 'react';
-import { formParts, type Part } from '../../../../shared/geometry/forms';
-import type { Piece } from '../../../../shared/schemas/option';
+import { formParts, type Part } from '../../../../../shared/geometry/forms';
+import type { Piece } from '../../../../../shared/schemas/option';
 import { labelColourOn, labelLayout, LABEL_DARK } from './piece-look';
+import { planColour } from './plan-style';
 
-/** Line colour of the parts' outlines: a little softer than the box outline. */
-const PART_LINE = '#8a7f73';
+const PART_LINE = planColour.partLine;
 
 type TopViewPiece = Pick<Piece, 'kind' | 'settings' | 'width' | 'depth' | 'height' | 'x' | 'y' | 'rotation'>;
 
@@ -80,7 +80,7 @@ export function PieceLabel({
       dominantBaseline="central"
       fontSize={layout.size}
       fill={colour}
-      stroke={layout.inside ? undefined : '#fbf9f5'}
+      stroke={layout.inside ? undefined : planColour.labelLight}
       strokeWidth={layout.inside ? undefined : layout.size * 0.18}
       paintOrder="stroke"
       pointerEvents="none"
