@@ -47,6 +47,8 @@ class Writer {
   // garbage collection. Positions are kept in doubles so the facing test in fan() sees exactly
   // the values it always did; toMesh() copies out what was written.
   positions = new Float64Array(3 * 512);
+  /** The same positions as they are stored (single precision), written alongside, so copying out is a plain copy. */
+  stored = new Float32Array(3 * 512);
   normals = new Float32Array(3 * 512);
   uvs = new Float32Array(2 * 512);
   indices = new Uint32Array(3 * 512);
@@ -83,9 +85,13 @@ class Writer {
     const P = this.positions,
       N = this.normals,
       T = this.uvs;
+    const S = this.stored;
     P[i * 3] = x;
     P[i * 3 + 1] = y;
     P[i * 3 + 2] = z;
+    S[i * 3] = x;
+    S[i * 3 + 1] = y;
+    S[i * 3 + 2] = z;
     N[i * 3] = nx;
     N[i * 3 + 1] = ny;
     N[i * 3 + 2] = nz;
@@ -101,6 +107,7 @@ class Writer {
       return b;
     };
     this.positions = grow(this.positions, (n) => new Float64Array(n));
+    this.stored = grow(this.stored, (n) => new Float32Array(n));
     this.normals = grow(this.normals, (n) => new Float32Array(n));
     this.uvs = grow(this.uvs, (n) => new Float32Array(n));
   }
@@ -144,7 +151,7 @@ class Writer {
   toMesh(): MeshData {
     const n = this.count;
     return {
-      positions: new Float32Array(this.positions.subarray(0, n * 3)),
+      positions: this.stored.slice(0, n * 3),
       normals: this.normals.slice(0, n * 3),
       uvs: this.uvs.slice(0, n * 2),
       indices: this.indices.slice(0, this.indexCount),
@@ -168,6 +175,8 @@ function frameOf(at: Placement): Frame {
   return { cx: at.x, cy: at.y, ax, ay: [-ax[1], ax[0]], elevation: at.elevation };
 }
 
+// The four sides, then the top and the underside, each a fan over its corners; written from plain
+// numbers (no arrays per part), in the same order and with the same values as corner lists would give.
 function writeBox(w: Writer, part: Part): void {
   const x0 = part.x - part.w / 2,
     x1 = part.x + part.w / 2;
@@ -175,163 +184,182 @@ function writeBox(w: Writer, part: Part): void {
     y1 = part.y + part.d / 2;
   const z0 = part.z,
     z1 = part.z + part.h;
-  const flat = (n: V3): V3[] => [n, n, n, n];
-  const sideUv = (u0: number, u1: number): [number, number][] => [
-    [u0 * MM, z0 * MM],
-    [u1 * MM, z0 * MM],
-    [u1 * MM, z1 * MM],
-    [u0 * MM, z1 * MM],
-  ];
-  w.quad(
-    [
-      [x0, y1, z0],
-      [x1, y1, z0],
-      [x1, y1, z1],
-      [x0, y1, z1],
-    ],
-    flat([0, 1, 0]),
-    sideUv(x0, x1),
-    [0, 1, 0],
-  );
-  w.quad(
-    [
-      [x1, y0, z0],
-      [x0, y0, z0],
-      [x0, y0, z1],
-      [x1, y0, z1],
-    ],
-    flat([0, -1, 0]),
-    sideUv(-x1, -x0),
-    [0, -1, 0],
-  );
-  w.quad(
-    [
-      [x1, y1, z0],
-      [x1, y0, z0],
-      [x1, y0, z1],
-      [x1, y1, z1],
-    ],
-    flat([1, 0, 0]),
-    sideUv(-y1, -y0),
-    [1, 0, 0],
-  );
-  w.quad(
-    [
-      [x0, y0, z0],
-      [x0, y1, z0],
-      [x0, y1, z1],
-      [x0, y0, z1],
-    ],
-    flat([-1, 0, 0]),
-    sideUv(y0, y1),
-    [-1, 0, 0],
-  );
-  w.polygon(
-    [
-      [x0, y0, z1],
-      [x1, y0, z1],
-      [x1, y1, z1],
-      [x0, y1, z1],
-    ],
-    [0, 0, 1],
-  );
-  w.polygon(
-    [
-      [x0, y0, z0],
-      [x1, y0, z0],
-      [x1, y1, z0],
-      [x0, y1, z0],
-    ],
-    [0, 0, -1],
-  );
+  const v0 = z0 * MM,
+    v1 = z1 * MM;
+  let base = w.count;
+  // Front (+y).
+  w.raw(x0, y1, z0, 0, 1, 0, x0 * MM, v0);
+  w.raw(x1, y1, z0, 0, 1, 0, x1 * MM, v0);
+  w.raw(x1, y1, z1, 0, 1, 0, x1 * MM, v1);
+  w.raw(x0, y1, z1, 0, 1, 0, x0 * MM, v1);
+  w.fan(base, 4, PLUS_Y);
+  // Back (−y).
+  base = w.count;
+  w.raw(x1, y0, z0, 0, -1, 0, -x1 * MM, v0);
+  w.raw(x0, y0, z0, 0, -1, 0, -x0 * MM, v0);
+  w.raw(x0, y0, z1, 0, -1, 0, -x0 * MM, v1);
+  w.raw(x1, y0, z1, 0, -1, 0, -x1 * MM, v1);
+  w.fan(base, 4, MINUS_Y);
+  // Right (+x).
+  base = w.count;
+  w.raw(x1, y1, z0, 1, 0, 0, -y1 * MM, v0);
+  w.raw(x1, y0, z0, 1, 0, 0, -y0 * MM, v0);
+  w.raw(x1, y0, z1, 1, 0, 0, -y0 * MM, v1);
+  w.raw(x1, y1, z1, 1, 0, 0, -y1 * MM, v1);
+  w.fan(base, 4, PLUS_X);
+  // Left (−x).
+  base = w.count;
+  w.raw(x0, y0, z0, -1, 0, 0, y0 * MM, v0);
+  w.raw(x0, y1, z0, -1, 0, 0, y1 * MM, v0);
+  w.raw(x0, y1, z1, -1, 0, 0, y1 * MM, v1);
+  w.raw(x0, y0, z1, -1, 0, 0, y0 * MM, v1);
+  w.fan(base, 4, MINUS_X);
+  // Top and underside: uvs are the plan position in metres.
+  base = w.count;
+  w.raw(x0, y0, z1, 0, 0, 1, x0 * MM, y0 * MM);
+  w.raw(x1, y0, z1, 0, 0, 1, x1 * MM, y0 * MM);
+  w.raw(x1, y1, z1, 0, 0, 1, x1 * MM, y1 * MM);
+  w.raw(x0, y1, z1, 0, 0, 1, x0 * MM, y1 * MM);
+  w.fan(base, 4, PLUS_Z);
+  base = w.count;
+  w.raw(x0, y0, z0, 0, 0, -1, x0 * MM, y0 * MM);
+  w.raw(x1, y0, z0, 0, 0, -1, x1 * MM, y0 * MM);
+  w.raw(x1, y1, z0, 0, 0, -1, x1 * MM, y1 * MM);
+  w.raw(x0, y1, z0, 0, 0, -1, x0 * MM, y1 * MM);
+  w.fan(base, 4, MINUS_Z);
 }
 
-/** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
-export function roundedOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+const PLUS_X: V3 = [1, 0, 0];
+const MINUS_X: V3 = [-1, 0, 0];
+const PLUS_Y: V3 = [0, 1, 0];
+const MINUS_Y: V3 = [0, -1, 0];
+const PLUS_Z: V3 = [0, 0, 1];
+const MINUS_Z: V3 = [0, 0, -1];
+
+// An outline round a part, written into scratch arrays (x, y pairs) reused for every part.
+const OUTLINE_POINTS = new Float64Array(2 * 64);
+const OUTLINE_NORMALS = new Float64Array(2 * 64);
+
+/** Writes a rounded part's plan outline into the scratch arrays; returns how many points. */
+function roundedOutlineInto(part: Part): number {
   const r = part.radius ?? 0;
   const hx = part.w / 2 - r;
   const hy = part.d / 2 - r;
   const disc = hx < 1e-6 && hy < 1e-6;
   const segments = disc ? DISC_SEGMENTS : CORNER_SEGMENTS;
-  const corners: [number, number, number][] = [
-    [hx, hy, 0],
-    [-hx, hy, Math.PI / 2],
-    [-hx, -hy, Math.PI],
-    [hx, -hy, (3 * Math.PI) / 2],
-  ];
-  const points: [number, number][] = [];
-  const normals: [number, number][] = [];
-  for (const [cx, cy, start] of corners) {
+  const P = OUTLINE_POINTS,
+    N = OUTLINE_NORMALS;
+  let k = 0;
+  for (let c = 0; c < 4; c++) {
+    const cx = c === 0 || c === 3 ? hx : -hx;
+    const cy = c < 2 ? hy : -hy;
+    const start = c === 0 ? 0 : c === 1 ? Math.PI / 2 : c === 2 ? Math.PI : (3 * Math.PI) / 2;
     for (let i = 0; i <= segments; i++) {
       if (disc && i === segments) continue;
       const a = start + (i / segments) * (Math.PI / 2);
-      const n: [number, number] = [Math.cos(a), Math.sin(a)];
-      points.push([part.x + cx + n[0] * r, part.y + cy + n[1] * r]);
-      normals.push(n);
+      const nx = Math.cos(a),
+        ny = Math.sin(a);
+      P[2 * k] = part.x + cx + nx * r;
+      P[2 * k + 1] = part.y + cy + ny * r;
+      N[2 * k] = nx;
+      N[2 * k + 1] = ny;
+      k++;
     }
+  }
+  return k;
+}
+
+/** Writes a leg's outline at its top into the scratch arrays; returns how many points. */
+function legOutlineInto(part: Part): number {
+  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
+  const r = part.w / 2;
+  const P = OUTLINE_POINTS,
+    N = OUTLINE_NORMALS;
+  for (let i = 0; i < sides; i++) {
+    const a = (i / sides) * Math.PI * 2;
+    N[2 * i] = Math.cos(a);
+    N[2 * i + 1] = Math.sin(a);
+    P[2 * i] = part.x + Math.cos(a) * r;
+    P[2 * i + 1] = part.y + Math.sin(a) * r;
+  }
+  return sides;
+}
+
+/** The scratch outline's first `n` points and normals as pairs. */
+function outlinePairs(n: number): { points: [number, number][]; normals: [number, number][] } {
+  const points: [number, number][] = [];
+  const normals: [number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    points.push([OUTLINE_POINTS[2 * i]!, OUTLINE_POINTS[2 * i + 1]!]);
+    normals.push([OUTLINE_NORMALS[2 * i]!, OUTLINE_NORMALS[2 * i + 1]!]);
   }
   return { points, normals };
 }
 
-function writeExtrusion(
-  w: Writer,
-  points: readonly [number, number][],
-  normals: readonly [number, number][],
-  z0: number,
-  z1: number,
-  bottomScale = 1,
-  centre: [number, number] = [0, 0],
-): void {
-  const n = points.length;
-  const bx = (i: number) => centre[0] + (points[i]![0] - centre[0]) * bottomScale;
-  const by = (i: number) => centre[1] + (points[i]![1] - centre[1]) * bottomScale;
-  const face: V3 = [0, 0, 0];
+/** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
+export function roundedOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  return outlinePairs(roundedOutlineInto(part));
+}
+
+/** A leg's outline at its top (piece frame mm), round it. */
+export function legOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  return outlinePairs(legOutlineInto(part));
+}
+
+const EXTRUSION_FACE: V3 = [0, 0, 0];
+
+// The scratch outline's `n` points as an upright prism from z0 to z1: its sides (smooth normals
+// round it, u running along the outline), its top and its underside. The underside is the
+// outline scaled by `bottomScale` about (cx, cy).
+function writeExtrusion(w: Writer, n: number, z0: number, z1: number, bottomScale: number, cx: number, cy: number): void {
+  const P = OUTLINE_POINTS,
+    N = OUTLINE_NORMALS;
+  const face = EXTRUSION_FACE;
+  face[2] = 0;
   let u = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    const step = Math.hypot(points[j]![0] - points[i]![0], points[j]![1] - points[i]![1]);
-    const [nix, niy] = normals[i]!;
-    const [njx, njy] = normals[j]!;
+    const pix = P[2 * i]!,
+      piy = P[2 * i + 1]!,
+      pjx = P[2 * j]!,
+      pjy = P[2 * j + 1]!;
+    const step = Math.hypot(pjx - pix, pjy - piy);
+    const nix = N[2 * i]!,
+      niy = N[2 * i + 1]!,
+      njx = N[2 * j]!,
+      njy = N[2 * j + 1]!;
     const base = w.count;
-    w.raw(bx(i), by(i), z0, nix, niy, 0, u * MM, z0 * MM);
-    w.raw(bx(j), by(j), z0, njx, njy, 0, (u + step) * MM, z0 * MM);
-    w.raw(points[j]![0], points[j]![1], z1, njx, njy, 0, (u + step) * MM, z1 * MM);
-    w.raw(points[i]![0], points[i]![1], z1, nix, niy, 0, u * MM, z1 * MM);
+    w.raw(cx + (pix - cx) * bottomScale, cy + (piy - cy) * bottomScale, z0, nix, niy, 0, u * MM, z0 * MM);
+    w.raw(cx + (pjx - cx) * bottomScale, cy + (pjy - cy) * bottomScale, z0, njx, njy, 0, (u + step) * MM, z0 * MM);
+    w.raw(pjx, pjy, z1, njx, njy, 0, (u + step) * MM, z1 * MM);
+    w.raw(pix, piy, z1, nix, niy, 0, u * MM, z1 * MM);
     face[0] = (nix + njx) / 2;
     face[1] = (niy + njy) / 2;
     w.fan(base, 4, face);
     u += step;
   }
   let base = w.count;
-  for (let i = 0; i < n; i++) w.raw(points[i]![0], points[i]![1], z1, 0, 0, 1, points[i]![0] * MM, points[i]![1] * MM);
-  w.fan(base, n, [0, 0, 1]);
+  for (let i = 0; i < n; i++) {
+    const px = P[2 * i]!,
+      py = P[2 * i + 1]!;
+    w.raw(px, py, z1, 0, 0, 1, px * MM, py * MM);
+  }
+  w.fan(base, n, PLUS_Z);
   base = w.count;
-  for (let i = 0; i < n; i++) w.raw(bx(i), by(i), z0, 0, 0, -1, bx(i) * MM, by(i) * MM);
-  w.fan(base, n, [0, 0, -1]);
+  for (let i = 0; i < n; i++) {
+    const bx = cx + (P[2 * i]! - cx) * bottomScale,
+      by = cy + (P[2 * i + 1]! - cy) * bottomScale;
+    w.raw(bx, by, z0, 0, 0, -1, bx * MM, by * MM);
+  }
+  w.fan(base, n, MINUS_Z);
 }
 
 function writeRounded(w: Writer, part: Part): void {
-  const { points, normals } = roundedOutline(part);
-  writeExtrusion(w, points, normals, part.z, part.z + part.h);
-}
-
-/** A leg's outline at its top (piece frame mm), round it. */
-export function legOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
-  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
-  const r = part.w / 2;
-  const points: [number, number][] = [];
-  const normals: [number, number][] = [];
-  for (let i = 0; i < sides; i++) {
-    const a = (i / sides) * Math.PI * 2;
-    normals.push([Math.cos(a), Math.sin(a)]);
-    points.push([part.x + Math.cos(a) * r, part.y + Math.sin(a) * r]);
-  }
-  return { points, normals };
+  writeExtrusion(w, roundedOutlineInto(part), part.z, part.z + part.h, 1, 0, 0);
 }
 
 function writeLeg(w: Writer, part: Part): void {
-  const { points, normals } = legOutline(part);
-  writeExtrusion(w, points, normals, part.z, part.z + part.h, part.taper ?? 1, [part.x, part.y]);
+  writeExtrusion(w, legOutlineInto(part), part.z, part.z + part.h, part.taper ?? 1, part.x, part.y);
 }
 
 function writePart(w: Writer, part: Part): void {
