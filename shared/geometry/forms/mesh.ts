@@ -147,16 +147,66 @@ class Writer {
     }
   }
 
-  /** What was written, as a mesh of its own (the scratch buffers are reused). */
-  toMesh(): MeshData {
-    const n = this.count;
-    return {
-      positions: this.stored.slice(0, n * 3),
-      normals: this.normals.slice(0, n * 3),
-      uvs: this.uvs.slice(0, n * 2),
-      indices: this.indices.slice(0, this.indexCount),
-    };
+  /** Numbers toMesh copies out: 3 + 3 + 2 per vertex and one per triangle corner. */
+  get size(): number {
+    return 8 * this.count + this.indexCount;
   }
+
+  /**
+   * What was written, as a mesh of its own (the scratch buffers are reused), copied into `into`
+   * from `at` (4-byte numbers): a form's slots share one buffer, as allocating buffers, not
+   * copying numbers, is most of the cost of small meshes.
+   */
+  toMesh(into: ArrayBuffer, at: number): MeshData {
+    const n = this.count;
+    const positions = new Float32Array(into, at * 4, n * 3);
+    const normals = new Float32Array(into, (at + n * 3) * 4, n * 3);
+    const uvs = new Float32Array(into, (at + n * 6) * 4, n * 2);
+    const indices = new Uint32Array(into, (at + n * 8) * 4, this.indexCount);
+    positions.set(this.stored.subarray(0, n * 3));
+    normals.set(this.normals.subarray(0, n * 3));
+    uvs.set(this.uvs.subarray(0, n * 2));
+    indices.set(this.indices.subarray(0, this.indexCount));
+    return { positions, normals, uvs, indices };
+  }
+}
+
+/**
+ * Local forms are copied into shared blocks of this many 4-byte numbers, each form taking the
+ * next free run: a room's forms need a few allocations, not one each. A block is freed once no
+ * form in it is kept (the form cache is bounded).
+ */
+const BLOCK = 1 << 16;
+let block = new ArrayBuffer(BLOCK * 4);
+let blockUsed = 0;
+
+/** A buffer and the offset (in 4-byte numbers) of `size` free numbers in it. */
+function claim(size: number): [ArrayBuffer, number] {
+  if (size > BLOCK / 4) return [new ArrayBuffer(size * 4), 0];
+  if (blockUsed + size > BLOCK) {
+    block = new ArrayBuffer(BLOCK * 4);
+    blockUsed = 0;
+  }
+  const at = blockUsed;
+  blockUsed += size;
+  return [block, at];
+}
+
+/**
+ * The length of (dx, dy) with the same steps as V8's Math.hypot (each side scaled by the larger,
+ * squares summed; for two numbers its compensated sum reduces to this): the same number, without
+ * a call that gathers its arguments.
+ */
+function hypot2(dx: number, dy: number): number {
+  const a = Math.abs(dx),
+    b = Math.abs(dy);
+  const max = a > b ? a : b;
+  if (max === Infinity) return Infinity;
+  if (max !== max) return NaN;
+  if (max === 0) return 0;
+  const n0 = a / max,
+    n1 = b / max;
+  return Math.sqrt(n0 * n0 + n1 * n1) * max;
 }
 
 /** One writer per material slot, reused by every form built on this thread. */
@@ -240,6 +290,42 @@ const MINUS_Z: V3 = [0, 0, -1];
 const OUTLINE_POINTS = new Float64Array(2 * 64);
 const OUTLINE_NORMALS = new Float64Array(2 * 64);
 
+// Cosines and sines of the outline angles, worked out once with the same expressions the outlines
+// use (so every number is the same), by segments per quarter or sides round a leg.
+const CORNER_TURNS = new Map<number, { cos: Float64Array; sin: Float64Array }>();
+const LEG_TURNS = new Map<number, { cos: Float64Array; sin: Float64Array }>();
+
+function cornerTurns(segments: number): { cos: Float64Array; sin: Float64Array } {
+  let t = CORNER_TURNS.get(segments);
+  if (!t) {
+    t = { cos: new Float64Array(4 * (segments + 1)), sin: new Float64Array(4 * (segments + 1)) };
+    for (let c = 0; c < 4; c++) {
+      const start = c === 0 ? 0 : c === 1 ? Math.PI / 2 : c === 2 ? Math.PI : (3 * Math.PI) / 2;
+      for (let i = 0; i <= segments; i++) {
+        const a = start + (i / segments) * (Math.PI / 2);
+        t.cos[c * (segments + 1) + i] = Math.cos(a);
+        t.sin[c * (segments + 1) + i] = Math.sin(a);
+      }
+    }
+    CORNER_TURNS.set(segments, t);
+  }
+  return t;
+}
+
+function legTurns(sides: number): { cos: Float64Array; sin: Float64Array } {
+  let t = LEG_TURNS.get(sides);
+  if (!t) {
+    t = { cos: new Float64Array(sides), sin: new Float64Array(sides) };
+    for (let i = 0; i < sides; i++) {
+      const a = (i / sides) * Math.PI * 2;
+      t.cos[i] = Math.cos(a);
+      t.sin[i] = Math.sin(a);
+    }
+    LEG_TURNS.set(sides, t);
+  }
+  return t;
+}
+
 /** Writes a rounded part's plan outline into the scratch arrays; returns how many points. */
 function roundedOutlineInto(part: Part): number {
   const r = part.radius ?? 0;
@@ -249,16 +335,15 @@ function roundedOutlineInto(part: Part): number {
   const segments = disc ? DISC_SEGMENTS : CORNER_SEGMENTS;
   const P = OUTLINE_POINTS,
     N = OUTLINE_NORMALS;
+  const { cos, sin } = cornerTurns(segments);
   let k = 0;
   for (let c = 0; c < 4; c++) {
     const cx = c === 0 || c === 3 ? hx : -hx;
     const cy = c < 2 ? hy : -hy;
-    const start = c === 0 ? 0 : c === 1 ? Math.PI / 2 : c === 2 ? Math.PI : (3 * Math.PI) / 2;
     for (let i = 0; i <= segments; i++) {
       if (disc && i === segments) continue;
-      const a = start + (i / segments) * (Math.PI / 2);
-      const nx = Math.cos(a),
-        ny = Math.sin(a);
+      const nx = cos[c * (segments + 1) + i]!,
+        ny = sin[c * (segments + 1) + i]!;
       P[2 * k] = part.x + cx + nx * r;
       P[2 * k + 1] = part.y + cy + ny * r;
       N[2 * k] = nx;
@@ -275,12 +360,12 @@ function legOutlineInto(part: Part): number {
   const r = part.w / 2;
   const P = OUTLINE_POINTS,
     N = OUTLINE_NORMALS;
+  const { cos, sin } = legTurns(sides);
   for (let i = 0; i < sides; i++) {
-    const a = (i / sides) * Math.PI * 2;
-    N[2 * i] = Math.cos(a);
-    N[2 * i + 1] = Math.sin(a);
-    P[2 * i] = part.x + Math.cos(a) * r;
-    P[2 * i + 1] = part.y + Math.sin(a) * r;
+    N[2 * i] = cos[i]!;
+    N[2 * i + 1] = sin[i]!;
+    P[2 * i] = part.x + cos[i]! * r;
+    P[2 * i + 1] = part.y + sin[i]! * r;
   }
   return sides;
 }
@@ -323,7 +408,7 @@ function writeExtrusion(w: Writer, n: number, z0: number, z1: number, bottomScal
       piy = P[2 * i + 1]!,
       pjx = P[2 * j]!,
       pjy = P[2 * j + 1]!;
-    const step = Math.hypot(pjx - pix, pjy - piy);
+    const step = hypot2(pjx - pix, pjy - piy);
     const nix = N[2 * i]!,
       niy = N[2 * i + 1]!,
       njx = N[2 * j]!,
@@ -381,13 +466,24 @@ export function localFormMeshes(parts: readonly Part[]): FormMeshes {
     writePart(writer, part);
     if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: writer.count - before });
   }
-  return { main: writers.main.toMesh(), accent: writers.accent.toMesh(), own: writers.own.toMesh(), ownColours };
+  const mainSize = writers.main.size,
+    accentSize = writers.accent.size;
+  const [buffer, at] = claim(mainSize + accentSize + writers.own.size);
+  return {
+    main: writers.main.toMesh(buffer, at),
+    accent: writers.accent.toMesh(buffer, at + mainSize),
+    own: writers.own.toMesh(buffer, at + mainSize + accentSize),
+    ownColours,
+  };
 }
 
-function placeMesh(mesh: MeshData, f: Frame): MeshData {
+// Writes `mesh` placed by `f` into `out` from `at` (positions, then normals) and returns it with
+// the local uvs and triangles, which do not change with where the piece stands (shared, never
+// written to).
+function placeMesh(mesh: MeshData, f: Frame, out: Float32Array, at: number): MeshData {
   const n = mesh.positions.length;
-  const positions = new Float32Array(n);
-  const normals = new Float32Array(n);
+  const positions = out.subarray(at, at + n);
+  const normals = out.subarray(at + n, at + 2 * n);
   const p = mesh.positions;
   const q = mesh.normals;
   const [a0, a1] = f.ax;
@@ -400,17 +496,28 @@ function placeMesh(mesh: MeshData, f: Frame): MeshData {
     normals[i + 1] = q[i + 2]!;
     normals[i + 2] = q[i]! * a1 + q[i + 1]! * b1;
   }
-  // uvs and triangles do not change with where the piece stands: shared, never written to.
   return { positions, normals, uvs: mesh.uvs, indices: mesh.indices };
 }
 
-/** A piece's form in its own frame placed in the room: scene metres, y up. */
-export function placeForm(local: FormMeshes, at: Placement): FormMeshes {
+/** Numbers placeForm writes for a form: positions and normals of every slot. */
+export function placedSize(local: FormMeshes): number {
+  return 2 * (local.main.positions.length + local.accent.positions.length + local.own.positions.length);
+}
+
+/**
+ * A piece's form in its own frame placed in the room: scene metres, y up. Written into `out` from
+ * `at` (placedSize(local) numbers) when given, so a room's forms can share one buffer.
+ */
+export function placeForm(local: FormMeshes, at: Placement, out?: Float32Array, offset = 0): FormMeshes {
   const frame = frameOf(at);
+  const into = out ?? new Float32Array(placedSize(local));
+  const start = out ? offset : 0;
+  const main = 2 * local.main.positions.length;
+  const accent = 2 * local.accent.positions.length;
   return {
-    main: placeMesh(local.main, frame),
-    accent: placeMesh(local.accent, frame),
-    own: placeMesh(local.own, frame),
+    main: placeMesh(local.main, frame, into, start),
+    accent: placeMesh(local.accent, frame, into, start + main),
+    own: placeMesh(local.own, frame, into, start + main + accent),
     ownColours: local.ownColours,
   };
 }
