@@ -5,7 +5,10 @@ import { buildRoomScene } from '../../shared/geometry/scene';
 import { loadavg } from 'node:os';
 import { typicalFurnishedRoom } from './typical-room';
 
-const REPEATS = 30;
+/** Rounds of the three measures taken in turn, so a busy spell on the shared machine hits them all alike. */
+const ROUNDS = 7;
+/** Batches per measure and round (the median is kept) and builds per batch. */
+const REPEATS = 9;
 const BATCH = 20;
 
 function median(run: () => void): number {
@@ -16,32 +19,73 @@ function median(run: () => void): number {
     ms.push((performance.now() - t0) / BATCH);
   }
   ms.sort((a, b) => a - b);
-  return ms[Math.floor(REPEATS / 2)];
+  return ms[Math.floor(REPEATS / 2)]!;
 }
 
-/** Prints ms per room for the scene data with boxes and with forms (shell included in both), and the forms' triangles. */
+const range = (values: number[], digits: number, unit = '') => {
+  const sorted = [...values].sort((a, b) => a - b);
+  return `${sorted[0]!.toFixed(digits)}–${sorted[sorted.length - 1]!.toFixed(digits)}${unit}`;
+};
+
+/**
+ * Prints ms per room for the scene data with boxes and with forms (shell and boxes included in
+ * both, as the 3D views build them), round by round with the load, then the ranges and ratios.
+ */
 export async function benchForms(): Promise<void> {
   const { shell, option } = typicalFurnishedRoom();
-  for (let i = 0; i < 30; i++) {
-    buildRoomScene(shell, option);
-    buildPieceForms(option.pieces);
-  }
-  const boxes = median(() => buildRoomScene(shell, option));
+  const boxes = () => buildRoomScene(shell, option);
   // From nothing (a room opened for the first time) and again (a piece dragged: the others' forms are kept).
-  const cold = median(() => {
+  const cold = () => {
     clearFormCache();
     buildRoomScene(shell, option);
     buildPieceForms(option.pieces);
-  });
-  const forms = median(() => {
+  };
+  const kept = () => {
     buildRoomScene(shell, option);
     buildPieceForms(option.pieces);
-  });
+  };
+  for (let i = 0; i < 30; i++) {
+    boxes();
+    cold();
+    kept();
+  }
+  const rounds: { boxes: number; cold: number; kept: number; load: number }[] = [];
+  for (let r = 0; r < ROUNDS; r++) {
+    const round = { boxes: median(boxes), cold: median(cold), kept: median(kept), load: loadavg()[0]! };
+    rounds.push(round);
+    console.log(
+      `forms: round ${r + 1}: boxes ${round.boxes.toFixed(3)} ms, forms from nothing ${round.cold.toFixed(3)} ms ` +
+        `(${(round.cold / round.boxes).toFixed(2)}×), forms kept ${round.kept.toFixed(3)} ms (${(round.kept / round.boxes).toFixed(2)}×) ` +
+        `(load ${round.load.toFixed(1)})`,
+    );
+  }
   const triangles = buildPieceForms(option.pieces).reduce((n, f) => n + formTriangles(f.meshes), 0);
   const kinds = new Set(option.pieces.map((p) => p.kind)).size;
   console.log(
-    `forms: scene data, typical room of 40 pieces (${kinds} kinds): boxes ${boxes.toFixed(3)} ms; with forms built from nothing ${cold.toFixed(3)} ms ` +
-      `(${(cold / boxes).toFixed(2)}×), with forms kept from the last build ${forms.toFixed(3)} ms (${(forms / boxes).toFixed(2)}×); ` +
-      `forms ${triangles} triangles (load ${loadavg()[0].toFixed(1)})`,
+    `forms: scene data, typical room of 40 pieces (${kinds} kinds), ${ROUNDS} rounds side by side: ` +
+      `boxes ${range(
+        rounds.map((r) => r.boxes),
+        3,
+        ' ms',
+      )}; with forms built from nothing ${range(
+        rounds.map((r) => r.cold),
+        3,
+        ' ms',
+      )} (${range(
+        rounds.map((r) => r.cold / r.boxes),
+        2,
+        '×',
+      )}); with forms kept from the last build ${range(
+        rounds.map((r) => r.kept),
+        3,
+        ' ms',
+      )} (${range(
+        rounds.map((r) => r.kept / r.boxes),
+        2,
+        '×',
+      )}); forms ${triangles} triangles (load ${range(
+        rounds.map((r) => r.load),
+        1,
+      )}; budget: forms ≤ 1.5× the boxes)`,
   );
 }

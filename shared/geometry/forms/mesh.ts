@@ -47,6 +47,8 @@ class Writer {
   // garbage collection. Positions are kept in doubles so the facing test in fan() sees exactly
   // the values it always did; toMesh() copies out what was written.
   positions = new Float64Array(3 * 512);
+  /** The same positions as they are stored (single precision), written alongside, so copying out is a plain copy. */
+  stored = new Float32Array(3 * 512);
   normals = new Float32Array(3 * 512);
   uvs = new Float32Array(2 * 512);
   indices = new Uint32Array(3 * 512);
@@ -83,9 +85,13 @@ class Writer {
     const P = this.positions,
       N = this.normals,
       T = this.uvs;
+    const S = this.stored;
     P[i * 3] = x;
     P[i * 3 + 1] = y;
     P[i * 3 + 2] = z;
+    S[i * 3] = x;
+    S[i * 3 + 1] = y;
+    S[i * 3 + 2] = z;
     N[i * 3] = nx;
     N[i * 3 + 1] = ny;
     N[i * 3 + 2] = nz;
@@ -101,6 +107,7 @@ class Writer {
       return b;
     };
     this.positions = grow(this.positions, (n) => new Float64Array(n));
+    this.stored = grow(this.stored, (n) => new Float32Array(n));
     this.normals = grow(this.normals, (n) => new Float32Array(n));
     this.uvs = grow(this.uvs, (n) => new Float32Array(n));
   }
@@ -140,16 +147,66 @@ class Writer {
     }
   }
 
-  /** What was written, as a mesh of its own (the scratch buffers are reused). */
-  toMesh(): MeshData {
-    const n = this.count;
-    return {
-      positions: new Float32Array(this.positions.subarray(0, n * 3)),
-      normals: this.normals.slice(0, n * 3),
-      uvs: this.uvs.slice(0, n * 2),
-      indices: this.indices.slice(0, this.indexCount),
-    };
+  /** Numbers toMesh copies out: 3 + 3 + 2 per vertex and one per triangle corner. */
+  get size(): number {
+    return 8 * this.count + this.indexCount;
   }
+
+  /**
+   * What was written, as a mesh of its own (the scratch buffers are reused), copied into `into`
+   * from `at` (4-byte numbers): a form's slots share one buffer, as allocating buffers, not
+   * copying numbers, is most of the cost of small meshes.
+   */
+  toMesh(into: ArrayBuffer, at: number): MeshData {
+    const n = this.count;
+    const positions = new Float32Array(into, at * 4, n * 3);
+    const normals = new Float32Array(into, (at + n * 3) * 4, n * 3);
+    const uvs = new Float32Array(into, (at + n * 6) * 4, n * 2);
+    const indices = new Uint32Array(into, (at + n * 8) * 4, this.indexCount);
+    positions.set(this.stored.subarray(0, n * 3));
+    normals.set(this.normals.subarray(0, n * 3));
+    uvs.set(this.uvs.subarray(0, n * 2));
+    indices.set(this.indices.subarray(0, this.indexCount));
+    return { positions, normals, uvs, indices };
+  }
+}
+
+/**
+ * Local forms are copied into shared blocks of this many 4-byte numbers, each form taking the
+ * next free run: a room's forms need a few allocations, not one each. A block is freed once no
+ * form in it is kept (the form cache is bounded).
+ */
+const BLOCK = 1 << 16;
+let block = new ArrayBuffer(BLOCK * 4);
+let blockUsed = 0;
+
+/** A buffer and the offset (in 4-byte numbers) of `size` free numbers in it. */
+function claim(size: number): [ArrayBuffer, number] {
+  if (size > BLOCK / 4) return [new ArrayBuffer(size * 4), 0];
+  if (blockUsed + size > BLOCK) {
+    block = new ArrayBuffer(BLOCK * 4);
+    blockUsed = 0;
+  }
+  const at = blockUsed;
+  blockUsed += size;
+  return [block, at];
+}
+
+/**
+ * The length of (dx, dy) with the same steps as V8's Math.hypot (each side scaled by the larger,
+ * squares summed; for two numbers its compensated sum reduces to this): the same number, without
+ * a call that gathers its arguments.
+ */
+function hypot2(dx: number, dy: number): number {
+  const a = Math.abs(dx),
+    b = Math.abs(dy);
+  const max = a > b ? a : b;
+  if (max === Infinity) return Infinity;
+  if (max !== max) return NaN;
+  if (max === 0) return 0;
+  const n0 = a / max,
+    n1 = b / max;
+  return Math.sqrt(n0 * n0 + n1 * n1) * max;
 }
 
 /** One writer per material slot, reused by every form built on this thread. */
@@ -168,6 +225,8 @@ function frameOf(at: Placement): Frame {
   return { cx: at.x, cy: at.y, ax, ay: [-ax[1], ax[0]], elevation: at.elevation };
 }
 
+// The four sides, then the top and the underside, each a fan over its corners; written from plain
+// numbers (no arrays per part), in the same order and with the same values as corner lists would give.
 function writeBox(w: Writer, part: Part): void {
   const x0 = part.x - part.w / 2,
     x1 = part.x + part.w / 2;
@@ -175,163 +234,217 @@ function writeBox(w: Writer, part: Part): void {
     y1 = part.y + part.d / 2;
   const z0 = part.z,
     z1 = part.z + part.h;
-  const flat = (n: V3): V3[] => [n, n, n, n];
-  const sideUv = (u0: number, u1: number): [number, number][] => [
-    [u0 * MM, z0 * MM],
-    [u1 * MM, z0 * MM],
-    [u1 * MM, z1 * MM],
-    [u0 * MM, z1 * MM],
-  ];
-  w.quad(
-    [
-      [x0, y1, z0],
-      [x1, y1, z0],
-      [x1, y1, z1],
-      [x0, y1, z1],
-    ],
-    flat([0, 1, 0]),
-    sideUv(x0, x1),
-    [0, 1, 0],
-  );
-  w.quad(
-    [
-      [x1, y0, z0],
-      [x0, y0, z0],
-      [x0, y0, z1],
-      [x1, y0, z1],
-    ],
-    flat([0, -1, 0]),
-    sideUv(-x1, -x0),
-    [0, -1, 0],
-  );
-  w.quad(
-    [
-      [x1, y1, z0],
-      [x1, y0, z0],
-      [x1, y0, z1],
-      [x1, y1, z1],
-    ],
-    flat([1, 0, 0]),
-    sideUv(-y1, -y0),
-    [1, 0, 0],
-  );
-  w.quad(
-    [
-      [x0, y0, z0],
-      [x0, y1, z0],
-      [x0, y1, z1],
-      [x0, y0, z1],
-    ],
-    flat([-1, 0, 0]),
-    sideUv(y0, y1),
-    [-1, 0, 0],
-  );
-  w.polygon(
-    [
-      [x0, y0, z1],
-      [x1, y0, z1],
-      [x1, y1, z1],
-      [x0, y1, z1],
-    ],
-    [0, 0, 1],
-  );
-  w.polygon(
-    [
-      [x0, y0, z0],
-      [x1, y0, z0],
-      [x1, y1, z0],
-      [x0, y1, z0],
-    ],
-    [0, 0, -1],
-  );
+  const v0 = z0 * MM,
+    v1 = z1 * MM;
+  let base = w.count;
+  // Front (+y).
+  w.raw(x0, y1, z0, 0, 1, 0, x0 * MM, v0);
+  w.raw(x1, y1, z0, 0, 1, 0, x1 * MM, v0);
+  w.raw(x1, y1, z1, 0, 1, 0, x1 * MM, v1);
+  w.raw(x0, y1, z1, 0, 1, 0, x0 * MM, v1);
+  w.fan(base, 4, PLUS_Y);
+  // Back (−y).
+  base = w.count;
+  w.raw(x1, y0, z0, 0, -1, 0, -x1 * MM, v0);
+  w.raw(x0, y0, z0, 0, -1, 0, -x0 * MM, v0);
+  w.raw(x0, y0, z1, 0, -1, 0, -x0 * MM, v1);
+  w.raw(x1, y0, z1, 0, -1, 0, -x1 * MM, v1);
+  w.fan(base, 4, MINUS_Y);
+  // Right (+x).
+  base = w.count;
+  w.raw(x1, y1, z0, 1, 0, 0, -y1 * MM, v0);
+  w.raw(x1, y0, z0, 1, 0, 0, -y0 * MM, v0);
+  w.raw(x1, y0, z1, 1, 0, 0, -y0 * MM, v1);
+  w.raw(x1, y1, z1, 1, 0, 0, -y1 * MM, v1);
+  w.fan(base, 4, PLUS_X);
+  // Left (−x).
+  base = w.count;
+  w.raw(x0, y0, z0, -1, 0, 0, y0 * MM, v0);
+  w.raw(x0, y1, z0, -1, 0, 0, y1 * MM, v0);
+  w.raw(x0, y1, z1, -1, 0, 0, y1 * MM, v1);
+  w.raw(x0, y0, z1, -1, 0, 0, y0 * MM, v1);
+  w.fan(base, 4, MINUS_X);
+  // Top and underside: uvs are the plan position in metres.
+  base = w.count;
+  w.raw(x0, y0, z1, 0, 0, 1, x0 * MM, y0 * MM);
+  w.raw(x1, y0, z1, 0, 0, 1, x1 * MM, y0 * MM);
+  w.raw(x1, y1, z1, 0, 0, 1, x1 * MM, y1 * MM);
+  w.raw(x0, y1, z1, 0, 0, 1, x0 * MM, y1 * MM);
+  w.fan(base, 4, PLUS_Z);
+  base = w.count;
+  w.raw(x0, y0, z0, 0, 0, -1, x0 * MM, y0 * MM);
+  w.raw(x1, y0, z0, 0, 0, -1, x1 * MM, y0 * MM);
+  w.raw(x1, y1, z0, 0, 0, -1, x1 * MM, y1 * MM);
+  w.raw(x0, y1, z0, 0, 0, -1, x0 * MM, y1 * MM);
+  w.fan(base, 4, MINUS_Z);
 }
 
-/** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
-export function roundedOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+const PLUS_X: V3 = [1, 0, 0];
+const MINUS_X: V3 = [-1, 0, 0];
+const PLUS_Y: V3 = [0, 1, 0];
+const MINUS_Y: V3 = [0, -1, 0];
+const PLUS_Z: V3 = [0, 0, 1];
+const MINUS_Z: V3 = [0, 0, -1];
+
+// An outline round a part, written into scratch arrays (x, y pairs) reused for every part.
+const OUTLINE_POINTS = new Float64Array(2 * 64);
+const OUTLINE_NORMALS = new Float64Array(2 * 64);
+
+// Cosines and sines of the outline angles, worked out once with the same expressions the outlines
+// use (so every number is the same), by segments per quarter or sides round a leg.
+const CORNER_TURNS = new Map<number, { cos: Float64Array; sin: Float64Array }>();
+const LEG_TURNS = new Map<number, { cos: Float64Array; sin: Float64Array }>();
+
+function cornerTurns(segments: number): { cos: Float64Array; sin: Float64Array } {
+  let t = CORNER_TURNS.get(segments);
+  if (!t) {
+    t = { cos: new Float64Array(4 * (segments + 1)), sin: new Float64Array(4 * (segments + 1)) };
+    for (let c = 0; c < 4; c++) {
+      const start = c === 0 ? 0 : c === 1 ? Math.PI / 2 : c === 2 ? Math.PI : (3 * Math.PI) / 2;
+      for (let i = 0; i <= segments; i++) {
+        const a = start + (i / segments) * (Math.PI / 2);
+        t.cos[c * (segments + 1) + i] = Math.cos(a);
+        t.sin[c * (segments + 1) + i] = Math.sin(a);
+      }
+    }
+    CORNER_TURNS.set(segments, t);
+  }
+  return t;
+}
+
+function legTurns(sides: number): { cos: Float64Array; sin: Float64Array } {
+  let t = LEG_TURNS.get(sides);
+  if (!t) {
+    t = { cos: new Float64Array(sides), sin: new Float64Array(sides) };
+    for (let i = 0; i < sides; i++) {
+      const a = (i / sides) * Math.PI * 2;
+      t.cos[i] = Math.cos(a);
+      t.sin[i] = Math.sin(a);
+    }
+    LEG_TURNS.set(sides, t);
+  }
+  return t;
+}
+
+/** Writes a rounded part's plan outline into the scratch arrays; returns how many points. */
+function roundedOutlineInto(part: Part): number {
   const r = part.radius ?? 0;
   const hx = part.w / 2 - r;
   const hy = part.d / 2 - r;
   const disc = hx < 1e-6 && hy < 1e-6;
   const segments = disc ? DISC_SEGMENTS : CORNER_SEGMENTS;
-  const corners: [number, number, number][] = [
-    [hx, hy, 0],
-    [-hx, hy, Math.PI / 2],
-    [-hx, -hy, Math.PI],
-    [hx, -hy, (3 * Math.PI) / 2],
-  ];
-  const points: [number, number][] = [];
-  const normals: [number, number][] = [];
-  for (const [cx, cy, start] of corners) {
+  const P = OUTLINE_POINTS,
+    N = OUTLINE_NORMALS;
+  const { cos, sin } = cornerTurns(segments);
+  let k = 0;
+  for (let c = 0; c < 4; c++) {
+    const cx = c === 0 || c === 3 ? hx : -hx;
+    const cy = c < 2 ? hy : -hy;
     for (let i = 0; i <= segments; i++) {
       if (disc && i === segments) continue;
-      const a = start + (i / segments) * (Math.PI / 2);
-      const n: [number, number] = [Math.cos(a), Math.sin(a)];
-      points.push([part.x + cx + n[0] * r, part.y + cy + n[1] * r]);
-      normals.push(n);
+      const nx = cos[c * (segments + 1) + i]!,
+        ny = sin[c * (segments + 1) + i]!;
+      P[2 * k] = part.x + cx + nx * r;
+      P[2 * k + 1] = part.y + cy + ny * r;
+      N[2 * k] = nx;
+      N[2 * k + 1] = ny;
+      k++;
     }
+  }
+  return k;
+}
+
+/** Writes a leg's outline at its top into the scratch arrays; returns how many points. */
+function legOutlineInto(part: Part): number {
+  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
+  const r = part.w / 2;
+  const P = OUTLINE_POINTS,
+    N = OUTLINE_NORMALS;
+  const { cos, sin } = legTurns(sides);
+  for (let i = 0; i < sides; i++) {
+    N[2 * i] = cos[i]!;
+    N[2 * i + 1] = sin[i]!;
+    P[2 * i] = part.x + cos[i]! * r;
+    P[2 * i + 1] = part.y + sin[i]! * r;
+  }
+  return sides;
+}
+
+/** The scratch outline's first `n` points and normals as pairs. */
+function outlinePairs(n: number): { points: [number, number][]; normals: [number, number][] } {
+  const points: [number, number][] = [];
+  const normals: [number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    points.push([OUTLINE_POINTS[2 * i]!, OUTLINE_POINTS[2 * i + 1]!]);
+    normals.push([OUTLINE_NORMALS[2 * i]!, OUTLINE_NORMALS[2 * i + 1]!]);
   }
   return { points, normals };
 }
 
-function writeExtrusion(
-  w: Writer,
-  points: readonly [number, number][],
-  normals: readonly [number, number][],
-  z0: number,
-  z1: number,
-  bottomScale = 1,
-  centre: [number, number] = [0, 0],
-): void {
-  const n = points.length;
-  const bx = (i: number) => centre[0] + (points[i]![0] - centre[0]) * bottomScale;
-  const by = (i: number) => centre[1] + (points[i]![1] - centre[1]) * bottomScale;
-  const face: V3 = [0, 0, 0];
+/** The plan outline of a rounded part (piece frame mm), corner by corner, with each point's outward normal. */
+export function roundedOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  return outlinePairs(roundedOutlineInto(part));
+}
+
+/** A leg's outline at its top (piece frame mm), round it. */
+export function legOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
+  return outlinePairs(legOutlineInto(part));
+}
+
+const EXTRUSION_FACE: V3 = [0, 0, 0];
+
+// The scratch outline's `n` points as an upright prism from z0 to z1: its sides (smooth normals
+// round it, u running along the outline), its top and its underside. The underside is the
+// outline scaled by `bottomScale` about (cx, cy).
+function writeExtrusion(w: Writer, n: number, z0: number, z1: number, bottomScale: number, cx: number, cy: number): void {
+  const P = OUTLINE_POINTS,
+    N = OUTLINE_NORMALS;
+  const face = EXTRUSION_FACE;
+  face[2] = 0;
   let u = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    const step = Math.hypot(points[j]![0] - points[i]![0], points[j]![1] - points[i]![1]);
-    const [nix, niy] = normals[i]!;
-    const [njx, njy] = normals[j]!;
+    const pix = P[2 * i]!,
+      piy = P[2 * i + 1]!,
+      pjx = P[2 * j]!,
+      pjy = P[2 * j + 1]!;
+    const step = hypot2(pjx - pix, pjy - piy);
+    const nix = N[2 * i]!,
+      niy = N[2 * i + 1]!,
+      njx = N[2 * j]!,
+      njy = N[2 * j + 1]!;
     const base = w.count;
-    w.raw(bx(i), by(i), z0, nix, niy, 0, u * MM, z0 * MM);
-    w.raw(bx(j), by(j), z0, njx, njy, 0, (u + step) * MM, z0 * MM);
-    w.raw(points[j]![0], points[j]![1], z1, njx, njy, 0, (u + step) * MM, z1 * MM);
-    w.raw(points[i]![0], points[i]![1], z1, nix, niy, 0, u * MM, z1 * MM);
+    w.raw(cx + (pix - cx) * bottomScale, cy + (piy - cy) * bottomScale, z0, nix, niy, 0, u * MM, z0 * MM);
+    w.raw(cx + (pjx - cx) * bottomScale, cy + (pjy - cy) * bottomScale, z0, njx, njy, 0, (u + step) * MM, z0 * MM);
+    w.raw(pjx, pjy, z1, njx, njy, 0, (u + step) * MM, z1 * MM);
+    w.raw(pix, piy, z1, nix, niy, 0, u * MM, z1 * MM);
     face[0] = (nix + njx) / 2;
     face[1] = (niy + njy) / 2;
     w.fan(base, 4, face);
     u += step;
   }
   let base = w.count;
-  for (let i = 0; i < n; i++) w.raw(points[i]![0], points[i]![1], z1, 0, 0, 1, points[i]![0] * MM, points[i]![1] * MM);
-  w.fan(base, n, [0, 0, 1]);
+  for (let i = 0; i < n; i++) {
+    const px = P[2 * i]!,
+      py = P[2 * i + 1]!;
+    w.raw(px, py, z1, 0, 0, 1, px * MM, py * MM);
+  }
+  w.fan(base, n, PLUS_Z);
   base = w.count;
-  for (let i = 0; i < n; i++) w.raw(bx(i), by(i), z0, 0, 0, -1, bx(i) * MM, by(i) * MM);
-  w.fan(base, n, [0, 0, -1]);
+  for (let i = 0; i < n; i++) {
+    const bx = cx + (P[2 * i]! - cx) * bottomScale,
+      by = cy + (P[2 * i + 1]! - cy) * bottomScale;
+    w.raw(bx, by, z0, 0, 0, -1, bx * MM, by * MM);
+  }
+  w.fan(base, n, MINUS_Z);
 }
 
 function writeRounded(w: Writer, part: Part): void {
-  const { points, normals } = roundedOutline(part);
-  writeExtrusion(w, points, normals, part.z, part.z + part.h);
-}
-
-/** A leg's outline at its top (piece frame mm), round it. */
-export function legOutline(part: Part): { points: [number, number][]; normals: [number, number][] } {
-  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
-  const r = part.w / 2;
-  const points: [number, number][] = [];
-  const normals: [number, number][] = [];
-  for (let i = 0; i < sides; i++) {
-    const a = (i / sides) * Math.PI * 2;
-    normals.push([Math.cos(a), Math.sin(a)]);
-    points.push([part.x + Math.cos(a) * r, part.y + Math.sin(a) * r]);
-  }
-  return { points, normals };
+  writeExtrusion(w, roundedOutlineInto(part), part.z, part.z + part.h, 1, 0, 0);
 }
 
 function writeLeg(w: Writer, part: Part): void {
-  const { points, normals } = legOutline(part);
-  writeExtrusion(w, points, normals, part.z, part.z + part.h, part.taper ?? 1, [part.x, part.y]);
+  writeExtrusion(w, legOutlineInto(part), part.z, part.z + part.h, part.taper ?? 1, part.x, part.y);
 }
 
 function writePart(w: Writer, part: Part): void {
@@ -353,13 +466,24 @@ export function localFormMeshes(parts: readonly Part[]): FormMeshes {
     writePart(writer, part);
     if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: writer.count - before });
   }
-  return { main: writers.main.toMesh(), accent: writers.accent.toMesh(), own: writers.own.toMesh(), ownColours };
+  const mainSize = writers.main.size,
+    accentSize = writers.accent.size;
+  const [buffer, at] = claim(mainSize + accentSize + writers.own.size);
+  return {
+    main: writers.main.toMesh(buffer, at),
+    accent: writers.accent.toMesh(buffer, at + mainSize),
+    own: writers.own.toMesh(buffer, at + mainSize + accentSize),
+    ownColours,
+  };
 }
 
-function placeMesh(mesh: MeshData, f: Frame): MeshData {
+// Writes `mesh` placed by `f` into `out` from `at` (positions, then normals) and returns it with
+// the local uvs and triangles, which do not change with where the piece stands (shared, never
+// written to).
+function placeMesh(mesh: MeshData, f: Frame, out: Float32Array, at: number): MeshData {
   const n = mesh.positions.length;
-  const positions = new Float32Array(n);
-  const normals = new Float32Array(n);
+  const positions = out.subarray(at, at + n);
+  const normals = out.subarray(at + n, at + 2 * n);
   const p = mesh.positions;
   const q = mesh.normals;
   const [a0, a1] = f.ax;
@@ -372,17 +496,28 @@ function placeMesh(mesh: MeshData, f: Frame): MeshData {
     normals[i + 1] = q[i + 2]!;
     normals[i + 2] = q[i]! * a1 + q[i + 1]! * b1;
   }
-  // uvs and triangles do not change with where the piece stands: shared, never written to.
   return { positions, normals, uvs: mesh.uvs, indices: mesh.indices };
 }
 
-/** A piece's form in its own frame placed in the room: scene metres, y up. */
-export function placeForm(local: FormMeshes, at: Placement): FormMeshes {
+/** Numbers placeForm writes for a form: positions and normals of every slot. */
+export function placedSize(local: FormMeshes): number {
+  return 2 * (local.main.positions.length + local.accent.positions.length + local.own.positions.length);
+}
+
+/**
+ * A piece's form in its own frame placed in the room: scene metres, y up. Written into `out` from
+ * `at` (placedSize(local) numbers) when given, so a room's forms can share one buffer.
+ */
+export function placeForm(local: FormMeshes, at: Placement, out?: Float32Array, offset = 0): FormMeshes {
   const frame = frameOf(at);
+  const into = out ?? new Float32Array(placedSize(local));
+  const start = out ? offset : 0;
+  const main = 2 * local.main.positions.length;
+  const accent = 2 * local.accent.positions.length;
   return {
-    main: placeMesh(local.main, frame),
-    accent: placeMesh(local.accent, frame),
-    own: placeMesh(local.own, frame),
+    main: placeMesh(local.main, frame, into, start),
+    accent: placeMesh(local.accent, frame, into, start + main),
+    own: placeMesh(local.own, frame, into, start + main + accent),
     ownColours: local.ownColours,
   };
 }

@@ -2,7 +2,7 @@
 // use (shared/geometry/scene.ts builds those; both stay reachable so they can be compared).
 import type { Piece } from '../../schemas/option';
 import { formParts } from './index';
-import { localFormMeshes, placeForm, type FormMeshes } from './mesh';
+import { localFormMeshes, placedSize, placeForm, type FormMeshes } from './mesh';
 
 /**
  * Forms already built in their own frame, by kind, settings and box: moving or turning a piece
@@ -31,12 +31,21 @@ export interface PieceFormData {
   meshes: FormMeshes;
 }
 
-/** The forms of an option's placed pieces, in document order, scene metres. */
+/**
+ * The forms of an option's placed pieces, in document order, scene metres. Every piece's placed
+ * positions and normals are written into one buffer sized first, not one buffer per mesh.
+ */
 export function buildPieceForms(pieces: readonly Piece[]): PieceFormData[] {
-  return pieces
-    .filter((p) => p.placed)
-    .map((p) => ({
-      id: p.id,
-      meshes: placeForm(localForm(p), { x: p.x, y: p.y, rotation: p.rotation, elevation: p.elevation }),
-    }));
+  const placed = pieces.filter((p) => p.placed);
+  const locals = placed.map(localForm);
+  let size = 0;
+  for (const local of locals) size += placedSize(local);
+  const out = new Float32Array(size);
+  let at = 0;
+  return placed.map((p, i) => {
+    const local = locals[i]!;
+    const meshes = placeForm(local, { x: p.x, y: p.y, rotation: p.rotation, elevation: p.elevation }, out, at);
+    at += placedSize(local);
+    return { id: p.id, meshes };
+  });
 }
