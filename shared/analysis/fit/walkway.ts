@@ -335,6 +335,10 @@ interface Routes {
   parent: Int32Array;
   /** For a way-in cell, the index of its opening; −1 elsewhere. */
   wayIn: Int32Array;
+  /** Filled in by routeNarrowest as it is asked: the narrowest cell on the route from each cell; −1 until asked. */
+  narrowest: Int32Array;
+  /** Filled in by routeNarrowest beside `narrowest`: the way-in cell the route from each cell starts at. */
+  start: Int32Array;
 }
 
 /**
@@ -382,7 +386,44 @@ function widestRoutes(
     }
   }
   for (let cell = 0; cell < cells; cell++) if (bottleneckMm[cell] === BLOCKED_KEY) bottleneckMm[cell] = -1;
-  return { bottleneckMm, parent, wayIn };
+  const narrowest = scratch('narrowest', int32, cells).fill(-1);
+  const start = scratch('start', int32, cells);
+  return { bottleneckMm, parent, wayIn, narrowest, start };
+}
+
+/**
+ * The narrowest cell (least exact width) on the best route from a cell back to its way in, the
+ * nearest to the cell among equals; and, in `routes.start`, the way-in cell the route ends at. The
+ * routes form a tree, so each cell's answer is its own or its parent's: every cell is worked out
+ * once and kept, however many pieces' routes run through it. A cell known to be wider than the
+ * narrowest beyond it is passed over without measuring its width exactly.
+ */
+function routeNarrowest(widths: Widths, routes: Routes): (cell: number) => number {
+  const narrowest = routes.narrowest;
+  const path: number[] = [];
+  return (from: number): number => {
+    path.length = 0;
+    for (let cell = from; narrowest[cell]! < 0;) {
+      path.push(cell);
+      cell = routes.parent[cell]!;
+      if (cell < 0) break;
+    }
+    // From the end nearest the way in back towards the asking cell, each parent already answered.
+    for (let k = path.length - 1; k >= 0; k--) {
+      const cell = path[k]!;
+      const up = routes.parent[cell]!;
+      if (up < 0) {
+        narrowest[cell] = cell;
+        routes.start[cell] = cell;
+        continue;
+      }
+      routes.start[cell] = routes.start[up]!;
+      const beyond = narrowest[up]!;
+      const beyondMm = widths.at(beyond);
+      narrowest[cell] = !widths.knownWiderThan(cell, beyondMm) && widths.at(cell) <= beyondMm ? cell : beyond;
+    }
+    return narrowest[from]!;
+  };
 }
 
 /** Free cells in the patch of floor in front of a box's front face (its own +y). */
@@ -475,6 +516,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   const routes = widestRoutes(grid, widths, sources, limitMm);
 
   const findings: Finding[] = [];
+  const narrowestOnRoute = routeNarrowest(widths, routes);
   obstacles.forEach((box, index) => {
     // A piece wholly outside the room is an outside-room finding; a route to it means nothing.
     if (!pointInPolygon(box.centre, outline)) return;
@@ -501,19 +543,9 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     }
     if (roundToCmMm(bottleneckMm) >= requiredMm) return;
 
-    // Walk the route back to its way in; its narrowest cell is where the bottleneck is.
-    let narrowest = bestCell;
-    let narrowestMm = widths.at(bestCell);
-    let cell = bestCell;
-    for (;;) {
-      if (!widths.knownWiderThan(cell, narrowestMm) && widths.at(cell) < narrowestMm) {
-        narrowest = cell;
-        narrowestMm = widths.at(cell);
-      }
-      if (routes.parent[cell]! < 0) break;
-      cell = routes.parent[cell]!;
-    }
-    const opening = itemAt(ways, routes.wayIn[cell]!, 'way in');
+    // The route's narrowest cell is where the bottleneck is; the route ends at a way in.
+    const narrowest = narrowestOnRoute(bestCell);
+    const opening = itemAt(ways, routes.wayIn[routes.start[bestCell]!]!, 'way in');
     const finding = describeGap(piece, index, narrowest, bottleneckMm, requiredMm);
     // The exact distance may show the grid's narrow spot to be wide enough after all.
     if ((finding.measuredMm ?? 0) < requiredMm) findings.push({ ...finding, openings: [opening.id] });
