@@ -2,7 +2,7 @@
 // swings by hinge and direction, and every opening of a shell with per-wall thickness.
 import { describe, expect, it } from 'vitest';
 import type { Door } from '../schemas/room';
-import { doorSwing, placeOpening, placeShellOpenings } from './openings';
+import { DOOR_OPEN_ANGLE_DEG, doorSwing, placeOpening, placeShellOpenings } from './openings';
 import { layoutWalls } from './walls';
 
 const walls = layoutWalls(
@@ -68,6 +68,15 @@ describe('doorSwing', () => {
 
   it('sweeps the other way for a start hinge swinging out', () => {
     expect(doorSwing(walls[0], { ...door, swing: 'out' }).sweepDeg).toBe(-90);
+  });
+
+  it('opens every leaf by the one open angle, its tip a leaf length from the hinge', () => {
+    for (const variant of [door, { ...door, hinge: 'end' as const }, { ...door, swing: 'out' as const }]) {
+      const swing = doorSwing(walls[0], variant);
+      expect(Math.abs(swing.sweepDeg)).toBe(DOOR_OPEN_ANGLE_DEG);
+      const tip = [swing.openTipMm[0] - swing.hingeMm[0], swing.openTipMm[1] - swing.hingeMm[1]];
+      expect(Math.hypot(tip[0]!, tip[1]!)).toBeCloseTo(swing.leafLengthMm, 6);
+    }
   });
 });
 

@@ -2,7 +2,7 @@
 // inside and outside faces, sill heights, and the arc a door leaf sweeps.
 import type { Door, Opening, RoomShell } from '../schemas/room';
 import { layoutShellWalls, type WallLayout } from './walls';
-import { addScaled, angleDegOf, type Vec2 } from './vec';
+import { addScaled, angleDegOf, directionDeg, normaliseAngleDeg, type Vec2 } from './vec';
 
 /** An opening placed on its wall, in plan mm. "Start" is the edge nearer the wall's start corner. */
 export interface OpeningPlacement {
@@ -49,6 +49,13 @@ export function placeOpening(wall: WallLayout, opening: Opening): OpeningPlaceme
   };
 }
 
+/**
+ * How far a door leaf stands open from closed, degrees: drawn open square to the wall, a usual
+ * resting position for an interior door (common practice, no source). The 3D leaf, the walk's
+ * collisions and the plan's swing all read it through doorSwing.
+ */
+export const DOOR_OPEN_ANGLE_DEG = 90;
+
 /** A door leaf's sweep in plan mm; angles are degrees clockwise on the plan from +x. */
 export interface DoorSwing {
   openingId: string;
@@ -57,17 +64,17 @@ export interface DoorSwing {
   leafLengthMm: number;
   /** Direction of the closed leaf (across the opening). */
   closedAngleDeg: number;
-  /** Direction of the leaf opened to 90° (into the room or out of it). */
+  /** Direction of the leaf opened to DOOR_OPEN_ANGLE_DEG (into the room or out of it). */
   openAngleDeg: number;
-  /** openAngleDeg − closedAngleDeg: +90 sweeps clockwise on the plan, −90 anticlockwise. */
-  sweepDeg: 90 | -90;
+  /** openAngleDeg − closedAngleDeg: positive sweeps clockwise on the plan, negative anticlockwise. */
+  sweepDeg: number;
   /** The leaf's free end when closed and when open, plan mm. */
   closedTipMm: [number, number];
   openTipMm: [number, number];
   side: Door['swing'];
 }
 
-/** The arc a door leaf sweeps from closed to open at 90°, in plan mm. */
+/** The arc a door leaf sweeps from closed to open at DOOR_OPEN_ANGLE_DEG, in plan mm. */
 export function doorSwing(wall: WallLayout, door: Door): DoorSwing {
   const placement = placeOpening(wall, door);
   const outside = door.swing === 'out';
@@ -80,11 +87,12 @@ export function doorSwing(wall: WallLayout, door: Door): DoorSwing {
         ? placement.outsideEnd
         : placement.insideEnd;
   const closed: Vec2 = door.hinge === 'start' ? wall.direction : [-wall.direction[0], -wall.direction[1]];
-  const open: Vec2 = outside ? wall.outward : [-wall.outward[0], -wall.outward[1]];
+  const away: Vec2 = outside ? wall.outward : [-wall.outward[0], -wall.outward[1]];
+  // closed and away are perpendicular, so their cross product is ±1 and names the sweep direction.
+  const sweepDeg = closed[0] * away[1] - closed[1] * away[0] > 0 ? DOOR_OPEN_ANGLE_DEG : -DOOR_OPEN_ANGLE_DEG;
   const closedAngleDeg = angleDegOf(closed);
-  const openAngleDeg = angleDegOf(open);
-  // closed and open are perpendicular, so their cross product is ±1 and names the sweep direction.
-  const sweepDeg = closed[0] * open[1] - closed[1] * open[0] > 0 ? 90 : -90;
+  const openAngleDeg = normaliseAngleDeg(closedAngleDeg + sweepDeg);
+  const open = directionDeg(openAngleDeg);
   return {
     openingId: door.id,
     hingeMm,

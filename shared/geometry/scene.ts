@@ -399,7 +399,7 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
   };
 }
 
-// The leaf is drawn open at 90° so the doorway reads as passable and the swing side is obvious.
+// The leaf is drawn open at DOOR_OPEN_ANGLE_DEG (openings.ts) so the doorway reads as passable and the swing side is obvious.
 function buildDoorLeaf(wall: WallLayout, opening: Extract<Opening, { type: 'door' }>): DoorLeafSceneData {
   const swing = doorSwing(wall, opening);
   const open = directionDeg(swing.openAngleDeg);

@@ -82,7 +82,7 @@ export function walkObstacles(shell: RoomShell, pieces: readonly Piece[]): WalkO
   for (const opening of shell.openings) {
     const wall = walls[opening.wall];
     if (!wall || opening.type !== 'door') continue;
-    // The leaf stands open at 90°, as the 3D view draws it.
+    // The leaf stands open at DOOR_OPEN_ANGLE_DEG (openings.ts), as the 3D view and the plan draw it.
     const swing = doorSwing(wall, opening);
     const open = directionDeg(swing.openAngleDeg);
     const closed = directionDeg(swing.closedAngleDeg);
