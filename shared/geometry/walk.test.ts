@@ -183,6 +183,36 @@ describe('where a walk starts', () => {
     expect(start.headingDeg).toBeCloseTo((Math.atan2(1500 - y, 2000 - x) * 180) / Math.PI, 6);
   });
 
+  it('stands clear of the open door leaf, past its tip, so the leaf is beside or behind', () => {
+    // The leaf stands from the hinge (400, 0) 820 mm into the room; the start is a step beyond that.
+    const start = walkStart(shell, empty);
+    const leaf = walkObstacles(shell, []).boxes.find((b) => b.id === 'door:door')!;
+    const toLeaf = clearanceMm({ segments: [], boxes: [leaf], outline: shell.outline }, start.position);
+    expect(toLeaf).toBeGreaterThanOrEqual(R + 300);
+    expect(start.position[1]).toBeGreaterThan(820);
+    // Facing the middle of the floor (2000, 1500) from there looks away from the leaf, not at it.
+    const heading = (start.headingDeg * Math.PI) / 180;
+    const towardsLeaf = [400 - start.position[0], 410 - start.position[1]];
+    expect(Math.cos(heading) * towardsLeaf[0] + Math.sin(heading) * towardsLeaf[1]).toBeLessThan(0);
+  });
+
+  it('in a room too shallow to pass the leaf, still stands a free step inside the door', () => {
+    const shallow = roomShellSchema.parse({
+      outline: [
+        [0, 0],
+        [4000, 0],
+        [4000, 1200],
+        [0, 1200],
+      ],
+      openings: [{ id: 'door', type: 'door', wall: 0, offset: 400, width: 820, height: 2040, hinge: 'start', swing: 'in' }],
+    });
+    const obstacles = walkObstacles(shallow, []);
+    const start = walkStart(shallow, obstacles);
+    expect(start.position[0]).toBeCloseTo(810, 6);
+    expect(pointInPolygon(start.position, shallow.outline)).toBe(true);
+    expect(clearanceMm(obstacles, start.position)).toBeGreaterThanOrEqual(R);
+  });
+
   it('faces straight in where the middle of the floor is not in the room', () => {
     // A U: its middle falls in the notch between the arms. The door is at the bottom of the left arm.
     const u = roomShellSchema.parse({

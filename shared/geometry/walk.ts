@@ -28,8 +28,18 @@ const WALK_EPSILON_MM = 1e-6;
 const CONTACT_TOLERANCE_MM = 0.5;
 /** A first standing place this far (mm) into the room from its door, beyond the body radius. */
 const START_STEP_MM = 500;
+/**
+ * How far (mm) a first standing place keeps from an open door leaf, beyond the body radius: far
+ * enough that the leaf is beside or behind the walker, not filling the first view.
+ */
+const START_LEAF_CLEARANCE_MM = 300;
+/** How many places, half a step apart, are tried going into the room from a door. */
+const START_TRIES = 8;
 /** Where no door offers a free place, standing places are tried on a grid this fine (mm). */
 const START_GRID_MM = 100;
+
+/** Open door leaves are walk boxes whose id is this prefix and the door's id. */
+const LEAF_ID_PREFIX = 'door:';
 
 /** A thin wall face a person cannot cross, plan mm. */
 export interface WalkSegment {
@@ -88,7 +98,7 @@ export function walkObstacles(shell: RoomShell, pieces: readonly Piece[]): WalkO
     const closed = directionDeg(swing.closedAngleDeg);
     const centre = addScaled(addScaled(swing.hingeMm, open, opening.width / 2), closed, DOOR_LEAF_THICKNESS_MM / 2);
     boxes.push({
-      id: `door:${opening.id}`,
+      id: `${LEAF_ID_PREFIX}${opening.id}`,
       centre,
       axisX: open,
       halfXMm: opening.width / 2,
@@ -259,25 +269,36 @@ export function floorCentreMm(outline: readonly Vec2[]): [number, number] {
 
 const headingDegOf = (v: Vec2) => (Math.atan2(v[1], v[0]) * 180) / Math.PI;
 
+/** Distance (mm) from plan point `p` to the nearest open door leaf (Infinity without one). */
+function leafDistanceMm(obstacles: WalkObstacles, p: Vec2): number {
+  const leaves = obstacles.boxes.filter((b) => b.id.startsWith(LEAF_ID_PREFIX));
+  return clearanceMm({ segments: [], boxes: leaves, outline: obstacles.outline }, p);
+}
+
 /**
- * Where a walk begins (plan mm): a step into the room from its first door (or passage), facing
- * the middle of the floor (straight in when the middle is not in the room, as in a deep L);
- * without a free place there, the freest place on the floor, facing the middle.
+ * Where a walk begins (plan mm): a step into the room from its first door (or passage), clear of
+ * the open leaf (past its tip, so it stands beside or behind), facing the middle of the floor
+ * (straight in when the middle is not in the room, as in a deep L); where the room is too shallow
+ * for that, the first free place in from the door; without one, the freest place on the floor,
+ * facing the middle.
  */
 export function walkStart(shell: RoomShell, obstacles: WalkObstacles, radiusMm = BODY_RADIUS_MM): WalkStart {
   const centre = floorCentreMm(shell.outline);
   const centreInside = pointInPolygon(centre, shell.outline);
   const walls = layoutShellWalls(shell);
   const entries = [...shell.openings.filter((o) => o.type === 'door'), ...shell.openings.filter((o) => o.type === 'passage')];
-  for (const entry of entries) {
-    const wall = walls[entry.wall];
-    if (!wall) continue;
-    const placement = placeOpening(wall, entry);
-    const middle = addScaled(placement.insideStart, wall.direction, (placement.toMm - placement.fromMm) / 2);
-    const inward: Vec2 = [-wall.outward[0], -wall.outward[1]];
-    for (let extra = 0; extra <= 4; extra++) {
-      const p = addScaled(middle, inward, radiusMm + START_STEP_MM * (1 + extra / 2));
-      if (pointInPolygon(p, shell.outline) && clearanceMm(obstacles, p) >= radiusMm) {
+  const free = (p: Vec2) => pointInPolygon(p, shell.outline) && clearanceMm(obstacles, p) >= radiusMm;
+  const clearOfLeaf = (p: Vec2) => leafDistanceMm(obstacles, p) >= radiusMm + START_LEAF_CLEARANCE_MM;
+  for (const wanted of [(p: Vec2) => free(p) && clearOfLeaf(p), free]) {
+    for (const entry of entries) {
+      const wall = walls[entry.wall];
+      if (!wall) continue;
+      const placement = placeOpening(wall, entry);
+      const middle = addScaled(placement.insideStart, wall.direction, (placement.toMm - placement.fromMm) / 2);
+      const inward: Vec2 = [-wall.outward[0], -wall.outward[1]];
+      for (let extra = 0; extra < START_TRIES; extra++) {
+        const p = addScaled(middle, inward, radiusMm + START_STEP_MM * (1 + extra / 2));
+        if (!wanted(p)) continue;
         const look = sub(centre, p);
         const facesIn = dot(look, inward) > 0 && Math.hypot(look[0], look[1]) > START_STEP_MM;
         return { position: p, headingDeg: headingDegOf(centreInside && facesIn ? look : inward) };
