@@ -442,9 +442,10 @@ describe('the walk-through', () => {
     const calmView = calmPage.locator('[data-testid=room-view]');
     await expect.poll(() => num(calmView, 'frames'), { timeout: 30_000 }).toBeGreaterThan(0);
     const calmStart = await settledCamera(calmPage, calmView);
-    const f0 = await num(calmView, 'frames');
     await calmPage.getByRole('button', { name: 'Turn the room left' }).click();
-    await expect.poll(() => num(calmView, 'frames')).toBeGreaterThan(f0);
+    // The first frame drawn from a moved camera (a frame redrawn for anything else, such as a photo
+    // finish arriving, keeps the old camera and does not count) must already be the end.
+    await expect.poll(async () => (await cameraOf(calmView)).join(), { timeout: 15_000 }).not.toBe(calmStart.join());
     const firstFrame = await cameraOf(calmView);
     expect(await settledCamera(calmPage, calmView)).toEqual(firstFrame);
     expect(firstFrame).not.toEqual(calmStart);
@@ -515,6 +516,11 @@ describe('the walk-through', () => {
     await page.mouse.up();
     const backed = await settledCamera(page, view);
     expect(backed[2]).toBeLessThan(walkedTo[2] - 0.2);
+    // A plain click (pressed and let go at once) takes one step of 0.5 m, sideways here.
+    await page.getByRole('button', { name: 'Step left' }).click();
+    const stepped = await settledCamera(page, view);
+    expect(Math.hypot(stepped[0] - backed[0], stepped[2] - backed[2])).toBeCloseTo(0.5, 1);
+    expect(stepped[2]).toBeCloseTo(backed[2], 1);
 
     const fps = await measureFps(page, view);
     figures.walkFps = fps;

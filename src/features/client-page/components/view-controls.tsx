@@ -106,7 +106,14 @@ export function OverviewButtons({ commands }: { commands: React.RefObject<ViewCo
   );
 }
 
-// Held with a pointer it keeps moving, like a held key; pressed from the keyboard it takes one step.
+/**
+ * A press shorter than this is a click: one step or one turn notch. Held longer, the button keeps
+ * moving until it is let go (about the length of a deliberate click; common practice, no source).
+ */
+const HOLD_AFTER_MS = 250;
+
+// Clicked it takes one step (or turns one notch); held with a pointer it keeps moving, like a held
+// key; pressed from the keyboard it takes one step.
 function HoldButton({
   label,
   icon,
@@ -118,18 +125,24 @@ function HoldButton({
   move: WalkMove;
   commands: React.RefObject<ViewCommands | null>;
 }) {
-  const holding = useRef(false);
-  const release = () => {
-    if (!holding.current) return;
-    holding.current = false;
-    commands.current?.hold(move, false);
+  // 'pressed': down, not yet a hold; 'holding': moving until let go.
+  const press = useRef<{ phase: 'pressed' | 'holding'; timer: ReturnType<typeof setTimeout> } | null>(null);
+  const release = (click: boolean) => {
+    const p = press.current;
+    if (!p) return;
+    press.current = null;
+    clearTimeout(p.timer);
+    if (p.phase === 'holding') commands.current?.hold(move, false);
+    else if (click) commands.current?.step(move);
   };
   // Let go if the button goes away mid-press (the mode changed).
   useEffect(
     () => () => {
-      if (!holding.current) return;
-      holding.current = false;
-      commands.current?.hold(move, false);
+      const p = press.current;
+      if (!p) return;
+      press.current = null;
+      clearTimeout(p.timer);
+      if (p.phase === 'holding') commands.current?.hold(move, false);
     },
     [commands, move],
   );
@@ -140,15 +153,19 @@ function HoldButton({
       aria-label={label}
       title={label}
       onPointerDown={(e) => {
-        if (e.button !== 0) return;
-        holding.current = true;
-        commands.current?.hold(move, true);
+        if (e.button !== 0 || press.current) return;
+        const timer = setTimeout(() => {
+          if (!press.current) return;
+          press.current.phase = 'holding';
+          commands.current?.hold(move, true);
+        }, HOLD_AFTER_MS);
+        press.current = { phase: 'pressed', timer };
       }}
-      onPointerUp={release}
-      onPointerLeave={release}
-      onPointerCancel={release}
+      onPointerUp={() => release(true)}
+      onPointerLeave={() => release(false)}
+      onPointerCancel={() => release(false)}
       onClick={(e) => {
-        // detail 0: pressed with Enter or Space, not held with a pointer.
+        // detail 0: pressed with Enter or Space, not with a pointer.
         if (e.detail === 0) commands.current?.step(move);
       }}
       onContextMenu={(e) => e.preventDefault()}
