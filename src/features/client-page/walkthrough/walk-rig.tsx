@@ -5,6 +5,7 @@ import { useFrame, useThree } from '@react-three/fiber';
 import { useEffect, useEffectEvent, useLayoutEffect, useRef } from 'react';
 import * as THREE from 'three';
 import { moveBody, walkLine, walkStart, type WalkObstacles } from '../../../../shared/geometry/walk';
+import { findWalkPath } from '../../../../shared/geometry/walk-path';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { MAX_PITCH_DEG, easeInOut, forwardOf, walkPose, walkStateOf, yawOfPlanHeading, type WalkState } from './view-moves';
 import { DEG, MAX_FRAME_S, MOVE_MS, WALK_FOV_DEG, now, type RigHandle, type RigProps, type WalkMove } from './rig-shared';
@@ -62,6 +63,8 @@ export function WalkRig({
   const invalidate = useThree((state) => state.invalidate);
   const state = useRef<WalkState | null>(null);
   const glide = useRef<Glide | null>(null);
+  // The legs still to walk of a way found to a clicked point (see walkTo), walked one after another.
+  const route = useRef<WalkState[]>([]);
   const live = useRef({ obstacles, eyeM, onView, reducedMotion, shell, onMoveStart });
   live.current = { obstacles, eyeM, onView, reducedMotion, shell, onMoveStart };
 
@@ -85,6 +88,12 @@ export function WalkRig({
       yaw: yawOfPlanHeading(start.headingDeg),
       pitch: 0,
     };
+  };
+  const nextLeg = () => {
+    const s = state.current;
+    const to = route.current.shift();
+    if (!s || !to) return;
+    glideTo(to, Math.hypot(to.x - s.x, to.z - s.z), GLIDE_SPEED_M_S);
   };
   const glideTo = (to: WalkState, distanceM: number, speed: number) => {
     const from = state.current;
@@ -187,6 +196,7 @@ export function WalkRig({
 
   useLayoutEffect(() => {
     const stepOf = (move: WalkMove) => {
+      route.current = [];
       const s = glide.current?.to ?? state.current;
       if (!s) return;
       switch (move) {
@@ -207,6 +217,7 @@ export function WalkRig({
       zoom: () => undefined,
       topView: () => undefined,
       reset: () => {
+        route.current = [];
         const s = state.current;
         const to = startState();
         if (s) glideTo(to, Math.hypot(to.x - s.x, to.z - s.z), GLIDE_SPEED_M_S);
@@ -215,12 +226,32 @@ export function WalkRig({
       walkTo: (x, z) => {
         const s = state.current;
         if (!s) return;
-        const [ex, ez] = walkLine(live.current.obstacles, [s.x * MM_PER_M, s.z * MM_PER_M], [x * MM_PER_M, z * MM_PER_M]);
-        const to = { ...s, x: ex / MM_PER_M, z: ez / MM_PER_M };
-        const distance = Math.hypot(to.x - s.x, to.z - s.z);
-        // Face the way to the point: a walk goes where one looks.
-        const towards = Math.hypot(x - s.x, z - s.z) > 0 ? Math.atan2(-(x - s.x), -(z - s.z)) : s.yaw;
-        glideTo({ ...to, yaw: towards }, distance, GLIDE_SPEED_M_S);
+        route.current = [];
+        const from: [number, number] = [s.x * MM_PER_M, s.z * MM_PER_M];
+        const way = findWalkPath(live.current.obstacles, from, [x * MM_PER_M, z * MM_PER_M]);
+        // No way there (no room to stand, or walled off): walk straight towards it until stopped.
+        const points = way ?? [walkLine(live.current.obstacles, from, [x * MM_PER_M, z * MM_PER_M])];
+        // Each leg faces the way it goes: a walk goes where one looks.
+        let prev = s;
+        const legs = points.map(([px, pz]) => {
+          const leg = { ...prev, x: px / MM_PER_M, z: pz / MM_PER_M };
+          const [dx, dz] = [leg.x - prev.x, leg.z - prev.z];
+          leg.yaw = Math.hypot(dx, dz) > 0 ? Math.atan2(-dx, -dz) : prev.yaw;
+          prev = leg;
+          return leg;
+        });
+        if (!way) {
+          // Face the clicked point itself, as before, even when stopped short of it.
+          const towards = Math.hypot(x - s.x, z - s.z) > 0 ? Math.atan2(-(x - s.x), -(z - s.z)) : s.yaw;
+          legs[0] = { ...legs[0], yaw: towards };
+        }
+        if (live.current.reducedMotion) {
+          const last = legs[legs.length - 1];
+          glideTo(last, 0, GLIDE_SPEED_M_S);
+          return;
+        }
+        route.current = legs;
+        nextLeg();
       },
       wake: () => invalidate(),
       busy: () => glide.current !== null || held.current.any,
@@ -248,9 +279,11 @@ export function WalkRig({
       };
       if (k >= 1) glide.current = null;
     }
+    const legDone = g !== null && glide.current === null;
     const keys = held.current;
     if (keys.any) {
       glide.current = null;
+      route.current = [];
       let n = next ?? s;
       const turn = (keys.has('turn-left') ? 1 : 0) - (keys.has('turn-right') ? 1 : 0);
       if (turn !== 0) n = { ...n, yaw: n.yaw + turn * TURN_SPEED_DEG_S * DEG * dt };
@@ -264,6 +297,7 @@ export function WalkRig({
       state.current = next;
       apply(true);
     }
+    if (legDone && route.current.length > 0) nextLeg();
   });
 
   return null;
