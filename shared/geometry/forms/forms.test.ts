@@ -19,6 +19,7 @@ import {
 import { HANGING_KINDS, formParts, type FormBox, type Part } from './index';
 import { formMeshes, formTriangles } from './mesh';
 import { seatCushionCount } from './seating';
+import { seededRandom, SETTING_VALUES } from './form-test-cases';
 
 const TOL = 1e-6;
 const catalogueBox = (kind: PieceKind) => {
@@ -27,14 +28,6 @@ const catalogueBox = (kind: PieceKind) => {
 };
 
 // A small seeded generator, so a failure names sizes that can be tried again.
-function random(seed: number) {
-  let s = seed >>> 0;
-  return () => {
-    s = (s * 1664525 + 1013904223) >>> 0;
-    return s / 2 ** 32;
-  };
-}
-
 /** Every catalogue size of the kind, and twelve random boxes from 0.4× to 2.5× of its first entry per side. */
 function boxesOf(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
   const own = CATALOGUE.filter((c) => c.kind === kind).map((e) => ({
@@ -42,7 +35,7 @@ function boxesOf(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
     settings: e.settings ?? {},
   }));
   const base = own[0].box;
-  const next = random(PIECE_KINDS.indexOf(kind) + 1);
+  const next = seededRandom(PIECE_KINDS.indexOf(kind) + 1);
   const scaled = Array.from({ length: 12 }, () => ({
     box: {
       width: base.width * (0.4 + next() * 2.1),
@@ -56,18 +49,7 @@ function boxesOf(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
 
 /** Every setting value a kind takes, one at a time, on the kind's catalogue box. */
 function settingVariants(kind: PieceKind): PieceSettings[] {
-  const values: Record<string, unknown[]> = {
-    arms: ['both', 'none'],
-    base: ['legs', 'plinth'],
-    hand: ['left', 'right'],
-    top: ['rectangular', 'round'],
-    fronts: ['doors', 'drawers'],
-    count: [1, 3, 5],
-    chairs: [2, 4, 6, 8],
-    headboardHeight: [600, 1200],
-    footboard: [true, false],
-  };
-  return KIND_SETTINGS[kind].flatMap((key) => values[key].map((v) => ({ [key]: v }) as PieceSettings));
+  return KIND_SETTINGS[kind].flatMap((key) => SETTING_VALUES[key].map((v) => ({ [key]: v }) as PieceSettings));
 }
 
 const footprint = (p: Part) => {

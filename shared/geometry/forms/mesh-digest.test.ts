@@ -5,6 +5,7 @@ import { KIND_SETTINGS, PIECE_KINDS, type PieceKind, type PieceSettings } from '
 import type { MeshData } from '../scene';
 import { formParts, type FormBox } from './index';
 import { formMeshes, type FormMeshes } from './mesh';
+import { seededRandom, SETTING_VALUES } from './form-test-cases';
 
 // FNV-1a over bytes and strings: any changed bit of any number changes the digest.
 class Digest {
@@ -37,26 +38,6 @@ function addForm(d: Digest, form: FormMeshes): void {
 }
 
 // The same seeded generator as the forms tests, so the sizes are fixed.
-function random(seed: number) {
-  let s = seed >>> 0;
-  return () => {
-    s = (s * 1664525 + 1013904223) >>> 0;
-    return s / 2 ** 32;
-  };
-}
-
-const SETTING_VALUES: Record<string, unknown[]> = {
-  arms: ['both', 'none'],
-  base: ['legs', 'plinth'],
-  hand: ['left', 'right'],
-  top: ['rectangular', 'round'],
-  fronts: ['doors', 'drawers'],
-  count: [1, 3, 5],
-  chairs: [2, 4, 6, 8],
-  headboardHeight: [600, 1200],
-  footboard: [true, false],
-};
-
 /** Catalogue sizes, every setting value on the first, and eight random boxes, for one kind. */
 function cases(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
   const own = CATALOGUE.filter((c) => c.kind === kind).map((e) => ({
@@ -67,7 +48,7 @@ function cases(kind: PieceKind): { box: FormBox; settings: PieceSettings }[] {
   const variants = KIND_SETTINGS[kind].flatMap((key) =>
     SETTING_VALUES[key]!.map((v) => ({ box: first.box, settings: { ...first.settings, [key]: v } as PieceSettings })),
   );
-  const next = random(1000 + PIECE_KINDS.indexOf(kind));
+  const next = seededRandom(1000 + PIECE_KINDS.indexOf(kind));
   const scaled = Array.from({ length: 8 }, () => ({
     box: {
       width: first.box.width * (0.3 + next() * 2.5),
