@@ -128,9 +128,36 @@ export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly Pie
   return grid;
 }
 
-/** Squared distance (in cells²) from every cell's centre to the nearest blocked cell's centre, and which cell that is. */
+/**
+ * Per-cell working arrays are kept from one check to the next for grids up to this many cells
+ * (about 8 MB over all of them), so a drag that checks the same room again and again does not churn
+ * memory; larger grids get arrays of their own that go when the check is done. A kept array is
+ * handed out again by the next call under its name, so a check uses what it asks for before the
+ * next check starts (checks run one at a time on a thread).
+ */
+const KEPT_SCRATCH_CELLS = 250_000;
+const kept = new Map<string, Float64Array | Int32Array>();
+
+/** A working array of `cells` entries under `name`, with whatever it held before: callers fill it. */
+export function scratch<T extends Float64Array | Int32Array>(name: string, make: (cells: number) => T, cells: number): T {
+  const held = kept.get(name) as T | undefined;
+  if (held && held.length >= cells) return held.subarray(0, cells) as T;
+  const made = make(cells);
+  if (cells <= KEPT_SCRATCH_CELLS) kept.set(name, made);
+  return made;
+}
+export const float64 = (cells: number): Float64Array => new Float64Array(cells);
+export const int32 = (cells: number): Int32Array => new Int32Array(cells);
+
+/**
+ * Squared distance (in cells²) from every cell's centre to the nearest blocked cell's centre, its
+ * square root (cells), and which blocked cell that is. The arrays are working arrays (`scratch`):
+ * the next distance field reuses them.
+ */
 export interface DistanceField {
   squaredCells: Float64Array;
+  /** √squaredCells, worked out once here for every later use. */
+  cells: Float64Array;
   nearest: Int32Array;
 }
 
@@ -142,10 +169,11 @@ export interface DistanceField {
 export function distanceField(grid: FloorGrid): DistanceField {
   const { nx, ny, label } = grid;
   const cells = nx * ny;
-  // Columns: distance to the nearest blocked cell straight up or down, and its row. Every column is
-  // swept at once, a row at a time, so the arrays are read in the order they lie in memory.
-  const columnSquared = new Float64Array(cells);
-  const columnRow = new Int32Array(cells);
+  // Columns: distance to the nearest blocked cell straight up or down, and its row (−1: the column
+  // has none, never so on a padded grid). Every column is swept at once, a row at a time, so the
+  // arrays are read in the order they lie in memory.
+  const columnSquared = scratch('column-squared', int32, cells);
+  const columnRow = scratch('column-row', int32, cells);
   const lastBlocked = new Int32Array(nx).fill(-1);
   for (let j = 0; j < ny; j++) {
     const row = j * nx;
@@ -164,24 +192,25 @@ export function distanceField(grid: FloorGrid): DistanceField {
       const above = columnRow[cell]!;
       const row = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
       columnRow[cell] = row;
-      columnSquared[cell] = row < 0 ? Infinity : (row - j) * (row - j);
+      columnSquared[cell] = row < 0 ? 0 : (row - j) * (row - j);
     }
   }
   // Rows: the lower envelope of parabolas (x − q)² + column distance² over the columns q.
-  const squaredCells = new Float64Array(cells);
-  const nearest = new Int32Array(cells);
+  const squaredCells = scratch('squared-cells', float64, cells);
+  const root = scratch('distance-cells', float64, cells);
+  const nearest = scratch('nearest', int32, cells);
   const sites = new Int32Array(nx);
   const bounds = new Float64Array(nx + 1);
   for (let j = 0; j < ny; j++) {
     const row = j * nx;
     let k = -1;
     for (let q = 0; q < nx; q++) {
-      const fq = columnSquared[row + q]!;
-      if (fq === Infinity) continue;
+      if (columnRow[row + q]! < 0) continue;
+      const fq = columnSquared[row + q]! + q * q;
       let s = -Infinity;
       while (k >= 0) {
         const p = sites[k]!;
-        s = (fq + q * q - (columnSquared[row + p]! + p * p)) / (2 * (q - p));
+        s = (fq - (columnSquared[row + p]! + p * p)) / (2 * (q - p));
         if (s > bounds[k]!) break;
         k--;
       }
@@ -190,13 +219,22 @@ export function distanceField(grid: FloorGrid): DistanceField {
       bounds[k] = k === 0 ? -Infinity : s;
       bounds[k + 1] = Infinity;
     }
+    if (k < 0) {
+      // No blocked cell in any column: nothing is near (a grid without its padding).
+      squaredCells.fill(Infinity, row, row + nx);
+      root.fill(Infinity, row, row + nx);
+      nearest.fill(-1, row, row + nx);
+      continue;
+    }
     let at = 0;
     for (let x = 0; x < nx; x++) {
       while (bounds[at + 1]! < x) at++;
       const q = sites[at]!;
-      squaredCells[row + x] = (x - q) * (x - q) + columnSquared[row + q]!;
+      const squared = (x - q) * (x - q) + columnSquared[row + q]!;
+      squaredCells[row + x] = squared;
+      root[row + x] = Math.sqrt(squared);
       nearest[row + x] = columnRow[row + q]! * nx + q;
     }
   }
-  return { squaredCells, nearest };
+  return { squaredCells, cells: root, nearest };
 }

@@ -1,7 +1,7 @@
 // The walkway check's computing core on the floor grid: the clear width at each free cell, the
 // widest routes from the ways in, and the narrowest cell on a route. Plan mm, x right, y down; cells
 // as in floor-grid.ts. Which pieces need a route and what a finding says live in walkway.ts.
-import { cellCentreMm, distanceField, FREE, WALL, type FloorGrid } from './floor-grid';
+import { cellCentreMm, distanceField, float64, FREE, int32, scratch, WALL, type FloorGrid } from './floor-grid';
 
 /** The search's own mark for blocked cells: wider than any route, so never entered. */
 const BLOCKED_KEY = 0x7fffffff;
@@ -20,25 +20,6 @@ export interface Gap {
   /** Plan points on each side (mm). */
   ends: [[number, number], [number, number]];
 }
-
-/**
- * Per-cell working arrays are kept from one check to the next for grids up to this many cells
- * (about 8 MB), so a drag that checks the same room again and again does not churn memory; larger
- * grids get arrays of their own that go when the check is done.
- */
-const KEPT_SCRATCH_CELLS = 250_000;
-const kept = new Map<string, Float64Array | Int32Array>();
-
-/** A working array of `cells` entries under `name`, with whatever it held before: callers fill it. */
-function scratch<T extends Float64Array | Int32Array>(name: string, make: (cells: number) => T, cells: number): T {
-  const held = kept.get(name) as T | undefined;
-  if (held && held.length >= cells) return held.subarray(0, cells) as T;
-  const made = make(cells);
-  if (cells <= KEPT_SCRATCH_CELLS) kept.set(name, made);
-  return made;
-}
-const float64 = (cells: number) => new Float64Array(cells);
-const int32 = (cells: number) => new Int32Array(cells);
 
 /** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
 const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [
@@ -95,8 +76,13 @@ export class Widths {
   /** Whole-mm width capped at the key it was first asked for, plus one; 0 until asked. */
   private readonly cappedMm: Int32Array;
   private readonly nearest: Int32Array;
-  private readonly squaredCells: Float64Array;
+  /** Distance (cells) from each cell's centre to the nearest blocked centre. */
+  private readonly distanceCells: Float64Array;
   private readonly shortestRunMm: Float64Array;
+  private readonly label: Int32Array;
+  private readonly nx: number;
+  private readonly ny: number;
+  private readonly cellMm: number;
   /** Set by `ray`: the blocked cell it met. */
   private rayHit = -1;
 
@@ -107,8 +93,12 @@ export class Widths {
   ) {
     const field = distanceField(grid);
     this.nearest = field.nearest;
-    this.squaredCells = field.squaredCells;
+    this.distanceCells = field.cells;
     this.shortestRunMm = shortestRunsMm(grid);
+    this.label = grid.label;
+    this.nx = grid.nx;
+    this.ny = grid.ny;
+    this.cellMm = grid.cellMm;
     const cells = grid.nx * grid.ny;
     this.widthMm = scratch('width', float64, cells).fill(NaN);
     this.cappedMm = scratch('capped', int32, cells).fill(0);
@@ -117,22 +107,14 @@ export class Widths {
   /**
    * The width at a free cell in whole mm, capped at keyMm: as `at` gives it, but measured only as
    * far as the cap. The search asks with keys that only fall, so the first answer is kept and
-   * serves every later, lower cap.
+   * serves every later, lower cap; when the measure under the cap gave the exact width, that is
+   * kept for `at` too.
    */
   cappedAt(cell: number, keyMm: number): number {
     const known = this.cappedMm[cell]!;
     if (known > 0) return known - 1 < keyMm ? known - 1 : keyMm;
-    const cellMm = this.grid.cellMm;
-    const nearSideMm = (Math.sqrt(this.squaredCells[cell]!) - 0.5) * cellMm;
-    let widthMm: number;
-    if (2 * nearSideMm >= this.enoughMm) widthMm = 2 * nearSideMm;
-    else {
-      const runMm = this.shortestRunMm[cell]!;
-      // A chord across found past the cap, like one past the shortest run, cannot change the answer.
-      widthMm =
-        runMm <= nearSideMm + cellMm / 2 ? runMm : Math.min(this.across(cell, Math.min(this.enoughMm, runMm, keyMm)), runMm);
-    }
-    const capped = Math.floor(Math.min(widthMm, keyMm));
+    const widthMm = this.measure(cell, keyMm);
+    const capped = Math.floor(widthMm < keyMm ? widthMm : keyMm);
     this.cappedMm[cell] = capped + 1;
     return capped;
   }
@@ -146,31 +128,42 @@ export class Widths {
    */
   knownWiderThan(cell: number, widthMm: number): boolean {
     if (this.cappedMm[cell]! - 1 > Math.floor(widthMm)) return true;
-    return (2 * Math.sqrt(this.squaredCells[cell]!) - CHORD_SHORTFALL_CELLS) * this.grid.cellMm > widthMm;
+    return (2 * this.distanceCells[cell]! - CHORD_SHORTFALL_CELLS) * this.cellMm > widthMm;
   }
 
   /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
   lowerBoundMm(cell: number): number {
-    return 2 * (Math.sqrt(this.squaredCells[cell]!) - 0.5) * this.grid.cellMm;
+    return 2 * (this.distanceCells[cell]! - 0.5) * this.cellMm;
   }
 
   /** Clear width (mm) at a free cell; Infinity where nothing movable bounds it within reach. */
   at(cell: number): number {
     const known = this.widthMm[cell]!;
-    if (!Number.isNaN(known)) return known;
-    const value = this.value(cell);
-    this.widthMm[cell] = value;
-    return value;
+    if (known === known) return known;
+    return this.measure(cell, Infinity);
+  }
+
+  /**
+   * Whether the clear width at a free cell is at most limitMm: as `at(cell) <= limitMm`, but the
+   * chord across is looked for only as far as the limit (a chord found is the same however far one
+   * looks, and one past the limit is too long to matter).
+   */
+  atMost(cell: number, limitMm: number): boolean {
+    const known = this.widthMm[cell]!;
+    if (known === known) return known <= limitMm;
+    return this.measure(cell, limitMm) <= limitMm;
   }
 
   /**
    * Distance (mm) from cell (i, j)'s centre to the edge of the first blocked cell along (ux, uy),
    * looking no further than reachMm; the cell met is left in `rayHit`. Infinity when none is met.
+   * The samples are the same however far it looks: a shorter look meets what a longer one would,
+   * if it meets anything.
    */
   private ray(i: number, j: number, ux: number, uy: number, reachMm: number): number {
-    const { nx, ny, label, cellMm } = this.grid;
+    const { nx, ny, label, cellMm } = this;
     const reachCells = reachMm / cellMm + 1;
-    const squared = this.squaredCells;
+    const distance = this.distanceCells;
     let t = RAY_STEP_CELLS;
     while (t <= reachCells) {
       // Cell coordinates: the blocked ring keeps them at zero or more, where |0 rounds like floor.
@@ -184,20 +177,21 @@ export class Widths {
       }
       // Skip ahead through open floor: no blocked centre lies nearer than this cell's distance, and
       // a sample strays at most √½ cell from the centre it rounds to, on either end of the jump.
-      t += Math.max(RAY_STEP_CELLS, Math.floor(Math.sqrt(squared[other]!) - RAY_SKIP_MARGIN_CELLS));
+      const skip = Math.floor(distance[other]! - RAY_SKIP_MARGIN_CELLS);
+      t += skip > RAY_STEP_CELLS ? skip : RAY_STEP_CELLS;
     }
     return Infinity;
   }
 
   private bothWalls(a: number, b: number): boolean {
-    return this.grid.label[a] === WALL && this.grid.label[b] === WALL;
+    return this.label[a] === WALL && this.label[b] === WALL;
   }
 
   /** The chord across from the nearest obstacle: its length (mm) and far end, or Infinity. */
   private across(cell: number, reachMm: number): number {
-    const { nx, cellMm } = this.grid;
+    const { nx, cellMm } = this;
     const nearestCell = this.nearest[cell]!;
-    const d1 = Math.sqrt(this.squaredCells[cell]!);
+    const d1 = this.distanceCells[cell]!;
     const nearSideMm = (d1 - 0.5) * cellMm;
     const i = cell % nx;
     const j = (cell - i) / nx;
@@ -212,22 +206,36 @@ export class Widths {
   }
 
   /**
-   * The width alone. The straight runs are known, so the chord across need only be looked for as
-   * far as it could still be the shorter: a chord found past that is longer than a run anyway.
+   * The width, looked for no further than capMm: exact (and kept) whenever it is at most the cap or
+   * the look was not cut short by it; otherwise some figure above the cap. The straight runs are
+   * known, so the chord across need only be looked for as far as it could still be the shorter: a
+   * chord found past that is longer than a run anyway.
    */
-  private value(cell: number): number {
-    const nearSideMm = (Math.sqrt(this.squaredCells[cell]!) - 0.5) * this.grid.cellMm;
-    if (2 * nearSideMm >= this.enoughMm) return 2 * nearSideMm;
-    const runMm = this.shortestRunMm[cell]!;
-    // The far side lies at least half a cell off, so a run that short already wins.
-    if (runMm <= nearSideMm + this.grid.cellMm / 2) return runMm;
-    return Math.min(this.across(cell, Math.min(this.enoughMm, runMm)), runMm);
+  private measure(cell: number, capMm: number): number {
+    const cellMm = this.cellMm;
+    const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
+    let widthMm: number;
+    if (2 * nearSideMm >= this.enoughMm) widthMm = 2 * nearSideMm;
+    else {
+      const runMm = this.shortestRunMm[cell]!;
+      // The far side lies at least half a cell off, so a run that short already wins.
+      if (runMm <= nearSideMm + cellMm / 2) widthMm = runMm;
+      else {
+        const reachMm = Math.min(this.enoughMm, runMm);
+        const acrossMm = this.across(cell, reachMm < capMm ? reachMm : capMm);
+        // Nothing met within the cap when the cap cut the look short: only "wider than the cap" is known.
+        if (acrossMm === Infinity && capMm < reachMm) return Infinity;
+        widthMm = acrossMm < runMm ? acrossMm : runMm;
+      }
+    }
+    this.widthMm[cell] = widthMm;
+    return widthMm;
   }
 
   /** The obstacles at the two ends of a measured cell's chord and where they are (plan mm), or null if it is wide. */
   gap(cell: number): Gap | null {
-    const { nx, cellMm, label } = this.grid;
-    const nearSideMm = (Math.sqrt(this.squaredCells[cell]!) - 0.5) * cellMm;
+    const { nx, cellMm, label } = this;
+    const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
     if (!Number.isFinite(this.at(cell)) || 2 * nearSideMm >= this.enoughMm) return null;
     // The chord that gave the width: the one across first, then the runs in their order.
     let widthMm = this.across(cell, this.enoughMm);
@@ -399,7 +407,7 @@ export function routeNarrowest(widths: Widths, routes: Routes): (cell: number) =
       routes.start[cell] = routes.start[up]!;
       const beyond = narrowest[up]!;
       const beyondMm = widths.at(beyond);
-      narrowest[cell] = !widths.knownWiderThan(cell, beyondMm) && widths.at(cell) <= beyondMm ? cell : beyond;
+      narrowest[cell] = !widths.knownWiderThan(cell, beyondMm) && widths.atMost(cell, beyondMm) ? cell : beyond;
     }
     return narrowest[from]!;
   };
