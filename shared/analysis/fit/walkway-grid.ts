@@ -206,6 +206,18 @@ export class Widths {
   }
 
   /**
+   * Whether the nearest blocked cell is in the cell's own row or column. Then the chord across runs
+   * along that row or column from the nearest blocked cell, sampling its cell centres one by one:
+   * it is the straight run there, to the same blocked cell and the same length (both are whole and
+   * half cells, exact in floating point), so it can never be shorter than the shortest run.
+   */
+  private inLineWithNearest(cell: number): boolean {
+    const nearestCell = this.nearest[cell]!;
+    const nx = this.nx;
+    return nearestCell % nx === cell % nx || Math.floor(nearestCell / nx) === Math.floor(cell / nx);
+  }
+
+  /**
    * The width, looked for no further than capMm: exact (and kept) whenever it is at most the cap or
    * the look was not cut short by it; otherwise some figure above the cap. The straight runs are
    * known, so the chord across need only be looked for as far as it could still be the shorter: a
@@ -219,7 +231,7 @@ export class Widths {
     else {
       const runMm = this.shortestRunMm[cell]!;
       // The far side lies at least half a cell off, so a run that short already wins.
-      if (runMm <= nearSideMm + cellMm / 2) widthMm = runMm;
+      if (runMm <= nearSideMm + cellMm / 2 || this.inLineWithNearest(cell)) widthMm = runMm;
       else {
         const reachMm = Math.min(this.enoughMm, runMm);
         const acrossMm = this.across(cell, reachMm < capMm ? reachMm : capMm);
@@ -275,14 +287,17 @@ export class Widths {
  */
 class WidestFirst {
   private readonly heads: Int32Array;
-  private cells = new Int32Array(4096);
-  private next = new Int32Array(4096);
+  private cells: Int32Array;
+  private next: Int32Array;
   private count = 0;
   private top: number;
 
-  constructor(private readonly limitMm: number) {
+  /** A queue for keys up to limitMm, with room to begin with for `room` entries (about one a free cell is usual). */
+  constructor(limitMm: number, room: number) {
     this.heads = new Int32Array(limitMm + 1).fill(-1);
     this.top = limitMm;
+    this.cells = scratch('queue-cells', int32, Math.max(room, 16));
+    this.next = scratch('queue-next', int32, Math.max(room, 16));
   }
 
   push(cell: number, keyMm: number): void {
@@ -347,7 +362,7 @@ export function widestRoutes(
   for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
   const parent = scratch('parent', int32, cells).fill(-1);
   const wayIn = scratch('way-in', int32, cells).fill(-1);
-  const queue = new WidestFirst(limitMm);
+  const queue = new WidestFirst(limitMm, cells);
   for (const { cell, opening } of sources) {
     const key = Math.floor(Math.min(widths.at(cell), limitMm));
     if (key <= bottleneckMm[cell]!) continue;
