@@ -75,16 +75,23 @@ export function cellAt(grid: FloorGrid, p: Vec2): number {
 /**
  * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm (coarser where the room
  * would need more than MAX_GRID_CELLS; the grid's cellMm says which): a cell is free when its
- * centre is inside the outline and in no obstacle. The first box to cover a cell names it.
+ * centre is inside the outline and in no obstacle. The first box to cover a cell names it. With
+ * `keptAs`, the labels go in the working array of that name (`scratch`), which the next grid made
+ * under the same name overwrites: for a check that is done with its grid before it returns.
  */
-export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly PieceBox[], requestedCellMm: number): FloorGrid {
+export function rasteriseFloor(
+  outline: readonly Vec2[],
+  obstacles: readonly PieceBox[],
+  requestedCellMm: number,
+  keptAs?: string,
+): FloorGrid {
   const bounds = boundsMm(outline);
   const cellMm = gridCellMm(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY, requestedCellMm);
   const originX = bounds.minX - PAD_CELLS * cellMm;
   const originY = bounds.minY - PAD_CELLS * cellMm;
   const nx = Math.ceil((bounds.maxX - bounds.minX) / cellMm) + 2 * PAD_CELLS;
   const ny = Math.ceil((bounds.maxY - bounds.minY) / cellMm) + 2 * PAD_CELLS;
-  const label = new Int32Array(nx * ny).fill(WALL);
+  const label = (keptAs === undefined ? new Int32Array(nx * ny) : scratch(keptAs, int32, nx * ny)).fill(WALL);
   const grid: FloorGrid = { cellMm, nx, ny, originX, originY, label };
 
   // Scanlines through the cell centres: fill between pairs of outline crossings (even-odd).

@@ -97,7 +97,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   if (ways.length === 0) return [];
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
-  const grid = rasteriseFloor(outline, obstacles, WALKWAY_CELL_MM);
+  const grid = rasteriseFloor(outline, obstacles, WALKWAY_CELL_MM, 'walkway-label');
 
   // The floor cells just inside each way in, sampled every half cell along its width.
   const walls = layoutShellWalls(shell);
