@@ -176,10 +176,9 @@ export interface DistanceField {
 export function distanceField(grid: FloorGrid): DistanceField {
   const { nx, ny, label } = grid;
   const cells = nx * ny;
-  // Columns: distance to the nearest blocked cell straight up or down, and its row (−1: the column
-  // has none, never so on a padded grid). Every column is swept at once, a row at a time, so the
-  // arrays are read in the order they lie in memory.
-  const columnSquared = scratch('column-squared', int32, cells);
+  // Columns: the row of the nearest blocked cell straight up or down (−1: the column has none, never
+  // so on a padded grid); its squared distance is worked out from the row where it is needed. Every
+  // column is swept at once, a row at a time, so the array is read in the order it lies in memory.
   const columnRow = scratch('column-row', int32, cells);
   const lastBlocked = new Int32Array(nx).fill(-1);
   for (let j = 0; j < ny; j++) {
@@ -197,9 +196,7 @@ export function distanceField(grid: FloorGrid): DistanceField {
       if (label[cell] !== FREE) nextBlocked[i] = j;
       const next = nextBlocked[i]!;
       const above = columnRow[cell]!;
-      const row = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
-      columnRow[cell] = row;
-      columnSquared[cell] = row < 0 ? 0 : (row - j) * (row - j);
+      columnRow[cell] = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
     }
   }
   // Rows: the lower envelope of parabolas (x − q)² + column distance² over the columns q.
@@ -212,12 +209,14 @@ export function distanceField(grid: FloorGrid): DistanceField {
     const row = j * nx;
     let k = -1;
     for (let q = 0; q < nx; q++) {
-      if (columnRow[row + q]! < 0) continue;
-      const fq = columnSquared[row + q]! + q * q;
+      const rowQ = columnRow[row + q]!;
+      if (rowQ < 0) continue;
+      const fq = (rowQ - j) * (rowQ - j) + q * q;
       let s = -Infinity;
       while (k >= 0) {
         const p = sites[k]!;
-        s = (fq - (columnSquared[row + p]! + p * p)) / (2 * (q - p));
+        const rowP = columnRow[row + p]!;
+        s = (fq - ((rowP - j) * (rowP - j) + p * p)) / (2 * (q - p));
         if (s > bounds[k]!) break;
         k--;
       }
@@ -237,10 +236,11 @@ export function distanceField(grid: FloorGrid): DistanceField {
     for (let x = 0; x < nx; x++) {
       while (bounds[at + 1]! < x) at++;
       const q = sites[at]!;
-      const squared = (x - q) * (x - q) + columnSquared[row + q]!;
+      const rowQ = columnRow[row + q]!;
+      const squared = (x - q) * (x - q) + (rowQ - j) * (rowQ - j);
       squaredCells[row + x] = squared;
       root[row + x] = Math.sqrt(squared);
-      nearest[row + x] = columnRow[row + q]! * nx + q;
+      nearest[row + x] = rowQ * nx + q;
     }
   }
   return { squaredCells, cells: root, nearest };
