@@ -75,16 +75,23 @@ export function cellAt(grid: FloorGrid, p: Vec2): number {
 /**
  * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm (coarser where the room
  * would need more than MAX_GRID_CELLS; the grid's cellMm says which): a cell is free when its
- * centre is inside the outline and in no obstacle. The first box to cover a cell names it.
+ * centre is inside the outline and in no obstacle. The first box to cover a cell names it. With
+ * `keptAs`, the labels go in the working array of that name (`scratch`), which the next grid made
+ * under the same name overwrites: for a check that is done with its grid before it returns.
  */
-export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly PieceBox[], requestedCellMm: number): FloorGrid {
+export function rasteriseFloor(
+  outline: readonly Vec2[],
+  obstacles: readonly PieceBox[],
+  requestedCellMm: number,
+  keptAs?: string,
+): FloorGrid {
   const bounds = boundsMm(outline);
   const cellMm = gridCellMm(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY, requestedCellMm);
   const originX = bounds.minX - PAD_CELLS * cellMm;
   const originY = bounds.minY - PAD_CELLS * cellMm;
   const nx = Math.ceil((bounds.maxX - bounds.minX) / cellMm) + 2 * PAD_CELLS;
   const ny = Math.ceil((bounds.maxY - bounds.minY) / cellMm) + 2 * PAD_CELLS;
-  const label = new Int32Array(nx * ny).fill(WALL);
+  const label = (keptAs === undefined ? new Int32Array(nx * ny) : scratch(keptAs, int32, nx * ny)).fill(WALL);
   const grid: FloorGrid = { cellMm, nx, ny, originX, originY, label };
 
   // Scanlines through the cell centres: fill between pairs of outline crossings (even-odd).
@@ -128,9 +135,36 @@ export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly Pie
   return grid;
 }
 
-/** Squared distance (in cells²) from every cell's centre to the nearest blocked cell's centre, and which cell that is. */
+/**
+ * Per-cell working arrays are kept from one check to the next for grids up to this many cells
+ * (about 8 MB over all of them), so a drag that checks the same room again and again does not churn
+ * memory; larger grids get arrays of their own that go when the check is done. A kept array is
+ * handed out again by the next call under its name, so a check uses what it asks for before the
+ * next check starts (checks run one at a time on a thread).
+ */
+const KEPT_SCRATCH_CELLS = 250_000;
+const kept = new Map<string, Float64Array | Int32Array>();
+
+/** A working array of `cells` entries under `name`, with whatever it held before: callers fill it. */
+export function scratch<T extends Float64Array | Int32Array>(name: string, make: (cells: number) => T, cells: number): T {
+  const held = kept.get(name) as T | undefined;
+  if (held && held.length >= cells) return held.subarray(0, cells) as T;
+  const made = make(cells);
+  if (cells <= KEPT_SCRATCH_CELLS) kept.set(name, made);
+  return made;
+}
+export const float64 = (cells: number): Float64Array => new Float64Array(cells);
+export const int32 = (cells: number): Int32Array => new Int32Array(cells);
+
+/**
+ * Squared distance (in cells²) from every cell's centre to the nearest blocked cell's centre, its
+ * square root (cells), and which blocked cell that is. The arrays are working arrays (`scratch`):
+ * the next distance field reuses them.
+ */
 export interface DistanceField {
   squaredCells: Float64Array;
+  /** √squaredCells, worked out once here for every later use. */
+  cells: Float64Array;
   nearest: Int32Array;
 }
 
@@ -142,10 +176,10 @@ export interface DistanceField {
 export function distanceField(grid: FloorGrid): DistanceField {
   const { nx, ny, label } = grid;
   const cells = nx * ny;
-  // Columns: distance to the nearest blocked cell straight up or down, and its row. Every column is
-  // swept at once, a row at a time, so the arrays are read in the order they lie in memory.
-  const columnSquared = new Float64Array(cells);
-  const columnRow = new Int32Array(cells);
+  // Columns: the row of the nearest blocked cell straight up or down (−1: the column has none, never
+  // so on a padded grid); its squared distance is worked out from the row where it is needed. Every
+  // column is swept at once, a row at a time, so the array is read in the order it lies in memory.
+  const columnRow = scratch('column-row', int32, cells);
   const lastBlocked = new Int32Array(nx).fill(-1);
   for (let j = 0; j < ny; j++) {
     const row = j * nx;
@@ -162,26 +196,27 @@ export function distanceField(grid: FloorGrid): DistanceField {
       if (label[cell] !== FREE) nextBlocked[i] = j;
       const next = nextBlocked[i]!;
       const above = columnRow[cell]!;
-      const row = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
-      columnRow[cell] = row;
-      columnSquared[cell] = row < 0 ? Infinity : (row - j) * (row - j);
+      columnRow[cell] = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
     }
   }
   // Rows: the lower envelope of parabolas (x − q)² + column distance² over the columns q.
-  const squaredCells = new Float64Array(cells);
-  const nearest = new Int32Array(cells);
+  const squaredCells = scratch('squared-cells', float64, cells);
+  const root = scratch('distance-cells', float64, cells);
+  const nearest = scratch('nearest', int32, cells);
   const sites = new Int32Array(nx);
   const bounds = new Float64Array(nx + 1);
   for (let j = 0; j < ny; j++) {
     const row = j * nx;
     let k = -1;
     for (let q = 0; q < nx; q++) {
-      const fq = columnSquared[row + q]!;
-      if (fq === Infinity) continue;
+      const rowQ = columnRow[row + q]!;
+      if (rowQ < 0) continue;
+      const fq = (rowQ - j) * (rowQ - j) + q * q;
       let s = -Infinity;
       while (k >= 0) {
         const p = sites[k]!;
-        s = (fq + q * q - (columnSquared[row + p]! + p * p)) / (2 * (q - p));
+        const rowP = columnRow[row + p]!;
+        s = (fq - ((rowP - j) * (rowP - j) + p * p)) / (2 * (q - p));
         if (s > bounds[k]!) break;
         k--;
       }
@@ -190,13 +225,23 @@ export function distanceField(grid: FloorGrid): DistanceField {
       bounds[k] = k === 0 ? -Infinity : s;
       bounds[k + 1] = Infinity;
     }
+    if (k < 0) {
+      // No blocked cell in any column: nothing is near (a grid without its padding).
+      squaredCells.fill(Infinity, row, row + nx);
+      root.fill(Infinity, row, row + nx);
+      nearest.fill(-1, row, row + nx);
+      continue;
+    }
     let at = 0;
     for (let x = 0; x < nx; x++) {
       while (bounds[at + 1]! < x) at++;
       const q = sites[at]!;
-      squaredCells[row + x] = (x - q) * (x - q) + columnSquared[row + q]!;
-      nearest[row + x] = columnRow[row + q]! * nx + q;
+      const rowQ = columnRow[row + q]!;
+      const squared = (x - q) * (x - q) + (rowQ - j) * (rowQ - j);
+      squaredCells[row + x] = squared;
+      root[row + x] = Math.sqrt(squared);
+      nearest[row + x] = rowQ * nx + q;
     }
   }
-  return { squaredCells, nearest };
+  return { squaredCells, cells: root, nearest };
 }
