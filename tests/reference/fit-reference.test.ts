@@ -13,7 +13,7 @@ import { seededRandom as random } from '../../server/services/images/generate';
 type Layout = { room: RoomShellInput; pieces: PieceInput[] };
 type OpeningInput = NonNullable<RoomShellInput['openings']>[number];
 
-/** Names that call on the reach rules (beds, tables used from close by) and names that do not. */
+/** Names of pieces with no kind: the reach rules read kinds, never names, so these must all be judged as plain blocks. */
 const NAMES = ['Sofa', 'Bed', 'Coffee table', 'Side table', 'Dining table', 'Bookcase', 'Chest', 'Armchair', 'Desk', 'Wardrobe'];
 
 /** Room outlines (plan mm, invented): a rectangle, an L, a splayed corner and a step, drawn either way round. */

@@ -1,7 +1,7 @@
 // `narrow-walkway` and `unreachable`: can a person walk from a door or passage to the front of each
 // piece, and how narrow is the tightest spot on the best route? Plan mm, x right, y down.
 import { placeOpening } from '../../geometry/openings';
-import { reachWidthMm } from './clearances';
+import { faceFrame, judgeReach, reachNeeds, type Face } from './reach';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
@@ -426,14 +426,15 @@ function routeNarrowest(widths: Widths, routes: Routes): (cell: number) => numbe
   };
 }
 
-/** Free cells in the patch of floor in front of a box's front face (its own +y). */
-function frontCells(grid: FloorGrid, box: PieceBox): number[] {
-  const reachMm = box.halfDepthMm + FRONT_STRIP_MM;
+/** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep. */
+function faceCells(grid: FloorGrid, box: PieceBox, face: Face): number[] {
+  const { along, out, halfAlongMm, halfOutMm } = faceFrame(box, face);
+  const reachMm = halfOutMm + FRONT_STRIP_MM;
   const corners: Vec2[] = [
-    addScaled(addScaled(box.centre, box.axisX, -box.halfWidthMm), box.axisY, box.halfDepthMm),
-    addScaled(addScaled(box.centre, box.axisX, box.halfWidthMm), box.axisY, box.halfDepthMm),
-    addScaled(addScaled(box.centre, box.axisX, box.halfWidthMm), box.axisY, reachMm),
-    addScaled(addScaled(box.centre, box.axisX, -box.halfWidthMm), box.axisY, reachMm),
+    addScaled(addScaled(box.centre, along, -halfAlongMm), out, halfOutMm),
+    addScaled(addScaled(box.centre, along, halfAlongMm), out, halfOutMm),
+    addScaled(addScaled(box.centre, along, halfAlongMm), out, reachMm),
+    addScaled(addScaled(box.centre, along, -halfAlongMm), out, reachMm),
   ];
   const { nx, cellMm, originX, originY, label } = grid;
   const xs = corners.map((c) => c[0]);
@@ -449,9 +450,9 @@ function frontCells(grid: FloorGrid, box: PieceBox): number[] {
       if (label[cell] !== FREE) continue;
       const dx = originX + (i + 0.5) * cellMm - box.centre[0];
       const dy = originY + (j + 0.5) * cellMm - box.centre[1];
-      const u = dx * box.axisX[0] + dy * box.axisX[1];
-      const v = dx * box.axisY[0] + dy * box.axisY[1];
-      if (Math.abs(u) <= box.halfWidthMm && v >= box.halfDepthMm && v <= reachMm) found.push(cell);
+      const u = dx * along[0] + dy * along[1];
+      const v = dx * out[0] + dy * out[1];
+      if (Math.abs(u) <= halfAlongMm && v >= halfOutMm && v <= reachMm) found.push(cell);
     }
   }
   return found;
@@ -520,19 +521,11 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   obstacles.forEach((box, index) => {
     // A piece wholly outside the room is an outside-room finding; a route to it means nothing.
     if (!pointInPolygon(box.centre, outline)) return;
-    const front = frontCells(grid, box);
-    let bestCell = -1;
-    let bottleneckMm = -1;
-    for (const cell of front) {
-      const reached = routes.bottleneckMm[cell]!;
-      if (reached > bottleneckMm) {
-        bottleneckMm = reached;
-        bestCell = cell;
-      }
-    }
     const piece = box.piece;
-    const requiredMm = reachWidthMm(piece, walkwayMm);
-    if (front.length < MIN_FRONT_CELLS || bottleneckMm < 0) {
+    const needs = reachNeeds(box, boxes, walkwayMm);
+    const verdict = judgeReach(needs, (way) => faceCells(grid, box, way.face), routes.bottleneckMm, MIN_FRONT_CELLS);
+    if (verdict === 'reached') return;
+    if (verdict === 'unreachable') {
       findings.push({
         kind: 'unreachable',
         pieces: [piece.id],
@@ -541,7 +534,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       });
       return;
     }
-    if (roundToCmMm(bottleneckMm) >= requiredMm) return;
+    const { cell: bestCell, bottleneckMm, requiredMm } = verdict;
 
     // The route's narrowest cell is where the bottleneck is; the route ends at a way in.
     const narrowest = narrowestOnRoute(bestCell);
