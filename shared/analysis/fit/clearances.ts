@@ -51,3 +51,18 @@ export const LOW_TABLE_MAX_HEIGHT_MM = 480;
 export const USED_FROM_SEAT_KINDS: readonly PieceKind[] = ['coffee-table', 'side-table', 'ottoman', 'plain-block'];
 /** A low table this far (mm) or nearer in front of a seat is used from it: the high end of sofa to coffee table 35–45 cm (common practice). */
 export const SEAT_TO_TABLE_MAX_MM = 450;
+/** Kinds used from any side a person sits or stands at: tables, desks and ottomans. */
+export const ANY_SIDE_KINDS: readonly PieceKind[] = [
+  'dining-table',
+  'dining-set',
+  'coffee-table',
+  'side-table',
+  'bedside-table',
+  'desk',
+  'ottoman',
+];
+/**
+ * How wide a stretch of a seat's front must be clear for a person to sit down there, mm: an adult's
+ * shoulders with the arms at the sides and a little room to turn, 600 mm (common practice).
+ */
+export const PERSON_WIDTH_MM = 600;

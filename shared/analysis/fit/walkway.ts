@@ -1,7 +1,7 @@
 // `narrow-walkway` and `unreachable`: can a person walk from a door or passage to the front of each
 // piece, and how narrow is the tightest spot on the best route? Plan mm, x right, y down.
 import { placeOpening } from '../../geometry/openings';
-import { faceFrame, judgeReach, reachNeeds, type Face } from './reach';
+import { faceFrame, judgeReach, reachNeeds, withSeatGaps, type Face, type Patch, type ReachWay } from './reach';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
@@ -427,7 +427,7 @@ function routeNarrowest(widths: Widths, routes: Routes): (cell: number) => numbe
 }
 
 /** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep. */
-function faceCells(grid: FloorGrid, box: PieceBox, face: Face): number[] {
+function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
   const { along, out, halfAlongMm, halfOutMm } = faceFrame(box, face);
   const reachMm = halfOutMm + FRONT_STRIP_MM;
   const corners: Vec2[] = [
@@ -443,7 +443,7 @@ function faceCells(grid: FloorGrid, box: PieceBox, face: Face): number[] {
   const i1 = Math.min(nx - 1, Math.floor((Math.max(...xs) - originX) / cellMm));
   const j0 = Math.max(0, Math.floor((Math.min(...ys) - originY) / cellMm));
   const j1 = Math.min(grid.ny - 1, Math.floor((Math.max(...ys) - originY) / cellMm));
-  const found: number[] = [];
+  const found: Patch = { faceMm: 2 * halfAlongMm, cells: [], alongMm: [] };
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
       const cell = j * nx + i;
@@ -452,7 +452,10 @@ function faceCells(grid: FloorGrid, box: PieceBox, face: Face): number[] {
       const dy = originY + (j + 0.5) * cellMm - box.centre[1];
       const u = dx * along[0] + dy * along[1];
       const v = dx * out[0] + dy * out[1];
-      if (Math.abs(u) <= halfAlongMm && v >= halfOutMm && v <= reachMm) found.push(cell);
+      if (Math.abs(u) <= halfAlongMm && v >= halfOutMm && v <= reachMm) {
+        found.cells.push(cell);
+        found.alongMm.push(u);
+      }
     }
   }
   return found;
@@ -498,7 +501,9 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   if (ways.length === 0) return [];
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
-  const grid = rasteriseFloor(outline, obstacles, WALKWAY_CELL_MM);
+  const { filled, owner } = withSeatGaps(obstacles);
+  const grid = rasteriseFloor(outline, filled, WALKWAY_CELL_MM);
+  const ownerOf = (side: number) => (side === WALL ? WALL : itemAt(owner, side, 'obstacle'));
 
   // The floor cells just inside each way in, sampled every half cell along its width.
   const walls = layoutShellWalls(shell);
@@ -523,7 +528,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     if (!pointInPolygon(box.centre, outline)) return;
     const piece = box.piece;
     const needs = reachNeeds(box, boxes, walkwayMm);
-    const verdict = judgeReach(needs, (way) => faceCells(grid, box, way.face), routes.bottleneckMm, MIN_FRONT_CELLS);
+    const patchOf = (way: ReachWay) => faceCells(grid, way.box ?? box, way.face);
+    const verdict = judgeReach(needs, patchOf, routes.bottleneckMm, MIN_FRONT_CELLS, grid.cellMm);
     if (verdict === 'reached') return;
     if (verdict === 'unreachable') {
       findings.push({
@@ -555,8 +561,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     if (gap) {
       const [sideA, sideB] = gap.sides;
       // The exact distance between the two sides, when it tells the same story as the grid.
-      const shapeA = sideShape(sideA, gap.ends[0], obstacles, outline);
-      const shapeB = sideShape(sideB, gap.ends[1], obstacles, outline);
+      const shapeA = sideShape(sideA, gap.ends[0], filled, outline);
+      const shapeB = sideShape(sideB, gap.ends[1], filled, outline);
       const exact = closestPair(shapeA, shapeB);
       if (Math.abs(exact.distanceMm - gridWidthMm) <= SNAP_CELLS * grid.cellMm) {
         widthMm = exact.distanceMm;
@@ -568,12 +574,13 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       } else {
         between = [gap.ends[0], gap.ends[1]];
       }
-      // Pieces before walls, and pieces in the designer's order.
-      const sides: [number, number] = [sideA, sideB];
+      // Pieces before walls, and pieces in the designer's order; a filled gap goes by its seat.
+      const [ownA, ownB] = [ownerOf(sideA), ownerOf(sideB)];
+      const sides: [number, number] = [ownA, ownB];
       sides.sort((a, b) => (a === WALL ? 1 : b === WALL ? -1 : a - b));
       words = ` between ${sideName(sides[0], obstacles)} and ${sideName(sides[1], obstacles)}`;
       for (const side of sides) if (side !== WALL && side !== index) involved.push(itemAt(obstacles, side, 'obstacle').piece.id);
-      if (sideA !== index && sideB !== index) words += ` to reach ${theName(piece)}`;
+      if (ownA !== index && ownB !== index) words += ` to reach ${theName(piece)}`;
     } else {
       words = ` on the way to ${theName(piece)}`;
     }

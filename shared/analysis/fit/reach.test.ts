@@ -1,0 +1,129 @@
+// Tests for where each piece is reached from: tables, desks and ottomans from any side, a seat from a
+// stretch of its front as wide as a person, and a sofa with its coffee table as one layout.
+import { describe, expect, it } from 'vitest';
+import { placedBoxes } from './boxes';
+import { PERSON_WIDTH_MM } from './clearances';
+import { gapLayout, pieceInput, plan } from './test-plans';
+import { findWalkwayProblems } from './walkway';
+import type { PieceInput } from '../../schemas/option';
+
+/** Walkway findings as "piece kind measured/required" for pieces in the 4 × 4 m gap room (door in the top wall, x 2800–3620). */
+function findings(pieces: PieceInput[], room = gapLayout().room): string[] {
+  const { room: shell, option } = plan(room, pieces);
+  return findWalkwayProblems(shell, placedBoxes(option.pieces), 900).map(
+    (f) => `${f.pieces[0]} ${f.kind}${f.measuredMm === undefined ? '' : ` ${f.measuredMm}/${f.requiredMm}`}`,
+  );
+}
+// A sofa against the bottom wall facing up: x 1000–3000, y 3100–4000.
+const sofa = pieceInput({
+  id: 'sofa',
+  name: 'Sofa',
+  kind: 'sofa',
+  x: 2000,
+  y: 3550,
+  width: 2000,
+  depth: 900,
+  height: 850,
+  rotation: 180,
+});
+
+describe('tables, desks and ottomans are used from any side', () => {
+  it('a dining table past the 620 mm gap is reached from its side facing the door; a sideboard there is not', () => {
+    // The gap plan's chest (x 2620–4000, y 1750–2250) faces the bottom half, past the 620 mm gap; its back faces the door.
+    const swap = (fields: Partial<PieceInput>) => gapLayout().pieces.map((p) => (p.id === 'chest' ? { ...p, ...fields } : p));
+    expect(findings(swap({ kind: 'dining-table' }))).toEqual([]);
+    expect(findings(swap({ kind: 'desk' }))).toEqual([]);
+    expect(findings(swap({ kind: 'ottoman' }))).toEqual([]);
+    expect(findings(swap({ kind: 'sideboard' }))).toEqual(['chest narrow-walkway 620/900']);
+  });
+
+  it('a desk shut in on every side is unreachable', () => {
+    const layout = {
+      room: gapLayout().room,
+      // A desk (x 3000–3800, y 0–500) boxed in by the walls and a wardrobe across its front and end.
+      pieces: [
+        pieceInput({ id: 'desk', name: 'Desk', kind: 'desk', x: 3400, y: 250, width: 800, depth: 500, height: 740 }),
+        pieceInput({
+          id: 'wardrobe',
+          name: 'Wardrobe',
+          kind: 'wardrobe',
+          x: 3300,
+          y: 800,
+          width: 1400,
+          depth: 600,
+          height: 2000,
+        }),
+        pieceInput({
+          id: 'bookcase',
+          name: 'Bookcase',
+          kind: 'bookcase',
+          x: 2750,
+          y: 250,
+          width: 500,
+          depth: 300,
+          height: 2000,
+          rotation: 90,
+        }),
+      ],
+    };
+    layout.room = {
+      ...layout.room,
+      openings: [{ id: 'd1', type: 'door', wall: 3, offset: 1000, width: 820, height: 2040, hinge: 'start', swing: 'out' }],
+    };
+    expect(findings(layout.pieces, layout.room)).toContain('desk unreachable');
+  });
+});
+
+describe('a seat is reached from a stretch of its front as wide as a person', () => {
+  it('takes a person as 600 mm wide (common practice)', () => {
+    expect(PERSON_WIDTH_MM).toBe(600);
+  });
+
+  // A block 700 mm high (no low table) standing against the sofa's front from its left end, leaving freeMm open at the right end.
+  const crowded = (freeMm: number) => [
+    sofa,
+    pieceInput({
+      id: 'block',
+      name: 'Block',
+      x: 1000 + (2000 - freeMm) / 2,
+      y: 2900,
+      width: 2000 - freeMm,
+      depth: 400,
+      height: 700,
+    }),
+  ];
+
+  it('a sofa with only 200 mm of its front clear cannot be sat on from there', () => {
+    expect(findings(crowded(200)).filter((f) => f.startsWith('sofa'))).toEqual(['sofa unreachable']);
+  });
+
+  it('800 mm clear at the end of its front, open to the room, is enough', () => {
+    expect(findings(crowded(800)).filter((f) => f.startsWith('sofa'))).toEqual([]);
+  });
+});
+
+describe('a sofa and its coffee table at the usual distance are one layout', () => {
+  // A coffee table as wide as the sofa, gapMm in front of it (35–45 cm is usual, common practice).
+  const withTable = (gapMm: number) => [
+    sofa,
+    pieceInput({
+      id: 'table',
+      name: 'Coffee table',
+      kind: 'coffee-table',
+      x: 2000,
+      y: 3100 - gapMm - 300,
+      width: 2000,
+      depth: 600,
+      height: 420,
+    }),
+  ];
+
+  it('at 40 cm neither the sofa nor the table is a narrow walkway: the sofa is reached round the table', () => {
+    expect(findings(withTable(400))).toEqual([]);
+    expect(findings(withTable(350))).toEqual([]);
+  });
+
+  it('at 60 cm the gap is a walkway again, and too narrow to reach the sofa by', () => {
+    expect(findings(withTable(600))).toEqual(['sofa narrow-walkway 600/900']);
+  });
+});
