@@ -23,11 +23,13 @@ function differences(shell: RoomShell, pieces: readonly Piece[]): { added: strin
 }
 
 describe('findings the reach rules by kind change on purpose', () => {
-  it('the typical furnished room: seats by a stretch of their front, tables from any side', () => {
+  it('the typical furnished room: seats by a stretch of their front, tables from any side, beds from a long side', () => {
     // Pieces cycle through the kinds: 16 sofa, 17 armchair, 18 dining chair, 34 dining chair are
     // seats 400 mm wide, narrower than a person, so the whole front counts and the narrowest spot on
     // the way to it moves; 19, 35 coffee tables and 20, 36 dining tables are reached from any side:
-    // 35 and 36 have a side wide enough, 19 and 20 are still short but by a wider side.
+    // 35 and 36 have a side wide enough, 19 and 20 are still short but by a wider side. Beds 5 and
+    // 21 (400 mm wide: singles) are judged by their long sides, not their foot: both still short of
+    // 22 in, 5 by less room (25 cm, not 35) and 21 by more (25 cm, not 20). Bed 37 is unchanged.
     const { shell, option } = typicalFurnishedRoom();
     expect(differences(shell, option.pieces)).toEqual({
       added: [
@@ -36,7 +38,9 @@ describe('findings the reach rules by kind change on purpose', () => {
         'narrow-walkway piece-18,piece-26 passage-dining 200/900',
         'narrow-walkway piece-19,piece-11 passage-dining 230/350',
         'narrow-walkway piece-20,piece-4,piece-5 passage-dining 250/810',
+        'narrow-walkway piece-21,piece-5,piece-13 passage-dining 250/560',
         'narrow-walkway piece-34,piece-26,piece-27 passage-dining 200/900',
+        'narrow-walkway piece-5,piece-6 passage-dining 250/560',
       ],
       dropped: [
         'narrow-walkway piece-16,piece-17 passage-dining 230/900',
@@ -44,9 +48,11 @@ describe('findings the reach rules by kind change on purpose', () => {
         'narrow-walkway piece-18,piece-19 passage-dining 200/900',
         'narrow-walkway piece-19,piece-35,piece-36 passage-dining 200/350',
         'narrow-walkway piece-20,piece-35,piece-36 passage-dining 200/810',
+        'narrow-walkway piece-21,piece-20 passage-dining 200/560',
         'narrow-walkway piece-34,piece-25,piece-26 passage-dining 200/900',
         'narrow-walkway piece-35,piece-36 passage-dining 200/350',
         'narrow-walkway piece-36,piece-37 passage-dining 200/810',
+        'narrow-walkway piece-5,piece-6 passage-dining 350/560',
       ],
     });
   }, 60_000);

@@ -13,6 +13,15 @@ export const MAX_WALKWAY_MM = 2000;
 
 /** Beside a bed on the side people walk: at least 22 in (HUD Manual of Acceptable Practices vol. 4, 1973; summary). */
 export const BED_SIDE_MM = 22 * MM_PER_INCH;
+/** Beside a double bed on its least-used side: at least 12 in (HUD Manual of Acceptable Practices vol. 4, 1973; summary). */
+export const BED_LEAST_USED_SIDE_MM = 12 * MM_PER_INCH;
+/**
+ * A bed at least this wide (mm) is a double, slept in by two and reached from both long sides: the
+ * narrowest double mattress, the UK small double 120 cm (National Bed Federation sizes, summary;
+ * docs/references.md). The box is taken as the mattress's width: a frame adds only a few centimetres.
+ * A narrower bed (a single) may stand with one long side against a wall.
+ */
+export const DOUBLE_BED_MIN_WIDTH_MM = 1200;
 /** Behind a seated diner where nobody passes: 32 in (NKBA Kitchen Planning Guideline 8, 2012/13 ed.; summary). */
 export const BEHIND_DINER_MM = 32 * MM_PER_INCH;
 /** Sofa to coffee table 35–45 cm: the low end, as the least that still works (common practice; an editable default). */

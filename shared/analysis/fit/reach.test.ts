@@ -1,8 +1,9 @@
 // Tests for where each piece is reached from: tables, desks and ottomans from any side, a seat from a
-// stretch of its front as wide as a person, and a sofa with its coffee table as one layout.
+// stretch of its front as wide as a person, a sofa with its coffee table as one layout, and a bed
+// from a long side (a double from both), with HUD's worked figures.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
-import { PERSON_WIDTH_MM } from './clearances';
+import { BED_LEAST_USED_SIDE_MM, BED_SIDE_MM, DOUBLE_BED_MIN_WIDTH_MM, PERSON_WIDTH_MM } from './clearances';
 import { gapLayout, pieceInput, plan } from './test-plans';
 import { findWalkwayProblems } from './walkway';
 import type { PieceInput } from '../../schemas/option';
@@ -125,5 +126,71 @@ describe('a sofa and its coffee table at the usual distance are one layout', () 
 
   it('at 60 cm the gap is a walkway again, and too narrow to reach the sofa by', () => {
     expect(findings(withTable(600))).toEqual(['sofa narrow-walkway 600/900']);
+  });
+});
+
+describe('a bed is reached from a long side; a double from both', () => {
+  it('uses HUD’s 22 in on the side people use and 12 in on a double’s least-used side, and 120 cm for a double', () => {
+    // HUD Manual of Acceptable Practices vol. 4 (1973): 22 in = 558.8 mm, 12 in = 304.8 mm (1 in = 25.4 mm, NIST SP 811).
+    expect(BED_SIDE_MM).toBeCloseTo(558.8, 9);
+    expect(BED_LEAST_USED_SIDE_MM).toBeCloseTo(304.8, 9);
+    // The UK small double, 120 × 190 cm (National Bed Federation sizes), the narrowest double.
+    expect(DOUBLE_BED_MIN_WIDTH_MM).toBe(1200);
+  });
+
+  /** A bed 2000 mm long, head against the bottom wall (foot towards the door), its left long side gapMm from the left wall. */
+  const bedFromWall = (width: number, gapMm: number, more: PieceInput[] = []) =>
+    findings([
+      pieceInput({
+        id: 'bed',
+        name: 'Bed',
+        kind: 'bed',
+        x: gapMm + width / 2,
+        y: 3000,
+        width,
+        depth: 2000,
+        height: 550,
+        rotation: 180,
+      }),
+      ...more,
+    ]).filter((f) => f.startsWith('bed'));
+
+  it('a double (160 cm) needs its second side at 12 in: 60 cm and 32 cm pass, 25 cm is short, against the wall is unreachable', () => {
+    expect(bedFromWall(1600, 600)).toEqual([]);
+    expect(bedFromWall(1600, 320)).toEqual([]);
+    expect(bedFromWall(1600, 250)).toEqual(['bed narrow-walkway 250/300']);
+    expect(bedFromWall(1600, 0)).toEqual(['bed unreachable']);
+  });
+
+  it('a single (90 cm) may stand against the wall; shut in on both long sides it needs 22 in on one', () => {
+    expect(bedFromWall(900, 0)).toEqual([]);
+    // A wardrobe 500 mm past its right side (x 1900–2500), the left side 500 mm from the wall.
+    const wardrobe = pieceInput({
+      id: 'wardrobe',
+      name: 'Wardrobe',
+      kind: 'wardrobe',
+      x: 2200,
+      y: 3000,
+      width: 2000,
+      depth: 600,
+      height: 2000,
+      rotation: 90,
+    });
+    expect(bedFromWall(900, 500, [wardrobe])).toEqual(['bed narrow-walkway 500/560']);
+  });
+
+  it('the foot no longer counts: a double with its foot against a chest is reached from its sides', () => {
+    const chest = pieceInput({
+      id: 'chest',
+      name: 'Chest',
+      kind: 'chest-of-drawers',
+      x: 1600,
+      y: 1750,
+      width: 1600,
+      depth: 500,
+      height: 800,
+      rotation: 180,
+    });
+    expect(bedFromWall(1600, 800, [chest])).toEqual([]);
   });
 });

@@ -6,6 +6,8 @@ import { addScaled, dot, sub, type Vec2 } from '../../geometry/vec';
 import { TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import {
   ANY_SIDE_KINDS,
+  BED_LEAST_USED_SIDE_MM,
+  DOUBLE_BED_MIN_WIDTH_MM,
   LOW_TABLE_MAX_HEIGHT_MM,
   PERSON_WIDTH_MM,
   reachWidthMm,
@@ -13,7 +15,7 @@ import {
   SEAT_TO_TABLE_MAX_MM,
   USED_FROM_SEAT_KINDS,
 } from './clearances';
-import { roundToCmMm } from './messages';
+import { capitalise, roundToCmMm, theName } from './messages';
 
 /** A side of a piece's box, in its own axes: front +y, back −y, right +x, left −x. */
 export type Face = 'front' | 'back' | 'left' | 'right';
@@ -138,20 +140,45 @@ function faceTowards(box: PieceBox, direction: Vec2): Face {
  * What a placed piece needs to be reached, given the others (plan mm) and the walkway width, at the
  * width its kind asks (clearances.ts): tables, desks and ottomans from any side; a seat from a
  * stretch of its front at least PERSON_WIDTH_MM wide, or round the low table before it (any side of
- * the table but the one facing the seat); every other piece from its front. A low table before a
- * seat needs nothing: it is used from the seat.
+ * the table but the one facing the seat); a bed from either long side, and a double from both, the
+ * second at BED_LEAST_USED_SIDE_MM; every other piece from its front. A low table before a seat
+ * needs nothing: it is used from the seat.
  */
 export function reachNeeds(box: PieceBox, boxes: readonly PieceBox[], walkwayMm: number): ReachNeed[] {
   if (seatBefore(box, boxes)) return [];
   const requiredMm = reachWidthMm(box.piece, walkwayMm);
   const kind = box.piece.kind ?? 'plain-block';
   if (ANY_SIDE_KINDS.includes(kind)) return [FACES.map((face) => ({ face, requiredMm, stretchMm: 0 }))];
+  if (kind === 'bed') return bedNeeds(box, requiredMm, walkwayMm);
   if (!SEAT_KINDS.includes(kind)) return [[{ face: 'front', requiredMm, stretchMm: 0 }]];
   const front: ReachWay = { face: 'front', requiredMm, stretchMm: PERSON_WIDTH_MM };
   const table = tableBefore(box, boxes);
   if (!table) return [[front]];
   const facing = faceTowards(table, faceFrame(box, 'front').out.map((v) => -v) as [number, number]);
   return [[front, ...FACES.filter((f) => f !== facing).map((face) => ({ face, box: table, requiredMm, stretchMm: 0 }))]];
+}
+
+const LONG_SIDES: readonly Face[] = ['left', 'right'];
+
+/**
+ * A bed's needs: one long side (left or right, head to foot) at `usedMm`; a double (at least
+ * DOUBLE_BED_MIN_WIDTH_MM wide) also each long side at BED_LEAST_USED_SIDE_MM, so one side at the
+ * full width and the other at the least-used width. The foot does not count.
+ */
+function bedNeeds(box: PieceBox, usedMm: number, walkwayMm: number): ReachNeed[] {
+  const needs: ReachNeed[] = [LONG_SIDES.map((face) => ({ face, requiredMm: usedMm, stretchMm: 0 }))];
+  if (2 * box.halfWidthMm < DOUBLE_BED_MIN_WIDTH_MM - TOUCH_TOLERANCE_MM) return needs;
+  const leastMm = Math.min(walkwayMm, BED_LEAST_USED_SIDE_MM);
+  for (const face of LONG_SIDES) needs.push([{ face, requiredMm: leastMm, stretchMm: 0 }]);
+  return needs;
+}
+
+/** The sentence for a piece no route reaches, by the need left unmet: its front, one side of a double bed, or the piece itself. */
+export function unreachableMessage(piece: PieceBox['piece'], need: ReachNeed): string {
+  if (need.every((way) => way.face === 'front' && !way.box))
+    return `The front of ${theName(piece)} cannot be reached from any door`;
+  if (need.length === 1) return `One long side of ${theName(piece)} cannot be reached from any door; a bed this wide needs both`;
+  return `${capitalise(theName(piece))} cannot be reached from any door`;
 }
 
 /** A patch of floor before a face: its free cells and where each lies along the face (mm from its middle). */
@@ -221,10 +248,10 @@ function bestCell(cells: readonly number[], bottleneckMm: Int32Array): { cell: n
 
 /**
  * Whether a piece's needs are met by the routes found (bottleneckMm: each floor cell's best route
- * width, −1 where none reaches): `reached`; `unreachable` when some need has no way whose patch of
- * floor (patchOf) has at least minCells free cells and one a route reaches (for a way asking for a
- * stretch, a stretch that wide); or else the first need left unmet, by the way that comes nearest to
- * the width it asks. A way's bottleneck is that of its best cell, rounded to the centimetre as
+ * width, −1 where none reaches): `reached`, or else the first need left unmet with, in `short`, the
+ * way that comes nearest to the width it asks; `short` is null when the need has no way whose patch
+ * of floor (patchOf) has at least minCells free cells and one a route reaches (for a way asking for
+ * a stretch, a stretch that wide): the piece is unreachable. A way's bottleneck is that of its best cell, rounded to the centimetre as
  * findings report it.
  */
 export function judgeReach(
@@ -233,7 +260,7 @@ export function judgeReach(
   bottleneckMm: Int32Array,
   minCells: number,
   cellMm: number,
-): 'reached' | 'unreachable' | ShortWay {
+): 'reached' | { need: ReachNeed; short: ShortWay | null } {
   for (const need of needs) {
     let nearest: ShortWay | null = null;
     let met = false;
@@ -249,7 +276,7 @@ export function judgeReach(
       if (!nearest || best.reachedMm - way.requiredMm > nearest.bottleneckMm - nearest.requiredMm)
         nearest = { cell: best.cell, bottleneckMm: best.reachedMm, requiredMm: way.requiredMm };
     }
-    if (!met) return nearest ?? 'unreachable';
+    if (!met) return { need, short: nearest };
   }
   return 'reached';
 }

@@ -1,7 +1,16 @@
 // `narrow-walkway` and `unreachable`: can a person walk from a door or passage to the front of each
 // piece, and how narrow is the tightest spot on the best route? Plan mm, x right, y down.
 import { placeOpening } from '../../geometry/openings';
-import { faceFrame, judgeReach, reachNeeds, withSeatGaps, type Face, type Patch, type ReachWay } from './reach';
+import {
+  faceFrame,
+  judgeReach,
+  reachNeeds,
+  unreachableMessage,
+  withSeatGaps,
+  type Face,
+  type Patch,
+  type ReachWay,
+} from './reach';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
@@ -531,16 +540,16 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     const patchOf = (way: ReachWay) => faceCells(grid, way.box ?? box, way.face);
     const verdict = judgeReach(needs, patchOf, routes.bottleneckMm, MIN_FRONT_CELLS, grid.cellMm);
     if (verdict === 'reached') return;
-    if (verdict === 'unreachable') {
+    if (verdict.short === null) {
       findings.push({
         kind: 'unreachable',
         pieces: [piece.id],
         openings: ways.map((w) => w.id).sort(),
-        message: `The front of ${theName(piece)} cannot be reached from any door`,
+        message: unreachableMessage(piece, verdict.need),
       });
       return;
     }
-    const { cell: bestCell, bottleneckMm, requiredMm } = verdict;
+    const { cell: bestCell, bottleneckMm, requiredMm } = verdict.short;
 
     // The route's narrowest cell is where the bottleneck is; the route ends at a way in.
     const narrowest = narrowestOnRoute(bestCell);
