@@ -1,6 +1,6 @@
-// The findings that the reach rules by kind changed on purpose, beside the frozen fit check of
-// before (scripts/bench/reference-fit): each difference listed with the rule that explains it, so
-// any other difference fails. fit-reference.test.ts checks that nothing else moved.
+// The findings that the reach rules by kind and the rule for pieces standing on others changed on
+// purpose, beside the frozen fit check of before (scripts/bench/reference-fit): each difference
+// listed with the rule that explains it, so any other difference fails. fit-reference.test.ts checks that nothing else moved.
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -11,6 +11,7 @@ import type { Piece } from '../../shared/schemas/option';
 import type { RoomShell } from '../../shared/schemas/room';
 import { checkFit as referenceCheckFit } from '../../scripts/bench/reference-fit/index';
 import { typicalFurnishedRoom } from '../../scripts/bench/typical-room';
+import { cleanLayout, pieceInput, plan } from '../../shared/analysis/fit/test-plans';
 
 const line = (f: Finding) =>
   `${f.kind} ${f.pieces.join(',')} ${f.openings.join(',')} ${f.measuredMm ?? ''}/${f.requiredMm ?? ''}`;
@@ -76,4 +77,32 @@ describe('findings the reach rules by kind change on purpose', () => {
       dropped: ['narrow-walkway armchair hall-door 880/900'],
     });
   }, 60_000);
+
+  it('a lamp standing 5 mm into a side table needs no route of its own', () => {
+    // The clean plan (test-plans.ts) with a side table in its top-right corner (x 3300–3600,
+    // y 100–400, clear of the bookcase at y 600–1800) and a lamp on it, its front facing the wall.
+    const layout = cleanLayout();
+    layout.pieces.push(
+      pieceInput({ id: 'table', name: 'Side table', kind: 'side-table', x: 3450, y: 250, width: 300, depth: 300, height: 550 }),
+      pieceInput({
+        id: 'lamp',
+        name: 'Lamp',
+        kind: 'table-lamp',
+        x: 3450,
+        y: 250,
+        width: 200,
+        depth: 200,
+        height: 400,
+        elevation: 545,
+        rotation: 180,
+      }),
+    );
+    const { room, option } = plan(layout.room, layout.pieces);
+    expect(differences(room, option.pieces)).toEqual({
+      added: [],
+      // Before, the lamp was judged from its own front, 100 mm past the table's edge. (The frozen
+      // copy shares overlap.ts, so the overlap it gave is tested in overlap.test.ts instead.)
+      dropped: ['narrow-walkway lamp,table d1 100/900'],
+    });
+  });
 });

@@ -1,6 +1,7 @@
 // Tests for where each piece is reached from: tables, desks and ottomans from any side, a seat from a
 // stretch of its front as wide as a person, a sofa with its coffee table as one layout, and a bed
-// from a long side (a double from both), with HUD's worked figures.
+// from a long side (a double from both), with HUD's worked figures; a piece standing on another is
+// used where the piece below it is.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes } from './boxes';
 import { BED_LEAST_USED_SIDE_MM, BED_SIDE_MM, DOUBLE_BED_MIN_WIDTH_MM, PERSON_WIDTH_MM } from './clearances';
@@ -192,5 +193,41 @@ describe('a bed is reached from a long side; a double from both', () => {
       rotation: 180,
     });
     expect(bedFromWall(1600, 800, [chest])).toEqual([]);
+  });
+});
+
+describe('a piece standing on another is used where that one is', () => {
+  // A side table against the left wall (x 0–500, y 1000–1500, its front facing +x) with a lamp on it
+  // whose front faces the wall: on its own, the lamp's front patch would be the table's top and the wall.
+  const table = pieceInput({
+    id: 'table',
+    name: 'Side table',
+    kind: 'side-table',
+    x: 250,
+    y: 1250,
+    width: 500,
+    depth: 500,
+    height: 550,
+    rotation: 270,
+  });
+  const lamp = pieceInput({
+    id: 'lamp',
+    name: 'Lamp',
+    kind: 'table-lamp',
+    x: 250,
+    y: 1250,
+    width: 300,
+    depth: 300,
+    height: 450,
+    elevation: 550,
+    rotation: 90,
+  });
+
+  it('a lamp on a side table needs no route of its own', () => {
+    expect(findings([table, lamp])).toEqual([]);
+  });
+
+  it('the same lamp hung at 1.2 m, on nothing, is judged at its height: from its own front, which faces the wall', () => {
+    expect(findings([table, { ...lamp, elevation: 1200 }])).toEqual(['lamp unreachable']);
   });
 });

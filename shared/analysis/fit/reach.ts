@@ -3,7 +3,7 @@
 // kind; and whether the routes the walkway check found meet those needs.
 import { boxCornersMm, planBoxAt } from '../../geometry/piece';
 import { addScaled, dot, sub, type Vec2 } from '../../geometry/vec';
-import { TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
+import { standingOn, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
 import {
   ANY_SIDE_KINDS,
   BED_LEAST_USED_SIDE_MM,
@@ -142,10 +142,11 @@ function faceTowards(box: PieceBox, direction: Vec2): Face {
  * stretch of its front at least PERSON_WIDTH_MM wide, or round the low table before it (any side of
  * the table but the one facing the seat); a bed from either long side, and a double from both, the
  * second at BED_LEAST_USED_SIDE_MM; every other piece from its front. A low table before a seat
- * needs nothing: it is used from the seat.
+ * needs nothing: it is used from the seat; nor does a piece standing on another (a lamp on a
+ * table): it is used where the piece below it is, whose own needs count.
  */
 export function reachNeeds(box: PieceBox, boxes: readonly PieceBox[], walkwayMm: number): ReachNeed[] {
-  if (seatBefore(box, boxes)) return [];
+  if (seatBefore(box, boxes) || standingOn(box, boxes)) return [];
   const requiredMm = reachWidthMm(box.piece, walkwayMm);
   const kind = box.piece.kind ?? 'plain-block';
   if (ANY_SIDE_KINDS.includes(kind)) return [FACES.map((face) => ({ face, requiredMm, stretchMm: 0 }))];
