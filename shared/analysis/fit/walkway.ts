@@ -1,5 +1,6 @@
-// `narrow-walkway` and `unreachable`: can a person walk from a door or passage to the front of each
-// piece, and how narrow is the tightest spot on the best route? Plan mm, x right, y down.
+// `narrow-walkway` and `unreachable`: can a person walk from a door or passage to where each piece is
+// used (its front, or the sides reach.ts names), and how narrow is the tightest spot on the best
+// route? Plan mm, x right, y down.
 import { placeOpening } from '../../geometry/openings';
 import {
   faceFrame,
@@ -503,7 +504,8 @@ function sideName(side: number, obstacles: readonly PieceBox[]): string {
  * `narrow-walkway` and `unreachable` for placed pieces (plan mm), with `walkwayMm` the clear width a
  * route needs. Routes start just inside every door and passage; a room with neither has no way in to
  * judge from, so it gets no walkway findings. Pieces walked over (rugs) or under (hung at or above
- * the head clearance) neither block a route nor need one (geometry/piece: blocksWalking).
+ * the head clearance) neither block a route nor need one (geometry/piece: blocksWalking). Where each
+ * piece is reached from, and at what width, is reach.ts's: `walkwayMm` for most, less for some kinds.
  */
 export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[], walkwayMm: number): Finding[] {
   const ways = shell.openings.filter((o) => o.type !== 'window' && o.wall < shell.outline.length);
