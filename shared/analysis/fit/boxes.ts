@@ -38,6 +38,33 @@ export function pieceBox(piece: Piece): PieceBox {
   };
 }
 
+/**
+ * How far (mm) a piece's underside may sit from another's top and still stand on it: heights are
+ * typed to the centimetre, so a lamp entered 5 mm into a table top stands on it (common practice).
+ */
+export const STACK_TOLERANCE_MM = 10;
+
+/**
+ * Whether `upper` stands on `lower`: its underside is lower's top within STACK_TOLERANCE_MM and its
+ * footprint lies inside lower's (a lamp on a table, a television on a media unit). A wall-hung
+ * piece above another, or one under another's overhang, does not: each is judged at its height.
+ */
+export function standsOn(upper: PieceBox, lower: PieceBox): boolean {
+  if (upper === lower || upper.bottomMm <= 0 || Math.abs(upper.bottomMm - lower.topMm) > STACK_TOLERANCE_MM) return false;
+  return upper.corners.every((corner) => {
+    const d = sub(corner, lower.centre);
+    return (
+      Math.abs(dot(d, lower.axisX)) <= lower.halfWidthMm + TOUCH_TOLERANCE_MM &&
+      Math.abs(dot(d, lower.axisY)) <= lower.halfDepthMm + TOUCH_TOLERANCE_MM
+    );
+  });
+}
+
+/** The piece a box stands on (standsOn), if any. */
+export function standingOn(box: PieceBox, boxes: readonly PieceBox[]): PieceBox | undefined {
+  return box.bottomMm > 0 ? boxes.find((lower) => standsOn(box, lower)) : undefined;
+}
+
 /** Boxes of the placed pieces only; pieces in the holding area take no part in the fit check. */
 export function placedBoxes(pieces: readonly Piece[]): PieceBox[] {
   return pieces.filter((piece) => piece.placed).map(pieceBox);

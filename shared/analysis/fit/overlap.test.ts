@@ -1,7 +1,7 @@
 // Tests for the `overlap` finding: pieces pushed into one another, touching edge to edge, stacked in
-// height, turned boxes, rugs, and pieces in the holding area.
+// height, standing on one another, turned boxes, rugs, and pieces in the holding area.
 import { describe, expect, it } from 'vitest';
-import { placedBoxes } from './boxes';
+import { placedBoxes, STACK_TOLERANCE_MM } from './boxes';
 import { findOverlaps } from './overlap';
 import { pieceInput } from './test-plans';
 import { pieceSchema, type PieceInput } from '../../schemas/option';
@@ -29,6 +29,27 @@ describe('overlap', () => {
     const cabinet = pieceInput({ id: 'cabinet', x: 1000, y: 225, width: 1600, depth: 350, height: 700, elevation: 1400 });
     expect(overlaps([sideboard, cabinet])).toEqual([]);
     expect(overlaps([sideboard, { ...cabinet, elevation: 800 }]).map((f) => f.pieces)).toEqual([['cabinet', 'sideboard']]);
+  });
+
+  it('lets a lamp stand on a side table, its base up to 10 mm into the top, but not stick out of it or sink deeper', () => {
+    // Side table 500 × 500 × 550 at (500, 500): x 250–750; lamp 300 × 300 at its middle.
+    const table = pieceInput({ id: 'table', kind: 'side-table', x: 500, y: 500, width: 500, depth: 500, height: 550 });
+    const lamp = pieceInput({
+      id: 'lamp',
+      kind: 'table-lamp',
+      x: 500,
+      y: 500,
+      width: 300,
+      depth: 300,
+      height: 450,
+      elevation: 545,
+    });
+    expect(STACK_TOLERANCE_MM).toBe(10);
+    expect(overlaps([table, lamp])).toEqual([]);
+    expect(overlaps([table, { ...lamp, elevation: 540 }])).toEqual([]);
+    expect(overlaps([table, { ...lamp, elevation: 530 }])).toHaveLength(1);
+    // Half off the edge (x 700–1000) and sunk 5 mm: it does not stand on the table, so the 5 mm count.
+    expect(overlaps([table, { ...lamp, x: 850 }])).toHaveLength(1);
   });
 
   it('never counts a rug', () => {

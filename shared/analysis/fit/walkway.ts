@@ -1,7 +1,17 @@
-// `narrow-walkway` and `unreachable`: can a person walk from a door or passage to the front of each
-// piece, and how narrow is the tightest spot on the best route? Plan mm, x right, y down.
+// `narrow-walkway` and `unreachable`: can a person walk from a door or passage to where each piece is
+// used (its front, or the sides reach.ts names), and how narrow is the tightest spot on the best
+// route? Plan mm, x right, y down.
 import { placeOpening } from '../../geometry/openings';
-import { reachWidthMm } from './clearances';
+import {
+  faceFrame,
+  judgeReach,
+  reachNeeds,
+  unreachableMessage,
+  withSeatGaps,
+  type Face,
+  type Patch,
+  type ReachWay,
+} from './reach';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, type Vec2 } from '../../geometry/vec';
 import type { Piece } from '../../schemas/option';
@@ -26,14 +36,15 @@ const SNAP_CELLS = 1.5;
 /** Two ways of drawing a gap this close (mm) in length show the same gap. */
 const SNAP_TOLERANCE_MM = 0.5;
 
-/** Free cells in the patch of floor in front of a box's front face (its own +y). */
-function frontCells(grid: FloorGrid, box: PieceBox): number[] {
-  const reachMm = box.halfDepthMm + FRONT_STRIP_MM;
+/** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep. */
+function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
+  const { along, out, halfAlongMm, halfOutMm } = faceFrame(box, face);
+  const reachMm = halfOutMm + FRONT_STRIP_MM;
   const corners: Vec2[] = [
-    addScaled(addScaled(box.centre, box.axisX, -box.halfWidthMm), box.axisY, box.halfDepthMm),
-    addScaled(addScaled(box.centre, box.axisX, box.halfWidthMm), box.axisY, box.halfDepthMm),
-    addScaled(addScaled(box.centre, box.axisX, box.halfWidthMm), box.axisY, reachMm),
-    addScaled(addScaled(box.centre, box.axisX, -box.halfWidthMm), box.axisY, reachMm),
+    addScaled(addScaled(box.centre, along, -halfAlongMm), out, halfOutMm),
+    addScaled(addScaled(box.centre, along, halfAlongMm), out, halfOutMm),
+    addScaled(addScaled(box.centre, along, halfAlongMm), out, reachMm),
+    addScaled(addScaled(box.centre, along, -halfAlongMm), out, reachMm),
   ];
   const { nx, cellMm, originX, originY, label } = grid;
   const xs = corners.map((c) => c[0]);
@@ -42,16 +53,19 @@ function frontCells(grid: FloorGrid, box: PieceBox): number[] {
   const i1 = Math.min(nx - 1, Math.floor((Math.max(...xs) - originX) / cellMm));
   const j0 = Math.max(0, Math.floor((Math.min(...ys) - originY) / cellMm));
   const j1 = Math.min(grid.ny - 1, Math.floor((Math.max(...ys) - originY) / cellMm));
-  const found: number[] = [];
+  const found: Patch = { faceMm: 2 * halfAlongMm, cells: [], alongMm: [] };
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
       const cell = j * nx + i;
       if (label[cell] !== FREE) continue;
       const dx = originX + (i + 0.5) * cellMm - box.centre[0];
       const dy = originY + (j + 0.5) * cellMm - box.centre[1];
-      const u = dx * box.axisX[0] + dy * box.axisX[1];
-      const v = dx * box.axisY[0] + dy * box.axisY[1];
-      if (Math.abs(u) <= box.halfWidthMm && v >= box.halfDepthMm && v <= reachMm) found.push(cell);
+      const u = dx * along[0] + dy * along[1];
+      const v = dx * out[0] + dy * out[1];
+      if (Math.abs(u) <= halfAlongMm && v >= halfOutMm && v <= reachMm) {
+        found.cells.push(cell);
+        found.alongMm.push(u);
+      }
     }
   }
   return found;
@@ -90,14 +104,17 @@ function sideName(side: number, obstacles: readonly PieceBox[]): string {
  * `narrow-walkway` and `unreachable` for placed pieces (plan mm), with `walkwayMm` the clear width a
  * route needs. Routes start just inside every door and passage; a room with neither has no way in to
  * judge from, so it gets no walkway findings. Pieces walked over (rugs) or under (hung at or above
- * the head clearance) neither block a route nor need one (geometry/piece: blocksWalking).
+ * the head clearance) neither block a route nor need one (geometry/piece: blocksWalking). Where each
+ * piece is reached from, and at what width, is reach.ts's: `walkwayMm` for most, less for some kinds.
  */
 export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[], walkwayMm: number): Finding[] {
   const ways = shell.openings.filter((o) => o.type !== 'window' && o.wall < shell.outline.length);
   if (ways.length === 0) return [];
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
-  const grid = rasteriseFloor(outline, obstacles, WALKWAY_CELL_MM, 'walkway-label');
+  const { filled, owner } = withSeatGaps(obstacles);
+  const grid = rasteriseFloor(outline, filled, WALKWAY_CELL_MM, 'walkway-label');
+  const ownerOf = (side: number) => (side === WALL ? WALL : itemAt(owner, side, 'obstacle'));
 
   // The floor cells just inside each way in, sampled every half cell along its width.
   const walls = layoutShellWalls(shell);
@@ -120,28 +137,21 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   obstacles.forEach((box, index) => {
     // A piece wholly outside the room is an outside-room finding; a route to it means nothing.
     if (!pointInPolygon(box.centre, outline)) return;
-    const front = frontCells(grid, box);
-    let bestCell = -1;
-    let bottleneckMm = -1;
-    for (const cell of front) {
-      const reached = routes.bottleneckMm[cell]!;
-      if (reached > bottleneckMm) {
-        bottleneckMm = reached;
-        bestCell = cell;
-      }
-    }
     const piece = box.piece;
-    const requiredMm = reachWidthMm(piece, walkwayMm);
-    if (front.length < MIN_FRONT_CELLS || bottleneckMm < 0) {
+    const needs = reachNeeds(box, boxes, walkwayMm);
+    const patchOf = (way: ReachWay) => faceCells(grid, way.box ?? box, way.face);
+    const verdict = judgeReach(needs, patchOf, routes.bottleneckMm, MIN_FRONT_CELLS, grid.cellMm);
+    if (verdict === 'reached') return;
+    if (verdict.short === null) {
       findings.push({
         kind: 'unreachable',
         pieces: [piece.id],
         openings: ways.map((w) => w.id).sort(),
-        message: `The front of ${theName(piece)} cannot be reached from any door`,
+        message: unreachableMessage(piece, verdict.need),
       });
       return;
     }
-    if (roundToCmMm(bottleneckMm) >= requiredMm) return;
+    const { cell: bestCell, bottleneckMm, requiredMm } = verdict.short;
 
     // The route's narrowest cell is where the bottleneck is; the route ends at a way in.
     const narrowest = narrowestOnRoute(bestCell);
@@ -162,8 +172,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     if (gap) {
       const [sideA, sideB] = gap.sides;
       // The exact distance between the two sides, when it tells the same story as the grid.
-      const shapeA = sideShape(sideA, gap.ends[0], obstacles, outline);
-      const shapeB = sideShape(sideB, gap.ends[1], obstacles, outline);
+      const shapeA = sideShape(sideA, gap.ends[0], filled, outline);
+      const shapeB = sideShape(sideB, gap.ends[1], filled, outline);
       const exact = closestPair(shapeA, shapeB);
       if (Math.abs(exact.distanceMm - gridWidthMm) <= SNAP_CELLS * grid.cellMm) {
         widthMm = exact.distanceMm;
@@ -175,12 +185,13 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       } else {
         between = [gap.ends[0], gap.ends[1]];
       }
-      // Pieces before walls, and pieces in the designer's order.
-      const sides: [number, number] = [sideA, sideB];
+      // Pieces before walls, and pieces in the designer's order; a filled gap goes by its seat.
+      const [ownA, ownB] = [ownerOf(sideA), ownerOf(sideB)];
+      const sides: [number, number] = [ownA, ownB];
       sides.sort((a, b) => (a === WALL ? 1 : b === WALL ? -1 : a - b));
       words = ` between ${sideName(sides[0], obstacles)} and ${sideName(sides[1], obstacles)}`;
       for (const side of sides) if (side !== WALL && side !== index) involved.push(itemAt(obstacles, side, 'obstacle').piece.id);
-      if (sideA !== index && sideB !== index) words += ` to reach ${theName(piece)}`;
+      if (ownA !== index && ownB !== index) words += ` to reach ${theName(piece)}`;
     } else {
       words = ` on the way to ${theName(piece)}`;
     }
