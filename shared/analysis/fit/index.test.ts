@@ -40,6 +40,7 @@ describe('checkFit', () => {
       'overlap',
       'outside-room',
       'door-swing',
+      'cannot-open',
       'window-blocked',
       'narrow-walkway',
       'unreachable',

@@ -4,6 +4,7 @@ import type { RoomShell } from '../../schemas/room';
 import { findingKindSchema, type Finding } from './finding';
 import { DEFAULT_WALKWAY_MM } from './clearances';
 import { placedBoxes } from './boxes';
+import { findCannotOpen } from './cannot-open';
 import { findDoorSwings } from './door-swing';
 import { findTooBigForDoor } from './door-fit';
 import { findOverlaps } from './overlap';
@@ -42,6 +43,7 @@ export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: Fi
     ...findOverlaps(boxes),
     ...findOutsideRoom(shell, boxes),
     ...findDoorSwings(shell, boxes),
+    ...findCannotOpen(shell, boxes),
     ...findBlockedWindows(shell, boxes),
     ...findWalkwayProblems(shell, boxes, walkwayMm),
     ...findTooBigForDoor(shell, boxes),

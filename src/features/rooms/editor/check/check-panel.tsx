@@ -15,6 +15,7 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   overlap: 'Pieces overlap',
   'outside-room': 'Outside the room',
   'door-swing': 'In a door’s swing',
+  'cannot-open': 'Cannot open',
   'window-blocked': 'In front of a window',
   'narrow-walkway': 'Tight to pass',
   unreachable: 'Cannot be reached',
