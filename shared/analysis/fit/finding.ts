@@ -11,6 +11,8 @@ export const findingKindSchema = z.enum([
   'narrow-walkway',
   'unreachable',
   'too-big-for-door',
+  'climbable-near-window',
+  'tall-not-fixed',
 ]);
 export type FindingKind = z.infer<typeof findingKindSchema>;
 

@@ -45,6 +45,8 @@ describe('checkFit', () => {
       'narrow-walkway',
       'unreachable',
       'too-big-for-door',
+      'climbable-near-window',
+      'tall-not-fixed',
     ];
     const ranks = findings.map((f) => order.indexOf(f.kind));
     expect(ranks).toEqual([...ranks].sort((a, b) => a - b));

@@ -11,6 +11,7 @@ import { findOverlaps } from './overlap';
 import { findOutsideRoom } from './outside-room';
 import { findWalkwayProblems } from './walkway';
 import { findBlockedWindows } from './window';
+import { findClimbableNearWindows, findTallNotFixed } from './safety';
 
 export interface FitCheckOptions {
   /** Clear width (mm) a route from a door to a piece's front needs; DEFAULT_WALKWAY_MM when left out. */
@@ -47,5 +48,7 @@ export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: Fi
     ...findBlockedWindows(shell, boxes),
     ...findWalkwayProblems(shell, boxes, walkwayMm),
     ...findTooBigForDoor(shell, boxes),
+    ...findClimbableNearWindows(shell, boxes),
+    ...findTallNotFixed(boxes),
   ].sort(compareFindings);
 }

@@ -20,6 +20,8 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   'narrow-walkway': 'Tight to pass',
   unreachable: 'Cannot be reached',
   'too-big-for-door': 'Too big for the doors',
+  'climbable-near-window': 'Climbable near a window',
+  'tall-not-fixed': 'Not fixed to the wall',
 };
 
 export function CheckPanel({
