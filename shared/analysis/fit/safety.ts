@@ -42,8 +42,9 @@ export const CLIMBABLE_KINDS: ReadonlySet<PieceKind> = new Set<PieceKind>([
 
 /**
  * A window's sill must stand at least 24 in above the floor where it has no opening limiter or guard
- * (IRC 2015+ R312.2.1, window fall protection): standing on a piece, a child's floor is the piece's
- * top, so a sill less than this above the top is within reach.
+ * (IRC 2012+ R312.2.1, window fall protection, which prints it as 610 mm; docs/references.md):
+ * standing on a piece, a child's floor is the piece's top, so a sill less than this above it is
+ * within reach.
  */
 export const SAFE_SILL_ABOVE_MM = 24 * MM_PER_INCH;
 
@@ -53,7 +54,8 @@ export const CLIMB_REACH_MM = 600;
 /**
  * Storage at least 27 in tall can tip onto a child and should be fixed to the wall: the height from
  * which US CPSC's clothing storage rule applies (16 CFR 1261, adopting ASTM F2057-23, from 1 Sept
- * 2023); CPSC "Anchor It!" asks the same of bookcases and shelving, so the same height is used for them.
+ * 2023; CPSC's guidance on clothing storage units, docs/references.md). CPSC "Anchor It!" asks the
+ * same of bookcases and shelving, so the same height is used for them.
  */
 export const TIP_OVER_HEIGHT_MM = 27 * MM_PER_INCH;
 
