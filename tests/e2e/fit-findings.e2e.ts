@@ -1,6 +1,7 @@
 // Browser test of the fit check's door and safety findings: a wardrobe added by clicks lands facing
 // a bench too close for its doors, `cannot-open` lists its depths and draws the swing on the plan,
-// and ticking "Fixed to the wall" takes the tall-storage finding away.
+// ticking "Fixed to the wall" takes the tall-storage finding away, and marking the room as a
+// child's in Outline lists the bench under the window as climbable.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from './lib/browser';
@@ -13,7 +14,7 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 describe('door and safety findings', () => {
-  it('lists a wardrobe that cannot open with its depths and zone, and drops the tall-storage finding once it is fixed', async () => {
+  it('lists a wardrobe that cannot open with its depths and zone, and drops the tall-storage finding once it is fixed; a child’s room flags the bench under the window', async () => {
     const { context, page } = await newPage(browser);
     await signUpThroughForm(page, 'Fronts Studio');
     const url = await page.evaluate(async () => {
@@ -25,7 +26,7 @@ describe('door and safety findings', () => {
       const project = (
         await (await fetch('/api/projects', json('POST', { name: 'Fronts flat', newClient: { name: 'F' } }))).json()
       ).project;
-      // 2.4 × 1.5 m: a plain bench fills the bottom 50 cm, so only 1 m of floor is left above it,
+      // 2.4 × 1.5 m: a bench fills the bottom 50 cm, so only 1 m of floor is left above it,
       // and a 60 cm deep wardrobe facing down has at most 40 cm in front of its 50 cm doors.
       const created = await (
         await fetch(
@@ -39,6 +40,8 @@ describe('door and safety findings', () => {
                 [2400, 1500],
                 [0, 1500],
               ],
+              // A window over the bench, sill 900 mm: 45 cm above the bench's seat.
+              openings: [{ id: 'w1', type: 'window', wall: 2, offset: 800, width: 1000, height: 1200, sill: 900 }],
             },
           }),
         )
@@ -53,6 +56,7 @@ describe('door and safety findings', () => {
               {
                 id: 'bench',
                 name: 'Bench',
+                kind: 'bench',
                 x: 1200,
                 y: 1250,
                 width: 2380,
@@ -100,6 +104,18 @@ describe('door and safety findings', () => {
     await page.getByRole('button', { name: /Check/ }).click();
     await findings.getByRole('button', { name: /The wardrobe’s doors cannot open fully/ }).waitFor();
     expect(await page.getByText(tallText).count()).toBe(0);
+
+    // Marked as a child's room in Outline (kept after a reload), the bench under the window is climbable.
+    const climbText = /The bench stands 45 cm below the window sill, within reach/;
+    expect(await page.getByText(climbText).count()).toBe(0);
+    await page.getByRole('button', { name: /Outline/ }).click();
+    await page.getByLabel(/A child’s room/).click();
+    await page.locator('[data-testid=save-state][data-state=saved]').waitFor({ timeout: 15000 });
+    await page.reload();
+    await page.getByRole('button', { name: /Outline/ }).click();
+    expect(await page.getByLabel(/A child’s room/).isChecked()).toBe(true);
+    await page.getByRole('button', { name: /Check/ }).click();
+    await findings.getByText(climbText).waitFor();
     await context.close();
   }, 180_000);
 });
