@@ -340,6 +340,24 @@ describe('analyze command: fit check findings', () => {
     change(layout);
     return layout;
   }
+  // A chest of drawers turned 90° (front −x) on the right wall, x 3500–4000, y 1850–2650: its
+  // drawers need 500 − 50 = 450 mm and the sofa's end (x 3200) stands 300 mm in front.
+  const chestFacingSofa = () =>
+    withPieces((l) =>
+      l.pieces.push(
+        pieceInput({
+          id: 'chest',
+          name: 'Chest',
+          kind: 'chest-of-drawers',
+          x: 3750,
+          y: 2250,
+          width: 800,
+          depth: 500,
+          height: 900,
+          rotation: 90,
+        }),
+      ),
+    );
   async function findingsOf(layout: Layout, flags: string[] = []) {
     return (await takeoffOf(planOf(layout), flags)).findings as {
       kind: string;
@@ -379,6 +397,7 @@ describe('analyze command: fit check findings', () => {
         }),
       ['sofa'],
     ],
+    ['cannot-open', chestFacingSofa, ['chest', 'sofa']],
     ['narrow-walkway', () => gapLayout(), ['chest', 'bed']],
     ['unreachable', () => walledInLayout(), ['cabinet']],
     [
@@ -391,6 +410,19 @@ describe('analyze command: fit check findings', () => {
   it.each(cases)('reports %s on a plan made to show it', async (kind, layout, pieces) => {
     const findings = await findingsOf(layout());
     expect(findings.filter((f) => f.kind === kind).map((f) => f.pieces)).toEqual([pieces]);
+  });
+
+  it('gives a blocked front its clear and needed depth and the zone it opens into', async () => {
+    const [finding] = (await findingsOf(chestFacingSofa())).filter((f) => f.kind === 'cannot-open') as {
+      message: string;
+      measured_mm?: number;
+      required_mm?: number;
+      zone?: [number, number][];
+    }[];
+    expect(finding?.message).toBe('The chest’s drawers cannot pull out fully: 30 cm clear in front, blocked by the sofa');
+    expect([finding?.measured_mm, finding?.required_mm]).toEqual([300, 450]);
+    // From the chest's front at x 3500, 450 mm out towards the sofa, across its 800 mm width (less the gaps).
+    expect(new Set(finding?.zone?.map(([x]) => x))).toEqual(new Set([3500, 3050]));
   });
 
   it('measures the 620 mm gap and follows the walkway flag', async () => {

@@ -15,6 +15,7 @@ export const analysisFindingSchema = z.object({
   required_mm: z.number().optional(),
   at: planPointSchema.optional(),
   between: z.tuple([planPointSchema, planPointSchema]).optional(),
+  zone: z.array(planPointSchema).optional(),
 });
 
 export const analysisWallSchema = z.object({

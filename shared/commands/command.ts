@@ -15,6 +15,7 @@ export type CommandName =
   | 'removeCorner'
   | 'setWallHeight'
   | 'setWallThickness'
+  | 'setChildRoom'
   | 'closeOutlineGap'
   | 'addOpening'
   | 'updateOpening'

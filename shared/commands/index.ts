@@ -7,6 +7,7 @@ export {
   insertCorner,
   moveCorner,
   removeCorner,
+  setChildRoom,
   setOutline,
   setWallHeight,
   setWallLength,

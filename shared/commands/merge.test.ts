@@ -1,4 +1,4 @@
-// Tests for merging two people's edits of one room: mergeShell (ceiling height, openings, outline,
+// Tests for merging two people's edits of one room: mergeShell (ceiling height, child's room, openings, outline,
 // falling back to mine when the result cannot be drawn) and mergeOptionDoc (pieces, finishes).
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
@@ -17,6 +17,12 @@ const base = roomShellSchema.parse({
 });
 
 describe('mergeShell', () => {
+  it('keeps my child’s room mark beside their ceiling height, and theirs when I left it alone', () => {
+    const merged = mergeShell(base, { ...base, childRoom: true }, { ...base, wallHeight: 2500 });
+    expect([merged.childRoom, merged.wallHeight]).toEqual([true, 2500]);
+    expect(mergeShell(base, { ...base, wallHeight: 2500 }, { ...base, childRoom: true }).childRoom).toBe(true);
+  });
+
   it('keeps my ceiling height and their new window', () => {
     const mine = { ...base, wallHeight: 2700 };
     const theirs = {

@@ -36,6 +36,7 @@ export function mergeShell(base: RoomShell, mine: RoomShell, theirs: RoomShell):
     wallThicknesses: pick(base.wallThicknesses, mine.wallThicknesses, theirs.wallThicknesses),
     outline: pick(base.outline, mine.outline, theirs.outline),
     openings: mergeById<Opening>(base.openings, mine.openings, theirs.openings),
+    childRoom: pick(base.childRoom, mine.childRoom, theirs.childRoom),
   };
   if (merged.wallThicknesses === undefined) delete merged.wallThicknesses;
   return validateRoomShell(merged).length === 0 ? merged : mine;

@@ -7,6 +7,7 @@ import {
   moveCorner,
   removeCorner,
   setOutline,
+  setChildRoom,
   setWallHeight,
   setWallLength,
   setWallThickness,
@@ -294,6 +295,15 @@ describe('removeCorner', () => {
     });
     expect(refusal(triangle, removeCorner(0))).toBe("Can't remove corner 0: an outline needs at least 3 corners.");
     expect(refusal(triangle, removeCorner(3))).toBe("Can't remove corner 3: there is no corner 3 (the room has corners 0 to 2).");
+  });
+});
+
+describe('setChildRoom', () => {
+  it('marks the room as a child’s and back', () => {
+    const marked = applied(sampleDoc(), setChildRoom(true));
+    expect(marked.shell.childRoom).toBe(true);
+    expect(applied(marked, setChildRoom(false)).shell.childRoom).toBe(false);
+    expect(setChildRoom(true).label(sampleDoc())).toBe('Mark as a child’s room');
   });
 });
 

@@ -250,6 +250,18 @@ export function setWallHeight(heightMm: number): Command {
   );
 }
 
+/** Marks the room as a child's, or not: the fit check then warns of climbable pieces near its windows. */
+export function setChildRoom(childRoom: boolean): Command {
+  return makeCommand(
+    'setChildRoom',
+    { childRoom },
+    {
+      label: (_doc, args) => (args.childRoom ? 'Mark as a child’s room' : 'Unmark as a child’s room'),
+      run: (doc, args) => done({ ...doc, shell: { ...doc.shell, childRoom: args.childRoom } }),
+    },
+  );
+}
+
 /**
  * Sets a wall thickness in mm: without `wall`, the room's thickness for every wall without an
  * override; with `wall`, that wall's override (null clears it back to the room's thickness).

@@ -110,6 +110,9 @@ describe('updatePiece', () => {
     expect(
       pieceOf(applied(next, updatePiece('opt-a', 'chair', { supplierUrl: null, price: null })), 'opt-a', 'chair'),
     ).not.toHaveProperty('supplierUrl');
+    expect(pieceOf(applied(next, updatePiece('opt-a', 'chair', { fixedToWall: true })), 'opt-a', 'chair')?.fixedToWall).toBe(
+      true,
+    );
     expect(updatePiece('opt-a', 'chair', { name: 'Reading chair' }).label(doc)).toBe('Rename Armchair');
     expect(updatePiece('opt-a', 'chair', { price: 1 }).label(doc)).toBe('Change Armchair');
   });

@@ -34,6 +34,8 @@ export interface PiecePatch {
   settings?: Piece['settings'] | null;
   accentColour?: string | null;
   accentFinishId?: string | null;
+  /** Marked as fixed to the wall against tipping (tall storage). */
+  fixedToWall?: boolean;
 }
 
 /** New box sizes in mm; the centre stays where it is. */
@@ -57,6 +59,7 @@ const PATCHABLE: ReadonlySet<string> = new Set([
   'settings',
   'accentColour',
   'accentFinishId',
+  'fixedToWall',
 ]);
 
 function findPiece(doc: EditorDoc, optionId: string, id: string): Piece | undefined {

@@ -98,6 +98,8 @@ export const pieceSchema = z.object({
     .regex(/^#[0-9a-fA-F]{6}$/, { message: 'must be a colour like #a0b1c2' })
     .optional(),
   accentFinishId: docIdText.nullable().optional(),
+  /** The designer marks the piece as fixed to the wall against tipping; the fit check warns of tall storage that is not. */
+  fixedToWall: z.boolean().optional(),
 });
 export type Piece = z.infer<typeof pieceSchema>;
 export type PieceInput = z.input<typeof pieceSchema>;

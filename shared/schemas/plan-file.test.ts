@@ -32,6 +32,23 @@ describe('readPlanFile', () => {
     expect(result.ok && [result.plan.room.wallHeight, result.plan.room.wallThickness]).toEqual([2600, 100]);
   });
 
+  it('reads a version 1 file without the child’s room mark or fixed pieces as before, and with them', () => {
+    const before = readPlanFile(example);
+    expect(before.ok && [before.plan.room.childRoom, 'fixedToWall' in before.plan.option.pieces[0]!]).toEqual([false, false]);
+    const plan = JSON.parse(example) as { room: Record<string, unknown>; option: { pieces: Record<string, unknown>[] } };
+    plan.room.childRoom = true;
+    plan.option.pieces[0]!.fixedToWall = true;
+    const marked = readPlanFile(plan);
+    if (!marked.ok) throw new Error(marked.errors.join('\n'));
+    expect([marked.plan.room.childRoom, marked.plan.option.pieces[0]!.fixedToWall]).toEqual([true, true]);
+    expect(readPlanFile(writePlanFile(marked.plan))).toEqual(marked);
+    plan.room.childRoom = 'yes';
+    expect(readPlanFile(plan)).toEqual({
+      ok: false,
+      errors: ['room.childRoom: Invalid input: expected boolean, received string'],
+    });
+  });
+
   it('names the field of a schema error', () => {
     const result = readPlanFile(
       withRoom((room) => {

@@ -104,6 +104,8 @@ export const roomShellSchema = z
       .array(openingSchema)
       .max(ROOM_LIMITS.openings, `has more than ${ROOM_LIMITS.openings} openings (a room has at most ${ROOM_LIMITS.openings})`)
       .default([]),
+    /** The designer marks the room as a child's: the fit check then warns of climbable pieces near its windows. */
+    childRoom: z.boolean().default(false),
   })
   .superRefine((shell, ctx) => {
     const problem = outlineSizeProblem(shell.outline);

@@ -3,7 +3,7 @@
 import { doorSwing, type DoorSwing } from '../../geometry/openings';
 import { layoutShellWalls } from '../../geometry/walls';
 import { addScaled, directionDeg } from '../../geometry/vec';
-import type { RoomShell } from '../../schemas/room';
+import type { Door, RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
 import { isWalkedOver } from '../../geometry/piece';
 import { convexOverlap, TOUCH_TOLERANCE_MM, type PieceBox } from './boxes';
@@ -22,20 +22,35 @@ export function swingSector(swing: DoorSwing): [number, number][] {
   return sector;
 }
 
+/** A door that opens into the room, with its leaf's sweep and the quarter disc it covers (plan mm). */
+export interface InwardSwing {
+  door: Door;
+  swing: DoorSwing;
+  sector: [number, number][];
+}
+
+/** Every door of the shell that swings into the room, on a wall the outline has. */
+export function inwardSwings(shell: RoomShell): InwardSwing[] {
+  const walls = layoutShellWalls(shell);
+  const found: InwardSwing[] = [];
+  for (const opening of shell.openings) {
+    if (opening.type !== 'door' || opening.swing !== 'in') continue;
+    const wall = walls[opening.wall];
+    if (!wall) continue;
+    const swing = doorSwing(wall, opening);
+    found.push({ door: opening, swing, sector: swingSector(swing) });
+  }
+  return found;
+}
+
 /**
  * `door-swing`: placed boxes (plan mm) below a door's head that stand in the quarter disc its leaf
  * sweeps into this room. Doors opening out sweep the next room, which this check cannot see. Rugs
  * are left out: interior doors are trimmed to pass over floor coverings (common practice).
  */
 export function findDoorSwings(shell: RoomShell, boxes: readonly PieceBox[]): Finding[] {
-  const walls = layoutShellWalls(shell);
   const findings: Finding[] = [];
-  for (const opening of shell.openings) {
-    if (opening.type !== 'door' || opening.swing !== 'in') continue;
-    const wall = walls[opening.wall];
-    if (!wall) continue;
-    const swing = doorSwing(wall, opening);
-    const sector = swingSector(swing);
+  for (const { door: opening, swing, sector } of inwardSwings(shell)) {
     for (const box of boxes) {
       if (isWalkedOver(box.piece) || box.bottomMm >= opening.height) continue;
       // The sector lies within a leaf's length of the hinge and the box within its half-diagonal of

@@ -40,10 +40,13 @@ describe('checkFit', () => {
       'overlap',
       'outside-room',
       'door-swing',
+      'cannot-open',
       'window-blocked',
       'narrow-walkway',
       'unreachable',
       'too-big-for-door',
+      'climbable-near-window',
+      'tall-not-fixed',
     ];
     const ranks = findings.map((f) => order.indexOf(f.kind));
     expect(ranks).toEqual([...ranks].sort((a, b) => a - b));

@@ -4,12 +4,14 @@ import type { RoomShell } from '../../schemas/room';
 import { findingKindSchema, type Finding } from './finding';
 import { DEFAULT_WALKWAY_MM } from './clearances';
 import { placedBoxes } from './boxes';
+import { findCannotOpen } from './cannot-open';
 import { findDoorSwings } from './door-swing';
 import { findTooBigForDoor } from './door-fit';
 import { findOverlaps } from './overlap';
 import { findOutsideRoom } from './outside-room';
 import { findWalkwayProblems } from './walkway';
 import { findBlockedWindows } from './window';
+import { findClimbableNearWindows, findTallNotFixed } from './safety';
 
 export interface FitCheckOptions {
   /** Clear width (mm) a route from a door to a piece's front needs; DEFAULT_WALKWAY_MM when left out. */
@@ -42,8 +44,11 @@ export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: Fi
     ...findOverlaps(boxes),
     ...findOutsideRoom(shell, boxes),
     ...findDoorSwings(shell, boxes),
+    ...findCannotOpen(shell, boxes),
     ...findBlockedWindows(shell, boxes),
     ...findWalkwayProblems(shell, boxes, walkwayMm),
     ...findTooBigForDoor(shell, boxes),
+    ...findClimbableNearWindows(shell, boxes),
+    ...findTallNotFixed(boxes),
   ].sort(compareFindings);
 }

@@ -141,6 +141,7 @@ function Editor({
             finding.between && finding.measuredMm !== undefined
               ? { a: finding.between[0], b: finding.between[1], label: formatLength(finding.measuredMm, unit) }
               : undefined,
+          zone: finding.zone,
         }
       : null;
   const flaggedPieceIds = step === 'check' ? [...new Set(findings.flatMap((f) => f.pieces))] : [];

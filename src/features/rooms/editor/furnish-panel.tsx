@@ -1,6 +1,8 @@
 // The room editor's Furnish step: the catalogue to add pieces from, the holding area, and the
-// selected piece's fields (name, size, turn, height above the floor, finishes, price, supplier).
+// selected piece's fields (name, size, turn, height above the floor, finishes, price, supplier,
+// and for tall storage whether it is fixed to the wall).
 import { useState } from 'react';
+import { isTallStorage } from '../../../../shared/analysis/fit/safety';
 import { isWebLink, type Piece } from '../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import { CATALOGUE, CATALOGUE_GROUPS, pieceFromCatalogue, type CatalogueId } from '../../../../shared/catalogue/catalogue';
@@ -416,6 +418,17 @@ function PieceProperties({
         onCommit={(v) => field({ supplierUrl: v })}
         disabled={readOnly}
       />
+      {isTallStorage(piece) && (
+        <label className="flex items-center gap-2 text-sm text-ink">
+          <input
+            type="checkbox"
+            disabled={readOnly}
+            checked={piece.fixedToWall === true}
+            onChange={(e) => field({ fixedToWall: e.target.checked })}
+          />
+          Fixed to the wall
+        </label>
+      )}
       {piece.height >= TALL_PIECE_MM && (
         <p className="rounded-lg bg-ochre-wash px-3 py-2 text-sm text-ochre">
           A tall piece can tip over: fix it to the wall, especially where children live (see the furniture maker’s anchoring kit).

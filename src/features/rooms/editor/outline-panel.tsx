@@ -1,9 +1,10 @@
-// The room editor's Outline step: ceiling height, wall thickness and each wall's length, plus
-// measuring walls in turn ("420 l 135") to make a new outline.
+// The room editor's Outline step: ceiling height, wall thickness, whether it is a child's room and
+// each wall's length, plus measuring walls in turn ("420 l 135") to make a new outline.
 import { useMemo, useState, type KeyboardEvent } from 'react';
 import type { RoomShell } from '../../../../shared/schemas/room';
 import {
   closeOutlineGap,
+  setChildRoom,
   setOutline,
   setWallHeight,
   setWallLength,
@@ -122,6 +123,19 @@ export function OutlinePanel({
           hint="All walls"
         />
       </div>
+      <label className="flex items-start gap-2 text-sm text-ink">
+        <input
+          type="checkbox"
+          className="mt-1"
+          disabled={readOnly}
+          checked={shell.childRoom}
+          onChange={(e) => commit(setChildRoom(e.target.checked))}
+        />
+        <span>
+          A child’s room
+          <span className="block text-xs text-ink-faint">The check then warns of pieces a child could climb to a window.</span>
+        </span>
+      </label>
       <div>
         <h3 className="mb-2 text-sm font-semibold text-ink">Walls</h3>
         <ol className="flex flex-col gap-1.5">

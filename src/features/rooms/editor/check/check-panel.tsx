@@ -15,10 +15,13 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   overlap: 'Pieces overlap',
   'outside-room': 'Outside the room',
   'door-swing': 'In a door’s swing',
+  'cannot-open': 'Cannot open',
   'window-blocked': 'In front of a window',
   'narrow-walkway': 'Tight to pass',
   unreachable: 'Cannot be reached',
   'too-big-for-door': 'Too big for the doors',
+  'climbable-near-window': 'Climbable near a window',
+  'tall-not-fixed': 'Not fixed to the wall',
 };
 
 export function CheckPanel({

@@ -19,10 +19,14 @@ export const DIMENSION_OFFSET_MM = 350;
 
 export type Selection = { kind: 'piece'; id: string } | { kind: 'opening'; id: string } | { kind: 'wall'; index: number } | null;
 
-/** What the plan marks for a fit check finding: the pieces it names and, for a narrow walkway, the gap. */
+/**
+ * What the plan marks for a fit check finding: the pieces it names, for a narrow walkway the gap, and
+ * for a door or drawer that cannot open the floor it opens into (a plan polygon, mm).
+ */
 export interface Highlight {
   pieceIds: string[];
   gap?: { a: [number, number]; b: [number, number]; label: string };
+  zone?: [number, number][];
 }
 
 export interface PlanLayout {

@@ -95,6 +95,8 @@ export const planStroke = {
   handle: 1.5,
   corner: 1.6,
   gap: 2,
+  /** The floor a blocked door or drawer opens into. */
+  zone: 1,
   draft: 2,
   draftCorner: 1,
   preview: 2,
@@ -107,6 +109,8 @@ export const planDash = {
   /** A piece raised off the floor (not a rug). */
   raisedPiece: [4, 2],
   walkPreview: [6, 4],
+  /** The floor a blocked door or drawer opens into: drawn like a door's swing. */
+  zone: [3, 2.5],
 } as const satisfies Record<string, readonly [number, number]>;
 
 /** An SVG dash array for a pattern at the plan's one-pixel line (plan mm). */
@@ -120,6 +124,8 @@ export const planOpacity = {
   walkedUnder: 0.75,
   pieceFill: 0.95,
   rugFill: 0.8,
+  /** The wash over the floor a blocked door or drawer opens into. */
+  zoneFill: 0.08,
 } as const;
 
 /** Handles and marks: radii in multiples of the plan's one-pixel line, lengths in plan mm. */

@@ -10,6 +10,7 @@ import type { EditorStep } from '../steps';
 import { DimensionsLayer } from './layers/dimensions-layer';
 import { DraftLayer, WalkPreviewLayer } from './layers/drawing-layer';
 import { GapLayer } from './layers/gap-layer';
+import { ZoneLayer } from './layers/zone-layer';
 import { GridLayer } from './layers/grid-layer';
 import { CornerHandles } from './layers/handles-layer';
 import { HoldingLayer } from './layers/holding-layer';
@@ -132,6 +133,7 @@ export function PlanView(props: Props) {
         onPiecePointerDown={g.onPiecePointerDown}
         onTurnPointerDown={g.onTurnPointerDown}
       />
+      {props.highlight?.zone && <ZoneLayer zone={props.highlight.zone} stroke={stroke} />}
       {props.highlight?.gap && <GapLayer gap={props.highlight.gap} stroke={stroke} text={text} />}
       {step === 'outline' && editable && !props.drawing && (
         <CornerHandles outline={shell.outline} stroke={stroke} onPointerDown={g.onCornerPointerDown} />
