@@ -5,13 +5,21 @@
 // for names alone, which no longer count): the layouts here use only pieces those rules leave as
 // they were, and fit-rule-changes.test.ts lists the differences elsewhere.
 import { describe, expect, it } from 'vitest';
-import { checkFit } from '../../shared/analysis/fit';
+import { checkFit as checkFitToday } from '../../shared/analysis/fit';
 import { cleanLayout, gapLayout, pieceInput, plan, walledInLayout } from '../../shared/analysis/fit/test-plans';
 import type { PieceInput } from '../../shared/schemas/option';
 import type { RoomShellInput } from '../../shared/schemas/room';
 import { checkFit as referenceCheckFit } from '../../scripts/bench/reference-fit/index';
 import { largeRoom, typicalRoom } from '../../scripts/bench/typical-room';
 import { seededRandom as random } from '../../server/services/images/generate';
+
+/**
+ * Today's findings of the kinds the frozen reference knows: cannot-open and the two safety kinds
+ * came after it was frozen (their own tests, cannot-open.test.ts and safety.test.ts, hold them).
+ */
+const AFTER_THE_REFERENCE = new Set(['cannot-open', 'climbable-near-window', 'tall-not-fixed']);
+const checkFit = (...args: Parameters<typeof checkFitToday>) =>
+  checkFitToday(...args).filter((f) => !AFTER_THE_REFERENCE.has(f.kind));
 
 type Layout = { room: RoomShellInput; pieces: PieceInput[] };
 type OpeningInput = NonNullable<RoomShellInput['openings']>[number];
