@@ -1,9 +1,10 @@
 // A finding's stable key: what it is about (its kind and the ids it names), never where it stands in the
 // list or where its pieces stand, so a mark the designer puts on a finding follows it while pieces move.
+import { SEEN_LIMITS } from '../../schemas/option';
 import type { Finding } from './finding';
 
-/** Keys longer than this end in a digest of the whole instead (a finding naming every one of many doors). */
-export const FINDING_KEY_MAX_LENGTH = 500;
+/** Keys longer than this (a finding naming every one of many doors) end in a digest of the whole instead: what a seen mark holds. */
+export const FINDING_KEY_MAX_LENGTH = SEEN_LIMITS.keyLength;
 /** How much of a long key is kept readable before its digest. */
 const LONG_KEY_HEAD = FINDING_KEY_MAX_LENGTH - 40;
 
