@@ -1,8 +1,10 @@
 // Tests for the option comparison: free floor share (pieces one walks round, not rugs or wall
-// shelves), the grid cap on very large rooms, and budget, new pieces and findings side by side.
+// shelves), the grid cap on very large rooms, and budget, new pieces and findings (seen ones apart) side by side.
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import { optionDocSchema } from '../schemas/option';
+import { checkFit } from './fit';
+import { findingKey } from './fit/finding-key';
 import { FREE_FLOOR_CELL_MM, MAX_FREE_FLOOR_CELLS, compareOption, freeFloorCellMm, freeFloorShare } from './compare';
 import { shell, library, defaults, piece } from './test-rooms';
 
@@ -49,8 +51,21 @@ describe('freeFloorShare and compareOption', () => {
       budget: 200,
       newPieceCount: 2,
       findingCount: 1,
+      seenFindingCount: 0,
       unpricedCount: 0,
     });
     expect(compareOption(shell, doc, library, defaults).freeFloorPercent).toBeCloseTo(100 - (0.25 / 12) * 100, 0);
+  });
+
+  it('counts the findings marked as seen apart, and not a mark whose finding went away', () => {
+    const pieces = [piece({ id: 'a' }), piece({ id: 'b' })];
+    const [overlap] = checkFit(shell, optionDocSchema.parse({ pieces }).pieces);
+    const at = '2026-12-03T14:00:00.000Z';
+    const seen = [
+      { key: findingKey(overlap!), note: 'a pair, on purpose', at },
+      { key: findingKey({ kind: 'unreachable', pieces: ['gone'], openings: [] }), note: '', at },
+    ];
+    const doc = optionDocSchema.parse({ pieces, seen });
+    expect(compareOption(shell, doc, library, defaults)).toMatchObject({ findingCount: 1, seenFindingCount: 1 });
   });
 });

@@ -1,9 +1,10 @@
 // Comparing an option with the others of its room: its budget, unpriced lines, new pieces, fit
-// findings and the share of floor left free, as the compare table puts them side by side.
+// findings (open and seen apart) and the share of floor left free, as the compare table puts them side by side.
 import type { RoomShell } from '../schemas/room';
 import type { OptionDoc, Piece } from '../schemas/option';
 import { boundsMm } from '../geometry/polygon';
 import { checkFit } from './fit';
+import { sortBySeen } from './seen-findings';
 import { blocksWalking, placedBoxes } from './fit/boxes';
 import { FREE, WALL, rasteriseFloor } from './fit/floor-grid';
 import type { FinishLookup } from './finish-takeoff';
@@ -46,7 +47,10 @@ export interface OptionComparison {
   budget: number;
   unpricedCount: number;
   newPieceCount: number;
+  /** Every finding of the fit check, open or seen. */
   findingCount: number;
+  /** Of those, the ones the designer marked as seen and intended. */
+  seenFindingCount: number;
   /** Free floor as a percentage, one decimal. */
   freeFloorPercent: number;
 }
@@ -59,11 +63,13 @@ export function compareOption(
   settings: TakeoffSettings,
 ): OptionComparison {
   const { totals } = buildSchedule(shell, doc, finishes, settings);
+  const findings = checkFit(shell, doc.pieces);
   return {
     budget: totals.budget,
     unpricedCount: totals.unpricedCount,
     newPieceCount: totals.newPieceCount,
-    findingCount: checkFit(shell, doc.pieces).length,
+    findingCount: findings.length,
+    seenFindingCount: sortBySeen(findings, doc.seen).seen.length,
     freeFloorPercent: Math.round(freeFloorShare(shell, doc.pieces) * 1000) / 10,
   };
 }

@@ -31,7 +31,9 @@ export type CommandName =
   | 'removePiece'
   | 'placePiece'
   | 'holdPiece'
-  | 'assignFinish';
+  | 'assignFinish'
+  | 'markSeen'
+  | 'unmarkSeen';
 
 /** A command's own verdict: the new document, or why it will not run (a fragment such as "there is no corner 7"). */
 export type RunResult = { ok: true; doc: EditorDoc } | { ok: false; reason: string };

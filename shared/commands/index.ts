@@ -30,6 +30,7 @@ export {
   type PieceSize,
 } from './piece-commands';
 export { assignFinish, type FinishSurface } from './finish-commands';
+export { markSeen, unmarkSeen } from './seen-commands';
 export {
   applyToHistory,
   canRedo,

@@ -1,5 +1,5 @@
 // Tests for merging two people's edits of one room: mergeShell (ceiling height, child's room, openings, outline,
-// falling back to mine when the result cannot be drawn) and mergeOptionDoc (pieces, finishes).
+// falling back to mine when the result cannot be drawn) and mergeOptionDoc (pieces, finishes, seen marks).
 import { describe, expect, it } from 'vitest';
 import { roomShellSchema } from '../schemas/room';
 import { optionDocSchema } from '../schemas/option';
@@ -96,5 +96,36 @@ describe('mergeOptionDoc', () => {
     const theirs = { ...doc, finishes: { ...doc.finishes, ceiling: 'white' } };
     const merged = mergeOptionDoc(doc, mine, theirs);
     expect(merged.finishes).toEqual({ floor: 'oak', ceiling: 'white', walls: null, wallOverrides: { '2': 'sage' } });
+  });
+
+  it('merges seen marks finding by finding: my new and removed marks and their changed note all count', () => {
+    const at = '2026-12-03T14:00:00.000Z';
+    const base = {
+      ...doc,
+      seen: [
+        { key: 'kept', note: 'old', at },
+        { key: 'dropped', note: '', at },
+      ],
+    };
+    const mine = {
+      ...base,
+      seen: [
+        { key: 'kept', note: 'old', at },
+        { key: 'mine', note: 'new here', at },
+      ],
+    };
+    const theirs = {
+      ...base,
+      seen: [
+        { key: 'kept', note: 'their note', at },
+        { key: 'dropped', note: '', at },
+        { key: 'theirs', note: '', at },
+      ],
+    };
+    expect(mergeOptionDoc(base, mine, theirs).seen).toEqual([
+      { key: 'kept', note: 'their note', at },
+      { key: 'theirs', note: '', at },
+      { key: 'mine', note: 'new here', at },
+    ]);
   });
 });

@@ -1,7 +1,7 @@
 // Three-way merges for a save conflict: what this tab started from (base), what it has now (mine)
 // and what someone else saved (theirs). Whatever this tab changed wins; everything else is theirs,
 // so neither person's change is lost. Lists of things with ids merge item by item.
-import type { FinishAssignments, OptionDoc, Piece } from '../schemas/option';
+import { SEEN_LIMITS, type FinishAssignments, type OptionDoc, type Piece, type SeenMark } from '../schemas/option';
 import type { Opening, RoomShell } from '../schemas/room';
 import { validateRoomShell } from '../geometry/validate';
 
@@ -11,20 +11,25 @@ function pick<T>(base: T, mine: T, theirs: T): T {
   return same(mine, base) ? theirs : mine;
 }
 
-/** Items with ids: mine where this tab added or changed them, gone where this tab removed them, else theirs; theirs' order first. */
-function mergeById<T extends { id: string }>(base: readonly T[], mine: readonly T[], theirs: readonly T[]): T[] {
-  const baseById = new Map(base.map((x) => [x.id, x]));
-  const mineById = new Map(mine.map((x) => [x.id, x]));
+/** Items with keys: mine where this tab added or changed them, gone where this tab removed them, else theirs; theirs' order first. */
+function mergeByKey<T>(key: (item: T) => string, base: readonly T[], mine: readonly T[], theirs: readonly T[]): T[] {
+  const baseByKey = new Map(base.map((x) => [key(x), x]));
+  const mineByKey = new Map(mine.map((x) => [key(x), x]));
   const out: T[] = [];
   for (const t of theirs) {
-    const b = baseById.get(t.id);
-    const m = mineById.get(t.id);
+    const b = baseByKey.get(key(t));
+    const m = mineByKey.get(key(t));
     if (b && !m) continue; // this tab removed it
     out.push(m && b && !same(m, b) ? m : m && !b ? m : t);
   }
-  const seen = new Set(out.map((x) => x.id));
-  for (const m of mine) if (!seen.has(m.id) && !baseById.has(m.id)) out.push(m); // added here
+  const kept = new Set(out.map(key));
+  for (const m of mine) if (!kept.has(key(m)) && !baseByKey.has(key(m))) out.push(m); // added here
   return out;
+}
+
+/** Items with ids, merged as mergeByKey does. */
+function mergeById<T extends { id: string }>(base: readonly T[], mine: readonly T[], theirs: readonly T[]): T[] {
+  return mergeByKey((x) => x.id, base, mine, theirs);
 }
 
 /** A room shell (plan mm) combining both tabs' changes; falls back to mine when the combination cannot be drawn. */
@@ -42,7 +47,7 @@ export function mergeShell(base: RoomShell, mine: RoomShell, theirs: RoomShell):
   return validateRoomShell(merged).length === 0 ? merged : mine;
 }
 
-/** An option document combining both tabs' changes, piece by piece and surface by surface. */
+/** An option document combining both tabs' changes, piece by piece, surface by surface and seen mark by seen mark. */
 export function mergeOptionDoc(base: OptionDoc, mine: OptionDoc, theirs: OptionDoc): OptionDoc {
   const finishes: FinishAssignments = {
     floor: pick(base.finishes.floor, mine.finishes.floor, theirs.finishes.floor),
@@ -58,5 +63,7 @@ export function mergeOptionDoc(base: OptionDoc, mine: OptionDoc, theirs: OptionD
     if (m === undefined) delete finishes.wallOverrides[k];
     else finishes.wallOverrides[k] = m;
   }
-  return { pieces: mergeById<Piece>(base.pieces, mine.pieces, theirs.pieces), finishes };
+  // Seen marks merge finding by finding; past the bound the oldest go, as a new mark pushes them out.
+  const seen = mergeByKey<SeenMark>((m) => m.key, base.seen, mine.seen, theirs.seen).slice(-SEEN_LIMITS.marks);
+  return { pieces: mergeById<Piece>(base.pieces, mine.pieces, theirs.pieces), finishes, seen };
 }

@@ -1,7 +1,8 @@
 // The option schemas: limits on an option and its pieces, its name and note, supplier links (web
-// links only), the piece, the finish assignments of its surfaces, and the stored option document.
+// links only), the piece, the finish assignments of its surfaces, the fit-check findings marked as
+// seen, and the stored option document.
 import { z } from 'zod';
-import { docIdText, nameText, noteText } from './common';
+import { docIdText, isCleanName, nameText, noteText } from './common';
 import { ROOM_LIMITS, boundedMm } from './room';
 import { checkKindSettings, pieceKindSchema, pieceSettingsSchema } from './piece-kind';
 
@@ -123,16 +124,51 @@ export const finishAssignmentsSchema = z.object({
 });
 export type FinishAssignments = z.infer<typeof finishAssignmentsSchema>;
 
-/** The option document stored as jsonb; its name and note live in table columns. */
+/**
+ * Bounds on an option's seen marks: more marks than any option has findings, a note of a line or
+ * two, and a finding's key (findingKey keeps to it) — common practice.
+ */
+export const SEEN_LIMITS = { marks: 200, noteLength: 200, keyLength: 500 } as const;
+
+/**
+ * A fit-check finding the designer has seen and means to keep: the finding's stable key (findingKey),
+ * a short note saying why, and when it was marked (ISO 8601). A mark whose finding no longer occurs
+ * is kept, unshown, in case the finding comes back.
+ */
+export const seenMarkSchema = z.object({
+  key: z
+    .string()
+    .min(1, 'must name a finding')
+    .max(SEEN_LIMITS.keyLength, `must be at most ${SEEN_LIMITS.keyLength} characters`)
+    .refine(isCleanName, 'must hold no control characters'),
+  note: nameText(SEEN_LIMITS.noteLength, `must be at most ${SEEN_LIMITS.noteLength} characters`),
+  at: z.iso.datetime({ offset: true, message: 'must be a date and time (ISO 8601)' }),
+});
+export type SeenMark = z.infer<typeof seenMarkSchema>;
+
+/** An option's seen marks, oldest first, at most one per finding. */
+export const seenMarksSchema = z
+  .array(seenMarkSchema)
+  .max(SEEN_LIMITS.marks, `has more than ${SEEN_LIMITS.marks} seen marks`)
+  .superRefine((marks, ctx) => {
+    const keys = new Set<string>();
+    marks.forEach((mark, index) => {
+      if (keys.has(mark.key)) ctx.addIssue({ code: 'custom', path: [index, 'key'], message: 'marks this finding twice' });
+      keys.add(mark.key);
+    });
+  });
+
 /** Pieces of an option or a plan file, each with only the settings its kind takes. */
 export const piecesSchema = z
   .array(pieceSchema)
   .max(OPTION_LIMITS.pieces, `has more than ${OPTION_LIMITS.pieces} pieces (an option has at most ${OPTION_LIMITS.pieces})`)
   .superRefine(checkKindSettings);
 
+/** The option document stored as jsonb; its name and note live in table columns. Documents saved before seen marks read with none. */
 export const optionDocSchema = z.object({
   pieces: piecesSchema.default([]),
   finishes: finishAssignmentsSchema.default({ floor: null, ceiling: null, walls: null, wallOverrides: {} }),
+  seen: seenMarksSchema.default([]),
 });
 export type OptionDoc = z.infer<typeof optionDocSchema>;
 export type OptionDocInput = z.input<typeof optionDocSchema>;

@@ -35,7 +35,7 @@ describe('rooms', () => {
     expect(res.status).toBe(201);
     expect(res.body.room).toMatchObject({ name: 'Living room', version: 1, shell: { wallThickness: 100, openings: [] } });
     expect(res.body.options).toEqual([
-      expect.objectContaining({ position: 0, doc: { pieces: [], finishes: expect.any(Object) } }),
+      expect.objectContaining({ position: 0, doc: { pieces: [], finishes: expect.any(Object), seen: [] } }),
     ]);
     const list = await agent.get(`/api/projects/${projectId}/rooms`);
     // 4.2 m × 3.6 m = 15.12 m² (the README's plan-file example).

@@ -1,8 +1,13 @@
-// Take-off, schedules (JSON and CSV) and the comparison of options, through the API.
+// Take-off, schedules (JSON and CSV) and the comparison of options (findings marked as seen counted
+// apart), through the API.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { addMember, createTestApp, signUpStudio, type TestApp } from '../setup/app';
 import { csvHeader } from '../../server/features/schedules/schedules.service';
+import { checkFit } from '../../shared/analysis/fit';
+import { findingKey } from '../../shared/analysis/fit/finding-key';
+import { optionDocSchema } from '../../shared/schemas/option';
+import { roomShellSchema } from '../../shared/schemas/room';
 
 const CSV_HEADER = csvHeader('GBP');
 
@@ -310,5 +315,39 @@ describe('GET /api/projects/:projectId/compare', () => {
 
   it('answers 404 to another studio', async () => {
     expect((await stranger.get(`/api/projects/${projectId}/compare`)).status).toBe(404);
+  });
+
+  it('counts the findings marked as seen apart from the open ones, from the saved option', async () => {
+    const project = (await owner.post('/api/projects').send({ name: 'Seen flat', newClient: { name: 'B household' } })).body
+      .project.id;
+    const room = (await owner.post(`/api/projects/${project}/rooms`).send({ name: 'Study', shell: SHELL })).body;
+    const option = room.options[0];
+    // Two pairs of chairs, each pair on one spot: at least two findings.
+    const chair = { width: 500, depth: 500, height: 800, status: 'new' };
+    const pieces = [
+      { id: 'a', name: 'Chair', x: 1500, y: 2000, ...chair },
+      { id: 'b', name: 'Chair', x: 1500, y: 2000, ...chair },
+      { id: 'c', name: 'Chair', x: 3500, y: 2000, ...chair },
+      { id: 'd', name: 'Chair', x: 3500, y: 2000, ...chair },
+    ];
+    const findings = checkFit(roomShellSchema.parse(SHELL), optionDocSchema.parse({ pieces }).pieces);
+    expect(findings.length).toBeGreaterThanOrEqual(2);
+    const seen = [
+      { key: findingKey(findings[0]!), note: 'Two chairs stacked, on purpose', at: '2026-12-03T14:00:00.000Z' },
+      // A finding that no longer occurs: kept in the document, not counted.
+      { key: findingKey({ kind: 'unreachable', pieces: ['gone'], openings: [] }), note: '', at: '2026-12-03T14:00:00.000Z' },
+    ];
+    const saved = await owner.put(`/api/options/${option.id}`).send({ version: option.version, doc: { pieces, seen } });
+    expect(saved.status).toBe(200);
+    expect(saved.body.option.doc.seen).toEqual(seen);
+
+    const compared = (await viewer.get(`/api/projects/${project}/compare`)).body.rooms[0].options[0];
+    expect(compared).toMatchObject({ findingCount: findings.length, seenFindingCount: 1 });
+
+    const tooLong = await owner
+      .put(`/api/options/${option.id}`)
+      .send({ version: saved.body.option.version, doc: { pieces, seen: [{ ...seen[0], note: 'x'.repeat(201) }] } });
+    expect(tooLong.status).toBe(400);
+    expect(Object.keys(tooLong.body.error.fields ?? {})).toContain('doc.seen[0].note');
   });
 });

@@ -13,6 +13,7 @@ import {
 } from 'react';
 import { Link } from 'react-router';
 import type { Command } from '../../../../shared/commands';
+import type { Finding } from '../../../../shared/analysis/fit/finding';
 import type { Piece } from '../../../../shared/schemas/option';
 import type { LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
@@ -25,6 +26,8 @@ import { useRoom, type RoomDetail } from '../api/rooms';
 import { formatLength } from '../../../../shared/units/length';
 import { CheckPanel } from './check/check-panel';
 import { useFitCheck } from './check/use-fit-check';
+import { useSeenMarks } from './check/use-seen-marks';
+import { FindingsBadge } from './check/findings-badge';
 import { FinishesPanel, targetOf } from './finishes-panel';
 import { sceneFinishesFor } from './scene-finishes';
 import type { Finish } from '../../../../shared/schemas/finish';
@@ -68,6 +71,8 @@ export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: st
 
 /** One empty list for an option-less moment, so hooks keyed on the pieces do not re-run each render. */
 const NO_PIECES: Piece[] = [];
+/** The same for the findings before the first check answers. */
+const NO_FINDINGS: Finding[] = [];
 
 const SAVE_TEXT: Record<SaveState, string> = {
   saved: 'All changes saved',
@@ -131,7 +136,8 @@ function Editor({
     }
   };
   const fit = useFitCheck(editor.doc.shell, pieces, walkwayMm);
-  const findings = fit?.findings ?? [];
+  const findings = fit?.findings ?? NO_FINDINGS;
+  const seenMarks = useSeenMarks(editor, activeOptionId, findings);
   const finding = chosenFinding !== null ? findings[chosenFinding] : undefined;
   const highlight =
     step === 'check' && finding
@@ -144,7 +150,8 @@ function Editor({
           zone: finding.zone,
         }
       : null;
-  const flaggedPieceIds = step === 'check' ? [...new Set(findings.flatMap((f) => f.pieces))] : [];
+  // Pieces of findings marked as seen are not flagged: the designer means them.
+  const flaggedPieceIds = step === 'check' ? [...new Set(seenMarks.open.flatMap((f) => f.finding.pieces))] : [];
   const finishIndex = useMemo(() => new Map(finishes.map((f) => [f.id, f])), [finishes]);
   const sceneFinishes = useMemo(() => sceneFinishesFor(option, finishIndex), [option, finishIndex]);
   const select = useCallback((s: Selection) => {
@@ -281,6 +288,10 @@ function Editor({
             unit={unit}
             selected={chosenFinding}
             onChoose={setChosenFinding}
+            marks={seenMarks.marks}
+            onMark={seenMarks.onMark}
+            onUnmark={seenMarks.onUnmark}
+            readOnly={optionReadOnly}
           />
         );
     }
@@ -302,6 +313,7 @@ function Editor({
     walkwayMm,
     setWalkwayMm,
     chosenFinding,
+    seenMarks,
     finishes,
     finishTarget,
     select,
@@ -523,14 +535,7 @@ function Editor({
               <span className="flex items-center text-sm font-bold text-ink">
                 <span className="mr-1.5 text-ink-faint">{i + 1}</span>
                 {s.label}
-                {s.id === 'check' && findings.length > 0 && (
-                  <span
-                    className="ml-auto rounded-full bg-clay px-1.5 text-xs text-white"
-                    aria-label={`${findings.length} findings`}
-                  >
-                    {findings.length}
-                  </span>
-                )}
+                {s.id === 'check' && <FindingsBadge open={seenMarks.open.length} seen={seenMarks.seen.length} />}
               </span>
               <span className="hidden text-xs leading-snug text-ink-soft lg:block">{s.hint}</span>
             </button>

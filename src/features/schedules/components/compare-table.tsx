@@ -60,11 +60,22 @@ export function CompareTable({ projectId, room }: { projectId: string; room: Com
             <th scope="row" className={rowHead}>
               Fit check findings
             </th>
-            {room.options.map((o) => (
-              <td key={o.id} className={`${cell} ${o.findingCount > 0 ? 'text-clay' : ''} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
-                {o.findingCount === 0 ? 'None' : o.findingCount}
-              </td>
-            ))}
+            {room.options.map((o) => {
+              const open = o.findingCount - o.seenFindingCount;
+              return (
+                <td key={o.id} className={`${cell} ${open > 0 ? 'text-clay' : ''} ${o.chosen ? 'bg-pine-wash/60' : ''}`}>
+                  {o.findingCount === 0 ? (
+                    'None'
+                  ) : o.seenFindingCount === 0 ? (
+                    o.findingCount
+                  ) : (
+                    <>
+                      {open} open <span className="text-ink-faint">· {o.seenFindingCount} seen</span>
+                    </>
+                  )}
+                </td>
+              );
+            })}
           </tr>
           <tr>
             <th scope="row" className={rowHead}>

@@ -1,14 +1,16 @@
 // The room editor's Check step: the walkway width setting, the fit check findings (pick one to highlight
-// its pieces), reminders for tall pieces, and the room's take-off.
+// its pieces; open ones first, then those marked as seen), reminders for tall pieces, and the room's take-off.
 import { MAX_WALKWAY_MM, MIN_WALKWAY_MM } from '../../../../../shared/analysis/fit/clearances';
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
-import type { Piece } from '../../../../../shared/schemas/option';
+import { sortBySeen } from '../../../../../shared/analysis/seen-findings';
+import type { Piece, SeenMark } from '../../../../../shared/schemas/option';
 import type { RoomShell } from '../../../../../shared/schemas/room';
 import { formatLength, type LengthUnit } from '../../../../../shared/units/length';
 import { LengthField } from '../../../../components/ui/length-field';
 import { Notice, Spinner } from '../../../../components/ui/layout';
 import { TakeoffTable } from '../../components/takeoff-table';
 import { TALL_PIECE_MM } from '../furnish-panel';
+import { FindingItem, type MarkAnswer } from './finding-item';
 import type { FitResult } from './use-fit-check';
 
 const KIND_TITLE: Record<Finding['kind'], string> = {
@@ -24,6 +26,12 @@ const KIND_TITLE: Record<Finding['kind'], string> = {
   'tall-not-fixed': 'Not fixed to the wall',
 };
 
+/** The findings as listed: the open ones, then the seen ones, each in the check's order. */
+function listed(findings: readonly Finding[], marks: readonly SeenMark[]) {
+  const { open, seen } = sortBySeen(findings, marks);
+  return [...open, ...seen];
+}
+
 export function CheckPanel({
   shell,
   pieces,
@@ -33,6 +41,10 @@ export function CheckPanel({
   unit,
   selected,
   onChoose,
+  marks,
+  onMark,
+  onUnmark,
+  readOnly,
 }: {
   shell: RoomShell;
   pieces: Piece[];
@@ -40,8 +52,15 @@ export function CheckPanel({
   walkwayMm: number;
   onWalkway: (mm: number) => void;
   unit: LengthUnit;
+  /** The finding picked, by its place in `result.findings`. */
   selected: number | null;
   onChoose: (index: number | null) => void;
+  /** The option's seen marks. */
+  marks: readonly SeenMark[];
+  onMark: (key: string, note: string) => MarkAnswer;
+  onUnmark: (key: string) => void;
+  /** Whether marks may be changed (not while viewing, nor on a decided option). */
+  readOnly: boolean;
 }) {
   const tall = pieces.filter((p) => p.placed && p.height >= TALL_PIECE_MM);
   return (
@@ -84,23 +103,18 @@ export function CheckPanel({
           aria-label="Findings"
           aria-busy={result.pending}
         >
-          {result.findings.map((f, i) => (
-            <li key={`${f.kind}-${f.pieces.join('-')}-${f.openings.join('-')}`}>
-              <button
-                type="button"
-                aria-pressed={selected === i}
-                onClick={() => onChoose(selected === i ? null : i)}
-                className="w-full rounded-lg border border-clay/30 bg-white px-3 py-2 text-left hover:border-clay aria-pressed:border-clay aria-pressed:bg-clay-wash"
-              >
-                <span className="block text-xs font-bold tracking-wide text-clay uppercase">{KIND_TITLE[f.kind]}</span>
-                <span className="block text-sm text-ink">{f.message}</span>
-                {f.measuredMm !== undefined && f.requiredMm !== undefined && (
-                  <span className="block text-xs text-ink-faint">
-                    {formatLength(f.measuredMm, unit)} where {formatLength(f.requiredMm, unit)} is usual
-                  </span>
-                )}
-              </button>
-            </li>
+          {listed(result.findings, marks).map((row) => (
+            <FindingItem
+              key={row.key}
+              row={row}
+              title={KIND_TITLE[row.finding.kind]}
+              unit={unit}
+              selected={selected === row.index}
+              onChoose={() => onChoose(selected === row.index ? null : row.index)}
+              onMark={onMark}
+              onUnmark={onUnmark}
+              readOnly={readOnly}
+            />
           ))}
         </ol>
       )}
