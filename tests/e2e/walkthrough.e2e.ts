@@ -360,6 +360,39 @@ async function settledCamera(page: Page, view: Locator): Promise<[number, number
   }
 }
 
+/** Which way the view's camera looks (a unit vector, scene metres). */
+const lookOf = async (view: Locator) =>
+  (await view.getAttribute('data-look'))!.split(',').map(Number) as [number, number, number];
+
+/**
+ * Where a point of the room (scene metres) is on the page, from the camera figures the view
+ * publishes (data-camera, data-look, data-fov) and its size; `inView` when well inside the picture
+ * and in front of the camera.
+ */
+async function screenOf(view: Locator, point: [number, number, number]): Promise<{ x: number; y: number; inView: boolean }> {
+  const [eye, look, fov, b] = [await cameraOf(view), await lookOf(view), await num(view, 'fov'), (await view.boundingBox())!];
+  const d = point.map((v, k) => v - eye[k]);
+  const dot = (a: number[], c: number[]) => a[0] * c[0] + a[1] * c[1] + a[2] * c[2];
+  // The camera's right (look × up, up being +y) and its own up (right × look); no roll in either rig.
+  const flat = Math.hypot(look[0], look[2]);
+  const right = [-look[2] / flat, 0, look[0] / flat];
+  const up = [
+    right[1] * look[2] - right[2] * look[1],
+    right[2] * look[0] - right[0] * look[2],
+    right[0] * look[1] - right[1] * look[0],
+  ];
+  const depth = dot(d, look);
+  const tanV = Math.tan((fov * Math.PI) / 360);
+  const tanH = tanV * (b.width / b.height);
+  const ndcX = dot(d, right) / depth / tanH;
+  const ndcY = dot(d, up) / depth / tanV;
+  return {
+    x: b.x + ((ndcX + 1) / 2) * b.width,
+    y: b.y + ((1 - ndcY) / 2) * b.height,
+    inView: depth > 0.1 && Math.abs(ndcX) < 0.8 && Math.abs(ndcY) < 0.8,
+  };
+}
+
 /** Share of sampled canvas pixels that differ from the background colour: a blank canvas is 0. */
 async function drawnShare(view: Locator): Promise<number> {
   return view.locator('canvas').evaluate((canvas: HTMLCanvasElement) => {
@@ -524,6 +557,62 @@ describe('the walk-through', () => {
 
     const fps = await measureFps(page, view);
     figures.walkFps = fps;
+    await context.close();
+  });
+
+  it('says briefly when a clicked spot of floor cannot be reached (behind the open door leaf), and walks where it can', async () => {
+    const link = await testRoomPresentation(designer.page);
+    const { context, page, view } = await openClient(link);
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await expect.poll(() => view.getAttribute('data-mode')).toBe('walk');
+    await settledCamera(page, view);
+    const notice = view.getByRole('status');
+    expect(await notice.textContent()).toBe('');
+
+    // Look down a little (the picture follows the pointer: drag up), so the floor near by is in the picture.
+    const b = (await view.boundingBox())!;
+    await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2 - 130, { steps: 6 });
+    await page.mouse.up();
+    await settledCamera(page, view);
+    expect((await lookOf(view))[1]).toBeLessThan(-0.4);
+
+    // Floor that can be reached: a click walks there, and nothing is said.
+    const reachable: [number, number, number] = [1.1, 0, 2.6];
+    const spot = await screenOf(view, reachable);
+    expect(spot.inView).toBe(true);
+    await page.mouse.click(spot.x, spot.y);
+    const there = await settledCamera(page, view);
+    figures.reachableMissM = Math.round(Math.hypot(there[0] - reachable[0], there[2] - reachable[2]) * 1000) / 1000;
+    expect(figures.reachableMissM).toBeLessThan(0.05);
+    expect(await notice.textContent()).toBe('');
+
+    // Turn round with the turn button (one notch a click) until the floor behind the open leaf is in
+    // the picture: the leaf stands at x 1.59–1.63 m, so 1.45 m has no room for a body (radius 0.25 m).
+    const behindLeaf: [number, number, number] = [1.45, 0, 0.3];
+    const turnLeft = page.getByRole('button', { name: 'Turn left' });
+    for (let i = 0; i < 12 && !(await screenOf(view, behindLeaf)).inView; i++) {
+      await turnLeft.click();
+      await settledCamera(page, view);
+    }
+    const target = await screenOf(view, behindLeaf);
+    expect(target.inView).toBe(true);
+    await page.mouse.click(target.x, target.y);
+    await expect.poll(() => notice.textContent(), { timeout: 5_000 }).toBe('You can’t walk there');
+    await page.waitForTimeout(400);
+    expect(await notice.getByText('You can’t walk there').isVisible()).toBe(true);
+    await page.screenshot({ path: join(shots, 'walk-no-way.png') });
+    // It walks towards the spot as far as it can, and stops a body's radius short of the leaf (x 1.59–1.63 m, z 0–0.82 m).
+    const stopped = await settledCamera(page, view);
+    figures.noWayStopM = stopped.map((v) => Math.round(v * 1000) / 1000).join(',');
+    const away = (p: number[]) => Math.hypot(p[0] - behindLeaf[0], p[2] - behindLeaf[2]);
+    expect(away(stopped)).toBeLessThan(away(there) - 0.5);
+    const fromLeaf = Math.hypot(Math.max(1.59 - stopped[0], 0, stopped[0] - 1.63), Math.max(0, stopped[2] - 0.82));
+    expect(fromLeaf).toBeGreaterThan(BODY_RADIUS_M - 0.01);
+    expect(stopped[0]).toBeLessThan(1.59);
+    // …and the message goes again after a moment.
+    await expect.poll(() => notice.textContent(), { timeout: 10_000 }).toBe('');
     await context.close();
   });
 
