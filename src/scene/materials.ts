@@ -14,6 +14,13 @@ export const ACCENT_COLOURS = { existing: '#6d6157', new: '#8a7a68' } as const;
 /** Opacity of a wall between the eye and the room in the Overview. */
 export const FADED_WALL_OPACITY = 0.14;
 export const SCENE_BACKGROUND = '#f7f3ec';
+/** Pieces walked over (rugs) are drawn lifted this far (m) off the floor, clear of its depth. */
+export const FLAT_PIECE_LIFT_M = 0.003;
+/**
+ * …and pulled towards the eye as the floor's soft shadows are, where the other pieces are pushed
+ * back (for their selection edges): a rug a few mm thick then never fights the floor for depth.
+ */
+export const FLAT_PIECE_OFFSET = { polygonOffset: true, polygonOffsetFactor: -1, polygonOffsetUnits: -1 } as const;
 
 export interface SceneMaterials {
   wall: THREE.MeshStandardMaterial;
@@ -25,6 +32,8 @@ export interface SceneMaterials {
   windowFrameFaded: THREE.MeshStandardMaterial;
   glass: THREE.MeshStandardMaterial;
   piece: THREE.MeshStandardMaterial;
+  /** The same for pieces walked over (rugs), drawn just above the floor. */
+  flatPiece: THREE.MeshStandardMaterial;
   selectionEdge: THREE.LineBasicMaterial;
 }
 
@@ -41,6 +50,15 @@ function faded(material: THREE.MeshStandardMaterial): THREE.MeshStandardMaterial
 export function createSceneMaterials(): SceneMaterials {
   const wall = new THREE.MeshStandardMaterial({ color: '#f1ece4', roughness: 0.9, metalness: 0 });
   const windowFrame = new THREE.MeshStandardMaterial({ color: '#f4f1ea', roughness: 0.6, metalness: 0 });
+  const piece = new THREE.MeshStandardMaterial({
+    vertexColors: true,
+    roughness: 0.85,
+    metalness: 0,
+    // Pushes the faces back a little so the selection edges drawn on them never flicker.
+    polygonOffset: true,
+    polygonOffsetFactor: 1,
+    polygonOffsetUnits: 1,
+  });
   return {
     wall,
     wallFaded: faded(wall),
@@ -57,15 +75,8 @@ export function createSceneMaterials(): SceneMaterials {
       opacity: 0.28,
       depthWrite: false,
     }),
-    piece: new THREE.MeshStandardMaterial({
-      vertexColors: true,
-      roughness: 0.85,
-      metalness: 0,
-      // Pushes the faces back a little so the selection edges drawn on them never flicker.
-      polygonOffset: true,
-      polygonOffsetFactor: 1,
-      polygonOffsetUnits: 1,
-    }),
+    piece,
+    flatPiece: Object.assign(piece.clone(), FLAT_PIECE_OFFSET),
     selectionEdge: new THREE.LineBasicMaterial({ color: SELECTION_COLOUR }),
   };
 }

@@ -10,7 +10,7 @@ import type { Piece } from '../../shared/schemas/option';
 import { mergeMeshData, mergedRanges, meshDataToGeometry, partOfTriangle, type MergedRanges } from './build-geometry';
 import type { FinishMaterials, SurfaceFinishes } from './finish-materials';
 import { formGroups, groupVertexColours, type FormGroup } from './form-groups';
-import type { SceneMaterials } from './materials';
+import { FLAT_PIECE_LIFT_M, type SceneMaterials } from './materials';
 import { pieceVertexColours } from './piece-colours';
 
 /** A press that moves further than this (CSS pixels) was an orbit, not a click on a piece. */
@@ -98,7 +98,13 @@ function PieceForms({
         <FormGroupMesh
           key={group.key}
           group={group}
-          material={group.finish ? forms.finishMaterials.pieceMaterial(group.finish) : materials.piece}
+          material={
+            group.finish
+              ? forms.finishMaterials.pieceMaterial(group.finish, group.flat)
+              : group.flat
+                ? materials.flatPiece
+                : materials.piece
+          }
           selectedPieceId={selectedPieceId}
           onPieceClick={onPieceClick}
         />
@@ -138,7 +144,8 @@ function FormGroupMesh({
     [group, merged],
   );
   const handlers: ClickHandlers = useClickHandlers(onPieceClick, pieceOfTriangle);
-  return <mesh geometry={merged.geometry} material={material} {...handlers} />;
+  // Rugs lie a few mm thick on the floor: lifted a little so the floor never shows through.
+  return <mesh geometry={merged.geometry} material={material} position-y={group.flat ? FLAT_PIECE_LIFT_M : 0} {...handlers} />;
 }
 
 /**
