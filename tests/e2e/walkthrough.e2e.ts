@@ -28,6 +28,15 @@ const MAX_TEXTURE_BYTES = 64 * 1024 * 1024;
 /** Triangles of a typical room: 40 forms of at most 2,000, the shell, the frames (the issue's budget). */
 const MAX_TRIANGLES = 150_000;
 const BODY_RADIUS_M = 0.25;
+/** The demo living room's inside corners (assets/plans/l-shaped-living-room.json), scene x and z in metres. */
+const DEMO_LIVING_CORNERS_M = [
+  [0, 0],
+  [6.2, 0],
+  [6.2, 3.4],
+  [3.8, 3.4],
+  [3.8, 5.6],
+  [0, 5.6],
+] as const;
 /** Software WebGL on a busy machine can take seconds per frame: wait for one that long (a wait, not a speed target). */
 const FRAME_WAIT = { timeout: 15_000 };
 const SWITCHES = 50;
@@ -369,7 +378,10 @@ const lookOf = async (view: Locator) =>
  * publishes (data-camera, data-look, data-fov) and its size; `inView` when well inside the picture
  * and in front of the camera.
  */
-async function screenOf(view: Locator, point: [number, number, number]): Promise<{ x: number; y: number; inView: boolean }> {
+async function screenOf(
+  view: Locator,
+  point: [number, number, number],
+): Promise<{ x: number; y: number; ndc: [number, number]; inView: boolean }> {
   const [eye, look, fov, b] = [await cameraOf(view), await lookOf(view), await num(view, 'fov'), (await view.boundingBox())!];
   const d = point.map((v, k) => v - eye[k]);
   const dot = (a: number[], c: number[]) => a[0] * c[0] + a[1] * c[1] + a[2] * c[2];
@@ -389,6 +401,7 @@ async function screenOf(view: Locator, point: [number, number, number]): Promise
   return {
     x: b.x + ((ndcX + 1) / 2) * b.width,
     y: b.y + ((1 - ndcY) / 2) * b.height,
+    ndc: [ndcX, ndcY],
     inView: depth > 0.1 && Math.abs(ndcX) < 0.8 && Math.abs(ndcY) < 0.8,
   };
 }
@@ -663,6 +676,37 @@ describe('the walk-through', () => {
     expect(await page.locator('canvas').count()).toBe(2);
     expect(await left.getAttribute('data-option')).not.toBe(await right.getAttribute('data-option'));
     expect(await settledCamera(page, right)).toEqual(await settledCamera(page, left));
+    // Each half is framed to its own size: every corner of the room, floor and wall tops, is in it.
+    for (const half of [left, right]) {
+      let widest = 0;
+      for (const [x, z] of DEMO_LIVING_CORNERS_M)
+        for (const y of [0, 2.7]) {
+          const { ndc } = await screenOf(half, [x, y, z]);
+          widest = Math.max(widest, Math.abs(ndc[0]), Math.abs(ndc[1]));
+        }
+      figures.compareWidestCorner = Math.round(widest * 1000) / 1000;
+      expect(widest).toBeLessThan(1);
+      expect(widest).toBeGreaterThan(0.7);
+    }
+
+    // Selecting the other option keeps the halves where they are; the words say which one is meant.
+    const [leftOption, rightOption] = [await left.getAttribute('data-option'), await right.getAttribute('data-option')];
+    const leftFrames = await num(left, 'frames');
+    await page
+      .getByRole('group', { name: 'Options' })
+      .getByRole('button', { name: /Option B · Conversation corner/ })
+      .click();
+    await page.getByRole('heading', { name: 'In Option B · Conversation corner (right)' }).waitFor();
+    await page.getByRole('button', { name: 'Choose Option B · Conversation corner' }).waitFor();
+    expect(await left.getAttribute('data-option')).toBe(leftOption);
+    expect(await right.getAttribute('data-option')).toBe(rightOption);
+    // The same views, not new ones: their frame counts go on.
+    expect(await num(left, 'frames')).toBeGreaterThanOrEqual(leftFrames);
+    await page.keyboard.press('1');
+    await page.getByRole('heading', { name: 'In Option A · Sofa by the wall (left)' }).waitFor();
+    await page.getByRole('button', { name: 'Choose Option A · Sofa by the wall' }).waitFor();
+    expect(await left.getAttribute('data-option')).toBe(leftOption);
+    expect(await right.getAttribute('data-option')).toBe(rightOption);
 
     // Dragging the left turns both.
     const b = (await left.boundingBox())!;
