@@ -7,6 +7,8 @@ import * as THREE from 'three';
 export const SELECTION_COLOUR = '#2f6b5c';
 /** How far the selected piece's colour moves towards the accent (0 none, 1 all). */
 export const SELECTION_TINT = 0.55;
+/** How strongly the selected piece's form glows in the accent over its own colours (0–1). */
+export const SELECTION_GLOW_OPACITY = 0.22;
 /** Calm neutrals for pieces without a colour, so what the client owns and what is proposed differ a little. */
 export const PIECE_COLOURS = { existing: '#a99d8f', new: '#d8cdbd' } as const;
 /** Legs, frames and handles of pieces without an accent: a darker tone of the same neutrals. */
@@ -35,6 +37,8 @@ export interface SceneMaterials {
   /** The same for pieces walked over (rugs), drawn just above the floor. */
   flatPiece: THREE.MeshStandardMaterial;
   selectionEdge: THREE.LineBasicMaterial;
+  /** The selected piece's form drawn again over it: a see-through glow of the accent. */
+  selectionTint: THREE.MeshBasicMaterial;
 }
 
 function faded(material: THREE.MeshStandardMaterial): THREE.MeshStandardMaterial {
@@ -78,6 +82,16 @@ export function createSceneMaterials(): SceneMaterials {
     piece,
     flatPiece: Object.assign(piece.clone(), FLAT_PIECE_OFFSET),
     selectionEdge: new THREE.LineBasicMaterial({ color: SELECTION_COLOUR }),
+    selectionTint: new THREE.MeshBasicMaterial({
+      color: SELECTION_COLOUR,
+      transparent: true,
+      opacity: SELECTION_GLOW_OPACITY,
+      depthWrite: false,
+      // Drawn on the piece's own faces: pulled towards the eye so it lies over them, not in them.
+      polygonOffset: true,
+      polygonOffsetFactor: -2,
+      polygonOffsetUnits: -2,
+    }),
   };
 }
 

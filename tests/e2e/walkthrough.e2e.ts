@@ -629,6 +629,63 @@ describe('the walk-through', () => {
     await context.close();
   });
 
+  it('highlights a tapped piece in 3D while its details are open, in the Overview, Walk and Compare', async () => {
+    const link = await testRoomPresentation(designer.page);
+    const { context, page, view } = await openClient(link);
+    const tableTop: [number, number, number] = [3, 0.75, 1.5];
+    const details = page.getByRole('heading', { name: 'table', exact: true });
+    const closeDetails = page.getByRole('button', { name: 'Close the piece details' });
+    // Taps the table where the camera figures put it on screen; the highlight is its form drawn
+    // again, tinted, and its outline: two more draw calls, gone when the details close.
+    const tapTable = async (v: Locator) => {
+      const before = await num(v, 'draw-calls');
+      const at = await screenOf(v, tableTop);
+      expect(at.inView).toBe(true);
+      await page.mouse.click(at.x, at.y);
+      await details.waitFor();
+      await expect.poll(() => num(v, 'draw-calls'), FRAME_WAIT).toBe(before + 2);
+      return before;
+    };
+    await settledCamera(page, view);
+    const overviewPlain = await tapTable(view);
+    figures.highlightDrawCalls = `${overviewPlain}→${overviewPlain + 2}`;
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'highlight-overview.png') });
+    await closeDetails.click();
+    await expect.poll(() => num(view, 'draw-calls'), FRAME_WAIT).toBe(overviewPlain);
+
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await settledCamera(page, view);
+    // Look down a little (drag up), the table being low and near.
+    const vb = (await view.boundingBox())!;
+    await page.mouse.move(vb.x + vb.width / 2, vb.y + vb.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(vb.x + vb.width / 2, vb.y + vb.height / 2 - 110, { steps: 6 });
+    await page.mouse.up();
+    await settledCamera(page, view);
+    const turnRight = page.getByRole('button', { name: 'Turn right' });
+    for (let i = 0; i < 12 && !(await screenOf(view, tableTop)).inView; i++) {
+      await turnRight.click();
+      await settledCamera(page, view);
+    }
+    await tapTable(view);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'highlight-walk.png') });
+    await closeDetails.click();
+
+    // Compare, from above: a tap on the table in the right half selects that half's option and highlights it there.
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Overview' }).click();
+    await page.getByRole('button', { name: 'Compare' }).click();
+    const right = page.locator('[data-testid=room-view]').nth(1);
+    await expect.poll(() => num(right, 'frames'), { timeout: 20_000 }).toBeGreaterThan(0);
+    await settledCamera(page, right);
+    await tapTable(right);
+    await page.getByRole('heading', { name: 'In Option B · With sideboard (right)' }).waitFor();
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'highlight-compare.png') });
+    await context.close();
+  });
+
   it('switches options keeping the camera exactly where it is, and memory does not grow over 50 switches', async () => {
     const link = await testRoomPresentation(designer.page);
     const { context, page, view } = await openClient(link);
