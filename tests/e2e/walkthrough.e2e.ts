@@ -20,6 +20,8 @@ import {
 
 const root = resolve(import.meta.dirname, '../..');
 const shots = join(root, '.test-output', 'walkthrough');
+/** The README's pictures (assets/screenshots), retaken by this test. */
+const readmeShots = join(root, 'assets', 'screenshots');
 const plan = (file: string) => JSON.parse(readFileSync(join(root, 'assets/plans', file), 'utf8'));
 
 /** Draw calls and texture memory a typical room (8 walls, 6 openings, 40 pieces) must stay under. */
@@ -786,6 +788,54 @@ describe('the walk-through', () => {
     expect(await settledCamera(page, left)).toEqual(walked);
     await page.waitForTimeout(300);
     await page.screenshot({ path: join(shots, 'compare-walk.png') });
+    await context.close();
+  });
+
+  it('takes the README pictures at 1280 × 800: Walk at the sofa, and Compare', async () => {
+    const { context, page, view } = await openClient(demoLink);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await settledCamera(page, view);
+    const b = (await view.boundingBox())!;
+    const look = async (dy: number) => {
+      await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2 + dy, { steps: 6 });
+      await page.mouse.up();
+      await settledCamera(page, view);
+    };
+    // Look down, click the floor beyond the armchair, then turn to the sofa across the coffee table.
+    await look(-130);
+    const spot = await screenOf(view, [3.4, 0, 2.9]);
+    expect(spot.inView).toBe(true);
+    await page.mouse.click(spot.x, spot.y);
+    const there = await settledCamera(page, view);
+    expect(Math.hypot(there[0] - 3.4, there[2] - 2.9)).toBeLessThan(0.05);
+    await look(95);
+    const sofa: [number, number, number] = [0.45, 0.45, 2.2];
+    const turnLeft = page.getByRole('button', { name: 'Turn left' });
+    for (let i = 0; i < 12; i++) {
+      const at = await screenOf(view, sofa);
+      if (at.inView && Math.abs(at.ndc[0]) < 0.35) break;
+      await turnLeft.click();
+      await settledCamera(page, view);
+    }
+    const at = await screenOf(view, sofa);
+    expect(at.inView && Math.abs(at.ndc[0]) < 0.35).toBe(true);
+    await page.mouse.move(0, 0);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(readmeShots, 'walk-sofa.png') });
+
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Overview' }).click();
+    await page.getByRole('button', { name: 'Compare' }).click();
+    const right = page.locator('[data-testid=room-view]').nth(1);
+    await expect.poll(() => num(right, 'frames'), { timeout: 20_000 }).toBeGreaterThan(0);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    await page.getByRole('button', { name: 'Back to the first view' }).click();
+    await settledCamera(page, right);
+    await page.mouse.move(0, 0);
+    await page.waitForTimeout(500);
+    await page.screenshot({ path: join(readmeShots, 'compare.png') });
     await context.close();
   });
 
