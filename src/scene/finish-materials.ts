@@ -4,7 +4,7 @@
 import * as THREE from 'three';
 import type { SceneFinish } from '../../shared/finishes/scene-finish';
 import { textureRepeat } from '../../shared/geometry/texture-repeat';
-import { FADED_WALL_OPACITY } from './materials';
+import { FADED_WALL_OPACITY, FLAT_PIECE_OFFSET } from './materials';
 
 /** What each surface of one option wears; anything missing keeps the plain default. */
 export interface SurfaceFinishes {
@@ -76,10 +76,11 @@ export class FinishMaterials {
 
   /**
    * The material pieces wear for a finish: coloured per vertex (so the selected piece can be
-   * tinted) and pushed back a little so selection edges drawn on it never flicker.
+   * tinted) and pushed back a little so selection edges drawn on it never flicker; for pieces
+   * walked over (`flat`, rugs) pulled forward instead, clear of the floor.
    */
-  pieceMaterial(finish: Extract<SceneFinish, { kind: 'photo' }>): THREE.MeshStandardMaterial {
-    const key = `piece|${JSON.stringify(finish)}`;
+  pieceMaterial(finish: Extract<SceneFinish, { kind: 'photo' }>, flat = false): THREE.MeshStandardMaterial {
+    const key = `piece|${flat ? 'flat|' : ''}${JSON.stringify(finish)}`;
     const known = this.pieceMaterials.get(key);
     if (known) return known;
     const material = new THREE.MeshStandardMaterial({
@@ -89,6 +90,7 @@ export class FinishMaterials {
       polygonOffset: true,
       polygonOffsetFactor: 1,
       polygonOffsetUnits: 1,
+      ...(flat ? FLAT_PIECE_OFFSET : {}),
     });
     material.color.set(finish.meanColourHex);
     this.loadInto(finish, [material]);

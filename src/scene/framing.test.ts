@@ -1,9 +1,9 @@
 // Tests for the Overview camera's starting frame: every corner of a room in the picture, filling
-// it, and looking at the room's middle.
+// it, and looking at the room's middle; and a camera refitted when its view changes shape (Compare).
 import * as THREE from 'three';
 import { describe, expect, it } from 'vitest';
 import { buildRoomScene, type Bounds3 } from '../../shared/geometry/scene';
-import { overviewFrame } from './framing';
+import { overviewFrame, refitToAspect } from './framing';
 import { exampleShell, lShapedShell } from './test-rooms';
 
 function cornersOf(bounds: Bounds3): THREE.Vector3[] {
@@ -44,5 +44,30 @@ describe('overviewFrame', () => {
     const frame = overviewFrame(buildRoomScene(exampleShell, { pieces: [] }).bounds, 40, 1.6);
     expect(frame.target[0]).toBeCloseTo(2.1, 1);
     expect(frame.target[2]).toBeCloseTo(1.8, 1);
+  });
+
+  it('refits a framed camera to a half-width view (Compare) as if framed there, and back again', () => {
+    const bounds = buildRoomScene(exampleShell, { pieces: [] }).bounds;
+    const full = overviewFrame(bounds, 40, 1280 / 800);
+    const half = overviewFrame(bounds, 40, 640 / 800);
+    const refitted = refitToAspect(full.position, full.target, bounds, 40, 1280 / 800, 640 / 800);
+    refitted.forEach((v, k) => expect(v).toBeCloseTo(half.position[k], 6));
+    // A narrower picture needs the camera further back to keep the whole room in it.
+    const away = (p: number[]) => Math.hypot(p[0] - full.target[0], p[1] - full.target[1], p[2] - full.target[2]);
+    expect(away(refitted)).toBeGreaterThan(away(full.position) * 1.2);
+    const back = refitToAspect(refitted, full.target, bounds, 40, 640 / 800, 1280 / 800);
+    back.forEach((v, k) => expect(v).toBeCloseTo(full.position[k], 6));
+  });
+
+  it('keeps a turned, closer camera as much closer and looking the same way', () => {
+    const bounds = buildRoomScene(exampleShell, { pieces: [] }).bounds;
+    const target = overviewFrame(bounds, 40, 1.6).target;
+    const eye: [number, number, number] = [target[0] - 3, target[1] + 4, target[2] + 1];
+    const moved = refitToAspect(eye, target, bounds, 40, 1.6, 0.8);
+    const d0 = eye.map((v, k) => v - target[k]);
+    const d1 = moved.map((v, k) => v - target[k]);
+    const k = Math.hypot(...d1) / Math.hypot(...d0);
+    expect(k).toBeGreaterThan(1);
+    d1.forEach((v, i) => expect(v).toBeCloseTo(d0[i] * k, 9));
   });
 });

@@ -22,36 +22,32 @@ export interface OverviewFrame {
   maxDistance: number;
 }
 
-/** The Overview camera for a room's bounds (scene metres), a vertical field of view (degrees) and a viewport aspect (width / height). */
-export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): OverviewFrame {
-  const target: [number, number, number] = [
-    (bounds.min[0] + bounds.max[0]) / 2,
-    (bounds.min[1] + bounds.max[1]) / 2,
-    (bounds.min[2] + bounds.max[2]) / 2,
-  ];
-  const radius = Math.max(
-    Math.hypot(bounds.max[0] - bounds.min[0], bounds.max[1] - bounds.min[1], bounds.max[2] - bounds.min[2]) / 2,
-    0.01,
-  );
+type Vec3 = [number, number, number];
+
+const centreOf = (bounds: Bounds3): Vec3 => [
+  (bounds.min[0] + bounds.max[0]) / 2,
+  (bounds.min[1] + bounds.max[1]) / 2,
+  (bounds.min[2] + bounds.max[2]) / 2,
+];
+
+/**
+ * The nearest eye distance from the bounds' centre, looking back along `back` (a unit vector from
+ * the target to the eye), at which every corner of the box projects inside a frame of this field
+ * of view (degrees, vertical) and aspect (width / height), less the margin: a corner at depth z
+ * towards the eye and offsets x, y across needs distance ≥ z + |x| / tanH and ≥ z + |y| / tanV.
+ */
+export function fitDistance(bounds: Bounds3, back: Vec3, fovDeg: number, aspect: number): number {
+  const target = centreOf(bounds);
   const tanV = Math.tan((fovDeg * Math.PI) / 360);
   const tanH = tanV * Math.max(aspect, 0.01);
-  const azimuth = (OVERVIEW_AZIMUTH_DEG * Math.PI) / 180;
-  const elevation = (OVERVIEW_ELEVATION_DEG * Math.PI) / 180;
-  // Unit vector from the target to the eye, and the camera's right and up seen from there.
-  const back: [number, number, number] = [
-    Math.cos(elevation) * Math.sin(azimuth),
-    Math.sin(elevation),
-    Math.cos(elevation) * Math.cos(azimuth),
-  ];
-  const right: [number, number, number] = [Math.cos(azimuth), 0, -Math.sin(azimuth)];
-  const up: [number, number, number] = [
+  // The camera's right and up seen from there (no roll: right stays level).
+  const flat = Math.hypot(back[0], back[2]);
+  const right: Vec3 = flat > 1e-9 ? [back[2] / flat, 0, -back[0] / flat] : [1, 0, 0];
+  const up: Vec3 = [
     back[1] * right[2] - back[2] * right[1],
     back[2] * right[0] - back[0] * right[2],
     back[0] * right[1] - back[1] * right[0],
   ];
-  // The nearest eye distance at which every corner of the box projects inside the frame (less
-  // the margin): a corner at depth z towards the eye and offsets x, y across needs
-  // distance ≥ z + |x| / tanH and ≥ z + |y| / tanV, scaled by the margin.
   let distance = 0;
   for (const cx of [bounds.min[0], bounds.max[0]]) {
     for (const cy of [bounds.min[1], bounds.max[1]]) {
@@ -64,12 +60,22 @@ export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): 
       }
     }
   }
-  distance = Math.max(distance, radius * 1.5);
-  const position: [number, number, number] = [
-    target[0] + distance * back[0],
-    target[1] + distance * back[1],
-    target[2] + distance * back[2],
-  ];
+  return distance;
+}
+
+/** The Overview camera for a room's bounds (scene metres), a vertical field of view (degrees) and a viewport aspect (width / height). */
+export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): OverviewFrame {
+  const target = centreOf(bounds);
+  const radius = Math.max(
+    Math.hypot(bounds.max[0] - bounds.min[0], bounds.max[1] - bounds.min[1], bounds.max[2] - bounds.min[2]) / 2,
+    0.01,
+  );
+  const azimuth = (OVERVIEW_AZIMUTH_DEG * Math.PI) / 180;
+  const elevation = (OVERVIEW_ELEVATION_DEG * Math.PI) / 180;
+  // Unit vector from the target to the eye.
+  const back: Vec3 = [Math.cos(elevation) * Math.sin(azimuth), Math.sin(elevation), Math.cos(elevation) * Math.cos(azimuth)];
+  const distance = Math.max(fitDistance(bounds, back, fovDeg, aspect), radius * 1.5);
+  const position: Vec3 = [target[0] + distance * back[0], target[1] + distance * back[1], target[2] + distance * back[2]];
   return {
     target,
     position,
@@ -79,4 +85,29 @@ export function overviewFrame(bounds: Bounds3, fovDeg: number, aspect: number): 
     minDistance: MIN_ORBIT_DISTANCE_M,
     maxDistance: distance * 2.5,
   };
+}
+
+/**
+ * A camera (eye and target) seen in a view of one aspect, moved for a view of another: same
+ * target, same direction, its distance scaled by how much nearer or further the room fits from
+ * that direction at the new aspect. A view framed to fill its picture still fills it after a
+ * resize (a half of Compare), and one brought closer stays as much closer.
+ */
+export function refitToAspect(
+  eye: Vec3,
+  target: Vec3,
+  bounds: Bounds3,
+  fovDeg: number,
+  fromAspect: number,
+  toAspect: number,
+): Vec3 {
+  const d: Vec3 = [eye[0] - target[0], eye[1] - target[1], eye[2] - target[2]];
+  const length = Math.hypot(...d);
+  if (length < 1e-9) return eye;
+  const back: Vec3 = [d[0] / length, d[1] / length, d[2] / length];
+  const before = fitDistance(bounds, back, fovDeg, fromAspect);
+  const after = fitDistance(bounds, back, fovDeg, toAspect);
+  if (!(before > 0) || !(after > 0)) return eye;
+  const k = after / before;
+  return [target[0] + d[0] * k, target[1] + d[1] * k, target[2] + d[2] * k];
 }

@@ -22,21 +22,28 @@ export const ORBIT_LIMITS = {
 /**
  * Frames the whole room for the orbit, on mount and whenever the room's bounds change: sets the
  * field of view (when given), fits the clip planes and the orbit's distance limits to the room, then
- * hands the frame to `place` to put the camera. Returns the latest frame.
+ * hands the frame to `place` to put the camera. With `refit`, a view that changes shape (a half of
+ * Compare) is framed again for its new size and `refit` is handed the aspects before and after, to
+ * move the camera. Returns the latest frame.
  */
 export function useOrbitFraming(
   controls: RefObject<OrbitHandle | null>,
   bounds: Bounds3,
   place: (frame: OverviewFrame, orbit: OrbitHandle) => void,
   fovDeg?: number,
+  refit?: (frame: OverviewFrame, fromAspect: number, toAspect: number) => void,
 ): RefObject<OverviewFrame | null> {
   const camera = useThree((state) => state.camera);
   const size = useThree((state) => state.size);
   const sizeRef = useRef(size);
   sizeRef.current = size;
   const frame = useRef<OverviewFrame | null>(null);
+  // The aspect the frame was made for.
+  const framedAspect = useRef<number | null>(null);
   // The effect calls the latest `place` without re-running when it is rebuilt.
   const placeInFrame = useEffectEvent(place);
+  const refitFrame = useEffectEvent((f: OverviewFrame, from: number, to: number) => refit?.(f, from, to));
+  const hasRefit = refit !== undefined;
 
   const [minX, minY, minZ] = bounds.min;
   const [maxX, maxY, maxZ] = bounds.max;
@@ -46,15 +53,36 @@ export function useOrbitFraming(
     if (!(camera instanceof THREE.PerspectiveCamera) || !orbit) return;
     if (fovDeg !== undefined) camera.fov = fovDeg;
     const { width, height } = sizeRef.current;
-    const f = overviewFrame({ min: [minX, minY, minZ], max: [maxX, maxY, maxZ] }, camera.fov, width / Math.max(height, 1));
+    const aspect = width / Math.max(height, 1);
+    const f = overviewFrame({ min: [minX, minY, minZ], max: [maxX, maxY, maxZ] }, camera.fov, aspect);
     frame.current = f;
-    camera.near = f.near;
-    camera.far = f.far;
-    camera.updateProjectionMatrix();
-    orbit.minDistance = f.minDistance;
-    orbit.maxDistance = f.maxDistance;
+    framedAspect.current = aspect;
+    fitOrbit(camera, orbit, f);
     placeInFrame(f, orbit);
   }, [controls, camera, fovDeg, minX, minY, minZ, maxX, maxY, maxZ]);
 
+  const aspect = size.width / Math.max(size.height, 1);
+  useLayoutEffect(() => {
+    const orbit = controls.current;
+    const from = framedAspect.current;
+    if (!hasRefit || !(camera instanceof THREE.PerspectiveCamera) || !orbit || from === null) return;
+    if (Math.abs(from - aspect) < 1e-3) return;
+    const f = overviewFrame({ min: [minX, minY, minZ], max: [maxX, maxY, maxZ] }, camera.fov, aspect);
+    frame.current = f;
+    framedAspect.current = aspect;
+    fitOrbit(camera, orbit, f);
+    refitFrame(f, from, aspect);
+    // Only a change of shape refits: a change of bounds was framed by the effect above first.
+  }, [aspect, hasRefit, controls, camera, minX, minY, minZ, maxX, maxY, maxZ]);
+
   return frame;
+}
+
+/** Fits the clip planes and the orbit's distance limits to a frame. */
+function fitOrbit(camera: THREE.PerspectiveCamera, orbit: OrbitHandle, f: OverviewFrame): void {
+  camera.near = f.near;
+  camera.far = f.far;
+  camera.updateProjectionMatrix();
+  orbit.minDistance = f.minDistance;
+  orbit.maxDistance = f.maxDistance;
 }

@@ -1,21 +1,23 @@
 // The room's pieces in 3D: drawn as their forms or as plain boxes, merged into a few meshes coloured
-// per vertex, with clicks traced back to a piece and the selected piece's box outlined.
+// per vertex, with clicks traced back to a piece and the selected piece highlighted (its form tinted
+// and outlined).
 import type { ThreeEvent } from '@react-three/fiber';
 import { useThree } from '@react-three/fiber';
 import { useEffect, useLayoutEffect, useMemo } from 'react';
 import * as THREE from 'three';
 import type { PieceFormData } from '../../shared/geometry/forms/piece-forms';
 import type { PieceSceneData } from '../../shared/geometry/scene';
+import { isWalkedOver } from '../../shared/geometry/piece';
 import type { Piece } from '../../shared/schemas/option';
 import { mergeMeshData, mergedRanges, meshDataToGeometry, partOfTriangle, type MergedRanges } from './build-geometry';
 import type { FinishMaterials, SurfaceFinishes } from './finish-materials';
 import { formGroups, groupVertexColours, type FormGroup } from './form-groups';
-import type { SceneMaterials } from './materials';
+import { FLAT_PIECE_LIFT_M, type SceneMaterials } from './materials';
 import { pieceVertexColours } from './piece-colours';
 
 /** A press that moves further than this (CSS pixels) was an orbit, not a click on a piece. */
 export const CLICK_SLOP_PX = 5;
-/** Only corners sharper than this (degrees) get a selection edge, i.e. a box's twelve edges. */
+/** Only corners sharper than this (degrees) get a selection edge: a box's twelve edges, a form's creases, not its curves. */
 const EDGE_ANGLE_DEG = 30;
 
 /** How pieces are drawn: as their forms, or as the plain boxes the checks measure (kept to compare against). */
@@ -62,23 +64,53 @@ function useClickHandlers(
   }, [onPieceClick, pieceOfTriangle]);
 }
 
-/** The selected piece's box as edges: the box is what the checks measure, whatever form is drawn in it. */
-function SelectionEdges({
+/**
+ * The selected piece highlighted while its details are open: its form (or its box, drawn as boxes)
+ * drawn again on its own in the accent, see-through over the piece, with an outline of its edges.
+ * Only that piece is built, on selection; the room's merged meshes are left as they are.
+ */
+function SelectionHighlight({
   pieceScene,
+  pieces,
+  forms,
   selectedPieceId,
   materials,
-}: Pick<RoomPiecesProps, 'pieceScene' | 'selectedPieceId' | 'materials'>) {
-  const edges = useMemo(() => {
-    const selected = pieceScene.find((p) => p.id === selectedPieceId);
-    if (!selected) return null;
-    const faces = meshDataToGeometry(selected.mesh);
+}: Pick<RoomPiecesProps, 'pieceScene' | 'pieces' | 'forms' | 'selectedPieceId' | 'materials'>) {
+  const built = useMemo(() => {
+    if (!selectedPieceId) return null;
+    const form = forms?.data.find((f) => f.id === selectedPieceId);
+    const box = pieceScene.find((p) => p.id === selectedPieceId);
+    const meshes = form
+      ? [form.meshes.main, form.meshes.accent, form.meshes.own].filter((m) => m.indices.length > 0)
+      : box
+        ? [box.mesh]
+        : [];
+    if (meshes.length === 0) return null;
+    const faces = meshDataToGeometry(mergeMeshData(meshes));
     const lines = new THREE.EdgesGeometry(faces, EDGE_ANGLE_DEG);
-    faces.dispose();
-    return lines;
-  }, [pieceScene, selectedPieceId]);
-  useEffect(() => () => edges?.dispose(), [edges]);
-  return edges ? <lineSegments geometry={edges} material={materials.selectionEdge} /> : null;
+    const piece = pieces.find((p) => p.id === selectedPieceId);
+    // A rug's form is drawn lifted (see FormGroupMesh): its highlight goes with it.
+    const lift = form && piece && isWalkedOver(piece) ? FLAT_PIECE_LIFT_M : 0;
+    return { faces, lines, lift };
+  }, [pieceScene, pieces, forms, selectedPieceId]);
+  useEffect(
+    () => () => {
+      built?.faces.dispose();
+      built?.lines.dispose();
+    },
+    [built],
+  );
+  if (!built) return null;
+  return (
+    <group position-y={built.lift} userData={{ selectionHighlight: selectedPieceId }}>
+      <mesh geometry={built.faces} material={materials.selectionTint} renderOrder={2} raycast={noRaycast} />
+      <lineSegments geometry={built.lines} material={materials.selectionEdge} renderOrder={3} raycast={noRaycast} />
+    </group>
+  );
 }
+
+/** The highlight never takes a click: the piece under it does. */
+const noRaycast = () => undefined;
 
 /**
  * Every placed piece as its form: parts merged per material (one mesh for all plain colours, one
@@ -98,7 +130,13 @@ function PieceForms({
         <FormGroupMesh
           key={group.key}
           group={group}
-          material={group.finish ? forms.finishMaterials.pieceMaterial(group.finish) : materials.piece}
+          material={
+            group.finish
+              ? forms.finishMaterials.pieceMaterial(group.finish, group.flat)
+              : group.flat
+                ? materials.flatPiece
+                : materials.piece
+          }
           selectedPieceId={selectedPieceId}
           onPieceClick={onPieceClick}
         />
@@ -138,19 +176,26 @@ function FormGroupMesh({
     [group, merged],
   );
   const handlers: ClickHandlers = useClickHandlers(onPieceClick, pieceOfTriangle);
-  return <mesh geometry={merged.geometry} material={material} {...handlers} />;
+  // Rugs lie a few mm thick on the floor: lifted a little so the floor never shows through.
+  return <mesh geometry={merged.geometry} material={material} position-y={group.flat ? FLAT_PIECE_LIFT_M : 0} {...handlers} />;
 }
 
 /**
  * Every placed piece, as its form or as its plain box, in a few merged meshes coloured per vertex;
  * a click is traced back to its piece through the hit triangle. The selected piece is tinted
- * towards the accent and its box outlined.
+ * towards the accent and highlighted: its form drawn again see-through in the accent, and outlined.
  */
 export function RoomPieces(props: RoomPiecesProps) {
   return (
     <group>
       {props.forms ? <PieceForms {...props} forms={props.forms} /> : <PieceBoxes {...props} />}
-      <SelectionEdges pieceScene={props.pieceScene} selectedPieceId={props.selectedPieceId} materials={props.materials} />
+      <SelectionHighlight
+        pieceScene={props.pieceScene}
+        pieces={props.pieces}
+        forms={props.forms}
+        selectedPieceId={props.selectedPieceId}
+        materials={props.materials}
+      />
     </group>
   );
 }

@@ -22,13 +22,23 @@ export interface SceneCanvasProps extends Omit<HTMLAttributes<HTMLDivElement>, '
   shadowMaps?: boolean;
   /** The scene, drawn inside the canvas. */
   children: ReactNode;
+  /** Shown over the canvas, inside the host (short messages about the view). */
+  overlay?: ReactNode;
 }
 
 /**
  * A region holding one canvas drawn only when something changes, with neutral tone mapping and the
  * scene's background; without WebGL, or when the renderer fails, `webglMessage` takes its place.
  */
-export function SceneCanvas({ host, label, webglMessage, shadowMaps = false, children, ...hostProps }: SceneCanvasProps) {
+export function SceneCanvas({
+  host,
+  label,
+  webglMessage,
+  shadowMaps = false,
+  children,
+  overlay,
+  ...hostProps
+}: SceneCanvasProps) {
   const [webgl] = useState(browserHasWebGL);
   const fallback = <WebGLMessage text={webglMessage} />;
   return (
@@ -56,6 +66,7 @@ export function SceneCanvas({ host, label, webglMessage, shadowMaps = false, chi
       ) : (
         fallback
       )}
+      {overlay}
     </div>
   );
 }

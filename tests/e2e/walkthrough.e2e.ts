@@ -20,6 +20,8 @@ import {
 
 const root = resolve(import.meta.dirname, '../..');
 const shots = join(root, '.test-output', 'walkthrough');
+/** The README's pictures (assets/screenshots), retaken by this test. */
+const readmeShots = join(root, 'assets', 'screenshots');
 const plan = (file: string) => JSON.parse(readFileSync(join(root, 'assets/plans', file), 'utf8'));
 
 /** Draw calls and texture memory a typical room (8 walls, 6 openings, 40 pieces) must stay under. */
@@ -28,6 +30,15 @@ const MAX_TEXTURE_BYTES = 64 * 1024 * 1024;
 /** Triangles of a typical room: 40 forms of at most 2,000, the shell, the frames (the issue's budget). */
 const MAX_TRIANGLES = 150_000;
 const BODY_RADIUS_M = 0.25;
+/** The demo living room's inside corners (assets/plans/l-shaped-living-room.json), scene x and z in metres. */
+const DEMO_LIVING_CORNERS_M = [
+  [0, 0],
+  [6.2, 0],
+  [6.2, 3.4],
+  [3.8, 3.4],
+  [3.8, 5.6],
+  [0, 5.6],
+] as const;
 /** Software WebGL on a busy machine can take seconds per frame: wait for one that long (a wait, not a speed target). */
 const FRAME_WAIT = { timeout: 15_000 };
 const SWITCHES = 50;
@@ -360,6 +371,43 @@ async function settledCamera(page: Page, view: Locator): Promise<[number, number
   }
 }
 
+/** Which way the view's camera looks (a unit vector, scene metres). */
+const lookOf = async (view: Locator) =>
+  (await view.getAttribute('data-look'))!.split(',').map(Number) as [number, number, number];
+
+/**
+ * Where a point of the room (scene metres) is on the page, from the camera figures the view
+ * publishes (data-camera, data-look, data-fov) and its size; `inView` when well inside the picture
+ * and in front of the camera.
+ */
+async function screenOf(
+  view: Locator,
+  point: [number, number, number],
+): Promise<{ x: number; y: number; ndc: [number, number]; inView: boolean }> {
+  const [eye, look, fov, b] = [await cameraOf(view), await lookOf(view), await num(view, 'fov'), (await view.boundingBox())!];
+  const d = point.map((v, k) => v - eye[k]);
+  const dot = (a: number[], c: number[]) => a[0] * c[0] + a[1] * c[1] + a[2] * c[2];
+  // The camera's right (look × up, up being +y) and its own up (right × look); no roll in either rig.
+  const flat = Math.hypot(look[0], look[2]);
+  const right = [-look[2] / flat, 0, look[0] / flat];
+  const up = [
+    right[1] * look[2] - right[2] * look[1],
+    right[2] * look[0] - right[0] * look[2],
+    right[0] * look[1] - right[1] * look[0],
+  ];
+  const depth = dot(d, look);
+  const tanV = Math.tan((fov * Math.PI) / 360);
+  const tanH = tanV * (b.width / b.height);
+  const ndcX = dot(d, right) / depth / tanH;
+  const ndcY = dot(d, up) / depth / tanV;
+  return {
+    x: b.x + ((ndcX + 1) / 2) * b.width,
+    y: b.y + ((1 - ndcY) / 2) * b.height,
+    ndc: [ndcX, ndcY],
+    inView: depth > 0.1 && Math.abs(ndcX) < 0.8 && Math.abs(ndcY) < 0.8,
+  };
+}
+
 /** Share of sampled canvas pixels that differ from the background colour: a blank canvas is 0. */
 async function drawnShare(view: Locator): Promise<number> {
   return view.locator('canvas').evaluate((canvas: HTMLCanvasElement) => {
@@ -530,6 +578,119 @@ describe('the walk-through', () => {
     await context.close();
   });
 
+  it('says briefly when a clicked spot of floor cannot be reached (behind the open door leaf), and walks where it can', async () => {
+    const link = await testRoomPresentation(designer.page);
+    const { context, page, view } = await openClient(link);
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await expect.poll(() => view.getAttribute('data-mode')).toBe('walk');
+    await settledCamera(page, view);
+    const notice = view.getByRole('status');
+    expect(await notice.textContent()).toBe('');
+
+    // Look down a little (the picture follows the pointer: drag up), so the floor near by is in the picture.
+    const b = (await view.boundingBox())!;
+    await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2 - 130, { steps: 6 });
+    await page.mouse.up();
+    await settledCamera(page, view);
+    expect((await lookOf(view))[1]).toBeLessThan(-0.4);
+
+    // Floor that can be reached: a click walks there, and nothing is said.
+    const reachable: [number, number, number] = [1.1, 0, 2.6];
+    const spot = await screenOf(view, reachable);
+    expect(spot.inView).toBe(true);
+    await page.mouse.click(spot.x, spot.y);
+    const there = await settledCamera(page, view);
+    figures.reachableMissM = Math.round(Math.hypot(there[0] - reachable[0], there[2] - reachable[2]) * 1000) / 1000;
+    expect(figures.reachableMissM).toBeLessThan(0.05);
+    expect(await notice.textContent()).toBe('');
+
+    // Turn round with the turn button (one notch a click) until the floor behind the open leaf is in
+    // the picture: the leaf stands at x 1.59–1.63 m, so 1.45 m has no room for a body (radius 0.25 m).
+    const behindLeaf: [number, number, number] = [1.45, 0, 0.3];
+    const turnLeft = page.getByRole('button', { name: 'Turn left' });
+    for (let i = 0; i < 12 && !(await screenOf(view, behindLeaf)).inView; i++) {
+      await turnLeft.click();
+      await settledCamera(page, view);
+    }
+    const target = await screenOf(view, behindLeaf);
+    expect(target.inView).toBe(true);
+    await page.mouse.click(target.x, target.y);
+    await expect.poll(() => notice.textContent(), { timeout: 5_000 }).toBe('You can’t walk there');
+    await page.waitForTimeout(400);
+    expect(await notice.getByText('You can’t walk there').isVisible()).toBe(true);
+    await page.screenshot({ path: join(shots, 'walk-no-way.png') });
+    // It walks towards the spot as far as it can, and stops a body's radius short of the leaf (x 1.59–1.63 m, z 0–0.82 m).
+    const stopped = await settledCamera(page, view);
+    figures.noWayStopM = stopped.map((v) => Math.round(v * 1000) / 1000).join(',');
+    const away = (p: number[]) => Math.hypot(p[0] - behindLeaf[0], p[2] - behindLeaf[2]);
+    expect(away(stopped)).toBeLessThan(away(there) - 0.5);
+    const fromLeaf = Math.hypot(Math.max(1.59 - stopped[0], 0, stopped[0] - 1.63), Math.max(0, stopped[2] - 0.82));
+    expect(fromLeaf).toBeGreaterThan(BODY_RADIUS_M - 0.01);
+    expect(stopped[0]).toBeLessThan(1.59);
+    // …and the message goes again after a moment.
+    await expect.poll(() => notice.textContent(), { timeout: 10_000 }).toBe('');
+    await context.close();
+  });
+
+  it('highlights a tapped piece in 3D while its details are open, in the Overview, Walk and Compare', async () => {
+    const link = await testRoomPresentation(designer.page);
+    const { context, page, view } = await openClient(link);
+    const tableTop: [number, number, number] = [3, 0.75, 1.5];
+    const details = page.getByRole('heading', { name: 'table', exact: true });
+    const closeDetails = page.getByRole('button', { name: 'Close the piece details' });
+    // Taps the table where the camera figures put it on screen; the highlight is its form drawn
+    // again, tinted, and its outline: two more draw calls, gone when the details close.
+    const tapTable = async (v: Locator) => {
+      const before = await num(v, 'draw-calls');
+      const at = await screenOf(v, tableTop);
+      expect(at.inView).toBe(true);
+      await page.mouse.click(at.x, at.y);
+      await details.waitFor();
+      await expect.poll(() => num(v, 'draw-calls'), FRAME_WAIT).toBe(before + 2);
+      return before;
+    };
+    await settledCamera(page, view);
+    const overviewPlain = await tapTable(view);
+    figures.highlightDrawCalls = `${overviewPlain}→${overviewPlain + 2}`;
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'highlight-overview.png') });
+    await closeDetails.click();
+    await expect.poll(() => num(view, 'draw-calls'), FRAME_WAIT).toBe(overviewPlain);
+
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await settledCamera(page, view);
+    // Look down a little (drag up), the table being low and near.
+    const vb = (await view.boundingBox())!;
+    await page.mouse.move(vb.x + vb.width / 2, vb.y + vb.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(vb.x + vb.width / 2, vb.y + vb.height / 2 - 110, { steps: 6 });
+    await page.mouse.up();
+    await settledCamera(page, view);
+    const turnRight = page.getByRole('button', { name: 'Turn right' });
+    for (let i = 0; i < 12 && !(await screenOf(view, tableTop)).inView; i++) {
+      await turnRight.click();
+      await settledCamera(page, view);
+    }
+    await tapTable(view);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'highlight-walk.png') });
+    await closeDetails.click();
+
+    // Compare, from above: a tap on the table in the right half selects that half's option and highlights it there.
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Overview' }).click();
+    await page.getByRole('button', { name: 'Compare' }).click();
+    const right = page.locator('[data-testid=room-view]').nth(1);
+    await expect.poll(() => num(right, 'frames'), { timeout: 20_000 }).toBeGreaterThan(0);
+    await settledCamera(page, right);
+    await tapTable(right);
+    await page.getByRole('heading', { name: 'In Option B · With sideboard (right)' }).waitFor();
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(shots, 'highlight-compare.png') });
+    await context.close();
+  });
+
   it('switches options keeping the camera exactly where it is, and memory does not grow over 50 switches', async () => {
     const link = await testRoomPresentation(designer.page);
     const { context, page, view } = await openClient(link);
@@ -577,6 +738,37 @@ describe('the walk-through', () => {
     expect(await page.locator('canvas').count()).toBe(2);
     expect(await left.getAttribute('data-option')).not.toBe(await right.getAttribute('data-option'));
     expect(await settledCamera(page, right)).toEqual(await settledCamera(page, left));
+    // Each half is framed to its own size: every corner of the room, floor and wall tops, is in it.
+    for (const half of [left, right]) {
+      let widest = 0;
+      for (const [x, z] of DEMO_LIVING_CORNERS_M)
+        for (const y of [0, 2.7]) {
+          const { ndc } = await screenOf(half, [x, y, z]);
+          widest = Math.max(widest, Math.abs(ndc[0]), Math.abs(ndc[1]));
+        }
+      figures.compareWidestCorner = Math.round(widest * 1000) / 1000;
+      expect(widest).toBeLessThan(1);
+      expect(widest).toBeGreaterThan(0.7);
+    }
+
+    // Selecting the other option keeps the halves where they are; the words say which one is meant.
+    const [leftOption, rightOption] = [await left.getAttribute('data-option'), await right.getAttribute('data-option')];
+    const leftFrames = await num(left, 'frames');
+    await page
+      .getByRole('group', { name: 'Options' })
+      .getByRole('button', { name: /Option B · Conversation corner/ })
+      .click();
+    await page.getByRole('heading', { name: 'In Option B · Conversation corner (right)' }).waitFor();
+    await page.getByRole('button', { name: 'Choose Option B · Conversation corner' }).waitFor();
+    expect(await left.getAttribute('data-option')).toBe(leftOption);
+    expect(await right.getAttribute('data-option')).toBe(rightOption);
+    // The same views, not new ones: their frame counts go on.
+    expect(await num(left, 'frames')).toBeGreaterThanOrEqual(leftFrames);
+    await page.keyboard.press('1');
+    await page.getByRole('heading', { name: 'In Option A · Sofa by the wall (left)' }).waitFor();
+    await page.getByRole('button', { name: 'Choose Option A · Sofa by the wall' }).waitFor();
+    expect(await left.getAttribute('data-option')).toBe(leftOption);
+    expect(await right.getAttribute('data-option')).toBe(rightOption);
 
     // Dragging the left turns both.
     const b = (await left.boundingBox())!;
@@ -599,6 +791,54 @@ describe('the walk-through', () => {
     expect(await settledCamera(page, left)).toEqual(walked);
     await page.waitForTimeout(300);
     await page.screenshot({ path: join(shots, 'compare-walk.png') });
+    await context.close();
+  });
+
+  it('takes the README pictures at 1280 × 800: Walk at the sofa, and Compare', async () => {
+    const { context, page, view } = await openClient(demoLink);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+    await settledCamera(page, view);
+    const b = (await view.boundingBox())!;
+    const look = async (dy: number) => {
+      await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2 + dy, { steps: 6 });
+      await page.mouse.up();
+      await settledCamera(page, view);
+    };
+    // Look down, click the floor beyond the armchair, then turn to the sofa across the coffee table.
+    await look(-130);
+    const spot = await screenOf(view, [3.4, 0, 2.9]);
+    expect(spot.inView).toBe(true);
+    await page.mouse.click(spot.x, spot.y);
+    const there = await settledCamera(page, view);
+    expect(Math.hypot(there[0] - 3.4, there[2] - 2.9)).toBeLessThan(0.05);
+    await look(95);
+    const sofa: [number, number, number] = [0.45, 0.45, 2.2];
+    const turnLeft = page.getByRole('button', { name: 'Turn left' });
+    for (let i = 0; i < 12; i++) {
+      const at = await screenOf(view, sofa);
+      if (at.inView && Math.abs(at.ndc[0]) < 0.35) break;
+      await turnLeft.click();
+      await settledCamera(page, view);
+    }
+    const at = await screenOf(view, sofa);
+    expect(at.inView && Math.abs(at.ndc[0]) < 0.35).toBe(true);
+    await page.mouse.move(0, 0);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(readmeShots, 'walk-sofa.png') });
+
+    await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Overview' }).click();
+    await page.getByRole('button', { name: 'Compare' }).click();
+    const right = page.locator('[data-testid=room-view]').nth(1);
+    await expect.poll(() => num(right, 'frames'), { timeout: 20_000 }).toBeGreaterThan(0);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    await page.getByRole('button', { name: 'Back to the first view' }).click();
+    await settledCamera(page, right);
+    await page.mouse.move(0, 0);
+    await page.waitForTimeout(500);
+    await page.screenshot({ path: join(readmeShots, 'compare.png') });
     await context.close();
   });
 

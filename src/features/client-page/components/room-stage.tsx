@@ -8,10 +8,11 @@ import type { TextureProgress, ViewCommands, ViewMode } from '../walkthrough/wal
 import { Button } from '../../../components/ui/button';
 import { markLookedAt } from '../api/presentation';
 import { ChooseDialog } from './choose-dialog';
+import { halvesShowing, openHalves, settledHalves, type Halves } from './compare-halves';
 import { changedSinceSeen, rememberSeen } from './seen-versions';
 import { PieceCard } from './piece-card';
 import { EYE_HEIGHT, KeyHelp, LoadingBar, OverviewButtons, ViewModeBar, WalkButtons } from './view-controls';
-import { momentText, PAGE_FRAME, pieceName, SAFETY_LINE } from './wording';
+import { chooseLabel, momentText, PAGE_FRAME, pieceName, piecesHeading, SAFETY_LINE } from './wording';
 
 // three.js is most of the page's weight: it loads after the page itself has appeared.
 const WalkthroughView = lazy(() => import('../walkthrough/walkthrough-view'));
@@ -70,7 +71,8 @@ export function RoomStage({
   const chosen = room.options.find((o) => o.id === room.choice?.optionId) ?? null;
   const [mode, setMode] = useState<ViewMode>('overview');
   const [compare, setCompare] = useState(false);
-  const [compareId, setCompareId] = useState<string | null>(null);
+  // The options side by side while comparing, [left, right]: they stay put as either is selected.
+  const [halves, setHalves] = useState<Halves | null>(null);
   const [eyeHeightMm, setEyeHeightMm] = useState<number>(EYE_HEIGHT.defaultMm);
   const [help, setHelp] = useState(false);
   const [progress, setProgress] = useState<TextureProgress>(NO_PROGRESS);
@@ -79,10 +81,14 @@ export function RoomStage({
   const [link] = useState(() => new CameraLink());
   const commands = useRef<ViewCommands>(null);
 
-  const show = (id: string) => {
+  const selected = useRef(option.id);
+  selected.current = option.id;
+  // Shows an option; while comparing it takes the half not selected, unless it is on show already.
+  const show = useCallback((id: string) => {
+    setHalves((h) => (h ? halvesShowing(h, selected.current, id) : h));
     setOptionId(id);
     setPieceId(null);
-  };
+  }, []);
 
   // Each option counts once per visit as "looked at", however often the client flips back to it.
   const lookedAt = useRef(new Set<string>());
@@ -95,8 +101,16 @@ export function RoomStage({
 
   const options = room.options;
   const others = options.filter((o) => o.id !== option.id);
-  const compared = others.find((o) => o.id === compareId) ?? others[0] ?? null;
-  const comparing = compare && compared !== null;
+  const optionIds = useMemo(() => options.map((o) => o.id), [options]);
+  const pair = compare ? settledHalves(halves, option.id, optionIds) : null;
+  const comparing = pair !== null;
+  const byId = (id: string) => options.find((o) => o.id === id) ?? option;
+  const [left, right] = pair ? [byId(pair[0]), byId(pair[1])] : [option, null];
+  const compared = right && (right.id === option.id ? left : right);
+  const onCompare = (on: boolean) => {
+    setCompare(on);
+    setHalves(on ? openHalves(option.id, optionIds) : null);
+  };
   useEffect(() => {
     if (choosing) return;
     const onKey = (e: KeyboardEvent) => {
@@ -104,8 +118,7 @@ export function RoomStage({
       const n = Number(e.key);
       if (Number.isInteger(n) && n >= 1 && n <= options.length) {
         e.preventDefault();
-        setOptionId(options[n - 1].id);
-        setPieceId(null);
+        show(options[n - 1].id);
       } else if (e.key === '?') {
         e.preventDefault();
         setHelp((h) => !h);
@@ -113,7 +126,7 @@ export function RoomStage({
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [choosing, options]);
+  }, [choosing, options, show]);
 
   // Every option of the room goes to the view at once: it builds each one once and keeps it.
   const viewOptions = useMemo(() => options.map((o) => ({ id: o.id, pieces: o.pieces, finishes: o.surfaces })), [options]);
@@ -144,7 +157,7 @@ export function RoomStage({
             mode={mode}
             onMode={setMode}
             compare={comparing}
-            onCompare={setCompare}
+            onCompare={onCompare}
             canCompare={others.length > 0}
             onHelp={() => setHelp((h) => !h)}
           />
@@ -158,29 +171,32 @@ export function RoomStage({
             }
           >
             <div className={`grid h-full gap-px bg-line ${comparing ? 'grid-cols-2' : 'grid-cols-1'}`}>
-              <div className="relative min-w-0 bg-sand">
-                <WalkthroughView
-                  {...viewProps}
-                  optionId={option.id}
-                  viewId="main"
-                  selectedPieceId={pieceId}
-                  onPieceClick={setPieceId}
-                  commandsRef={commands}
-                  onTextureProgress={setProgress}
-                  label={`${room.name}, ${option.label}, in 3D`}
-                />
-                <div className={chip}>{option.label}</div>
-              </div>
-              {comparing && compared && (
-                <div className="relative min-w-0 bg-sand">
-                  <WalkthroughView
-                    {...viewProps}
-                    optionId={compared.id}
-                    viewId="compare"
-                    label={`${room.name}, ${compared.label}, in 3D, side by side`}
-                  />
-                  <div className={chip}>{compared.label}</div>
-                </div>
+              {[left, right].map((shown, i) =>
+                shown ? (
+                  <div key={i === 0 ? 'main' : 'compare'} className="relative min-w-0 bg-sand">
+                    <WalkthroughView
+                      {...viewProps}
+                      optionId={shown.id}
+                      viewId={i === 0 ? 'main' : 'compare'}
+                      selectedPieceId={shown.id === option.id ? pieceId : null}
+                      // A tap on a piece selects its half's option and opens the piece.
+                      onPieceClick={(id) => {
+                        if (shown.id !== option.id) show(shown.id);
+                        setPieceId(id);
+                      }}
+                      commandsRef={i === 0 ? commands : undefined}
+                      onTextureProgress={i === 0 ? setProgress : undefined}
+                      label={`${room.name}, ${shown.label}, in 3D${i === 0 ? '' : ', side by side'}`}
+                    />
+                    <div className={comparing && shown.id === option.id ? `${chip} bg-pine! text-white` : chip}>
+                      {shown.label}
+                      {comparing && shown.id === option.id && <span className="font-normal"> · selected</span>}
+                    </div>
+                    {comparing && shown.id === option.id && (
+                      <div className="pointer-events-none absolute inset-0 ring-3 ring-pine ring-inset" aria-hidden />
+                    )}
+                  </div>
+                ) : null,
               )}
             </div>
           </Suspense>
@@ -197,7 +213,7 @@ export function RoomStage({
               Side by side with
               <select
                 value={compared?.id}
-                onChange={(e) => setCompareId(e.target.value)}
+                onChange={(e) => setHalves((h) => (h ? halvesShowing(h, option.id, e.target.value) : h))}
                 className="rounded-md border border-line-strong bg-white px-2 py-1 font-normal"
               >
                 {others.map((o) => (
@@ -259,7 +275,7 @@ export function RoomStage({
 
         <section aria-labelledby="pieces-title" className="rounded-2xl border border-line bg-white p-5">
           <h2 id="pieces-title" className="font-bold">
-            In this option
+            {piecesHeading(comparing ? { label: option.label, side: pair[0] === option.id ? 'left' : 'right' } : null)}
           </h2>
           {piece ? (
             <div className="mt-3">
@@ -311,7 +327,7 @@ export function RoomStage({
             </p>
           ) : (
             <Button variant={isChosen ? 'secondary' : 'primary'} className="mt-4 w-full" onClick={() => setChoosing(true)}>
-              {isChosen ? 'Change your comment' : 'Choose this option'}
+              {isChosen ? 'Change your comment' : chooseLabel(comparing ? option.label : null)}
             </Button>
           )}
         </section>

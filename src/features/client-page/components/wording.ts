@@ -19,6 +19,17 @@ const momentFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: '
 export const dayText = (iso: string) => dayFormat.format(new Date(iso));
 export const momentText = (iso: string) => momentFormat.format(new Date(iso));
 
+/**
+ * The heading over the selected option's pieces: "In this option", or while comparing the option's
+ * own name and the half it is in, so it is plain which of the two it means.
+ */
+export const piecesHeading = (comparing: { label: string; side: 'left' | 'right' } | null) =>
+  comparing ? `In ${comparing.label} (${comparing.side})` : 'In this option';
+
+/** The button that chooses the selected option; while comparing it names the option. */
+export const chooseLabel = (comparingLabel: string | null) =>
+  comparingLabel ? `Choose ${comparingLabel}` : 'Choose this option';
+
 export const pieceName = (piece: Pick<ClientPiece, 'name'>) => piece.name.trim() || 'Unnamed piece';
 
 /** The page's width and side margins, shared by the header and the room so their edges line up. */

@@ -6,7 +6,7 @@ import { useFrame, useThree } from '@react-three/fiber';
 import { useEffect, useEffectEvent, useLayoutEffect, useRef } from 'react';
 import type { Bounds3 } from '../../../../shared/geometry/scene';
 import type { ViewPose } from './camera-link';
-import type { OverviewFrame } from '../../../scene/framing';
+import { refitToAspect, type OverviewFrame } from '../../../scene/framing';
 import { ORBIT_LIMITS, useOrbitFraming, type OrbitHandle } from '../../../scene/orbit';
 import { easeInOut, orbitBetween, orbitTurn, orbitZoom, topViewPose } from './view-moves';
 import { MAX_FRAME_S, MOVE_MS, OVERVIEW_FOV_DEG, now, type RigHandle, type RigProps } from './rig-shared';
@@ -78,6 +78,8 @@ export function OverviewRig({ bounds, onView, link, viewId, memory, reducedMotio
   // Effects call the latest apply without re-running when it is rebuilt (it reads only refs and props).
   const applyPose = useEffectEvent(apply);
   // The frame depends on the bounds alone: a resize or a piece moved keeps the view.
+  // A view that changes shape (Compare opened or closed) keeps its camera's direction and is moved
+  // nearer or further so the room fills its new size as it filled the old.
   const frame = useOrbitFraming(
     controls,
     bounds,
@@ -86,6 +88,12 @@ export function OverviewRig({ bounds, onView, link, viewId, memory, reducedMotio
       apply(memory.current ?? shared ?? framePose(f), true);
     },
     OVERVIEW_FOV_DEG,
+    (_, fromAspect, toAspect) => {
+      tween.current = null;
+      const pose = current();
+      const position = refitToAspect(pose.position, pose.target, bounds, OVERVIEW_FOV_DEG, fromAspect, toAspect);
+      apply({ ...pose, position }, true);
+    },
   );
 
   useEffect(() => {

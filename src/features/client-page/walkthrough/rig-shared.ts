@@ -34,7 +34,10 @@ export interface RigHandle {
   topView(): void;
   reset(): void;
   step(move: WalkMove): void;
-  /** Walk straight towards a floor point (scene metres), stopping short of anything in the way. */
+  /**
+   * Walk to a floor point (scene metres) along the way found round leaves and pieces; where there is
+   * no way, straight towards it until stopped (the view then says so).
+   */
   walkTo(x: number, z: number): void;
   /** A held move started or stopped: draw a frame so it is picked up. */
   wake(): void;

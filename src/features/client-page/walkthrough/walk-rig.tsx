@@ -27,6 +27,8 @@ interface WalkRigProps extends RigProps {
   /** What stops the walker in the option on show, plan mm. */
   obstacles: WalkObstacles;
   eyeM: number;
+  /** A click on floor that cannot be reached (no room to stand there, or walled off). */
+  onNoWay?: () => void;
 }
 
 interface Glide {
@@ -57,6 +59,7 @@ export function WalkRig({
   held,
   rig,
   onMoveStart,
+  onNoWay,
 }: WalkRigProps) {
   const camera = useThree((state) => state.camera);
   const gl = useThree((state) => state.gl);
@@ -65,8 +68,8 @@ export function WalkRig({
   const glide = useRef<Glide | null>(null);
   // The legs still to walk of a way found to a clicked point (see walkTo), walked one after another.
   const route = useRef<WalkState[]>([]);
-  const live = useRef({ obstacles, eyeM, onView, reducedMotion, shell, onMoveStart });
-  live.current = { obstacles, eyeM, onView, reducedMotion, shell, onMoveStart };
+  const live = useRef({ obstacles, eyeM, onView, reducedMotion, shell, onMoveStart, onNoWay });
+  live.current = { obstacles, eyeM, onView, reducedMotion, shell, onMoveStart, onNoWay };
 
   const apply = (publish: boolean) => {
     const s = state.current;
@@ -241,6 +244,7 @@ export function WalkRig({
           return leg;
         });
         if (!way) {
+          live.current.onNoWay?.();
           // Face the clicked point itself, as before, even when stopped short of it.
           const towards = Math.hypot(x - s.x, z - s.z) > 0 ? Math.atan2(-(x - s.x), -(z - s.z)) : s.yaw;
           legs[0] = { ...legs[0], yaw: towards };

@@ -1,6 +1,6 @@
 // The client's walk-through of one room in 3D: the Overview and Walk, every option built once and
 // switched instantly, keys and on-screen buttons, and soft floor shadows baked per option.
-import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, type KeyboardEvent } from 'react';
+import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import * as THREE from 'three';
 import { buildPiecesScene, type PieceSceneData } from '../../../../shared/geometry/scene';
 import { walkObstacles, type WalkObstacles } from '../../../../shared/geometry/walk';
@@ -73,6 +73,22 @@ export interface WalkthroughViewProps {
 }
 
 const WEBGL_MESSAGE = 'The 3D view needs WebGL, which this browser has turned off.';
+/** Said briefly over Walk when a clicked spot of floor cannot be reached on foot. */
+export const NO_WAY_MESSAGE = 'You can’t walk there';
+/** How long the message stays (ms): long enough to read, short enough not to linger. */
+const NO_WAY_MS = 2500;
+
+/** A short message shown for a moment; `say` shows it again (and restarts its time). */
+function useBriefNotice(ms: number): [string | null, (text: string) => void] {
+  const [notice, setNotice] = useState<{ text: string; at: number } | null>(null);
+  useEffect(() => {
+    if (!notice) return undefined;
+    const timer = window.setTimeout(() => setNotice(null), ms);
+    return () => window.clearTimeout(timer);
+  }, [notice, ms]);
+  const say = useCallback((text: string) => setNotice({ text, at: performance.now() }), []);
+  return [notice?.text ?? null, say];
+}
 
 // Keys while the view has focus. The arrows walk forward and back and turn; the letter keys walk
 // and step sideways. In the Overview the same keys turn the room and come closer.
@@ -92,13 +108,16 @@ const KEY_MOVES: Record<string, WalkMove> = {
  * level, every option mounted once and shown by `optionId`, daylight through each window and
  * shadows baked once per option. The host carries the renderer figures (data-draw-calls,
  * data-triangles, data-geometries, data-textures, data-texture-bytes, data-frames) and the camera
- * (data-camera "x,y,z", data-mode, data-option, data-moving) for browser tests.
+ * (data-camera "x,y,z", data-look "x,y,z", data-fov, data-mode, data-option, data-moving) for
+ * browser tests. A click on floor that cannot be reached says so for a moment (role status).
  */
 export default function WalkthroughView(props: WalkthroughViewProps) {
   const { label, className, mode, commandsRef } = props;
   const host = useRef<HTMLDivElement>(null);
   const held = useRef(new HeldMoves());
   const rig = useRef<RigHandle | null>(null);
+  const [notice, say] = useBriefNotice(NO_WAY_MS);
+  const onNoWay = useCallback(() => say(NO_WAY_MESSAGE), [say]);
   // Set at once when a move starts, cleared by the frame that ends it: tests wait on it.
   const markMoving = useCallback(() => {
     if (host.current) host.current.dataset.moving = 'true';
@@ -145,6 +164,14 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
       // No shadow maps: the soft shadows under the pieces are baked into the floor per option.
       shadowMaps={false}
       aria-roledescription="3D view"
+      overlay={
+        // Always there, so a screen reader hears the message the moment it is said.
+        <p role="status" className="pointer-events-none absolute inset-x-0 top-3 flex justify-center">
+          {notice && (
+            <span className="rounded-full bg-ink/85 px-4 py-1.5 text-sm font-semibold text-white shadow-sm">{notice}</span>
+          )}
+        </p>
+      }
       data-mode={mode}
       data-option={props.optionId}
       tabIndex={0}
@@ -155,7 +182,7 @@ export default function WalkthroughView(props: WalkthroughViewProps) {
         className ?? 'relative h-full w-full outline-none focus-visible:ring-2 focus-visible:ring-pine focus-visible:ring-inset'
       }
     >
-      <WalkthroughScene {...props} host={host} held={held} rig={rig} onMoveStart={markMoving} />
+      <WalkthroughScene {...props} host={host} held={held} rig={rig} onMoveStart={markMoving} onNoWay={onNoWay} />
     </SceneCanvas>
   );
 }
@@ -165,6 +192,7 @@ interface SceneProps extends WalkthroughViewProps {
   held: React.RefObject<HeldMoves>;
   rig: React.RefObject<RigHandle | null>;
   onMoveStart: () => void;
+  onNoWay: () => void;
 }
 
 interface BuiltOption {
@@ -191,6 +219,7 @@ function WalkthroughScene(props: SceneProps) {
     rig,
     onTextureProgress,
     onMoveStart,
+    onNoWay,
     pieceBuild = 'forms',
   } = props;
   const shell = useStableValue(props.shell);
@@ -251,19 +280,23 @@ function WalkthroughScene(props: SceneProps) {
   const walkPoseRef = useRef<ViewPose | null>(null);
   const onFloorPoint = useCallback((x: number, z: number) => rig.current?.walkTo(x, z), [rig]);
 
-  const textureBytes = useCallback(
-    () => ({
+  const textureBytes = useCallback(() => {
+    const camera = lastCamera.current;
+    const figures = (v: THREE.Vector3, digits: number) =>
+      v
+        .toArray()
+        .map((n) => n.toFixed(digits))
+        .join(',');
+    return {
       textureBytes: String(finishMaterials.textureBytes()),
-      camera: lastCamera.current
-        ? lastCamera.current.position
-            .toArray()
-            .map((v) => v.toFixed(3))
-            .join(',')
-        : '',
+      camera: camera ? figures(camera.position, 3) : '',
+      // Which way the camera looks (a unit vector): with the camera and the field of view, tests
+      // find where a point of the room is on screen.
+      look: camera ? figures(camera.getWorldDirection(lookScratch), 4) : '',
+      fov: camera instanceof THREE.PerspectiveCamera ? String(camera.fov) : '',
       moving: String(rig.current?.busy() ?? false),
-    }),
-    [finishMaterials, lastCamera, rig],
-  );
+    };
+  }, [finishMaterials, lastCamera, rig]);
 
   if (!parts || !active) return <RenderAndReport host={host} extra={textureBytes} />;
   return (
@@ -316,12 +349,15 @@ function WalkthroughScene(props: SceneProps) {
           held={held}
           rig={rig}
           onMoveStart={onMoveStart}
+          onNoWay={onNoWay}
         />
       )}
       <RenderAndReport host={host} extra={textureBytes} />
     </>
   );
 }
+
+const lookScratch = new THREE.Vector3();
 
 /** One option's soft floor shadows: built once, kept while the option is, disposed with it. */
 function FloorShadows({

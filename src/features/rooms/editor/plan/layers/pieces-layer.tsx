@@ -1,11 +1,13 @@
 // The pieces: each one's box filled by its status (a walked-over piece as floor, a walked-under one
 // faded, a raised one dashed, all by the one piece rule), its top view and label, its front edge,
-// and the turning handle when it is selected; flagged pieces in the finding colour.
+// and the turning handle when it is selected; flagged pieces in the finding colour. Rugs are drawn
+// first, below the pieces standing on them, so those take their clicks (piece-order.ts).
 import type { PointerEvent } from 'react';
 import { isWalkedOver, isWalkedUnder } from '../../../../../../shared/geometry/piece';
 import type { Piece } from '../../../../../../shared/schemas/option';
 import { mid, pieceRing, ringPath, type PlanLayout, type Selection } from '../plan-geometry';
 import { PieceLabel, PieceTopView } from '../plan-piece-forms';
+import { piecesInDrawOrder } from '../piece-order';
 import { dashArray, planColour, planDash, planOpacity, planStroke } from '../plan-style';
 import { TurnHandle } from './handles-layer';
 
@@ -44,7 +46,7 @@ export function PiecesLayer({
 }) {
   return (
     <>
-      {pieces.map((p) => {
+      {piecesInDrawOrder(pieces).map((p) => {
         const held = !p.placed;
         const ghostAt = ghost?.id === p.id ? ghost.at : undefined;
         const centre = ghostAt ?? (held ? layout.holding.slots[p.id] : [p.x, p.y]);
