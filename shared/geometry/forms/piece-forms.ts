@@ -9,7 +9,7 @@ import { planForm, writeForm, type FormMeshes, type FormPlan } from './mesh';
  * one, and a piece moved or turned is written again without working out its parts. Bounded,
  * oldest dropped first.
  */
-const PLANS = new Map<string, FormPlan>();
+let PLANS = new Map<string, FormPlan>();
 const PLANS_MAX = 400;
 
 /**
@@ -26,7 +26,7 @@ interface KeptForm {
   elevation: number;
   meshes: FormMeshes;
 }
-const KEPT = new Map<string, KeptForm[]>();
+let KEPT = new Map<string, KeptForm[]>();
 const KEPT_PIECES_MAX = 1000;
 const KEPT_PER_PIECE = 4;
 
@@ -60,10 +60,15 @@ function keep(p: Piece, plan: FormPlan, meshes: FormMeshes): void {
   kept.push({ plan, x: p.x, y: p.y, rotation: p.rotation, elevation: p.elevation, meshes });
 }
 
-/** Forgets every built form (the bench measures building from nothing with it). */
+/**
+ * Forgets every built form (the bench measures building from nothing with it). New maps, not
+ * cleared ones: a cleared map's old table lingers until a full collection and holds on to the
+ * young forms put in after, so every collection of young garbage kept them and they piled up
+ * for a full one.
+ */
 export function clearFormCache(): void {
-  PLANS.clear();
-  KEPT.clear();
+  PLANS = new Map();
+  KEPT = new Map();
 }
 
 export interface PieceFormData {
