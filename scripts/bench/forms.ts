@@ -5,21 +5,38 @@ import { buildRoomScene } from '../../shared/geometry/scene';
 import { loadavg } from 'node:os';
 import { typicalFurnishedRoom } from './typical-room';
 
-/** Rounds of the three measures taken in turn, so a busy spell on the shared machine hits them all alike. */
+/** Rounds of the three measures, each round's batches taken in turn, so a busy spell on the shared machine hits them all alike. */
 const ROUNDS = 7;
 /** Batches per measure and round (the median is kept) and builds per batch. */
 const REPEATS = 9;
 const BATCH = 20;
+/** Drag steps cycled through by the kept measure. */
+const MOVES = 400;
 
-function median(run: () => void): number {
-  const ms: number[] = [];
-  for (let r = 0; r < REPEATS; r++) {
-    const t0 = performance.now();
-    for (let i = 0; i < BATCH; i++) run();
-    ms.push((performance.now() - t0) / BATCH);
-  }
-  ms.sort((a, b) => a - b);
-  return ms[Math.floor(REPEATS / 2)]!;
+interface Timing {
+  wall: number;
+  cpu: number;
+}
+
+/** One batch of `run`: wall and process CPU time, ms per build. */
+function batch(run: () => void): Timing {
+  const c0 = process.cpuUsage();
+  const t0 = performance.now();
+  for (let i = 0; i < BATCH; i++) run();
+  const wall = (performance.now() - t0) / BATCH;
+  const c = process.cpuUsage(c0);
+  return { wall, cpu: (c.user + c.system) / 1000 / BATCH };
+}
+
+/**
+ * Batches of every measure taken in turn (one of each, again and again), so a busy spell or a
+ * collection of the garbage left by one measure falls on them all alike; the median batch of each
+ * by wall time.
+ */
+function medians(runs: readonly (() => void)[]): Timing[] {
+  const timings: Timing[][] = runs.map(() => []);
+  for (let r = 0; r < REPEATS; r++) runs.forEach((run, i) => timings[i]!.push(batch(run)));
+  return timings.map((ts) => [...ts].sort((a, b) => a.wall - b.wall)[Math.floor(REPEATS / 2)]!);
 }
 
 const range = (values: number[], digits: number, unit = '') => {
@@ -40,23 +57,33 @@ export async function benchForms(): Promise<void> {
     buildRoomScene(shell, option);
     buildPieceForms(option.pieces);
   };
+  // A drag: each build one piece moved a little (a different piece and distance each time, so it
+  // is written again), the others where they were.
+  const moves = Array.from({ length: MOVES }, (_, k) => ({
+    pieces: option.pieces.map((p, i) =>
+      i === k % option.pieces.length ? { ...p, x: p.x + 1 + Math.floor(k / option.pieces.length) } : p,
+    ),
+  }));
+  let move = 0;
   const kept = () => {
-    buildRoomScene(shell, option);
-    buildPieceForms(option.pieces);
+    const moved = moves[move++ % MOVES]!;
+    buildRoomScene(shell, moved);
+    buildPieceForms(moved.pieces);
   };
   for (let i = 0; i < 30; i++) {
     boxes();
     cold();
     kept();
   }
-  const rounds: { boxes: number; cold: number; kept: number; load: number }[] = [];
+  const rounds: { boxes: number; cold: number; kept: number; coldCpu: number; load: number }[] = [];
   for (let r = 0; r < ROUNDS; r++) {
-    const round = { boxes: median(boxes), cold: median(cold), kept: median(kept), load: loadavg()[0]! };
+    const [b, c, k] = medians([boxes, cold, kept]) as [Timing, Timing, Timing];
+    const round = { boxes: b.wall, cold: c.wall, kept: k.wall, coldCpu: c.cpu / b.cpu, load: loadavg()[0]! };
     rounds.push(round);
     console.log(
       `forms: round ${r + 1}: boxes ${round.boxes.toFixed(3)} ms, forms from nothing ${round.cold.toFixed(3)} ms ` +
-        `(${(round.cold / round.boxes).toFixed(2)}×), forms kept ${round.kept.toFixed(3)} ms (${(round.kept / round.boxes).toFixed(2)}×) ` +
-        `(load ${round.load.toFixed(1)})`,
+        `(${(round.cold / round.boxes).toFixed(2)}×; process CPU time ${round.coldCpu.toFixed(2)}×), ` +
+        `forms kept ${round.kept.toFixed(3)} ms (${(round.kept / round.boxes).toFixed(2)}×) (load ${round.load.toFixed(1)})`,
     );
   }
   const triangles = buildPieceForms(option.pieces).reduce((n, f) => n + formTriangles(f.meshes), 0);
@@ -75,7 +102,11 @@ export async function benchForms(): Promise<void> {
         rounds.map((r) => r.cold / r.boxes),
         2,
         '×',
-      )}); with forms kept from the last build ${range(
+      )}; process CPU time ${range(
+        rounds.map((r) => r.coldCpu),
+        2,
+        '×',
+      )}); with forms kept from the last build (one piece moved) ${range(
         rounds.map((r) => r.kept),
         3,
         ' ms',

@@ -36,160 +36,181 @@ export interface FormMeshes {
   ownColours: ColourRun[];
 }
 
-type V3 = [number, number, number];
+const SLOT_INDEX: Record<MaterialSlot, 0 | 1 | 2> = { main: 0, accent: 1, own: 2 };
 
-// Writes in the piece's own frame (mm). The piece frame (x, y, z up) maps to the scene (x, z, y
-// up) through a mirror whatever the turn, so triangles are wound clockwise here to face outwards
-// once placed.
-class Writer {
-  // Scratch buffers, grown by doubling and reused for every form (one writer per material slot):
-  // a room's first build writes tens of thousands of numbers, and plain arrays made that mostly
-  // garbage collection. Positions are kept in doubles so the facing test in fan() sees exactly
-  // the values it always did; toMesh() copies out what was written.
-  positions = new Float64Array(3 * 512);
-  /** The same positions as they are stored (single precision), written alongside, so copying out is a plain copy. */
-  stored = new Float32Array(3 * 512);
-  normals = new Float32Array(3 * 512);
-  uvs = new Float32Array(2 * 512);
-  indices = new Uint32Array(3 * 512);
-  count = 0;
-  indexCount = 0;
+/** Points round a rounded part's outline: a disc when both straight runs vanish. */
+function roundedPoints(part: Part): number {
+  const r = part.radius ?? 0;
+  const disc = part.w / 2 - r < 1e-6 && part.d / 2 - r < 1e-6;
+  return disc ? 4 * DISC_SEGMENTS : 4 * (CORNER_SEGMENTS + 1);
+}
 
-  reset(): void {
-    this.count = 0;
-    this.indexCount = 0;
-  }
+const legSides = (part: Part) => (part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES);
 
-  /** A flat or smoothly curved quad (corners in order round it) whose front faces `faceNormal`. */
-  quad(p: readonly V3[], n: readonly V3[], uv: readonly [number, number][], faceNormal: V3): void {
-    const base = this.count;
-    for (let i = 0; i < p.length; i++) this.vertex(p[i]!, n[i]!, uv[i]![0], uv[i]![1]);
-    this.fan(base, p.length, faceNormal);
-  }
-
-  /** A flat convex polygon facing `normal`. */
-  polygon(p: readonly V3[], normal: V3): void {
-    const base = this.count;
-    for (const point of p) this.vertex(point, normal, point[0] * MM, point[1] * MM);
-    this.fan(base, p.length, normal);
-  }
-
-  private vertex(p: V3, n: V3, u: number, v: number): void {
-    this.raw(p[0], p[1], p[2], n[0], n[1], n[2], u, v);
-  }
-
-  /** One vertex from plain numbers: the extrusions write thousands, so no arrays are made for them. */
-  raw(x: number, y: number, z: number, nx: number, ny: number, nz: number, u: number, v: number): void {
-    const i = this.count;
-    if ((i + 1) * 3 > this.positions.length) this.growVertices();
-    const P = this.positions,
-      N = this.normals,
-      T = this.uvs;
-    const S = this.stored;
-    P[i * 3] = x;
-    P[i * 3 + 1] = y;
-    P[i * 3 + 2] = z;
-    S[i * 3] = x;
-    S[i * 3 + 1] = y;
-    S[i * 3 + 2] = z;
-    N[i * 3] = nx;
-    N[i * 3 + 1] = ny;
-    N[i * 3 + 2] = nz;
-    T[i * 2] = u;
-    T[i * 2 + 1] = v;
-    this.count = i + 1;
-  }
-
-  private growVertices(): void {
-    const grow = <T extends Float64Array | Float32Array>(a: T, make: (n: number) => T): T => {
-      const b = make(a.length * 2);
-      b.set(a);
-      return b;
-    };
-    this.positions = grow(this.positions, (n) => new Float64Array(n));
-    this.stored = grow(this.stored, (n) => new Float32Array(n));
-    this.normals = grow(this.normals, (n) => new Float32Array(n));
-    this.uvs = grow(this.uvs, (n) => new Float32Array(n));
-  }
-
-  private triangle(a: number, b: number, c: number): void {
-    const k = this.indexCount;
-    if (k + 3 > this.indices.length) {
-      const more = new Uint32Array(this.indices.length * 2);
-      more.set(this.indices);
-      this.indices = more;
-    }
-    const I = this.indices;
-    I[k] = a;
-    I[k + 1] = b;
-    I[k + 2] = c;
-    this.indexCount = k + 3;
-  }
-
-  /** Triangles of a fan over the `n` vertices written from `base`, facing the normal f. */
-  fan(base: number, n: number, f: V3): void {
-    const P = this.positions;
-    const ax = P[base * 3]!,
-      ay = P[base * 3 + 1]!,
-      az = P[base * 3 + 2]!;
-    for (let k = 1; k + 1 < n; k++) {
-      const b = base + k;
-      const c = b + 1;
-      const e1x = P[b * 3]! - ax,
-        e1y = P[b * 3 + 1]! - ay,
-        e1z = P[b * 3 + 2]! - az;
-      const e2x = P[c * 3]! - ax,
-        e2y = P[c * 3 + 1]! - ay,
-        e2z = P[c * 3 + 2]! - az;
-      const facing = (e1y * e2z - e1z * e2y) * f[0] + (e1z * e2x - e1x * e2z) * f[1] + (e1x * e2y - e1y * e2x) * f[2];
-      if (facing >= 0) this.triangle(base, c, b);
-      else this.triangle(base, b, c);
-    }
-  }
-
-  /** Numbers toMesh copies out: 3 + 3 + 2 per vertex and one per triangle corner. */
-  get size(): number {
-    return 8 * this.count + this.indexCount;
-  }
-
-  /**
-   * What was written, as a mesh of its own (the scratch buffers are reused), copied into `into`
-   * from `at` (4-byte numbers): a form's slots share one buffer, as allocating buffers, not
-   * copying numbers, is most of the cost of small meshes.
-   */
-  toMesh(into: ArrayBuffer, at: number): MeshData {
-    const n = this.count;
-    const positions = new Float32Array(into, at * 4, n * 3);
-    const normals = new Float32Array(into, (at + n * 3) * 4, n * 3);
-    const uvs = new Float32Array(into, (at + n * 6) * 4, n * 2);
-    const indices = new Uint32Array(into, (at + n * 8) * 4, this.indexCount);
-    positions.set(this.stored.subarray(0, n * 3));
-    normals.set(this.normals.subarray(0, n * 3));
-    uvs.set(this.uvs.subarray(0, n * 2));
-    indices.set(this.indices.subarray(0, this.indexCount));
-    return { positions, normals, uvs, indices };
-  }
+/** Outline points of an upright prism (rounded parts and legs); 0 for plain boxes and panels. */
+function outlinePoints(part: Part): number {
+  return part.shape === 'rounded' ? roundedPoints(part) : part.shape === 'leg' ? legSides(part) : 0;
 }
 
 /**
- * Local forms are copied into shared blocks of this many 4-byte numbers, each form taking the
- * next free run: a room's forms need a few allocations, not one each. A block is freed once no
- * form in it is kept (the form cache is bounded).
+ * A form's parts with how many vertices and triangle corners each slot takes (worked out from the
+ * parts alone: a box is six quads, a prism of n points n side quads and two n-gon caps), so the
+ * meshes can be written once, straight into buffers of the right size.
  */
-const BLOCK = 1 << 16;
-let block = new ArrayBuffer(BLOCK * 4);
-let blockUsed = 0;
+export interface FormPlan {
+  parts: readonly Part[];
+  /** By slot: main, accent, own. */
+  vertices: [number, number, number];
+  indices: [number, number, number];
+  ownColours: ColourRun[];
+  /** 4-byte numbers the placed meshes take: positions, normals, uvs and indices of every slot. */
+  size: number;
+}
 
-/** A buffer and the offset (in 4-byte numbers) of `size` free numbers in it. */
-function claim(size: number): [ArrayBuffer, number] {
-  if (size > BLOCK / 4) return [new ArrayBuffer(size * 4), 0];
-  if (blockUsed + size > BLOCK) {
-    block = new ArrayBuffer(BLOCK * 4);
-    blockUsed = 0;
+export function planForm(parts: readonly Part[]): FormPlan {
+  const vertices: [number, number, number] = [0, 0, 0];
+  const indices: [number, number, number] = [0, 0, 0];
+  const ownColours: ColourRun[] = [];
+  for (const part of parts) {
+    const n = outlinePoints(part);
+    const v = n === 0 ? 24 : 6 * n;
+    const s = SLOT_INDEX[part.slot];
+    vertices[s] += v;
+    indices[s] += n === 0 ? 36 : 12 * n - 12;
+    if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: v });
   }
-  const at = blockUsed;
-  blockUsed += size;
-  return [block, at];
+  let size = 0;
+  for (let s = 0; s < 3; s++) size += 8 * vertices[s]! + indices[s]!;
+  return { parts, vertices, indices, ownColours, size };
+}
+
+/** Shared by every slot that has no parts (nothing is ever written to a mesh once made). */
+const EMPTY_MESH: MeshData = {
+  positions: new Float32Array(0),
+  normals: new Float32Array(0),
+  uvs: new Float32Array(0),
+  indices: new Uint32Array(0),
+};
+
+/** A part has at most this many vertices (a disc's prism: 20 side quads and two caps) and polygons. */
+const MAX_PART_VERTICES = 6 * 4 * DISC_SEGMENTS;
+const MAX_PART_POLYGONS = 4 * DISC_SEGMENTS + 2;
+
+// One part's vertices in the piece's own frame (mm, doubles), eight numbers each: position,
+// normal, uv; and its polygons, four numbers each: corner count and the normal it faces. A part
+// fills them with plain stores, then emit() places them all in one loop: calls with many numbers
+// would box every number on the heap, which made most of a room's first build garbage.
+const VERTS = new Float64Array(8 * MAX_PART_VERTICES);
+const POLYS = new Float64Array(4 * MAX_PART_POLYGONS);
+
+// Writes one slot of a form straight in its placed place: each vertex is rounded to single
+// precision as it is stored, then turned, moved and scaled to scene metres, so the numbers are
+// those of storing the form first and placing it afterwards. The piece frame (x, y, z up) maps to
+// the scene (x, z, y up) through a mirror whatever the turn, so triangles are wound clockwise
+// here to face outwards once placed.
+class Writer {
+  positions = EMPTY_MESH.positions;
+  normals = EMPTY_MESH.normals;
+  uvs = EMPTY_MESH.uvs;
+  indices = EMPTY_MESH.indices;
+  count = 0;
+  indexCount = 0;
+  // Where the piece stands: centre (mm), its own x and y axes on the plan, underside (mm).
+  cx = 0.5;
+  cy = 0.5;
+  a0 = 0.5;
+  a1 = 0.5;
+  b0 = 0.5;
+  b1 = 0.5;
+  elevation = 0.5;
+
+  /** Points the writer at `mesh` (sized by the plan), placed by `at` turned to `axis`. */
+  begin(mesh: MeshData, at: Placement, axis: readonly [number, number]): void {
+    this.positions = mesh.positions;
+    this.normals = mesh.normals;
+    this.uvs = mesh.uvs;
+    this.indices = mesh.indices;
+    this.count = 0;
+    this.indexCount = 0;
+    this.cx = at.x;
+    this.cy = at.y;
+    this.a0 = axis[0];
+    this.a1 = axis[1];
+    this.b0 = -axis[1];
+    this.b1 = axis[0];
+    this.elevation = at.elevation;
+  }
+
+  /** Places the part in VERTS (`vertices` of them) and fans each of its `polygons` in POLYS, in order. */
+  emit(vertices: number, polygons: number): void {
+    const V = VERTS,
+      F = POLYS;
+    const P = this.positions,
+      N = this.normals,
+      T = this.uvs,
+      I = this.indices;
+    const cx = this.cx,
+      cy = this.cy,
+      a0 = this.a0,
+      a1 = this.a1,
+      b0 = this.b0,
+      b1 = this.b1,
+      elevation = this.elevation;
+    const first = this.count;
+    for (let v = 0, i = first; v < vertices; v++, i++) {
+      const k = 8 * v;
+      const sx = Math.fround(V[k]!),
+        sy = Math.fround(V[k + 1]!),
+        snx = Math.fround(V[k + 3]!),
+        sny = Math.fround(V[k + 4]!);
+      P[3 * i] = (cx + sx * a0 + sy * b0) * MM;
+      P[3 * i + 1] = (elevation + Math.fround(V[k + 2]!)) * MM;
+      P[3 * i + 2] = (cy + sx * a1 + sy * b1) * MM;
+      N[3 * i] = snx * a0 + sny * b0;
+      N[3 * i + 1] = V[k + 5]!;
+      N[3 * i + 2] = snx * a1 + sny * b1;
+      T[2 * i] = V[k + 6]!;
+      T[2 * i + 1] = V[k + 7]!;
+    }
+    this.count = first + vertices;
+    // Each polygon a fan from its first corner, each triangle wound by the facing test on the
+    // unrounded positions.
+    let at = 0;
+    let c = this.indexCount;
+    for (let q = 0; q < polygons; q++) {
+      const n = F[4 * q]!,
+        fx = F[4 * q + 1]!,
+        fy = F[4 * q + 2]!,
+        fz = F[4 * q + 3]!;
+      const base = first + at;
+      const k0 = 8 * at;
+      const ax = V[k0]!,
+        ay = V[k0 + 1]!,
+        az = V[k0 + 2]!;
+      for (let j = 1; j + 1 < n; j++) {
+        const kb = k0 + 8 * j,
+          kc = kb + 8;
+        const e1x = V[kb]! - ax,
+          e1y = V[kb + 1]! - ay,
+          e1z = V[kb + 2]! - az;
+        const e2x = V[kc]! - ax,
+          e2y = V[kc + 1]! - ay,
+          e2z = V[kc + 2]! - az;
+        const facing = (e1y * e2z - e1z * e2y) * fx + (e1z * e2x - e1x * e2z) * fy + (e1x * e2y - e1y * e2x) * fz;
+        I[c] = base;
+        if (facing >= 0) {
+          I[c + 1] = base + j + 1;
+          I[c + 2] = base + j;
+        } else {
+          I[c + 1] = base + j;
+          I[c + 2] = base + j + 1;
+        }
+        c += 3;
+      }
+      at += n;
+    }
+    this.indexCount = c;
+  }
 }
 
 /**
@@ -210,81 +231,69 @@ function hypot2(dx: number, dy: number): number {
 }
 
 /** One writer per material slot, reused by every form built on this thread. */
-const WRITERS: Record<MaterialSlot, Writer> = { main: new Writer(), accent: new Writer(), own: new Writer() };
+const WRITERS: readonly Writer[] = [new Writer(), new Writer(), new Writer()];
 
-interface Frame {
-  cx: number;
-  cy: number;
-  ax: readonly [number, number];
-  ay: readonly [number, number];
-  elevation: number;
-}
+// A box's six faces in order (front +y, back −y, right +x, left −x, top, underside): the normal
+// each faces, then its four corners in order round it as which of x0/x1, y0/y1, z0/z1 they take.
+// Sides run u along the face (the coordinate and sign in BOX_U) and v up; the top and underside
+// take the plan position in metres.
+// prettier-ignore
+const BOX_FACES = new Int8Array([
+  0, 1, 0, /* corners */ 0, 1, 0, 1, 1, 0, 1, 1, 1, 0, 1, 1,
+  0, -1, 0, /* corners */ 1, 0, 0, 0, 0, 0, 0, 0, 1, 1, 0, 1,
+  1, 0, 0, /* corners */ 1, 1, 0, 1, 0, 0, 1, 0, 1, 1, 1, 1,
+  -1, 0, 0, /* corners */ 0, 0, 0, 0, 1, 0, 0, 1, 1, 0, 0, 1,
+  0, 0, 1, /* corners */ 0, 0, 1, 1, 0, 1, 1, 1, 1, 0, 1, 1,
+  0, 0, -1, /* corners */ 0, 0, 0, 1, 0, 0, 1, 1, 0, 0, 1, 0,
+]);
+/** For each side face, u is this plan coordinate (0 x, 1 y) times this sign. */
+// prettier-ignore
+const BOX_U = new Int8Array([0, 1, 0, -1, 1, -1, 1, 1]);
+/** The box's extents, x0 x1 y0 y1 z0 z1, for the corners to pick from. */
+const BOX_EXTENTS = new Float64Array(6);
 
-function frameOf(at: Placement): Frame {
-  const ax = directionDeg(at.rotation);
-  return { cx: at.x, cy: at.y, ax, ay: [-ax[1], ax[0]], elevation: at.elevation };
-}
-
-// The four sides, then the top and the underside, each a fan over its corners; written from plain
-// numbers (no arrays per part), in the same order and with the same values as corner lists would give.
 function writeBox(w: Writer, part: Part): void {
-  const x0 = part.x - part.w / 2,
-    x1 = part.x + part.w / 2;
-  const y0 = part.y - part.d / 2,
-    y1 = part.y + part.d / 2;
-  const z0 = part.z,
-    z1 = part.z + part.h;
-  const v0 = z0 * MM,
-    v1 = z1 * MM;
-  let base = w.count;
-  // Front (+y).
-  w.raw(x0, y1, z0, 0, 1, 0, x0 * MM, v0);
-  w.raw(x1, y1, z0, 0, 1, 0, x1 * MM, v0);
-  w.raw(x1, y1, z1, 0, 1, 0, x1 * MM, v1);
-  w.raw(x0, y1, z1, 0, 1, 0, x0 * MM, v1);
-  w.fan(base, 4, PLUS_Y);
-  // Back (−y).
-  base = w.count;
-  w.raw(x1, y0, z0, 0, -1, 0, -x1 * MM, v0);
-  w.raw(x0, y0, z0, 0, -1, 0, -x0 * MM, v0);
-  w.raw(x0, y0, z1, 0, -1, 0, -x0 * MM, v1);
-  w.raw(x1, y0, z1, 0, -1, 0, -x1 * MM, v1);
-  w.fan(base, 4, MINUS_Y);
-  // Right (+x).
-  base = w.count;
-  w.raw(x1, y1, z0, 1, 0, 0, -y1 * MM, v0);
-  w.raw(x1, y0, z0, 1, 0, 0, -y0 * MM, v0);
-  w.raw(x1, y0, z1, 1, 0, 0, -y0 * MM, v1);
-  w.raw(x1, y1, z1, 1, 0, 0, -y1 * MM, v1);
-  w.fan(base, 4, PLUS_X);
-  // Left (−x).
-  base = w.count;
-  w.raw(x0, y0, z0, -1, 0, 0, y0 * MM, v0);
-  w.raw(x0, y1, z0, -1, 0, 0, y1 * MM, v0);
-  w.raw(x0, y1, z1, -1, 0, 0, y1 * MM, v1);
-  w.raw(x0, y0, z1, -1, 0, 0, y0 * MM, v1);
-  w.fan(base, 4, MINUS_X);
-  // Top and underside: uvs are the plan position in metres.
-  base = w.count;
-  w.raw(x0, y0, z1, 0, 0, 1, x0 * MM, y0 * MM);
-  w.raw(x1, y0, z1, 0, 0, 1, x1 * MM, y0 * MM);
-  w.raw(x1, y1, z1, 0, 0, 1, x1 * MM, y1 * MM);
-  w.raw(x0, y1, z1, 0, 0, 1, x0 * MM, y1 * MM);
-  w.fan(base, 4, PLUS_Z);
-  base = w.count;
-  w.raw(x0, y0, z0, 0, 0, -1, x0 * MM, y0 * MM);
-  w.raw(x1, y0, z0, 0, 0, -1, x1 * MM, y0 * MM);
-  w.raw(x1, y1, z0, 0, 0, -1, x1 * MM, y1 * MM);
-  w.raw(x0, y1, z0, 0, 0, -1, x0 * MM, y1 * MM);
-  w.fan(base, 4, MINUS_Z);
+  const E = BOX_EXTENTS,
+    V = VERTS,
+    F = POLYS,
+    B = BOX_FACES,
+    U = BOX_U;
+  E[0] = part.x - part.w / 2;
+  E[1] = part.x + part.w / 2;
+  E[2] = part.y - part.d / 2;
+  E[3] = part.y + part.d / 2;
+  E[4] = part.z;
+  E[5] = part.z + part.h;
+  for (let f = 0; f < 6; f++) {
+    const nx = B[15 * f]!,
+      ny = B[15 * f + 1]!,
+      nz = B[15 * f + 2]!;
+    F[4 * f] = 4;
+    F[4 * f + 1] = nx;
+    F[4 * f + 2] = ny;
+    F[4 * f + 3] = nz;
+    for (let c = 0; c < 4; c++) {
+      const k = 8 * (4 * f + c);
+      const x = E[B[15 * f + 3 + 3 * c]!]!,
+        y = E[2 + B[15 * f + 4 + 3 * c]!]!,
+        z = E[4 + B[15 * f + 5 + 3 * c]!]!;
+      V[k] = x;
+      V[k + 1] = y;
+      V[k + 2] = z;
+      V[k + 3] = nx;
+      V[k + 4] = ny;
+      V[k + 5] = nz;
+      if (f < 4) {
+        V[k + 6] = U[2 * f + 1]! * (U[2 * f] === 0 ? x : y) * MM;
+        V[k + 7] = z * MM;
+      } else {
+        V[k + 6] = x * MM;
+        V[k + 7] = y * MM;
+      }
+    }
+  }
+  w.emit(24, 6);
 }
-
-const PLUS_X: V3 = [1, 0, 0];
-const MINUS_X: V3 = [-1, 0, 0];
-const PLUS_Y: V3 = [0, 1, 0];
-const MINUS_Y: V3 = [0, -1, 0];
-const PLUS_Z: V3 = [0, 0, 1];
-const MINUS_Z: V3 = [0, 0, -1];
 
 // An outline round a part, written into scratch arrays (x, y pairs) reused for every part.
 const OUTLINE_POINTS = new Float64Array(2 * 64);
@@ -356,7 +365,7 @@ function roundedOutlineInto(part: Part): number {
 
 /** Writes a leg's outline at its top into the scratch arrays; returns how many points. */
 function legOutlineInto(part: Part): number {
-  const sides = part.w > WIDE_LEG_MM ? WIDE_LEG_SIDES : LEG_SIDES;
+  const sides = legSides(part);
   const r = part.w / 2;
   const P = OUTLINE_POINTS,
     N = OUTLINE_NORMALS;
@@ -391,16 +400,16 @@ export function legOutline(part: Part): { points: [number, number][]; normals: [
   return outlinePairs(legOutlineInto(part));
 }
 
-const EXTRUSION_FACE: V3 = [0, 0, 0];
-
 // The scratch outline's `n` points as an upright prism from z0 to z1: its sides (smooth normals
 // round it, u running along the outline), its top and its underside. The underside is the
 // outline scaled by `bottomScale` about (cx, cy).
 function writeExtrusion(w: Writer, n: number, z0: number, z1: number, bottomScale: number, cx: number, cy: number): void {
   const P = OUTLINE_POINTS,
-    N = OUTLINE_NORMALS;
-  const face = EXTRUSION_FACE;
-  face[2] = 0;
+    N = OUTLINE_NORMALS,
+    V = VERTS,
+    F = POLYS;
+  const v0 = z0 * MM,
+    v1 = z1 * MM;
   let u = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
@@ -413,119 +422,128 @@ function writeExtrusion(w: Writer, n: number, z0: number, z1: number, bottomScal
       niy = N[2 * i + 1]!,
       njx = N[2 * j]!,
       njy = N[2 * j + 1]!;
-    const base = w.count;
-    w.raw(cx + (pix - cx) * bottomScale, cy + (piy - cy) * bottomScale, z0, nix, niy, 0, u * MM, z0 * MM);
-    w.raw(cx + (pjx - cx) * bottomScale, cy + (pjy - cy) * bottomScale, z0, njx, njy, 0, (u + step) * MM, z0 * MM);
-    w.raw(pjx, pjy, z1, njx, njy, 0, (u + step) * MM, z1 * MM);
-    w.raw(pix, piy, z1, nix, niy, 0, u * MM, z1 * MM);
-    face[0] = (nix + njx) / 2;
-    face[1] = (niy + njy) / 2;
-    w.fan(base, 4, face);
+    const u0 = u * MM,
+      u1 = (u + step) * MM;
+    // Foot i, foot j, top j, top i.
+    const k = 32 * i;
+    V[k] = cx + (pix - cx) * bottomScale;
+    V[k + 1] = cy + (piy - cy) * bottomScale;
+    V[k + 2] = z0;
+    V[k + 3] = nix;
+    V[k + 4] = niy;
+    V[k + 5] = 0;
+    V[k + 6] = u0;
+    V[k + 7] = v0;
+    V[k + 8] = cx + (pjx - cx) * bottomScale;
+    V[k + 9] = cy + (pjy - cy) * bottomScale;
+    V[k + 10] = z0;
+    V[k + 11] = njx;
+    V[k + 12] = njy;
+    V[k + 13] = 0;
+    V[k + 14] = u1;
+    V[k + 15] = v0;
+    V[k + 16] = pjx;
+    V[k + 17] = pjy;
+    V[k + 18] = z1;
+    V[k + 19] = njx;
+    V[k + 20] = njy;
+    V[k + 21] = 0;
+    V[k + 22] = u1;
+    V[k + 23] = v1;
+    V[k + 24] = pix;
+    V[k + 25] = piy;
+    V[k + 26] = z1;
+    V[k + 27] = nix;
+    V[k + 28] = niy;
+    V[k + 29] = 0;
+    V[k + 30] = u0;
+    V[k + 31] = v1;
+    F[4 * i] = 4;
+    F[4 * i + 1] = (nix + njx) / 2;
+    F[4 * i + 2] = (niy + njy) / 2;
+    F[4 * i + 3] = 0;
     u += step;
   }
-  let base = w.count;
+  // The top, then the underside.
   for (let i = 0; i < n; i++) {
     const px = P[2 * i]!,
       py = P[2 * i + 1]!;
-    w.raw(px, py, z1, 0, 0, 1, px * MM, py * MM);
+    const bx = cx + (px - cx) * bottomScale,
+      by = cy + (py - cy) * bottomScale;
+    const t = 8 * (4 * n + i),
+      b = 8 * (5 * n + i);
+    V[t] = px;
+    V[t + 1] = py;
+    V[t + 2] = z1;
+    V[t + 3] = 0;
+    V[t + 4] = 0;
+    V[t + 5] = 1;
+    V[t + 6] = px * MM;
+    V[t + 7] = py * MM;
+    V[b] = bx;
+    V[b + 1] = by;
+    V[b + 2] = z0;
+    V[b + 3] = 0;
+    V[b + 4] = 0;
+    V[b + 5] = -1;
+    V[b + 6] = bx * MM;
+    V[b + 7] = by * MM;
   }
-  w.fan(base, n, PLUS_Z);
-  base = w.count;
-  for (let i = 0; i < n; i++) {
-    const bx = cx + (P[2 * i]! - cx) * bottomScale,
-      by = cy + (P[2 * i + 1]! - cy) * bottomScale;
-    w.raw(bx, by, z0, 0, 0, -1, bx * MM, by * MM);
-  }
-  w.fan(base, n, MINUS_Z);
-}
-
-function writeRounded(w: Writer, part: Part): void {
-  writeExtrusion(w, roundedOutlineInto(part), part.z, part.z + part.h, 1, 0, 0);
-}
-
-function writeLeg(w: Writer, part: Part): void {
-  writeExtrusion(w, legOutlineInto(part), part.z, part.z + part.h, part.taper ?? 1, part.x, part.y);
+  F[4 * n] = n;
+  F[4 * n + 1] = 0;
+  F[4 * n + 2] = 0;
+  F[4 * n + 3] = 1;
+  F[4 * n + 4] = n;
+  F[4 * n + 5] = 0;
+  F[4 * n + 6] = 0;
+  F[4 * n + 7] = -1;
+  w.emit(6 * n, n + 2);
 }
 
 function writePart(w: Writer, part: Part): void {
-  if (part.shape === 'rounded') writeRounded(w, part);
-  else if (part.shape === 'leg') writeLeg(w, part);
+  if (part.shape === 'rounded') writeExtrusion(w, roundedOutlineInto(part), part.z, part.z + part.h, 1, 0, 0);
+  else if (part.shape === 'leg')
+    writeExtrusion(w, legOutlineInto(part), part.z, part.z + part.h, part.taper ?? 1, part.x, part.y);
   else writeBox(w, part);
 }
 
-/** A piece's parts in its own frame (mm, z up), one mesh per material slot; placeForm puts them in the room. */
-export function localFormMeshes(parts: readonly Part[]): FormMeshes {
-  const writers = WRITERS;
-  writers.main.reset();
-  writers.accent.reset();
-  writers.own.reset();
-  const ownColours: ColourRun[] = [];
-  for (const part of parts) {
-    const writer = writers[part.slot];
-    const before = writer.count;
-    writePart(writer, part);
-    if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: writer.count - before });
-  }
-  const mainSize = writers.main.size,
-    accentSize = writers.accent.size;
-  const [buffer, at] = claim(mainSize + accentSize + writers.own.size);
+/** A mesh of `vertices` vertices and `indices` triangle corners laid in `buffer` from `at` (4-byte numbers). */
+function meshIn(buffer: ArrayBuffer, at: number, vertices: number, indices: number): MeshData {
+  if (indices === 0) return EMPTY_MESH;
   return {
-    main: writers.main.toMesh(buffer, at),
-    accent: writers.accent.toMesh(buffer, at + mainSize),
-    own: writers.own.toMesh(buffer, at + mainSize + accentSize),
-    ownColours,
+    positions: new Float32Array(buffer, at * 4, vertices * 3),
+    normals: new Float32Array(buffer, (at + vertices * 3) * 4, vertices * 3),
+    uvs: new Float32Array(buffer, (at + vertices * 6) * 4, vertices * 2),
+    indices: new Uint32Array(buffer, (at + vertices * 8) * 4, indices),
   };
-}
-
-// Writes `mesh` placed by `f` into `out` from `at` (positions, then normals) and returns it with
-// the local uvs and triangles, which do not change with where the piece stands (shared, never
-// written to).
-function placeMesh(mesh: MeshData, f: Frame, out: Float32Array, at: number): MeshData {
-  const n = mesh.positions.length;
-  const positions = out.subarray(at, at + n);
-  const normals = out.subarray(at + n, at + 2 * n);
-  const p = mesh.positions;
-  const q = mesh.normals;
-  const [a0, a1] = f.ax;
-  const [b0, b1] = f.ay;
-  for (let i = 0; i < n; i += 3) {
-    positions[i] = (f.cx + p[i]! * a0 + p[i + 1]! * b0) * MM;
-    positions[i + 1] = (f.elevation + p[i + 2]!) * MM;
-    positions[i + 2] = (f.cy + p[i]! * a1 + p[i + 1]! * b1) * MM;
-    normals[i] = q[i]! * a0 + q[i + 1]! * b0;
-    normals[i + 1] = q[i + 2]!;
-    normals[i + 2] = q[i]! * a1 + q[i + 1]! * b1;
-  }
-  return { positions, normals, uvs: mesh.uvs, indices: mesh.indices };
-}
-
-/** Numbers placeForm writes for a form: positions and normals of every slot. */
-export function placedSize(local: FormMeshes): number {
-  return 2 * (local.main.positions.length + local.accent.positions.length + local.own.positions.length);
 }
 
 /**
- * A piece's form in its own frame placed in the room: scene metres, y up. Written into `out` from
- * `at` (placedSize(local) numbers) when given, so a room's forms can share one buffer.
+ * A piece's form placed in the room (scene metres, y up), every vertex written once straight into
+ * `buffer` from `at` (plan.size 4-byte numbers), so a room's forms can share one buffer.
  */
-export function placeForm(local: FormMeshes, at: Placement, out?: Float32Array, offset = 0): FormMeshes {
-  const frame = frameOf(at);
-  const into = out ?? new Float32Array(placedSize(local));
-  const start = out ? offset : 0;
-  const main = 2 * local.main.positions.length;
-  const accent = 2 * local.accent.positions.length;
-  return {
-    main: placeMesh(local.main, frame, into, start),
-    accent: placeMesh(local.accent, frame, into, start + main),
-    own: placeMesh(local.own, frame, into, start + main + accent),
-    ownColours: local.ownColours,
-  };
+export function writeForm(plan: FormPlan, at: Placement, buffer: ArrayBuffer, offset: number): FormMeshes {
+  const meshes: MeshData[] = [];
+  const axis = directionDeg(at.rotation);
+  let o = offset;
+  for (let s = 0; s < 3; s++) {
+    const v = plan.vertices[s]!,
+      i = plan.indices[s]!;
+    const mesh = meshIn(buffer, o, v, i);
+    o += 8 * v + i;
+    WRITERS[s]!.begin(mesh, at, axis);
+    meshes.push(mesh);
+  }
+  for (const part of plan.parts) writePart(WRITERS[SLOT_INDEX[part.slot]]!, part);
+  return { main: meshes[0]!, accent: meshes[1]!, own: meshes[2]!, ownColours: plan.ownColours };
 }
 
 /** A piece's parts placed in the room, scene metres, one mesh per material slot. */
 export function formMeshes(parts: readonly Part[], at: Placement): FormMeshes {
-  return placeForm(localFormMeshes(parts), at);
+  const plan = planForm(parts);
+  return writeForm(plan, at, new ArrayBuffer(plan.size * 4), 0);
 }
+
 /** Triangles a form draws, over all its slots. */
 export function formTriangles(meshes: FormMeshes): number {
   return (meshes.main.indices.length + meshes.accent.indices.length + meshes.own.indices.length) / 3;

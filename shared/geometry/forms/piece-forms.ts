@@ -2,28 +2,73 @@
 // use (shared/geometry/scene.ts builds those; both stay reachable so they can be compared).
 import type { Piece } from '../../schemas/option';
 import { formParts } from './index';
-import { localFormMeshes, placedSize, placeForm, type FormMeshes } from './mesh';
+import { planForm, writeForm, type FormMeshes, type FormPlan } from './mesh';
 
 /**
- * Forms already built in their own frame, by kind, settings and box: moving or turning a piece
- * only places the same form again, so a drag rebuilds nothing. Bounded, oldest dropped first.
+ * Form plans (parts and the sizes of their meshes) by kind, settings and box: pieces alike share
+ * one, and a piece moved or turned is written again without working out its parts. Bounded,
+ * oldest dropped first.
  */
-const LOCAL_FORMS = new Map<string, FormMeshes>();
-const LOCAL_FORMS_MAX = 400;
+let PLANS = new Map<string, FormPlan>();
+const PLANS_MAX = 400;
 
-function localForm(p: Piece): FormMeshes {
-  const key = JSON.stringify([p.kind, p.settings, p.width, p.depth, p.height]);
-  const known = LOCAL_FORMS.get(key);
+/**
+ * Placed forms kept from earlier builds, by piece id, with the plan and placement they were
+ * written for: a rebuild (a piece dragged, the others where they were) hands back the others'
+ * meshes as they are (never written to once made). A few placements per piece (two views of
+ * the same piece, or undo), a bounded number of pieces, oldest dropped first.
+ */
+interface KeptForm {
+  plan: FormPlan;
+  x: number;
+  y: number;
+  rotation: number;
+  elevation: number;
+  meshes: FormMeshes;
+}
+let KEPT = new Map<string, KeptForm[]>();
+const KEPT_PIECES_MAX = 1000;
+const KEPT_PER_PIECE = 4;
+
+function planOf(p: Piece): FormPlan {
+  const key = `${p.kind}|${p.width}|${p.depth}|${p.height}|${p.settings ? JSON.stringify(p.settings) : ''}`;
+  const known = PLANS.get(key);
   if (known) return known;
-  const made = localFormMeshes(formParts(p.kind, p.settings, { width: p.width, depth: p.depth, height: p.height }));
-  if (LOCAL_FORMS.size >= LOCAL_FORMS_MAX) LOCAL_FORMS.delete(LOCAL_FORMS.keys().next().value!);
-  LOCAL_FORMS.set(key, made);
+  const made = planForm(formParts(p.kind, p.settings, { width: p.width, depth: p.depth, height: p.height }));
+  if (PLANS.size >= PLANS_MAX) PLANS.delete(PLANS.keys().next().value!);
+  PLANS.set(key, made);
   return made;
 }
 
-/** Forgets every built form (the bench measures building from nothing with it). */
+function keptFor(p: Piece, plan: FormPlan): FormMeshes | undefined {
+  const kept = KEPT.get(p.id);
+  if (!kept) return undefined;
+  for (const k of kept)
+    if (k.plan === plan && k.x === p.x && k.y === p.y && k.rotation === p.rotation && k.elevation === p.elevation)
+      return k.meshes;
+  return undefined;
+}
+
+function keep(p: Piece, plan: FormPlan, meshes: FormMeshes): void {
+  let kept = KEPT.get(p.id);
+  if (!kept) {
+    if (KEPT.size >= KEPT_PIECES_MAX) KEPT.delete(KEPT.keys().next().value!);
+    kept = [];
+    KEPT.set(p.id, kept);
+  }
+  if (kept.length >= KEPT_PER_PIECE) kept.shift();
+  kept.push({ plan, x: p.x, y: p.y, rotation: p.rotation, elevation: p.elevation, meshes });
+}
+
+/**
+ * Forgets every built form (the bench measures building from nothing with it). New maps, not
+ * cleared ones: a cleared map's old table lingers until a full collection and holds on to the
+ * young forms put in after, so every collection of young garbage kept them and they piled up
+ * for a full one.
+ */
 export function clearFormCache(): void {
-  LOCAL_FORMS.clear();
+  PLANS = new Map();
+  KEPT = new Map();
 }
 
 export interface PieceFormData {
@@ -32,20 +77,24 @@ export interface PieceFormData {
 }
 
 /**
- * The forms of an option's placed pieces, in document order, scene metres. Every piece's placed
- * positions and normals are written into one buffer sized first, not one buffer per mesh.
+ * The forms of an option's placed pieces, in document order, scene metres. Forms not kept from
+ * an earlier build are counted first, then written once into one buffer of that size.
  */
 export function buildPieceForms(pieces: readonly Piece[]): PieceFormData[] {
   const placed = pieces.filter((p) => p.placed);
-  const locals = placed.map(localForm);
+  const plans = placed.map(planOf);
+  const meshes = placed.map((p, i) => keptFor(p, plans[i]!));
   let size = 0;
-  for (const local of locals) size += placedSize(local);
-  const out = new Float32Array(size);
+  for (let i = 0; i < placed.length; i++) if (!meshes[i]) size += plans[i]!.size;
+  const buffer = new ArrayBuffer(size * 4);
   let at = 0;
-  return placed.map((p, i) => {
-    const local = locals[i]!;
-    const meshes = placeForm(local, { x: p.x, y: p.y, rotation: p.rotation, elevation: p.elevation }, out, at);
-    at += placedSize(local);
-    return { id: p.id, meshes };
+  placed.forEach((p, i) => {
+    if (meshes[i]) return;
+    const plan = plans[i]!;
+    const made = writeForm(plan, p, buffer, at);
+    at += plan.size;
+    keep(p, plan, made);
+    meshes[i] = made;
   });
+  return placed.map((p, i) => ({ id: p.id, meshes: meshes[i]! }));
 }
