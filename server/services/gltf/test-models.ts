@@ -80,9 +80,57 @@ export function addBox(
   );
 }
 
+/** A smooth ellipsoid of `segments` × `segments` quads (2 × segments² triangles): a dense cushion. */
+export function addEllipsoid(
+  doc: Document,
+  mesh: Mesh,
+  material: Material,
+  radii: [number, number, number],
+  centre: [number, number, number],
+  segments: number,
+): void {
+  const positions: number[] = [];
+  const uvs: number[] = [];
+  const indices: number[] = [];
+  for (let i = 0; i <= segments; i++) {
+    const theta = (i / segments) * Math.PI;
+    for (let j = 0; j <= segments; j++) {
+      const phi = (j / segments) * 2 * Math.PI;
+      positions.push(
+        centre[0] + radii[0] * Math.sin(theta) * Math.cos(phi),
+        centre[1] + radii[1] * Math.cos(theta),
+        centre[2] + radii[2] * Math.sin(theta) * Math.sin(phi),
+      );
+      uvs.push(j / segments, i / segments);
+    }
+  }
+  const row = segments + 1;
+  for (let i = 0; i < segments; i++)
+    for (let j = 0; j < segments; j++) {
+      const a = i * row + j;
+      indices.push(a, a + row, a + 1, a + 1, a + row, a + row + 1);
+    }
+  const buffer = doc.getRoot().listBuffers()[0] ?? doc.createBuffer();
+  mesh.addPrimitive(
+    doc
+      .createPrimitive()
+      .setMaterial(material)
+      .setAttribute('POSITION', doc.createAccessor().setType('VEC3').setArray(new Float32Array(positions)).setBuffer(buffer))
+      .setAttribute('TEXCOORD_0', doc.createAccessor().setType('VEC2').setArray(new Float32Array(uvs)).setBuffer(buffer))
+      .setIndices(doc.createAccessor().setType('SCALAR').setArray(new Uint32Array(indices)).setBuffer(buffer)),
+  );
+}
+
+/** A woven-looking swatch: a two-colour check of 8 px squares (a plain colour would be pruned as one). */
 async function swatchPng(px = 64): Promise<Uint8Array> {
+  const pixels = Buffer.alloc(px * px * 3);
+  for (let y = 0; y < px; y++)
+    for (let x = 0; x < px; x++) {
+      const dark = ((x >> 3) + (y >> 3)) % 2 === 0;
+      pixels.set(dark ? [120, 86, 60] : [176, 140, 104], (y * px + x) * 3);
+    }
   return new Uint8Array(
-    await sharp({ create: { width: px, height: px, channels: 3, background: { r: 150, g: 110, b: 80 } } })
+    await sharp(pixels, { raw: { width: px, height: px, channels: 3 } })
       .png()
       .toBuffer(),
   );
@@ -93,11 +141,16 @@ function texture(doc: Document, png: Uint8Array): Texture {
 }
 
 /**
- * A dining chair of boxes, 0.45 m wide (X), 0.5 m deep (Z), 0.9 m high (Y), standing on y = 0, its
+ * A dining chair of boxes (and, with `cushionSegments`, a dense cushion), 0.45 m wide (X), 0.5 m deep (Z), 0.9 m high (Y), standing on y = 0, its
  * seat facing +Z; the seat wears a small PNG texture. `scale` multiplies every length (100: authored
  * in centimetres); `facing` 'x-' turns it so its front faces −X.
  */
-export async function chairDocument({ scale = 1, facing = 'z+' as 'z+' | 'x-', texturePx = 64 } = {}): Promise<Document> {
+export async function chairDocument({
+  scale = 1,
+  facing = 'z+' as 'z+' | 'x-',
+  texturePx = 64,
+  cushionSegments = 0,
+} = {}): Promise<Document> {
   const doc = new Document();
   doc.createBuffer();
   const wood = doc.createMaterial('Frame').setBaseColorFactor([0.45, 0.3, 0.2, 1]).setRoughnessFactor(0.7);
@@ -116,6 +169,8 @@ export async function chairDocument({ scale = 1, facing = 'z+' as 'z+' | 'x-', t
   for (const [x, z] of legs) addBox(doc, mesh, wood, [0.04 * s, 0.43 * s, 0.04 * s], [x * s, 0.215 * s, z * s]);
   addBox(doc, mesh, seat, [0.45 * s, 0.05 * s, 0.5 * s], [0, 0.455 * s, 0]);
   addBox(doc, mesh, wood, [0.45 * s, 0.42 * s, 0.04 * s], [0, 0.69 * s, -0.23 * s]);
+  // A dense seat cushion inside the chair's bounds, to be simplified.
+  if (cushionSegments > 0) addEllipsoid(doc, mesh, seat, [0.2 * s, 0.04 * s, 0.22 * s], [0, 0.5 * s, 0], cushionSegments);
   const node = doc.createNode('chair').setMesh(mesh);
   // Turning a +Z front to −X is a quarter turn of −90° about Y.
   if (facing === 'x-') node.setRotation([0, -Math.SQRT1_2, 0, Math.SQRT1_2]);
