@@ -12,6 +12,7 @@ import type { FinishMaterials, SurfaceFinishes } from './finish-materials';
 import { formGroups, groupVertexColours, type FormGroup } from './form-groups';
 import type { SceneMaterials } from './materials';
 import { pieceVertexColours } from './piece-colours';
+import { PieceModels, useLoadedModels, type ModelSource } from './piece-models';
 
 /** A press that moves further than this (CSS pixels) was an orbit, not a click on a piece. */
 export const CLICK_SLOP_PX = 5;
@@ -35,6 +36,8 @@ interface RoomPiecesProps {
   materials: SceneMaterials;
   onPieceClick?: (id: string) => void;
   forms?: PieceFormsInput;
+  /** Pieces that wear a model, by piece id: drawn as the model once it has arrived, as the form until then. */
+  models?: ReadonlyMap<string, ModelSource>;
 }
 
 type ClickHandlers = ReturnType<typeof useClickHandlers>;
@@ -147,9 +150,26 @@ function FormGroupMesh({
  * towards the accent and its box outlined.
  */
 export function RoomPieces(props: RoomPiecesProps) {
+  const loaded = useLoadedModels(props.models);
+  const { forms } = props;
+  // A piece whose model has arrived is drawn by the model alone.
+  const formsShown = useMemo(
+    () => (forms && loaded.size > 0 ? { ...forms, data: forms.data.filter((d) => !loaded.has(d.id)) } : forms),
+    [forms, loaded],
+  );
   return (
     <group>
-      {props.forms ? <PieceForms {...props} forms={props.forms} /> : <PieceBoxes {...props} />}
+      {formsShown ? <PieceForms {...props} forms={formsShown} /> : <PieceBoxes {...props} />}
+      {props.models && loaded.size > 0 && (
+        <PieceModels
+          pieces={props.pieces}
+          sources={props.models}
+          loaded={loaded}
+          finishes={forms?.finishes}
+          finishMaterials={forms?.finishMaterials}
+          onPieceClick={props.onPieceClick}
+        />
+      )}
       <SelectionEdges pieceScene={props.pieceScene} selectedPieceId={props.selectedPieceId} materials={props.materials} />
     </group>
   );
