@@ -14,6 +14,7 @@ import { projectRoutes } from './features/projects/projects.routes';
 import { outboxRoutes } from './features/outbox/outbox.routes';
 import { roomRoutes } from './features/rooms/rooms.routes';
 import { finishRoutes } from './features/finishes/finishes.routes';
+import { modelRoutes } from './features/models/models.routes';
 import { fileRoutes } from './features/files/files.routes';
 import { presentationRoutes } from './features/presentations/presentations.routes';
 import { clientPresentationRoutes, readyLinkFastPath } from './features/presentations/client.routes';
@@ -39,6 +40,7 @@ export function allRoutes(): RouteDef[] {
     ...projectRoutes,
     ...roomRoutes,
     ...finishRoutes,
+    ...modelRoutes,
     ...fileRoutes,
     ...presentationRoutes,
     ...scheduleRoutes,

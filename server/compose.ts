@@ -7,6 +7,7 @@ import { verifyPassword } from './services/auth/passwords';
 import { createJobQueue } from './services/jobs/job-queue';
 import { photoJobKinds } from './features/finishes/finishes.jobs';
 import { mailJobKinds } from './features/outbox/mail-queue';
+import { modelJobKinds } from './features/models/models.jobs';
 import { ClientLinkCache } from './features/presentations/client-cache';
 
 export function createServices(deps: AppDeps): AppServices {
@@ -22,6 +23,7 @@ export function createServices(deps: AppDeps): AppServices {
     maintenanceSeconds: deps.config.JOB_MAINTENANCE_SECONDS,
     kinds: [
       ...photoJobKinds({ db: deps.db, storage, logger }, Math.max(1, deps.config.WORKERS), deps.config.PHOTO_JOB_TIMEOUT_SECONDS),
+      ...modelJobKinds({ db: deps.db, storage, logger }),
       ...mailJobKinds({ db: deps.db, mailer: deps.mailer, config: deps.config, logger }),
     ],
   });

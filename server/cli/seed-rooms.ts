@@ -68,13 +68,19 @@ const BEDROOM_B: Variant = {
     }),
 };
 
-/** Puts each look's finishes on the option and on its pieces. */
-function dressed(pieces: Piece[], looks: ReturnType<Looks>) {
+/** Puts each look's finishes on the option and on its pieces, and the demo models on the pieces they were made for. */
+function dressed(pieces: Piece[], looks: ReturnType<Looks>, modelIds: Record<string, string>) {
   return optionDocSchema.parse({
     pieces: pieces.map((p) => {
       const main = looks.pieceFinishes?.[p.id];
       const accent = looks.pieceAccents?.[p.id];
-      return { ...p, ...(main ? { finishId: main } : {}), ...(accent ? { accentFinishId: accent } : {}) };
+      const model = modelIds[p.id];
+      return {
+        ...p,
+        ...(main ? { finishId: main } : {}),
+        ...(accent ? { accentFinishId: accent } : {}),
+        ...(model ? { modelId: model, modelWearsFinishes: true } : {}),
+      };
     }),
     // A look naming a finish the studio lacks just leaves that surface plain (JSON drops undefined ids).
     finishes: JSON.parse(JSON.stringify(looks.finishes ?? {})),
@@ -86,6 +92,8 @@ export async function seedDemoRooms(
   studioId: string,
   projectId: string,
   finishIds: Record<string, string> = {},
+  /** Piece models by the demo piece id that wears them (the living room's sofa and armchair). */
+  modelIds: Record<string, string> = {},
 ): Promise<{ roomId: string; optionIds: string[] }[]> {
   const made: { roomId: string; optionIds: string[] }[] = [];
   for (const [file, variant] of [
@@ -96,9 +104,9 @@ export async function seedDemoRooms(
     const { name, ...shell } = plan.room;
     const room = await insertRoom(db, { studioId, projectId, name, shell });
     const base = optionDocSchema.parse({ pieces: plan.option.pieces });
-    const docA = dressed(base.pieces, variant.looksA(finishIds));
+    const docA = dressed(base.pieces, variant.looksA(finishIds), modelIds);
     const a = await insertOption(db, { studioId, roomId: room.id, name: variant.nameA, note: plan.option.note ?? '', doc: docA });
-    const docB = dressed(variant.change(base.pieces), variant.looksB(finishIds));
+    const docB = dressed(variant.change(base.pieces), variant.looksB(finishIds), modelIds);
     const b = await insertOption(db, { studioId, roomId: room.id, name: variant.name, note: variant.note, doc: docB });
     made.push({ roomId: room.id, optionIds: [a.id, b.id] });
   }

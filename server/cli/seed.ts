@@ -5,6 +5,7 @@ import { hashPassword } from '../services/auth/passwords';
 import { seedDemoRooms } from './seed-rooms';
 import { seedDemoPresentation } from './seed-presentation';
 import { demoFileStorage, seedDemoFinishes } from './seed-finishes';
+import { seedDemoModels } from './seed-models';
 
 export const DEMO_SIGN_IN = { email: 'demo@parlour.local', password: 'parlour-demo' } as const;
 
@@ -58,7 +59,8 @@ export async function seedDemo(db: Db): Promise<boolean> {
       })
       .execute();
     const finishes = await seedDemoFinishes(trx, studio.id, demoFileStorage());
-    const rooms = await seedDemoRooms(trx, studio.id, flat.id, finishes);
+    const models = await seedDemoModels(trx, studio.id, demoFileStorage());
+    const rooms = await seedDemoRooms(trx, studio.id, flat.id, finishes, models);
     await seedDemoPresentation(trx, { studioId: studio.id, projectId: flat.id, createdBy: owner.id, rooms });
   });
   return true;

@@ -217,6 +217,45 @@ export interface QueuedMailTable {
   sent_at: Date | null;
 }
 
+export interface PieceModelsTable {
+  id: Generated<string>;
+  studio_id: string;
+  name: string;
+  supplier: string | null;
+  link: string | null;
+  price: ColumnType<string | null, number | null | undefined, number | null>; // numeric arrives as text
+  kind: string | null;
+  turn_deg: ColumnType<number, number | undefined, number>;
+  /** The one-click unit fix: 0.01 for a model authored in centimetres, 0.001 in millimetres. */
+  scale: ColumnType<number, number | undefined, number>;
+  status: ColumnType<
+    'processing' | 'ready' | 'failed',
+    'processing' | 'ready' | 'failed' | undefined,
+    'processing' | 'ready' | 'failed'
+  >;
+  failure_reason: string | null;
+  file_name: string;
+  /** The private original: kept until processing ends. */
+  source_key: string | null;
+  source_bytes: number;
+  model_key: string | null;
+  model_bytes: number | null;
+  thumbnail_key: string | null;
+  thumbnail_bytes: number | null;
+  width_mm: number | null;
+  depth_mm: number | null;
+  height_mm: number | null;
+  min_mm: unknown; // [x, y, z] mm, parsed on the way out
+  triangles: number | null;
+  source_triangles: number | null;
+  materials: number | null;
+  unit_hint: 'cm' | 'mm' | null;
+  queued_at: Date | null;
+  processed_ms: number | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
 export interface Database {
   rooms: RoomsTable;
   options: OptionsTable;
@@ -235,6 +274,7 @@ export interface Database {
   rate_limit_counts: RateLimitCountsTable;
   sent_mail: SentMailTable;
   queued_mail: QueuedMailTable;
+  piece_models: PieceModelsTable;
 }
 
 export type Db = Kysely<Database>;

@@ -78,7 +78,8 @@ const repeatMm = z.coerce
   .max(100_000, 'Keep it under 100 m.');
 
 const nameSchema = nameText(120, 'Keep the name under 120 characters.').min(1, 'Enter a name.');
-const priceSchema = z
+/** A price a designer types: none, or 0 up to 1,000,000 in the studio's currency. */
+export const priceSchema = z
   .number({ message: 'Enter a price.' })
   .finite()
   .nonnegative('A price cannot be negative.')

@@ -101,6 +101,12 @@ export const pieceSchema = z.object({
   accentFinishId: docIdText.nullable().optional(),
   /** The designer marks the piece as fixed to the wall against tipping; the fit check warns of tall storage that is not. */
   fixedToWall: z.boolean().optional(),
+  /** A model from the studio's library, drawn in 3D instead of the form (the form stays the plan symbol and the fallback). */
+  modelId: docIdText.nullable().optional(),
+  /** The designer chose to fit the model into the box (scaled uniformly, centred) though its measured size differs. */
+  modelFitted: z.boolean().optional(),
+  /** Whether the model's materials named “main” and “accent” wear the piece's finishes; by default the model keeps its own. */
+  modelWearsFinishes: z.boolean().optional(),
 });
 export type Piece = z.infer<typeof pieceSchema>;
 export type PieceInput = z.input<typeof pieceSchema>;

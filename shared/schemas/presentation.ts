@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import type { SceneFinish } from '../finishes/scene-finish';
 import { pieceSchema } from './option';
+import { clientModelSchema } from './piece-model';
 import { roomShellSchema } from './room';
 import { emailSchema } from './studio';
 import { noteText } from './common';
@@ -127,8 +128,18 @@ export type PresentationSummary = z.infer<typeof presentationSummarySchema>;
 
 /** A piece as the client sees it: no supplier link, no ids of other records, a price only when shown. */
 export const clientPieceSchema = pieceSchema
-  .omit({ supplierUrl: true, finishId: true, accentFinishId: true, price: true })
+  .omit({
+    supplierUrl: true,
+    finishId: true,
+    accentFinishId: true,
+    price: true,
+    modelId: true,
+    modelFitted: true,
+    modelWearsFinishes: true,
+  })
   .extend({
+    /** The piece's model, when it wears a ready one; else the form is drawn. */
+    model: clientModelSchema.optional(),
     price: z.number().nullable().optional(),
     finish: z.object({ name: z.string(), colourHex: z.string().nullable() }).nullable(),
   });

@@ -14,6 +14,7 @@ import type { FinishMaterials, SurfaceFinishes } from './finish-materials';
 import { formGroups, groupVertexColours, type FormGroup } from './form-groups';
 import { FLAT_PIECE_LIFT_M, type SceneMaterials } from './materials';
 import { pieceVertexColours } from './piece-colours';
+import { PieceModels, useLoadedModels, type ModelSource } from './piece-models';
 
 /** A press that moves further than this (CSS pixels) was an orbit, not a click on a piece. */
 export const CLICK_SLOP_PX = 5;
@@ -37,6 +38,8 @@ interface RoomPiecesProps {
   materials: SceneMaterials;
   onPieceClick?: (id: string) => void;
   forms?: PieceFormsInput;
+  /** Pieces that wear a model, by piece id: drawn as the model once it has arrived, as the form until then. */
+  models?: ReadonlyMap<string, ModelSource>;
 }
 
 type ClickHandlers = ReturnType<typeof useClickHandlers>;
@@ -186,13 +189,30 @@ function FormGroupMesh({
  * towards the accent and highlighted: its form drawn again see-through in the accent, and outlined.
  */
 export function RoomPieces(props: RoomPiecesProps) {
+  const loaded = useLoadedModels(props.models);
+  const { forms } = props;
+  // A piece whose model has arrived is drawn by the model alone.
+  const formsShown = useMemo(
+    () => (forms && loaded.size > 0 ? { ...forms, data: forms.data.filter((d) => !loaded.has(d.id)) } : forms),
+    [forms, loaded],
+  );
   return (
     <group>
-      {props.forms ? <PieceForms {...props} forms={props.forms} /> : <PieceBoxes {...props} />}
+      {formsShown ? <PieceForms {...props} forms={formsShown} /> : <PieceBoxes {...props} />}
+      {props.models && loaded.size > 0 && (
+        <PieceModels
+          pieces={props.pieces}
+          sources={props.models}
+          loaded={loaded}
+          finishes={forms?.finishes}
+          finishMaterials={forms?.finishMaterials}
+          onPieceClick={props.onPieceClick}
+        />
+      )}
       <SelectionHighlight
         pieceScene={props.pieceScene}
         pieces={props.pieces}
-        forms={props.forms}
+        forms={formsShown}
         selectedPieceId={props.selectedPieceId}
         materials={props.materials}
       />

@@ -1,4 +1,4 @@
-// Sending a stored derived file (a texture, swatch or preview) once a route has authorised it.
+// Sending a stored derived file (a texture, swatch, preview or normalised model) once a route has authorised it.
 import { z } from 'zod';
 import type { Response } from 'express';
 import type { RouteContext } from '../../http/routes';
@@ -13,7 +13,7 @@ const IMMUTABLE = 'private, max-age=31536000, immutable';
 
 /**
  * Answers with the stored derived file `key` (already authorised by the caller), as an immutable
- * private WebP; a matching If-None-Match gets 304. `extra` headers go on both answers.
+ * private WebP or glTF binary; a matching If-None-Match gets 304. `extra` headers go on both answers.
  */
 export async function sendDerivedFile(
   ctx: Pick<RouteContext, 'req' | 'res' | 'services'>,
@@ -29,6 +29,9 @@ export async function sendDerivedFile(
   }
   const bytes = await ctx.services.storage.get(key);
   if (!bytes) throw notFound('That file');
-  res.set(cacheHeaders).type('image/webp').send(bytes);
+  res
+    .set(cacheHeaders)
+    .type(key.endsWith('.glb') ? 'model/gltf-binary' : 'image/webp')
+    .send(bytes);
   return undefined;
 }

@@ -24,7 +24,13 @@ import {
   type PresentationRow,
 } from './presentations.repository';
 import { choiceMail } from '../../services/mail/templates';
-import { clientPresentation, linkNotFound, presentationFinishIds, presentationForToken } from './presentations.service';
+import {
+  clientPresentation,
+  linkNotFound,
+  presentationFinishIds,
+  presentationForToken,
+  presentationModelIds,
+} from './presentations.service';
 import type { CachedLink } from './client-cache';
 
 const RATE_WINDOW_MS = 10 * 60_000;
@@ -70,7 +76,8 @@ export async function linkFileKey(
 ): Promise<string | null> {
   const p = await presentationForToken(services.db, services.config, token);
   const key = keyFromFileName(name);
-  const scope = { studioId: p.studio_id, finishIds: await presentationFinishIds(services.db, p) };
+  const [finishIds, modelIds] = await Promise.all([presentationFinishIds(services.db, p), presentationModelIds(services.db, p)]);
+  const scope = { studioId: p.studio_id, finishIds, modelIds };
   return key && (await canPresentationReadFile(services.db, scope, key)) ? key : null;
 }
 

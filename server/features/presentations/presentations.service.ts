@@ -27,6 +27,10 @@ import {
   type PresentationSummary,
 } from '../../../shared/schemas/presentation';
 import { toFinishes } from '../finishes/finishes.service';
+import { readyModelsByIds } from '../models/models.service';
+import type { PieceModelRow } from '../models/models.repository';
+import { fileUrl } from '../files/file-keys';
+import { modelTurnSchema, type ClientModel } from '../../../shared/schemas/piece-model';
 import {
   newTokenId,
   signPresentationToken,
@@ -215,6 +219,29 @@ export async function presentationFinishIds(db: Db, p: PresentationRow): Promise
   return [...new Set(shown.flatMap((s) => linkFinishIds(optionDocSchema.parse(withoutNonWebLinks(s.doc)))))];
 }
 
+/** The models an option's placed pieces wear (ids only; the link may load just these models' files). */
+const placedModelIds = (doc: OptionDoc) =>
+  doc.pieces.filter((piece) => piece.placed && piece.modelId && isUuid(piece.modelId)).map((piece) => piece.modelId!);
+
+/** Models worn by the pieces of a presentation's shown options (the link's file route serves only these). */
+export async function presentationModelIds(db: Db, p: PresentationRow): Promise<string[]> {
+  const shown = await listShownOptions(db, [p.id]);
+  return [...new Set(shown.flatMap((s) => placedModelIds(optionDocSchema.parse(withoutNonWebLinks(s.doc)))))];
+}
+
+/** A ready model as the client's page draws it, its file behind the link's route. */
+export function toClientModel(row: PieceModelRow, piece: Piece, token: string): ClientModel {
+  const s = row.scale;
+  const min = (Array.isArray(row.min_mm) ? row.min_mm : [0, 0, 0]) as number[];
+  return {
+    url: linkFileUrl(token, fileUrl(row.model_key!)),
+    sizeMm: { widthMm: row.width_mm! * s, depthMm: row.depth_mm! * s, heightMm: row.height_mm! * s },
+    minMm: [min[0] * s, min[1] * s, min[2] * s],
+    turnDeg: modelTurnSchema.parse(row.turn_deg),
+    wearsFinishes: piece.modelWearsFinishes === true,
+  };
+}
+
 /** `/api/files/<name>` as the link's own route, so the client loads textures without an account. */
 export function linkFileUrl(token: string, url: string): string {
   return url.replace(/^\/api\/files\//, `/api/p/${encodeURIComponent(token)}/files/`);
@@ -250,6 +277,14 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
   const [labels, rows] = await Promise.all([finishLabels(db, p.studio_id, finishIds), finishRows(db, p.studio_id, surfaceIds)]);
   const finishes = new Map(labels.map((f) => [f.id, { name: f.name, colourHex: f.colour_hex }]));
   const sceneFinishes = new Map((await toFinishes(db, rows)).map((f) => [f.id, f]));
+  const modelIds = shown.flatMap((s) => placedModelIds(docs.get(s.option_id)!));
+  const models = new Map((await readyModelsByIds(db, p.studio_id, modelIds)).map((m) => [m.id, m]));
+  const clientPiece = (piece: Piece): ClientPiece => {
+    const out = toClientPiece(piece, p.show_prices, finishes);
+    const model = piece.modelId ? models.get(piece.modelId) : undefined;
+    if (model) out.model = toClientModel(model, piece, token);
+    return out;
+  };
 
   const rooms: ClientRoom[] = grouped.map((room) => {
     const choice = choices.find((c) => c.room_id === room.roomId);
@@ -262,7 +297,7 @@ export async function clientPresentation(db: Db, p: PresentationRow, token: stri
         label: optionLabel(i, o.option_name),
         name: o.option_name,
         note: o.note,
-        pieces: placed(o.option_id).map((piece) => toClientPiece(piece, p.show_prices, finishes)),
+        pieces: placed(o.option_id).map(clientPiece),
         surfaces: clientSurfaces(docs.get(o.option_id)!, sceneFinishes, token),
         version: o.option_version,
         sentVersion: o.sent_version,

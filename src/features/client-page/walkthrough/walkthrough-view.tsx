@@ -10,6 +10,7 @@ import type { CameraLink, ViewMode, ViewPose } from './camera-link';
 import type { SurfaceFinishes, TextureProgress } from '../../../scene/finish-materials';
 import { RenderAndReport } from '../../../scene/render-report';
 import { RoomPieces, type PieceBuild } from '../../../scene/room-pieces';
+import { modelSources, type ModelSource } from '../../../scene/piece-models';
 import { buildPieceForms, type PieceFormData } from '../../../../shared/geometry/forms/piece-forms';
 import { RoomShellMeshes } from '../../../scene/room-shell';
 import { SceneCanvas } from '../../../scene/scene-canvas';
@@ -28,7 +29,8 @@ export type { TextureProgress } from '../../../scene/finish-materials';
 /** One option of the room: its pieces and what its surfaces wear. */
 export interface WalkthroughOption {
   id: string;
-  pieces: Piece[];
+  /** Pieces; one wearing a ready model carries it (the client's payload names it). */
+  pieces: (Piece & { model?: ModelSource })[];
   finishes: SurfaceFinishes;
 }
 
@@ -202,6 +204,7 @@ interface BuiltOption {
   forms: readonly PieceFormData[] | null;
   obstacles: WalkObstacles;
   finishes: SurfaceFinishes;
+  models: ReadonlyMap<string, ModelSource>;
 }
 
 function WalkthroughScene(props: SceneProps) {
@@ -238,6 +241,7 @@ function WalkthroughScene(props: SceneProps) {
           pieceScene: tryBuild('pieces', () => buildPiecesScene(pieces)) ?? [],
           forms: pieceBuild === 'forms' ? tryBuild('forms', () => buildPieceForms(pieces)) : null,
           obstacles: tryBuild('walk', () => walkObstacles(shell, pieces)) ?? { segments: [], boxes: [], outline: shell.outline },
+          models: pieceBuild === 'forms' ? modelSources(o.pieces) : new Map(),
         };
       }),
     [options, shell, pieceBuild],
@@ -319,6 +323,7 @@ function WalkthroughScene(props: SceneProps) {
             selectedPieceId={o.id === active.id ? selectedPieceId : null}
             materials={materials}
             forms={o.forms ? { data: o.forms, finishes: o.finishes, finishMaterials } : undefined}
+            models={o.models}
             // Hidden options must not catch clicks: the pointer passes through invisible meshes.
             onPieceClick={o.id === active.id ? onPieceClick : undefined}
           />
