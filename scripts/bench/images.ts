@@ -1,11 +1,10 @@
 // Photo processing time and peak memory for a 12-megapixel JPEG. Each measurement runs in a fresh
 // Node process that only reads the photo and processes it, so its peak resident memory (getrusage
 // maxRSS) is the processing's own plus Node's baseline, not the generator's buffers.
-import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { maxRssMb, rssVerdict, runFresh, serveAsWorker } from './fresh-process';
 import { centredSquareCrop } from '../../shared/schemas/finish';
 import { photoLike, rawToSharp } from '../../server/services/images/generate';
 import { processPhoto } from '../../server/services/images/process-photo';
@@ -51,9 +50,6 @@ async function work(file: string): Promise<WorkerResult> {
   return { uploadMs, recropMs, firstRssMb, maxRssMb: maxRssMb(), baselineRssMb };
 }
 
-/** The process's peak resident memory so far (getrusage maxRSS is in kilobytes on Linux). */
-const maxRssMb = () => process.resourceUsage().maxRSS / 1024;
-
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /** Prints processing time and peak memory for one 12-megapixel JPEG upload, and for a re-crop of its kept original. */
@@ -67,11 +63,7 @@ export async function benchImages(): Promise<void> {
       .jpeg({ quality: 90 })
       .toBuffer();
     writeFileSync(file, photo);
-    const child = spawnSync(process.execPath, ['--import', 'tsx', fileURLToPath(import.meta.url), WORKER_FLAG, file], {
-      encoding: 'utf8',
-    });
-    if (child.status !== 0) throw new Error(`images bench worker failed: ${child.stderr}`);
-    const r = JSON.parse(child.stdout.trim().split('\n').pop()!) as WorkerResult;
+    const r = runFresh<WorkerResult>(import.meta.url, WORKER_FLAG, [file]);
     const verdict = (ms: number) => (ms < TARGET_MS ? 'within' : 'OVER');
     console.log(
       `images: ${WIDTH_PX} × ${HEIGHT_PX} JPEG, ${(photo.length / 1e6).toFixed(1)} MB, EXIF orientation 6 + GPS; ${REPEATS} runs each in one process`,
@@ -84,13 +76,11 @@ export async function benchImages(): Promise<void> {
     );
     console.log(
       `images: peak rss ${r.firstRssMb.toFixed(0)} MB for the first photo, ${r.maxRssMb.toFixed(0)} MB after all ${REPEATS * 2} ` +
-        `(Node and sharp loaded: ${r.baselineRssMb.toFixed(0)} MB) — ${r.maxRssMb < TARGET_RSS_MB ? 'within' : 'OVER'} the ${TARGET_RSS_MB} MB target`,
+        `(Node and sharp loaded: ${r.baselineRssMb.toFixed(0)} MB) — ${rssVerdict(r.maxRssMb, TARGET_RSS_MB)}`,
     );
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
 }
 
-if (process.argv[2] === WORKER_FLAG) {
-  console.log(JSON.stringify(await work(process.argv[3])));
-}
+await serveAsWorker(WORKER_FLAG, ([file]) => work(file));

@@ -2,11 +2,11 @@
 // limit (a dense cushion of about 416,000 vertices and a 2,048 px photo-like texture), in a fresh Node
 // process that only reads the file and processes it, so its peak resident memory (getrusage maxRSS)
 // is the processing's own plus Node's baseline. The load average is printed beside each figure.
-import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { maxRssMb, rssVerdict, runFresh, serveAsWorker } from './fresh-process';
 import { MODEL_LIMITS } from '../../shared/schemas/piece-model';
 import { photoLike, rawToSharp } from '../../server/services/images/generate';
 import { checkModelFile } from '../../server/services/gltf/check-gltf';
@@ -27,7 +27,6 @@ interface WorkerResult {
   baselineRssMb: number;
 }
 
-const maxRssMb = () => process.resourceUsage().maxRSS / 1024;
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 const load = () =>
   loadavg()
@@ -74,11 +73,7 @@ export async function benchModels(): Promise<void> {
     const file = join(dir, 'heavy.glb');
     writeFileSync(file, model);
     const before = load();
-    const child = spawnSync(process.execPath, ['--import', 'tsx', fileURLToPath(import.meta.url), WORKER_FLAG, file], {
-      encoding: 'utf8',
-    });
-    if (child.status !== 0) throw new Error(`models bench worker failed: ${child.stderr}`);
-    const r = JSON.parse(child.stdout.trim().split('\n').pop()!) as WorkerResult;
+    const r = runFresh<WorkerResult>(import.meta.url, WORKER_FLAG, [file]);
     const range = (xs: number[]) =>
       `${median(xs).toFixed(0)} ms median (${Math.min(...xs).toFixed(0)}–${Math.max(...xs).toFixed(0)})`;
     console.log(
@@ -89,15 +84,13 @@ export async function benchModels(): Promise<void> {
       `models: normalising ${range(r.normaliseMs)} → ${r.triangles.after.toLocaleString('en-GB')} triangles, ${(r.outBytes / 1024 / 1024).toFixed(2)} MB .glb`,
     );
     console.log(
-      `models: peak rss ${r.maxRssMb.toFixed(0)} MB (Node and the libraries loaded: ${r.baselineRssMb.toFixed(0)} MB) — ${r.maxRssMb < TARGET_RSS_MB ? 'within' : 'OVER'} the ${TARGET_RSS_MB} MB target`,
+      `models: peak rss ${r.maxRssMb.toFixed(0)} MB (Node and the libraries loaded: ${r.baselineRssMb.toFixed(0)} MB) — ${rssVerdict(r.maxRssMb, TARGET_RSS_MB)}`,
     );
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
 }
 
-if (process.argv[2] === WORKER_FLAG) {
-  console.log(JSON.stringify(await work(process.argv[3])));
-} else if (process.argv[1] === fileURLToPath(import.meta.url)) {
+if (!(await serveAsWorker(WORKER_FLAG, ([file]) => work(file))) && process.argv[1] === fileURLToPath(import.meta.url)) {
   await benchModels();
 }

@@ -8,6 +8,7 @@ import { formModelDocument } from '../services/gltf/form-model';
 import { normaliseModel } from '../services/gltf/normalise-model';
 import { toGlb } from '../services/gltf/test-models';
 import { derivedModelKey } from '../features/files/file-keys';
+import { readyColumns } from '../features/models/models.service';
 
 interface DemoModel {
   name: string;
@@ -79,16 +80,7 @@ export async function seedDemoModels(
         status: 'ready',
         file_name: `${demo.piece.kind}.glb`,
         source_bytes: source.length,
-        model_key: key,
-        model_bytes: model.glb.length,
-        width_mm: model.size.widthMm,
-        depth_mm: model.size.depthMm,
-        height_mm: model.size.heightMm,
-        min_mm: JSON.stringify(model.minMm),
-        triangles: model.triangles,
-        source_triangles: model.sourceTriangles,
-        materials: model.materials,
-        unit_hint: model.unitHint,
+        ...readyColumns(model, key),
       })
       .returning('id')
       .executeTakeFirstOrThrow();

@@ -16,7 +16,7 @@ import {
   type pieceModelPatchSchema,
 } from '../../../shared/schemas/piece-model';
 import { HttpError, orNotFound } from '../../http/errors';
-import { normaliseModel } from '../../services/gltf/normalise-model';
+import { normaliseModel, type NormalisedModel } from '../../services/gltf/normalise-model';
 import { ModelProblem } from '../../services/gltf/check-gltf';
 import { derivedKey, derivedModelKey, fileUrl, uploadKey } from '../files/file-keys';
 import { nameFromFileName } from '../finishes/finishes.service';
@@ -106,6 +106,22 @@ export function modelFailureReason(err: unknown): string {
   return 'This model could not be processed. Export it again as glTF 2.0 (.glb) and upload it.';
 }
 
+/** The columns of a model normalised into the stored file `key`: what it measures and holds. */
+export function readyColumns(model: NormalisedModel, key: string) {
+  return {
+    model_key: key,
+    model_bytes: model.glb.length,
+    width_mm: model.size.widthMm,
+    depth_mm: model.size.depthMm,
+    height_mm: model.size.heightMm,
+    min_mm: JSON.stringify(model.minMm),
+    triangles: model.triangles,
+    source_triangles: model.sourceTriangles,
+    materials: model.materials,
+    unit_hint: model.unitHint,
+  } satisfies PieceModelChanges;
+}
+
 /**
  * The processing job: reads the model's original, normalises it, stores the .glb and marks the model
  * ready with its measured size; a model that cannot be normalised is marked failed with the reason and
@@ -144,16 +160,7 @@ export async function runModelJob(db: Db, storage: FileStorage, modelId: string)
     status: 'ready',
     failure_reason: null,
     source_key: null,
-    model_key: key,
-    model_bytes: model.glb.length,
-    width_mm: model.size.widthMm,
-    depth_mm: model.size.depthMm,
-    height_mm: model.size.heightMm,
-    min_mm: JSON.stringify(model.minMm),
-    triangles: model.triangles,
-    source_triangles: model.sourceTriangles,
-    materials: model.materials,
-    unit_hint: model.unitHint,
+    ...readyColumns(model, key),
     processed_ms: Math.round(performance.now() - started),
   });
   await removeUnused(db, storage, saved ? [sourceKey] : [key, sourceKey]);
