@@ -34,6 +34,10 @@ export interface PiecePatch {
   settings?: Piece['settings'] | null;
   accentColour?: string | null;
   accentFinishId?: string | null;
+  /** A model from the studio's library worn in 3D, or null for the drawn form. */
+  modelId?: string | null;
+  modelFitted?: boolean;
+  modelWearsFinishes?: boolean;
 }
 
 /** New box sizes in mm; the centre stays where it is. */
@@ -57,6 +61,9 @@ const PATCHABLE: ReadonlySet<string> = new Set([
   'settings',
   'accentColour',
   'accentFinishId',
+  'modelId',
+  'modelFitted',
+  'modelWearsFinishes',
 ]);
 
 function findPiece(doc: EditorDoc, optionId: string, id: string): Piece | undefined {
