@@ -45,11 +45,14 @@ import { EDITOR_KEYS, keyFor, type KeyContext } from './editor-keys';
 
 const RoomView = lazy(() => import('../../../scene/room-view'));
 
+/** One empty list, so an editor without models keeps the same props from render to render. */
+const NO_MODELS: PieceModel[] = [];
+
 export function EditorPage({
   projectId,
   roomId,
   finishes = [],
-  models = [],
+  models = NO_MODELS,
 }: {
   projectId: string;
   roomId: string;
@@ -319,6 +322,7 @@ function Editor({
     finishes,
     finishTarget,
     select,
+    models,
   ]);
 
   const startSplitDrag = (e: React.PointerEvent) => {

@@ -1,6 +1,6 @@
 // When a worn model's measured size differs enough from the piece's box to ask which is meant.
 import { describe, expect, it } from 'vitest';
-import { sizeDiffers } from './piece-model-field';
+import { sizeDiffers } from './piece-model-size';
 
 describe('sizeDiffers', () => {
   const box = { width: 1000, depth: 500, height: 800 };
