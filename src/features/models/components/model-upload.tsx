@@ -83,7 +83,7 @@ export function ModelUpload() {
           multiple
           accept=".glb,.gltf,model/gltf-binary,model/gltf+json"
           className="sr-only"
-          aria-label="Choose models"
+          aria-label="Model files"
           tabIndex={-1}
           onChange={(e) => {
             send([...(e.target.files ?? [])]);
