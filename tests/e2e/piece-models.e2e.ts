@@ -1,6 +1,6 @@
 // Browser test of piece models: two uploads by pointer (a sound chair and a text file named .glb,
 // refused on its row), the chair measured 450 × 500 × 900 mm with a thumbnail drawn in the browser,
-// then worn by a piece of another size in Furnish, "Use the model's size", and Undo.
+// its page with the turning preview, then worn by a piece of another size in Furnish, "Use the model's size", and Undo.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -67,6 +67,15 @@ describe('piece models', () => {
       .poll(() => card.locator('img').evaluate((img: HTMLImageElement) => img.naturalWidth), { timeout: 15000 })
       .toBeGreaterThan(0);
     await page.screenshot({ path: resolve(SHOTS, 'library.png'), fullPage: true });
+
+    // Its page: the turning preview drawn, the details, the quarter turn in four choices.
+    await card.click();
+    await page.getByRole('heading', { name: 'Dining chair' }).waitFor();
+    await page.getByRole('img', { name: 'Dining chair, turning slowly' }).waitFor();
+    await page.getByText('Loading the model…').waitFor({ state: 'detached', timeout: 20000 });
+    expect(await page.getByRole('radio').count()).toBe(4);
+    expect(await page.getByLabel('Name', { exact: true }).inputValue()).toBe('Dining chair');
+    await page.screenshot({ path: resolve(SHOTS, 'model-page.png') });
 
     await page.goto(`/projects/${projectId}/rooms/${roomId}`);
     await page.getByRole('button', { name: /Furnish/ }).click();

@@ -48,7 +48,7 @@ export function ModelPreview({ url, turnDeg, name }: { url: string; turnDeg: num
   }, [url, turnDeg]);
 
   return (
-    <div className="relative">
+    <div className="relative mx-auto w-full max-w-md">
       <canvas
         ref={canvas}
         className="aspect-square w-full rounded-xl bg-sand"
