@@ -117,6 +117,13 @@ describe('updatePiece', () => {
     expect(updatePiece('opt-a', 'chair', { price: 1 }).label(doc)).toBe('Change Armchair');
   });
 
+  it('puts a model on a piece, fits it or lets it wear the finishes, and takes it off', () => {
+    const doc = sampleDoc();
+    const worn = applied(doc, updatePiece('opt-a', 'chair', { modelId: 'model-1', modelFitted: true, modelWearsFinishes: true }));
+    expect(pieceOf(worn, 'opt-a', 'chair')).toMatchObject({ modelId: 'model-1', modelFitted: true, modelWearsFinishes: true });
+    expect(pieceOf(applied(worn, updatePiece('opt-a', 'chair', { modelId: null })), 'opt-a', 'chair')?.modelId).toBeNull();
+  });
+
   it('refuses values the schema does not allow and fields that other commands own', () => {
     const doc = sampleDoc();
     expect(refusal(doc, updatePiece('opt-a', 'sofa', { colour: 'red' }))).toBe(

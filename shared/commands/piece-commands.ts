@@ -36,6 +36,10 @@ export interface PiecePatch {
   accentFinishId?: string | null;
   /** Marked as fixed to the wall against tipping (tall storage). */
   fixedToWall?: boolean;
+  /** A model from the studio's library worn in 3D, or null for the drawn form. */
+  modelId?: string | null;
+  modelFitted?: boolean;
+  modelWearsFinishes?: boolean;
 }
 
 /** New box sizes in mm; the centre stays where it is. */
@@ -60,6 +64,9 @@ const PATCHABLE: ReadonlySet<string> = new Set([
   'accentColour',
   'accentFinishId',
   'fixedToWall',
+  'modelId',
+  'modelFitted',
+  'modelWearsFinishes',
 ]);
 
 function findPiece(doc: EditorDoc, optionId: string, id: string): Piece | undefined {

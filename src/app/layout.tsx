@@ -1,5 +1,5 @@
 // The designer's frame around every studio page: the top bar with Projects, Clients, Finish
-// library, Studio (and Outbox when present), the member's name and Sign out; plus the not-found page.
+// library, Models, Studio (and Outbox when present), the member's name and Sign out; plus the not-found page.
 import { Link, NavLink, Navigate, Outlet, useLocation, useNavigate } from 'react-router';
 import { Button } from '../components/ui/button';
 import { Notice, Spinner } from '../components/ui/layout';
@@ -54,6 +54,9 @@ export function DesignerLayout({ wide = false }: { wide?: boolean }) {
             </NavLink>
             <NavLink to="/finishes" className={navClass}>
               Finish library
+            </NavLink>
+            <NavLink to="/models" className={navClass}>
+              Models
             </NavLink>
             <NavLink to="/studio" className={navClass}>
               Studio

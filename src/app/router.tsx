@@ -13,6 +13,8 @@ import { StudioPage } from '../features/studio/components/studio-page';
 import { OutboxPage } from '../features/outbox/components/outbox-page';
 import { FinishLibraryPage } from '../features/finishes/components/finish-library-page';
 import { FinishRoute } from './routes/finishes-route';
+import { ModelLibraryPage } from '../features/models/components/model-library-page';
+import { ModelRoute } from './routes/models-route';
 import { ScheduleRoute, TakeoffRoute } from './routes/schedules-route';
 
 export const router = createBrowserRouter([
@@ -32,6 +34,8 @@ export const router = createBrowserRouter([
       { path: '/clients', element: <ClientsPage /> },
       { path: '/finishes', element: <FinishLibraryPage /> },
       { path: '/finishes/:finishId', element: <FinishRoute /> },
+      { path: '/models', element: <ModelLibraryPage /> },
+      { path: '/models/:modelId', element: <ModelRoute /> },
       { path: '/studio', element: <StudioPage /> },
       { path: '/outbox', element: <OutboxPage /> },
       { path: '/outbox/:messageId', element: <OutboxPage /> },

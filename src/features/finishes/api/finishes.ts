@@ -9,8 +9,8 @@ import type {
   PaintFinish,
   PhotoFinish,
 } from '../../../../shared/schemas/finish';
-import type { ErrorBody } from '../../../../shared/schemas/common';
 import { api, ApiError } from '../../../lib/api';
+import { sendForm } from '../../../lib/upload';
 
 export type { Finish, PaintFinish, PhotoFinish };
 export { toSceneFinish, type SceneFinish } from '../../../../shared/finishes/scene-finish';
@@ -88,32 +88,17 @@ export function useDeleteFinish() {
 }
 
 /**
- * Uploads one photo, reporting progress 0…1 as its bytes leave (fetch cannot report upload
- * progress, so this uses XMLHttpRequest). Resolves with the new photo finish, still processing.
+ * Uploads one photo, reporting progress 0…1 as its bytes leave. Resolves with the new photo
+ * finish, still processing.
  */
-export function uploadPhoto(file: File, onProgress: (fraction: number) => void, signal?: AbortSignal): Promise<PhotoFinish> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', '/api/finishes/photos');
-    xhr.responseType = 'json';
-    xhr.setRequestHeader('accept', 'application/json');
-    xhr.upload.onprogress = (e) => {
-      if (e.lengthComputable) onProgress(e.loaded / e.total);
-    };
-    xhr.onload = () => {
-      const body = xhr.response as { finishes?: PhotoFinish[] } & Partial<ErrorBody>;
-      if (xhr.status === 201 && body?.finishes?.[0]) return resolve(body.finishes[0]);
-      const e = body?.error;
-      reject(
-        new ApiError(xhr.status, e?.code ?? 'error', e?.message ?? `The server answered ${xhr.status}.`, e?.fields ?? {}, body),
-      );
-    };
-    xhr.onerror = () =>
-      reject(new ApiError(0, 'offline', 'Parlour cannot reach the server. Check your connection and try again.'));
-    xhr.onabort = () => reject(new DOMException('The upload was stopped.', 'AbortError'));
-    signal?.addEventListener('abort', () => xhr.abort());
-    const form = new FormData();
-    form.append('photos', file, file.name);
-    xhr.send(form);
-  });
+export async function uploadPhoto(
+  file: File,
+  onProgress: (fraction: number) => void,
+  signal?: AbortSignal,
+): Promise<PhotoFinish> {
+  const form = new FormData();
+  form.append('photos', file, file.name);
+  const body = await sendForm<{ finishes?: PhotoFinish[] }>('/api/finishes/photos', form, { okStatus: 201, onProgress, signal });
+  if (!body.finishes?.[0]) throw new ApiError(500, 'error', 'The server answered without the photo.');
+  return body.finishes[0];
 }

@@ -32,6 +32,7 @@ import { FinishesPanel, targetOf } from './finishes-panel';
 import { sceneFinishesFor } from './scene-finishes';
 import type { Finish } from '../../../../shared/schemas/finish';
 import { FurnishPanel } from './furnish-panel';
+import type { PieceModel } from '../../../../shared/schemas/piece-model';
 import { OpeningsPanel } from './openings-panel';
 import { OptionsBar } from './options-bar';
 import { OutlinePanel } from './outline-panel';
@@ -47,7 +48,21 @@ import { EDITOR_KEYS, keyFor, type KeyContext } from './editor-keys';
 
 const RoomView = lazy(() => import('../../../scene/room-view'));
 
-export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: string; roomId: string; finishes?: Finish[] }) {
+/** One empty list, so an editor without models keeps the same props from render to render. */
+const NO_MODELS: PieceModel[] = [];
+
+export function EditorPage({
+  projectId,
+  roomId,
+  finishes = [],
+  models = NO_MODELS,
+}: {
+  projectId: string;
+  roomId: string;
+  finishes?: Finish[];
+  /** The studio's piece models, for a piece to wear in Furnish. */
+  models?: PieceModel[];
+}) {
   const room = useRoom(roomId);
   const canEdit = useCanEdit();
   if (room.isPending)
@@ -66,7 +81,7 @@ export function EditorPage({ projectId, roomId, finishes = [] }: { projectId: st
       </div>
     );
   }
-  return <Editor key={roomId} projectId={projectId} detail={room.data} readOnly={!canEdit} finishes={finishes} />;
+  return <Editor key={roomId} projectId={projectId} detail={room.data} readOnly={!canEdit} finishes={finishes} models={models} />;
 }
 
 /** One empty list for an option-less moment, so hooks keyed on the pieces do not re-run each render. */
@@ -87,11 +102,13 @@ function Editor({
   detail,
   readOnly,
   finishes,
+  models,
 }: {
   projectId: string;
   detail: RoomDetail;
   readOnly: boolean;
   finishes: Finish[];
+  models: PieceModel[];
 }) {
   // What the decided project stands on, from the room's live answer (Mark as decided and Reopen change it).
   const frozenKey = detail.options
@@ -261,6 +278,7 @@ function Editor({
             onSelect={setSelection}
             newId={newId}
             viewCentre={viewCentre}
+            models={models}
           />
         );
       case 'finishes':
@@ -317,6 +335,7 @@ function Editor({
     finishes,
     finishTarget,
     select,
+    models,
   ]);
 
   const startSplitDrag = (e: React.PointerEvent) => {

@@ -1,5 +1,5 @@
 // The room editor's Furnish step: the catalogue to add pieces from, the holding area, and the
-// selected piece's fields (name, size, turn, height above the floor, finishes, price, supplier,
+// selected piece's fields (name, size, turn, height above the floor, finishes, price, supplier, model,
 // and for tall storage whether it is fixed to the wall).
 import { useState } from 'react';
 import { isTallStorage } from '../../../../shared/analysis/fit/safety';
@@ -26,6 +26,8 @@ import type { FieldRun } from './outline-panel';
 import { LengthField } from '../../../components/ui/length-field';
 import { placedNear, type Selection } from './plan/plan-geometry';
 import { KindDrawing, KindPicker } from './kind-drawing';
+import { PieceModelField } from './piece-model-field';
+import type { PieceModel } from '../../../../shared/schemas/piece-model';
 
 const GROUP_LABEL: Record<(typeof CATALOGUE_GROUPS)[number], string> = {
   seating: 'Seating',
@@ -59,6 +61,7 @@ export function FurnishPanel({
   onSelect,
   newId,
   viewCentre,
+  models = [],
 }: {
   shell: RoomShell;
   optionId: string;
@@ -72,6 +75,8 @@ export function FurnishPanel({
   newId: (prefix: string) => string;
   /** Where added and placed pieces should land near: the middle of the plan's view of the room. */
   viewCentre: () => [number, number];
+  /** The studio's piece models, for the selected piece to wear. */
+  models?: PieceModel[];
 }) {
   // Add and Hold select the new piece (the plan shows where it landed) but keep the catalogue
   // open, so several pieces go in one after another; any other selection opens the piece's fields.
@@ -92,6 +97,7 @@ export function FurnishPanel({
         readOnly={readOnly}
         onSelect={onSelect}
         newId={newId}
+        models={models}
       />
     );
   return (
@@ -245,6 +251,7 @@ function PieceProperties({
   readOnly,
   onSelect,
   newId,
+  models,
 }: {
   piece: Piece;
   shell: RoomShell;
@@ -257,6 +264,7 @@ function PieceProperties({
   readOnly: boolean;
   onSelect: (s: Selection) => void;
   newId: (prefix: string) => string;
+  models: PieceModel[];
 }) {
   const patch = (p: Parameters<typeof updatePiece>[2]) => !readOnly && run(updatePiece(optionId, piece.id, p));
   const field = (p: Parameters<typeof updatePiece>[2]) => commit(updatePiece(optionId, piece.id, p));
@@ -429,6 +437,7 @@ function PieceProperties({
           Fixed to the wall
         </label>
       )}
+      <PieceModelField piece={piece} models={models} optionId={optionId} run={run} unit={unit} readOnly={readOnly} />
       {piece.height >= TALL_PIECE_MM && (
         <p className="rounded-lg bg-ochre-wash px-3 py-2 text-sm text-ochre">
           A tall piece can tip over: fix it to the wall, especially where children live (see the furniture maker’s anchoring kit).

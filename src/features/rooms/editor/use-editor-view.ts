@@ -1,11 +1,11 @@
 // How the room editor's screen is arranged, kept apart from what is edited: plan and 3D side by side
 // or by turns, where the divider between them sits, and the length unit (remembered in this browser).
 import { useCallback, useEffect, useState } from 'react';
-import { DEFAULT_LENGTH_UNIT, lengthUnitSchema, type LengthUnit } from '../../../../shared/units/length';
+import type { LengthUnit } from '../../../../shared/units/length';
+import { readUnit, storedUnit, UNIT_KEY } from '../../../lib/length-unit';
 
 export type EditorLayout = 'both' | 'plan' | '3d';
 
-const UNIT_KEY = 'parlour:length-unit';
 /** Below this window width the plan and the 3D preview share the screen by turns. */
 export const WIDE_ENOUGH_FOR_BOTH_PX = 1180;
 /** The divider keeps each side at least a fifth of the width. */
@@ -19,19 +19,7 @@ export function clampSplit(share: number): number {
   return Math.min(SPLIT_MAX, Math.max(SPLIT_MIN, share));
 }
 
-/** The unit stored in this browser, or the default when none (or something unknown) is stored. */
-export function storedUnit(stored: string | null): LengthUnit {
-  const parsed = lengthUnitSchema.safeParse(stored);
-  return parsed.success ? parsed.data : DEFAULT_LENGTH_UNIT;
-}
-
-function readUnit(): LengthUnit {
-  try {
-    return storedUnit(localStorage.getItem(UNIT_KEY));
-  } catch {
-    return DEFAULT_LENGTH_UNIT;
-  }
-}
+export { storedUnit };
 
 export function useEditorView() {
   // Side by side needs room; on a tablet the plan starts alone and the 3D is one tap away.
