@@ -1,6 +1,7 @@
 // How the room's static surfaces are grouped into draw calls: per wall, the inside face alone (it
 // will take the wall's own finish), everything else of that wall in one mesh, and the wall's window
-// frames and glass, so one wall can fade as a whole. Door leaves share one mesh. Scene metres.
+// frames and glass, so one wall can fade as a whole. Door leaves share one mesh; the skirting of
+// every wall is one more (it stays solid, a line round the floor, when a wall fades). Scene metres.
 import type * as THREE from 'three';
 import type { Bounds3, MeshData, ShellSceneData } from '../../shared/geometry/scene';
 import type { RoomShell } from '../../shared/schemas/room';
@@ -21,6 +22,8 @@ export interface ShellParts {
   ceiling: MeshData;
   walls: WallParts[];
   doorLeaves: MeshData;
+  /** Painted trim that never fades: the skirting. */
+  trim: MeshData;
   bounds: Bounds3;
 }
 
@@ -43,6 +46,7 @@ export function shellParts(scene: ShellSceneData, shell: RoomShell): ShellParts 
     ceiling: scene.ceiling,
     walls,
     doorLeaves: mergeMeshData(scene.doorLeaves.map((d) => d.mesh)),
+    trim: scene.skirting,
     bounds: scene.bounds,
   };
 }
@@ -61,6 +65,7 @@ export interface ShellGeometries {
   ceiling: THREE.BufferGeometry | null;
   walls: WallGeometries[];
   doorLeaves: THREE.BufferGeometry | null;
+  trim: THREE.BufferGeometry | null;
 }
 
 // Empty parts get no geometry, so they cost no draw call.
@@ -82,6 +87,7 @@ export function shellGeometries(parts: ShellParts): ShellGeometries {
       glass: geometryOrNull(wall.glass),
     })),
     doorLeaves: geometryOrNull(parts.doorLeaves),
+    trim: geometryOrNull(parts.trim),
   };
 }
 
@@ -90,6 +96,7 @@ export function disposeShellGeometries(geometries: ShellGeometries): void {
     geometries.floor,
     geometries.ceiling,
     geometries.doorLeaves,
+    geometries.trim,
     ...geometries.walls.flatMap((w) => [w.inside, w.body, w.frames, w.glass]),
   ];
   for (const geometry of all) geometry?.dispose();
