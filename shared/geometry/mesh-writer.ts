@@ -1,6 +1,6 @@
 // The scene mesh writer: one surface as plain typed arrays in scene metres, written as quads,
 // flat polygons and boxes whose triangles always face their normals; shared by every scene builder.
-import { boxCornersMm, type PiecePlanBox } from './piece';
+import { boxCornersMm, planBoxAt, type PiecePlanBox } from './piece';
 import { triangulatePolygon } from './polygon';
 import type { Vec2 } from './vec';
 
@@ -174,4 +174,23 @@ export function writeBoxFaces(
     capUvs,
     DOWN,
   );
+}
+
+/**
+ * A box lined up with a wall-like frame (plan mm): from `fromAlong` to `toAlong` along `along` and
+ * from `fromAcross` to `toAcross` along `across` (square to it), measured from `origin`.
+ */
+export function alignedBox(
+  origin: Vec2,
+  along: Vec2,
+  across: Vec2,
+  fromAlong: number,
+  toAlong: number,
+  fromAcross: number,
+  toAcross: number,
+): PiecePlanBox {
+  const a = (fromAlong + toAlong) / 2;
+  const c = (fromAcross + toAcross) / 2;
+  const centre: Vec2 = [origin[0] + along[0] * a + across[0] * c, origin[1] + along[1] * a + across[1] * c];
+  return planBoxAt(centre, along, Math.abs(toAlong - fromAlong), Math.abs(toAcross - fromAcross));
 }

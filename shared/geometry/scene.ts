@@ -1,8 +1,9 @@
 // The 3D scene meshes for one room and option in scene metres: floor, ceiling, each wall's faces with
 // openings cut out, reveals, door leaves, window frames and panes, and placed pieces as boxes.
 import type { Piece } from '../schemas/option';
-import type { Opening, RoomShell } from '../schemas/room';
-import { placeOpening, doorSwing, type OpeningPlacement } from './openings';
+import type { RoomShell } from '../schemas/room';
+import { placeOpening, type OpeningPlacement } from './openings';
+import { buildDoorLeaf, writeOpeningTrim, type DoorLeafSceneData } from './shell-doors';
 import { piecePlanBox, planBoxAt } from './piece';
 import { areaMm2 } from './polygon';
 import {
@@ -20,15 +21,14 @@ import {
 import { skirtingMesh, skirtingRuns } from './skirting';
 import { POINT_TOLERANCE_MM } from './tolerances';
 import { layoutShellWalls, type WallLayout } from './walls';
-import { addScaled, directionDeg, type Vec2 } from './vec';
+import { addScaled, type Vec2 } from './vec';
 import { itemAt } from '../item-at';
 
 // Scene space: metres, y up; plan (x, y) mm sits at scene (x/1000, height/1000, y/1000), so seen
 // from above the scene matches the plan without a mirror. Every mesh is plain typed arrays so the
 // client can hand them straight to BufferGeometry and tests can read them without three.js.
 
-/** Door leaves are drawn this thick (mm), a usual interior leaf (common practice, no source). */
-export const DOOR_LEAF_THICKNESS_MM = 40;
+export { DOOR_LEAF_THICKNESS_MM, type DoorLeafSceneData } from './shell-doors';
 /** Window frame members are this wide on the face (mm) and this deep through the wall (mm) (common practice, no source). */
 export const WINDOW_FRAME_WIDTH_MM = 50;
 export const WINDOW_FRAME_DEPTH_MM = 60;
@@ -52,6 +52,8 @@ export interface WallSceneData {
   top: MeshData;
   /** The wall's thickness inside each of its openings: sides, head and bottom. */
   reveals: MeshData;
+  /** Linings and architraves (both faces) round its doors and passages. */
+  trims: MeshData;
   /** Middle of the inside face at half height, scene metres. */
   centre: [number, number, number];
   /** Horizontal unit vector out of the room, scene axes. */
@@ -61,11 +63,6 @@ export interface WallSceneData {
 export interface PieceSceneData {
   id: string;
   status: Piece['status'];
-  mesh: MeshData;
-}
-
-export interface DoorLeafSceneData {
-  openingId: string;
   mesh: MeshData;
 }
 
@@ -246,7 +243,11 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
   }
 
   const reveals = new MeshWriter();
-  for (const placement of placements) writeReveals(reveals, wall, placement);
+  const trims = new MeshWriter();
+  for (const placement of placements) {
+    writeReveals(reveals, wall, placement);
+    if (placement.type !== 'window') writeOpeningTrim(trims, wall, placement, heightMm);
+  }
 
   const middle = addScaled(wall.start, wall.direction, wall.lengthMm / 2);
   return {
@@ -255,20 +256,10 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
     outside: outside.toMesh(),
     top: top.toMesh(),
     reveals: reveals.toMesh(),
+    trims: trims.toMesh(),
     centre: planToScene(middle, heightMm / 2),
     outward: [outward[0], 0, outward[2]],
   };
-}
-
-// The leaf is drawn open at DOOR_OPEN_ANGLE_DEG (openings.ts) so the doorway reads as passable and the swing side is obvious.
-function buildDoorLeaf(wall: WallLayout, opening: Extract<Opening, { type: 'door' }>): DoorLeafSceneData {
-  const swing = doorSwing(wall, opening);
-  const open = directionDeg(swing.openAngleDeg);
-  const closed = directionDeg(swing.closedAngleDeg);
-  const centre = addScaled(addScaled(swing.hingeMm, open, opening.width / 2), closed, DOOR_LEAF_THICKNESS_MM / 2);
-  const writer = new MeshWriter();
-  writeBox(writer, planBoxAt(centre, open, opening.width, DOOR_LEAF_THICKNESS_MM), 0, opening.height);
-  return { openingId: opening.id, mesh: writer.toMesh() };
 }
 
 function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowSceneData {
@@ -371,10 +362,10 @@ export function sceneMeshes(scene: SceneSurfaces): MeshData[] {
   return [
     scene.floor,
     scene.ceiling,
-    ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals]),
+    ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals, w.trims]),
     scene.skirting,
     ...(scene.pieces ?? []).map((p) => p.mesh),
-    ...scene.doorLeaves.map((d) => d.mesh),
+    ...scene.doorLeaves.flatMap((d) => [d.mesh, d.edges, d.handles]),
     ...scene.windows.flatMap((w) => [w.frame, w.glass]),
   ];
 }

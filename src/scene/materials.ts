@@ -21,6 +21,7 @@ export interface SceneMaterials {
   floor: THREE.MeshStandardMaterial;
   ceiling: THREE.MeshStandardMaterial;
   doorLeaf: THREE.MeshStandardMaterial;
+  handle: THREE.MeshStandardMaterial;
   windowFrame: THREE.MeshStandardMaterial;
   windowFrameFaded: THREE.MeshStandardMaterial;
   glass: THREE.MeshStandardMaterial;
@@ -46,7 +47,9 @@ export function createSceneMaterials(): SceneMaterials {
     wallFaded: faded(wall),
     floor: new THREE.MeshStandardMaterial({ color: '#c8a983', roughness: 0.8, metalness: 0 }),
     ceiling: new THREE.MeshStandardMaterial({ color: '#f6f3ee', roughness: 0.95, metalness: 0 }),
-    doorLeaf: new THREE.MeshStandardMaterial({ color: '#e8e1d6', roughness: 0.7, metalness: 0 }),
+    // A painted leaf a shade deeper than the trim, so its lighter edges and the handles show from above.
+    doorLeaf: new THREE.MeshStandardMaterial({ color: '#d9cfc0', roughness: 0.7, metalness: 0 }),
+    handle: new THREE.MeshStandardMaterial({ color: '#6f6a63', roughness: 0.35, metalness: 0.6 }),
     windowFrame,
     windowFrameFaded: faded(windowFrame),
     glass: new THREE.MeshStandardMaterial({

@@ -85,7 +85,8 @@ export function RoomShellMeshes({
         />
       )}
       {geometries.doorLeaves && <mesh geometry={geometries.doorLeaves} material={materials.doorLeaf} castShadow receiveShadow />}
-      {/* The skirting wears the window frames' paint and stays solid when its wall fades. */}
+      {geometries.handles && <mesh geometry={geometries.handles} material={materials.handle} castShadow />}
+      {/* The skirting and the leaves' edges wear the window frames' paint; they stay solid when a wall fades. */}
       {geometries.trim && <mesh geometry={geometries.trim} material={materials.windowFrame} receiveShadow />}
       <group ref={wallsRef}>
         {geometries.walls.map((wall) => {
