@@ -4,7 +4,8 @@ import type { Piece } from '../schemas/option';
 import type { RoomShell } from '../schemas/room';
 import { placeOpening, type OpeningPlacement } from './openings';
 import { buildDoorLeaf, writeOpeningTrim, type DoorLeafSceneData } from './shell-doors';
-import { piecePlanBox, planBoxAt } from './piece';
+import { buildWindow, type WindowSceneData } from './shell-windows';
+import { piecePlanBox } from './piece';
 import { areaMm2 } from './polygon';
 import {
   DOWN,
@@ -29,11 +30,7 @@ import { itemAt } from '../item-at';
 // client can hand them straight to BufferGeometry and tests can read them without three.js.
 
 export { DOOR_LEAF_THICKNESS_MM, type DoorLeafSceneData } from './shell-doors';
-/** Window frame members are this wide on the face (mm) and this deep through the wall (mm) (common practice, no source). */
-export const WINDOW_FRAME_WIDTH_MM = 50;
-export const WINDOW_FRAME_DEPTH_MM = 60;
-/** Glass panes are drawn this thick (mm) so they show from both sides. */
-export const GLASS_THICKNESS_MM = 10;
+export { GLASS_THICKNESS_MM, WINDOW_FRAME_DEPTH_MM, WINDOW_FRAME_WIDTH_MM, type WindowSceneData } from './shell-windows';
 
 export { meshFromArrays, planToScene, type MeshData } from './mesh-writer';
 
@@ -64,12 +61,6 @@ export interface PieceSceneData {
   id: string;
   status: Piece['status'];
   mesh: MeshData;
-}
-
-export interface WindowSceneData {
-  openingId: string;
-  frame: MeshData;
-  glass: MeshData;
 }
 
 /** Everything the 3D view draws for one room and one option, scene metres, keyed by wall index or document id. */
@@ -262,34 +253,6 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
   };
 }
 
-function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowSceneData {
-  const depthMm = Math.min(WINDOW_FRAME_DEPTH_MM, wall.thicknessMm);
-  const f = Math.min(WINDOW_FRAME_WIDTH_MM, (placement.toMm - placement.fromMm) / 4, (placement.headMm - placement.sillMm) / 4);
-  const midDepth = wall.thicknessMm / 2;
-  const at = (alongMm: number) => addScaled(addScaled(wall.start, wall.direction, alongMm), wall.outward, midDepth);
-  const frame = new MeshWriter();
-  const innerFrom = placement.fromMm + f;
-  const innerTo = placement.toMm - f;
-  const fullHeight = placement.headMm - placement.sillMm;
-  writeBox(frame, planBoxAt(at(placement.fromMm + f / 2), wall.direction, f, depthMm), placement.sillMm, fullHeight);
-  writeBox(frame, planBoxAt(at(placement.toMm - f / 2), wall.direction, f, depthMm), placement.sillMm, fullHeight);
-  writeBox(frame, planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm), placement.sillMm, f);
-  writeBox(
-    frame,
-    planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm),
-    placement.headMm - f,
-    f,
-  );
-  const glass = new MeshWriter();
-  writeBox(
-    glass,
-    planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, GLASS_THICKNESS_MM),
-    placement.sillMm + f,
-    fullHeight - 2 * f,
-  );
-  return { openingId: placement.id, frame: frame.toMesh(), glass: glass.toMesh() };
-}
-
 /** The room shell (plan mm) as scene meshes (metres): floor, ceiling, walls, door leaves and windows. */
 export function buildShellScene(shell: RoomShell): ShellSceneData {
   const walls = layoutShellWalls(shell);
@@ -366,7 +329,7 @@ export function sceneMeshes(scene: SceneSurfaces): MeshData[] {
     scene.skirting,
     ...(scene.pieces ?? []).map((p) => p.mesh),
     ...scene.doorLeaves.flatMap((d) => [d.mesh, d.edges, d.handles]),
-    ...scene.windows.flatMap((w) => [w.frame, w.glass]),
+    ...scene.windows.flatMap((w) => [w.frame, w.glass, w.sill]),
   ];
 }
 

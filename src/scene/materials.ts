@@ -2,6 +2,7 @@
 // is chosen, the selection tint and the faded near walls. Finishes (paint colours and photo textures
 // at their real repeat size) are made in finish-materials.ts.
 import * as THREE from 'three';
+import { WINDOW_STENCIL } from './outside-view';
 
 /** Parlour's accent, used to mark the selected piece. */
 export const SELECTION_COLOUR = '#2f6b5c';
@@ -52,6 +53,7 @@ export function createSceneMaterials(): SceneMaterials {
     handle: new THREE.MeshStandardMaterial({ color: '#6f6a63', roughness: 0.35, metalness: 0.6 }),
     windowFrame,
     windowFrameFaded: faded(windowFrame),
+    // The glass marks the stencil: the outside (outside-view.tsx) is drawn only through it.
     glass: new THREE.MeshStandardMaterial({
       color: '#cfe3ec',
       roughness: 0.05,
@@ -59,6 +61,10 @@ export function createSceneMaterials(): SceneMaterials {
       transparent: true,
       opacity: 0.28,
       depthWrite: false,
+      stencilWrite: true,
+      stencilRef: WINDOW_STENCIL,
+      stencilFunc: THREE.AlwaysStencilFunc,
+      stencilZPass: THREE.ReplaceStencilOp,
     }),
     piece: new THREE.MeshStandardMaterial({
       vertexColors: true,

@@ -31,7 +31,7 @@ describe('shellParts', () => {
     expect(parts.trim.indices.length).toBe(scene.skirting.indices.length + scene.doorLeaves[0].edges.indices.length);
     scene.walls.forEach((wall, i) => {
       const windows = scene.windows.filter((w) => exampleShell.openings.find((o) => o.id === w.openingId)?.wall === i);
-      const windowTriangles = windows.reduce((sum, w) => sum + w.frame.indices.length, 0);
+      const windowTriangles = windows.reduce((sum, w) => sum + w.frame.indices.length + w.sill.indices.length, 0);
       expect(parts.walls[i].frames.indices.length).toBe(windowTriangles + wall.trims.indices.length);
     });
   });

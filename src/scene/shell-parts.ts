@@ -41,7 +41,7 @@ export function shellParts(scene: ShellSceneData, shell: RoomShell): ShellParts 
       outward: wall.outward,
       inside: wall.inside,
       body: mergeMeshData([wall.outside, wall.top, wall.reveals]),
-      frames: mergeMeshData([...windows.map((w) => w.frame), wall.trims]),
+      frames: mergeMeshData([...windows.flatMap((w) => [w.frame, w.sill]), wall.trims]),
       glass: mergeMeshData(windows.map((w) => w.glass)),
     };
   });
