@@ -3,6 +3,7 @@
 // reporting. The analysis command prints these under its own documented names (analysis-output.ts).
 import { type RoomShell } from '../schemas/room';
 import { areaMm2, perimeterMm } from '../geometry/polygon';
+import { skirtingLengthMm, skirtingRuns } from '../geometry/skirting';
 import { distance } from '../geometry/vec';
 import { takeoffSettingsSchema, type TakeoffSettingsInput } from './takeoff-settings';
 
@@ -56,12 +57,9 @@ export function computeTakeoff(
   const heightMm = shell.wallHeight;
 
   const openingsMm2 = new Array<number>(n).fill(0);
-  let skirtingGapsMm = 0;
   for (const opening of shell.openings) {
     if (opening.wall >= n) continue;
     openingsMm2[opening.wall]! += opening.width * opening.height;
-    // Skirting stops at doors and passages (they reach the floor); it runs on under windows.
-    if (opening.type !== 'window') skirtingGapsMm += opening.width;
   }
 
   let netWallMm2 = 0;
@@ -97,6 +95,7 @@ export function computeTakeoff(
       wastePercent: settings.wastePercent,
       orderAreaM2: roundQuantity(floorM2 * (1 + settings.wastePercent / 100)),
     },
-    skirtingM: roundQuantity((perimeterLengthMm - skirtingGapsMm) / MM_PER_M),
+    // The runs the 3D view draws: stopped at doors and passages, on under windows (geometry/skirting).
+    skirtingM: roundQuantity(skirtingLengthMm(skirtingRuns(shell)) / MM_PER_M),
   };
 }

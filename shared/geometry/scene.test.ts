@@ -212,9 +212,10 @@ describe('buildRoomScene', () => {
     expect(far[2]).toBeGreaterThan(2.5);
   });
 
-  it('bounds the whole scene including the walls outside faces', () => {
+  it('bounds the whole scene including the walls outside faces and the architraves on them', () => {
     const bounds = scene().bounds;
-    expect(bounds.min.map((v) => Number(v.toFixed(6)))).toEqual([-0.1, 0, -0.1]);
+    // The door on wall 0 (y −0.1) and the passage on wall 3 (x −0.1) have 15 mm architraves outside.
+    expect(bounds.min.map((v) => Number(v.toFixed(6)))).toEqual([-0.115, 0, -0.115]);
     expect(bounds.max.map((v) => Number(v.toFixed(6)))).toEqual([4.3, 2.6, 3.7]);
   });
 

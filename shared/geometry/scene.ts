@@ -1,36 +1,38 @@
 // The 3D scene meshes for one room and option in scene metres: floor, ceiling, each wall's faces with
 // openings cut out, reveals, door leaves, window frames and panes, and placed pieces as boxes.
 import type { Piece } from '../schemas/option';
-import type { Opening, RoomShell } from '../schemas/room';
-import { placeOpening, doorSwing, type OpeningPlacement } from './openings';
-import { boxCornersMm, piecePlanBox, planBoxAt, type PiecePlanBox } from './piece';
-import { areaMm2, triangulatePolygon } from './polygon';
+import type { RoomShell } from '../schemas/room';
+import { placeOpening, type OpeningPlacement } from './openings';
+import { buildDoorLeaf, writeOpeningTrim, type DoorLeafSceneData } from './shell-doors';
+import { buildWindow, type WindowSceneData } from './shell-windows';
+import { piecePlanBox } from './piece';
+import { areaMm2 } from './polygon';
+import {
+  DOWN,
+  MeshWriter,
+  MM_TO_M,
+  planToScene,
+  sceneDirection,
+  UP,
+  writeBox,
+  writeCap,
+  type MeshData,
+  type Vec3,
+} from './mesh-writer';
+import { skirtingMesh, skirtingRuns } from './skirting';
 import { POINT_TOLERANCE_MM } from './tolerances';
 import { layoutShellWalls, type WallLayout } from './walls';
-import { addScaled, directionDeg, type Vec2 } from './vec';
+import { addScaled, type Vec2 } from './vec';
 import { itemAt } from '../item-at';
 
 // Scene space: metres, y up; plan (x, y) mm sits at scene (x/1000, height/1000, y/1000), so seen
 // from above the scene matches the plan without a mirror. Every mesh is plain typed arrays so the
 // client can hand them straight to BufferGeometry and tests can read them without three.js.
 
-/** Door leaves are drawn this thick (mm), a usual interior leaf (common practice, no source). */
-export const DOOR_LEAF_THICKNESS_MM = 40;
-/** Window frame members are this wide on the face (mm) and this deep through the wall (mm) (common practice, no source). */
-export const WINDOW_FRAME_WIDTH_MM = 50;
-export const WINDOW_FRAME_DEPTH_MM = 60;
-/** Glass panes are drawn this thick (mm) so they show from both sides. */
-export const GLASS_THICKNESS_MM = 10;
+export { DOOR_LEAF_THICKNESS_MM, type DoorLeafSceneData } from './shell-doors';
+export { GLASS_THICKNESS_MM, WINDOW_FRAME_DEPTH_MM, WINDOW_FRAME_WIDTH_MM, type WindowSceneData } from './shell-windows';
 
-const MM_TO_M = 1 / 1000;
-
-/** One surface as indexed triangles in scene metres; uvs are metres so a finish repeats at its true size. */
-export interface MeshData {
-  positions: Float32Array;
-  normals: Float32Array;
-  uvs: Float32Array;
-  indices: Uint32Array;
-}
+export { meshFromArrays, planToScene, type MeshData } from './mesh-writer';
 
 /** Axis-aligned box in scene metres. */
 export interface Bounds3 {
@@ -47,6 +49,8 @@ export interface WallSceneData {
   top: MeshData;
   /** The wall's thickness inside each of its openings: sides, head and bottom. */
   reveals: MeshData;
+  /** Linings and architraves (both faces) round its doors and passages. */
+  trims: MeshData;
   /** Middle of the inside face at half height, scene metres. */
   centre: [number, number, number];
   /** Horizontal unit vector out of the room, scene axes. */
@@ -59,17 +63,6 @@ export interface PieceSceneData {
   mesh: MeshData;
 }
 
-export interface DoorLeafSceneData {
-  openingId: string;
-  mesh: MeshData;
-}
-
-export interface WindowSceneData {
-  openingId: string;
-  frame: MeshData;
-  glass: MeshData;
-}
-
 /** Everything the 3D view draws for one room and one option, scene metres, keyed by wall index or document id. */
 /** The room itself, without its pieces: what stays put while an option changes. */
 export interface ShellSceneData {
@@ -77,6 +70,8 @@ export interface ShellSceneData {
   /** Faces down, seen from inside the room. */
   ceiling: MeshData;
   walls: WallSceneData[];
+  /** The skirting runs the take-off counts (geometry/skirting), as one mesh. */
+  skirting: MeshData;
   doorLeaves: DoorLeafSceneData[];
   windows: WindowSceneData[];
   /** Of the shell alone. */
@@ -90,96 +85,6 @@ export interface RoomSceneData extends ShellSceneData {
 
 /** The meshes sceneMeshes and sceneBounds read: a shell, with or without pieces. */
 export type SceneSurfaces = Omit<ShellSceneData, 'bounds'> & { pieces?: readonly PieceSceneData[] };
-
-type Vec3 = readonly [number, number, number];
-
-// Collects vertices as plain numbers and converts once; quads and polygons choose their triangle
-// order from the requested normal, so front faces always face the normal (CCW seen from there).
-class MeshWriter {
-  private positions: number[] = [];
-  private normals: number[] = [];
-  private uvs: number[] = [];
-  private indices: number[] = [];
-  private count = 0;
-
-  private vertex(p: Vec3, n: Vec3, u: number, v: number): void {
-    this.positions.push(p[0], p[1], p[2]);
-    this.normals.push(n[0], n[1], n[2]);
-    this.uvs.push(u, v);
-    this.count++;
-  }
-
-  private triangle(base: number, a: number, b: number, c: number, points: readonly Vec3[], n: Vec3): void {
-    const pa = points[a]!;
-    const pb = points[b]!;
-    const pc = points[c]!;
-    const e1x = pb[0] - pa[0],
-      e1y = pb[1] - pa[1],
-      e1z = pb[2] - pa[2];
-    const e2x = pc[0] - pa[0],
-      e2y = pc[1] - pa[1],
-      e2z = pc[2] - pa[2];
-    const facing = (e1y * e2z - e1z * e2y) * n[0] + (e1z * e2x - e1x * e2z) * n[1] + (e1x * e2y - e1y * e2x) * n[2];
-    if (facing >= 0) this.indices.push(base + a, base + b, base + c);
-    else this.indices.push(base + a, base + c, base + b);
-  }
-
-  /** A flat polygon given as scene points with their uvs and a triangulation of it. */
-  polygon(points: readonly Vec3[], uvs: readonly (readonly [number, number])[], triangles: readonly number[], n: Vec3): void {
-    const base = this.count;
-    for (let i = 0; i < points.length; i++) this.vertex(points[i]!, n, uvs[i]![0], uvs[i]![1]);
-    for (let k = 0; k + 2 < triangles.length; k += 3)
-      this.triangle(base, triangles[k]!, triangles[k + 1]!, triangles[k + 2]!, points, n);
-  }
-
-  /** A flat convex quad, corners in order round it. */
-  quad(points: readonly [Vec3, Vec3, Vec3, Vec3], uvs: readonly (readonly [number, number])[], n: Vec3): void {
-    this.polygon(points, uvs, QUAD_TRIANGLES, n);
-  }
-
-  toMesh(): MeshData {
-    return meshFromArrays(this.positions, this.normals, this.uvs, this.indices);
-  }
-}
-
-/** Plain number lists (scene metres) as a mesh's typed arrays. */
-export function meshFromArrays(
-  positions: readonly number[],
-  normals: readonly number[],
-  uvs: readonly number[],
-  indices: readonly number[],
-): MeshData {
-  return {
-    positions: new Float32Array(positions),
-    normals: new Float32Array(normals),
-    uvs: new Float32Array(uvs),
-    indices: new Uint32Array(indices),
-  };
-}
-
-const QUAD_TRIANGLES = [0, 1, 2, 0, 2, 3];
-const UP: Vec3 = [0, 1, 0];
-const DOWN: Vec3 = [0, -1, 0];
-
-/** Plan point (mm) at height (mm) as a scene point (m). */
-export function planToScene(point: Vec2, heightMm: number): [number, number, number] {
-  return [point[0] * MM_TO_M, heightMm * MM_TO_M, point[1] * MM_TO_M];
-}
-
-function sceneDirection(planDirection: Vec2): Vec3 {
-  return [planDirection[0], 0, planDirection[1]];
-}
-
-// A horizontal plan polygon at one height; uvs are the plan position in metres.
-function writeCap(writer: MeshWriter, points: readonly Vec2[], heightMm: number, normal: Vec3): void {
-  const triangles = triangulatePolygon(points);
-  writer.polygon(
-    points.map((p) => planToScene(p, heightMm)),
-    points.map((p) => [p[0] * MM_TO_M, p[1] * MM_TO_M] as const),
-    triangles,
-    normal,
-  );
-}
 
 interface Hole {
   fromMm: number;
@@ -296,62 +201,6 @@ function writeReveals(writer: MeshWriter, wall: WallLayout, placement: OpeningPl
   }
 }
 
-// A box standing on its footprint (geometry/piece) from bottomMm up by heightMm; its own y is its
-// own x turned 90° clockwise on the plan. Heights in mm; uvs in metres along each face.
-function writeBox(writer: MeshWriter, box: PiecePlanBox, bottomMm: number, heightMm: number): void {
-  const { axisX, axisY } = box;
-  const sizeXMm = box.halfWidthMm * 2;
-  const sizeYMm = box.halfDepthMm * 2;
-  const topMm = bottomMm + heightMm;
-  // Footprint corners in order round the box: (−x,−y) (+x,−y) (+x,+y) (−x,+y).
-  const [f0, f1, f2, f3] = boxCornersMm(box);
-  const foot: [Vec2, Vec2, Vec2, Vec2] = [f0!, f1!, f2!, f3!];
-  const sides: [0 | 1 | 2 | 3, 0 | 1 | 2 | 3, Vec2, number][] = [
-    [0, 1, [-axisY[0], -axisY[1]], sizeXMm],
-    [1, 2, axisX, sizeYMm],
-    [2, 3, axisY, sizeXMm],
-    [3, 0, [-axisX[0], -axisX[1]], sizeYMm],
-  ];
-  const vb = 0;
-  const vt = heightMm * MM_TO_M;
-  for (const [a, b, outward, widthMm] of sides) {
-    const w = widthMm * MM_TO_M;
-    writer.quad(
-      [planToScene(foot[a], bottomMm), planToScene(foot[b], bottomMm), planToScene(foot[b], topMm), planToScene(foot[a], topMm)],
-      [
-        [0, vb],
-        [w, vb],
-        [w, vt],
-        [0, vt],
-      ],
-      sceneDirection(outward),
-    );
-  }
-  const x = sizeXMm * MM_TO_M;
-  const y = sizeYMm * MM_TO_M;
-  const capUvs = [
-    [0, 0],
-    [x, 0],
-    [x, y],
-    [0, y],
-  ] as const;
-  writer.quad(
-    [planToScene(foot[0], topMm), planToScene(foot[1], topMm), planToScene(foot[2], topMm), planToScene(foot[3], topMm)],
-    capUvs,
-    UP,
-  );
-  writer.quad(
-    [
-      planToScene(foot[0], bottomMm),
-      planToScene(foot[1], bottomMm),
-      planToScene(foot[2], bottomMm),
-      planToScene(foot[3], bottomMm),
-    ],
-    capUvs,
-    DOWN,
-  );
-}
-
 function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], heightMm: number): WallSceneData {
   const holes: Hole[] = placements.map((p) => ({ fromMm: p.fromMm, toMm: p.toMm, bottomMm: p.sillMm, topMm: p.headMm }));
   const outward = sceneDirection(wall.outward);
@@ -385,7 +234,11 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
   }
 
   const reveals = new MeshWriter();
-  for (const placement of placements) writeReveals(reveals, wall, placement);
+  const trims = new MeshWriter();
+  for (const placement of placements) {
+    writeReveals(reveals, wall, placement);
+    if (placement.type !== 'window') writeOpeningTrim(trims, wall, placement, heightMm);
+  }
 
   const middle = addScaled(wall.start, wall.direction, wall.lengthMm / 2);
   return {
@@ -394,48 +247,10 @@ function buildWall(wall: WallLayout, placements: readonly OpeningPlacement[], he
     outside: outside.toMesh(),
     top: top.toMesh(),
     reveals: reveals.toMesh(),
+    trims: trims.toMesh(),
     centre: planToScene(middle, heightMm / 2),
     outward: [outward[0], 0, outward[2]],
   };
-}
-
-// The leaf is drawn open at DOOR_OPEN_ANGLE_DEG (openings.ts) so the doorway reads as passable and the swing side is obvious.
-function buildDoorLeaf(wall: WallLayout, opening: Extract<Opening, { type: 'door' }>): DoorLeafSceneData {
-  const swing = doorSwing(wall, opening);
-  const open = directionDeg(swing.openAngleDeg);
-  const closed = directionDeg(swing.closedAngleDeg);
-  const centre = addScaled(addScaled(swing.hingeMm, open, opening.width / 2), closed, DOOR_LEAF_THICKNESS_MM / 2);
-  const writer = new MeshWriter();
-  writeBox(writer, planBoxAt(centre, open, opening.width, DOOR_LEAF_THICKNESS_MM), 0, opening.height);
-  return { openingId: opening.id, mesh: writer.toMesh() };
-}
-
-function buildWindow(wall: WallLayout, placement: OpeningPlacement): WindowSceneData {
-  const depthMm = Math.min(WINDOW_FRAME_DEPTH_MM, wall.thicknessMm);
-  const f = Math.min(WINDOW_FRAME_WIDTH_MM, (placement.toMm - placement.fromMm) / 4, (placement.headMm - placement.sillMm) / 4);
-  const midDepth = wall.thicknessMm / 2;
-  const at = (alongMm: number) => addScaled(addScaled(wall.start, wall.direction, alongMm), wall.outward, midDepth);
-  const frame = new MeshWriter();
-  const innerFrom = placement.fromMm + f;
-  const innerTo = placement.toMm - f;
-  const fullHeight = placement.headMm - placement.sillMm;
-  writeBox(frame, planBoxAt(at(placement.fromMm + f / 2), wall.direction, f, depthMm), placement.sillMm, fullHeight);
-  writeBox(frame, planBoxAt(at(placement.toMm - f / 2), wall.direction, f, depthMm), placement.sillMm, fullHeight);
-  writeBox(frame, planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm), placement.sillMm, f);
-  writeBox(
-    frame,
-    planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, depthMm),
-    placement.headMm - f,
-    f,
-  );
-  const glass = new MeshWriter();
-  writeBox(
-    glass,
-    planBoxAt(at((innerFrom + innerTo) / 2), wall.direction, innerTo - innerFrom, GLASS_THICKNESS_MM),
-    placement.sillMm + f,
-    fullHeight - 2 * f,
-  );
-  return { openingId: placement.id, frame: frame.toMesh(), glass: glass.toMesh() };
 }
 
 /** The room shell (plan mm) as scene meshes (metres): floor, ceiling, walls, door leaves and windows. */
@@ -459,7 +274,8 @@ export function buildShellScene(shell: RoomShell): ShellSceneData {
   writeCap(ceiling, shell.outline, shell.wallHeight, DOWN);
 
   const wallData = walls.map((wall) => buildWall(wall, itemAt(placementsByWall, wall.index, 'wall'), shell.wallHeight));
-  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, doorLeaves, windows };
+  const skirting = skirtingMesh(shell, skirtingRuns(shell));
+  const surfaces = { floor: floor.toMesh(), ceiling: ceiling.toMesh(), walls: wallData, skirting, doorLeaves, windows };
   return { ...surfaces, bounds: sceneBounds(surfaces) };
 }
 
@@ -509,10 +325,11 @@ export function sceneMeshes(scene: SceneSurfaces): MeshData[] {
   return [
     scene.floor,
     scene.ceiling,
-    ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals]),
+    ...scene.walls.flatMap((w) => [w.inside, w.outside, w.top, w.reveals, w.trims]),
+    scene.skirting,
     ...(scene.pieces ?? []).map((p) => p.mesh),
-    ...scene.doorLeaves.map((d) => d.mesh),
-    ...scene.windows.flatMap((w) => [w.frame, w.glass]),
+    ...scene.doorLeaves.flatMap((d) => [d.mesh, d.edges, d.handles]),
+    ...scene.windows.flatMap((w) => [w.frame, w.glass, w.sill]),
   ];
 }
 

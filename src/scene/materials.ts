@@ -2,6 +2,7 @@
 // is chosen, the selection tint and the faded near walls. Finishes (paint colours and photo textures
 // at their real repeat size) are made in finish-materials.ts.
 import * as THREE from 'three';
+import { WINDOW_STENCIL } from './outside-view';
 
 /** Parlour's accent, used to mark the selected piece. */
 export const SELECTION_COLOUR = '#2f6b5c';
@@ -30,6 +31,7 @@ export interface SceneMaterials {
   floor: THREE.MeshStandardMaterial;
   ceiling: THREE.MeshStandardMaterial;
   doorLeaf: THREE.MeshStandardMaterial;
+  handle: THREE.MeshStandardMaterial;
   windowFrame: THREE.MeshStandardMaterial;
   windowFrameFaded: THREE.MeshStandardMaterial;
   glass: THREE.MeshStandardMaterial;
@@ -68,9 +70,12 @@ export function createSceneMaterials(): SceneMaterials {
     wallFaded: faded(wall),
     floor: new THREE.MeshStandardMaterial({ color: '#c8a983', roughness: 0.8, metalness: 0 }),
     ceiling: new THREE.MeshStandardMaterial({ color: '#f6f3ee', roughness: 0.95, metalness: 0 }),
-    doorLeaf: new THREE.MeshStandardMaterial({ color: '#e8e1d6', roughness: 0.7, metalness: 0 }),
+    // A painted leaf a shade deeper than the trim, so its lighter edges and the handles show from above.
+    doorLeaf: new THREE.MeshStandardMaterial({ color: '#d9cfc0', roughness: 0.7, metalness: 0 }),
+    handle: new THREE.MeshStandardMaterial({ color: '#6f6a63', roughness: 0.35, metalness: 0.6 }),
     windowFrame,
     windowFrameFaded: faded(windowFrame),
+    // The glass marks the stencil: the outside (outside-view.tsx) is drawn only through it.
     glass: new THREE.MeshStandardMaterial({
       color: '#cfe3ec',
       roughness: 0.05,
@@ -78,6 +83,10 @@ export function createSceneMaterials(): SceneMaterials {
       transparent: true,
       opacity: 0.28,
       depthWrite: false,
+      stencilWrite: true,
+      stencilRef: WINDOW_STENCIL,
+      stencilFunc: THREE.AlwaysStencilFunc,
+      stencilZPass: THREE.ReplaceStencilOp,
     }),
     piece,
     flatPiece: Object.assign(piece.clone(), FLAT_PIECE_OFFSET),

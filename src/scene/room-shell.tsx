@@ -1,5 +1,5 @@
-// The room's shell in 3D: floor, ceiling, walls, door leaves and windows with their finishes, and
-// clicks on a surface (not drags) reported to the caller.
+// The room's shell in 3D: floor, ceiling, walls, door leaves, trims and windows with their finishes,
+// the outside seen through the windows, and clicks on a surface (not drags) reported to the caller.
 import { useEffect, useMemo } from 'react';
 import type { ThreeEvent } from '@react-three/fiber';
 import type * as THREE from 'three';
@@ -7,6 +7,7 @@ import type { SceneMaterials } from './materials';
 import type { FinishMaterialPair } from './finish-materials';
 import { disposeShellGeometries, shellGeometries, type ShellParts } from './shell-parts';
 import type { WallPartTag } from './wall-fade';
+import { OutsideView } from './outside-view';
 
 interface RoomShellProps {
   parts: ShellParts;
@@ -65,6 +66,7 @@ export function RoomShellMeshes({
 
   return (
     <group>
+      <OutsideView bounds={parts.bounds} />
       {geometries.floor && (
         <mesh
           geometry={geometries.floor}
@@ -85,6 +87,9 @@ export function RoomShellMeshes({
         />
       )}
       {geometries.doorLeaves && <mesh geometry={geometries.doorLeaves} material={materials.doorLeaf} castShadow receiveShadow />}
+      {geometries.handles && <mesh geometry={geometries.handles} material={materials.handle} castShadow />}
+      {/* The skirting and the leaves' edges wear the window frames' paint; they stay solid when a wall fades. */}
+      {geometries.trim && <mesh geometry={geometries.trim} material={materials.windowFrame} receiveShadow />}
       <group ref={wallsRef}>
         {geometries.walls.map((wall) => {
           const own = surfaces?.inside?.(wall.index);

@@ -50,8 +50,10 @@ export function SceneCanvas({
             shadows={shadowMaps ? 'percentage' : undefined}
             dpr={[1, 2]}
             // Neutral tone mapping keeps a lit paint close to its swatch; the output is sRGB.
+            // A stencil buffer: the windows' glass marks where the outside is drawn (outside-view.tsx).
             gl={{
               preserveDrawingBuffer: true,
+              stencil: true,
               antialias: true,
               toneMapping: THREE.NeutralToneMapping,
               outputColorSpace: THREE.SRGBColorSpace,

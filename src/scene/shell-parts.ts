@@ -1,6 +1,8 @@
 // How the room's static surfaces are grouped into draw calls: per wall, the inside face alone (it
 // will take the wall's own finish), everything else of that wall in one mesh, and the wall's window
-// frames and glass, so one wall can fade as a whole. Door leaves share one mesh. Scene metres.
+// frames (with the linings and architraves of its doors and passages) and glass, so one wall can
+// fade as a whole. Door leaves share one mesh and their handles another; the skirting and the
+// leaves' edges share the trim (it stays solid, a line round the floor, when a wall fades). Scene metres.
 import type * as THREE from 'three';
 import type { Bounds3, MeshData, ShellSceneData } from '../../shared/geometry/scene';
 import type { RoomShell } from '../../shared/schemas/room';
@@ -12,6 +14,7 @@ export interface WallParts {
   inside: MeshData;
   /** Outside face, top and reveals. */
   body: MeshData;
+  /** Window frames, bars and sills, and the linings and architraves of its doors and passages. */
   frames: MeshData;
   glass: MeshData;
 }
@@ -21,6 +24,10 @@ export interface ShellParts {
   ceiling: MeshData;
   walls: WallParts[];
   doorLeaves: MeshData;
+  /** Lever handles of every door. */
+  handles: MeshData;
+  /** Painted trim that never fades: the skirting and the door leaves' edges. */
+  trim: MeshData;
   bounds: Bounds3;
 }
 
@@ -34,7 +41,7 @@ export function shellParts(scene: ShellSceneData, shell: RoomShell): ShellParts 
       outward: wall.outward,
       inside: wall.inside,
       body: mergeMeshData([wall.outside, wall.top, wall.reveals]),
-      frames: mergeMeshData(windows.map((w) => w.frame)),
+      frames: mergeMeshData([...windows.flatMap((w) => [w.frame, w.sill]), wall.trims]),
       glass: mergeMeshData(windows.map((w) => w.glass)),
     };
   });
@@ -43,6 +50,8 @@ export function shellParts(scene: ShellSceneData, shell: RoomShell): ShellParts 
     ceiling: scene.ceiling,
     walls,
     doorLeaves: mergeMeshData(scene.doorLeaves.map((d) => d.mesh)),
+    handles: mergeMeshData(scene.doorLeaves.map((d) => d.handles)),
+    trim: mergeMeshData([scene.skirting, ...scene.doorLeaves.map((d) => d.edges)]),
     bounds: scene.bounds,
   };
 }
@@ -61,6 +70,8 @@ export interface ShellGeometries {
   ceiling: THREE.BufferGeometry | null;
   walls: WallGeometries[];
   doorLeaves: THREE.BufferGeometry | null;
+  handles: THREE.BufferGeometry | null;
+  trim: THREE.BufferGeometry | null;
 }
 
 // Empty parts get no geometry, so they cost no draw call.
@@ -82,6 +93,8 @@ export function shellGeometries(parts: ShellParts): ShellGeometries {
       glass: geometryOrNull(wall.glass),
     })),
     doorLeaves: geometryOrNull(parts.doorLeaves),
+    handles: geometryOrNull(parts.handles),
+    trim: geometryOrNull(parts.trim),
   };
 }
 
@@ -90,6 +103,8 @@ export function disposeShellGeometries(geometries: ShellGeometries): void {
     geometries.floor,
     geometries.ceiling,
     geometries.doorLeaves,
+    geometries.trim,
+    geometries.handles,
     ...geometries.walls.flatMap((w) => [w.inside, w.body, w.frames, w.glass]),
   ];
   for (const geometry of all) geometry?.dispose();

@@ -510,6 +510,46 @@ describe('the walk-through', () => {
     await context.close();
   });
 
+  it('walks the demo flat to a door and a window for the README, clicking the walk buttons', async () => {
+    const { context, page, view } = await openClient(demoLink);
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    const walk = async () => {
+      await page.getByRole('group', { name: 'How to look' }).getByRole('button', { name: 'Walk' }).click();
+      await expect.poll(() => view.getAttribute('data-mode')).toBe('walk');
+      return settledCamera(page, view);
+    };
+    const press = async (name: string, times: number) => {
+      for (let i = 0; i < times; i++) {
+        await page.getByRole('button', { name, exact: true }).click();
+        await settledCamera(page, view);
+      }
+    };
+    // The living room: a step inside the hall door (left wall, plan x 0) facing the room; walk in
+    // two metres and turn round to the door: its leaf, handle, lining and architrave, the skirting.
+    const start = await walk();
+    await press('Walk forward', 4);
+    await press('Turn right', 6);
+    const atDoor = await settledCamera(page, view);
+    expect(Math.hypot(atDoor[0] - start[0], atDoor[2] - start[2])).toBeGreaterThan(1.5);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(readmeShots, 'walk-door.png') });
+
+    // The bedroom: a step inside its door, turned to the window wall (plan y 0) and up to the window.
+    await page
+      .getByRole('button', { name: 'Bedroom', exact: true })
+      .or(page.getByRole('link', { name: 'Bedroom', exact: true }))
+      .click();
+    await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
+    const inBedroom = await walk();
+    await press('Turn left', 1);
+    await press('Walk forward', 2);
+    const atWindow = await settledCamera(page, view);
+    expect(atWindow[2]).toBeLessThan(inBedroom[2] - 0.5);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(readmeShots, 'walk-window.png') });
+    await context.close();
+  });
+
   it('walks with the keys: walls stop it, the door lets it through, and only while the view has focus', async () => {
     const link = await testRoomPresentation(designer.page);
     const { context, page, view } = await openClient(link);
@@ -867,6 +907,7 @@ describe('the walk-through', () => {
       typicalOverviewDrawCalls: overview.drawCalls,
       typicalWalkDrawCalls: walk.drawCalls,
       typicalTriangles: overview.triangles,
+      typicalWalkTriangles: walk.triangles,
       typicalTextureBytes: overview.textureBytes,
     });
     for (const d of [overview, walk]) {
