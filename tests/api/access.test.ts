@@ -16,6 +16,7 @@ interface Fixture {
   memberId: string;
   inviteId: string;
   finishId: string;
+  modelId: string;
   fileName: string;
   presentationId: string;
   sentMailId: string;
@@ -68,6 +69,12 @@ const CASES: Record<string, Case> = {
   'post /api/finishes/photos': {},
   'patch /api/finishes/:id': { params: (f) => ({ id: f.finishId }), body: () => ({ name: 'Taken' }) },
   'delete /api/finishes/:id': { params: (f) => ({ id: f.finishId }) },
+  'get /api/piece-models': {},
+  'get /api/piece-models/:id': { params: (f) => ({ id: f.modelId }) },
+  'post /api/piece-models': {},
+  'patch /api/piece-models/:id': { params: (f) => ({ id: f.modelId }), body: () => ({ name: 'Taken' }) },
+  'put /api/piece-models/:id/thumbnail': { params: (f) => ({ id: f.modelId }) },
+  'delete /api/piece-models/:id': { params: (f) => ({ id: f.modelId }) },
   'get /api/files/:name': { params: (f) => ({ name: f.fileName }) },
   'get /api/projects/:projectId/presentations': { params: (f) => ({ projectId: f.projectId }) },
   'post /api/projects/:projectId/presentations': {
@@ -144,6 +151,12 @@ beforeAll(async () => {
       bytes: 1,
     })
     .execute();
+  // A model row of studio A's, still processing (the access checks never reach its file).
+  const model = await t.db
+    .insertInto('piece_models')
+    .values({ studio_id: studioId, name: 'Fixture chair', file_name: 'chair.glb', source_bytes: 1 })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   const presentation = await a.agent
     .post(`/api/projects/${project.body.project.id}/presentations`)
     .send({ rooms: [{ roomId: room.body.room.id, optionIds: [room.body.options[0].id] }] });
@@ -155,6 +168,7 @@ beforeAll(async () => {
     memberId: target.member.id,
     inviteId: invite.body.invite.id,
     finishId: paint.body.finish.id,
+    modelId: model.id,
     fileName,
     presentationId: presentation.body.presentation.id,
     sentMailId: (await t.db.selectFrom('sent_mail').select('id').where('studio_id', '=', studioId).executeTakeFirstOrThrow()).id,

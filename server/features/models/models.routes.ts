@@ -45,6 +45,8 @@ export const modelRoutes: RouteDef[] = [
     access: WRITERS,
     params: idParamSchema,
     async handler(ctx) {
+      // Whose model it is is asked before any bytes are read.
+      await getModel(ctx.services.db, ctx.caller.studioId, ctx.params.id);
       const webp = await readThumbnailUpload(ctx.req, ctx.res);
       return { model: await setThumbnail(ctx.services, ctx.caller.studioId, ctx.params.id, webp) };
     },
