@@ -14,6 +14,7 @@ import * as m0011 from './0011_drop_presentation_requests';
 import * as m0012 from './0012_option_versions_and_paint_litres';
 import * as m0013 from './0013_queued_mail';
 import * as m0016 from './0016_piece_models';
+import * as m0017 from './0017_notify_piece_model_changes';
 
 export const migrations: Record<string, Migration> = {
   '0001_create_studios': m0001,
@@ -30,4 +31,5 @@ export const migrations: Record<string, Migration> = {
   '0012_option_versions_and_paint_litres': m0012,
   '0013_queued_mail': m0013,
   '0016_piece_models': m0016,
+  '0017_notify_piece_model_changes': m0017,
 };

@@ -314,6 +314,19 @@ describe('models on pieces and the client link', () => {
     expect((await request(t.app).get(`/api/p/${theirToken}/files/${theirName}`)).status).toBe(404);
   });
 
+  it('shows a change to the model on the link’s next opens, even after the answer was kept ready', async () => {
+    const opened = async () =>
+      ((await request(t.app).get(`/api/p/${token}`)).body.presentation as ClientPresentation).rooms[0].options[0].pieces[0].model;
+    for (let i = 0; i < 3; i += 1) expect((await opened())?.turnDeg).toBe(0);
+    expect((await owner.patch(`/api/piece-models/${model.id}`).send({ turnDeg: 90 })).status).toBe(200);
+    // The database's change notice may take a moment on a loaded machine; the kept answer lives 60 s.
+    let seen = await opened();
+    for (const until = Date.now() + 5000; seen?.turnDeg !== 90 && Date.now() < until; seen = await opened())
+      await new Promise((r) => setTimeout(r, 25));
+    expect(seen?.turnDeg).toBe(90);
+    expect((await owner.patch(`/api/piece-models/${model.id}`).send({ turnDeg: 0 })).status).toBe(200);
+  });
+
   it('refuses to delete a model worn in a live project, naming where; once archived it can go', async () => {
     const refused = await owner.delete(`/api/piece-models/${model.id}`);
     expect([refused.status, refused.body.error.code]).toEqual([409, 'model_in_use']);

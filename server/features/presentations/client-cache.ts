@@ -1,9 +1,9 @@
 // The client's presentation data, kept ready per link so that opening a link costs no database
 // round trip: the answer is built once, serialised once, and served until something it shows
 // changes. Every instance LISTENs for the database's change notices (migration 0006: any write
-// to the studio's projects, rooms, options, finishes, choices or the link itself) and drops that
-// studio's entries the moment one arrives; routes that withdraw, extend or decide also drop the
-// entry locally before they answer. While the listening connection is down nothing is cached,
+// to the studio's projects, rooms, options, finishes, choices or the link itself; 0017: its piece
+// models) and drops that studio's entries the moment one arrives; routes that withdraw, extend or
+// decide also drop the entry locally before they answer. While the listening connection is down nothing is cached,
 // so a withdrawn link can never be served from a stale entry.
 import pg from 'pg';
 import { createHash } from 'node:crypto';
