@@ -46,6 +46,7 @@ const SWITCHES = 50;
 let browser: Browser;
 let designer: { context: BrowserContext; page: Page };
 const figures: Record<string, number | string> = {};
+const demoDoorFigures: Record<string, number[]> = {};
 
 beforeAll(async () => {
   browser = await launchBrowser();
@@ -54,7 +55,7 @@ beforeAll(async () => {
   await signUpThroughForm(designer.page, 'Wren Lane Interiors', 'Ida Designer');
 });
 afterAll(async () => {
-  writeFileSync(join(shots, 'figures.json'), JSON.stringify(figures, null, 2));
+  writeFileSync(join(shots, 'figures.json'), JSON.stringify({ ...figures, demoDoorFigures }, null, 2));
   await designer?.context.close();
   await browser?.close();
 });
@@ -511,6 +512,7 @@ describe('the walk-through', () => {
   });
 
   it('walks the demo flat to a door and a window for the README, clicking the walk buttons', async () => {
+    demoLink ??= await demoPresentation(designer.page);
     const { context, page, view } = await openClient(demoLink);
     await expect.poll(async () => page.getByRole('progressbar').count(), { timeout: 20_000 }).toBe(0);
     const walk = async () => {
@@ -524,13 +526,27 @@ describe('the walk-through', () => {
         await settledCamera(page, view);
       }
     };
-    // The living room: a step inside the hall door (left wall, plan x 0) facing the room; walk in
-    // two metres and turn round to the door: its leaf, handle, lining and architrave, the skirting.
+    // The living room: from a step inside the hall door (left wall, plan x 0), two steps into the
+    // room, then past the dining table to the far corner of the lower arm (holding W slides along the
+    // table and the walls as a person does); turned back to the door, the picture shows its leaf,
+    // handle, lining and architrave across the table.
     const start = await walk();
-    await press('Walk forward', 4);
-    await press('Turn right', 6);
+    demoDoorFigures.start = start;
+    const turnUntil = async (name: string, holds: (look: [number, number, number]) => boolean) => {
+      for (let i = 0; i < 12 && !holds(await lookOf(view)); i++) await press(name, 1);
+      expect(holds(await lookOf(view))).toBe(true);
+    };
+    await turnUntil('Turn left', (l) => l[2] < -0.9);
+    await press('Walk forward', 2);
+    await turnUntil('Turn right', (l) => l[0] > 0.9 && l[2] > 0);
+    const across = await holdKey(page, view, 'KeyW', 30_000);
+    demoDoorFigures.across = across;
+    expect(across[0]).toBeGreaterThan(3.3);
+    await turnUntil('Turn right', (l) => l[0] < -0.9 && l[2] < 0);
     const atDoor = await settledCamera(page, view);
+    demoDoorFigures.look = await lookOf(view);
     expect(Math.hypot(atDoor[0] - start[0], atDoor[2] - start[2])).toBeGreaterThan(1.5);
+    expect((await screenOf(view, [0, 1, 4.39])).inView).toBe(true);
     await page.waitForTimeout(300);
     await page.screenshot({ path: join(readmeShots, 'walk-door.png') });
 
@@ -548,7 +564,7 @@ describe('the walk-through', () => {
     await page.waitForTimeout(300);
     await page.screenshot({ path: join(readmeShots, 'walk-window.png') });
     await context.close();
-  });
+  }, 150_000);
 
   it('walks with the keys: walls stop it, the door lets it through, and only while the view has focus', async () => {
     const link = await testRoomPresentation(designer.page);
