@@ -8,6 +8,7 @@ import { createJobQueue } from './services/jobs/job-queue';
 import { photoJobKinds } from './features/finishes/finishes.jobs';
 import { mailJobKinds } from './features/outbox/mail-queue';
 import { modelJobKinds } from './features/models/models.jobs';
+import { UploadRoom } from './http/upload-room';
 import { ClientLinkCache } from './features/presentations/client-cache';
 
 export function createServices(deps: AppDeps): AppServices {
@@ -39,6 +40,7 @@ export function createServices(deps: AppDeps): AppServices {
     verifyPassword: deps.verifyPassword ?? verifyPassword,
     jobs,
     links,
+    uploads: new UploadRoom(deps.config.UPLOAD_MEMORY_MB * 1024 * 1024),
   };
 }
 

@@ -52,6 +52,9 @@ const envSchema = z
     // pixel limit, hence at most 2); it also sends queued mail unless 0. 0 on an app instance leaves
     // all of it to worker processes (npm run worker).
     WORKERS: z.coerce.number().int().min(0).max(2).default(1),
+    // Memory this process lets uploads (photos, models) hold while they are checked; an upload that
+    // would pass it is answered 503 with Retry-After. Each upload reserves what it declares.
+    UPLOAD_MEMORY_MB: z.coerce.number().int().min(32).max(16384).default(320),
     // A photo job running longer than this has failed (its worker died or hung) and is tried again.
     PHOTO_JOB_TIMEOUT_SECONDS: z.coerce.number().int().min(10).max(3600).default(180),
     // How often the job queue looks for jobs that ran out of time (and tidies finished ones).

@@ -9,6 +9,7 @@ import type { Logger } from './services/logging/logger';
 import type { PasswordVerifier } from './services/auth/passwords';
 import type { JobQueue } from './services/jobs/job-queue';
 import type { ClientLinkCache } from './features/presentations/client-cache';
+import type { UploadRoom } from './http/upload-room';
 
 /** The outside world a server is started with. */
 export interface AppDeps {
@@ -38,4 +39,6 @@ export interface AppServices {
   jobs: JobQueue;
   /** Presentation answers kept ready per link on this instance. */
   links: ClientLinkCache;
+  /** Memory uploads may hold on this instance while they are checked (UPLOAD_MEMORY_MB). */
+  uploads: UploadRoom;
 }

@@ -3,7 +3,7 @@ import { idParamSchema } from '../../../shared/schemas/common';
 import { createPaintSchema, finishListQuerySchema, finishPatchSchema } from '../../../shared/schemas/finish';
 import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
 import { createPaint, createPhotoFinishes, deleteFinish, getFinish, listFinishes, updateFinish } from './finishes.service';
-import { readPhotoUpload } from './finishes.uploads';
+import { PHOTO_UPLOAD_CEILING, PHOTO_UPLOAD_TOO_LARGE, readPhotoUpload } from './finishes.uploads';
 
 export const finishRoutes: RouteDef[] = [
   route({
@@ -35,12 +35,13 @@ export const finishRoutes: RouteDef[] = [
     method: 'post',
     path: '/api/finishes/photos',
     access: WRITERS,
-    async handler(ctx) {
-      const { photos, fields } = await readPhotoUpload(ctx.req, ctx.res);
-      const finishes = await createPhotoFinishes(ctx.services, ctx.caller.studioId, photos, fields);
-      ctx.res.status(201);
-      return { finishes };
-    },
+    handler: (ctx) =>
+      ctx.services.uploads.with(ctx.req, PHOTO_UPLOAD_CEILING, PHOTO_UPLOAD_TOO_LARGE, async () => {
+        const { photos, fields } = await readPhotoUpload(ctx.req, ctx.res);
+        const finishes = await createPhotoFinishes(ctx.services, ctx.caller.studioId, photos, fields);
+        ctx.res.status(201);
+        return { finishes };
+      }),
   }),
   route({
     method: 'patch',

@@ -9,6 +9,10 @@ import { inspectPhoto, PhotoProblem, type PhotoHeader } from '../../services/ima
 export const PHOTOS_FIELD = 'photos';
 const MB = 1024 * 1024;
 
+/** The most one photo request can carry: every file at the size limit. */
+export const PHOTO_UPLOAD_CEILING = UPLOAD_LIMITS.maxFileBytes * UPLOAD_LIMITS.maxFilesPerRequest;
+export const PHOTO_UPLOAD_TOO_LARGE = `The upload is larger than ${PHOTO_UPLOAD_CEILING / MB} MB: send at most ${UPLOAD_LIMITS.maxFilesPerRequest} photos of up to ${UPLOAD_LIMITS.maxFileBytes / MB} MB each at a time.`;
+
 const upload = multer({
   storage: multer.memoryStorage(),
   defParamCharset: 'utf8',

@@ -1,10 +1,10 @@
 // The studio's piece models: the library, one upload per request, changes, the browser-rendered
 // thumbnail and deletion. Rules and transactions are in models.service.ts.
 import { idParamSchema } from '../../../shared/schemas/common';
-import { pieceModelPatchSchema } from '../../../shared/schemas/piece-model';
+import { MODEL_LIMITS, pieceModelPatchSchema } from '../../../shared/schemas/piece-model';
 import { ALL_ROLES, WRITERS, route, type RouteDef } from '../../http/routes';
 import { createModel, deleteModel, getModel, listModels, setThumbnail, updateModel } from './models.service';
-import { readModelUpload, readThumbnailUpload } from './models.uploads';
+import { MODEL_TOO_LARGE, THUMBNAIL_LIMITS, THUMBNAIL_TOO_LARGE, readModelUpload, readThumbnailUpload } from './models.uploads';
 
 export const modelRoutes: RouteDef[] = [
   route({
@@ -24,12 +24,13 @@ export const modelRoutes: RouteDef[] = [
     method: 'post',
     path: '/api/piece-models',
     access: WRITERS,
-    async handler(ctx) {
-      const { model, fields } = await readModelUpload(ctx.req, ctx.res);
-      const made = await createModel(ctx.services, ctx.caller.studioId, model, fields);
-      ctx.res.status(201);
-      return { model: made };
-    },
+    handler: (ctx) =>
+      ctx.services.uploads.with(ctx.req, MODEL_LIMITS.maxFileBytes, MODEL_TOO_LARGE, async () => {
+        const { model, fields } = await readModelUpload(ctx.req, ctx.res);
+        const made = await createModel(ctx.services, ctx.caller.studioId, model, fields);
+        ctx.res.status(201);
+        return { model: made };
+      }),
   }),
   route({
     method: 'patch',
@@ -47,8 +48,10 @@ export const modelRoutes: RouteDef[] = [
     async handler(ctx) {
       // Whose model it is is asked before any bytes are read.
       await getModel(ctx.services.db, ctx.caller.studioId, ctx.params.id);
-      const webp = await readThumbnailUpload(ctx.req, ctx.res);
-      return { model: await setThumbnail(ctx.services, ctx.caller.studioId, ctx.params.id, webp) };
+      return ctx.services.uploads.with(ctx.req, THUMBNAIL_LIMITS.bytes, THUMBNAIL_TOO_LARGE, async () => {
+        const webp = await readThumbnailUpload(ctx.req, ctx.res);
+        return { model: await setThumbnail(ctx.services, ctx.caller.studioId, ctx.params.id, webp) };
+      });
     },
   }),
   route({

@@ -12,7 +12,9 @@ export const MODEL_FIELD = 'model';
 export const THUMBNAIL_FIELD = 'thumbnail';
 const MB = 1024 * 1024;
 /** A thumbnail is a small still: 2 MB and 4 megapixels are far more than one needs (common practice). */
-const THUMBNAIL_LIMITS = { bytes: 2 * MB, pixels: 4_000_000, sidePx: 320 } as const;
+export const THUMBNAIL_LIMITS = { bytes: 2 * MB, pixels: 4_000_000, sidePx: 320 } as const;
+export const MODEL_TOO_LARGE = `The model is larger than ${MODEL_LIMITS.maxFileBytes / MB} MB. Export a lighter version and try again.`;
+export const THUMBNAIL_TOO_LARGE = `The thumbnail is larger than ${THUMBNAIL_LIMITS.bytes / MB} MB.`;
 
 const single = (field: string, bytes: number) =>
   multer({
@@ -60,13 +62,7 @@ export async function readModelUpload(
   req: Request,
   res: Response,
 ): Promise<{ model: UploadedModel; fields: Record<string, unknown> }> {
-  const file = await readSingle(
-    req,
-    res,
-    modelUpload,
-    MODEL_FIELD,
-    `The model is larger than ${MODEL_LIMITS.maxFileBytes / MB} MB. Export a lighter version and try again.`,
-  );
+  const file = await readSingle(req, res, modelUpload, MODEL_FIELD, MODEL_TOO_LARGE);
   if (!file)
     throw new HttpError(400, 'no_model', 'Choose a model file (.glb or .gltf).', { [MODEL_FIELD]: 'Choose a model file.' });
   try {
@@ -83,7 +79,7 @@ export async function readModelUpload(
 
 /** The request's thumbnail as a WebP of at most 320 px a side; refuses what is not a small PNG. */
 export async function readThumbnailUpload(req: Request, res: Response): Promise<Buffer> {
-  const file = await readSingle(req, res, thumbnailUpload, THUMBNAIL_FIELD, 'The thumbnail is larger than 2 MB.');
+  const file = await readSingle(req, res, thumbnailUpload, THUMBNAIL_FIELD, THUMBNAIL_TOO_LARGE);
   if (!file) throw new HttpError(400, 'no_thumbnail', 'Send the thumbnail as a PNG.');
   const png = file.buffer.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
   if (!png) throw new HttpError(415, 'not_png', 'Send the thumbnail as a PNG.');
