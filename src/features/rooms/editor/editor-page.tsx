@@ -30,6 +30,7 @@ import { useSeenMarks } from './check/use-seen-marks';
 import { FindingsBadge } from './check/findings-badge';
 import { FinishesPanel, targetOf } from './finishes-panel';
 import { sceneFinishesFor } from './scene-finishes';
+import { sceneModelsFor } from './scene-models';
 import type { Finish } from '../../../../shared/schemas/finish';
 import { FurnishPanel } from './furnish-panel';
 import type { PieceModel } from '../../../../shared/schemas/piece-model';
@@ -171,6 +172,8 @@ function Editor({
   const flaggedPieceIds = step === 'check' ? [...new Set(seenMarks.open.flatMap((f) => f.finding.pieces))] : [];
   const finishIndex = useMemo(() => new Map(finishes.map((f) => [f.id, f])), [finishes]);
   const sceneFinishes = useMemo(() => sceneFinishesFor(option, finishIndex), [option, finishIndex]);
+  const modelIndex = useMemo(() => new Map(models.map((m) => [m.id, m])), [models]);
+  const sceneModels = useMemo(() => sceneModelsFor(pieces, modelIndex), [pieces, modelIndex]);
   const select = useCallback((s: Selection) => {
     setSelection(s);
     const t = targetOf(s);
@@ -644,6 +647,7 @@ function Editor({
                     selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
                     onPieceClick={(id) => select({ kind: 'piece', id })}
                     finishes={sceneFinishes}
+                    models={sceneModels}
                     onSurfaceClick={
                       step === 'finishes'
                         ? (hit) => {
