@@ -26,6 +26,7 @@ import { useRoom, type RoomDetail } from '../api/rooms';
 import { formatLength } from '../../../../shared/units/length';
 import { CheckPanel } from './check/check-panel';
 import { useFitCheck } from './check/use-fit-check';
+import { useModelBudget } from './check/use-model-budget';
 import { useSeenMarks } from './check/use-seen-marks';
 import { FindingsBadge } from './check/findings-badge';
 import { FinishesPanel, targetOf } from './finishes-panel';
@@ -174,6 +175,7 @@ function Editor({
   const sceneFinishes = useMemo(() => sceneFinishesFor(option, finishIndex), [option, finishIndex]);
   const modelIndex = useMemo(() => new Map(models.map((m) => [m.id, m])), [models]);
   const sceneModels = useMemo(() => sceneModelsFor(pieces, modelIndex), [pieces, modelIndex]);
+  const modelBudget = useModelBudget(editor.doc.shell, step === 'check' ? pieces : NO_PIECES, modelIndex, sceneFinishes);
   const select = useCallback((s: Selection) => {
     setSelection(s);
     const t = targetOf(s);
@@ -313,6 +315,7 @@ function Editor({
             onMark={seenMarks.onMark}
             onUnmark={seenMarks.onUnmark}
             readOnly={optionReadOnly}
+            modelBudget={modelBudget}
           />
         );
     }
@@ -339,6 +342,7 @@ function Editor({
     finishTarget,
     select,
     models,
+    modelBudget,
   ]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
