@@ -279,7 +279,7 @@ describe('a piece wearing a model in the room editor', () => {
       const within = page.locator('[data-testid=model-budget][data-state=within]');
       await within.waitFor({ timeout: 15_000 });
       expect(await within.innerText()).toMatch(
-        /^The 2 models in this option stay light enough for a client’s laptop: about [\d,]+ triangles in all\.$/,
+        /^The 2 models in this option stay light enough for a client’s laptop: about [\d,]+ triangles for the whole room\.$/,
       );
       const estimate = await num(within, 'triangles');
       expect(estimate).toBeGreaterThan(2 * heavy.triangles!);

@@ -206,7 +206,7 @@ function DeleteModelDialog({ model, onClose }: { model: PieceModel; onClose: () 
         </>
       }
     >
-      <p className="text-ink-soft">Pieces that wear it go back to their drawn forms.</p>
+      {!body?.wornBy && <p className="text-ink-soft">Pieces that wear it go back to their drawn forms.</p>}
       {remove.isError && (
         <div className="mt-4 flex flex-col gap-2">
           <Notice tone="error">

@@ -71,6 +71,8 @@ export function CheckPanel({
   const tall = pieces.filter((p) => p.placed && p.height >= TALL_PIECE_MM);
   return (
     <div className="flex flex-col gap-5">
+      {/* About the whole option, so above its findings, however many there are. */}
+      <ModelBudgetNotice budget={modelBudget} />
       <LengthField
         commit="blur"
         label="Walkway width"
@@ -124,8 +126,6 @@ export function CheckPanel({
           ))}
         </ol>
       )}
-
-      <ModelBudgetNotice budget={modelBudget} />
 
       <div className="rounded-xl bg-sand p-4 text-sm text-ink-soft">
         <h3 className="mb-1 font-bold text-ink">Good to know</h3>

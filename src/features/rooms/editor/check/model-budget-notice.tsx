@@ -35,10 +35,10 @@ export function ModelBudgetNotice({ budget }: { budget: ModelBudget | null }) {
         <Notice tone="warn">{heavyModelsText(budget)}</Notice>
       </div>
     );
-  const count = budget.models === 1 ? 'The model' : `The ${budget.models} models`;
+  const count = budget.models === 1 ? 'The model in this option stays' : `The ${budget.models} models in this option stay`;
   return (
     <p {...figures} data-state="within" className="text-xs text-ink-faint">
-      {count} in this option stay light enough for a client’s laptop: about {about(budget.triangles)} triangles in all.
+      {count} light enough for a client’s laptop: about {about(budget.triangles)} triangles for the whole room.
     </p>
   );
 }
