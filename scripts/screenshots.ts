@@ -55,20 +55,18 @@ await page.goto(`${base}/projects`);
 await page.getByRole('link', { name: 'Canal Row flat' }).click();
 await page.getByRole('button', { name: 'Copy link' }).first().click();
 await page.waitForTimeout(300);
-await page.goto(await page.evaluate(() => navigator.clipboard.readText()));
+await page.goto(await page.evaluate<string>('navigator.clipboard.readText()'));
 await page.getByRole('button', { name: 'Look at this room' }).first().click();
-await page.waitForFunction(
-  () => (document.querySelector<HTMLElement>('[data-testid=room-view]')?.dataset.models ?? '').includes('"sofa"'),
-  null,
-  { timeout: 30000 },
-);
+const clientView = page.locator('[data-testid=room-view]').first();
+for (let i = 0; i < 60 && !((await clientView.getAttribute('data-models')) ?? '').includes('"sofa"'); i++)
+  await page.waitForTimeout(500);
 await page.getByRole('button', { name: 'Turn the room left' }).click();
 await page.getByRole('button', { name: 'Turn the room left' }).click();
 // One step closer keeps the whole room in the picture.
 await page.getByRole('button', { name: 'Come closer' }).click();
 await page.waitForTimeout(2500);
 await page.mouse.move(0, 0);
-await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+await page.evaluate('document.activeElement && document.activeElement.blur()');
 await page.waitForTimeout(300);
 await shot('walk-model');
 for (const extra of (process.env.SHOTS ?? '').split(',').filter(Boolean)) {

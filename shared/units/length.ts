@@ -190,7 +190,8 @@ export interface FormatLengthOptions {
 /** Writes a number with at most `digits` decimals (exactly `digits` when `fixed`), grouped in a locale when it has one. */
 type NumberWriter = (value: number, digits: 0 | 1 | 2, fixed?: boolean) => string;
 
-const plainNumber: NumberWriter = (value, digits, fixed) => (fixed ? value.toFixed(digits) : String(Number(value.toFixed(digits))));
+const plainNumber: NumberWriter = (value, digits, fixed) =>
+  fixed ? value.toFixed(digits) : String(Number(value.toFixed(digits)));
 const groupedNumbers = new Map<string, NumberWriter>();
 function numberWriter(locale: string | undefined): NumberWriter {
   if (!locale) return plainNumber;

@@ -134,7 +134,11 @@ function PlacedModel({
   onPieceClick?: (id: string) => void;
 }) {
   const fit = useMemo(() => fitModelInBox(model.bounds, source.turnDeg, piece), [model, source.turnDeg, piece]);
-  const { copy: object, wears, owned } = useMemo(() => {
+  const {
+    copy: object,
+    wears,
+    owned,
+  } = useMemo(() => {
     const made: THREE.Material[] = [];
     const materialOf = (finish: SceneFinish | undefined, colour: string | undefined) => {
       if (finish && finish.kind === 'photo' && finishMaterials) {

@@ -61,7 +61,11 @@ export function ModelDetailPage({ id }: { id: string }) {
           )
         }
       >
-        {model.size ? formatModelSize(model.size, unit, readerLocale()) : model.status === 'processing' ? 'Being measured…' : model.fileName}
+        {model.size
+          ? formatModelSize(model.size, unit, readerLocale())
+          : model.status === 'processing'
+            ? 'Being measured…'
+            : model.fileName}
       </PageHeader>
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <Card title="Preview" className="min-w-0">

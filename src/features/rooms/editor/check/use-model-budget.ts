@@ -28,7 +28,10 @@ export function useModelBudget(
     return { placed, wearing };
   }, [pieces, models]);
   const hasModels = worn.wearing.size > 0;
-  const shellCost = useMemo(() => (hasModels ? attempt(() => shellFigures(buildShellScene(shell), shell)) : null), [shell, hasModels]);
+  const shellCost = useMemo(
+    () => (hasModels ? attempt(() => shellFigures(buildShellScene(shell), shell)) : null),
+    [shell, hasModels],
+  );
   return useMemo(() => {
     if (!shellCost || worn.wearing.size === 0) return null;
     const formed = worn.placed.filter((p) => !worn.wearing.has(p.id));
