@@ -9,12 +9,9 @@ import { isWalkedOver } from '../geometry/piece';
 import type { MeshData, ShellSceneData } from '../geometry/scene';
 import type { Piece } from '../schemas/option';
 import type { RoomShell } from '../schemas/room';
+import { MODEL_BUDGET } from '../schemas/piece-model';
 
-/**
- * The budget for a room (one option) with piece models, from the piece-models issue: on top of a
- * typical room's < 60 draw calls and ≤ 150,000 triangles, models may bring it to these.
- */
-export const MODEL_BUDGET = { drawCalls: 90, triangles: 300_000 } as const;
+export { MODEL_BUDGET };
 
 /** The client's walk-through draws its baked floor shadows in one mesh (a few triangles a piece, left out). */
 export const FLOOR_SHADOW_DRAW_CALLS = 1;

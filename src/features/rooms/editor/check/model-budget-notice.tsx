@@ -1,6 +1,7 @@
 // The Check step's word on the option's piece models: how heavy they make the client's walk-through,
 // a calm warning when they pass the budget for a room with models, a quiet line while they stay within.
-import { MODEL_BUDGET, type ModelBudget } from '../../../../../shared/analysis/model-budget';
+import type { ModelBudget } from '../../../../../shared/analysis/model-budget';
+import { MODEL_BUDGET } from '../../../../../shared/schemas/piece-model';
 import { Notice } from '../../../../components/ui/layout';
 import { formatCount } from '../../../../lib/format';
 

@@ -1,12 +1,9 @@
 // The Check step's estimate of how heavy an option's piece models make the client's walk-through:
 // the shell and the other pieces' forms as the views draw them, plus each worn ready model's stored
-// triangles and materials (shared/analysis/model-budget.ts). Nothing is built for an option
-// without models; the forms come from the forms' own cache, which the preview has filled.
-import { useMemo } from 'react';
-import { formFigures, modelBudget, shellFigures, type ModelBudget } from '../../../../../shared/analysis/model-budget';
-import type { OptionSurfaces } from '../../../../../shared/finishes/option-surfaces';
-import { buildPieceForms } from '../../../../../shared/geometry/forms/piece-forms';
-import { buildShellScene } from '../../../../../shared/geometry/scene';
+// triangles and materials (room-figures.ts, loaded on first need; shared/analysis/model-budget.ts).
+// Nothing is loaded or built for an option without models.
+import { useEffect, useMemo, useState } from 'react';
+import type { FormFinishes, ModelBudget } from '../../../../../shared/analysis/model-budget';
 import type { Piece } from '../../../../../shared/schemas/option';
 import type { PieceModel } from '../../../../../shared/schemas/piece-model';
 import type { RoomShell } from '../../../../../shared/schemas/room';
@@ -16,7 +13,7 @@ export function useModelBudget(
   shell: RoomShell,
   pieces: readonly Piece[],
   models: ReadonlyMap<string, PieceModel>,
-  finishes: Partial<Pick<OptionSurfaces, 'pieces' | 'pieceAccents'>>,
+  finishes: FormFinishes,
 ): ModelBudget | null {
   const worn = useMemo(() => {
     const placed = pieces.filter((p) => p.placed);
@@ -25,31 +22,20 @@ export function useModelBudget(
       const m = p.modelId ? models.get(p.modelId) : undefined;
       if (m && m.status === 'ready' && m.modelUrl && m.triangles !== null) wearing.set(p.id, m);
     }
-    return { placed, wearing };
+    return { formed: placed.filter((p) => !wearing.has(p.id)), wearing };
   }, [pieces, models]);
-  const hasModels = worn.wearing.size > 0;
-  const shellCost = useMemo(
-    () => (hasModels ? attempt(() => shellFigures(buildShellScene(shell), shell)) : null),
-    [shell, hasModels],
-  );
-  return useMemo(() => {
-    if (!shellCost || worn.wearing.size === 0) return null;
-    const formed = worn.placed.filter((p) => !worn.wearing.has(p.id));
-    const forms = attempt(() => formFigures(buildPieceForms(formed), formed, finishes));
-    if (!forms) return null;
-    const wornFigures = [...worn.wearing.values()].map((m) => ({ triangles: m.triangles ?? 0, materials: m.materials ?? 1 }));
-    return modelBudget(
-      { drawCalls: shellCost.drawCalls + forms.drawCalls, triangles: shellCost.triangles + forms.triangles },
-      wornFigures,
-    );
-  }, [shellCost, worn, finishes]);
-}
-
-// A shell mid-edit can break a rule the geometry relies on: no estimate then (the check says what is wrong).
-function attempt<T>(build: () => T): T | null {
-  try {
-    return build();
-  } catch {
-    return null;
-  }
+  // The last answer stays shown while a newer layout's is worked out.
+  const [budget, setBudget] = useState<ModelBudget | null>(null);
+  useEffect(() => {
+    if (worn.wearing.size === 0) return undefined;
+    let live = true;
+    const figures = [...worn.wearing.values()].map((m) => ({ triangles: m.triangles ?? 0, materials: m.materials ?? 1 }));
+    void import('./room-figures').then(({ optionModelBudget }) => {
+      if (live) setBudget(optionModelBudget(shell, worn.formed, finishes, figures));
+    });
+    return () => {
+      live = false;
+    };
+  }, [shell, worn, finishes]);
+  return worn.wearing.size > 0 ? budget : null;
 }
