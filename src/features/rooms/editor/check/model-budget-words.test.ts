@@ -1,7 +1,7 @@
 // The Check step's sentence for heavy models names only the figures over the budget, rounded as an
 // estimate, with the budget beside each (counts grouped as the reader writes them; here en).
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { heavyModelsText } from './model-budget-notice';
+import { heavyModelsText } from './model-budget-words';
 
 const budget = (triangles: number, drawCalls: number) => ({
   triangles,
