@@ -33,6 +33,12 @@ export const MODEL_LIMITS = {
   nameLength: 80,
 } as const;
 
+/**
+ * The budget for a room (one option) with piece models in the client's view, from the piece-models
+ * issue: on top of a typical room's < 60 draw calls and ≤ 150,000 triangles, models may bring it to these.
+ */
+export const MODEL_BUDGET = { drawCalls: 90, triangles: 300_000 } as const;
+
 /** A quarter-turn correction for a model that does not face +Z: 0, 90, 180 or 270 degrees about Y. */
 export const modelTurnSchema = z.union([z.literal(0), z.literal(90), z.literal(180), z.literal(270)]);
 export type ModelTurn = z.infer<typeof modelTurnSchema>;

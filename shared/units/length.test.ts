@@ -92,6 +92,19 @@ describe('formatLength', () => {
     expect(formatLength(165.5 * 25.4, 'in')).toBe(`165 1/2"`);
   });
 
+  it('groups thousands in the reader’s locale for labels, and not without one (fields read back)', () => {
+    expect(formatLength(210_000, 'mm', { locale: 'en-GB' })).toBe('210,000 mm');
+    expect(formatLength(210_000, 'mm')).toBe('210000 mm');
+    expect(formatLength(2_100_005, 'cm', { locale: 'en-US' })).toBe('210,000.5 cm');
+    expect(formatLength(1_234_000, 'm', { locale: 'en-GB' })).toBe('1,234.00 m');
+    expect(formatLength(4200, 'm', { locale: 'en-GB' })).toBe('4.20 m');
+    // German groups with a point and marks decimals with a comma (Unicode CLDR, de).
+    expect(formatLength(210_000, 'mm', { locale: 'de-DE' })).toBe('210.000 mm');
+    expect(formatLength(4200, 'm', { locale: 'de-DE' })).toBe('4,20 m');
+    expect(formatLength(1000 * 304.8 + 9.5 * 25.4, 'ftin', { locale: 'en-US' })).toBe(`1,000' 9 1/2"`);
+    expect(formatLength(1500 * 25.4, 'in', { locale: 'en-US' })).toBe(`1,500"`);
+  });
+
   it('keeps the minus sign only when something is left after rounding', () => {
     expect(formatLength(-4200, 'cm')).toBe('-420 cm');
     expect(formatLength(-9.5 * 25.4, 'ftin')).toBe(`-9 1/2"`);

@@ -180,9 +180,33 @@ export function parseLength(
 export interface FormatLengthOptions {
   /** Inch fractions for 'in' and 'ftin': 8 rounds to the nearest 1/8 in, 2 to the nearest 1/2 in. */
   inchDenominator?: 2 | 4 | 8 | 16;
+  /**
+   * For labels (never fields, which must read back): the reader's BCP 47 locale, so large figures
+   * group their thousands as the reader writes them ("210,000 mm", "210.000 mm" in German).
+   */
+  locale?: string;
 }
 
-function formatFractionalInches(steps: number, denominator: number): string {
+/** Writes a number with at most `digits` decimals (exactly `digits` when `fixed`), grouped in a locale when it has one. */
+type NumberWriter = (value: number, digits: 0 | 1 | 2, fixed?: boolean) => string;
+
+const plainNumber: NumberWriter = (value, digits, fixed) =>
+  fixed ? value.toFixed(digits) : String(Number(value.toFixed(digits)));
+const groupedNumbers = new Map<string, NumberWriter>();
+function numberWriter(locale: string | undefined): NumberWriter {
+  if (!locale) return plainNumber;
+  let writer = groupedNumbers.get(locale);
+  if (!writer) {
+    const format = (digits: number, fixed: boolean) =>
+      new Intl.NumberFormat(locale, { maximumFractionDigits: digits, minimumFractionDigits: fixed ? digits : 0 });
+    const formats = [0, 1, 2].map((digits) => [format(digits, false), format(digits, true)] as const);
+    writer = (value, digits, fixed) => formats[digits]![fixed ? 1 : 0].format(Number(value.toFixed(digits)));
+    groupedNumbers.set(locale, writer);
+  }
+  return writer;
+}
+
+function formatFractionalInches(steps: number, denominator: number, write: NumberWriter = plainNumber): string {
   const whole = Math.floor(steps / denominator);
   let numerator = steps - whole * denominator;
   let reduced = denominator;
@@ -190,39 +214,35 @@ function formatFractionalInches(steps: number, denominator: number): string {
     numerator /= 2;
     reduced /= 2;
   }
-  if (numerator === 0) return `${whole}"`;
-  return whole === 0 ? `${numerator}/${reduced}"` : `${whole} ${numerator}/${reduced}"`;
-}
-
-function trimDecimals(value: number, digits: number): string {
-  return String(Number(value.toFixed(digits)));
+  if (numerator === 0) return `${write(whole, 0)}"`;
+  return whole === 0 ? `${numerator}/${reduced}"` : `${write(whole, 0)} ${numerator}/${reduced}"`;
 }
 
 /** Writes millimetres for a person in `unit`: "420 cm", "4.20 m", "4200 mm", 13' 9 1/2", 165 1/2". */
 export function formatLength(mm: number, unit: LengthUnit = DEFAULT_LENGTH_UNIT, options: FormatLengthOptions = {}): string {
-  const text = formatMagnitude(Math.abs(mm), unit, options.inchDenominator ?? 8);
+  const text = formatMagnitude(Math.abs(mm), unit, options.inchDenominator ?? 8, numberWriter(options.locale));
   // A tiny negative value that rounds to nothing is printed without a minus sign.
   return mm < 0 && /[1-9]/.test(text) ? `-${text}` : text;
 }
 
-function formatMagnitude(magnitude: number, unit: LengthUnit, denominator: number): string {
+function formatMagnitude(magnitude: number, unit: LengthUnit, denominator: number, write: NumberWriter): string {
   switch (unit) {
     case 'mm':
-      return `${trimDecimals(magnitude, 0)} mm`;
+      return `${write(magnitude, 0)} mm`;
     case 'cm':
-      return `${trimDecimals(magnitude / 10, 1)} cm`;
+      return `${write(magnitude / 10, 1)} cm`;
     case 'm':
-      return `${(magnitude / 1000).toFixed(2)} m`;
+      return `${write(magnitude / 1000, 2, true)} m`;
     case 'in': {
       const steps = Math.round((magnitude / MM_PER_INCH) * denominator);
-      return formatFractionalInches(steps, denominator);
+      return formatFractionalInches(steps, denominator, write);
     }
     case 'ftin': {
       const steps = Math.round((magnitude / MM_PER_INCH) * denominator);
       const stepsPerFoot = 12 * denominator;
       const feet = Math.floor(steps / stepsPerFoot);
       const inches = formatFractionalInches(steps - feet * stepsPerFoot, denominator);
-      return feet === 0 ? inches : `${feet}' ${inches}`;
+      return feet === 0 ? inches : `${write(feet, 0)}' ${inches}`;
     }
   }
 }

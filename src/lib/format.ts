@@ -1,4 +1,4 @@
-// Date, date-and-time and "5 minutes ago" formats used across the designer app.
+// Date, date-and-time, "5 minutes ago" and plain counts formats used across the designer app.
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 const timeFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
 
@@ -16,4 +16,9 @@ export function formatRelative(iso: string, now = Date.now()): string {
   const d = Math.round(h / 24);
   if (d < 14) return `${d} day${d === 1 ? '' : 's'} ago`;
   return formatDate(iso);
+}
+
+/** A count with its thousands grouped as the reader (this browser's language) writes them: "340,000". */
+export function formatCount(n: number): string {
+  return n.toLocaleString(typeof navigator === 'undefined' ? undefined : navigator.language || undefined);
 }

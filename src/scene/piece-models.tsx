@@ -66,17 +66,56 @@ export function useLoadedModels(sources: ReadonlyMap<string, ModelSource> | unde
   }, [sources, byUrl]);
 }
 
-function dressedCopy(model: LoadedModel, main: THREE.Material | null, accent: THREE.Material | null): THREE.Group {
+/** What a placed model's "main" and "accent" materials wear: a colour ("#rrggbb"), "photo #rrggbb", or absent (its own). */
+export interface ModelWears {
+  main?: string;
+  accent?: string;
+}
+
+/** The `userData` key of a placed model's group: its piece id and what it wears (browser tests read it). */
+export const PLACED_MODEL_KEY = 'placedModel';
+export interface PlacedModelData {
+  pieceId: string;
+  wears: ModelWears;
+}
+
+const wornWords = (m: THREE.Material) => {
+  const standard = m as THREE.MeshStandardMaterial;
+  const hex = standard.color ? `#${standard.color.getHexString()}` : '';
+  return standard.map ? `photo ${hex}` : hex;
+};
+
+function dressedCopy(
+  model: LoadedModel,
+  main: THREE.Material | null,
+  accent: THREE.Material | null,
+): { copy: THREE.Group; wears: ModelWears } {
   const copy = model.scene.clone(true);
-  if (!main && !accent) return copy;
+  const wears: ModelWears = {};
+  if (!main && !accent) return { copy, wears };
   copy.traverse((o) => {
     const mesh = o as THREE.Mesh;
     if (!mesh.isMesh || Array.isArray(mesh.material)) return;
     const name = mesh.material.name ?? '';
-    if (main && MAIN_NAME.test(name)) mesh.material = main;
-    else if (accent && ACCENT_NAME.test(name)) mesh.material = accent;
+    if (main && MAIN_NAME.test(name)) {
+      mesh.material = main;
+      wears.main = wornWords(main);
+    } else if (accent && ACCENT_NAME.test(name)) {
+      mesh.material = accent;
+      wears.accent = wornWords(accent);
+    }
   });
-  return copy;
+  return { copy, wears };
+}
+
+/** The placed models drawn in `scene` (visible ones only), by piece id, for the view's host attribute. */
+export function shownModels(scene: THREE.Object3D): Record<string, ModelWears> {
+  const out: Record<string, ModelWears> = {};
+  scene.traverseVisible((o) => {
+    const placed = o.userData[PLACED_MODEL_KEY] as PlacedModelData | undefined;
+    if (placed) out[placed.pieceId] = placed.wears;
+  });
+  return out;
 }
 
 function PlacedModel({
@@ -95,10 +134,21 @@ function PlacedModel({
   onPieceClick?: (id: string) => void;
 }) {
   const fit = useMemo(() => fitModelInBox(model.bounds, source.turnDeg, piece), [model, source.turnDeg, piece]);
-  const [object, owned] = useMemo(() => {
+  const {
+    copy: object,
+    wears,
+    owned,
+  } = useMemo(() => {
     const made: THREE.Material[] = [];
     const materialOf = (finish: SceneFinish | undefined, colour: string | undefined) => {
-      if (finish && finish.kind === 'photo' && finishMaterials) return finishMaterials.pieceMaterial(finish);
+      if (finish && finish.kind === 'photo' && finishMaterials) {
+        // The forms' photo material takes its tint from vertex colours, which a model has not got:
+        // a copy without them (sharing the texture) keeps the photo's own colours.
+        const m = finishMaterials.pieceMaterial(finish).clone();
+        m.vertexColors = false;
+        made.push(m);
+        return m;
+      }
       const hex = finish && finish.kind === 'paint' ? finish.colourHex : colour;
       if (!hex) return null;
       const m = new THREE.MeshStandardMaterial({ color: hex, roughness: finish?.roughness ?? 0.8 });
@@ -107,9 +157,10 @@ function PlacedModel({
     };
     const main = source.wearsFinishes ? materialOf(finishes?.pieces?.[piece.id], piece.colour) : null;
     const accent = source.wearsFinishes ? materialOf(finishes?.pieceAccents?.[piece.id], piece.accentColour) : null;
-    return [dressedCopy(model, main, accent), made] as const;
+    return { ...dressedCopy(model, main, accent), owned: made };
   }, [model, source.wearsFinishes, finishes, finishMaterials, piece.id, piece.colour, piece.accentColour]);
   useEffect(() => () => owned.forEach((m) => m.dispose()), [owned]);
+  const placed = useMemo<PlacedModelData>(() => ({ pieceId: piece.id, wears }), [piece.id, wears]);
   if (!fit) return null;
   const onClick = onPieceClick
     ? (event: ThreeEvent<MouseEvent>) => {
@@ -123,6 +174,7 @@ function PlacedModel({
       rotation-y={-piece.rotation * DEG}
       onClick={onClick}
       name={`model:${piece.id}`}
+      userData={{ [PLACED_MODEL_KEY]: placed }}
     >
       <group scale={fit.scale}>
         <group rotation-y={fit.turnRad}>

@@ -1,7 +1,9 @@
 // Draws each frame of a 3D view itself and publishes the renderer's figures (draw calls, triangles,
-// live geometries and textures, frames) on the view's host element for browser tests.
+// live geometries and textures, frames) and the piece models drawn on the view's host element for
+// browser tests.
 import { useFrame } from '@react-three/fiber';
 import { useRef } from 'react';
+import { shownModels } from './piece-models';
 
 /** The performance mark set when a view has drawn its first frame (browser tests read it). */
 export const FIRST_VIEW_MARK = 'parlour:first-view';
@@ -15,7 +17,9 @@ interface RenderAndReportProps {
 /**
  * Takes over drawing (a frame callback with priority above zero) so renderer.info can be read
  * right after the frame it describes, and publishes it on the host for browser tests:
- * data-draw-calls, data-triangles, data-geometries and data-textures (live on the GPU), data-frames.
+ * data-draw-calls, data-triangles, data-geometries and data-textures (live on the GPU), data-frames,
+ * and data-models: the placed piece models drawn, as JSON by piece id with what their "main" and
+ * "accent" materials wear.
  */
 export function RenderAndReport({ host, extra }: RenderAndReportProps) {
   const frames = useRef(0);
@@ -40,6 +44,7 @@ export function RenderAndReport({ host, extra }: RenderAndReportProps) {
     element.dataset.geometries = String(gl.info.memory.geometries);
     element.dataset.textures = String(gl.info.memory.textures);
     element.dataset.frames = String(frames.current);
+    element.dataset.models = JSON.stringify(shownModels(scene));
     if (extra) Object.assign(element.dataset, extra());
   }, 1);
   return null;

@@ -12,11 +12,13 @@ import { SceneCanvas } from './scene-canvas';
 import { SceneLights } from './scene-lights';
 import { RenderAndReport } from './render-report';
 import type { SurfaceFinishes } from './finish-materials';
+import type { ModelSource } from './piece-models';
 import { useSceneResources } from './use-scene-resources';
 import { dressedPieces, surfaceMaterials, tryBuild, useStableValue, useWallFade } from './view-helpers';
 
 export type { SurfaceHit } from './room-shell';
 export type { SurfaceFinishes } from './finish-materials';
+export type { ModelSource } from './piece-models';
 
 export interface RoomViewProps {
   shell: RoomShell;
@@ -35,6 +37,8 @@ export interface RoomViewProps {
   finishes?: SurfaceFinishes;
   /** A click on the floor, the ceiling or a wall's inside face (the editor's Finishes step). */
   onSurfaceClick?: (surface: SurfaceHit) => void;
+  /** Pieces that wear a ready model, by piece id: drawn as the model once it has arrived, as the form until then or if it fails. */
+  models?: ReadonlyMap<string, ModelSource>;
 }
 
 const WEBGL_MESSAGE = '3D preview needs WebGL.';
@@ -55,6 +59,7 @@ export default function RoomView({
   label = 'Room in 3D',
   finishes,
   onSurfaceClick,
+  models,
 }: RoomViewProps) {
   const host = useRef<HTMLDivElement>(null);
   return (
@@ -74,6 +79,7 @@ export default function RoomView({
         host={host}
         finishes={finishes}
         onSurfaceClick={onSurfaceClick}
+        models={models}
       />
     </SceneCanvas>
   );
@@ -88,7 +94,11 @@ interface RoomSceneProps {
   host: React.RefObject<HTMLDivElement | null>;
   finishes?: SurfaceFinishes;
   onSurfaceClick?: (surface: SurfaceHit) => void;
+  models?: ReadonlyMap<string, ModelSource>;
 }
+
+/** No models: one map, so a view without them keeps the same props from render to render. */
+const NO_MODELS: ReadonlyMap<string, ModelSource> = new Map();
 
 function RoomScene({
   shell: shellProp,
@@ -99,10 +109,15 @@ function RoomScene({
   host,
   finishes: finishesProp,
   onSurfaceClick,
+  models: modelsProp,
 }: RoomSceneProps) {
   const shell = useStableValue(shellProp);
   const finishes = useStableValue(finishesProp ?? {});
   const pieces = useStableValue(dressedPieces(piecesProp, finishes));
+  // The editor hands a new map on every change of the option: kept while its content is the same,
+  // so the forms are not regrouped for nothing.
+  const modelEntries = useStableValue(modelsProp ? [...modelsProp] : []);
+  const models = useMemo(() => (modelEntries.length > 0 ? new Map(modelEntries) : NO_MODELS), [modelEntries]);
 
   const { invalidate, materials, finishMaterials, parts, windows } = useSceneResources(shell);
   const surfaces = useMemo(() => surfaceMaterials(finishes, finishMaterials), [finishes, finishMaterials]);
@@ -131,6 +146,8 @@ function RoomScene({
         materials={materials}
         onPieceClick={onPieceClick}
         forms={forms ? { data: forms, finishes, finishMaterials } : undefined}
+        // Models stand in for forms; drawn as plain boxes (a form failed to build) the pieces stay boxes.
+        models={forms ? models : undefined}
       />
       <OverviewControls bounds={parts.bounds} onView={updateView} />
       <RenderAndReport host={host} />

@@ -330,8 +330,9 @@ describe('models on pieces and the client link', () => {
   it('refuses to delete a model worn in a live project, naming where; once archived it can go', async () => {
     const refused = await owner.delete(`/api/piece-models/${model.id}`);
     expect([refused.status, refused.body.error.code]).toEqual([409, 'model_in_use']);
-    expect(refused.body.error.message).toContain('Mill house · Dining room');
-    expect(refused.body.wornBy).toEqual([{ projectName: 'Mill house', roomName: 'Dining room', optionName: expect.any(String) }]);
+    // The option as the designer sees it named: its letter, then its name when it has one.
+    expect(refused.body.error.message).toContain('Mill house · Dining room · Option A');
+    expect(refused.body.wornBy).toEqual([{ projectName: 'Mill house', roomName: 'Dining room', optionName: 'Option A' }]);
     expect((await owner.patch(`/api/projects/${projectId}`).send({ state: 'archived' })).status).toBe(200);
     expect((await owner.delete(`/api/piece-models/${model.id}`)).status).toBe(204);
     expect((await owner.get(`/api/piece-models/${model.id}`)).status).toBe(404);

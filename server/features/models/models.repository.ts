@@ -99,6 +99,8 @@ export interface WornBy {
   projectName: string;
   roomName: string;
   optionName: string;
+  /** The option's place in its room (0 is Option A). */
+  optionPosition: number;
 }
 
 /** The rooms and options of the studio's live (not archived) projects whose pieces wear the model. */
@@ -107,7 +109,7 @@ export async function optionsWearingModel(db: Db, studioId: string, modelId: str
     .selectFrom('options as o')
     .innerJoin('rooms as r', 'r.id', 'o.room_id')
     .innerJoin('projects as p', 'p.id', 'r.project_id')
-    .select(['p.name as projectName', 'r.name as roomName', 'o.name as optionName'])
+    .select(['p.name as projectName', 'r.name as roomName', 'o.name as optionName', 'o.position as optionPosition'])
     .where('o.studio_id', '=', studioId)
     .where('p.state', '<>', 'archived')
     .where(sql<boolean>`o.doc -> 'pieces' @> ${JSON.stringify([{ modelId }])}::jsonb`)

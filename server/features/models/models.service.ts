@@ -37,6 +37,7 @@ import {
   type PieceModelRow,
 } from './models.repository';
 import type { UploadedModel } from './models.uploads';
+import { optionLabel } from '../../../shared/schemas/room-api';
 
 /** The job queue's name for normalising a model (its kinds are in models.jobs.ts). */
 export const MODEL_JOB = 'piece-model';
@@ -279,7 +280,12 @@ export async function setThumbnail(
 export async function deleteModel(services: Pick<AppServices, 'db' | 'storage'>, studioId: string, id: string): Promise<void> {
   const row = await services.db.transaction().execute(async (trx) => {
     await rowOrThrow(trx, studioId, id);
-    const worn = await optionsWearingModel(trx, studioId, id);
+    // Options are named as the designer sees them: "Option A", "Option B · Calm".
+    const worn = (await optionsWearingModel(trx, studioId, id)).map((w) => ({
+      projectName: w.projectName,
+      roomName: w.roomName,
+      optionName: optionLabel(w.optionPosition, w.optionName),
+    }));
     if (worn.length > 0) {
       const where = worn.map((w) => `${w.projectName} · ${w.roomName} · ${w.optionName}`);
       throw new HttpError(

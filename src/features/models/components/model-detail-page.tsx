@@ -13,7 +13,8 @@ import { Card, Notice, PageHeader, Spinner } from '../../../components/ui/layout
 import { asIs, numberParser, textParser, type Parsed } from '../../../components/ui/use-commit-text';
 import { ApiError, commitAnswer, errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
-import { readUnit } from '../../../lib/length-unit';
+import { readerLocale, readUnit } from '../../../lib/length-unit';
+import { formatCount } from '../../../lib/format';
 import { useDeletePieceModel, usePieceModel, useUpdatePieceModel, type ModelWearer } from '../api/models';
 import { fixedSize, formatModelSize, UNIT_FIX } from './model-labels';
 import { ModelThumbnail } from './model-library-page';
@@ -60,7 +61,11 @@ export function ModelDetailPage({ id }: { id: string }) {
           )
         }
       >
-        {model.size ? formatModelSize(model.size, unit) : model.status === 'processing' ? 'Being measured…' : model.fileName}
+        {model.size
+          ? formatModelSize(model.size, unit, readerLocale())
+          : model.status === 'processing'
+            ? 'Being measured…'
+            : model.fileName}
       </PageHeader>
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <Card title="Preview" className="min-w-0">
@@ -72,7 +77,7 @@ export function ModelDetailPage({ id }: { id: string }) {
           )}
           {model.triangles !== null && (
             <p className="mt-3 text-sm text-ink-faint tabular-nums">
-              {model.triangles.toLocaleString('en-GB')} triangles · {model.materials} materials
+              {formatCount(model.triangles)} triangles · {model.materials} {model.materials === 1 ? 'material' : 'materials'}
             </p>
           )}
         </Card>
@@ -94,7 +99,7 @@ function ModelFields({ model, canEdit }: { model: PieceModel; canEdit: boolean }
     <div className="flex flex-col gap-4">
       {fixed && model.unitHint && (
         <Notice tone="warn">
-          Read as metres this model is {formatModelSize(model.size!, 'm')}, too large for a piece.
+          Read as metres this model is {formatModelSize(model.size!, 'm', readerLocale())}, too large for a piece.
           {canEdit && (
             <div className="mt-2">
               <Button
@@ -102,7 +107,7 @@ function ModelFields({ model, canEdit }: { model: PieceModel; canEdit: boolean }
                 busy={update.isPending}
                 onClick={() => void save({ scale: UNIT_FIX[model.unitHint!].scale }, 'scale')}
               >
-                Read as {UNIT_FIX[model.unitHint].words}: {formatModelSize(fixed, 'mm')}
+                Read as {UNIT_FIX[model.unitHint].words}: {formatModelSize(fixed, 'mm', readerLocale())}
               </Button>
             </div>
           )}
@@ -205,7 +210,7 @@ function DeleteModelDialog({ model, onClose }: { model: PieceModel; onClose: () 
         </>
       }
     >
-      <p className="text-ink-soft">Pieces that wear it go back to their drawn forms.</p>
+      {!body?.wornBy && <p className="text-ink-soft">Pieces that wear it go back to their drawn forms.</p>}
       {remove.isError && (
         <div className="mt-4 flex flex-col gap-2">
           <Notice tone="error">

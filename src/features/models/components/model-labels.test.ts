@@ -9,6 +9,12 @@ describe('model labels', () => {
     expect(formatModelSize(size, 'cm')).toBe('45 × 50 × 90 cm');
     expect(formatModelSize(size, 'in')).toContain('×');
   });
+  it('groups the thousands of a large size in the reader’s locale', () => {
+    const sofaReadAsMetres = { widthMm: 210_000, depthMm: 90_000, heightMm: 85_000 };
+    expect(formatModelSize(sofaReadAsMetres, 'mm', 'en-GB')).toBe('210,000 × 90,000 × 85,000 mm');
+    expect(formatModelSize(sofaReadAsMetres, 'm', 'en-GB')).toBe('210.00 × 90.00 × 85.00 m');
+    expect(formatModelSize({ widthMm: 2100, depthMm: 900, heightMm: 850 }, 'mm', 'en-GB')).toBe('2,100 × 900 × 850 mm');
+  });
   it('says storage in KB, MB or GB', () => {
     expect(formatStorage(312 * 1024 * 1024)).toBe('312 MB');
     expect(formatStorage(2 * 1024 * 1024 * 1024)).toBe('2 GB');

@@ -7,9 +7,9 @@ const KB = 1024;
 const MB = KB * 1024;
 const GB = MB * 1024;
 
-/** "45 × 50 × 90 cm": width × depth × height, the unit said once at the end. */
-export function formatModelSize(size: ModelSize, unit: LengthUnit): string {
-  const parts = [size.widthMm, size.depthMm, size.heightMm].map((mm) => formatLength(mm, unit));
+/** "45 × 50 × 90 cm": width × depth × height, the unit said once at the end, thousands grouped in `locale` ("2,100 × 900 × 850 mm"). */
+export function formatModelSize(size: ModelSize, unit: LengthUnit, locale?: string): string {
+  const parts = [size.widthMm, size.depthMm, size.heightMm].map((mm) => formatLength(mm, unit, { locale }));
   const suffix = / (mm|cm|m)$/.exec(parts[2])?.[0] ?? '';
   return suffix ? `${parts.map((p) => p.slice(0, p.length - suffix.length)).join(' × ')}${suffix}` : parts.join(' × ');
 }

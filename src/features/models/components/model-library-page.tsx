@@ -4,7 +4,7 @@ import { Link } from 'react-router';
 import { EmptyState, Notice, PageHeader, Spinner } from '../../../components/ui/layout';
 import { errorMessage } from '../../../lib/api';
 import { useCanEdit } from '../../../lib/session';
-import { readUnit } from '../../../lib/length-unit';
+import { readerLocale, readUnit } from '../../../lib/length-unit';
 import { usePieceModels, type PieceModel } from '../api/models';
 import { formatModelSize, formatStorage } from './model-labels';
 import { ModelUpload } from './model-upload';
@@ -76,7 +76,7 @@ function ModelCard({ model }: { model: PieceModel }) {
           {model.name}
         </div>
         {model.status === 'ready' && model.size && (
-          <div className="text-sm text-ink-soft tabular-nums">{formatModelSize(model.size, readUnit())}</div>
+          <div className="text-sm text-ink-soft tabular-nums">{formatModelSize(model.size, readUnit(), readerLocale())}</div>
         )}
         {model.status === 'processing' && <div className="text-sm text-ochre">Processing</div>}
         {model.status === 'failed' && (

@@ -26,10 +26,12 @@ import { useRoom, type RoomDetail } from '../api/rooms';
 import { formatLength } from '../../../../shared/units/length';
 import { CheckPanel } from './check/check-panel';
 import { useFitCheck } from './check/use-fit-check';
+import { useModelBudget } from './check/use-model-budget';
 import { useSeenMarks } from './check/use-seen-marks';
 import { FindingsBadge } from './check/findings-badge';
 import { FinishesPanel, targetOf } from './finishes-panel';
 import { sceneFinishesFor } from './scene-finishes';
+import { sceneModelsFor } from './scene-models';
 import type { Finish } from '../../../../shared/schemas/finish';
 import { FurnishPanel } from './furnish-panel';
 import type { PieceModel } from '../../../../shared/schemas/piece-model';
@@ -171,6 +173,9 @@ function Editor({
   const flaggedPieceIds = step === 'check' ? [...new Set(seenMarks.open.flatMap((f) => f.finding.pieces))] : [];
   const finishIndex = useMemo(() => new Map(finishes.map((f) => [f.id, f])), [finishes]);
   const sceneFinishes = useMemo(() => sceneFinishesFor(option, finishIndex), [option, finishIndex]);
+  const modelIndex = useMemo(() => new Map(models.map((m) => [m.id, m])), [models]);
+  const sceneModels = useMemo(() => sceneModelsFor(pieces, modelIndex), [pieces, modelIndex]);
+  const modelBudget = useModelBudget(editor.doc.shell, step === 'check' ? pieces : NO_PIECES, modelIndex, sceneFinishes);
   const select = useCallback((s: Selection) => {
     setSelection(s);
     const t = targetOf(s);
@@ -310,6 +315,7 @@ function Editor({
             onMark={seenMarks.onMark}
             onUnmark={seenMarks.onUnmark}
             readOnly={optionReadOnly}
+            modelBudget={modelBudget}
           />
         );
     }
@@ -336,6 +342,7 @@ function Editor({
     finishTarget,
     select,
     models,
+    modelBudget,
   ]);
 
   const startSplitDrag = (e: React.PointerEvent) => {
@@ -644,6 +651,7 @@ function Editor({
                     selectedPieceId={selection?.kind === 'piece' ? selection.id : null}
                     onPieceClick={(id) => select({ kind: 'piece', id })}
                     finishes={sceneFinishes}
+                    models={sceneModels}
                     onSurfaceClick={
                       step === 'finishes'
                         ? (hit) => {

@@ -7,10 +7,14 @@ import type { PieceModel } from '../../../../shared/schemas/piece-model';
 import { resizePiece, updatePiece, type Command } from '../../../../shared/commands';
 import { formatLength, type LengthUnit } from '../../../../shared/units/length';
 import { Button } from '../../../components/ui/button';
+import { readerLocale } from '../../../lib/length-unit';
 import { sizeDiffers } from './piece-model-size';
 
-const sizeWords = (w: number, d: number, h: number, unit: LengthUnit) =>
-  `${formatLength(w, unit)} × ${formatLength(d, unit)} × ${formatLength(h, unit)}`;
+/** "2,100 mm × 900 mm × 850 mm": a label's size, its thousands grouped as the reader writes them. */
+const sizeWords = (w: number, d: number, h: number, unit: LengthUnit) => {
+  const locale = readerLocale();
+  return [w, d, h].map((mm) => formatLength(mm, unit, { locale })).join(' × ');
+};
 
 export function PieceModelField({
   piece,

@@ -1,5 +1,6 @@
 // The room editor's Check step: the walkway width setting, the fit check findings (pick one to highlight
-// its pieces; open ones first, then those marked as seen), reminders for tall pieces, and the room's take-off.
+// its pieces; open ones first, then those marked as seen), a word on how heavy the option's piece
+// models are for the client's view, reminders for tall pieces, and the room's take-off.
 import { MAX_WALKWAY_MM, MIN_WALKWAY_MM } from '../../../../../shared/analysis/fit/clearances';
 import type { Finding } from '../../../../../shared/analysis/fit/finding';
 import { sortBySeen } from '../../../../../shared/analysis/seen-findings';
@@ -11,6 +12,8 @@ import { Notice, Spinner } from '../../../../components/ui/layout';
 import { TakeoffTable } from '../../components/takeoff-table';
 import { TALL_PIECE_MM } from '../furnish-panel';
 import { FindingItem, type MarkAnswer } from './finding-item';
+import { ModelBudgetNotice } from './model-budget-notice';
+import type { ModelBudget } from '../../../../../shared/analysis/model-budget';
 import type { FitResult } from './use-fit-check';
 
 const KIND_TITLE: Record<Finding['kind'], string> = {
@@ -45,6 +48,7 @@ export function CheckPanel({
   onMark,
   onUnmark,
   readOnly,
+  modelBudget = null,
 }: {
   shell: RoomShell;
   pieces: Piece[];
@@ -61,10 +65,14 @@ export function CheckPanel({
   onUnmark: (key: string) => void;
   /** Whether marks may be changed (not while viewing, nor on a decided option). */
   readOnly: boolean;
+  /** How heavy the option's piece models make the client's view; null without models. */
+  modelBudget?: ModelBudget | null;
 }) {
   const tall = pieces.filter((p) => p.placed && p.height >= TALL_PIECE_MM);
   return (
     <div className="flex flex-col gap-5">
+      {/* About the whole option, so above its findings, however many there are. */}
+      <ModelBudgetNotice budget={modelBudget} />
       <LengthField
         commit="blur"
         label="Walkway width"
