@@ -5,6 +5,8 @@ import { DESIGNER_MODULE, measureClientBundle, type ClientBundleReport } from '.
 
 /** Budget for the page before the 3D view: React, the query cache and the page itself (gzip). */
 const INITIAL_BUDGET_BYTES = 140 * 1024;
+/** Budget with the 3D view, for a page whose options wear no model (the forms issue's figure, gzip). */
+const WITH_VIEW_BUDGET_BYTES = 384 * 1024;
 
 let report: ClientBundleReport;
 beforeAll(async () => {
@@ -28,6 +30,13 @@ describe('the client page bundle', () => {
     expect(report.initialModules.some((m) => m.includes('node_modules/three/'))).toBe(false);
     expect(report.initialGzipBytes).toBeLessThan(INITIAL_BUDGET_BYTES);
     expect(report.initialGzipBytes).toBeLessThan(report.appInitialGzipBytes);
+  });
+
+  it('stays within its budget with the 3D view, the glTF loader apart (fetched only for a piece wearing a model)', () => {
+    const loader = report.lazy.filter((c) => /GLTFLoader/.test(c.file));
+    expect(loader).toHaveLength(1);
+    const withView = report.initialGzipBytes + report.lazyGzipBytes - loader[0].gzipBytes;
+    expect(withView).toBeLessThanOrEqual(WITH_VIEW_BUDGET_BYTES);
   });
 
   it('the designer pattern does flag designer modules (so the checks above can fail)', () => {
