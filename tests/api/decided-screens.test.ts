@@ -50,8 +50,13 @@ describe('an option saved since its link was made', () => {
     const saved = await owner.put(`/api/options/${second.id}`).send({ note: 'Now with a darker rug.', version: second.version });
     expect(saved.status).toBe(200);
 
-    const after = await request(t.app).get(`/api/p/${p.token}`);
-    const [a, b] = after.body.presentation.rooms[0].options as { id: string; version: number; sentVersion: number }[];
+    // The link's kept answer is dropped by the database's change notice, which may take a moment on
+    // a loaded machine: open until the save shows (or the wait runs out and the checks below fail).
+    type Shown = { id: string; version: number; sentVersion: number };
+    const shownNow = async () => (await request(t.app).get(`/api/p/${p.token}`)).body.presentation.rooms[0].options as Shown[];
+    let [a, b] = await shownNow();
+    for (const until = Date.now() + 5000; b.version === b.sentVersion && Date.now() < until; [a, b] = await shownNow())
+      await new Promise((r) => setTimeout(r, 25));
     expect(a.version).toBe(a.sentVersion);
     expect(b.id).toBe(second.id);
     expect(b.version).toBe(b.sentVersion + 1);
