@@ -9,13 +9,15 @@ import {
   hypot2,
   isDisc,
   legOutlineInto,
+  legSides,
   MM,
   OUTLINE_NORMALS,
   OUTLINE_POINTS,
   roundedOutlineInto,
+  roundedPoints,
   SlotWriter,
 } from './slot-writer';
-import { BOX_FACES, writeBoxStaged, writeExtrusionStaged } from './staged-parts';
+import { BOX_FACES, writeBoxStaged, writeExtrusionStaged, writePartStaged } from './staged-parts';
 
 /**
  * Numbers this writer takes (mm, either side of zero): products of two stay finite, so every
@@ -41,25 +43,26 @@ function ordinaryPart(part: Part): boolean {
   );
 }
 
+/** A slot writer over fresh buffers for `vertices` vertices and `indices` triangle corners, placed unturned at the origin. */
+function scratchWriter(vertices: number, indices: number): SlotWriter {
+  const w = new SlotWriter();
+  const mesh = {
+    positions: new Float32Array(3 * vertices),
+    normals: new Float32Array(3 * vertices),
+    uvs: new Float32Array(2 * vertices),
+    indices: new Uint32Array(indices),
+  };
+  w.begin(mesh, 0, 0, 0, [1, 0]);
+  return w;
+}
+
 /**
  * The triangle corners of a box of positive size, relative to its first vertex: the staged
  * writer's own for a unit box. Every facing test on a box's face is a product of two of its sides
  * (the other terms are zeros), so any box of positive sides winds the same.
  */
 const BOX_INDICES = (() => {
-  const w = new SlotWriter();
-  w.begin(
-    {
-      positions: new Float32Array(72),
-      normals: new Float32Array(72),
-      uvs: new Float32Array(48),
-      indices: new Uint32Array(36),
-    },
-    0,
-    0,
-    0,
-    [1, 0],
-  );
+  const w = scratchWriter(24, 36);
   writeBoxStaged(w, { shape: 'box', x: 0, y: 0, z: 0, w: 1, d: 1, h: 1, slot: 'main', role: 'body' });
   return w.indices;
 })();
@@ -104,10 +107,8 @@ function boxNormals(w: SlotWriter): Float32Array {
   return D;
 }
 
-// Extrusion normal blocks by outline: rounded corners, disc and each leg's number of sides.
+// Extrusion normal blocks by outline (outlineKey).
 const EXTRUSION_NORMALS = new Map<number, NormalBlock>();
-const DISC_KEY = 1000;
-const LEG_KEY = 2000;
 
 /**
  * The placed normals of an upright prism round the scratch outline's `n` points (its sides' smooth
@@ -259,7 +260,7 @@ function writeBox(w: SlotWriter, part: Part): void {
     z0 = part.z,
     z1 = part.z + part.h;
   if (!(ordinaryPart(part) && x1 - x0 >= THINNEST_BOX_MM && y1 - y0 >= THINNEST_BOX_MM && z1 - z0 >= THINNEST_BOX_MM)) {
-    writeBoxStaged(w, part);
+    writePartStaged(w, part);
     return;
   }
   const cx = w.cx,
@@ -311,23 +312,101 @@ function writeBox(w: SlotWriter, part: Part): void {
 }
 
 /**
+ * A rounded part, disc or leg the direct writer takes: numbers in range, a height, and every side
+ * of its outline long against where it stands (its radius; its straight runs, or none at all as a
+ * rounded end's; a leg's foot), so that each side triangle faces the way the same triangle of any
+ * other such part faces.
+ */
+function wellShaped(part: Part): boolean {
+  if (!ordinaryPart(part) || !(part.h >= THINNEST_BOX_MM)) return false;
+  const least = SHORTEST_SIDE * (Math.abs(part.x) + Math.abs(part.y) + Math.abs(part.w) + Math.abs(part.d) + 1);
+  if (part.shape === 'leg') {
+    const taper = part.taper ?? 1;
+    return taper >= LEAST_TAPER && taper <= 1 / LEAST_TAPER && part.w * Math.min(taper, 1) >= least;
+  }
+  const r = part.radius ?? 0;
+  if (!(r >= least)) return false;
+  if (isDisc(part)) return true;
+  const hx = part.w / 2 - r,
+    hy = part.d / 2 - r;
+  return (hx === 0 || hx >= least) && (hy === 0 || hy >= least) && hx + hy > 0;
+}
+
+/** A side of an outline shorter than this share of where it stands (mm) goes to the staged writer. */
+const SHORTEST_SIDE = 1e-6;
+/** A leg's foot narrower or wider than this share of its top goes to the staged writer. */
+const LEAST_TAPER = 1e-3;
+
+// Outlines, for their patterns and normal blocks: rounded corners (by points), rounded ends with
+// no straight run across x or across y, discs and legs (by sides).
+const END_X_KEY = 1000;
+const END_Y_KEY = 2000;
+const DISC_KEY = 3000;
+const LEG_KEY = 4000;
+
+function outlineKey(part: Part, n: number): number {
+  if (part.shape === 'leg') return LEG_KEY + n;
+  if (isDisc(part)) return DISC_KEY + n;
+  const r = part.radius ?? 0;
+  return part.w / 2 - r === 0 ? END_X_KEY + n : part.d / 2 - r === 0 ? END_Y_KEY + n : n;
+}
+
+/**
+ * How a well-shaped prism round `n` points winds its side quads, relative to its first vertex,
+ * by outline (`key`): the staged writer's own for a reference part of that outline. Each side
+ * triangle's facing test is its height times the turn from an edge along the outline (the foot's
+ * or the top's) to the side's normal: the same sign on any well-shaped part of that outline, and
+ * exactly zero on the no-length runs of a rounded end, whose corners coincide wherever it stands.
+ */
+const SIDE_PATTERNS = new Map<number, Uint32Array>();
+
+function sidePattern(key: number, part: Part, n: number): Uint32Array {
+  let pattern = SIDE_PATTERNS.get(key);
+  if (!pattern) {
+    const r = part.radius ?? 0;
+    const reference: Part =
+      part.shape === 'leg'
+        ? { shape: 'leg', x: 0, y: 0, z: 0, w: part.w, d: part.w, h: 1, slot: 'main', role: 'leg', taper: 1 }
+        : {
+            shape: 'rounded',
+            x: 0,
+            y: 0,
+            z: 0,
+            w: isDisc(part) ? 2 : part.w / 2 - r === 0 ? 1 : 2,
+            d: isDisc(part) ? 2 : part.d / 2 - r === 0 ? 1 : 2,
+            h: 1,
+            slot: 'main',
+            role: 'body',
+            radius: isDisc(part) ? 1 : 0.5,
+          };
+    const points = reference.shape === 'leg' ? legOutlineInto(reference) : roundedOutlineInto(reference);
+    if (points !== n) throw new Error(`a reference outline of ${points} points for one of ${n}`);
+    const w = scratchWriter(6 * n, 12 * n - 12);
+    writeExtrusionStaged(w, n, 0, 1, 1, 0, 0);
+    pattern = w.indices.slice(0, 6 * n);
+    SIDE_PATTERNS.set(key, pattern);
+  }
+  return pattern;
+}
+
+/**
  * The scratch outline's `n` points as an upright prism from z0 to z1: side quads (foot i, foot j,
  * top j, top i), the top and the underside, the underside being the outline scaled by `scale`
- * about (ccx, ccy). Each triangle is wound by the staged writer's facing test with its zero terms
- * left out (a side's edges along the foot have no height, a cap's none at all).
+ * about (ccx, ccy). The sides are wound by `pattern`, the caps' fans from their first corner by
+ * the staged writer's facing test, which for a flat cap is the turn between the fan's two edges.
  */
 function writeExtrusion(
   w: SlotWriter,
   n: number,
-  key: number,
+  normals: Float32Array,
+  pattern: Uint32Array,
   z0: number,
   z1: number,
   scale: number,
   ccx: number,
   ccy: number,
 ): void {
-  const O = OUTLINE_POINTS,
-    ON = OUTLINE_NORMALS;
+  const O = OUTLINE_POINTS;
   const P = w.positions,
     T = w.uvs,
     I = w.indices;
@@ -338,8 +417,7 @@ function writeExtrusion(
     b0 = w.b0,
     b1 = w.b1;
   const first = w.count;
-  w.normals.set(extrusionNormals(w, key, n), 3 * first);
-  const dz = z1 - z0;
+  w.normals.set(normals, 3 * first);
   const v0 = z0 * MM,
     v1 = z1 * MM;
   const Y0 = (w.elevation + Math.fround(z0)) * MM,
@@ -349,60 +427,30 @@ function writeExtrusion(
   const sides = w.indexCount,
     topFan = sides + 6 * n,
     bottomFan = topFan + 3 * (n - 2);
-  // Point i (carried from the last step): top (p) and foot (q) in the piece frame, normal, placed top and foot.
+  // Point i is carried from the last step: its top (p) and foot (q) in the piece frame, and both placed.
   const p0x = O[0]!,
     p0y = O[1]!;
   const q0x = ccx + (p0x - ccx) * scale,
     q0y = ccy + (p0y - ccy) * scale;
+  let sx = Math.fround(p0x),
+    sy = Math.fround(p0y);
+  const TX0 = (cx + sx * a0 + sy * b0) * MM,
+    TZ0 = (cy + sx * a1 + sy * b1) * MM;
+  sx = Math.fround(q0x);
+  sy = Math.fround(q0y);
+  const BX0 = (cx + sx * a0 + sy * b0) * MM,
+    BZ0 = (cy + sx * a1 + sy * b1) * MM;
   let pix = p0x,
     piy = p0y,
     qix = q0x,
     qiy = q0y,
-    nix = ON[0]!,
-    niy = ON[1]!;
-  let sx = Math.fround(pix),
-    sy = Math.fround(piy);
-  const TX0 = (cx + sx * a0 + sy * b0) * MM,
-    TZ0 = (cy + sx * a1 + sy * b1) * MM;
-  sx = Math.fround(qix);
-  sy = Math.fround(qiy);
-  const BX0 = (cx + sx * a0 + sy * b0) * MM,
-    BZ0 = (cy + sx * a1 + sy * b1) * MM;
-  let TXi = TX0,
+    TXi = TX0,
     TZi = TZ0,
     BXi = BX0,
     BZi = BZ0;
   let u = 0;
   for (let i = 0; i < n; i++) {
-    let pjx = p0x,
-      pjy = p0y,
-      qjx = q0x,
-      qjy = q0y,
-      TXj = TX0,
-      TZj = TZ0,
-      BXj = BX0,
-      BZj = BZ0;
-    const j = i + 1 < n ? i + 1 : 0;
-    if (j > 0) {
-      pjx = O[2 * j]!;
-      pjy = O[2 * j + 1]!;
-      qjx = ccx + (pjx - ccx) * scale;
-      qjy = ccy + (pjy - ccy) * scale;
-      sx = Math.fround(pjx);
-      sy = Math.fround(pjy);
-      TXj = (cx + sx * a0 + sy * b0) * MM;
-      TZj = (cy + sx * a1 + sy * b1) * MM;
-      sx = Math.fround(qjx);
-      sy = Math.fround(qjy);
-      BXj = (cx + sx * a0 + sy * b0) * MM;
-      BZj = (cy + sx * a1 + sy * b1) * MM;
-    }
-    const njx = ON[2 * j]!,
-      njy = ON[2 * j + 1]!;
-    const step = hypot2(pjx - pix, pjy - piy);
-    const base = first + 4 * i;
-    side(P, T, 3 * base, 2 * base, BXi, BZi, BXj, BZj, TXj, TZj, TXi, TZi, Y0, Y1, u * MM, (u + step) * MM, v0, v1);
-    // The same two points as the top's and the underside's corner i.
+    // The top's and the underside's corner i.
     let k = 3 * (top + i);
     P[k] = TXi;
     P[k + 1] = Y1;
@@ -415,63 +463,78 @@ function writeExtrusion(
     P[k + 2] = BZi;
     T[2 * (bottom + i)] = qix * MM;
     T[2 * (bottom + i) + 1] = qiy * MM;
-    // The side quad's two triangles, facing the mean of its corners' normals.
-    const fx = (nix + njx) / 2,
-      fy = (niy + njy) / 2;
-    const e1x = qjx - qix,
-      e1y = qjy - qiy,
-      ex = pjx - qix,
-      ey = pjy - qiy,
-      e2x = pix - qix,
-      e2y = piy - qiy;
-    const first1 = (e1y * dz - 0 * ey) * fx + (0 * ex - e1x * dz) * fy;
-    const second = (ey * dz - dz * e2y) * fx + (dz * e2x - ex * dz) * fy;
-    let c = sides + 6 * i;
-    I[c] = base;
-    I[c + 1] = first1 >= 0 ? base + 2 : base + 1;
-    I[c + 2] = first1 >= 0 ? base + 1 : base + 2;
-    I[c + 3] = base;
-    I[c + 4] = second >= 0 ? base + 3 : base + 2;
-    I[c + 5] = second >= 0 ? base + 2 : base + 3;
-    // The caps' fans from corner 0: the triangle (0, i, j).
-    if (i >= 1 && j > 0) {
-      const upward = (pix - p0x) * (pjy - p0y) - (piy - p0y) * (pjx - p0x);
-      c = topFan + 3 * (i - 1);
-      I[c] = top;
-      I[c + 1] = upward >= 0 ? top + i + 1 : top + i;
-      I[c + 2] = upward >= 0 ? top + i : top + i + 1;
-      const downward = (qix - q0x) * (qjy - q0y) - (qiy - q0y) * (qjx - q0x);
-      c = bottomFan + 3 * (i - 1);
-      I[c] = bottom;
-      I[c + 1] = -downward >= 0 ? bottom + i + 1 : bottom + i;
-      I[c + 2] = -downward >= 0 ? bottom + i : bottom + i + 1;
+    let pjx = p0x,
+      pjy = p0y,
+      qjx = q0x,
+      qjy = q0y,
+      TXj = TX0,
+      TZj = TZ0,
+      BXj = BX0,
+      BZj = BZ0;
+    if (i + 1 < n) {
+      pjx = O[2 * i + 2]!;
+      pjy = O[2 * i + 3]!;
+      qjx = ccx + (pjx - ccx) * scale;
+      qjy = ccy + (pjy - ccy) * scale;
+      sx = Math.fround(pjx);
+      sy = Math.fround(pjy);
+      TXj = (cx + sx * a0 + sy * b0) * MM;
+      TZj = (cy + sx * a1 + sy * b1) * MM;
+      sx = Math.fround(qjx);
+      sy = Math.fround(qjy);
+      BXj = (cx + sx * a0 + sy * b0) * MM;
+      BZj = (cy + sx * a1 + sy * b1) * MM;
+      // The caps' fan triangle (0, i, j), the top facing up and the underside down.
+      if (i > 0) {
+        const up = (pix - p0x) * (pjy - p0y) - (piy - p0y) * (pjx - p0x);
+        let c = topFan + 3 * (i - 1);
+        I[c] = top;
+        I[c + 1] = up >= 0 ? top + i + 1 : top + i;
+        I[c + 2] = up >= 0 ? top + i : top + i + 1;
+        const down = -((qix - q0x) * (qjy - q0y) - (qiy - q0y) * (qjx - q0x));
+        c = bottomFan + 3 * (i - 1);
+        I[c] = bottom;
+        I[c + 1] = down >= 0 ? bottom + i + 1 : bottom + i;
+        I[c + 2] = down >= 0 ? bottom + i : bottom + i + 1;
+      }
     }
+    const step = hypot2(pjx - pix, pjy - piy);
+    const base = first + 4 * i;
+    side(P, T, 3 * base, 2 * base, BXi, BZi, BXj, BZj, TXj, TZj, TXi, TZi, Y0, Y1, u * MM, (u + step) * MM, v0, v1);
     u += step;
     pix = pjx;
     piy = pjy;
     qix = qjx;
     qiy = qjy;
-    nix = njx;
-    niy = njy;
     TXi = TXj;
     TZi = TZj;
     BXi = BXj;
     BZi = BZj;
   }
+  for (let k = 0; k < 6 * n; k++) I[sides + k] = first + pattern[k]!;
   w.count = first + 6 * n;
   w.indexCount = sides + 12 * n - 12;
 }
 
 /** Writes one part into its slot's writer. */
 export function writePart(w: SlotWriter, part: Part): void {
-  if (part.shape === 'rounded') {
-    const n = roundedOutlineInto(part);
-    if (ordinaryPart(part)) writeExtrusion(w, n, isDisc(part) ? DISC_KEY + n : n, part.z, part.z + part.h, 1, 0, 0);
-    else writeExtrusionStaged(w, n, part.z, part.z + part.h, 1, 0, 0);
-  } else if (part.shape === 'leg') {
-    const n = legOutlineInto(part);
-    const taper = part.taper ?? 1;
-    if (ordinaryPart(part)) writeExtrusion(w, n, LEG_KEY + n, part.z, part.z + part.h, taper, part.x, part.y);
-    else writeExtrusionStaged(w, n, part.z, part.z + part.h, taper, part.x, part.y);
-  } else writeBox(w, part);
+  if (part.shape === 'box' || part.shape === 'panel') {
+    writeBox(w, part);
+    return;
+  }
+  if (!wellShaped(part)) {
+    writePartStaged(w, part);
+    return;
+  }
+  const leg = part.shape === 'leg';
+  const scale = leg ? (part.taper ?? 1) : 1,
+    ccx = leg ? part.x : 0,
+    ccy = leg ? part.y : 0;
+  const n = leg ? legSides(part) : roundedPoints(part);
+  const key = outlineKey(part, n);
+  // The pattern first: working it out the first time fills the scratch outline with its reference part's.
+  const pattern = sidePattern(key, part, n);
+  if (leg) legOutlineInto(part);
+  else roundedOutlineInto(part);
+  writeExtrusion(w, n, extrusionNormals(w, key, n), pattern, part.z, part.z + part.h, scale, ccx, ccy);
 }

@@ -3,7 +3,16 @@
 // the same numbers with less work; this one stays for the parts whose numbers it does not take
 // (a box of no size, numbers out of range) and as the reference its tests hold it to.
 import type { Part } from './parts';
-import { DISC_SEGMENTS, hypot2, MM, OUTLINE_NORMALS, OUTLINE_POINTS, type SlotWriter } from './slot-writer';
+import {
+  DISC_SEGMENTS,
+  hypot2,
+  legOutlineInto,
+  MM,
+  OUTLINE_NORMALS,
+  OUTLINE_POINTS,
+  roundedOutlineInto,
+  type SlotWriter,
+} from './slot-writer';
 
 /** A part has at most this many vertices (a disc's prism: 20 side quads and two caps) and polygons. */
 const MAX_PART_VERTICES = 6 * 4 * DISC_SEGMENTS;
@@ -261,4 +270,12 @@ export function writeExtrusionStaged(
   F[4 * n + 6] = 0;
   F[4 * n + 7] = -1;
   emit(w, 6 * n, n + 2);
+}
+
+/** Writes one part into its slot's writer through the staged writer. */
+export function writePartStaged(w: SlotWriter, part: Part): void {
+  if (part.shape === 'rounded') writeExtrusionStaged(w, roundedOutlineInto(part), part.z, part.z + part.h, 1, 0, 0);
+  else if (part.shape === 'leg')
+    writeExtrusionStaged(w, legOutlineInto(part), part.z, part.z + part.h, part.taper ?? 1, part.x, part.y);
+  else writeBoxStaged(w, part);
 }
