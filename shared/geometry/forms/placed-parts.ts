@@ -9,15 +9,13 @@ import {
   hypot2,
   isDisc,
   legOutlineInto,
-  legSides,
   MM,
   OUTLINE_NORMALS,
   OUTLINE_POINTS,
   roundedOutlineInto,
-  roundedPoints,
   SlotWriter,
 } from './slot-writer';
-import { BOX_FACES, writeBoxStaged, writeExtrusionStaged, writePartStaged } from './staged-parts';
+import { BOX_FACES, writeBoxStaged, writePartStaged } from './staged-parts';
 
 /**
  * Numbers this writer takes (mm, either side of zero): products of two stay finite, so every
@@ -107,7 +105,7 @@ function boxNormals(w: SlotWriter): Float32Array {
   return D;
 }
 
-// Extrusion normal blocks by outline (outlineKey).
+// Extrusion normal blocks by outline (see DISC_KEY).
 const EXTRUSION_NORMALS = new Map<number, NormalBlock>();
 
 /**
@@ -337,69 +335,24 @@ const SHORTEST_SIDE = 1e-6;
 /** A leg's foot narrower or wider than this share of its top goes to the staged writer. */
 const LEAST_TAPER = 1e-3;
 
-// Outlines, for their patterns and normal blocks: rounded corners (by points), rounded ends with
-// no straight run across x or across y, discs and legs (by sides).
-const END_X_KEY = 1000;
-const END_Y_KEY = 2000;
-const DISC_KEY = 3000;
-const LEG_KEY = 4000;
-
-function outlineKey(part: Part, n: number): number {
-  if (part.shape === 'leg') return LEG_KEY + n;
-  if (isDisc(part)) return DISC_KEY + n;
-  const r = part.radius ?? 0;
-  return part.w / 2 - r === 0 ? END_X_KEY + n : part.d / 2 - r === 0 ? END_Y_KEY + n : n;
-}
-
-/**
- * How a well-shaped prism round `n` points winds its side quads, relative to its first vertex,
- * by outline (`key`): the staged writer's own for a reference part of that outline. Each side
- * triangle's facing test is its height times the turn from an edge along the outline (the foot's
- * or the top's) to the side's normal: the same sign on any well-shaped part of that outline, and
- * exactly zero on the no-length runs of a rounded end, whose corners coincide wherever it stands.
- */
-const SIDE_PATTERNS = new Map<number, Uint32Array>();
-
-function sidePattern(key: number, part: Part, n: number): Uint32Array {
-  let pattern = SIDE_PATTERNS.get(key);
-  if (!pattern) {
-    const r = part.radius ?? 0;
-    const reference: Part =
-      part.shape === 'leg'
-        ? { shape: 'leg', x: 0, y: 0, z: 0, w: part.w, d: part.w, h: 1, slot: 'main', role: 'leg', taper: 1 }
-        : {
-            shape: 'rounded',
-            x: 0,
-            y: 0,
-            z: 0,
-            w: isDisc(part) ? 2 : part.w / 2 - r === 0 ? 1 : 2,
-            d: isDisc(part) ? 2 : part.d / 2 - r === 0 ? 1 : 2,
-            h: 1,
-            slot: 'main',
-            role: 'body',
-            radius: isDisc(part) ? 1 : 0.5,
-          };
-    const points = reference.shape === 'leg' ? legOutlineInto(reference) : roundedOutlineInto(reference);
-    if (points !== n) throw new Error(`a reference outline of ${points} points for one of ${n}`);
-    const w = scratchWriter(6 * n, 12 * n - 12);
-    writeExtrusionStaged(w, n, 0, 1, 1, 0, 0);
-    pattern = w.indices.slice(0, 6 * n);
-    SIDE_PATTERNS.set(key, pattern);
-  }
-  return pattern;
-}
+// Outlines, for their normal blocks: rounded corners (by points), discs and legs (by sides).
+const DISC_KEY = 1000;
+const LEG_KEY = 2000;
 
 /**
  * The scratch outline's `n` points as an upright prism from z0 to z1: side quads (foot i, foot j,
  * top j, top i), the top and the underside, the underside being the outline scaled by `scale`
- * about (ccx, ccy). The sides are wound by `pattern`, the caps' fans from their first corner by
- * the staged writer's facing test, which for a flat cap is the turn between the fan's two edges.
+ * about (ccx, ccy). Every side quad winds the same way: the staged writer's facing test on each
+ * of its triangles is the height times the turn from an edge along the outline (the foot's or the
+ * top's) to the side's outward normal, which on a well-shaped part is more than zero, or exactly
+ * zero on the no-length runs of a rounded end (whose corners coincide), and zero takes the same
+ * way. The caps' fans from their first corner are wound by that test, which for a flat cap is the
+ * turn between the fan's two edges.
  */
 function writeExtrusion(
   w: SlotWriter,
   n: number,
   normals: Float32Array,
-  pattern: Uint32Array,
   z0: number,
   z1: number,
   scale: number,
@@ -487,19 +440,26 @@ function writeExtrusion(
       // The caps' fan triangle (0, i, j), the top facing up and the underside down.
       if (i > 0) {
         const up = (pix - p0x) * (pjy - p0y) - (piy - p0y) * (pjx - p0x);
-        let c = topFan + 3 * (i - 1);
-        I[c] = top;
-        I[c + 1] = up >= 0 ? top + i + 1 : top + i;
-        I[c + 2] = up >= 0 ? top + i : top + i + 1;
+        let f = topFan + 3 * (i - 1);
+        I[f] = top;
+        I[f + 1] = up >= 0 ? top + i + 1 : top + i;
+        I[f + 2] = up >= 0 ? top + i : top + i + 1;
         const down = -((qix - q0x) * (qjy - q0y) - (qiy - q0y) * (qjx - q0x));
-        c = bottomFan + 3 * (i - 1);
-        I[c] = bottom;
-        I[c + 1] = down >= 0 ? bottom + i + 1 : bottom + i;
-        I[c + 2] = down >= 0 ? bottom + i : bottom + i + 1;
+        f = bottomFan + 3 * (i - 1);
+        I[f] = bottom;
+        I[f + 1] = down >= 0 ? bottom + i + 1 : bottom + i;
+        I[f + 2] = down >= 0 ? bottom + i : bottom + i + 1;
       }
     }
     const step = hypot2(pjx - pix, pjy - piy);
     const base = first + 4 * i;
+    const c = sides + 6 * i;
+    I[c] = base;
+    I[c + 1] = base + 2;
+    I[c + 2] = base + 1;
+    I[c + 3] = base;
+    I[c + 4] = base + 3;
+    I[c + 5] = base + 2;
     side(P, T, 3 * base, 2 * base, BXi, BZi, BXj, BZj, TXj, TZj, TXi, TZi, Y0, Y1, u * MM, (u + step) * MM, v0, v1);
     u += step;
     pix = pjx;
@@ -511,7 +471,6 @@ function writeExtrusion(
     BXi = BXj;
     BZi = BZj;
   }
-  for (let k = 0; k < 6 * n; k++) I[sides + k] = first + pattern[k]!;
   w.count = first + 6 * n;
   w.indexCount = sides + 12 * n - 12;
 }
@@ -530,11 +489,7 @@ export function writePart(w: SlotWriter, part: Part): void {
   const scale = leg ? (part.taper ?? 1) : 1,
     ccx = leg ? part.x : 0,
     ccy = leg ? part.y : 0;
-  const n = leg ? legSides(part) : roundedPoints(part);
-  const key = outlineKey(part, n);
-  // The pattern first: working it out the first time fills the scratch outline with its reference part's.
-  const pattern = sidePattern(key, part, n);
-  if (leg) legOutlineInto(part);
-  else roundedOutlineInto(part);
-  writeExtrusion(w, n, extrusionNormals(w, key, n), pattern, part.z, part.z + part.h, scale, ccx, ccy);
+  const n = leg ? legOutlineInto(part) : roundedOutlineInto(part);
+  const key = leg ? LEG_KEY + n : isDisc(part) ? DISC_KEY + n : n;
+  writeExtrusion(w, n, extrusionNormals(w, key, n), part.z, part.z + part.h, scale, ccx, ccy);
 }
