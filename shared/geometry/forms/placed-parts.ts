@@ -25,6 +25,9 @@ const LARGEST_MM = 1e100;
 /** A box thinner than this (mm) on any side goes to the staged writer, whose facing test winds it. */
 const THINNEST_BOX_MM = 1e-100;
 
+/** Rounds to single precision (a module constant: read once, not looked up on Math at every use). */
+const fround = Math.fround;
+
 const ordinary = (v: number) => v > -LARGEST_MM && v < LARGEST_MM;
 
 /** Whether the part's own numbers are all ordinary (so are the outline's and the box's made from them). */
@@ -127,10 +130,10 @@ function extrusionNormals(w: SlotWriter, key: number, n: number): Float32Array {
     b1 = w.b1;
   for (let i = 0; i < n; i++) {
     const j = i + 1 < n ? i + 1 : 0;
-    const six = Math.fround(N[2 * i]!),
-      siy = Math.fround(N[2 * i + 1]!),
-      sjx = Math.fround(N[2 * j]!),
-      sjy = Math.fround(N[2 * j + 1]!);
+    const six = fround(N[2 * i]!),
+      siy = fround(N[2 * i + 1]!),
+      sjx = fround(N[2 * j]!),
+      sjy = fround(N[2 * j + 1]!);
     const ix = six * a0 + siy * b0,
       iz = six * a1 + siy * b1,
       jx = sjx * a0 + sjy * b0,
@@ -268,10 +271,10 @@ function writeBox(w: SlotWriter, part: Part): void {
     b0 = w.b0,
     b1 = w.b1;
   // Each corner rounded to single precision in the piece frame, then placed (scene metres).
-  const sx0 = Math.fround(x0),
-    sx1 = Math.fround(x1),
-    sy0 = Math.fround(y0),
-    sy1 = Math.fround(y1);
+  const sx0 = fround(x0),
+    sx1 = fround(x1),
+    sy0 = fround(y0),
+    sy1 = fround(y1);
   const X00 = (cx + sx0 * a0 + sy0 * b0) * MM,
     Z00 = (cy + sx0 * a1 + sy0 * b1) * MM,
     X10 = (cx + sx1 * a0 + sy0 * b0) * MM,
@@ -280,8 +283,8 @@ function writeBox(w: SlotWriter, part: Part): void {
     Z11 = (cy + sx1 * a1 + sy1 * b1) * MM,
     X01 = (cx + sx0 * a0 + sy1 * b0) * MM,
     Z01 = (cy + sx0 * a1 + sy1 * b1) * MM;
-  const Y0 = (w.elevation + Math.fround(z0)) * MM,
-    Y1 = (w.elevation + Math.fround(z1)) * MM;
+  const Y0 = (w.elevation + fround(z0)) * MM,
+    Y1 = (w.elevation + fround(z1)) * MM;
   // Sides run u along the face (x or y in metres, signed so it grows left to right seen from outside), v up.
   const ux0 = x0 * MM,
     ux1 = x1 * MM,
@@ -342,12 +345,14 @@ const LEG_KEY = 2000;
 /**
  * The scratch outline's `n` points as an upright prism from z0 to z1: side quads (foot i, foot j,
  * top j, top i), the top and the underside, the underside being the outline scaled by `scale`
- * about (ccx, ccy). Every side quad winds the same way: the staged writer's facing test on each
- * of its triangles is the height times the turn from an edge along the outline (the foot's or the
- * top's) to the side's outward normal, which on a well-shaped part is more than zero, or exactly
- * zero on the no-length runs of a rounded end (whose corners coincide), and zero takes the same
- * way. The caps' fans from their first corner are wound by that test, which for a flat cap is the
- * turn between the fan's two edges.
+ * about (ccx, ccy) (`plumb` when it is the outline itself: scale 1 about the frame's origin; a
+ * well-shaped rounded part's outline has no −0 in it, the one number that scaling so would change).
+ * Every side quad winds the same way: the staged writer's facing test on each of its triangles is
+ * the height times the turn from an edge along the outline (the foot's or the top's) to the side's
+ * outward normal, which on a well-shaped part is more than zero, or exactly zero on the no-length
+ * runs of a rounded end (whose corners coincide), and zero takes the same way. The caps' fans from
+ * their first corner are wound by that test, which for a flat cap is the turn between the fan's
+ * two edges.
  */
 function writeExtrusion(
   w: SlotWriter,
@@ -355,6 +360,7 @@ function writeExtrusion(
   normals: Float32Array,
   z0: number,
   z1: number,
+  plumb: boolean,
   scale: number,
   ccx: number,
   ccy: number,
@@ -373,8 +379,8 @@ function writeExtrusion(
   w.normals.set(normals, 3 * first);
   const v0 = z0 * MM,
     v1 = z1 * MM;
-  const Y0 = (w.elevation + Math.fround(z0)) * MM,
-    Y1 = (w.elevation + Math.fround(z1)) * MM;
+  const Y0 = (w.elevation + fround(z0)) * MM,
+    Y1 = (w.elevation + fround(z1)) * MM;
   const top = first + 4 * n,
     bottom = first + 5 * n;
   const sides = w.indexCount,
@@ -383,16 +389,22 @@ function writeExtrusion(
   // Point i is carried from the last step: its top (p) and foot (q) in the piece frame, and both placed.
   const p0x = O[0]!,
     p0y = O[1]!;
-  const q0x = ccx + (p0x - ccx) * scale,
-    q0y = ccy + (p0y - ccy) * scale;
-  let sx = Math.fround(p0x),
-    sy = Math.fround(p0y);
+  let sx = fround(p0x),
+    sy = fround(p0y);
   const TX0 = (cx + sx * a0 + sy * b0) * MM,
     TZ0 = (cy + sx * a1 + sy * b1) * MM;
-  sx = Math.fround(q0x);
-  sy = Math.fround(q0y);
-  const BX0 = (cx + sx * a0 + sy * b0) * MM,
+  let q0x = p0x,
+    q0y = p0y,
+    BX0 = TX0,
+    BZ0 = TZ0;
+  if (!plumb) {
+    q0x = ccx + (p0x - ccx) * scale;
+    q0y = ccy + (p0y - ccy) * scale;
+    sx = fround(q0x);
+    sy = fround(q0y);
+    BX0 = (cx + sx * a0 + sy * b0) * MM;
     BZ0 = (cy + sx * a1 + sy * b1) * MM;
+  }
   let pix = p0x,
     piy = p0y,
     qix = q0x,
@@ -408,14 +420,16 @@ function writeExtrusion(
     P[k] = TXi;
     P[k + 1] = Y1;
     P[k + 2] = TZi;
-    T[2 * (top + i)] = pix * MM;
-    T[2 * (top + i) + 1] = piy * MM;
+    k = 2 * (top + i);
+    T[k] = pix * MM;
+    T[k + 1] = piy * MM;
     k = 3 * (bottom + i);
     P[k] = BXi;
     P[k + 1] = Y0;
     P[k + 2] = BZi;
-    T[2 * (bottom + i)] = qix * MM;
-    T[2 * (bottom + i) + 1] = qiy * MM;
+    k = 2 * (bottom + i);
+    T[k] = qix * MM;
+    T[k + 1] = qiy * MM;
     let pjx = p0x,
       pjy = p0y,
       qjx = q0x,
@@ -427,16 +441,23 @@ function writeExtrusion(
     if (i + 1 < n) {
       pjx = O[2 * i + 2]!;
       pjy = O[2 * i + 3]!;
-      qjx = ccx + (pjx - ccx) * scale;
-      qjy = ccy + (pjy - ccy) * scale;
-      sx = Math.fround(pjx);
-      sy = Math.fround(pjy);
+      sx = fround(pjx);
+      sy = fround(pjy);
       TXj = (cx + sx * a0 + sy * b0) * MM;
       TZj = (cy + sx * a1 + sy * b1) * MM;
-      sx = Math.fround(qjx);
-      sy = Math.fround(qjy);
-      BXj = (cx + sx * a0 + sy * b0) * MM;
-      BZj = (cy + sx * a1 + sy * b1) * MM;
+      if (plumb) {
+        qjx = pjx;
+        qjy = pjy;
+        BXj = TXj;
+        BZj = TZj;
+      } else {
+        qjx = ccx + (pjx - ccx) * scale;
+        qjy = ccy + (pjy - ccy) * scale;
+        sx = fround(qjx);
+        sy = fround(qjy);
+        BXj = (cx + sx * a0 + sy * b0) * MM;
+        BZj = (cy + sx * a1 + sy * b1) * MM;
+      }
       // The caps' fan triangle (0, i, j), the top facing up and the underside down.
       if (i > 0) {
         const up = (pix - p0x) * (pjy - p0y) - (piy - p0y) * (pjx - p0x);
@@ -451,17 +472,40 @@ function writeExtrusion(
         I[f + 2] = down >= 0 ? bottom + i : bottom + i + 1;
       }
     }
-    const step = hypot2(pjx - pix, pjy - piy);
+    // Side quad i: foot i, foot j, top j, top i; u along the outline, v up.
     const base = first + 4 * i;
-    const c = sides + 6 * i;
-    I[c] = base;
-    I[c + 1] = base + 2;
-    I[c + 2] = base + 1;
-    I[c + 3] = base;
-    I[c + 4] = base + 3;
-    I[c + 5] = base + 2;
-    side(P, T, 3 * base, 2 * base, BXi, BZi, BXj, BZj, TXj, TZj, TXi, TZi, Y0, Y1, u * MM, (u + step) * MM, v0, v1);
-    u += step;
+    k = 3 * base;
+    P[k] = BXi;
+    P[k + 1] = Y0;
+    P[k + 2] = BZi;
+    P[k + 3] = BXj;
+    P[k + 4] = Y0;
+    P[k + 5] = BZj;
+    P[k + 6] = TXj;
+    P[k + 7] = Y1;
+    P[k + 8] = TZj;
+    P[k + 9] = TXi;
+    P[k + 10] = Y1;
+    P[k + 11] = TZi;
+    const u0 = u * MM;
+    u += hypot2(pjx - pix, pjy - piy);
+    const u1 = u * MM;
+    k = 2 * base;
+    T[k] = u0;
+    T[k + 1] = v0;
+    T[k + 2] = u1;
+    T[k + 3] = v0;
+    T[k + 4] = u1;
+    T[k + 5] = v1;
+    T[k + 6] = u0;
+    T[k + 7] = v1;
+    k = sides + 6 * i;
+    I[k] = base;
+    I[k + 1] = base + 2;
+    I[k + 2] = base + 1;
+    I[k + 3] = base;
+    I[k + 4] = base + 3;
+    I[k + 5] = base + 2;
     pix = pjx;
     piy = pjy;
     qix = qjx;
@@ -491,5 +535,5 @@ export function writePart(w: SlotWriter, part: Part): void {
     ccy = leg ? part.y : 0;
   const n = leg ? legOutlineInto(part) : roundedOutlineInto(part);
   const key = leg ? LEG_KEY + n : isDisc(part) ? DISC_KEY + n : n;
-  writeExtrusion(w, n, extrusionNormals(w, key, n), part.z, part.z + part.h, scale, ccx, ccy);
+  writeExtrusion(w, n, extrusionNormals(w, key, n), part.z, part.z + part.h, !leg, scale, ccx, ccy);
 }
