@@ -43,6 +43,8 @@ function outlinePoints(part: Part): number {
  */
 export interface FormPlan {
   parts: readonly Part[];
+  /** Each part's slot: 0 main, 1 accent, 2 own. */
+  slots: Uint8Array;
   /** By slot: main, accent, own. */
   vertices: [number, number, number];
   indices: [number, number, number];
@@ -55,17 +57,20 @@ export function planForm(parts: readonly Part[]): FormPlan {
   const vertices: [number, number, number] = [0, 0, 0];
   const indices: [number, number, number] = [0, 0, 0];
   const ownColours: ColourRun[] = [];
-  for (const part of parts) {
+  const slots = new Uint8Array(parts.length);
+  for (let p = 0; p < parts.length; p++) {
+    const part = parts[p]!;
     const n = outlinePoints(part);
     const v = n === 0 ? 24 : 6 * n;
     const s = SLOT_INDEX[part.slot];
+    slots[p] = s;
     vertices[s] += v;
     indices[s] += n === 0 ? 36 : 12 * n - 12;
     if (part.slot === 'own') ownColours.push({ colour: part.colour ?? '#ffffff', vertexCount: v });
   }
   let size = 0;
   for (let s = 0; s < 3; s++) size += 8 * vertices[s]! + indices[s]!;
-  return { parts, vertices, indices, ownColours, size };
+  return { parts, slots, vertices, indices, ownColours, size };
 }
 
 /** One writer per material slot, reused by every form built on this thread. */
@@ -98,7 +103,8 @@ export function writeForm(plan: FormPlan, at: Placement, buffer: ArrayBuffer, of
     WRITERS[s]!.begin(mesh, at.x, at.y, at.elevation, axis);
     meshes.push(mesh);
   }
-  for (const part of plan.parts) writePart(WRITERS[SLOT_INDEX[part.slot]]!, part);
+  const { parts, slots } = plan;
+  for (let p = 0; p < parts.length; p++) writePart(WRITERS[slots[p]!]!, parts[p]!);
   return { main: meshes[0]!, accent: meshes[1]!, own: meshes[2]!, ownColours: plan.ownColours };
 }
 

@@ -171,8 +171,9 @@ export function legOutlineInto(part: Part): number {
 
 /**
  * The length of (dx, dy) with the same steps as V8's Math.hypot (each side scaled by the larger,
- * squares summed; for two numbers its compensated sum reduces to this): the same number, without
- * a call that gathers its arguments.
+ * squares summed; for two numbers its compensated sum reduces to this): the same number for any
+ * finite sides, without a call that gathers its arguments. The larger side scaled by itself is
+ * exactly 1, so one division does.
  */
 export function hypot2(dx: number, dy: number): number {
   const a = Math.abs(dx),
@@ -181,7 +182,6 @@ export function hypot2(dx: number, dy: number): number {
   if (max === Infinity) return Infinity;
   if (max !== max) return NaN;
   if (max === 0) return 0;
-  const n0 = a / max,
-    n1 = b / max;
-  return Math.sqrt(n0 * n0 + n1 * n1) * max;
+  const t = (a > b ? b : a) / max;
+  return Math.sqrt(1 + t * t) * max;
 }
