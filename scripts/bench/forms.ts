@@ -1,11 +1,11 @@
 // Scene data for a typical room's pieces: plain boxes against forms, the same room in the same run:
-// warm (the engine has compiled the code: forms built from nothing and kept from the last build)
-// and as the page's first build (each in a fresh process, nothing compiled yet).
+// warm (the engine has compiled the code: forms built from nothing and kept from the last build),
+// then the page's first build with nothing compiled yet (forms-first-build.ts).
 import { buildPieceForms, clearFormCache } from '../../shared/geometry/forms/piece-forms';
 import { formTriangles } from '../../shared/geometry/forms/mesh';
 import { buildRoomScene } from '../../shared/geometry/scene';
 import { loadavg } from 'node:os';
-import { runFresh, serveAsWorker } from './fresh-process';
+import { benchFormsFirstBuild, range } from './forms-first-build';
 import { typicalFurnishedRoom } from './typical-room';
 
 /** Rounds of the three measures, each round's batches taken in turn, so a busy spell on the shared machine hits them all alike. */
@@ -15,9 +15,6 @@ const REPEATS = 9;
 const BATCH = 20;
 /** Drag steps cycled through by the kept measure. */
 const MOVES = 400;
-/** Fresh processes per build for the first build, boxes and forms taken in turn (who goes first alternating). */
-const FRESH_RUNS = 15;
-const WORKER_FLAG = '--forms-first-build-worker';
 
 interface Timing {
   wall: number;
@@ -43,63 +40,6 @@ function medians(runs: readonly (() => void)[]): Timing[] {
   const timings: Timing[][] = runs.map(() => []);
   for (let r = 0; r < REPEATS; r++) runs.forEach((run, i) => timings[i]!.push(batch(run)));
   return timings.map((ts) => [...ts].sort((a, b) => a.wall - b.wall)[Math.floor(REPEATS / 2)]!);
-}
-
-const range = (values: number[], digits: number, unit = '') => {
-  const sorted = [...values].sort((a, b) => a - b);
-  return `${sorted[0]!.toFixed(digits)}–${sorted[sorted.length - 1]!.toFixed(digits)}${unit}`;
-};
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
-
-type FirstBuild = 'boxes' | 'forms';
-interface FirstBuildTiming {
-  wall: number;
-  cpu: number;
-  /** Of the forms alone (0 for boxes). */
-  formsWall: number;
-}
-
-/**
- * In a fresh worker: the room's scene data built once, as the page does when it has loaded: the
- * shell and boxes, then (for forms) every piece's form. Garbage from loading is collected first, so
- * a collection it would cause falls on neither build by chance.
- */
-function firstBuild(build: FirstBuild): FirstBuildTiming {
-  const { shell, option } = typicalFurnishedRoom();
-  (globalThis as { gc?: () => void }).gc?.();
-  const c0 = process.cpuUsage();
-  const t0 = performance.now();
-  buildRoomScene(shell, option);
-  const t1 = performance.now();
-  if (build === 'forms') buildPieceForms(option.pieces);
-  const t2 = performance.now();
-  const c = process.cpuUsage(c0);
-  return { wall: t2 - t0, cpu: (c.user + c.system) / 1000, formsWall: t2 - t1 };
-}
-
-/**
- * The first build of the room in fresh processes, boxes and forms taken in turn (which goes first
- * alternating): wall and process CPU time, medians with their ranges, and the load.
- */
-function benchFirstBuild(): void {
-  const runs: Record<FirstBuild, FirstBuildTiming[]> = { boxes: [], forms: [] };
-  const loads: number[] = [];
-  for (let i = 0; i < FRESH_RUNS; i++) {
-    const order: FirstBuild[] = i % 2 === 0 ? ['boxes', 'forms'] : ['forms', 'boxes'];
-    for (const build of order)
-      runs[build].push(runFresh<FirstBuildTiming>(import.meta.url, WORKER_FLAG, [build], ['--expose-gc']));
-    loads.push(loadavg()[0]!);
-  }
-  const wall = (b: FirstBuild) => runs[b].map((r) => r.wall);
-  const cpu = (b: FirstBuild) => runs[b].map((r) => r.cpu);
-  console.log(
-    `forms: first build after the page loads (a fresh process each, nothing compiled yet; ${FRESH_RUNS} of each, ` +
-      `in turn): boxes median ${median(wall('boxes')).toFixed(2)} ms (${range(wall('boxes'), 2, ' ms')}; CPU ` +
-      `${median(cpu('boxes')).toFixed(2)} ms), forms median ${median(wall('forms')).toFixed(2)} ms ` +
-      `(${range(wall('forms'), 2, ' ms')}; CPU ${median(cpu('forms')).toFixed(2)} ms; the forms' own part ` +
-      `${median(runs.forms.map((r) => r.formsWall)).toFixed(2)} ms): ${(median(wall('forms')) / median(wall('boxes'))).toFixed(2)}× ` +
-      `the boxes (CPU ${(median(cpu('forms')) / median(cpu('boxes'))).toFixed(2)}×) (load ${range(loads, 1)}; budget: forms ≤ 1.5× the boxes)`,
-  );
 }
 
 /**
@@ -177,7 +117,5 @@ export async function benchForms(): Promise<void> {
         1,
       )}; budget: forms ≤ 1.5× the boxes)`,
   );
-  benchFirstBuild();
+  await benchFormsFirstBuild();
 }
-
-await serveAsWorker(WORKER_FLAG, ([build]) => Promise.resolve(firstBuild(build as FirstBuild)));
