@@ -15,7 +15,7 @@ import {
   roundedOutlineInto,
   SlotWriter,
 } from './slot-writer';
-import { BOX_FACES, writeBoxStaged, writePartStaged } from './staged-parts';
+import { BOX_FACES, BOX_U, writeBoxStaged, writePartStaged } from './staged-parts';
 
 /**
  * Numbers this writer takes (mm, either side of zero): products of two stay finite, so every
@@ -167,90 +167,28 @@ function extrusionNormals(w: SlotWriter, key: number, n: number): Float32Array {
   return D;
 }
 
-/** Writes an upright quad's corners (foot a, foot b at y0; top b, top a at y1) and their uvs from `p` and `t`. */
-function side(
-  P: Float32Array,
-  T: Float32Array,
-  p: number,
-  t: number,
-  xa: number,
-  za: number,
-  xb: number,
-  zb: number,
-  xc: number,
-  zc: number,
-  xd: number,
-  zd: number,
-  y0: number,
-  y1: number,
-  ua: number,
-  ub: number,
-  v0: number,
-  v1: number,
-): void {
-  P[p] = xa;
-  P[p + 1] = y0;
-  P[p + 2] = za;
-  P[p + 3] = xb;
-  P[p + 4] = y0;
-  P[p + 5] = zb;
-  P[p + 6] = xc;
-  P[p + 7] = y1;
-  P[p + 8] = zc;
-  P[p + 9] = xd;
-  P[p + 10] = y1;
-  P[p + 11] = zd;
-  T[t] = ua;
-  T[t + 1] = v0;
-  T[t + 2] = ub;
-  T[t + 3] = v0;
-  T[t + 4] = ub;
-  T[t + 5] = v1;
-  T[t + 6] = ua;
-  T[t + 7] = v1;
-}
-
-/** Writes a cap's four corners at height y, in order round the plan (x0 y0, x1 y0, x1 y1, x0 y1), uvs the plan in metres. */
-function cap(
-  P: Float32Array,
-  T: Float32Array,
-  p: number,
-  t: number,
-  y: number,
-  x00: number,
-  z00: number,
-  x10: number,
-  z10: number,
-  x11: number,
-  z11: number,
-  x01: number,
-  z01: number,
-  u0: number,
-  v0: number,
-  u1: number,
-  v1: number,
-): void {
-  P[p] = x00;
-  P[p + 1] = y;
-  P[p + 2] = z00;
-  P[p + 3] = x10;
-  P[p + 4] = y;
-  P[p + 5] = z10;
-  P[p + 6] = x11;
-  P[p + 7] = y;
-  P[p + 8] = z11;
-  P[p + 9] = x01;
-  P[p + 10] = y;
-  P[p + 11] = z01;
-  T[t] = u0;
-  T[t + 1] = v0;
-  T[t + 2] = u1;
-  T[t + 3] = v0;
-  T[t + 4] = u1;
-  T[t + 5] = v1;
-  T[t + 6] = u0;
-  T[t + 7] = v1;
-}
+// A box's 24 vertices face by face, in the staged writer's order (its BOX_FACES): which of the
+// eight placed corners each takes (bit 0 x1, bit 1 y1, bit 2 z1), and which of the box's ten uv
+// numbers (BOX_UV_VALUES) its u and v are.
+const BOX_VERTEX_CORNERS = new Uint8Array(24);
+const BOX_VERTEX_UVS = new Uint8Array(48);
+for (let f = 0; f < 6; f++)
+  for (let c = 0; c < 4; c++) {
+    const v = 4 * f + c;
+    const xb = BOX_FACES[15 * f + 3 + 3 * c]!,
+      yb = BOX_FACES[15 * f + 4 + 3 * c]!,
+      zb = BOX_FACES[15 * f + 5 + 3 * c]!;
+    BOX_VERTEX_CORNERS[v] = xb | (yb << 1) | (zb << 2);
+    // Sides: u is x or y signed as BOX_U says, v the height; the top and underside take x and y.
+    const alongY = f < 4 && BOX_U[2 * f] !== 0;
+    const negative = f < 4 && BOX_U[2 * f + 1]! < 0;
+    BOX_VERTEX_UVS[2 * v] = (alongY ? 4 : 0) + (negative ? 2 : 0) + (alongY ? yb : xb);
+    BOX_VERTEX_UVS[2 * v + 1] = f < 4 ? 8 + zb : 4 + yb;
+  }
+// One box's placed corners (x, y, z scene metres, by corner as above) and its uv numbers: x0, x1,
+// −x0, −x1, y0, y1, −y0, −y1 (plan metres) and z0, z1 (metres up).
+const BOX_CORNER_POSITIONS = new Float64Array(24);
+const BOX_UV_VALUES = new Float64Array(10);
 
 /** A box part: its faces front, back, right, left, top and underside, as the staged writer orders them. */
 function writeBox(w: SlotWriter, part: Part): void {
@@ -271,39 +209,48 @@ function writeBox(w: SlotWriter, part: Part): void {
     b0 = w.b0,
     b1 = w.b1;
   // Each corner rounded to single precision in the piece frame, then placed (scene metres).
-  const sx0 = fround(x0),
-    sx1 = fround(x1),
-    sy0 = fround(y0),
-    sy1 = fround(y1);
-  const X00 = (cx + sx0 * a0 + sy0 * b0) * MM,
-    Z00 = (cy + sx0 * a1 + sy0 * b1) * MM,
-    X10 = (cx + sx1 * a0 + sy0 * b0) * MM,
-    Z10 = (cy + sx1 * a1 + sy0 * b1) * MM,
-    X11 = (cx + sx1 * a0 + sy1 * b0) * MM,
-    Z11 = (cy + sx1 * a1 + sy1 * b1) * MM,
-    X01 = (cx + sx0 * a0 + sy1 * b0) * MM,
-    Z01 = (cy + sx0 * a1 + sy1 * b1) * MM;
-  const Y0 = (w.elevation + fround(z0)) * MM,
-    Y1 = (w.elevation + fround(z1)) * MM;
-  // Sides run u along the face (x or y in metres, signed so it grows left to right seen from outside), v up.
-  const ux0 = x0 * MM,
-    ux1 = x1 * MM,
-    uy0 = y0 * MM,
-    uy1 = y1 * MM,
-    v0 = z0 * MM,
-    v1 = z1 * MM;
+  const C = BOX_CORNER_POSITIONS;
+  const sz0 = fround(z0),
+    sz1 = fround(z1);
+  for (let k = 0; k < 4; k++) {
+    const sx = fround(k & 1 ? x1 : x0),
+      sy = fround(k & 2 ? y1 : y0);
+    const X = (cx + sx * a0 + sy * b0) * MM,
+      Z = (cy + sx * a1 + sy * b1) * MM;
+    C[3 * k] = X;
+    C[3 * k + 1] = (w.elevation + sz0) * MM;
+    C[3 * k + 2] = Z;
+    C[3 * k + 12] = X;
+    C[3 * k + 13] = (w.elevation + sz1) * MM;
+    C[3 * k + 14] = Z;
+  }
+  const U = BOX_UV_VALUES;
+  U[0] = x0 * MM;
+  U[1] = x1 * MM;
+  U[2] = -U[0]!;
+  U[3] = -U[1]!;
+  U[4] = y0 * MM;
+  U[5] = y1 * MM;
+  U[6] = -U[4]!;
+  U[7] = -U[5]!;
+  U[8] = z0 * MM;
+  U[9] = z1 * MM;
   const P = w.positions,
     T = w.uvs,
     first = w.count;
-  const p = 3 * first,
-    t = 2 * first;
-  side(P, T, p, t, X01, Z01, X11, Z11, X11, Z11, X01, Z01, Y0, Y1, ux0, ux1, v0, v1);
-  side(P, T, p + 12, t + 8, X10, Z10, X00, Z00, X00, Z00, X10, Z10, Y0, Y1, -ux1, -ux0, v0, v1);
-  side(P, T, p + 24, t + 16, X11, Z11, X10, Z10, X10, Z10, X11, Z11, Y0, Y1, -uy1, -uy0, v0, v1);
-  side(P, T, p + 36, t + 24, X00, Z00, X01, Z01, X01, Z01, X00, Z00, Y0, Y1, uy0, uy1, v0, v1);
-  cap(P, T, p + 48, t + 32, Y1, X00, Z00, X10, Z10, X11, Z11, X01, Z01, ux0, uy0, ux1, uy1);
-  cap(P, T, p + 60, t + 40, Y0, X00, Z00, X10, Z10, X11, Z11, X01, Z01, ux0, uy0, ux1, uy1);
-  w.normals.set(boxNormals(w), p);
+  const VC = BOX_VERTEX_CORNERS,
+    VU = BOX_VERTEX_UVS;
+  for (let v = 0; v < 24; v++) {
+    const c = 3 * VC[v]!,
+      p = 3 * (first + v),
+      t = 2 * (first + v);
+    P[p] = C[c]!;
+    P[p + 1] = C[c + 1]!;
+    P[p + 2] = C[c + 2]!;
+    T[t] = U[VU[2 * v]!]!;
+    T[t + 1] = U[VU[2 * v + 1]!]!;
+  }
+  w.normals.set(boxNormals(w), 3 * first);
   const I = w.indices,
     B = BOX_INDICES,
     c = w.indexCount;

@@ -116,7 +116,7 @@ export const BOX_FACES = new Int8Array([
 ]);
 /** For each side face, u is this plan coordinate (0 x, 1 y) times this sign. */
 // prettier-ignore
-const BOX_U = new Int8Array([0, 1, 0, -1, 1, -1, 1, 1]);
+export const BOX_U = new Int8Array([0, 1, 0, -1, 1, -1, 1, 1]);
 /** The box's extents, x0 x1 y0 y1 z0 z1, for the corners to pick from. */
 const BOX_EXTENTS = new Float64Array(6);
 
