@@ -123,4 +123,28 @@ describe('the direct part writer', () => {
       });
     }
   });
+
+  it('writes what the staged writer writes for rounded ends, discs and tapered legs, wherever they stand', () => {
+    const next = seededRandom(9090);
+    const place = () => (next() < 0.1 ? 0 : (next() - 0.5) * 10 ** (1 + Math.floor(next() * 6)));
+    for (let k = 0; k < 1200; k++) {
+      const long = 20 + next() * 3000,
+        short = 5 + next() * 600;
+      const kind = k % 4;
+      const p =
+        kind === 3
+          ? part('leg', { x: place(), y: place(), w: short, d: short, h: 1 + next() * 900, taper: 0.05 + next() * 3 })
+          : part('rounded', {
+              x: place(),
+              y: place(),
+              z: next() * 1500,
+              // A rounded end across x, across y, or a disc: the radius is half the shorter side.
+              w: kind === 0 ? short : kind === 1 ? long : short,
+              d: kind === 0 ? long : short,
+              h: 1 + next() * 900,
+              radius: short / 2,
+            });
+      expectSame(p, { x: place(), y: place(), rotation: next() * 720 - 360, elevation: next() * 2400 });
+    }
+  });
 });

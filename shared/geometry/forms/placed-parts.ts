@@ -273,11 +273,12 @@ function wellShaped(part: Part): boolean {
     return taper >= LEAST_TAPER && taper <= 1 / LEAST_TAPER && part.w * Math.min(taper, 1) >= least;
   }
   const r = part.radius ?? 0;
-  if (!(r >= least)) return false;
-  if (isDisc(part)) return true;
   const hx = part.w / 2 - r,
     hy = part.d / 2 - r;
-  return (hx === 0 || hx >= least) && (hy === 0 || hy >= least) && hx + hy > 0;
+  // A radius past half a side folds the outline over itself.
+  if (!(r >= least && hx >= 0 && hy >= 0)) return false;
+  if (isDisc(part)) return true;
+  return (hx === 0 || hx >= least) && (hy === 0 || hy >= least);
 }
 
 /** A side of an outline shorter than this share of where it stands (mm) goes to the staged writer. */
@@ -297,9 +298,14 @@ const LEG_KEY = 2000;
  * Every side quad winds the same way: the staged writer's facing test on each of its triangles is
  * the height times the turn from an edge along the outline (the foot's or the top's) to the side's
  * outward normal, which on a well-shaped part is more than zero, or exactly zero on the no-length
- * runs of a rounded end (whose corners coincide), and zero takes the same way. The caps' fans from
- * their first corner are wound by that test, which for a flat cap is the turn between the fan's
- * two edges.
+ * runs of a rounded end (whose corners coincide), and zero takes the same way. The caps are fanned
+ * from their first corner, and the staged writer's test on a fan's triangle is the turn between
+ * its two edges, upwards for the top and downwards for the underside. A well-shaped outline is
+ * convex and runs one way round, so that turn is more than zero, or exactly zero where two of the
+ * triangle's corners coincide (a rounded end's no-length runs; its first and last corners when it
+ * has no straight run across y and they round to the same point, else they are a hair apart and
+ * the turn is a hair above zero): the top always takes the first way, the underside the first way
+ * only where two corners coincide.
  */
 function writeExtrusion(
   w: SlotWriter,
@@ -360,23 +366,26 @@ function writeExtrusion(
     TZi = TZ0,
     BXi = BX0,
     BZi = BZ0;
-  let u = 0;
+  let u = 0,
+    u1 = 0 * MM;
   for (let i = 0; i < n; i++) {
     // The top's and the underside's corner i.
     let k = 3 * (top + i);
     P[k] = TXi;
     P[k + 1] = Y1;
     P[k + 2] = TZi;
+    const tu = pix * MM,
+      tv = piy * MM;
     k = 2 * (top + i);
-    T[k] = pix * MM;
-    T[k + 1] = piy * MM;
+    T[k] = tu;
+    T[k + 1] = tv;
     k = 3 * (bottom + i);
     P[k] = BXi;
     P[k + 1] = Y0;
     P[k + 2] = BZi;
     k = 2 * (bottom + i);
-    T[k] = qix * MM;
-    T[k + 1] = qiy * MM;
+    T[k] = plumb ? tu : qix * MM;
+    T[k + 1] = plumb ? tv : qiy * MM;
     let pjx = p0x,
       pjy = p0y,
       qjx = q0x,
@@ -405,18 +414,17 @@ function writeExtrusion(
         BXj = (cx + sx * a0 + sy * b0) * MM;
         BZj = (cy + sx * a1 + sy * b1) * MM;
       }
-      // The caps' fan triangle (0, i, j), the top facing up and the underside down.
+      // The caps' fan triangle (0, i, j), the top facing up and the underside down: see above.
       if (i > 0) {
-        const up = (pix - p0x) * (pjy - p0y) - (piy - p0y) * (pjx - p0x);
         let f = topFan + 3 * (i - 1);
         I[f] = top;
-        I[f + 1] = up >= 0 ? top + i + 1 : top + i;
-        I[f + 2] = up >= 0 ? top + i : top + i + 1;
-        const down = -((qix - q0x) * (qjy - q0y) - (qiy - q0y) * (qjx - q0x));
+        I[f + 1] = top + i + 1;
+        I[f + 2] = top + i;
+        const flat = (qjx === qix && qjy === qiy) || (qjx === q0x && qjy === q0y);
         f = bottomFan + 3 * (i - 1);
         I[f] = bottom;
-        I[f + 1] = down >= 0 ? bottom + i + 1 : bottom + i;
-        I[f + 2] = down >= 0 ? bottom + i : bottom + i + 1;
+        I[f + 1] = flat ? bottom + i + 1 : bottom + i;
+        I[f + 2] = flat ? bottom + i : bottom + i + 1;
       }
     }
     // Side quad i: foot i, foot j, top j, top i; u along the outline, v up.
@@ -434,9 +442,9 @@ function writeExtrusion(
     P[k + 9] = TXi;
     P[k + 10] = Y1;
     P[k + 11] = TZi;
-    const u0 = u * MM;
+    const u0 = u1;
     u += hypot2(pjx - pix, pjy - piy);
-    const u1 = u * MM;
+    u1 = u * MM;
     k = 2 * base;
     T[k] = u0;
     T[k + 1] = v0;
