@@ -108,8 +108,13 @@ function boxNormals(w: SlotWriter): Float32Array {
   return D;
 }
 
+/** An outline's normal block, with the outline's own normals in single precision (as they are placed). */
+interface ExtrusionNormals extends NormalBlock {
+  outline: Float32Array;
+}
+
 // Extrusion normal blocks by outline (see DISC_KEY).
-const EXTRUSION_NORMALS = new Map<number, NormalBlock>();
+const EXTRUSION_NORMALS = new Map<number, ExtrusionNormals>();
 
 /**
  * The placed normals of an upright prism round the scratch outline's `n` points (its sides' smooth
@@ -118,36 +123,34 @@ const EXTRUSION_NORMALS = new Map<number, NormalBlock>();
 function extrusionNormals(w: SlotWriter, key: number, n: number): Float32Array {
   let block = EXTRUSION_NORMALS.get(key);
   if (!block) {
-    block = { data: new Float32Array(18 * n), a0: NaN, a1: NaN };
+    // The scratch outline's normals are the outline's whatever its size.
+    block = { data: new Float32Array(18 * n), a0: NaN, a1: NaN, outline: new Float32Array(OUTLINE_NORMALS.subarray(0, 2 * n)) };
     EXTRUSION_NORMALS.set(key, block);
   }
   if (block.a0 === w.a0 && block.a1 === w.a1) return block.data;
-  const N = OUTLINE_NORMALS,
+  const S = block.outline,
     D = block.data;
   const a0 = w.a0,
     a1 = w.a1,
     b0 = w.b0,
     b1 = w.b1;
   for (let i = 0; i < n; i++) {
-    const j = i + 1 < n ? i + 1 : 0;
-    const six = fround(N[2 * i]!),
-      siy = fround(N[2 * i + 1]!),
-      sjx = fround(N[2 * j]!),
-      sjy = fround(N[2 * j + 1]!);
-    const ix = six * a0 + siy * b0,
-      iz = six * a1 + siy * b1,
-      jx = sjx * a0 + sjy * b0,
-      jz = sjx * a1 + sjy * b1;
-    // Foot i, foot j, top j, top i; the y of every side normal is 0 (the Float32Array's own).
-    const k = 12 * i;
-    D[k] = ix;
-    D[k + 2] = iz;
-    D[k + 3] = jx;
-    D[k + 5] = jz;
-    D[k + 6] = jx;
-    D[k + 8] = jz;
-    D[k + 9] = ix;
-    D[k + 11] = iz;
+    const sx = S[2 * i]!,
+      sy = S[2 * i + 1]!;
+    const x = sx * a0 + sy * b0,
+      z = sx * a1 + sy * b1;
+    // Point i is foot i and top i of side quad i, and foot j and top j of the quad before it; the
+    // y of every side normal is 0 (the Float32Array's own).
+    const k = 12 * i,
+      before = 12 * (i > 0 ? i - 1 : n - 1);
+    D[k] = x;
+    D[k + 2] = z;
+    D[k + 9] = x;
+    D[k + 11] = z;
+    D[before + 3] = x;
+    D[before + 5] = z;
+    D[before + 6] = x;
+    D[before + 8] = z;
   }
   // The caps face straight up and down: their x and z are 0 turned, signed as the turn signs them.
   const cx = 0 * a0 + 0 * b0,
@@ -192,13 +195,17 @@ const BOX_UV_VALUES = new Float64Array(10);
 
 /** A box part: its faces front, back, right, left, top and underside, as the staged writer orders them. */
 function writeBox(w: SlotWriter, part: Part): void {
-  const x0 = part.x - part.w / 2,
-    x1 = part.x + part.w / 2,
-    y0 = part.y - part.d / 2,
-    y1 = part.y + part.d / 2,
+  const hw = part.w / 2,
+    hd = part.d / 2;
+  const x0 = part.x - hw,
+    x1 = part.x + hw,
+    y0 = part.y - hd,
+    y1 = part.y + hd,
     z0 = part.z,
-    z1 = part.z + part.h;
-  if (!(ordinaryPart(part) && x1 - x0 >= THINNEST_BOX_MM && y1 - y0 >= THINNEST_BOX_MM && z1 - z0 >= THINNEST_BOX_MM)) {
+    z1 = z0 + part.h;
+  // Only the extents enter a box's numbers: they are what must be in range.
+  const inRange = ordinary(x0) && ordinary(x1) && ordinary(y0) && ordinary(y1) && ordinary(z0) && ordinary(z1);
+  if (!(inRange && x1 - x0 >= THINNEST_BOX_MM && y1 - y0 >= THINNEST_BOX_MM && z1 - z0 >= THINNEST_BOX_MM)) {
     writePartStaged(w, part);
     return;
   }
@@ -208,20 +215,31 @@ function writeBox(w: SlotWriter, part: Part): void {
     a1 = w.a1,
     b0 = w.b0,
     b1 = w.b1;
-  // Each corner rounded to single precision in the piece frame, then placed (scene metres).
+  // Each corner rounded to single precision in the piece frame, then placed (scene metres): the
+  // sums (centre + x turned) + y turned, each part of them worked out once for the corners sharing it.
   const C = BOX_CORNER_POSITIONS;
-  const sz0 = fround(z0),
-    sz1 = fround(z1);
+  const sx0 = fround(x0),
+    sx1 = fround(x1),
+    sy0 = fround(y0),
+    sy1 = fround(y1);
+  const Y0 = (w.elevation + fround(z0)) * MM,
+    Y1 = (w.elevation + fround(z1)) * MM;
+  const ax0 = cx + sx0 * a0,
+    ax1 = cx + sx1 * a0,
+    az0 = cy + sx0 * a1,
+    az1 = cy + sx1 * a1,
+    bx0 = sy0 * b0,
+    bx1 = sy1 * b0,
+    bz0 = sy0 * b1,
+    bz1 = sy1 * b1;
   for (let k = 0; k < 4; k++) {
-    const sx = fround(k & 1 ? x1 : x0),
-      sy = fround(k & 2 ? y1 : y0);
-    const X = (cx + sx * a0 + sy * b0) * MM,
-      Z = (cy + sx * a1 + sy * b1) * MM;
+    const X = ((k & 1 ? ax1 : ax0) + (k & 2 ? bx1 : bx0)) * MM,
+      Z = ((k & 1 ? az1 : az0) + (k & 2 ? bz1 : bz0)) * MM;
     C[3 * k] = X;
-    C[3 * k + 1] = (w.elevation + sz0) * MM;
+    C[3 * k + 1] = Y0;
     C[3 * k + 2] = Z;
     C[3 * k + 12] = X;
-    C[3 * k + 13] = (w.elevation + sz1) * MM;
+    C[3 * k + 13] = Y1;
     C[3 * k + 14] = Z;
   }
   const U = BOX_UV_VALUES;
