@@ -1,10 +1,12 @@
 // The direct part writer: each part written once straight into its slot's buffers, placed, with
 // the numbers the staged writer (staged-parts.ts) gives, bit for bit. A room's first build runs
-// mostly before the engine has compiled it, where every load, store and sum costs a call, so this
-// writer places a box's eight corners and an outline's points once each rather than every vertex,
-// copies the normals (the same for every part of a shape in a piece turned the same way) as one
-// block, and winds a box's triangles from one pattern.
-import type { Part } from './parts';
+// mostly before the engine has compiled it, where every sum makes a new number on the heap and
+// every load and store is a call, so this writer places a box's eight corners and an outline's
+// points once each rather than every vertex, copies the normals (the same for every part of one
+// outline in pieces turned alike) as one block, and winds a box and a prism's sides and caps from
+// what their shapes make certain instead of testing every triangle. Parts whose numbers it does not
+// take go to the staged writer.
+import { boxPart, type Part } from './parts';
 import {
   hypot2,
   isDisc,
@@ -44,28 +46,22 @@ function ordinaryPart(part: Part): boolean {
   );
 }
 
-/** A slot writer over fresh buffers for `vertices` vertices and `indices` triangle corners, placed unturned at the origin. */
-function scratchWriter(vertices: number, indices: number): SlotWriter {
-  const w = new SlotWriter();
-  const mesh = {
-    positions: new Float32Array(3 * vertices),
-    normals: new Float32Array(3 * vertices),
-    uvs: new Float32Array(2 * vertices),
-    indices: new Uint32Array(indices),
-  };
-  w.begin(mesh, 0, 0, 0, [1, 0]);
-  return w;
-}
-
 /**
  * The triangle corners of a box of positive size, relative to its first vertex: the staged
  * writer's own for a unit box. Every facing test on a box's face is a product of two of its sides
  * (the other terms are zeros), so any box of positive sides winds the same.
  */
 const BOX_INDICES = (() => {
-  const w = scratchWriter(24, 36);
-  writeBoxStaged(w, { shape: 'box', x: 0, y: 0, z: 0, w: 1, d: 1, h: 1, slot: 'main', role: 'body' });
-  return w.indices;
+  const w = new SlotWriter();
+  const mesh = {
+    positions: new Float32Array(72),
+    normals: new Float32Array(72),
+    uvs: new Float32Array(48),
+    indices: new Uint32Array(36),
+  };
+  w.begin(mesh, 0, 0, 0, [1, 0]);
+  writeBoxStaged(w, boxPart(-0.5, 0.5, -0.5, 0.5, 0, 1));
+  return mesh.indices;
 })();
 
 /**

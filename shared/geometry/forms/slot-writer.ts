@@ -7,7 +7,7 @@ import type { Part } from './parts';
 /** Piece frame millimetres to scene metres. */
 export const MM = 1 / 1000;
 /** Segments per quarter of a rounded corner (a disc gets four of them). */
-export const CORNER_SEGMENTS = 3;
+const CORNER_SEGMENTS = 3;
 export const DISC_SEGMENTS = 5;
 /** Sides round a leg: slim legs need few, lamp shades and pots more. */
 const LEG_SIDES = 8;

@@ -167,7 +167,7 @@ export function writeBoxStaged(w: SlotWriter, part: Part): void {
 // The scratch outline's `n` points as an upright prism from z0 to z1: its sides (smooth normals
 // round it, u running along the outline), its top and its underside. The underside is the
 // outline scaled by `bottomScale` about (cx, cy).
-export function writeExtrusionStaged(
+function writeExtrusionStaged(
   w: SlotWriter,
   n: number,
   z0: number,
