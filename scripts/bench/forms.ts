@@ -1,8 +1,11 @@
-// Scene data for a typical room's pieces: plain boxes against forms, the same room in the same run.
+// Scene data for a typical room's pieces: plain boxes against forms, the same room in the same run:
+// warm (the engine has compiled the code: forms built from nothing and kept from the last build),
+// then the page's first build with nothing compiled yet (forms-first-build.ts).
 import { buildPieceForms, clearFormCache } from '../../shared/geometry/forms/piece-forms';
 import { formTriangles } from '../../shared/geometry/forms/mesh';
 import { buildRoomScene } from '../../shared/geometry/scene';
 import { loadavg } from 'node:os';
+import { benchFormsFirstBuild, range } from './forms-first-build';
 import { typicalFurnishedRoom } from './typical-room';
 
 /** Rounds of the three measures, each round's batches taken in turn, so a busy spell on the shared machine hits them all alike. */
@@ -38,11 +41,6 @@ function medians(runs: readonly (() => void)[]): Timing[] {
   for (let r = 0; r < REPEATS; r++) runs.forEach((run, i) => timings[i]!.push(batch(run)));
   return timings.map((ts) => [...ts].sort((a, b) => a.wall - b.wall)[Math.floor(REPEATS / 2)]!);
 }
-
-const range = (values: number[], digits: number, unit = '') => {
-  const sorted = [...values].sort((a, b) => a - b);
-  return `${sorted[0]!.toFixed(digits)}–${sorted[sorted.length - 1]!.toFixed(digits)}${unit}`;
-};
 
 /**
  * Prints ms per room for the scene data with boxes and with forms (shell and boxes included in
@@ -119,4 +117,5 @@ export async function benchForms(): Promise<void> {
         1,
       )}; budget: forms ≤ 1.5× the boxes)`,
   );
+  await benchFormsFirstBuild();
 }

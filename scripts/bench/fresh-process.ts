@@ -1,14 +1,20 @@
-// Benches that measure peak memory run their work in a fresh Node process, so its peak resident
-// memory (getrusage maxRSS) is the work's own plus Node's baseline, not the generator's buffers.
+// Benches run work in a fresh Node process where what is measured must not carry over from the
+// bench itself: peak resident memory (getrusage maxRSS: the work's own plus Node's baseline, not
+// the generator's buffers), or a first run before the engine has compiled anything.
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 
 /** The process's peak resident memory so far (getrusage maxRSS is in kilobytes on Linux). */
 export const maxRssMb = () => process.resourceUsage().maxRSS / 1024;
 
-/** Runs the bench module `moduleUrl` again as a worker (`flag` and `args` after it) and answers the JSON it printed last. */
-export function runFresh<T>(moduleUrl: string, flag: string, args: string[]): T {
-  const child = spawnSync(process.execPath, ['--import', 'tsx', fileURLToPath(moduleUrl), flag, ...args], { encoding: 'utf8' });
+/**
+ * Runs the bench module `moduleUrl` again as a worker (`flag` and `args` after it, Node started
+ * with `nodeFlags`) and answers the JSON it printed last.
+ */
+export function runFresh<T>(moduleUrl: string, flag: string, args: string[], nodeFlags: string[] = []): T {
+  const child = spawnSync(process.execPath, [...nodeFlags, '--import', 'tsx', fileURLToPath(moduleUrl), flag, ...args], {
+    encoding: 'utf8',
+  });
   if (child.status !== 0) throw new Error(`bench worker ${flag} failed: ${child.stderr}`);
   return JSON.parse(child.stdout.trim().split('\n').pop()!) as T;
 }

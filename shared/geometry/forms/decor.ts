@@ -24,7 +24,7 @@ export function floorLampForm(box: FormBox): Part[] {
   return [
     discPart(0, 0, size * 0.65, 0, foot, { slot: 'accent' }),
     legPart(0, 0, clamp(size * 0.05, 12, 30), foot, h - shadeH, 1),
-    { ...legPart(0, 0, size * 0.8, h - shadeH, h, 1.25, { colour: SHADE }), role: 'top' },
+    legPart(0, 0, size * 0.8, h - shadeH, h, 1.25, { colour: SHADE, role: 'top' }),
   ];
 }
 
@@ -35,9 +35,9 @@ export function tableLampForm(box: FormBox): Part[] {
   const baseH = h * 0.35;
   const shadeH = h * 0.4;
   return [
-    { ...legPart(0, 0, size * 0.4, 0, baseH, 1.3, { slot: 'main' }), role: 'body' },
+    legPart(0, 0, size * 0.4, 0, baseH, 1.3, { slot: 'main', role: 'body' }),
     legPart(0, 0, clamp(size * 0.06, 8, 25), baseH, h - shadeH, 1),
-    { ...legPart(0, 0, size * 0.78, h - shadeH, h, 1.28, { colour: SHADE }), role: 'top' },
+    legPart(0, 0, size * 0.78, h - shadeH, h, 1.28, { colour: SHADE, role: 'top' }),
   ];
 }
 
@@ -48,9 +48,9 @@ export function pendantLightForm(box: FormBox): Part[] {
   const rose = clamp(h * 0.03, 10, 30);
   const shadeH = clamp(h * 0.35, 60, Math.max(60, h - rose - 20));
   return [
-    { ...discPart(0, 0, size * 0.3, h - rose, h, { slot: 'accent' }), role: 'hanging' },
-    { ...legPart(0, 0, clamp(size * 0.02, 4, 10), shadeH, h - rose, 1), role: 'hanging' },
-    { ...legPart(0, 0, size / 1.6, 0, shadeH, 1.6, { slot: 'main' }), role: 'hanging' },
+    discPart(0, 0, size * 0.3, h - rose, h, { slot: 'accent', role: 'hanging' }),
+    legPart(0, 0, clamp(size * 0.02, 4, 10), shadeH, h - rose, 1, { role: 'hanging' }),
+    legPart(0, 0, size / 1.6, 0, shadeH, 1.6, { slot: 'main', role: 'hanging' }),
   ];
 }
 
@@ -95,14 +95,14 @@ export function plantForm(box: FormBox): Part[] {
   const potH = clamp(h * 0.3, 40, 500);
   const trunkH = (h - potH) * 0.2;
   const parts: Part[] = [
-    { ...legPart(0, 0, size * 0.6, 0, potH, 0.75, { slot: 'main' }), role: 'body' },
+    legPart(0, 0, size * 0.6, 0, potH, 0.75, { slot: 'main', role: 'body' }),
     legPart(0, 0, clamp(size * 0.06, 8, 40), potH, potH + trunkH, 1, { colour: TRUNK }),
   ];
   const tiers = [1, 0.78, 0.5];
   let z = potH + trunkH;
   const tierH = (h - z) / tiers.length;
   tiers.forEach((share, i) => {
-    parts.push({ ...discPart(0, 0, size * share, z, z + tierH, { colour: LEAVES[i] }), role: 'top' });
+    parts.push(discPart(0, 0, size * share, z, z + tierH, { colour: LEAVES[i], role: 'top' }));
     z += tierH;
   });
   return parts;

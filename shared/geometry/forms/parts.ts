@@ -53,32 +53,66 @@ export type FormBuilder = (box: FormBox, settings: PieceSettings) => Part[];
 
 type PartOptions = { slot?: MaterialSlot; role?: PartRole; colour?: string };
 
+/**
+ * Every part is made here, all its fields set in one order (those it has no use for undefined), so
+ * that every part has the same shape to the engine: code reading parts then meets one shape rather
+ * than one per kind of part, which is what a room's first build, before anything is compiled,
+ * spends much of its time learning.
+ */
+function makePart(
+  shape: PartShape,
+  x: number,
+  y: number,
+  z: number,
+  w: number,
+  d: number,
+  h: number,
+  slot: MaterialSlot,
+  role: PartRole,
+  radius: number | undefined,
+  colour: string | undefined,
+  taper: number | undefined,
+): Part {
+  return { shape, x, y, z, w, d, h, slot, role, radius, colour, taper };
+}
+
+/** A part of `shape` from its x, y, z extents; a colour makes it an own-coloured part. */
+function extentsPart(
+  shape: PartShape,
+  x0: number,
+  x1: number,
+  y0: number,
+  y1: number,
+  z0: number,
+  z1: number,
+  o: PartOptions,
+  radius: number | undefined,
+): Part {
+  const colour = o.colour ? o.colour : undefined;
+  return makePart(
+    shape,
+    (x0 + x1) / 2,
+    (y0 + y1) / 2,
+    z0,
+    x1 - x0,
+    y1 - y0,
+    z1 - z0,
+    colour ? 'own' : (o.slot ?? 'main'),
+    o.role ?? 'body',
+    radius,
+    colour,
+    undefined,
+  );
+}
+
 /** A box from its x, y, z extents (piece frame mm). */
 export function boxPart(x0: number, x1: number, y0: number, y1: number, z0: number, z1: number, o: PartOptions = {}): Part {
-  const part: Part = {
-    shape: 'box',
-    x: (x0 + x1) / 2,
-    y: (y0 + y1) / 2,
-    z: z0,
-    w: x1 - x0,
-    d: y1 - y0,
-    h: z1 - z0,
-    slot: o.slot ?? 'main',
-    role: o.role ?? 'body',
-  };
-  if (o.colour) {
-    part.slot = 'own';
-    part.colour = o.colour;
-  }
-  return part;
+  return extentsPart('box', x0, x1, y0, y1, z0, z1, o, undefined);
 }
 
 /** A thin board from its extents (its thinnest side is the panel's thickness). */
 export function panelPart(x0: number, x1: number, y0: number, y1: number, z0: number, z1: number, o: PartOptions = {}): Part {
-  // The box itself, its shape changed in place: the same fields in the same order as a copy, without copying.
-  const part = boxPart(x0, x1, y0, y1, z0, z1, o);
-  part.shape = 'panel';
-  return part;
+  return extentsPart('panel', x0, x1, y0, y1, z0, z1, o, undefined);
 }
 
 /** A box with rounded plan corners, at most half its shorter side. */
@@ -93,10 +127,7 @@ export function roundedPart(
   o: PartOptions = {},
 ): Part {
   const r = Math.max(0, Math.min(radius, (x1 - x0) / 2, (y1 - y0) / 2));
-  const part = boxPart(x0, x1, y0, y1, z0, z1, o);
-  part.shape = 'rounded';
-  part.radius = r;
-  return part;
+  return extentsPart('rounded', x0, x1, y0, y1, z0, z1, o, r);
 }
 
 /** A disc or drum of diameter `diameter` centred at (x, y). */
@@ -106,24 +137,14 @@ export function discPart(x: number, y: number, diameter: number, z0: number, z1:
 
 /** An upright round post at (x, y), `diameter` at its top, from z0 to z1; `taper` is its foot's share of that. */
 export function legPart(x: number, y: number, diameter: number, z0: number, z1: number, taper = 1, o: PartOptions = {}): Part {
-  const part: Part = {
-    shape: 'leg',
-    x,
-    y,
-    z: z0,
-    w: diameter,
-    d: diameter,
-    h: z1 - z0,
-    slot: o.slot ?? 'accent',
-    role: o.role ?? 'leg',
-    taper,
-  };
-  if (o.colour) {
-    part.slot = 'own';
-    part.colour = o.colour;
-  }
-  return part;
+  const colour = o.colour ? o.colour : undefined;
+  const slot = colour ? 'own' : (o.slot ?? 'accent');
+  return makePart('leg', x, y, z0, diameter, diameter, z1 - z0, slot, o.role ?? 'leg', undefined, colour, taper);
 }
+
+/** `p` moved to (x, y) with plan sides w × d, everything else as it is. */
+const placedAs = (p: Part, x: number, y: number, w: number, d: number): Part =>
+  makePart(p.shape, x, y, p.z, w, d, p.h, p.slot, p.role, p.radius, p.colour, p.taper);
 
 /** Four legs inset `inset` from the corners of the rectangle x0..x1, y0..y1, from the floor up to `top`. */
 export function fourLegs(
@@ -152,18 +173,18 @@ export function turnParts(parts: readonly Part[], quarters: number): Part[] {
   return parts.map((p) => {
     let { x, y, w, d } = p;
     for (let i = 0; i < q; i++) [x, y, w, d] = [-y, x, d, w];
-    return { ...p, x, y, w, d };
+    return placedAs(p, x, y, w, d);
   });
 }
 
 /** Parts moved by (dx, dy) on the plan. */
 export function moveParts(parts: readonly Part[], dx: number, dy: number): Part[] {
-  return parts.map((p) => ({ ...p, x: p.x + dx, y: p.y + dy }));
+  return parts.map((p) => placedAs(p, p.x + dx, p.y + dy, p.w, p.d));
 }
 
 /** Parts mirrored left to right (x → −x). */
 export function mirrorParts(parts: readonly Part[]): Part[] {
-  return parts.map((p) => ({ ...p, x: -p.x }));
+  return parts.map((p) => placedAs(p, -p.x, p.y, p.w, p.d));
 }
 
 /** `value` held between lo and hi. */

@@ -81,20 +81,32 @@ export interface PieceFormData {
  * an earlier build are counted first, then written once into one buffer of that size.
  */
 export function buildPieceForms(pieces: readonly Piece[]): PieceFormData[] {
-  const placed = pieces.filter((p) => p.placed);
-  const plans = placed.map(planOf);
-  const meshes = placed.map((p, i) => keptFor(p, plans[i]!));
+  const placed: Piece[] = [];
+  const plans: FormPlan[] = [];
+  const meshes: (FormMeshes | undefined)[] = [];
   let size = 0;
-  for (let i = 0; i < placed.length; i++) if (!meshes[i]) size += plans[i]!.size;
+  for (const p of pieces) {
+    if (!p.placed) continue;
+    const plan = planOf(p);
+    const kept = keptFor(p, plan);
+    placed.push(p);
+    plans.push(plan);
+    meshes.push(kept);
+    if (!kept) size += plan.size;
+  }
   const buffer = new ArrayBuffer(size * 4);
   let at = 0;
-  placed.forEach((p, i) => {
-    if (meshes[i]) return;
-    const plan = plans[i]!;
-    const made = writeForm(plan, p, buffer, at);
-    at += plan.size;
-    keep(p, plan, made);
-    meshes[i] = made;
-  });
-  return placed.map((p, i) => ({ id: p.id, meshes: meshes[i]! }));
+  const built: PieceFormData[] = [];
+  for (let i = 0; i < placed.length; i++) {
+    const p = placed[i]!;
+    let made = meshes[i];
+    if (!made) {
+      const plan = plans[i]!;
+      made = writeForm(plan, p, buffer, at);
+      at += plan.size;
+      keep(p, plan, made);
+    }
+    built.push({ id: p.id, meshes: made });
+  }
+  return built;
 }
