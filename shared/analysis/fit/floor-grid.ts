@@ -72,28 +72,29 @@ export function cellAt(grid: FloorGrid, p: Vec2): number {
   return j * grid.nx + i;
 }
 
+/** Where a grid lies and how fine it is: as FloorGrid, without the labels. */
+export type GridFrame = Omit<FloorGrid, 'label'>;
+
 /**
- * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm (coarser where the room
- * would need more than MAX_GRID_CELLS; the grid's cellMm says which): a cell is free when its
- * centre is inside the outline and in no obstacle. The first box to cover a cell names it. With
- * `keptAs`, the labels go in the working array of that name (`scratch`), which the next grid made
- * under the same name overwrites: for a check that is done with its grid before it returns.
+ * The frame of the grid over an outline's bounds (plan mm) with cells of requestedCellMm, coarser
+ * where the room would need more than MAX_GRID_CELLS, and PAD_CELLS of blocked cells all round.
  */
-export function rasteriseFloor(
-  outline: readonly Vec2[],
-  obstacles: readonly PieceBox[],
-  requestedCellMm: number,
-  keptAs?: string,
-): FloorGrid {
+export function gridFrame(outline: readonly Vec2[], requestedCellMm: number): GridFrame {
   const bounds = boundsMm(outline);
   const cellMm = gridCellMm(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY, requestedCellMm);
-  const originX = bounds.minX - PAD_CELLS * cellMm;
-  const originY = bounds.minY - PAD_CELLS * cellMm;
-  const nx = Math.ceil((bounds.maxX - bounds.minX) / cellMm) + 2 * PAD_CELLS;
-  const ny = Math.ceil((bounds.maxY - bounds.minY) / cellMm) + 2 * PAD_CELLS;
-  const label = (keptAs === undefined ? new Int32Array(nx * ny) : scratch(keptAs, int32, nx * ny)).fill(WALL);
-  const grid: FloorGrid = { cellMm, nx, ny, originX, originY, label };
+  return {
+    cellMm,
+    nx: Math.ceil((bounds.maxX - bounds.minX) / cellMm) + 2 * PAD_CELLS,
+    ny: Math.ceil((bounds.maxY - bounds.minY) / cellMm) + 2 * PAD_CELLS,
+    originX: bounds.minX - PAD_CELLS * cellMm,
+    originY: bounds.minY - PAD_CELLS * cellMm,
+  };
+}
 
+/** Labels every cell of a frame WALL, then FREE where its centre is inside the outline (plan mm). */
+export function rasteriseOutline(outline: readonly Vec2[], frame: GridFrame, label: Int32Array): void {
+  const { nx, ny, cellMm, originX, originY } = frame;
+  label.fill(WALL);
   // Scanlines through the cell centres: fill between pairs of outline crossings (even-odd).
   const crossings: number[] = [];
   for (let j = 0; j < ny; j++) {
@@ -111,7 +112,11 @@ export function rasteriseFloor(
       label.fill(FREE, j * nx + from, j * nx + to + 1);
     }
   }
+}
 
+/** Labels the free cells whose centre lies in an obstacle box with the box's index; the first box to cover a cell names it. */
+export function rasteriseObstacles(frame: GridFrame, obstacles: readonly PieceBox[], label: Int32Array): void {
+  const { nx, ny, cellMm, originX, originY } = frame;
   obstacles.forEach((box, index) => {
     const b = boundsMm(box.corners);
     const i0 = Math.max(0, Math.floor((b.minX - originX) / cellMm));
@@ -132,7 +137,27 @@ export function rasteriseFloor(
       }
     }
   });
-  return grid;
+}
+
+/**
+ * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm (coarser where the room
+ * would need more than MAX_GRID_CELLS; the grid's cellMm says which): a cell is free when its
+ * centre is inside the outline and in no obstacle. The first box to cover a cell names it. With
+ * `keptAs`, the labels go in the working array of that name (`scratch`), which the next grid made
+ * under the same name overwrites: for a check that is done with its grid before it returns.
+ */
+export function rasteriseFloor(
+  outline: readonly Vec2[],
+  obstacles: readonly PieceBox[],
+  requestedCellMm: number,
+  keptAs?: string,
+): FloorGrid {
+  const frame = gridFrame(outline, requestedCellMm);
+  const cells = frame.nx * frame.ny;
+  const label = keptAs === undefined ? new Int32Array(cells) : scratch(keptAs, int32, cells);
+  rasteriseOutline(outline, frame, label);
+  rasteriseObstacles(frame, obstacles, label);
+  return { ...frame, label };
 }
 
 /**
@@ -142,7 +167,7 @@ export function rasteriseFloor(
  * handed out again by the next call under its name, so a check uses what it asks for before the
  * next check starts (checks run one at a time on a thread).
  */
-const KEPT_SCRATCH_CELLS = 250_000;
+export const KEPT_SCRATCH_CELLS = 250_000;
 const kept = new Map<string, Float64Array | Int32Array>();
 
 /** A working array of `cells` entries under `name`, with whatever it held before: callers fill it. */
@@ -169,79 +194,122 @@ export interface DistanceField {
 }
 
 /**
+ * The column pass of the distance transform over columns i0..i1: for each of their cells, the row
+ * of the nearest blocked cell straight up or down the column (the upper one of two as near; −1 when
+ * the column has none, never so on a padded grid). The columns are swept at once, a row at a time,
+ * so the arrays are read in the order they lie in memory. With `changedRows`, every row whose
+ * answer changed in any of these columns is marked 1.
+ */
+export function nearestRowsInColumns(
+  grid: FloorGrid,
+  columnRow: Int32Array,
+  i0: number,
+  i1: number,
+  changedRows: Uint8Array | null,
+): void {
+  const { nx, ny, label } = grid;
+  const width = i1 - i0 + 1;
+  // The nearest blocked row at or above each cell, kept apart so the answers before can be compared.
+  const above = scratch('column-above', int32, width * ny);
+  const last = scratch('column-last', int32, width).fill(-1);
+  for (let j = 0; j < ny; j++) {
+    const row = j * nx + i0;
+    const at = j * width;
+    for (let c = 0; c < width; c++) {
+      if (label[row + c] !== FREE) last[c] = j;
+      above[at + c] = last[c]!;
+    }
+  }
+  const next = last.fill(-1);
+  for (let j = ny - 1; j >= 0; j--) {
+    const row = j * nx + i0;
+    const at = j * width;
+    for (let c = 0; c < width; c++) {
+      const cell = row + c;
+      if (label[cell] !== FREE) next[c] = j;
+      const below = next[c]!;
+      const up = above[at + c]!;
+      const nearestRow = up < 0 || (below >= 0 && below - j < j - up) ? below : up;
+      if (changedRows && columnRow[cell] !== nearestRow) changedRows[j] = 1;
+      columnRow[cell] = nearestRow;
+    }
+  }
+}
+
+/**
+ * The row pass of the distance transform for row j (Felzenszwalb and Huttenlocher's lower envelope
+ * of parabolas (x − q)² + column distance² over the columns q): each cell's nearest blocked cell,
+ * its distance (cells) and, given `squared`, its square. `sites` and `bounds` are working arrays of
+ * at least nx and nx + 1 entries, `rise` of nx.
+ */
+export function nearestInRow(
+  grid: FloorGrid,
+  j: number,
+  columnRow: Int32Array,
+  root: Float64Array,
+  nearest: Int32Array,
+  squared: Float64Array | null,
+  work: { sites: Int32Array; bounds: Float64Array; rise: Float64Array },
+): void {
+  const { nx } = grid;
+  const { sites, bounds, rise } = work;
+  const row = j * nx;
+  let k = -1;
+  for (let q = 0; q < nx; q++) {
+    const rowQ = columnRow[row + q]!;
+    if (rowQ < 0) continue;
+    const riseQ = (rowQ - j) * (rowQ - j);
+    rise[q] = riseQ;
+    const fq = riseQ + q * q;
+    let s = -Infinity;
+    while (k >= 0) {
+      const p = sites[k]!;
+      s = (fq - (rise[p]! + p * p)) / (2 * (q - p));
+      if (s > bounds[k]!) break;
+      k--;
+    }
+    k++;
+    sites[k] = q;
+    bounds[k] = k === 0 ? -Infinity : s;
+    bounds[k + 1] = Infinity;
+  }
+  if (k < 0) {
+    // No blocked cell in any column: nothing is near (a grid without its padding).
+    squared?.fill(Infinity, row, row + nx);
+    root.fill(Infinity, row, row + nx);
+    nearest.fill(-1, row, row + nx);
+    return;
+  }
+  let at = 0;
+  for (let x = 0; x < nx; x++) {
+    while (bounds[at + 1]! < x) at++;
+    const q = sites[at]!;
+    const squaredCells = (x - q) * (x - q) + rise[q]!;
+    if (squared) squared[row + x] = squaredCells;
+    root[row + x] = Math.sqrt(squaredCells);
+    nearest[row + x] = columnRow[row + q]! * nx + q;
+  }
+}
+
+/** Working arrays for nearestInRow on a grid nx cells wide. */
+export function rowWork(nx: number): { sites: Int32Array; bounds: Float64Array; rise: Float64Array } {
+  return { sites: new Int32Array(nx), bounds: new Float64Array(nx + 1), rise: new Float64Array(nx) };
+}
+
+/**
  * Exact Euclidean distance transform of the blocked cells (Felzenszwalb and Huttenlocher's lower
  * envelope of parabolas, one pass down the columns and one along the rows), keeping the nearest
  * blocked cell so a gap can be traced to what bounds it. Linear in the number of cells.
  */
 export function distanceField(grid: FloorGrid): DistanceField {
-  const { nx, ny, label } = grid;
+  const { nx, ny } = grid;
   const cells = nx * ny;
-  // Columns: the row of the nearest blocked cell straight up or down (−1: the column has none, never
-  // so on a padded grid); its squared distance is worked out from the row where it is needed. Every
-  // column is swept at once, a row at a time, so the array is read in the order it lies in memory.
   const columnRow = scratch('column-row', int32, cells);
-  const lastBlocked = new Int32Array(nx).fill(-1);
-  for (let j = 0; j < ny; j++) {
-    const row = j * nx;
-    for (let i = 0; i < nx; i++) {
-      if (label[row + i] !== FREE) lastBlocked[i] = j;
-      columnRow[row + i] = lastBlocked[i]!;
-    }
-  }
-  const nextBlocked = lastBlocked.fill(-1);
-  for (let j = ny - 1; j >= 0; j--) {
-    const rowStart = j * nx;
-    for (let i = 0; i < nx; i++) {
-      const cell = rowStart + i;
-      if (label[cell] !== FREE) nextBlocked[i] = j;
-      const next = nextBlocked[i]!;
-      const above = columnRow[cell]!;
-      columnRow[cell] = above < 0 || (next >= 0 && next - j < j - above) ? next : above;
-    }
-  }
-  // Rows: the lower envelope of parabolas (x − q)² + column distance² over the columns q.
+  nearestRowsInColumns(grid, columnRow, 0, nx - 1, null);
   const squaredCells = scratch('squared-cells', float64, cells);
   const root = scratch('distance-cells', float64, cells);
   const nearest = scratch('nearest', int32, cells);
-  const sites = new Int32Array(nx);
-  const bounds = new Float64Array(nx + 1);
-  for (let j = 0; j < ny; j++) {
-    const row = j * nx;
-    let k = -1;
-    for (let q = 0; q < nx; q++) {
-      const rowQ = columnRow[row + q]!;
-      if (rowQ < 0) continue;
-      const fq = (rowQ - j) * (rowQ - j) + q * q;
-      let s = -Infinity;
-      while (k >= 0) {
-        const p = sites[k]!;
-        const rowP = columnRow[row + p]!;
-        s = (fq - ((rowP - j) * (rowP - j) + p * p)) / (2 * (q - p));
-        if (s > bounds[k]!) break;
-        k--;
-      }
-      k++;
-      sites[k] = q;
-      bounds[k] = k === 0 ? -Infinity : s;
-      bounds[k + 1] = Infinity;
-    }
-    if (k < 0) {
-      // No blocked cell in any column: nothing is near (a grid without its padding).
-      squaredCells.fill(Infinity, row, row + nx);
-      root.fill(Infinity, row, row + nx);
-      nearest.fill(-1, row, row + nx);
-      continue;
-    }
-    let at = 0;
-    for (let x = 0; x < nx; x++) {
-      while (bounds[at + 1]! < x) at++;
-      const q = sites[at]!;
-      const rowQ = columnRow[row + q]!;
-      const squared = (x - q) * (x - q) + (rowQ - j) * (rowQ - j);
-      squaredCells[row + x] = squared;
-      root[row + x] = Math.sqrt(squared);
-      nearest[row + x] = rowQ * nx + q;
-    }
-  }
+  const work = rowWork(nx);
+  for (let j = 0; j < ny; j++) nearestInRow(grid, j, columnRow, root, nearest, squaredCells, work);
   return { squaredCells, cells: root, nearest };
 }

@@ -20,8 +20,9 @@ import type { Finding } from './finding';
 import { blocksWalking } from '../../geometry/piece';
 import { pointInPolygon } from '../../geometry/polygon';
 import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from './boxes';
-import { cellAt, cellCentreMm, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
-import { routeNarrowest, widestRoutes, Widths } from './walkway-grid';
+import { cellAt, cellCentreMm, FREE, WALL, type FloorGrid } from './floor-grid';
+import { routeNarrowest, widestRoutes } from './walkway-grid';
+import { floorWidths } from './walkway-widths';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
 import { itemAt } from '../../item-at';
 
@@ -113,7 +114,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
   const { filled, owner } = withSeatGaps(obstacles);
-  const grid = rasteriseFloor(outline, filled, WALKWAY_CELL_MM, 'walkway-label');
+  const widths = floorWidths(outline, filled, WALKWAY_CELL_MM, walkwayMm);
+  const grid = widths.grid;
   const ownerOf = (side: number) => (side === WALL ? WALL : itemAt(owner, side, 'obstacle'));
 
   // The floor cells just inside each way in, sampled every half cell along its width.
@@ -129,7 +131,6 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     }
   });
   const limitMm = Math.ceil(walkwayMm);
-  const widths = new Widths(grid, walkwayMm);
   const routes = widestRoutes(grid, widths, sources, limitMm);
 
   const findings: Finding[] = [];

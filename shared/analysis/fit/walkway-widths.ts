@@ -1,0 +1,509 @@
+// The clear width at every free cell of the floor grid, for the walkway check, and how it is kept
+// up to date from one check to the next: a drag moves one piece, so only the floor near it (and the
+// cells whose nearest obstacle or straight runs it changed) is measured again. Plan mm, x right,
+// y down; cells as in floor-grid.ts.
+import type { Vec2 } from '../../geometry/vec';
+import type { PieceBox } from './boxes';
+import {
+  cellCentreMm,
+  FREE,
+  gridFrame,
+  KEPT_SCRATCH_CELLS,
+  nearestInRow,
+  nearestRowsInColumns,
+  rasteriseObstacles,
+  rasteriseOutline,
+  rowWork,
+  WALL,
+  type FloorGrid,
+} from './floor-grid';
+
+/** Samples along a ray, in cells, starting at the next cell's centre: on a square room's grid they
+ * land on cell centres, so a hit puts the edge half a step back. A whole-cell step may pass the
+ * corner of an obstacle thinner than a cell on a slant; pieces are thicker than that. */
+const RAY_STEP_CELLS = 1;
+/** How much shorter than twice the distance to the nearest blocked centre a chord can be, in cells: 1 + √½ for the chord across, √2 for a diagonal run, rounded up. */
+const CHORD_SHORTFALL_CELLS = 1.75;
+/** Kept back from a skip ahead along a ray, in cells: twice the √½ cell a sample may stray from a centre, rounded up. */
+const RAY_SKIP_MARGIN_CELLS = 1.5;
+/**
+ * When the floor that changed since the last check, with the reach of a ray round it, covers more
+ * than this share of the grid, every width is measured afresh: sorting out what moved would cost more.
+ */
+const FRESH_SHARE = 0.5;
+
+export interface Gap {
+  /** Obstacle labels either side: a box index, or WALL. */
+  sides: [number, number];
+  /** Plan points on each side (mm). */
+  ends: [[number, number], [number, number]];
+}
+
+/** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
+const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [
+  [1, 0],
+  [0, 1],
+  [1, 1],
+  [1, -1],
+];
+/** Length of one step of each run direction, in cells. */
+const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
+
+/**
+ * The clear width at each free cell: the shortest chord through it from obstacle to obstacle. One
+ * chord runs from the nearest obstacle straight across (at a piece's face, the room in front of it;
+ * between two pieces, the gap wherever in the gap the cell lies); four more run along x, y and the
+ * diagonals, so the end of a recess reads as narrow as its middle. A chord with a wall at both ends
+ * is the room's own shape (a doorway's reveals, an alcove): the designer cannot move it, so it does
+ * not count.
+ *
+ * Every free cell's width, up to the walkway width, is worked out when the widths are made and kept
+ * in `keyMm` for the search; `update` takes the next labels of the same room and measures again
+ * only what they change. A width depends on the cell's nearest blocked cell, its four straight runs
+ * and the cells its chord across passes (all within the walkway width of it), nothing else; so a
+ * width is measured again exactly where one of those changed, and every width reads as it would
+ * measured afresh.
+ */
+export class Widths {
+  /** The floor grid the widths are of; its labels are the latest given. */
+  readonly grid: FloorGrid;
+  /** Whole-mm width capped at the walkway width (rounded up), at every free cell: what the search reads. */
+  readonly keyMm: Int32Array;
+  /**
+   * At each free cell, the larger of keyMm and twice the distance to the nearest obstacle in whole
+   * mm (capped alike): a route at most this wide is not narrowed there. The two mostly agree; where
+   * the chord across comes out a little under the nearest-obstacle figure, the search goes by the
+   * latter until the route is narrower than it.
+   */
+  readonly gateMm: Int32Array;
+  /** Distance (cells) from each cell's centre to the nearest blocked centre. */
+  readonly distanceCells: Float64Array;
+  private readonly limitMm: number;
+  private readonly nx: number;
+  private readonly ny: number;
+  private readonly cellMm: number;
+  private readonly cells: number;
+  /** Exact width (mm) at each cell, NaN until measured. */
+  private readonly widthMm: Float64Array;
+  /** 1 where the cell's width was measured with a ray across: it depends on the floor that ray passed. */
+  private readonly rayCast: Uint8Array;
+  private readonly columnRow: Int32Array;
+  private readonly nearest: Int32Array;
+  /** Free cells in the run through each cell along each run direction; 0 where the run does not count (walls at both ends). */
+  private readonly runCells: Int32Array[];
+  private readonly shortestRunMm: Float64Array;
+  private readonly rowWork: ReturnType<typeof rowWork>;
+  /** Cells to measure again in an update, each listed once (`listed` marks them). */
+  private readonly toMeasure: Int32Array;
+  private readonly listed: Uint8Array;
+  private measureCount = 0;
+  /** Set by `ray`: the blocked cell it met. */
+  private rayHit = -1;
+
+  constructor(
+    grid: FloorGrid,
+    /** Widths at or beyond this (mm) are wide enough; they are not measured further. */
+    private readonly enoughMm: number,
+  ) {
+    this.grid = { ...grid };
+    this.limitMm = Math.ceil(enoughMm);
+    const { nx, ny, cellMm } = grid;
+    this.nx = nx;
+    this.ny = ny;
+    this.cellMm = cellMm;
+    const cells = nx * ny;
+    this.cells = cells;
+    this.keyMm = new Int32Array(cells);
+    this.gateMm = new Int32Array(cells);
+    this.distanceCells = new Float64Array(cells);
+    this.widthMm = new Float64Array(cells);
+    this.rayCast = new Uint8Array(cells);
+    this.columnRow = new Int32Array(cells);
+    this.nearest = new Int32Array(cells);
+    this.runCells = RUN_DIRECTIONS.map(() => new Int32Array(cells));
+    this.shortestRunMm = new Float64Array(cells);
+    this.rowWork = rowWork(nx);
+    this.toMeasure = new Int32Array(cells);
+    this.listed = new Uint8Array(cells);
+    this.measureAll();
+  }
+
+  /** Every measure afresh from the grid's labels. */
+  private measureAll(): void {
+    const { nx, ny, grid, cells } = this;
+    nearestRowsInColumns(grid, this.columnRow, 0, nx - 1, null);
+    for (let j = 0; j < ny; j++) nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork);
+    for (let k = 0; k < RUN_DIRECTIONS.length; k++) this.runsAlongAll(k);
+    for (let cell = 0; cell < cells; cell++) this.shortestRunMm[cell] = this.shortestOf(cell);
+    this.widthMm.fill(NaN);
+    const label = grid.label;
+    for (let cell = 0; cell < cells; cell++) if (label[cell] === FREE) this.settle(cell);
+  }
+
+  /**
+   * Takes the next labels of the same room (a grid of the same frame) and measures again what they
+   * change. Returns the labels array given before, for the caller to fill next time.
+   */
+  update(label: Int32Array): Int32Array {
+    const before = this.grid.label;
+    this.grid.label = label;
+    const { nx, ny, cells } = this;
+    // The box of cells that turned free or blocked (walls stay where the room has them).
+    let i0 = nx;
+    let i1 = -1;
+    let j0 = ny;
+    let j1 = -1;
+    for (let j = 0, cell = 0; j < ny; j++) {
+      for (let i = 0; i < nx; i++, cell++) {
+        if ((label[cell] === FREE) === (before[cell] === FREE)) continue;
+        if (i < i0) i0 = i;
+        if (i > i1) i1 = i;
+        if (j < j0) j0 = j;
+        if (j > j1) j1 = j;
+      }
+    }
+    if (i1 < 0) return before;
+    // A ray across looks no further than the walkway width, rounded to cells, from a sample that
+    // strays up to half a cell from the line: every cell whose ray may pass a changed cell.
+    const reach = Math.ceil(this.enoughMm / this.cellMm) + 2;
+    const r0 = Math.max(0, i0 - reach);
+    const r1 = Math.min(nx - 1, i1 + reach);
+    const s0 = Math.max(0, j0 - reach);
+    const s1 = Math.min(ny - 1, j1 + reach);
+    if ((r1 - r0 + 1) * (s1 - s0 + 1) > FRESH_SHARE * cells) {
+      this.measureAll();
+      return before;
+    }
+    this.measureCount = 0;
+    this.updateNearest(i0, i1);
+    this.updateRuns(i0, i1, j0, j1);
+    const { rayCast } = this;
+    for (let j = s0; j <= s1; j++) {
+      for (let cell = j * nx + r0, last = j * nx + r1; cell <= last; cell++) {
+        if (rayCast[cell] === 1) this.list(cell);
+      }
+    }
+    const { toMeasure, listed } = this;
+    for (let k = 0; k < this.measureCount; k++) {
+      const cell = toMeasure[k]!;
+      listed[cell] = 0;
+      if (label[cell] === FREE) this.settle(cell);
+    }
+    return before;
+  }
+
+  private list(cell: number): void {
+    if (this.listed[cell] === 1) return;
+    this.listed[cell] = 1;
+    this.toMeasure[this.measureCount++] = cell;
+  }
+
+  /** The distance transform again over the columns i0..i1 and every row whose column answers they change; cells whose nearest blocked cell moved are listed. */
+  private updateNearest(i0: number, i1: number): void {
+    const { nx, ny, grid, columnRow, nearest } = this;
+    const changedRows = new Uint8Array(ny);
+    nearestRowsInColumns(grid, columnRow, i0, i1, changedRows);
+    const was = new Int32Array(nx);
+    for (let j = 0; j < ny; j++) {
+      if (changedRows[j] === 0) continue;
+      const row = j * nx;
+      was.set(nearest.subarray(row, row + nx));
+      nearestInRow(grid, j, columnRow, this.distanceCells, nearest, null, this.rowWork);
+      for (let i = 0; i < nx; i++) if (nearest[row + i] !== was[i]) this.list(row + i);
+    }
+  }
+
+  /** The straight runs again along every line that passes within a cell of the box i0..i1 × j0..j1; cells whose shortest run changed are listed. */
+  private updateRuns(i0: number, i1: number, j0: number, j1: number): void {
+    const { nx, ny } = this;
+    const a0 = Math.max(0, i0 - 1);
+    const a1 = Math.min(nx - 1, i1 + 1);
+    const b0 = Math.max(0, j0 - 1);
+    const b1 = Math.min(ny - 1, j1 + 1);
+    const touched: number[] = [];
+    for (let j = b0; j <= b1; j++) this.runsAlong(0, j * nx, nx, touched);
+    for (let i = a0; i <= a1; i++) this.runsAlong(1, i, ny, touched);
+    // Down-right diagonals by i − j, up-right ones by i + j.
+    for (let d = a0 - b1; d <= a1 - b0; d++) {
+      const i = Math.max(0, d);
+      const j = i - d;
+      this.runsAlong(2, j * nx + i, Math.min(nx - i, ny - j), touched);
+    }
+    for (let s = a0 + b0; s <= a1 + b1; s++) {
+      const j = Math.min(ny - 1, s);
+      const i = s - j;
+      this.runsAlong(3, j * nx + i, Math.min(nx - i, j + 1), touched);
+    }
+    for (const cell of touched) {
+      const shortest = this.shortestOf(cell);
+      if (shortest !== this.shortestRunMm[cell]) {
+        this.shortestRunMm[cell] = shortest;
+        this.list(cell);
+      }
+    }
+  }
+
+  /** Every line of run direction k across the grid. */
+  private runsAlongAll(k: number): void {
+    const { nx, ny } = this;
+    if (k === 0) for (let j = 0; j < ny; j++) this.runsAlong(0, j * nx, nx, null);
+    else if (k === 1) for (let i = 0; i < nx; i++) this.runsAlong(1, i, ny, null);
+    else if (k === 2) {
+      for (let j = ny - 1; j > 0; j--) this.runsAlong(2, j * nx, Math.min(nx, ny - j), null);
+      for (let i = 0; i < nx; i++) this.runsAlong(2, i, Math.min(nx - i, ny), null);
+    } else {
+      for (let j = 0; j < ny; j++) this.runsAlong(3, j * nx, Math.min(nx, j + 1), null);
+      for (let i = 1; i < nx; i++) this.runsAlong(3, (ny - 1) * nx + i, Math.min(nx - i, ny), null);
+    }
+  }
+
+  /**
+   * The runs along one line of direction k, `length` cells from `start`: each stretch of free cells
+   * between two blocked ones gets its count of cells, or 0 with a wall at both ends. With `touched`,
+   * cells whose count changed are added to it.
+   */
+  private runsAlong(k: number, start: number, length: number, touched: number[] | null): void {
+    const [di, dj] = RUN_DIRECTIONS[k]!;
+    const step = dj * this.nx + di;
+    const label = this.grid.label;
+    const counts = this.runCells[k]!;
+    let back = -1;
+    for (let n = 0, cell = start; n < length; n++, cell += step) {
+      if (label[cell] === FREE) continue;
+      if (back >= 0 && cell !== back + step) {
+        const count = label[back] === WALL && label[cell] === WALL ? 0 : (cell - back) / step - 1;
+        for (let c = back + step; c !== cell; c += step) {
+          if (touched && counts[c] !== count) touched.push(c);
+          counts[c] = count;
+        }
+      }
+      if (touched && counts[cell] !== 0) touched.push(cell);
+      counts[cell] = 0;
+      back = cell;
+    }
+  }
+
+  /** The shortest of a cell's counted runs (mm), Infinity when none counts. */
+  private shortestOf(cell: number): number {
+    let shortest = Infinity;
+    for (let k = 0; k < 4; k++) {
+      const count = this.runCells[k]![cell]!;
+      if (count === 0) continue;
+      const runMm = count * this.cellMm * RUN_STEP_CELLS[k]!;
+      if (runMm < shortest) shortest = runMm;
+    }
+    return shortest;
+  }
+
+  /** Works out a free cell's key for the search: its width, measured where the nearest obstacle does not already leave the walkway width. */
+  private settle(cell: number): void {
+    this.widthMm[cell] = NaN;
+    this.rayCast[cell] = 0;
+    const { limitMm } = this;
+    const lowerMm = this.lowerBoundMm(cell);
+    if (lowerMm >= limitMm) {
+      this.keyMm[cell] = limitMm;
+      this.gateMm[cell] = limitMm;
+      return;
+    }
+    const widthMm = this.measure(cell);
+    const key = Math.floor(widthMm < limitMm ? widthMm : limitMm);
+    this.keyMm[cell] = key;
+    this.gateMm[cell] = Math.max(key, Math.floor(lowerMm));
+  }
+
+  /**
+   * Whether the width at a cell is already known to be more than widthMm, so it need not be
+   * measured exactly to be compared: the search's key k means at least k; and with d the distance
+   * (cells) to the nearest blocked centre, every chord is at least (2d − 1.71) cells long (a run's
+   * ends lie at least d away on either side, less one step of at most √2 cells; the chord across
+   * reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
+   */
+  knownWiderThan(cell: number, widthMm: number): boolean {
+    if (this.keyMm[cell]! > Math.floor(widthMm)) return true;
+    return (2 * this.distanceCells[cell]! - CHORD_SHORTFALL_CELLS) * this.cellMm > widthMm;
+  }
+
+  /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
+  lowerBoundMm(cell: number): number {
+    return 2 * (this.distanceCells[cell]! - 0.5) * this.cellMm;
+  }
+
+  /** Clear width (mm) at a free cell; Infinity where nothing movable bounds it within reach. */
+  at(cell: number): number {
+    const known = this.widthMm[cell]!;
+    if (known === known) return known;
+    return this.measure(cell);
+  }
+
+  /** Whether the clear width at a free cell is at most limitMm. */
+  atMost(cell: number, limitMm: number): boolean {
+    return this.at(cell) <= limitMm;
+  }
+
+  /**
+   * Distance (mm) from cell (i, j)'s centre to the edge of the first blocked cell along (ux, uy),
+   * looking no further than reachMm; the cell met is left in `rayHit`. Infinity when none is met.
+   * The samples are those of a step of a cell at a time however far it skips: a shorter look meets
+   * what a longer one would, if it meets anything.
+   */
+  private ray(i: number, j: number, ux: number, uy: number, reachMm: number): number {
+    const { nx, ny, cellMm } = this;
+    const label = this.grid.label;
+    const reachCells = reachMm / cellMm + 1;
+    const distance = this.distanceCells;
+    let t = RAY_STEP_CELLS;
+    while (t <= reachCells) {
+      // Cell coordinates: the blocked ring keeps them at zero or more, where |0 rounds like floor.
+      const ci = (i + ux * t + 0.5) | 0;
+      const cj = (j + uy * t + 0.5) | 0;
+      // Padding keeps a blocked ring round the room, so a ray always meets one before the grid ends.
+      const other = cj * nx + ci;
+      if (ci < 0 || cj < 0 || ci >= nx || cj >= ny || label[other] !== FREE) {
+        this.rayHit = other;
+        return (t - RAY_STEP_CELLS / 2) * cellMm;
+      }
+      // Skip ahead through open floor: no blocked centre lies nearer than this cell's distance, and
+      // a sample strays at most √½ cell from the centre it rounds to, on either end of the jump.
+      const skip = Math.floor(distance[other]! - RAY_SKIP_MARGIN_CELLS);
+      t += skip > RAY_STEP_CELLS ? skip : RAY_STEP_CELLS;
+    }
+    return Infinity;
+  }
+
+  private bothWalls(a: number, b: number): boolean {
+    const label = this.grid.label;
+    return label[a] === WALL && label[b] === WALL;
+  }
+
+  /** The chord across from the nearest obstacle: its length (mm), looking no further than reachMm; Infinity when none. Its far end is left in `rayHit`. */
+  private across(cell: number, reachMm: number): number {
+    const { nx, cellMm } = this;
+    const nearestCell = this.nearest[cell]!;
+    const d1 = this.distanceCells[cell]!;
+    const nearSideMm = (d1 - 0.5) * cellMm;
+    const i = cell % nx;
+    const j = (cell - i) / nx;
+    const farSideMm = this.ray(
+      i,
+      j,
+      (i - (nearestCell % nx)) / d1,
+      (j - Math.floor(nearestCell / nx)) / d1,
+      reachMm - nearSideMm,
+    );
+    return farSideMm < Infinity && !this.bothWalls(nearestCell, this.rayHit) ? nearSideMm + farSideMm : Infinity;
+  }
+
+  /**
+   * Whether the nearest blocked cell is in the cell's own row or column. Then the chord across runs
+   * along that row or column from the nearest blocked cell, sampling its cell centres one by one:
+   * it is the straight run there, to the same blocked cell and the same length (both are whole and
+   * half cells, exact in floating point), so it can never be shorter than the shortest run.
+   */
+  private inLineWithNearest(cell: number): boolean {
+    const nearestCell = this.nearest[cell]!;
+    const nx = this.nx;
+    return nearestCell % nx === cell % nx || Math.floor(nearestCell / nx) === Math.floor(cell / nx);
+  }
+
+  /**
+   * The exact width at a free cell, kept. The straight runs are known, so the chord across need
+   * only be looked for as far as it could still be the shorter: a chord found past that is longer
+   * than a run anyway.
+   */
+  private measure(cell: number): number {
+    const cellMm = this.cellMm;
+    const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
+    let widthMm: number;
+    if (2 * nearSideMm >= this.enoughMm) widthMm = 2 * nearSideMm;
+    else {
+      const runMm = this.shortestRunMm[cell]!;
+      // The far side lies at least half a cell off, so a run that short already wins.
+      if (runMm <= nearSideMm + cellMm / 2 || this.inLineWithNearest(cell)) widthMm = runMm;
+      else {
+        const acrossMm = this.across(cell, Math.min(this.enoughMm, runMm));
+        this.rayCast[cell] = 1;
+        widthMm = acrossMm < runMm ? acrossMm : runMm;
+      }
+    }
+    this.widthMm[cell] = widthMm;
+    return widthMm;
+  }
+
+  /** The obstacles at the two ends of a measured cell's chord and where they are (plan mm), or null if it is wide. */
+  gap(cell: number): Gap | null {
+    const { nx, cellMm } = this;
+    const label = this.grid.label;
+    const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
+    if (!Number.isFinite(this.at(cell)) || 2 * nearSideMm >= this.enoughMm) return null;
+    // The chord that gave the width: the one across first, then the runs in their order.
+    let widthMm = this.across(cell, this.enoughMm);
+    let endA = -1;
+    let endB = -1;
+    if (widthMm < Infinity) {
+      endA = this.nearest[cell]!;
+      endB = this.rayHit;
+    }
+    for (let k = 0; k < RUN_DIRECTIONS.length; k++) {
+      const [di, dj] = RUN_DIRECTIONS[k]!;
+      const step = dj * nx + di;
+      let back = cell - step;
+      while (label[back] === FREE) back -= step;
+      let ahead = cell + step;
+      while (label[ahead] === FREE) ahead += step;
+      const steps = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
+      const runMm = (steps - 1) * cellMm * RUN_STEP_CELLS[k]!;
+      if (runMm < widthMm && !this.bothWalls(back, ahead)) {
+        widthMm = runMm;
+        endA = back;
+        endB = ahead;
+      }
+    }
+    if (endA < 0) return null;
+    return {
+      sides: [label[endA]!, label[endB]!],
+      ends: [cellCentreMm(this.grid, endA), cellCentreMm(this.grid, endB)],
+    };
+  }
+}
+
+/** The widths last made, with the room they are of, for the next check of the same room. */
+let kept: { key: string; outline: Int32Array; spare: Int32Array; widths: Widths } | null = null;
+
+/**
+ * The floor grid of an outline and obstacle boxes (plan mm, cells of requestedCellMm as
+ * rasteriseFloor makes them) and the clear widths on it up to walkwayMm. The widths of the last
+ * check are kept (for grids up to KEPT_SCRATCH_CELLS) and, for the same room and walkway width,
+ * brought up to date instead of measured afresh: what is handed back is the same either way. The
+ * grid and widths are good until the next call (checks run one at a time on a thread).
+ */
+export function floorWidths(
+  outline: readonly Vec2[],
+  obstacles: readonly PieceBox[],
+  requestedCellMm: number,
+  walkwayMm: number,
+): Widths {
+  const key = `${requestedCellMm} ${walkwayMm} ${outline.map(([x, y]) => `${x},${y}`).join(' ')}`;
+  if (kept?.key === key) {
+    const label = kept.spare;
+    label.set(kept.outline);
+    rasteriseObstacles(kept.widths.grid, obstacles, label);
+    kept.spare = kept.widths.update(label);
+    return kept.widths;
+  }
+  kept = null;
+  const frame = gridFrame(outline, requestedCellMm);
+  const cells = frame.nx * frame.ny;
+  const bare = new Int32Array(cells);
+  rasteriseOutline(outline, frame, bare);
+  const label = Int32Array.from(bare);
+  rasteriseObstacles(frame, obstacles, label);
+  const widths = new Widths({ ...frame, label }, walkwayMm);
+  if (cells <= KEPT_SCRATCH_CELLS) kept = { key, outline: bare, spare: new Int32Array(cells), widths };
+  return widths;
+}
+
+/** Drops the kept widths, so the next check measures every width afresh (for benches and tests that time or compare that). */
+export function forgetKeptWidths(): void {
+  kept = null;
+}
