@@ -197,15 +197,16 @@ export interface DistanceField {
  * The column pass of the distance transform over columns i0..i1: for each of their cells, the row
  * of the nearest blocked cell straight up or down the column (the upper one of two as near; −1 when
  * the column has none, never so on a padded grid). The columns are swept at once, a row at a time,
- * so the arrays are read in the order they lie in memory. With `changedRows`, every row whose
- * answer changed in any of these columns is marked 1.
+ * so the arrays are read in the order they lie in memory. With `changed`, each row's first and
+ * last column whose answer changed go in changed.from and changed.to (left as they are in a row
+ * where none did: the caller fills them with nx and −1).
  */
 export function nearestRowsInColumns(
   grid: FloorGrid,
   columnRow: Int32Array,
   i0: number,
   i1: number,
-  changedRows: Uint8Array | null,
+  changed: { from: Int32Array; to: Int32Array } | null,
 ): void {
   const { nx, ny, label } = grid;
   const width = i1 - i0 + 1;
@@ -230,7 +231,10 @@ export function nearestRowsInColumns(
       const below = next[c]!;
       const up = above[at + c]!;
       const nearestRow = up < 0 || (below >= 0 && below - j < j - up) ? below : up;
-      if (changedRows && columnRow[cell] !== nearestRow) changedRows[j] = 1;
+      if (changed && columnRow[cell] !== nearestRow) {
+        if (i0 + c < changed.from[j]!) changed.from[j] = i0 + c;
+        changed.to[j] = i0 + c;
+      }
       columnRow[cell] = nearestRow;
     }
   }
@@ -312,4 +316,63 @@ export function distanceField(grid: FloorGrid): DistanceField {
   const work = rowWork(nx);
   for (let j = 0; j < ny; j++) nearestInRow(grid, j, columnRow, root, nearest, squaredCells, work);
   return { squaredCells, cells: root, nearest };
+}
+
+/**
+ * Brings row j of a distance transform up to date after the column answers (columnRow) of columns
+ * i0..i1 changed: root and nearest hold the row's answers from before, and onChanged hears of every
+ * cell whose nearest blocked cell is now another. The row pass picks, at each cell, the leftmost of
+ * the columns nearest to it (two parabolas meet at a rational point, which floating point tells
+ * apart from its neighbours and rounds alike whichever way it is worked out); so a cell whose
+ * nearest lay outside those columns, none of which can now come as near, keeps its answer, and any
+ * other takes the leftmost nearest column among those within its distance.
+ */
+export function refreshRowNearest(
+  grid: FloorGrid,
+  j: number,
+  columnRow: Int32Array,
+  i0: number,
+  i1: number,
+  root: Float64Array,
+  nearest: Int32Array,
+  onChanged: (cell: number) => void,
+): void {
+  const { nx } = grid;
+  const row = j * nx;
+  for (let x = 0; x < nx; x++) {
+    const was = nearest[row + x]!;
+    const wasColumn = was % nx;
+    const wasRow = (was - wasColumn) / nx;
+    const wasSquared = (x - wasColumn) * (x - wasColumn) + (wasRow - j) * (wasRow - j);
+    const fromChanged = wasColumn >= i0 && wasColumn <= i1;
+    if (!fromChanged) {
+      const off = x < i0 ? i0 - x : x > i1 ? x - i1 : 0;
+      if (off * off > wasSquared) continue;
+    }
+    // The nearest the changed columns now come: if no nearer than the old answer, it stands; else it bounds the search.
+    let bound = Infinity;
+    for (let q = i0; q <= i1; q++) {
+      const rowQ = columnRow[row + q]!;
+      if (rowQ < 0) continue;
+      const squared = (x - q) * (x - q) + (rowQ - j) * (rowQ - j);
+      if (squared < bound) bound = squared;
+    }
+    if (!fromChanged && bound > wasSquared) continue;
+    const span = Math.floor(Math.sqrt(bound));
+    let best = -1;
+    let bestSquared = Infinity;
+    for (let q = Math.max(0, x - span), last = Math.min(nx - 1, x + span); q <= last; q++) {
+      const rowQ = columnRow[row + q]!;
+      if (rowQ < 0) continue;
+      const squared = (x - q) * (x - q) + (rowQ - j) * (rowQ - j);
+      if (squared < bestSquared) {
+        bestSquared = squared;
+        best = rowQ * nx + q;
+      }
+    }
+    if (best === was) continue;
+    nearest[row + x] = best;
+    root[row + x] = Math.sqrt(bestSquared);
+    onChanged(row + x);
+  }
 }

@@ -11,6 +11,7 @@ import {
   KEPT_SCRATCH_CELLS,
   nearestInRow,
   nearestRowsInColumns,
+  refreshRowNearest,
   rasteriseObstacles,
   rasteriseOutline,
   rowWork,
@@ -85,8 +86,12 @@ export class Widths {
   private readonly cells: number;
   /** Exact width (mm) at each cell, NaN until measured. */
   private readonly widthMm: Float64Array;
-  /** 1 where the cell's width was measured with a ray across: it depends on the floor that ray passed. */
-  private readonly rayCast: Uint8Array;
+  /**
+   * Where the cell's width was measured with a ray across (it depends on the floor that ray
+   * passed), 1 + how far the ray's samples lie from the cell at most, in cells along x or y (255:
+   * too far to say); 0 where no ray was cast.
+   */
+  private readonly rayReach: Uint8Array;
   private readonly columnRow: Int32Array;
   private readonly nearest: Int32Array;
   /** Free cells in the run through each cell along each run direction; 0 where the run does not count (walls at both ends). */
@@ -99,6 +104,8 @@ export class Widths {
   private measureCount = 0;
   /** Set by `ray`: the blocked cell it met. */
   private rayHit = -1;
+  /** Set by `ray`: how far along it (cells) its last sample lay, or might have. */
+  private rayLength = 0;
 
   constructor(
     grid: FloorGrid,
@@ -117,7 +124,7 @@ export class Widths {
     this.gateMm = new Int32Array(cells);
     this.distanceCells = new Float64Array(cells);
     this.widthMm = new Float64Array(cells);
-    this.rayCast = new Uint8Array(cells);
+    this.rayReach = new Uint8Array(cells);
     this.columnRow = new Int32Array(cells);
     this.nearest = new Int32Array(cells);
     this.runCells = RUN_DIRECTIONS.map(() => new Int32Array(cells));
@@ -177,10 +184,14 @@ export class Widths {
     this.measureCount = 0;
     this.updateNearest(i0, i1);
     this.updateRuns(i0, i1, j0, j1);
-    const { rayCast } = this;
+    const { rayReach } = this;
     for (let j = s0; j <= s1; j++) {
-      for (let cell = j * nx + r0, last = j * nx + r1; cell <= last; cell++) {
-        if (rayCast[cell] === 1) this.list(cell);
+      const dj = j < j0 ? j0 - j : j > j1 ? j - j1 : 0;
+      for (let i = r0, cell = j * nx + r0; i <= r1; i++, cell++) {
+        const cast = rayReach[cell]!;
+        if (cast === 0) continue;
+        const di = i < i0 ? i0 - i : i > i1 ? i - i1 : 0;
+        if (cast === 255 || (di > dj ? di : dj) < cast) this.list(cell);
       }
     }
     const { toMeasure, listed } = this;
@@ -198,22 +209,20 @@ export class Widths {
     this.toMeasure[this.measureCount++] = cell;
   }
 
-  /** The distance transform again over the columns i0..i1 and every row whose column answers they change; cells whose nearest blocked cell moved are listed. */
+  /** The distance transform again over the columns i0..i1, and in each row over the cells the columns whose answers changed there may now be nearest to; cells whose nearest blocked cell moved are listed. */
   private updateNearest(i0: number, i1: number): void {
-    const { nx, ny, grid, columnRow, nearest } = this;
-    const changedRows = new Uint8Array(ny);
-    nearestRowsInColumns(grid, columnRow, i0, i1, changedRows);
-    const was = new Int32Array(nx);
+    const { nx, ny, grid, columnRow } = this;
+    const changed = { from: new Int32Array(ny).fill(nx), to: new Int32Array(ny).fill(-1) };
+    nearestRowsInColumns(grid, columnRow, i0, i1, changed);
     for (let j = 0; j < ny; j++) {
-      if (changedRows[j] === 0) continue;
-      const row = j * nx;
-      was.set(nearest.subarray(row, row + nx));
-      nearestInRow(grid, j, columnRow, this.distanceCells, nearest, null, this.rowWork);
-      for (let i = 0; i < nx; i++) if (nearest[row + i] !== was[i]) this.list(row + i);
+      const to = changed.to[j]!;
+      if (to >= 0) refreshRowNearest(grid, j, columnRow, changed.from[j]!, to, this.distanceCells, this.nearest, this.listCell);
     }
   }
 
-  /** The straight runs again along every line that passes within a cell of the box i0..i1 × j0..j1; cells whose shortest run changed are listed. */
+  private readonly listCell = (cell: number): void => this.list(cell);
+
+  /** The straight runs again along every line through the box i0..i1 × j0..j1 grown by a cell, as far as the runs that cross it reach; cells whose shortest run changed are listed. */
   private updateRuns(i0: number, i1: number, j0: number, j1: number): void {
     const { nx, ny } = this;
     const a0 = Math.max(0, i0 - 1);
@@ -221,18 +230,18 @@ export class Widths {
     const b0 = Math.max(0, j0 - 1);
     const b1 = Math.min(ny - 1, j1 + 1);
     const touched: number[] = [];
-    for (let j = b0; j <= b1; j++) this.runsAlong(0, j * nx, nx, touched);
-    for (let i = a0; i <= a1; i++) this.runsAlong(1, i, ny, touched);
-    // Down-right diagonals by i − j, up-right ones by i + j.
+    for (let j = b0; j <= b1; j++) this.runsAcross(0, j * nx + a0, j * nx + a1, touched);
+    for (let i = a0; i <= a1; i++) this.runsAcross(1, b0 * nx + i, b1 * nx + i, touched);
+    // Down-right diagonals by i − j, up-right ones by i + j, each from its first cell in the box to its last.
     for (let d = a0 - b1; d <= a1 - b0; d++) {
-      const i = Math.max(0, d);
-      const j = i - d;
-      this.runsAlong(2, j * nx + i, Math.min(nx - i, ny - j), touched);
+      const first = Math.max(a0, b0 + d);
+      const last = Math.min(a1, b1 + d);
+      this.runsAcross(2, (first - d) * nx + first, (last - d) * nx + last, touched);
     }
     for (let s = a0 + b0; s <= a1 + b1; s++) {
-      const j = Math.min(ny - 1, s);
-      const i = s - j;
-      this.runsAlong(3, j * nx + i, Math.min(nx - i, j + 1), touched);
+      const first = Math.max(a0, s - b1);
+      const last = Math.min(a1, s - b0);
+      this.runsAcross(3, (s - first) * nx + first, (s - last) * nx + last, touched);
     }
     for (const cell of touched) {
       const shortest = this.shortestOf(cell);
@@ -241,6 +250,18 @@ export class Widths {
         this.list(cell);
       }
     }
+  }
+
+  /** The runs of direction k through the stretch of a line from cell `entry` to cell `exit`, whole: from the blocked cell before it to the one after. */
+  private runsAcross(k: number, entry: number, exit: number, touched: number[]): void {
+    const [di, dj] = RUN_DIRECTIONS[k]!;
+    const step = dj * this.nx + di;
+    const label = this.grid.label;
+    let from = entry;
+    while (label[from] === FREE) from -= step;
+    let to = exit;
+    while (label[to] === FREE) to += step;
+    this.runsAlong(k, from, (to - from) / step + 1, touched);
   }
 
   /** Every line of run direction k across the grid. */
@@ -298,7 +319,7 @@ export class Widths {
   /** Works out a free cell's key for the search: its width, measured where the nearest obstacle does not already leave the walkway width. */
   private settle(cell: number): void {
     this.widthMm[cell] = NaN;
-    this.rayCast[cell] = 0;
+    this.rayReach[cell] = 0;
     const { limitMm } = this;
     const lowerMm = this.lowerBoundMm(cell);
     if (lowerMm >= limitMm) {
@@ -361,6 +382,7 @@ export class Widths {
       const other = cj * nx + ci;
       if (ci < 0 || cj < 0 || ci >= nx || cj >= ny || label[other] !== FREE) {
         this.rayHit = other;
+        this.rayLength = t;
         return (t - RAY_STEP_CELLS / 2) * cellMm;
       }
       // Skip ahead through open floor: no blocked centre lies nearer than this cell's distance, and
@@ -368,6 +390,7 @@ export class Widths {
       const skip = Math.floor(distance[other]! - RAY_SKIP_MARGIN_CELLS);
       t += skip > RAY_STEP_CELLS ? skip : RAY_STEP_CELLS;
     }
+    this.rayLength = reachCells;
     return Infinity;
   }
 
@@ -422,7 +445,7 @@ export class Widths {
       if (runMm <= nearSideMm + cellMm / 2 || this.inLineWithNearest(cell)) widthMm = runMm;
       else {
         const acrossMm = this.across(cell, Math.min(this.enoughMm, runMm));
-        this.rayCast[cell] = 1;
+        this.rayReach[cell] = Math.min(255, 1 + Math.ceil(this.rayLength + 0.5));
         widthMm = acrossMm < runMm ? acrossMm : runMm;
       }
     }
