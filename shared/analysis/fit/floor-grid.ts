@@ -210,12 +210,14 @@ export function nearestRowsInColumns(
 ): void {
   const { nx, ny, label } = grid;
   const width = i1 - i0 + 1;
-  // The nearest blocked row at or above each cell, kept apart so the answers before can be compared.
-  const above = scratch('column-above', int32, width * ny);
+  // The nearest blocked row at or above each cell; kept apart when the answers before are to be compared.
+  const above = changed ? scratch('column-above', int32, width * ny) : columnRow;
+  const stride = changed ? width : nx;
+  const offset = changed ? 0 : i0;
   const last = scratch('column-last', int32, width).fill(-1);
   for (let j = 0; j < ny; j++) {
     const row = j * nx + i0;
-    const at = j * width;
+    const at = j * stride + offset;
     for (let c = 0; c < width; c++) {
       if (label[row + c] !== FREE) last[c] = j;
       above[at + c] = last[c]!;
@@ -224,7 +226,7 @@ export function nearestRowsInColumns(
   const next = last.fill(-1);
   for (let j = ny - 1; j >= 0; j--) {
     const row = j * nx + i0;
-    const at = j * width;
+    const at = j * stride + offset;
     for (let c = 0; c < width; c++) {
       const cell = row + c;
       if (label[cell] !== FREE) next[c] = j;
@@ -262,6 +264,8 @@ export function nearestInRow(
   for (let q = 0; q < nx; q++) {
     const rowQ = columnRow[row + q]!;
     if (rowQ < 0) continue;
+    // A blocked cell between two blocked ones is nearest to no other cell (a neighbour is nearer), only to itself.
+    if (rowQ === j && q > 0 && q < nx - 1 && columnRow[row + q - 1] === j && columnRow[row + q + 1] === j) continue;
     const riseQ = (rowQ - j) * (rowQ - j);
     rise[q] = riseQ;
     const fq = riseQ + q * q;
@@ -287,6 +291,13 @@ export function nearestInRow(
   let at = 0;
   for (let x = 0; x < nx; x++) {
     while (bounds[at + 1]! < x) at++;
+    if (columnRow[row + x] === j) {
+      // A blocked cell is its own nearest.
+      if (squared) squared[row + x] = 0;
+      root[row + x] = 0;
+      nearest[row + x] = row + x;
+      continue;
+    }
     const q = sites[at]!;
     const squaredCells = (x - q) * (x - q) + rise[q]!;
     if (squared) squared[row + x] = squaredCells;

@@ -42,7 +42,7 @@ export function widestRoutes(
   for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
   const parent = scratch('parent', int32, cells).fill(-1);
   const wayIn = scratch('way-in', int32, cells).fill(-1);
-  const { keyMm: widthKey, gateMm } = widths;
+  const { exactKeyMm, gateMm } = widths;
   // The waiting cells: for each width, the entry filed last under it; each entry its cell and the entry filed before it.
   const heads = new Int32Array(limitMm + 1).fill(-1);
   let entryCell = scratch('queue-cells', int32, Math.max(cells, 16));
@@ -62,7 +62,8 @@ export function widestRoutes(
     heads[keyMm] = entries++;
   };
   for (const { cell, opening } of sources) {
-    const key = widthKey[cell]!;
+    const widthMm = widths.at(cell);
+    const key = Math.floor(widthMm < limitMm ? widthMm : limitMm);
     if (key <= bottleneckMm[cell]!) continue;
     bottleneckMm[cell] = key;
     wayIn[cell] = opening;
@@ -80,7 +81,8 @@ export function widestRoutes(
         const known = bottleneckMm[next]!;
         if (known >= keyMm) continue;
         // Where the cell (or even its nearest obstacle) leaves room for the route so far, it cannot narrow it.
-        const through = gateMm[next]! >= keyMm ? keyMm : widthKey[next]!;
+        const exact = exactKeyMm[next]!;
+        const through = gateMm[next]! >= keyMm ? keyMm : exact >= 0 ? exact : widths.cappedAt(next, keyMm);
         if (through > known) {
           bottleneckMm[next] = through;
           parent[next] = cell;

@@ -6,6 +6,7 @@ import { FREE } from './floor-grid';
 import { withSeatGaps } from './reach';
 import { pieceInput, plan } from './test-plans';
 import { findWalkwayProblems, WALKWAY_CELL_MM } from './walkway';
+import { widestRoutes } from './walkway-grid';
 import { floorWidths, forgetKeptWidths, Widths } from './walkway-widths';
 import { blocksWalking } from '../../geometry/piece';
 import type { Piece, PieceInput } from '../../schemas/option';
@@ -24,9 +25,30 @@ function stream(seed: number): () => number {
 const obstaclesOf = (pieces: readonly Piece[]): PieceBox[] =>
   withSeatGaps(placedBoxes(pieces).filter((box) => blocksWalking(box.piece))).filled;
 
-/** Every free cell's key, gate and exact width, and every cell's distance, of kept widths beside fresh ones: the cells that differ. */
+/** Ways in for the search: free cells along the top and bottom of the grid, a few rows in. */
+function waysIn(widths: Widths): { cell: number; opening: number }[] {
+  const { nx, ny, label } = widths.grid;
+  const sources: { cell: number; opening: number }[] = [];
+  for (const [j, opening] of [
+    [3, 0],
+    [ny - 4, 1],
+  ] as const)
+    for (let i = 0; i < nx; i += 3) if (label[j * nx + i] === FREE) sources.push({ cell: j * nx + i, opening });
+  return sources;
+}
+
+/**
+ * Kept widths beside widths made afresh from the same floor: the cells where the distance, the
+ * exact width or the widest routes' bottleneck or way back differ, or where the kept gate lets a
+ * route through wider than the cell allows.
+ */
 function differingCells(kept: Widths, walkwayMm: number): { free: number; differing: number[] } {
+  const limitMm = Math.ceil(walkwayMm);
   const fresh = new Widths({ ...kept.grid, label: Int32Array.from(kept.grid.label) }, walkwayMm);
+  const sources = waysIn(fresh);
+  const keptRoutes = widestRoutes(kept.grid, kept, sources, limitMm);
+  const keptRoute = { bottleneck: Int32Array.from(keptRoutes.bottleneckMm), parent: Int32Array.from(keptRoutes.parent) };
+  const freshRoutes = widestRoutes(fresh.grid, fresh, sources, limitMm);
   const label = kept.grid.label;
   let free = 0;
   const differing: number[] = [];
@@ -34,7 +56,15 @@ function differingCells(kept: Widths, walkwayMm: number): { free: number; differ
     if (kept.distanceCells[cell] !== fresh.distanceCells[cell]) differing.push(cell);
     else if (label[cell] === FREE) {
       free++;
-      if (kept.keyMm[cell] !== fresh.keyMm[cell] || kept.gateMm[cell] !== fresh.gateMm[cell] || !Object.is(kept.at(cell), fresh.at(cell)))
+      const widthMm = fresh.at(cell);
+      const key = Math.floor(Math.min(widthMm, limitMm));
+      const gateAllows = Math.max(key, Math.min(limitMm, Math.floor(fresh.lowerBoundMm(cell))));
+      if (
+        !Object.is(kept.at(cell), widthMm) ||
+        kept.gateMm[cell]! > gateAllows ||
+        keptRoute.bottleneck[cell] !== freshRoutes.bottleneckMm[cell] ||
+        keptRoute.parent[cell] !== freshRoutes.parent[cell]
+      )
         differing.push(cell);
     }
   }

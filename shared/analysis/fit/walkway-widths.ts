@@ -50,6 +50,18 @@ const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [
 /** Length of one step of each run direction, in cells. */
 const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
 
+/** A run's free cells from the counts towards its two ends (each doubled, plus 1 for a wall there; both count the cell itself), 0 with walls at both ends. */
+function runCount(back: number, forth: number): number {
+  return (back & forth & 1) === 1 ? 0 : (back >> 1) + (forth >> 1) - 1;
+}
+
+/** The shorter (mm) of a run so far and one of `count` cells along run direction k. */
+function shorterRun(shortestMm: number, count: number, cellMm: number, k: number): number {
+  if (count === 0) return shortestMm;
+  const runMm = count * cellMm * RUN_STEP_CELLS[k]!;
+  return runMm < shortestMm ? runMm : shortestMm;
+}
+
 /**
  * The clear width at each free cell: the shortest chord through it from obstacle to obstacle. One
  * chord runs from the nearest obstacle straight across (at a piece's face, the room in front of it;
@@ -58,25 +70,24 @@ const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
  * is the room's own shape (a doorway's reveals, an alcove): the designer cannot move it, so it does
  * not count.
  *
- * Every free cell's width, up to the walkway width, is worked out when the widths are made and kept
- * in `keyMm` for the search; `update` takes the next labels of the same room and measures again
- * only what they change. A width depends on the cell's nearest blocked cell, its four straight runs
- * and the cells its chord across passes (all within the walkway width of it), nothing else; so a
- * width is measured again exactly where one of those changed, and every width reads as it would
- * measured afresh.
+ * Widths are measured as the search asks for them, only as far as it asks, and kept; `update`
+ * takes the next labels of the same room and forgets what they change. A width depends on the
+ * cell's nearest blocked cell, its four straight runs and the cells its chord across passes (all
+ * within the walkway width of it), nothing else; so what is kept is forgotten exactly where one of
+ * those changed, and every answer reads as it would measured afresh.
  */
 export class Widths {
   /** The floor grid the widths are of; its labels are the latest given. */
   readonly grid: FloorGrid;
-  /** Whole-mm width capped at the walkway width (rounded up), at every free cell: what the search reads. */
-  readonly keyMm: Int32Array;
   /**
-   * At each free cell, the larger of keyMm and twice the distance to the nearest obstacle in whole
-   * mm (capped alike): a route at most this wide is not narrowed there. The two mostly agree; where
-   * the chord across comes out a little under the nearest-obstacle figure, the search goes by the
-   * latter until the route is narrower than it.
+   * At each free cell, a whole-mm width a route may have without being narrowed there: twice the
+   * distance to the nearest obstacle, or what is known of the width at the cell (capped at the
+   * walkway width rounded up) where that is more. The search enters a cell at its route's width
+   * when this allows it, and asks cappedAt only where it does not.
    */
   readonly gateMm: Int32Array;
+  /** The whole-mm width capped at the walkway width (rounded up) where it is known exactly; −1 where not. */
+  readonly exactKeyMm: Int32Array;
   /** Distance (cells) from each cell's centre to the nearest blocked centre. */
   readonly distanceCells: Float64Array;
   private readonly limitMm: number;
@@ -87,9 +98,9 @@ export class Widths {
   /** Exact width (mm) at each cell, NaN until measured. */
   private readonly widthMm: Float64Array;
   /**
-   * Where the cell's width was measured with a ray across (it depends on the floor that ray
-   * passed), 1 + how far the ray's samples lie from the cell at most, in cells along x or y (255:
-   * too far to say); 0 where no ray was cast.
+   * Where the cell's width was looked for with a ray across (what is known of it depends on the
+   * floor that ray passed), 1 + how far the ray's samples lie from the cell at most, in cells along
+   * x or y (255: too far to say); 0 where no ray was cast.
    */
   private readonly rayReach: Uint8Array;
   private readonly columnRow: Int32Array;
@@ -98,10 +109,10 @@ export class Widths {
   private readonly runCells: Int32Array[];
   private readonly shortestRunMm: Float64Array;
   private readonly rowWork: ReturnType<typeof rowWork>;
-  /** Cells to measure again in an update, each listed once (`listed` marks them). */
-  private readonly toMeasure: Int32Array;
+  /** Cells whose widths an update forgets, each listed once (`listed` marks them). */
+  private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
-  private measureCount = 0;
+  private forgetCount = 0;
   /** Set by `ray`: the blocked cell it met. */
   private rayHit = -1;
   /** Set by `ray`: how far along it (cells) its last sample lay, or might have. */
@@ -111,6 +122,8 @@ export class Widths {
     grid: FloorGrid,
     /** Widths at or beyond this (mm) are wide enough; they are not measured further. */
     private readonly enoughMm: number,
+    /** Widths done with, whose arrays these may take over where they are large enough. */
+    reuse?: Widths,
   ) {
     this.grid = { ...grid };
     this.limitMm = Math.ceil(enoughMm);
@@ -120,35 +133,39 @@ export class Widths {
     this.cellMm = cellMm;
     const cells = nx * ny;
     this.cells = cells;
-    this.keyMm = new Int32Array(cells);
-    this.gateMm = new Int32Array(cells);
-    this.distanceCells = new Float64Array(cells);
-    this.widthMm = new Float64Array(cells);
-    this.rayReach = new Uint8Array(cells);
-    this.columnRow = new Int32Array(cells);
-    this.nearest = new Int32Array(cells);
-    this.runCells = RUN_DIRECTIONS.map(() => new Int32Array(cells));
-    this.shortestRunMm = new Float64Array(cells);
+    const take = <T extends Int32Array | Float64Array | Uint8Array>(old: T | undefined, make: (n: number) => T): T =>
+      old && old.length >= cells ? (old.subarray(0, cells) as T) : make(cells);
+    this.gateMm = take(reuse?.gateMm, int32);
+    this.exactKeyMm = take(reuse?.exactKeyMm, int32);
+    this.distanceCells = take(reuse?.distanceCells, float64);
+    this.widthMm = take(reuse?.widthMm, float64);
+    this.rayReach = take(reuse?.rayReach, uint8);
+    this.columnRow = take(reuse?.columnRow, int32);
+    this.nearest = take(reuse?.nearest, int32);
+    this.runCells = RUN_DIRECTIONS.map((_, k) => take(reuse?.runCells[k], int32));
+    this.shortestRunMm = take(reuse?.shortestRunMm, float64);
     this.rowWork = rowWork(nx);
-    this.toMeasure = new Int32Array(cells);
-    this.listed = new Uint8Array(cells);
+    this.toForget = take(reuse?.toForget, int32);
+    this.listed = take(reuse?.listed, uint8).fill(0);
     this.measureAll();
   }
 
-  /** Every measure afresh from the grid's labels. */
+  /** The distances and runs afresh from the grid's labels; every width unknown. */
   private measureAll(): void {
-    const { nx, ny, grid, cells } = this;
+    const { nx, ny, grid } = this;
     nearestRowsInColumns(grid, this.columnRow, 0, nx - 1, null);
     for (let j = 0; j < ny; j++) nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork);
-    for (let k = 0; k < RUN_DIRECTIONS.length; k++) this.runsAlongAll(k);
-    for (let cell = 0; cell < cells; cell++) this.shortestRunMm[cell] = this.shortestOf(cell);
-    this.widthMm.fill(NaN);
-    const label = grid.label;
-    for (let cell = 0; cell < cells; cell++) if (label[cell] === FREE) this.settle(cell);
+    this.allRuns();
+  }
+
+  /** The gate from the nearest obstacle alone: twice its distance, in whole mm, capped at the walkway width rounded up. */
+  private lowerGate(cell: number): number {
+    const lowerMm = this.lowerBoundMm(cell);
+    return lowerMm >= this.limitMm ? this.limitMm : Math.floor(lowerMm);
   }
 
   /**
-   * Takes the next labels of the same room (a grid of the same frame) and measures again what they
+   * Takes the next labels of the same room (a grid of the same frame) and forgets the widths they
    * change. Returns the labels array given before, for the caller to fill next time.
    */
   update(label: Int32Array): Int32Array {
@@ -181,7 +198,7 @@ export class Widths {
       this.measureAll();
       return before;
     }
-    this.measureCount = 0;
+    this.forgetCount = 0;
     this.updateNearest(i0, i1);
     this.updateRuns(i0, i1, j0, j1);
     const { rayReach } = this;
@@ -194,11 +211,14 @@ export class Widths {
         if (cast === 255 || (di > dj ? di : dj) < cast) this.list(cell);
       }
     }
-    const { toMeasure, listed } = this;
-    for (let k = 0; k < this.measureCount; k++) {
-      const cell = toMeasure[k]!;
+    const { toForget, listed } = this;
+    for (let k = 0; k < this.forgetCount; k++) {
+      const cell = toForget[k]!;
       listed[cell] = 0;
-      if (label[cell] === FREE) this.settle(cell);
+      this.widthMm[cell] = NaN;
+      this.exactKeyMm[cell] = -1;
+      this.rayReach[cell] = 0;
+      this.gateMm[cell] = this.lowerGate(cell);
     }
     return before;
   }
@@ -206,7 +226,7 @@ export class Widths {
   private list(cell: number): void {
     if (this.listed[cell] === 1) return;
     this.listed[cell] = 1;
-    this.toMeasure[this.measureCount++] = cell;
+    this.toForget[this.forgetCount++] = cell;
   }
 
   /** The distance transform again over the columns i0..i1, and in each row over the cells the columns whose answers changed there may now be nearest to; cells whose nearest blocked cell moved are listed. */
@@ -264,26 +284,92 @@ export class Widths {
     this.runsAlong(k, from, (to - from) / step + 1, touched);
   }
 
-  /** Every line of run direction k across the grid. */
-  private runsAlongAll(k: number): void {
-    const { nx, ny } = this;
-    if (k === 0) for (let j = 0; j < ny; j++) this.runsAlong(0, j * nx, nx, null);
-    else if (k === 1) for (let i = 0; i < nx; i++) this.runsAlong(1, i, ny, null);
-    else if (k === 2) {
-      for (let j = ny - 1; j > 0; j--) this.runsAlong(2, j * nx, Math.min(nx, ny - j), null);
-      for (let i = 0; i < nx; i++) this.runsAlong(2, i, Math.min(nx - i, ny), null);
-    } else {
-      for (let j = 0; j < ny; j++) this.runsAlong(3, j * nx, Math.min(nx, j + 1), null);
-      for (let i = 1; i < nx; i++) this.runsAlong(3, (ny - 1) * nx + i, Math.min(nx - i, ny), null);
+  /**
+   * Every cell's runs and shortest run, in two sweeps over the grid in memory order: down the rows,
+   * each free cell counts the free cells from one end of each of its runs to itself (one more than
+   * its neighbour towards that end), noting whether that end is a wall; back up the rows, it counts
+   * from the other end, and the two counts give the run's. Each count is kept doubled, plus 1 where
+   * its end is a wall. What is known of each free cell's width is forgotten on the way.
+   */
+  private allRuns(): void {
+    const { nx, ny, cellMm } = this;
+    const label = this.grid.label;
+    const [along, down, downRight, upRight] = this.runCells as [Int32Array, Int32Array, Int32Array, Int32Array];
+    const shortest = this.shortestRunMm;
+    const cells = nx * ny;
+    // Down the rows: the ends to the left, above, above left and above right.
+    for (let cell = 0; cell < cells; cell++) {
+      if (label[cell] !== FREE) {
+        along[cell] = 0;
+        down[cell] = 0;
+        downRight[cell] = 0;
+        upRight[cell] = 0;
+        shortest[cell] = Infinity;
+        continue;
+      }
+      // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
+      let end = label[cell - 1]!;
+      along[cell] = end === FREE ? along[cell - 1]! + 2 : end === WALL ? 3 : 2;
+      end = label[cell - nx]!;
+      down[cell] = end === FREE ? down[cell - nx]! + 2 : end === WALL ? 3 : 2;
+      end = label[cell - nx - 1]!;
+      downRight[cell] = end === FREE ? downRight[cell - nx - 1]! + 2 : end === WALL ? 3 : 2;
+      end = label[cell - nx + 1]!;
+      upRight[cell] = end === FREE ? upRight[cell - nx + 1]! + 2 : end === WALL ? 3 : 2;
+    }
+    // Back up the rows, the counts from the other ends held for this row and the one below.
+    const stepMm0 = cellMm * RUN_STEP_CELLS[0]!;
+    const { exactKeyMm, rayReach, gateMm } = this;
+    let row = new Int32Array(4 * nx);
+    let below = new Int32Array(4 * nx);
+    for (let j = ny - 1; j >= 0; j--) {
+      const swap = row;
+      row = below;
+      below = swap;
+      for (let i = nx - 1; i >= 0; i--) {
+        const cell = j * nx + i;
+        if (label[cell] !== FREE) continue;
+        const at = 4 * i;
+        let end = label[cell + 1]!;
+        const right = end === FREE ? row[at + 4]! + 2 : end === WALL ? 3 : 2;
+        end = label[cell + nx]!;
+        const under = end === FREE ? below[at + 1]! + 2 : end === WALL ? 3 : 2;
+        end = label[cell + nx + 1]!;
+        const underRight = end === FREE ? below[at + 6]! + 2 : end === WALL ? 3 : 2;
+        end = label[cell + nx - 1]!;
+        const underLeft = end === FREE ? below[at - 1]! + 2 : end === WALL ? 3 : 2;
+        row[at] = right;
+        row[at + 1] = under;
+        row[at + 2] = underRight;
+        row[at + 3] = underLeft;
+        // Free cells from each end to this one, this one counted twice; none where both ends are walls.
+        const alongCount = runCount(along[cell]!, right);
+        const downCount = runCount(down[cell]!, under);
+        const downRightCount = runCount(downRight[cell]!, underRight);
+        const upRightCount = runCount(upRight[cell]!, underLeft);
+        along[cell] = alongCount;
+        down[cell] = downCount;
+        downRight[cell] = downRightCount;
+        upRight[cell] = upRightCount;
+        let shortestMm = alongCount > 0 ? alongCount * stepMm0 : Infinity;
+        shortestMm = shorterRun(shortestMm, downCount, cellMm, 1);
+        shortestMm = shorterRun(shortestMm, downRightCount, cellMm, 2);
+        shortest[cell] = shorterRun(shortestMm, upRightCount, cellMm, 3);
+        // Nothing known yet of the width.
+        this.widthMm[cell] = NaN;
+        exactKeyMm[cell] = -1;
+        rayReach[cell] = 0;
+        gateMm[cell] = this.lowerGate(cell);
+      }
     }
   }
 
   /**
    * The runs along one line of direction k, `length` cells from `start`: each stretch of free cells
-   * between two blocked ones gets its count of cells, or 0 with a wall at both ends. With `touched`,
-   * cells whose count changed are added to it.
+   * between two blocked ones gets its count of cells, or 0 with a wall at both ends; cells whose
+   * count changed are added to `touched`.
    */
-  private runsAlong(k: number, start: number, length: number, touched: number[] | null): void {
+  private runsAlong(k: number, start: number, length: number, touched: number[]): void {
     const [di, dj] = RUN_DIRECTIONS[k]!;
     const step = dj * this.nx + di;
     const label = this.grid.label;
@@ -294,11 +380,11 @@ export class Widths {
       if (back >= 0 && cell !== back + step) {
         const count = label[back] === WALL && label[cell] === WALL ? 0 : (cell - back) / step - 1;
         for (let c = back + step; c !== cell; c += step) {
-          if (touched && counts[c] !== count) touched.push(c);
+          if (counts[c] !== count) touched.push(c);
           counts[c] = count;
         }
       }
-      if (touched && counts[cell] !== 0) touched.push(cell);
+      if (counts[cell] !== 0) touched.push(cell);
       counts[cell] = 0;
       back = cell;
     }
@@ -316,32 +402,31 @@ export class Widths {
     return shortest;
   }
 
-  /** Works out a free cell's key for the search: its width, measured where the nearest obstacle does not already leave the walkway width. */
-  private settle(cell: number): void {
-    this.widthMm[cell] = NaN;
-    this.rayReach[cell] = 0;
-    const { limitMm } = this;
-    const lowerMm = this.lowerBoundMm(cell);
-    if (lowerMm >= limitMm) {
-      this.keyMm[cell] = limitMm;
-      this.gateMm[cell] = limitMm;
-      return;
+  /**
+   * The width at a free cell in whole mm, capped at keyMm (a whole number up to the walkway width
+   * rounded up), for a cell whose gate is under keyMm and whose capped width is not known exactly:
+   * measured only as far as the cap, and what that shows kept (the exact width when the look found
+   * it, else that the width is more than the cap).
+   */
+  cappedAt(cell: number, keyMm: number): number {
+    const widthMm = this.measure(cell, keyMm);
+    if (widthMm === Infinity && this.exactKeyMm[cell]! < 0) {
+      if (keyMm > this.gateMm[cell]!) this.gateMm[cell] = keyMm;
+      return keyMm;
     }
-    const widthMm = this.measure(cell);
-    const key = Math.floor(widthMm < limitMm ? widthMm : limitMm);
-    this.keyMm[cell] = key;
-    this.gateMm[cell] = Math.max(key, Math.floor(lowerMm));
+    const key = this.exactKeyMm[cell]!;
+    return key < keyMm ? key : keyMm;
   }
 
   /**
    * Whether the width at a cell is already known to be more than widthMm, so it need not be
-   * measured exactly to be compared: the search's key k means at least k; and with d the distance
+   * measured exactly to be compared: a known capped width k means at least k; and with d the distance
    * (cells) to the nearest blocked centre, every chord is at least (2d − 1.71) cells long (a run's
    * ends lie at least d away on either side, less one step of at most √2 cells; the chord across
    * reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
    */
   knownWiderThan(cell: number, widthMm: number): boolean {
-    if (this.keyMm[cell]! > Math.floor(widthMm)) return true;
+    if (this.exactKeyMm[cell]! > Math.floor(widthMm)) return true;
     return (2 * this.distanceCells[cell]! - CHORD_SHORTFALL_CELLS) * this.cellMm > widthMm;
   }
 
@@ -354,12 +439,18 @@ export class Widths {
   at(cell: number): number {
     const known = this.widthMm[cell]!;
     if (known === known) return known;
-    return this.measure(cell);
+    return this.measure(cell, Infinity);
   }
 
-  /** Whether the clear width at a free cell is at most limitMm. */
+  /**
+   * Whether the clear width at a free cell is at most limitMm: as `at(cell) <= limitMm`, but the
+   * chord across is looked for only as far as the limit (a chord found is the same however far one
+   * looks, and one past the limit is too long to matter).
+   */
   atMost(cell: number, limitMm: number): boolean {
-    return this.at(cell) <= limitMm;
+    const known = this.widthMm[cell]!;
+    if (known === known) return known <= limitMm;
+    return this.measure(cell, limitMm) <= limitMm;
   }
 
   /**
@@ -430,11 +521,12 @@ export class Widths {
   }
 
   /**
-   * The exact width at a free cell, kept. The straight runs are known, so the chord across need
-   * only be looked for as far as it could still be the shorter: a chord found past that is longer
-   * than a run anyway.
+   * The width, looked for no further than capMm: exact (and kept, with its capped key) whenever it
+   * is at most the cap or the look was not cut short by it; otherwise Infinity, some figure above
+   * the cap. The straight runs are known, so the chord across need only be looked for as far as it
+   * could still be the shorter: a chord found past that is longer than a run anyway.
    */
-  private measure(cell: number): number {
+  private measure(cell: number, capMm: number): number {
     const cellMm = this.cellMm;
     const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
     let widthMm: number;
@@ -444,12 +536,19 @@ export class Widths {
       // The far side lies at least half a cell off, so a run that short already wins.
       if (runMm <= nearSideMm + cellMm / 2 || this.inLineWithNearest(cell)) widthMm = runMm;
       else {
-        const acrossMm = this.across(cell, Math.min(this.enoughMm, runMm));
-        this.rayReach[cell] = Math.min(255, 1 + Math.ceil(this.rayLength + 0.5));
+        const reachMm = Math.min(this.enoughMm, runMm);
+        const acrossMm = this.across(cell, reachMm < capMm ? reachMm : capMm);
+        const reach = Math.min(255, 1 + Math.ceil(this.rayLength + 0.5));
+        if (reach > this.rayReach[cell]!) this.rayReach[cell] = reach;
+        // Nothing met within the cap when the cap cut the look short: only "wider than the cap" is known.
+        if (acrossMm === Infinity && capMm < reachMm) return Infinity;
         widthMm = acrossMm < runMm ? acrossMm : runMm;
       }
     }
     this.widthMm[cell] = widthMm;
+    const key = Math.floor(widthMm < this.limitMm ? widthMm : this.limitMm);
+    this.exactKeyMm[cell] = key;
+    if (key > this.gateMm[cell]!) this.gateMm[cell] = key;
     return widthMm;
   }
 
@@ -493,12 +592,16 @@ export class Widths {
 /** The widths last made, with the room they are of, for the next check of the same room. */
 let kept: { key: string; outline: Int32Array; spare: Int32Array; widths: Widths } | null = null;
 
+const int32 = (cells: number): Int32Array => new Int32Array(cells);
+const float64 = (cells: number): Float64Array => new Float64Array(cells);
+const uint8 = (cells: number): Uint8Array => new Uint8Array(cells);
+
 /**
  * The floor grid of an outline and obstacle boxes (plan mm, cells of requestedCellMm as
  * rasteriseFloor makes them) and the clear widths on it up to walkwayMm. The widths of the last
  * check are kept (for grids up to KEPT_SCRATCH_CELLS) and, for the same room and walkway width,
- * brought up to date instead of measured afresh: what is handed back is the same either way. The
- * grid and widths are good until the next call (checks run one at a time on a thread).
+ * brought up to date instead of made afresh: what they answer is the same either way. The grid and
+ * widths are good until the next call (checks run one at a time on a thread).
  */
 export function floorWidths(
   outline: readonly Vec2[],
@@ -514,19 +617,22 @@ export function floorWidths(
     kept.spare = kept.widths.update(label);
     return kept.widths;
   }
-  kept = null;
   const frame = gridFrame(outline, requestedCellMm);
   const cells = frame.nx * frame.ny;
-  const bare = new Int32Array(cells);
+  const before = kept;
+  kept = null;
+  const fits = (old: Int32Array | undefined) => (old && old.length >= cells ? old.subarray(0, cells) : new Int32Array(cells));
+  const bare = fits(before?.outline);
   rasteriseOutline(outline, frame, bare);
-  const label = Int32Array.from(bare);
+  const label = fits(before?.widths.grid.label);
+  label.set(bare);
   rasteriseObstacles(frame, obstacles, label);
-  const widths = new Widths({ ...frame, label }, walkwayMm);
-  if (cells <= KEPT_SCRATCH_CELLS) kept = { key, outline: bare, spare: new Int32Array(cells), widths };
+  const widths = new Widths({ ...frame, label }, walkwayMm, before?.widths);
+  if (cells <= KEPT_SCRATCH_CELLS) kept = { key, outline: bare, spare: fits(before?.spare), widths };
   return widths;
 }
 
-/** Drops the kept widths, so the next check measures every width afresh (for benches and tests that time or compare that). */
+/** Forgets the kept widths, so the next check measures every width afresh (for benches and tests that time or compare that); their arrays stay for reuse. */
 export function forgetKeptWidths(): void {
-  kept = null;
+  if (kept) kept.key = '';
 }
