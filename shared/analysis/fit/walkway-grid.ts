@@ -7,11 +7,11 @@ import type { Widths } from './walkway-widths';
 /** The search's own mark for blocked cells: wider than any route, so never entered. */
 const BLOCKED_KEY = 0x7fffffff;
 export interface Routes {
-  /** Best bottleneck width (whole mm, at most the walkway width) from any way in to each free cell; −1 where no route reaches. */
+  /** Best bottleneck width (whole mm, at most the walkway width) from any way in to each free cell; −1 where no route reaches (a blocked cell holds a width no route has). */
   bottleneckMm: Int32Array;
-  /** The cell each best route came from; −1 at a way in. */
+  /** The cell each best route came from, −1 at a way in; at cells a route reaches. */
   parent: Int32Array;
-  /** For a way-in cell, the index of its opening; −1 elsewhere. */
+  /** For a way-in cell, the index of its opening. */
   wayIn: Int32Array;
   /** Filled in by routeNarrowest as it is asked: the narrowest cell on the route from each cell; −1 until asked. */
   narrowest: Int32Array;
@@ -40,8 +40,9 @@ export function widestRoutes(
   const { nx, label } = grid;
   const bottleneckMm = scratch('bottleneck', int32, cells);
   for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
-  const parent = scratch('parent', int32, cells).fill(-1);
-  const wayIn = scratch('way-in', int32, cells).fill(-1);
+  // Written where a route reaches (the way-in cells first), and read only there.
+  const parent = scratch('parent', int32, cells);
+  const wayIn = scratch('way-in', int32, cells);
   const { exactKeyMm, gateMm } = widths;
   // The waiting cells: for each width, the entry filed last under it; each entry its cell and the entry filed before it.
   const heads = new Int32Array(limitMm + 1).fill(-1);
@@ -66,6 +67,7 @@ export function widestRoutes(
     const key = Math.floor(widthMm < limitMm ? widthMm : limitMm);
     if (key <= bottleneckMm[cell]!) continue;
     bottleneckMm[cell] = key;
+    parent[cell] = -1;
     wayIn[cell] = opening;
     file(cell, key);
   }
@@ -81,8 +83,11 @@ export function widestRoutes(
         const known = bottleneckMm[next]!;
         if (known >= keyMm) continue;
         // Where the cell (or even its nearest obstacle) leaves room for the route so far, it cannot narrow it.
-        const exact = exactKeyMm[next]!;
-        const through = gateMm[next]! >= keyMm ? keyMm : exact >= 0 ? exact : widths.cappedAt(next, keyMm);
+        let through = keyMm;
+        if (gateMm[next]! < keyMm) {
+          const exact = exactKeyMm[next]!;
+          through = exact >= 0 ? exact : widths.cappedAt(next, keyMm);
+        }
         if (through > known) {
           bottleneckMm[next] = through;
           parent[next] = cell;
@@ -96,7 +101,6 @@ export function widestRoutes(
       }
     }
   }
-  for (let cell = 0; cell < cells; cell++) if (bottleneckMm[cell] === BLOCKED_KEY) bottleneckMm[cell] = -1;
   const narrowest = scratch('narrowest', int32, cells).fill(-1);
   const start = scratch('start', int32, cells);
   return { bottleneckMm, parent, wayIn, narrowest, start };

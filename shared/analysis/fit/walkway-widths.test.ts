@@ -39,7 +39,7 @@ function waysIn(widths: Widths): { cell: number; opening: number }[] {
 
 /**
  * Kept widths beside widths made afresh from the same floor: the cells where the distance, the
- * exact width or the widest routes' bottleneck or way back differ, or where the kept gate lets a
+ * exact width or the widest routes' bottleneck or (where a route reaches) way back differ, or where the kept gate lets a
  * route through wider than the cell allows.
  */
 function differingCells(kept: Widths, walkwayMm: number): { free: number; differing: number[] } {
@@ -63,7 +63,7 @@ function differingCells(kept: Widths, walkwayMm: number): { free: number; differ
         !Object.is(kept.at(cell), widthMm) ||
         kept.gateMm[cell]! > gateAllows ||
         keptRoute.bottleneck[cell] !== freshRoutes.bottleneckMm[cell] ||
-        keptRoute.parent[cell] !== freshRoutes.parent[cell]
+        (freshRoutes.bottleneckMm[cell]! >= 0 && keptRoute.parent[cell] !== freshRoutes.parent[cell])
       )
         differing.push(cell);
     }

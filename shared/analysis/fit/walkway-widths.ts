@@ -17,7 +17,9 @@ import {
   rowWork,
   WALL,
   type FloorGrid,
+  type GridFrame,
 } from './floor-grid';
+import { boundsMm } from '../../geometry/polygon';
 
 /** Samples along a ray, in cells, starting at the next cell's centre: on a square room's grid they
  * land on cell centres, so a hit puts the edge half a step back. A whole-cell step may pass the
@@ -32,6 +34,9 @@ const RAY_SKIP_MARGIN_CELLS = 1.5;
  * than this share of the grid, every width is measured afresh: sorting out what moved would cost more.
  */
 const FRESH_SHARE = 0.5;
+
+/** A box of cells: first and last column, first and last row. */
+export type CellBox = [number, number, number, number];
 
 export interface Gap {
   /** Obstacle labels either side: a box index, or WALL. */
@@ -166,20 +171,22 @@ export class Widths {
 
   /**
    * Takes the next labels of the same room (a grid of the same frame) and forgets the widths they
-   * change. Returns the labels array given before, for the caller to fill next time.
+   * change; only cells within `within` (a box of cells, all of the grid when left out) may have
+   * turned free or blocked. Returns the labels array given before, for the caller to fill next time.
    */
-  update(label: Int32Array): Int32Array {
+  update(label: Int32Array, within?: CellBox): Int32Array {
     const before = this.grid.label;
     this.grid.label = label;
     const { nx, ny, cells } = this;
+    const [a0, a1, b0, b1] = within ?? [0, nx - 1, 0, ny - 1];
     // The box of cells that turned free or blocked (walls stay where the room has them).
     let i0 = nx;
     let i1 = -1;
     let j0 = ny;
     let j1 = -1;
-    for (let j = 0, cell = 0; j < ny; j++) {
-      for (let i = 0; i < nx; i++, cell++) {
-        if ((label[cell] === FREE) === (before[cell] === FREE)) continue;
+    for (let j = b0; j <= b1; j++) {
+      for (let i = a0, cell = j * nx + a0; i <= a1; i++, cell++) {
+        if (label[cell] === before[cell] || (label[cell] === FREE) === (before[cell] === FREE)) continue;
         if (i < i0) i0 = i;
         if (i > i1) i1 = i;
         if (j < j0) j0 = j;
@@ -589,8 +596,54 @@ export class Widths {
   }
 }
 
-/** The widths last made, with the room they are of, for the next check of the same room. */
-let kept: { key: string; outline: Int32Array; spare: Int32Array; widths: Widths } | null = null;
+/**
+ * The widths last made, with the room they are of (its key), the outline's labels alone, a spare
+ * labels array, and where each obstacle box was (BOX_FIELDS numbers a box).
+ */
+let kept: { key: string; outline: Int32Array; spare: Int32Array; widths: Widths; boxes: Float64Array } | null = null;
+
+/** A box's centre, x axis and half sizes, then its bounds (min x, min y, max x, max y), plan mm. */
+const BOX_FIELDS = 10;
+
+function boxFields(obstacles: readonly PieceBox[]): Float64Array {
+  const fields = new Float64Array(obstacles.length * BOX_FIELDS);
+  obstacles.forEach((box, index) => {
+    const b = boundsMm(box.corners);
+    fields.set(
+      [box.centre[0], box.centre[1], box.axisX[0], box.axisX[1], box.halfWidthMm, box.halfDepthMm, b.minX, b.minY, b.maxX, b.maxY],
+      index * BOX_FIELDS,
+    );
+  });
+  return fields;
+}
+
+/** The box of cells the boxes that moved covered before or cover now, or undefined (all of the grid) when boxes came or went. */
+function movedCells(frame: GridFrame, before: Float64Array, now: Float64Array): CellBox | undefined {
+  if (before.length !== now.length) return undefined;
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (let at = 0; at < now.length; at += BOX_FIELDS) {
+    let same = true;
+    for (let f = 0; f < 6 && same; f++) same = before[at + f] === now[at + f];
+    if (same) continue;
+    for (const fields of [before, now]) {
+      minX = Math.min(minX, fields[at + 6]!);
+      minY = Math.min(minY, fields[at + 7]!);
+      maxX = Math.max(maxX, fields[at + 8]!);
+      maxY = Math.max(maxY, fields[at + 9]!);
+    }
+  }
+  const { nx, ny, cellMm, originX, originY } = frame;
+  if (minX > maxX) return [0, -1, 0, -1];
+  return [
+    Math.max(0, Math.floor((minX - originX) / cellMm)),
+    Math.min(nx - 1, Math.floor((maxX - originX) / cellMm)),
+    Math.max(0, Math.floor((minY - originY) / cellMm)),
+    Math.min(ny - 1, Math.floor((maxY - originY) / cellMm)),
+  ];
+}
 
 const int32 = (cells: number): Int32Array => new Int32Array(cells);
 const float64 = (cells: number): Float64Array => new Float64Array(cells);
@@ -610,11 +663,13 @@ export function floorWidths(
   walkwayMm: number,
 ): Widths {
   const key = `${requestedCellMm} ${walkwayMm} ${outline.map(([x, y]) => `${x},${y}`).join(' ')}`;
+  const boxes = boxFields(obstacles);
   if (kept?.key === key) {
     const label = kept.spare;
     label.set(kept.outline);
     rasteriseObstacles(kept.widths.grid, obstacles, label);
-    kept.spare = kept.widths.update(label);
+    kept.spare = kept.widths.update(label, movedCells(kept.widths.grid, kept.boxes, boxes));
+    kept.boxes = boxes;
     return kept.widths;
   }
   const frame = gridFrame(outline, requestedCellMm);
@@ -628,7 +683,7 @@ export function floorWidths(
   label.set(bare);
   rasteriseObstacles(frame, obstacles, label);
   const widths = new Widths({ ...frame, label }, walkwayMm, before?.widths);
-  if (cells <= KEPT_SCRATCH_CELLS) kept = { key, outline: bare, spare: fits(before?.spare), widths };
+  if (cells <= KEPT_SCRATCH_CELLS) kept = { key, outline: bare, spare: fits(before?.spare), widths, boxes };
   return widths;
 }
 
