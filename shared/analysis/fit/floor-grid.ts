@@ -331,12 +331,13 @@ export function distanceField(grid: FloorGrid): DistanceField {
 
 /**
  * Brings row j of a distance transform up to date after the column answers (columnRow) of columns
- * i0..i1 changed: root and nearest hold the row's answers from before, and onChanged hears of every
- * cell whose nearest blocked cell is now another. The row pass picks, at each cell, the leftmost of
- * the columns nearest to it (two parabolas meet at a rational point, which floating point tells
- * apart from its neighbours and rounds alike whichever way it is worked out); so a cell whose
- * nearest lay outside those columns, none of which can now come as near, keeps its answer, and any
- * other takes the leftmost nearest column among those within its distance.
+ * i0..i1 changed: root and nearest hold the row's answers from before, none farther than
+ * farthestCells, and onChanged hears of every cell whose nearest blocked cell is now another.
+ * Answers the farthest distance (cells) among the new answers. The row pass picks, at each cell,
+ * the leftmost of the columns nearest to it (two parabolas meet at a rational point, which floating
+ * point tells apart from its neighbours and rounds alike whichever way it is worked out); so a cell
+ * whose nearest lay outside those columns, none of which now comes as near, keeps its answer, and
+ * any other takes the leftmost nearest column among those within its distance.
  */
 export function refreshRowNearest(
   grid: FloorGrid,
@@ -346,11 +347,15 @@ export function refreshRowNearest(
   i1: number,
   root: Float64Array,
   nearest: Int32Array,
+  farthestCells: number,
   onChanged: (cell: number) => void,
-): void {
+): number {
   const { nx } = grid;
   const row = j * nx;
-  for (let x = 0; x < nx; x++) {
+  let farthest = 0;
+  // A cell farther from the changed columns than any old answer reaches kept its nearest.
+  const reach = Math.ceil(farthestCells);
+  for (let x = Math.max(0, i0 - reach), lastX = Math.min(nx - 1, i1 + reach); x <= lastX; x++) {
     const was = nearest[row + x]!;
     const wasColumn = was % nx;
     const wasRow = (was - wasColumn) / nx;
@@ -383,7 +388,10 @@ export function refreshRowNearest(
     }
     if (best === was) continue;
     nearest[row + x] = best;
-    root[row + x] = Math.sqrt(bestSquared);
+    const distance = Math.sqrt(bestSquared);
+    root[row + x] = distance;
+    if (distance > farthest) farthest = distance;
     onChanged(row + x);
   }
+  return farthest;
 }

@@ -114,6 +114,10 @@ export class Widths {
   private readonly runCells: Int32Array[];
   private readonly shortestRunMm: Float64Array;
   private readonly rowWork: ReturnType<typeof rowWork>;
+  /** Each row's first and last column whose column answers an update changed. */
+  private readonly changedColumns: { from: Int32Array; to: Int32Array };
+  /** No cell's distance (cells) to the nearest blocked centre is more than this. */
+  private farthestCells = 0;
   /** Cells whose widths an update forgets, each listed once (`listed` marks them). */
   private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
@@ -150,6 +154,7 @@ export class Widths {
     this.runCells = RUN_DIRECTIONS.map((_, k) => take(reuse?.runCells[k], int32));
     this.shortestRunMm = take(reuse?.shortestRunMm, float64);
     this.rowWork = rowWork(nx);
+    this.changedColumns = { from: new Int32Array(ny), to: new Int32Array(ny) };
     this.toForget = take(reuse?.toForget, int32);
     this.listed = take(reuse?.listed, uint8).fill(0);
     this.measureAll();
@@ -160,6 +165,9 @@ export class Widths {
     const { nx, ny, grid } = this;
     nearestRowsInColumns(grid, this.columnRow, 0, nx - 1, null);
     for (let j = 0; j < ny; j++) nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork);
+    let farthest = 0;
+    for (const distance of this.distanceCells) if (distance > farthest) farthest = distance;
+    this.farthestCells = farthest;
     this.allRuns();
   }
 
@@ -238,13 +246,18 @@ export class Widths {
 
   /** The distance transform again over the columns i0..i1, and in each row over the cells the columns whose answers changed there may now be nearest to; cells whose nearest blocked cell moved are listed. */
   private updateNearest(i0: number, i1: number): void {
-    const { nx, ny, grid, columnRow } = this;
-    const changed = { from: new Int32Array(ny).fill(nx), to: new Int32Array(ny).fill(-1) };
+    const { nx, ny, grid, columnRow, changedColumns: changed } = this;
+    changed.from.fill(nx);
+    changed.to.fill(-1);
     nearestRowsInColumns(grid, columnRow, i0, i1, changed);
+    let farthest = this.farthestCells;
     for (let j = 0; j < ny; j++) {
       const to = changed.to[j]!;
-      if (to >= 0) refreshRowNearest(grid, j, columnRow, changed.from[j]!, to, this.distanceCells, this.nearest, this.listCell);
+      if (to < 0) continue;
+      const rowFarthest = refreshRowNearest(grid, j, columnRow, changed.from[j]!, to, this.distanceCells, this.nearest, this.farthestCells, this.listCell);
+      if (rowFarthest > farthest) farthest = rowFarthest;
     }
+    this.farthestCells = farthest;
   }
 
   private readonly listCell = (cell: number): void => this.list(cell);
@@ -427,13 +440,17 @@ export class Widths {
 
   /**
    * Whether the width at a cell is already known to be more than widthMm, so it need not be
-   * measured exactly to be compared: a known capped width k means at least k; and with d the distance
-   * (cells) to the nearest blocked centre, every chord is at least (2d − 1.71) cells long (a run's
-   * ends lie at least d away on either side, less one step of at most √2 cells; the chord across
-   * reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
+   * measured exactly to be compared: a known capped width k means at least k (so does a gate above
+   * the nearest obstacle's figure: it came from what was measured); and with d the distance (cells)
+   * to the nearest blocked centre, every chord is at least (2d − 1.71) cells long (a run's ends lie
+   * at least d away on either side, less one step of at most √2 cells; the chord across reaches a
+   * sample within √½ cell of a blocked centre, and both ends lose half a cell).
    */
   knownWiderThan(cell: number, widthMm: number): boolean {
-    if (this.exactKeyMm[cell]! > Math.floor(widthMm)) return true;
+    const floorMm = Math.floor(widthMm);
+    if (this.exactKeyMm[cell]! > floorMm) return true;
+    const gate = this.gateMm[cell]!;
+    if (gate > floorMm && gate > this.lowerGate(cell)) return true;
     return (2 * this.distanceCells[cell]! - CHORD_SHORTFALL_CELLS) * this.cellMm > widthMm;
   }
 
@@ -609,10 +626,17 @@ function boxFields(obstacles: readonly PieceBox[]): Float64Array {
   const fields = new Float64Array(obstacles.length * BOX_FIELDS);
   obstacles.forEach((box, index) => {
     const b = boundsMm(box.corners);
-    fields.set(
-      [box.centre[0], box.centre[1], box.axisX[0], box.axisX[1], box.halfWidthMm, box.halfDepthMm, b.minX, b.minY, b.maxX, b.maxY],
-      index * BOX_FIELDS,
-    );
+    const at = index * BOX_FIELDS;
+    fields[at] = box.centre[0];
+    fields[at + 1] = box.centre[1];
+    fields[at + 2] = box.axisX[0];
+    fields[at + 3] = box.axisX[1];
+    fields[at + 4] = box.halfWidthMm;
+    fields[at + 5] = box.halfDepthMm;
+    fields[at + 6] = b.minX;
+    fields[at + 7] = b.minY;
+    fields[at + 8] = b.maxX;
+    fields[at + 9] = b.maxY;
   });
   return fields;
 }
