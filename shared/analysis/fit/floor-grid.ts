@@ -114,15 +114,24 @@ export function rasteriseOutline(outline: readonly Vec2[], frame: GridFrame, lab
   }
 }
 
-/** Labels the free cells whose centre lies in an obstacle box with the box's index; the first box to cover a cell names it. */
-export function rasteriseObstacles(frame: GridFrame, obstacles: readonly PieceBox[], label: Int32Array): void {
+/**
+ * Labels the free cells whose centre lies in an obstacle box with the box's index; the first box to
+ * cover a cell names it. With `within` (first and last column, first and last row), only cells there.
+ */
+export function rasteriseObstacles(
+  frame: GridFrame,
+  obstacles: readonly PieceBox[],
+  label: Int32Array,
+  within?: readonly [number, number, number, number],
+): void {
   const { nx, ny, cellMm, originX, originY } = frame;
+  const [a0, a1, b0, b1] = within ?? [0, nx - 1, 0, ny - 1];
   obstacles.forEach((box, index) => {
     const b = boundsMm(box.corners);
-    const i0 = Math.max(0, Math.floor((b.minX - originX) / cellMm));
-    const i1 = Math.min(nx - 1, Math.floor((b.maxX - originX) / cellMm));
-    const j0 = Math.max(0, Math.floor((b.minY - originY) / cellMm));
-    const j1 = Math.min(ny - 1, Math.floor((b.maxY - originY) / cellMm));
+    const i0 = Math.max(a0, Math.floor((b.minX - originX) / cellMm));
+    const i1 = Math.min(a1, Math.floor((b.maxX - originX) / cellMm));
+    const j0 = Math.max(b0, Math.floor((b.minY - originY) / cellMm));
+    const j1 = Math.min(b1, Math.floor((b.maxY - originY) / cellMm));
     const [ax, ay] = box.axisX;
     for (let j = j0; j <= j1; j++) {
       const dy = originY + (j + 0.5) * cellMm - box.centre[1];

@@ -2,7 +2,7 @@
 // widths brought up to date must read exactly as widths measured afresh from the same floor.
 import { describe, expect, it } from 'vitest';
 import { placedBoxes, type PieceBox } from './boxes';
-import { FREE } from './floor-grid';
+import { FREE, rasteriseFloor } from './floor-grid';
 import { withSeatGaps } from './reach';
 import { pieceInput, plan } from './test-plans';
 import { findWalkwayProblems, WALKWAY_CELL_MM } from './walkway';
@@ -85,7 +85,11 @@ function drag(shell: Parameters<typeof findWalkwayProblems>[0], pieces: Piece[],
       rotation: step % 5 === 4 ? (piece.rotation + 10) % 360 : piece.rotation,
     };
     layout = layout.map((p, i) => (i === index ? moved : p));
-    const widths = floorWidths(shell.outline, obstaclesOf(layout), WALKWAY_CELL_MM, walkwayMm);
+    const obstacles = obstaclesOf(layout);
+    const widths = floorWidths(shell.outline, obstacles, WALKWAY_CELL_MM, walkwayMm);
+    // The labels drawn again where the piece moved read as the whole floor drawn afresh.
+    const drawn = rasteriseFloor(shell.outline, obstacles, WALKWAY_CELL_MM).label;
+    expect(widths.grid.label.every((label, cell) => label === drawn[cell]), `labels at step ${step}`).toBe(true);
     const { free, differing } = differingCells(widths, walkwayMm);
     expect(free).toBeGreaterThan(0);
     expect(differing, `step ${step}`).toEqual([]);

@@ -466,15 +466,9 @@ export class Widths {
     return this.measure(cell, Infinity);
   }
 
-  /**
-   * Whether the clear width at a free cell is at most limitMm: as `at(cell) <= limitMm`, but the
-   * chord across is looked for only as far as the limit (a chord found is the same however far one
-   * looks, and one past the limit is too long to matter).
-   */
+  /** Whether the clear width at a free cell is at most limitMm; measured exactly and kept, as the next check will likely ask again. */
   atMost(cell: number, limitMm: number): boolean {
-    const known = this.widthMm[cell]!;
-    if (known === known) return known <= limitMm;
-    return this.measure(cell, limitMm) <= limitMm;
+    return this.at(cell) <= limitMm;
   }
 
   /**
@@ -689,10 +683,20 @@ export function floorWidths(
   const key = `${requestedCellMm} ${walkwayMm} ${outline.map(([x, y]) => `${x},${y}`).join(' ')}`;
   const boxes = boxFields(obstacles);
   if (kept?.key === key) {
+    const { grid } = kept.widths;
     const label = kept.spare;
-    label.set(kept.outline);
-    rasteriseObstacles(kept.widths.grid, obstacles, label);
-    kept.spare = kept.widths.update(label, movedCells(kept.widths.grid, kept.boxes, boxes));
+    const moved = movedCells(grid, kept.boxes, boxes);
+    if (moved) {
+      // The labels as they were, drawn again where boxes moved: the room's alone, then every box over it.
+      label.set(grid.label);
+      const [a0, a1, b0, b1] = moved;
+      for (let j = b0; j <= b1; j++) label.set(kept.outline.subarray(j * grid.nx + a0, j * grid.nx + a1 + 1), j * grid.nx + a0);
+      if (a0 <= a1) rasteriseObstacles(grid, obstacles, label, moved);
+    } else {
+      label.set(kept.outline);
+      rasteriseObstacles(grid, obstacles, label);
+    }
+    kept.spare = kept.widths.update(label, moved);
     kept.boxes = boxes;
     return kept.widths;
   }
