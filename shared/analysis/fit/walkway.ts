@@ -41,19 +41,25 @@ const SNAP_TOLERANCE_MM = 0.5;
 function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
   const { along, out, halfAlongMm, halfOutMm } = faceFrame(box, face);
   const reachMm = halfOutMm + FRONT_STRIP_MM;
-  const corners: Vec2[] = [
-    addScaled(addScaled(box.centre, along, -halfAlongMm), out, halfOutMm),
-    addScaled(addScaled(box.centre, along, halfAlongMm), out, halfOutMm),
-    addScaled(addScaled(box.centre, along, halfAlongMm), out, reachMm),
-    addScaled(addScaled(box.centre, along, -halfAlongMm), out, reachMm),
-  ];
+  // The patch's bounds, from its four corners (either end of the face, at the face and a strip out).
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const a of [-halfAlongMm, halfAlongMm]) {
+    for (const o of [halfOutMm, reachMm]) {
+      const [x, y] = addScaled(addScaled(box.centre, along, a), out, o);
+      minX = Math.min(minX, x);
+      minY = Math.min(minY, y);
+      maxX = Math.max(maxX, x);
+      maxY = Math.max(maxY, y);
+    }
+  }
   const { nx, cellMm, originX, originY, label } = grid;
-  const xs = corners.map((c) => c[0]);
-  const ys = corners.map((c) => c[1]);
-  const i0 = Math.max(0, Math.floor((Math.min(...xs) - originX) / cellMm));
-  const i1 = Math.min(nx - 1, Math.floor((Math.max(...xs) - originX) / cellMm));
-  const j0 = Math.max(0, Math.floor((Math.min(...ys) - originY) / cellMm));
-  const j1 = Math.min(grid.ny - 1, Math.floor((Math.max(...ys) - originY) / cellMm));
+  const i0 = Math.max(0, Math.floor((minX - originX) / cellMm));
+  const i1 = Math.min(nx - 1, Math.floor((maxX - originX) / cellMm));
+  const j0 = Math.max(0, Math.floor((minY - originY) / cellMm));
+  const j1 = Math.min(grid.ny - 1, Math.floor((maxY - originY) / cellMm));
   const found: Patch = { faceMm: 2 * halfAlongMm, cells: [], alongMm: [] };
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
