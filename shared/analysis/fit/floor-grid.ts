@@ -255,7 +255,7 @@ export function nearestRowsInColumns(
  * The row pass of the distance transform for row j (Felzenszwalb and Huttenlocher's lower envelope
  * of parabolas (x − q)² + column distance² over the columns q): each cell's nearest blocked cell,
  * its distance (cells) and, given `squared`, its square. `sites` and `bounds` are working arrays of
- * at least nx and nx + 1 entries, `rise` of nx.
+ * at least nx and nx + 1 entries, `rise` of nx. Answers the row's farthest distance (cells).
  */
 export function nearestInRow(
   grid: FloorGrid,
@@ -265,7 +265,7 @@ export function nearestInRow(
   nearest: Int32Array,
   squared: Float64Array | null,
   work: { sites: Int32Array; bounds: Float64Array; rise: Float64Array },
-): void {
+): number {
   const { nx } = grid;
   const { sites, bounds, rise } = work;
   const row = j * nx;
@@ -295,9 +295,10 @@ export function nearestInRow(
     squared?.fill(Infinity, row, row + nx);
     root.fill(Infinity, row, row + nx);
     nearest.fill(-1, row, row + nx);
-    return;
+    return Infinity;
   }
   let at = 0;
+  let farthest = 0;
   for (let x = 0; x < nx; x++) {
     while (bounds[at + 1]! < x) at++;
     if (columnRow[row + x] === j) {
@@ -310,9 +311,12 @@ export function nearestInRow(
     const q = sites[at]!;
     const squaredCells = (x - q) * (x - q) + rise[q]!;
     if (squared) squared[row + x] = squaredCells;
-    root[row + x] = Math.sqrt(squaredCells);
+    const distance = Math.sqrt(squaredCells);
+    root[row + x] = distance;
+    if (distance > farthest) farthest = distance;
     nearest[row + x] = columnRow[row + q]! * nx + q;
   }
+  return farthest;
 }
 
 /** Working arrays for nearestInRow on a grid nx cells wide. */

@@ -164,11 +164,20 @@ export class Widths {
   private measureAll(): void {
     const { nx, ny, grid } = this;
     nearestRowsInColumns(grid, this.columnRow, 0, nx - 1, null);
-    for (let j = 0; j < ny; j++) nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork);
     let farthest = 0;
-    for (const distance of this.distanceCells) if (distance > farthest) farthest = distance;
+    for (let j = 0; j < ny; j++)
+      farthest = Math.max(farthest, nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork));
     this.farthestCells = farthest;
     this.allRuns();
+    // Nothing known yet of any width.
+    this.widthMm.fill(NaN);
+    this.exactKeyMm.fill(-1);
+    this.rayReach.fill(0);
+    const { gateMm, distanceCells, cellMm, limitMm } = this;
+    for (let cell = 0; cell < gateMm.length; cell++) {
+      const lowerMm = 2 * (distanceCells[cell]! - 0.5) * cellMm;
+      gateMm[cell] = lowerMm >= limitMm ? limitMm : Math.floor(lowerMm);
+    }
   }
 
   /** The gate from the nearest obstacle alone: twice its distance, in whole mm, capped at the walkway width rounded up. */
@@ -339,7 +348,6 @@ export class Widths {
     }
     // Back up the rows, the counts from the other ends held for this row and the one below.
     const stepMm0 = cellMm * RUN_STEP_CELLS[0]!;
-    const { exactKeyMm, rayReach, gateMm } = this;
     let row = new Int32Array(4 * nx);
     let below = new Int32Array(4 * nx);
     for (let j = ny - 1; j >= 0; j--) {
@@ -375,11 +383,6 @@ export class Widths {
         shortestMm = shorterRun(shortestMm, downCount, cellMm, 1);
         shortestMm = shorterRun(shortestMm, downRightCount, cellMm, 2);
         shortest[cell] = shorterRun(shortestMm, upRightCount, cellMm, 3);
-        // Nothing known yet of the width.
-        this.widthMm[cell] = NaN;
-        exactKeyMm[cell] = -1;
-        rayReach[cell] = 0;
-        gateMm[cell] = this.lowerGate(cell);
       }
     }
   }
