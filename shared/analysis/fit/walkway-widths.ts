@@ -110,8 +110,13 @@ export class Widths {
   private readonly rayReach: Uint8Array;
   private readonly columnRow: Int32Array;
   private readonly nearest: Int32Array;
-  /** Free cells in the run through each cell along each run direction; 0 where the run does not count (walls at both ends). */
-  private readonly runCells: Int32Array[];
+  /**
+   * Free cells in the run through each cell along each run direction; 0 where the run does not
+   * count (walls at both ends). A run is at most a grid side long: 50 m of 25 mm cells and the
+   * padding (ROOM_LIMITS.sideMm; cells are never finer), and twice that and one while being
+   * counted, well inside 16 bits; a longer grid counts in 32.
+   */
+  private readonly runCells: (Uint16Array | Int32Array)[];
   private readonly shortestRunMm: Float64Array;
   private readonly rowWork: ReturnType<typeof rowWork>;
   /** Each row's first and last column whose column answers an update changed. */
@@ -142,8 +147,8 @@ export class Widths {
     this.cellMm = cellMm;
     const cells = nx * ny;
     this.cells = cells;
-    const take = <T extends Int32Array | Float64Array | Uint8Array>(old: T | undefined, make: (n: number) => T): T =>
-      old && old.length >= cells ? (old.subarray(0, cells) as T) : make(cells);
+    const take = <T extends Int32Array | Float64Array | Uint16Array | Uint8Array>(old: T | undefined, make: (n: number) => T): T =>
+      old && old.length >= cells && old.constructor === make(0).constructor ? (old.subarray(0, cells) as T) : make(cells);
     this.gateMm = take(reuse?.gateMm, int32);
     this.exactKeyMm = take(reuse?.exactKeyMm, int32);
     this.distanceCells = take(reuse?.distanceCells, float64);
@@ -151,7 +156,9 @@ export class Widths {
     this.rayReach = take(reuse?.rayReach, uint8);
     this.columnRow = take(reuse?.columnRow, int32);
     this.nearest = take(reuse?.nearest, int32);
-    this.runCells = RUN_DIRECTIONS.map((_, k) => take(reuse?.runCells[k], int32));
+    // A grid longer than the schema allows (some caller's own outline) counts in 32 bits.
+    const long = 2 * Math.max(nx, ny) + 1 > 0xffff;
+    this.runCells = RUN_DIRECTIONS.map((_, k) => take(reuse?.runCells[k], long ? int32 : uint16));
     this.shortestRunMm = take(reuse?.shortestRunMm, float64);
     this.rowWork = rowWork(nx);
     this.changedColumns = { from: new Int32Array(ny), to: new Int32Array(ny) };
@@ -323,7 +330,8 @@ export class Widths {
   private allRuns(): void {
     const { nx, ny, cellMm } = this;
     const label = this.grid.label;
-    const [along, down, downRight, upRight] = this.runCells as [Int32Array, Int32Array, Int32Array, Int32Array];
+    type Counts = Uint16Array | Int32Array;
+    const [along, down, downRight, upRight] = this.runCells as [Counts, Counts, Counts, Counts];
     const shortest = this.shortestRunMm;
     const cells = nx * ny;
     // Down the rows: the ends to the left, above, above left and above right.
@@ -668,6 +676,7 @@ function movedCells(frame: GridFrame, before: Float64Array, now: Float64Array): 
 
 const int32 = (cells: number): Int32Array => new Int32Array(cells);
 const float64 = (cells: number): Float64Array => new Float64Array(cells);
+const uint16 = (cells: number): Uint16Array => new Uint16Array(cells);
 const uint8 = (cells: number): Uint8Array => new Uint8Array(cells);
 
 /**
