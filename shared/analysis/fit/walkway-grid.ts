@@ -110,8 +110,7 @@ export function widestRoutes(
  * The narrowest cell (least exact width) on the best route from a cell back to its way in, the
  * nearest to the cell among equals; and, in `routes.start`, the way-in cell the route ends at. The
  * routes form a tree, so each cell's answer is its own or its parent's: every cell is worked out
- * once and kept, however many pieces' routes run through it. A cell known to be wider than the
- * narrowest beyond it is passed over without measuring its width exactly.
+ * once and kept, however many pieces' routes run through it.
  */
 export function routeNarrowest(widths: Widths, routes: Routes): (cell: number) => number {
   const narrowest = routes.narrowest;
@@ -135,7 +134,7 @@ export function routeNarrowest(widths: Widths, routes: Routes): (cell: number) =
       routes.start[cell] = routes.start[up]!;
       const beyond = narrowest[up]!;
       const beyondMm = widths.at(beyond);
-      narrowest[cell] = !widths.knownWiderThan(cell, beyondMm) && widths.atMost(cell, beyondMm) ? cell : beyond;
+      narrowest[cell] = widths.atMost(cell, beyondMm) ? cell : beyond;
     }
     return narrowest[from]!;
   };

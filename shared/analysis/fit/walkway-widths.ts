@@ -450,18 +450,16 @@ export class Widths {
   }
 
   /**
-   * Whether the width at a cell is already known to be more than widthMm, so it need not be
-   * measured exactly to be compared: a known capped width k means at least k (so does a gate above
-   * the nearest obstacle's figure: it came from what was measured); and with d the distance (cells)
-   * to the nearest blocked centre, every chord is at least (2d − 1.71) cells long (a run's ends lie
-   * at least d away on either side, less one step of at most √2 cells; the chord across reaches a
+   * Whether the width at a cell whose exact width is not known is already known to be more than
+   * widthMm, so it need not be measured to be compared: a gate above the nearest obstacle's figure
+   * came from a look that found the width more than it; and with d the distance (cells) to the
+   * nearest blocked centre, every chord is at least (2d − 1.71) cells long (a run's ends lie at
+   * least d away on either side, less one step of at most √2 cells; the chord across reaches a
    * sample within √½ cell of a blocked centre, and both ends lose half a cell).
    */
-  knownWiderThan(cell: number, widthMm: number): boolean {
-    const floorMm = Math.floor(widthMm);
-    if (this.exactKeyMm[cell]! > floorMm) return true;
+  private knownWiderThan(cell: number, widthMm: number): boolean {
     const gate = this.gateMm[cell]!;
-    if (gate > floorMm && gate > this.lowerGate(cell)) return true;
+    if (gate > Math.floor(widthMm) && gate > this.lowerGate(cell)) return true;
     return (2 * this.distanceCells[cell]! - CHORD_SHORTFALL_CELLS) * this.cellMm > widthMm;
   }
 
@@ -477,9 +475,16 @@ export class Widths {
     return this.measure(cell, Infinity);
   }
 
-  /** Whether the clear width at a free cell is at most limitMm; measured exactly and kept, as the next check will likely ask again. */
+  /**
+   * Whether the clear width at a free cell is at most limitMm: from the exact width where it is
+   * known; else false where it is known to be wider, without measuring it; else measured exactly
+   * and kept, as the next check will likely ask again.
+   */
   atMost(cell: number, limitMm: number): boolean {
-    return this.at(cell) <= limitMm;
+    const known = this.widthMm[cell]!;
+    if (known === known) return known <= limitMm;
+    if (this.knownWiderThan(cell, limitMm)) return false;
+    return this.measure(cell, Infinity) <= limitMm;
   }
 
   /**
