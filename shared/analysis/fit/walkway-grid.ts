@@ -1,7 +1,7 @@
 // The walkway check's routes on the floor grid: the widest routes from the ways in, and the
 // narrowest cell on a route (the widths they go by are walkway-widths.ts's). Plan mm, x right, y down; cells
 // as in floor-grid.ts. Which pieces need a route and what a finding says live in walkway.ts.
-import { FREE, int32, scratch, type FloorGrid } from './floor-grid';
+import { FREE, KEPT_SCRATCH_CELLS, type FloorGrid } from './floor-grid';
 import type { Widths } from './walkway-widths';
 
 /** The search's own mark for blocked cells: wider than any route, so never entered. */
@@ -20,6 +20,114 @@ export interface Routes {
 }
 
 /**
+ * A search's record, kept so the next search on the same widths can take it up where the floor
+ * changed: every cell filed (an entry: its cell, width, the entry filed before it under the same
+ * width, the take during which it was filed, and when it was taken itself) and every take, in order.
+ */
+class SearchLog {
+  readonly routes: Routes;
+  /** Each cell's latest entry; −1 for a cell not filed. */
+  readonly cellEntry: Int32Array;
+  /** 1 at the way-in cells. */
+  readonly wayInCell: Uint8Array;
+  entryCell: Int32Array;
+  entryKey: Int32Array;
+  entryNext: Int32Array;
+  /** The take during which the entry was filed; −1 for a way-in cell's. */
+  entryFiledAt: Int32Array;
+  /** When the entry was taken (its take's number); −1 while it waits. */
+  entryTaken: Int32Array;
+  entries = 0;
+  /** The entry each take took, in order. */
+  takenEntry: Int32Array;
+  taken = 0;
+  heads: Int32Array = new Int32Array(0);
+  /** What the record was made on: the widths and their revision, the walkway width rounded up, the ways in. */
+  widths: Widths | null = null;
+  revision = -1;
+  limitMm = -1;
+  sources: Int32Array = new Int32Array(0);
+
+  constructor(readonly cells: number) {
+    this.routes = {
+      bottleneckMm: new Int32Array(cells),
+      parent: new Int32Array(cells),
+      wayIn: new Int32Array(cells),
+      narrowest: new Int32Array(cells),
+      start: new Int32Array(cells),
+    };
+    this.cellEntry = new Int32Array(cells);
+    this.wayInCell = new Uint8Array(cells);
+    const room = Math.max(cells, 16);
+    this.entryCell = new Int32Array(room);
+    this.entryKey = new Int32Array(room);
+    this.entryNext = new Int32Array(room);
+    this.entryFiledAt = new Int32Array(room);
+    this.entryTaken = new Int32Array(room);
+    this.takenEntry = new Int32Array(room);
+  }
+
+  /** Doubles the room for entries and takes. */
+  grow(): void {
+    const twice = (a: Int32Array): Int32Array => {
+      const grown = new Int32Array(a.length * 2);
+      grown.set(a);
+      return grown;
+    };
+    this.entryCell = twice(this.entryCell);
+    this.entryKey = twice(this.entryKey);
+    this.entryNext = twice(this.entryNext);
+    this.entryFiledAt = twice(this.entryFiledAt);
+    this.entryTaken = twice(this.entryTaken);
+    this.takenEntry = twice(this.takenEntry);
+  }
+
+  /** Files a cell under a width, reached during take `filedAt` (−1 for a way in). */
+  file(cell: number, keyMm: number, filedAt: number): void {
+    if (this.entries === this.entryCell.length) this.grow();
+    const entry = this.entries++;
+    this.entryCell[entry] = cell;
+    this.entryKey[entry] = keyMm;
+    this.entryNext[entry] = this.heads[keyMm]!;
+    this.entryFiledAt[entry] = filedAt;
+    this.entryTaken[entry] = -1;
+    this.heads[keyMm] = entry;
+    this.cellEntry[cell] = entry;
+  }
+
+  /** Whether the ways in are those of the record, cell for cell and opening for opening. */
+  sameSources(sources: readonly { cell: number; opening: number }[]): boolean {
+    if (this.sources.length !== 2 * sources.length) return false;
+    return sources.every((s, k) => this.sources[2 * k] === s.cell && this.sources[2 * k + 1] === s.opening);
+  }
+
+  /**
+   * The first take that read anything the changed cells hold (their labels, widths or gates): a
+   * cell's are read only when one of its four neighbours is taken. 0 when a way in changed.
+   */
+  firstTakeReading(changed: Int32Array, nx: number): number {
+    let first = this.taken;
+    for (const cell of changed) {
+      if (this.wayInCell[cell] === 1) return 0;
+      for (let n = 0; n < 4; n++) {
+        const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
+        const entry = this.cellEntry[next]!;
+        // A cell's latest entry is its widest: the one taken while it mattered.
+        const takenAt = entry >= 0 ? this.entryTaken[entry]! : -1;
+        if (takenAt >= 0 && takenAt < first) first = takenAt;
+      }
+    }
+    return first;
+  }
+}
+
+/** The search last made, kept for the next one (for grids up to KEPT_SCRATCH_CELLS). */
+let kept: SearchLog | null = null;
+
+/** A blocked cell's key, or a free one's before any route reaches it. */
+const unreached = (label: Int32Array, cell: number): number => (label[cell] === FREE ? -1 : BLOCKED_KEY);
+
+/**
  * Widest routes from the way-in cells over free cells, four neighbours each (diagonal steps could
  * slip between two blocked cells meeting at a corner): a Dijkstra search that always extends the
  * route with the widest bottleneck so far, so each cell ends with the widest route that reaches it.
@@ -29,53 +137,133 @@ export interface Routes {
  * Cells waiting are filed by bottleneck width in whole millimetres up to limitMm (anything wider is
  * as good as the walkway), the last filed under a width taken first; a route never widens as it
  * goes on, so the search only moves down the widths and each step is constant time.
+ *
+ * The search is kept, take by take. The next search on the same widths, one update later, with
+ * the same ways in, goes as this one did until the first take that reads a cell the update
+ * changed: it starts there, from the state this one had then, and so ends as a search afresh
+ * would. The routes (and what routeNarrowest worked out on them before that take) are good until
+ * the next search.
  */
 export function widestRoutes(
   grid: FloorGrid,
   widths: Widths,
   sources: readonly { cell: number; opening: number }[],
   limitMm: number,
+  /** False for a search afresh that leaves the kept one as it is (a test's comparison). */
+  keep = true,
 ): Routes {
   const cells = grid.nx * grid.ny;
   const { nx, label } = grid;
-  const bottleneckMm = scratch('bottleneck', int32, cells);
-  for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
-  // Written where a route reaches (the way-in cells first), and read only there.
-  const parent = scratch('parent', int32, cells);
-  const wayIn = scratch('way-in', int32, cells);
-  const { exactKeyMm, gateMm } = widths;
-  // The waiting cells: for each width, the entry filed last under it; each entry its cell and the entry filed before it.
-  const heads = new Int32Array(limitMm + 1).fill(-1);
-  let entryCell = scratch('queue-cells', int32, Math.max(cells, 16));
-  let entryNext = scratch('queue-next', int32, Math.max(cells, 16));
-  let entries = 0;
-  const file = (cell: number, keyMm: number): void => {
-    if (entries === entryCell.length) {
-      const grownCells = new Int32Array(entries * 2);
-      grownCells.set(entryCell);
-      entryCell = grownCells;
-      const grownNext = new Int32Array(entries * 2);
-      grownNext.set(entryNext);
-      entryNext = grownNext;
-    }
-    entryCell[entries] = cell;
-    entryNext[entries] = heads[keyMm]!;
-    heads[keyMm] = entries++;
-  };
+  const log = keep && kept?.cells === cells ? kept : new SearchLog(cells);
+  if (keep) kept = cells <= KEPT_SCRATCH_CELLS ? log : null;
+  const changed = widths.changedCells();
+  const follows =
+    log.widths === widths && log.revision === widths.revision - 1 && log.limitMm === limitMm && changed && log.sameSources(sources);
+  const from = follows ? log.firstTakeReading(changed, nx) : 0;
+  if (from === 0) {
+    startSearch(log, label, widths, sources, limitMm);
+    search(log, nx, widths, limitMm);
+  } else if (from < log.taken) {
+    const keyThen = log.entryKey[log.takenEntry[from]!]!;
+    rewind(log, label, changed!, from);
+    search(log, nx, widths, keyThen);
+  } else {
+    // No take read what changed: the routes stand; the changed cells, none reached, read their new labels.
+    for (const cell of changed!) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
+  }
+  log.widths = widths;
+  log.revision = widths.revision;
+  log.limitMm = limitMm;
+  return log.routes;
+}
+
+/** A search afresh: nothing reached, the ways in filed. */
+function startSearch(
+  log: SearchLog,
+  label: Int32Array,
+  widths: Widths,
+  sources: readonly { cell: number; opening: number }[],
+  limitMm: number,
+): void {
+  const { bottleneckMm, parent, wayIn, narrowest } = log.routes;
+  for (let cell = 0; cell < log.cells; cell++) bottleneckMm[cell] = unreached(label, cell);
+  log.cellEntry.fill(-1);
+  log.wayInCell.fill(0);
+  narrowest.fill(-1);
+  log.heads = new Int32Array(limitMm + 1).fill(-1);
+  log.entries = 0;
+  log.taken = 0;
   for (const { cell, opening } of sources) {
     const widthMm = widths.at(cell);
     const key = Math.floor(widthMm < limitMm ? widthMm : limitMm);
+    log.wayInCell[cell] = 1;
     if (key <= bottleneckMm[cell]!) continue;
     bottleneckMm[cell] = key;
     parent[cell] = -1;
     wayIn[cell] = opening;
-    file(cell, key);
+    log.file(cell, key, -1);
   }
-  for (let keyMm = limitMm; keyMm >= 0; keyMm--) {
+  log.sources = Int32Array.from(sources.flatMap((s) => [s.cell, s.opening]));
+}
+
+/**
+ * Puts the search back as it stood just before take `from`: what was filed during or after it is
+ * unfiled (its cells back to their state then), what was taken from it on waits again, and the
+ * changed cells (none reached yet) read their new labels. Routes worked out through cells taken
+ * from then on are forgotten.
+ */
+function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: number): void {
+  const { bottleneckMm, parent, narrowest } = log.routes;
+  const { entryCell, entryKey, entryFiledAt, entryTaken, cellEntry } = log;
+  // Entries are filed in the order of the takes that filed them: the first filed during take `from` or later.
+  let lo = 0;
+  let hi = log.entries;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (entryFiledAt[mid]! < from) lo = mid + 1;
+    else hi = mid;
+  }
+  const kept = lo;
+  const keyThen = entryKey[log.takenEntry[from]!]!;
+  for (let e = kept; e < log.entries; e++) {
+    const cell = entryCell[e]!;
+    bottleneckMm[cell] = unreached(label, cell);
+    cellEntry[cell] = -1;
+  }
+  for (let t = from; t < log.taken; t++) narrowest[entryCell[log.takenEntry[t]!]!] = -1;
+  for (const cell of changed) bottleneckMm[cell] = unreached(label, cell);
+  const heads = log.heads.fill(-1);
+  for (let e = 0; e < kept; e++) {
+    const cell = entryCell[e]!;
+    const key = entryKey[e]!;
+    // A cell filed again later stands as its latest entry before then (the others' latest entry is later still, or this one).
+    if (cellEntry[cell]! < e) {
+      cellEntry[cell] = e;
+      bottleneckMm[cell] = key;
+      const filedAt = entryFiledAt[e]!;
+      parent[cell] = filedAt >= 0 ? entryCell[log.takenEntry[filedAt]!]! : -1;
+    }
+    if (entryTaken[e]! >= from) entryTaken[e] = -1;
+    // Widths above the one being taken were empty then; below it nothing had been taken yet.
+    if (key < keyThen || (key === keyThen && entryTaken[e]! < 0)) heads[key] = e;
+  }
+  log.entries = kept;
+  log.taken = from;
+}
+
+/** Takes and files from width `topMm` down, until nothing waits. */
+function search(log: SearchLog, nx: number, widths: Widths, topMm: number): void {
+  const { bottleneckMm, parent } = log.routes;
+  const { exactKeyMm, gateMm } = widths;
+  const { heads } = log;
+  for (let keyMm = topMm; keyMm >= 0; keyMm--) {
     while (heads[keyMm]! >= 0) {
       const entry = heads[keyMm]!;
-      heads[keyMm] = entryNext[entry]!;
-      const cell = entryCell[entry]!;
+      heads[keyMm] = log.entryNext[entry]!;
+      const take = log.taken++;
+      log.entryTaken[entry] = take;
+      log.takenEntry[take] = entry;
+      const cell = log.entryCell[entry]!;
       if (keyMm < bottleneckMm[cell]!) continue;
       // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
       for (let n = 0; n < 4; n++) {
@@ -91,19 +279,11 @@ export function widestRoutes(
         if (through > known) {
           bottleneckMm[next] = through;
           parent[next] = cell;
-          if (entries === entryCell.length) file(next, through);
-          else {
-            entryCell[entries] = next;
-            entryNext[entries] = heads[through]!;
-            heads[through] = entries++;
-          }
+          log.file(next, through, take);
         }
       }
     }
   }
-  const narrowest = scratch('narrowest', int32, cells).fill(-1);
-  const start = scratch('start', int32, cells);
-  return { bottleneckMm, parent, wayIn, narrowest, start };
 }
 
 /**

@@ -48,7 +48,7 @@ function differingCells(kept: Widths, walkwayMm: number): { free: number; differ
   const sources = waysIn(fresh);
   const keptRoutes = widestRoutes(kept.grid, kept, sources, limitMm);
   const keptRoute = { bottleneck: Int32Array.from(keptRoutes.bottleneckMm), parent: Int32Array.from(keptRoutes.parent) };
-  const freshRoutes = widestRoutes(fresh.grid, fresh, sources, limitMm);
+  const freshRoutes = widestRoutes(fresh.grid, fresh, sources, limitMm, false);
   const label = kept.grid.label;
   let free = 0;
   const differing: number[] = [];

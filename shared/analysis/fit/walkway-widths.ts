@@ -127,6 +127,10 @@ export class Widths {
   private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
   private forgetCount = 0;
+  /** Counts the changes: one for the fresh start and one for every update since. */
+  private changes = 0;
+  /** Whether the latest change was an update (what it forgot is listed), not a fresh start. */
+  private updated = false;
   /** Set by `ray`: the blocked cell it met. */
   private rayHit = -1;
   /** Set by `ray`: how far along it (cells) its last sample lay, or might have. */
@@ -167,8 +171,24 @@ export class Widths {
     this.measureAll();
   }
 
+  /** How many times the widths have changed (a fresh start or an update), so a caller can tell whether it saw the latest. */
+  get revision(): number {
+    return this.changes;
+  }
+
+  /**
+   * The cells the latest change touched: whose width it forgot or that turned free or blocked (each
+   * of those has its width forgotten too), as a view good until the next change; null when the
+   * latest change was a fresh start, which touched every cell.
+   */
+  changedCells(): Int32Array | null {
+    return this.updated ? this.toForget.subarray(0, this.forgetCount) : null;
+  }
+
   /** The distances and runs afresh from the grid's labels; every width unknown. */
   private measureAll(): void {
+    this.changes++;
+    this.updated = false;
     const { nx, ny, grid } = this;
     nearestRowsInColumns(grid, this.columnRow, 0, nx - 1, null);
     let farthest = 0;
@@ -217,7 +237,12 @@ export class Widths {
         if (j > j1) j1 = j;
       }
     }
-    if (i1 < 0) return before;
+    if (i1 < 0) {
+      this.changes++;
+      this.updated = true;
+      this.forgetCount = 0;
+      return before;
+    }
     // A ray across looks no further than the walkway width, rounded to cells, from a sample that
     // strays up to half a cell from the line: every cell whose ray may pass a changed cell.
     const reach = Math.ceil(this.enoughMm / this.cellMm) + 2;
@@ -229,6 +254,8 @@ export class Widths {
       this.measureAll();
       return before;
     }
+    this.changes++;
+    this.updated = true;
     this.forgetCount = 0;
     this.updateNearest(i0, i1);
     this.updateRuns(i0, i1, j0, j1);
