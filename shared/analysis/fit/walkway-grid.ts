@@ -102,23 +102,48 @@ class SearchLog {
   }
 
   /**
-   * The first take that read anything the changed cells hold (their labels, widths or gates): a
-   * cell's are read only when one of its four neighbours is taken. 0 when a way in changed.
+   * The first take that read anything a cell holds (its label, width or gate): a cell's are read
+   * only when one of its four neighbours is taken; a way in's when the search starts (0). The
+   * number of takes when none did.
    */
-  firstTakeReading(changed: Int32Array, nx: number): number {
+  firstTakeReadingCell(cell: number, nx: number): number {
+    if (this.wayInCell[cell] === 1) return 0;
     let first = this.taken;
-    for (const cell of changed) {
-      if (this.wayInCell[cell] === 1) return 0;
-      for (let n = 0; n < 4; n++) {
-        const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
-        const entry = this.cellEntry[next]!;
-        // A cell's latest entry is its widest: the one taken while it mattered.
-        const takenAt = entry >= 0 ? this.entryTaken[entry]! : -1;
-        if (takenAt >= 0 && takenAt < first) first = takenAt;
-      }
+    for (let n = 0; n < 4; n++) {
+      const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
+      const entry = this.cellEntry[next]!;
+      // A cell's latest entry is its widest: the one taken while it mattered.
+      const takenAt = entry >= 0 ? this.entryTaken[entry]! : -1;
+      if (takenAt >= 0 && takenAt < first) first = takenAt;
     }
     return first;
   }
+
+  /** The first take that read anything any of the cells hold. */
+  firstTakeReading(cells: Int32Array, nx: number): number {
+    let first = this.taken;
+    for (const cell of cells) first = Math.min(first, this.firstTakeReadingCell(cell, nx));
+    return first;
+  }
+}
+
+/**
+ * The first take that read a cell the widths' latest update changed so that a search can tell: the
+ * cells it changed, and of those it may have changed the ones read before them that measure
+ * otherwise now.
+ */
+function firstTakeChanged(
+  log: SearchLog,
+  widths: Widths,
+  changed: { changed: Int32Array; maybe: Int32Array },
+  nx: number,
+): number {
+  let first = log.firstTakeReading(changed.changed, nx);
+  changed.maybe.forEach((cell, k) => {
+    const reading = log.firstTakeReadingCell(cell, nx);
+    if (reading < first && !widths.sameForSearch(k)) first = reading;
+  });
+  return first;
 }
 
 /** The search last made, kept for the next one (for grids up to KEPT_SCRATCH_CELLS). */
@@ -140,9 +165,9 @@ const unreached = (label: Int32Array, cell: number): number => (label[cell] === 
  *
  * The search is kept, take by take. The next search on the same widths, one update later, with
  * the same ways in, goes as this one did until the first take that reads a cell the update
- * changed: it starts there, from the state this one had then, and so ends as a search afresh
- * would. The routes (and what routeNarrowest worked out on them before that take) are good until
- * the next search.
+ * changed so that a search can tell: it starts there, from the state this one had then, and so
+ * ends as a search afresh would. What routeNarrowest worked out on routes taken before the first
+ * take that read any changed cell is kept. The routes are good until the next search.
  */
 export function widestRoutes(
   grid: FloorGrid,
@@ -159,17 +184,22 @@ export function widestRoutes(
   const changed = widths.changedCells();
   const follows =
     log.widths === widths && log.revision === widths.revision - 1 && log.limitMm === limitMm && changed && log.sameSources(sources);
-  const from = follows ? log.firstTakeReading(changed, nx) : 0;
+  const from = follows ? firstTakeChanged(log, widths, changed, nx) : 0;
   if (from === 0) {
     startSearch(log, label, widths, sources, limitMm);
     search(log, nx, widths, limitMm);
-  } else if (from < log.taken) {
-    const keyThen = log.entryKey[log.takenEntry[from]!]!;
-    rewind(log, label, changed!, from);
-    search(log, nx, widths, keyThen);
   } else {
-    // No take read what changed: the routes stand; the changed cells, none reached, read their new labels.
-    for (const cell of changed!) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
+    // Narrowest cells worked out on routes through a cell whose width changed are forgotten.
+    const { narrowest } = log.routes;
+    for (let t = log.firstTakeReading(changed!.all, nx); t < log.taken; t++) narrowest[log.entryCell[log.takenEntry[t]!]!] = -1;
+    if (from < log.taken) {
+      const keyThen = log.entryKey[log.takenEntry[from]!]!;
+      rewind(log, label, changed!.changed, from);
+      search(log, nx, widths, keyThen);
+    } else {
+      // No take read what changed: the routes stand; the changed cells, none reached, read their new labels.
+      for (const cell of changed!.changed) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
+    }
   }
   log.widths = widths;
   log.revision = widths.revision;
@@ -209,11 +239,10 @@ function startSearch(
 /**
  * Puts the search back as it stood just before take `from`: what was filed during or after it is
  * unfiled (its cells back to their state then), what was taken from it on waits again, and the
- * changed cells (none reached yet) read their new labels. Routes worked out through cells taken
- * from then on are forgotten.
+ * changed cells (none reached yet) read their new labels.
  */
 function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: number): void {
-  const { bottleneckMm, parent, narrowest } = log.routes;
+  const { bottleneckMm, parent } = log.routes;
   const { entryCell, entryKey, entryFiledAt, entryTaken, cellEntry } = log;
   // Entries are filed in the order of the takes that filed them: the first filed during take `from` or later.
   let lo = 0;
@@ -230,7 +259,6 @@ function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: nu
     bottleneckMm[cell] = unreached(label, cell);
     cellEntry[cell] = -1;
   }
-  for (let t = from; t < log.taken; t++) narrowest[entryCell[log.takenEntry[t]!]!] = -1;
   for (const cell of changed) bottleneckMm[cell] = unreached(label, cell);
   const heads = log.heads.fill(-1);
   for (let e = 0; e < kept; e++) {

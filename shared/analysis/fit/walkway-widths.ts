@@ -35,6 +35,10 @@ const RAY_SKIP_MARGIN_CELLS = 1.5;
  */
 const FRESH_SHARE = 0.5;
 
+/** Why a cell is listed to forget: something it reads changed, or its nearest obstacle moved too. */
+const LISTED = 1;
+const NEAREST_MOVED = 2;
+
 /** A box of cells: first and last column, first and last row. */
 export type CellBox = [number, number, number, number];
 
@@ -123,10 +127,16 @@ export class Widths {
   private readonly changedColumns: { from: Int32Array; to: Int32Array };
   /** No cell's distance (cells) to the nearest blocked centre is more than this. */
   private farthestCells = 0;
-  /** Cells whose widths an update forgets, each listed once (`listed` marks them). */
+  /** Cells whose widths an update forgets, each listed once (`listed` marks them, with why). */
   private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
   private forgetCount = 0;
+  /** The latest update's cells a route search sees as changed, and those it may (changedCells), with their capped widths before. */
+  private readonly searchChanged: Int32Array;
+  private readonly searchMaybe: Int32Array;
+  private readonly maybeKeyWas: Int32Array;
+  private changedCount = 0;
+  private maybeCount = 0;
   /** Counts the changes: one for the fresh start and one for every update since. */
   private changes = 0;
   /** Whether the latest change was an update (what it forgot is listed), not a fresh start. */
@@ -167,6 +177,9 @@ export class Widths {
     this.rowWork = rowWork(nx);
     this.changedColumns = { from: new Int32Array(ny), to: new Int32Array(ny) };
     this.toForget = take(reuse?.toForget, int32);
+    this.searchChanged = take(reuse?.searchChanged, int32);
+    this.searchMaybe = take(reuse?.searchMaybe, int32);
+    this.maybeKeyWas = take(reuse?.maybeKeyWas, int32);
     this.listed = take(reuse?.listed, uint8).fill(0);
     this.measureAll();
   }
@@ -177,12 +190,28 @@ export class Widths {
   }
 
   /**
-   * The cells the latest change touched: whose width it forgot or that turned free or blocked (each
-   * of those has its width forgotten too), as a view good until the next change; null when the
-   * latest change was a fresh start, which touched every cell.
+   * The cells the latest change touched, as views good until the next change; null when the latest
+   * change was a fresh start, which touched every cell. `all`: whose width it forgot (among them
+   * every cell that turned free or blocked). A route search goes by a cell's label, its nearest
+   * obstacle's figure and its width capped at the walkway width: `changed`, the cells where one of
+   * those changed or may have; `maybe`, cells whose nearest obstacle stayed and whose capped width
+   * was known, which sameForSearch tells apart. The rest are open by the walkway width or more all
+   * round, before and after, which lets every route through alike.
    */
-  changedCells(): Int32Array | null {
-    return this.updated ? this.toForget.subarray(0, this.forgetCount) : null;
+  changedCells(): { all: Int32Array; changed: Int32Array; maybe: Int32Array } | null {
+    if (!this.updated) return null;
+    return {
+      all: this.toForget.subarray(0, this.forgetCount),
+      changed: this.searchChanged.subarray(0, this.changedCount),
+      maybe: this.searchMaybe.subarray(0, this.maybeCount),
+    };
+  }
+
+  /** Whether changedCells().maybe[k] reads to a route search as before: its capped width, measured again, is the one known before. */
+  sameForSearch(k: number): boolean {
+    const cell = this.searchMaybe[k]!;
+    const widthMm = this.at(cell);
+    return Math.floor(widthMm < this.limitMm ? widthMm : this.limitMm) === this.maybeKeyWas[k];
   }
 
   /** The distances and runs afresh from the grid's labels; every width unknown. */
@@ -241,6 +270,8 @@ export class Widths {
       this.changes++;
       this.updated = true;
       this.forgetCount = 0;
+      this.changedCount = 0;
+      this.maybeCount = 0;
       return before;
     }
     // A ray across looks no further than the walkway width, rounded to cells, from a sample that
@@ -269,22 +300,34 @@ export class Widths {
         if (cast === 255 || (di > dj ? di : dj) < cast) this.list(cell);
       }
     }
-    const { toForget, listed } = this;
+    const { toForget, listed, gateMm, exactKeyMm, limitMm } = this;
+    this.changedCount = 0;
+    this.maybeCount = 0;
     for (let k = 0; k < this.forgetCount; k++) {
       const cell = toForget[k]!;
+      const why = listed[cell]!;
       listed[cell] = 0;
+      const gateWas = gateMm[cell]!;
+      const keyWas = exactKeyMm[cell]!;
       this.widthMm[cell] = NaN;
-      this.exactKeyMm[cell] = -1;
+      exactKeyMm[cell] = -1;
       this.rayReach[cell] = 0;
-      this.gateMm[cell] = this.lowerGate(cell);
+      gateMm[cell] = this.lowerGate(cell);
+      const turned = (label[cell] === FREE) !== (before[cell] === FREE);
+      if (!turned && gateWas >= limitMm && gateMm[cell]! >= limitMm) continue;
+      if (!turned && why === LISTED && keyWas >= 0) {
+        this.maybeKeyWas[this.maybeCount] = keyWas;
+        this.searchMaybe[this.maybeCount++] = cell;
+      } else this.searchChanged[this.changedCount++] = cell;
     }
     return before;
   }
 
-  private list(cell: number): void {
-    if (this.listed[cell] === 1) return;
-    this.listed[cell] = 1;
-    this.toForget[this.forgetCount++] = cell;
+  /** Lists a cell to forget, noting whether its nearest obstacle moved (NEAREST_MOVED) or not (LISTED). */
+  private list(cell: number, why = LISTED): void {
+    const was = this.listed[cell]!;
+    if (was === 0) this.toForget[this.forgetCount++] = cell;
+    if (why > was) this.listed[cell] = why;
   }
 
   /** The distance transform again over the columns i0..i1, and in each row over the cells the columns whose answers changed there may now be nearest to; cells whose nearest blocked cell moved are listed. */
@@ -303,7 +346,7 @@ export class Widths {
     this.farthestCells = farthest;
   }
 
-  private readonly listCell = (cell: number): void => this.list(cell);
+  private readonly listCell = (cell: number): void => this.list(cell, NEAREST_MOVED);
 
   /** The straight runs again along every line through the box i0..i1 × j0..j1 grown by a cell, as far as the runs that cross it reach; cells whose shortest run changed are listed. */
   private updateRuns(i0: number, i1: number, j0: number, j1: number): void {
