@@ -35,7 +35,7 @@ class SearchLog {
   entryNext: Int32Array;
   /** The take during which the entry was filed; −1 for a way-in cell's. */
   entryFiledAt: Int32Array;
-  /** When the entry was taken (its take's number); −1 while it waits. */
+  /** When the entry was taken (its take's number): written when it is, every entry being taken before a search ends; −1 for one waiting again after a rewind. */
   entryTaken: Int32Array;
   entries = 0;
   /** The entry each take took, in order. */
@@ -90,7 +90,6 @@ class SearchLog {
     this.entryKey[entry] = keyMm;
     this.entryNext[entry] = this.heads[keyMm]!;
     this.entryFiledAt[entry] = filedAt;
-    this.entryTaken[entry] = -1;
     this.heads[keyMm] = entry;
     this.cellEntry[cell] = entry;
   }

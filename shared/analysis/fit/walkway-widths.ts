@@ -404,16 +404,12 @@ export class Widths {
     const [along, down, downRight, upRight] = this.runCells as [Counts, Counts, Counts, Counts];
     const shortest = this.shortestRunMm;
     const cells = nx * ny;
+    // Blocked cells have no runs; free ones are all written below.
+    for (const counts of this.runCells) counts.fill(0);
+    shortest.fill(Infinity);
     // Down the rows: the ends to the left, above, above left and above right.
     for (let cell = 0; cell < cells; cell++) {
-      if (label[cell] !== FREE) {
-        along[cell] = 0;
-        down[cell] = 0;
-        downRight[cell] = 0;
-        upRight[cell] = 0;
-        shortest[cell] = Infinity;
-        continue;
-      }
+      if (label[cell] !== FREE) continue;
       // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
       let end = label[cell - 1]!;
       along[cell] = end === FREE ? along[cell - 1]! + 2 : end === WALL ? 3 : 2;
