@@ -35,6 +35,8 @@ class SearchLog {
   entryNext: Int32Array;
   /** The take during which the entry was filed; −1 for a way-in cell's. */
   entryFiledAt: Int32Array;
+  /** The cell's entry before this one; −1 for its first. */
+  entryPrevious: Int32Array;
   /** When the entry was taken (its take's number): written when it is, every entry being taken before a search ends; −1 for one waiting again after a rewind. */
   entryTaken: Int32Array;
   entries = 0;
@@ -63,6 +65,7 @@ class SearchLog {
     this.entryKey = new Int32Array(room);
     this.entryNext = new Int32Array(room);
     this.entryFiledAt = new Int32Array(room);
+    this.entryPrevious = new Int32Array(room);
     this.entryTaken = new Int32Array(room);
     this.takenEntry = new Int32Array(room);
   }
@@ -78,6 +81,7 @@ class SearchLog {
     this.entryKey = twice(this.entryKey);
     this.entryNext = twice(this.entryNext);
     this.entryFiledAt = twice(this.entryFiledAt);
+    this.entryPrevious = twice(this.entryPrevious);
     this.entryTaken = twice(this.entryTaken);
     this.takenEntry = twice(this.takenEntry);
   }
@@ -90,6 +94,7 @@ class SearchLog {
     this.entryKey[entry] = keyMm;
     this.entryNext[entry] = this.heads[keyMm]!;
     this.entryFiledAt[entry] = filedAt;
+    this.entryPrevious[entry] = this.cellEntry[cell]!;
     this.heads[keyMm] = entry;
     this.cellEntry[cell] = entry;
   }
@@ -242,7 +247,7 @@ function startSearch(
  */
 function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: number): void {
   const { bottleneckMm, parent } = log.routes;
-  const { entryCell, entryKey, entryFiledAt, entryTaken, cellEntry } = log;
+  const { entryCell, entryKey, entryFiledAt, entryTaken, entryPrevious, cellEntry, takenEntry } = log;
   // Entries are filed in the order of the takes that filed them: the first filed during take `from` or later.
   let lo = 0;
   let hi = log.entries;
@@ -251,30 +256,32 @@ function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: nu
     if (entryFiledAt[mid]! < from) lo = mid + 1;
     else hi = mid;
   }
-  const kept = lo;
-  const keyThen = entryKey[log.takenEntry[from]!]!;
-  for (let e = kept; e < log.entries; e++) {
+  const filed = lo;
+  // Waiting then: the entries filed before it and taken from it on (every entry was taken in the
+  // end); each width's latest is first in its line, the earlier ones behind it as they were.
+  const heads = log.heads.fill(-1);
+  for (let t = from; t < log.taken; t++) {
+    const entry = takenEntry[t]!;
+    if (entry >= filed) continue;
+    entryTaken[entry] = -1;
+    const key = entryKey[entry]!;
+    if (entry > heads[key]!) heads[key] = entry;
+  }
+  // Cells filed from then on stand as their latest entry before it, or as not reached.
+  for (let e = filed; e < log.entries; e++) {
     const cell = entryCell[e]!;
-    bottleneckMm[cell] = unreached(label, cell);
-    cellEntry[cell] = -1;
+    let back = cellEntry[cell]!;
+    while (back >= filed) back = entryPrevious[back]!;
+    cellEntry[cell] = back;
+    if (back < 0) bottleneckMm[cell] = unreached(label, cell);
+    else {
+      bottleneckMm[cell] = entryKey[back]!;
+      const filedAt = entryFiledAt[back]!;
+      parent[cell] = filedAt >= 0 ? entryCell[takenEntry[filedAt]!]! : -1;
+    }
   }
   for (const cell of changed) bottleneckMm[cell] = unreached(label, cell);
-  const heads = log.heads.fill(-1);
-  for (let e = 0; e < kept; e++) {
-    const cell = entryCell[e]!;
-    const key = entryKey[e]!;
-    // A cell filed again later stands as its latest entry before then (the others' latest entry is later still, or this one).
-    if (cellEntry[cell]! < e) {
-      cellEntry[cell] = e;
-      bottleneckMm[cell] = key;
-      const filedAt = entryFiledAt[e]!;
-      parent[cell] = filedAt >= 0 ? entryCell[log.takenEntry[filedAt]!]! : -1;
-    }
-    if (entryTaken[e]! >= from) entryTaken[e] = -1;
-    // Widths above the one being taken were empty then; below it nothing had been taken yet.
-    if (key < keyThen || (key === keyThen && entryTaken[e]! < 0)) heads[key] = e;
-  }
-  log.entries = kept;
+  log.entries = filed;
   log.taken = from;
 }
 
