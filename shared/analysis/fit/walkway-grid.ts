@@ -195,7 +195,10 @@ export function widestRoutes(
   } else {
     // Narrowest cells worked out on routes through a cell whose width changed are forgotten.
     const { narrowest } = log.routes;
-    for (let t = log.firstTakeReading(changed!.all, nx); t < log.taken; t++) narrowest[log.entryCell[log.takenEntry[t]!]!] = -1;
+    const firstReading = log.firstTakeReading(changed!.all, nx);
+    // Most of them: all at once.
+    if (log.taken - firstReading > cells / 8) narrowest.fill(-1);
+    else for (let t = firstReading; t < log.taken; t++) narrowest[log.entryCell[log.takenEntry[t]!]!] = -1;
     if (from < log.taken) {
       const keyThen = log.entryKey[log.takenEntry[from]!]!;
       rewind(log, label, changed!.changed, from);

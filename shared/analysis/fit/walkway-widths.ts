@@ -141,6 +141,8 @@ export class Widths {
   private changes = 0;
   /** Whether the latest change was an update (what it forgot is listed), not a fresh start. */
   private updated = false;
+  /** The latest update's box of cells that turned free or blocked. */
+  private turnedBox: CellBox = [0, -1, 0, -1];
   /** Set by `ray`: the blocked cell it met. */
   private rayHit = -1;
   /** Set by `ray`: how far along it (cells) its last sample lay, or might have. */
@@ -207,6 +209,11 @@ export class Widths {
     };
   }
 
+  /** The box of cells that turned free or blocked in the latest change ([0, −1, 0, −1] for none); null after a fresh start. */
+  changedBox(): CellBox | null {
+    return this.updated ? this.turnedBox : null;
+  }
+
   /** Whether changedCells().maybe[k] reads to a route search as before: its capped width, measured again, is the one known before. */
   sameForSearch(k: number): boolean {
     const cell = this.searchMaybe[k]!;
@@ -266,6 +273,7 @@ export class Widths {
         if (j > j1) j1 = j;
       }
     }
+    this.turnedBox = [i0, i1, j0, j1];
     if (i1 < 0) {
       this.changes++;
       this.updated = true;

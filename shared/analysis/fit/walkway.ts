@@ -22,7 +22,7 @@ import { pointInPolygon } from '../../geometry/polygon';
 import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from './boxes';
 import { cellAt, cellCentreMm, FREE, WALL, type FloorGrid } from './floor-grid';
 import { routeNarrowest, widestRoutes } from './walkway-grid';
-import { floorWidths } from './walkway-widths';
+import { floorWidths, type CellBox, type Widths } from './walkway-widths';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
 import { itemAt } from '../../item-at';
 
@@ -37,8 +37,8 @@ const SNAP_CELLS = 1.5;
 /** Two ways of drawing a gap this close (mm) in length show the same gap. */
 const SNAP_TOLERANCE_MM = 0.5;
 
-/** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep. */
-function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
+/** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep, and the box of cells its bounds cover. */
+function faceCells(grid: FloorGrid, box: PieceBox, face: Face): { patch: Patch; cells: CellBox } {
   const { along, out, halfAlongMm, halfOutMm } = faceFrame(box, face);
   const reachMm = halfOutMm + FRONT_STRIP_MM;
   // The patch's bounds, from its four corners (either end of the face, at the face and a strip out).
@@ -75,7 +75,50 @@ function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
       }
     }
   }
-  return found;
+  return { patch: found, cells: [i0, i1, j0, j1] };
+}
+
+/** A face's patch as last worked out: where its box stood and the cells the patch's bounds cover. */
+interface KeptPatch {
+  patch: Patch;
+  /** The box's centre, x axis and half width and depth (plan mm). */
+  fields: [number, number, number, number, number, number];
+  cells: CellBox;
+}
+
+/**
+ * Patches worked out by the last check, by piece id and face, for the widths they were worked out
+ * on (and their revision): the next check on those widths, one update later, takes every patch
+ * whose box stands where it stood and whose bounds miss the cells that turned free or blocked.
+ */
+const keptPatches = { widths: null as Widths | null, revision: -1, patches: new Map<string, KeptPatch>() };
+
+/** The patches of the last check that stand for this one (keptPatches). */
+function patchesFor(widths: Widths): Map<string, KeptPatch> {
+  const turned = widths.changedBox();
+  const { patches } = keptPatches;
+  if (keptPatches.widths !== widths || keptPatches.revision !== widths.revision - 1 || !turned) patches.clear();
+  else {
+    const [i0, i1, j0, j1] = turned;
+    for (const [key, kept] of patches) {
+      const [a0, a1, b0, b1] = kept.cells;
+      if (a0 <= i1 && i0 <= a1 && b0 <= j1 && j0 <= b1) patches.delete(key);
+    }
+  }
+  keptPatches.widths = widths;
+  keptPatches.revision = widths.revision;
+  return patches;
+}
+
+/** A face's patch, from the kept ones where its box stands as it stood. */
+function patchBefore(grid: FloorGrid, patches: Map<string, KeptPatch>, box: PieceBox, face: Face): Patch {
+  const key = `${box.piece.id}\u0000${face}`;
+  const fields: KeptPatch['fields'] = [box.centre[0], box.centre[1], box.axisX[0], box.axisX[1], box.halfWidthMm, box.halfDepthMm];
+  const kept = patches.get(key);
+  if (kept && kept.fields.every((f, k) => f === fields[k])) return kept.patch;
+  const { patch, cells } = faceCells(grid, box, face);
+  patches.set(key, { patch, fields, cells });
+  return patch;
 }
 
 /** A plan point (mm) to a tenth of a millimetre, dropping arithmetic noise from reports. */
@@ -141,12 +184,13 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
 
   const findings: Finding[] = [];
   const narrowestOnRoute = routeNarrowest(widths, routes);
+  const patches = patchesFor(widths);
   obstacles.forEach((box, index) => {
     // A piece wholly outside the room is an outside-room finding; a route to it means nothing.
     if (!pointInPolygon(box.centre, outline)) return;
     const piece = box.piece;
     const needs = reachNeeds(box, boxes, walkwayMm);
-    const patchOf = (way: ReachWay) => faceCells(grid, way.box ?? box, way.face);
+    const patchOf = (way: ReachWay) => patchBefore(grid, patches, way.box ?? box, way.face);
     const verdict = judgeReach(needs, patchOf, routes.bottleneckMm, MIN_FRONT_CELLS, grid.cellMm);
     if (verdict === 'reached') return;
     if (verdict.short === null) {
