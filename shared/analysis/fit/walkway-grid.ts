@@ -4,6 +4,8 @@
 import { FREE, KEPT_SCRATCH_CELLS, type FloorGrid } from './floor-grid';
 import type { Widths } from './walkway-widths';
 
+/** A search takes up the last one where it left off only if at least this share of its takes stand. */
+const REWIND_LEAST_SHARE = 0.25;
 /** The search's own mark for blocked cells: wider than any route, so never entered. */
 const BLOCKED_KEY = 0x7fffffff;
 export interface Routes {
@@ -188,7 +190,9 @@ export function widestRoutes(
   const changed = widths.changedCells();
   const follows =
     log.widths === widths && log.revision === widths.revision - 1 && log.limitMm === limitMm && changed && log.sameSources(sources);
-  const from = follows ? firstTakeChanged(log, widths, changed, nx) : 0;
+  const reading = follows ? firstTakeChanged(log, widths, changed, nx) : 0;
+  // Going back to near the start would undo nearly everything, one entry at a time: start afresh instead.
+  const from = reading < REWIND_LEAST_SHARE * log.taken ? 0 : reading;
   if (from === 0) {
     startSearch(log, label, widths, sources, limitMm);
     search(log, nx, widths, limitMm);
@@ -292,15 +296,16 @@ function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: nu
 function search(log: SearchLog, nx: number, widths: Widths, topMm: number): void {
   const { bottleneckMm, parent } = log.routes;
   const { exactKeyMm, gateMm } = widths;
-  const { heads } = log;
+  const { heads, cellEntry } = log;
+  let { entryCell, entryKey, entryNext, entryFiledAt, entryPrevious, entryTaken, takenEntry, entries, taken } = log;
   for (let keyMm = topMm; keyMm >= 0; keyMm--) {
     while (heads[keyMm]! >= 0) {
       const entry = heads[keyMm]!;
-      heads[keyMm] = log.entryNext[entry]!;
-      const take = log.taken++;
-      log.entryTaken[entry] = take;
-      log.takenEntry[take] = entry;
-      const cell = log.entryCell[entry]!;
+      heads[keyMm] = entryNext[entry]!;
+      const take = taken++;
+      entryTaken[entry] = take;
+      takenEntry[take] = entry;
+      const cell = entryCell[entry]!;
       if (keyMm < bottleneckMm[cell]!) continue;
       // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
       for (let n = 0; n < 4; n++) {
@@ -313,14 +318,28 @@ function search(log: SearchLog, nx: number, widths: Widths, topMm: number): void
           const exact = exactKeyMm[next]!;
           through = exact >= 0 ? exact : widths.cappedAt(next, keyMm);
         }
-        if (through > known) {
-          bottleneckMm[next] = through;
-          parent[next] = cell;
-          log.file(next, through, take);
+        if (through <= known) continue;
+        bottleneckMm[next] = through;
+        parent[next] = cell;
+        if (entries === entryCell.length) {
+          log.entries = entries;
+          log.grow();
+          ({ entryCell, entryKey, entryNext, entryFiledAt, entryPrevious, entryTaken, takenEntry } = log);
         }
+        // Filed as SearchLog.file files it, here without the call.
+        const filed = entries++;
+        entryCell[filed] = next;
+        entryKey[filed] = through;
+        entryNext[filed] = heads[through]!;
+        entryFiledAt[filed] = take;
+        entryPrevious[filed] = cellEntry[next]!;
+        heads[through] = filed;
+        cellEntry[next] = filed;
       }
     }
   }
+  log.entries = entries;
+  log.taken = taken;
 }
 
 /**
