@@ -20,7 +20,8 @@ const benches: { name: string; run: () => Promise<void> }[] = [
 
 const named = process.argv.slice(2);
 const unknown = named.filter((name) => !benches.some((bench) => bench.name === name));
-if (unknown.length > 0) throw new Error(`No bench named ${unknown.join(', ')}; the benches are ${benches.map((b) => b.name).join(', ')}`);
+if (unknown.length > 0)
+  throw new Error(`No bench named ${unknown.join(', ')}; the benches are ${benches.map((b) => b.name).join(', ')}`);
 for (const bench of benches.filter((b) => named.length === 0 || named.includes(b.name))) {
   console.log(`# ${bench.name}`);
   await bench.run();

@@ -208,7 +208,8 @@ export function closestPair(a: readonly Vec2[], b: readonly Vec2[]): ClosestPair
       const d3 = (sx - rx) * (py - ry) - (sy - ry) * (px - rx);
       const d4 = (sx - rx) * (qy - ry) - (sy - ry) * (qx - rx);
       if (d1 * d2 < 0 && d3 * d4 < 0) {
-        const t = cross(sub([rx, ry], [px, py]), sub([sx, sy], [rx, ry])) / cross(sub([qx, qy], [px, py]), sub([sx, sy], [rx, ry]));
+        const t =
+          cross(sub([rx, ry], [px, py]), sub([sx, sy], [rx, ry])) / cross(sub([qx, qy], [px, py]), sub([sx, sy], [rx, ry]));
         const hit = addScaled([px, py], sub([qx, qy], [px, py]), t);
         return { distanceMm: 0, from: hit, to: hit };
       }

@@ -189,7 +189,11 @@ export function widestRoutes(
   if (keep) kept = cells <= KEPT_SCRATCH_CELLS ? log : null;
   const changed = widths.changedCells();
   const follows =
-    log.widths === widths && log.revision === widths.revision - 1 && log.limitMm === limitMm && changed && log.sameSources(sources);
+    log.widths === widths &&
+    log.revision === widths.revision - 1 &&
+    log.limitMm === limitMm &&
+    changed &&
+    log.sameSources(sources);
   const reading = follows ? firstTakeChanged(log, widths, changed, nx) : 0;
   // Going back to near the start would undo nearly everything, one entry at a time: start afresh instead.
   const from = reading < REWIND_LEAST_SHARE * log.taken ? 0 : reading;

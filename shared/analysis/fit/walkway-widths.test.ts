@@ -89,7 +89,10 @@ function drag(shell: Parameters<typeof findWalkwayProblems>[0], pieces: Piece[],
     const widths = floorWidths(shell.outline, obstacles, WALKWAY_CELL_MM, walkwayMm);
     // The labels drawn again where the piece moved read as the whole floor drawn afresh.
     const drawn = rasteriseFloor(shell.outline, obstacles, WALKWAY_CELL_MM).label;
-    expect(widths.grid.label.every((label, cell) => label === drawn[cell]), `labels at step ${step}`).toBe(true);
+    expect(
+      widths.grid.label.every((label, cell) => label === drawn[cell]),
+      `labels at step ${step}`,
+    ).toBe(true);
     const { free, differing } = differingCells(widths, walkwayMm);
     expect(free).toBeGreaterThan(0);
     expect(differing, `step ${step}`).toEqual([]);
@@ -126,7 +129,16 @@ describe('widths kept between checks', () => {
     };
     const base: PieceInput[] = [
       pieceInput({ id: 'bed', name: 'Bed', kind: 'bed', x: 1000, y: 2200, width: 1400, depth: 2000, height: 500, rotation: 270 }),
-      pieceInput({ id: 'chest', name: 'Chest', kind: 'chest-of-drawers', x: 3310, y: 2000, width: 1380, depth: 500, height: 800 }),
+      pieceInput({
+        id: 'chest',
+        name: 'Chest',
+        kind: 'chest-of-drawers',
+        x: 3310,
+        y: 2000,
+        width: 1380,
+        depth: 500,
+        height: 800,
+      }),
       pieceInput({ id: 'stool', name: 'Stool', x: 2300, y: 600, width: 400, depth: 400, height: 450 }),
     ];
     let sawFinding = false;

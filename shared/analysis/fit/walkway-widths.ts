@@ -163,8 +163,10 @@ export class Widths {
     this.cellMm = cellMm;
     const cells = nx * ny;
     this.cells = cells;
-    const take = <T extends Int32Array | Float64Array | Uint16Array | Uint8Array>(old: T | undefined, make: (n: number) => T): T =>
-      old && old.length >= cells && old.constructor === make(0).constructor ? (old.subarray(0, cells) as T) : make(cells);
+    const take = <T extends Int32Array | Float64Array | Uint16Array | Uint8Array>(
+      old: T | undefined,
+      make: (n: number) => T,
+    ): T => (old && old.length >= cells && old.constructor === make(0).constructor ? (old.subarray(0, cells) as T) : make(cells));
     this.gateMm = take(reuse?.gateMm, int32);
     this.exactKeyMm = take(reuse?.exactKeyMm, int32);
     this.distanceCells = take(reuse?.distanceCells, float64);
@@ -348,7 +350,17 @@ export class Widths {
     for (let j = 0; j < ny; j++) {
       const to = changed.to[j]!;
       if (to < 0) continue;
-      const rowFarthest = refreshRowNearest(grid, j, columnRow, changed.from[j]!, to, this.distanceCells, this.nearest, this.farthestCells, this.listCell);
+      const rowFarthest = refreshRowNearest(
+        grid,
+        j,
+        columnRow,
+        changed.from[j]!,
+        to,
+        this.distanceCells,
+        this.nearest,
+        this.farthestCells,
+        this.listCell,
+      );
       if (rowFarthest > farthest) farthest = rowFarthest;
     }
     this.farthestCells = farthest;

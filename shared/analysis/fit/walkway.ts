@@ -113,7 +113,14 @@ function patchesFor(widths: Widths): Map<string, KeptPatch> {
 /** A face's patch, from the kept ones where its box stands as it stood. */
 function patchBefore(grid: FloorGrid, patches: Map<string, KeptPatch>, box: PieceBox, face: Face): Patch {
   const key = `${box.piece.id}\u0000${face}`;
-  const fields: KeptPatch['fields'] = [box.centre[0], box.centre[1], box.axisX[0], box.axisX[1], box.halfWidthMm, box.halfDepthMm];
+  const fields: KeptPatch['fields'] = [
+    box.centre[0],
+    box.centre[1],
+    box.axisX[0],
+    box.axisX[1],
+    box.halfWidthMm,
+    box.halfDepthMm,
+  ];
   const kept = patches.get(key);
   if (kept && kept.fields.every((f, k) => f === fields[k])) return kept.patch;
   const { patch, cells } = faceCells(grid, box, face);
