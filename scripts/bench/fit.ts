@@ -11,7 +11,7 @@ import { checkFit } from '../../shared/analysis/fit/index';
 import { findOutsideRoom } from '../../shared/analysis/fit/outside-room';
 import { findOverlaps } from '../../shared/analysis/fit/overlap';
 import { findWalkwayProblems } from '../../shared/analysis/fit/walkway';
-import { forgetKeptWidths } from '../../shared/analysis/fit/walkway-widths';
+import { forgetKeptWidths } from '../../shared/analysis/fit/walkway-floor';
 import { findBlockedWindows } from '../../shared/analysis/fit/window';
 import { DEFAULT_WALKWAY_MM } from '../../shared/analysis/fit/clearances';
 import type { Piece } from '../../shared/schemas/option';

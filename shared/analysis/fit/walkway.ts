@@ -22,7 +22,8 @@ import { pointInPolygon } from '../../geometry/polygon';
 import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from './boxes';
 import { cellAt, cellCentreMm, FREE, WALL, type FloorGrid } from './floor-grid';
 import { routeNarrowest, widestRoutes } from './walkway-grid';
-import { floorWidths, type CellBox, type Widths } from './walkway-widths';
+import { floorWidths } from './walkway-floor';
+import type { CellBox, Widths } from './walkway-widths';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
 import { itemAt } from '../../item-at';
 
