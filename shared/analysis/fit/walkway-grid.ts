@@ -125,6 +125,24 @@ class SearchLog {
     return first;
   }
 
+  /**
+   * Whether a cell first read at take `readAt` (0 for a way in) would be filed now as it was: it
+   * was filed once only, at the width a search afresh would file it at now (the width of the take
+   * that first read it, or its own capped width if less; a way in's own), and a search goes through
+   * it plainly (Widths.searchKey). Later reads of such a cell change nothing, so a search that does
+   * the same up to that take goes on doing the same with it.
+   */
+  filesAlike(cell: number, readAt: number, widths: Widths): boolean {
+    const entry = this.cellEntry[cell]!;
+    if (entry < 0 || this.entryPrevious[entry]! >= 0) return false;
+    const key = widths.searchKey(cell);
+    if (key < 0) return false;
+    if (this.wayInCell[cell] === 1) return this.entryFiledAt[entry] === -1 && this.entryKey[entry] === key;
+    if (this.entryFiledAt[entry] !== readAt) return false;
+    const readKey = this.entryKey[this.takenEntry[readAt]!]!;
+    return this.entryKey[entry] === Math.min(readKey, key);
+  }
+
   /** The first take that read anything any of the cells hold. */
   firstTakeReading(cells: Int32Array, nx: number): number {
     let first = this.taken;
@@ -134,21 +152,28 @@ class SearchLog {
 }
 
 /**
- * The first take that read a cell the widths' latest update changed so that a search can tell: the
- * cells it changed, and of those it may have changed the ones read before them that measure
- * otherwise now.
+ * The first take that goes otherwise now the widths' latest update changed some cells: the first
+ * to read a cell that turned free or blocked; and of the other changed cells, in the order they were
+ * first read, the first that a search would now file otherwise than this one did (filesAlike).
  */
 function firstTakeChanged(
   log: SearchLog,
   widths: Widths,
-  changed: { changed: Int32Array; maybe: Int32Array },
+  changed: { turned: Int32Array; changed: Int32Array },
   nx: number,
 ): number {
-  let first = log.firstTakeReading(changed.changed, nx);
-  changed.maybe.forEach((cell, k) => {
-    const reading = log.firstTakeReadingCell(cell, nx);
-    if (reading < first && !widths.sameForSearch(k)) first = reading;
-  });
+  let first = log.firstTakeReading(changed.turned, nx);
+  const read: number[] = [];
+  for (const cell of changed.changed) {
+    const at = log.firstTakeReadingCell(cell, nx);
+    if (at < first) read.push(at * log.cells + cell);
+  }
+  read.sort((a, b) => a - b);
+  for (const code of read) {
+    const at = Math.floor(code / log.cells);
+    if (at >= first) break;
+    if (!log.filesAlike(code - at * log.cells, at, widths)) first = at;
+  }
   return first;
 }
 
@@ -209,11 +234,11 @@ export function widestRoutes(
     else for (let t = firstReading; t < log.taken; t++) narrowest[log.entryCell[log.takenEntry[t]!]!] = -1;
     if (from < log.taken) {
       const keyThen = log.entryKey[log.takenEntry[from]!]!;
-      rewind(log, label, changed!.changed, from);
+      rewind(log, label, changed!.turned, from);
       search(log, nx, widths, keyThen);
     } else {
       // No take read what changed: the routes stand; the changed cells, none reached, read their new labels.
-      for (const cell of changed!.changed) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
+      for (const cell of changed!.turned) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
     }
   }
   log.widths = widths;

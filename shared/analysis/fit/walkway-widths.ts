@@ -27,10 +27,6 @@ const RAY_SKIP_MARGIN_CELLS = 1.5;
  */
 const FRESH_SHARE = 0.5;
 
-/** Why a cell is listed to forget: something it reads changed, or its nearest obstacle moved too. */
-const LISTED = 1;
-const NEAREST_MOVED = 2;
-
 /** A box of cells: first and last column, first and last row. */
 export type CellBox = [number, number, number, number];
 
@@ -119,16 +115,15 @@ export class Widths {
   private readonly changedColumns: { from: Int32Array; to: Int32Array };
   /** No cell's distance (cells) to the nearest blocked centre is more than this. */
   private farthestCells = 0;
-  /** Cells whose widths an update forgets, each listed once (`listed` marks them, with why). */
+  /** Cells whose widths an update forgets, each listed once (`listed` marks them). */
   private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
   private forgetCount = 0;
-  /** The latest update's cells a route search sees as changed, and those it may (changedCells), with their capped widths before. */
+  /** The latest update's cells a route search may tell apart (changedCells). */
+  private readonly searchTurned: Int32Array;
   private readonly searchChanged: Int32Array;
-  private readonly searchMaybe: Int32Array;
-  private readonly maybeKeyWas: Int32Array;
+  private turnedCount = 0;
   private changedCount = 0;
-  private maybeCount = 0;
   /** Counts the changes: one for the fresh start and one for every update since. */
   private changes = 0;
   /** Whether the latest change was an update (what it forgot is listed), not a fresh start. */
@@ -173,9 +168,8 @@ export class Widths {
     this.rowWork = rowWork(nx);
     this.changedColumns = { from: new Int32Array(ny), to: new Int32Array(ny) };
     this.toForget = take(reuse?.toForget, int32);
+    this.searchTurned = take(reuse?.searchTurned, int32);
     this.searchChanged = take(reuse?.searchChanged, int32);
-    this.searchMaybe = take(reuse?.searchMaybe, int32);
-    this.maybeKeyWas = take(reuse?.maybeKeyWas, int32);
     this.listed = take(reuse?.listed, uint8).fill(0);
     this.measureAll();
   }
@@ -188,18 +182,17 @@ export class Widths {
   /**
    * The cells the latest change touched, as views good until the next change; null when the latest
    * change was a fresh start, which touched every cell. `all`: whose width it forgot (among them
-   * every cell that turned free or blocked). A route search goes by a cell's label, its nearest
-   * obstacle's figure and its width capped at the walkway width: `changed`, the cells where one of
-   * those changed or may have; `maybe`, cells whose nearest obstacle stayed and whose capped width
-   * was known, which sameForSearch tells apart. The rest are open by the walkway width or more all
-   * round, before and after, which lets every route through alike.
+   * every cell that turned free or blocked). Of those, a route search may tell apart `turned`, the
+   * cells that turned free or blocked, and `changed`, the others whose nearest obstacle's figure or
+   * capped width may be other now (searchKey gives the new one); the rest are open by the walkway
+   * width or more all round, before and after, which lets every route through alike.
    */
-  changedCells(): { all: Int32Array; changed: Int32Array; maybe: Int32Array } | null {
+  changedCells(): { all: Int32Array; turned: Int32Array; changed: Int32Array } | null {
     if (!this.updated) return null;
     return {
       all: this.toForget.subarray(0, this.forgetCount),
+      turned: this.searchTurned.subarray(0, this.turnedCount),
       changed: this.searchChanged.subarray(0, this.changedCount),
-      maybe: this.searchMaybe.subarray(0, this.maybeCount),
     };
   }
 
@@ -208,11 +201,16 @@ export class Widths {
     return this.updated ? this.turnedBox : null;
   }
 
-  /** Whether changedCells().maybe[k] reads to a route search as before: its capped width, measured again, is the one known before. */
-  sameForSearch(k: number): boolean {
-    const cell = this.searchMaybe[k]!;
+  /**
+   * How a route search goes through a free cell, when it is as plainly as most: no wider than the
+   * cell's width capped at the walkway width rounded up (the key given). −1 where the nearest
+   * obstacle's figure lets routes through wider than that (the chord across came out a little
+   * under it), so the cell may take a route more than once.
+   */
+  searchKey(cell: number): number {
     const widthMm = this.at(cell);
-    return Math.floor(widthMm < this.limitMm ? widthMm : this.limitMm) === this.maybeKeyWas[k];
+    const key = Math.floor(widthMm < this.limitMm ? widthMm : this.limitMm);
+    return this.lowerGate(cell) <= key ? key : -1;
   }
 
   /** The distances and runs afresh from the grid's labels; every width unknown. */
@@ -272,8 +270,8 @@ export class Widths {
       this.changes++;
       this.updated = true;
       this.forgetCount = 0;
+      this.turnedCount = 0;
       this.changedCount = 0;
-      this.maybeCount = 0;
       return before;
     }
     // A ray across looks no further than the walkway width, rounded to cells, from a sample that
@@ -303,33 +301,26 @@ export class Widths {
       }
     }
     const { toForget, listed, gateMm, exactKeyMm, limitMm } = this;
+    this.turnedCount = 0;
     this.changedCount = 0;
-    this.maybeCount = 0;
     for (let k = 0; k < this.forgetCount; k++) {
       const cell = toForget[k]!;
-      const why = listed[cell]!;
       listed[cell] = 0;
       const gateWas = gateMm[cell]!;
-      const keyWas = exactKeyMm[cell]!;
       this.widthMm[cell] = NaN;
       exactKeyMm[cell] = -1;
       this.rayReach[cell] = 0;
       gateMm[cell] = this.lowerGate(cell);
-      const turned = (label[cell] === FREE) !== (before[cell] === FREE);
-      if (!turned && gateWas >= limitMm && gateMm[cell]! >= limitMm) continue;
-      if (!turned && why === LISTED && keyWas >= 0) {
-        this.maybeKeyWas[this.maybeCount] = keyWas;
-        this.searchMaybe[this.maybeCount++] = cell;
-      } else this.searchChanged[this.changedCount++] = cell;
+      if ((label[cell] === FREE) !== (before[cell] === FREE)) this.searchTurned[this.turnedCount++] = cell;
+      else if (gateWas < limitMm || gateMm[cell]! < limitMm) this.searchChanged[this.changedCount++] = cell;
     }
     return before;
   }
 
-  /** Lists a cell to forget, noting whether its nearest obstacle moved (NEAREST_MOVED) or not (LISTED). */
-  private list(cell: number, why = LISTED): void {
-    const was = this.listed[cell]!;
-    if (was === 0) this.toForget[this.forgetCount++] = cell;
-    if (why > was) this.listed[cell] = why;
+  private list(cell: number): void {
+    if (this.listed[cell] === 1) return;
+    this.listed[cell] = 1;
+    this.toForget[this.forgetCount++] = cell;
   }
 
   /** The distance transform again over the columns i0..i1, and in each row over the cells the columns whose answers changed there may now be nearest to; cells whose nearest blocked cell moved are listed. */
@@ -358,7 +349,7 @@ export class Widths {
     this.farthestCells = farthest;
   }
 
-  private readonly listCell = (cell: number): void => this.list(cell, NEAREST_MOVED);
+  private readonly listCell = (cell: number): void => this.list(cell);
 
   /** The straight runs again along every line through the box i0..i1 × j0..j1 grown by a cell, as far as the runs that cross it reach; cells whose shortest run changed are listed. */
   private updateRuns(i0: number, i1: number, j0: number, j1: number): void {
