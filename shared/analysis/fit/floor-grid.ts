@@ -151,30 +151,23 @@ export function rasteriseObstacles(
 /**
  * Rasterises an outline (plan mm) and obstacle boxes onto cells of cellMm (coarser where the room
  * would need more than MAX_GRID_CELLS; the grid's cellMm says which): a cell is free when its
- * centre is inside the outline and in no obstacle. The first box to cover a cell names it. With
- * `keptAs`, the labels go in the working array of that name (`scratch`), which the next grid made
- * under the same name overwrites: for a check that is done with its grid before it returns.
+ * centre is inside the outline and in no obstacle. The first box to cover a cell names it.
  */
-export function rasteriseFloor(
-  outline: readonly Vec2[],
-  obstacles: readonly PieceBox[],
-  requestedCellMm: number,
-  keptAs?: string,
-): FloorGrid {
+export function rasteriseFloor(outline: readonly Vec2[], obstacles: readonly PieceBox[], requestedCellMm: number): FloorGrid {
   const frame = gridFrame(outline, requestedCellMm);
-  const cells = frame.nx * frame.ny;
-  const label = keptAs === undefined ? new Int32Array(cells) : scratch(keptAs, int32, cells);
+  const label = new Int32Array(frame.nx * frame.ny);
   rasteriseOutline(outline, frame, label);
   rasteriseObstacles(frame, obstacles, label);
   return { ...frame, label };
 }
 
 /**
- * Per-cell working arrays are kept from one check to the next for grids up to this many cells
- * (about 8 MB over all of them), so a drag that checks the same room again and again does not churn
- * memory; larger grids get arrays of their own that go when the check is done. A kept array is
- * handed out again by the next call under its name, so a check uses what it asks for before the
- * next check starts (checks run one at a time on a thread).
+ * Per-cell working arrays are kept from one check to the next for grids up to this many cells, so a
+ * drag that checks the same room again and again does not churn memory; larger grids get arrays of
+ * their own that go when the check is done. A kept array is handed out again by the next call under
+ * its name, so a check uses what it asks for before the next check starts (checks run one at a time
+ * on a thread). The walkway check keeps its grid, widths and search (walkway-floor.ts,
+ * walkway-grid.ts) for grids up to the same size.
  */
 export const KEPT_SCRATCH_CELLS = 250_000;
 const kept = new Map<string, Float64Array | Int32Array>();
