@@ -371,9 +371,17 @@ export function refreshRowNearest(
       const off = x < i0 ? i0 - x : x > i1 ? x - i1 : 0;
       if (off * off > wasSquared) continue;
     }
-    // The nearest the changed columns now come: if no nearer than the old answer, it stands; else it bounds the search.
+    // The nearest the changed columns now come: if no nearer than the old answer, it stands; else it
+    // bounds the search. Only columns within the old answer's distance can be nearer.
     let bound = Infinity;
-    for (let q = i0; q <= i1; q++) {
+    let q0 = i0;
+    let q1 = i1;
+    if (!fromChanged) {
+      const within = Math.floor(Math.sqrt(wasSquared));
+      q0 = Math.max(i0, x - within);
+      q1 = Math.min(i1, x + within);
+    }
+    for (let q = q0; q <= q1; q++) {
       const rowQ = columnRow[row + q]!;
       if (rowQ < 0) continue;
       const squared = (x - q) * (x - q) + (rowQ - j) * (rowQ - j);

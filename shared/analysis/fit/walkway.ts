@@ -19,7 +19,7 @@ import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
 import { blocksWalking } from '../../geometry/piece';
 import { pointInPolygon } from '../../geometry/polygon';
-import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from './boxes';
+import { closestOnShape, closestPair, distanceToSegmentMm, type ClosestPair, type PieceBox } from './boxes';
 import { cellAt, cellCentreMm, FREE, WALL, type FloorGrid } from './floor-grid';
 import { routeNarrowest, widestRoutes } from './walkway-grid';
 import { floorWidths } from './walkway-floor';
@@ -129,6 +129,23 @@ function patchBefore(grid: FloorGrid, patches: Map<string, KeptPatch>, box: Piec
   return patch;
 }
 
+/** The closest pairs worked out for gaps, by the two sides' labels, with the shapes they were of. */
+const keptPairs = new Map<string, { shapes: number[]; pair: ClosestPair }>();
+/** Kept closest pairs are all dropped past this many (a room has far fewer gaps). */
+const KEPT_PAIRS = 2000;
+
+/** closestPair of two sides' shapes, the one worked out before where the shapes are as they were (it depends on nothing else). */
+function closestPairKept(sideA: number, sideB: number, shapeA: readonly Vec2[], shapeB: readonly Vec2[]): ClosestPair {
+  const key = `${sideA} ${sideB}`;
+  const shapes = [...shapeA, ...shapeB].flat();
+  const kept = keptPairs.get(key);
+  if (kept && kept.shapes.length === shapes.length && kept.shapes.every((v, k) => v === shapes[k])) return kept.pair;
+  const pair = closestPair(shapeA, shapeB);
+  if (keptPairs.size >= KEPT_PAIRS) keptPairs.clear();
+  keptPairs.set(key, { shapes, pair });
+  return pair;
+}
+
 /** A plan point (mm) to a tenth of a millimetre, dropping arithmetic noise from reports. */
 function roundPoint(p: Vec2): [number, number] {
   return [Math.round(p[0] * 10) / 10, Math.round(p[1] * 10) / 10];
@@ -233,7 +250,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       // The exact distance between the two sides, when it tells the same story as the grid.
       const shapeA = sideShape(sideA, gap.ends[0], filled, outline);
       const shapeB = sideShape(sideB, gap.ends[1], filled, outline);
-      const exact = closestPair(shapeA, shapeB);
+      const exact = closestPairKept(sideA, sideB, shapeA, shapeB);
       if (Math.abs(exact.distanceMm - gridWidthMm) <= SNAP_CELLS * grid.cellMm) {
         widthMm = exact.distanceMm;
         // Parallel faces are closest all along; draw the gap through the narrow spot itself.
