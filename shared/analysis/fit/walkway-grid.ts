@@ -154,15 +154,19 @@ class SearchLog {
 /**
  * The first take that goes otherwise now the widths' latest update changed some cells: the first
  * to read a cell that turned free or blocked; and of the other changed cells, in the order they were
- * first read, the first that a search would now file otherwise than this one did (filesAlike).
+ * first read, the first that a search would now file otherwise than this one did (filesAlike). 0
+ * when that is before leastTake.
  */
 function firstTakeChanged(
   log: SearchLog,
   widths: Widths,
   changed: { turned: Int32Array; changed: Int32Array },
   nx: number,
+  /** Any take before this one is answered as 0, from the start. */
+  leastTake: number,
 ): number {
   let first = log.firstTakeReading(changed.turned, nx);
+  if (first < leastTake) return 0;
   const read: number[] = [];
   for (const cell of changed.changed) {
     const at = log.firstTakeReadingCell(cell, nx);
@@ -172,9 +176,11 @@ function firstTakeChanged(
   for (const code of read) {
     const at = Math.floor(code / log.cells);
     if (at >= first) break;
+    // In the order read: once one before leastTake goes otherwise, the search starts afresh anyway.
+    if (first < leastTake) break;
     if (!log.filesAlike(code - at * log.cells, at, widths)) first = at;
   }
-  return first;
+  return first < leastTake ? 0 : first;
 }
 
 /** The search last made, kept for the next one (for grids up to KEPT_SCRATCH_CELLS). */
@@ -219,9 +225,8 @@ export function widestRoutes(
     log.limitMm === limitMm &&
     changed &&
     log.sameSources(sources);
-  const reading = follows ? firstTakeChanged(log, widths, changed, nx) : 0;
   // Going back to near the start would undo nearly everything, one entry at a time: start afresh instead.
-  const from = reading < REWIND_LEAST_SHARE * log.taken ? 0 : reading;
+  const from = follows ? firstTakeChanged(log, widths, changed, nx, REWIND_LEAST_SHARE * log.taken) : 0;
   if (from === 0) {
     startSearch(log, label, widths, sources, limitMm);
     search(log, nx, widths, limitMm);
