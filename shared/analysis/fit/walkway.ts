@@ -134,12 +134,24 @@ const keptPairs = new Map<string, { shapes: number[]; pair: ClosestPair }>();
 /** Kept closest pairs are all dropped past this many (a room has far fewer gaps). */
 const KEPT_PAIRS = 2000;
 
-/** closestPair of two sides' shapes, the one worked out before where the shapes are as they were (it depends on nothing else). */
+/**
+ * closestPair of two sides' shapes, the one worked out before where the shapes are as they were (it
+ * depends on nothing else). A wall side is told apart by its segment's first corner.
+ */
 function closestPairKept(sideA: number, sideB: number, shapeA: readonly Vec2[], shapeB: readonly Vec2[]): ClosestPair {
-  const key = `${sideA} ${sideB}`;
-  const shapes = [...shapeA, ...shapeB].flat();
+  const [a0, b0] = [itemAt(shapeA, 0, 'point'), itemAt(shapeB, 0, 'point')];
+  const key = `${sideA} ${a0[0]} ${a0[1]} ${sideB} ${b0[0]} ${b0[1]}`;
   const kept = keptPairs.get(key);
-  if (kept && kept.shapes.length === shapes.length && kept.shapes.every((v, k) => v === shapes[k])) return kept.pair;
+  const same = (kept: readonly number[], shapes: readonly Vec2[], from: number) =>
+    shapes.every((p, k) => p[0] === kept[from + 2 * k] && p[1] === kept[from + 2 * k + 1]);
+  if (
+    kept &&
+    kept.shapes.length === 2 * (shapeA.length + shapeB.length) &&
+    same(kept.shapes, shapeA, 0) &&
+    same(kept.shapes, shapeB, 2 * shapeA.length)
+  )
+    return kept.pair;
+  const shapes = [...shapeA, ...shapeB].flat();
   const pair = closestPair(shapeA, shapeB);
   if (keptPairs.size >= KEPT_PAIRS) keptPairs.clear();
   keptPairs.set(key, { shapes, pair });
