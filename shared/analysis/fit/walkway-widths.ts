@@ -113,8 +113,8 @@ export class Widths {
   private readonly rowWork: ReturnType<typeof rowWork>;
   /** Each row's first and last column whose column answers an update changed. */
   private readonly changedColumns: { from: Int32Array; to: Int32Array };
-  /** No cell's distance (cells) to the nearest blocked centre is more than this. */
-  private farthestCells = 0;
+  /** In each row, no cell's distance (cells) to the nearest blocked centre is more than this. */
+  private readonly rowFarthest: Float64Array;
   /** Cells whose widths an update forgets, each listed once (`listed` marks them). */
   private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
@@ -167,6 +167,7 @@ export class Widths {
     this.shortestRunMm = take(reuse?.shortestRunMm, float64);
     this.rowWork = rowWork(nx);
     this.changedColumns = { from: new Int32Array(ny), to: new Int32Array(ny) };
+    this.rowFarthest = new Float64Array(ny);
     this.toForget = take(reuse?.toForget, int32);
     this.searchTurned = take(reuse?.searchTurned, int32);
     this.searchChanged = take(reuse?.searchChanged, int32);
@@ -219,10 +220,8 @@ export class Widths {
     this.updated = false;
     const { nx, ny, grid } = this;
     nearestRowsInColumns(grid, this.columnRow, 0, nx - 1, null);
-    let farthest = 0;
     for (let j = 0; j < ny; j++)
-      farthest = Math.max(farthest, nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork));
-    this.farthestCells = farthest;
+      this.rowFarthest[j] = nearestInRow(grid, j, this.columnRow, this.distanceCells, this.nearest, null, this.rowWork);
     this.allRuns();
     // Nothing known yet of any width.
     this.widthMm.fill(NaN);
@@ -329,24 +328,24 @@ export class Widths {
     changed.from.fill(nx);
     changed.to.fill(-1);
     nearestRowsInColumns(grid, columnRow, i0, i1, changed);
-    let farthest = this.farthestCells;
+    const { rowFarthest } = this;
     for (let j = 0; j < ny; j++) {
       const to = changed.to[j]!;
       if (to < 0) continue;
-      const rowFarthest = refreshRowNearest(
+      const from = changed.from[j]!;
+      const farthest = refreshRowNearest(
         grid,
         j,
         columnRow,
-        changed.from[j]!,
+        from,
         to,
         this.distanceCells,
         this.nearest,
-        this.farthestCells,
+        rowFarthest[j]!,
         this.listCell,
       );
-      if (rowFarthest > farthest) farthest = rowFarthest;
+      if (farthest > rowFarthest[j]!) rowFarthest[j] = farthest;
     }
-    this.farthestCells = farthest;
   }
 
   private readonly listCell = (cell: number): void => this.list(cell);
