@@ -201,10 +201,10 @@ const unreached = (label: Int32Array, cell: number): number => (label[cell] === 
  * goes on, so the search only moves down the widths and each step is constant time.
  *
  * The search is kept, take by take. The next search on the same widths, one update later, with
- * the same ways in, goes as this one did until the first take that reads a cell the update
- * changed so that a search can tell: it starts there, from the state this one had then, and so
- * ends as a search afresh would. What routeNarrowest worked out on routes taken before the first
- * take that read any changed cell is kept. The routes are good until the next search.
+ * the same ways in, goes as this one did until the first take the update makes go otherwise
+ * (firstTakeChanged): it starts there, from the state this one had then, and so ends as a search
+ * afresh would. What routeNarrowest worked out on routes taken before the first take that read any
+ * changed cell is kept. The routes are good until the next search.
  */
 export function widestRoutes(
   grid: FloorGrid,
@@ -242,7 +242,7 @@ export function widestRoutes(
       rewind(log, label, changed!.turned, from);
       search(log, nx, widths, keyThen);
     } else {
-      // No take read what changed: the routes stand; the changed cells, none reached, read their new labels.
+      // No take goes otherwise: the routes stand; the cells that turned free or blocked, none reached, read their new labels.
       for (const cell of changed!.turned) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
     }
   }
