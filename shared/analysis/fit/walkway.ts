@@ -114,6 +114,13 @@ function patchesFor(widths: Widths): Map<string, KeptPatch> {
 /** A face's patch, from the kept ones where its box stands as it stood. */
 function patchBefore(grid: FloorGrid, patches: Map<string, KeptPatch>, box: PieceBox, face: Face): Patch {
   const key = `${box.piece.id}\u0000${face}`;
+  const kept = patches.get(key);
+  if (kept) {
+    const [cx, cy, ax, ay, hw, hd] = kept.fields;
+    const { centre, axisX, halfWidthMm, halfDepthMm } = box;
+    if (cx === centre[0] && cy === centre[1] && ax === axisX[0] && ay === axisX[1] && hw === halfWidthMm && hd === halfDepthMm)
+      return kept.patch;
+  }
   const fields: KeptPatch['fields'] = [
     box.centre[0],
     box.centre[1],
@@ -122,8 +129,6 @@ function patchBefore(grid: FloorGrid, patches: Map<string, KeptPatch>, box: Piec
     box.halfWidthMm,
     box.halfDepthMm,
   ];
-  const kept = patches.get(key);
-  if (kept && kept.fields.every((f, k) => f === fields[k])) return kept.patch;
   const { patch, cells } = faceCells(grid, box, face);
   patches.set(key, { patch, fields, cells });
   return patch;
