@@ -167,12 +167,14 @@ function firstTakeChanged(
 ): number {
   let first = log.firstTakeReading(changed.turned, nx);
   if (first < leastTake) return 0;
-  const read: number[] = [];
+  // Each read cell as take × cells + cell, so a numeric sort puts them in the order read.
+  const codes = new Float64Array(changed.changed.length);
+  let count = 0;
   for (const cell of changed.changed) {
     const at = log.firstTakeReadingCell(cell, nx);
-    if (at < first) read.push(at * log.cells + cell);
+    if (at < first) codes[count++] = at * log.cells + cell;
   }
-  read.sort((a, b) => a - b);
+  const read = codes.subarray(0, count).sort();
   for (const code of read) {
     const at = Math.floor(code / log.cells);
     if (at >= first) break;
@@ -234,8 +236,8 @@ export function widestRoutes(
     // Narrowest cells worked out on routes through a cell whose width changed are forgotten.
     const { narrowest } = log.routes;
     const firstReading = log.firstTakeReading(changed!.all, nx);
-    // Most of them: all at once.
-    if (log.taken - firstReading > cells / 8) narrowest.fill(-1);
+    // Nearly all of them: all at once.
+    if (firstReading < log.taken / 4) narrowest.fill(-1);
     else for (let t = firstReading; t < log.taken; t++) narrowest[log.entryCell[log.takenEntry[t]!]!] = -1;
     if (from < log.taken) {
       const keyThen = log.entryKey[log.takenEntry[from]!]!;

@@ -119,6 +119,10 @@ export class Widths {
   private readonly toForget: Int32Array;
   private readonly listed: Uint8Array;
   private forgetCount = 0;
+  /** Cells whose run counts an update changed, each listed once (`touchedMark` marks them). */
+  private readonly touched: Int32Array;
+  private readonly touchedMark: Uint8Array;
+  private touchedCount = 0;
   /** The latest update's cells a route search may tell apart (changedCells). */
   private readonly searchTurned: Int32Array;
   private readonly searchChanged: Int32Array;
@@ -172,6 +176,8 @@ export class Widths {
     this.searchTurned = take(reuse?.searchTurned, int32);
     this.searchChanged = take(reuse?.searchChanged, int32);
     this.listed = take(reuse?.listed, uint8).fill(0);
+    this.touched = take(reuse?.touched, int32);
+    this.touchedMark = take(reuse?.touchedMark, uint8).fill(0);
     this.measureAll();
   }
 
@@ -357,21 +363,24 @@ export class Widths {
     const a1 = Math.min(nx - 1, i1 + 1);
     const b0 = Math.max(0, j0 - 1);
     const b1 = Math.min(ny - 1, j1 + 1);
-    const touched: number[] = [];
-    for (let j = b0; j <= b1; j++) this.runsAcross(0, j * nx + a0, j * nx + a1, touched);
-    for (let i = a0; i <= a1; i++) this.runsAcross(1, b0 * nx + i, b1 * nx + i, touched);
+    this.touchedCount = 0;
+    for (let j = b0; j <= b1; j++) this.runsAcross(0, j * nx + a0, j * nx + a1);
+    for (let i = a0; i <= a1; i++) this.runsAcross(1, b0 * nx + i, b1 * nx + i);
     // Down-right diagonals by i − j, up-right ones by i + j, each from its first cell in the box to its last.
     for (let d = a0 - b1; d <= a1 - b0; d++) {
       const first = Math.max(a0, b0 + d);
       const last = Math.min(a1, b1 + d);
-      this.runsAcross(2, (first - d) * nx + first, (last - d) * nx + last, touched);
+      this.runsAcross(2, (first - d) * nx + first, (last - d) * nx + last);
     }
     for (let s = a0 + b0; s <= a1 + b1; s++) {
       const first = Math.max(a0, s - b1);
       const last = Math.min(a1, s - b0);
-      this.runsAcross(3, (s - first) * nx + first, (s - last) * nx + last, touched);
+      this.runsAcross(3, (s - first) * nx + first, (s - last) * nx + last);
     }
-    for (const cell of touched) {
+    const { touched, touchedMark } = this;
+    for (let k = 0; k < this.touchedCount; k++) {
+      const cell = touched[k]!;
+      touchedMark[cell] = 0;
       const shortest = this.shortestOf(cell);
       if (shortest !== this.shortestRunMm[cell]) {
         this.shortestRunMm[cell] = shortest;
@@ -381,7 +390,7 @@ export class Widths {
   }
 
   /** The runs of direction k through the stretch of a line from cell `entry` to cell `exit`, whole: from the blocked cell before it to the one after. */
-  private runsAcross(k: number, entry: number, exit: number, touched: number[]): void {
+  private runsAcross(k: number, entry: number, exit: number): void {
     const [di, dj] = RUN_DIRECTIONS[k]!;
     const step = dj * this.nx + di;
     const label = this.grid.label;
@@ -389,7 +398,7 @@ export class Widths {
     while (label[from] === FREE) from -= step;
     let to = exit;
     while (label[to] === FREE) to += step;
-    this.runsAlong(k, from, (to - from) / step + 1, touched);
+    this.runsAlong(k, from, (to - from) / step + 1);
   }
 
   /**
@@ -466,9 +475,9 @@ export class Widths {
   /**
    * The runs along one line of direction k, `length` cells from `start`: each stretch of free cells
    * between two blocked ones gets its count of cells, or 0 with a wall at both ends; cells whose
-   * count changed are added to `touched`.
+   * count changed are listed in `touched`.
    */
-  private runsAlong(k: number, start: number, length: number, touched: number[]): void {
+  private runsAlong(k: number, start: number, length: number): void {
     const [di, dj] = RUN_DIRECTIONS[k]!;
     const step = dj * this.nx + di;
     const label = this.grid.label;
@@ -479,14 +488,20 @@ export class Widths {
       if (back >= 0 && cell !== back + step) {
         const count = label[back] === WALL && label[cell] === WALL ? 0 : (cell - back) / step - 1;
         for (let c = back + step; c !== cell; c += step) {
-          if (counts[c] !== count) touched.push(c);
+          if (counts[c] !== count) this.touch(c);
           counts[c] = count;
         }
       }
-      if (counts[cell] !== 0) touched.push(cell);
+      if (counts[cell] !== 0) this.touch(cell);
       counts[cell] = 0;
       back = cell;
     }
+  }
+
+  private touch(cell: number): void {
+    if (this.touchedMark[cell] === 1) return;
+    this.touchedMark[cell] = 1;
+    this.touched[this.touchedCount++] = cell;
   }
 
   /** The shortest of a cell's counted runs (mm), Infinity when none counts. */
