@@ -1,4 +1,5 @@
-// Runs every bench in turn. Add a bench by importing it and appending it to the list.
+// Runs every bench in turn, or only those named after it (`npm run bench -- fit`). Add a bench by
+// importing it and appending it to the list.
 import { benchFit } from './fit';
 import { benchGeometry } from './geometry';
 import { benchForms } from './forms';
@@ -17,7 +18,11 @@ const benches: { name: string; run: () => Promise<void> }[] = [
   { name: 'limits', run: benchLimits },
 ];
 
-for (const bench of benches) {
+const named = process.argv.slice(2);
+const unknown = named.filter((name) => !benches.some((bench) => bench.name === name));
+if (unknown.length > 0)
+  throw new Error(`No bench named ${unknown.join(', ')}; the benches are ${benches.map((b) => b.name).join(', ')}`);
+for (const bench of benches.filter((b) => named.length === 0 || named.includes(b.name))) {
   console.log(`# ${bench.name}`);
   await bench.run();
 }

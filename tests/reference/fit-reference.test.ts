@@ -7,8 +7,8 @@
 import { describe, expect, it } from 'vitest';
 import { checkFit as checkFitToday } from '../../shared/analysis/fit';
 import { cleanLayout, gapLayout, pieceInput, plan, walledInLayout } from '../../shared/analysis/fit/test-plans';
-import type { PieceInput } from '../../shared/schemas/option';
-import type { RoomShellInput } from '../../shared/schemas/room';
+import type { Piece, PieceInput } from '../../shared/schemas/option';
+import { roomShellSchema, type RoomShellInput } from '../../shared/schemas/room';
 import { checkFit as referenceCheckFit } from '../../scripts/bench/reference-fit/index';
 import { largeRoom, typicalRoom } from '../../scripts/bench/typical-room';
 import { seededRandom as random } from '../../server/services/images/generate';
@@ -152,6 +152,27 @@ describe('the fit check gives the same findings as before the speed work', () =>
     expect(findings.length).toBeGreaterThan(0);
     expect(findings).toEqual(referenceCheckFit(large.shell, large.pieces));
   }, 60_000);
+
+  it('at every step of a drag, today’s check keeping its widths from the step before', () => {
+    // A piece walked 20 mm a step through the typical room's grid of pieces, then one among the 200 of the large room.
+    const typical = typicalRoom();
+    const large = largeRoom();
+    const drags: [RoomShellInput, readonly Piece[], number, number][] = [
+      [typical.shell, typical.option.pieces, 19, 40],
+      [typical.shell, typical.option.pieces, 3, 20],
+      [large.shell, large.pieces, 110, 12],
+    ];
+    let steps = 0;
+    for (const [shell, pieces, index, count] of drags) {
+      for (let step = 0; step < count; step++) {
+        const moved = pieces.map((p, i) => (i === index ? { ...p, x: p.x + 20 * step, y: p.y + 10 * step } : p));
+        const room = roomShellSchema.parse(shell);
+        expect(checkFit(room, moved), `piece ${index}, step ${step}`).toEqual(referenceCheckFit(room, moved));
+        steps++;
+      }
+    }
+    expect(steps).toBe(72);
+  }, 120_000);
 
   it('on 150 random layouts (seeded), findings and all', () => {
     let findings = 0;

@@ -164,14 +164,6 @@ export function closestOnShape(p: Vec2, shape: readonly Vec2[]): [number, number
   return best;
 }
 
-function segmentsCross(a: Vec2, b: Vec2, c: Vec2, d: Vec2): boolean {
-  const d1 = cross(sub(b, a), sub(c, a));
-  const d2 = cross(sub(b, a), sub(d, a));
-  const d3 = cross(sub(d, c), sub(a, c));
-  const d4 = cross(sub(d, c), sub(b, c));
-  return d1 * d2 < 0 && d3 * d4 < 0;
-}
-
 /** A pair of plan points (mm), one on each shape, and how far apart they are. */
 export interface ClosestPair {
   distanceMm: number;
@@ -179,32 +171,75 @@ export interface ClosestPair {
   to: [number, number];
 }
 
+/** The parameter (0 to 1) of the point of segment a→b nearest to p, as closestOnSegment works it out. */
+function nearestAlong(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {
+  const abx = bx - ax;
+  const aby = by - ay;
+  const lengthSquared = abx * abx + aby * aby;
+  return lengthSquared === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * abx + (py - ay) * aby) / lengthSquared));
+}
+
 /**
  * Closest points between two plan shapes given as closed polygons or, with two points, a segment
- * (mm). Shapes that cross give distance 0. Boxes and walls have few edges, so all pairs are tried.
+ * (mm). Shapes that cross give distance 0. Boxes and walls have few edges, so all pairs are tried:
+ * two edges cross when each one's ends lie strictly either side of the other's line; else each end
+ * is tried against the other edge (the arithmetic of closestOnSegment, without making a point for
+ * every try).
  */
 export function closestPair(a: readonly Vec2[], b: readonly Vec2[]): ClosestPair {
-  const edges = (shape: readonly Vec2[]): [Vec2, Vec2][] =>
-    shape.length === 2 ? [[shape[0]!, shape[1]!]] : shape.map((p, i) => [p, shape[(i + 1) % shape.length]!]);
-  let best: ClosestPair = { distanceMm: Infinity, from: [...itemAt(a, 0, 'point')], to: [...itemAt(b, 0, 'point')] };
-  for (const [p, q] of edges(a)) {
-    for (const [r, s] of edges(b)) {
-      if (segmentsCross(p, q, r, s)) {
-        const t = cross(sub(r, p), sub(s, r)) / cross(sub(q, p), sub(s, r));
-        const hit = addScaled(p, sub(q, p), t);
+  const first = itemAt(a, 0, 'point');
+  const firstB = itemAt(b, 0, 'point');
+  let bestMm = Infinity;
+  let fromX = first[0];
+  let fromY = first[1];
+  let toX = firstB[0];
+  let toY = firstB[1];
+  const edgesA = a.length === 2 ? 1 : a.length;
+  const edgesB = b.length === 2 ? 1 : b.length;
+  for (let i = 0; i < edgesA; i++) {
+    const [px, py] = a[i]!;
+    const [qx, qy] = a[(i + 1) % a.length]!;
+    for (let k = 0; k < edgesB; k++) {
+      const [rx, ry] = b[k]!;
+      const [sx, sy] = b[(k + 1) % b.length]!;
+      // Which side of each edge's line the other's ends lie (cross products).
+      const d1 = (qx - px) * (ry - py) - (qy - py) * (rx - px);
+      const d2 = (qx - px) * (sy - py) - (qy - py) * (sx - px);
+      const d3 = (sx - rx) * (py - ry) - (sy - ry) * (px - rx);
+      const d4 = (sx - rx) * (qy - ry) - (sy - ry) * (qx - rx);
+      if (d1 * d2 < 0 && d3 * d4 < 0) {
+        const t =
+          cross(sub([rx, ry], [px, py]), sub([sx, sy], [rx, ry])) / cross(sub([qx, qy], [px, py]), sub([sx, sy], [rx, ry]));
+        const hit = addScaled([px, py], sub([qx, qy], [px, py]), t);
         return { distanceMm: 0, from: hit, to: hit };
       }
-      const candidates: [Vec2, Vec2][] = [
-        [p, closestOnSegment(p, r, s)],
-        [q, closestOnSegment(q, r, s)],
-        [closestOnSegment(r, p, q), r],
-        [closestOnSegment(s, p, q), s],
-      ];
-      for (const [from, to] of candidates) {
-        const d = Math.hypot(from[0] - to[0], from[1] - to[1]);
-        if (d < best.distanceMm) best = { distanceMm: d, from: [from[0], from[1]], to: [to[0], to[1]] };
+      // p and q against r→s, then r and s against p→q, in that order; each from shape a's point to shape b's.
+      for (let end = 0; end < 4; end++) {
+        const ex = end === 0 ? px : end === 1 ? qx : end === 2 ? rx : sx;
+        const ey = end === 0 ? py : end === 1 ? qy : end === 2 ? ry : sy;
+        let ax = ex;
+        let ay = ey;
+        let bx = ex;
+        let by = ey;
+        if (end < 2) {
+          const t = nearestAlong(ex, ey, rx, ry, sx, sy);
+          bx = rx + (sx - rx) * t;
+          by = ry + (sy - ry) * t;
+        } else {
+          const t = nearestAlong(ex, ey, px, py, qx, qy);
+          ax = px + (qx - px) * t;
+          ay = py + (qy - py) * t;
+        }
+        const d = Math.hypot(ax - bx, ay - by);
+        if (d < bestMm) {
+          bestMm = d;
+          fromX = ax;
+          fromY = ay;
+          toX = bx;
+          toY = by;
+        }
       }
     }
   }
-  return best;
+  return { distanceMm: bestMm, from: [fromX, fromY], to: [toX, toY] };
 }

@@ -25,13 +25,6 @@ function compareText(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
-function compareFindings(a: Finding, b: Finding): number {
-  const byKind = (KIND_ORDER.get(a.kind) ?? 0) - (KIND_ORDER.get(b.kind) ?? 0);
-  if (byKind !== 0) return byKind;
-  const byPieces = compareText(a.pieces.join('\u0000'), b.pieces.join('\u0000'));
-  return byPieces !== 0 ? byPieces : compareText(a.openings.join('\u0000'), b.openings.join('\u0000'));
-}
-
 /**
  * Findings for a validated room shell and an option's pieces (plan mm): only placed pieces count.
  * Ordered by kind (as the README's finding kinds list them), then piece ids, then opening ids, so the same layout
@@ -40,7 +33,7 @@ function compareFindings(a: Finding, b: Finding): number {
 export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: FitCheckOptions = {}): Finding[] {
   const walkwayMm = options.walkwayMm ?? DEFAULT_WALKWAY_MM;
   const boxes = placedBoxes(pieces);
-  return [
+  return sortFindings([
     ...findOverlaps(boxes),
     ...findOutsideRoom(shell, boxes),
     ...findDoorSwings(shell, boxes),
@@ -50,5 +43,17 @@ export function checkFit(shell: RoomShell, pieces: readonly Piece[], options: Fi
     ...findTooBigForDoor(shell, boxes),
     ...findClimbableNearWindows(shell, boxes),
     ...findTallNotFixed(boxes),
-  ].sort(compareFindings);
+  ]);
+}
+
+/** Findings by kind (in the order findingKindSchema lists them), then piece ids, then opening ids; each one's keys worked out once. */
+function sortFindings(findings: Finding[]): Finding[] {
+  const keyed = findings.map((finding) => ({
+    finding,
+    kind: KIND_ORDER.get(finding.kind) ?? 0,
+    pieces: finding.pieces.join('\u0000'),
+    openings: finding.openings.join('\u0000'),
+  }));
+  keyed.sort((a, b) => a.kind - b.kind || compareText(a.pieces, b.pieces) || compareText(a.openings, b.openings));
+  return keyed.map((k) => k.finding);
 }

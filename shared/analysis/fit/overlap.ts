@@ -13,6 +13,7 @@ import { capitalise, theName } from './messages';
  */
 export function findOverlaps(boxes: readonly PieceBox[]): Finding[] {
   const solid = boxes.filter((box) => !isWalkedOver(box.piece));
+  const halfDiagonalMm = solid.map((box) => Math.hypot(box.halfWidthMm, box.halfDepthMm));
   const findings: Finding[] = [];
   for (let i = 0; i < solid.length; i++) {
     for (let j = i + 1; j < solid.length; j++) {
@@ -21,7 +22,7 @@ export function findOverlaps(boxes: readonly PieceBox[]): Finding[] {
       const sharedHeightMm = Math.min(a.topMm, b.topMm) - Math.max(a.bottomMm, b.bottomMm);
       if (sharedHeightMm <= TOUCH_TOLERANCE_MM) continue;
       // A cheap distance test first: boxes further apart than their half-diagonals cannot meet.
-      const reachMm = Math.hypot(a.halfWidthMm, a.halfDepthMm) + Math.hypot(b.halfWidthMm, b.halfDepthMm);
+      const reachMm = halfDiagonalMm[i]! + halfDiagonalMm[j]!;
       if (Math.hypot(a.centre[0] - b.centre[0], a.centre[1] - b.centre[1]) >= reachMm) continue;
       if (!convexOverlap(a.corners, b.corners) || standsOn(a, b) || standsOn(b, a)) continue;
       const [first, second] = a.piece.id <= b.piece.id ? [a.piece, b.piece] : [b.piece, a.piece];

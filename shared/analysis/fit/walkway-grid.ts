@@ -1,341 +1,19 @@
-// The walkway check's computing core on the floor grid: the clear width at each free cell, the
-// widest routes from the ways in, and the narrowest cell on a route. Plan mm, x right, y down; cells
+// The walkway check's routes on the floor grid: the widest routes from the ways in, and the
+// narrowest cell on a route (the widths they go by are walkway-widths.ts's). Plan mm, x right, y down; cells
 // as in floor-grid.ts. Which pieces need a route and what a finding says live in walkway.ts.
-import { cellCentreMm, distanceField, float64, FREE, int32, scratch, WALL, type FloorGrid } from './floor-grid';
+import { FREE, KEPT_SCRATCH_CELLS, type FloorGrid } from './floor-grid';
+import type { Widths } from './walkway-widths';
 
+/** A search takes up the last one where it left off only if at least this share of its takes stand. */
+const REWIND_LEAST_SHARE = 0.25;
 /** The search's own mark for blocked cells: wider than any route, so never entered. */
 const BLOCKED_KEY = 0x7fffffff;
-/** Samples along a ray, in cells, starting at the next cell's centre: on a square room's grid they
- * land on cell centres, so a hit puts the edge half a step back. A whole-cell step may pass the
- * corner of an obstacle thinner than a cell on a slant; pieces are thicker than that. */
-const RAY_STEP_CELLS = 1;
-/** How much shorter than twice the distance to the nearest blocked centre a chord can be, in cells: 1 + √½ for the chord across, √2 for a diagonal run, rounded up. */
-const CHORD_SHORTFALL_CELLS = 1.75;
-/** Kept back from a skip ahead along a ray, in cells: twice the √½ cell a sample may stray from a centre, rounded up. */
-const RAY_SKIP_MARGIN_CELLS = 1.5;
-
-export interface Gap {
-  /** Obstacle labels either side: a box index, or WALL. */
-  sides: [number, number];
-  /** Plan points on each side (mm). */
-  ends: [[number, number], [number, number]];
-}
-
-/** Directions of the straight runs across the floor, in cells: along x, along y and both diagonals. */
-const RUN_DIRECTIONS: readonly (readonly [number, number])[] = [
-  [1, 0],
-  [0, 1],
-  [1, 1],
-  [1, -1],
-];
-/** Length of one step of each run direction, in cells. */
-const RUN_STEP_CELLS = RUN_DIRECTIONS.map(([di, dj]) => Math.hypot(di, dj));
-
-/**
- * For every free cell, the shortest of its four straight runs (along x, y and both diagonals) from
- * blocked cell to blocked cell, in mm, leaving out runs with a wall at both ends (the room's own
- * shape); Infinity when none counts. Every run starts just past a blocked cell, so one sweep over
- * the blocked cells finds each run once, measures it and hands its length to the cells along it.
- */
-function shortestRunsMm(grid: FloorGrid): Float64Array {
-  const { nx, label, cellMm } = grid;
-  const cells = label.length;
-  const shortest = scratch('shortest', float64, cells).fill(Infinity);
-  const steps = RUN_DIRECTIONS.map(([di, dj]) => dj * nx + di);
-  for (let back = 0; back < cells; back++) {
-    if (label[back] === FREE) continue;
-    for (let k = 0; k < 4; k++) {
-      const step = steps[k]!;
-      const first = back + step;
-      // Off the grid, or past its edge onto the blocked ring of the next row: no run starts here.
-      if (first < 0 || first >= cells || label[first] !== FREE) continue;
-      let ahead = first;
-      while (label[ahead] === FREE) ahead += step;
-      if (label[back] === WALL && label[ahead] === WALL) continue;
-      // The free cells between the two ends, each a step long: their edges are the obstacles' edges.
-      // Every direction moves one column a step except straight down, which moves a whole row.
-      const count = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
-      const runMm = (count - 1) * cellMm * RUN_STEP_CELLS[k]!;
-      for (let cell = first; cell !== ahead; cell += step) if (runMm < shortest[cell]!) shortest[cell] = runMm;
-    }
-  }
-  return shortest;
-}
-
-/**
- * The clear width at each free cell: the shortest chord through it from obstacle to obstacle. One
- * chord runs from the nearest obstacle straight across (at a piece's face, the room in front of it;
- * between two pieces, the gap wherever in the gap the cell lies); four more run along x, y and the
- * diagonals, so the end of a recess reads as narrow as its middle. A chord with a wall at both ends
- * is the room's own shape (a doorway's reveals, an alcove): the designer cannot move it, so it does
- * not count. Widths are found on demand and kept; the search asks only as far as it needs.
- */
-export class Widths {
-  /** Exact width (mm) at each cell, NaN until measured. */
-  private readonly widthMm: Float64Array;
-  /** Whole-mm width capped at the key it was first asked for, plus one; 0 until asked. */
-  private readonly cappedMm: Int32Array;
-  private readonly nearest: Int32Array;
-  /** Distance (cells) from each cell's centre to the nearest blocked centre. */
-  private readonly distanceCells: Float64Array;
-  private readonly shortestRunMm: Float64Array;
-  private readonly label: Int32Array;
-  private readonly nx: number;
-  private readonly ny: number;
-  private readonly cellMm: number;
-  /** Set by `ray`: the blocked cell it met. */
-  private rayHit = -1;
-
-  constructor(
-    private readonly grid: FloorGrid,
-    /** Widths at or beyond this (mm) are wide enough; they are not measured further. */
-    private readonly enoughMm: number,
-  ) {
-    const field = distanceField(grid);
-    this.nearest = field.nearest;
-    this.distanceCells = field.cells;
-    this.shortestRunMm = shortestRunsMm(grid);
-    this.label = grid.label;
-    this.nx = grid.nx;
-    this.ny = grid.ny;
-    this.cellMm = grid.cellMm;
-    const cells = grid.nx * grid.ny;
-    this.widthMm = scratch('width', float64, cells).fill(NaN);
-    this.cappedMm = scratch('capped', int32, cells).fill(0);
-  }
-
-  /**
-   * The width at a free cell in whole mm, capped at keyMm: as `at` gives it, but measured only as
-   * far as the cap. The search asks with keys that only fall, so the first answer is kept and
-   * serves every later, lower cap; when the measure under the cap gave the exact width, that is
-   * kept for `at` too.
-   */
-  cappedAt(cell: number, keyMm: number): number {
-    const known = this.cappedMm[cell]!;
-    if (known > 0) return known - 1 < keyMm ? known - 1 : keyMm;
-    const widthMm = this.measure(cell, keyMm);
-    const capped = Math.floor(widthMm < keyMm ? widthMm : keyMm);
-    this.cappedMm[cell] = capped + 1;
-    return capped;
-  }
-
-  /**
-   * Whether the width at a cell is already known to be more than widthMm, so it need not be
-   * measured exactly to be compared: the search's capped answer c means at least c; and with d the
-   * distance (cells) to the nearest blocked centre, every chord is at least (2d − 1.71) cells long
-   * (a run's ends lie at least d away on either side, less one step of at most √2 cells; the chord
-   * across reaches a sample within √½ cell of a blocked centre, and both ends lose half a cell).
-   */
-  knownWiderThan(cell: number, widthMm: number): boolean {
-    if (this.cappedMm[cell]! - 1 > Math.floor(widthMm)) return true;
-    return (2 * this.distanceCells[cell]! - CHORD_SHORTFALL_CELLS) * this.cellMm > widthMm;
-  }
-
-  /** A cheap floor under the width at a free cell (mm): twice the distance to the nearest obstacle. */
-  lowerBoundMm(cell: number): number {
-    return 2 * (this.distanceCells[cell]! - 0.5) * this.cellMm;
-  }
-
-  /** Clear width (mm) at a free cell; Infinity where nothing movable bounds it within reach. */
-  at(cell: number): number {
-    const known = this.widthMm[cell]!;
-    if (known === known) return known;
-    return this.measure(cell, Infinity);
-  }
-
-  /**
-   * Whether the clear width at a free cell is at most limitMm: as `at(cell) <= limitMm`, but the
-   * chord across is looked for only as far as the limit (a chord found is the same however far one
-   * looks, and one past the limit is too long to matter).
-   */
-  atMost(cell: number, limitMm: number): boolean {
-    const known = this.widthMm[cell]!;
-    if (known === known) return known <= limitMm;
-    return this.measure(cell, limitMm) <= limitMm;
-  }
-
-  /**
-   * Distance (mm) from cell (i, j)'s centre to the edge of the first blocked cell along (ux, uy),
-   * looking no further than reachMm; the cell met is left in `rayHit`. Infinity when none is met.
-   * The samples are the same however far it looks: a shorter look meets what a longer one would,
-   * if it meets anything.
-   */
-  private ray(i: number, j: number, ux: number, uy: number, reachMm: number): number {
-    const { nx, ny, label, cellMm } = this;
-    const reachCells = reachMm / cellMm + 1;
-    const distance = this.distanceCells;
-    let t = RAY_STEP_CELLS;
-    while (t <= reachCells) {
-      // Cell coordinates: the blocked ring keeps them at zero or more, where |0 rounds like floor.
-      const ci = (i + ux * t + 0.5) | 0;
-      const cj = (j + uy * t + 0.5) | 0;
-      // Padding keeps a blocked ring round the room, so a ray always meets one before the grid ends.
-      const other = cj * nx + ci;
-      if (ci < 0 || cj < 0 || ci >= nx || cj >= ny || label[other] !== FREE) {
-        this.rayHit = other;
-        return (t - RAY_STEP_CELLS / 2) * cellMm;
-      }
-      // Skip ahead through open floor: no blocked centre lies nearer than this cell's distance, and
-      // a sample strays at most √½ cell from the centre it rounds to, on either end of the jump.
-      const skip = Math.floor(distance[other]! - RAY_SKIP_MARGIN_CELLS);
-      t += skip > RAY_STEP_CELLS ? skip : RAY_STEP_CELLS;
-    }
-    return Infinity;
-  }
-
-  private bothWalls(a: number, b: number): boolean {
-    return this.label[a] === WALL && this.label[b] === WALL;
-  }
-
-  /** The chord across from the nearest obstacle: its length (mm) and far end, or Infinity. */
-  private across(cell: number, reachMm: number): number {
-    const { nx, cellMm } = this;
-    const nearestCell = this.nearest[cell]!;
-    const d1 = this.distanceCells[cell]!;
-    const nearSideMm = (d1 - 0.5) * cellMm;
-    const i = cell % nx;
-    const j = (cell - i) / nx;
-    const farSideMm = this.ray(
-      i,
-      j,
-      (i - (nearestCell % nx)) / d1,
-      (j - Math.floor(nearestCell / nx)) / d1,
-      reachMm - nearSideMm,
-    );
-    return farSideMm < Infinity && !this.bothWalls(nearestCell, this.rayHit) ? nearSideMm + farSideMm : Infinity;
-  }
-
-  /**
-   * Whether the nearest blocked cell is in the cell's own row or column. Then the chord across runs
-   * along that row or column from the nearest blocked cell, sampling its cell centres one by one:
-   * it is the straight run there, to the same blocked cell and the same length (both are whole and
-   * half cells, exact in floating point), so it can never be shorter than the shortest run.
-   */
-  private inLineWithNearest(cell: number): boolean {
-    const nearestCell = this.nearest[cell]!;
-    const nx = this.nx;
-    return nearestCell % nx === cell % nx || Math.floor(nearestCell / nx) === Math.floor(cell / nx);
-  }
-
-  /**
-   * The width, looked for no further than capMm: exact (and kept) whenever it is at most the cap or
-   * the look was not cut short by it; otherwise some figure above the cap. The straight runs are
-   * known, so the chord across need only be looked for as far as it could still be the shorter: a
-   * chord found past that is longer than a run anyway.
-   */
-  private measure(cell: number, capMm: number): number {
-    const cellMm = this.cellMm;
-    const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
-    let widthMm: number;
-    if (2 * nearSideMm >= this.enoughMm) widthMm = 2 * nearSideMm;
-    else {
-      const runMm = this.shortestRunMm[cell]!;
-      // The far side lies at least half a cell off, so a run that short already wins.
-      if (runMm <= nearSideMm + cellMm / 2 || this.inLineWithNearest(cell)) widthMm = runMm;
-      else {
-        const reachMm = Math.min(this.enoughMm, runMm);
-        const acrossMm = this.across(cell, reachMm < capMm ? reachMm : capMm);
-        // Nothing met within the cap when the cap cut the look short: only "wider than the cap" is known.
-        if (acrossMm === Infinity && capMm < reachMm) return Infinity;
-        widthMm = acrossMm < runMm ? acrossMm : runMm;
-      }
-    }
-    this.widthMm[cell] = widthMm;
-    return widthMm;
-  }
-
-  /** The obstacles at the two ends of a measured cell's chord and where they are (plan mm), or null if it is wide. */
-  gap(cell: number): Gap | null {
-    const { nx, cellMm, label } = this;
-    const nearSideMm = (this.distanceCells[cell]! - 0.5) * cellMm;
-    if (!Number.isFinite(this.at(cell)) || 2 * nearSideMm >= this.enoughMm) return null;
-    // The chord that gave the width: the one across first, then the runs in their order.
-    let widthMm = this.across(cell, this.enoughMm);
-    let endA = -1;
-    let endB = -1;
-    if (widthMm < Infinity) {
-      endA = this.nearest[cell]!;
-      endB = this.rayHit;
-    }
-    for (let k = 0; k < RUN_DIRECTIONS.length; k++) {
-      const [di, dj] = RUN_DIRECTIONS[k]!;
-      const step = dj * nx + di;
-      let back = cell - step;
-      while (label[back] === FREE) back -= step;
-      let ahead = cell + step;
-      while (label[ahead] === FREE) ahead += step;
-      const steps = k === 1 ? (ahead - back) / nx : (ahead % nx) - (back % nx);
-      const runMm = (steps - 1) * cellMm * RUN_STEP_CELLS[k]!;
-      if (runMm < widthMm && !this.bothWalls(back, ahead)) {
-        widthMm = runMm;
-        endA = back;
-        endB = ahead;
-      }
-    }
-    if (endA < 0) return null;
-    return {
-      sides: [label[endA]!, label[endB]!],
-      ends: [cellCentreMm(this.grid, endA), cellCentreMm(this.grid, endB)],
-    };
-  }
-}
-
-/**
- * Cells waiting to be searched, filed by bottleneck width in whole millimetres up to the walkway
- * width (anything wider is as good as the walkway). The widest is taken first; a route never widens
- * as it goes on, so the search only moves down the buckets and each step is constant time.
- */
-class WidestFirst {
-  private readonly heads: Int32Array;
-  private cells: Int32Array;
-  private next: Int32Array;
-  private count = 0;
-  private top: number;
-
-  /** A queue for keys up to limitMm, with room to begin with for `room` entries (about one a free cell is usual). */
-  constructor(limitMm: number, room: number) {
-    this.heads = new Int32Array(limitMm + 1).fill(-1);
-    this.top = limitMm;
-    this.cells = scratch('queue-cells', int32, Math.max(room, 16));
-    this.next = scratch('queue-next', int32, Math.max(room, 16));
-  }
-
-  push(cell: number, keyMm: number): void {
-    if (this.count === this.cells.length) {
-      const cells = new Int32Array(this.count * 2);
-      cells.set(this.cells);
-      this.cells = cells;
-      const next = new Int32Array(this.count * 2);
-      next.set(this.next);
-      this.next = next;
-    }
-    const entry = this.count++;
-    this.cells[entry] = cell;
-    this.next[entry] = this.heads[keyMm]!;
-    this.heads[keyMm] = entry;
-  }
-
-  /** Takes the widest waiting cell, or −1 when none waits; its key (mm) is then `keyMm`. */
-  pop(): number {
-    while (this.top >= 0 && this.heads[this.top]! < 0) this.top--;
-    if (this.top < 0) return -1;
-    const entry = this.heads[this.top]!;
-    this.heads[this.top] = this.next[entry]!;
-    return this.cells[entry]!;
-  }
-
-  /** Key (mm) of the cell last taken. */
-  get keyMm(): number {
-    return this.top;
-  }
-}
-
 export interface Routes {
-  /** Best bottleneck width (whole mm, at most the walkway width) from any way in to each free cell; −1 where no route reaches. */
+  /** Best bottleneck width (whole mm, at most the walkway width) from any way in to each free cell; −1 where no route reaches (a blocked cell holds a width no route has). */
   bottleneckMm: Int32Array;
-  /** The cell each best route came from; −1 at a way in. */
+  /** The cell each best route came from, −1 at a way in; at cells a route reaches. */
   parent: Int32Array;
-  /** For a way-in cell, the index of its opening; −1 elsewhere. */
+  /** For a way-in cell, the index of its opening. */
   wayIn: Int32Array;
   /** Filled in by routeNarrowest as it is asked: the narrowest cell on the route from each cell; −1 until asked. */
   narrowest: Int32Array;
@@ -344,61 +22,367 @@ export interface Routes {
 }
 
 /**
+ * A search's record, kept so the next search on the same widths can take it up where the floor
+ * changed: every cell filed (an entry: its cell, width, the entry filed before it under the same
+ * width, the take during which it was filed, and when it was taken itself) and every take, in order.
+ */
+class SearchLog {
+  readonly routes: Routes;
+  /** Each cell's latest entry; −1 for a cell not filed. */
+  readonly cellEntry: Int32Array;
+  /** 1 at the way-in cells. */
+  readonly wayInCell: Uint8Array;
+  entryCell: Int32Array;
+  entryKey: Int32Array;
+  entryNext: Int32Array;
+  /** The take during which the entry was filed; −1 for a way-in cell's. */
+  entryFiledAt: Int32Array;
+  /** The cell's entry before this one; −1 for its first. */
+  entryPrevious: Int32Array;
+  /** When the entry was taken (its take's number): written when it is, every entry being taken before a search ends; −1 for one waiting again after a rewind. */
+  entryTaken: Int32Array;
+  entries = 0;
+  /** The entry each take took, in order. */
+  takenEntry: Int32Array;
+  taken = 0;
+  heads: Int32Array = new Int32Array(0);
+  /** What the record was made on: the widths and their revision, the walkway width rounded up, the ways in. */
+  widths: Widths | null = null;
+  revision = -1;
+  limitMm = -1;
+  sources: Int32Array = new Int32Array(0);
+
+  constructor(readonly cells: number) {
+    this.routes = {
+      bottleneckMm: new Int32Array(cells),
+      parent: new Int32Array(cells),
+      wayIn: new Int32Array(cells),
+      narrowest: new Int32Array(cells),
+      start: new Int32Array(cells),
+    };
+    this.cellEntry = new Int32Array(cells);
+    this.wayInCell = new Uint8Array(cells);
+    const room = Math.max(cells, 16);
+    this.entryCell = new Int32Array(room);
+    this.entryKey = new Int32Array(room);
+    this.entryNext = new Int32Array(room);
+    this.entryFiledAt = new Int32Array(room);
+    this.entryPrevious = new Int32Array(room);
+    this.entryTaken = new Int32Array(room);
+    this.takenEntry = new Int32Array(room);
+  }
+
+  /** Doubles the room for entries and takes. */
+  grow(): void {
+    const twice = (a: Int32Array): Int32Array => {
+      const grown = new Int32Array(a.length * 2);
+      grown.set(a);
+      return grown;
+    };
+    this.entryCell = twice(this.entryCell);
+    this.entryKey = twice(this.entryKey);
+    this.entryNext = twice(this.entryNext);
+    this.entryFiledAt = twice(this.entryFiledAt);
+    this.entryPrevious = twice(this.entryPrevious);
+    this.entryTaken = twice(this.entryTaken);
+    this.takenEntry = twice(this.takenEntry);
+  }
+
+  /** Files a cell under a width, reached during take `filedAt` (−1 for a way in). */
+  file(cell: number, keyMm: number, filedAt: number): void {
+    if (this.entries === this.entryCell.length) this.grow();
+    const entry = this.entries++;
+    this.entryCell[entry] = cell;
+    this.entryKey[entry] = keyMm;
+    this.entryNext[entry] = this.heads[keyMm]!;
+    this.entryFiledAt[entry] = filedAt;
+    this.entryPrevious[entry] = this.cellEntry[cell]!;
+    this.heads[keyMm] = entry;
+    this.cellEntry[cell] = entry;
+  }
+
+  /** Whether the ways in are those of the record, cell for cell and opening for opening. */
+  sameSources(sources: readonly { cell: number; opening: number }[]): boolean {
+    if (this.sources.length !== 2 * sources.length) return false;
+    return sources.every((s, k) => this.sources[2 * k] === s.cell && this.sources[2 * k + 1] === s.opening);
+  }
+
+  /**
+   * The first take that read anything a cell holds (its label, width or gate): a cell's are read
+   * only when one of its four neighbours is taken; a way in's when the search starts (0). The
+   * number of takes when none did.
+   */
+  firstTakeReadingCell(cell: number, nx: number): number {
+    if (this.wayInCell[cell] === 1) return 0;
+    let first = this.taken;
+    for (let n = 0; n < 4; n++) {
+      const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
+      const entry = this.cellEntry[next]!;
+      // A cell's latest entry is its widest: the one taken while it mattered.
+      const takenAt = entry >= 0 ? this.entryTaken[entry]! : -1;
+      if (takenAt >= 0 && takenAt < first) first = takenAt;
+    }
+    return first;
+  }
+
+  /**
+   * Whether a cell first read at take `readAt` (0 for a way in) would be filed now as it was: it
+   * was filed once only, at the width a search afresh would file it at now (the width of the take
+   * that first read it, or its own capped width if less; a way in's own), and a search goes through
+   * it plainly (Widths.searchKey). Later reads of such a cell change nothing, so a search that does
+   * the same up to that take goes on doing the same with it.
+   */
+  filesAlike(cell: number, readAt: number, widths: Widths): boolean {
+    const entry = this.cellEntry[cell]!;
+    if (entry < 0 || this.entryPrevious[entry]! >= 0) return false;
+    const key = widths.searchKey(cell);
+    if (key < 0) return false;
+    if (this.wayInCell[cell] === 1) return this.entryFiledAt[entry] === -1 && this.entryKey[entry] === key;
+    if (this.entryFiledAt[entry] !== readAt) return false;
+    const readKey = this.entryKey[this.takenEntry[readAt]!]!;
+    return this.entryKey[entry] === Math.min(readKey, key);
+  }
+
+  /** The first take that read anything any of the cells hold. */
+  firstTakeReading(cells: Int32Array, nx: number): number {
+    let first = this.taken;
+    for (const cell of cells) first = Math.min(first, this.firstTakeReadingCell(cell, nx));
+    return first;
+  }
+}
+
+/**
+ * The first take that goes otherwise now the widths' latest update changed some cells: the first
+ * to read a cell that turned free or blocked; and of the other changed cells, in the order they were
+ * first read, the first that a search would now file otherwise than this one did (filesAlike). 0
+ * when that is before leastTake.
+ */
+function firstTakeChanged(
+  log: SearchLog,
+  widths: Widths,
+  changed: { turned: Int32Array; changed: Int32Array },
+  nx: number,
+  /** Any take before this one is answered as 0, from the start. */
+  leastTake: number,
+): number {
+  let first = log.firstTakeReading(changed.turned, nx);
+  if (first < leastTake) return 0;
+  // Each read cell as take × cells + cell, so a numeric sort puts them in the order read.
+  const codes = new Float64Array(changed.changed.length);
+  let count = 0;
+  for (const cell of changed.changed) {
+    const at = log.firstTakeReadingCell(cell, nx);
+    if (at < first) codes[count++] = at * log.cells + cell;
+  }
+  const read = codes.subarray(0, count).sort();
+  for (const code of read) {
+    const at = Math.floor(code / log.cells);
+    if (at >= first) break;
+    // In the order read: once one before leastTake goes otherwise, the search starts afresh anyway.
+    if (first < leastTake) break;
+    if (!log.filesAlike(code - at * log.cells, at, widths)) first = at;
+  }
+  return first < leastTake ? 0 : first;
+}
+
+/** The search last made, kept for the next one (for grids up to KEPT_SCRATCH_CELLS). */
+let kept: SearchLog | null = null;
+
+/** A blocked cell's key, or a free one's before any route reaches it. */
+const unreached = (label: Int32Array, cell: number): number => (label[cell] === FREE ? -1 : BLOCKED_KEY);
+
+/**
  * Widest routes from the way-in cells over free cells, four neighbours each (diagonal steps could
  * slip between two blocked cells meeting at a corner): a Dijkstra search that always extends the
  * route with the widest bottleneck so far, so each cell ends with the widest route that reaches it.
  * Keys only fall as the search goes on, so a cell taken at its own key is settled: a later key
  * cannot beat it, and no separate record of settled cells is needed.
+ *
+ * Cells waiting are filed by bottleneck width in whole millimetres up to limitMm (anything wider is
+ * as good as the walkway), the last filed under a width taken first; a route never widens as it
+ * goes on, so the search only moves down the widths and each step is constant time.
+ *
+ * The search is kept, take by take. The next search on the same widths, one update later, with
+ * the same ways in, goes as this one did until the first take the update makes go otherwise
+ * (firstTakeChanged): it starts there, from the state this one had then, and so ends as a search
+ * afresh would. What routeNarrowest worked out on routes taken before the first take that read any
+ * changed cell is kept. The routes are good until the next search.
  */
 export function widestRoutes(
   grid: FloorGrid,
   widths: Widths,
   sources: readonly { cell: number; opening: number }[],
   limitMm: number,
+  /** False for a search afresh that leaves the kept one as it is (a test's comparison). */
+  keep = true,
 ): Routes {
   const cells = grid.nx * grid.ny;
   const { nx, label } = grid;
-  const bottleneckMm = scratch('bottleneck', int32, cells);
-  for (let cell = 0; cell < cells; cell++) bottleneckMm[cell] = label[cell] === FREE ? -1 : BLOCKED_KEY;
-  const parent = scratch('parent', int32, cells).fill(-1);
-  const wayIn = scratch('way-in', int32, cells).fill(-1);
-  const queue = new WidestFirst(limitMm, cells);
+  const log = keep && kept?.cells === cells ? kept : new SearchLog(cells);
+  if (keep) kept = cells <= KEPT_SCRATCH_CELLS ? log : null;
+  const changed = widths.changedCells();
+  const follows =
+    log.widths === widths &&
+    log.revision === widths.revision - 1 &&
+    log.limitMm === limitMm &&
+    changed &&
+    log.sameSources(sources);
+  // Going back to near the start would undo nearly everything, one entry at a time: start afresh instead.
+  const from = follows ? firstTakeChanged(log, widths, changed, nx, REWIND_LEAST_SHARE * log.taken) : 0;
+  if (from === 0) {
+    startSearch(log, label, widths, sources, limitMm);
+    search(log, nx, widths, limitMm);
+  } else {
+    // Narrowest cells worked out on routes through a cell whose width changed are forgotten.
+    const { narrowest } = log.routes;
+    const firstReading = log.firstTakeReading(changed!.all, nx);
+    // Nearly all of them: all at once.
+    if (firstReading < log.taken / 4) narrowest.fill(-1);
+    else for (let t = firstReading; t < log.taken; t++) narrowest[log.entryCell[log.takenEntry[t]!]!] = -1;
+    if (from < log.taken) {
+      const keyThen = log.entryKey[log.takenEntry[from]!]!;
+      rewind(log, label, changed!.turned, from);
+      search(log, nx, widths, keyThen);
+    } else {
+      // No take goes otherwise: the routes stand; the cells that turned free or blocked, none reached, read their new labels.
+      for (const cell of changed!.turned) if (log.cellEntry[cell]! < 0) log.routes.bottleneckMm[cell] = unreached(label, cell);
+    }
+  }
+  log.widths = widths;
+  log.revision = widths.revision;
+  log.limitMm = limitMm;
+  return log.routes;
+}
+
+/** A search afresh: nothing reached, the ways in filed. */
+function startSearch(
+  log: SearchLog,
+  label: Int32Array,
+  widths: Widths,
+  sources: readonly { cell: number; opening: number }[],
+  limitMm: number,
+): void {
+  const { bottleneckMm, parent, wayIn, narrowest } = log.routes;
+  for (let cell = 0; cell < log.cells; cell++) bottleneckMm[cell] = unreached(label, cell);
+  log.cellEntry.fill(-1);
+  log.wayInCell.fill(0);
+  narrowest.fill(-1);
+  log.heads = new Int32Array(limitMm + 1).fill(-1);
+  log.entries = 0;
+  log.taken = 0;
   for (const { cell, opening } of sources) {
-    const key = Math.floor(Math.min(widths.at(cell), limitMm));
+    const widthMm = widths.at(cell);
+    const key = Math.floor(widthMm < limitMm ? widthMm : limitMm);
+    log.wayInCell[cell] = 1;
     if (key <= bottleneckMm[cell]!) continue;
     bottleneckMm[cell] = key;
+    parent[cell] = -1;
     wayIn[cell] = opening;
-    queue.push(cell, key);
+    log.file(cell, key, -1);
   }
-  for (let cell = queue.pop(); cell >= 0; cell = queue.pop()) {
-    const keyMm = queue.keyMm;
-    if (keyMm < bottleneckMm[cell]!) continue;
-    // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
-    for (let n = 0; n < 4; n++) {
-      const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
-      const known = bottleneckMm[next]!;
-      if (known >= keyMm) continue;
-      // Where even the nearest obstacle leaves room for the route so far, the cell cannot narrow it.
-      const through = widths.lowerBoundMm(next) >= keyMm ? keyMm : widths.cappedAt(next, keyMm);
-      if (through > known) {
+  log.sources = Int32Array.from(sources.flatMap((s) => [s.cell, s.opening]));
+}
+
+/**
+ * Puts the search back as it stood just before take `from`: what was filed during or after it is
+ * unfiled (its cells back to their state then), what was taken from it on waits again, and the
+ * changed cells (none reached yet) read their new labels.
+ */
+function rewind(log: SearchLog, label: Int32Array, changed: Int32Array, from: number): void {
+  const { bottleneckMm, parent } = log.routes;
+  const { entryCell, entryKey, entryFiledAt, entryTaken, entryPrevious, cellEntry, takenEntry } = log;
+  // Entries are filed in the order of the takes that filed them: the first filed during take `from` or later.
+  let lo = 0;
+  let hi = log.entries;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (entryFiledAt[mid]! < from) lo = mid + 1;
+    else hi = mid;
+  }
+  const filed = lo;
+  // Waiting then: the entries filed before it and taken from it on (every entry was taken in the
+  // end); each width's latest is first in its line, the earlier ones behind it as they were.
+  const heads = log.heads.fill(-1);
+  for (let t = from; t < log.taken; t++) {
+    const entry = takenEntry[t]!;
+    if (entry >= filed) continue;
+    entryTaken[entry] = -1;
+    const key = entryKey[entry]!;
+    if (entry > heads[key]!) heads[key] = entry;
+  }
+  // Cells filed from then on stand as their latest entry before it, or as not reached.
+  for (let e = filed; e < log.entries; e++) {
+    const cell = entryCell[e]!;
+    let back = cellEntry[cell]!;
+    while (back >= filed) back = entryPrevious[back]!;
+    cellEntry[cell] = back;
+    if (back < 0) bottleneckMm[cell] = unreached(label, cell);
+    else {
+      bottleneckMm[cell] = entryKey[back]!;
+      const filedAt = entryFiledAt[back]!;
+      parent[cell] = filedAt >= 0 ? entryCell[takenEntry[filedAt]!]! : -1;
+    }
+  }
+  for (const cell of changed) bottleneckMm[cell] = unreached(label, cell);
+  log.entries = filed;
+  log.taken = from;
+}
+
+/** Takes and files from width `topMm` down, until nothing waits. */
+function search(log: SearchLog, nx: number, widths: Widths, topMm: number): void {
+  const { bottleneckMm, parent } = log.routes;
+  const { exactKeyMm, gateMm } = widths;
+  const { heads, cellEntry } = log;
+  let { entryCell, entryKey, entryNext, entryFiledAt, entryPrevious, entryTaken, takenEntry, entries, taken } = log;
+  for (let keyMm = topMm; keyMm >= 0; keyMm--) {
+    while (heads[keyMm]! >= 0) {
+      const entry = heads[keyMm]!;
+      heads[keyMm] = entryNext[entry]!;
+      const take = taken++;
+      entryTaken[entry] = take;
+      takenEntry[take] = entry;
+      const cell = entryCell[entry]!;
+      if (keyMm < bottleneckMm[cell]!) continue;
+      // Padding keeps the grid's edge blocked, so a free cell's neighbours are all on the grid.
+      for (let n = 0; n < 4; n++) {
+        const next = n === 0 ? cell - 1 : n === 1 ? cell + 1 : n === 2 ? cell - nx : cell + nx;
+        const known = bottleneckMm[next]!;
+        if (known >= keyMm) continue;
+        // Where the cell (or even its nearest obstacle) leaves room for the route so far, it cannot narrow it.
+        let through = keyMm;
+        if (gateMm[next]! < keyMm) {
+          const exact = exactKeyMm[next]!;
+          through = exact >= 0 ? exact : widths.cappedAt(next, keyMm);
+        }
+        if (through <= known) continue;
         bottleneckMm[next] = through;
         parent[next] = cell;
-        queue.push(next, through);
+        if (entries === entryCell.length) {
+          log.entries = entries;
+          log.grow();
+          ({ entryCell, entryKey, entryNext, entryFiledAt, entryPrevious, entryTaken, takenEntry } = log);
+        }
+        // Filed as SearchLog.file files it, here without the call.
+        const filed = entries++;
+        entryCell[filed] = next;
+        entryKey[filed] = through;
+        entryNext[filed] = heads[through]!;
+        entryFiledAt[filed] = take;
+        entryPrevious[filed] = cellEntry[next]!;
+        heads[through] = filed;
+        cellEntry[next] = filed;
       }
     }
   }
-  for (let cell = 0; cell < cells; cell++) if (bottleneckMm[cell] === BLOCKED_KEY) bottleneckMm[cell] = -1;
-  const narrowest = scratch('narrowest', int32, cells).fill(-1);
-  const start = scratch('start', int32, cells);
-  return { bottleneckMm, parent, wayIn, narrowest, start };
+  log.entries = entries;
+  log.taken = taken;
 }
 
 /**
  * The narrowest cell (least exact width) on the best route from a cell back to its way in, the
  * nearest to the cell among equals; and, in `routes.start`, the way-in cell the route ends at. The
  * routes form a tree, so each cell's answer is its own or its parent's: every cell is worked out
- * once and kept, however many pieces' routes run through it. A cell known to be wider than the
- * narrowest beyond it is passed over without measuring its width exactly.
+ * once and kept, however many pieces' routes run through it.
  */
 export function routeNarrowest(widths: Widths, routes: Routes): (cell: number) => number {
   const narrowest = routes.narrowest;
@@ -422,7 +406,7 @@ export function routeNarrowest(widths: Widths, routes: Routes): (cell: number) =
       routes.start[cell] = routes.start[up]!;
       const beyond = narrowest[up]!;
       const beyondMm = widths.at(beyond);
-      narrowest[cell] = !widths.knownWiderThan(cell, beyondMm) && widths.atMost(cell, beyondMm) ? cell : beyond;
+      narrowest[cell] = widths.atMost(cell, beyondMm) ? cell : beyond;
     }
     return narrowest[from]!;
   };

@@ -19,9 +19,11 @@ import type { RoomShell } from '../../schemas/room';
 import type { Finding } from './finding';
 import { blocksWalking } from '../../geometry/piece';
 import { pointInPolygon } from '../../geometry/polygon';
-import { closestOnShape, closestPair, distanceToSegmentMm, type PieceBox } from './boxes';
-import { cellAt, cellCentreMm, FREE, rasteriseFloor, WALL, type FloorGrid } from './floor-grid';
-import { routeNarrowest, widestRoutes, Widths } from './walkway-grid';
+import { closestOnShape, closestPair, distanceToSegmentMm, type ClosestPair, type PieceBox } from './boxes';
+import { cellAt, cellCentreMm, FREE, WALL, type FloorGrid } from './floor-grid';
+import { routeNarrowest, widestRoutes } from './walkway-grid';
+import { floorWidths } from './walkway-floor';
+import type { CellBox, Widths } from './walkway-widths';
 import { capitalise, cmText, roundToCmMm, theName } from './messages';
 import { itemAt } from '../../item-at';
 
@@ -36,23 +38,29 @@ const SNAP_CELLS = 1.5;
 /** Two ways of drawing a gap this close (mm) in length show the same gap. */
 const SNAP_TOLERANCE_MM = 0.5;
 
-/** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep. */
-function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
+/** Free cells in the patch of floor before one face of a box, FRONT_STRIP_MM deep, and the box of cells its bounds cover. */
+function faceCells(grid: FloorGrid, box: PieceBox, face: Face): { patch: Patch; cells: CellBox } {
   const { along, out, halfAlongMm, halfOutMm } = faceFrame(box, face);
   const reachMm = halfOutMm + FRONT_STRIP_MM;
-  const corners: Vec2[] = [
-    addScaled(addScaled(box.centre, along, -halfAlongMm), out, halfOutMm),
-    addScaled(addScaled(box.centre, along, halfAlongMm), out, halfOutMm),
-    addScaled(addScaled(box.centre, along, halfAlongMm), out, reachMm),
-    addScaled(addScaled(box.centre, along, -halfAlongMm), out, reachMm),
-  ];
+  // The patch's bounds, from its four corners (either end of the face, at the face and a strip out).
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const a of [-halfAlongMm, halfAlongMm]) {
+    for (const o of [halfOutMm, reachMm]) {
+      const [x, y] = addScaled(addScaled(box.centre, along, a), out, o);
+      minX = Math.min(minX, x);
+      minY = Math.min(minY, y);
+      maxX = Math.max(maxX, x);
+      maxY = Math.max(maxY, y);
+    }
+  }
   const { nx, cellMm, originX, originY, label } = grid;
-  const xs = corners.map((c) => c[0]);
-  const ys = corners.map((c) => c[1]);
-  const i0 = Math.max(0, Math.floor((Math.min(...xs) - originX) / cellMm));
-  const i1 = Math.min(nx - 1, Math.floor((Math.max(...xs) - originX) / cellMm));
-  const j0 = Math.max(0, Math.floor((Math.min(...ys) - originY) / cellMm));
-  const j1 = Math.min(grid.ny - 1, Math.floor((Math.max(...ys) - originY) / cellMm));
+  const i0 = Math.max(0, Math.floor((minX - originX) / cellMm));
+  const i1 = Math.min(nx - 1, Math.floor((maxX - originX) / cellMm));
+  const j0 = Math.max(0, Math.floor((minY - originY) / cellMm));
+  const j1 = Math.min(grid.ny - 1, Math.floor((maxY - originY) / cellMm));
   const found: Patch = { faceMm: 2 * halfAlongMm, cells: [], alongMm: [] };
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
@@ -68,7 +76,91 @@ function faceCells(grid: FloorGrid, box: PieceBox, face: Face): Patch {
       }
     }
   }
-  return found;
+  return { patch: found, cells: [i0, i1, j0, j1] };
+}
+
+/** A face's patch as last worked out: where its box stood and the cells the patch's bounds cover. */
+interface KeptPatch {
+  patch: Patch;
+  /** The box's centre, x axis and half width and depth (plan mm). */
+  fields: [number, number, number, number, number, number];
+  cells: CellBox;
+}
+
+/**
+ * Patches worked out by the last check, by piece id and face, for the widths they were worked out
+ * on (and their revision): the next check on those widths, one update later, takes every patch
+ * whose box stands where it stood and whose bounds miss the cells that turned free or blocked.
+ */
+const keptPatches = { widths: null as Widths | null, revision: -1, patches: new Map<string, KeptPatch>() };
+
+/** The patches of the last check that stand for this one (keptPatches). */
+function patchesFor(widths: Widths): Map<string, KeptPatch> {
+  const turned = widths.changedBox();
+  const { patches } = keptPatches;
+  if (keptPatches.widths !== widths || keptPatches.revision !== widths.revision - 1 || !turned) patches.clear();
+  else {
+    const [i0, i1, j0, j1] = turned;
+    for (const [key, kept] of patches) {
+      const [a0, a1, b0, b1] = kept.cells;
+      if (a0 <= i1 && i0 <= a1 && b0 <= j1 && j0 <= b1) patches.delete(key);
+    }
+  }
+  keptPatches.widths = widths;
+  keptPatches.revision = widths.revision;
+  return patches;
+}
+
+/** A face's patch, from the kept ones where its box stands as it stood. */
+function patchBefore(grid: FloorGrid, patches: Map<string, KeptPatch>, box: PieceBox, face: Face): Patch {
+  const key = `${box.piece.id}\u0000${face}`;
+  const kept = patches.get(key);
+  if (kept) {
+    const [cx, cy, ax, ay, hw, hd] = kept.fields;
+    const { centre, axisX, halfWidthMm, halfDepthMm } = box;
+    if (cx === centre[0] && cy === centre[1] && ax === axisX[0] && ay === axisX[1] && hw === halfWidthMm && hd === halfDepthMm)
+      return kept.patch;
+  }
+  const fields: KeptPatch['fields'] = [
+    box.centre[0],
+    box.centre[1],
+    box.axisX[0],
+    box.axisX[1],
+    box.halfWidthMm,
+    box.halfDepthMm,
+  ];
+  const { patch, cells } = faceCells(grid, box, face);
+  patches.set(key, { patch, fields, cells });
+  return patch;
+}
+
+/** The closest pairs worked out for gaps, by the two sides' labels, with the shapes they were of. */
+const keptPairs = new Map<string, { shapes: number[]; pair: ClosestPair }>();
+/** Kept closest pairs are all dropped past this many (a room has far fewer gaps). */
+const KEPT_PAIRS = 2000;
+
+/**
+ * closestPair of two sides' shapes, the one worked out before where the shapes are as they were (it
+ * depends on nothing else). A wall side is told apart by its segment's first corner.
+ */
+function closestPairKept(sideA: number, sideB: number, shapeA: readonly Vec2[], shapeB: readonly Vec2[]): ClosestPair {
+  const [a0, b0] = [itemAt(shapeA, 0, 'point'), itemAt(shapeB, 0, 'point')];
+  const key = `${sideA} ${a0[0]} ${a0[1]} ${sideB} ${b0[0]} ${b0[1]}`;
+  const kept = keptPairs.get(key);
+  const same = (kept: readonly number[], shapes: readonly Vec2[], from: number) =>
+    shapes.every((p, k) => p[0] === kept[from + 2 * k] && p[1] === kept[from + 2 * k + 1]);
+  if (
+    kept &&
+    kept.shapes.length === 2 * (shapeA.length + shapeB.length) &&
+    same(kept.shapes, shapeA, 0) &&
+    same(kept.shapes, shapeB, 2 * shapeA.length)
+  )
+    return kept.pair;
+  const shapes = [...shapeA, ...shapeB].flat();
+  const pair = closestPair(shapeA, shapeB);
+  if (keptPairs.size >= KEPT_PAIRS) keptPairs.clear();
+  keptPairs.set(key, { shapes, pair });
+  return pair;
 }
 
 /** A plan point (mm) to a tenth of a millimetre, dropping arithmetic noise from reports. */
@@ -113,7 +205,8 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
   const outline = shell.outline;
   const obstacles = boxes.filter((box) => blocksWalking(box.piece));
   const { filled, owner } = withSeatGaps(obstacles);
-  const grid = rasteriseFloor(outline, filled, WALKWAY_CELL_MM, 'walkway-label');
+  const widths = floorWidths(outline, filled, WALKWAY_CELL_MM, walkwayMm);
+  const grid = widths.grid;
   const ownerOf = (side: number) => (side === WALL ? WALL : itemAt(owner, side, 'obstacle'));
 
   // The floor cells just inside each way in, sampled every half cell along its width.
@@ -129,17 +222,17 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
     }
   });
   const limitMm = Math.ceil(walkwayMm);
-  const widths = new Widths(grid, walkwayMm);
   const routes = widestRoutes(grid, widths, sources, limitMm);
 
   const findings: Finding[] = [];
   const narrowestOnRoute = routeNarrowest(widths, routes);
+  const patches = patchesFor(widths);
   obstacles.forEach((box, index) => {
     // A piece wholly outside the room is an outside-room finding; a route to it means nothing.
     if (!pointInPolygon(box.centre, outline)) return;
     const piece = box.piece;
     const needs = reachNeeds(box, boxes, walkwayMm);
-    const patchOf = (way: ReachWay) => faceCells(grid, way.box ?? box, way.face);
+    const patchOf = (way: ReachWay) => patchBefore(grid, patches, way.box ?? box, way.face);
     const verdict = judgeReach(needs, patchOf, routes.bottleneckMm, MIN_FRONT_CELLS, grid.cellMm);
     if (verdict === 'reached') return;
     if (verdict.short === null) {
@@ -174,7 +267,7 @@ export function findWalkwayProblems(shell: RoomShell, boxes: readonly PieceBox[]
       // The exact distance between the two sides, when it tells the same story as the grid.
       const shapeA = sideShape(sideA, gap.ends[0], filled, outline);
       const shapeB = sideShape(sideB, gap.ends[1], filled, outline);
-      const exact = closestPair(shapeA, shapeB);
+      const exact = closestPairKept(sideA, sideB, shapeA, shapeB);
       if (Math.abs(exact.distanceMm - gridWidthMm) <= SNAP_CELLS * grid.cellMm) {
         widthMm = exact.distanceMm;
         // Parallel faces are closest all along; draw the gap through the narrow spot itself.
